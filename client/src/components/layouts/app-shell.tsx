@@ -1,0 +1,69 @@
+import { useState } from 'react';
+import { Link, NavLink, Outlet, useNavigate } from 'react-router';
+import { paths } from '../../config/paths';
+import { useUser } from '../../features/auth/api/get-me';
+import { useSignOut } from '../../features/auth/api/sign-in';
+import { groupsWithRole } from '../../lib/roles';
+import { Logo } from './logo';
+
+const linkClass = ({ isActive }: { isActive: boolean }) =>
+  `block rounded-lg px-3 py-2 font-semibold ${isActive ? 'bg-navy text-white' : 'text-navy hover:bg-navy/5'}`;
+
+export function AppShell() {
+  const { data: user } = useUser();
+  const signOut = useSignOut();
+  const navigate = useNavigate();
+  const [open, setOpen] = useState(false);
+
+  const links: { to: string; label: string }[] = [];
+  if (user) {
+    for (const g of groupsWithRole(user, 'organiser')) links.push({ to: paths.groupPeople(g.groupId), label: `${g.groupName}` });
+    if (groupsWithRole(user, 'host').length) links.push({ to: paths.desk(), label: 'Reception desk' });
+    if (groupsWithRole(user, 'fixer').length) links.push({ to: paths.bench(), label: 'My bench' });
+    if (user.admin) links.push({ to: paths.admin(), label: 'Network admin' }, { to: paths.adminMailbox(), label: 'Mailbox' });
+  }
+
+  return (
+    <div className="flex min-h-dvh flex-col">
+      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:rounded focus:bg-white focus:p-2">Skip to content</a>
+      <header className="border-b border-ink/10 bg-white">
+        <div className="mx-auto flex max-w-6xl items-center justify-between gap-4 px-4 py-3">
+          <Link to={paths.home()} aria-label="Mendery home"><Logo /></Link>
+          <button className="rounded-lg p-2 text-navy ring-1 ring-navy/20 md:hidden" aria-expanded={open} aria-controls="main-nav" onClick={() => setOpen((v) => !v)}>
+            <span className="sr-only">Menu</span>
+            <svg viewBox="0 0 24 24" className="size-6" aria-hidden><path d="M4 7h16M4 12h16M4 17h16" stroke="currentColor" strokeWidth="2" strokeLinecap="round" /></svg>
+          </button>
+          <nav id="main-nav" aria-label="Main" className={`${open ? 'absolute inset-x-0 top-16 z-20 border-b border-ink/10 bg-white p-4 shadow-lg' : 'hidden'} md:static md:block md:border-0 md:p-0 md:shadow-none`}>
+            <ul className="flex flex-col gap-1 md:flex-row md:items-center" onClick={() => setOpen(false)}>
+              {links.map((l) => <li key={l.to}><NavLink to={l.to} className={linkClass}>{l.label}</NavLink></li>)}
+              {user ? (
+                <li className="md:ml-3">
+                  <button
+                    className="w-full rounded-lg px-3 py-2 text-left font-semibold text-ink-soft hover:bg-navy/5"
+                    onClick={() => signOut.mutate(undefined, { onSettled: () => navigate(paths.home()) })}
+                  >
+                    Sign out <span className="text-xs font-normal">({user.name})</span>
+                  </button>
+                </li>
+              ) : (
+                <>
+                  <li><NavLink to={paths.volunteer()} className={linkClass}>Volunteer</NavLink></li>
+                  <li><NavLink to={paths.signIn()} className={linkClass}>Sign in</NavLink></li>
+                </>
+              )}
+            </ul>
+          </nav>
+        </div>
+      </header>
+      <main id="main" className="mx-auto w-full max-w-6xl flex-1 px-4 py-6 sm:py-10">
+        <Outlet />
+      </main>
+      <footer className="border-t border-ink/10 bg-white">
+        <div className="mx-auto flex max-w-6xl flex-wrap items-center justify-between gap-3 px-4 py-5 text-sm text-ink-soft">
+          <span>Mendery — community repair, booked and counted.</span>
+          <Link to={paths.safety()} className="font-semibold text-navy underline">Safety at the bench</Link>
+        </div>
+      </footer>
+    </div>
+  );
+}

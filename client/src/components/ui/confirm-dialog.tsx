@@ -1,0 +1,25 @@
+import { useEffect, useRef } from 'react';
+import { Button } from './button';
+
+/** A modal question before anything destructive; Escape or "Keep" cancels. */
+export function ConfirmDialog({ open, title, message, confirmLabel, onConfirm, onCancel, busy }: { open: boolean; title: string; message: string; confirmLabel: string; onConfirm: () => void; onCancel: () => void; busy?: boolean }) {
+  const ref = useRef<HTMLDialogElement>(null);
+  useEffect(() => {
+    const d = ref.current;
+    if (!d) return;
+    if (open && !d.open) d.showModal();
+    if (!open && d.open) d.close();
+  }, [open]);
+  return (
+    <dialog ref={ref} onCancel={(e) => { e.preventDefault(); onCancel(); }} className="m-auto w-[min(28rem,92vw)] rounded-xl p-0 shadow-xl backdrop:bg-ink/40">
+      <div className="space-y-3 p-6">
+        <h2 className="text-lg">{title}</h2>
+        <p className="text-ink-soft">{message}</p>
+        <div className="flex justify-end gap-2 pt-2">
+          <Button variant="secondary" onClick={onCancel} autoFocus>Keep</Button>
+          <Button variant="danger" onClick={onConfirm} busy={busy}>{confirmLabel}</Button>
+        </div>
+      </div>
+    </dialog>
+  );
+}

@@ -1,0 +1,10 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { api } from '../../../lib/api';
+import { authKeys } from './get-me';
+
+export interface PublicConfig {
+  demo: boolean;
+  needsSetup: boolean;
+}
+export const configQuery = queryOptions({ queryKey: authKeys.config, queryFn: () => api<PublicConfig>('GET', '/api/public/config') });
+export const useConfig = () => useQuery(configQuery);

@@ -1,0 +1,39 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { LoginInput, SessionUser } from '../../../../../shared/schemas/auth';
+import { api, forgetCsrfToken } from '../../../lib/api';
+import { authKeys } from './get-me';
+
+export function useSignIn() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (input: LoginInput) => api<{ user: SessionUser }>('POST', '/api/auth/login', input),
+    onSuccess: ({ user }) => {
+      forgetCsrfToken();
+      qc.setQueryData(authKeys.me, user);
+    },
+  });
+}
+
+export function useSignOut() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: () => api<void>('POST', '/api/auth/logout'),
+    onSettled: () => {
+      forgetCsrfToken();
+      qc.clear();
+      qc.setQueryData(authKeys.me, null);
+    },
+  });
+}
+
+export function useCreateFirstAdmin() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (input: { name: string; email: string; password: string; confirm: string }) => api<{ user: SessionUser }>('POST', '/api/auth/first-admin', input),
+    onSuccess: ({ user }) => {
+      forgetCsrfToken();
+      qc.setQueryData(authKeys.me, user);
+      qc.invalidateQueries({ queryKey: authKeys.config });
+    },
+  });
+}

@@ -1,0 +1,60 @@
+/** The one API client: JSON in and out, the session cookie, and the CSRF token on every state-changing call. */
+export class ApiError extends Error {
+  constructor(
+    public status: number,
+    public code: string,
+    message: string,
+    public fields?: Record<string, string>,
+  ) {
+    super(message);
+  }
+}
+
+let csrfToken: string | null = null;
+
+async function fetchCsrf(): Promise<string> {
+  const res = await fetch('/api/auth/csrf', { credentials: 'same-origin' });
+  const data = await res.json();
+  csrfToken = data.token;
+  return data.token;
+}
+
+/** After sign-in or sign-out the session changes, and with it the token. */
+export const forgetCsrfToken = () => {
+  csrfToken = null;
+};
+
+async function parse(res: Response) {
+  if (res.status === 204) return undefined;
+  const type = res.headers.get('content-type') ?? '';
+  const data = type.includes('json') ? await res.json() : null;
+  if (!res.ok) {
+    const e = data?.error;
+    throw new ApiError(res.status, e?.code ?? 'http', e?.message ?? `The server answered ${res.status}.`, e?.fields);
+  }
+  return data;
+}
+
+export async function api<T>(method: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE', url: string, body?: unknown): Promise<T> {
+  const send = async (): Promise<Response> => {
+    const headers: Record<string, string> = { Accept: 'application/json' };
+    if (body !== undefined) headers['Content-Type'] = 'application/json';
+    if (method !== 'GET') headers['x-csrf-token'] = csrfToken ?? (await fetchCsrf());
+    try {
+      return await fetch(url, { method, headers, credentials: 'same-origin', body: body === undefined ? undefined : JSON.stringify(body) });
+    } catch {
+      throw new ApiError(0, 'offline', 'No connection to Mendery. Check the network and try again.');
+    }
+  };
+  let res = await send();
+  if (res.status === 403 && method !== 'GET') {
+    // The token may belong to a session that ended; fetch a fresh one once.
+    const copy = res.clone();
+    const data = await copy.json().catch(() => null);
+    if (data?.error?.code === 'csrf') {
+      await fetchCsrf();
+      res = await send();
+    }
+  }
+  return parse(res) as Promise<T>;
+}

@@ -1,0 +1,92 @@
+import { useEffect, useState } from 'react';
+import { Link, useNavigate, useSearchParams } from 'react-router';
+import { resetConfirmSchema, resetRequestSchema } from '../../../../shared/schemas/auth';
+import { Button } from '../../components/ui/button';
+import { Alert, Card, Spinner } from '../../components/ui/feedback';
+import { TextField } from '../../components/ui/field';
+import { paths } from '../../config/paths';
+import { useConfirmReset, useRequestReset, useVerifyEmail } from '../../features/auth/api/account-links';
+import { applyServerErrors, useZodForm } from '../../lib/form';
+
+export function VerifyEmailPage() {
+  const [params] = useSearchParams();
+  const verify = useVerifyEmail();
+  const token = params.get('token') ?? '';
+  const { mutate } = verify;
+  useEffect(() => {
+    if (token) mutate(token);
+  }, [token, mutate]);
+  return (
+    <Card className="mx-auto max-w-lg">
+      <h1 className="text-2xl">Confirm your e-mail address</h1>
+      <div className="mt-4">
+        {!token && <Alert tone="error">This link has no token. Open the link from the mail again.</Alert>}
+        {verify.isPending && <Spinner label="Confirming…" />}
+        {verify.error && <Alert tone="error">{verify.error.message}</Alert>}
+        {verify.isSuccess && (
+          <Alert tone="success" title="Thank you">
+            {verify.data.message} An organiser of the group will confirm your place and you will get a mail when they have.
+          </Alert>
+        )}
+      </div>
+      <Link to={paths.signIn()} className="mt-4 inline-block font-bold text-navy underline">Go to sign-in</Link>
+    </Card>
+  );
+}
+
+export function ForgotPasswordPage() {
+  const request = useRequestReset();
+  const form = useZodForm(resetRequestSchema, { email: '' });
+  const [formError, setFormError] = useState<string | null>(null);
+  const onSubmit = form.handleSubmit(async ({ email }) => {
+    setFormError(null);
+    try {
+      await request.mutateAsync(email);
+    } catch (err) {
+      setFormError(applyServerErrors(form, err));
+    }
+  });
+  return (
+    <Card className="mx-auto max-w-lg">
+      <h1 className="text-2xl">Forgot your password?</h1>
+      {request.isSuccess ? (
+        <Alert tone="success">{request.data.message} The link works once, for one hour.</Alert>
+      ) : (
+        <form onSubmit={onSubmit} noValidate className="mt-4 space-y-4">
+          <p className="text-ink-soft">Enter the address you signed up with. We will mail you a link to choose a new password.</p>
+          {formError && <Alert tone="error">{formError}</Alert>}
+          <TextField label="E-mail" type="email" autoComplete="email" error={form.formState.errors.email?.message} {...form.register('email')} />
+          <Button type="submit" busy={form.formState.isSubmitting} className="w-full">Send the link</Button>
+        </form>
+      )}
+    </Card>
+  );
+}
+
+export function ResetPasswordPage() {
+  const [params] = useSearchParams();
+  const navigate = useNavigate();
+  const confirm = useConfirmReset();
+  const form = useZodForm(resetConfirmSchema, { token: params.get('token') ?? '', password: '', confirm: '' });
+  const [formError, setFormError] = useState<string | null>(null);
+  const onSubmit = form.handleSubmit(async (values) => {
+    setFormError(null);
+    try {
+      await confirm.mutateAsync(values);
+      navigate(paths.signIn(), { replace: true });
+    } catch (err) {
+      setFormError(applyServerErrors(form, err));
+    }
+  });
+  return (
+    <Card className="mx-auto max-w-lg">
+      <h1 className="text-2xl">Choose a new password</h1>
+      <form onSubmit={onSubmit} noValidate className="mt-4 space-y-4">
+        {(formError || form.formState.errors.token) && <Alert tone="error">{formError ?? form.formState.errors.token?.message}</Alert>}
+        <TextField label="New password" type="password" autoComplete="new-password" hint="At least 10 characters." error={form.formState.errors.password?.message} {...form.register('password')} />
+        <TextField label="The same again" type="password" autoComplete="new-password" error={form.formState.errors.confirm?.message} {...form.register('confirm')} />
+        <Button type="submit" busy={form.formState.isSubmitting} className="w-full">Save the new password</Button>
+      </form>
+    </Card>
+  );
+}

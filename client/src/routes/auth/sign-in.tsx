@@ -1,0 +1,87 @@
+import { useState } from 'react';
+import { Link, Navigate, useNavigate, useSearchParams } from 'react-router';
+import { DEMO_PASSWORD } from '../../../../shared/constants';
+import { loginSchema } from '../../../../shared/schemas/auth';
+import { Button } from '../../components/ui/button';
+import { Alert, Card } from '../../components/ui/feedback';
+import { TextField } from '../../components/ui/field';
+import { paths } from '../../config/paths';
+import { useConfig } from '../../features/auth/api/get-config';
+import { useUser } from '../../features/auth/api/get-me';
+import { useSignIn } from '../../features/auth/api/sign-in';
+import { applyServerErrors, useZodForm } from '../../lib/form';
+import { landingPath } from '../../lib/roles';
+
+const DEMO_ACCOUNTS = [
+  ['organiser@example.org', 'Organiser of Kestlebridge Menders (and a fixer at Orrin Vale)'],
+  ['fixer@example.org', 'Fixer'],
+  ['host@example.org', 'Reception desk'],
+  ['admin@example.org', 'Network admin'],
+];
+
+export function SignInPage() {
+  const [params] = useSearchParams();
+  const navigate = useNavigate();
+  const { data: user } = useUser();
+  const config = useConfig();
+  const signIn = useSignIn();
+  const form = useZodForm(loginSchema, { email: '', password: '' });
+  const [formError, setFormError] = useState<string | null>(null);
+  const next = params.get('next');
+  const safeNext = next && next.startsWith('/') && !next.startsWith('//') ? next : null;
+
+  if (config.data?.needsSetup) return <Navigate to={paths.setup()} replace />;
+  if (user && !signIn.isPending) return <Navigate to={safeNext ?? landingPath(user)} replace />;
+
+  const onSubmit = form.handleSubmit(async (values) => {
+    setFormError(null);
+    try {
+      const { user } = await signIn.mutateAsync(values);
+      navigate(safeNext ?? landingPath(user), { replace: true });
+    } catch (err) {
+      setFormError(applyServerErrors(form, err));
+    }
+  });
+
+  const fill = (email: string) => {
+    form.setValue('email', email);
+    form.setValue('password', DEMO_PASSWORD);
+  };
+
+  return (
+    <div className="mx-auto grid max-w-4xl gap-6 md:grid-cols-2">
+      <Card>
+        <h1 className="mb-4 text-2xl">Sign in</h1>
+        <form onSubmit={onSubmit} noValidate className="space-y-4">
+          {formError && <Alert tone="error">{formError}</Alert>}
+          <TextField label="E-mail" type="email" autoComplete="username" error={form.formState.errors.email?.message} {...form.register('email')} />
+          <TextField label="Password" type="password" autoComplete="current-password" error={form.formState.errors.password?.message} {...form.register('password')} />
+          <Button type="submit" busy={form.formState.isSubmitting} className="w-full">Sign in</Button>
+        </form>
+        <div className="mt-4 flex flex-wrap justify-between gap-2 text-sm">
+          <Link to={paths.forgotPassword()} className="font-semibold text-navy underline">Forgot your password?</Link>
+          <Link to={paths.volunteer()} className="font-semibold text-navy underline">New volunteer? Sign up</Link>
+        </div>
+        <p className="mt-4 text-sm text-ink-soft">Visitors do not need an account to book a repair slot.</p>
+      </Card>
+      {config.data?.demo && (
+        <Card className="bg-copper-light/40">
+          <h2 className="text-lg">Demo accounts</h2>
+          <p className="mt-1 text-sm text-ink-soft">
+            This installation holds invented demo data. Every demo account uses the password <code className="rounded bg-white px-1 font-bold">{DEMO_PASSWORD}</code>.
+          </p>
+          <ul className="mt-3 space-y-2">
+            {DEMO_ACCOUNTS.map(([email, label]) => (
+              <li key={email}>
+                <button type="button" onClick={() => fill(email)} className="w-full rounded-lg bg-white px-3 py-2 text-left ring-1 ring-ink/10 hover:ring-copper">
+                  <span className="block font-bold text-navy">{email}</span>
+                  <span className="text-sm text-ink-soft">{label}</span>
+                </button>
+              </li>
+            ))}
+          </ul>
+        </Card>
+      )}
+    </div>
+  );
+}

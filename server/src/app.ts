@@ -1,0 +1,72 @@
+import express from 'express';
+import helmet from 'helmet';
+import { csrfSync } from 'csrf-sync';
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import type { AppContext } from './context';
+import { authRoutes } from './auth/routes';
+import { loadUser } from './auth/guards';
+import { sessionMiddleware } from './auth/session';
+import { apiNotFound, errorHandler } from './http/errors';
+import { publicRoutes } from './features/public/routes';
+import { groupRoutes } from './features/groups/routes';
+import { adminRoutes } from './features/admin/routes';
+
+/** Builds the Express app: middleware → routers → 404 → error handler. `listen` is the caller's business. */
+export function createApp(ctx: AppContext) {
+  const app = express();
+  app.disable('x-powered-by');
+  if (ctx.env.TRUST_PROXY) {
+    const v = ctx.env.TRUST_PROXY;
+    app.set('trust proxy', /^\d+$/.test(v) ? Number(v) : v === 'true' ? true : v);
+  }
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          defaultSrc: ["'self'"],
+          imgSrc: ["'self'", 'data:', 'blob:'],
+          styleSrc: ["'self'", "'unsafe-inline'"],
+          fontSrc: ["'self'"],
+          connectSrc: ["'self'"],
+          frameSrc: ["'self'"],
+          upgradeInsecureRequests: null,
+        },
+      },
+      // HSTS only means something over HTTPS, which a reverse proxy provides in production.
+      strictTransportSecurity: ctx.env.NODE_ENV === 'production',
+    }),
+  );
+
+  const api = express.Router();
+  api.use(express.json({ limit: '100kb' }));
+  api.use(express.urlencoded({ extended: false, limit: '100kb' }));
+  api.use(publicRoutes(ctx));
+
+  const { middleware: session, store } = sessionMiddleware(ctx.env, ctx.database.pool);
+  const { csrfSynchronisedProtection, generateToken } = csrfSync({
+    getTokenFromRequest: (req) => req.headers['x-csrf-token'] as string | undefined,
+  });
+  api.use(session);
+  api.use(loadUser(ctx.database.db));
+  api.use(csrfSynchronisedProtection);
+  api.use('/auth', authRoutes(ctx, (req) => generateToken(req)));
+  api.use(groupRoutes(ctx));
+  api.use(adminRoutes(ctx));
+  api.use(apiNotFound);
+  app.use('/api', api);
+
+  const dist = path.resolve(ctx.env.CLIENT_DIST);
+  if (existsSync(path.join(dist, 'index.html'))) {
+    app.use('/assets', express.static(path.join(dist, 'assets'), { immutable: true, maxAge: '1y', fallthrough: false }));
+    app.use(express.static(dist, { index: false }));
+    app.use((req, res, next) => {
+      if (req.method !== 'GET' && req.method !== 'HEAD') return next();
+      res.setHeader('Cache-Control', 'no-cache');
+      res.sendFile(path.join(dist, 'index.html'));
+    });
+  }
+  app.use(errorHandler((msg, err) => ctx.log(`${msg}: ${(err as Error)?.stack ?? err}`)));
+
+  return { app, close: () => store.close() };
+}

@@ -1,0 +1,55 @@
+import type { Request, RequestHandler } from 'express';
+import type { GroupRole } from '../../../shared/constants';
+import type { SessionUser } from '../../../shared/schemas/auth';
+import type { Db } from '../db/client';
+import { HttpError } from '../http/errors';
+import { loadSessionUser } from './users';
+
+declare global {
+  // eslint-disable-next-line @typescript-eslint/no-namespace
+  namespace Express {
+    interface Request {
+      user?: SessionUser;
+    }
+  }
+}
+
+export const unauthenticated = () => new HttpError(401, 'unauthenticated', 'Sign in to continue.');
+
+/** Loads the signed-in user (if any) once per request; roles are read fresh so a revoked role takes effect at once. */
+export function loadUser(db: Db): RequestHandler {
+  return async (req, _res, next) => {
+    const id = req.session?.userId;
+    if (id) {
+      const user = await loadSessionUser(db, id);
+      if (user) req.user = user;
+      else delete req.session.userId;
+    }
+    next();
+  };
+}
+
+export const requireUser: RequestHandler = (req, _res, next) => next(req.user ? undefined : unauthenticated());
+
+export const requireAdmin: RequestHandler = (req, _res, next) => {
+  if (!req.user) return next(unauthenticated());
+  next(req.user.admin ? undefined : new HttpError(403, 'forbidden', 'Only platform admins can do this.'));
+};
+
+export function hasGroupRole(user: SessionUser | undefined, groupId: number, roles: readonly GroupRole[]): boolean {
+  if (!user) return false;
+  if (user.admin) return true;
+  return user.roles.some((r) => r.groupId === groupId && roles.includes(r.role));
+}
+
+/** Allows the request when the user holds one of `roles` in the group named by the request (admins always). */
+export function requireGroupRole(roles: readonly GroupRole[], groupIdOf: (req: Request) => number | Promise<number>): RequestHandler {
+  return async (req, _res, next) => {
+    if (!req.user) return next(unauthenticated());
+    const groupId = await groupIdOf(req);
+    if (!Number.isInteger(groupId) || groupId <= 0) return next(new HttpError(404, 'not-found', 'That group was not found.'));
+    next(hasGroupRole(req.user, groupId, roles) ? undefined : new HttpError(403, 'forbidden', 'Your role in this group does not allow this.'));
+  };
+}
+
+export const groupIdParam = (req: Request) => Number(req.params.groupId);

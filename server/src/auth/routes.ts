@@ -1,0 +1,97 @@
+import { Router, type Request } from 'express';
+import { rateLimit, ipKeyGenerator } from 'express-rate-limit';
+import { firstAdminSchema, loginSchema, resetConfirmSchema, resetRequestSchema, signupSchema, tokenSchema } from '../../../shared/schemas/auth';
+import type { AppContext } from '../context';
+import { HttpError } from '../http/errors';
+import { MariadbRateLimitStore } from '../http/rate-limit-store';
+import { body } from '../http/validate';
+import { unauthenticated } from './guards';
+import * as auth from './service';
+import { loadSessionUser } from './users';
+
+const regenerate = (req: Request) => new Promise<void>((res, rej) => req.session.regenerate((e) => (e ? rej(e) : res())));
+const save = (req: Request) => new Promise<void>((res, rej) => req.session.save((e) => (e ? rej(e) : res())));
+
+async function signIn(req: Request, ctx: AppContext, userId: number) {
+  // A new session id at sign-in defeats session fixation; it also drops the old CSRF token.
+  await regenerate(req);
+  req.session.userId = userId;
+  await save(req);
+  return loadSessionUser(ctx.database.db, userId);
+}
+
+function limiter(ctx: AppContext, name: string, max: number, key: (req: Request) => string, skipSuccessfulRequests = false) {
+  return rateLimit({
+    windowMs: ctx.env.LOGIN_RATE_WINDOW_MINUTES * 60_000,
+    limit: max,
+    standardHeaders: 'draft-8',
+    legacyHeaders: false,
+    skipSuccessfulRequests,
+    store: new MariadbRateLimitStore(ctx.database.db, `${name}:`),
+    keyGenerator: key,
+    handler: (_req, _res, next) =>
+      next(new HttpError(429, 'rate-limited', `Too many attempts. Wait ${ctx.env.LOGIN_RATE_WINDOW_MINUTES} minutes and try again.`)),
+  });
+}
+
+export function authRoutes(ctx: AppContext, csrfToken: (req: Request) => string) {
+  const r = Router();
+  const ip = (req: Request) => ipKeyGenerator(req.ip ?? '0.0.0.0');
+  const emailOf = (req: Request) => String(req.body?.email ?? '').trim().toLowerCase().slice(0, 254);
+  // Failed sign-ins count per address and source, and more loosely per source alone (password spraying).
+  const loginPerAccount = limiter(ctx, 'login', ctx.env.LOGIN_RATE_MAX, (req) => `${ip(req)}|${emailOf(req)}`, true);
+  const loginPerSource = limiter(ctx, 'login-ip', ctx.env.LOGIN_RATE_MAX * 5, ip, true);
+  const mailLinks = limiter(ctx, 'mail-link', ctx.env.LOGIN_RATE_MAX, (req) => `${ip(req)}|${emailOf(req)}`);
+
+  r.get('/csrf', (req, res) => {
+    res.json({ token: csrfToken(req) });
+  });
+
+  r.post('/login', loginPerSource, loginPerAccount, async (req, res) => {
+    const input = body(req, loginSchema);
+    const userId = await auth.authenticate(ctx, input);
+    res.json({ user: await signIn(req, ctx, userId) });
+  });
+
+  r.get('/me', (req, res) => {
+    if (!req.user) throw unauthenticated();
+    res.json({ user: req.user });
+  });
+
+  r.post('/logout', (req, res, next) => {
+    req.session.destroy((err) => {
+      if (err) return next(err);
+      res.clearCookie('mendery.sid', { httpOnly: true, sameSite: 'lax' });
+      res.status(204).end();
+    });
+  });
+
+  r.post('/signup', mailLinks, async (req, res) => {
+    await auth.signup(ctx, body(req, signupSchema));
+    res.status(202).json({ message: 'Check your mail: we sent a link to confirm your address.' });
+  });
+
+  r.post('/verify-email', async (req, res) => {
+    await auth.verifyEmail(ctx, body(req, tokenSchema).token);
+    res.json({ message: 'Your e-mail address is confirmed. You can sign in now.' });
+  });
+
+  r.post('/password-reset', mailLinks, async (req, res) => {
+    await auth.requestPasswordReset(ctx, body(req, resetRequestSchema).email);
+    res.status(202).json({ message: 'If that address has an account, a link to choose a new password is on its way.' });
+  });
+
+  r.post('/password-reset/confirm', async (req, res) => {
+    const input = body(req, resetConfirmSchema);
+    await auth.confirmPasswordReset(ctx, input.token, input.password);
+    res.json({ message: 'Your password is changed. Sign in with the new one.' });
+  });
+
+  r.post('/first-admin', async (req, res) => {
+    const input = body(req, firstAdminSchema);
+    const id = await auth.createFirstAdmin(ctx, input);
+    res.status(201).json({ user: await signIn(req, ctx, id) });
+  });
+
+  return r;
+}

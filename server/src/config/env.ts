@@ -1,0 +1,47 @@
+import { z } from 'zod';
+
+const flag = z.enum(['0', '1', 'true', 'false']).transform((v) => v === '1' || v === 'true');
+
+const schema = z.object({
+  NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
+  HOST: z.string().default('127.0.0.1'),
+  PORT: z.coerce.number().int().min(0).max(65535).default(3000),
+  PUBLIC_URL: z.string().url().optional(),
+  DATA_DIR: z.string().default('.data'),
+  DATABASE_URL: z.string().url().optional(),
+  DB_HOST: z.string().default('127.0.0.1'),
+  DB_PORT: z.coerce.number().int().default(3307),
+  DB_NAME: z.string().default('mendery'),
+  DB_USER: z.string().default('mendery_app'),
+  DB_PASSWORD: z.string().default(''),
+  DB_POOL_SIZE: z.coerce.number().int().min(1).default(10),
+  SESSION_SECRET: z.string().min(32, 'SESSION_SECRET must be at least 32 characters'),
+  SESSION_IDLE_MINUTES: z.coerce.number().positive().default(60),
+  TRUST_PROXY: z.string().optional(),
+  SMTP_HOST: z.string().default('127.0.0.1'),
+  SMTP_PORT: z.coerce.number().int().default(2525),
+  SMTP_SECURE: flag.default(false),
+  SMTP_USER: z.string().optional(),
+  SMTP_PASSWORD: z.string().optional(),
+  MAIL_FROM: z.string().default('Mendery <no-reply@mendery.local>'),
+  OUTBOX_POLL_MS: z.coerce.number().int().min(0).default(2000),
+  LOGIN_RATE_MAX: z.coerce.number().int().min(1).default(10),
+  LOGIN_RATE_WINDOW_MINUTES: z.coerce.number().positive().default(15),
+  CLIENT_DIST: z.string().default('dist/client'),
+});
+
+export type Env = z.infer<typeof schema> & { publicUrl: string; dbUrl: string };
+
+/** Reads the environment once at boot; a wrong value stops the server with a message that names it. */
+export function loadEnv(source: NodeJS.ProcessEnv = process.env): Env {
+  const parsed = schema.safeParse(source);
+  if (!parsed.success) {
+    const lines = parsed.error.issues.map((i) => `  ${i.path.join('.')}: ${i.message}`).join('\n');
+    throw new Error(`Invalid environment:\n${lines}`);
+  }
+  const e = parsed.data;
+  const dbUrl =
+    e.DATABASE_URL ??
+    `mysql://${encodeURIComponent(e.DB_USER)}:${encodeURIComponent(e.DB_PASSWORD)}@${e.DB_HOST}:${e.DB_PORT}/${e.DB_NAME}`;
+  return { ...e, dbUrl, publicUrl: (e.PUBLIC_URL ?? `http://127.0.0.1:${e.PORT}`).replace(/\/$/, '') };
+}

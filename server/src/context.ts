@@ -1,0 +1,11 @@
+import type { Env } from './config/env';
+import type { Database } from './db/client';
+import type { OutboxWorker } from './mail/outbox';
+
+/** What every feature gets: configuration, the database and the mail outbox. No request state. */
+export interface AppContext {
+  env: Env;
+  database: Database;
+  outbox: OutboxWorker;
+  log: (line: string) => void;
+}

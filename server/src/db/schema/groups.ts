@@ -1,0 +1,33 @@
+import { index, mysqlEnum, mysqlTable, text, uniqueIndex, varchar } from 'drizzle-orm/mysql-core';
+import { GROUP_ROLES, MEMBERSHIP_STATUSES } from '../../../../shared/constants';
+import { createdAt, id, ref } from './columns';
+import { users } from './users';
+
+export const repairGroups = mysqlTable('repair_groups', {
+  id: id(),
+  name: varchar('name', { length: 120 }).notNull(),
+  slug: varchar('slug', { length: 80 }).notNull(),
+  town: varchar('town', { length: 120 }).notNull(),
+  description: text('description').notNull(),
+  createdAt: createdAt(),
+}, (t) => [uniqueIndex('repair_groups_slug_uq').on(t.slug)]);
+
+/** A person's role in one group; the same person may organise one group and fix at another. */
+export const memberships = mysqlTable('memberships', {
+  id: id(),
+  userId: ref('user_id').notNull().references(() => users.id, { onDelete: 'cascade' }),
+  groupId: ref('group_id').notNull().references(() => repairGroups.id, { onDelete: 'cascade' }),
+  role: mysqlEnum('role', GROUP_ROLES).notNull(),
+  status: mysqlEnum('status', MEMBERSHIP_STATUSES).notNull().default('active'),
+  createdAt: createdAt(),
+}, (t) => [uniqueIndex('memberships_uq').on(t.userId, t.groupId, t.role), index('memberships_group_idx').on(t.groupId, t.status)]);
+
+export const venues = mysqlTable('venues', {
+  id: id(),
+  groupId: ref('group_id').notNull().references(() => repairGroups.id, { onDelete: 'cascade' }),
+  name: varchar('name', { length: 160 }).notNull(),
+  address: varchar('address', { length: 255 }).notNull(),
+  town: varchar('town', { length: 120 }).notNull(),
+  accessNotes: text('access_notes').notNull(),
+  createdAt: createdAt(),
+}, (t) => [index('venues_group_idx').on(t.groupId)]);

@@ -1,0 +1,3 @@
+export * from './users';
+export * from './groups';
+export * from './platform';

@@ -1,0 +1,49 @@
+import { index, int, json, mediumtext, mysqlEnum, mysqlTable, varchar } from 'drizzle-orm/mysql-core';
+import { createdAt, id, timestamp3 } from './columns';
+
+/** express-mysql-session's table, owned by our migrations (the store's own CREATE is switched off). */
+export const sessions = mysqlTable('sessions', {
+  sessionId: varchar('session_id', { length: 128 }).primaryKey(),
+  expires: int('expires', { unsigned: true }).notNull(),
+  data: mediumtext('data'),
+}, (t) => [index('sessions_expires_idx').on(t.expires)]);
+
+/** Counters for rate limits, shared by every app process. */
+export const rateLimits = mysqlTable('rate_limits', {
+  key: varchar('rate_key', { length: 191 }).primaryKey(),
+  hits: int('hits', { unsigned: true }).notNull(),
+  resetAt: timestamp3('reset_at').notNull(),
+});
+
+/** Mail waits here, written in the same transaction as the change that causes it, until a worker sends it. */
+export const outbox = mysqlTable('outbox', {
+  id: id(),
+  toAddress: varchar('to_address', { length: 254 }).notNull(),
+  subject: varchar('subject', { length: 255 }).notNull(),
+  html: mediumtext('html').notNull(),
+  text: mediumtext('text').notNull(),
+  attachments: json('attachments').$type<{ filename: string; cid?: string; contentType: string; base64: string }[]>(),
+  status: mysqlEnum('status', ['pending', 'sent', 'failed']).notNull().default('pending'),
+  attempts: int('attempts', { unsigned: true }).notNull().default(0),
+  nextAttemptAt: timestamp3('next_attempt_at').notNull(),
+  lastError: varchar('last_error', { length: 500 }),
+  createdAt: createdAt(),
+  sentAt: timestamp3('sent_at'),
+}, (t) => [index('outbox_status_id_idx').on(t.status, t.id)]);
+
+/** What the local mailbox caught (development and demo only). */
+export const mailboxMessages = mysqlTable('mailbox_messages', {
+  id: id(),
+  fromAddress: varchar('from_address', { length: 320 }).notNull(),
+  toAddress: varchar('to_address', { length: 1000 }).notNull(),
+  subject: varchar('subject', { length: 255 }).notNull(),
+  html: mediumtext('html'),
+  text: mediumtext('text'),
+  raw: mediumtext('raw').notNull(),
+  receivedAt: createdAt(),
+});
+
+export const settings = mysqlTable('settings', {
+  key: varchar('setting_key', { length: 64 }).primaryKey(),
+  value: json('value').notNull(),
+});

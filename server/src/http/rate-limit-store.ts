@@ -1,0 +1,40 @@
+import { sql } from 'drizzle-orm';
+import type { Store, IncrementResponse, Options } from 'express-rate-limit';
+import type { Db } from '../db/client';
+import { rateLimits } from '../db/schema/index';
+
+/**
+ * An express-rate-limit store in MariaDB, so the limit holds across app processes. One upsert per hit:
+ * a window that has ended starts again at 1.
+ */
+export class MariadbRateLimitStore implements Store {
+  windowMs = 60_000;
+  prefix: string;
+  constructor(private db: Db, prefix: string) {
+    this.prefix = prefix;
+  }
+  init(options: Options) {
+    this.windowMs = options.windowMs;
+  }
+  async increment(key: string): Promise<IncrementResponse> {
+    const k = this.prefix + key;
+    const reset = new Date(Date.now() + this.windowMs);
+    await this.db
+      .insert(rateLimits)
+      .values({ key: k, hits: 1, resetAt: reset })
+      .onDuplicateKeyUpdate({
+        set: {
+          hits: sql`IF(${rateLimits.resetAt} <= NOW(3), 1, ${rateLimits.hits} + 1)`,
+          resetAt: sql`IF(${rateLimits.resetAt} <= NOW(3), VALUES(${rateLimits.resetAt}), ${rateLimits.resetAt})`,
+        },
+      });
+    const [row] = await this.db.select().from(rateLimits).where(sql`${rateLimits.key} = ${k}`);
+    return { totalHits: row?.hits ?? 1, resetTime: row?.resetAt ?? reset };
+  }
+  async decrement(key: string) {
+    await this.db.update(rateLimits).set({ hits: sql`GREATEST(${rateLimits.hits} - 1, 0)` }).where(sql`${rateLimits.key} = ${this.prefix + key}`);
+  }
+  async resetKey(key: string) {
+    await this.db.delete(rateLimits).where(sql`${rateLimits.key} = ${this.prefix + key}`);
+  }
+}

@@ -1,0 +1,44 @@
+import type { Server } from 'node:http';
+import type { AddressInfo } from 'node:net';
+import { createApp } from './app';
+import type { Env } from './config/env';
+import type { AppContext } from './context';
+import { createDatabase } from './db/client';
+import { OutboxWorker } from './mail/outbox';
+import { smtpSender, type MailSender } from './mail/transport';
+
+export interface RunningServer {
+  ctx: AppContext;
+  server: Server;
+  url: string;
+  stop(): Promise<void>;
+}
+
+/** Opens the pool, starts the outbox worker and listens. Several of these may run against one database. */
+export async function startServer(env: Env, opts: { sender?: MailSender; log?: (l: string) => void } = {}): Promise<RunningServer> {
+  const log = opts.log ?? ((l: string) => console.log(l));
+  const database = createDatabase(env.dbUrl, env.DB_POOL_SIZE);
+  const outbox = new OutboxWorker(database.db, opts.sender ?? smtpSender(env), log);
+  const ctx: AppContext = { env, database, outbox, log };
+  const { app, close } = createApp(ctx);
+  const server = await new Promise<Server>((resolve, reject) => {
+    const s = app.listen(env.PORT, env.HOST, () => resolve(s));
+    s.once('error', reject);
+  });
+  outbox.start(env.OUTBOX_POLL_MS);
+  const { port } = server.address() as AddressInfo;
+  return {
+    ctx,
+    server,
+    url: `http://${env.HOST}:${port}`,
+    async stop() {
+      await outbox.stop();
+      await new Promise<void>((resolve) => {
+        server.close(() => resolve());
+        server.closeAllConnections();
+      });
+      await close();
+      await database.close();
+    },
+  };
+}

@@ -1,0 +1,64 @@
+import { z } from 'zod';
+import { GROUP_ROLES } from '../constants';
+
+export const email = z
+  .string({ error: 'Enter your e-mail address.' })
+  .trim()
+  .toLowerCase()
+  .min(1, 'Enter your e-mail address.')
+  .max(254, 'That e-mail address is too long.')
+  .pipe(z.email({ error: 'That does not look like an e-mail address.' }));
+
+/** OWASP ASVS: at least 8 characters when no other rule applies; we ask for 10 and cap at 128. */
+export const newPassword = z
+  .string({ error: 'Choose a password.' })
+  .min(10, 'Use at least 10 characters.')
+  .max(128, 'Use at most 128 characters.');
+
+export const loginSchema = z.object({
+  email,
+  password: z.string({ error: 'Enter your password.' }).min(1, 'Enter your password.').max(128),
+});
+export type LoginInput = z.infer<typeof loginSchema>;
+
+export const signupSchema = z.object({
+  name: z.string({ error: 'Enter your name.' }).trim().min(1, 'Enter your name.').max(120, 'Use at most 120 characters.'),
+  email,
+  password: newPassword,
+  groupId: z.coerce.number({ error: 'Choose a group.' }).int().positive('Choose a group.'),
+  role: z.enum(['fixer', 'host'], { error: 'Choose how you would like to help.' }),
+});
+export type SignupInput = z.infer<typeof signupSchema>;
+
+export const tokenSchema = z.object({ token: z.string().min(20, 'The link is incomplete.').max(200) });
+
+export const resetRequestSchema = z.object({ email });
+
+export const resetConfirmSchema = z
+  .object({ token: z.string().min(20, 'The link is incomplete.').max(200), password: newPassword, confirm: z.string() })
+  .refine((v) => v.password === v.confirm, { path: ['confirm'], message: 'The two passwords differ.' });
+
+export const firstAdminSchema = z
+  .object({
+    name: z.string().trim().min(1, 'Enter your name.').max(120),
+    email,
+    password: newPassword,
+    confirm: z.string(),
+  })
+  .refine((v) => v.password === v.confirm, { path: ['confirm'], message: 'The two passwords differ.' });
+
+export const groupSchema = z.object({
+  name: z.string().trim().min(2, 'Give the group a name.').max(120),
+  town: z.string().trim().min(1, 'Enter the town.').max(120),
+  description: z.string().trim().max(2000).default(''),
+});
+
+export const roleSchema = z.enum(GROUP_ROLES);
+
+export interface SessionUser {
+  id: number;
+  email: string;
+  name: string;
+  admin: boolean;
+  roles: { groupId: number; role: (typeof GROUP_ROLES)[number]; groupName: string }[];
+}

@@ -1,0 +1,92 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { RunningServer } from '../../server/src/server';
+import { createTestDatabase, type TestDatabase } from '../support/db';
+import { makeGroup, makeUser } from '../support/factories';
+import { Agent } from '../support/http';
+import { startTestServer } from '../support/server';
+
+/**
+ * Who may call what. Each row: a route, then the expected status for each kind of caller.
+ * Later features add their rows here. `own` is the group the callers belong to; `other` is a second group.
+ */
+type Caller = 'anonymous' | 'account' | 'fixer' | 'host' | 'organiser' | 'otherOrganiser' | 'admin';
+type Row = [method: 'GET' | 'POST' | 'DELETE', path: (g: Groups) => string, expected: Record<Caller, number>, body?: unknown];
+interface Groups {
+  own: number;
+  other: number;
+  pendingMembership: number;
+}
+
+const everyone = (status: number): Record<Caller, number> => ({ anonymous: status, account: status, fixer: status, host: status, organiser: status, otherOrganiser: status, admin: status });
+const signedIn = (status: number) => ({ ...everyone(status), anonymous: 401 });
+const adminOnly = { anonymous: 401, account: 403, fixer: 403, host: 403, organiser: 403, otherOrganiser: 403, admin: 200 };
+const ownOrganiser = { anonymous: 401, account: 403, fixer: 403, host: 403, organiser: 200, otherOrganiser: 403, admin: 200 };
+
+const table: Row[] = [
+  ['GET', () => '/api/health', everyone(200)],
+  ['GET', () => '/api/public/config', everyone(200)],
+  ['GET', () => '/api/public/groups', everyone(200)],
+  ['GET', () => '/api/auth/me', signedIn(200)],
+  ['GET', (g) => `/api/groups/${g.own}/members`, ownOrganiser],
+  ['POST', (g) => `/api/groups/${g.own}/members/${g.pendingMembership}/approve`, ownOrganiser],
+  ['GET', () => '/api/admin/mailbox', adminOnly],
+  ['GET', () => '/api/admin/outbox', adminOnly],
+  ['GET', () => '/api/admin/groups', adminOnly],
+  ['GET', () => '/api/admin/users', adminOnly],
+  ['POST', () => '/api/admin/groups', { ...adminOnly, admin: 400 }, { name: '' }],
+];
+
+let db: TestDatabase;
+let server: RunningServer;
+let groups: Groups;
+const agents = {} as Record<Caller, Agent>;
+
+beforeAll(async () => {
+  db = await createTestDatabase();
+  server = await startTestServer(db.url);
+  const own = await makeGroup(db.db);
+  const other = await makeGroup(db.db);
+  const people: Record<Exclude<Caller, 'anonymous'>, Awaited<ReturnType<typeof makeUser>>> = {
+    account: await makeUser(db.db),
+    fixer: await makeUser(db.db, { roles: [[own, 'fixer']] }),
+    host: await makeUser(db.db, { roles: [[own, 'host']] }),
+    organiser: await makeUser(db.db, { roles: [[own, 'organiser']] }),
+    // Organises another group and fixes in ours: a role elsewhere grants nothing here.
+    otherOrganiser: await makeUser(db.db, { roles: [[other, 'organiser'], [own, 'fixer']] }),
+    admin: await makeUser(db.db, { admin: true }),
+  };
+  agents.anonymous = new Agent(server.url);
+  for (const [caller, u] of Object.entries(people)) {
+    agents[caller as Caller] = new Agent(server.url);
+    expect((await agents[caller as Caller].login(u.email, u.password)).status).toBe(200);
+  }
+  const volunteer = await makeUser(db.db);
+  const { memberships } = await import('../../server/src/db/schema/index');
+  const [{ id }] = await db.db.insert(memberships).values({ userId: volunteer.id, groupId: own, role: 'fixer', status: 'pending' }).$returningId();
+  groups = { own, other, pendingMembership: id };
+});
+afterAll(async () => {
+  await server.stop();
+  await db.drop();
+});
+
+describe('routes × roles', () => {
+  for (const [method, path, expected, body] of table) {
+    it(`${method} ${path({ own: 1, other: 2, pendingMembership: 3 }).replace(/\/\d+/g, '/:id')} answers ${JSON.stringify(expected)}`, async () => {
+      const got: Record<string, number> = {};
+      for (const caller of Object.keys(expected) as Caller[]) {
+        const a = agents[caller];
+        const url = path(groups);
+        const res = method === 'GET' ? await a.get(url) : await a.send(method, url, body ?? {});
+        got[caller] = res.status;
+      }
+      expect(got).toEqual(expected);
+    });
+  }
+
+  it('hides nothing behind the client alone: a fixer calling the organiser API directly is refused', async () => {
+    const res = await agents.fixer.get(`/api/groups/${groups.own}/members`);
+    expect(res.status).toBe(403);
+    expect(res.json.error.code).toBe('forbidden');
+  });
+});

@@ -1,0 +1,26 @@
+import { loadEnv, type Env } from '../../server/src/config/env';
+import { startServer, type RunningServer } from '../../server/src/server';
+import type { MailSender } from '../../server/src/mail/transport';
+
+export const TEST_SECRET = 'test-session-secret-that-is-long-enough-0123456789';
+
+/** Starts the real app in-process on a free port against a test database. */
+export function startTestServer(dbUrl: string, overrides: Partial<Record<keyof Env, string>> = {}, opts: { sender?: MailSender } = {}): Promise<RunningServer> {
+  const env = loadEnv({
+    NODE_ENV: 'test',
+    DATABASE_URL: dbUrl,
+    PORT: '0',
+    SESSION_SECRET: TEST_SECRET,
+    OUTBOX_POLL_MS: '0',
+    SMTP_PORT: '1',
+    CLIENT_DIST: 'dist/client',
+    ...overrides,
+  });
+  return startServer(env, { sender: opts.sender ?? { send: async () => {} }, log: () => {} });
+}
+
+/** A mail sender that keeps what it was given, for tests that read the links in a mail. */
+export function memorySender() {
+  const sent: { to: string; subject: string; text: string; html: string }[] = [];
+  return { sent, send: async (m: { to: string; subject: string; text: string; html: string }) => void sent.push(m) };
+}
