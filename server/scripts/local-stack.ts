@@ -4,6 +4,9 @@ import { chmodSync, existsSync, mkdirSync, readFileSync, readdirSync, statSync, 
 import path from 'node:path';
 import { ensureMariadbInstalled, provisionDatabase, startPrivateMariadb, type PrivateMariadb } from '../src/infra/mariadb';
 import { runMigrations } from '../src/db/migrate';
+import { createDatabase } from '../src/db/client';
+import { LocalMailbox } from '../src/mail/local-mailbox';
+import { isSeeded, markEmptyInstall, seedDemo } from '../src/seed/demo';
 
 export const root = path.resolve(import.meta.dirname, '../..');
 export const step = (line: string) => console.log(`▸ ${line}`);
@@ -65,4 +68,38 @@ export function buildClientIfStale(force = false): void {
   step('Building the client (vite build)');
   const r = spawnSync(process.execPath, [path.join(root, 'node_modules/vite/bin/vite.js'), 'build', '--logLevel', 'warn'], { cwd: root, stdio: 'inherit' });
   if (r.status !== 0) throw new Error('vite build failed');
+}
+
+/** Demo data on the very first run; DEMO=0 starts empty and the first visit asks for an admin. */
+export async function seedOnFirstRun(dbUrl: string): Promise<void> {
+  const db = createDatabase(dbUrl, 2);
+  try {
+    if (await isSeeded(db.db)) return;
+    if (process.env.DEMO === '0') {
+      step('Starting empty (DEMO=0): the first visit asks for the first admin');
+      await markEmptyInstall(db.db);
+    } else {
+      step('Loading the demo scenario (first run)');
+      await seedDemo(db.db);
+    }
+  } finally {
+    await db.close();
+  }
+}
+
+/** The local SMTP mailbox, with a pool of its own; returns its stop function. */
+export async function startLocalMailbox(dbUrl: string, port: number): Promise<() => Promise<void>> {
+  step(`Starting the local mailbox (SMTP on 127.0.0.1:${port}; admins read it under Mailbox)`);
+  const db = createDatabase(dbUrl, 2);
+  const mailbox = new LocalMailbox(db.db, port, console.error);
+  try {
+    await mailbox.start();
+  } catch (err) {
+    await db.close();
+    throw new Error(`The local mailbox could not listen on 127.0.0.1:${port} (${(err as Error).message}). Set SMTP_PORT to a free port.`);
+  }
+  return async () => {
+    await mailbox.stop();
+    await db.close();
+  };
 }

@@ -1,10 +1,8 @@
 import path from 'node:path';
 import { loadEnv } from '../src/config/env';
-import { createDatabase } from '../src/db/client';
-import { LocalMailbox } from '../src/mail/local-mailbox';
-import { isSeeded, markEmptyInstall, seedDemo } from '../src/seed/demo';
+import { runMigrations } from '../src/db/migrate';
 import { startServer } from '../src/server';
-import { buildClientIfStale, loadOrCreateSecrets, root, startLocalDatabase, step } from './local-stack';
+import { buildClientIfStale, loadOrCreateSecrets, root, seedOnFirstRun, startLocalDatabase, startLocalMailbox, step } from './local-stack';
 
 /** `npm start`: private MariaDB, local mailbox, migrations, demo data on first run, client build, server. */
 const started = Date.now();
@@ -38,6 +36,9 @@ try {
     const local = await startLocalDatabase({ dir: path.join(dataDir, 'mariadb'), port: dbPort, database: process.env.DB_NAME ?? 'mendery', secrets });
     stops.push(() => local.instance.stop());
     dbUrl = local.appUrl;
+  } else {
+    step('Applying database migrations to DATABASE_URL');
+    await runMigrations(process.env.MIGRATE_DATABASE_URL ?? dbUrl);
   }
   const env = loadEnv({
     ...process.env,
@@ -48,28 +49,8 @@ try {
     CLIENT_DIST: path.join(root, 'dist/client'),
   });
 
-  const seedDb = createDatabase(env.dbUrl, 2);
-  if (!(await isSeeded(seedDb.db))) {
-    if (process.env.DEMO === '0') {
-      step('Starting empty (DEMO=0): the first visit asks for the first admin');
-      await markEmptyInstall(seedDb.db);
-    } else {
-      step('Loading the demo scenario (first run)');
-      await seedDemo(seedDb.db);
-    }
-  }
-  await seedDb.close();
-
-  if (process.env.MAILBOX !== '0' && ['127.0.0.1', 'localhost'].includes(env.SMTP_HOST)) {
-    step(`Starting the local mailbox (SMTP on 127.0.0.1:${env.SMTP_PORT}; admins read it under Admin → Mailbox)`);
-    const mailDb = createDatabase(env.dbUrl, 2);
-    const mailbox = new LocalMailbox(mailDb.db, env.SMTP_PORT, console.error);
-    await mailbox.start();
-    stops.push(async () => {
-      await mailbox.stop();
-      await mailDb.close();
-    });
-  }
+  await seedOnFirstRun(env.dbUrl);
+  if (process.env.MAILBOX !== '0' && ['127.0.0.1', 'localhost'].includes(env.SMTP_HOST)) stops.push(await startLocalMailbox(env.dbUrl, env.SMTP_PORT));
 
   buildClientIfStale();
   const running = await startServer(env);

@@ -27,10 +27,13 @@ export async function startServer(env: Env, opts: { sender?: MailSender; log?: (
   });
   outbox.start(env.OUTBOX_POLL_MS);
   const { port } = server.address() as AddressInfo;
+  const url = `http://${env.HOST}:${port}`;
+  // With PORT=0 the real port is known only now; links in mail must carry it.
+  if (!env.PUBLIC_URL) env.publicUrl = url;
   return {
     ctx,
     server,
-    url: `http://${env.HOST}:${port}`,
+    url,
     async stop() {
       await outbox.stop();
       await new Promise<void>((resolve) => {

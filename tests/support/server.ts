@@ -5,7 +5,7 @@ import type { MailSender } from '../../server/src/mail/transport';
 export const TEST_SECRET = 'test-session-secret-that-is-long-enough-0123456789';
 
 /** Starts the real app in-process on a free port against a test database. */
-export function startTestServer(dbUrl: string, overrides: Partial<Record<keyof Env, string>> = {}, opts: { sender?: MailSender } = {}): Promise<RunningServer> {
+export function startTestServer(dbUrl: string, overrides: Partial<Record<keyof Env, string>> = {}, opts: { sender?: MailSender | 'smtp' } = {}): Promise<RunningServer> {
   const env = loadEnv({
     NODE_ENV: 'test',
     DATABASE_URL: dbUrl,
@@ -16,7 +16,9 @@ export function startTestServer(dbUrl: string, overrides: Partial<Record<keyof E
     CLIENT_DIST: 'dist/client',
     ...overrides,
   });
-  return startServer(env, { sender: opts.sender ?? { send: async () => {} }, log: () => {} });
+  // 'smtp' sends through the real SMTP path (to a local mailbox the test started).
+  const sender = opts.sender === 'smtp' ? undefined : (opts.sender ?? { send: async () => {} });
+  return startServer(env, { sender, log: () => {} });
 }
 
 /** A mail sender that keeps what it was given, for tests that read the links in a mail. */

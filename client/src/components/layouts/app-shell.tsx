@@ -15,12 +15,12 @@ export function AppShell() {
   const navigate = useNavigate();
   const [open, setOpen] = useState(false);
 
-  const links: { to: string; label: string }[] = [];
+  const links: { to: string; label: string; end?: boolean }[] = [];
   if (user) {
     for (const g of groupsWithRole(user, 'organiser')) links.push({ to: paths.groupPeople(g.groupId), label: `${g.groupName}` });
     if (groupsWithRole(user, 'host').length) links.push({ to: paths.desk(), label: 'Reception desk' });
     if (groupsWithRole(user, 'fixer').length) links.push({ to: paths.bench(), label: 'My bench' });
-    if (user.admin) links.push({ to: paths.admin(), label: 'Network admin' }, { to: paths.adminMailbox(), label: 'Mailbox' });
+    if (user.admin) links.push({ to: paths.admin(), label: 'Network admin', end: true }, { to: paths.adminMailbox(), label: 'Mailbox' });
   }
 
   return (
@@ -35,7 +35,7 @@ export function AppShell() {
           </button>
           <nav id="main-nav" aria-label="Main" className={`${open ? 'absolute inset-x-0 top-16 z-20 border-b border-ink/10 bg-white p-4 shadow-lg' : 'hidden'} md:static md:block md:border-0 md:p-0 md:shadow-none`}>
             <ul className="flex flex-col gap-1 md:flex-row md:items-center" onClick={() => setOpen(false)}>
-              {links.map((l) => <li key={l.to}><NavLink to={l.to} className={linkClass}>{l.label}</NavLink></li>)}
+              {links.map((l) => <li key={l.to}><NavLink to={l.to} end={l.end} className={linkClass}>{l.label}</NavLink></li>)}
               {user ? (
                 <li className="md:ml-3">
                   <button

@@ -34,8 +34,8 @@ export function EmptyState({ title, children, icon = '○' }: { title: string; c
   );
 }
 
-export function Card({ children, className = '' }: { children: ReactNode; className?: string }) {
-  return <section className={`rounded-xl bg-white p-5 shadow-sm ring-1 ring-ink/5 ${className}`}>{children}</section>;
+export function Card({ children, className = '', flush = false }: { children: ReactNode; className?: string; flush?: boolean }) {
+  return <section className={`rounded-xl bg-white shadow-sm ring-1 ring-ink/5 ${flush ? '' : 'p-5'} ${className}`}>{children}</section>;
 }
 
 export function PageTitle({ title, lead }: { title: string; lead?: ReactNode }) {

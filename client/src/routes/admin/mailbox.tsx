@@ -17,7 +17,7 @@ export function MailboxPage() {
     <div>
       <PageTitle title="Local mailbox" lead="Mail sent by this installation, caught by the local SMTP mailbox instead of going out." />
       <div className="grid gap-4 lg:grid-cols-[22rem_1fr]">
-        <Card className="p-0">
+        <Card flush className="overflow-hidden">
           <div className="flex items-center justify-between border-b border-ink/5 px-4 py-3">
             <h2 className="text-base">{list.data?.length ?? 0} messages</h2>
             <Button variant="quiet" disabled={!list.data?.length} onClick={() => setConfirming(true)}>Empty</Button>
