@@ -50,7 +50,8 @@ export function createApp(ctx: AppContext) {
   api.use(session);
   api.use(loadUser(ctx.database.db));
   api.use(csrfSynchronisedProtection);
-  api.use('/auth', authRoutes(ctx, (req) => generateToken(req)));
+  const auth = authRoutes(ctx, (req) => generateToken(req));
+  api.use('/auth', auth.router);
   api.use(groupRoutes(ctx));
   api.use(adminRoutes(ctx));
   api.use(apiNotFound);
@@ -68,5 +69,11 @@ export function createApp(ctx: AppContext) {
   }
   app.use(errorHandler((msg, err) => ctx.log(`${msg}: ${(err as Error)?.stack ?? err}`)));
 
-  return { app, close: () => store.close() };
+  return {
+    app,
+    async close() {
+      await auth.flush();
+      await store.close();
+    },
+  };
 }

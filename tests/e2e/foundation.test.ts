@@ -46,8 +46,8 @@ describe('the foundation in a browser', () => {
         if (!r.url().startsWith(server.url) && !r.url().startsWith('data:')) remote.push(r.url());
       });
       await page.goto(server.url);
-      await expect(page.getByRole('heading', { level: 1 }).textContent()).resolves.toContain('Bring the broken thing');
-      await expect(page.getByRole('heading', { name: 'Kestlebridge Menders' }).isVisible()).resolves.toBe(true);
+      await page.getByRole('heading', { level: 1, name: /Bring the broken thing/ }).waitFor();
+      await page.getByRole('heading', { name: 'Kestlebridge Menders' }).waitFor();
       await page.evaluate(() => document.fonts.ready);
       expect(await page.evaluate(() => document.fonts.check('800 16px Nunito'))).toBe(true);
       expect(remote).toEqual([]);

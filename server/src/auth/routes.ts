@@ -20,14 +20,16 @@ async function signIn(req: Request, ctx: AppContext, userId: number) {
   return loadSessionUser(ctx.database.db, userId);
 }
 
-function limiter(ctx: AppContext, name: string, max: number, key: (req: Request) => string, skipSuccessfulRequests = false) {
+function limiter(ctx: AppContext, stores: MariadbRateLimitStore[], name: string, max: number, key: (req: Request) => string, skipSuccessfulRequests = false) {
+  const store = new MariadbRateLimitStore(ctx.database.db, `${name}:`);
+  stores.push(store);
   return rateLimit({
     windowMs: ctx.env.LOGIN_RATE_WINDOW_MINUTES * 60_000,
     limit: max,
     standardHeaders: 'draft-8',
     legacyHeaders: false,
     skipSuccessfulRequests,
-    store: new MariadbRateLimitStore(ctx.database.db, `${name}:`),
+    store,
     keyGenerator: key,
     handler: (_req, _res, next) =>
       next(new HttpError(429, 'rate-limited', `Too many attempts. Wait ${ctx.env.LOGIN_RATE_WINDOW_MINUTES} minutes and try again.`)),
@@ -36,12 +38,13 @@ function limiter(ctx: AppContext, name: string, max: number, key: (req: Request)
 
 export function authRoutes(ctx: AppContext, csrfToken: (req: Request) => string) {
   const r = Router();
+  const stores: MariadbRateLimitStore[] = [];
   const ip = (req: Request) => ipKeyGenerator(req.ip ?? '0.0.0.0');
   const emailOf = (req: Request) => String(req.body?.email ?? '').trim().toLowerCase().slice(0, 254);
   // Failed sign-ins count per address and source, and more loosely per source alone (password spraying).
-  const loginPerAccount = limiter(ctx, 'login', ctx.env.LOGIN_RATE_MAX, (req) => `${ip(req)}|${emailOf(req)}`, true);
-  const loginPerSource = limiter(ctx, 'login-ip', ctx.env.LOGIN_RATE_MAX * 5, ip, true);
-  const mailLinks = limiter(ctx, 'mail-link', ctx.env.LOGIN_RATE_MAX, (req) => `${ip(req)}|${emailOf(req)}`);
+  const loginPerAccount = limiter(ctx, stores, 'login', ctx.env.LOGIN_RATE_MAX, (req) => `${ip(req)}|${emailOf(req)}`, true);
+  const loginPerSource = limiter(ctx, stores, 'login-ip', ctx.env.LOGIN_RATE_MAX * 5, ip, true);
+  const mailLinks = limiter(ctx, stores, 'mail-link', ctx.env.LOGIN_RATE_MAX, (req) => `${ip(req)}|${emailOf(req)}`);
 
   r.get('/csrf', (req, res) => {
     res.json({ token: csrfToken(req) });
@@ -93,5 +96,5 @@ export function authRoutes(ctx: AppContext, csrfToken: (req: Request) => string)
     res.status(201).json({ user: await signIn(req, ctx, id) });
   });
 
-  return r;
+  return { router: r, flush: () => Promise.all(stores.map((s) => s.flush())) };
 }

@@ -31,7 +31,17 @@ export class MariadbRateLimitStore implements Store {
     const [row] = await this.db.select().from(rateLimits).where(sql`${rateLimits.key} = ${k}`);
     return { totalHits: row?.hits ?? 1, resetTime: row?.resetAt ?? reset };
   }
-  async decrement(key: string) {
+  private pending = new Set<Promise<unknown>>();
+  /** express-rate-limit decrements after the response has gone; shutdown waits for those writes. */
+  async flush() {
+    await Promise.allSettled([...this.pending]);
+  }
+  decrement(key: string) {
+    const p = this.doDecrement(key);
+    this.pending.add(p);
+    return p.finally(() => this.pending.delete(p));
+  }
+  private async doDecrement(key: string) {
     await this.db.update(rateLimits).set({ hits: sql`GREATEST(${rateLimits.hits} - 1, 0)` }).where(sql`${rateLimits.key} = ${this.prefix + key}`);
   }
   async resetKey(key: string) {
