@@ -18,7 +18,7 @@ import { loadOrCreateSecrets, startLocalDatabase, step } from './local-stack';
 const dir = mkdtempSync(path.join('/dev/shm', 'mendery-bench-'));
 const local = await startLocalDatabase({ dir, port: await freePort(), database: 'bench', secrets: loadOrCreateSecrets(dir), fast: true });
 const seedDb = createDatabase(local.appUrl, 2);
-await seedDemo(seedDb.db);
+await seedDemo(seedDb.db, { linkSecret: 'b'.repeat(40) });
 await seedDb.close();
 
 const env = loadEnv({ NODE_ENV: 'production', DATABASE_URL: local.appUrl, PORT: '0', SESSION_SECRET: 'b'.repeat(40), OUTBOX_POLL_MS: '0', DB_POOL_SIZE: '20' });

@@ -10,7 +10,7 @@ const vitePort = Number(process.env.VITE_PORT ?? 5173);
 const smtpPort = Number(process.env.SMTP_PORT ?? 2525);
 
 const local = await startLocalDatabase({ dir: path.join(dataDir, 'mariadb'), port: Number(process.env.DB_PORT ?? 3307), database: 'mendery', secrets });
-await seedOnFirstRun(local.appUrl);
+await seedOnFirstRun(local.appUrl, secrets.sessionSecret);
 const stopMailbox = await startLocalMailbox(local.appUrl, smtpPort);
 
 const env = {

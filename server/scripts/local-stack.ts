@@ -7,6 +7,7 @@ import { runMigrations } from '../src/db/migrate';
 import { createDatabase } from '../src/db/client';
 import { LocalMailbox } from '../src/mail/local-mailbox';
 import { isSeeded, markEmptyInstall, seedDemo } from '../src/seed/demo';
+import { ensureCategories } from '../src/seed/categories';
 
 export const root = path.resolve(import.meta.dirname, '../..');
 export const step = (line: string) => console.log(`▸ ${line}`);
@@ -71,16 +72,17 @@ export function buildClientIfStale(force = false): void {
 }
 
 /** Demo data on the very first run; DEMO=0 starts empty and the first visit asks for an admin. */
-export async function seedOnFirstRun(dbUrl: string): Promise<void> {
+export async function seedOnFirstRun(dbUrl: string, linkSecret: string): Promise<void> {
   const db = createDatabase(dbUrl, 2);
   try {
+    await ensureCategories(db.db);
     if (await isSeeded(db.db)) return;
     if (process.env.DEMO === '0') {
       step('Starting empty (DEMO=0): the first visit asks for the first admin');
       await markEmptyInstall(db.db);
     } else {
       step('Loading the demo scenario (first run)');
-      await seedDemo(db.db);
+      await seedDemo(db.db, { linkSecret });
     }
   } finally {
     await db.close();

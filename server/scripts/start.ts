@@ -49,7 +49,7 @@ try {
     CLIENT_DIST: path.join(root, 'dist/client'),
   });
 
-  await seedOnFirstRun(env.dbUrl);
+  await seedOnFirstRun(env.dbUrl, env.SESSION_SECRET);
   if (process.env.MAILBOX !== '0' && ['127.0.0.1', 'localhost'].includes(env.SMTP_HOST)) stops.push(await startLocalMailbox(env.dbUrl, env.SMTP_PORT));
 
   buildClientIfStale();

@@ -11,6 +11,10 @@ import { apiNotFound, errorHandler } from './http/errors';
 import { publicRoutes } from './features/public/routes';
 import { groupRoutes } from './features/groups/routes';
 import { adminRoutes } from './features/admin/routes';
+import { catalogueRoutes } from './features/catalogue/routes';
+import { venueRoutes } from './features/venues/routes';
+import { eventRoutes } from './features/events/routes';
+import { bookingRoutes } from './features/bookings/routes';
 
 /** Builds the Express app: middleware → routers → 404 → error handler. `listen` is the caller's business. */
 export function createApp(ctx: AppContext) {
@@ -54,6 +58,10 @@ export function createApp(ctx: AppContext) {
   api.use('/auth', auth.router);
   api.use(groupRoutes(ctx));
   api.use(adminRoutes(ctx));
+  api.use(catalogueRoutes(ctx));
+  api.use(venueRoutes(ctx));
+  api.use(eventRoutes(ctx));
+  api.use(bookingRoutes(ctx));
   api.use(apiNotFound);
   app.use('/api', api);
 

@@ -6,6 +6,9 @@ import type { AppContext } from './context';
 import { createDatabase } from './db/client';
 import { OutboxWorker } from './mail/outbox';
 import { smtpSender, type MailSender } from './mail/transport';
+import { LocalDiskStorage } from './storage/index';
+import { Scheduler } from './jobs/scheduler';
+import path from 'node:path';
 
 export interface RunningServer {
   ctx: AppContext;
@@ -19,13 +22,15 @@ export async function startServer(env: Env, opts: { sender?: MailSender; log?: (
   const log = opts.log ?? ((l: string) => console.log(l));
   const database = createDatabase(env.dbUrl, env.DB_POOL_SIZE);
   const outbox = new OutboxWorker(database.db, opts.sender ?? smtpSender(env), log);
-  const ctx: AppContext = { env, database, outbox, log };
+  const ctx: AppContext = { env, database, outbox, log, storage: new LocalDiskStorage(path.resolve(env.DATA_DIR, 'uploads')) };
+  const scheduler = new Scheduler(ctx);
   const { app, close } = createApp(ctx);
   const server = await new Promise<Server>((resolve, reject) => {
     const s = app.listen(env.PORT, env.HOST, () => resolve(s));
     s.once('error', reject);
   });
   outbox.start(env.OUTBOX_POLL_MS);
+  scheduler.start(env.JOBS_POLL_MS);
   const { port } = server.address() as AddressInfo;
   const url = `http://${env.HOST}:${port}`;
   // With PORT=0 the real port is known only now; links in mail must carry it.
@@ -35,6 +40,7 @@ export async function startServer(env: Env, opts: { sender?: MailSender; log?: (
     server,
     url,
     async stop() {
+      await scheduler.stop();
       await outbox.stop();
       await new Promise<void>((resolve) => {
         server.close(() => resolve());

@@ -7,7 +7,7 @@ import { markEmptyInstall, seedDemo } from '../../server/src/seed/demo';
 import type { RunningServer } from '../../server/src/server';
 import { DESKTOP, launchBrowser, PHONE, shot } from '../support/browser';
 import { createTestDatabase, type TestDatabase } from '../support/db';
-import { startTestServer } from '../support/server';
+import { startTestServer, TEST_SECRET } from '../support/server';
 
 let db: TestDatabase;
 let server: RunningServer;
@@ -16,7 +16,7 @@ let browser: Browser;
 
 beforeAll(async () => {
   db = await createTestDatabase();
-  await seedDemo(db.db);
+  await seedDemo(db.db, { linkSecret: TEST_SECRET });
   const smtpPort = await freePort();
   mailbox = new LocalMailbox(db.db, smtpPort);
   await mailbox.start();

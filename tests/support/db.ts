@@ -2,6 +2,7 @@ import { randomBytes } from 'node:crypto';
 import mysql from 'mysql2/promise';
 import { createDatabase, type Database } from '../../server/src/db/client';
 import { runMigrations } from '../../server/src/db/migrate';
+import { ensureCategories } from '../../server/src/seed/categories';
 
 export const adminUrl = () => {
   const url = process.env.TEST_DB_ADMIN_URL;
@@ -32,6 +33,7 @@ export async function createTestDatabase(opts: { migrate?: boolean } = {}): Prom
   const url = `${adminUrl()}/${name}`;
   if (opts.migrate !== false) await runMigrations(url);
   const database = createDatabase(url, 20);
+  if (opts.migrate !== false) await ensureCategories(database.db);
   return {
     ...database,
     name,

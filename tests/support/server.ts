@@ -14,6 +14,7 @@ export function startTestServer(dbUrl: string, overrides: Partial<Record<keyof E
     OUTBOX_POLL_MS: '0',
     SMTP_PORT: '1',
     CLIENT_DIST: 'dist/client',
+    JOBS_POLL_MS: '0',
     ...overrides,
   });
   // 'smtp' sends through the real SMTP path (to a local mailbox the test started).

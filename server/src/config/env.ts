@@ -25,6 +25,7 @@ const schema = z.object({
   SMTP_PASSWORD: z.string().optional(),
   MAIL_FROM: z.string().default('Mendery <no-reply@mendery.local>'),
   OUTBOX_POLL_MS: z.coerce.number().int().min(0).default(2000),
+  JOBS_POLL_MS: z.coerce.number().int().min(0).default(60_000),
   LOGIN_RATE_MAX: z.coerce.number().int().min(1).default(10),
   LOGIN_RATE_WINDOW_MINUTES: z.coerce.number().positive().default(15),
   CLIENT_DIST: z.string().default('dist/client'),

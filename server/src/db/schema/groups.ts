@@ -9,6 +9,8 @@ export const repairGroups = mysqlTable('repair_groups', {
   slug: varchar('slug', { length: 80 }).notNull(),
   town: varchar('town', { length: 120 }).notNull(),
   description: text('description').notNull(),
+  houseRules: text('house_rules'),
+  timeZone: varchar('time_zone', { length: 64 }).notNull().default('Europe/London'),
   createdAt: createdAt(),
 }, (t) => [uniqueIndex('repair_groups_slug_uq').on(t.slug)]);
 

@@ -1,3 +1,5 @@
 export * from './users';
 export * from './groups';
 export * from './platform';
+export * from './categories';
+export * from './events';

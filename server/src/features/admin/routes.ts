@@ -7,6 +7,7 @@ import { requireAdmin } from '../../auth/guards';
 import { mailboxMessages, memberships, outbox, repairGroups, users } from '../../db/schema/index';
 import { HttpError, notFound } from '../../http/errors';
 import { body, params } from '../../http/validate';
+import { applyDefaultExclusions } from '../catalogue/service';
 
 const idParam = z.object({ id: z.coerce.number().int().positive() });
 const slugify = (s: string) => s.toLowerCase().normalize('NFKD').replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '').slice(0, 60);
@@ -65,7 +66,11 @@ export function adminRoutes(ctx: AppContext) {
   r.post('/admin/groups', async (req, res) => {
     const input = body(req, groupSchema);
     try {
-      const [{ id }] = await db.insert(repairGroups).values({ ...input, slug: slugify(input.name) }).$returningId();
+      const id = await db.transaction(async (tx) => {
+        const [{ id }] = await tx.insert(repairGroups).values({ ...input, slug: slugify(input.name) }).$returningId();
+        await applyDefaultExclusions(tx, id);
+        return id;
+      });
       res.status(201).json({ id, ...input });
     } catch (err) {
       if ((err as { code?: string }).code === 'ER_DUP_ENTRY') throw new HttpError(409, 'duplicate', 'A group with that name exists.', { name: 'A group with that name exists.' });

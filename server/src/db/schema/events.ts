@@ -1,0 +1,108 @@
+import { boolean, char, index, int, json, mysqlEnum, mysqlTable, primaryKey, text, uniqueIndex, varchar } from 'drizzle-orm/mysql-core';
+import { BOOKING_STATUSES, EVENT_STATUSES, WAITLIST_STATUSES, type Hazard, type Skill } from '../../../../shared/constants';
+import { createdAt, id, ref, timestamp3 } from './columns';
+import { categories } from './categories';
+import { repairGroups, venues } from './groups';
+
+export const events = mysqlTable('events', {
+  id: id(),
+  groupId: ref('group_id').notNull().references(() => repairGroups.id, { onDelete: 'cascade' }),
+  venueId: ref('venue_id').notNull().references(() => venues.id),
+  title: varchar('title', { length: 160 }).notNull(),
+  description: text('description').notNull(),
+  startsAt: timestamp3('starts_at').notNull(),
+  endsAt: timestamp3('ends_at').notNull(),
+  slotMinutes: int('slot_minutes').notNull(),
+  slotCapacity: int('slot_capacity').notNull(),
+  skillLimits: json('skill_limits').$type<Partial<Record<Skill, number>>>().notNull(),
+  status: mysqlEnum('status', EVENT_STATUSES).notNull().default('draft'),
+  publishedAt: timestamp3('published_at'),
+  cancelledAt: timestamp3('cancelled_at'),
+  createdAt: createdAt(),
+}, (t) => [index('events_status_starts_idx').on(t.status, t.startsAt), index('events_group_idx').on(t.groupId, t.startsAt)]);
+
+/** booked + held never exceeds capacity: places are taken with a conditional UPDATE. */
+export const slots = mysqlTable('slots', {
+  id: id(),
+  eventId: ref('event_id').notNull().references(() => events.id, { onDelete: 'cascade' }),
+  startsAt: timestamp3('starts_at').notNull(),
+  endsAt: timestamp3('ends_at').notNull(),
+  capacity: int('capacity').notNull(),
+  booked: int('booked').notNull().default(0),
+  /** Places kept for someone on the waiting list who has been offered them. */
+  held: int('held').notNull().default(0),
+}, (t) => [index('slots_event_idx').on(t.eventId, t.startsAt)]);
+
+/** Items per skill in a slot, for events with per-skill limits. */
+export const slotSkillCounts = mysqlTable('slot_skill_counts', {
+  slotId: ref('slot_id').notNull().references(() => slots.id, { onDelete: 'cascade' }),
+  skill: varchar('skill', { length: 32 }).notNull(),
+  booked: int('booked').notNull().default(0),
+}, (t) => [primaryKey({ columns: [t.slotId, t.skill] })]);
+
+export const bookings = mysqlTable('bookings', {
+  id: id(),
+  reference: char('reference', { length: 7 }).notNull(),
+  eventId: ref('event_id').notNull().references(() => events.id, { onDelete: 'cascade' }),
+  slotId: ref('slot_id').notNull().references(() => slots.id),
+  visitorName: varchar('visitor_name', { length: 120 }).notNull(),
+  visitorEmail: varchar('visitor_email', { length: 254 }).notNull(),
+  visitorPhone: varchar('visitor_phone', { length: 40 }),
+  manageTokenHash: char('manage_token_hash', { length: 64 }).notNull(),
+  status: mysqlEnum('status', BOOKING_STATUSES).notNull().default('confirmed'),
+  consentAt: timestamp3('consent_at').notNull(),
+  reminderSentAt: timestamp3('reminder_sent_at'),
+  cancelledAt: timestamp3('cancelled_at'),
+  createdAt: createdAt(),
+}, (t) => [uniqueIndex('bookings_reference_uq').on(t.reference), index('bookings_event_idx').on(t.eventId, t.status), index('bookings_slot_idx').on(t.slotId)]);
+
+export const bookingItems = mysqlTable('booking_items', {
+  id: id(),
+  bookingId: ref('booking_id').notNull().references(() => bookings.id, { onDelete: 'cascade' }),
+  categoryId: ref('category_id').notNull().references(() => categories.id),
+  brand: varchar('brand', { length: 80 }),
+  model: varchar('model', { length: 80 }),
+  ageYears: int('age_years'),
+  fault: text('fault').notNull(),
+  mains: boolean('mains').notNull(),
+  battery: boolean('battery').notNull().default(false),
+  position: int('position').notNull(),
+  createdAt: createdAt(),
+}, (t) => [index('booking_items_booking_idx').on(t.bookingId)]);
+
+export const itemPhotos = mysqlTable('item_photos', {
+  id: id(),
+  itemId: ref('item_id').notNull().references(() => bookingItems.id, { onDelete: 'cascade' }),
+  storageKey: varchar('storage_key', { length: 200 }).notNull(),
+  contentType: varchar('content_type', { length: 40 }).notNull(),
+  width: int('width').notNull(),
+  height: int('height').notNull(),
+  bytes: int('bytes').notNull(),
+  createdAt: createdAt(),
+}, (t) => [index('item_photos_item_idx').on(t.itemId)]);
+
+/** A submitted form's key and its first answer: the same key replays the answer instead of booking again. */
+export const idempotencyKeys = mysqlTable('idempotency_keys', {
+  key: varchar('idem_key', { length: 100 }).primaryKey(),
+  scope: varchar('scope', { length: 40 }).notNull(),
+  statusCode: int('status_code'),
+  response: json('response'),
+  createdAt: createdAt(),
+});
+
+export const waitlistEntries = mysqlTable('waitlist_entries', {
+  id: id(),
+  eventId: ref('event_id').notNull().references(() => events.id, { onDelete: 'cascade' }),
+  slotId: ref('slot_id').notNull().references(() => slots.id, { onDelete: 'cascade' }),
+  visitorName: varchar('visitor_name', { length: 120 }).notNull(),
+  visitorEmail: varchar('visitor_email', { length: 254 }).notNull(),
+  /** The booking form as submitted, so a claim books it in one step. */
+  request: json('request').$type<{ visitor: { name: string; email: string; phone?: string }; items: { categoryId: number; brand?: string; model?: string; ageYears?: number; fault: string; mains?: boolean; battery?: boolean; hazards: Hazard[] }[] }>().notNull(),
+  places: int('places').notNull(),
+  status: mysqlEnum('status', WAITLIST_STATUSES).notNull().default('waiting'),
+  claimTokenHash: char('claim_token_hash', { length: 64 }),
+  offeredAt: timestamp3('offered_at'),
+  offerExpiresAt: timestamp3('offer_expires_at'),
+  bookingId: ref('booking_id'),
+  createdAt: createdAt(),
+}, (t) => [index('waitlist_slot_idx').on(t.slotId, t.status, t.id), uniqueIndex('waitlist_claim_uq').on(t.claimTokenHash), index('waitlist_offer_idx').on(t.status, t.offerExpiresAt)]);

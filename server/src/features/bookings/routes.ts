@@ -1,0 +1,110 @@
+import { eq } from 'drizzle-orm';
+import { Router, type NextFunction, type Request, type Response } from 'express';
+import { z } from 'zod';
+import { normaliseReference } from '../../../../shared/booking/reference';
+import { createBookingSchema, moveBookingSchema, waitlistSchema } from '../../../../shared/schemas/bookings';
+import type { AppContext } from '../../context';
+import { hasGroupRole, requireGroupRole } from '../../auth/guards';
+import { bookingItems, bookings, events, itemPhotos } from '../../db/schema/index';
+import { HttpError, notFound } from '../../http/errors';
+import { body, params } from '../../http/validate';
+import { eventGroupId } from '../events/service';
+import { eventBookings } from './organiser';
+import { multerError, photoUpload, savePhotos } from './photos';
+import * as booking from './service';
+
+const tokenQuery = z.object({ token: z.string().max(200).optional() });
+const idempotencyKey = z.string().trim().min(8, 'Idempotency-Key must be 8 to 100 characters.').max(100, 'Idempotency-Key must be 8 to 100 characters.').regex(/^[A-Za-z0-9_.:-]+$/, 'Idempotency-Key may hold letters, digits and _ . : - only.');
+
+export function bookingRoutes(ctx: AppContext) {
+  const r = Router();
+  const { db } = ctx.database;
+
+  const reference = (req: Request) => {
+    const ref = normaliseReference(String(req.params.reference ?? ''));
+    if (!ref) throw notFound('That booking');
+    return ref;
+  };
+  const byToken = (req: Request) => booking.bookingByToken(ctx, reference(req), tokenQuery.parse(req.query).token);
+
+  r.post('/bookings', async (req, res) => {
+    const header = req.get('idempotency-key');
+    const key = header === undefined ? undefined : idempotencyKey.safeParse(header);
+    if (key && !key.success) throw new HttpError(400, 'invalid', key.error.issues[0].message, { 'Idempotency-Key': key.error.issues[0].message });
+    const input = body(req, createBookingSchema);
+    const result = await booking.createBooking(ctx, input, key?.data);
+    if (result.replayed) res.setHeader('Idempotent-Replayed', 'true');
+    res.status(result.status).json(result.body);
+  });
+
+  r.get('/bookings/:reference', async (req, res) => {
+    const b = await byToken(req);
+    res.setHeader('Cache-Control', 'no-store');
+    res.json(await booking.bookingView(ctx, b.id));
+  });
+
+  r.delete('/bookings/:reference', async (req, res) => {
+    const b = await byToken(req);
+    await booking.cancelBooking(ctx, b.id);
+    res.status(204).end();
+  });
+
+  r.post('/bookings/:reference/move', async (req, res) => {
+    const b = await byToken(req);
+    await booking.moveBooking(ctx, b.id, body(req, moveBookingSchema).slotId, tokenQuery.parse(req.query).token!);
+    res.json(await booking.bookingView(ctx, b.id));
+  });
+
+  r.post(
+    '/bookings/:reference/items/:itemId/photos',
+    async (req, _res, next) => {
+      // The token is checked before a byte of the upload is read.
+      await byToken(req);
+      next();
+    },
+    (req: Request, res: Response, next: NextFunction) => photoUpload(req, res, (err) => next(multerError(err) ?? err)),
+    async (req, res) => {
+      const b = await byToken(req);
+      const { itemId } = params(req, z.object({ itemId: z.coerce.number().int().positive(), reference: z.string() }));
+      if (b.status !== 'confirmed') throw new HttpError(409, 'cancelled', 'This booking is cancelled.');
+      res.status(201).json(await savePhotos(ctx, b.id, itemId, (req.files as Express.Multer.File[]) ?? []));
+    },
+  );
+
+  /** A photo: for the visitor with the booking's token, or for the organisers, reception and fixers of its group. */
+  r.get('/photos/:id', async (req, res) => {
+    const { id } = params(req, z.object({ id: z.coerce.number().int().positive() }));
+    const [p] = await db
+      .select({ key: itemPhotos.storageKey, type: itemPhotos.contentType, reference: bookings.reference, groupId: events.groupId })
+      .from(itemPhotos)
+      .innerJoin(bookingItems, eq(bookingItems.id, itemPhotos.itemId))
+      .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
+      .innerJoin(events, eq(events.id, bookings.eventId))
+      .where(eq(itemPhotos.id, id));
+    if (!p) throw notFound('That photo');
+    const token = tokenQuery.parse(req.query).token;
+    if (!hasGroupRole(req.user, p.groupId, ['organiser', 'host', 'fixer'])) await booking.bookingByToken(ctx, p.reference, token);
+    const data = await ctx.storage.get(p.key);
+    if (!data) throw notFound('That photo');
+    res.setHeader('Cache-Control', 'private, max-age=3600');
+    res.type(p.type).send(data);
+  });
+
+  r.post('/events/:id/waitlist', async (req, res) => {
+    const input = body(req, waitlistSchema);
+    const { id } = params(req, z.object({ id: z.coerce.number().int().positive() }));
+    res.status(201).json(await booking.joinWaitlist(ctx, id, input));
+  });
+
+  r.get('/waiting-list/:token', async (req, res) => {
+    res.json(await booking.offerView(ctx, String(req.params.token)));
+  });
+  r.post('/waiting-list/:token/claim', async (req, res) => {
+    res.status(201).json(await booking.claimOffer(ctx, String(req.params.token)));
+  });
+
+  r.get('/events/:id/bookings', requireGroupRole(['organiser', 'host'], (req) => eventGroupId(db, Number(req.params.id))), async (req, res) => {
+    res.json(await eventBookings(ctx, Number(req.params.id)));
+  });
+  return r;
+}

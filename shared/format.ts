@@ -1,0 +1,23 @@
+/** Dates as people at the event read them: in the group's time zone, in plain English. */
+export function formatDay(d: Date | string, timeZone: string): string {
+  return new Intl.DateTimeFormat('en-GB', { timeZone, weekday: 'long', day: 'numeric', month: 'long', year: 'numeric' }).format(new Date(d));
+}
+
+export function formatTime(d: Date | string, timeZone: string): string {
+  return new Intl.DateTimeFormat('en-GB', { timeZone, hour: '2-digit', minute: '2-digit', hourCycle: 'h23' }).format(new Date(d));
+}
+
+export const formatTimeRange = (a: Date | string, b: Date | string, timeZone: string) => `${formatTime(a, timeZone)}–${formatTime(b, timeZone)}`;
+
+export const WHAT_TO_BRING = [
+  'The broken item itself, cleaned if it has been in a kitchen or a garden.',
+  'Its charger, power supply, remote or any loose parts that belong to it.',
+  'What you know of the fault: what happened, when, and anything already tried.',
+  'Spare parts you already bought, if any; we will tell you if one is needed.',
+];
+
+export const DISCLAIMER = [
+  'Volunteers help on a best-effort basis; a repair cannot be guaranteed.',
+  'You stay the owner of your item and stay with it while it is looked at.',
+  'Mains items are safety-checked before they go home where local practice requires it; an item that fails is not returned as fixed.',
+];
