@@ -10,11 +10,14 @@ import { startTestServer } from '../support/server';
  * Later features add their rows here. `own` is the group the callers belong to; `other` is a second group.
  */
 type Caller = 'anonymous' | 'account' | 'fixer' | 'host' | 'organiser' | 'otherOrganiser' | 'admin';
-type Row = [method: 'GET' | 'POST' | 'DELETE', path: (g: Groups) => string, expected: Record<Caller, number>, body?: unknown];
+type Row = [method: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE', path: (g: Groups) => string, expected: Record<Caller, number>, body?: unknown | ((g: Groups) => unknown)];
 interface Groups {
   own: number;
   other: number;
   pendingMembership: number;
+  ownEvent: number;
+  otherEvent: number;
+  ownVenue: number;
 }
 
 const everyone = (status: number): Record<Caller, number> => ({ anonymous: status, account: status, fixer: status, host: status, organiser: status, otherOrganiser: status, admin: status });
@@ -34,6 +37,19 @@ const table: Row[] = [
   ['GET', () => '/api/admin/groups', adminOnly],
   ['GET', () => '/api/admin/users', adminOnly],
   ['POST', () => '/api/admin/groups', { ...adminOnly, admin: 400 }, { name: '' }],
+  ['GET', () => '/api/categories', everyone(200)],
+  ['GET', () => '/api/events', everyone(200)],
+  ['GET', (g) => `/api/groups/${g.own}/settings`, everyone(200)],
+  ['GET', (g) => `/api/venues?groupId=${g.own}`, ownOrganiser],
+  // Validation comes after the role check: a permitted caller gets 400 for the empty body.
+  ['POST', () => '/api/venues', { ...ownOrganiser, organiser: 400, admin: 400 }, (g: Groups) => ({ groupId: g.own })],
+  ['POST', () => '/api/events', { ...ownOrganiser, organiser: 400, admin: 400 }, (g: Groups) => ({ groupId: g.own })],
+  ['GET', (g) => `/api/events/${g.ownEvent}/bookings`, { ...ownOrganiser, host: 200 }],
+  ['GET', (g) => `/api/groups/${g.own}/events`, { anonymous: 401, account: 403, fixer: 200, host: 200, organiser: 200, otherOrganiser: 200, admin: 200 }],
+  ['PATCH', (g) => `/api/events/${g.ownEvent}`, ownOrganiser, { description: 'Bring cake.' }],
+  ['PATCH', (g) => `/api/events/${g.otherEvent}`, { ...ownOrganiser, organiser: 403, otherOrganiser: 200 }, { description: 'Bring cake.' }],
+  ['PUT', (g) => `/api/groups/${g.own}/settings`, ownOrganiser, { houseRules: 'Be kind.', excludedCategoryIds: [] }],
+  ['PATCH', () => '/api/categories/1', adminOnly, { repairMinutes: 30 }],
 ];
 
 let db: TestDatabase;
@@ -63,7 +79,8 @@ beforeAll(async () => {
   const volunteer = await makeUser(db.db);
   const { memberships } = await import('../../server/src/db/schema/index');
   const [{ id }] = await db.db.insert(memberships).values({ userId: volunteer.id, groupId: own, role: 'fixer', status: 'pending' }).$returningId();
-  groups = { own, other, pendingMembership: id };
+  const { makeEvent } = await import('../support/factories');
+  groups = { own, other, pendingMembership: id, ownEvent: (await makeEvent(db.db, own, { status: 'draft' })).eventId, otherEvent: (await makeEvent(db.db, other, { status: 'draft' })).eventId, ownVenue: 0 };
 });
 afterAll(async () => {
   await server.stop();
@@ -72,12 +89,13 @@ afterAll(async () => {
 
 describe('routes × roles', () => {
   for (const [method, path, expected, body] of table) {
-    it(`${method} ${path({ own: 1, other: 2, pendingMembership: 3 }).replace(/\/\d+/g, '/:id')} answers ${JSON.stringify(expected)}`, async () => {
+    it(`${method} ${path({ own: 1, other: 2, pendingMembership: 3, ownEvent: 4, otherEvent: 5, ownVenue: 6 }).replace(/\/\d+/g, '/:id')} answers ${JSON.stringify(expected)}`, async () => {
       const got: Record<string, number> = {};
       for (const caller of Object.keys(expected) as Caller[]) {
         const a = agents[caller];
         const url = path(groups);
-        const res = method === 'GET' ? await a.get(url) : await a.send(method, url, body ?? {});
+        const payload = typeof body === 'function' ? body(groups) : (body ?? {});
+        const res = method === 'GET' ? await a.get(url) : await a.send(method, url, payload);
         got[caller] = res.status;
       }
       expect(got).toEqual(expected);

@@ -47,9 +47,12 @@ export function requireGroupRole(roles: readonly GroupRole[], groupIdOf: (req: R
   return async (req, _res, next) => {
     if (!req.user) return next(unauthenticated());
     const groupId = await groupIdOf(req);
-    if (!Number.isInteger(groupId) || groupId <= 0) return next(new HttpError(404, 'not-found', 'That group was not found.'));
+    // No such group: admins go on (the route answers 400 or 404), everyone else is refused before validation.
+    if (!Number.isInteger(groupId) || groupId <= 0) return next(req.user.admin ? undefined : new HttpError(403, 'forbidden', 'Your role in this group does not allow this.'));
     next(hasGroupRole(req.user, groupId, roles) ? undefined : new HttpError(403, 'forbidden', 'Your role in this group does not allow this.'));
   };
 }
 
 export const groupIdParam = (req: Request) => Number(req.params.groupId);
+
+export const groupIdInBody = (req: Request) => Number(req.body?.groupId);

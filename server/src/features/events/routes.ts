@@ -2,8 +2,7 @@ import { Router, type Request } from 'express';
 import { z } from 'zod';
 import { createEventSchema, eventListQuery, slotUpdateSchema, updateEventSchema } from '../../../../shared/schemas/events';
 import type { AppContext } from '../../context';
-import { groupIdParam, hasGroupRole, requireGroupRole, requireUser } from '../../auth/guards';
-import { forbidden } from '../../http/errors';
+import { groupIdInBody, groupIdParam, hasGroupRole, requireGroupRole } from '../../auth/guards';
 import { body, params, query } from '../../http/validate';
 import * as events from './service';
 
@@ -20,9 +19,8 @@ export function eventRoutes(ctx: AppContext) {
     res.json(await events.listPublicEvents(ctx, query(req, eventListQuery)));
   });
 
-  r.post('/events', requireUser, async (req, res) => {
+  r.post('/events', requireGroupRole(['organiser'], groupIdInBody), async (req, res) => {
     const input = body(req, createEventSchema);
-    if (!hasGroupRole(req.user, input.groupId, ['organiser'])) throw forbidden();
     res.status(201).json(await events.createEvent(ctx, input));
   });
 

@@ -3,7 +3,7 @@ import { Router } from 'express';
 import { z } from 'zod';
 import { groupSettingsSchema, venueSchema } from '../../../../shared/schemas/events';
 import type { AppContext } from '../../context';
-import { groupIdParam, hasGroupRole, requireGroupRole, requireUser } from '../../auth/guards';
+import { groupIdInBody, groupIdParam, hasGroupRole, requireGroupRole, requireUser } from '../../auth/guards';
 import { groupExclusions, repairGroups, venues } from '../../db/schema/index';
 import { forbidden, HttpError, notFound } from '../../http/errors';
 import { body, query } from '../../http/validate';
@@ -24,9 +24,8 @@ export function venueRoutes(ctx: AppContext) {
     res.json(await db.select().from(venues).where(where).orderBy(asc(venues.name)));
   });
 
-  r.post('/venues', requireUser, async (req, res) => {
+  r.post('/venues', requireGroupRole(['organiser'], groupIdInBody), async (req, res) => {
     const input = body(req, venueSchema);
-    if (!hasGroupRole(req.user, input.groupId, ['organiser'])) throw forbidden();
     const [{ id }] = await db.insert(venues).values(input).$returningId();
     res.status(201).json({ id, ...input });
   });
