@@ -1,4 +1,5 @@
 import { createBrowserRouter, Navigate } from 'react-router';
+import type { SessionUser } from '../../shared/schemas/auth';
 import { AppShell } from './components/layouts/app-shell';
 import { RequireRole } from './components/layouts/require-role';
 import { Spinner } from './components/ui/feedback';
@@ -16,6 +17,18 @@ import { GroupPeoplePage } from './routes/groups/people';
 import { AdminOverviewPage } from './routes/admin/overview';
 import { MailboxPage } from './routes/admin/mailbox';
 import { hasRole } from './lib/roles';
+import { EventsPage } from './routes/events/list';
+import { EventPage } from './routes/events/detail';
+import { BookingPage } from './routes/events/book';
+import { ManageEventPage } from './routes/events/manage';
+import { ManageBookingPage } from './routes/bookings/manage';
+import { BookingCodePage, ClaimOfferPage } from './routes/bookings/claim';
+import { GroupEventsPage } from './routes/groups/events';
+import { NewEventPage } from './routes/groups/new-event';
+import { GroupSettingsPage } from './routes/groups/settings';
+import { AdminCategoriesPage } from './routes/admin/categories';
+
+const organiser = (u: SessionUser) => u.admin || u.roles.some((r) => r.role === 'organiser');
 
 function StartRedirect() {
   const { data: user, isPending } = useUser();
@@ -39,10 +52,18 @@ export const router = createBrowserRouter([
       { path: 'start', element: <StartRedirect /> },
       { path: 'bench', element: <RequireRole allow={(u) => hasRole(u, 'fixer')}><VolunteerHome role="fixer" /></RequireRole> },
       { path: 'desk', element: <RequireRole allow={(u) => hasRole(u, 'host')}><VolunteerHome role="host" /></RequireRole> },
-      {
-        path: 'groups/:groupId/people',
-        element: <RequireRole allow={(u) => u.admin || u.roles.some((r) => r.role === 'organiser')}><GroupPeoplePage /></RequireRole>,
-      },
+      { path: 'events', element: <EventsPage /> },
+      { path: 'events/:eventId', element: <EventPage /> },
+      { path: 'events/:eventId/book', element: <BookingPage /> },
+      { path: 'events/:eventId/manage', element: <RequireRole allow={organiser}><ManageEventPage /></RequireRole> },
+      { path: 'bookings/:reference', element: <ManageBookingPage /> },
+      { path: 'waiting-list/:token', element: <ClaimOfferPage /> },
+      { path: 'b/:reference', element: <BookingCodePage /> },
+      { path: 'groups/:groupId/people', element: <RequireRole allow={organiser}><GroupPeoplePage /></RequireRole> },
+      { path: 'groups/:groupId/events', element: <RequireRole allow={organiser}><GroupEventsPage /></RequireRole> },
+      { path: 'groups/:groupId/events/new', element: <RequireRole allow={organiser}><NewEventPage /></RequireRole> },
+      { path: 'groups/:groupId/settings', element: <RequireRole allow={organiser}><GroupSettingsPage /></RequireRole> },
+      { path: 'admin/categories', element: <RequireRole allow={(u) => u.admin}><AdminCategoriesPage /></RequireRole> },
       { path: 'admin', element: <RequireRole allow={(u) => u.admin}><AdminOverviewPage /></RequireRole> },
       { path: 'admin/mailbox/:mailId?', element: <RequireRole allow={(u) => u.admin}><MailboxPage /></RequireRole> },
       { path: '*', element: <NotFoundPage /> },

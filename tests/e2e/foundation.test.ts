@@ -57,7 +57,7 @@ describe('the foundation in a browser', () => {
   });
 
   const landings = [
-    { email: 'organiser@example.org', heading: 'Kestlebridge Menders', path: /\/groups\/\d+\/people$/, viewport: DESKTOP },
+    { email: 'organiser@example.org', heading: 'Kestlebridge Menders', path: /\/groups\/\d+\/events$/, viewport: DESKTOP },
     { email: 'fixer@example.org', heading: 'My bench', path: /\/bench$/, viewport: PHONE },
     { email: 'host@example.org', heading: 'Reception desk', path: /\/desk$/, viewport: PHONE },
     { email: 'admin@example.org', heading: 'Network admin', path: /\/admin$/, viewport: DESKTOP },
@@ -85,6 +85,8 @@ describe('the foundation in a browser', () => {
   it('lets an organiser confirm a waiting volunteer', async () => {
     const page = await browser.newPage({ viewport: DESKTOP });
     await signIn(page, 'organiser@example.org');
+    await page.waitForURL(/\/events$/);
+    await page.getByRole('link', { name: 'People' }).click();
     await page.getByText('Juniper Oakes').waitFor();
     await page.getByRole('button', { name: 'Confirm' }).click();
     await page.getByText('Nobody is waiting').waitFor();

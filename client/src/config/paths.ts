@@ -14,4 +14,13 @@ export const paths = {
   admin: () => '/admin',
   adminMailbox: (id?: number) => (id ? `/admin/mailbox/${id}` : '/admin/mailbox'),
   safety: () => '/safety',
+  events: () => '/events',
+  event: (id: number) => `/events/${id}`,
+  book: (id: number) => `/events/${id}/book`,
+  manageEvent: (id: number) => `/events/${id}/manage`,
+  booking: (reference: string, token: string, fresh = false) => `/bookings/${reference}?token=${encodeURIComponent(token)}${fresh ? '&new=1' : ''}`,
+  groupEvents: (groupId: number) => `/groups/${groupId}/events`,
+  newEvent: (groupId: number) => `/groups/${groupId}/events/new`,
+  groupSettings: (groupId: number) => `/groups/${groupId}/settings`,
+  adminCategories: () => '/admin/categories',
 };

@@ -8,7 +8,7 @@ export const groupsWithRole = (user: SessionUser, role: GroupRole) => user.roles
 export function landingPath(user: SessionUser): string {
   if (user.admin) return paths.admin();
   const organised = groupsWithRole(user, 'organiser')[0];
-  if (organised) return paths.groupPeople(organised.groupId);
+  if (organised) return paths.groupEvents(organised.groupId);
   if (groupsWithRole(user, 'host').length) return paths.desk();
   if (groupsWithRole(user, 'fixer').length) return paths.bench();
   return paths.home();

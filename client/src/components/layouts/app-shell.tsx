@@ -15,12 +15,12 @@ export function AppShell() {
   const navigate = useNavigate();
   const [open, setOpen] = useState(false);
 
-  const links: { to: string; label: string; end?: boolean }[] = [];
+  const links: { to: string; label: string; end?: boolean }[] = [{ to: paths.events(), label: 'Sessions', end: true }];
   if (user) {
-    for (const g of groupsWithRole(user, 'organiser')) links.push({ to: paths.groupPeople(g.groupId), label: `${g.groupName}` });
+    for (const g of groupsWithRole(user, 'organiser')) links.push({ to: paths.groupEvents(g.groupId), label: `${g.groupName}` });
     if (groupsWithRole(user, 'host').length) links.push({ to: paths.desk(), label: 'Reception desk' });
     if (groupsWithRole(user, 'fixer').length) links.push({ to: paths.bench(), label: 'My bench' });
-    if (user.admin) links.push({ to: paths.admin(), label: 'Network admin', end: true }, { to: paths.adminMailbox(), label: 'Mailbox' });
+    if (user.admin) links.push({ to: paths.admin(), label: 'Network admin', end: true }, { to: paths.adminCategories(), label: 'Categories' }, { to: paths.adminMailbox(), label: 'Mailbox' });
   }
 
   return (

@@ -1,8 +1,8 @@
-import { useEffect, useRef } from 'react';
+import { useEffect, useRef, type ReactNode } from 'react';
 import { Button } from './button';
 
 /** A modal question before anything destructive; Escape or "Keep" cancels. */
-export function ConfirmDialog({ open, title, message, confirmLabel, onConfirm, onCancel, busy }: { open: boolean; title: string; message: string; confirmLabel: string; onConfirm: () => void; onCancel: () => void; busy?: boolean }) {
+export function ConfirmDialog({ open, title, message, confirmLabel, onConfirm, onCancel, busy, children }: { open: boolean; title: string; message: string; confirmLabel: string; onConfirm: () => void; onCancel: () => void; busy?: boolean; children?: ReactNode }) {
   const ref = useRef<HTMLDialogElement>(null);
   useEffect(() => {
     const d = ref.current;
@@ -15,6 +15,7 @@ export function ConfirmDialog({ open, title, message, confirmLabel, onConfirm, o
       <div className="space-y-3 p-6">
         <h2 className="text-lg">{title}</h2>
         <p className="text-ink-soft">{message}</p>
+        {children}
         <div className="flex justify-end gap-2 pt-2">
           <Button variant="secondary" onClick={onCancel} autoFocus>Keep</Button>
           <Button variant="danger" onClick={onConfirm} busy={busy}>{confirmLabel}</Button>

@@ -3,7 +3,8 @@ import { useParams } from 'react-router';
 import { ROLE_LABELS } from '../../../../shared/constants';
 import { Button } from '../../components/ui/button';
 import { ConfirmDialog } from '../../components/ui/confirm-dialog';
-import { Alert, Card, EmptyState, PageTitle, Spinner } from '../../components/ui/feedback';
+import { GroupTabs } from '../../components/layouts/group-tabs';
+import { Alert, Card, EmptyState, Spinner } from '../../components/ui/feedback';
 import { useApproveMember, useMembers, useRemoveMember, type Member } from '../../features/groups/api/members';
 
 export function GroupPeoplePage() {
@@ -21,7 +22,10 @@ export function GroupPeoplePage() {
 
   return (
     <div className="space-y-6">
-      <PageTitle title={members.data.group.name} lead={`${members.data.group.town} · the people of the group`} />
+      <div>
+      <h1 className="mb-2 text-2xl sm:text-3xl">{members.data.group.name}</h1>
+      <GroupTabs groupId={groupId} />
+      </div>
       <div className="grid grid-cols-3 gap-3">
         {(['organiser', 'fixer', 'host'] as const).map((r) => (
           <Card key={r} className="text-center">

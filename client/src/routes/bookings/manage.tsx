@@ -1,0 +1,139 @@
+import { useState } from 'react';
+import { Link, useLocation, useParams, useSearchParams } from 'react-router';
+import { formatDay, formatTime, formatTimeRange, WHAT_TO_BRING } from '../../../../shared/format';
+import { Button } from '../../components/ui/button';
+import { ConfirmDialog } from '../../components/ui/confirm-dialog';
+import { Alert, Card, Spinner } from '../../components/ui/feedback';
+import { SelectField } from '../../components/ui/field';
+import { paths } from '../../config/paths';
+import { uploadPhotos, useBooking, useCancelBooking, useMoveBooking } from '../../features/bookings/api/bookings';
+import { useEvent } from '../../features/events/api/events';
+import { StatusBadge } from '../../features/events/components/places-bar';
+import { useQueryClient } from '@tanstack/react-query';
+
+/** The visitor's own page, reached with the secret link: view, move or cancel without an account. */
+export function ManageBookingPage() {
+  const reference = useParams().reference ?? '';
+  const [params] = useSearchParams();
+  const token = params.get('token') ?? '';
+  const fresh = params.get('new') === '1';
+  const photoProblems = ((useLocation().state as { photoProblems?: string[] } | null)?.photoProblems ?? []) as string[];
+  const booking = useBooking(reference, token);
+  const cancel = useCancelBooking(reference, token);
+  const move = useMoveBooking(reference, token);
+  const event = useEvent(booking.data?.event.id ?? 0);
+  const qc = useQueryClient();
+  const [confirming, setConfirming] = useState(false);
+  const [newSlot, setNewSlot] = useState('');
+  const [uploadError, setUploadError] = useState<string | null>(null);
+
+  if (!token) return <Alert tone="error" title="This link is incomplete">Open the link from your confirmation mail again.</Alert>;
+  if (booking.isPending) return <Spinner label="Loading your booking…" />;
+  if (booking.error) return <Alert tone="error" title="Booking not found">The link may be incomplete, or the booking reference is wrong. Open the link from your confirmation mail again.</Alert>;
+  const b = booking.data;
+  const tz = b.event.timeZone;
+  const active = b.status === 'confirmed' && b.event.status === 'published';
+  const otherSlots = (event.data?.slots ?? []).filter((s) => s.id !== b.slot.id && s.free >= b.items.length && new Date(s.endsAt).getTime() > Date.now());
+
+  const addPhotos = async (itemId: number, files: FileList | null) => {
+    setUploadError(null);
+    try {
+      await uploadPhotos(b.reference, token, itemId, Array.from(files ?? []));
+      await qc.invalidateQueries({ queryKey: ['booking', reference] });
+    } catch (err) {
+      setUploadError((err as Error).message);
+    }
+  };
+
+  return (
+    <div className="mx-auto max-w-2xl space-y-5">
+      {fresh && b.status === 'confirmed' && (
+        <div className="rounded-xl bg-sage p-5 text-white">
+          <p className="text-2xl font-extrabold">You are booked</p>
+          <p className="mt-1">We have sent a confirmation to {b.visitor.email} with this page’s link. Keep it: it is how you change the booking.</p>
+        </div>
+      )}
+      {photoProblems.length > 0 && <Alert tone="caution" title="Some photos were not added">{photoProblems.join(' ')} You can add them below.</Alert>}
+      {b.status === 'cancelled' && <Alert tone="info" title="This booking is cancelled">The place has gone back to the session. You are welcome to book again.</Alert>}
+
+      <Card className="grid gap-5 sm:grid-cols-[1fr_auto] sm:items-center">
+        <div>
+          <div className="flex items-center gap-2"><StatusBadge status={b.status} /></div>
+          <p className="mt-2 text-sm font-semibold text-ink-soft">Booking reference</p>
+          <p className="font-mono text-4xl font-extrabold tracking-widest text-navy">{b.reference}</p>
+          <h1 className="mt-3 text-xl">{b.event.title}</h1>
+          <p className="font-bold text-copper-dark">{formatDay(b.slot.startsAt, tz)} · {formatTimeRange(b.slot.startsAt, b.slot.endsAt, tz)}</p>
+          <p>{b.venue.name}, {b.venue.address}, {b.venue.town}</p>
+          <p className="text-sm text-ink-soft">{b.event.groupName}</p>
+        </div>
+        <figure className="justify-self-center text-center">
+          <img src={b.qr} alt={`QR code of booking ${b.reference}`} className="size-40 rounded-lg ring-1 ring-ink/10" />
+          <figcaption className="mt-1 text-xs text-ink-soft">Show this at reception</figcaption>
+        </figure>
+      </Card>
+
+      <Card>
+        <h2 className="text-lg">Your items</h2>
+        {uploadError && <div className="mt-2"><Alert tone="error">{uploadError}</Alert></div>}
+        <ul className="mt-2 divide-y divide-ink/5">
+          {b.items.map((i) => (
+            <li key={i.id} className="py-3">
+              <p className="font-bold">{i.categoryName}{i.brand || i.model ? ` — ${[i.brand, i.model].filter(Boolean).join(' ')}` : ''}</p>
+              <p className="text-ink-soft">{i.fault}</p>
+              <div className="mt-2 flex flex-wrap items-center gap-2">
+                {i.photos.map((p) => <img key={p.id} src={`/api/photos/${p.id}?token=${encodeURIComponent(token)}`} alt="" className="size-20 rounded-lg object-cover ring-1 ring-ink/10" />)}
+                {active && i.photos.length < 3 && (
+                  <label className="cursor-pointer rounded-lg px-3 py-2 text-sm font-bold text-navy ring-1 ring-navy/25">
+                    + Add photo
+                    <input type="file" accept="image/jpeg,image/png,image/webp" className="sr-only" onChange={(e) => void addPhotos(i.id, e.target.files)} />
+                  </label>
+                )}
+              </div>
+            </li>
+          ))}
+        </ul>
+      </Card>
+
+      {active && (
+        <Card className="space-y-4">
+          <h2 className="text-lg">Change the booking</h2>
+          {move.error && <Alert tone="error">{move.error.message}</Alert>}
+          {move.isSuccess && <Alert tone="success">Moved. We have mailed you the new time.</Alert>}
+          {otherSlots.length ? (
+            <div className="flex flex-wrap items-end gap-2">
+              <div className="min-w-48 flex-1">
+                <SelectField label="Move to another time" value={newSlot} onChange={(e) => setNewSlot(e.target.value)}>
+                  <option value="">Choose a time…</option>
+                  {otherSlots.map((s) => <option key={s.id} value={s.id}>{formatTime(s.startsAt, tz)} ({s.free} free)</option>)}
+                </SelectField>
+              </div>
+              <Button variant="secondary" disabled={!newSlot} busy={move.isPending} onClick={() => move.mutate(Number(newSlot), { onSuccess: () => setNewSlot('') })}>Move</Button>
+            </div>
+          ) : (
+            <p className="text-sm text-ink-soft">No other time of this session has room just now.</p>
+          )}
+          <div className="border-t border-ink/5 pt-4">
+            <Button variant="danger" onClick={() => setConfirming(true)}>Cancel my booking</Button>
+            <p className="mt-1 text-sm text-ink-soft">Cancelling frees your place for someone on the waiting list.</p>
+          </div>
+        </Card>
+      )}
+
+      <Card>
+        <h2 className="text-lg">What to bring</h2>
+        <ul className="mt-2 list-disc space-y-1 pl-5 text-sm">{WHAT_TO_BRING.map((w) => <li key={w}>{w}</li>)}</ul>
+      </Card>
+      <Link to={paths.event(b.event.id)} className="inline-block font-bold text-navy underline">About this session</Link>
+
+      <ConfirmDialog
+        open={confirming}
+        title="Cancel this booking?"
+        message={`Booking ${b.reference} for ${formatTime(b.slot.startsAt, tz)} on ${formatDay(b.slot.startsAt, tz)} will be cancelled and the place given to someone else. This cannot be undone.`}
+        confirmLabel="Cancel the booking"
+        busy={cancel.isPending}
+        onCancel={() => setConfirming(false)}
+        onConfirm={() => cancel.mutate(undefined, { onSettled: () => setConfirming(false) })}
+      />
+    </div>
+  );
+}

@@ -1,0 +1,102 @@
+import { Link, useParams } from 'react-router';
+import { SKILL_LABELS } from '../../../../shared/constants';
+import { formatDay, formatTime, formatTimeRange, WHAT_TO_BRING } from '../../../../shared/format';
+import { Alert, Card, Spinner } from '../../components/ui/feedback';
+import { paths } from '../../config/paths';
+import { useUser } from '../../features/auth/api/get-me';
+import { useCategories, useEvent } from '../../features/events/api/events';
+import { PlacesBar, StatusBadge } from '../../features/events/components/places-bar';
+
+export function EventPage() {
+  const id = Number(useParams().eventId);
+  const event = useEvent(id);
+  const categories = useCategories();
+  const { data: user } = useUser();
+  if (event.isPending) return <Spinner label="Loading the session…" />;
+  if (event.error) return <Alert tone="error" title="Session not found">{event.error.message}</Alert>;
+  const e = event.data;
+  const tz = e.timeZone;
+  const excluded = new Set(e.excludedCategoryIds);
+  const cats = categories.data ?? [];
+  const taken = Object.entries(SKILL_LABELS).map(([skill, label]) => ({ label, names: cats.filter((c) => c.skill === skill && !excluded.has(c.id)).map((c) => c.name) })).filter((g) => g.names.length);
+  const refused = cats.filter((c) => excluded.has(c.id));
+  const isOrganiser = user?.admin || user?.roles.some((r) => r.groupId === e.groupId && r.role === 'organiser');
+  const bookable = e.status === 'published' && e.freePlaces > 0;
+
+  return (
+    <div className="grid gap-6 lg:grid-cols-[1fr_22rem]">
+      <div className="space-y-6">
+        <header>
+          <div className="flex flex-wrap items-center gap-2"><StatusBadge status={e.status} />{isOrganiser && <Link to={paths.manageEvent(e.id)} className="text-sm font-bold text-navy underline">Manage this session</Link>}</div>
+          <h1 className="mt-2 text-3xl">{e.title}</h1>
+          <p className="mt-1 text-lg font-bold text-copper-dark">{formatDay(e.startsAt, tz)} · {formatTimeRange(e.startsAt, e.endsAt, tz)}</p>
+          <p className="text-ink-soft">{e.groupName}</p>
+          {e.description && <p className="mt-3 max-w-2xl">{e.description}</p>}
+        </header>
+
+        <Card>
+          <h2 className="text-lg">Where</h2>
+          <p className="mt-1 font-semibold">{e.venue.name}</p>
+          <p>{e.venue.address}, {e.venue.town}</p>
+          {e.venue.accessNotes && <p className="mt-2 text-sm text-ink-soft">{e.venue.accessNotes}</p>}
+        </Card>
+
+        <Card>
+          <h2 className="text-lg">Times and free places</h2>
+          <p className="text-sm text-ink-soft">Each time is the slot in which your repair starts; most take {e.slotMinutes}–60 minutes.</p>
+          <ul className="mt-3 grid grid-cols-2 gap-2 sm:grid-cols-3">
+            {e.slots.map((s) => (
+              <li key={s.id} className={`rounded-lg p-3 ring-1 ${s.free ? 'ring-ink/10' : 'bg-alert-light/50 ring-alert/30'}`}>
+                <p className="font-bold">{formatTime(s.startsAt, tz)}</p>
+                <PlacesBar free={s.free} total={s.capacity} label={false} />
+                <p className="mt-1 text-xs font-semibold text-ink-soft">{s.free ? `${s.free} free` : 'Full: waiting list'}</p>
+              </li>
+            ))}
+          </ul>
+        </Card>
+
+        <div className="grid gap-4 md:grid-cols-2">
+          <Card>
+            <h2 className="text-lg">What we take</h2>
+            <dl className="mt-2 space-y-2 text-sm">
+              {taken.map((g) => <div key={g.label}><dt className="font-bold">{g.label}</dt><dd className="text-ink-soft">{g.names.join(', ')}</dd></div>)}
+            </dl>
+          </Card>
+          <Card>
+            <h2 className="text-lg">What we do not take</h2>
+            {refused.length === 0 ? <p className="mt-2 text-sm text-ink-soft">This group has no exclusions beyond the safety rules below.</p> : (
+              <ul className="mt-2 space-y-2 text-sm">
+                {refused.map((c) => <li key={c.id}><span className="font-bold">{c.name}</span>{c.refusal && <span className="text-ink-soft"> — {c.refusal.reason}</span>}</li>)}
+              </ul>
+            )}
+            <p className="mt-3 text-sm text-ink-soft">Nor, anywhere: items with a swollen battery or a damaged mains cable.</p>
+          </Card>
+        </div>
+
+        {e.houseRules && (
+          <Card>
+            <h2 className="text-lg">House rules</h2>
+            <ul className="mt-2 list-disc space-y-1 pl-5">{e.houseRules.split('\n').filter(Boolean).map((l) => <li key={l}>{l}</li>)}</ul>
+          </Card>
+        )}
+      </div>
+
+      <aside className="space-y-4 lg:sticky lg:top-4 lg:self-start">
+        <Card>
+          <PlacesBar free={e.freePlaces} total={e.totalPlaces} />
+          {e.status === 'published' ? (
+            <Link to={paths.book(e.id)} className="mt-4 flex min-h-12 items-center justify-center rounded-lg bg-copper px-5 text-lg font-bold text-white hover:bg-copper-dark">
+              {bookable ? 'Book a slot' : 'Join a waiting list'}
+            </Link>
+          ) : (
+            <Alert tone="info">{e.status === 'cancelled' ? 'This session has been cancelled.' : e.status === 'closed' ? 'Booking has closed for this session.' : 'This session is not open for booking yet.'}</Alert>
+          )}
+        </Card>
+        <Card>
+          <h2 className="text-lg">What to bring</h2>
+          <ul className="mt-2 list-disc space-y-1 pl-5 text-sm">{WHAT_TO_BRING.map((w) => <li key={w}>{w}</li>)}</ul>
+        </Card>
+      </aside>
+    </div>
+  );
+}

@@ -1,0 +1,97 @@
+import FullCalendar from '@fullcalendar/react';
+import dayGridPlugin from '@fullcalendar/daygrid';
+import { Link, useNavigate, useSearchParams } from 'react-router';
+import { SKILL_LABELS } from '../../../../shared/constants';
+import { formatDay, formatTimeRange } from '../../../../shared/format';
+import { Alert, Card, EmptyState, PageTitle, Spinner } from '../../components/ui/feedback';
+import { SelectField } from '../../components/ui/field';
+import { paths } from '../../config/paths';
+import { useCategories, useEvents } from '../../features/events/api/events';
+import { PlacesBar } from '../../features/events/components/places-bar';
+import { usePublicGroups } from '../../features/groups/api/public-groups';
+
+/** Upcoming sessions as a month calendar or a list, filtered by group and by the kind of item. */
+export function EventsPage() {
+  const [params, setParams] = useSearchParams();
+  const navigate = useNavigate();
+  const view = params.get('view') === 'calendar' ? 'calendar' : 'list';
+  const groupId = Number(params.get('group')) || undefined;
+  const categoryId = Number(params.get('category')) || undefined;
+  const events = useEvents({ groupId, categoryId });
+  const groups = usePublicGroups();
+  const categories = useCategories();
+  const set = (k: string, v: string) => {
+    const next = new URLSearchParams(params);
+    if (v) next.set(k, v);
+    else next.delete(k);
+    setParams(next, { replace: true });
+  };
+  const bySkill = Object.entries(SKILL_LABELS).map(([skill, label]) => ({ label, cats: (categories.data ?? []).filter((c) => c.skill === skill && !c.refusal) }));
+
+  return (
+    <div className="space-y-6">
+      <PageTitle title="Repair sessions" lead="Find a session near you and book a slot for your broken item." />
+      <div className="grid gap-3 rounded-xl bg-white p-4 ring-1 ring-ink/5 sm:grid-cols-[1fr_1fr_auto] sm:items-end">
+        <SelectField label="Group" value={groupId ?? ''} onChange={(e) => set('group', e.target.value)}>
+          <option value="">All groups</option>
+          {groups.data?.map((g) => <option key={g.id} value={g.id}>{g.name}</option>)}
+        </SelectField>
+        <SelectField label="What needs fixing?" value={categoryId ?? ''} onChange={(e) => set('category', e.target.value)}>
+          <option value="">Anything</option>
+          {bySkill.filter((s) => s.cats.length).map((s) => (
+            <optgroup key={s.label} label={s.label}>
+              {s.cats.map((c) => <option key={c.id} value={c.id}>{c.name}</option>)}
+            </optgroup>
+          ))}
+        </SelectField>
+        <div role="group" aria-label="View" className="flex rounded-lg ring-1 ring-navy/20">
+          {(['list', 'calendar'] as const).map((v) => (
+            <button key={v} aria-pressed={view === v} onClick={() => set('view', v === 'list' ? '' : v)} className={`min-h-11 flex-1 px-4 font-bold first:rounded-l-lg last:rounded-r-lg ${view === v ? 'bg-navy text-white' : 'text-navy'}`}>
+              {v === 'list' ? 'List' : 'Calendar'}
+            </button>
+          ))}
+        </div>
+      </div>
+
+      {events.isPending && <Spinner label="Loading sessions…" />}
+      {events.error && <Alert tone="error" title="Could not load the sessions">{events.error.message}</Alert>}
+      {events.data && view === 'calendar' && (
+        <Card className="mendery-calendar">
+          <FullCalendar
+            plugins={[dayGridPlugin]}
+            initialView="dayGridMonth"
+            height="auto"
+            firstDay={1}
+            headerToolbar={{ left: 'prev,next today', center: 'title', right: '' }}
+            buttonIcons={false}
+            buttonText={{ prev: '‹ Earlier', next: 'Later ›', today: 'Today' }}
+            eventDisplay="block"
+            dayMaxEvents={3}
+            events={events.data.map((e) => ({ id: String(e.id), title: `${e.title} · ${e.freePlaces ? `${e.freePlaces} free` : 'full'}`, start: e.startsAt, end: e.endsAt, backgroundColor: e.freePlaces ? '#5d7f6a' : '#a8322d', borderColor: 'transparent' }))}
+            eventClick={(info) => {
+              info.jsEvent.preventDefault();
+              navigate(paths.event(Number(info.event.id)));
+            }}
+            eventTimeFormat={{ hour: '2-digit', minute: '2-digit', hour12: false }}
+          />
+        </Card>
+      )}
+      {events.data && view === 'list' && (events.data.length === 0 ? (
+        <EmptyState title="No sessions match" icon="📅">{groupId || categoryId ? 'Try another group or kind of item.' : 'No group has published a date yet. Check back soon.'}</EmptyState>
+      ) : (
+        <ul className="grid gap-4 md:grid-cols-2">
+          {events.data.map((e) => (
+            <li key={e.id}>
+              <Link to={paths.event(e.id)} className="block rounded-xl bg-white p-5 shadow-sm ring-1 ring-ink/5 transition hover:ring-copper">
+                <p className="text-sm font-bold text-copper-dark">{formatDay(e.startsAt, e.timeZone)} · {formatTimeRange(e.startsAt, e.endsAt, e.timeZone)}</p>
+                <h2 className="mt-1 text-lg">{e.title}</h2>
+                <p className="text-sm text-ink-soft">{e.groupName} · {e.venue.name}, {e.venue.town}</p>
+                <div className="mt-3"><PlacesBar free={e.freePlaces} total={e.totalPlaces} /></div>
+              </Link>
+            </li>
+          ))}
+        </ul>
+      ))}
+    </div>
+  );
+}

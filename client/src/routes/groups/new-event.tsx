@@ -1,0 +1,125 @@
+import { TZDate } from '@date-fns/tz';
+import { useState } from 'react';
+import { useForm } from 'react-hook-form';
+import { useNavigate, useParams } from 'react-router';
+import { SKILL_LABELS, SKILLS } from '../../../../shared/constants';
+import { generateSlots } from '../../../../shared/booking/slots';
+import { GroupTabs } from '../../components/layouts/group-tabs';
+import { Button } from '../../components/ui/button';
+import { Alert, Card, Spinner } from '../../components/ui/feedback';
+import { SelectField, TextField } from '../../components/ui/field';
+import { paths } from '../../config/paths';
+import { useCreateEvent } from '../../features/events/api/events';
+import { useGroupSettings, useVenues } from '../../features/events/api/organiser';
+import { ApiError } from '../../lib/api';
+
+interface Values {
+  title: string;
+  venueId: string;
+  date: string;
+  from: string;
+  to: string;
+  slotMinutes: string;
+  slotCapacity: string;
+  description: string;
+  limits: Record<string, string>;
+}
+
+/** Date and hours are typed in the group's own time zone and sent as instants. */
+const instant = (date: string, time: string, zone: string) => {
+  const [y, m, d] = date.split('-').map(Number);
+  const [hh, mm] = time.split(':').map(Number);
+  return new TZDate(y, m - 1, d, hh, mm, 0, zone).toISOString();
+};
+
+export function NewEventPage() {
+  const groupId = Number(useParams().groupId);
+  const group = useGroupSettings(groupId);
+  const venues = useVenues(groupId);
+  const create = useCreateEvent();
+  const navigate = useNavigate();
+  const [formError, setFormError] = useState<string | null>(null);
+  const form = useForm<Values>({ defaultValues: { title: 'Repair session', venueId: '', date: '', from: '10:00', to: '13:00', slotMinutes: '30', slotCapacity: '4', description: '', limits: {} } });
+  const errors = form.formState.errors;
+  const v = form.watch();
+  if (group.isPending || venues.isPending) return <Spinner />;
+  if (group.error) return <Alert tone="error">{group.error.message}</Alert>;
+  const zone = group.data.timeZone;
+
+  let preview: string | null = null;
+  try {
+    if (v.date && v.from && v.to) {
+      const n = generateSlots(new Date(instant(v.date, v.from, zone)), new Date(instant(v.date, v.to, zone)), Number(v.slotMinutes), Number(v.slotCapacity)).length;
+      preview = `${n} slots of ${v.slotMinutes} minutes, ${n * Number(v.slotCapacity)} places in all.`;
+    }
+  } catch (err) {
+    preview = (err as Error).message;
+  }
+
+  const onSubmit = form.handleSubmit(async (values) => {
+    setFormError(null);
+    if (!values.date) return form.setError('date', { message: 'Choose the date.' });
+    const skillLimits = Object.fromEntries(Object.entries(values.limits).filter(([, n]) => n !== '').map(([k, n]) => [k, Number(n)]));
+    try {
+      const e = await create.mutateAsync({
+        groupId, title: values.title, venueId: Number(values.venueId) || 0, description: values.description,
+        startsAt: instant(values.date, values.from, zone), endsAt: instant(values.date, values.to, zone),
+        slotMinutes: Number(values.slotMinutes), slotCapacity: Number(values.slotCapacity), skillLimits,
+      });
+      navigate(paths.manageEvent(e.id));
+    } catch (err) {
+      if (err instanceof ApiError) {
+        const map: Record<string, keyof Values> = { startsAt: 'from', endsAt: 'to' };
+        for (const [k, m] of Object.entries(err.fields ?? {})) form.setError((map[k] ?? k) as keyof Values, { message: m });
+        setFormError(err.message);
+      } else setFormError('Something went wrong.');
+    }
+  });
+
+  return (
+    <div>
+      <h1 className="mb-2 text-2xl sm:text-3xl">New session</h1>
+      <GroupTabs groupId={groupId} />
+      <form onSubmit={onSubmit} noValidate className="max-w-2xl space-y-5">
+        {formError && <Alert tone="error">{formError}</Alert>}
+        <Card className="space-y-4">
+          <TextField label="Title" error={errors.title?.message} {...form.register('title')} />
+          {venues.data?.length === 0 ? (
+            <Alert tone="caution">Add a venue first, under “Rules and venues”.</Alert>
+          ) : (
+            <SelectField label="Venue" error={errors.venueId?.message} {...form.register('venueId')}>
+              <option value="">Choose…</option>
+              {venues.data?.map((x) => <option key={x.id} value={x.id}>{x.name}, {x.town}</option>)}
+            </SelectField>
+          )}
+          <div className="grid gap-4 sm:grid-cols-3">
+            <TextField label="Date" type="date" error={errors.date?.message} {...form.register('date')} />
+            <TextField label="Opens" type="time" error={errors.from?.message} {...form.register('from')} />
+            <TextField label="Closes" type="time" error={errors.to?.message} {...form.register('to')} />
+          </div>
+          <p className="text-sm text-ink-soft">Times are in {zone}.</p>
+        </Card>
+        <Card className="space-y-4">
+          <div className="grid gap-4 sm:grid-cols-2">
+            <TextField label="Slot length (minutes)" type="number" min={5} step={5} error={errors.slotMinutes?.message} {...form.register('slotMinutes')} />
+            <TextField label="Items that can start per slot" type="number" min={0} error={errors.slotCapacity?.message} {...form.register('slotCapacity')} />
+          </div>
+          {preview && <p role="status" className="rounded-lg bg-paper px-3 py-2 text-sm font-semibold">{preview}</p>}
+          <details>
+            <summary className="cursor-pointer font-semibold text-navy">Limits per skill (optional)</summary>
+            <p className="mt-2 text-sm text-ink-soft">E.g. at most 2 textile items per slot when only one sewing machine comes. Leave empty for no limit.</p>
+            <div className="mt-2 grid grid-cols-2 gap-3 sm:grid-cols-3">
+              {SKILLS.map((s) => <TextField key={s} label={SKILL_LABELS[s]} type="number" min={0} {...form.register(`limits.${s}`)} />)}
+            </div>
+          </details>
+          <div className="space-y-1">
+            <label htmlFor="desc" className="block font-semibold">Note for visitors (optional)</label>
+            <textarea id="desc" rows={3} className="block w-full rounded-lg border border-ink/20 bg-white px-3 py-2.5" {...form.register('description')} />
+          </div>
+        </Card>
+        <Button type="submit" busy={form.formState.isSubmitting}>Create the draft</Button>
+        <p className="text-sm text-ink-soft">The session stays a draft, seen only by organisers, until you publish it. You can adjust each slot first.</p>
+      </form>
+    </div>
+  );
+}

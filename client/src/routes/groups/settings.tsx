@@ -1,0 +1,107 @@
+import { useEffect, useState } from 'react';
+import { useParams } from 'react-router';
+import { SKILL_LABELS } from '../../../../shared/constants';
+import { venueSchema } from '../../../../shared/schemas/events';
+import { GroupTabs } from '../../components/layouts/group-tabs';
+import { Button } from '../../components/ui/button';
+import { Alert, Card, Spinner } from '../../components/ui/feedback';
+import { TextField } from '../../components/ui/field';
+import { useCategories } from '../../features/events/api/events';
+import { useCreateVenue, useGroupSettings, useSaveGroupSettings, useVenues } from '../../features/events/api/organiser';
+import { applyServerErrors, useZodForm } from '../../lib/form';
+
+export function GroupSettingsPage() {
+  const groupId = Number(useParams().groupId);
+  const settings = useGroupSettings(groupId);
+  const categories = useCategories();
+  const venues = useVenues(groupId);
+  const save = useSaveGroupSettings(groupId);
+  const addVenue = useCreateVenue(groupId);
+  const [rules, setRules] = useState('');
+  const [excluded, setExcluded] = useState<Set<number>>(new Set());
+  const venueForm = useZodForm(venueSchema, { groupId, name: '', address: '', town: '', accessNotes: '' });
+  const [venueError, setVenueError] = useState<string | null>(null);
+  useEffect(() => {
+    if (settings.data) {
+      setRules(settings.data.houseRules);
+      setExcluded(new Set(settings.data.excludedCategoryIds));
+    }
+  }, [settings.data]);
+  if (settings.isPending || categories.isPending) return <Spinner />;
+  if (settings.error) return <Alert tone="error">{settings.error.message}</Alert>;
+  const toggle = (id: number) => setExcluded((s) => {
+    const n = new Set(s);
+    if (n.has(id)) n.delete(id);
+    else n.add(id);
+    return n;
+  });
+
+  return (
+    <div>
+      <h1 className="mb-2 text-2xl sm:text-3xl">{settings.data.name}</h1>
+      <GroupTabs groupId={groupId} />
+      <div className="grid gap-6 lg:grid-cols-2">
+        <Card className="space-y-4">
+          <h2 className="text-lg">House rules and what you take</h2>
+          <div className="space-y-1">
+            <label htmlFor="rules" className="block font-semibold">House rules (one per line)</label>
+            <textarea id="rules" rows={6} value={rules} onChange={(e) => setRules(e.target.value)} className="block w-full rounded-lg border border-ink/20 bg-white px-3 py-2.5" />
+            <p className="text-sm text-ink-soft">Visitors accept these when they book.</p>
+          </div>
+          <fieldset>
+            <legend className="font-semibold">Categories you do not take</legend>
+            <div className="mt-2 max-h-96 space-y-3 overflow-y-auto pr-2">
+              {Object.entries(SKILL_LABELS).map(([skill, label]) => {
+                const list = (categories.data ?? []).filter((c) => c.skill === skill);
+                if (!list.length) return null;
+                return (
+                  <div key={skill}>
+                    <p className="text-sm font-bold text-ink-soft">{label}</p>
+                    {list.map((c) => (
+                      <label key={c.id} className="flex items-start gap-2 py-0.5 text-sm">
+                        <input type="checkbox" className="mt-0.5 size-4 accent-alert" checked={excluded.has(c.id)} onChange={() => toggle(c.id)} />
+                        <span>{c.name}{c.refusal && <span className="text-ink-soft"> — usually refused: {c.refusal.reason}</span>}</span>
+                      </label>
+                    ))}
+                  </div>
+                );
+              })}
+            </div>
+          </fieldset>
+          {save.error && <Alert tone="error">{save.error.message}</Alert>}
+          {save.isSuccess && <Alert tone="success">Saved.</Alert>}
+          <Button busy={save.isPending} onClick={() => save.mutate({ houseRules: rules, excludedCategoryIds: [...excluded] })}>Save rules</Button>
+        </Card>
+
+        <Card className="space-y-4">
+          <h2 className="text-lg">Venues</h2>
+          {venues.data?.length === 0 && <p className="text-sm text-ink-soft">No venue yet: add the hall you meet in.</p>}
+          <ul className="space-y-2">
+            {venues.data?.map((v) => <li key={v.id} className="rounded-lg bg-paper p-3"><p className="font-bold">{v.name}</p><p className="text-sm">{v.address}, {v.town}</p>{v.accessNotes && <p className="text-sm text-ink-soft">{v.accessNotes}</p>}</li>)}
+          </ul>
+          <form
+            noValidate
+            className="space-y-3 border-t border-ink/5 pt-4"
+            onSubmit={venueForm.handleSubmit(async (v) => {
+              setVenueError(null);
+              try {
+                await addVenue.mutateAsync({ ...v, groupId, accessNotes: v.accessNotes ?? '' });
+                venueForm.reset({ groupId, name: '', address: '', town: '', accessNotes: '' });
+              } catch (err) {
+                setVenueError(applyServerErrors(venueForm, err));
+              }
+            })}
+          >
+            <h3 className="font-bold">Add a venue</h3>
+            {venueError && <Alert tone="error">{venueError}</Alert>}
+            <TextField label="Name" error={venueForm.formState.errors.name?.message} {...venueForm.register('name')} />
+            <TextField label="Street address" error={venueForm.formState.errors.address?.message} {...venueForm.register('address')} />
+            <TextField label="Town" error={venueForm.formState.errors.town?.message} {...venueForm.register('town')} />
+            <TextField label="Access notes (optional)" hint="Steps, lifts, parking, where the sockets are." {...venueForm.register('accessNotes')} />
+            <Button type="submit" variant="secondary" busy={venueForm.formState.isSubmitting}>Add venue</Button>
+          </form>
+        </Card>
+      </div>
+    </div>
+  );
+}
