@@ -1,50 +1,105 @@
 import autocannon from 'autocannon';
 import express from 'express';
 import mysql from 'mysql2/promise';
+import { randomBytes } from 'node:crypto';
 import { mkdtempSync, rmSync } from 'node:fs';
 import type { AddressInfo } from 'node:net';
 import path from 'node:path';
 import { loadEnv } from '../src/config/env';
+import { createDatabase } from '../src/db/client';
 import { freePort } from '../src/infra/mariadb';
 import { seedDemo } from '../src/seed/demo';
-import { createDatabase } from '../src/db/client';
 import { startServer } from '../src/server';
 import { loadOrCreateSecrets, startLocalDatabase, step } from './local-stack';
 
 /**
- * `npm run bench`: loads the API with autocannon against a throwaway MariaDB and, in the same run, a bare
- * Express + mysql2 handler doing a comparable indexed query. Prints requests/s, p99 and the ratio.
+ * `npm run bench`: loads GET /api/events and POST /api/bookings with autocannon against a throwaway MariaDB and,
+ * in the same run, a bare Express + mysql2 handler doing a comparable indexed query. Prints requests/s, p99 and
+ * the ratio. Not part of the tests: figures depend on the machine.
  */
+const SECONDS = Number(process.env.BENCH_SECONDS ?? 8);
+const CONNECTIONS = Number(process.env.BENCH_CONNECTIONS ?? 50);
+const secret = 'bench-secret-'.padEnd(40, 'x');
+
 const dir = mkdtempSync(path.join('/dev/shm', 'mendery-bench-'));
 const local = await startLocalDatabase({ dir, port: await freePort(), database: 'bench', secrets: loadOrCreateSecrets(dir), fast: true });
 const seedDb = createDatabase(local.appUrl, 2);
-await seedDemo(seedDb.db, { linkSecret: 'b'.repeat(40) });
+await seedDemo(seedDb.db, { linkSecret: secret });
 await seedDb.close();
 
-const env = loadEnv({ NODE_ENV: 'production', DATABASE_URL: local.appUrl, PORT: '0', SESSION_SECRET: 'b'.repeat(40), OUTBOX_POLL_MS: '0', DB_POOL_SIZE: '20' });
+const pool = mysql.createPool({ uri: local.appUrl, connectionLimit: 20 });
+// One slot with room for every request the load can send, so bookings measure work, not refusals.
+await pool.query("UPDATE slots s JOIN events e ON e.id = s.event_id SET s.capacity = 10000000 WHERE e.status = 'published'");
+const [[slot]] = (await pool.query("SELECT s.id FROM slots s JOIN events e ON e.id = s.event_id WHERE e.status = 'published' ORDER BY s.starts_at LIMIT 1")) as unknown as [{ id: number }[]];
+const [[kettle]] = (await pool.query("SELECT id FROM categories WHERE slug = 'kettle'")) as unknown as [{ id: number }[]];
+
+const env = loadEnv({ NODE_ENV: 'production', DATABASE_URL: local.appUrl, PORT: '0', SESSION_SECRET: secret, OUTBOX_POLL_MS: '0', JOBS_POLL_MS: '0', DB_POOL_SIZE: '20', DATA_DIR: dir });
 const app = await startServer(env, { sender: { send: async () => {} }, log: () => {} });
 
-const pool = mysql.createPool({ uri: local.appUrl, connectionLimit: 20 });
 const bare = express();
-bare.get('/groups', async (_req, res) => {
-  const [rows] = await pool.query('SELECT id, name, slug, town, description FROM repair_groups ORDER BY name');
+bare.use(express.json());
+bare.get('/events', async (_req, res) => {
+  const [rows] = await pool.query(
+    `SELECT e.id, e.title, e.starts_at, e.ends_at, g.name, v.name AS venue,
+            (SELECT SUM(s.capacity - s.booked - s.held) FROM slots s WHERE s.event_id = e.id) AS free
+       FROM events e JOIN repair_groups g ON g.id = e.group_id JOIN venues v ON v.id = e.venue_id
+      WHERE e.status = 'published' AND e.ends_at >= ? ORDER BY e.starts_at LIMIT 500`,
+    [new Date()],
+  );
   res.json(rows);
+});
+bare.post('/bookings', async (req, res) => {
+  const conn = await pool.getConnection();
+  try {
+    await conn.beginTransaction();
+    const [r] = (await conn.query('UPDATE slots SET booked = booked + 1 WHERE id = ? AND booked + held + 1 <= capacity', [req.body.slotId])) as unknown as [{ affectedRows: number }];
+    if (r.affectedRows !== 1) {
+      await conn.rollback();
+      return res.status(409).end();
+    }
+    const reference = randomBytes(4).toString('hex').slice(0, 7).toUpperCase();
+    await conn.query("INSERT INTO bookings (reference, event_id, slot_id, visitor_name, visitor_email, manage_token_hash, consent_at) SELECT ?, event_id, id, ?, ?, REPEAT('0', 64), NOW(3) FROM slots WHERE id = ?", [reference, req.body.visitor.name, req.body.visitor.email, req.body.slotId]);
+    await conn.commit();
+    res.status(201).json({ reference });
+  } finally {
+    conn.release();
+  }
 });
 const bareServer = bare.listen(0, '127.0.0.1');
 await new Promise((r) => bareServer.once('listening', r));
 const bareUrl = `http://127.0.0.1:${(bareServer.address() as AddressInfo).port}`;
 
-async function load(title: string, url: string) {
-  const r = await autocannon({ url, connections: 50, duration: 8, pipelining: 1 });
-  const line = { title, rps: Math.round(r.requests.average), p99: r.latency.p99, errors: r.errors + r.non2xx };
-  console.log(`${title.padEnd(40)} ${String(line.rps).padStart(6)} req/s   p99 ${String(line.p99).padStart(4)} ms   errors ${line.errors}`);
+// Visitors each have their own session and CSRF token, as their browsers would.
+const visitors = await Promise.all(
+  Array.from({ length: CONNECTIONS }, async () => {
+    const r = await fetch(`${app.url}/api/auth/csrf`);
+    return { cookie: r.headers.getSetCookie()[0].split(';')[0], token: (await r.json()).token as string };
+  }),
+);
+const bookingBody = JSON.stringify({ slotId: slot.id, visitor: { name: 'Bench Visitor', email: 'bench@example.org' }, items: [{ categoryId: kettle.id, fault: 'Switches off before it boils.' }], consent: true });
+
+interface Line { title: string; rps: number; p99: number; bad: number }
+async function load(title: string, opts: autocannon.Options): Promise<Line> {
+  const r = await autocannon({ connections: CONNECTIONS, duration: SECONDS, ...opts });
+  const line = { title, rps: Math.round(r.requests.average), p99: r.latency.p99, bad: r.errors + r.non2xx };
+  console.log(`${title.padEnd(44)} ${String(line.rps).padStart(6)} req/s   p99 ${String(line.p99).padStart(4)} ms   non-2xx/errors ${line.bad}`);
   return line;
 }
 
-step('Warming up');
-await autocannon({ url: `${app.url}/api/public/groups`, connections: 10, duration: 2 });
-const results = [await load('bare Express + mysql2: groups', `${bareUrl}/groups`), await load('Mendery GET /api/public/groups', `${app.url}/api/public/groups`)];
-console.log(`ratio Mendery / bare: ${(results[1].rps / results[0].rps).toFixed(2)}×`);
+step(`Warming up (${CONNECTIONS} connections, ${SECONDS} s per run)`);
+await autocannon({ url: `${app.url}/api/events`, connections: 10, duration: 2 });
+console.log('');
+const ratio = (a: Line, b: Line) => console.log(`${'  ratio Mendery / bare'.padEnd(44)} ${(a.rps / b.rps).toFixed(2)}× requests/s, p99 ${(a.p99 / Math.max(b.p99, 1)).toFixed(2)}×\n`);
+const bareEvents = await load('bare Express + mysql2: GET events', { url: `${bareUrl}/events` });
+const events = await load('Mendery GET /api/events', { url: `${app.url}/api/events` });
+ratio(events, bareEvents);
+const json = { 'content-type': 'application/json' };
+const bareBookings = await load('bare Express + mysql2: POST booking', { url: `${bareUrl}/bookings`, method: 'POST', headers: json, body: bookingBody });
+const bookings = await load('Mendery POST /api/bookings', {
+  url: `${app.url}/api/bookings`,
+  requests: visitors.map((v) => ({ method: 'POST' as const, path: '/api/bookings', headers: { ...json, cookie: v.cookie, 'x-csrf-token': v.token }, body: bookingBody })),
+});
+ratio(bookings, bareBookings);
 
 bareServer.close();
 await pool.end();

@@ -1,4 +1,5 @@
 import nodemailer from 'nodemailer';
+import QRCode from 'qrcode';
 import type { Env } from '../config/env';
 
 export interface OutgoingMail {
@@ -6,8 +7,11 @@ export interface OutgoingMail {
   subject: string;
   html: string;
   text: string;
-  attachments?: { filename: string; cid?: string; contentType: string; base64: string }[];
+  attachments?: MailAttachment[];
 }
+
+/** An attachment is stored as bytes, or as the text of a QR code drawn when the mail is sent (off the request path). */
+export type MailAttachment = { filename: string; cid?: string; contentType: string } & ({ base64: string } | { qrText: string });
 
 export interface MailSender {
   send(mail: OutgoingMail): Promise<void>;
@@ -34,7 +38,12 @@ export function smtpSender(env: Pick<Env, 'SMTP_HOST' | 'SMTP_PORT' | 'SMTP_SECU
         subject: mail.subject,
         html: mail.html,
         text: mail.text,
-        attachments: mail.attachments?.map((a) => ({ filename: a.filename, cid: a.cid, contentType: a.contentType, content: Buffer.from(a.base64, 'base64') })),
+        attachments: await Promise.all(
+          (mail.attachments ?? []).map(async (a) => ({
+            filename: a.filename, cid: a.cid, contentType: a.contentType,
+            content: 'qrText' in a ? await QRCode.toBuffer(a.qrText, { errorCorrectionLevel: 'M', margin: 2, width: 240 }) : Buffer.from(a.base64, 'base64'),
+          })),
+        ),
       });
     },
   };

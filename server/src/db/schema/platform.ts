@@ -1,5 +1,6 @@
 import { index, int, json, mediumtext, mysqlEnum, mysqlTable, varchar } from 'drizzle-orm/mysql-core';
 import { createdAt, id, timestamp3 } from './columns';
+import type { MailAttachment } from '../../mail/transport';
 
 /** express-mysql-session's table, owned by our migrations (the store's own CREATE is switched off). */
 export const sessions = mysqlTable('sessions', {
@@ -22,7 +23,7 @@ export const outbox = mysqlTable('outbox', {
   subject: varchar('subject', { length: 255 }).notNull(),
   html: mediumtext('html').notNull(),
   text: mediumtext('text').notNull(),
-  attachments: json('attachments').$type<{ filename: string; cid?: string; contentType: string; base64: string }[]>(),
+  attachments: json('attachments').$type<MailAttachment[]>(),
   status: mysqlEnum('status', ['pending', 'sent', 'failed']).notNull().default('pending'),
   attempts: int('attempts', { unsigned: true }).notNull().default(0),
   nextAttemptAt: timestamp3('next_attempt_at').notNull(),

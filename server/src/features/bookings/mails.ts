@@ -19,17 +19,12 @@ export interface BookingMailFacts {
 /** What the QR code on a booking holds: the reception desk reads the reference from it. */
 export const bookingQrText = (publicUrl: string, reference: string) => `${publicUrl}/b/${reference}`;
 
-export async function qrPng(text: string): Promise<string> {
-  const buf = await QRCode.toBuffer(text, { errorCorrectionLevel: 'M', margin: 2, width: 240 });
-  return buf.toString('base64');
-}
-
 export const qrDataUrl = (text: string) => QRCode.toDataURL(text, { errorCorrectionLevel: 'M', margin: 2, width: 240 });
 
 const when = (f: BookingMailFacts) => `${formatDay(f.slotStartsAt, f.timeZone)}, ${formatTimeRange(f.slotStartsAt, f.slotEndsAt, f.timeZone)}`;
 const where = (f: BookingMailFacts) => `${f.venue.name}, ${f.venue.address}, ${f.venue.town}`;
 
-export async function confirmationMail(f: BookingMailFacts, qrText: string) {
+export function confirmationMail(f: BookingMailFacts, qrText: string) {
   const mail = composeMail(f.visitorEmail, `Booked: ${f.eventTitle} — ${f.reference}`, {
     paragraphs: [
       `Hello ${f.visitorName},`,
@@ -44,7 +39,7 @@ export async function confirmationMail(f: BookingMailFacts, qrText: string) {
     action: { label: 'View, move or cancel my booking', url: f.manageUrl },
     footnote: 'Keep this mail: the link is the only way to change the booking without calling the group.',
   });
-  mail.attachments = [{ filename: `booking-${f.reference}.png`, cid: 'booking-qr', contentType: 'image/png', base64: await qrPng(qrText) }];
+  mail.attachments = [{ filename: `booking-${f.reference}.png`, cid: 'booking-qr', contentType: 'image/png', qrText }];
   return mail;
 }
 

@@ -5,7 +5,7 @@ import { formatReference } from '../../../../shared/booking/reference';
 import { screenItem } from '../../../../shared/booking/screening';
 import type { createBookingSchema } from '../../../../shared/schemas/bookings';
 import type { AppContext } from '../../context';
-import type { Tx } from '../../db/client';
+import type { DbOrTx, Tx } from '../../db/client';
 import { affectedRows, isDuplicate, withDeadlockRetry } from '../../db/retry';
 import { bookingItems, bookings, categories, events, idempotencyKeys, itemPhotos, repairGroups, slots, slotSkillCounts, venues, waitlistEntries } from '../../db/schema/index';
 import { newToken, sha256 } from '../../auth/tokens';
@@ -20,7 +20,7 @@ type Item = BookingInput['items'][number];
 const full = () => new HttpError(409, 'slot-full', 'That time is fully booked. Choose another time, or join its waiting list.');
 
 /** Loads the slot with its event, group and venue, and checks that it can take bookings now. */
-async function bookableSlot(tx: Tx, slotId: number, opts: { lock?: boolean } = {}) {
+async function bookableSlot(tx: DbOrTx, slotId: number, opts: { lock?: boolean } = {}) {
   const q = tx
     .select({ slot: slots, event: events, group: repairGroups, venue: venues })
     .from(slots)
@@ -36,7 +36,7 @@ async function bookableSlot(tx: Tx, slotId: number, opts: { lock?: boolean } = {
 }
 
 /** Refuses the whole booking when any item is one the group does not take, saying why for each. */
-async function screen(tx: Tx, groupId: number, groupName: string, items: Item[]) {
+async function screen(tx: DbOrTx, groupId: number, groupName: string, items: Item[]) {
   const ids = [...new Set(items.map((i) => i.categoryId))];
   const cats = await tx.select().from(categories).where(inArray(categories.id, ids));
   const byId = new Map(cats.map((c) => [c.id, c]));
@@ -103,27 +103,39 @@ export const manageTokenFor = (ctx: AppContext, reference: string) =>
 export const manageUrl = (ctx: AppContext, reference: string, token: string) => `${ctx.env.publicUrl}/bookings/${reference}?token=${token}`;
 const itemLabel = (cat: { name: string } | undefined, i: Item) => [cat?.name ?? 'Item', [i.brand, i.model].filter(Boolean).join(' ')].filter(Boolean).join(' — ');
 
-/** Writes the booking inside `tx` once the places are taken; returns what the visitor needs to manage it. */
-async function insertBooking(ctx: AppContext, tx: Tx, row: Awaited<ReturnType<typeof bookableSlot>>, input: Pick<BookingInput, 'visitor' | 'items'>, fromHeld: boolean) {
-  const cats = await screen(tx, row.group.id, row.group.name, input.items);
+interface Prepared {
+  reference: string;
+  token: string;
+}
+
+function prepareBooking(ctx: AppContext): Prepared {
+  const reference = formatReference(randomBytes(6));
+  return { reference, token: manageTokenFor(ctx, reference) };
+}
+
+/**
+ * Writes the booking inside `tx`. The slot's row is locked first, by the conditional UPDATE that takes the places:
+ * every later insert refers to the slot, and taking the exclusive lock before those shared ones avoids deadlocks.
+ * Everything that can be done before the transaction (checking the items, the QR image) already was.
+ */
+async function insertBooking(ctx: AppContext, tx: Tx, row: Awaited<ReturnType<typeof bookableSlot>>, input: Pick<BookingInput, 'visitor' | 'items'>, fromHeld: boolean, prepared: Prepared, cats: Awaited<ReturnType<typeof screen>>) {
   await takePlaces(tx, row.slot.id, input.items.length, fromHeld);
   await takeSkillPlaces(tx, row.slot.id, row.event.skillLimits, countBySkill(input.items.map((i) => cats.get(i.categoryId)!.skill)));
-  const reference = formatReference(randomBytes(6));
-  const token = manageTokenFor(ctx, reference);
-  const hash = sha256(token);
+  const { reference, token } = prepared;
   const [{ id }] = await tx
     .insert(bookings)
-    .values({ reference, eventId: row.event.id, slotId: row.slot.id, visitorName: input.visitor.name, visitorEmail: input.visitor.email, visitorPhone: input.visitor.phone ?? null, manageTokenHash: hash, consentAt: new Date() })
+    .values({ reference, eventId: row.event.id, slotId: row.slot.id, visitorName: input.visitor.name, visitorEmail: input.visitor.email, visitorPhone: input.visitor.phone ?? null, manageTokenHash: sha256(token), consentAt: new Date() })
     .$returningId();
-  const itemRows = input.items.map((i, position) => ({
-    bookingId: id, categoryId: i.categoryId, brand: i.brand ?? null, model: i.model ?? null, ageYears: i.ageYears ?? null, fault: i.fault,
-    mains: i.mains ?? Boolean(cats.get(i.categoryId)!.mains), battery: i.battery ?? false, position,
-  }));
-  await tx.insert(bookingItems).values(itemRows);
-  const items = await tx.select({ id: bookingItems.id }).from(bookingItems).where(eq(bookingItems.bookingId, id)).orderBy(asc(bookingItems.position));
+  const itemIds = await tx
+    .insert(bookingItems)
+    .values(input.items.map((i, position) => ({
+      bookingId: id, categoryId: i.categoryId, brand: i.brand ?? null, model: i.model ?? null, ageYears: i.ageYears ?? null, fault: i.fault,
+      mains: i.mains ?? Boolean(cats.get(i.categoryId)!.mains), battery: i.battery ?? false, position,
+    })))
+    .$returningId();
   const f = facts(ctx, row, { reference, visitorName: input.visitor.name, visitorEmail: input.visitor.email }, input.items.map((i) => itemLabel(cats.get(i.categoryId), i)), token);
-  await enqueueMail(tx, await confirmationMail(f, bookingQrText(ctx.env.publicUrl, reference)));
-  return { id, reference, manageToken: token, eventId: row.event.id, slotId: row.slot.id, itemIds: items.map((x) => x.id) };
+  await enqueueMail(tx, confirmationMail(f, bookingQrText(ctx.env.publicUrl, reference)));
+  return { id, reference, manageToken: token, eventId: row.event.id, slotId: row.slot.id, itemIds: itemIds.map((x) => x.id) };
 }
 
 export type BookingResult = Awaited<ReturnType<typeof insertBooking>>;
@@ -135,15 +147,17 @@ export type BookingResult = Awaited<ReturnType<typeof insertBooking>>;
  */
 export async function createBooking(ctx: AppContext, input: BookingInput, idempotencyKey?: string): Promise<{ status: number; body: unknown; replayed: boolean }> {
   const key = idempotencyKey ? `booking:${idempotencyKey}` : null;
+  const row = await bookableSlot(ctx.database.db, input.slotId);
+  const cats = await screen(ctx.database.db, row.group.id, row.group.name, input.items);
   for (let attempt = 0; ; attempt++) {
+    const prepared = prepareBooking(ctx);
     try {
       const body = await withDeadlockRetry(() =>
         ctx.database.db.transaction(async (tx) => {
           // The key's row is written first: a second request with the same key waits here on the row lock,
           // then fails as a duplicate once the first has committed.
           if (key) await tx.insert(idempotencyKeys).values({ key, scope: 'booking' });
-          const row = await bookableSlot(tx, input.slotId);
-          const result = await insertBooking(ctx, tx, row, input, false);
+          const result = await insertBooking(ctx, tx, row, input, false, prepared, cats);
           const body = { reference: result.reference, manageToken: result.manageToken, eventId: result.eventId, slotId: result.slotId, itemIds: result.itemIds };
           if (key) await tx.update(idempotencyKeys).set({ statusCode: 201, response: body }).where(eq(idempotencyKeys.key, key));
           return body;
@@ -318,13 +332,15 @@ export async function offerView(ctx: AppContext, token: string) {
 
 /** Turns an offered waiting-list place into a booking, using the places held for it. */
 export async function claimOffer(ctx: AppContext, token: string) {
+  const prepared = prepareBooking(ctx);
   const result = await withDeadlockRetry(() =>
     ctx.database.db.transaction(async (tx) => {
       const w = await offerByToken(tx, token, true);
       if (w.status === 'claimed') throw new HttpError(409, 'already-claimed', 'This place has already been taken with this link. Check your mail for the booking.');
       if (w.status !== 'offered' || w.offerExpiresAt!.getTime() < Date.now()) throw new HttpError(410, 'offer-expired', 'This offer has run out and the place has gone to the next person.');
       const row = await bookableSlot(tx, w.slotId);
-      const booking = await insertBooking(ctx, tx, row, w.request as BookingInput, true);
+      const cats = await screen(tx, row.group.id, row.group.name, (w.request as BookingInput).items);
+      const booking = await insertBooking(ctx, tx, row, w.request as BookingInput, true, prepared, cats);
       await tx.update(waitlistEntries).set({ status: 'claimed', bookingId: booking.id }).where(eq(waitlistEntries.id, w.id));
       return booking;
     }),
