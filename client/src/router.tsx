@@ -13,22 +13,21 @@ import { VolunteerPage } from './routes/auth/volunteer';
 import { ForgotPasswordPage, ResetPasswordPage, VerifyEmailPage } from './routes/auth/email-links';
 import { SetupPage } from './routes/auth/setup';
 import { VolunteerHome } from './routes/volunteer-home';
-import { GroupPeoplePage } from './routes/groups/people';
-import { AdminOverviewPage } from './routes/admin/overview';
-import { MailboxPage } from './routes/admin/mailbox';
 import { hasRole } from './lib/roles';
-import { EventsPage } from './routes/events/list';
 import { EventPage } from './routes/events/detail';
-import { BookingPage } from './routes/events/book';
-import { ManageEventPage } from './routes/events/manage';
 import { ManageBookingPage } from './routes/bookings/manage';
 import { BookingCodePage, ClaimOfferPage } from './routes/bookings/claim';
-import { GroupEventsPage } from './routes/groups/events';
-import { NewEventPage } from './routes/groups/new-event';
-import { GroupSettingsPage } from './routes/groups/settings';
-import { AdminCategoriesPage } from './routes/admin/categories';
+
+/** Pages most visitors never open load on demand, keeping the first load small on a phone. */
+const page = (load: () => Promise<Record<string, React.ComponentType>>, name: string, allow?: (u: SessionUser) => boolean) => ({
+  lazy: async () => {
+    const Component = (await load())[name];
+    return { Component: allow ? () => <RequireRole allow={allow}><Component /></RequireRole> : Component };
+  },
+});
 
 const organiser = (u: SessionUser) => u.admin || u.roles.some((r) => r.role === 'organiser');
+const admin = (u: SessionUser) => u.admin;
 
 function StartRedirect() {
   const { data: user, isPending } = useUser();
@@ -52,20 +51,20 @@ export const router = createBrowserRouter([
       { path: 'start', element: <StartRedirect /> },
       { path: 'bench', element: <RequireRole allow={(u) => hasRole(u, 'fixer')}><VolunteerHome role="fixer" /></RequireRole> },
       { path: 'desk', element: <RequireRole allow={(u) => hasRole(u, 'host')}><VolunteerHome role="host" /></RequireRole> },
-      { path: 'events', element: <EventsPage /> },
+      { path: 'events', ...page(() => import('./routes/events/list'), 'EventsPage') },
       { path: 'events/:eventId', element: <EventPage /> },
-      { path: 'events/:eventId/book', element: <BookingPage /> },
-      { path: 'events/:eventId/manage', element: <RequireRole allow={organiser}><ManageEventPage /></RequireRole> },
+      { path: 'events/:eventId/book', ...page(() => import('./routes/events/book'), 'BookingPage') },
+      { path: 'events/:eventId/manage', ...page(() => import('./routes/events/manage'), 'ManageEventPage', organiser) },
       { path: 'bookings/:reference', element: <ManageBookingPage /> },
       { path: 'waiting-list/:token', element: <ClaimOfferPage /> },
       { path: 'b/:reference', element: <BookingCodePage /> },
-      { path: 'groups/:groupId/people', element: <RequireRole allow={organiser}><GroupPeoplePage /></RequireRole> },
-      { path: 'groups/:groupId/events', element: <RequireRole allow={organiser}><GroupEventsPage /></RequireRole> },
-      { path: 'groups/:groupId/events/new', element: <RequireRole allow={organiser}><NewEventPage /></RequireRole> },
-      { path: 'groups/:groupId/settings', element: <RequireRole allow={organiser}><GroupSettingsPage /></RequireRole> },
-      { path: 'admin/categories', element: <RequireRole allow={(u) => u.admin}><AdminCategoriesPage /></RequireRole> },
-      { path: 'admin', element: <RequireRole allow={(u) => u.admin}><AdminOverviewPage /></RequireRole> },
-      { path: 'admin/mailbox/:mailId?', element: <RequireRole allow={(u) => u.admin}><MailboxPage /></RequireRole> },
+      { path: 'groups/:groupId/people', ...page(() => import('./routes/groups/people'), 'GroupPeoplePage', organiser) },
+      { path: 'groups/:groupId/events', ...page(() => import('./routes/groups/events'), 'GroupEventsPage', organiser) },
+      { path: 'groups/:groupId/events/new', ...page(() => import('./routes/groups/new-event'), 'NewEventPage', organiser) },
+      { path: 'groups/:groupId/settings', ...page(() => import('./routes/groups/settings'), 'GroupSettingsPage', organiser) },
+      { path: 'admin/categories', ...page(() => import('./routes/admin/categories'), 'AdminCategoriesPage', admin) },
+      { path: 'admin', ...page(() => import('./routes/admin/overview'), 'AdminOverviewPage', admin) },
+      { path: 'admin/mailbox/:mailId?', ...page(() => import('./routes/admin/mailbox'), 'MailboxPage', admin) },
       { path: '*', element: <NotFoundPage /> },
     ],
   },
