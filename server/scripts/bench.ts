@@ -11,6 +11,11 @@ import { freePort } from '../src/infra/mariadb';
 import { seedDemo } from '../src/seed/demo';
 import { startServer } from '../src/server';
 import { loadOrCreateSecrets, startLocalDatabase, step } from './local-stack';
+import { benchTriage } from './bench-triage';
+
+benchTriage();
+if (process.env.BENCH === 'triage') process.exit(0);
+console.log('');
 
 /**
  * `npm run bench`: loads GET /api/events and POST /api/bookings with autocannon against a throwaway MariaDB and,
