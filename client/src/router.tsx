@@ -39,6 +39,7 @@ export const router = createBrowserRouter([
   {
     element: <AppShell />,
     errorElement: <RouteError />,
+    hydrateFallbackElement: <Spinner />,
     children: [
       { index: true, element: <HomePage /> },
       { path: 'safety', element: <SafetyPage /> },

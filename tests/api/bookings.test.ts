@@ -77,7 +77,9 @@ describe('booking a slot', () => {
     const { slotIds } = await makeEvent(db.db, groupId, { capacity: 6, slotCount: 1, skillLimits: { textiles: 2 } });
     const a = new Agent(server.url);
     expect((await a.post('/api/bookings', bookingBody(slotIds[0], [item(clothing)]))).status).toBe(201);
-    expect((await a.post('/api/bookings', bookingBody(slotIds[0], [item(clothing), item(clothing)]))).json.error.code).toBe('skill-full');
+    const over = (await a.post('/api/bookings', bookingBody(slotIds[0], [item(clothing), item(clothing)]))).json.error;
+    expect(over.code).toBe('skill-full');
+    expect(over.message).toContain('the fixers can take 2 textiles items; only 1 is left and you are booking 2');
     expect((await a.post('/api/bookings', bookingBody(slotIds[0], [item(clothing), item()]))).status).toBe(201);
     expect((await slotRow(slotIds[0])).booked).toBe(3);
   });

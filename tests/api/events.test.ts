@@ -130,5 +130,7 @@ describe('events and slots', () => {
       expect(all.some((x) => x.subject.startsWith('Cancelled:') && x.text.includes('The hall roof is leaking.'))).toBe(true);
     }
     expect((await a.post('/api/bookings', { slotId: slotIds[1], visitor: visitor(), items: [{ categoryId: await categoryId(db.db, 'lamp'), fault: 'Flickers when touched.' }], consent: true })).status).toBe(409);
+    // Nothing stays booked at a cancelled session.
+    expect((await organiser.get(`/api/events/${eventId}`)).json.slots.map((s: { booked: number }) => s.booked)).toEqual([0, 0, 0, 0]);
   });
 });

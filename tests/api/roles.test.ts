@@ -102,6 +102,14 @@ describe('routes × roles', () => {
     });
   }
 
+  it('refuses to remove the last organiser of a group', async () => {
+    const members = (await agents.organiser.get(`/api/groups/${groups.own}/members`)).json.members;
+    const me = members.find((m: { role: string }) => m.role === 'organiser');
+    const res = await agents.organiser.delete(`/api/groups/${groups.own}/members/${me.membershipId}`);
+    expect(res.status).toBe(409);
+    expect(res.json.error.code).toBe('last-organiser');
+  });
+
   it('hides nothing behind the client alone: a fixer calling the organiser API directly is refused', async () => {
     const res = await agents.fixer.get(`/api/groups/${groups.own}/members`);
     expect(res.status).toBe(403);

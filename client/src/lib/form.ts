@@ -11,7 +11,7 @@ export function useZodForm<S extends z.ZodType<FieldValues, FieldValues>>(schema
 /** Puts the server's field errors next to their fields; returns the message for the form as a whole. */
 export function applyServerErrors<T extends FieldValues>(form: UseFormReturn<T, unknown, FieldValues>, err: unknown): string {
   if (err instanceof ApiError) {
-    for (const [field, message] of Object.entries(err.fields ?? {})) form.setError(field as Path<T>, { message });
+    Object.entries(err.fields ?? {}).forEach(([field, message], i) => form.setError(field as Path<T>, { message }, { shouldFocus: i === 0 }));
     return err.message;
   }
   return 'Something went wrong. Try again.';

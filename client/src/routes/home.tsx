@@ -1,7 +1,7 @@
 import { Link } from 'react-router';
 import { paths } from '../config/paths';
 import { usePublicGroups } from '../features/groups/api/public-groups';
-import { Alert, Card, Spinner } from '../components/ui/feedback';
+import { Alert, Spinner } from '../components/ui/feedback';
 
 const steps = [
   { n: '1', title: 'Book a slot', text: 'Pick a session near you and a time, and tell us what is broken. Booking keeps the queue short.' },
@@ -22,8 +22,8 @@ export function HomePage() {
             Mendery lets you book a place, and helps the groups plan benches, fixers and parts.
           </p>
           <div className="flex flex-wrap gap-3">
-            <Link to={paths.volunteer()} className="inline-flex min-h-11 items-center rounded-lg bg-copper px-5 font-bold text-white hover:bg-copper-dark">Volunteer as a fixer</Link>
-            <Link to={paths.signIn()} className="inline-flex min-h-11 items-center rounded-lg bg-white px-5 font-bold text-navy ring-1 ring-navy/25 hover:bg-navy/5">Sign in</Link>
+            <Link to={paths.events()} className="inline-flex min-h-11 items-center rounded-lg bg-copper px-5 font-bold text-white hover:bg-copper-dark">Find a session and book</Link>
+            <Link to={paths.volunteer()} className="inline-flex min-h-11 items-center rounded-lg bg-white px-5 font-bold text-navy ring-1 ring-navy/25 hover:bg-navy/5">Volunteer as a fixer</Link>
           </div>
         </div>
         <HeroPicture />
@@ -49,11 +49,12 @@ export function HomePage() {
         {groups.data?.length === 0 && <Alert>No repair group has joined yet.</Alert>}
         <div className="grid gap-4 sm:grid-cols-2">
           {groups.data?.map((g) => (
-            <Card key={g.id}>
+            <Link key={g.id} to={`${paths.events()}?group=${g.id}`} className="block rounded-xl bg-white p-5 shadow-sm ring-1 ring-ink/5 hover:ring-copper">
               <h3 className="text-lg">{g.name}</h3>
               <p className="text-sm font-semibold text-copper-dark">{g.town}</p>
               <p className="mt-2 text-ink-soft">{g.description}</p>
-            </Card>
+              <p className="mt-3 text-sm font-bold text-navy underline">See its sessions</p>
+            </Link>
           ))}
         </div>
       </section>

@@ -2,7 +2,7 @@ import { useEffect, useRef, type ReactNode } from 'react';
 import { Button } from './button';
 
 /** A modal question before anything destructive; Escape or "Keep" cancels. */
-export function ConfirmDialog({ open, title, message, confirmLabel, onConfirm, onCancel, busy, children }: { open: boolean; title: string; message: string; confirmLabel: string; onConfirm: () => void; onCancel: () => void; busy?: boolean; children?: ReactNode }) {
+export function ConfirmDialog({ open, title, message, confirmLabel, onConfirm, onCancel, busy, children, tone = 'danger', cancelLabel = 'Keep' }: { open: boolean; title: string; message: string; confirmLabel: string; onConfirm: () => void; onCancel: () => void; busy?: boolean; children?: ReactNode; tone?: 'danger' | 'primary'; cancelLabel?: string }) {
   const ref = useRef<HTMLDialogElement>(null);
   useEffect(() => {
     const d = ref.current;
@@ -17,8 +17,8 @@ export function ConfirmDialog({ open, title, message, confirmLabel, onConfirm, o
         <p className="text-ink-soft">{message}</p>
         {children}
         <div className="flex justify-end gap-2 pt-2">
-          <Button variant="secondary" onClick={onCancel} autoFocus>Keep</Button>
-          <Button variant="danger" onClick={onConfirm} busy={busy}>{confirmLabel}</Button>
+          <Button variant="secondary" onClick={onCancel} autoFocus>{cancelLabel}</Button>
+          <Button variant={tone} onClick={onConfirm} busy={busy}>{confirmLabel}</Button>
         </div>
       </div>
     </dialog>

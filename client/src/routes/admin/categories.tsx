@@ -4,7 +4,7 @@ import { EQUIPMENT_LABELS, SKILL_LABELS, SKILLS, type Equipment } from '../../..
 import { Button } from '../../components/ui/button';
 import { Alert, PageTitle, Spinner } from '../../components/ui/feedback';
 import { useCategories, type Category } from '../../features/events/api/events';
-import { api } from '../../lib/api';
+import { api, ApiError } from '../../lib/api';
 
 /** The item taxonomy: weights with their sources feed the statistics, skill and kit feed the matching. */
 export function AdminCategoriesPage() {
@@ -53,7 +53,7 @@ function EditRow({ c, done }: { c: Category; done: () => void }) {
   const input = 'w-full rounded border border-ink/20 px-2 py-1';
   return (
     <tr className="border-t border-ink/5 bg-copper-light/30 align-top">
-      <td className="px-3 py-2" colSpan={2}><p className="font-bold">{c.name}</p><input aria-label="Weight source" className={input} value={v.weightSource} onChange={(e) => setV({ ...v, weightSource: e.target.value })} />{save.error && <p className="mt-1 text-xs font-semibold text-alert">{save.error.message}</p>}</td>
+      <td className="px-3 py-2" colSpan={2}><p className="font-bold">{c.name}</p><input aria-label="Weight source" className={input} value={v.weightSource} onChange={(e) => setV({ ...v, weightSource: e.target.value })} />{save.error && <p className="mt-1 text-xs font-semibold text-alert">{save.error instanceof ApiError && save.error.fields ? Object.values(save.error.fields).join(' ') : save.error.message}</p>}</td>
       <td className="px-3 py-2"><input aria-label="Average weight in kg" type="number" step="0.01" className={input} value={v.avgWeightKg} onChange={(e) => setV({ ...v, avgWeightKg: e.target.value })} /></td>
       <td className="px-3 py-2"><select aria-label="Skill" className={input} value={v.skill} onChange={(e) => setV({ ...v, skill: e.target.value as Category['skill'] })}>{SKILLS.map((s) => <option key={s} value={s}>{SKILL_LABELS[s]}</option>)}</select></td>
       <td className="px-3 py-2 text-ink-soft">{c.equipment.length} items</td>

@@ -19,7 +19,7 @@ export function MailboxPage() {
       <div className="grid gap-4 lg:grid-cols-[22rem_1fr]">
         <Card flush className="overflow-hidden">
           <div className="flex items-center justify-between border-b border-ink/5 px-4 py-3">
-            <h2 className="text-base">{list.data?.length ?? 0} messages</h2>
+            <h2 className="text-base">{list.data?.length ?? 0} message{list.data?.length === 1 ? '' : 's'}</h2>
             <Button variant="quiet" disabled={!list.data?.length} onClick={() => setConfirming(true)}>Empty</Button>
           </div>
           {list.isPending && <div className="px-4"><Spinner /></div>}

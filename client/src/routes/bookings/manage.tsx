@@ -54,7 +54,11 @@ export function ManageBookingPage() {
         </div>
       )}
       {photoProblems.length > 0 && <Alert tone="caution" title="Some photos were not added">{photoProblems.join(' ')} You can add them below.</Alert>}
-      {b.status === 'cancelled' && <Alert tone="info" title="This booking is cancelled">The place has gone back to the session. You are welcome to book again.</Alert>}
+      {b.status === 'cancelled' && (
+        <Alert tone="info" title="This booking is cancelled">
+          The place has gone back to the session. {b.event.status === 'published' ? <Link className="font-bold underline" to={paths.book(b.event.id)}>Book again</Link> : 'You are welcome to book another session.'}
+        </Alert>
+      )}
 
       <Card className="grid gap-5 sm:grid-cols-[1fr_auto] sm:items-center">
         <div>
@@ -66,10 +70,10 @@ export function ManageBookingPage() {
           <p>{b.venue.name}, {b.venue.address}, {b.venue.town}</p>
           <p className="text-sm text-ink-soft">{b.event.groupName}</p>
         </div>
-        <figure className="justify-self-center text-center">
+        {b.status === 'confirmed' && <figure className="justify-self-center text-center">
           <img src={b.qr} alt={`QR code of booking ${b.reference}`} className="size-40 rounded-lg ring-1 ring-ink/10" />
           <figcaption className="mt-1 text-xs text-ink-soft">Show this at reception</figcaption>
-        </figure>
+        </figure>}
       </Card>
 
       <Card>
@@ -83,7 +87,7 @@ export function ManageBookingPage() {
               <div className="mt-2 flex flex-wrap items-center gap-2">
                 {i.photos.map((p) => <img key={p.id} src={`/api/photos/${p.id}?token=${encodeURIComponent(token)}`} alt="" className="size-20 rounded-lg object-cover ring-1 ring-ink/10" />)}
                 {active && i.photos.length < 3 && (
-                  <label className="cursor-pointer rounded-lg px-3 py-2 text-sm font-bold text-navy ring-1 ring-navy/25">
+                  <label className="cursor-pointer rounded-lg px-3 py-2 text-sm font-bold text-navy ring-1 ring-navy/25 has-focus-visible:outline-3 has-focus-visible:outline-copper">
                     + Add photo
                     <input type="file" accept="image/jpeg,image/png,image/webp" className="sr-only" onChange={(e) => void addPhotos(i.id, e.target.files)} />
                   </label>
@@ -119,10 +123,12 @@ export function ManageBookingPage() {
         </Card>
       )}
 
-      <Card>
-        <h2 className="text-lg">What to bring</h2>
-        <ul className="mt-2 list-disc space-y-1 pl-5 text-sm">{WHAT_TO_BRING.map((w) => <li key={w}>{w}</li>)}</ul>
-      </Card>
+      {b.status === 'confirmed' && (
+        <Card>
+          <h2 className="text-lg">What to bring</h2>
+          <ul className="mt-2 list-disc space-y-1 pl-5 text-sm">{WHAT_TO_BRING.map((w) => <li key={w}>{w}</li>)}</ul>
+        </Card>
+      )}
       <Link to={paths.event(b.event.id)} className="inline-block font-bold text-navy underline">About this session</Link>
 
       <ConfirmDialog

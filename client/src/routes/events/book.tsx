@@ -1,6 +1,6 @@
 import { useMemo, useRef, useState } from 'react';
 import { useFieldArray } from 'react-hook-form';
-import { Link, useNavigate, useParams } from 'react-router';
+import { Link, useNavigate, useParams, useSearchParams } from 'react-router';
 import { HAZARDS, SKILL_LABELS } from '../../../../shared/constants';
 import { DISCLAIMER, formatDay, formatTime, formatTimeRange } from '../../../../shared/format';
 import { HAZARD_REFUSALS } from '../../../../shared/booking/screening';
@@ -33,7 +33,10 @@ function BookingForm({ event, categories }: { event: EventDetail; categories: Ca
   const book = useCreateBooking(key);
   const waitlist = useJoinWaitlist(event.id);
   const tz = event.timeZone;
-  const form = useZodForm(createBookingSchema, { slotId: undefined, visitor: { name: '', email: '', phone: '' }, items: [emptyItem], consent: false as never });
+  const [search] = useSearchParams();
+  const preselected = event.slots.find((s) => s.id === Number(search.get('slot')));
+  const errorRef = useRef<HTMLDivElement>(null);
+  const form = useZodForm(createBookingSchema, { slotId: preselected?.id, visitor: { name: '', email: '', phone: '' }, items: [emptyItem], consent: false as never });
   const items = useFieldArray({ control: form.control, name: 'items' });
   const [photos, setPhotos] = useState<Record<string, File[]>>({});
   const [photoErrors, setPhotoErrors] = useState<Record<string, string>>({});
@@ -80,6 +83,8 @@ function BookingForm({ event, categories }: { event: EventDetail; categories: Ca
     } catch (err) {
       setProgress(null);
       setFormError(applyServerErrors(form, err));
+      // On a phone the message would be far above the button: bring it into view.
+      requestAnimationFrame(() => errorRef.current?.scrollIntoView({ behavior: 'smooth', block: 'center' }));
     }
   });
 
@@ -97,14 +102,14 @@ function BookingForm({ event, categories }: { event: EventDetail; categories: Ca
     <div className="mx-auto max-w-2xl">
       <PageTitle title="Book a repair slot" lead={`${event.title} · ${formatDay(event.startsAt, tz)} · ${event.venue.name}, ${event.venue.town}`} />
       <form onSubmit={onSubmit} noValidate className="space-y-6">
-        {formError && <Alert tone="error">{formError}</Alert>}
+        {formError && <div ref={errorRef} tabIndex={-1}><Alert tone="error">{formError}</Alert></div>}
 
         <Card>
           <fieldset>
             <legend className="text-lg font-extrabold text-navy">1. Choose a time</legend>
             <div className="mt-3 grid grid-cols-3 gap-2 sm:grid-cols-4">
               {event.slots.filter((s) => new Date(s.endsAt).getTime() > Date.now()).map((s) => (
-                <label key={s.id} className={`cursor-pointer rounded-lg p-2 text-center ring-1 has-checked:bg-navy has-checked:text-white has-checked:ring-navy ${s.free ? 'ring-ink/20' : 'bg-ink/5 ring-ink/10'}`}>
+                <label key={s.id} className={`cursor-pointer rounded-lg p-2 text-center ring-1 has-checked:bg-navy has-checked:text-white has-checked:ring-navy has-focus-visible:outline-3 has-focus-visible:outline-offset-2 has-focus-visible:outline-copper ${s.free ? 'ring-ink/20' : 'bg-ink/5 ring-ink/10'}`}>
                   <input type="radio" value={s.id} className="sr-only" {...form.register('slotId')} />
                   <span className="block text-lg font-extrabold">{formatTime(s.startsAt, tz)}</span>
                   <span className="block text-xs font-semibold">{s.free ? `${s.free} free` : 'full · wait'}</span>
@@ -204,7 +209,7 @@ function BookingForm({ event, categories }: { event: EventDetail; categories: Ca
           <ul className="mt-2 list-disc space-y-1 pl-5 text-sm text-ink-soft">{DISCLAIMER.map((d) => <li key={d}>{d}</li>)}</ul>
           <label className="mt-4 flex items-start gap-3 rounded-lg p-3 ring-1 ring-ink/15">
             <input type="checkbox" className="mt-0.5 size-5 accent-copper" {...form.register('consent')} />
-            <span>I accept the house rules and understand that volunteers help on a best-effort basis.</span>
+            <span>I accept the house rules and the conditions above.</span>
           </label>
           {errors.consent && <p className="mt-1 text-sm font-semibold text-alert">{errors.consent.message}</p>}
         </Card>

@@ -43,13 +43,18 @@ export function EventPage() {
 
         <Card>
           <h2 className="text-lg">Times and free places</h2>
-          <p className="text-sm text-ink-soft">Each time is the slot in which your repair starts; most take {e.slotMinutes}–60 minutes.</p>
+          <p className="text-sm text-ink-soft">Each time is the slot in which your repair starts; most take {e.slotMinutes}–60 minutes. Tap a time to book it.</p>
+          {Object.keys(e.skillLimits).length > 0 && (
+            <p className="mt-1 text-sm text-ink-soft">Per time, the fixers can take at most {Object.entries(e.skillLimits).map(([k, n]) => `${n} ${SKILL_LABELS[k as keyof typeof SKILL_LABELS].toLowerCase()} item${n === 1 ? '' : 's'}`).join(', ')}.</p>
+          )}
           <ul className="mt-3 grid grid-cols-2 gap-2 sm:grid-cols-3">
             {e.slots.map((s) => (
-              <li key={s.id} className={`rounded-lg p-3 ring-1 ${s.free ? 'ring-ink/10' : 'bg-alert-light/50 ring-alert/30'}`}>
-                <p className="font-bold">{formatTime(s.startsAt, tz)}</p>
-                <PlacesBar free={s.free} total={s.capacity} label={false} />
-                <p className="mt-1 text-xs font-semibold text-ink-soft">{s.free ? `${s.free} free` : 'Full: waiting list'}</p>
+              <li key={s.id}>
+                <Link to={e.status === 'published' ? `${paths.book(e.id)}?slot=${s.id}` : paths.event(e.id)} className={`block rounded-lg p-3 ring-1 hover:ring-copper ${s.free ? 'ring-ink/10' : 'bg-alert-light/50 ring-alert/30'}`}>
+                  <p className="font-bold">{formatTime(s.startsAt, tz)}</p>
+                  <PlacesBar free={s.free} total={s.capacity} label={false} />
+                  <p className="mt-1 text-xs font-semibold text-ink-soft">{s.free ? `${s.free} free` : 'Full: waiting list'}</p>
+                </Link>
               </li>
             ))}
           </ul>
@@ -81,7 +86,7 @@ export function EventPage() {
         )}
       </div>
 
-      <aside className="space-y-4 lg:sticky lg:top-4 lg:self-start">
+      <aside className="order-first space-y-4 lg:sticky lg:top-4 lg:order-none lg:self-start">
         <Card>
           <PlacesBar free={e.freePlaces} total={e.totalPlaces} />
           {e.status === 'published' ? (

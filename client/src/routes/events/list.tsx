@@ -64,10 +64,18 @@ export function EventsPage() {
             firstDay={1}
             headerToolbar={{ left: 'prev,next today', center: 'title', right: '' }}
             buttonIcons={false}
-            buttonText={{ prev: '‹ Earlier', next: 'Later ›', today: 'Today' }}
+            buttonText={{ prev: '‹', next: '›', today: 'Today' }}
+            buttonHints={{ prev: 'Previous month', next: 'Next month', today: 'This month' }}
             eventDisplay="block"
             dayMaxEvents={3}
-            events={events.data.map((e) => ({ id: String(e.id), title: `${e.title} · ${e.freePlaces ? `${e.freePlaces} free` : 'full'}`, start: e.startsAt, end: e.endsAt, backgroundColor: e.freePlaces ? '#5d7f6a' : '#a8322d', borderColor: 'transparent' }))}
+            events={events.data.map((e) => ({ id: String(e.id), title: e.title, start: e.startsAt, end: e.endsAt, backgroundColor: e.freePlaces ? '#5d7f6a' : '#a8322d', borderColor: 'transparent', extendedProps: { free: e.freePlaces } }))}
+            eventContent={(arg) => (
+              <div className="overflow-hidden px-0.5 text-xs leading-tight text-white">
+                <span className="font-bold">{arg.timeText}</span>
+                <span className="hidden sm:inline"> {arg.event.title}</span>
+                <span className="block">{arg.event.extendedProps.free ? `${arg.event.extendedProps.free} free` : 'full'}</span>
+              </div>
+            )}
             eventClick={(info) => {
               info.jsEvent.preventDefault();
               navigate(paths.event(Number(info.event.id)));
@@ -77,7 +85,7 @@ export function EventsPage() {
         </Card>
       )}
       {events.data && view === 'list' && (events.data.length === 0 ? (
-        <EmptyState title="No sessions match" icon="📅">{groupId || categoryId ? 'Try another group or kind of item.' : 'No group has published a date yet. Check back soon.'}</EmptyState>
+        <EmptyState title="No sessions match" icon="▦">{groupId || categoryId ? 'Try another group or kind of item.' : 'No group has published a date yet. Check back soon.'}</EmptyState>
       ) : (
         <ul className="grid gap-4 md:grid-cols-2">
           {events.data.map((e) => (

@@ -26,7 +26,7 @@ export function ManageEventPage() {
   const questions = {
     publish: { title: 'Publish this session?', message: 'It appears on the public calendar and people can book. Hours and slots are then fixed.', label: 'Publish' },
     close: { title: 'Close booking?', message: 'No new bookings or waiting-list entries are taken. Existing bookings stay.', label: 'Close booking' },
-    cancel: { title: 'Cancel this session?', message: `Everyone booked (${coming.data?.summary.bookings ?? 0} bookings) gets a cancellation mail. This cannot be undone.`, label: 'Cancel the session' },
+    cancel: { title: 'Cancel this session?', message: `Everyone booked (${coming.data?.summary.bookings ?? 0} booking${coming.data?.summary.bookings === 1 ? '' : 's'}) gets a cancellation mail. This cannot be undone.`, label: 'Cancel the session' },
   };
   const maxSkill = Math.max(1, ...(coming.data?.summary.bySkill.map((s) => s.count) ?? [1]));
 
@@ -52,7 +52,7 @@ export function ManageEventPage() {
       <div className="grid gap-4 lg:grid-cols-[1fr_20rem]">
         <Card flush className="overflow-hidden">
           <h2 className="px-5 pt-4 text-lg">Slots</h2>
-          {draft && <p className="px-5 text-sm text-ink-soft">Adjust the places of each slot, or remove a slot, before publishing.</p>}
+          {draft && <p className="px-5 text-sm text-ink-soft">Adjust the places of each slot (Enter or leaving the field saves), or remove a slot, before publishing.{action.isSuccess && <span role="status" className="ml-2 font-bold text-sage">Saved.</span>}</p>}
           <table className="mt-2 w-full text-left text-sm">
             <thead className="bg-navy/5 text-navy"><tr><th className="px-5 py-2">Time</th><th className="px-2 py-2">Places</th><th className="px-2 py-2">Booked</th><th className="px-5 py-2"><span className="sr-only">Actions</span></th></tr></thead>
             <tbody>
@@ -62,6 +62,7 @@ export function ManageEventPage() {
                   <td className="px-2 py-2">
                     {draft ? (
                       <input type="number" min={0} aria-label={`Places at ${formatTime(s.startsAt, tz)}`} defaultValue={s.capacity} className="w-20 rounded border border-ink/20 px-2 py-1"
+                        onKeyDown={(ev) => ev.key === 'Enter' && ev.currentTarget.blur()}
                         onBlur={(ev) => Number(ev.target.value) !== s.capacity && action.mutate({ method: 'PATCH', path: `/slots/${s.id}`, body: { capacity: Number(ev.target.value) } })} />
                     ) : s.capacity}
                   </td>
@@ -79,6 +80,7 @@ export function ManageEventPage() {
             <>
               <p className="mt-1"><span className="text-3xl font-extrabold text-navy">{coming.data.summary.items}</span> items in {coming.data.summary.bookings} bookings, {coming.data.summary.mains} on mains</p>
               <h3 className="mt-4 text-sm font-bold">Fixers needed, by skill</h3>
+              {coming.data.summary.bySkill.length === 0 && <p className="text-sm text-ink-soft">Nothing booked yet.</p>}
               <ul className="mt-1 space-y-1.5" aria-label="Items by skill">
                 {coming.data.summary.bySkill.map((s) => (
                   <li key={s.name} className="grid grid-cols-[6.5rem_1fr_2rem] items-center gap-2 text-sm">
@@ -97,7 +99,7 @@ export function ManageEventPage() {
 
       <section aria-labelledby="bookings">
         <h2 id="bookings" className="mb-3 text-xl">Bookings</h2>
-        {coming.data?.bookings.length === 0 && <EmptyState title="No bookings yet" icon="📋">{draft ? 'Publish the session to take bookings.' : 'Bookings appear here as people make them.'}</EmptyState>}
+        {coming.data?.bookings.length === 0 && <EmptyState title="No bookings yet" icon="☰">{draft ? 'Publish the session to take bookings.' : 'Bookings appear here as people make them.'}</EmptyState>}
         <ul className="space-y-2">
           {coming.data?.bookings.map((b) => (
             <li key={b.id} className={`rounded-xl bg-white p-4 ring-1 ring-ink/5 ${b.status === 'cancelled' ? 'opacity-60' : ''}`}>
@@ -135,6 +137,8 @@ export function ManageEventPage() {
         title={ask ? questions[ask].title : ''}
         message={ask ? questions[ask].message : ''}
         confirmLabel={ask ? questions[ask].label : ''}
+        tone={ask === 'cancel' ? 'danger' : 'primary'}
+        cancelLabel={ask === 'cancel' ? 'Keep the session' : 'Not yet'}
         busy={action.isPending}
         onCancel={() => setAsk(null)}
         onConfirm={() => ask && action.mutate({ method: 'POST', path: `/${ask}`, body: ask === 'cancel' && reason ? { reason } : {} }, { onSettled: () => { setAsk(null); setReason(''); coming.refetch(); } })}

@@ -20,7 +20,7 @@ export function GroupEventsPage() {
       <GroupTabs groupId={groupId} />
       {events.isPending && <Spinner />}
       {events.error && <Alert tone="error">{events.error.message}</Alert>}
-      {events.data?.length === 0 && <EmptyState title="No sessions yet" icon="📅">Plan the first one: pick a date, the venue and the opening hours, and Mendery cuts the slots.</EmptyState>}
+      {events.data?.length === 0 && <EmptyState title="No sessions yet" icon="▦">Plan the first one: pick a date, the venue and the opening hours, and Mendery cuts the slots.</EmptyState>}
       <ul className="space-y-3">
         {events.data?.map((e) => (
           <li key={e.id}>

@@ -49,8 +49,12 @@ export function NewEventPage() {
   let preview: string | null = null;
   try {
     if (v.date && v.from && v.to) {
-      const n = generateSlots(new Date(instant(v.date, v.from, zone)), new Date(instant(v.date, v.to, zone)), Number(v.slotMinutes), Number(v.slotCapacity)).length;
-      preview = `${n} slots of ${v.slotMinutes} minutes, ${n * Number(v.slotCapacity)} places in all.`;
+      const from = new Date(instant(v.date, v.from, zone));
+      const to = new Date(instant(v.date, v.to, zone));
+      const cut = generateSlots(from, to, Number(v.slotMinutes), Number(v.slotCapacity));
+      const n = cut.length;
+      const rest = n ? Math.round((to.getTime() - cut[n - 1].endsAt.getTime()) / 60_000) : 0;
+      preview = `${n} slots of ${v.slotMinutes} minutes, ${n * Number(v.slotCapacity)} places in all.${rest > 0 ? ` The last ${rest} minutes before closing get no slot.` : ''}`;
     }
   } catch (err) {
     preview = (err as Error).message;
@@ -58,7 +62,10 @@ export function NewEventPage() {
 
   const onSubmit = form.handleSubmit(async (values) => {
     setFormError(null);
-    if (!values.date) return form.setError('date', { message: 'Choose the date.' });
+    let missing = false;
+    if (!values.venueId) { form.setError('venueId', { message: 'Choose a venue.' }); missing = true; }
+    if (!values.date) { form.setError('date', { message: 'Choose the date.' }); missing = true; }
+    if (missing) return;
     const skillLimits = Object.fromEntries(Object.entries(values.limits).filter(([, n]) => n !== '').map(([k, n]) => [k, Number(n)]));
     try {
       const e = await create.mutateAsync({

@@ -63,14 +63,14 @@ export function GroupPeoplePage() {
         <div className="overflow-x-auto rounded-xl bg-white ring-1 ring-ink/5">
           <table className="w-full text-left text-sm">
             <thead className="bg-navy/5 text-navy">
-              <tr><th className="px-4 py-2">Name</th><th className="px-4 py-2">Role</th><th className="px-4 py-2">E-mail</th><th className="px-4 py-2"><span className="sr-only">Actions</span></th></tr>
+              <tr><th className="px-4 py-2">Name</th><th className="px-4 py-2">Role</th><th className="hidden px-4 py-2 sm:table-cell">E-mail</th><th className="px-4 py-2"><span className="sr-only">Actions</span></th></tr>
             </thead>
             <tbody>
               {active.map((m) => (
                 <tr key={m.membershipId} className="border-t border-ink/5">
                   <td className="px-4 py-2 font-semibold">{m.name}</td>
                   <td className="px-4 py-2">{ROLE_LABELS[m.role]}</td>
-                  <td className="px-4 py-2 text-ink-soft">{m.email}</td>
+                  <td className="hidden px-4 py-2 text-ink-soft sm:table-cell">{m.email}</td>
                   <td className="px-4 py-2 text-right"><button className="rounded px-2 py-1 font-semibold text-alert hover:bg-alert-light" onClick={() => setToRemove(m)}>Remove</button></td>
                 </tr>
               ))}

@@ -29,12 +29,12 @@ export function GroupSettingsPage() {
   }, [settings.data]);
   if (settings.isPending || categories.isPending) return <Spinner />;
   if (settings.error) return <Alert tone="error">{settings.error.message}</Alert>;
-  const toggle = (id: number) => setExcluded((s) => {
+  const toggle = (id: number) => { save.reset(); setExcluded((s) => {
     const n = new Set(s);
     if (n.has(id)) n.delete(id);
     else n.add(id);
     return n;
-  });
+  }); };
 
   return (
     <div>
@@ -45,7 +45,7 @@ export function GroupSettingsPage() {
           <h2 className="text-lg">House rules and what you take</h2>
           <div className="space-y-1">
             <label htmlFor="rules" className="block font-semibold">House rules (one per line)</label>
-            <textarea id="rules" rows={6} value={rules} onChange={(e) => setRules(e.target.value)} className="block w-full rounded-lg border border-ink/20 bg-white px-3 py-2.5" />
+            <textarea id="rules" rows={6} value={rules} onChange={(e) => { setRules(e.target.value); save.reset(); }} className="block w-full rounded-lg border border-ink/20 bg-white px-3 py-2.5" />
             <p className="text-sm text-ink-soft">Visitors accept these when they book.</p>
           </div>
           <fieldset>

@@ -28,11 +28,11 @@ export function confirmationMail(f: BookingMailFacts, qrText: string) {
   const mail = composeMail(f.visitorEmail, `Booked: ${f.eventTitle} — ${f.reference}`, {
     paragraphs: [
       `Hello ${f.visitorName},`,
-      `your place at ${f.eventTitle} (${f.groupName}) is booked. Your booking reference is ${f.reference}; show it, or the code below, at the reception desk.`,
+      `your place at ${f.eventTitle} (${f.groupName}) is booked. Your booking reference is ${f.reference}: show it, or the QR code in this mail, at the reception desk.`,
       `When: ${when(f)}.`,
       `Where: ${where(f)}.`,
       `You are bringing: ${f.items.join('; ')}.`,
-      `Please bring: ${WHAT_TO_BRING.map((w) => w.replace(/\.$/, '')).join('; ')}.`,
+      `Please bring: ${WHAT_TO_BRING.map((w, i) => (i ? w[0].toLowerCase() + w.slice(1) : w).replace(/\.$/, '')).join('; ')}.`,
       ...DISCLAIMER,
     ],
     image: { cid: 'booking-qr', alt: `Booking ${f.reference}` },

@@ -73,7 +73,11 @@ async function takeSkillPlaces(tx: Tx, slotId: number, limits: Record<string, nu
       .update(slotSkillCounts)
       .set({ booked: sql`${slotSkillCounts.booked} + ${n}` })
       .where(and(eq(slotSkillCounts.slotId, slotId), eq(slotSkillCounts.skill, skill), sql`${slotSkillCounts.booked} + ${n} <= ${limit}`));
-    if (affectedRows(res) !== 1) throw new HttpError(409, 'skill-full', `That time already has as many ${skill} items as the fixers can take. Choose another time.`);
+    if (affectedRows(res) !== 1) {
+      const [row] = await tx.select().from(slotSkillCounts).where(and(eq(slotSkillCounts.slotId, slotId), eq(slotSkillCounts.skill, skill)));
+      const left = Math.max(0, limit - (row?.booked ?? 0));
+      throw new HttpError(409, 'skill-full', `At this time the fixers can take ${limit} ${skill} item${limit === 1 ? '' : 's'}; ${left === 0 ? 'none is left' : `only ${left} ${left === 1 ? 'is' : 'are'} left`} and you are booking ${n}. Choose another time${n > 1 ? ', or book fewer of them here' : ''}.`);
+    }
   }
 }
 

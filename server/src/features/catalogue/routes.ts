@@ -26,7 +26,8 @@ export function catalogueRoutes(ctx: AppContext) {
   const r = Router();
   const { db } = ctx.database;
   r.get('/categories', async (_req, res) => {
-    res.setHeader('Cache-Control', 'public, max-age=60');
+    // Admins edit these; a stale copy would hide their edit.
+    res.setHeader('Cache-Control', 'no-cache');
     res.json((await listCategories(db)).map(toCategoryDto));
   });
   r.patch('/categories/:id', requireAdmin, async (req, res) => {

@@ -132,6 +132,8 @@ export async function changeStatus(ctx: AppContext, id: number, action: keyof ty
         }));
       }
       await tx.update(bookings).set({ status: 'cancelled', cancelledAt: new Date() }).where(and(eq(bookings.eventId, id), eq(bookings.status, 'confirmed')));
+      // Nothing is booked or held at a cancelled event.
+      await tx.update(slots).set({ booked: 0, held: 0 }).where(eq(slots.eventId, id));
       await tx.update(waitlistEntries).set({ status: 'withdrawn' }).where(and(eq(waitlistEntries.eventId, id), inArray(waitlistEntries.status, ['waiting', 'offered'])));
     }
   });

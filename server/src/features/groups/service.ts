@@ -1,7 +1,7 @@
 import { and, asc, eq } from 'drizzle-orm';
 import type { AppContext } from '../../context';
 import { memberships, repairGroups, users } from '../../db/schema/index';
-import { notFound } from '../../http/errors';
+import { HttpError, notFound } from '../../http/errors';
 import { enqueueMail } from '../../mail/outbox';
 import { composeMail } from '../../mail/templates';
 
@@ -44,5 +44,11 @@ export async function approveMember(ctx: AppContext, groupId: number, membership
 
 export async function removeMember(ctx: AppContext, groupId: number, membershipId: number) {
   const m = await membershipIn(ctx, groupId, membershipId);
-  await ctx.database.db.delete(memberships).where(eq(memberships.id, m.id));
+  await ctx.database.db.transaction(async (tx) => {
+    if (m.role === 'organiser' && m.status === 'active') {
+      const organisers = await tx.select({ id: memberships.id }).from(memberships).where(and(eq(memberships.groupId, groupId), eq(memberships.role, 'organiser'), eq(memberships.status, 'active'))).for('update');
+      if (organisers.length <= 1) throw new HttpError(409, 'last-organiser', 'A group needs at least one organiser. Make someone else organiser first.');
+    }
+    await tx.delete(memberships).where(eq(memberships.id, m.id));
+  });
 }

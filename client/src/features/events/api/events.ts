@@ -69,7 +69,7 @@ const qs = (o: Record<string, unknown>) => {
 
 export const useEvents = (f: EventFilters) => useQuery({ queryKey: eventKeys.list(f), queryFn: () => api<EventSummary[]>('GET', `/api/events${qs({ ...f, from: new Date(Date.now() - 86400_000).toISOString() })}`) });
 export const eventQuery = (id: number) => queryOptions({ queryKey: eventKeys.detail(id), queryFn: () => api<EventDetail>('GET', `/api/events/${id}`) });
-export const useEvent = (id: number) => useQuery(eventQuery(id));
+export const useEvent = (id: number) => useQuery({ ...eventQuery(id), enabled: id > 0 });
 export const useGroupEvents = (groupId: number) => useQuery({ queryKey: eventKeys.group(groupId), queryFn: () => api<EventSummary[]>('GET', `/api/groups/${groupId}/events`) });
 export const useCategories = () => useQuery({ queryKey: ['categories'], queryFn: () => api<Category[]>('GET', '/api/categories'), staleTime: 5 * 60_000 });
 
