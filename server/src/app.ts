@@ -15,6 +15,8 @@ import { catalogueRoutes } from './features/catalogue/routes';
 import { venueRoutes } from './features/venues/routes';
 import { eventRoutes } from './features/events/routes';
 import { bookingRoutes } from './features/bookings/routes';
+import { volunteerRoutes } from './features/volunteers/routes';
+import { triageRoutes } from './features/triage/routes';
 
 /** Builds the Express app: middleware → routers → 404 → error handler. `listen` is the caller's business. */
 export function createApp(ctx: AppContext) {
@@ -31,7 +33,7 @@ export function createApp(ctx: AppContext) {
           defaultSrc: ["'self'"],
           imgSrc: ["'self'", 'data:', 'blob:'],
           styleSrc: ["'self'", "'unsafe-inline'"],
-          fontSrc: ["'self'"],
+          fontSrc: ["'self'", 'data:'],
           connectSrc: ["'self'"],
           frameSrc: ["'self'"],
           upgradeInsecureRequests: null,
@@ -62,6 +64,8 @@ export function createApp(ctx: AppContext) {
   api.use(venueRoutes(ctx));
   api.use(eventRoutes(ctx));
   api.use(bookingRoutes(ctx));
+  api.use(volunteerRoutes(ctx));
+  api.use(triageRoutes(ctx));
   api.use(apiNotFound);
   app.use('/api', api);
 

@@ -3,3 +3,4 @@ export * from './groups';
 export * from './platform';
 export * from './categories';
 export * from './events';
+export * from './volunteers';

@@ -1,0 +1,40 @@
+import { Router, type Request } from 'express';
+import { z } from 'zod';
+import { lockSchema, placementSchema, runSchema } from '../../../../shared/schemas/volunteers';
+import type { AppContext } from '../../context';
+import { requireGroupRole, requireUser } from '../../auth/guards';
+import { body, params } from '../../http/validate';
+import { eventGroupId } from '../events/service';
+import * as t from './service';
+
+const itemParams = z.object({ id: z.coerce.number().int().positive(), itemId: z.coerce.number().int().positive() });
+
+/** Only the event's organisers run the engine or move items; a fixer reads their own queue. */
+export function triageRoutes(ctx: AppContext) {
+  const r = Router();
+  const organiser = requireGroupRole(['organiser'], (req: Request) => eventGroupId(ctx.database.db, Number(req.params.id)));
+  const id = (req: Request) => params(req, z.object({ id: z.coerce.number().int().positive() })).id;
+
+  r.post('/events/:id/triage', organiser, async (req, res) => {
+    const { slotId } = body(req, runSchema);
+    res.status(201).json(await t.runTriage(ctx, id(req), slotId, req.user!.id));
+  });
+  r.get('/events/:id/board', organiser, async (req, res) => res.json(await t.board(ctx, id(req))));
+  r.get('/events/:id/triage-runs/:runId', organiser, async (req, res) => res.json(await t.runDetail(ctx, id(req), Number(req.params.runId))));
+  r.put('/events/:id/items/:itemId/placement', organiser, async (req, res) => {
+    const p = params(req, itemParams);
+    res.json(await t.placeByHand(ctx, p.id, p.itemId, body(req, placementSchema)));
+  });
+  r.delete('/events/:id/items/:itemId/placement', organiser, async (req, res) => {
+    const p = params(req, itemParams);
+    await t.unplace(ctx, p.id, p.itemId);
+    res.status(204).end();
+  });
+  r.post('/events/:id/items/:itemId/lock', organiser, async (req, res) => {
+    const p = params(req, itemParams);
+    await t.setLock(ctx, p.id, p.itemId, body(req, lockSchema).locked);
+    res.json({ ok: true });
+  });
+  r.get('/me/queue', requireUser, async (req, res) => res.json(await t.myQueue(ctx, req.user!.id)));
+  return r;
+}

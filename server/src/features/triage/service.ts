@@ -1,0 +1,170 @@
+import { and, asc, desc, eq, inArray } from 'drizzle-orm';
+import { itemNeeds, checkPlacement } from '../../../../shared/triage/needs';
+import { triage, type TriageInput, type TriageResult } from '../../../../shared/triage/index';
+import { dayPlan } from '../../../../shared/triage/day-plan';
+import type { AppContext } from '../../context';
+import { bookingItems, bookings, categories, events, itemAssignments, itemPhotos, repairGroups, shifts, slots, triageRuns, users } from '../../db/schema/index';
+import { HttpError, notFound } from '../../http/errors';
+import { skillsOf } from '../volunteers/service';
+import { eventLayout } from './benches';
+
+/** Everything the board shows and the engine needs, read in a handful of queries. */
+async function loadEvent(ctx: AppContext, eventId: number) {
+  const { db } = ctx.database;
+  const [e] = await db.select({ event: events, group: repairGroups }).from(events).innerJoin(repairGroups, eq(repairGroups.id, events.groupId)).where(eq(events.id, eventId));
+  if (!e) throw notFound('That event');
+  const slotRows = await db.select().from(slots).where(eq(slots.eventId, eventId)).orderBy(asc(slots.startsAt));
+  const items = await db
+    .select({ id: bookingItems.id, bookingId: bookings.id, reference: bookings.reference, visitorName: bookings.visitorName, bookedAt: bookings.createdAt, slotId: bookings.slotId, categoryName: categories.name, skill: categories.skill, equipment: categories.equipment, catMains: categories.mains, minutes: categories.repairMinutes, brand: bookingItems.brand, model: bookingItems.model, fault: bookingItems.fault, mains: bookingItems.mains, position: bookingItems.position })
+    .from(bookingItems)
+    .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
+    .innerJoin(categories, eq(categories.id, bookingItems.categoryId))
+    .where(and(eq(bookings.eventId, eventId), eq(bookings.status, 'confirmed')))
+    .orderBy(asc(bookings.createdAt), asc(bookingItems.position));
+  const photos = items.length ? await db.select({ id: itemPhotos.id, itemId: itemPhotos.itemId }).from(itemPhotos).where(inArray(itemPhotos.itemId, items.map((i) => i.id))) : [];
+  const fixers = await db.select({ shift: shifts, name: users.name }).from(shifts).innerJoin(users, eq(users.id, shifts.userId)).where(and(eq(shifts.eventId, eventId), eq(shifts.coming, true))).orderBy(asc(users.name));
+  const skills = await skillsOf(db, fixers.map((f) => f.shift.userId));
+  const benches = await eventLayout(ctx, eventId);
+  const placed = await db.select().from(itemAssignments).where(eq(itemAssignments.eventId, eventId));
+  const slotIndex = new Map(slotRows.map((s, i) => [s.id, i]));
+  const enriched = items.map((i, order) => ({
+    ...i,
+    mains: Boolean(i.mains),
+    slotIndex: slotIndex.get(i.slotId) ?? 0,
+    order,
+    needs: itemNeeds({ skill: i.skill, equipment: i.equipment, mains: Boolean(i.catMains) }, { mains: Boolean(i.mains) }),
+    photoIds: photos.filter((p) => p.itemId === i.id).map((p) => p.id),
+  }));
+  return { event: e.event, group: e.group, slots: slotRows, items: enriched, fixers: fixers.map((f) => ({ userId: f.shift.userId, name: f.name, startsAt: f.shift.startsAt, endsAt: f.shift.endsAt, benchId: f.shift.benchId, skills: skills.get(f.shift.userId)! })), benches, placed };
+}
+
+type Loaded = Awaited<ReturnType<typeof loadEvent>>;
+
+/** Booked items are served in the order of their slot, then of booking. */
+const priorityOf = (i: Loaded['items'][number]) => i.slotIndex * 1000 + i.order;
+
+/**
+ * Runs the engine for the event (or one slot). Locked placements are kept: their items leave the round and the
+ * fixers and benches they use lose that much room. The run is stored with its exact input.
+ */
+export async function runTriage(ctx: AppContext, eventId: number, slotId: number | undefined, userId: number) {
+  const data = await loadEvent(ctx, eventId);
+  const slot = slotId ? data.slots.find((s) => s.id === slotId) : undefined;
+  if (slotId && !slot) throw new HttpError(400, 'invalid', 'Some fields need attention.', { slotId: 'That slot is not part of this event.' });
+  const locked = data.placed.filter((p) => p.locked);
+  const lockedItems = new Set(locked.map((p) => p.itemId));
+  const pool = data.items.filter((i) => !lockedItems.has(i.id) && (!slot || i.slotId === slot.id));
+  const present = data.fixers.filter((f) => !slot || (f.startsAt <= slot.startsAt && f.endsAt >= slot.endsAt));
+  const useOf = (key: 'userId' | 'benchId', id: number) => locked.filter((p) => p[key] === id).length;
+  const input: TriageInput = {
+    items: pool.map((i) => ({ id: String(i.id), skill: i.needs.skill, minLevel: i.needs.minLevel, equipment: i.needs.equipment, priority: priorityOf(i) })),
+    volunteers: present.map((f) => ({ id: String(f.userId), name: f.name, skills: f.skills, capacity: Math.max(0, 1 - useOf('userId', f.userId)), ...(f.benchId ? { benchId: String(f.benchId) } : {}) })),
+    benches: data.benches.map((b) => ({ id: String(b.id), name: b.name, equipment: b.equipment, seats: Math.max(0, b.seats - useOf('benchId', b.id)) })),
+  };
+  const result = triage(input);
+  const { db } = ctx.database;
+  const runId = await db.transaction(async (tx) => {
+    const [{ id }] = await tx.insert(triageRuns).values({ eventId, slotId: slot?.id ?? null, input, result, lockedKept: locked.length, createdBy: userId }).$returningId();
+    const poolIds = pool.map((i) => i.id);
+    if (poolIds.length) await tx.delete(itemAssignments).where(and(eq(itemAssignments.eventId, eventId), eq(itemAssignments.locked, false), inArray(itemAssignments.itemId, poolIds)));
+    if (result.assignments.length) {
+      await tx.insert(itemAssignments).values(result.assignments.map((a) => ({ itemId: Number(a.itemId), eventId, userId: Number(a.volunteerId), benchId: Number(a.benchId), source: 'engine' as const, runId: id, locked: false })));
+    }
+    return id;
+  });
+  return { runId, assigned: result.assignments.length, unassigned: result.unassigned.length, lockedKept: locked.length };
+}
+
+/** The triage board: benches and fixers with their items, the unplaced items with reasons, the day plan. */
+export async function board(ctx: AppContext, eventId: number) {
+  const data = await loadEvent(ctx, eventId);
+  const { db } = ctx.database;
+  const runs = await db.select({ id: triageRuns.id, slotId: triageRuns.slotId, createdAt: triageRuns.createdAt, result: triageRuns.result, lockedKept: triageRuns.lockedKept }).from(triageRuns).where(eq(triageRuns.eventId, eventId)).orderBy(desc(triageRuns.id)).limit(20);
+  const latest = runs[0]?.result as TriageResult | undefined;
+  const reasons = new Map((latest?.unassigned ?? []).map((u) => [Number(u.itemId), u]));
+  const placedBy = new Map(data.placed.map((p) => [p.itemId, p]));
+  const load = (key: 'userId' | 'benchId', id: number) => data.placed.filter((p) => p[key] === id).length;
+  const plan = dayPlan({
+    slots: data.slots.map((s) => ({ id: String(s.id), startsAt: s.startsAt, endsAt: s.endsAt })),
+    items: data.items.map((i) => ({ id: String(i.id), slotIndex: i.slotIndex, skill: i.needs.skill, minLevel: i.needs.minLevel, equipment: i.needs.equipment, minutes: i.minutes, order: i.order })),
+    volunteers: data.fixers.map((f) => ({ id: String(f.userId), skills: f.skills, from: f.startsAt, to: f.endsAt, ...(f.benchId ? { benchId: String(f.benchId) } : {}) })),
+    benches: data.benches.map((b) => ({ id: String(b.id), equipment: b.equipment, seats: b.seats })),
+  });
+  const items = data.items.map((i) => {
+    const p = placedBy.get(i.id);
+    const fixer = p && data.fixers.find((f) => f.userId === p.userId);
+    const bench = p && data.benches.find((b) => b.id === p.benchId);
+    const warnings = p && fixer && bench
+      ? checkPlacement(i.needs, { name: fixer.name, skills: fixer.skills, benchId: fixer.benchId, capacity: 1, assigned: load('userId', fixer.userId) - 1 }, { id: bench.id, name: bench.name, equipment: bench.equipment, seats: bench.seats, assigned: load('benchId', bench.id) - 1 })
+      : p ? [{ code: 'missing-skill' as const, message: 'The fixer is no longer coming or the bench was removed.' }] : [];
+    return {
+      id: i.id, reference: i.reference, visitorName: i.visitorName, bookedAt: i.bookedAt, slotId: i.slotId, categoryName: i.categoryName, brand: i.brand, model: i.model, fault: i.fault, mains: i.mains,
+      minutes: i.minutes, needs: i.needs, photoIds: i.photoIds,
+      placement: p ? { userId: p.userId, benchId: p.benchId, locked: Boolean(p.locked), source: p.source } : null,
+      warnings,
+      reason: p ? null : (reasons.get(i.id) ?? null),
+      estimatedStart: plan.start[String(i.id)],
+    };
+  });
+  return {
+    event: { id: data.event.id, title: data.event.title, status: data.event.status, startsAt: data.event.startsAt, endsAt: data.event.endsAt, groupId: data.group.id, groupName: data.group.name, timeZone: data.group.timeZone },
+    slots: data.slots.map((s) => ({ id: s.id, startsAt: s.startsAt, endsAt: s.endsAt })),
+    benches: data.benches.map((b) => ({ id: b.id, name: b.name, seats: b.seats, equipment: b.equipment })),
+    fixers: data.fixers,
+    items,
+    runs: runs.map((r) => ({ id: r.id, slotId: r.slotId, createdAt: r.createdAt, assigned: (r.result as TriageResult).assignments.length, unassigned: (r.result as TriageResult).unassigned.length, lockedKept: r.lockedKept })),
+  };
+}
+
+/** An organiser's hand: placed where they say, locked by default, with a warning for each rule it breaks. */
+export async function placeByHand(ctx: AppContext, eventId: number, itemId: number, to: { userId: number; benchId: number; locked: boolean }) {
+  const data = await loadEvent(ctx, eventId);
+  const item = data.items.find((i) => i.id === itemId);
+  if (!item) throw notFound('That item');
+  const fixer = data.fixers.find((f) => f.userId === to.userId);
+  if (!fixer) throw new HttpError(400, 'invalid', 'Some fields need attention.', { userId: 'That fixer has not said they are coming.' });
+  const bench = data.benches.find((b) => b.id === to.benchId);
+  if (!bench) throw new HttpError(400, 'invalid', 'Some fields need attention.', { benchId: 'That bench is not set out at this event.' });
+  const others = data.placed.filter((p) => p.itemId !== itemId);
+  const warnings = checkPlacement(item.needs, { name: fixer.name, skills: fixer.skills, benchId: fixer.benchId, capacity: 1, assigned: others.filter((p) => p.userId === fixer.userId).length }, { id: bench.id, name: bench.name, equipment: bench.equipment, seats: bench.seats, assigned: others.filter((p) => p.benchId === bench.id).length });
+  await ctx.database.db
+    .insert(itemAssignments)
+    .values({ itemId, eventId, userId: to.userId, benchId: to.benchId, locked: to.locked, source: 'hand', runId: null })
+    .onDuplicateKeyUpdate({ set: { userId: to.userId, benchId: to.benchId, locked: to.locked, source: 'hand', runId: null, updatedAt: new Date() } });
+  return { warnings };
+}
+
+export async function setLock(ctx: AppContext, eventId: number, itemId: number, locked: boolean) {
+  const res = await ctx.database.db.update(itemAssignments).set({ locked }).where(and(eq(itemAssignments.itemId, itemId), eq(itemAssignments.eventId, eventId)));
+  if (((res as unknown as [{ affectedRows: number }])[0]?.affectedRows ?? 0) === 0) throw new HttpError(409, 'not-placed', 'Place the item before locking it.');
+}
+
+export async function unplace(ctx: AppContext, eventId: number, itemId: number) {
+  await ctx.database.db.delete(itemAssignments).where(and(eq(itemAssignments.itemId, itemId), eq(itemAssignments.eventId, eventId)));
+}
+
+export async function runDetail(ctx: AppContext, eventId: number, runId: number) {
+  const [r] = await ctx.database.db.select().from(triageRuns).where(and(eq(triageRuns.id, runId), eq(triageRuns.eventId, eventId)));
+  if (!r) throw notFound('That run');
+  return r;
+}
+
+/** A fixer's own queue across upcoming events, in the order the items come. */
+export async function myQueue(ctx: AppContext, userId: number) {
+  const { db } = ctx.database;
+  const rows = await db
+    .select({ itemId: bookingItems.id, eventId: events.id, eventTitle: events.title, timeZone: repairGroups.timeZone, slotStartsAt: slots.startsAt, reference: bookings.reference, visitorName: bookings.visitorName, categoryName: categories.name, minutes: categories.repairMinutes, brand: bookingItems.brand, model: bookingItems.model, fault: bookingItems.fault, mains: bookingItems.mains, benchId: itemAssignments.benchId, locked: itemAssignments.locked })
+    .from(itemAssignments)
+    .innerJoin(bookingItems, eq(bookingItems.id, itemAssignments.itemId))
+    .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
+    .innerJoin(slots, eq(slots.id, bookings.slotId))
+    .innerJoin(events, eq(events.id, bookings.eventId))
+    .innerJoin(repairGroups, eq(repairGroups.id, events.groupId))
+    .innerJoin(categories, eq(categories.id, bookingItems.categoryId))
+    .where(and(eq(itemAssignments.userId, userId), eq(bookings.status, 'confirmed'), inArray(events.status, ['published', 'closed'])))
+    .orderBy(asc(slots.startsAt), asc(bookings.createdAt));
+  const ids = rows.map((r) => r.itemId);
+  const photos = ids.length ? await db.select({ id: itemPhotos.id, itemId: itemPhotos.itemId }).from(itemPhotos).where(inArray(itemPhotos.itemId, ids)) : [];
+  const benchNames = new Map((await Promise.all([...new Set(rows.map((r) => r.eventId))].map((e) => eventLayout(ctx, e)))).flat().map((b) => [b.id, b.name]));
+  return rows.map((r) => ({ ...r, mains: Boolean(r.mains), locked: Boolean(r.locked), visitorName: r.visitorName.split(' ')[0], benchName: benchNames.get(r.benchId) ?? '', photoIds: photos.filter((p) => p.itemId === r.itemId).map((p) => p.id) }));
+}
