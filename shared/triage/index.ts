@@ -68,11 +68,13 @@ interface Plan {
  */
 export function triage(input: TriageInput): TriageResult {
   const items = [...input.items].sort((a, b) => a.priority - b.priority || byId(a, b));
-  const volunteers = [...input.volunteers].sort(byId).filter((v) => capacityOf(v) > 0);
-  const benches = [...input.benches].sort(byId).filter((b) => b.seats > 0);
+  const allBenches = [...input.benches].sort(byId);
+  const allBenchIds = new Set(allBenches.map((b) => b.id));
+  // Present: not seated at a bench that is missing from the round. Working: present with room left.
+  const present = [...input.volunteers].sort(byId).filter((v) => v.benchId === undefined || allBenchIds.has(v.benchId));
+  const benches = allBenches.filter((b) => b.seats > 0);
   const benchIds = new Set(benches.map((b) => b.id));
-  // A fixer seated at a bench that is not set out this round cannot work.
-  const working = volunteers.filter((v) => v.benchId === undefined || benchIds.has(v.benchId));
+  const working = present.filter((v) => capacityOf(v) > 0 && (v.benchId === undefined || benchIds.has(v.benchId)));
   const priorities = [...new Set(items.map((i) => i.priority))].sort((a, b) => a - b);
   const rank = new Map(priorities.map((p, i) => [p, i]));
   const weight = 2 * items.length + 1;
@@ -96,7 +98,7 @@ export function triage(input: TriageInput): TriageResult {
   for (const item of items) {
     const p = plan.pairs.get(item.id);
     if (p) assignments.push({ itemId: item.id, volunteerId: p[0], benchId: p[1] });
-    else unassigned.push({ itemId: item.id, ...explain(item, working, benches) });
+    else unassigned.push({ itemId: item.id, ...explain(item, present, allBenches) });
   }
   return { assignments, unassigned };
 }
@@ -221,5 +223,5 @@ function explain(item: TriageItem, volunteers: TriageVolunteer[], benches: Triag
     const who = skilled.map((v) => v.name ?? v.id);
     return { reason: 'no-pair', detail: `${list(who)} ${who.length > 1 ? 'have' : 'has'} the ${item.skill} skill but ${who.length > 1 ? 'are' : 'is'} seated at a bench without ${list(item.equipment.map(kit))}; move a fixer or the kit.` };
   }
-  return { reason: 'capacity', detail: `A fixer and a bench for it exist, but they are busy with items served first this round; it waits for the next round.` };
+  return { reason: 'capacity', detail: `A fixer and a bench for it exist, but they are busy with other items (served first, or locked there); it waits for the next round.` };
 }

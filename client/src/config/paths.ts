@@ -23,4 +23,9 @@ export const paths = {
   newEvent: (groupId: number) => `/groups/${groupId}/events/new`,
   groupSettings: (groupId: number) => `/groups/${groupId}/settings`,
   adminCategories: () => '/admin/categories',
+  rota: (id: number) => `/events/${id}/rota`,
+  board: (id: number) => `/events/${id}/board`,
+  benches: (id: number) => `/events/${id}/benches`,
+  skillsMatrix: (groupId: number) => `/groups/${groupId}/skills`,
+  mySkills: () => '/me/skills',
 };

@@ -6,6 +6,7 @@ export function GroupTabs({ groupId }: { groupId: number }) {
   const tabs = [
     { to: paths.groupEvents(groupId), label: 'Sessions' },
     { to: paths.groupPeople(groupId), label: 'People' },
+    { to: paths.skillsMatrix(groupId), label: 'Skills' },
     { to: paths.groupSettings(groupId), label: 'Rules and venues' },
   ];
   return (

@@ -2,6 +2,7 @@ import { useState } from 'react';
 import { Link, useParams } from 'react-router';
 import { SKILL_LABELS, type Skill } from '../../../../shared/constants';
 import { formatDay, formatTime, formatTimeRange } from '../../../../shared/format';
+import { EventTabs } from '../../components/layouts/event-tabs';
 import { Button } from '../../components/ui/button';
 import { ConfirmDialog } from '../../components/ui/confirm-dialog';
 import { Alert, Card, EmptyState, Spinner } from '../../components/ui/feedback';
@@ -40,6 +41,7 @@ export function ManageEventPage() {
         </div>
         <p className="font-bold text-copper-dark">{formatDay(e.startsAt, tz)} · {formatTimeRange(e.startsAt, e.endsAt, tz)} · {e.venue.name}</p>
       </div>
+      <EventTabs eventId={e.id} />
 
       {action.error && <Alert tone="error">{action.error.message}</Alert>}
       <div className="flex flex-wrap gap-2">

@@ -1,0 +1,62 @@
+import { useEffect, useState } from 'react';
+import { useParams } from 'react-router';
+import { EQUIPMENT, EQUIPMENT_LABELS } from '../../../../shared/constants';
+import { EventTabs } from '../../components/layouts/event-tabs';
+import { Button } from '../../components/ui/button';
+import { Alert, Card, Spinner } from '../../components/ui/feedback';
+import { useEvent } from '../../features/events/api/events';
+import { useEventBenches, useSaveBenches, type Bench } from '../../features/triage/api/triage';
+import { ApiError } from '../../lib/api';
+
+/** This session's benches, copied from the venue's usual layout the first time; changes stay with the session. */
+export function BenchesPage() {
+  const id = Number(useParams().eventId);
+  const event = useEvent(id);
+  const benches = useEventBenches(id);
+  const save = useSaveBenches(id);
+  const [rows, setRows] = useState<Bench[]>([]);
+  useEffect(() => {
+    if (benches.data) setRows(benches.data.map((b) => ({ id: b.id, name: b.name, seats: b.seats, equipment: b.equipment })));
+  }, [benches.data]);
+  if (benches.isPending || event.isPending) return <Spinner />;
+  if (benches.error) return <Alert tone="error">{benches.error.message}</Alert>;
+  const set = (i: number, patch: Partial<Bench>) => {
+    save.reset();
+    setRows((r) => r.map((b, k) => (k === i ? { ...b, ...patch } : b)));
+  };
+  const fields = save.error instanceof ApiError ? save.error.fields : undefined;
+  return (
+    <div>
+      <h1 className="text-2xl sm:text-3xl">{event.data?.title}</h1>
+      <p className="mb-3 font-bold text-copper-dark">Benches</p>
+      <EventTabs eventId={id} />
+      <div className="space-y-3">
+        {rows.map((b, i) => (
+          <Card key={b.id ?? `new-${i}`} className="grid gap-3 sm:grid-cols-[14rem_6rem_1fr_auto] sm:items-start">
+            <label className="text-sm font-semibold">Name<input value={b.name} onChange={(e) => set(i, { name: e.target.value })} className="mt-1 block w-full rounded border border-ink/20 px-2 py-1.5" /></label>
+            <label className="text-sm font-semibold">Seats<input type="number" min={1} value={b.seats} onChange={(e) => set(i, { seats: Number(e.target.value) })} className="mt-1 block w-full rounded border border-ink/20 px-2 py-1.5" /></label>
+            <fieldset>
+              <legend className="text-sm font-semibold">Kit</legend>
+              <div className="mt-1 flex flex-wrap gap-x-4 gap-y-1">
+                {EQUIPMENT.map((e) => (
+                  <label key={e} className="flex items-center gap-1.5 text-sm">
+                    <input type="checkbox" className="size-4 accent-copper" checked={b.equipment.includes(e)} onChange={(ev) => set(i, { equipment: ev.target.checked ? [...b.equipment, e] : b.equipment.filter((x) => x !== e) })} />
+                    {EQUIPMENT_LABELS[e]}
+                  </label>
+                ))}
+              </div>
+            </fieldset>
+            <Button variant="quiet" onClick={() => setRows((r) => r.filter((_, k) => k !== i))}>Remove</Button>
+          </Card>
+        ))}
+        {rows.length === 0 && <Alert tone="info">No benches yet. Add the tables you will set out, with the kit on each.</Alert>}
+      </div>
+      <div className="mt-4 flex flex-wrap items-center gap-3">
+        <Button variant="secondary" onClick={() => setRows((r) => [...r, { name: `Bench ${r.length + 1}`, seats: 2, equipment: [] }])}>+ Add a bench</Button>
+        <Button busy={save.isPending} onClick={() => save.mutate(rows)}>Save benches</Button>
+        {save.isSuccess && <span role="status" className="font-bold text-sage">Saved.</span>}
+      </div>
+      {save.error && <div className="mt-3"><Alert tone="error">{fields ? Object.values(fields).join(' ') : save.error.message}</Alert></div>}
+    </div>
+  );
+}

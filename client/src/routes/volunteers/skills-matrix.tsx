@@ -1,0 +1,69 @@
+import { useMemo, useState } from 'react';
+import { useParams } from 'react-router';
+import { SKILL_LABELS, type Skill } from '../../../../shared/constants';
+import { GroupTabs } from '../../components/layouts/group-tabs';
+import { Alert, Spinner } from '../../components/ui/feedback';
+import { useSkillsMatrix } from '../../features/volunteers/api/volunteers';
+import { useGroupSettings } from '../../features/events/api/organiser';
+
+const LEVEL = ['', 'learning', 'capable', 'expert'];
+const TONE = ['', 'bg-sage-light text-sage', 'bg-sage/60 text-white', 'bg-sage text-white'];
+
+/** Volunteers × skills: sort by a skill to find the experts, filter by name or by a skill someone must have. */
+export function SkillsMatrixPage() {
+  const groupId = Number(useParams().groupId);
+  const group = useGroupSettings(groupId);
+  const matrix = useSkillsMatrix(groupId);
+  const [sortBy, setSortBy] = useState<string>('name');
+  const [filter, setFilter] = useState('');
+  const [needs, setNeeds] = useState('');
+  const rows = useMemo(() => {
+    const list = (matrix.data?.volunteers ?? []).filter((v) => v.name.toLowerCase().includes(filter.toLowerCase()) && (!needs || (v.skills[needs] ?? 0) > 0));
+    return [...list].sort((a, b) => (sortBy === 'name' ? a.name.localeCompare(b.name) : (b.skills[sortBy] ?? 0) - (a.skills[sortBy] ?? 0) || a.name.localeCompare(b.name)));
+  }, [matrix.data, filter, needs, sortBy]);
+  if (matrix.isPending) return <Spinner />;
+  if (matrix.error) return <Alert tone="error">{matrix.error.message}</Alert>;
+  const skills = matrix.data.skills;
+  return (
+    <div>
+      <h1 className="mb-2 text-2xl sm:text-3xl">{group.data?.name ?? 'Skills'}</h1>
+      <GroupTabs groupId={groupId} />
+      <div className="mb-3 flex flex-wrap gap-3">
+        <label className="text-sm font-semibold">Name<input value={filter} onChange={(e) => setFilter(e.target.value)} placeholder="Filter…" className="mt-1 block rounded-lg border border-ink/20 px-3 py-2" /></label>
+        <label className="text-sm font-semibold">Has the skill
+          <select value={needs} onChange={(e) => setNeeds(e.target.value)} className="mt-1 block rounded-lg border border-ink/20 px-3 py-2">
+            <option value="">Any</option>
+            {skills.map((s) => <option key={s} value={s}>{SKILL_LABELS[s as Skill]}</option>)}
+          </select>
+        </label>
+      </div>
+      <div className="overflow-x-auto rounded-xl bg-white ring-1 ring-ink/5">
+        <table className="w-full text-center text-sm">
+          <thead className="bg-navy/5 text-navy">
+            <tr>
+              <th className="sticky left-0 bg-[#eef0f3] px-3 py-2 text-left"><button onClick={() => setSortBy('name')} aria-pressed={sortBy === 'name'} className="font-bold underline-offset-2 hover:underline">Volunteer</button></th>
+              {skills.map((s) => (
+                <th key={s} className="px-2 py-2" aria-sort={sortBy === s ? 'descending' : 'none'}>
+                  <button onClick={() => setSortBy(s)} className={`font-bold hover:underline ${sortBy === s ? 'text-copper-dark' : ''}`}>{SKILL_LABELS[s as Skill]}{sortBy === s ? ' ↓' : ''}</button>
+                </th>
+              ))}
+            </tr>
+          </thead>
+          <tbody>
+            {rows.map((v) => (
+              <tr key={v.userId} className="border-t border-ink/5">
+                <th className="sticky left-0 bg-white px-3 py-2 text-left font-semibold">{v.name}<span className="block text-xs font-normal text-ink-soft">{v.roles.join(', ')}</span></th>
+                {skills.map((s) => {
+                  const l = v.skills[s] ?? 0;
+                  return <td key={s} className="px-1 py-1">{l ? <span className={`inline-block min-w-16 rounded px-1.5 py-0.5 text-xs font-bold ${TONE[l]}`} title={LEVEL[l]}>{l} {LEVEL[l]}</span> : <span className="text-ink-soft">·</span>}</td>;
+                })}
+              </tr>
+            ))}
+          </tbody>
+        </table>
+        {rows.length === 0 && <p className="p-4 text-sm text-ink-soft">Nobody matches.</p>}
+      </div>
+      <p className="mt-2 text-sm text-ink-soft">Levels: 1 learning, 2 capable, 3 expert. Volunteers set their own skills on their page.</p>
+    </div>
+  );
+}

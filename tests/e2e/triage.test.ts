@@ -1,0 +1,95 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Browser, Page } from 'playwright-core';
+import { DEMO_PASSWORD } from '../../shared/constants';
+import { seedDemo } from '../../server/src/seed/demo';
+import type { RunningServer } from '../../server/src/server';
+import { DESKTOP, launchBrowser, PHONE, shot } from '../support/browser';
+import { createTestDatabase, type TestDatabase } from '../support/db';
+import { startTestServer, TEST_SECRET } from '../support/server';
+
+let db: TestDatabase;
+let server: RunningServer;
+let browser: Browser;
+
+beforeAll(async () => {
+  db = await createTestDatabase();
+  await seedDemo(db.db, { linkSecret: TEST_SECRET });
+  server = await startTestServer(db.url);
+  browser = await launchBrowser();
+});
+afterAll(async () => {
+  await browser?.close();
+  await server?.stop();
+  await db?.drop();
+});
+
+async function signIn(page: Page, who: string) {
+  await page.goto(`${server.url}/sign-in`);
+  await page.getByLabel('E-mail').fill(`${who}@example.org`);
+  await page.getByLabel('Password').fill(DEMO_PASSWORD);
+  await page.getByRole('button', { name: 'Sign in', exact: true }).click();
+}
+
+describe('volunteers, rota and the triage board', () => {
+  it('shows the organiser the skills matrix and the rota with its gaps', { timeout: 60_000 }, async () => {
+    const page = await browser.newPage({ viewport: DESKTOP });
+    await signIn(page, 'organiser');
+    await page.waitForURL(/\/groups\/\d+\/events$/);
+    await page.getByRole('link', { name: 'Skills', exact: true }).click();
+    await page.getByRole('columnheader', { name: /Textiles/ }).waitFor();
+    await page.getByRole('button', { name: 'Textiles' }).click();
+    const first = await page.locator('tbody tr').first().locator('th').textContent();
+    expect(first).toContain('Wren Ashcombe');
+    await page.screenshot({ path: shot('skills-matrix'), fullPage: true });
+
+    await page.getByRole('navigation', { name: 'Group' }).getByRole('link', { name: 'Sessions' }).click();
+    await page.getByRole('link', { name: /Kestlebridge repair session/ }).first().click();
+    await page.getByRole('link', { name: 'Rota' }).click();
+    await page.getByRole('heading', { name: 'Gaps' }).waitFor();
+    await page.getByText(/No toys fixer/).waitFor();
+    await page.screenshot({ path: shot('rota-gaps'), fullPage: true });
+    await page.close();
+  });
+
+  it('runs triage, moves an item by hand, locks it, and the lock holds on a re-run', { timeout: 60_000 }, async () => {
+    const page = await browser.newPage({ viewport: { width: 1440, height: 900 } });
+    await signIn(page, 'organiser');
+    await page.waitForURL(/\/groups\/\d+\/events$/);
+    await page.getByRole('link', { name: /Kestlebridge repair session/ }).first().click();
+    await page.getByRole('link', { name: 'Triage board' }).click();
+    await page.getByRole('button', { name: 'Run triage' }).click();
+    await page.getByText(/Placed 4 items/).waitFor();
+    await page.screenshot({ path: shot('triage-board'), fullPage: true });
+
+    // Move the first waiting card to the sewing table with Wren, and lock it.
+    const waiting = page.getByRole('region', { name: 'Waiting' });
+    const card = waiting.locator('article').filter({ hasText: 'Radio' }).first();
+    await card.getByRole('button', { name: 'Move…' }).click();
+    await card.getByLabel('Fixer').selectOption({ label: 'Wren Ashcombe (Electronics 0)' });
+    await card.getByLabel('Bench').selectOption({ label: 'Sewing table' });
+    await card.getByRole('button', { name: 'Place and lock' }).click();
+    const sewing = page.getByRole('region', { name: 'Sewing table' });
+    const moved = sewing.locator('article').filter({ hasText: 'Radio' });
+    await moved.getByText('locked').waitFor();
+    // The move breaks rules, and the card says which.
+    await moved.getByText(/has no electronics skill/).waitFor();
+
+    await page.getByRole('button', { name: 'Run triage' }).click();
+    await page.getByText(/Placed \d+ item/).waitFor();
+    await sewing.locator('article').filter({ hasText: 'Radio' }).getByText('locked').waitFor();
+    await page.screenshot({ path: shot('triage-board-locked'), fullPage: true });
+    await page.close();
+  });
+
+  it('shows a fixer their queue on a phone', async () => {
+    const page = await browser.newPage({ viewport: PHONE });
+    await signIn(page, 'fixer');
+    await page.waitForURL(/\/bench$/);
+    await page.getByRole('heading', { name: 'My queue' }).waitFor();
+    await page.locator('ol li').first().waitFor();
+    expect(await page.locator('ol li').count()).toBeGreaterThan(0);
+    await page.getByText(/Mains item: unplug and prove dead/).first().waitFor();
+    await page.screenshot({ path: shot('fixer-queue-phone'), fullPage: true });
+    await page.close();
+  });
+});
