@@ -49,6 +49,7 @@ export const router = createBrowserRouter([
       { path: 'forgot-password', element: <ForgotPasswordPage /> },
       { path: 'reset-password', element: <ResetPasswordPage /> },
       { path: 'setup', element: <SetupPage /> },
+      { path: 'join/:token', ...page(() => import('./routes/auth/join'), 'JoinPage') },
       { path: 'start', element: <StartRedirect /> },
       { path: 'bench', ...page(() => import('./routes/volunteers/bench'), 'BenchPage', (u) => hasRole(u, 'fixer') || hasRole(u, 'host')) },
       { path: 'me/skills', ...page(() => import('./routes/volunteers/my-skills'), 'MySkillsPage', (u) => hasRole(u, 'fixer')) },

@@ -4,7 +4,7 @@ import { csrfSync } from 'csrf-sync';
 import { existsSync } from 'node:fs';
 import path from 'node:path';
 import type { AppContext } from './context';
-import { authRoutes } from './auth/routes';
+import { authRoutes, signIn } from './auth/routes';
 import { loadUser } from './auth/guards';
 import { sessionMiddleware } from './auth/session';
 import { apiNotFound, errorHandler } from './http/errors';
@@ -58,7 +58,7 @@ export function createApp(ctx: AppContext) {
   api.use(csrfSynchronisedProtection);
   const auth = authRoutes(ctx, (req) => generateToken(req));
   api.use('/auth', auth.router);
-  api.use(groupRoutes(ctx));
+  api.use(groupRoutes(ctx, (req, id) => signIn(req, ctx, id)));
   api.use(adminRoutes(ctx));
   api.use(catalogueRoutes(ctx));
   api.use(venueRoutes(ctx));

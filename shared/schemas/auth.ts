@@ -62,3 +62,9 @@ export interface SessionUser {
   admin: boolean;
   roles: { groupId: number; role: (typeof GROUP_ROLES)[number]; groupName: string }[];
 }
+
+export const inviteSchema = z.object({ email, role: z.enum(GROUP_ROLES, { error: 'Choose a role.' }) });
+export const inviteSignupSchema = z.object({
+  name: z.string().trim().min(1, 'Enter your name.').max(120),
+  password: newPassword,
+});

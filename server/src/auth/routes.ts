@@ -12,7 +12,7 @@ import { loadSessionUser } from './users';
 const regenerate = (req: Request) => new Promise<void>((res, rej) => req.session.regenerate((e) => (e ? rej(e) : res())));
 const save = (req: Request) => new Promise<void>((res, rej) => req.session.save((e) => (e ? rej(e) : res())));
 
-async function signIn(req: Request, ctx: AppContext, userId: number) {
+export async function signIn(req: Request, ctx: AppContext, userId: number) {
   // A new session id at sign-in defeats session fixation; it also drops the old CSRF token.
   await regenerate(req);
   req.session.userId = userId;

@@ -6,6 +6,10 @@ import { ConfirmDialog } from '../../components/ui/confirm-dialog';
 import { GroupTabs } from '../../components/layouts/group-tabs';
 import { Alert, Card, EmptyState, Spinner } from '../../components/ui/feedback';
 import { useApproveMember, useMembers, useRemoveMember, type Member } from '../../features/groups/api/members';
+import { useInvite } from '../../features/groups/api/invites';
+import { inviteSchema } from '../../../../shared/schemas/auth';
+import { SelectField, TextField } from '../../components/ui/field';
+import { applyServerErrors, useZodForm } from '../../lib/form';
 
 export function GroupPeoplePage() {
   const groupId = Number(useParams().groupId);
@@ -34,6 +38,8 @@ export function GroupPeoplePage() {
           </Card>
         ))}
       </div>
+
+      <InviteForm groupId={groupId} />
 
       <section aria-labelledby="waiting">
         <h2 id="waiting" className="mb-3 text-xl">Waiting for your confirmation</h2>
@@ -89,5 +95,35 @@ export function GroupPeoplePage() {
         onConfirm={() => toRemove && remove.mutate(toRemove.membershipId, { onSettled: () => setToRemove(null) })}
       />
     </div>
+  );
+}
+
+function InviteForm({ groupId }: { groupId: number }) {
+  const invite = useInvite(groupId);
+  const form = useZodForm(inviteSchema, { email: '', role: 'fixer' });
+  const [error, setError] = useState<string | null>(null);
+  return (
+    <Card>
+      <h2 className="text-lg">Invite a volunteer</h2>
+      <form noValidate className="mt-2 grid gap-3 sm:grid-cols-[1fr_12rem_auto] sm:items-end" onSubmit={form.handleSubmit(async (v) => {
+        setError(null);
+        try {
+          await invite.mutateAsync(v);
+          form.reset({ email: '', role: v.role });
+        } catch (err) {
+          setError(applyServerErrors(form, err));
+        }
+      })}>
+        <TextField label="E-mail" type="email" error={form.formState.errors.email?.message} {...form.register('email', { onChange: () => invite.reset() })} />
+        <SelectField label="Role" {...form.register('role')}>
+          <option value="fixer">Fixer</option>
+          <option value="host">Reception</option>
+          <option value="organiser">Organiser</option>
+        </SelectField>
+        <Button type="submit" busy={form.formState.isSubmitting}>Send invitation</Button>
+      </form>
+      {invite.isSuccess && <p role="status" className="mt-2 text-sm font-bold text-sage">Invitation sent. It works for 14 days.</p>}
+      {error && <div className="mt-2"><Alert tone="error">{error}</Alert></div>}
+    </Card>
   );
 }

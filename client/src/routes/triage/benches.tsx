@@ -6,7 +6,8 @@ import { Button } from '../../components/ui/button';
 import { Alert, Card, Spinner } from '../../components/ui/feedback';
 import { useEvent } from '../../features/events/api/events';
 import { useEventBenches, useSaveBenches, type Bench } from '../../features/triage/api/triage';
-import { ApiError } from '../../lib/api';
+import { useMutation } from '@tanstack/react-query';
+import { api, ApiError } from '../../lib/api';
 
 /** This session's benches, copied from the venue's usual layout the first time; changes stay with the session. */
 export function BenchesPage() {
@@ -14,6 +15,7 @@ export function BenchesPage() {
   const event = useEvent(id);
   const benches = useEventBenches(id);
   const save = useSaveBenches(id);
+  const saveVenue = useMutation({ mutationFn: (benches: Bench[]) => api('PUT', `/api/venues/${event.data!.venue.id}/benches`, { benches: benches.map(({ name, seats, equipment }) => ({ name, seats, equipment })) }) });
   const [rows, setRows] = useState<Bench[]>([]);
   useEffect(() => {
     if (benches.data) setRows(benches.data.map((b) => ({ id: b.id, name: b.name, seats: b.seats, equipment: b.equipment })));
@@ -54,9 +56,12 @@ export function BenchesPage() {
       <div className="mt-4 flex flex-wrap items-center gap-3">
         <Button variant="secondary" onClick={() => setRows((r) => [...r, { name: `Bench ${r.length + 1}`, seats: 2, equipment: [] }])}>+ Add a bench</Button>
         <Button busy={save.isPending} onClick={() => save.mutate(rows)}>Save benches</Button>
+        <Button variant="quiet" busy={saveVenue.isPending} onClick={() => saveVenue.mutate(rows)}>Make this the venue’s usual layout</Button>
         {save.isSuccess && <span role="status" className="font-bold text-sage">Saved.</span>}
+        {saveVenue.isSuccess && <span role="status" className="font-bold text-sage">Later sessions at {event.data?.venue.name} start with these benches.</span>}
       </div>
       {save.error && <div className="mt-3"><Alert tone="error">{fields ? Object.values(fields).join(' ') : save.error.message}</Alert></div>}
+      {saveVenue.error && <div className="mt-3"><Alert tone="error">{saveVenue.error.message}</Alert></div>}
     </div>
   );
 }

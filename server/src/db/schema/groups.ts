@@ -1,6 +1,6 @@
 import { index, mysqlEnum, mysqlTable, text, uniqueIndex, varchar } from 'drizzle-orm/mysql-core';
 import { GROUP_ROLES, MEMBERSHIP_STATUSES } from '../../../../shared/constants';
-import { createdAt, id, ref } from './columns';
+import { createdAt, id, ref, timestamp3 } from './columns';
 import { users } from './users';
 
 export const repairGroups = mysqlTable('repair_groups', {
@@ -33,3 +33,16 @@ export const venues = mysqlTable('venues', {
   accessNotes: text('access_notes').notNull(),
   createdAt: createdAt(),
 }, (t) => [index('venues_group_idx').on(t.groupId)]);
+
+/** An organiser's invitation to join a group in a role; the link in the mail carries the token, only its hash is kept. */
+export const invites = mysqlTable('invites', {
+  id: id(),
+  groupId: ref('group_id').notNull().references(() => repairGroups.id, { onDelete: 'cascade' }),
+  email: varchar('email', { length: 254 }).notNull(),
+  role: mysqlEnum('role', GROUP_ROLES).notNull(),
+  tokenHash: varchar('token_hash', { length: 64 }).notNull(),
+  expiresAt: timestamp3('expires_at').notNull(),
+  acceptedAt: timestamp3('accepted_at'),
+  invitedBy: ref('invited_by').references(() => users.id, { onDelete: 'set null' }),
+  createdAt: createdAt(),
+}, (t) => [uniqueIndex('invites_token_uq').on(t.tokenHash), index('invites_group_idx').on(t.groupId)]);

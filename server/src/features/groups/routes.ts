@@ -2,12 +2,16 @@ import { Router } from 'express';
 import { z } from 'zod';
 import type { AppContext } from '../../context';
 import { groupIdParam, requireGroupRole } from '../../auth/guards';
-import { params } from '../../http/validate';
+import { body, params } from '../../http/validate';
+import { inviteSchema, inviteSignupSchema } from '../../../../shared/schemas/auth';
+import { requireUser } from '../../auth/guards';
+import { HttpError } from '../../http/errors';
+import * as invites from './invites';
 import * as groups from './service';
 
 const memberParams = z.object({ groupId: z.coerce.number().int().positive(), membershipId: z.coerce.number().int().positive() });
 
-export function groupRoutes(ctx: AppContext) {
+export function groupRoutes(ctx: AppContext, signIn: (req: import('express').Request, userId: number) => Promise<unknown>) {
   const r = Router();
   const organiser = requireGroupRole(['organiser'], groupIdParam);
   r.get('/groups/:groupId/members', organiser, async (req, res) => {
@@ -22,6 +26,20 @@ export function groupRoutes(ctx: AppContext) {
     const p = params(req, memberParams);
     await groups.removeMember(ctx, p.groupId, p.membershipId);
     res.status(204).end();
+  });
+  r.post('/groups/:groupId/invites', organiser, async (req, res) => {
+    await invites.invite(ctx, groupIdParam(req), body(req, inviteSchema), req.user!.id);
+    res.status(202).json({ ok: true });
+  });
+  r.get('/invites/:token', async (req, res) => res.json(await invites.viewInvite(ctx, String(req.params.token))));
+  r.post('/invites/:token/accept', requireUser, async (req, res) => {
+    await invites.acceptInvite(ctx, String(req.params.token), req.user!);
+    res.json({ ok: true });
+  });
+  r.post('/invites/:token/signup', async (req, res) => {
+    if (req.user) throw new HttpError(409, 'signed-in', 'You are signed in already: accept the invitation instead.');
+    const id = await invites.signupFromInvite(ctx, String(req.params.token), body(req, inviteSignupSchema));
+    res.status(201).json({ user: await signIn(req, id) });
   });
   return r;
 }

@@ -1,0 +1,72 @@
+import { and, eq, gt, isNull, sql } from 'drizzle-orm';
+import { ROLE_LABELS, type GroupRole } from '../../../../shared/constants';
+import type { AppContext } from '../../context';
+import { hashPassword } from '../../auth/passwords';
+import { newToken, sha256 } from '../../auth/tokens';
+import { invites, memberships, repairGroups, users } from '../../db/schema/index';
+import { HttpError, notFound } from '../../http/errors';
+import { enqueueMail } from '../../mail/outbox';
+import { composeMail } from '../../mail/templates';
+
+const INVITE_DAYS = 14;
+
+export async function invite(ctx: AppContext, groupId: number, input: { email: string; role: GroupRole }, invitedBy: number) {
+  const { db } = ctx.database;
+  const [group] = await db.select().from(repairGroups).where(eq(repairGroups.id, groupId));
+  if (!group) throw notFound('That group');
+  const [inviter] = await db.select().from(users).where(eq(users.id, invitedBy));
+  const { token, hash } = newToken();
+  await db.transaction(async (tx) => {
+    await tx.insert(invites).values({ groupId, email: input.email, role: input.role, tokenHash: hash, expiresAt: new Date(Date.now() + INVITE_DAYS * 86400_000), invitedBy });
+    await enqueueMail(tx, composeMail(input.email, `${inviter?.name ?? 'An organiser'} invites you to ${group.name}`, {
+      paragraphs: [
+        'Hello,',
+        `${inviter?.name ?? 'An organiser'} invites you to join ${group.name} on Mendery as ${ROLE_LABELS[input.role].toLowerCase()}.`,
+        'Follow the link to accept; if you have no account yet you can make one there.',
+      ],
+      action: { label: 'Accept the invitation', url: `${ctx.env.publicUrl}/join/${token}` },
+      footnote: `The link works for ${INVITE_DAYS} days.`,
+    }));
+  });
+  ctx.outbox.kick();
+}
+
+async function openInvite(ctx: AppContext, token: string) {
+  const [row] = await ctx.database.db
+    .select({ invite: invites, groupName: repairGroups.name })
+    .from(invites)
+    .innerJoin(repairGroups, eq(repairGroups.id, invites.groupId))
+    .where(and(eq(invites.tokenHash, sha256(token)), isNull(invites.acceptedAt), gt(invites.expiresAt, sql`NOW(3)`)));
+  if (!row) throw new HttpError(404, 'link-invalid', 'This invitation was used already or has expired. Ask the organiser for a new one.');
+  return row;
+}
+
+export async function viewInvite(ctx: AppContext, token: string) {
+  const { invite: i, groupName } = await openInvite(ctx, token);
+  const [existing] = await ctx.database.db.select({ id: users.id }).from(users).where(eq(users.email, i.email));
+  return { groupName, role: i.role, email: i.email, hasAccount: Boolean(existing) };
+}
+
+async function join(ctx: AppContext, inviteId: number, groupId: number, userId: number, role: GroupRole) {
+  await ctx.database.db.transaction(async (tx) => {
+    await tx.insert(memberships).values({ userId, groupId, role, status: 'active' }).onDuplicateKeyUpdate({ set: { status: 'active' } });
+    await tx.update(invites).set({ acceptedAt: new Date() }).where(eq(invites.id, inviteId));
+  });
+}
+
+/** A signed-in person accepts; the invitation is for one address, so it must be theirs. */
+export async function acceptInvite(ctx: AppContext, token: string, user: { id: number; email: string }) {
+  const { invite: i } = await openInvite(ctx, token);
+  if (i.email !== user.email) throw new HttpError(403, 'wrong-account', `This invitation is for ${i.email}. Sign out and sign in with that address.`);
+  await join(ctx, i.id, i.groupId, user.id, i.role);
+}
+
+/** No account yet: the link proves the address, so the account starts confirmed. */
+export async function signupFromInvite(ctx: AppContext, token: string, input: { name: string; password: string }) {
+  const { invite: i } = await openInvite(ctx, token);
+  const [existing] = await ctx.database.db.select().from(users).where(eq(users.email, i.email));
+  if (existing) throw new HttpError(409, 'has-account', 'This address already has an account: sign in to accept.');
+  const [{ id }] = await ctx.database.db.insert(users).values({ email: i.email, name: input.name, passwordHash: await hashPassword(input.password), emailVerifiedAt: new Date() }).$returningId();
+  await join(ctx, i.id, i.groupId, id, i.role);
+  return id;
+}
