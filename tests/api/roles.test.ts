@@ -50,6 +50,15 @@ const table: Row[] = [
   ['PATCH', (g) => `/api/events/${g.otherEvent}`, { ...ownOrganiser, organiser: 403, otherOrganiser: 200 }, { description: 'Bring cake.' }],
   ['PUT', (g) => `/api/groups/${g.own}/settings`, ownOrganiser, { houseRules: 'Be kind.', excludedCategoryIds: [] }],
   ['PATCH', () => '/api/categories/1', adminOnly, { repairMinutes: 30 }],
+  ['GET', (g) => `/api/groups/${g.own}/skills`, ownOrganiser],
+  ['GET', () => '/api/me/profile', signedIn(200)],
+  ['GET', () => '/api/me/queue', signedIn(200)],
+  ['GET', () => '/api/me/events', signedIn(200)],
+  ['POST', (g) => `/api/events/${g.ownEvent}/triage`, { ...ownOrganiser, organiser: 201, admin: 201 }],
+  ['GET', (g) => `/api/events/${g.ownEvent}/board`, ownOrganiser],
+  ['GET', (g) => `/api/events/${g.ownEvent}/rota`, ownOrganiser],
+  ['GET', (g) => `/api/events/${g.ownEvent}/benches`, { ...ownOrganiser, fixer: 200, host: 200, otherOrganiser: 200 }],
+  ['POST', (g) => `/api/groups/${g.own}/invites`, { ...ownOrganiser, organiser: 202, admin: 202 }, { email: 'invited@example.org', role: 'fixer' }],
 ];
 
 let db: TestDatabase;
