@@ -1,7 +1,7 @@
 import fc from 'fast-check';
-import solver from 'javascript-lp-solver';
 import { triage, type TriageInput } from '../../shared/triage/index';
 import { largeRound } from '../../shared/triage/fixtures';
+import { referenceOptimum } from '../../tests/support/triage-reference';
 
 /** Times the triage engine on a large event and on a random set, and the reference integer program beside it. */
 const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
@@ -15,23 +15,7 @@ function time(fn: () => unknown, runs: number) {
   return { median: median(t), max: Math.max(...t) };
 }
 
-function referenceCount(input: TriageInput) {
-  const variables: Record<string, Record<string, number>> = {};
-  const ints: Record<string, 1> = {};
-  const constraints: Record<string, { max: number }> = {};
-  for (const i of input.items) constraints[`i:${i.id}`] = { max: 1 };
-  for (const v of input.volunteers) constraints[`v:${v.id}`] = { max: v.capacity ?? 1 };
-  for (const b of input.benches) constraints[`b:${b.id}`] = { max: b.seats };
-  for (const i of input.items)
-    for (const v of input.volunteers)
-      for (const b of input.benches) {
-        if ((v.skills[i.skill] ?? 0) < i.minLevel || !i.equipment.every((e) => b.equipment.includes(e)) || (v.benchId !== undefined && v.benchId !== b.id)) continue;
-        const name = `x:${i.id}:${v.id}:${b.id}`;
-        variables[name] = { n: 1, [`i:${i.id}`]: 1, [`v:${v.id}`]: 1, [`b:${b.id}`]: 1 };
-        ints[name] = 1;
-      }
-  return { count: Math.round(solver.Solve({ optimize: 'n', opType: 'max', constraints, variables, ints }).result ?? 0), variables: Object.keys(variables).length };
-}
+const referenceCount = (input: TriageInput) => referenceOptimum(input);
 
 export function benchTriage() {
   console.log('Triage engine (pure, no I/O)');

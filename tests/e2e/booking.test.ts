@@ -1,41 +1,28 @@
-import { writeFileSync, mkdtempSync } from 'node:fs';
-import os from 'node:os';
+import { writeFileSync } from 'node:fs';
 import path from 'node:path';
 import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
 import { DEMO_PASSWORD } from '../../shared/constants';
-import { freePort } from '../../server/src/infra/mariadb';
-import { LocalMailbox } from '../../server/src/mail/local-mailbox';
-import { seedDemo } from '../../server/src/seed/demo';
 import type { RunningServer } from '../../server/src/server';
 import { DESKTOP, launchBrowser, PHONE, shot } from '../support/browser';
-import { createTestDatabase, type TestDatabase } from '../support/db';
-import { startTestServer, TEST_SECRET } from '../support/server';
+import { startDemoApp, type DemoApp } from '../support/demo-app';
 
-let db: TestDatabase;
+let app: DemoApp;
 let server: RunningServer;
-let mailbox: LocalMailbox;
 let browser: Browser;
 let photo: string;
 
 beforeAll(async () => {
-  db = await createTestDatabase();
-  await seedDemo(db.db, { linkSecret: TEST_SECRET });
-  const smtpPort = await freePort();
-  mailbox = new LocalMailbox(db.db, smtpPort);
-  await mailbox.start();
-  const dataDir = mkdtempSync(path.join(os.tmpdir(), 'mendery-e2e-'));
-  server = await startTestServer(db.url, { SMTP_PORT: String(smtpPort), OUTBOX_POLL_MS: '200', DATA_DIR: dataDir }, { sender: 'smtp' });
+  app = await startDemoApp();
+  server = app.server;
   browser = await launchBrowser();
-  photo = path.join(dataDir, 'kettle-label.jpg');
+  photo = path.join(app.dataDir, 'kettle-label.jpg');
   writeFileSync(photo, await sharp({ create: { width: 1200, height: 900, channels: 3, background: '#c9b79c' } }).jpeg().toBuffer());
 });
 afterAll(async () => {
   await browser?.close();
-  await server?.stop();
-  await mailbox?.stop();
-  await db?.drop();
+  await app?.stop();
 });
 
 async function firstEvent(page: Page) {

@@ -1,33 +1,25 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
 import { DEMO_PASSWORD } from '../../shared/constants';
-import { freePort } from '../../server/src/infra/mariadb';
-import { LocalMailbox } from '../../server/src/mail/local-mailbox';
-import { markEmptyInstall, seedDemo } from '../../server/src/seed/demo';
+import { markEmptyInstall } from '../../server/src/seed/demo';
 import type { RunningServer } from '../../server/src/server';
 import { DESKTOP, launchBrowser, PHONE, shot } from '../support/browser';
-import { createTestDatabase, type TestDatabase } from '../support/db';
-import { startTestServer, TEST_SECRET } from '../support/server';
+import { createTestDatabase } from '../support/db';
+import { startDemoApp, type DemoApp } from '../support/demo-app';
+import { startTestServer } from '../support/server';
 
-let db: TestDatabase;
+let app: DemoApp;
 let server: RunningServer;
-let mailbox: LocalMailbox;
 let browser: Browser;
 
 beforeAll(async () => {
-  db = await createTestDatabase();
-  await seedDemo(db.db, { linkSecret: TEST_SECRET });
-  const smtpPort = await freePort();
-  mailbox = new LocalMailbox(db.db, smtpPort);
-  await mailbox.start();
-  server = await startTestServer(db.url, { SMTP_PORT: String(smtpPort), OUTBOX_POLL_MS: '200' }, { sender: 'smtp' });
+  app = await startDemoApp();
+  server = app.server;
   browser = await launchBrowser();
 });
 afterAll(async () => {
   await browser?.close();
-  await server?.stop();
-  await mailbox?.stop();
-  await db?.drop();
+  await app?.stop();
 });
 
 async function signIn(page: Page, email: string) {

@@ -1,26 +1,22 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
 import { DEMO_PASSWORD } from '../../shared/constants';
-import { seedDemo } from '../../server/src/seed/demo';
 import type { RunningServer } from '../../server/src/server';
 import { DESKTOP, launchBrowser, PHONE, shot } from '../support/browser';
-import { createTestDatabase, type TestDatabase } from '../support/db';
-import { startTestServer, TEST_SECRET } from '../support/server';
+import { startDemoApp, type DemoApp } from '../support/demo-app';
 
-let db: TestDatabase;
+let app: DemoApp;
 let server: RunningServer;
 let browser: Browser;
 
 beforeAll(async () => {
-  db = await createTestDatabase();
-  await seedDemo(db.db, { linkSecret: TEST_SECRET });
-  server = await startTestServer(db.url);
+  app = await startDemoApp();
+  server = app.server;
   browser = await launchBrowser();
 });
 afterAll(async () => {
   await browser?.close();
-  await server?.stop();
-  await db?.drop();
+  await app?.stop();
 });
 
 async function signIn(page: Page, who: string) {
