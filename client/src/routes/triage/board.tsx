@@ -57,7 +57,7 @@ export function TriageBoardPage() {
         {b.benches.map((bench) => {
           const here = b.items.filter((i) => i.placement?.benchId === bench.id);
           return (
-            <Column key={bench.id} title={bench.name} subtitle={`${here.length}/${bench.seats} seats · ${bench.equipment.map((e) => EQUIPMENT_LABELS[e as Equipment]).join(', ') || 'no kit'}`}>
+            <Column key={bench.id} title={bench.name} subtitle={`${bench.seats} seat${bench.seats === 1 ? "" : "s"} · ${here.length} item${here.length === 1 ? "" : "s"} over the day · ${bench.equipment.map((e) => EQUIPMENT_LABELS[e as Equipment]).join(', ') || 'no kit'}`}>
               {b.fixers.filter((f) => here.some((i) => i.placement!.userId === f.userId)).map((f) => (
                 <div key={f.userId} className="space-y-2">
                   <p className="text-sm font-extrabold text-navy">{f.name}{f.benchId === bench.id ? ' · seated here' : ''}</p>
@@ -103,13 +103,13 @@ function ItemCard({ item, board, eventId }: { item: BoardItem; board: Board; eve
   return (
     <article className={`rounded-lg bg-white p-3 text-sm shadow-sm ring-1 ${item.warnings.length ? 'ring-alert' : item.placement?.locked ? 'ring-navy' : 'ring-ink/10'}`}>
       <div className="flex items-start justify-between gap-2">
-        <p className="font-bold">{item.categoryName}{item.brand ? ` — ${item.brand}` : ''}</p>
+        <p className="font-bold">{item.categoryName}{item.brand || item.model ? ` — ${[item.brand, item.model].filter(Boolean).join(' ')}` : ''}</p>
         {item.placement?.locked && <span className="rounded bg-navy px-1.5 text-xs font-bold text-white" title="Locked: a re-run keeps it here">locked</span>}
       </div>
       <p className="text-ink-soft">{item.fault}</p>
       <p className="mt-1 text-xs">
         {item.reference} · booked for {slot ? formatTime(slot.startsAt, tz) : '—'} · about {item.minutes} min
-        {item.estimatedStart && <> · starts ≈ {formatTime(item.estimatedStart, tz)}</>}
+        {item.placement && item.estimatedStart && <> · starts ≈ {formatTime(item.estimatedStart, tz)}</>}
       </p>
       <p className="text-xs text-ink-soft">Needs {SKILL_LABELS[item.needs.skill as Skill] ?? item.needs.skill} level {item.needs.minLevel}{item.needs.equipment.length ? `, ${item.needs.equipment.map((e) => EQUIPMENT_LABELS[e as Equipment]).join(', ')}` : ''}{item.mains ? ' · mains' : ''}</p>
       {item.reason && <p className="mt-1 rounded bg-copper-light px-2 py-1 text-xs"><span className="font-bold">{REASON_LABEL[item.reason.reason]}:</span> {item.reason.detail}</p>}

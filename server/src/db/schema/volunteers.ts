@@ -57,6 +57,8 @@ export const itemAssignments = mysqlTable('item_assignments', {
   benchId: ref('bench_id').notNull().references(() => eventBenches.id, { onDelete: 'cascade' }),
   locked: boolean('locked').notNull().default(false),
   source: mysqlEnum('source', ['engine', 'hand']).notNull(),
+  /** When the repair is planned to start; with the category's minutes it says when fixer and bench are busy. */
+  startsAt: timestamp3('starts_at'),
   runId: ref('run_id'),
   updatedAt: createdAt(),
 }, (t) => [index('item_assignments_event_idx').on(t.eventId), index('item_assignments_user_idx').on(t.userId)]);

@@ -15,6 +15,8 @@ export async function invite(ctx: AppContext, groupId: number, input: { email: s
   const [group] = await db.select().from(repairGroups).where(eq(repairGroups.id, groupId));
   if (!group) throw notFound('That group');
   const [inviter] = await db.select().from(users).where(eq(users.id, invitedBy));
+  const [already] = await db.select({ id: memberships.id }).from(memberships).innerJoin(users, eq(users.id, memberships.userId)).where(and(eq(memberships.groupId, groupId), eq(users.email, input.email), eq(memberships.role, input.role), eq(memberships.status, 'active')));
+  if (already) throw new HttpError(409, 'already-member', `${input.email} is already ${ROLE_LABELS[input.role].toLowerCase()} with ${group.name}.`, { email: 'Already in the team in this role.' });
   const { token, hash } = newToken();
   await db.transaction(async (tx) => {
     await tx.insert(invites).values({ groupId, email: input.email, role: input.role, tokenHash: hash, expiresAt: new Date(Date.now() + INVITE_DAYS * 86400_000), invitedBy });

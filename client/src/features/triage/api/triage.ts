@@ -15,7 +15,7 @@ export interface BoardItem {
   minutes: number;
   needs: { skill: string; minLevel: number; equipment: string[] };
   photoIds: number[];
-  placement: { userId: number; benchId: number; locked: boolean; source: 'engine' | 'hand' } | null;
+  placement: { userId: number; benchId: number; locked: boolean; source: 'engine' | 'hand'; startsAt: string | null } | null;
   warnings: { code: string; message: string }[];
   reason: { reason: string; detail: string } | null;
   estimatedStart: string | null;

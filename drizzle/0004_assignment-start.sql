@@ -1,0 +1,1 @@
+ALTER TABLE `item_assignments` ADD `starts_at` datetime(3);
