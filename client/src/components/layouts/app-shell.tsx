@@ -19,7 +19,7 @@ export function AppShell() {
   if (user) {
     for (const g of groupsWithRole(user, 'organiser')) links.push({ to: paths.groupEvents(g.groupId), label: `${g.groupName}` });
     if (groupsWithRole(user, 'host').length) links.push({ to: paths.desk(), label: 'Reception desk' });
-    if (groupsWithRole(user, 'fixer').length) links.push({ to: paths.bench(), label: 'My bench' });
+    if (groupsWithRole(user, 'fixer').length) links.push({ to: paths.bench(), label: 'My bench' }, { to: paths.mySkills(), label: 'My skills' });
     if (user.admin) links.push({ to: paths.admin(), label: 'Network admin', end: true }, { to: paths.adminCategories(), label: 'Categories' }, { to: paths.adminMailbox(), label: 'Mailbox' });
   }
 

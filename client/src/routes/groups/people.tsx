@@ -114,7 +114,7 @@ function InviteForm({ groupId }: { groupId: number }) {
           setError(applyServerErrors(form, err));
         }
       })}>
-        <TextField label="E-mail" type="email" error={form.formState.errors.email?.message} {...form.register('email', { onChange: () => invite.reset() })} />
+        <TextField label="Their e-mail" type="email" error={form.formState.errors.email?.message} {...form.register('email', { onChange: () => invite.reset() })} />
         <SelectField label="Role" {...form.register('role')}>
           <option value="fixer">Fixer</option>
           <option value="host">Reception</option>

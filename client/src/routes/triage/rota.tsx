@@ -74,7 +74,7 @@ export function RotaPage() {
               <legend className="text-sm font-bold">Ask the group’s fixers with…</legend>
               {gapSkills.map((s) => <label key={s} className="flex items-center gap-2 text-sm"><input type="checkbox" checked={picked.has(s)} onChange={() => toggle(s)} className="size-4 accent-copper" />{SKILL_LABELS[s as Skill] ?? s}</label>)}
               <Button className="mt-2" disabled={!picked.size} busy={ask.isPending} onClick={() => ask.mutate([...picked])}>Mail them</Button>
-              {ask.isSuccess && <p role="status" className="text-sm font-bold text-sage">{ask.data.sent ? `Asked ${ask.data.sent} fixer${ask.data.sent === 1 ? '' : 's'}.` : 'Nobody else in the group has that skill.'}</p>}
+              {ask.isSuccess && <p role="status" className={`text-sm font-bold ${ask.data.sent ? 'text-sage' : 'text-ink-soft'}`}>{ask.data.sent ? `Asked ${ask.data.sent} fixer${ask.data.sent === 1 ? '' : 's'}.` : 'Nobody else in the group has that skill.'}</p>}
               {ask.error && <Alert tone="error">{ask.error.message}</Alert>}
             </fieldset>
           )}

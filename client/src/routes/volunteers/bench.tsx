@@ -52,10 +52,10 @@ export function BenchPage() {
             <p className="font-extrabold text-navy">{e.title}</p>
             <p className="text-sm text-ink-soft">{e.groupName} · {e.shift ? (e.shift.coming ? `You come ${formatTimeRange(e.shift.startsAt, e.shift.endsAt, e.timeZone)}` : 'You said you cannot come') : 'You have not answered yet'}</p>
             <div className="mt-2 flex flex-wrap gap-2">
-              <Button className="min-h-10" onClick={() => setShift.mutate({ eventId: e.id, coming: true })}>I’m coming, all day</Button>
+              <Button className="min-h-10" variant={e.shift?.coming && e.shift.startsAt === e.startsAt && e.shift.endsAt === e.endsAt ? 'primary' : 'secondary'} aria-pressed={Boolean(e.shift?.coming && e.shift.startsAt === e.startsAt && e.shift.endsAt === e.endsAt)} onClick={() => setShift.mutate({ eventId: e.id, coming: true })}>I’m coming, all day</Button>
               <Button variant="secondary" className="min-h-10" onClick={() => setShift.mutate({ eventId: e.id, coming: true, startsAt: e.startsAt, endsAt: new Date((new Date(e.startsAt).getTime() + new Date(e.endsAt).getTime()) / 2).toISOString() })}>First half</Button>
               <Button variant="secondary" className="min-h-10" onClick={() => setShift.mutate({ eventId: e.id, coming: true, startsAt: new Date((new Date(e.startsAt).getTime() + new Date(e.endsAt).getTime()) / 2).toISOString(), endsAt: e.endsAt })}>Second half</Button>
-              <Button variant="quiet" className="min-h-10" onClick={() => setShift.mutate({ eventId: e.id, coming: false })}>Can’t come</Button>
+              <Button variant={e.shift && !e.shift.coming ? 'primary' : 'quiet'} aria-pressed={Boolean(e.shift && !e.shift.coming)} className="min-h-10" onClick={() => setShift.mutate({ eventId: e.id, coming: false })}>Can’t come</Button>
             </div>
           </Card>
         ))}

@@ -18,7 +18,7 @@ export function SkillsMatrixPage() {
   const [filter, setFilter] = useState('');
   const [needs, setNeeds] = useState('');
   const rows = useMemo(() => {
-    const list = (matrix.data?.volunteers ?? []).filter((v) => v.name.toLowerCase().includes(filter.toLowerCase()) && (!needs || (v.skills[needs] ?? 0) > 0));
+    const list = (matrix.data?.volunteers ?? []).filter((v) => v.name.toLowerCase().includes(filter.trim().toLowerCase()) && (!needs || (v.skills[needs] ?? 0) > 0));
     return [...list].sort((a, b) => (sortBy === 'name' ? a.name.localeCompare(b.name) : (b.skills[sortBy] ?? 0) - (a.skills[sortBy] ?? 0) || a.name.localeCompare(b.name)));
   }, [matrix.data, filter, needs, sortBy]);
   if (matrix.isPending) return <Spinner />;
