@@ -48,11 +48,12 @@ export function BenchesPage() {
                 ))}
               </div>
             </fieldset>
-            <Button variant="quiet" onClick={() => setRows((r) => r.filter((_, k) => k !== i))}>Remove</Button>
+            <Button variant="quiet" onClick={() => { save.reset(); setRows((r) => r.filter((_, k) => k !== i)); }}>Remove</Button>
           </Card>
         ))}
         {rows.length === 0 && <Alert tone="info">No benches yet. Add the tables you will set out, with the kit on each.</Alert>}
       </div>
+      {(benches.data ?? []).some((b) => !rows.some((r) => r.id === b.id)) && <div className="mt-3"><Alert tone="caution">Saving removes {(benches.data ?? []).filter((b) => !rows.some((r) => r.id === b.id)).map((b) => b.name).join(', ')}; fixers seated there become free to move, and items placed there go back to waiting.</Alert></div>}
       <div className="mt-4 flex flex-wrap items-center gap-3">
         <Button variant="secondary" onClick={() => setRows((r) => [...r, { name: `Bench ${r.length + 1}`, seats: 2, equipment: [] }])}>+ Add a bench</Button>
         <Button busy={save.isPending} onClick={() => save.mutate(rows)}>Save benches</Button>

@@ -115,8 +115,8 @@ function ItemCard({ item, board, eventId }: { item: BoardItem; board: Board; eve
       {item.reason && <p className="mt-1 rounded bg-copper-light px-2 py-1 text-xs"><span className="font-bold">{REASON_LABEL[item.reason.reason]}:</span> {item.reason.detail}</p>}
       {item.warnings.map((w) => <p key={w.code} className="mt-1 text-xs font-semibold text-alert">⚠ {w.message}</p>)}
       {moving ? (
-        <div className="mt-2 space-y-2">
-          <select aria-label="Fixer" value={to.userId} onChange={(e) => setTo({ ...to, userId: Number(e.target.value) })} className="block w-full rounded border border-ink/20 px-2 py-1">
+        <div className="mt-2 space-y-2" onKeyDown={(e) => e.key === 'Escape' && setMoving(false)}>
+          <select autoFocus aria-label="Fixer" value={to.userId} onChange={(e) => setTo({ ...to, userId: Number(e.target.value) })} className="block w-full rounded border border-ink/20 px-2 py-1">
             {board.fixers.map((f) => <option key={f.userId} value={f.userId}>{f.name} ({SKILL_LABELS[item.needs.skill as Skill] ?? item.needs.skill} {f.skills[item.needs.skill] ?? 0})</option>)}
           </select>
           <select aria-label="Bench" value={to.benchId} onChange={(e) => setTo({ ...to, benchId: Number(e.target.value) })} className="block w-full rounded border border-ink/20 px-2 py-1">

@@ -15,12 +15,21 @@ export function SkillsMatrixPage() {
   const group = useGroupSettings(groupId);
   const matrix = useSkillsMatrix(groupId);
   const [sortBy, setSortBy] = useState<string>('name');
+  const [ascending, setAscending] = useState(true);
+  const sortOn = (key: string) => {
+    if (key === sortBy) setAscending((a) => !a);
+    else {
+      setSortBy(key);
+      setAscending(key === 'name');
+    }
+  };
   const [filter, setFilter] = useState('');
   const [needs, setNeeds] = useState('');
   const rows = useMemo(() => {
     const list = (matrix.data?.volunteers ?? []).filter((v) => v.name.toLowerCase().includes(filter.trim().toLowerCase()) && (!needs || (v.skills[needs] ?? 0) > 0));
-    return [...list].sort((a, b) => (sortBy === 'name' ? a.name.localeCompare(b.name) : (b.skills[sortBy] ?? 0) - (a.skills[sortBy] ?? 0) || a.name.localeCompare(b.name)));
-  }, [matrix.data, filter, needs, sortBy]);
+    const dir = ascending ? 1 : -1;
+    return [...list].sort((a, b) => (sortBy === 'name' ? dir * a.name.localeCompare(b.name) : dir * ((a.skills[sortBy] ?? 0) - (b.skills[sortBy] ?? 0)) || a.name.localeCompare(b.name)));
+  }, [matrix.data, filter, needs, sortBy, ascending]);
   if (matrix.isPending) return <Spinner />;
   if (matrix.error) return <Alert tone="error">{matrix.error.message}</Alert>;
   const skills = matrix.data.skills;
@@ -41,10 +50,10 @@ export function SkillsMatrixPage() {
         <table className="w-full text-center text-sm">
           <thead className="bg-navy/5 text-navy">
             <tr>
-              <th className="sticky left-0 bg-[#eef0f3] px-3 py-2 text-left"><button onClick={() => setSortBy('name')} aria-pressed={sortBy === 'name'} className="font-bold underline-offset-2 hover:underline">Volunteer</button></th>
+              <th className="sticky left-0 bg-[#eef0f3] px-3 py-2 text-left"><button onClick={() => sortOn('name')} className="font-bold underline-offset-2 hover:underline">Volunteer{sortBy === 'name' ? (ascending ? ' ↑' : ' ↓') : ''}</button></th>
               {skills.map((s) => (
-                <th key={s} className="px-2 py-2" aria-sort={sortBy === s ? 'descending' : 'none'}>
-                  <button onClick={() => setSortBy(s)} className={`font-bold hover:underline ${sortBy === s ? 'text-copper-dark' : ''}`}>{SKILL_LABELS[s as Skill]}{sortBy === s ? ' ↓' : ''}</button>
+                <th key={s} className="px-2 py-2" aria-sort={sortBy === s ? (ascending ? 'ascending' : 'descending') : 'none'}>
+                  <button onClick={() => sortOn(s)} className={`font-bold hover:underline ${sortBy === s ? 'text-copper-dark' : ''}`}>{SKILL_LABELS[s as Skill]}{sortBy === s ? (ascending ? ' ↑' : ' ↓') : ''}</button>
                 </th>
               ))}
             </tr>
