@@ -1,9 +1,10 @@
 import { and, eq, isNull, lte, sql } from 'drizzle-orm';
 import type { AppContext } from '../context';
-import { bookingItems, bookings, categories, events, repairGroups, slots, venues, waitlistEntries } from '../db/schema/index';
+import { bookingItems, bookings, categories, events, slots, waitlistEntries } from '../db/schema/index';
 import { enqueueMail } from '../mail/outbox';
 import { manageTokenFor, manageUrl, offerFreedPlaces } from '../features/bookings/service';
 import { reminderMail } from '../features/bookings/mails';
+import { bookingWithContext } from '../features/bookings/queries';
 
 /**
  * Timed work: day-before reminders and waiting-list offers that ran out. Each job claims its rows with
@@ -59,13 +60,7 @@ export async function expireOffers(ctx: AppContext): Promise<number> {
  */
 export async function sendReminders(ctx: AppContext): Promise<number> {
   const sent = await ctx.database.db.transaction(async (tx) => {
-    const due = await tx
-      .select({ booking: bookings, slot: slots, event: events, group: repairGroups, venue: venues })
-      .from(bookings)
-      .innerJoin(slots, eq(slots.id, bookings.slotId))
-      .innerJoin(events, eq(events.id, bookings.eventId))
-      .innerJoin(repairGroups, eq(repairGroups.id, events.groupId))
-      .innerJoin(venues, eq(venues.id, events.venueId))
+    const due = await bookingWithContext(tx)
       .where(and(
         eq(bookings.status, 'confirmed'),
         isNull(bookings.reminderSentAt),

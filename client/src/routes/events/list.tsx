@@ -1,9 +1,8 @@
-import FullCalendar from '@fullcalendar/react';
-import dayGridPlugin from '@fullcalendar/daygrid';
 import { Link, useNavigate, useSearchParams } from 'react-router';
 import { SKILL_LABELS } from '../../../../shared/constants';
 import { formatDay, formatTimeRange } from '../../../../shared/format';
 import { Alert, Card, EmptyState, PageTitle, Spinner } from '../../components/ui/feedback';
+import { MonthCalendar } from '../../components/ui/month-calendar';
 import { SelectField } from '../../components/ui/field';
 import { paths } from '../../config/paths';
 import { useCategories, useEvents } from '../../features/events/api/events';
@@ -57,30 +56,11 @@ export function EventsPage() {
       {events.error && <Alert tone="error" title="Could not load the sessions">{events.error.message}</Alert>}
       {events.data && view === 'calendar' && (
         <Card className="mendery-calendar">
-          <FullCalendar
-            plugins={[dayGridPlugin]}
-            initialView="dayGridMonth"
-            height="auto"
-            firstDay={1}
-            headerToolbar={{ left: 'prev,next today', center: 'title', right: '' }}
-            buttonIcons={false}
-            buttonText={{ prev: '‹', next: '›', today: 'Today' }}
-            buttonHints={{ prev: 'Previous month', next: 'Next month', today: 'This month' }}
-            eventDisplay="block"
-            dayMaxEvents={3}
+          <MonthCalendar
+            today
             events={events.data.map((e) => ({ id: String(e.id), title: e.title, start: e.startsAt, end: e.endsAt, backgroundColor: e.freePlaces ? '#5d7f6a' : '#a8322d', borderColor: 'transparent', extendedProps: { free: e.freePlaces } }))}
-            eventContent={(arg) => (
-              <div className="overflow-hidden px-0.5 text-xs leading-tight text-white">
-                <span className="font-bold">{arg.timeText}</span>
-                <span className="hidden sm:inline"> {arg.event.title}</span>
-                <span className="block">{arg.event.extendedProps.free ? `${arg.event.extendedProps.free} free` : 'full'}</span>
-              </div>
-            )}
-            eventClick={(info) => {
-              info.jsEvent.preventDefault();
-              navigate(paths.event(Number(info.event.id)));
-            }}
-            eventTimeFormat={{ hour: '2-digit', minute: '2-digit', hour12: false }}
+            detail={(x) => (x.free ? `${x.free} free` : 'full')}
+            onOpen={(id) => navigate(paths.event(Number(id)))}
           />
         </Card>
       )}

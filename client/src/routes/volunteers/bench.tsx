@@ -1,8 +1,7 @@
-import FullCalendar from '@fullcalendar/react';
-import dayGridPlugin from '@fullcalendar/daygrid';
 import { Link } from 'react-router';
 import { formatDay, formatTime, formatTimeRange } from '../../../../shared/format';
 import { Button } from '../../components/ui/button';
+import { MonthCalendar } from '../../components/ui/month-calendar';
 import { Alert, Card, EmptyState, PageTitle, Spinner } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
 import { useUser } from '../../features/auth/api/get-me';
@@ -62,18 +61,7 @@ export function BenchPage() {
         {events.data && events.data.some((e) => e.shift?.coming) && (
           <Card className="mendery-calendar">
             <h3 className="mb-2 text-lg">My shifts</h3>
-            <FullCalendar
-              plugins={[dayGridPlugin]}
-              initialView="dayGridMonth"
-              height="auto"
-              firstDay={1}
-              headerToolbar={{ left: 'prev,next', center: 'title', right: '' }}
-              buttonIcons={false}
-              buttonText={{ prev: '‹', next: '›' }}
-              eventDisplay="block"
-              events={events.data.filter((e) => e.shift?.coming).map((e) => ({ id: String(e.id), title: e.title, start: e.shift!.startsAt, end: e.shift!.endsAt, backgroundColor: '#23395d', borderColor: 'transparent' }))}
-              eventTimeFormat={{ hour: '2-digit', minute: '2-digit', hour12: false }}
-            />
+            <MonthCalendar events={events.data.filter((e) => e.shift?.coming).map((e) => ({ id: String(e.id), title: e.title, start: e.shift!.startsAt, end: e.shift!.endsAt, backgroundColor: '#23395d', borderColor: 'transparent' }))} />
           </Card>
         )}
       </section>

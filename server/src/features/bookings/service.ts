@@ -12,6 +12,7 @@ import { newToken, sha256 } from '../../auth/tokens';
 import { HttpError, notFound } from '../../http/errors';
 import { enqueueMail } from '../../mail/outbox';
 import { excludedCategoryIds } from '../catalogue/service';
+import { bookingWithContext, slotWithContext } from './queries';
 import { bookingQrText, cancelledMail, confirmationMail, movedMail, offerMail, qrDataUrl, waitlistJoinedMail, type BookingMailFacts } from './mails';
 
 export type BookingInput = z.output<typeof createBookingSchema>;
@@ -21,13 +22,7 @@ const full = () => new HttpError(409, 'slot-full', 'That time is fully booked. C
 
 /** Loads the slot with its event, group and venue, and checks that it can take bookings now. */
 async function bookableSlot(tx: DbOrTx, slotId: number, opts: { lock?: boolean } = {}) {
-  const q = tx
-    .select({ slot: slots, event: events, group: repairGroups, venue: venues })
-    .from(slots)
-    .innerJoin(events, eq(events.id, slots.eventId))
-    .innerJoin(repairGroups, eq(repairGroups.id, events.groupId))
-    .innerJoin(venues, eq(venues.id, events.venueId))
-    .where(eq(slots.id, slotId));
+  const q = slotWithContext(tx).where(eq(slots.id, slotId));
   const [row] = opts.lock ? await q.for('update') : await q;
   if (!row) throw new HttpError(400, 'invalid', 'Some fields need attention.', { slotId: 'That time does not exist.' });
   if (row.event.status !== 'published') throw new HttpError(409, 'not-bookable', row.event.status === 'cancelled' ? 'This event has been cancelled.' : 'This event is not taking bookings.');
@@ -193,14 +188,7 @@ export async function bookingByToken(ctx: AppContext, reference: string, token: 
 
 export async function bookingView(ctx: AppContext, bookingId: number) {
   const { db } = ctx.database;
-  const [row] = await db
-    .select({ booking: bookings, slot: slots, event: events, group: repairGroups, venue: venues })
-    .from(bookings)
-    .innerJoin(slots, eq(slots.id, bookings.slotId))
-    .innerJoin(events, eq(events.id, bookings.eventId))
-    .innerJoin(repairGroups, eq(repairGroups.id, events.groupId))
-    .innerJoin(venues, eq(venues.id, events.venueId))
-    .where(eq(bookings.id, bookingId));
+  const [row] = await bookingWithContext(db).where(eq(bookings.id, bookingId));
   const items = await db
     .select({ id: bookingItems.id, categoryId: bookingItems.categoryId, categoryName: categories.name, skill: categories.skill, brand: bookingItems.brand, model: bookingItems.model, ageYears: bookingItems.ageYears, fault: bookingItems.fault, mains: bookingItems.mains, battery: bookingItems.battery })
     .from(bookingItems)
@@ -272,7 +260,7 @@ export async function cancelBooking(ctx: AppContext, bookingId: number) {
 }
 
 async function bookableSlotUnchecked(tx: Tx, slotId: number) {
-  const [row] = await tx.select({ slot: slots, event: events, group: repairGroups, venue: venues }).from(slots).innerJoin(events, eq(events.id, slots.eventId)).innerJoin(repairGroups, eq(repairGroups.id, events.groupId)).innerJoin(venues, eq(venues.id, events.venueId)).where(eq(slots.id, slotId));
+  const [row] = await slotWithContext(tx).where(eq(slots.id, slotId));
   return row;
 }
 
