@@ -17,6 +17,7 @@ import { eventRoutes } from './features/events/routes';
 import { bookingRoutes } from './features/bookings/routes';
 import { volunteerRoutes } from './features/volunteers/routes';
 import { triageRoutes } from './features/triage/routes';
+import { eventDayPublicRoutes, eventDayRoutes } from './features/event-day/routes';
 
 /** Builds the Express app: middleware → routers → 404 → error handler. `listen` is the caller's business. */
 export function createApp(ctx: AppContext) {
@@ -48,6 +49,7 @@ export function createApp(ctx: AppContext) {
   api.use(express.json({ limit: '100kb' }));
   api.use(express.urlencoded({ extended: false, limit: '100kb' }));
   api.use(publicRoutes(ctx));
+  api.use(eventDayPublicRoutes(ctx));
 
   const { middleware: session, store } = sessionMiddleware(ctx.env, ctx.database.pool);
   const { csrfSynchronisedProtection, generateToken } = csrfSync({
@@ -66,6 +68,7 @@ export function createApp(ctx: AppContext) {
   api.use(bookingRoutes(ctx));
   api.use(volunteerRoutes(ctx));
   api.use(triageRoutes(ctx));
+  api.use(eventDayRoutes(ctx));
   api.use(apiNotFound);
   app.use('/api', api);
 

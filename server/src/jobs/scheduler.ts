@@ -1,4 +1,4 @@
-import { and, eq, isNull, lte, sql } from 'drizzle-orm';
+import { and, eq, isNotNull, isNull, lte, sql } from 'drizzle-orm';
 import type { AppContext } from '../context';
 import { bookingItems, bookings, categories, events, slots, waitlistEntries } from '../db/schema/index';
 import { enqueueMail } from '../mail/outbox';
@@ -64,6 +64,7 @@ export async function sendReminders(ctx: AppContext): Promise<number> {
       .where(and(
         eq(bookings.status, 'confirmed'),
         isNull(bookings.reminderSentAt),
+        isNotNull(bookings.visitorEmail),
         eq(events.status, 'published'),
         sql`${slots.startsAt} > NOW(3)`,
         sql`${slots.startsAt} <= NOW(3) + INTERVAL 24 HOUR`,
@@ -74,7 +75,7 @@ export async function sendReminders(ctx: AppContext): Promise<number> {
     for (const r of due) {
       const items = await tx.select({ name: categories.name, brand: bookingItems.brand, model: bookingItems.model }).from(bookingItems).innerJoin(categories, eq(categories.id, bookingItems.categoryId)).where(eq(bookingItems.bookingId, r.booking.id));
       await enqueueMail(tx, reminderMail({
-        reference: r.booking.reference, visitorName: r.booking.visitorName, visitorEmail: r.booking.visitorEmail, eventTitle: r.event.title, groupName: r.group.name,
+        reference: r.booking.reference, visitorName: r.booking.visitorName, visitorEmail: r.booking.visitorEmail!, eventTitle: r.event.title, groupName: r.group.name,
         timeZone: r.group.timeZone, slotStartsAt: r.slot.startsAt, slotEndsAt: r.slot.endsAt, venue: r.venue,
         items: items.map((i) => [i.name, [i.brand, i.model].filter(Boolean).join(' ')].filter(Boolean).join(' — ')),
         manageUrl: manageUrl(ctx, r.booking.reference, manageTokenFor(ctx, r.booking.reference)),

@@ -1,5 +1,6 @@
-import { boolean, char, index, int, json, mysqlEnum, mysqlTable, primaryKey, text, uniqueIndex, varchar } from 'drizzle-orm/mysql-core';
+import { boolean, char, decimal, index, int, json, mysqlEnum, mysqlTable, primaryKey, text, uniqueIndex, varchar } from 'drizzle-orm/mysql-core';
 import { BOOKING_STATUSES, EVENT_STATUSES, WAITLIST_STATUSES, type Hazard, type Skill } from '../../../../shared/constants';
+import { ITEM_STATUSES } from '../../../../shared/event-day/constants';
 import { createdAt, id, ref, timestamp3 } from './columns';
 import { categories } from './categories';
 import { repairGroups, venues } from './groups';
@@ -18,6 +19,8 @@ export const events = mysqlTable('events', {
   status: mysqlEnum('status', EVENT_STATUSES).notNull().default('draft'),
   publishedAt: timestamp3('published_at'),
   cancelledAt: timestamp3('cancelled_at'),
+  /** The last queue number handed out at the desk; taken under the event row's lock. */
+  queueCounter: int('queue_counter').notNull().default(0),
   createdAt: createdAt(),
 }, (t) => [index('events_status_starts_idx').on(t.status, t.startsAt), index('events_group_idx').on(t.groupId, t.startsAt)]);
 
@@ -46,8 +49,13 @@ export const bookings = mysqlTable('bookings', {
   eventId: ref('event_id').notNull().references(() => events.id, { onDelete: 'cascade' }),
   slotId: ref('slot_id').notNull().references(() => slots.id),
   visitorName: varchar('visitor_name', { length: 120 }).notNull(),
-  visitorEmail: varchar('visitor_email', { length: 254 }).notNull(),
+  /** Walk-ins may leave no address. */
+  visitorEmail: varchar('visitor_email', { length: 254 }),
   visitorPhone: varchar('visitor_phone', { length: 40 }),
+  /** Came to the desk without booking; queued after the booked items of their slot. */
+  walkIn: boolean('walk_in').notNull().default(false),
+  /** For walk-ins: the name typed at the desk by the person accepting the house rules. */
+  consentName: varchar('consent_name', { length: 120 }),
   manageTokenHash: char('manage_token_hash', { length: 64 }).notNull(),
   status: mysqlEnum('status', BOOKING_STATUSES).notNull().default('confirmed'),
   consentAt: timestamp3('consent_at').notNull(),
@@ -67,8 +75,16 @@ export const bookingItems = mysqlTable('booking_items', {
   mains: boolean('mains').notNull(),
   battery: boolean('battery').notNull().default(false),
   position: int('position').notNull(),
+  status: mysqlEnum('status', ITEM_STATUSES).notNull().default('booked'),
+  tagCode: char('tag_code', { length: 5 }),
+  queueNumber: int('queue_number'),
+  /** Weighed at the desk; overrides the category's average weight in the statistics. */
+  weighedKg: decimal('weighed_kg', { precision: 8, scale: 3, mode: 'number' }),
+  checkedInAt: timestamp3('checked_in_at'),
+  startedAt: timestamp3('started_at'),
+  doneAt: timestamp3('done_at'),
   createdAt: createdAt(),
-}, (t) => [index('booking_items_booking_idx').on(t.bookingId)]);
+}, (t) => [index('booking_items_booking_idx').on(t.bookingId), uniqueIndex('booking_items_tag_uq').on(t.tagCode), index('booking_items_status_idx').on(t.status)]);
 
 export const itemPhotos = mysqlTable('item_photos', {
   id: id(),

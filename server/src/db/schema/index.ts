@@ -4,3 +4,4 @@ export * from './platform';
 export * from './categories';
 export * from './events';
 export * from './volunteers';
+export * from './event-day';

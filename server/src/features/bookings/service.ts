@@ -31,7 +31,7 @@ async function bookableSlot(tx: DbOrTx, slotId: number, opts: { lock?: boolean }
 }
 
 /** Refuses the whole booking when any item is one the group does not take, saying why for each. */
-async function screen(tx: DbOrTx, groupId: number, groupName: string, items: Item[]) {
+export async function screen(tx: DbOrTx, groupId: number, groupName: string, items: Item[]) {
   const ids = [...new Set(items.map((i) => i.categoryId))];
   const cats = await tx.select().from(categories).where(inArray(categories.id, ids));
   const byId = new Map(cats.map((c) => [c.id, c]));
@@ -253,7 +253,7 @@ export async function cancelBooking(ctx: AppContext, bookingId: number) {
       await tx.update(bookings).set({ status: 'cancelled', cancelledAt: new Date() }).where(eq(bookings.id, b.id));
       await releaseSkillPlaces(tx, b.slotId, countBySkill(items.map((i) => i.skill)));
       await releasePlaces(ctx, tx, b.slotId, items.length);
-      await enqueueMail(tx, cancelledMail(facts(ctx, row, b, labelsOf(items), null)));
+      if (b.visitorEmail) await enqueueMail(tx, cancelledMail(facts(ctx, row, { ...b, visitorEmail: b.visitorEmail }, labelsOf(items), null)));
     }),
   );
   ctx.outbox.kick();
@@ -280,7 +280,7 @@ export async function moveBooking(ctx: AppContext, bookingId: number, slotId: nu
       await tx.update(bookings).set({ slotId, reminderSentAt: null }).where(eq(bookings.id, b.id));
       await releaseSkillPlaces(tx, b.slotId, perSkill);
       await releasePlaces(ctx, tx, b.slotId, items.length);
-      await enqueueMail(tx, movedMail(facts(ctx, row, b, labelsOf(items), manageToken)));
+      if (b.visitorEmail) await enqueueMail(tx, movedMail(facts(ctx, row, { ...b, visitorEmail: b.visitorEmail }, labelsOf(items), manageToken)));
     }),
   );
   ctx.outbox.kick();

@@ -121,6 +121,7 @@ export async function changeStatus(ctx: AppContext, id: number, action: keyof ty
       const [g] = await tx.select().from(repairGroups).where(eq(repairGroups.id, e.groupId));
       const booked = await tx.select().from(bookings).where(and(eq(bookings.eventId, id), eq(bookings.status, 'confirmed')));
       for (const b of booked) {
+        if (!b.visitorEmail) continue;
         await enqueueMail(tx, composeMail(b.visitorEmail, `Cancelled: ${e.title} on ${formatDay(e.startsAt, g.timeZone)}`, {
           paragraphs: [
             `Hello ${b.visitorName},`,

@@ -15,17 +15,19 @@ async function loadEvent(ctx: AppContext, eventId: number) {
   if (!e) throw notFound('That event');
   const slotRows = await db.select().from(slots).where(eq(slots.eventId, eventId)).orderBy(asc(slots.startsAt));
   const items = await db
-    .select({ id: bookingItems.id, bookingId: bookings.id, reference: bookings.reference, visitorName: bookings.visitorName, bookedAt: bookings.createdAt, slotId: bookings.slotId, categoryName: categories.name, skill: categories.skill, equipment: categories.equipment, catMains: categories.mains, minutes: categories.repairMinutes, brand: bookingItems.brand, model: bookingItems.model, fault: bookingItems.fault, mains: bookingItems.mains, position: bookingItems.position })
+    .select({ id: bookingItems.id, status: bookingItems.status, bookingId: bookings.id, reference: bookings.reference, visitorName: bookings.visitorName, bookedAt: bookings.createdAt, slotId: bookings.slotId, categoryName: categories.name, skill: categories.skill, equipment: categories.equipment, catMains: categories.mains, minutes: categories.repairMinutes, brand: bookingItems.brand, model: bookingItems.model, fault: bookingItems.fault, mains: bookingItems.mains, position: bookingItems.position })
     .from(bookingItems)
     .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
     .innerJoin(categories, eq(categories.id, bookingItems.categoryId))
-    .where(and(eq(bookings.eventId, eventId), eq(bookings.status, 'confirmed')))
-    .orderBy(asc(bookings.createdAt), asc(bookingItems.position));
+    // Items still to be repaired, and those at a bench now (they hold their fixer and bench); walk-ins after the booked.
+    .where(and(eq(bookings.eventId, eventId), eq(bookings.status, 'confirmed'), inArray(bookingItems.status, ['booked', 'checked-in', 'waiting', 'at-bench'])))
+    .orderBy(asc(bookings.walkIn), asc(bookings.createdAt), asc(bookingItems.position));
   const photos = items.length ? await db.select({ id: itemPhotos.id, itemId: itemPhotos.itemId }).from(itemPhotos).where(inArray(itemPhotos.itemId, items.map((i) => i.id))) : [];
   const fixers = await db.select({ shift: shifts, name: users.name }).from(shifts).innerJoin(users, eq(users.id, shifts.userId)).where(and(eq(shifts.eventId, eventId), eq(shifts.coming, true))).orderBy(asc(users.name));
   const skills = await skillsOf(db, fixers.map((f) => f.shift.userId));
   const benches = await eventLayout(ctx, eventId);
-  const placed = await db.select().from(itemAssignments).where(eq(itemAssignments.eventId, eventId));
+  const live = new Set(items.map((i) => i.id));
+  const placed = (await db.select().from(itemAssignments).where(eq(itemAssignments.eventId, eventId))).filter((p) => live.has(p.itemId));
   const slotIndex = new Map(slotRows.map((s, i) => [s.id, i]));
   const enriched = items.map((i, order) => ({
     ...i,
@@ -67,9 +69,11 @@ export async function runTriage(ctx: AppContext, eventId: number, slotId: number
   const data = await loadEvent(ctx, eventId);
   const slot = slotId ? data.slots.find((s) => s.id === slotId) : undefined;
   if (slotId && !slot) throw new HttpError(400, 'invalid', 'Some fields need attention.', { slotId: 'That slot is not part of this event.' });
-  const locked = data.placed.filter((p) => p.locked);
+  // A repair under way is as fixed as a locked placement.
+  const atBench = new Set(data.items.filter((i) => i.status === 'at-bench').map((i) => i.id));
+  const locked = data.placed.filter((p) => p.locked || atBench.has(p.itemId));
   const lockedItems = new Set(locked.map((p) => p.itemId));
-  const pool = data.items.filter((i) => !lockedItems.has(i.id) && (!slot || i.slotId === slot.id));
+  const pool = data.items.filter((i) => !lockedItems.has(i.id) && !atBench.has(i.id) && (!slot || i.slotId === slot.id));
   const poolIds = new Set(pool.map((i) => i.id));
   const fixerOf = (f: Loaded['fixers'][number], capacity: number) => ({ id: String(f.userId), name: f.name, skills: f.skills, capacity, ...(f.benchId ? { benchId: String(f.benchId) } : {}) });
   const benchOf = (b: Loaded['benches'][number], seats: number) => ({ id: String(b.id), name: b.name, equipment: b.equipment, seats });
