@@ -5,15 +5,20 @@ import '@fontsource/nunito/800.css';
 import './index.css';
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
-import { QueryClientProvider } from '@tanstack/react-query';
+import { PersistQueryClientProvider } from '@tanstack/react-query-persist-client';
 import { RouterProvider } from 'react-router';
-import { queryClient } from './lib/query-client';
+import { pendingWritesPersister, queryClient } from './lib/query-client';
 import { router } from './router';
 
 createRoot(document.getElementById('root')!).render(
   <StrictMode>
-    <QueryClientProvider client={queryClient}>
+    <PersistQueryClientProvider
+      client={queryClient}
+      persistOptions={{ persister: pendingWritesPersister, maxAge: 7 * 24 * 3600_000, dehydrateOptions: { shouldDehydrateQuery: () => false } }}
+      // Writes made offline before a reload are sent as soon as they are restored (if online).
+      onSuccess={() => void queryClient.resumePausedMutations()}
+    >
       <RouterProvider router={router} />
-    </QueryClientProvider>
+    </PersistQueryClientProvider>
   </StrictMode>,
 );

@@ -12,7 +12,6 @@ import { SignInPage } from './routes/auth/sign-in';
 import { VolunteerPage } from './routes/auth/volunteer';
 import { ForgotPasswordPage, ResetPasswordPage, VerifyEmailPage } from './routes/auth/email-links';
 import { SetupPage } from './routes/auth/setup';
-import { VolunteerHome } from './routes/volunteer-home';
 import { hasRole } from './lib/roles';
 import { EventPage } from './routes/events/detail';
 import { ManageBookingPage } from './routes/bookings/manage';
@@ -28,6 +27,7 @@ const page = (load: () => Promise<Record<string, React.ComponentType>>, name: st
 
 const organiser = (u: SessionUser) => u.admin || u.roles.some((r) => r.role === 'organiser');
 const admin = (u: SessionUser) => u.admin;
+const staff = (u: SessionUser) => u.admin || hasRole(u, 'host') || hasRole(u, 'organiser');
 
 function StartRedirect() {
   const { data: user, isPending } = useUser();
@@ -36,6 +36,9 @@ function StartRedirect() {
 }
 
 export const router = createBrowserRouter([
+  // Pages for a TV and for the printer: no header, no menu.
+  { path: 'events/:eventId/hall', errorElement: <RouteError />, hydrateFallbackElement: <Spinner />, ...page(() => import('./routes/event-day/hall-display'), 'HallDisplayPage') },
+  { path: 'events/:eventId/tags', errorElement: <RouteError />, hydrateFallbackElement: <Spinner />, ...page(() => import('./routes/event-day/tags'), 'TagSheetPage', (u) => staff(u)) },
   {
     element: <AppShell />,
     errorElement: <RouteError />,
@@ -57,7 +60,11 @@ export const router = createBrowserRouter([
       { path: 'events/:eventId/board', ...page(() => import('./routes/triage/board'), 'TriageBoardPage', organiser) },
       { path: 'events/:eventId/rota', ...page(() => import('./routes/triage/rota'), 'RotaPage', organiser) },
       { path: 'events/:eventId/benches', ...page(() => import('./routes/triage/benches'), 'BenchesPage', organiser) },
-      { path: 'desk', element: <RequireRole allow={(u) => hasRole(u, 'host')}><VolunteerHome role="host" /></RequireRole> },
+      { path: 'desk', ...page(() => import('./routes/event-day/desk'), 'DeskHomePage', staff) },
+      { path: 'desk/:eventId', ...page(() => import('./routes/event-day/desk'), 'DeskPage', staff) },
+      { path: 'items/:itemId', ...page(() => import('./routes/event-day/item'), 'ItemPage', (u) => staff(u) || hasRole(u, 'fixer')) },
+      { path: 't/:code', ...page(() => import('./routes/event-day/tag'), 'TagPage') },
+      { path: 'events/:eventId/live', ...page(() => import('./routes/event-day/live'), 'LiveViewPage', organiser) },
       { path: 'events', ...page(() => import('./routes/events/list'), 'EventsPage') },
       { path: 'events/:eventId', element: <EventPage /> },
       { path: 'events/:eventId/book', ...page(() => import('./routes/events/book'), 'BookingPage') },

@@ -28,4 +28,10 @@ export const paths = {
   benches: (id: number) => `/events/${id}/benches`,
   skillsMatrix: (groupId: number) => `/groups/${groupId}/skills`,
   mySkills: () => '/me/skills',
+  deskEvent: (id: number) => `/desk/${id}`,
+  item: (id: number) => `/items/${id}`,
+  tag: (code: string) => `/t/${code}`,
+  tags: (eventId: number, opts: { slotId?: number; items?: number[] } = {}) => `/events/${eventId}/tags${opts.slotId ? `?slot=${opts.slotId}` : opts.items?.length ? `?items=${opts.items.join(',')}` : ''}`,
+  hall: (eventId: number) => `/events/${eventId}/hall`,
+  live: (eventId: number) => `/events/${eventId}/live`,
 };

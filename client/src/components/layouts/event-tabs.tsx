@@ -11,6 +11,8 @@ export function EventTabs({ eventId }: { eventId: number }) {
         { to: paths.rota(eventId), label: 'Rota' },
         { to: paths.board(eventId), label: 'Triage board' },
         { to: paths.benches(eventId), label: 'Benches' },
+        { to: paths.live(eventId), label: 'Live' },
+        { to: paths.deskEvent(eventId), label: 'Desk' },
       ]}
     />
   );

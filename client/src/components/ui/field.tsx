@@ -1,4 +1,4 @@
-import { forwardRef, useId, type InputHTMLAttributes, type ReactNode, type SelectHTMLAttributes } from 'react';
+import { forwardRef, useId, type InputHTMLAttributes, type ReactNode, type SelectHTMLAttributes, type TextareaHTMLAttributes } from 'react';
 
 interface FieldProps {
   label: string;
@@ -30,6 +30,31 @@ export const SelectField = forwardRef<HTMLSelectElement, FieldProps & SelectHTML
       <select ref={ref} id={id} aria-invalid={Boolean(error)} aria-describedby={error || hint ? `${id}-msg` : undefined} className={inputClass(error)} {...rest}>
         {children}
       </select>
+      {(error || hint) && <p id={`${id}-msg`} className={`text-sm ${error ? 'font-semibold text-alert' : 'text-ink-soft'}`}>{error ?? hint}</p>}
+    </div>
+  );
+});
+
+export const TextAreaField = forwardRef<HTMLTextAreaElement, FieldProps & TextareaHTMLAttributes<HTMLTextAreaElement>>(function TextAreaField({ label, error, hint, ...rest }, ref) {
+  const id = useId();
+  return (
+    <div className="space-y-1">
+      <label htmlFor={id} className="block font-semibold">{label}</label>
+      <textarea ref={ref} id={id} rows={3} aria-invalid={Boolean(error)} aria-describedby={error || hint ? `${id}-msg` : undefined} className={inputClass(error)} {...rest} />
+      {(error || hint) && <p id={`${id}-msg`} className={`text-sm ${error ? 'font-semibold text-alert' : 'text-ink-soft'}`}>{error ?? hint}</p>}
+    </div>
+  );
+});
+
+/** A tick box with its label beside it, big enough to hit with a thumb. */
+export const CheckField = forwardRef<HTMLInputElement, FieldProps & InputHTMLAttributes<HTMLInputElement>>(function CheckField({ label, error, hint, ...rest }, ref) {
+  const id = useId();
+  return (
+    <div className="space-y-1">
+      <label htmlFor={id} className="flex min-h-11 cursor-pointer items-center gap-3">
+        <input ref={ref} id={id} type="checkbox" aria-invalid={Boolean(error)} aria-describedby={error || hint ? `${id}-msg` : undefined} className="size-5 accent-copper" {...rest} />
+        <span className="font-semibold">{label}</span>
+      </label>
       {(error || hint) && <p id={`${id}-msg`} className={`text-sm ${error ? 'font-semibold text-alert' : 'text-ink-soft'}`}>{error ?? hint}</p>}
     </div>
   );

@@ -5,6 +5,7 @@ import { MonthCalendar } from '../../components/ui/month-calendar';
 import { Alert, Card, EmptyState, PageTitle, Spinner } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
 import { useUser } from '../../features/auth/api/get-me';
+import { StatusChip } from '../../features/event-day/status-chip';
 import { useMyEvents, useQueue, useSetShift } from '../../features/volunteers/api/volunteers';
 
 /** The fixer's page on a phone: the items coming to them in order, then the sessions they can say yes to. */
@@ -26,9 +27,10 @@ export function BenchPage() {
           {queue.data?.map((q, n) => (
             <li key={q.itemId} className="rounded-xl bg-white p-4 shadow-sm ring-1 ring-ink/5">
               <div className="flex items-baseline justify-between gap-2">
-                <p className="text-lg font-extrabold text-navy"><span className="mr-2 inline-flex size-7 items-center justify-center rounded-full bg-copper text-sm text-white">{n + 1}</span>{q.categoryName}</p>
+                <p className="text-lg font-extrabold text-navy"><span className="mr-2 inline-flex size-7 items-center justify-center rounded-full bg-copper text-sm text-white">{n + 1}</span><Link to={paths.item(q.itemId)} className="underline decoration-copper/40 underline-offset-4 hover:decoration-copper">{q.categoryName}</Link></p>
                 <p className="text-sm font-bold text-copper-dark">{formatTime(q.slotStartsAt, q.timeZone)}</p>
               </div>
+              {q.status !== 'booked' && <p className="mt-1 flex items-center gap-2"><StatusChip status={q.status} />{q.queueNumber !== null && <b>No. {q.queueNumber}</b>}{q.tagCode && <span className="font-mono text-sm">{q.tagCode}</span>}</p>}
               <p className="mt-1">{q.fault}</p>
               <p className="mt-1 text-sm text-ink-soft">{[q.brand, q.model].filter(Boolean).join(' ') || 'Brand not given'} · {q.visitorName} · {q.benchName} · about {q.minutes} min · {q.reference}</p>
               {q.mains && <p className="mt-2 rounded bg-copper-light px-2 py-1 text-sm font-semibold text-copper-dark">⚠ Mains item: unplug and prove dead before opening; safety-check before it goes home.</p>}

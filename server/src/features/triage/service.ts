@@ -211,7 +211,7 @@ export async function runDetail(ctx: AppContext, eventId: number, runId: number)
 export async function myQueue(ctx: AppContext, userId: number) {
   const { db } = ctx.database;
   const rows = await db
-    .select({ itemId: bookingItems.id, eventId: events.id, eventTitle: events.title, timeZone: repairGroups.timeZone, slotStartsAt: sql<Date>`COALESCE(${itemAssignments.startsAt}, ${slots.startsAt})`, reference: bookings.reference, visitorName: bookings.visitorName, categoryName: categories.name, minutes: categories.repairMinutes, brand: bookingItems.brand, model: bookingItems.model, fault: bookingItems.fault, mains: bookingItems.mains, benchId: itemAssignments.benchId, locked: itemAssignments.locked })
+    .select({ itemId: bookingItems.id, status: bookingItems.status, tagCode: bookingItems.tagCode, queueNumber: bookingItems.queueNumber, eventId: events.id, eventTitle: events.title, timeZone: repairGroups.timeZone, slotStartsAt: sql<Date>`COALESCE(${itemAssignments.startsAt}, ${slots.startsAt})`, reference: bookings.reference, visitorName: bookings.visitorName, categoryName: categories.name, minutes: categories.repairMinutes, brand: bookingItems.brand, model: bookingItems.model, fault: bookingItems.fault, mains: bookingItems.mains, benchId: itemAssignments.benchId, locked: itemAssignments.locked })
     .from(itemAssignments)
     .innerJoin(bookingItems, eq(bookingItems.id, itemAssignments.itemId))
     .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
@@ -219,7 +219,7 @@ export async function myQueue(ctx: AppContext, userId: number) {
     .innerJoin(events, eq(events.id, bookings.eventId))
     .innerJoin(repairGroups, eq(repairGroups.id, events.groupId))
     .innerJoin(categories, eq(categories.id, bookingItems.categoryId))
-    .where(and(eq(itemAssignments.userId, userId), eq(bookings.status, 'confirmed'), inArray(events.status, ['published', 'closed'])))
+    .where(and(eq(itemAssignments.userId, userId), eq(bookings.status, 'confirmed'), inArray(events.status, ['published', 'closed']), inArray(bookingItems.status, ['booked', 'checked-in', 'waiting', 'at-bench'])))
     .orderBy(sql`COALESCE(${itemAssignments.startsAt}, ${slots.startsAt})`, asc(bookings.createdAt));
   const ids = rows.map((r) => r.itemId);
   const photos = ids.length ? await db.select({ id: itemPhotos.id, itemId: itemPhotos.itemId }).from(itemPhotos).where(inArray(itemPhotos.itemId, ids)) : [];

@@ -1,3 +1,4 @@
+import type { ItemStatus } from '../../../../../shared/event-day/constants';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { ProfileInput } from '../../../../../shared/schemas/volunteers';
 import { api } from '../../../lib/api';
@@ -19,6 +20,9 @@ export interface MyEvent {
 }
 export interface QueueItem {
   itemId: number;
+  status: ItemStatus;
+  tagCode: string | null;
+  queueNumber: number | null;
   eventId: number;
   eventTitle: string;
   timeZone: string;

@@ -1,0 +1,34 @@
+import { Link, Navigate, useParams } from 'react-router';
+import { Alert, Card, Spinner } from '../../components/ui/feedback';
+import { paths } from '../../config/paths';
+import { useUser } from '../../features/auth/api/get-me';
+import { usePublicTag } from '../../features/event-day/api';
+import { StatusChip } from '../../features/event-day/status-chip';
+
+/**
+ * Where a scanned tag lands. The group's volunteers go straight to the item; anyone else (the visitor) sees the
+ * item's status and queue number only.
+ */
+export function TagPage() {
+  const code = String(useParams().code ?? '').toUpperCase();
+  const { data: user, isPending: userPending } = useUser();
+  const { data: tag, isPending, error } = usePublicTag(code);
+  if (isPending || userPending) return <Spinner />;
+  if (error) return <Alert tone="error" title="Tag not found">No item carries the tag {code}. Check the code printed under the QR code.</Alert>;
+  const staff = user && (user.admin || user.roles.some((r) => r.groupId === tag.groupId));
+  if (staff) return <Navigate to={paths.item(tag.itemId)} replace />;
+  return (
+    <div className="mx-auto max-w-md space-y-4">
+      <Card className="text-center">
+        <p className="text-sm text-ink-soft">{tag.groupName} · {tag.eventTitle}</p>
+        <p className="my-2 font-mono text-4xl font-extrabold tracking-widest text-navy">{tag.tagCode}</p>
+        <h1 className="text-2xl">{tag.categoryName}</h1>
+        {tag.queueNumber !== null && <p className="mt-1 text-lg">Queue number <b>{tag.queueNumber}</b></p>}
+        <p className="mt-3"><StatusChip status={tag.status} /></p>
+        {tag.outcomeLabel && <p className="mt-2 text-lg font-bold">{tag.outcomeLabel}</p>}
+        {tag.waitMinutes !== null && <p className="mt-2 text-ink-soft">{tag.waitMinutes === 0 ? 'You are next.' : `About ${tag.waitMinutes} minutes until a fixer is free.`}</p>}
+      </Card>
+      <p className="text-center text-sm text-ink-soft">This page refreshes by itself. Volunteers: <Link className="font-semibold text-navy underline" to={paths.signIn(paths.tag(tag.tagCode))}>sign in</Link> to open the item.</p>
+    </div>
+  );
+}
