@@ -8,7 +8,7 @@ export type ItemStatus = (typeof ITEM_STATUSES)[number];
 export const ITEM_STATUS_LABELS: Record<ItemStatus, string> = {
   booked: 'Booked',
   'checked-in': 'Checked in',
-  waiting: 'Waiting for a fixer',
+  waiting: 'In the queue',
   'at-bench': 'At the bench',
   done: 'Done',
   'no-show': 'Did not come',

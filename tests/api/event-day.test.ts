@@ -6,7 +6,8 @@ import type { RunningServer } from '../../server/src/server';
 import { createTestDatabase, type TestDatabase } from '../support/db';
 import { categoryId, makeEvent, makeGroup, makeUser, visitor } from '../support/factories';
 import { Agent } from '../support/http';
-import { startTestServer } from '../support/server';
+import { startTestServer, TEST_SECRET } from '../support/server';
+import { manageTokenFor } from '../../server/src/features/bookings/service';
 
 let db: TestDatabase;
 let server: RunningServer;
@@ -71,8 +72,6 @@ afterAll(async () => {
 describe('reception check-in', () => {
   it('gives each arrived item a tag code and a queue number, and checking in again changes nothing', async () => {
     const { reference } = await book(slotIds[0], [{ categoryId: cats.kettle, fault: 'Switches off before boiling.' }, { categoryId: cats.clothing, fault: 'Zip has come off one side.' }]);
-    ids.ref1 = 0;
-    (globalThis as Record<string, unknown>).ref1 = reference;
     const r = await as.host.post(`/api/bookings/${reference}/check-in`, {});
     expect(r.status).toBe(200);
     expect(r.json.items).toHaveLength(2);
@@ -297,5 +296,20 @@ describe('what the hall and the visitor see', () => {
     expect(r.json.tags.every((x: { slotStartsAt: string }) => new Date(x.slotStartsAt).getTime() === new Date(r.json.tags[0].slotStartsAt).getTime())).toBe(true);
     const one = await as.host.get(`/api/events/${eventId}/tags?items=${ids.kettle}`);
     expect(one.json.tags).toHaveLength(1);
+  });
+});
+
+describe('the visitor’s own booking page', () => {
+  it('shows their items’ status and queue number, and no longer lets them cancel once checked in', async () => {
+    const { reference } = await book(slotIds[2], [{ categoryId: cats.clothing, fault: 'Strap of a rucksack torn off.' }]);
+    const token = manageTokenFor({ env: { SESSION_SECRET: TEST_SECRET } } as never, reference);
+    expect((await as.anon.get(`/api/bookings/${reference}?token=${token}`)).json.items[0]).toMatchObject({ status: 'booked', queueNumber: null, outcome: null });
+    await as.host.post(`/api/bookings/${reference}/check-in`, {});
+    const view = (await as.anon.get(`/api/bookings/${reference}?token=${token}`)).json;
+    expect(view.items[0].status).toMatch(/checked-in|waiting/);
+    expect(view.items[0].queueNumber).toBeGreaterThan(0);
+    const cancel = await as.anon.delete(`/api/bookings/${reference}?token=${token}`);
+    expect(cancel.status).toBe(409);
+    expect(cancel.json.error.code).toBe('checked-in');
   });
 });

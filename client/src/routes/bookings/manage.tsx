@@ -1,4 +1,6 @@
 import { useState } from 'react';
+import { OUTCOME_LABELS } from '../../../../shared/event-day/constants';
+import { StatusChip } from '../../features/event-day/status-chip';
 import { Link, useLocation, useParams, useSearchParams } from 'react-router';
 import { formatDay, formatTime, formatTimeRange, WHAT_TO_BRING } from '../../../../shared/format';
 import { Button } from '../../components/ui/button';
@@ -83,6 +85,7 @@ export function ManageBookingPage() {
           {b.items.map((i) => (
             <li key={i.id} className="py-3">
               <p className="font-bold">{i.categoryName}{i.brand || i.model ? ` — ${[i.brand, i.model].filter(Boolean).join(' ')}` : ''}</p>
+              {i.status !== 'booked' && <p className="my-1 flex items-center gap-2 text-sm"><StatusChip status={i.status} />{i.queueNumber !== null && <span>Queue number <b>{i.queueNumber}</b></span>}{i.outcome && <b>{OUTCOME_LABELS[i.outcome]}</b>}</p>}
               <p className="text-ink-soft">{i.fault}</p>
               <div className="mt-2 flex flex-wrap items-center gap-2">
                 {i.photos.map((p) => <img key={p.id} src={`/api/photos/${p.id}?token=${encodeURIComponent(token)}`} alt="" className="size-20 rounded-lg object-cover ring-1 ring-ink/10" />)}

@@ -111,6 +111,26 @@ const num = (s: string) => (s.trim() === '' ? undefined : Number(s.replace(',', 
 
 /** The electrical safety check: visual inspection, class, readings; the verdict is worked out as you type. */
 function SafetySection({ item }: { item: ItemDetail }) {
+  const latest = item.safetyChecks[0];
+  const [open, setOpen] = useState(!latest?.pass);
+  useEffect(() => setOpen(!latest?.pass), [latest?.id, latest?.pass]);
+  if (!open && latest) {
+    return (
+      <Card>
+        <h2 className="text-lg">Electrical safety check</h2>
+        <div className="my-3" data-testid="latest-check">
+          <Alert tone="success" title={`Passed at ${formatTime(latest.createdAt, item.event.timeZone)}`}>
+            Class {latest.applianceClass}{latest.instrument && `, ${latest.instrument}`}{latest.checkedByName && `, by ${latest.checkedByName}`}. {item.safetyChecks.length > 1 && `${item.safetyChecks.length - 1} earlier check${item.safetyChecks.length > 2 ? 's' : ''} failed or were repeated.`}
+          </Alert>
+        </div>
+        {item.status !== 'done' && <Button variant="secondary" className="w-full" onClick={() => setOpen(true)}>Record another check</Button>}
+      </Card>
+    );
+  }
+  return <SafetyForm item={item} />;
+}
+
+function SafetyForm({ item }: { item: ItemDetail }) {
   const record = useSafetyCheck(item.id);
   const [visual, setVisual] = useState({ cord: false, plug: false, strainRelief: false, casing: false, noHeatDamage: false });
   const [cls, setCls] = useState<ApplianceClass>('I');

@@ -7,7 +7,7 @@ import type { createBookingSchema } from '../../../../shared/schemas/bookings';
 import type { AppContext } from '../../context';
 import type { DbOrTx, Tx } from '../../db/client';
 import { affectedRows, isDuplicate, withDeadlockRetry } from '../../db/retry';
-import { bookingItems, bookings, categories, events, idempotencyKeys, itemPhotos, repairGroups, slots, slotSkillCounts, venues, waitlistEntries } from '../../db/schema/index';
+import { bookingItems, bookings, categories, events, idempotencyKeys, itemOutcomes, itemPhotos, repairGroups, slots, slotSkillCounts, venues, waitlistEntries } from '../../db/schema/index';
 import { newToken, sha256 } from '../../auth/tokens';
 import { HttpError, notFound } from '../../http/errors';
 import { enqueueMail } from '../../mail/outbox';
@@ -190,9 +190,10 @@ export async function bookingView(ctx: AppContext, bookingId: number) {
   const { db } = ctx.database;
   const [row] = await bookingWithContext(db).where(eq(bookings.id, bookingId));
   const items = await db
-    .select({ id: bookingItems.id, categoryId: bookingItems.categoryId, categoryName: categories.name, skill: categories.skill, brand: bookingItems.brand, model: bookingItems.model, ageYears: bookingItems.ageYears, fault: bookingItems.fault, mains: bookingItems.mains, battery: bookingItems.battery })
+    .select({ id: bookingItems.id, categoryId: bookingItems.categoryId, categoryName: categories.name, skill: categories.skill, brand: bookingItems.brand, model: bookingItems.model, ageYears: bookingItems.ageYears, fault: bookingItems.fault, mains: bookingItems.mains, battery: bookingItems.battery, status: bookingItems.status, queueNumber: bookingItems.queueNumber, outcome: itemOutcomes.outcome })
     .from(bookingItems)
     .innerJoin(categories, eq(categories.id, bookingItems.categoryId))
+    .leftJoin(itemOutcomes, eq(itemOutcomes.itemId, bookingItems.id))
     .where(eq(bookingItems.bookingId, bookingId))
     .orderBy(asc(bookingItems.position));
   const photos = items.length ? await db.select({ id: itemPhotos.id, itemId: itemPhotos.itemId, width: itemPhotos.width, height: itemPhotos.height }).from(itemPhotos).where(inArray(itemPhotos.itemId, items.map((i) => i.id))) : [];
@@ -248,6 +249,7 @@ export async function cancelBooking(ctx: AppContext, bookingId: number) {
     ctx.database.db.transaction(async (tx) => {
       const [b] = await tx.select().from(bookings).where(eq(bookings.id, bookingId)).for('update');
       if (b.status === 'cancelled') return;
+      await assertNotArrived(tx, b.id);
       const row = await bookableSlotUnchecked(tx, b.slotId);
       const items = await itemsOf(tx, b.id);
       await tx.update(bookings).set({ status: 'cancelled', cancelledAt: new Date() }).where(eq(bookings.id, b.id));
@@ -257,6 +259,12 @@ export async function cancelBooking(ctx: AppContext, bookingId: number) {
     }),
   );
   ctx.outbox.kick();
+}
+
+/** Once reception has checked an item in, the booking is the desk's to change, not the visitor's link. */
+async function assertNotArrived(tx: Tx, bookingId: number) {
+  const items = await tx.select({ status: bookingItems.status }).from(bookingItems).where(eq(bookingItems.bookingId, bookingId));
+  if (items.some((i) => i.status !== 'booked')) throw new HttpError(409, 'checked-in', 'You have already checked in at reception. Ask at the desk to change anything.');
 }
 
 async function bookableSlotUnchecked(tx: Tx, slotId: number) {
@@ -271,6 +279,7 @@ export async function moveBooking(ctx: AppContext, bookingId: number, slotId: nu
       const [b] = await tx.select().from(bookings).where(eq(bookings.id, bookingId)).for('update');
       if (b.status !== 'confirmed') throw new HttpError(409, 'cancelled', 'This booking is cancelled.');
       if (b.slotId === slotId) return;
+      await assertNotArrived(tx, b.id);
       const row = await bookableSlot(tx, slotId);
       if (row.event.id !== b.eventId) throw new HttpError(400, 'invalid', 'Some fields need attention.', { slotId: 'Choose a time of the same event.' });
       const items = await itemsOf(tx, b.id);

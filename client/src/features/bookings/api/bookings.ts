@@ -1,3 +1,4 @@
+import type { ItemStatus, Outcome } from '../../../../../shared/event-day/constants';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { CreateBookingInput } from '../../../../../shared/schemas/bookings';
 import { api } from '../../../lib/api';
@@ -17,7 +18,7 @@ export interface BookingView {
   event: { id: number; title: string; status: string; startsAt: string; endsAt: string; groupName: string; timeZone: string; houseRules: string };
   venue: { name: string; address: string; town: string; accessNotes: string };
   slot: { id: number; startsAt: string; endsAt: string };
-  items: { id: number; categoryName: string; brand: string | null; model: string | null; ageYears: number | null; fault: string; mains: boolean; photos: { id: number; width: number; height: number }[] }[];
+  items: { id: number; categoryName: string; brand: string | null; model: string | null; ageYears: number | null; fault: string; mains: boolean; status: ItemStatus; queueNumber: number | null; outcome: Outcome | null; photos: { id: number; width: number; height: number }[] }[];
   qr: string;
 }
 
