@@ -1,4 +1,5 @@
 import { eq } from 'drizzle-orm';
+import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { TAG_CODE_PATTERN } from '../../shared/event-day/tag-code';
 import { bookingItems, itemStatusChanges, shifts, venueBenches, volunteerSkills } from '../../server/src/db/schema/index';
@@ -311,5 +312,25 @@ describe('the visitor’s own booking page', () => {
     const cancel = await as.anon.delete(`/api/bookings/${reference}?token=${token}`);
     expect(cancel.status).toBe(409);
     expect(cancel.json.error.code).toBe('checked-in');
+  });
+});
+
+describe('repair photos from the bench', () => {
+  async function upload(agent: Agent, itemId: number) {
+    const data = await sharp({ create: { width: 800, height: 600, channels: 3, background: '#23395d' } }).jpeg().toBuffer();
+    const form = new FormData();
+    form.append('photos', new Blob([new Uint8Array(data)], { type: 'image/jpeg' }), 'fault.jpg');
+    const token = agent.csrf ?? (await agent.token());
+    const res = await fetch(`${server.url}/api/items/${itemId}/photos`, { method: 'POST', body: form, headers: { cookie: agent.cookieHeader(), 'x-csrf-token': token, accept: 'application/json' } });
+    return { status: res.status, json: await res.json() };
+  }
+  it('lets the fixer on the item add them, kept apart from the visitor’s, and no one else', async () => {
+    const ok = await upload(as.fixer, ids.kettle);
+    expect(ok.status).toBe(201);
+    expect(ok.json[0]).toMatchObject({ kind: 'repair', width: 800, height: 600 });
+    expect((await upload(as.fixer2, ids.kettle)).status).toBe(403);
+    expect((await upload(as.outsider, ids.kettle)).status).toBe(403);
+    const view = (await as.fixer.get(`/api/items/${ids.kettle}`)).json;
+    expect(view.photos.map((p: { kind: string }) => p.kind)).toEqual(['repair']);
   });
 });

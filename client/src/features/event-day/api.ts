@@ -21,7 +21,7 @@ export interface ItemDetail {
   categoryId: number; categoryName: string; skill: string; mains: boolean; battery: boolean; heating: boolean;
   brand: string | null; model: string | null; ageYears: number | null; fault: string; weighedKg: number | null; estimatedMinutes: number;
   checkedInAt: string | null; startedAt: string | null; doneAt: string | null;
-  photos: { id: number; width: number; height: number }[];
+  photos: { id: number; kind: 'intake' | 'repair'; width: number; height: number }[];
   booking: { reference: string; visitorName: string; visitorPhone: string | null; walkIn: boolean; slotStartsAt: string; slotEndsAt: string };
   event: { id: number; title: string; groupId: number; groupName: string; timeZone: string; startsAt: string; endsAt: string };
   placement: { userId: number; benchId: number; fixerName: string; benchName: string; startsAt: string | null } | null;
@@ -111,3 +111,15 @@ export function useSafetyCheck(id: number) {
 export const OUTCOME_MUTATION_KEY = ['item-outcome'] as const;
 export interface OutcomeVariables { itemId: number; body: OutcomeInput }
 export const sendOutcome = ({ itemId, body }: OutcomeVariables) => api<ItemDetail>('POST', `/api/items/${itemId}/outcome`, body);
+
+export function useRepairPhotos(id: number) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (files: FileList) => {
+      const form = new FormData();
+      for (const f of Array.from(files)) form.append('photos', f);
+      return api<{ id: number }[]>('POST', `/api/items/${id}/photos`, form);
+    },
+    onSuccess: () => qc.invalidateQueries({ queryKey: eventDayKeys.item(id) }),
+  });
+}

@@ -9,7 +9,7 @@ import { Button } from '../../components/ui/button';
 import { Alert, Card, Spinner } from '../../components/ui/feedback';
 import { CheckField, SelectField, TextAreaField, TextField } from '../../components/ui/field';
 import { paths } from '../../config/paths';
-import { OUTCOME_MUTATION_KEY, useItem, useSafetyCheck, useStartRepair, type ItemDetail, type OutcomeVariables } from '../../features/event-day/api';
+import { OUTCOME_MUTATION_KEY, useItem, useRepairPhotos, useSafetyCheck, useStartRepair, type ItemDetail, type OutcomeVariables } from '../../features/event-day/api';
 import { StatusChip } from '../../features/event-day/status-chip';
 import { ApiError } from '../../lib/api';
 
@@ -58,9 +58,9 @@ function ItemView({ item }: { item: ItemDetail }) {
       <Card>
         <h2 className="mb-1 text-lg">What the visitor says</h2>
         <p className="whitespace-pre-line">{item.fault}</p>
-        {item.photos.length > 0 && (
+        {item.photos.some((p) => p.kind === 'intake') && (
           <div className="mt-3 flex flex-wrap gap-2">
-            {item.photos.map((p) => <a key={p.id} href={`/api/photos/${p.id}`} target="_blank" rel="noreferrer"><img src={`/api/photos/${p.id}`} alt={`Photo of the ${item.categoryName.toLowerCase()}`} className="size-24 rounded-lg object-cover" /></a>)}
+            {item.photos.filter((p) => p.kind === 'intake').map((p) => <a key={p.id} href={`/api/photos/${p.id}`} target="_blank" rel="noreferrer"><img src={`/api/photos/${p.id}`} alt={`Photo of the ${item.categoryName.toLowerCase()}`} className="size-24 rounded-lg object-cover" /></a>)}
           </div>
         )}
       </Card>
@@ -88,6 +88,8 @@ function ItemView({ item }: { item: ItemDetail }) {
         <Alert>This item is with {item.placement?.fixerName ?? 'another fixer'}. An organiser can move it to you.</Alert>
       )}
 
+      {(item.can.record || item.photos.some((p) => p.kind === 'repair')) && <RepairPhotos item={item} />}
+
       <details className="rounded-xl bg-white p-4 ring-1 ring-ink/5">
         <summary className="cursor-pointer font-bold">History ({item.history.length})</summary>
         <ol className="mt-2 space-y-1 text-sm">
@@ -95,6 +97,26 @@ function ItemView({ item }: { item: ItemDetail }) {
         </ol>
       </details>
     </div>
+  );
+}
+
+/** Photos from the bench (the fault, a part number, the finished repair) for the knowledge base. */
+function RepairPhotos({ item }: { item: ItemDetail }) {
+  const upload = useRepairPhotos(item.id);
+  const photos = item.photos.filter((p) => p.kind === 'repair');
+  return (
+    <Card>
+      <h2 className="text-lg">Repair photos</h2>
+      <p className="mb-2 text-sm text-ink-soft">The fault, a part number, the finished repair. At most 3; no faces, please.</p>
+      {photos.length > 0 && <div className="mb-3 flex flex-wrap gap-2">{photos.map((p) => <a key={p.id} href={`/api/photos/${p.id}`} target="_blank" rel="noreferrer"><img src={`/api/photos/${p.id}`} alt="Repair photo" className="size-24 rounded-lg object-cover" /></a>)}</div>}
+      {item.can.record && photos.length < 3 && (
+        <label className="flex min-h-11 cursor-pointer items-center justify-center rounded-lg bg-white font-bold text-navy ring-1 ring-navy/25 hover:bg-navy/5">
+          {upload.isPending ? 'Uploading…' : 'Add photos'}
+          <input type="file" accept="image/jpeg,image/png,image/webp" capture="environment" multiple className="sr-only" onChange={(e) => { if (e.target.files?.length) upload.mutate(e.target.files); e.target.value = ''; }} />
+        </label>
+      )}
+      {upload.error && <div className="mt-2"><Alert tone="error">{upload.error.message}</Alert></div>}
+    </Card>
   );
 }
 

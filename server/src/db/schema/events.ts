@@ -90,6 +90,8 @@ export const itemPhotos = mysqlTable('item_photos', {
   id: id(),
   itemId: ref('item_id').notNull().references(() => bookingItems.id, { onDelete: 'cascade' }),
   storageKey: varchar('storage_key', { length: 200 }).notNull(),
+  /** The visitor's photos from booking, or the fixer's from the bench (before, during, after). */
+  kind: mysqlEnum('kind', ['intake', 'repair']).notNull().default('intake'),
   contentType: varchar('content_type', { length: 40 }).notNull(),
   width: int('width').notNull(),
   height: int('height').notNull(),

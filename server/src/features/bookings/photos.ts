@@ -25,12 +25,12 @@ export function multerError(err: unknown): HttpError | null {
  * Checks each file by its bytes (not its name or the browser's word), then stores it re-encoded: at most
  * 1600 px, turned upright, with every metadata block (location included) left out.
  */
-export async function savePhotos(ctx: AppContext, bookingId: number, itemId: number, files: Express.Multer.File[]) {
+export async function savePhotos(ctx: AppContext, bookingId: number, itemId: number, files: Express.Multer.File[], kind: 'intake' | 'repair' = 'intake') {
   const { db } = ctx.database;
   const [item] = await db.select().from(bookingItems).where(and(eq(bookingItems.id, itemId), eq(bookingItems.bookingId, bookingId)));
   if (!item) throw notFound('That item');
   if (!files.length) throw new HttpError(400, 'no-photo', 'Choose a photo to add.');
-  const [{ n }] = await db.select({ n: count() }).from(itemPhotos).where(eq(itemPhotos.itemId, itemId));
+  const [{ n }] = await db.select({ n: count() }).from(itemPhotos).where(and(eq(itemPhotos.itemId, itemId), eq(itemPhotos.kind, kind)));
   if (n + files.length > PHOTO_LIMITS.perItem) throw new HttpError(400, 'too-many-photos', `An item can have at most ${PHOTO_LIMITS.perItem} photos; this one has ${n}.`);
 
   const prepared = [];
@@ -50,8 +50,8 @@ export async function savePhotos(ctx: AppContext, bookingId: number, itemId: num
   for (const p of prepared) {
     const key = `photos/${new Date().toISOString().slice(0, 7)}/${randomBytes(12).toString('hex')}.jpg`;
     await ctx.storage.put(key, p.data, 'image/jpeg');
-    const [{ id }] = await db.insert(itemPhotos).values({ itemId, storageKey: key, contentType: 'image/jpeg', width: p.info.width, height: p.info.height, bytes: p.data.length }).$returningId();
-    saved.push({ id, width: p.info.width, height: p.info.height });
+    const [{ id }] = await db.insert(itemPhotos).values({ itemId, kind, storageKey: key, contentType: 'image/jpeg', width: p.info.width, height: p.info.height, bytes: p.data.length }).$returningId();
+    saved.push({ id, kind, width: p.info.width, height: p.info.height });
   }
   return saved;
 }

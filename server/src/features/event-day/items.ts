@@ -82,7 +82,7 @@ export async function itemView(ctx: AppContext, itemId: number, user: SessionUse
   const [outcome] = await db.select({ o: itemOutcomes, byName: users.name }).from(itemOutcomes).leftJoin(users, eq(users.id, itemOutcomes.recordedBy)).where(eq(itemOutcomes.itemId, itemId));
   const checks = await db.select({ c: safetyChecks, byName: users.name }).from(safetyChecks).leftJoin(users, eq(users.id, safetyChecks.checkedBy)).where(eq(safetyChecks.itemId, itemId)).orderBy(desc(safetyChecks.id));
   const history = await db.select({ h: itemStatusChanges, byName: users.name }).from(itemStatusChanges).leftJoin(users, eq(users.id, itemStatusChanges.byUserId)).where(eq(itemStatusChanges.itemId, itemId)).orderBy(asc(itemStatusChanges.id));
-  const photos = await db.select({ id: itemPhotos.id, width: itemPhotos.width, height: itemPhotos.height }).from(itemPhotos).where(eq(itemPhotos.itemId, itemId));
+  const photos = await db.select({ id: itemPhotos.id, kind: itemPhotos.kind, width: itemPhotos.width, height: itemPhotos.height }).from(itemPhotos).where(eq(itemPhotos.itemId, itemId));
   const { item, booking, slot, event, group, category } = row;
   const staff = hasGroupRole(user, group.id, ['organiser', 'host']);
   const organiser = hasGroupRole(user, group.id, ['organiser']);

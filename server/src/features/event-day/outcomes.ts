@@ -5,7 +5,7 @@ import { judgeSafety, type SafetyVerdict } from '../../../../shared/safety/limit
 import { visualOk, type outcomeSchema, type SafetyCheckValues } from '../../../../shared/schemas/event-day';
 import type { SessionUser } from '../../../../shared/schemas/auth';
 import type { AppContext } from '../../context';
-import type { Tx } from '../../db/client';
+import type { DbOrTx, Tx } from '../../db/client';
 import { withDeadlockRetry } from '../../db/retry';
 import { itemAssignments, itemOutcomes, safetyChecks, shifts } from '../../db/schema/index';
 import { hasGroupRole } from '../../auth/guards';
@@ -16,7 +16,7 @@ import { isHeating, loadItem, setStatus, type ItemRow } from './items';
 const forbidden = (message: string) => new HttpError(403, 'forbidden', message);
 
 /** The assigned fixer or an organiser of the group; a fixer of the group may take an item nobody has. */
-async function assertMayRecord(tx: Tx, row: ItemRow, user: SessionUser) {
+export async function assertMayRecord(tx: DbOrTx, row: ItemRow, user: SessionUser) {
   if (hasGroupRole(user, row.group.id, ['organiser'])) return;
   if (!hasGroupRole(user, row.group.id, ['fixer'])) throw forbidden('Only the fixer working on this item or an organiser can record this.');
   const [a] = await tx.select({ userId: itemAssignments.userId }).from(itemAssignments).where(eq(itemAssignments.itemId, row.item.id));

@@ -1,4 +1,4 @@
-import { Router, type Request } from 'express';
+import { Router, type NextFunction, type Request, type Response } from 'express';
 import { z } from 'zod';
 import { normaliseReference } from '../../../../shared/booking/reference';
 import { normaliseTagCode } from '../../../../shared/event-day/tag-code';
@@ -12,8 +12,9 @@ import { body, params, query } from '../../http/validate';
 import { eventGroupId } from '../events/service';
 import { checkIn, deskEvents, deskView, walkIn } from './desk';
 import { hallQueue, liveView, publicTag, tags } from './hall';
-import { itemGroupId, itemView } from './items';
-import { recordOutcome, recordSafetyCheck, startRepair } from './outcomes';
+import { itemGroupId, itemView, loadItem } from './items';
+import { multerError, photoUpload, savePhotos } from '../bookings/photos';
+import { assertMayRecord, recordOutcome, recordSafetyCheck, startRepair } from './outcomes';
 
 const idParam = z.object({ id: z.coerce.number().int().positive() });
 const tagsQuery = z.object({
@@ -80,6 +81,21 @@ export function eventDayRoutes(ctx: AppContext) {
   r.post('/items/:id/safety-checks', itemStaff, async (req, res) => {
     res.status(201).json(await recordSafetyCheck(ctx, params(req, idParam).id, body(req, safetyCheckSchema), req.user!));
   });
+  r.post(
+    '/items/:id/photos',
+    itemStaff,
+    async (req, _res, next) => {
+      // Only the fixer on the item or an organiser, checked before a byte of the upload is read.
+      const row = await loadItem(db, params(req, idParam).id);
+      await assertMayRecord(db, row, req.user!);
+      next();
+    },
+    (req: Request, res: Response, next: NextFunction) => photoUpload(req, res, (err) => next(multerError(err) ?? err)),
+    async (req, res) => {
+      const row = await loadItem(db, params(req, idParam).id);
+      res.status(201).json(await savePhotos(ctx, row.booking.id, row.item.id, (req.files as Express.Multer.File[]) ?? [], 'repair'));
+    },
+  );
   r.post('/items/:id/outcome', itemStaff, async (req, res) => {
     const { id } = params(req, idParam);
     await recordOutcome(ctx, id, body(req, outcomeSchema), req.user!);

@@ -1,0 +1,1 @@
+ALTER TABLE `item_photos` ADD `kind` enum('intake','repair') DEFAULT 'intake' NOT NULL;
