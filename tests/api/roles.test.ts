@@ -23,6 +23,7 @@ interface Groups {
 const everyone = (status: number): Record<Caller, number> => ({ anonymous: status, account: status, fixer: status, host: status, organiser: status, otherOrganiser: status, admin: status });
 const signedIn = (status: number) => ({ ...everyone(status), anonymous: 401 });
 const adminOnly = { anonymous: 401, account: 403, fixer: 403, host: 403, organiser: 403, otherOrganiser: 403, admin: 200 };
+const ownStaff = { anonymous: 401, account: 403, fixer: 403, host: 200, organiser: 200, otherOrganiser: 403, admin: 200 };
 const ownOrganiser = { anonymous: 401, account: 403, fixer: 403, host: 403, organiser: 200, otherOrganiser: 403, admin: 200 };
 
 const table: Row[] = [
@@ -58,6 +59,18 @@ const table: Row[] = [
   ['GET', (g) => `/api/events/${g.ownEvent}/board`, ownOrganiser],
   ['GET', (g) => `/api/events/${g.ownEvent}/rota`, ownOrganiser],
   ['GET', (g) => `/api/events/${g.ownEvent}/benches`, { ...ownOrganiser, fixer: 200, host: 200, otherOrganiser: 200 }],
+  ['GET', () => '/api/desk/events', signedIn(200)],
+  ['GET', (g) => `/api/events/${g.ownEvent}/desk`, ownStaff],
+  ['GET', (g) => `/api/events/${g.ownEvent}/live`, ownStaff],
+  ['GET', (g) => `/api/events/${g.ownEvent}/tags`, ownStaff],
+  ['POST', (g) => `/api/events/${g.ownEvent}/walk-ins`, { ...ownStaff, host: 400, organiser: 400, admin: 400 }],
+  // No such booking or item: only an admin gets as far as the 404.
+  ['POST', () => '/api/bookings/ZZZ-ZZZ/check-in', { ...everyone(403), anonymous: 401, admin: 404 }],
+  ['GET', () => '/api/items/999999', { ...everyone(403), anonymous: 401, admin: 404 }],
+  ['POST', () => '/api/items/999999/outcome', { ...everyone(403), anonymous: 401, admin: 400 }, {}],
+  // The hall display shows published sessions only; this one is a draft.
+  ['GET', (g) => `/api/public/events/${g.ownEvent}/queue`, everyone(404)],
+  ['GET', () => '/api/public/tags/ZZZZZ', everyone(404)],
   ['POST', (g) => `/api/groups/${g.own}/invites`, { ...ownOrganiser, organiser: 202, admin: 202 }, { email: 'invited@example.org', role: 'fixer' }],
 ];
 
