@@ -35,6 +35,8 @@ export function createApp(ctx: AppContext) {
           imgSrc: ["'self'", 'data:', 'blob:'],
           styleSrc: ["'self'", "'unsafe-inline'"],
           fontSrc: ["'self'", 'data:'],
+          // The desk's QR reader decodes in a worker it starts from a blob URL.
+          workerSrc: ["'self'", 'blob:'],
           connectSrc: ["'self'"],
           frameSrc: ["'self'"],
           upgradeInsecureRequests: null,

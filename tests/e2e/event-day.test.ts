@@ -6,7 +6,7 @@ import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { DEMO_PASSWORD } from '../../shared/constants';
 import { bookingItems, bookings, events, itemOutcomes } from '../../server/src/db/schema/index';
 import { TODAY_TITLE } from '../../server/src/seed/demo-today';
-import { launchBrowser, PHONE, shot, screenshotDir } from '../support/browser';
+import { launchBrowser, PHONE, qrVideo, shot, screenshotDir } from '../support/browser';
 import { startDemoApp, type DemoApp } from '../support/demo-app';
 
 let app: DemoApp;
@@ -168,5 +168,28 @@ describe('event day in the browser', () => {
     expect(saved).toMatchObject({ outcome: 'parts-needed', partDescription: 'Smoothing capacitor 2200 µF 25 V, 105 °C', partCostCents: 180 });
     await context.close();
     await desk.context.close();
+  });
+
+  it('reads the QR code of a confirmation mail through the device camera and opens that booking', { timeout: 90_000 }, async () => {
+    // Chromium's fake camera plays a video of the QR code that the confirmation mail carries (…/b/REFERENCE).
+    const video = `${screenshotDir}/booking-qr.y4m`;
+    qrVideo(video, `${app.server.url}/b/T5N-9WZ`);
+    const camBrowser = await launchBrowser(['--use-fake-device-for-media-stream', '--use-fake-ui-for-media-stream', `--use-file-for-fake-video-capture=${video}`]);
+    try {
+      const context = await camBrowser.newContext({ viewport: TABLET });
+      await context.grantPermissions(['camera'], { origin: app.server.url });
+      const page = await context.newPage();
+      await page.goto(`${app.server.url}/sign-in`);
+      await page.getByLabel('E-mail').fill('host@example.org');
+      await page.getByLabel('Password').fill(DEMO_PASSWORD);
+      await page.getByRole('button', { name: 'Sign in', exact: true }).click();
+      await page.waitForURL((u) => !u.pathname.startsWith('/sign-in'));
+      await page.goto(`${app.server.url}/desk/${eventId}`);
+      await page.getByRole('button', { name: 'Scan QR code' }).click();
+      await page.getByRole('form', { name: 'Check in T5N-9WZ' }).waitFor({ timeout: 30_000 });
+      await page.screenshot({ path: shot('desk-scanned'), fullPage: true });
+    } finally {
+      await camBrowser.close();
+    }
   });
 });

@@ -1,4 +1,5 @@
-import { mkdirSync } from 'node:fs';
+import { mkdirSync, writeFileSync } from 'node:fs';
+import QRCode from 'qrcode';
 import path from 'node:path';
 import { chromium, type Browser } from 'playwright-core';
 
@@ -10,9 +11,30 @@ export const PHONE = { width: 390, height: 844 };
 export const DESKTOP = { width: 1280, height: 860 };
 
 /** Debian's Chromium, headless, with the flags that keep it off a closed network. */
-export function launchBrowser(): Promise<Browser> {
+export function launchBrowser(extraArgs: string[] = []): Promise<Browser> {
   return chromium.launch({
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
-    args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run', '--disable-quic'],
+    args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run', '--disable-quic', ...extraArgs],
   });
+}
+
+/**
+ * A Y4M video of one QR code, for Chromium's fake camera (`--use-file-for-fake-video-capture`): black modules on
+ * white, 4-module quiet zone, grey chroma.
+ */
+export function qrVideo(file: string, text: string, width = 640, height = 480) {
+  const qr = QRCode.create(text, { errorCorrectionLevel: 'M' });
+  const n = qr.modules.size;
+  // Small enough to sit inside the scanner’s central scan region (two thirds of the shorter side).
+  const scale = Math.floor((Math.min(width, height) * 0.55) / (n + 8));
+  const x0 = Math.floor((width - n * scale) / 2);
+  const y0 = Math.floor((height - n * scale) / 2);
+  const y = Buffer.alloc(width * height, 235);
+  for (let r = 0; r < n; r++) for (let c = 0; c < n; c++) {
+    if (!qr.modules.get(r, c)) continue;
+    for (let dy = 0; dy < scale; dy++) y.fill(16, (y0 + r * scale + dy) * width + x0 + c * scale, (y0 + r * scale + dy) * width + x0 + (c + 1) * scale);
+  }
+  const chroma = Buffer.alloc((width / 2) * (height / 2) * 2, 128);
+  const frame = Buffer.concat([Buffer.from('FRAME\n'), y, chroma]);
+  writeFileSync(file, Buffer.concat([Buffer.from(`YUV4MPEG2 W${width} H${height} F10:1 Ip A1:1 C420jpeg\n`), ...Array(10).fill(frame)]));
 }
