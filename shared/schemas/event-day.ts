@@ -3,10 +3,12 @@ import { ARRIVALS, BARRIERS, OUTCOMES } from '../event-day/constants';
 import { bookingItemSchema, MAX_ITEMS_PER_BOOKING } from './bookings';
 import { email } from './auth';
 
-const optionalNumber = (schema: z.ZodType<number, unknown>) => z.preprocess((v) => (v === '' || v === null || (typeof v === 'number' && Number.isNaN(v)) ? undefined : v), schema.optional());
+/** Empty means not given; a decimal comma is read as a point ("1,5" → 1.5). */
+const optionalNumber = (schema: z.ZodType<number, unknown>) =>
+  z.preprocess((v) => (v === '' || v === null || v === undefined ? undefined : typeof v === 'string' ? v.trim().replace(',', '.') : v), schema.optional());
 
 /** Weight on the desk's scale, in kilograms; it overrides the category's average in the statistics. */
-export const weightKg = optionalNumber(z.coerce.number({ error: 'Enter the weight in kilograms.' }).positive('A weight is more than 0 kg.').max(500, 'Weigh items up to 500 kg.'));
+export const weightKg = optionalNumber(z.coerce.number({ error: 'Enter the weight in kilograms.' }).positive('Enter a weight above 0 kg.').max(500, 'Weigh items up to 500 kg.'));
 
 export const checkInItemSchema = z.object({
   id: z.coerce.number().int().positive(),

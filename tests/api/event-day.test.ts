@@ -2,7 +2,7 @@ import { eq } from 'drizzle-orm';
 import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { TAG_CODE_PATTERN } from '../../shared/event-day/tag-code';
-import { bookingItems, itemStatusChanges, shifts, venueBenches, volunteerSkills } from '../../server/src/db/schema/index';
+import { bookingItems, groupExclusions, itemStatusChanges, shifts, venueBenches, volunteerSkills } from '../../server/src/db/schema/index';
 import type { RunningServer } from '../../server/src/server';
 import { createTestDatabase, type TestDatabase } from '../support/db';
 import { categoryId, makeEvent, makeGroup, makeUser, visitor } from '../support/factories';
@@ -332,5 +332,24 @@ describe('repair photos from the bench', () => {
     expect((await upload(as.outsider, ids.kettle)).status).toBe(403);
     const view = (await as.fixer.get(`/api/items/${ids.kettle}`)).json;
     expect(view.photos.map((p: { kind: string }) => p.kind)).toEqual(['repair']);
+  });
+});
+
+describe('desk rules found in review', () => {
+  it('screens a corrected kind like a booking, and will not mark an item already checked in as a no-show', async () => {
+    const microwave = await categoryId(db.db, 'microwave');
+    await db.db.insert(groupExclusions).values({ groupId, categoryId: microwave });
+    const { reference } = await book(slotIds[2], [{ categoryId: cats.lamp, fault: 'Lamp flickers when moved.' }]);
+    const view = (await as.host.get(`/api/events/${eventId}/desk`)).json;
+    const item = view.slots.flatMap((s: { bookings: { reference: string; items: { id: number }[] }[] }) => s.bookings).find((b: { reference: string }) => b.reference === reference).items[0];
+    const refused = await as.host.post(`/api/bookings/${reference}/check-in`, { items: [{ id: item.id, arrival: 'arrived', categoryId: microwave }] });
+    expect(refused.status).toBe(422);
+    expect(refused.json.error.fields['items.0.categoryId']).toBeTruthy();
+    expect((await as.host.post(`/api/bookings/${reference}/check-in`, { items: [{ id: item.id, arrival: 'arrived', weightKg: '0,45' }] })).status).toBe(200);
+    const late = await as.host.post(`/api/bookings/${reference}/check-in`, { items: [{ id: item.id, arrival: 'no-show' }] });
+    expect(late.status).toBe(409);
+    expect(late.json.error.fields['items.0.arrival']).toMatch(/withdrawn/);
+    const [row] = await db.db.select().from(bookingItems).where(eq(bookingItems.id, item.id));
+    expect(row.weighedKg).toBe(0.45);
   });
 });

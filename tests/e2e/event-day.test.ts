@@ -148,7 +148,10 @@ describe('event day in the browser', () => {
     const { context, page } = await signedIn('fixer', PHONE);
     await page.goto(`${app.server.url}/items/${radio.id}`);
     await page.getByRole('button', { name: 'Start repair' }).click();
-    await page.getByText('At the bench').first().waitFor();
+    // The plan may have given the radio to another fixer: taking it over asks first.
+    const take = page.getByRole('button', { name: 'Take it' });
+    if (await take.isVisible()) await take.click();
+    await page.getByRole('heading', { name: 'Record the outcome' }).waitFor();
 
     await context.setOffline(true);
     await page.getByText('Needs a part', { exact: true }).click();

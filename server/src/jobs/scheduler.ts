@@ -5,9 +5,11 @@ import { enqueueMail } from '../mail/outbox';
 import { manageTokenFor, manageUrl, offerFreedPlaces } from '../features/bookings/service';
 import { reminderMail } from '../features/bookings/mails';
 import { bookingWithContext } from '../features/bookings/queries';
+import { sendFollowUpReminders } from '../features/impact/follow-ups';
+import { sendThankYous } from '../features/impact/thanks';
 
 /**
- * Timed work: day-before reminders and waiting-list offers that ran out. Each job claims its rows with
+ * Timed work: day-before reminders, waiting-list offers that ran out, part follow-up reminders and thank-you mails. Each job claims its rows with
  * FOR UPDATE SKIP LOCKED, so every app process can run the scheduler.
  */
 export class Scheduler {
@@ -27,6 +29,8 @@ export class Scheduler {
       try {
         await expireOffers(this.ctx);
         await sendReminders(this.ctx);
+        await sendFollowUpReminders(this.ctx);
+        await sendThankYous(this.ctx);
       } catch (err) {
         this.ctx.log(`scheduled job failed: ${(err as Error).message}`);
       }

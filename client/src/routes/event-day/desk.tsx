@@ -1,4 +1,4 @@
-import { useMemo, useRef, useState } from 'react';
+import { useEffect, useMemo, useRef, useState } from 'react';
 import { Link, useNavigate, useParams } from 'react-router';
 import { useFieldArray } from 'react-hook-form';
 import { type Arrival, type ItemStatus } from '../../../../shared/event-day/constants';
@@ -83,7 +83,14 @@ export function DeskPage() {
       setNotice(`No booking ${scan.reference} for this session. Check the date on the visitor’s mail, or take them as a walk-in.`);
       return;
     }
-    setNotice(null);
+    const q = text.trim().toLowerCase();
+    const named = q ? all.filter((b) => b.visitorName.toLowerCase().includes(q)) : [];
+    if (named.length === 1) {
+      setSelected(named[0].reference);
+      setNotice(null);
+      return;
+    }
+    setNotice(q && named.length === 0 ? `No booking matches “${text.trim()}”. Take them as a walk-in if they have no booking.` : null);
   };
 
   const q = search.trim().toLowerCase();
@@ -114,12 +121,14 @@ export function DeskPage() {
             find(search);
           }}
         >
-          <div className="min-w-60 flex-1">
+          <div className="w-full min-w-60 flex-1 sm:w-auto">
             <TextField ref={searchRef} label="Reference or name" value={search} onChange={(e) => setSearch(e.target.value)} placeholder="K7M-2QD or Orla" autoComplete="off" autoFocus hint="Type the reference from the visitor’s mail and press Enter, or part of their name to filter the list." />
           </div>
-          <Button type="submit" variant="secondary">Find</Button>
-          <Button type="button" variant="secondary" onClick={() => setScanning((s) => !s)}>{scanning ? 'Close camera' : 'Scan QR code'}</Button>
-          <Button type="button" onClick={() => { setWalkIn(true); setSelected(null); }}>New walk-in</Button>
+          <div className="flex w-full flex-wrap gap-2 sm:w-auto sm:pb-7">
+            <Button type="submit" variant="secondary">Find</Button>
+            <Button type="button" variant="secondary" onClick={() => setScanning((s) => !s)}>{scanning ? 'Close camera' : 'Scan QR code'}</Button>
+            <Button type="button" onClick={() => { setWalkIn(true); setSelected(null); }}>New walk-in</Button>
+          </div>
         </form>
         {notice && <div className="mt-3"><Alert tone="caution">{notice}</Alert></div>}
         {scanning && (
@@ -129,8 +138,8 @@ export function DeskPage() {
         )}
       </Card>
 
-      {walkIn && <WalkInForm desk={desk} onDone={() => setWalkIn(false)} />}
-      {current && <CheckInPanel key={current.reference} desk={desk} booking={current} onClose={() => { setSelected(null); searchRef.current?.focus(); }} />}
+      {walkIn && <WalkInForm desk={desk} onDone={() => { setWalkIn(false); setSearch(''); searchRef.current?.focus(); }} />}
+      {current && <CheckInPanel key={current.reference} desk={desk} booking={current} onClose={() => { setSelected(null); setSearch(''); searchRef.current?.focus(); }} />}
 
       {desk.slots.map((s) => {
         const list = s.bookings.filter(matches);
@@ -176,9 +185,14 @@ function categoryOptions(categories: Category[] | undefined) {
 }
 
 function IssuedTags({ eventId, issued, onClose }: { eventId: number; issued: Issued[]; onClose: () => void }) {
-  const tagged = issued.filter((i) => i.tagCode);
+  const tagged = issued.filter((i) => i.tagCode && i.status !== 'no-show' && i.status !== 'withdrawn');
+  const away = issued.filter((i) => i.status === 'no-show' || i.status === 'withdrawn');
+  const title = [tagged.length ? `Checked in: ${tagged.length} tag${tagged.length === 1 ? '' : 's'}` : '', away.length ? `${away.length} item${away.length === 1 ? '' : 's'} marked ${away.every((i) => i.status === 'no-show') ? 'did not come' : 'did not come or withdrawn'}` : ''].filter(Boolean).join(' · ') || 'Saved';
+  const ref = useRef<HTMLDivElement>(null);
+  useEffect(() => ref.current?.focus(), []);
   return (
-    <Alert tone="success" title={tagged.length ? `Checked in: ${tagged.length} tag${tagged.length === 1 ? '' : 's'}` : 'Saved'}>
+    <div ref={ref} tabIndex={-1} className="outline-none">
+    <Alert tone="success" title={title}>
       <ul className="my-2 flex flex-wrap gap-3" aria-label="Tags issued">
         {tagged.map((i) => (
           <li key={i.id} className="rounded-lg bg-white px-3 py-2 ring-1 ring-ink/10">
@@ -192,6 +206,7 @@ function IssuedTags({ eventId, issued, onClose }: { eventId: number; issued: Iss
         <Button variant="secondary" onClick={onClose}>Next visitor</Button>
       </div>
     </Alert>
+    </div>
   );
 }
 
@@ -206,10 +221,15 @@ function CheckInPanel({ desk, booking, onClose }: { desk: Desk; booking: DeskBoo
   const slot = desk.slots.find((s) => s.id === booking.slotId);
   const error = checkIn.error instanceof ApiError ? checkIn.error : null;
 
+  const heading = useRef<HTMLHeadingElement>(null);
+  useEffect(() => heading.current?.focus(), []);
   if (issued) return <IssuedTags eventId={desk.event.id} issued={issued} onClose={onClose} />;
   return (
     <Card className="ring-2 ring-copper">
       <form
+        onKeyDown={(e) => {
+          if (e.key === 'Escape') onClose();
+        }}
         onSubmit={(e) => {
           e.preventDefault();
           checkIn.mutate(
@@ -221,10 +241,10 @@ function CheckInPanel({ desk, booking, onClose }: { desk: Desk; booking: DeskBoo
         aria-label={`Check in ${booking.reference}`}
       >
         <div className="flex flex-wrap items-baseline justify-between gap-2">
-          <h2 className="text-xl"><span className="font-mono">{booking.reference}</span> · {booking.visitorName}</h2>
+          <h2 ref={heading} tabIndex={-1} className="text-xl outline-none"><span className="font-mono">{booking.reference}</span> · {booking.visitorName}</h2>
           <p className="text-ink-soft">{slot && formatTimeRange(slot.startsAt, slot.endsAt, desk.event.timeZone)}{booking.visitorPhone && ` · ${booking.visitorPhone}`}</p>
         </div>
-        {error && <Alert tone="error">{error.message}{error.fields && <> {Object.values(error.fields).join(' ')}</>}</Alert>}
+        {error && <Alert tone="error">{error.message}{error.fields && Object.keys(error.fields).some((k) => !/^items\.\d+\.(weightKg|categoryId|arrival)$/.test(k)) && <> {Object.values(error.fields).join(' ')}</>}</Alert>}
         {booking.items.map((i, n) => {
           const row = rows[i.id];
           const set = (patch: Partial<Row>) => setRows((r) => ({ ...r, [i.id]: { ...r[i.id], ...patch } }));
@@ -238,16 +258,17 @@ function CheckInPanel({ desk, booking, onClose }: { desk: Desk; booking: DeskBoo
               ) : (
                 <>
                   <div role="radiogroup" aria-label={`Item ${n + 1} arrival`} className="flex flex-wrap gap-2">
-                    {(['arrived', 'no-show', 'withdrawn'] as const).map((a) => (
-                      <label key={a} className={`flex min-h-11 cursor-pointer items-center gap-2 rounded-lg px-3 ring-1 ${row.arrival === a ? 'bg-navy text-white ring-navy' : 'bg-white ring-ink/20'}`}>
+                    {(['arrived', 'no-show', 'withdrawn'] as const).filter((a) => a !== 'no-show' || i.status === 'booked' || i.status === 'no-show').map((a) => (
+                      <label key={a} className={`flex min-h-11 cursor-pointer items-center gap-2 rounded-lg px-3 ring-1 has-[:focus-visible]:ring-2 has-[:focus-visible]:ring-copper has-[:focus-visible]:ring-offset-2 ${row.arrival === a ? 'bg-navy text-white ring-navy' : 'bg-white ring-ink/20'}`}>
                         <input type="radio" name={`arrival-${i.id}`} value={a} checked={row.arrival === a} onChange={() => set({ arrival: a })} className="sr-only" />
-                        {a === 'arrived' ? 'Arrived' : a === 'no-show' ? 'Did not come' : 'Withdrawn'}
+                        {a === 'arrived' ? (i.tagCode ? 'Here' : 'Arrived') : a === 'no-show' ? 'Did not come' : 'Withdrawn'}
                       </label>
                     ))}
                   </div>
+                  {error?.fields?.[`items.${n}.arrival`] && <p className="text-sm font-semibold text-alert">{error.fields[`items.${n}.arrival`]}</p>}
                   {row.arrival === 'arrived' && (
                     <div className="grid gap-3 sm:grid-cols-2">
-                      <SelectField label="Kind of item" value={row.categoryId} onChange={(e) => set({ categoryId: Number(e.target.value) })} hint="Correct it if the visitor chose the wrong kind.">{categoryOptions(categories)}</SelectField>
+                      <SelectField label="Kind of item" value={row.categoryId} onChange={(e) => set({ categoryId: Number(e.target.value) })} error={error?.fields?.[`items.${n}.categoryId`]} hint="Correct it if the visitor chose the wrong kind.">{categoryOptions(categories)}</SelectField>
                       <TextField label="Weight in kg (if weighed)" inputMode="decimal" value={row.weight} onChange={(e) => set({ weight: e.target.value })} placeholder="e.g. 1.2" error={error?.fields?.[`items.${n}.weightKg`]} hint="Overrides the kind’s average weight in the statistics." />
                     </div>
                   )}
@@ -257,7 +278,7 @@ function CheckInPanel({ desk, booking, onClose }: { desk: Desk; booking: DeskBoo
           );
         })}
         <div className="flex flex-wrap gap-2">
-          <Button type="submit" busy={checkIn.isPending}>Check in</Button>
+          <Button type="submit" busy={checkIn.isPending}>{booking.items.some((i) => i.tagCode) ? 'Save changes' : 'Check in'}</Button>
           <Button type="button" variant="secondary" onClick={onClose}>Cancel</Button>
         </div>
       </form>

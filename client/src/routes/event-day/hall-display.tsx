@@ -31,7 +31,7 @@ function useNow(intervalMs = 5_000) {
 /** "about 15 min", "next", or "—" when nobody can say (no fixer on hand). */
 function waitLabel(minutes: number | null): string {
   if (minutes === null) return '—';
-  if (minutes <= 0) return 'next';
+  if (minutes <= 0) return 'any moment';
   return `about ${minutes} min`;
 }
 
@@ -53,7 +53,7 @@ export function HallDisplayPage() {
       <title>{data ? `Queue · ${data.event.title}` : 'Queue · Mendery'}</title>
       <header className="flex items-start justify-between gap-6 border-b border-white/15 pb-4">
         <div className="min-w-0">
-          <h1 className="truncate text-xl font-extrabold text-white lg:text-2xl 2xl:text-3xl">{data?.event.title ?? 'Repair café'}</h1>
+          <h1 className="truncate text-xl font-extrabold text-white lg:text-2xl 2xl:text-3xl">{data?.event.title ?? 'Repair session'}</h1>
           {data && <p className="truncate text-base font-semibold text-white/70 lg:text-lg 2xl:text-xl">{data.event.groupName}</p>}
         </div>
         <p className="shrink-0 text-3xl font-extrabold tabular-nums lg:text-4xl 2xl:text-5xl" aria-label="Time now">
@@ -87,7 +87,7 @@ export function HallDisplayPage() {
         <p>
           {data ? (
             <>
-              {data.done} repair{data.done === 1 ? '' : 's'} done today · {data.fixersOnHand} fixer{data.fixersOnHand === 1 ? '' : 's'} on hand
+              {data.done} item{data.done === 1 ? '' : 's'} seen to today · {data.fixersOnHand} fixer{data.fixersOnHand === 1 ? '' : 's'} on hand
             </>
           ) : (
             'Mendery'
@@ -116,7 +116,7 @@ function Board({ data }: { data: HallQueue }) {
                 <span data-testid="queue-number" className="text-6xl leading-none font-extrabold tabular-nums lg:text-8xl 2xl:text-9xl">
                   {numberText(s.queueNumber)}
                 </span>
-                <span className="mt-2 max-w-full truncate text-xl font-bold text-copper-light lg:text-2xl 2xl:text-3xl">{s.benchName ?? 'At a bench'}</span>
+                <span className="mt-2 max-w-full break-words text-center text-xl leading-tight font-bold text-copper-light lg:text-2xl 2xl:text-3xl">{s.benchName ?? 'At a bench'}</span>
               </li>
             ))}
           </ol>

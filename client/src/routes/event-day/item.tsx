@@ -11,6 +11,8 @@ import { CheckField, SelectField, TextAreaField, TextField } from '../../compone
 import { paths } from '../../config/paths';
 import { OUTCOME_MUTATION_KEY, useItem, useRepairPhotos, useSafetyCheck, useStartRepair, type ItemDetail, type OutcomeVariables } from '../../features/event-day/api';
 import { StatusChip } from '../../features/event-day/status-chip';
+import { useUser } from '../../features/auth/api/get-me';
+import { ConfirmDialog } from '../../components/ui/confirm-dialog';
 import { ApiError } from '../../lib/api';
 
 /** The fixer's page for one item, phone first: what is wrong, the cautions, start, safety check, outcome. */
@@ -24,6 +26,10 @@ export function ItemPage() {
 
 function ItemView({ item }: { item: ItemDetail }) {
   const start = useStartRepair(item.id);
+  const { data: me } = useUser();
+  const [confirmTake, setConfirmTake] = useState(false);
+  const othersItem = item.placement && me && item.placement.userId !== me.id;
+  const started = item.status === 'at-bench' || item.status === 'done';
   const tz = item.event.timeZone;
   const latest = item.safetyChecks[0];
   const [editing, setEditing] = useState(false);
@@ -65,25 +71,30 @@ function ItemView({ item }: { item: ItemDetail }) {
         )}
       </Card>
 
-      {item.can.start && item.status !== 'at-bench' && item.status !== 'done' && (
-        <Button className="w-full text-lg" onClick={() => start.mutate()} busy={start.isPending}>Start repair</Button>
+      {item.can.start && !started && (
+        <div className="space-y-2">
+          {othersItem && <Alert>The plan gives this item to {item.placement!.fixerName}. Starting it makes it yours.</Alert>}
+          <Button className="w-full text-lg" onClick={() => (othersItem ? setConfirmTake(true) : start.mutate())} busy={start.isPending}>Start repair</Button>
+          <p className="text-center text-sm text-ink-soft">The safety check and the outcome open once the repair has started.</p>
+        </div>
       )}
+      <ConfirmDialog open={confirmTake} tone="primary" title="Take over this item?" message={`It is planned for ${item.placement?.fixerName ?? 'another fixer'}. Tell them you have it, so nobody waits for it.`} confirmLabel="Take it" cancelLabel="Leave it" onCancel={() => setConfirmTake(false)} onConfirm={() => { setConfirmTake(false); start.mutate(); }} />
       {start.error && <Alert tone="error">{start.error.message}</Alert>}
 
-      {item.mains && <SafetySection item={item} />}
+      {item.mains && (started || item.safetyChecks.length > 0) && <SafetySection item={item} />}
 
-      {item.outcome && !editing ? (
+      {!started && !item.outcome ? null : item.outcome && !editing ? (
         <Card className={item.outcome.outcome === 'fixed' ? 'ring-2 ring-sage' : ''}>
           <h2 className="text-lg">Outcome: {item.outcome.outcomeLabel}</h2>
           {item.outcome.barrierLabel && <p>Barrier: {item.outcome.barrierLabel}</p>}
-          {item.outcome.partDescription && <p>Part needed: {item.outcome.partDescription}{item.outcome.partCost !== null && ` (about ${item.outcome.partCost.toFixed(2)})`}{item.outcome.partLink && <> · <a className="underline" href={item.outcome.partLink} target="_blank" rel="noreferrer">link</a></>}</p>}
+          {item.outcome.partDescription && <p>Part needed: {item.outcome.partDescription}{item.outcome.partCost !== null && ` (estimated cost ${item.outcome.partCost.toFixed(2)})`}{item.outcome.partLink && <> · <a className="underline" href={item.outcome.partLink} target="_blank" rel="noreferrer">link</a></>}</p>}
           {item.outcome.minutes !== null && <p>{item.outcome.minutes} minutes</p>}
           {item.outcome.notes && <p className="whitespace-pre-line text-ink-soft">{item.outcome.notes}</p>}
           <p className="text-sm text-ink-soft">Recorded {formatTime(item.outcome.recordedAt, tz)}{item.outcome.recordedByName && ` by ${item.outcome.recordedByName}`}</p>
           {item.can.record && <Button variant="secondary" className="mt-2" onClick={() => setEditing(true)}>Correct the outcome</Button>}
         </Card>
       ) : item.can.record ? (
-        <OutcomeForm item={item} latestPass={latest?.pass ?? null} />
+        <OutcomeForm item={item} latestPass={latest?.pass ?? null} onCancel={item.outcome ? () => setEditing(false) : undefined} />
       ) : (
         <Alert>This item is with {item.placement?.fixerName ?? 'another fixer'}. An organiser can move it to you.</Alert>
       )}
@@ -129,20 +140,29 @@ const VISUAL = [
   ['noHeatDamage', 'No scorch marks, melting or smell of heat'],
 ] as const;
 
-const num = (s: string) => (s.trim() === '' ? undefined : Number(s.replace(',', '.')));
+/** A typed reading: undefined when empty, NaN when it is not a number (shown as an error, never judged). */
+const num = (s: string) => (s.trim() === '' ? undefined : Number(s.trim().replace(',', '.')));
+const RELEVANT: Record<ApplianceClass, Reading[]> = {
+  I: ['cordLengthM', 'protectiveConductorOhm', 'insulationMOhm', 'protectiveCurrentMA'],
+  II: ['insulationMOhm', 'touchCurrentMA'],
+  III: ['insulationMOhm'],
+};
+/** Tiles that are radio buttons: the focus ring shows on the tile. */
+const TILE_FOCUS = 'has-[:focus-visible]:ring-2 has-[:focus-visible]:ring-copper has-[:focus-visible]:ring-offset-2';
 
 /** The electrical safety check: visual inspection, class, readings; the verdict is worked out as you type. */
 function SafetySection({ item }: { item: ItemDetail }) {
   const latest = item.safetyChecks[0];
-  const [open, setOpen] = useState(!latest?.pass);
-  useEffect(() => setOpen(!latest?.pass), [latest?.id, latest?.pass]);
+  const closed = (l: typeof latest) => Boolean(l) && (l!.pass || item.status === 'done');
+  const [open, setOpen] = useState(!closed(latest));
+  useEffect(() => setOpen(!closed(latest)), [latest?.id, latest?.pass, item.status]);
   if (!open && latest) {
     return (
       <Card>
         <h2 className="text-lg">Electrical safety check</h2>
         <div className="my-3" data-testid="latest-check">
-          <Alert tone="success" title={`Passed at ${formatTime(latest.createdAt, item.event.timeZone)}`}>
-            Class {latest.applianceClass}{latest.instrument && `, ${latest.instrument}`}{latest.checkedByName && `, by ${latest.checkedByName}`}. {item.safetyChecks.length > 1 && `${item.safetyChecks.length - 1} earlier check${item.safetyChecks.length > 2 ? 's' : ''} failed or were repeated.`}
+          <Alert tone={latest.pass ? 'success' : 'error'} title={`${latest.pass ? 'Passed' : 'Failed'} at ${formatTime(latest.createdAt, item.event.timeZone)}`}>
+            Class {latest.applianceClass}{latest.instrument && `, ${latest.instrument}`}{latest.checkedByName && `, by ${latest.checkedByName}`}. {!latest.pass && latest.failures.join(' ')} {item.safetyChecks.length > 1 && `${item.safetyChecks.length - 1} earlier check${item.safetyChecks.length > 2 ? 's' : ''} on record.`}
           </Alert>
         </div>
         {item.status !== 'done' && <Button variant="secondary" className="w-full" onClick={() => setOpen(true)}>Record another check</Button>}
@@ -161,14 +181,21 @@ function SafetyForm({ item }: { item: ItemDetail }) {
   const [instrument, setInstrument] = useState('');
   const [errors, setErrors] = useState<Record<string, string>>({});
   const latest = item.safetyChecks[0];
-  const values = { cordLengthM: num(r.cordLengthM), protectiveConductorOhm: num(r.protectiveConductorOhm), insulationMOhm: num(r.insulationMOhm), protectiveCurrentMA: num(r.protectiveCurrentMA), touchCurrentMA: num(r.touchCurrentMA) };
+  // Only the readings the chosen class asks for count; a hidden field never decides the verdict.
+  const values = Object.fromEntries(RELEVANT[cls].map((k) => [k, num(r[k])])) as Partial<Record<Reading, number>>;
+  const notNumbers = RELEVANT[cls].filter((k) => Number.isNaN(values[k] as number));
   const verdict = judgeSafety({ visualOk: visualOk(visual), applianceClass: cls, heating, ...values });
-  const touched = Object.values(visual).some(Boolean) || Object.values(r).some((x) => x.trim() !== '');
+  const touched = Object.values(visual).some(Boolean) || RELEVANT[cls].some((k) => r[k].trim() !== '');
+  const allVisual = visualOk(visual);
   const cord = values.cordLengthM;
   const input = (key: Reading, label: string, hint: string) => (
-    <TextField label={label} inputMode="decimal" value={r[key]} onChange={(e) => setR((x) => ({ ...x, [key]: e.target.value }))} error={errors[key]} hint={hint} />
+    <TextField label={label} inputMode="decimal" value={r[key]} onChange={(e) => setR((x) => ({ ...x, [key]: e.target.value }))} error={errors[key] ?? (Number.isNaN(num(r[key]) as number) ? 'Enter a number, e.g. 0.12.' : undefined)} hint={hint} />
   );
   const submit = () => {
+    if (notNumbers.length) {
+      setErrors(Object.fromEntries(notNumbers.map((k) => [k, 'Enter a number, e.g. 0.12.'])));
+      return;
+    }
     const body: SafetyCheckInput = { visual, applianceClass: cls, heating, ...values, instrument: instrument || undefined };
     const parsed = safetyCheckSchema.safeParse(body);
     if (!parsed.success) {
@@ -197,7 +224,7 @@ function SafetyForm({ item }: { item: ItemDetail }) {
         <legend className="font-bold">Appliance class</legend>
         <div role="radiogroup" className="mt-1 flex gap-2">
           {(['I', 'II', 'III'] as const).map((c) => (
-            <label key={c} className={`flex min-h-11 flex-1 cursor-pointer items-center justify-center rounded-lg ring-1 ${cls === c ? 'bg-navy text-white ring-navy' : 'bg-white ring-ink/20'}`}>
+            <label key={c} className={`flex min-h-11 flex-1 cursor-pointer items-center justify-center rounded-lg ring-1 ${TILE_FOCUS} ${cls === c ? 'bg-navy text-white ring-navy' : 'bg-white ring-ink/20'}`}>
               <input type="radio" name="class" className="sr-only" checked={cls === c} onChange={() => setCls(c)} />
               Class {c}
             </label>
@@ -218,12 +245,16 @@ function SafetyForm({ item }: { item: ItemDetail }) {
       <div className="mt-3" aria-live="polite" data-testid="verdict">
         {!touched ? (
           <p className="rounded-lg bg-ink/5 px-3 py-2 text-ink-soft">Tick the visual checks and enter the readings; the verdict appears here as you type.</p>
+        ) : notNumbers.length ? (
+          <p className="rounded-lg bg-ink/5 px-3 py-2 text-ink-soft">A reading is not a number; correct it to see the verdict.</p>
         ) : verdict.pass ? (
           <p className="rounded-lg bg-sage-light px-3 py-2 font-bold">These readings pass.</p>
-        ) : verdict.failures.length ? (
-          <p className="rounded-lg bg-alert-light px-3 py-2 font-bold text-alert">Fails: {verdict.failures.join(' ')}</p>
+        ) : verdict.failures.filter((f) => allVisual || !f.startsWith('The visual')).length ? (
+          <p className="rounded-lg bg-alert-light px-3 py-2 font-bold text-alert">Fails: {verdict.failures.filter((f) => allVisual || !f.startsWith('The visual')).join(' ')}</p>
+        ) : !allVisual && verdict.missing.length === 0 ? (
+          <p className="rounded-lg bg-copper-light px-3 py-2 font-semibold text-copper-dark">The readings are within limits, but not every visual point is ticked: an unticked point is recorded as a fault.</p>
         ) : (
-          <p className="rounded-lg bg-ink/5 px-3 py-2 text-ink-soft">Still needed: {verdict.missing.join(', ')}.</p>
+          <p className="rounded-lg bg-ink/5 px-3 py-2 text-ink-soft">Still needed: {[...(allVisual ? [] : ['the visual points']), ...verdict.missing].join(', ')}.</p>
         )}
       </div>
       {record.error && <div className="mt-2"><Alert tone="error">{record.error.message}</Alert></div>}
@@ -233,7 +264,7 @@ function SafetyForm({ item }: { item: ItemDetail }) {
 }
 
 /** The outcome, sent through the persisted mutation so it survives a dropped connection. */
-function OutcomeForm({ item, latestPass }: { item: ItemDetail; latestPass: boolean | null }) {
+function OutcomeForm({ item, latestPass, onCancel }: { item: ItemDetail; latestPass: boolean | null; onCancel?: () => void }) {
   const [outcome, setOutcome] = useState<Outcome | null>(item.outcome?.outcome ?? null);
   const [barrier, setBarrier] = useState(item.outcome?.barrier ?? '');
   const [part, setPart] = useState({ description: item.outcome?.partDescription ?? '', link: item.outcome?.partLink ?? '', cost: item.outcome?.partCost?.toString() ?? '' });
@@ -255,8 +286,12 @@ function OutcomeForm({ item, latestPass }: { item: ItemDetail; latestPass: boole
       notes: notes || undefined,
     };
     const parsed = outcomeSchema.safeParse(body);
-    if (!parsed.success) {
-      setErrors(Object.fromEntries(parsed.error.issues.map((i) => [i.path.join('.'), i.message])));
+    // The cross-field rules are checked here too, so every message shows in one round.
+    const extra: Record<string, string> = {};
+    if (outcome === 'end-of-life' && !barrier) extra.barrier = 'Choose the barrier to repair for an end-of-life item.';
+    if (outcome === 'parts-needed' && part.description.trim().length < 2) extra['part.description'] = 'Say which part is needed.';
+    if (!parsed.success || Object.keys(extra).length) {
+      setErrors({ ...extra, ...Object.fromEntries((parsed.error?.issues ?? []).map((i) => [i.path.join('.'), i.message])) });
       return;
     }
     setErrors({});
@@ -265,7 +300,7 @@ function OutcomeForm({ item, latestPass }: { item: ItemDetail; latestPass: boole
 
   return (
     <Card>
-      <h2 className="mb-2 text-lg">Record the outcome</h2>
+      <h2 className="mb-2 text-lg">{onCancel ? 'Correct the outcome' : 'Record the outcome'}</h2>
       {pending.some((p) => p.paused) && (
         <div className="mb-3" data-testid="pending-outcome">
           <Alert tone="caution" title="Saved on this phone — not sent yet">No connection. The outcome will be sent by itself when the network is back; keep this page or come back to it later.</Alert>
@@ -274,7 +309,7 @@ function OutcomeForm({ item, latestPass }: { item: ItemDetail; latestPass: boole
       {pending.length > 0 && !pending.some((p) => p.paused) && <p className="mb-2 text-sm text-ink-soft">Sending…</p>}
       <div role="radiogroup" aria-label="Outcome" className="grid grid-cols-2 gap-2">
         {OUTCOMES.map((o) => (
-          <label key={o} className={`flex min-h-14 cursor-pointer items-center justify-center rounded-lg px-2 text-center font-bold ring-1 ${outcome === o ? 'bg-navy text-white ring-navy' : 'bg-white ring-ink/20'}`}>
+          <label key={o} className={`flex min-h-14 cursor-pointer items-center justify-center rounded-lg px-2 text-center font-bold ring-1 ${TILE_FOCUS} ${outcome === o ? 'bg-navy text-white ring-navy' : 'bg-white ring-ink/20'}`}>
             <input type="radio" name="outcome" className="sr-only" checked={outcome === o} onChange={() => setOutcome(o)} />
             {OUTCOME_LABELS[o]}
           </label>
@@ -306,6 +341,7 @@ function OutcomeForm({ item, latestPass }: { item: ItemDetail; latestPass: boole
       </div>
       {serverError && <div className="mt-3"><Alert tone="error">{serverError.message}</Alert></div>}
       <Button className="mt-3 w-full text-lg" onClick={submit} busy={save.isPending && !save.isPaused} disabled={blocked}>Save outcome</Button>
+      {onCancel && <Button variant="secondary" className="mt-2 w-full" onClick={onCancel}>Cancel</Button>}
     </Card>
   );
 }

@@ -1,3 +1,4 @@
+import { ITEM_STATUS_LABELS } from '../../../../shared/event-day/constants';
 import type { ReactNode } from 'react';
 import { Link, useParams } from 'react-router';
 import type { ItemStatus } from '../../../../shared/event-day/constants';
@@ -7,15 +8,7 @@ import { Alert, Card, EmptyState, PageTitle, Spinner } from '../../components/ui
 import { paths } from '../../config/paths';
 import { useLiveView, type LiveCard, type LiveView } from '../../features/event-day/api';
 
-const COUNT_TILES: { status: ItemStatus; label: string }[] = [
-  { status: 'checked-in', label: 'Checked in' },
-  { status: 'waiting', label: 'Waiting' },
-  { status: 'at-bench', label: 'At bench' },
-  { status: 'done', label: 'Done' },
-  { status: 'no-show', label: 'No-show' },
-  { status: 'withdrawn', label: 'Withdrawn' },
-  { status: 'booked', label: 'Still booked' },
-];
+const COUNT_TILES: { status: ItemStatus; label: string }[] = (['checked-in', 'waiting', 'at-bench', 'done', 'no-show', 'withdrawn', 'booked'] as const).map((status) => ({ status, label: status === 'booked' ? 'Still to come' : ITEM_STATUS_LABELS[status] }));
 
 const linkButton = 'inline-flex min-h-11 items-center justify-center gap-2 rounded-lg px-4 py-2 font-bold transition';
 
@@ -45,7 +38,7 @@ export function LiveViewPage() {
         <a href={paths.hall(eventId)} target="_blank" rel="noreferrer" className={`${linkButton} bg-copper text-white hover:bg-copper-dark`}>
           Open hall display <span aria-hidden>↗</span><span className="sr-only">(opens in a new tab)</span>
         </a>
-        <Link to={paths.tags(eventId)} className={`${linkButton} bg-white text-navy ring-1 ring-navy/25 hover:bg-navy/5`}>Print all tags</Link>
+        <Link to={paths.tags(eventId)} target="_blank" className={`${linkButton} bg-white text-navy ring-1 ring-navy/25 hover:bg-navy/5`}>Print all tags</Link>
         <p className="w-full text-sm text-ink-soft sm:ml-auto sm:w-auto" aria-live="polite">
           Updated {formatTime(new Date(live.dataUpdatedAt), tz)}{live.isFetching ? ' · refreshing…' : ''}
         </p>
@@ -100,8 +93,8 @@ export function LiveViewPage() {
               ) : (
                 <>
                   <p className="mb-2 text-sm text-ink-soft">Checked in but with no bench: place them on the <Link to={paths.board(eventId)} className="font-bold text-navy underline">triage board</Link>.</p>
-                  <ul className="grid gap-2 sm:grid-cols-2 xl:grid-cols-3">
-                    {v.unplaced.map((c) => <li key={c.id}><ItemLink card={c}><WaitLine card={c} /></ItemLink></li>)}
+                  <ul className="grid min-w-0 gap-2 sm:grid-cols-2 xl:grid-cols-3">
+                    {v.unplaced.map((c) => <li key={c.id} className="min-w-0"><ItemLink card={c}><WaitLine card={c} /></ItemLink></li>)}
                   </ul>
                 </>
               )}

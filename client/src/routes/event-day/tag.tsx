@@ -26,7 +26,7 @@ export function TagPage() {
         {tag.queueNumber !== null && <p className="mt-1 text-lg">Queue number <b>{tag.queueNumber}</b></p>}
         <p className="mt-3"><StatusChip status={tag.status} /></p>
         {tag.outcomeLabel && <p className="mt-2 text-lg font-bold">{tag.outcomeLabel}</p>}
-        {tag.waitMinutes !== null && <p className="mt-2 text-ink-soft">{tag.waitMinutes === 0 ? 'You are next.' : `About ${tag.waitMinutes} minutes until a fixer is free.`}</p>}
+        {tag.waitMinutes !== null && <p className="mt-2 text-ink-soft">{tag.waitMinutes === 0 ? 'A fixer should be free for you any moment.' : `About ${tag.waitMinutes} minutes until a fixer is free.`}</p>}
       </Card>
       <p className="text-center text-sm text-ink-soft">This page refreshes by itself. Volunteers: <Link className="font-semibold text-navy underline" to={paths.signIn(paths.tag(tag.tagCode))}>sign in</Link> to open the item.</p>
     </div>

@@ -28,7 +28,7 @@ export function BenchPage() {
             <li key={q.itemId} className="rounded-xl bg-white p-4 shadow-sm ring-1 ring-ink/5">
               <div className="flex items-baseline justify-between gap-2">
                 <p className="text-lg font-extrabold text-navy"><span className="mr-2 inline-flex size-7 items-center justify-center rounded-full bg-copper text-sm text-white">{n + 1}</span><Link to={paths.item(q.itemId)} className="underline decoration-copper/40 underline-offset-4 hover:decoration-copper">{q.categoryName}</Link></p>
-                <p className="text-sm font-bold text-copper-dark">{formatTime(q.slotStartsAt, q.timeZone)}</p>
+                <p className="text-sm font-bold text-copper-dark">planned {formatTime(q.slotStartsAt, q.timeZone)}</p>
               </div>
               {q.status !== 'booked' && <p className="mt-1 flex items-center gap-2"><StatusChip status={q.status} />{q.queueNumber !== null && <b>No. {q.queueNumber}</b>}{q.tagCode && <span className="font-mono text-sm">{q.tagCode}</span>}</p>}
               <p className="mt-1">{q.fault}</p>

@@ -16,6 +16,9 @@ export const categories = mysqlTable('categories', {
   equipment: json('equipment').$type<Equipment[]>().notNull(),
   repairMinutes: int('repair_minutes').notNull(),
   mains: boolean('mains').notNull(),
+  /** Production emission factor, kg CO2e per kg (shared/impact/factors.ts); null: no sourced factor. */
+  co2ePerKg: decimal('co2e_per_kg', { precision: 10, scale: 5, mode: 'number' }),
+  co2eSource: varchar('co2e_source', { length: 255 }),
   refusal: json('refusal').$type<{ reason: string; suggestion: string } | null>(),
   sort: int('sort').notNull().default(0),
 }, (t) => [uniqueIndex('categories_slug_uq').on(t.slug)]);

@@ -19,6 +19,8 @@ export const events = mysqlTable('events', {
   status: mysqlEnum('status', EVENT_STATUSES).notNull().default('draft'),
   publishedAt: timestamp3('published_at'),
   cancelledAt: timestamp3('cancelled_at'),
+  /** When the thank-you mails went out after the event. */
+  thankYouSentAt: timestamp3('thank_you_sent_at'),
   /** The last queue number handed out at the desk; taken under the event row's lock. */
   queueCounter: int('queue_counter').notNull().default(0),
   createdAt: createdAt(),
@@ -76,6 +78,8 @@ export const bookingItems = mysqlTable('booking_items', {
   battery: boolean('battery').notNull().default(false),
   position: int('position').notNull(),
   status: mysqlEnum('status', ITEM_STATUSES).notNull().default('booked'),
+  /** A return visit (the part bought): the earlier visit it continues; the statistics count the item once. */
+  returnOfItemId: ref('return_of_item_id'),
   tagCode: char('tag_code', { length: 5 }),
   queueNumber: int('queue_number'),
   /** Weighed at the desk; overrides the category's average weight in the statistics. */
@@ -84,7 +88,7 @@ export const bookingItems = mysqlTable('booking_items', {
   startedAt: timestamp3('started_at'),
   doneAt: timestamp3('done_at'),
   createdAt: createdAt(),
-}, (t) => [index('booking_items_booking_idx').on(t.bookingId), uniqueIndex('booking_items_tag_uq').on(t.tagCode), index('booking_items_status_idx').on(t.status)]);
+}, (t) => [index('booking_items_booking_idx').on(t.bookingId), uniqueIndex('booking_items_tag_uq').on(t.tagCode), index('booking_items_status_idx').on(t.status), index('booking_items_return_idx').on(t.returnOfItemId)]);
 
 export const itemPhotos = mysqlTable('item_photos', {
   id: id(),

@@ -5,3 +5,4 @@ export * from './categories';
 export * from './events';
 export * from './volunteers';
 export * from './event-day';
+export * from './impact';

@@ -51,10 +51,12 @@ export async function screen(tx: DbOrTx, groupId: number, groupName: string, ite
 }
 
 /** Takes `n` places atomically: the UPDATE matches only while booked + held + n fits the capacity. */
-async function takePlaces(tx: Tx, slotId: number, n: number, fromHeld: boolean) {
+async function takePlaces(tx: Tx, slotId: number, n: number, fromHeld: boolean, priority = false) {
+  // A return visit (the part bought) may take one place over the capacity: the group keeps room for its returns.
+  const spare = priority ? 1 : 0;
   const res = fromHeld
     ? await tx.update(slots).set({ booked: sql`${slots.booked} + ${n}`, held: sql`${slots.held} - ${n}` }).where(and(eq(slots.id, slotId), sql`${slots.held} >= ${n}`))
-    : await tx.update(slots).set({ booked: sql`${slots.booked} + ${n}` }).where(and(eq(slots.id, slotId), sql`${slots.booked} + ${slots.held} + ${n} <= ${slots.capacity}`));
+    : await tx.update(slots).set({ booked: sql`${slots.booked} + ${n}` }).where(and(eq(slots.id, slotId), sql`${slots.booked} + ${slots.held} + ${n} <= ${slots.capacity} + ${spare}`));
   if (affectedRows(res) !== 1) throw full();
 }
 
@@ -117,8 +119,8 @@ function prepareBooking(ctx: AppContext): Prepared {
  * every later insert refers to the slot, and taking the exclusive lock before those shared ones avoids deadlocks.
  * Everything that can be done before the transaction (checking the items, the QR image) already was.
  */
-async function insertBooking(ctx: AppContext, tx: Tx, row: Awaited<ReturnType<typeof bookableSlot>>, input: Pick<BookingInput, 'visitor' | 'items'>, fromHeld: boolean, prepared: Prepared, cats: Awaited<ReturnType<typeof screen>>) {
-  await takePlaces(tx, row.slot.id, input.items.length, fromHeld);
+async function insertBooking(ctx: AppContext, tx: Tx, row: Awaited<ReturnType<typeof bookableSlot>>, input: Pick<BookingInput, 'visitor' | 'items'>, fromHeld: boolean, prepared: Prepared, cats: Awaited<ReturnType<typeof screen>>, returnOfItemId?: number) {
+  await takePlaces(tx, row.slot.id, input.items.length, fromHeld, returnOfItemId !== undefined);
   await takeSkillPlaces(tx, row.slot.id, row.event.skillLimits, countBySkill(input.items.map((i) => cats.get(i.categoryId)!.skill)));
   const { reference, token } = prepared;
   const [{ id }] = await tx
@@ -129,7 +131,7 @@ async function insertBooking(ctx: AppContext, tx: Tx, row: Awaited<ReturnType<ty
     .insert(bookingItems)
     .values(input.items.map((i, position) => ({
       bookingId: id, categoryId: i.categoryId, brand: i.brand ?? null, model: i.model ?? null, ageYears: i.ageYears ?? null, fault: i.fault,
-      mains: i.mains ?? Boolean(cats.get(i.categoryId)!.mains), battery: i.battery ?? false, position,
+      mains: i.mains ?? Boolean(cats.get(i.categoryId)!.mains), battery: i.battery ?? false, position, returnOfItemId: returnOfItemId ?? null,
     })))
     .$returningId();
   const f = facts(ctx, row, { reference, visitorName: input.visitor.name, visitorEmail: input.visitor.email }, input.items.map((i) => itemLabel(cats.get(i.categoryId), i)), token);
@@ -144,6 +146,29 @@ export type BookingResult = Awaited<ReturnType<typeof insertBooking>>;
  * capacity holds under any number of simultaneous requests. With an idempotency key the first answer is stored
  * and replayed for the same key, so a form sent twice books once.
  */
+/**
+ * A return visit booked through a follow-up's priority link: one item, continuing the earlier visit, allowed one
+ * place over the slot's capacity. `inTx` runs in the same transaction (the follow-up's status).
+ */
+export async function createReturnBooking(ctx: AppContext, input: BookingInput, returnOfItemId: number, inTx: (tx: Tx, result: BookingResult) => Promise<void>) {
+  const row = await bookableSlot(ctx.database.db, input.slotId);
+  const cats = await screen(ctx.database.db, row.group.id, row.group.name, input.items);
+  for (let attempt = 0; ; attempt++) {
+    const prepared = prepareBooking(ctx);
+    try {
+      const result = await withDeadlockRetry(() => ctx.database.db.transaction(async (tx) => {
+        const r = await insertBooking(ctx, tx, row, input, false, prepared, cats, returnOfItemId);
+        await inTx(tx, r);
+        return r;
+      }));
+      ctx.outbox.kick();
+      return result;
+    } catch (err) {
+      if (!isDuplicate(err) || attempt >= 3) throw err;
+    }
+  }
+}
+
 export async function createBooking(ctx: AppContext, input: BookingInput, idempotencyKey?: string): Promise<{ status: number; body: unknown; replayed: boolean }> {
   const key = idempotencyKey ? `booking:${idempotencyKey}` : null;
   const row = await bookableSlot(ctx.database.db, input.slotId);

@@ -14,6 +14,8 @@ import { HttpError, notFound } from '../../http/errors';
 import { manageTokenFor, screen } from '../bookings/service';
 import { runTriage } from '../triage/service';
 import { newTagCodes, nextQueueNumbers, setStatus } from './items';
+import { refreshCells } from '../impact/cells';
+import { markCameBack } from '../impact/follow-ups';
 
 /** The desk opens 12 hours before the event starts and closes 12 hours after it ends. */
 const DESK_OPENS_H = 12;
@@ -60,6 +62,23 @@ export async function checkIn(ctx: AppContext, reference: string, input: z.outpu
       });
     }
     if (Object.keys(fields).length) throw new HttpError(400, 'invalid', 'Some fields need attention.', fields);
+    // A corrected kind goes through the same screening as booking: the group's exclusions still hold.
+    const corrected = wanted.map((w, n) => ({ w, n })).filter(({ w }) => w.arrival === 'arrived' && w.categoryId !== undefined && w.categoryId !== items.find((i) => i.id === w.id)!.categoryId);
+    if (corrected.length) {
+      const [g] = await tx.select().from(repairGroups).where(eq(repairGroups.id, e.groupId));
+      try {
+        await screen(tx, g.id, g.name, corrected.map(({ w }) => ({ categoryId: w.categoryId!, brand: undefined, model: undefined, fault: 'checked at the desk', hazards: [] })));
+      } catch (err) {
+        if (err instanceof HttpError && err.fields) {
+          throw new HttpError(422, 'item-refused', err.message, Object.fromEntries(Object.entries(err.fields).map(([k, v]) => [`items.${corrected[Number(k.split('.')[1])].n}.categoryId`, v])));
+        }
+        throw err;
+      }
+    }
+    for (const [n, w] of wanted.entries()) {
+      const item = items.find((i) => i.id === w.id)!;
+      if (w.arrival === 'no-show' && !['booked', 'no-show'].includes(item.status)) throw new HttpError(409, 'bad-transition', 'Some fields need attention.', { [`items.${n}.arrival`]: 'This item has already been checked in. Mark it withdrawn if the visitor took it away.' });
+    }
     const arriving = wanted.filter((w) => w.arrival === 'arrived' && ['booked', 'no-show', 'withdrawn'].includes(items.find((i) => i.id === w.id)!.status));
     const needTag = arriving.filter((w) => !items.find((i) => i.id === w.id)!.tagCode);
     const needNumber = arriving.filter((w) => items.find((i) => i.id === w.id)!.queueNumber === null);
@@ -78,13 +97,14 @@ export async function checkIn(ctx: AppContext, reference: string, input: z.outpu
           await tx.update(bookingItems).set(fix).where(eq(bookingItems.id, item.id));
         }
       } else if (item.status !== w.arrival) {
-        if (['at-bench', 'done'].includes(item.status) && w.arrival === 'no-show') throw new HttpError(409, 'bad-transition', 'That item is already at a bench; it cannot be a no-show.');
         if (item.status === 'done') throw new HttpError(409, 'bad-transition', 'That item is done; it cannot be withdrawn.');
         await setStatus(tx, [{ itemId: item.id, from: item.status, to: w.arrival, extra: fix }], user.id);
         await tx.delete(itemAssignments).where(and(eq(itemAssignments.itemId, item.id), eq(itemAssignments.locked, false)));
       }
     }
     const after = await tx.select({ id: bookingItems.id, tagCode: bookingItems.tagCode, queueNumber: bookingItems.queueNumber, status: bookingItems.status }).from(bookingItems).where(eq(bookingItems.bookingId, b.id)).orderBy(asc(bookingItems.position));
+    await refreshCells(tx, after.map((i) => i.id));
+    await markCameBack(tx, after.filter((i) => i.status !== 'no-show' && i.status !== 'withdrawn').map((i) => i.id));
     return { eventId: e.id, slotId: b.slotId, items: after as Issued[] };
   }));
   await replan(ctx, result.eventId, result.slotId, user.id);
@@ -120,6 +140,7 @@ export async function walkIn(ctx: AppContext, eventId: number, input: z.output<t
           status: 'booked' as const, tagCode: codes[position], queueNumber: numbers[position], weighedKg: i.weightKg ?? null, checkedInAt: now,
         }))).$returningId();
         await setStatus(tx, ids.map((x) => ({ itemId: x.id, from: 'booked' as const, to: 'checked-in' as const })), user.id, 'walk-in');
+        await refreshCells(tx, ids.map((x) => x.id));
         return { reference, ids: ids.map((x) => x.id) };
       }));
       await replan(ctx, eventId, slot.id, user.id);

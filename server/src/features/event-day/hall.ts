@@ -76,14 +76,15 @@ export async function liveView(ctx: AppContext, eventId: number) {
   const [items, fixers, benches] = await Promise.all([hallItems(ctx, eventId), fixersNow(ctx, eventId, now), eventLayout(ctx, eventId)]);
   const allBooked = await ctx.database.db.select({ status: bookingItems.status }).from(bookingItems).innerJoin(bookings, eq(bookings.id, bookingItems.bookingId)).where(and(eq(bookings.eventId, eventId), eq(bookings.status, 'confirmed')));
   const counts = Object.fromEntries(Object.keys(ITEM_STATUS_LABELS).map((s) => [s, allBooked.filter((b) => b.status === s).length]));
-  const { waits } = waitsFor(items, fixers, now.getTime());
+  const { waits, order } = waitsFor(items, fixers, now.getTime());
+  const rank = new Map(order.map((q, i) => [q.id, i]));
   const names = new Map((await ctx.database.db.select({ id: users.id, name: users.name }).from(users).where(inArray(users.id, [0, ...new Set(items.map((i) => i.fixerId).filter((x): x is number => x !== null))]))).map((u) => [u.id, u.name]));
   const card = (i: HallItem) => ({
     id: i.id, queueNumber: i.queueNumber, tagCode: i.tagCode, label: [i.categoryName, [i.brand, i.model].filter(Boolean).join(' ')].filter(Boolean).join(' — '), visitor: shortName(i.visitorName), status: i.status,
     fixerName: i.fixerId ? (names.get(i.fixerId) ?? null) : null, checkedInAt: i.checkedInAt, startedAt: i.startedAt, doneAt: i.doneAt, outcomeLabel: i.outcome ? OUTCOME_LABELS[i.outcome] : null,
     waitedMinutes: i.checkedInAt ? Math.floor((now.getTime() - i.checkedInAt.getTime()) / 60_000) : null, estimatedWaitMinutes: waits.get(i.id) ?? null,
   });
-  const queued = items.filter(isQueued);
+  const queued = items.filter(isQueued).sort((a, b) => (rank.get(a.id) ?? 0) - (rank.get(b.id) ?? 0));
   const busyFixers = new Set(items.filter((i) => i.status === 'at-bench').map((i) => i.fixerId));
   return {
     event: { id: e.event.id, title: e.event.title, status: e.event.status, startsAt: e.event.startsAt, endsAt: e.event.endsAt, groupId: e.group.id, groupName: e.group.name, timeZone: e.group.timeZone },

@@ -12,6 +12,8 @@ import { hasGroupRole } from '../../auth/guards';
 import { HttpError } from '../../http/errors';
 import { eventLayout } from '../triage/benches';
 import { isHeating, loadItem, setStatus, type ItemRow } from './items';
+import { refreshCells } from '../impact/cells';
+import { afterOutcome } from '../impact/follow-ups';
 
 const forbidden = (message: string) => new HttpError(403, 'forbidden', message);
 
@@ -87,7 +89,7 @@ export async function recordOutcome(ctx: AppContext, itemId: number, input: z.ou
       await insertCheck(tx, row, input.safety!, user);
     });
   }
-  return withDeadlockRetry(() => db.transaction(async (tx) => {
+  const done = await withDeadlockRetry(() => db.transaction(async (tx) => {
     const row = await loadItem(tx, itemId, { lock: true });
     await assertMayRecord(tx, row, user);
     if (['booked', 'no-show', 'withdrawn'].includes(row.item.status)) throw new HttpError(409, 'bad-transition', row.item.status === 'booked' ? 'Check the item in at reception first.' : `This item is marked ${row.item.status}.`);
@@ -108,7 +110,11 @@ export async function recordOutcome(ctx: AppContext, itemId: number, input: z.ou
       if (benches[0]) await tx.insert(itemAssignments).values({ itemId, eventId: row.event.id, userId: user.id, benchId: benches[0].id, startsAt: row.item.startedAt ?? new Date(), locked: true, source: 'hand' });
     }
     await setStatus(tx, [{ itemId, from: row.item.status, to: 'done', extra: { doneAt: new Date() } }], user.id, `outcome: ${input.outcome}`);
+    await refreshCells(tx, [itemId]);
+    await afterOutcome(ctx, tx, row, input.outcome);
     return { ok: true };
   }));
+  ctx.outbox.kick();
+  return done;
 }
 
