@@ -38,6 +38,8 @@ function StartRedirect() {
 export const router = createBrowserRouter([
   // Pages for a TV and for the printer: no header, no menu.
   { path: 'events/:eventId/hall', errorElement: <RouteError />, hydrateFallbackElement: <Spinner />, ...page(() => import('./routes/event-day/hall-display'), 'HallDisplayPage') },
+  { path: 'events/:eventId/report', errorElement: <RouteError />, hydrateFallbackElement: <Spinner />, ...page(() => import('./routes/impact/report'), 'EventReportPage', organiser) },
+  { path: 'embed/impact', errorElement: <RouteError />, hydrateFallbackElement: <Spinner />, ...page(() => import('./routes/impact/embed'), 'ImpactWidgetPage') },
   { path: 'events/:eventId/tags', errorElement: <RouteError />, hydrateFallbackElement: <Spinner />, ...page(() => import('./routes/event-day/tags'), 'TagSheetPage', (u) => staff(u)) },
   {
     element: <AppShell />,
@@ -64,6 +66,13 @@ export const router = createBrowserRouter([
       { path: 'desk/:eventId', ...page(() => import('./routes/event-day/desk'), 'DeskPage', staff) },
       { path: 'items/:itemId', ...page(() => import('./routes/event-day/item'), 'ItemPage', (u) => staff(u) || hasRole(u, 'fixer')) },
       { path: 't/:code', ...page(() => import('./routes/event-day/tag'), 'TagPage') },
+      { path: 'groups/:groupId/impact', ...page(() => import('./routes/impact/dashboard'), 'GroupImpactPage', organiser) },
+      { path: 'admin/impact', ...page(() => import('./routes/impact/dashboard'), 'NetworkImpactPage', admin) },
+      { path: 'impact/records', ...page(() => import('./routes/impact/records'), 'ImpactRecordsPage', organiser) },
+      { path: 'groups/:groupId/follow-ups', ...page(() => import('./routes/impact/follow-ups'), 'FollowUpsPage', organiser) },
+      { path: 'impact', ...page(() => import('./routes/impact/public'), 'PublicImpactPage') },
+      { path: 'impact/groups/:groupId', ...page(() => import('./routes/impact/public'), 'PublicImpactPage') },
+      { path: 'rebook/:token', ...page(() => import('./routes/impact/rebook'), 'RebookPage') },
       { path: 'events/:eventId/live', ...page(() => import('./routes/event-day/live'), 'LiveViewPage', organiser) },
       { path: 'events', ...page(() => import('./routes/events/list'), 'EventsPage') },
       { path: 'events/:eventId', element: <EventPage /> },

@@ -12,10 +12,16 @@ import { seedDemo } from '../src/seed/demo';
 import { startServer } from '../src/server';
 import { loadOrCreateSecrets, startLocalDatabase, step } from './local-stack';
 import { benchTriage } from './bench-triage';
+import { benchStats } from './bench-stats';
 
 benchTriage();
 if (process.env.BENCH === 'triage') process.exit(0);
 console.log('');
+if (!process.env.BENCH || process.env.BENCH === 'stats') {
+  await benchStats();
+  if (process.env.BENCH === 'stats') process.exit(0);
+  console.log('');
+}
 
 /**
  * `npm run bench`: loads GET /api/events and POST /api/bookings with autocannon against a throwaway MariaDB and,

@@ -18,6 +18,7 @@ import { bookingRoutes } from './features/bookings/routes';
 import { volunteerRoutes } from './features/volunteers/routes';
 import { triageRoutes } from './features/triage/routes';
 import { eventDayPublicRoutes, eventDayRoutes } from './features/event-day/routes';
+import { impactPublicRoutes, impactRoutes } from './features/impact/routes';
 
 /** Builds the Express app: middleware → routers → 404 → error handler. `listen` is the caller's business. */
 export function createApp(ctx: AppContext) {
@@ -27,7 +28,7 @@ export function createApp(ctx: AppContext) {
     const v = ctx.env.TRUST_PROXY;
     app.set('trust proxy', /^\d+$/.test(v) ? Number(v) : v === 'true' ? true : v);
   }
-  app.use(
+  const headers = (embed: boolean) =>
     helmet({
       contentSecurityPolicy: {
         directives: {
@@ -39,19 +40,25 @@ export function createApp(ctx: AppContext) {
           workerSrc: ["'self'", 'blob:'],
           connectSrc: ["'self'"],
           frameSrc: ["'self'"],
+          // The impact widget is made to sit in an iframe on a group's own website; nothing else may be framed.
+          frameAncestors: embed ? ['*'] : ["'self'"],
           upgradeInsecureRequests: null,
         },
       },
+      frameguard: embed ? false : { action: 'sameorigin' },
       // HSTS only means something over HTTPS, which a reverse proxy provides in production.
       strictTransportSecurity: ctx.env.NODE_ENV === 'production',
-    }),
-  );
+    });
+  const pageHeaders = headers(false);
+  const embedHeaders = headers(true);
+  app.use((req, res, next) => (req.path.startsWith('/embed/') ? embedHeaders : pageHeaders)(req, res, next));
 
   const api = express.Router();
   api.use(express.json({ limit: '100kb' }));
   api.use(express.urlencoded({ extended: false, limit: '100kb' }));
   api.use(publicRoutes(ctx));
   api.use(eventDayPublicRoutes(ctx));
+  api.use(impactPublicRoutes(ctx));
 
   const { middleware: session, store } = sessionMiddleware(ctx.env, ctx.database.pool);
   const { csrfSynchronisedProtection, generateToken } = csrfSync({
@@ -71,6 +78,7 @@ export function createApp(ctx: AppContext) {
   api.use(volunteerRoutes(ctx));
   api.use(triageRoutes(ctx));
   api.use(eventDayRoutes(ctx));
+  api.use(impactRoutes(ctx));
   api.use(apiNotFound);
   app.use('/api', api);
 

@@ -71,6 +71,20 @@ const table: Row[] = [
   // The hall display shows published sessions only; this one is a draft.
   ['GET', (g) => `/api/public/events/${g.ownEvent}/queue`, everyone(404)],
   ['GET', () => '/api/public/tags/ZZZZZ', everyone(404)],
+  ['GET', (g) => `/api/stats?groupId=${g.own}`, ownOrganiser],
+  ['GET', (g) => `/api/stats?groupId=${g.other}`, { ...ownOrganiser, organiser: 403, otherOrganiser: 200 }],
+  ['GET', () => '/api/stats', adminOnly],
+  ['GET', (g) => `/api/stats/records?groupId=${g.own}`, ownOrganiser],
+  ['GET', (g) => `/api/exports/open-repair-data.csv?groupId=${g.own}`, ownOrganiser],
+  ['GET', (g) => `/api/exports/records.csv?groupId=${g.own}`, ownOrganiser],
+  ['GET', (g) => `/api/events/${g.ownEvent}/report`, ownOrganiser],
+  ['GET', (g) => `/api/groups/${g.own}/follow-ups`, ownOrganiser],
+  ['GET', (g) => `/api/public/impact?groupId=${g.own}`, everyone(200)],
+  ['GET', () => '/api/public/impact', everyone(200)],
+  ['GET', () => '/api/stats/method', everyone(200)],
+  ['GET', () => '/api/admin/impact-settings', adminOnly],
+  ['PUT', () => '/api/admin/impact-settings', { ...adminOnly, admin: 400 }, { displacement: 2 }],
+  ['GET', () => '/api/rebook/1.nope', everyone(404)],
   ['POST', (g) => `/api/groups/${g.own}/invites`, { ...ownOrganiser, organiser: 202, admin: 202 }, { email: 'invited@example.org', role: 'fixer' }],
 ];
 

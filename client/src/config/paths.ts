@@ -34,4 +34,12 @@ export const paths = {
   tags: (eventId: number, opts: { slotId?: number; items?: number[] } = {}) => `/events/${eventId}/tags${opts.slotId ? `?slot=${opts.slotId}` : opts.items?.length ? `?items=${opts.items.join(',')}` : ''}`,
   hall: (eventId: number) => `/events/${eventId}/hall`,
   live: (eventId: number) => `/events/${eventId}/live`,
+  impact: (groupId: number) => `/groups/${groupId}/impact`,
+  networkImpact: () => '/admin/impact',
+  impactRecords: (q: string) => `/impact/records${q}`,
+  followUps: (groupId: number) => `/groups/${groupId}/follow-ups`,
+  report: (eventId: number) => `/events/${eventId}/report`,
+  publicImpact: (groupId?: number) => (groupId ? `/impact/groups/${groupId}` : '/impact'),
+  embed: (groupId?: number) => (groupId ? `/embed/impact?group=${groupId}` : '/embed/impact'),
+  rebook: (token: string) => `/rebook/${token}`,
 };

@@ -3,6 +3,7 @@ import { eq } from 'drizzle-orm';
 import { generateSlots } from '../../../shared/booking/slots';
 import type { ItemStatus } from '../../../shared/event-day/constants';
 import type { Db } from '../db/client';
+import { refreshEventCells } from '../features/impact/cells';
 import { bookingItems, bookings, categories, eventBenches, events, itemAssignments, itemOutcomes, itemStatusChanges, repairGroups, safetyChecks, shifts, slots, users, venueBenches, venues } from '../db/schema/index';
 
 /**
@@ -71,4 +72,5 @@ export async function seedToday(tx: Db, now: Date, linkSecret: string) {
       await tx.insert(itemOutcomes).values({ itemId, outcome: 'fixed', minutes: 25, notes: 'Steam switch bimetal disc stuck; cleaned the lever linkage and re-seated the disc.', safetyCheckId: checkId, recordedBy: fixer, recordedAt: ago(v.minutesAgo! - 30) });
     }
   }
+  await refreshEventCells(tx, [eventId]);
 }

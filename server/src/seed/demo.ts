@@ -10,6 +10,7 @@ import { bookingItems, bookings, categories, events, memberships, repairGroups, 
 import { applyDefaultExclusions } from '../features/catalogue/service';
 import { ensureCategories } from './categories';
 import { seedToday } from './demo-today';
+import { seedHistory } from './demo-history';
 
 /**
  * The demo scenario: the invented town of Kestlebridge and its neighbour Orrin Vale, two repair groups,
@@ -64,6 +65,7 @@ export async function seedDemo(db: Db, opts: { linkSecret?: string; now?: Date }
     await seedEvents(tx as unknown as Db, groupIds, opts.now ?? new Date(), opts.linkSecret ?? 'demo');
     await seedVolunteers(tx as unknown as Db);
     await seedToday(tx as unknown as Db, opts.now ?? new Date(), opts.linkSecret ?? 'demo');
+    await seedHistory(tx as unknown as Db, opts.now ?? new Date());
     // One volunteer waiting for an organiser to confirm them.
     const [{ id: pendingId }] = await tx.insert(users).values({ email: 'juniper.oakes@example.org', name: 'Juniper Oakes', passwordHash, emailVerifiedAt: now }).$returningId();
     await tx.insert(memberships).values({ userId: pendingId, groupId: groupIds['kestlebridge-menders'], role: 'fixer', status: 'pending' });

@@ -13,6 +13,7 @@ export function EventTabs({ eventId }: { eventId: number }) {
         { to: paths.benches(eventId), label: 'Benches' },
         { to: paths.live(eventId), label: 'Live' },
         { to: paths.deskEvent(eventId), label: 'Desk' },
+        { to: paths.report(eventId), label: 'Report' },
       ]}
     />
   );

@@ -10,6 +10,8 @@ export function GroupTabs({ groupId }: { groupId: number }) {
         { to: paths.groupEvents(groupId), label: 'Sessions' },
         { to: paths.groupPeople(groupId), label: 'People' },
         { to: paths.skillsMatrix(groupId), label: 'Skills' },
+        { to: paths.impact(groupId), label: 'Impact' },
+        { to: paths.followUps(groupId), label: 'Parts follow-up' },
         { to: paths.groupSettings(groupId), label: 'Rules and venues' },
       ]}
     />

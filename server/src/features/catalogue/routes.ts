@@ -19,8 +19,11 @@ const categoryPatch = z
     equipment: z.array(z.enum(EQUIPMENT)).max(EQUIPMENT.length),
     repairMinutes: z.number().int().min(5).max(480),
     mains: z.boolean(),
+    co2ePerKg: z.number().min(0, 'A factor cannot be negative.').max(1000).nullable(),
+    co2eSource: z.string().trim().min(3, 'Name the source of the factor.').max(255).nullable(),
   })
-  .partial();
+  .partial()
+  .refine((p) => p.co2ePerKg === undefined || p.co2ePerKg === null || (p.co2eSource ?? '').length >= 3, { path: ['co2eSource'], message: 'Name the source of the factor.' });
 
 export function catalogueRoutes(ctx: AppContext) {
   const r = Router();

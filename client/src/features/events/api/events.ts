@@ -40,6 +40,8 @@ export interface Category {
   weeeCategory: number | null;
   avgWeightKg: number;
   weightSource: string;
+  co2ePerKg: number | null;
+  co2eSource: string | null;
   skill: Skill;
   equipment: string[];
   repairMinutes: number;

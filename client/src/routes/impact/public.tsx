@@ -1,0 +1,239 @@
+import { useId, type ReactNode } from 'react';
+import { Link, useParams } from 'react-router';
+import { Area, AreaChart, Bar, BarChart, CartesianGrid, Legend, Pie, PieChart, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
+import { OUTCOME_LABELS } from '../../../../shared/event-day/constants';
+import { Alert, Card, EmptyState, PageTitle, Spinner } from '../../components/ui/feedback';
+import { paths } from '../../config/paths';
+import { usePublicImpact, type Method, type PublicImpact } from '../../features/impact/api';
+import { ApiError } from '../../lib/api';
+
+const whole = new Intl.NumberFormat('en-GB');
+const oneDp = new Intl.NumberFormat('en-GB', { minimumFractionDigits: 1, maximumFractionDigits: 1 });
+const monthFormat = new Intl.DateTimeFormat('en-GB', { month: 'short', year: 'numeric', timeZone: 'UTC' });
+const longMonthFormat = new Intl.DateTimeFormat('en-GB', { month: 'long', year: 'numeric', timeZone: 'UTC' });
+const monthLabel = (m: string) => monthFormat.format(new Date(`${m}-01T00:00:00Z`));
+const longMonth = (m: string) => longMonthFormat.format(new Date(`${m}-01T00:00:00Z`));
+
+const COLOURS = { fixed: '#5d7f6a', partsNeeded: '#b8612f', advice: '#23395d', endOfLife: '#8d949c', grid: '#e7e2da' };
+const CO2E = <>CO<sub>2</sub>e</>;
+const linkButton = 'inline-flex min-h-11 items-center justify-center rounded-lg px-4 py-2 font-bold transition';
+
+/** What a group (or every group) has repaired, for anyone: totals and charts, never a person. */
+export function PublicImpactPage() {
+  const raw = useParams().groupId;
+  const groupId = raw === undefined ? undefined : Number(raw);
+  const valid = groupId === undefined || (Number.isInteger(groupId) && groupId > 0);
+  const impact = usePublicImpact(valid ? groupId : undefined);
+
+  if (!valid) return <NotFound />;
+  if (impact.isPending) return <Spinner label="Counting the repairs…" />;
+  if (impact.isError) {
+    if (impact.error instanceof ApiError && impact.error.status === 404) return <NotFound />;
+    return <Alert tone="error" title="The figures could not be loaded">{impact.error.message} Try again in a moment.</Alert>;
+  }
+  const d = impact.data;
+  const title = d.group ? `${d.group.name}${d.group.town ? `, ${d.group.town}` : ''}` : 'All groups on Mendery';
+
+  return (
+    <div className="space-y-6">
+      <title>{`Impact · ${title}`}</title>
+      {groupId !== undefined && <Link to={paths.publicImpact()} className="text-sm font-bold text-navy underline">← All groups on Mendery</Link>}
+      <PageTitle title={title} lead={d.group ? 'What volunteers and visitors have repaired together at this group’s sessions.' : 'What volunteers and visitors have repaired together at the community repair sessions on Mendery.'} />
+
+      {d.items === 0 ? (
+        <EmptyState title="No repairs counted yet" icon="▤">Figures appear here after the first session, once the fixers have recorded what happened to each item.</EmptyState>
+      ) : (
+        <>
+          <section aria-label="Totals">
+            <ul className="grid grid-cols-2 gap-2 sm:grid-cols-5">
+              <Tile testId="stat-items" value={whole.format(d.items)} label="items brought in" />
+              <Tile testId="stat-fixed" value={whole.format(d.fixed)} label="fixed" />
+              <Tile testId="stat-kgDiverted" value={oneDp.format(d.kgDiverted)} label="kg kept out of the bin" />
+              <Tile testId="stat-co2eKg" value={oneDp.format(d.co2eKg)} label={<>kg {CO2E} avoided</>} />
+              <Tile testId="stat-events" value={whole.format(d.events)} label={d.events === 1 ? 'session' : 'sessions'} />
+            </ul>
+          </section>
+          <Charts d={d} />
+        </>
+      )}
+
+      <div className="flex flex-wrap gap-2">
+        <Link to={paths.events()} className={`${linkButton} bg-copper text-white hover:bg-copper-dark`}>Find a repair session</Link>
+      </div>
+
+      <MethodCard method={d.method} />
+    </div>
+  );
+}
+
+function NotFound() {
+  return (
+    <div className="space-y-4">
+      <PageTitle title="Group not found" />
+      <Alert tone="info" title="We could not find that group">
+        The link may be out of date. <Link to={paths.publicImpact()} className="font-bold underline">See the figures of all groups</Link>.
+      </Alert>
+    </div>
+  );
+}
+
+function Tile({ testId, value, label }: { testId: string; value: string; label: ReactNode }) {
+  return (
+    <li className="rounded-lg border-t-4 border-sage bg-white px-3 py-3 shadow-sm ring-1 ring-ink/5">
+      <p className="text-2xl font-extrabold text-navy tabular-nums sm:text-3xl" data-testid={testId}>{value}</p>
+      <p className="text-sm font-semibold text-ink-soft">{label}</p>
+    </li>
+  );
+}
+
+function Charts({ d }: { d: PublicImpact }) {
+  const months = d.byMonth.map((m) => ({ month: m.month, label: monthLabel(m.month), kg: Math.round(m.kgDiverted * 10) / 10 }));
+  const heaviest = months.reduce<(typeof months)[number] | null>((best, m) => (!best || m.kg > best.kg ? m : best), null);
+  const outcomes = [
+    { name: OUTCOME_LABELS.fixed, value: d.fixed, fill: COLOURS.fixed },
+    { name: OUTCOME_LABELS['parts-needed'], value: d.partsNeeded, fill: COLOURS.partsNeeded },
+    { name: OUTCOME_LABELS.advice, value: d.advice, fill: COLOURS.advice },
+    { name: OUTCOME_LABELS['end-of-life'], value: d.endOfLife, fill: COLOURS.endOfLife },
+  ].filter((o) => o.value > 0);
+  const known = outcomes.reduce((n, o) => n + o.value, 0);
+  const share = (n: number) => (known ? `${Math.round((n / known) * 100)}%` : '—');
+  const top = d.byCategory.slice(0, 8);
+
+  return (
+    <div className="grid gap-4 lg:grid-cols-2">
+      <ChartCard
+        title="Kilograms kept out of the bin, by month"
+        summary={heaviest ? `${oneDp.format(d.kgDiverted)} kg over ${months.length} ${months.length === 1 ? 'month' : 'months'}; the most in ${longMonth(heaviest.month)} (${oneDp.format(heaviest.kg)} kg).` : 'No months to show yet.'}
+        table={
+          <SimpleTable head={['Month', 'kg']} rows={months.map((m) => ({ key: m.month, cells: [longMonth(m.month), oneDp.format(m.kg)] }))} />
+        }
+      >
+        <ResponsiveContainer width="100%" height={260}>
+          <AreaChart data={months} margin={{ top: 8, right: 8, bottom: 0, left: -12 }} accessibilityLayer={false}>
+            <CartesianGrid vertical={false} stroke={COLOURS.grid} />
+            <XAxis dataKey="label" tick={{ fontSize: 12 }} interval="preserveStartEnd" />
+            <YAxis tick={{ fontSize: 12 }} width={44} />
+            <Tooltip formatter={(v) => [`${oneDp.format(Number(v))} kg`, 'Kept out of the bin']} />
+            <Area isAnimationActive={false} type="monotone" dataKey="kg" stroke={COLOURS.fixed} strokeWidth={2} fill={COLOURS.fixed} fillOpacity={0.25} />
+          </AreaChart>
+        </ResponsiveContainer>
+      </ChartCard>
+
+      <ChartCard
+        title="What happened to the items"
+        summary={known ? `${share(d.fixed)} of the items with a recorded outcome were fixed; the others needed a part, got advice, or were at the end of their life.` : 'No outcomes recorded yet.'}
+        table={<SimpleTable head={['Outcome', 'Items', 'Share']} rows={outcomes.map((o) => ({ key: o.name, cells: [o.name, whole.format(o.value), share(o.value)] }))} />}
+      >
+        {known > 0 && (
+          <ResponsiveContainer width="100%" height={260}>
+            <PieChart accessibilityLayer={false}>
+              <Pie data={outcomes} dataKey="value" nameKey="name" innerRadius="48%" outerRadius="78%" paddingAngle={1} isAnimationActive={false} />
+              <Tooltip formatter={(v, name) => [`${whole.format(Number(v))} (${share(Number(v))})`, name]} />
+              <Legend wrapperStyle={{ fontSize: 12 }} itemSorter={null} />
+            </PieChart>
+          </ResponsiveContainer>
+        )}
+      </ChartCard>
+
+      <ChartCard
+        title="The items most often brought in"
+        summary={top.length ? `Most often: ${top.slice(0, 3).map((c) => `${c.name.toLowerCase()} (${c.items})`).join(', ')}.` : 'No categories yet.'}
+        table={<SimpleTable head={['Category', 'Items', 'Fixed']} rows={d.byCategory.map((c) => ({ key: String(c.categoryId), cells: [c.name, whole.format(c.items), whole.format(c.fixed)] }))} />}
+      >
+        <ResponsiveContainer width="100%" height={260}>
+          <BarChart data={top} layout="vertical" margin={{ top: 0, right: 12, bottom: 0, left: 0 }} accessibilityLayer={false}>
+            <CartesianGrid horizontal={false} stroke={COLOURS.grid} />
+            <XAxis type="number" allowDecimals={false} tick={{ fontSize: 12 }} />
+            <YAxis type="category" dataKey="name" width={112} tick={{ fontSize: 12, maxLines: 2 }} />
+            <Tooltip cursor={{ fill: 'rgba(35,57,93,0.06)' }} />
+            <Legend wrapperStyle={{ fontSize: 12 }} itemSorter={null} />
+            <Bar isAnimationActive={false} dataKey="items" name="Brought in" fill={COLOURS.advice} radius={[0, 3, 3, 0]} />
+            <Bar isAnimationActive={false} dataKey="fixed" name="Fixed" fill={COLOURS.fixed} radius={[0, 3, 3, 0]} />
+          </BarChart>
+        </ResponsiveContainer>
+      </ChartCard>
+    </div>
+  );
+}
+
+/** The drawing is hidden from screen readers; the sentence and the table carry the same figures. */
+function ChartCard({ title, summary, table, children }: { title: string; summary: string; table: ReactNode; children: ReactNode }) {
+  const headingId = useId();
+  return (
+    <Card className="min-w-0 p-4 sm:p-5">
+      <section aria-labelledby={headingId}>
+        <h2 id={headingId} className="text-lg">{title}</h2>
+        <p className="mb-2 text-sm text-ink-soft">{summary}</p>
+        {children && <div aria-hidden className="h-[260px] w-full min-w-0">{children}</div>}
+        <details className="mt-2 text-sm">
+          <summary className="min-h-11 cursor-pointer py-2 font-bold text-navy">Figures as a table</summary>
+          <div className="overflow-x-auto">{table}</div>
+        </details>
+      </section>
+    </Card>
+  );
+}
+
+function SimpleTable({ head, rows }: { head: string[]; rows: { key: string; cells: string[] }[] }) {
+  return (
+    <table className="w-full text-sm">
+      <thead>
+        <tr className="border-b border-ink/10 text-ink-soft">
+          {head.map((h, i) => <th key={h} scope="col" className={`py-1 pr-3 font-semibold ${i === 0 ? 'text-left' : 'text-right'}`}>{h}</th>)}
+        </tr>
+      </thead>
+      <tbody className="divide-y divide-ink/5">
+        {rows.map((r) => (
+          <tr key={r.key}>
+            {r.cells.map((c, i) => (i === 0 ? <th key={i} scope="row" className="py-1 pr-3 text-left font-semibold">{c}</th> : <td key={i} className="py-1 pr-3 text-right tabular-nums">{c}</td>))}
+          </tr>
+        ))}
+      </tbody>
+    </table>
+  );
+}
+
+function MethodCard({ method }: { method: Method }) {
+  return (
+    <Card className="p-4 sm:p-5">
+      <section aria-labelledby="method-heading" className="space-y-3 text-sm leading-relaxed">
+        <h2 id="method-heading" className="text-lg">How we count</h2>
+        <ul className="list-disc space-y-1 pl-5">
+          {method.text.map((line) => <li key={line}>{line}</li>)}
+        </ul>
+        <p><span className="font-bold">Displacement factor {method.displacement}.</span> {method.displacementNote}</p>
+        <p><span className="font-bold">Emission factors:</span> {method.factorSource}</p>
+        <p className="text-ink-soft">These figures are estimates. They count items, not people: nobody who brought an item is named here.</p>
+        {method.categories.length > 0 && (
+          <details>
+            <summary className="min-h-11 cursor-pointer py-2 font-bold text-navy">Weights and factors, with their sources</summary>
+            <div className="overflow-x-auto">
+              <table className="w-full min-w-[40rem] text-sm">
+                <thead>
+                  <tr className="border-b border-ink/10 text-left text-ink-soft">
+                    <th scope="col" className="py-1 pr-3 font-semibold">Kind of item</th>
+                    <th scope="col" className="py-1 pr-3 text-right font-semibold">Average weight (kg)</th>
+                    <th scope="col" className="py-1 pr-3 font-semibold">Weight source</th>
+                    <th scope="col" className="py-1 pr-3 text-right font-semibold">kg CO2e per kg</th>
+                    <th scope="col" className="py-1 pr-3 font-semibold">Factor source</th>
+                  </tr>
+                </thead>
+                <tbody className="divide-y divide-ink/5 align-top">
+                  {method.categories.map((c) => (
+                    <tr key={c.id}>
+                      <th scope="row" className="py-1 pr-3 text-left font-semibold">{c.name}</th>
+                      <td className="py-1 pr-3 text-right tabular-nums">{oneDp.format(c.avgWeightKg)}</td>
+                      <td className="py-1 pr-3">{c.weightSource}</td>
+                      <td className="py-1 pr-3 text-right tabular-nums">{c.co2ePerKg === null ? '—' : oneDp.format(c.co2ePerKg)}</td>
+                      <td className="py-1 pr-3">{c.co2eSource ?? 'No sourced factor: counted as 0'}</td>
+                    </tr>
+                  ))}
+                </tbody>
+              </table>
+            </div>
+          </details>
+        )}
+      </section>
+    </Card>
+  );
+}

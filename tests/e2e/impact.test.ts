@@ -1,0 +1,76 @@
+import { eq } from 'drizzle-orm';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Browser } from 'playwright-core';
+import { DEMO_PASSWORD } from '../../shared/constants';
+import { events, repairGroups } from '../../server/src/db/schema/index';
+import { launchBrowser, PHONE, shot, screenshotDir } from '../support/browser';
+import { startDemoApp, type DemoApp } from '../support/demo-app';
+import { writeFileSync } from 'node:fs';
+
+let app: DemoApp;
+let browser: Browser;
+let groupId: number;
+
+beforeAll(async () => {
+  app = await startDemoApp();
+  browser = await launchBrowser();
+  const [g] = await app.db.db.select().from(repairGroups).where(eq(repairGroups.slug, 'kestlebridge-menders'));
+  groupId = g.id;
+});
+afterAll(async () => {
+  await browser?.close();
+  await app?.stop();
+});
+
+describe('impact in the browser', () => {
+  it('shows the organiser the dashboard with charts and figures that lead to their records, and prints a session report', { timeout: 90_000 }, async () => {
+    const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+    const page = await context.newPage();
+    await page.goto(`${app.server.url}/sign-in`);
+    await page.getByLabel('E-mail').fill('organiser@example.org');
+    await page.getByLabel('Password').fill(DEMO_PASSWORD);
+    await page.getByRole('button', { name: 'Sign in', exact: true }).click();
+    await page.waitForURL(/\/groups\/\d+\/events$/);
+    await page.goto(`${app.server.url}/groups/${groupId}/impact`);
+    const fixed = page.getByTestId('stat-fixed');
+    await fixed.waitFor();
+    const stats = await (await context.request.get(`${app.server.url}/api/stats?groupId=${groupId}`)).json();
+    expect((await fixed.textContent())!.replace(/\D/g, '')).toBe(String(stats.fixed));
+    await page.locator('.recharts-surface').first().waitFor();
+    expect(await page.locator('.recharts-surface').count()).toBeGreaterThanOrEqual(4);
+    await page.screenshot({ path: shot('impact-dashboard'), fullPage: true });
+    // The figure leads to the records it counts.
+    await page.getByTestId('stat-fixed').click();
+    await page.waitForURL(/\/impact\/records\?/);
+    await page.getByTestId('records-filter').getByText(`${stats.fixed} items`).waitFor();
+    expect(await page.getByTestId('record-row').count()).toBe(Math.min(50, stats.fixed));
+    await page.screenshot({ path: shot('impact-records'), fullPage: true });
+
+    const [past] = await app.db.db.select().from(events).where(eq(events.title, 'Kestlebridge monthly repairs')).orderBy(events.startsAt).limit(1);
+    await page.goto(`${app.server.url}/events/${past.id}/report`);
+    await page.getByTestId('report').waitFor();
+    await page.locator('.recharts-surface').first().waitFor();
+    await page.screenshot({ path: shot('event-report-screen'), fullPage: true });
+    const pdf = await page.pdf({ preferCSSPageSize: true, printBackground: true });
+    writeFileSync(`${screenshotDir}/event-report.pdf`, pdf);
+    expect(pdf.subarray(0, 5).toString()).toBe('%PDF-');
+    await context.close();
+  });
+
+  it('shows anyone the public page and the embeddable widget, with no visitor named', { timeout: 60_000 }, async () => {
+    const page = await browser.newPage({ viewport: PHONE });
+    await page.goto(`${app.server.url}/impact/groups/${groupId}`);
+    await page.getByRole('heading', { name: /Kestlebridge Menders/ }).first().waitFor();
+    await page.locator('.recharts-surface').first().waitFor();
+    expect(await page.content()).not.toMatch(/@example\.org|Orla Whitcombe|Sol Marchetti/);
+    await page.screenshot({ path: shot('impact-public-phone'), fullPage: true });
+    const widget = await browser.newPage({ viewport: { width: 360, height: 260 } });
+    const res = await widget.goto(`${app.server.url}/embed/impact?group=${groupId}`);
+    expect(res!.headers()['x-frame-options']).toBeUndefined();
+    expect(res!.headers()['content-security-policy']).toContain('frame-ancestors *');
+    await widget.getByText(/kg/).first().waitFor();
+    await widget.screenshot({ path: shot('impact-widget') });
+    const normal = await widget.request.get(`${app.server.url}/impact`);
+    expect(normal.headers()['x-frame-options']).toBe('SAMEORIGIN');
+  });
+});
