@@ -73,4 +73,33 @@ describe('impact in the browser', () => {
     const normal = await widget.request.get(`${app.server.url}/impact`);
     expect(normal.headers()['x-frame-options']).toBe('SAMEORIGIN');
   });
+
+  it('lists the items waiting for parts for the organiser, and lets a visitor book a return visit from the link', { timeout: 60_000 }, async () => {
+    const context = await browser.newContext({ viewport: { width: 1024, height: 800 } });
+    const page = await context.newPage();
+    await page.goto(`${app.server.url}/sign-in`);
+    await page.getByLabel('E-mail').fill('organiser@example.org');
+    await page.getByLabel('Password').fill(DEMO_PASSWORD);
+    await page.getByRole('button', { name: 'Sign in', exact: true }).click();
+    await page.waitForURL(/\/groups\/\d+\/events$/);
+    await page.goto(`${app.server.url}/groups/${groupId}/follow-ups`);
+    await page.getByTestId('follow-up').first().waitFor();
+    await page.screenshot({ path: shot('follow-ups'), fullPage: true });
+    const list = await (await context.request.get(`${app.server.url}/api/groups/${groupId}/follow-ups`)).json();
+    const open = list.find((f: { status: string }) => f.status === 'open' || f.status === 'part-ordered');
+    const visitor = await browser.newPage({ viewport: PHONE });
+    await visitor.goto(open.rebookUrl);
+    const time = visitor.getByRole('button', { name: /places? free/ }).first();
+    await time.waitFor();
+    await visitor.screenshot({ path: shot('rebook-phone'), fullPage: true });
+    await time.click();
+    await visitor.getByRole('button', { name: 'Book it' }).click();
+    await visitor.getByTestId('rebook-reference').waitFor();
+    const ref = (await visitor.getByTestId('rebook-reference').textContent())!.trim();
+    expect(ref).toMatch(/^[2-9A-HJ-NP-Z]{3}-[2-9A-HJ-NP-Z]{3}$/);
+    const after = await (await context.request.get(`${app.server.url}/api/groups/${groupId}/follow-ups`)).json();
+    expect(after.find((f: { itemId: number }) => f.itemId === open.itemId).status).toBe('rebooked');
+    await context.close();
+    await visitor.close();
+  });
 });

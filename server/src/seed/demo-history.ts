@@ -89,7 +89,7 @@ export async function seedHistory(tx: Db, now: Date) {
         if (outcome === 'parts-needed') {
           // The last three months' parts are still being followed up; older ones ended one way or the other.
           const recent = m <= 3;
-          await tx.insert(followUps).values({ itemId, groupId: group.id, status: recent ? (rand() < 0.5 ? 'open' : 'part-ordered') : rand() < 0.5 ? 'gave-up' : 'part-ordered', createdAt: end, mailedAt: end, remindedAt: recent && m < 3 ? null : new Date(end.getTime() + 43 * 86400_000) });
+          await tx.insert(followUps).values({ itemId, groupId: group.id, status: recent ? (rand() < 0.5 ? 'open' : 'part-ordered') : 'gave-up', createdAt: end, mailedAt: end, remindedAt: recent && m < 3 ? null : new Date(end.getTime() + 43 * 86400_000) });
         }
       }
       await tx.update(slots).set({ booked: n }).where(eq(slots.id, slotId));

@@ -297,7 +297,7 @@ function Figures({ stats, filter }: { stats: Stats; filter: StatsFilter }) {
               <XAxis dataKey="label" tick={{ fontSize: 12 }} interval="preserveStartEnd" />
               <YAxis allowDecimals={false} tick={{ fontSize: 12 }} width={40} />
               <Tooltip cursor={{ fill: 'rgba(35,57,93,0.06)' }} />
-              <Legend wrapperStyle={{ fontSize: 12 }} itemSorter={null} />
+              <Legend wrapperStyle={{ fontSize: 12 }} itemSorter={null} formatter={(value) => <span className="text-ink">{value}</span>} />
               {SERIES.map((s) => (
                 <Bar isAnimationActive={false} key={s.key} dataKey={s.key} name={s.label} stackId="outcomes" fill={s.colour} cursor="pointer" onClick={(_, i) => go({ month: months[i].month, outcome: s.outcome })} />
               ))}
@@ -354,7 +354,7 @@ function Figures({ stats, filter }: { stats: Stats; filter: StatsFilter }) {
               <XAxis type="number" allowDecimals={false} tick={{ fontSize: 12 }} />
               <YAxis type="category" dataKey="name" width={112} tick={{ fontSize: 12, maxLines: 2 }} />
               <Tooltip cursor={{ fill: 'rgba(35,57,93,0.06)' }} />
-              <Bar isAnimationActive={false} dataKey="items" name="Items" fill={COLOURS.advice} radius={[0, 3, 3, 0]} cursor="pointer" onClick={(_, i) => go({ categoryId: topCategories[i].categoryId })} />
+              <Bar isAnimationActive={false} dataKey="items" name="Items" fill={COLOURS.advice} radius={[0, 3, 3, 0]} maxBarSize={28} cursor="pointer" onClick={(_, i) => go({ categoryId: topCategories[i].categoryId })} />
             </BarChart>
           </ResponsiveContainer>
         </ChartCard>
@@ -388,7 +388,7 @@ function Figures({ stats, filter }: { stats: Stats; filter: StatsFilter }) {
                 <XAxis type="number" domain={[0, 100]} unit="%" tick={{ fontSize: 12 }} />
                 <YAxis type="category" dataKey="name" width={112} tick={{ fontSize: 12, maxLines: 2 }} />
                 <Tooltip cursor={{ fill: 'rgba(35,57,93,0.06)' }} formatter={(v) => [`${v}%`, 'Fix rate']} />
-                <Bar isAnimationActive={false} dataKey="rate" name="Fix rate" fill={COLOURS.fixed} radius={[0, 3, 3, 0]} cursor="pointer" onClick={(_, i) => go({ categoryId: ratedShown[i].categoryId })} />
+                <Bar isAnimationActive={false} dataKey="rate" name="Fix rate" fill={COLOURS.fixed} radius={[0, 3, 3, 0]} maxBarSize={28} cursor="pointer" onClick={(_, i) => go({ categoryId: ratedShown[i].categoryId })} />
               </BarChart>
             </ResponsiveContainer>
           )}
@@ -417,7 +417,7 @@ function Figures({ stats, filter }: { stats: Stats; filter: StatsFilter }) {
                 <XAxis type="number" allowDecimals={false} tick={{ fontSize: 12 }} />
                 <YAxis type="category" dataKey="label" width={124} tick={{ fontSize: 12, maxLines: 2 }} />
                 <Tooltip cursor={{ fill: 'rgba(35,57,93,0.06)' }} />
-                <Bar isAnimationActive={false} dataKey="count" name="Items" fill={COLOURS.endOfLife} radius={[0, 3, 3, 0]} cursor="pointer" onClick={(_, i) => go({ barrier: barriers[i].barrier })} />
+                <Bar isAnimationActive={false} dataKey="count" name="Items" fill={COLOURS.endOfLife} radius={[0, 3, 3, 0]} maxBarSize={28} cursor="pointer" onClick={(_, i) => go({ barrier: barriers[i].barrier })} />
               </BarChart>
             </ResponsiveContainer>
           )}

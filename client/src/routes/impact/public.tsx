@@ -79,7 +79,7 @@ function NotFound() {
 
 function Tile({ testId, value, label }: { testId: string; value: string; label: ReactNode }) {
   return (
-    <li className="rounded-lg border-t-4 border-sage bg-white px-3 py-3 shadow-sm ring-1 ring-ink/5">
+    <li className="rounded-lg border-t-4 border-sage bg-white px-3 py-3 shadow-sm ring-1 ring-ink/5 last:col-span-2 sm:last:col-span-1">
       <p className="text-2xl font-extrabold text-navy tabular-nums sm:text-3xl" data-testid={testId}>{value}</p>
       <p className="text-sm font-semibold text-ink-soft">{label}</p>
     </li>
@@ -129,7 +129,7 @@ function Charts({ d }: { d: PublicImpact }) {
             <PieChart accessibilityLayer={false}>
               <Pie data={outcomes} dataKey="value" nameKey="name" innerRadius="48%" outerRadius="78%" paddingAngle={1} isAnimationActive={false} />
               <Tooltip formatter={(v, name) => [`${whole.format(Number(v))} (${share(Number(v))})`, name]} />
-              <Legend wrapperStyle={{ fontSize: 12 }} itemSorter={null} />
+              <Legend wrapperStyle={{ fontSize: 12 }} itemSorter={null} formatter={(value) => <span className="text-ink">{value}</span>} />
             </PieChart>
           </ResponsiveContainer>
         )}
@@ -146,9 +146,9 @@ function Charts({ d }: { d: PublicImpact }) {
             <XAxis type="number" allowDecimals={false} tick={{ fontSize: 12 }} />
             <YAxis type="category" dataKey="name" width={112} tick={{ fontSize: 12, maxLines: 2 }} />
             <Tooltip cursor={{ fill: 'rgba(35,57,93,0.06)' }} />
-            <Legend wrapperStyle={{ fontSize: 12 }} itemSorter={null} />
-            <Bar isAnimationActive={false} dataKey="items" name="Brought in" fill={COLOURS.advice} radius={[0, 3, 3, 0]} />
-            <Bar isAnimationActive={false} dataKey="fixed" name="Fixed" fill={COLOURS.fixed} radius={[0, 3, 3, 0]} />
+            <Legend wrapperStyle={{ fontSize: 12 }} itemSorter={null} formatter={(value) => <span className="text-ink">{value}</span>} />
+            <Bar isAnimationActive={false} dataKey="items" name="Brought in" fill={COLOURS.advice} radius={[0, 3, 3, 0]} maxBarSize={28} />
+            <Bar isAnimationActive={false} dataKey="fixed" name="Fixed" fill={COLOURS.fixed} radius={[0, 3, 3, 0]} maxBarSize={28} />
           </BarChart>
         </ResponsiveContainer>
       </ChartCard>

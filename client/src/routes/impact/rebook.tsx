@@ -51,7 +51,7 @@ export function RebookPage() {
       <div className="mx-auto max-w-xl space-y-4" data-testid="rebook-done">
         <div className="rounded-xl bg-sage p-5 text-white">
           <p className="text-2xl font-extrabold">You are booked, {v.visitorName}</p>
-          <p className="mt-1">{when}. Bring your {item.toLowerCase()} and the part.</p>
+          <p className="mt-1">{when}. Bring your {v.item.categoryName.toLowerCase()} and the part.</p>
         </div>
         <Card>
           <p className="text-sm text-ink-soft">Your booking reference</p>

@@ -14,7 +14,7 @@ const hoursFormat = new Intl.NumberFormat('en-GB', { maximumFractionDigits: 2 })
 const percent = (rate: number | null) => (rate === null ? '—' : `${Math.round(rate * 100)}%`);
 
 const PRINT_CSS = `@page { size: A4; margin: 14mm }
-@media print { html, body { margin: 0; padding: 0; background: #fff !important; } }`;
+@media print { html, body { margin: 0; padding: 0; background: #fff !important; } tfoot { display: table-row-group; } }`;
 
 /** A4 is 210 mm less two 14 mm margins: about 690 CSS px, so a 640 px chart fits without being scaled. */
 const CHART_WIDTH = 640;
@@ -215,7 +215,7 @@ function CategoryChart({ r }: { r: EventReport }) {
               <CartesianGrid horizontal={false} stroke="#e7e2da" />
               <XAxis type="number" allowDecimals={false} tick={{ fontSize: 12 }} />
               <YAxis type="category" dataKey="name" width={150} tick={{ fontSize: 12, maxLines: 2 }} />
-              <Legend wrapperStyle={{ fontSize: 12 }} itemSorter={null} />
+              <Legend wrapperStyle={{ fontSize: 12 }} itemSorter={null} formatter={(value) => <span className="text-ink">{value}</span>} />
               <Bar dataKey="fixed" name="Fixed" stackId="o" fill="#5d7f6a" isAnimationActive={false} />
               <Bar dataKey="notFixed" name="Not fixed or not recorded" stackId="o" fill="#b8612f" isAnimationActive={false} />
             </BarChart>
