@@ -19,6 +19,7 @@ import { volunteerRoutes } from './features/volunteers/routes';
 import { triageRoutes } from './features/triage/routes';
 import { eventDayPublicRoutes, eventDayRoutes } from './features/event-day/routes';
 import { impactPublicRoutes, impactRoutes } from './features/impact/routes';
+import { toolkitRoutes } from './features/toolkit/routes';
 
 /** Builds the Express app: middleware → routers → 404 → error handler. `listen` is the caller's business. */
 export function createApp(ctx: AppContext) {
@@ -79,6 +80,7 @@ export function createApp(ctx: AppContext) {
   api.use(triageRoutes(ctx));
   api.use(eventDayRoutes(ctx));
   api.use(impactRoutes(ctx));
+  api.use(toolkitRoutes(ctx));
   api.use(apiNotFound);
   app.use('/api', api);
 

@@ -1,4 +1,4 @@
-import { index, mysqlEnum, mysqlTable, text, uniqueIndex, varchar } from 'drizzle-orm/mysql-core';
+import { boolean, index, mysqlEnum, mysqlTable, text, uniqueIndex, varchar } from 'drizzle-orm/mysql-core';
 import { GROUP_ROLES, MEMBERSHIP_STATUSES } from '../../../../shared/constants';
 import { createdAt, id, ref, timestamp3 } from './columns';
 import { users } from './users';
@@ -11,6 +11,8 @@ export const repairGroups = mysqlTable('repair_groups', {
   description: text('description').notNull(),
   houseRules: text('house_rules'),
   timeZone: varchar('time_zone', { length: 64 }).notNull().default('Europe/London'),
+  /** Whether the group's repair notes are searchable by the other groups of the network. */
+  shareKnowledge: boolean('share_knowledge').notNull().default(false),
   createdAt: createdAt(),
 }, (t) => [uniqueIndex('repair_groups_slug_uq').on(t.slug)]);
 

@@ -6,3 +6,4 @@ export * from './events';
 export * from './volunteers';
 export * from './event-day';
 export * from './impact';
+export * from './toolkit';

@@ -10,6 +10,7 @@ import type { DbOrTx, Tx } from '../../db/client';
 import { bookingItems, bookings, categories, eventBenches, events, itemAssignments, itemOutcomes, itemPhotos, itemStatusChanges, repairGroups, safetyChecks, slots, users } from '../../db/schema/index';
 import { hasGroupRole } from '../../auth/guards';
 import { notFound } from '../../http/errors';
+import { partsUsed } from '../toolkit/salvage';
 
 /** One item with its booking, slot, event, group and category. */
 export function itemWithContext(db: DbOrTx) {
@@ -83,6 +84,7 @@ export async function itemView(ctx: AppContext, itemId: number, user: SessionUse
   const checks = await db.select({ c: safetyChecks, byName: users.name }).from(safetyChecks).leftJoin(users, eq(users.id, safetyChecks.checkedBy)).where(eq(safetyChecks.itemId, itemId)).orderBy(desc(safetyChecks.id));
   const history = await db.select({ h: itemStatusChanges, byName: users.name }).from(itemStatusChanges).leftJoin(users, eq(users.id, itemStatusChanges.byUserId)).where(eq(itemStatusChanges.itemId, itemId)).orderBy(asc(itemStatusChanges.id));
   const photos = await db.select({ id: itemPhotos.id, kind: itemPhotos.kind, width: itemPhotos.width, height: itemPhotos.height }).from(itemPhotos).where(eq(itemPhotos.itemId, itemId));
+  const used = await partsUsed(db, itemId);
   const { item, booking, slot, event, group, category } = row;
   const staff = hasGroupRole(user, group.id, ['organiser', 'host']);
   const organiser = hasGroupRole(user, group.id, ['organiser']);
@@ -105,6 +107,8 @@ export async function itemView(ctx: AppContext, itemId: number, user: SessionUse
       : null,
     safetyChecks: checks.map(({ c, byName }) => ({ id: c.id, pass: Boolean(c.pass), failures: c.failures, applianceClass: c.applianceClass, readings: c.readings, instrument: c.instrument, createdAt: c.createdAt, checkedByName: byName })),
     history: history.map(({ h, byName }) => ({ from: h.fromStatus, to: h.toStatus, toLabel: ITEM_STATUS_LABELS[h.toStatus], at: h.createdAt, byName, note: h.note })),
+    partsUsed: used,
+    returnOfItemId: item.returnOfItemId,
     cautions: cautionsFor({ mains, battery: Boolean(item.battery), heating }),
     safetyNote: LOCAL_RULES_PREVAIL,
     safetySource: SAFETY_SOURCE,

@@ -14,6 +14,7 @@ import { eventLayout } from '../triage/benches';
 import { isHeating, loadItem, setStatus, type ItemRow } from './items';
 import { refreshCells } from '../impact/cells';
 import { afterOutcome } from '../impact/follow-ups';
+import { syncKnowledge } from '../toolkit/knowledge';
 
 const forbidden = (message: string) => new HttpError(403, 'forbidden', message);
 
@@ -112,6 +113,7 @@ export async function recordOutcome(ctx: AppContext, itemId: number, input: z.ou
     await setStatus(tx, [{ itemId, from: row.item.status, to: 'done', extra: { doneAt: new Date() } }], user.id, `outcome: ${input.outcome}`);
     await refreshCells(tx, [itemId]);
     await afterOutcome(ctx, tx, row, input.outcome);
+    await syncKnowledge(tx, row, input.outcome, input.notes);
     return { ok: true };
   }));
   ctx.outbox.kick();

@@ -1,0 +1,68 @@
+import type { PartRatings, PartType } from './constants';
+
+/**
+ * Whether a part from the salvage stock can stand in for a needed one (common practice, no published source):
+ * the same kind; the value that sets the circuit's behaviour equal (resistance within its tolerance, capacitance
+ * within ±20 %, a fuse's current, a cut-out's trip temperature, a power supply's output voltage); every rating
+ * that limits stress at least as high; a different package flagged, not refused. Transistors follow the rule in
+ * shared/bench/transistors.
+ */
+export interface Needed {
+  type: PartType;
+  ratings: PartRatings;
+  package?: string;
+  pinout?: string;
+}
+export type Candidate = Needed;
+export interface SubstituteVerdict {
+  verdict: 'accept' | 'accept-with-warnings' | 'refuse';
+  reasons: string[];
+  warnings: string[];
+}
+
+const near = (a: number, b: number, pct: number) => Math.abs(a - b) <= (Math.abs(b) * pct) / 100 + 1e-12;
+
+export function judgeSubstitute(needed: Needed, cand: Candidate, transistor?: (n: Needed, c: Candidate) => SubstituteVerdict): SubstituteVerdict {
+  const reasons: string[] = [];
+  const warnings: string[] = [];
+  const n = needed.ratings;
+  const c = cand.ratings;
+  if (needed.type !== cand.type) return { verdict: 'refuse', reasons: [`It is a ${cand.type.replace('-', ' ')}, not a ${needed.type.replace('-', ' ')}.`], warnings };
+  if ((needed.type === 'bipolar-transistor' || needed.type === 'mosfet') && transistor) return transistor(needed, cand);
+  const atLeast = (key: 'voltageV' | 'currentA' | 'powerW', what: string, unit: string) => {
+    if (n[key] === undefined) return;
+    if (c[key] === undefined) warnings.push(`Its ${what} is not recorded; check it on the part.`);
+    else if (c[key]! < n[key]!) reasons.push(`Its ${what} of ${c[key]} ${unit} is below the ${n[key]} ${unit} needed.`);
+  };
+  switch (needed.type) {
+    case 'resistor': {
+      const tol = n.tolerancePct ?? 5;
+      if (n.resistanceOhm !== undefined && (c.resistanceOhm === undefined || !near(c.resistanceOhm, n.resistanceOhm, tol))) reasons.push(`Its value${c.resistanceOhm !== undefined ? ` of ${c.resistanceOhm} Ω` : ' is unknown and'} is not within ±${tol} % of ${n.resistanceOhm} Ω.`);
+      atLeast('powerW', 'power rating', 'W');
+      break;
+    }
+    case 'capacitor':
+      if (n.capacitanceF !== undefined && (c.capacitanceF === undefined || !near(c.capacitanceF, n.capacitanceF, 20))) reasons.push('Its capacitance is not within ±20 % of the one needed.');
+      atLeast('voltageV', 'voltage rating', 'V');
+      break;
+    case 'fuse':
+      if (n.currentA !== undefined && c.currentA !== n.currentA) reasons.push(c.currentA !== undefined && c.currentA > n.currentA ? `A ${c.currentA} A fuse would not protect what a ${n.currentA} A fuse protects.` : `A fuse of ${c.currentA ?? 'unknown'} A is not the ${n.currentA} A needed.`);
+      atLeast('voltageV', 'voltage rating', 'V');
+      break;
+    case 'thermal-cutout':
+      if (n.temperatureC !== undefined && c.temperatureC !== n.temperatureC) reasons.push(`A cut-out must trip at the same temperature (${n.temperatureC} °C); never fit a different one.`);
+      atLeast('currentA', 'current rating', 'A');
+      atLeast('voltageV', 'voltage rating', 'V');
+      break;
+    case 'power-supply':
+      if (n.voltageV !== undefined && c.voltageV !== n.voltageV) reasons.push(`Its output of ${c.voltageV ?? 'unknown'} V is not the ${n.voltageV} V needed.`);
+      atLeast('currentA', 'current rating', 'A');
+      break;
+    default:
+      atLeast('voltageV', 'voltage rating', 'V');
+      atLeast('currentA', 'current rating', 'A');
+      atLeast('powerW', 'power rating', 'W');
+  }
+  if (needed.package && cand.package && needed.package.toUpperCase() !== cand.package.toUpperCase()) warnings.push(`It comes in ${cand.package}, not ${needed.package}: check that it fits and how it is mounted.`);
+  return { verdict: reasons.length ? 'refuse' : warnings.length ? 'accept-with-warnings' : 'accept', reasons, warnings };
+}
