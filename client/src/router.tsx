@@ -27,6 +27,7 @@ const page = (load: () => Promise<Record<string, React.ComponentType>>, name: st
 
 const organiser = (u: SessionUser) => u.admin || u.roles.some((r) => r.role === 'organiser');
 const admin = (u: SessionUser) => u.admin;
+const volunteer = (u: SessionUser) => u.admin || u.roles.length > 0;
 const staff = (u: SessionUser) => u.admin || hasRole(u, 'host') || hasRole(u, 'organiser');
 
 function StartRedirect() {
@@ -72,6 +73,9 @@ export const router = createBrowserRouter([
       { path: 'groups/:groupId/follow-ups', ...page(() => import('./routes/impact/follow-ups'), 'FollowUpsPage', organiser) },
       { path: 'impact', ...page(() => import('./routes/impact/public'), 'PublicImpactPage') },
       { path: 'impact/groups/:groupId', ...page(() => import('./routes/impact/public'), 'PublicImpactPage') },
+      { path: 'toolkit/knowledge', ...page(() => import('./routes/toolkit/knowledge'), 'KnowledgePage', volunteer) },
+      { path: 'toolkit/calculators', ...page(() => import('./routes/toolkit/calculators'), 'CalculatorsPage') },
+      { path: 'groups/:groupId/salvage', ...page(() => import('./routes/toolkit/salvage'), 'SalvagePage', volunteer) },
       { path: 'rebook/:token', ...page(() => import('./routes/impact/rebook'), 'RebookPage') },
       { path: 'events/:eventId/live', ...page(() => import('./routes/event-day/live'), 'LiveViewPage', organiser) },
       { path: 'events', ...page(() => import('./routes/events/list'), 'EventsPage') },

@@ -1,3 +1,4 @@
+import { checkSubstitution, type TransistorSpec } from '../bench/transistors';
 import type { PartRatings, PartType } from './constants';
 
 /**
@@ -22,13 +23,36 @@ export interface SubstituteVerdict {
 
 const near = (a: number, b: number, pct: number) => Math.abs(a - b) <= (Math.abs(b) * pct) / 100 + 1e-12;
 
-export function judgeSubstitute(needed: Needed, cand: Candidate, transistor?: (n: Needed, c: Candidate) => SubstituteVerdict): SubstituteVerdict {
+/** A stock transistor against a needed one, through the bench calculator's rule when both have their ratings. */
+function transistorVerdict(needed: Needed, cand: Candidate): SubstituteVerdict {
+  const spec = (p: Needed): TransistorSpec | null => {
+    const r = p.ratings;
+    if (!r.polarity || r.voltageV === undefined || r.currentA === undefined) return null;
+    const type = p.type === 'mosfet' ? (r.polarity === 'P' ? 'P-MOSFET' : 'N-MOSFET') : r.polarity === 'PNP' ? 'PNP' : 'NPN';
+    return { type, vMaxV: r.voltageV, iMaxA: r.currentA, ptotW: r.powerW ?? Number.MIN_VALUE, package: p.package || 'unknown', ...(p.pinout ? { pinout: p.pinout } : {}) };
+  };
+  const n = spec(needed);
+  const c = spec(cand);
+  if (!n) return { verdict: 'accept-with-warnings', reasons: [], warnings: ['Give the polarity, voltage and current needed to check a substitute.'] };
+  if (!c) return { verdict: 'accept-with-warnings', reasons: [], warnings: ['This part’s ratings are not all recorded: look up its datasheet before fitting it.'] };
+  // Power unknown on either side is not checked by the rule: say so.
+  const unknownPower = needed.ratings.powerW === undefined || cand.ratings.powerW === undefined;
+  if (unknownPower) { n.ptotW = Number.MIN_VALUE; c.ptotW = Number.MIN_VALUE; }
+  try {
+    const r = checkSubstitution(n, c);
+    return { verdict: r.verdict, reasons: r.refusals, warnings: [...r.warnings, ...(unknownPower ? ['The power rating is not recorded on both: check it on the datasheet.'] : [])] };
+  } catch (e) {
+    return { verdict: 'accept-with-warnings', reasons: [], warnings: [(e as Error).message] };
+  }
+}
+
+export function judgeSubstitute(needed: Needed, cand: Candidate, transistor: (n: Needed, c: Candidate) => SubstituteVerdict = transistorVerdict): SubstituteVerdict {
   const reasons: string[] = [];
   const warnings: string[] = [];
   const n = needed.ratings;
   const c = cand.ratings;
   if (needed.type !== cand.type) return { verdict: 'refuse', reasons: [`It is a ${cand.type.replace('-', ' ')}, not a ${needed.type.replace('-', ' ')}.`], warnings };
-  if ((needed.type === 'bipolar-transistor' || needed.type === 'mosfet') && transistor) return transistor(needed, cand);
+  if (needed.type === 'bipolar-transistor' || needed.type === 'mosfet') return transistor(needed, cand);
   const atLeast = (key: 'voltageV' | 'currentA' | 'powerW', what: string, unit: string) => {
     if (n[key] === undefined) return;
     if (c[key] === undefined) warnings.push(`Its ${what} is not recorded; check it on the part.`);

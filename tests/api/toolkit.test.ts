@@ -128,4 +128,20 @@ describe('the salvage stock', () => {
     expect(bad.status).toBe(400);
     expect(Object.keys(bad.json.error.fields)).toEqual(expect.arrayContaining(['type', 'value', 'quantity', 'box']));
   });
+
+  it('finds a substitute in the stock by the substitution rule: a bigger NPN in TO-220 for a TO-126 one, with a warning (common practice)', async () => {
+    const add = (body: object) => g.third.fixer.post(`/api/groups/${g.third.id}/salvage`, { type: 'bipolar-transistor', quantity: 1, box: 'Semis', ...body });
+    const npn = await add({ value: 'NPN 400 V 4 A', ratings: { polarity: 'NPN', voltageV: 400, currentA: 4, powerW: 75 }, package: 'TO-220', pinout: 'BCE' });
+    const pnp = await add({ value: 'PNP 400 V 4 A', ratings: { polarity: 'PNP', voltageV: 400, currentA: 4, powerW: 75 }, package: 'TO-220', pinout: 'BCE' });
+    const low = await add({ value: 'NPN 300 V 4 A', ratings: { polarity: 'NPN', voltageV: 300, currentA: 4, powerW: 75 }, package: 'TO-220', pinout: 'BCE' });
+    const r = await g.third.fixer.get(`/api/groups/${g.third.id}/salvage/substitutes?type=bipolar-transistor&polarity=NPN&voltageV=400&currentA=1.5&powerW=20&package=TO-126&pinout=BCE`);
+    expect(r.status).toBe(200);
+    const by = (id: number) => r.json.find((x: { part: { id: number } }) => x.part.id === id).verdict;
+    expect(r.json[0].part.id).toBe(npn.json.id);
+    expect(by(npn.json.id).verdict).toBe('accept-with-warnings');
+    expect(by(npn.json.id).warnings.join(' ')).toMatch(/TO-220/);
+    expect(by(pnp.json.id).verdict).toBe('refuse');
+    expect(by(low.json.id).verdict).toBe('refuse');
+    expect(by(low.json.id).reasons.join(' ')).toMatch(/300/);
+  });
 });

@@ -42,4 +42,7 @@ export const paths = {
   publicImpact: (groupId?: number) => (groupId ? `/impact/groups/${groupId}` : '/impact'),
   embed: (groupId?: number) => (groupId ? `/embed/impact?group=${groupId}` : '/embed/impact'),
   rebook: (token: string) => `/rebook/${token}`,
+  knowledge: (q = '') => `/toolkit/knowledge${q}`,
+  salvage: (groupId: number) => `/groups/${groupId}/salvage`,
+  calculators: (open?: string) => (open ? `/toolkit/calculators?open=${open}#${open}` : '/toolkit/calculators'),
 };

@@ -20,6 +20,7 @@ export function AppShell() {
     for (const g of groupsWithRole(user, 'organiser')) links.push({ to: paths.groupEvents(g.groupId), label: `${g.groupName}` });
     if (groupsWithRole(user, 'host').length) links.push({ to: paths.desk(), label: 'Reception desk' });
     if (groupsWithRole(user, 'fixer').length) links.push({ to: paths.bench(), label: 'My bench' }, { to: paths.mySkills(), label: 'My skills' });
+    if (user.roles.length) links.push({ to: paths.knowledge(), label: 'Repair notes' }, { to: paths.calculators(), label: 'Calculators' });
     if (user.admin) links.push({ to: paths.admin(), label: 'Network admin', end: true }, { to: paths.adminCategories(), label: 'Categories' }, { to: paths.adminMailbox(), label: 'Mailbox' });
   }
 

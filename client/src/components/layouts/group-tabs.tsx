@@ -12,6 +12,7 @@ export function GroupTabs({ groupId }: { groupId: number }) {
         { to: paths.skillsMatrix(groupId), label: 'Skills' },
         { to: paths.impact(groupId), label: 'Impact' },
         { to: paths.followUps(groupId), label: 'Parts follow-up' },
+        { to: paths.salvage(groupId), label: 'Salvage stock' },
         { to: paths.groupSettings(groupId), label: 'Rules and venues' },
       ]}
     />

@@ -28,6 +28,8 @@ export interface ItemDetail {
   outcome: null | { outcome: Outcome; outcomeLabel: string; barrier: Barrier | null; barrierLabel: string | null; partDescription: string | null; partLink: string | null; partCost: number | null; minutes: number | null; notes: string | null; recordedAt: string; recordedByName: string | null };
   safetyChecks: SafetyCheck[];
   history: { from: ItemStatus | null; to: ItemStatus; toLabel: string; at: string; byName: string | null; note: string | null }[];
+  partsUsed: { id: number; quantity: number; createdAt: string; type: string; value: string; package: string; box: string; takenBy: string | null }[];
+  returnOfItemId: number | null;
   cautions: Caution[];
   safetyNote: string;
   safetySource: string;

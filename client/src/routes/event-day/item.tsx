@@ -13,6 +13,7 @@ import { OUTCOME_MUTATION_KEY, useItem, useRepairPhotos, useSafetyCheck, useStar
 import { StatusChip } from '../../features/event-day/status-chip';
 import { useUser } from '../../features/auth/api/get-me';
 import { ConfirmDialog } from '../../components/ui/confirm-dialog';
+import { CalculatorLinks, SalvageForItem, SimilarRepairs } from '../../features/toolkit/item-toolkit';
 import { ApiError } from '../../lib/api';
 
 /** The fixer's page for one item, phone first: what is wrong, the cautions, start, safety check, outcome. */
@@ -71,6 +72,8 @@ function ItemView({ item }: { item: ItemDetail }) {
         )}
       </Card>
 
+      <SimilarRepairs item={item} />
+
       {item.can.start && !started && (
         <div className="space-y-2">
           {othersItem && <Alert>The plan gives this item to {item.placement!.fixerName}. Starting it makes it yours.</Alert>}
@@ -100,6 +103,8 @@ function ItemView({ item }: { item: ItemDetail }) {
       )}
 
       {(item.can.record || item.photos.some((p) => p.kind === 'repair')) && <RepairPhotos item={item} />}
+      {(started || item.partsUsed.length > 0) && <SalvageForItem item={item} />}
+      <CalculatorLinks item={item} />
 
       <details className="rounded-xl bg-white p-4 ring-1 ring-ink/5">
         <summary className="cursor-pointer font-bold">History ({item.history.length})</summary>
@@ -331,7 +336,7 @@ function OutcomeForm({ item, latestPass, onCancel }: { item: ItemDetail; latestP
               <TextField label="Supplier link or part number (optional)" value={part.link} onChange={(e) => setPart((p) => ({ ...p, link: e.target.value }))} />
               <TextField label="Estimated cost (optional)" inputMode="decimal" value={part.cost} onChange={(e) => setPart((p) => ({ ...p, cost: e.target.value }))} error={errors['part.cost']} />
             </div>
-            <p className="text-sm text-ink-soft">The visitor orders the part and comes back to a later session.</p>
+            <p className="text-sm text-ink-soft">The visitor orders the part and comes back to a later session. Look in the salvage stock below first: a saved part may do.</p>
           </>
         )}
         <div className="grid gap-3 sm:grid-cols-2">

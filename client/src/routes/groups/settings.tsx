@@ -5,6 +5,8 @@ import { venueSchema } from '../../../../shared/schemas/events';
 import { GroupTabs } from '../../components/layouts/group-tabs';
 import { Button } from '../../components/ui/button';
 import { Alert, Card, Spinner } from '../../components/ui/feedback';
+import { CheckField } from '../../components/ui/field';
+import { useSetSharing, useSharing } from '../../features/toolkit/api';
 import { TextField } from '../../components/ui/field';
 import { useCategories } from '../../features/events/api/events';
 import { useCreateVenue, useGroupSettings, useSaveGroupSettings, useVenues } from '../../features/events/api/organiser';
@@ -101,7 +103,24 @@ export function GroupSettingsPage() {
             <Button type="submit" variant="secondary" busy={venueForm.formState.isSubmitting}>Add venue</Button>
           </form>
         </Card>
+        <SharingCard groupId={groupId} />
       </div>
     </div>
+  );
+}
+
+/** Whether other groups may search this group's repair notes (its own fixers always can). */
+function SharingCard({ groupId }: { groupId: number }) {
+  const sharing = useSharing(groupId);
+  const set = useSetSharing(groupId);
+  return (
+    <Card className="space-y-3">
+      <h2 className="text-lg">Repair notes</h2>
+      <p className="text-sm text-ink-soft">Your fixers’ notes and write-ups are always searchable by your own volunteers. Sharing lets the other groups on Mendery search them too; no visitor’s name is ever in them.</p>
+      {sharing.isPending ? <Spinner /> : sharing.error ? <Alert tone="error">{sharing.error.message}</Alert> : (
+        <CheckField label="Share our repair notes with the other groups" checked={sharing.data.share} disabled={set.isPending} onChange={(e) => set.mutate(e.target.checked)} />
+      )}
+      {set.error && <Alert tone="error">{set.error.message}</Alert>}
+    </Card>
   );
 }

@@ -18,6 +18,13 @@ export function BenchPage() {
   return (
     <div className="mx-auto max-w-3xl space-y-6">
       <PageTitle title="My bench" lead={`Hello ${user.name.split(' ')[0]}.`} />
+      <nav aria-label="Toolkit" className="flex flex-wrap gap-2 text-sm">
+        <Link to={paths.knowledge()} className="rounded-lg bg-white px-3 py-2 font-semibold text-navy ring-1 ring-navy/20">Repair notes</Link>
+        <Link to={paths.calculators()} className="rounded-lg bg-white px-3 py-2 font-semibold text-navy ring-1 ring-navy/20">Calculators</Link>
+        {[...new Map(user.roles.filter((r) => r.role === 'fixer').map((r) => [r.groupId, r.groupName])).entries()].map(([id, name]) => (
+          <Link key={id} to={paths.salvage(id)} className="rounded-lg bg-white px-3 py-2 font-semibold text-navy ring-1 ring-navy/20">Salvage stock · {name}</Link>
+        ))}
+      </nav>
       <section aria-labelledby="queue" className="space-y-3">
         <h2 id="queue" className="text-xl">My queue</h2>
         {queue.isPending && <Spinner />}

@@ -1,0 +1,81 @@
+/**
+ * Judging a resistance reading (common practice, no published source): short the meter leads and subtract what
+ * they read; an open resistor reads as overload ("OL"). Invalid input throws a RangeError.
+ *
+ * A handheld meter's last digit is not exact, and subtracting the leads adds a second reading's error. So besides
+ * "within" and "outside" tolerance, the judgement has "within-uncertainty": outside the part's own tolerance,
+ * but closer than the meter can tell apart — the reading is in the right range, it does not prove the tolerance.
+ */
+export const MEASURE_SOURCE = 'Common practice, no published source: subtract the shorted-lead reading; OL means open';
+
+export type ResistanceReading = number | 'OL';
+export type MeasureVerdict = 'within' | 'within-uncertainty' | 'outside' | 'open';
+
+/** "OL", "O.L", "open", "∞" or a number (a comma decimal is accepted); null when it is neither. */
+export function parseReading(text: string): ResistanceReading | null {
+  const t = text.trim().replace(/\s+/g, '').toUpperCase();
+  if (t === '') return null;
+  if (['OL', 'O.L', 'O.L.', '-OL', 'OPEN', '∞', 'INF'].includes(t)) return 'OL';
+  const n = Number(t.replace(',', '.'));
+  return Number.isFinite(n) ? n : null;
+}
+
+export interface MeasureInput {
+  reading: ResistanceReading;
+  /** What the shorted leads read; 0 when not measured. */
+  leadsOhm?: number;
+  nominalOhm: number;
+  tolerancePct: number;
+  /** How far the reading can be off, in ohms: at least the meter's last digit, twice that when the leads were subtracted. */
+  uncertaintyOhm?: number;
+}
+
+export interface MeasureResult {
+  verdict: MeasureVerdict;
+  /** The reading less the leads; null when open. */
+  netOhm: number | null;
+  /** (net − nominal) ÷ nominal, in percent to 0.01; null when open. */
+  deviationPct: number | null;
+  minOhm: number;
+  maxOhm: number;
+  /** True for 'within' and 'within-uncertainty'. */
+  inRightRange: boolean;
+  message: string;
+}
+
+const clean = (x: number) => Number(x.toPrecision(12));
+const round = (x: number, dp: number) => Math.round(x * 10 ** dp) / 10 ** dp;
+
+/** The reading less the shorted-lead reading, never below 0 (a reading at or under the leads is a short). */
+export function netResistance(reading: ResistanceReading, leadsOhm = 0): number | 'open' {
+  if (!(Number.isFinite(leadsOhm) && leadsOhm >= 0)) throw new RangeError('The leads reading must be zero or more ohms.');
+  if (reading === 'OL') return 'open';
+  if (!Number.isFinite(reading) || reading < 0) throw new RangeError('A resistance reading is zero or more ohms, or OL.');
+  return Math.max(0, clean(reading - leadsOhm));
+}
+
+export function judgeResistance({ reading, leadsOhm = 0, nominalOhm, tolerancePct, uncertaintyOhm = 0 }: MeasureInput): MeasureResult {
+  if (!Number.isFinite(nominalOhm) || nominalOhm <= 0) throw new RangeError('The nominal value must be above 0 Ω. For a 0 Ω link, check that it reads the same as the shorted leads.');
+  if (!Number.isFinite(tolerancePct) || tolerancePct <= 0 || tolerancePct >= 100) throw new RangeError('The tolerance is a percentage above 0 and below 100.');
+  if (!Number.isFinite(uncertaintyOhm) || uncertaintyOhm < 0) throw new RangeError('The meter uncertainty must be zero or more ohms.');
+  const band = (nominalOhm * tolerancePct) / 100;
+  const minOhm = clean(nominalOhm - band);
+  const maxOhm = clean(nominalOhm + band);
+  const net = netResistance(reading, leadsOhm);
+  if (net === 'open') {
+    return { verdict: 'open', netOhm: null, deviationPct: null, minOhm, maxOhm, inRightRange: false, message: 'The meter reads OL: the resistor is open circuit (or the leads are not touching it).' };
+  }
+  const deviationPct = round(((net - nominalOhm) / nominalOhm) * 100, 2);
+  // Compared in rounded percent so a reading exactly at the edge (1.1 Ω for 1 Ω ±10 %) counts as within.
+  const slackPct = round((uncertaintyOhm / nominalOhm) * 100, 6);
+  const off = Math.abs(round(((net - nominalOhm) / nominalOhm) * 100, 6));
+  const signed = `${deviationPct > 0 ? '+' : ''}${deviationPct} %`;
+  if (off <= tolerancePct) {
+    return { verdict: 'within', netOhm: net, deviationPct, minOhm, maxOhm, inRightRange: true, message: `${net} Ω is ${signed} from ${nominalOhm} Ω: within ±${tolerancePct} %${off === tolerancePct ? ', at the edge' : ''}.` };
+  }
+  if (off <= tolerancePct + slackPct) {
+    return { verdict: 'within-uncertainty', netOhm: net, deviationPct, minOhm, maxOhm, inRightRange: true, message: `${net} Ω is ${signed} from ${nominalOhm} Ω: outside ±${tolerancePct} %, but within the meter's ±${uncertaintyOhm} Ω — in the right range; this meter cannot prove the tolerance.` };
+  }
+  const hint = net === 0 ? ' It reads no more than the shorted leads: a short.' : '';
+  return { verdict: 'outside', netOhm: net, deviationPct, minOhm, maxOhm, inRightRange: false, message: `${net} Ω is ${signed} from ${nominalOhm} Ω: outside ±${tolerancePct} %.${hint} Measure it out of circuit before replacing it: parts in parallel read low.` };
+}
