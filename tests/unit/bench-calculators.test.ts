@@ -1,6 +1,5 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import * as bench from '../../shared/bench/index';
 import { decodeBands, decodePrintedCode, formatOhms, toleranceFromLetter, TOLERANCE_BY_COLOUR, TOLERANCE_BY_LETTER, DIGIT_COLOURS, type BandColour } from '../../shared/bench/resistors';
 import { decade, E12, E24, E6, E_SERIES, isStandard, nearestStandard, type ESeriesName } from '../../shared/bench/e-series';
 import { rectifiedPeak } from '../../shared/bench/mains';
@@ -400,8 +399,4 @@ describe('protective conductor limit from cord length, through shared/safety/lim
     [20, 0.5],
     [65, 1.0],
   ])('%s m of cord → %s Ω', (m, ohm) => expect(protectiveConductorLimitOhm(m)).toBe(ohm));
-
-  it('is the same function the bench re-exports, not a copy', () => {
-    expect(bench.protectiveConductorLimitOhm).toBe(protectiveConductorLimitOhm);
-  });
 });

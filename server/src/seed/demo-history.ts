@@ -3,7 +3,7 @@ import { eq } from 'drizzle-orm';
 import { formatReference } from '../../../shared/booking/reference';
 import { BARRIERS, type Outcome } from '../../../shared/event-day/constants';
 import type { Db } from '../db/client';
-import { bookingItems, bookings, categories, events, followUps, itemOutcomes, repairGroups, shifts, slots, users, venues } from '../db/schema/index';
+import { bookingItems, bookings, categories, events, followUps, itemOutcomes, knowledgeEntries, repairGroups, salvageParts, shifts, slots, users, venues } from '../db/schema/index';
 import { refreshEventCells } from '../features/impact/cells';
 
 /**
@@ -23,21 +23,21 @@ function prng(seed: number) {
 
 const FIRST = ['Ana', 'Bram', 'Cleo', 'Dara', 'Elio', 'Fern', 'Gus', 'Hana', 'Ivo', 'Jun', 'Kit', 'Lena', 'Milo', 'Nell', 'Otto', 'Pia', 'Quin', 'Rhea', 'Sami', 'Tove'];
 const LAST = ['Ashdown', 'Brackley', 'Corran', 'Dunmere', 'Elsworth', 'Farrow', 'Gillan', 'Hatherly', 'Inchley', 'Jessop', 'Kettering', 'Lowther', 'Marlow', 'Nettleby'];
-const ITEMS: { slug: string; fault: string; brand?: string; part: string }[] = [
-  { slug: 'kettle', fault: 'Does not switch off by itself.', brand: 'Brewmaster', part: 'Steam switch for a 1.7 l kettle' },
-  { slug: 'toaster', fault: 'One slot stays cold.', part: 'Heating element, 2-slice' },
-  { slug: 'lamp', fault: 'Flickers when moved.', part: 'E27 lampholder with cord grip' },
-  { slug: 'vacuum-cleaner', fault: 'Loses suction after a minute.', brand: 'Tempest', part: 'Motor filter and belt' },
-  { slug: 'laptop', fault: 'Will not charge.', brand: 'Nimbus', part: 'DC jack with cable' },
-  { slug: 'phone', fault: 'Screen cracked, touch works.', part: 'Replacement screen assembly' },
-  { slug: 'radio-hifi', fault: 'Hums on every station.', brand: 'Harrowgate', part: 'Smoothing capacitor 2200 µF 25 V' },
-  { slug: 'clothing', fault: 'Zip has come apart.', part: 'Open-ended zip, 60 cm' },
-  { slug: 'clothing', fault: 'Hole in the elbow.', part: 'Wool patch' },
-  { slug: 'bicycle', fault: 'Gears slip.', part: 'Rear gear cable and outer' },
-  { slug: 'hair-dryer', fault: 'Cuts out after a few seconds.', part: 'Thermal cut-out, same rating' },
-  { slug: 'electric-toy', fault: 'Stopped moving.', part: 'Small DC motor' },
-  { slug: 'power-tool', fault: 'Sparks and stops.', part: 'Carbon brushes' },
-  { slug: 'television', fault: 'No picture, sound works.', part: 'LED backlight strips' },
+const ITEMS: { slug: string; fault: string; brand?: string; part: string; note: string }[] = [
+  { slug: 'kettle', fault: 'Does not switch off by itself.', brand: 'Brewmaster', part: 'Steam switch for a 1.7 l kettle', note: 'Bimetal steam switch stuck; cleaned the lever and re-seated the disc. Check the steam tube is clear.' },
+  { slug: 'toaster', fault: 'One slot stays cold.', part: 'Heating element, 2-slice', note: 'Element open circuit on one side (no continuity across its tabs).' },
+  { slug: 'lamp', fault: 'Flickers when moved.', part: 'E27 lampholder with cord grip', note: 'Loose neutral in the lampholder; cord grip missing so the cord pulled on the terminals.' },
+  { slug: 'vacuum-cleaner', fault: 'Loses suction after a minute.', brand: 'Tempest', part: 'Motor filter and belt', note: 'Filter clogged solid and belt slipping on the brush roll.' },
+  { slug: 'laptop', fault: 'Will not charge.', brand: 'Nimbus', part: 'DC jack with cable', note: "Jack's centre pin loose on the board; cracked solder joints." },
+  { slug: 'phone', fault: 'Screen cracked, touch works.', part: 'Replacement screen assembly', note: 'Digitiser fine; glass only. Heat the edges before lifting.' },
+  { slug: 'radio-hifi', fault: 'Hums on every station.', brand: 'Harrowgate', part: 'Smoothing capacitor 2200 µF 25 V', note: 'Reservoir capacitor bulging, ESR high; hum at 100 Hz.' },
+  { slug: 'clothing', fault: 'Zip has come apart.', part: 'Open-ended zip, 60 cm', note: 'Slider worn; teeth fine. A new slider would do if the stop is intact.' },
+  { slug: 'clothing', fault: 'Hole in the elbow.', part: 'Wool patch', note: 'Darned the elbow with matching wool.' },
+  { slug: 'bicycle', fault: 'Gears slip.', part: 'Rear gear cable and outer', note: 'Cable frayed at the shifter; indexing was fine once replaced.' },
+  { slug: 'hair-dryer', fault: 'Cuts out after a few seconds.', part: 'Thermal cut-out, same rating', note: 'Thermal cut-out open; motor and element fine. Fit the same temperature rating only.' },
+  { slug: 'electric-toy', fault: 'Stopped moving.', part: 'Small DC motor', note: 'Motor brushes worn; motor draws no current.' },
+  { slug: 'power-tool', fault: 'Sparks and stops.', part: 'Carbon brushes', note: 'Brushes down to 3 mm; commutator clean.' },
+  { slug: 'television', fault: 'No picture, sound works.', part: 'LED backlight strips', note: 'Two LEDs in strip 3 open; the strip reads no forward voltage.' },
 ];
 
 function pickOutcome(r: number): Outcome | null {
@@ -83,8 +83,10 @@ export async function seedHistory(tx: Db, now: Date) {
           await tx.insert(itemOutcomes).values({
             itemId, outcome, barrier: outcome === 'end-of-life' ? BARRIERS[Math.floor(rand() * BARRIERS.length)] : null,
             partDescription: outcome === 'parts-needed' ? spec.part : null, partCostCents: outcome === 'parts-needed' ? 300 + Math.floor(rand() * 3000) : null,
-            minutes: 10 + Math.floor(rand() * 50), recordedBy: who(p.team[0]), recordedAt: end,
+            minutes: 10 + Math.floor(rand() * 50), notes: rand() < 0.6 ? spec.note : null, recordedBy: who(p.team[0]), recordedAt: end,
           });
+          const [o] = await tx.select().from(itemOutcomes).where(eq(itemOutcomes.itemId, itemId));
+          if (o.notes) await tx.insert(knowledgeEntries).values({ itemId, groupId: group.id, categoryId: cat.id, brand: spec.brand ?? '', model: '', outcome, symptom: spec.fault, notes: o.notes, measured: '', faultyPart: outcome === 'fixed' || outcome === 'parts-needed' ? spec.part : '', fix: '', eventDate: start });
         }
         if (outcome === 'parts-needed') {
           // The last three months' parts are still being followed up; older ones ended one way or the other.
@@ -96,4 +98,16 @@ export async function seedHistory(tx: Db, now: Date) {
     }
   }
   await refreshEventCells(tx, eventIds);
+  // Kestlebridge shares its notes; its boxes hold a few saved parts.
+  const [k] = await tx.select().from(repairGroups).where(eq(repairGroups.slug, 'kestlebridge-menders'));
+  await tx.update(repairGroups).set({ shareKnowledge: true }).where(eq(repairGroups.id, k.id));
+  await tx.insert(salvageParts).values([
+    { groupId: k.id, type: 'bipolar-transistor', value: 'NPN switching transistor 400 V 4 A', ratings: { polarity: 'NPN', voltageV: 400, currentA: 4, powerW: 75 }, package: 'TO-220', pinout: 'BCE', quantity: 2, box: 'Box 2 · semiconductors', notes: 'From a dead desk lamp power supply.' },
+    { groupId: k.id, type: 'capacitor', value: '2200 µF 25 V electrolytic, 105 °C', ratings: { capacitanceF: 0.0022, voltageV: 25 }, package: 'radial', quantity: 3, box: 'Box 1 · capacitors' },
+    { groupId: k.id, type: 'fuse', value: '13 A ceramic plug fuse', ratings: { currentA: 13, voltageV: 240 }, quantity: 6, box: 'Fuse tin' },
+    { groupId: k.id, type: 'fuse', value: '3 A ceramic plug fuse', ratings: { currentA: 3, voltageV: 240 }, quantity: 4, box: 'Fuse tin' },
+    { groupId: k.id, type: 'thermal-cutout', value: 'Thermal cut-out 240 °C 10 A', ratings: { temperatureC: 240, currentA: 10, voltageV: 250 }, package: 'axial', quantity: 1, box: 'Box 4 · heating parts' },
+    { groupId: k.id, type: 'resistor', value: '1 Ω 5 W wirewound', ratings: { resistanceOhm: 1, powerW: 5, tolerancePct: 5 }, package: 'axial', quantity: 2, box: 'Box 3 · resistors' },
+    { groupId: k.id, type: 'motor', value: 'Small DC motor 3 V', ratings: { voltageV: 3 }, quantity: 2, box: 'Box 5 · motors' },
+  ]);
 }
