@@ -1,4 +1,5 @@
 import { eq } from 'drizzle-orm';
+import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { salvageParts, salvageTakes, shifts, venueBenches } from '../../server/src/db/schema/index';
 import type { RunningServer } from '../../server/src/server';
@@ -94,6 +95,23 @@ describe('the repair knowledge base', () => {
     expect(w.status).toBe(200);
     expect(w.json).toMatchObject({ writtenUp: true, faultyPart: 'Steam switch bimetal disc' });
     expect((await g.third.fixer.send('PUT', `/api/knowledge/${ids.exact}/writeup`, { symptom: 'x y z', fix: 'a b c' })).status).toBe(403);
+  });
+
+  it('shows a shared record’s bench photos to other groups’ fixers, and a quiet group’s to no one outside it', async () => {
+    const upload = async (agent: Agent, itemId: number) => {
+      const form = new FormData();
+      form.append('photos', new Blob([new Uint8Array(await sharp({ create: { width: 64, height: 48, channels: 3, background: '#b8612f' } }).jpeg().toBuffer())], { type: 'image/jpeg' }), 'bench.jpg');
+      const res = await fetch(`${server.url}/api/items/${itemId}/photos`, { method: 'POST', body: form, headers: { cookie: agent.cookieHeader(), 'x-csrf-token': agent.csrf ?? (await agent.token()) } });
+      expect(res.status).toBe(201);
+      return ((await res.json()) as { id: number }[])[0].id;
+    };
+    const shared = await upload(g.share.organiser, ids.exact);
+    const quiet = await upload(g.quiet.organiser, ids.quiet);
+    const found = (await g.third.fixer.get(`/api/knowledge?categoryId=${kettle}&brand=Brewmaster&model=BK-20`)).json;
+    expect(found[0].photoIds).toEqual([shared]);
+    expect((await g.third.fixer.get(`/api/photos/${shared}`)).status).toBe(200);
+    expect((await g.third.fixer.get(`/api/photos/${quiet}`)).status).toBe(404);
+    expect((await new Agent(server.url).get(`/api/photos/${shared}`)).status).toBe(404);
   });
 });
 

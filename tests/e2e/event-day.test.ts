@@ -113,7 +113,7 @@ describe('event day in the browser', () => {
     // 0.5 MΩ is below the 1.0 MΩ minimum for Class I: the check fails and "fixed" is refused.
     await passIfSafe(bench.page, '0.5');
     await bench.page.getByTestId('latest-check').getByText(/Failed at/).waitFor();
-    await bench.page.getByText('Fixed', { exact: true }).click();
+    await bench.page.getByRole('radiogroup', { name: 'Outcome' }).getByText('Fixed', { exact: true }).click();
     expect(await bench.page.getByRole('button', { name: 'Save outcome' }).isDisabled()).toBe(true);
     await bench.page.screenshot({ path: shot('item-failed-check-phone'), fullPage: true });
     await passIfSafe(bench.page, '25');
@@ -154,7 +154,7 @@ describe('event day in the browser', () => {
     await page.getByRole('heading', { name: 'Record the outcome' }).waitFor();
 
     await context.setOffline(true);
-    await page.getByText('Needs a part', { exact: true }).click();
+    await page.getByRole('radiogroup', { name: 'Outcome' }).getByText('Needs a part', { exact: true }).click();
     await page.getByLabel('Which part').fill('Smoothing capacitor 2200 µF 25 V, 105 °C');
     await page.getByLabel('Estimated cost (optional)').fill('1.80');
     await page.getByRole('button', { name: 'Save outcome' }).click();

@@ -7,7 +7,7 @@ import { api } from '../../lib/api';
 import { qs } from '../impact/api';
 import { eventDayKeys } from '../event-day/api';
 
-export interface KnowledgeEntry { itemId: number; groupName: string; categoryId: number; categoryName: string; brand: string; model: string; outcome: Outcome; outcomeLabel: string; symptom: string; notes: string; measured: string; faultyPart: string; fix: string; writtenUp: boolean; eventDate: string; score: number }
+export interface KnowledgeEntry { itemId: number; groupName: string; categoryId: number; categoryName: string; brand: string; model: string; outcome: Outcome; outcomeLabel: string; symptom: string; notes: string; measured: string; faultyPart: string; fix: string; writtenUp: boolean; eventDate: string; score: number; photoIds: number[] }
 export interface KnowledgeQuery { q?: string; categoryId?: number; brand?: string; model?: string; scope?: 'mine' | 'network' }
 export interface SalvagePart { id: number; groupId: number; type: PartType; typeLabel: string; value: string; ratings: PartRatings; package: string; pinout: string; quantity: number; box: string; sourceItemId: number | null; notes: string; createdAt: string }
 export interface Substitute { part: SalvagePart; verdict: SubstituteVerdict }

@@ -22,6 +22,7 @@ export function KnowledgeCard({ entry: e, when, canWrite = true }: { entry: Know
         {e.fix && <><dt className="font-bold text-ink-soft">Fix</dt><dd>{e.fix}</dd></>}
         {e.notes && <><dt className="font-bold text-ink-soft">Notes</dt><dd className="whitespace-pre-line">{e.notes}</dd></>}
       </dl>
+      {e.photoIds.length > 0 && <div className="mt-2 flex flex-wrap gap-2">{e.photoIds.map((id) => <a key={id} href={`/api/photos/${id}`} target="_blank" rel="noreferrer"><img src={`/api/photos/${id}`} alt={`Bench photo of the ${e.categoryName.toLowerCase()}`} className="size-20 rounded-lg object-cover" loading="lazy" /></a>)}</div>}
       {canWrite && !writing && <Button variant="quiet" className="mt-1" onClick={() => setWriting(true)}>{e.writtenUp ? 'Edit the write-up' : 'Write it up'}</Button>}
       {writing && <WriteUpForm entry={e} onDone={() => setWriting(false)} />}
     </article>

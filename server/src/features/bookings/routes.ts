@@ -5,7 +5,7 @@ import { normaliseReference } from '../../../../shared/booking/reference';
 import { createBookingSchema, moveBookingSchema, waitlistSchema } from '../../../../shared/schemas/bookings';
 import type { AppContext } from '../../context';
 import { hasGroupRole, requireGroupRole } from '../../auth/guards';
-import { bookingItems, bookings, events, itemPhotos } from '../../db/schema/index';
+import { bookingItems, bookings, events, itemPhotos, repairGroups } from '../../db/schema/index';
 import { HttpError, notFound } from '../../http/errors';
 import { body, params } from '../../http/validate';
 import { eventGroupId } from '../events/service';
@@ -75,15 +75,18 @@ export function bookingRoutes(ctx: AppContext) {
   r.get('/photos/:id', async (req, res) => {
     const { id } = params(req, z.object({ id: z.coerce.number().int().positive() }));
     const [p] = await db
-      .select({ key: itemPhotos.storageKey, type: itemPhotos.contentType, reference: bookings.reference, groupId: events.groupId })
+      .select({ key: itemPhotos.storageKey, type: itemPhotos.contentType, kind: itemPhotos.kind, reference: bookings.reference, groupId: events.groupId, shares: repairGroups.shareKnowledge })
       .from(itemPhotos)
       .innerJoin(bookingItems, eq(bookingItems.id, itemPhotos.itemId))
       .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
       .innerJoin(events, eq(events.id, bookings.eventId))
+      .innerJoin(repairGroups, eq(repairGroups.id, events.groupId))
       .where(eq(itemPhotos.id, id));
     if (!p) throw notFound('That photo');
     const token = tokenQuery.parse(req.query).token;
-    if (!hasGroupRole(req.user, p.groupId, ['organiser', 'host', 'fixer'])) await booking.bookingByToken(ctx, p.reference, token);
+    // A bench photo of a group that shares its repair notes may be seen by any group's volunteers.
+    const sharedBenchPhoto = p.kind === 'repair' && Boolean(p.shares) && Boolean(req.user && (req.user.admin || req.user.roles.length));
+    if (!sharedBenchPhoto && !hasGroupRole(req.user, p.groupId, ['organiser', 'host', 'fixer'])) await booking.bookingByToken(ctx, p.reference, token);
     const data = await ctx.storage.get(p.key);
     if (!data) throw notFound('That photo');
     res.setHeader('Cache-Control', 'private, max-age=3600');

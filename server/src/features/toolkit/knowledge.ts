@@ -6,7 +6,7 @@ import type { knowledgeQuery, writeupSchema } from '../../../../shared/schemas/t
 import type { SessionUser } from '../../../../shared/schemas/auth';
 import type { AppContext } from '../../context';
 import type { DbOrTx, Tx } from '../../db/client';
-import { categories, knowledgeEntries, repairGroups } from '../../db/schema/index';
+import { categories, itemPhotos, knowledgeEntries, repairGroups } from '../../db/schema/index';
 import { hasGroupRole } from '../../auth/guards';
 import { HttpError, notFound } from '../../http/errors';
 import type { ItemRow } from '../event-day/items';
@@ -68,7 +68,7 @@ export async function searchKnowledge(ctx: AppContext, user: SessionUser, q: z.o
   if (q.categoryId) wanted.push(eq(knowledgeEntries.categoryId, q.categoryId));
   if (wanted.length) parts.push(or(...wanted));
   const rows = await select(db, score).where(and(...parts)).orderBy(desc(sql`score`), desc(knowledgeEntries.writtenUp), desc(knowledgeEntries.eventDate)).limit(30);
-  return rows.map(dto);
+  return withPhotos(db, rows.map(dto));
 }
 
 /** Similar past repairs for an item: same kind first, then the same brand and model, then the fault's words. */
@@ -83,7 +83,14 @@ export async function similarRepairs(ctx: AppContext, itemId: number, user: Sess
     .where(and(visible(user), sql`${knowledgeEntries.itemId} <> ${itemId}`, or(eq(knowledgeEntries.categoryId, row.item.categoryId), sql`${match(fault)} > 0`)))
     .orderBy(desc(sql`score`), desc(knowledgeEntries.eventDate))
     .limit(5);
-  return rows.map(dto);
+  return withPhotos(ctx.database.db, rows.map(dto));
+}
+
+/** The fixer's photos from the bench go with the record (the visitor's own photos stay with the booking). */
+async function withPhotos<T extends { itemId: number }>(db: DbOrTx, entries: T[]) {
+  if (!entries.length) return entries.map((e) => ({ ...e, photoIds: [] as number[] }));
+  const photos = await db.select({ id: itemPhotos.id, itemId: itemPhotos.itemId }).from(itemPhotos).where(and(inArray(itemPhotos.itemId, entries.map((e) => e.itemId)), eq(itemPhotos.kind, 'repair')));
+  return entries.map((e) => ({ ...e, photoIds: photos.filter((p) => p.itemId === e.itemId).map((p) => p.id) }));
 }
 
 /** A fixer's short write-up of a repair: symptom, what was measured, the faulty part, the fix. */
@@ -94,7 +101,7 @@ export async function writeUp(ctx: AppContext, itemId: number, w: z.output<typeo
   if (!hasGroupRole(user, e.groupId, ['fixer', 'organiser'])) throw new HttpError(403, 'forbidden', 'Only the group’s fixers and organisers write up its repairs.');
   await db.update(knowledgeEntries).set({ ...w, writtenUp: true, authorId: user.id, updatedAt: new Date() }).where(eq(knowledgeEntries.itemId, itemId));
   const [row] = await select(db, sql<number>`0`).where(eq(knowledgeEntries.itemId, itemId));
-  return dto(row);
+  return (await withPhotos(db, [dto(row)]))[0];
 }
 
 export async function setSharing(ctx: AppContext, groupId: number, share: boolean) {
