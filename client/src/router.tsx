@@ -40,6 +40,7 @@ export const router = createBrowserRouter([
   // Pages for a TV and for the printer: no header, no menu.
   { path: 'events/:eventId/hall', errorElement: <RouteError />, hydrateFallbackElement: <Spinner />, ...page(() => import('./routes/event-day/hall-display'), 'HallDisplayPage') },
   { path: 'events/:eventId/report', errorElement: <RouteError />, hydrateFallbackElement: <Spinner />, ...page(() => import('./routes/impact/report'), 'EventReportPage', organiser) },
+  { path: 'groups/:groupId/report', errorElement: <RouteError />, hydrateFallbackElement: <Spinner />, ...page(() => import('./routes/impact/report'), 'GroupReportPage', organiser) },
   { path: 'embed/impact', errorElement: <RouteError />, hydrateFallbackElement: <Spinner />, ...page(() => import('./routes/impact/embed'), 'ImpactWidgetPage') },
   { path: 'events/:eventId/tags', errorElement: <RouteError />, hydrateFallbackElement: <Spinner />, ...page(() => import('./routes/event-day/tags'), 'TagSheetPage', (u) => staff(u)) },
   {

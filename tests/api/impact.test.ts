@@ -95,6 +95,22 @@ describe('statistics', () => {
   });
 });
 
+describe('the report for a period', () => {
+  it('adds up the sessions between two dates with the volunteers’ hours, matching the statistics', async () => {
+    const from = new Date(Date.now() - 200 * 86400_000).toISOString().slice(0, 10);
+    const to = new Date(Date.now() - 20 * 86400_000).toISOString().slice(0, 10);
+    const r = await as.organiser.get(`/api/groups/${groupId}/report?from=${from}&to=${to}`);
+    expect(r.status).toBe(200);
+    const s = (await as.organiser.get(`/api/stats?groupId=${groupId}&from=${from}&to=${to}`)).json;
+    expect(r.json.stats).toMatchObject({ items: s.items, fixed: s.fixed, kgDiverted: s.kgDiverted });
+    const [{ n }] = (await db.db.execute(sql`SELECT COUNT(*) AS n FROM events WHERE group_id = ${groupId} AND status IN ('published','closed') AND starts_at <= NOW(3) AND DATE(starts_at) BETWEEN ${from} AND ${to}`) as unknown as [{ n: number }[]])[0];
+    expect(r.json.range.sessions).toBe(Number(n));
+    // Five volunteers, three hours at each monthly session.
+    expect(r.json.volunteerHours).toBe(Number(n) * 5 * 3);
+    expect((await as.fixer.get(`/api/groups/${groupId}/report`)).status).toBe(403);
+  });
+});
+
 describe('the public impact page', () => {
   it('shows the totals and the method, and no visitor’s name or address', async () => {
     const r = await as.anon.get(`/api/public/impact?groupId=${groupId}`);

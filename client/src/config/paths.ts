@@ -39,6 +39,7 @@ export const paths = {
   impactRecords: (q: string) => `/impact/records${q}`,
   followUps: (groupId: number) => `/groups/${groupId}/follow-ups`,
   report: (eventId: number) => `/events/${eventId}/report`,
+  groupReport: (groupId: number, q = '') => `/groups/${groupId}/report${q}`,
   publicImpact: (groupId?: number) => (groupId ? `/impact/groups/${groupId}` : '/impact'),
   embed: (groupId?: number) => (groupId ? `/embed/impact?group=${groupId}` : '/embed/impact'),
   rebook: (token: string) => `/rebook/${token}`,

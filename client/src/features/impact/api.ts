@@ -17,6 +17,7 @@ export interface RecordRow { itemId: number; eventId: number; eventTitle: string
 export interface RecordsFilter extends StatsFilter { categoryId?: number; outcome?: Outcome | 'none'; barrier?: Barrier; month?: string; page?: number }
 export type PublicImpact = Omit<Stats, 'filter'> & { group: { name: string; town: string } | null; events: number; method: Method };
 export interface EventReport {
+  range?: { from: string | null; to: string | null; sessions: number };
   event: { id: number; title: string; startsAt: string; endsAt: string; groupId: number; groupName: string; timeZone: string };
   stats: Stats;
   volunteers: { name: string; hours: number }[];
@@ -62,6 +63,7 @@ export const useRecords = (f: RecordsFilter) => useQuery({ queryKey: impactKeys.
 export const useMethod = () => useQuery({ queryKey: impactKeys.method, queryFn: () => api<Method>('GET', '/api/stats/method'), staleTime: 10 * 60_000 });
 export const usePublicImpact = (groupId?: number) => useQuery({ queryKey: impactKeys.public(groupId), queryFn: () => api<PublicImpact>('GET', `/api/public/impact${qs({ groupId })}`) });
 export const useEventReport = (eventId: number) => useQuery({ queryKey: impactKeys.report(eventId), queryFn: () => api<EventReport>('GET', `/api/events/${eventId}/report`) });
+export const useGroupReport = (groupId: number, from?: string, to?: string) => useQuery({ queryKey: ['group-report', groupId, from ?? '', to ?? ''], queryFn: () => api<EventReport>('GET', `/api/groups/${groupId}/report${qs({ from, to })}`) });
 export const useFollowUps = (groupId: number) => useQuery({ queryKey: impactKeys.followUps(groupId), queryFn: () => api<FollowUp[]>('GET', `/api/groups/${groupId}/follow-ups`) });
 export const useRebook = (token: string) => useQuery({ queryKey: impactKeys.rebook(token), queryFn: () => api<RebookView>('GET', `/api/rebook/${token}`) });
 export const useImpactSettings = () => useQuery({ queryKey: impactKeys.settings, queryFn: () => api<{ displacement: number }>('GET', '/api/admin/impact-settings') });

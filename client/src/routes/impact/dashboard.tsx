@@ -181,6 +181,7 @@ function Actions({ filter, groupId, groupName }: { filter: StatsFilter; groupId?
         <a href={exportUrl('open-repair-data', filter)} download className={secondaryLink}>Open Repair Data export (CSV)</a>
         {groupId !== undefined && (
           <>
+            <Link to={filter.eventId ? paths.report(filter.eventId) : paths.groupReport(groupId, qs({ from: filter.from, to: filter.to }))} className={secondaryLink}>Printable report</Link>
             <Link to={paths.publicImpact(groupId)} className={secondaryLink}>Public page</Link>
             <Button variant="secondary" aria-expanded={embedOpen} aria-controls={panelId} onClick={() => setEmbedOpen((v) => !v)}>Embed on your website</Button>
           </>

@@ -1,12 +1,12 @@
 import type { ReactNode } from 'react';
-import { Link, useParams } from 'react-router';
+import { Link, useParams, useSearchParams } from 'react-router';
 import { Bar, BarChart, CartesianGrid, Legend, ResponsiveContainer, XAxis, YAxis } from 'recharts';
 import { BARRIER_LABELS } from '../../../../shared/event-day/constants';
 import { formatDay, formatTimeRange } from '../../../../shared/format';
 import { Button } from '../../components/ui/button';
 import { Alert, EmptyState, Spinner } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
-import { useEventReport, type EventReport } from '../../features/impact/api';
+import { useEventReport, useGroupReport, type EventReport } from '../../features/impact/api';
 
 const whole = new Intl.NumberFormat('en-GB');
 const oneDp = new Intl.NumberFormat('en-GB', { minimumFractionDigits: 1, maximumFractionDigits: 1 });
@@ -27,7 +27,17 @@ const CO2E = <>CO<sub>2</sub>e</>;
  */
 export function EventReportPage() {
   const eventId = Number(useParams().eventId);
-  const report = useEventReport(eventId);
+  return <ReportShell report={useEventReport(eventId)} back={{ to: paths.manageEvent(eventId), label: '← Back to the session' }} />;
+}
+
+/** The same report for a group's sessions between two dates (?from=&to=). */
+export function GroupReportPage() {
+  const groupId = Number(useParams().groupId);
+  const [params] = useSearchParams();
+  return <ReportShell report={useGroupReport(groupId, params.get('from') || undefined, params.get('to') || undefined)} back={{ to: paths.impact(groupId), label: '← Back to the impact page' }} />;
+}
+
+function ReportShell({ report, back }: { report: ReturnType<typeof useEventReport>; back: { to: string; label: string } }) {
 
   return (
     <div className="min-h-dvh bg-neutral-200 text-ink print:min-h-0 print:bg-white">
@@ -36,7 +46,7 @@ export function EventReportPage() {
 
       <div className="sticky top-0 z-10 border-b border-ink/10 bg-white shadow-sm print:hidden">
         <div className="mx-auto flex max-w-[210mm] flex-wrap items-center justify-between gap-3 px-4 py-3">
-          <Link to={paths.manageEvent(eventId)} className="text-sm font-bold text-navy underline">← Back to the session</Link>
+          <Link to={back.to} className="text-sm font-bold text-navy underline">{back.label}</Link>
           <Button onClick={() => window.print()} disabled={!report.data}>Print or save as PDF</Button>
         </div>
       </div>
@@ -63,9 +73,9 @@ function Report({ r }: { r: EventReport }) {
   return (
     <main data-testid="report" className="mx-auto w-full max-w-[210mm] space-y-6 bg-white p-5 shadow-lg sm:p-[14mm] print:max-w-none print:space-y-5 print:p-0 print:shadow-none">
       <header className="border-b-4 border-copper pb-4">
-        <p className="text-sm font-bold uppercase tracking-wide text-copper-dark">{event.groupName} · session report</p>
+        <p className="text-sm font-bold uppercase tracking-wide text-copper-dark">{event.groupName} · {r.range ? 'report for a period' : 'session report'}</p>
         <h1 className="mt-1 text-2xl sm:text-3xl">{event.title}</h1>
-        <p className="mt-1 font-semibold text-ink-soft">{formatDay(event.startsAt, tz)} · {formatTimeRange(event.startsAt, event.endsAt, tz)}</p>
+        <p className="mt-1 font-semibold text-ink-soft">{r.range ? `${r.range.from ? formatDay(`${r.range.from}T12:00:00Z`, tz) : formatDay(event.startsAt, tz)} to ${r.range.to ? formatDay(`${r.range.to}T12:00:00Z`, tz) : formatDay(event.endsAt, tz)}` : `${formatDay(event.startsAt, tz)} · ${formatTimeRange(event.startsAt, event.endsAt, tz)}`}</p>
       </header>
 
       <section aria-label="Totals" className="break-inside-avoid">

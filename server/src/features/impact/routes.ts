@@ -8,7 +8,7 @@ import { body, params, query } from '../../http/validate';
 import { eventGroupId } from '../events/service';
 import { openRepairDataCsv, recordsCsv } from './exports';
 import { followUpGroupId, listFollowUps, rebook, rebookView, setFollowUpStatus } from './follow-ups';
-import { assertDateRange, displacement, eventReport, method, publicImpact, records, setDisplacement, stats } from './service';
+import { assertDateRange, displacement, eventReport, method, publicImpact, rangeReport, records, setDisplacement, stats } from './service';
 
 /** Public figures and the embeddable widget's data: totals only, no person in them. */
 export function impactPublicRoutes(ctx: AppContext) {
@@ -66,6 +66,10 @@ export function impactRoutes(ctx: AppContext) {
     res.json(await eventReport(ctx, params(req, z.object({ id: z.coerce.number().int().positive() })).id));
   });
 
+  r.get('/groups/:groupId/report', requireGroupRole(['organiser'], (req) => Number(req.params.groupId)), async (req, res) => {
+    const f = filter(req);
+    res.json(await rangeReport(ctx, Number(req.params.groupId), f.from, f.to));
+  });
   r.get('/groups/:groupId/follow-ups', requireGroupRole(['organiser'], (req) => Number(req.params.groupId)), async (req, res) => res.json(await listFollowUps(ctx, Number(req.params.groupId))));
   r.patch('/follow-ups/:itemId', requireGroupRole(['organiser'], (req) => followUpGroupId(ctx.database.db, Number(req.params.itemId))), async (req, res) => {
     const b = body(req, followUpUpdate);

@@ -135,6 +135,30 @@ export async function eventReport(ctx: AppContext, eventId: number) {
   };
 }
 
+/** The same report for a group over a date range: every session in it, the volunteers' hours added up. */
+export async function rangeReport(ctx: AppContext, groupId: number, from?: string, to?: string) {
+  const { db } = ctx.database;
+  const [g] = await db.select().from(repairGroups).where(eq(repairGroups.id, groupId));
+  if (!g) throw notFound('That group');
+  const inRange = and(eq(events.groupId, groupId), sql`${events.status} IN ('published', 'closed')`, sql`${events.startsAt} <= NOW(3)`, ...(from ? [gte(sql`DATE(${events.startsAt})`, from)] : []), ...(to ? [lte(sql`DATE(${events.startsAt})`, to)] : []));
+  const sessions = await db.select({ id: events.id, startsAt: events.startsAt, endsAt: events.endsAt }).from(events).where(inRange).orderBy(asc(events.startsAt));
+  const ids = sessions.map((e) => e.id);
+  const rows = ids.length ? await db.select({ name: users.name, startsAt: shifts.startsAt, endsAt: shifts.endsAt }).from(shifts).innerJoin(users, eq(users.id, shifts.userId)).where(and(sql`${shifts.eventId} IN (${sql.join(ids.map((i) => sql`${i}`), sql`, `)})`, eq(shifts.coming, true))) : [];
+  const byName = new Map<string, number>();
+  for (const r of rows) byName.set(r.name, (byName.get(r.name) ?? 0) + (r.endsAt.getTime() - r.startsAt.getTime()) / 3600_000);
+  const hours = [...byName].map(([name, h]) => ({ name, hours: Math.round(h * 100) / 100 })).sort((a, b) => a.name.localeCompare(b.name));
+  const first = sessions[0]?.startsAt ?? (from ? new Date(`${from}T00:00:00Z`) : new Date());
+  const last = sessions[sessions.length - 1]?.endsAt ?? (to ? new Date(`${to}T23:59:59Z`) : new Date());
+  return {
+    event: { id: 0, title: `${g.name}: ${sessions.length} session${sessions.length === 1 ? '' : 's'}`, startsAt: first, endsAt: last, groupId: g.id, groupName: g.name, timeZone: g.timeZone },
+    range: { from: from ?? null, to: to ?? null, sessions: sessions.length },
+    stats: await stats(ctx, { groupId, from, to }),
+    volunteers: hours,
+    volunteerHours: Math.round(hours.reduce((n, v) => n + v.hours, 0) * 100) / 100,
+    method: await method(ctx),
+  };
+}
+
 /** Public figures: the same totals, with nothing about any person. */
 export async function publicImpact(ctx: AppContext, groupId?: number) {
   if (groupId) {
