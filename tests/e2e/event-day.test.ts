@@ -2,11 +2,10 @@ import { execFileSync } from 'node:child_process';
 import { existsSync, writeFileSync } from 'node:fs';
 import { eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, BrowserContext, Page } from 'playwright-core';
-import { DEMO_PASSWORD } from '../../shared/constants';
+import type { Browser, Page } from 'playwright-core';
 import { bookingItems, bookings, events, itemOutcomes } from '../../server/src/db/schema/index';
 import { TODAY_TITLE } from '../../server/src/seed/demo-today';
-import { launchBrowser, PHONE, qrVideo, shot, screenshotDir } from '../support/browser';
+import { launchBrowser, PHONE, qrVideo, shot, screenshotDir, signedIn } from '../support/browser';
 import { startDemoApp, type DemoApp } from '../support/demo-app';
 
 let app: DemoApp;
@@ -24,17 +23,6 @@ afterAll(async () => {
   await browser?.close();
   await app?.stop();
 });
-
-async function signedIn(who: string, viewport: { width: number; height: number }): Promise<{ context: BrowserContext; page: Page }> {
-  const context = await browser.newContext({ viewport });
-  const page = await context.newPage();
-  await page.goto(`${app.server.url}/sign-in`);
-  await page.getByLabel('E-mail').fill(`${who}@example.org`);
-  await page.getByLabel('Password').fill(DEMO_PASSWORD);
-  await page.getByRole('button', { name: 'Sign in', exact: true }).click();
-  await page.waitForURL((u) => !u.pathname.startsWith('/sign-in'));
-  return { context, page };
-}
 
 async function itemOf(reference: string) {
   const [row] = await app.db.db.select({ item: bookingItems }).from(bookingItems).innerJoin(bookings, eq(bookings.id, bookingItems.bookingId)).where(eq(bookings.reference, reference));
@@ -69,7 +57,7 @@ const passIfSafe = async (page: Page, insulation: string) => {
 
 describe('event day in the browser', () => {
   it('reception checks a visitor in by reference and prints the tags; a fixer opens the tag at phone width, fails then passes the safety check and marks it fixed; the hall display follows', { timeout: 120_000 }, async () => {
-    const desk = await signedIn('host', TABLET);
+    const desk = await signedIn(browser, app.server.url, 'host', TABLET);
     await desk.page.goto(`${app.server.url}/desk`);
     await desk.page.getByRole('link', { name: 'Open the desk' }).click();
     await desk.page.getByRole('heading', { name: 'Reception desk' }).waitFor();
@@ -100,7 +88,7 @@ describe('event day in the browser', () => {
     await hall.getByTestId('waiting').waitFor();
 
     // The fixer scans the tag: the URL opens the item page.
-    const bench = await signedIn('fixer', PHONE);
+    const bench = await signedIn(browser, app.server.url, 'fixer', PHONE);
     await bench.page.goto(`${app.server.url}/t/${code}`);
     await bench.page.waitForURL(new RegExp(`/items/${lamp.id}$`));
     await bench.page.getByRole('heading', { name: /lamp/i }).waitFor();
@@ -131,7 +119,7 @@ describe('event day in the browser', () => {
     expect(await hall.content()).not.toMatch(/Cass|Dunmore|Tobias/);
     await hall.screenshot({ path: shot('hall-display') });
 
-    const org = await signedIn('organiser', TABLET);
+    const org = await signedIn(browser, app.server.url, 'organiser', TABLET);
     await org.page.goto(`${app.server.url}/events/${eventId}/live`);
     await org.page.getByText(/has waited \d+ minutes/).first().waitFor();
     await org.page.screenshot({ path: shot('live-view'), fullPage: true });
@@ -140,12 +128,12 @@ describe('event day in the browser', () => {
   });
 
   it('keeps a parts-needed outcome on the phone while the network is cut and sends it when it returns', { timeout: 90_000 }, async () => {
-    const desk = await signedIn('host', TABLET);
+    const desk = await signedIn(browser, app.server.url, 'host', TABLET);
     await desk.page.goto(`${app.server.url}/desk/${eventId}`);
     await checkInAtDesk(desk.page, 'T7Q-3YD');
     const radio = await itemOf('T7Q-3YD');
 
-    const { context, page } = await signedIn('fixer', PHONE);
+    const { context, page } = await signedIn(browser, app.server.url, 'fixer', PHONE);
     await page.goto(`${app.server.url}/items/${radio.id}`);
     await page.getByRole('button', { name: 'Start repair' }).click();
     // The plan may have given the radio to another fixer: taking it over asks first.
@@ -179,14 +167,8 @@ describe('event day in the browser', () => {
     qrVideo(video, `${app.server.url}/b/T5N-9WZ`);
     const camBrowser = await launchBrowser(['--use-fake-device-for-media-stream', '--use-fake-ui-for-media-stream', `--use-file-for-fake-video-capture=${video}`]);
     try {
-      const context = await camBrowser.newContext({ viewport: TABLET });
+      const { context, page } = await signedIn(camBrowser, app.server.url, 'host', TABLET);
       await context.grantPermissions(['camera'], { origin: app.server.url });
-      const page = await context.newPage();
-      await page.goto(`${app.server.url}/sign-in`);
-      await page.getByLabel('E-mail').fill('host@example.org');
-      await page.getByLabel('Password').fill(DEMO_PASSWORD);
-      await page.getByRole('button', { name: 'Sign in', exact: true }).click();
-      await page.waitForURL((u) => !u.pathname.startsWith('/sign-in'));
       await page.goto(`${app.server.url}/desk/${eventId}`);
       await page.getByRole('button', { name: 'Scan QR code' }).click();
       await page.getByRole('form', { name: 'Check in T5N-9WZ' }).waitFor({ timeout: 30_000 });

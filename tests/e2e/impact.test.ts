@@ -1,9 +1,8 @@
 import { eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser } from 'playwright-core';
-import { DEMO_PASSWORD } from '../../shared/constants';
 import { events, repairGroups } from '../../server/src/db/schema/index';
-import { launchBrowser, PHONE, shot, screenshotDir } from '../support/browser';
+import { launchBrowser, PHONE, shot, screenshotDir, signedIn } from '../support/browser';
 import { startDemoApp, type DemoApp } from '../support/demo-app';
 import { writeFileSync } from 'node:fs';
 
@@ -24,13 +23,7 @@ afterAll(async () => {
 
 describe('impact in the browser', () => {
   it('shows the organiser the dashboard with charts and figures that lead to their records, and prints a session report', { timeout: 90_000 }, async () => {
-    const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
-    const page = await context.newPage();
-    await page.goto(`${app.server.url}/sign-in`);
-    await page.getByLabel('E-mail').fill('organiser@example.org');
-    await page.getByLabel('Password').fill(DEMO_PASSWORD);
-    await page.getByRole('button', { name: 'Sign in', exact: true }).click();
-    await page.waitForURL(/\/groups\/\d+\/events$/);
+    const { context, page } = await signedIn(browser, app.server.url, 'organiser', { width: 1280, height: 900 });
     await page.goto(`${app.server.url}/groups/${groupId}/impact`);
     const fixed = page.getByTestId('stat-fixed');
     await fixed.waitFor();
@@ -75,13 +68,7 @@ describe('impact in the browser', () => {
   });
 
   it('lists the items waiting for parts for the organiser, and lets a visitor book a return visit from the link', { timeout: 60_000 }, async () => {
-    const context = await browser.newContext({ viewport: { width: 1024, height: 800 } });
-    const page = await context.newPage();
-    await page.goto(`${app.server.url}/sign-in`);
-    await page.getByLabel('E-mail').fill('organiser@example.org');
-    await page.getByLabel('Password').fill(DEMO_PASSWORD);
-    await page.getByRole('button', { name: 'Sign in', exact: true }).click();
-    await page.waitForURL(/\/groups\/\d+\/events$/);
+    const { context, page } = await signedIn(browser, app.server.url, 'organiser', { width: 1024, height: 800 });
     await page.goto(`${app.server.url}/groups/${groupId}/follow-ups`);
     await page.getByTestId('follow-up').first().waitFor();
     await page.screenshot({ path: shot('follow-ups'), fullPage: true });

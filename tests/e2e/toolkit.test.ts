@@ -1,9 +1,8 @@
 import { eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser } from 'playwright-core';
-import { DEMO_PASSWORD } from '../../shared/constants';
 import { bookingItems, bookings, salvageParts } from '../../server/src/db/schema/index';
-import { launchBrowser, PHONE, shot } from '../support/browser';
+import { launchBrowser, PHONE, shot, signedIn } from '../support/browser';
 import { startDemoApp, type DemoApp } from '../support/demo-app';
 
 let app: DemoApp;
@@ -20,13 +19,7 @@ afterAll(async () => {
 
 describe('the fixer’s toolkit at phone width', () => {
   it('searches the repair notes, opens a calculator from an item page and takes a salvaged part', { timeout: 90_000 }, async () => {
-    const context = await browser.newContext({ viewport: PHONE });
-    const page = await context.newPage();
-    await page.goto(`${app.server.url}/sign-in`);
-    await page.getByLabel('E-mail').fill('fixer@example.org');
-    await page.getByLabel('Password').fill(DEMO_PASSWORD);
-    await page.getByRole('button', { name: 'Sign in', exact: true }).click();
-    await page.waitForURL((u) => !u.pathname.startsWith('/sign-in'));
+    const { context, page } = await signedIn(browser, app.server.url, 'fixer', PHONE);
 
     await page.goto(`${app.server.url}/toolkit/knowledge`);
     await page.getByLabel('Symptom or words').fill('steam switch');

@@ -1,5 +1,6 @@
 import { mkdirSync, writeFileSync } from 'node:fs';
 import QRCode from 'qrcode';
+import { DEMO_PASSWORD } from '../../shared/constants';
 import path from 'node:path';
 import { chromium, type Browser } from 'playwright-core';
 
@@ -37,4 +38,16 @@ export function qrVideo(file: string, text: string, width = 640, height = 480) {
   const chroma = Buffer.alloc((width / 2) * (height / 2) * 2, 128);
   const frame = Buffer.concat([Buffer.from('FRAME\n'), y, chroma]);
   writeFileSync(file, Buffer.concat([Buffer.from(`YUV4MPEG2 W${width} H${height} F10:1 Ip A1:1 C420jpeg\n`), ...Array(10).fill(frame)]));
+}
+
+/** A fresh browser context signed in as a demo account (`organiser`, `fixer`, `host`, `admin`). */
+export async function signedIn(browser: Browser, baseUrl: string, who: string, viewport: { width: number; height: number }) {
+  const context = await browser.newContext({ viewport });
+  const page = await context.newPage();
+  await page.goto(`${baseUrl}/sign-in`);
+  await page.getByLabel('E-mail').fill(`${who}@example.org`);
+  await page.getByLabel('Password').fill(DEMO_PASSWORD);
+  await page.getByRole('button', { name: 'Sign in', exact: true }).click();
+  await page.waitForURL((u) => !u.pathname.startsWith('/sign-in'));
+  return { context, page };
 }

@@ -13,21 +13,13 @@ import { useGroupEvents } from '../../features/events/api/events';
 import { useGroupSettings } from '../../features/events/api/organiser';
 import { exportUrl, qs, useImpactSettings, useMethod, useSetImpactSettings, useStats, type RecordsFilter, type Stats, type StatsFilter } from '../../features/impact/api';
 import { ApiError } from '../../lib/api';
+import { CO2E, COLOURS, ChartCard, isoDate, linkButton, longMonth, monthLabel, oneDp, percent, positiveInt, whole } from '../../features/impact/display';
 
-const whole = new Intl.NumberFormat('en-GB');
-const oneDp = new Intl.NumberFormat('en-GB', { minimumFractionDigits: 1, maximumFractionDigits: 1 });
-const monthFormat = new Intl.DateTimeFormat('en-GB', { month: 'short', year: 'numeric', timeZone: 'UTC' });
-const longMonthFormat = new Intl.DateTimeFormat('en-GB', { month: 'long', year: 'numeric', timeZone: 'UTC' });
 
-const percent = (rate: number | null) => (rate === null ? '—' : `${Math.round(rate * 100)}%`);
-const monthLabel = (m: string) => monthFormat.format(new Date(`${m}-01T00:00:00Z`));
-const longMonth = (m: string) => longMonthFormat.format(new Date(`${m}-01T00:00:00Z`));
 const plural = (n: number, one: string, many = `${one}s`) => `${whole.format(n)} ${n === 1 ? one : many}`;
 
-const linkButton = 'inline-flex min-h-11 items-center justify-center gap-2 rounded-lg px-4 py-2 font-bold transition';
 const secondaryLink = `${linkButton} bg-white text-navy ring-1 ring-navy/25 hover:bg-navy/5`;
 
-const COLOURS = { fixed: '#5d7f6a', partsNeeded: '#b8612f', advice: '#23395d', endOfLife: '#8d949c', grid: '#e7e2da' };
 
 type SeriesKey = 'fixed' | 'partsNeeded' | 'advice' | 'endOfLife';
 const SERIES: { key: SeriesKey; outcome: Outcome; label: string; colour: string }[] = [
@@ -38,7 +30,6 @@ const SERIES: { key: SeriesKey; outcome: Outcome; label: string; colour: string 
 ];
 
 type TileKey = 'items' | SeriesKey | 'fixRate' | 'kgDiverted' | 'co2eKg';
-const CO2E = <>CO<sub>2</sub>e</>;
 const TILES: { key: TileKey; label: ReactNode; outcome?: Outcome; accent: string; value: (c: Counts) => string }[] = [
   { key: 'items', label: 'Items seen', accent: 'border-navy', value: (c) => whole.format(c.items) },
   { key: 'fixed', label: OUTCOME_LABELS.fixed, outcome: 'fixed', accent: 'border-sage', value: (c) => whole.format(c.fixed) },
@@ -50,12 +41,6 @@ const TILES: { key: TileKey; label: ReactNode; outcome?: Outcome; accent: string
   { key: 'co2eKg', label: <>kg {CO2E} avoided</>, outcome: 'fixed', accent: 'border-sage', value: (c) => oneDp.format(c.co2eKg) },
 ];
 
-const DATE = /^\d{4}-\d{2}-\d{2}$/;
-function positiveInt(raw: string | null): number | undefined {
-  const n = Number(raw);
-  return raw && Number.isInteger(n) && n > 0 ? n : undefined;
-}
-const isoDate = (raw: string | null) => (raw && DATE.test(raw) ? raw : undefined);
 
 type RecordsExtra = Omit<RecordsFilter, keyof StatsFilter | 'page'>;
 
@@ -428,28 +413,6 @@ function Figures({ stats, filter }: { stats: Stats; filter: StatsFilter }) {
   );
 }
 
-/**
- * A chart with its heading and a sentence that says what it shows; the drawing itself is hidden from screen
- * readers, which get the same figures (with their links) in the table under it.
- */
-function ChartCard({ title, summary, table, children }: { title: string; summary: string; table: ReactNode; children: ReactNode }) {
-  const headingId = useId();
-  return (
-    <Card className="min-w-0 p-4 sm:p-5">
-      <section aria-labelledby={headingId}>
-        <h3 id={headingId} className="text-lg">{title}</h3>
-        <p className="mb-2 text-sm text-ink-soft">{summary}</p>
-        {children && <div aria-hidden className="h-[260px] w-full min-w-0">{children}</div>}
-        {table && (
-          <details className="mt-2 text-sm">
-            <summary className="min-h-11 cursor-pointer py-2 font-bold text-navy">Figures as a table</summary>
-            <div className="overflow-x-auto">{table}</div>
-          </details>
-        )}
-      </section>
-    </Card>
-  );
-}
 
 function FigureTable({ head, children }: { head: string[]; children: ReactNode }) {
   return (

@@ -3,15 +3,9 @@ import { useSearchParams } from 'react-router';
 import { Area, AreaChart, ResponsiveContainer } from 'recharts';
 import { paths } from '../../config/paths';
 import { usePublicImpact } from '../../features/impact/api';
+import { monthLabel, oneDp, positiveInt, whole } from '../../features/impact/display';
 
-const whole = new Intl.NumberFormat('en-GB');
-const oneDp = new Intl.NumberFormat('en-GB', { minimumFractionDigits: 1, maximumFractionDigits: 1 });
-const monthFormat = new Intl.DateTimeFormat('en-GB', { month: 'short', year: 'numeric', timeZone: 'UTC' });
 
-function positiveInt(raw: string | null): number | undefined {
-  const n = Number(raw);
-  return raw && Number.isInteger(n) && n > 0 ? n : undefined;
-}
 
 /* The host page decides the frame; nothing of the app's own page background or scrolling may show inside it. */
 const FRAME_CSS = 'html, body { margin: 0; padding: 0; background: transparent !important; overflow: hidden; } #root { height: 100%; }';
@@ -69,7 +63,7 @@ export function ImpactWidgetPage() {
                     </ResponsiveContainer>
                   </div>
                   <figcaption className="text-[11px] text-ink-soft">
-                    kg by month, {monthFormat.format(new Date(`${months[0].month}-01T00:00:00Z`))}–{monthFormat.format(new Date(`${months[months.length - 1].month}-01T00:00:00Z`))}
+                    kg by month, {monthLabel(months[0].month)}–{monthLabel(months[months.length - 1].month)}
                   </figcaption>
                 </figure>
               ) : (

@@ -1,4 +1,4 @@
-import { useId, type ReactNode } from 'react';
+import type { ReactNode } from 'react';
 import { Link, useParams } from 'react-router';
 import { Area, AreaChart, Bar, BarChart, CartesianGrid, Legend, Pie, PieChart, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import { OUTCOME_LABELS } from '../../../../shared/event-day/constants';
@@ -6,17 +6,9 @@ import { Alert, Card, EmptyState, PageTitle, Spinner } from '../../components/ui
 import { paths } from '../../config/paths';
 import { usePublicImpact, type Method, type PublicImpact } from '../../features/impact/api';
 import { ApiError } from '../../lib/api';
+import { CO2E, COLOURS, ChartCard, linkButton, longMonth, monthLabel, oneDp, whole } from '../../features/impact/display';
 
-const whole = new Intl.NumberFormat('en-GB');
-const oneDp = new Intl.NumberFormat('en-GB', { minimumFractionDigits: 1, maximumFractionDigits: 1 });
-const monthFormat = new Intl.DateTimeFormat('en-GB', { month: 'short', year: 'numeric', timeZone: 'UTC' });
-const longMonthFormat = new Intl.DateTimeFormat('en-GB', { month: 'long', year: 'numeric', timeZone: 'UTC' });
-const monthLabel = (m: string) => monthFormat.format(new Date(`${m}-01T00:00:00Z`));
-const longMonth = (m: string) => longMonthFormat.format(new Date(`${m}-01T00:00:00Z`));
 
-const COLOURS = { fixed: '#5d7f6a', partsNeeded: '#b8612f', advice: '#23395d', endOfLife: '#8d949c', grid: '#e7e2da' };
-const CO2E = <>CO<sub>2</sub>e</>;
-const linkButton = 'inline-flex min-h-11 items-center justify-center rounded-lg px-4 py-2 font-bold transition';
 
 /** What a group (or every group) has repaired, for anyone: totals and charts, never a person. */
 export function PublicImpactPage() {
@@ -102,6 +94,7 @@ function Charts({ d }: { d: PublicImpact }) {
   return (
     <div className="grid gap-4 lg:grid-cols-2">
       <ChartCard
+        level="h2"
         title="Kilograms kept out of the bin, by month"
         summary={heaviest ? `${oneDp.format(d.kgDiverted)} kg over ${months.length} ${months.length === 1 ? 'month' : 'months'}; the most in ${longMonth(heaviest.month)} (${oneDp.format(heaviest.kg)} kg).` : 'No months to show yet.'}
         table={
@@ -120,6 +113,7 @@ function Charts({ d }: { d: PublicImpact }) {
       </ChartCard>
 
       <ChartCard
+        level="h2"
         title="What happened to the items"
         summary={known ? `${share(d.fixed)} of the items with a recorded outcome were fixed; the others needed a part, got advice, or were at the end of their life.` : 'No outcomes recorded yet.'}
         table={<SimpleTable head={['Outcome', 'Items', 'Share']} rows={outcomes.map((o) => ({ key: o.name, cells: [o.name, whole.format(o.value), share(o.value)] }))} />}
@@ -136,6 +130,7 @@ function Charts({ d }: { d: PublicImpact }) {
       </ChartCard>
 
       <ChartCard
+        level="h2"
         title="The items most often brought in"
         summary={top.length ? `Most often: ${top.slice(0, 3).map((c) => `${c.name.toLowerCase()} (${c.items})`).join(', ')}.` : 'No categories yet.'}
         table={<SimpleTable head={['Category', 'Items', 'Fixed']} rows={d.byCategory.map((c) => ({ key: String(c.categoryId), cells: [c.name, whole.format(c.items), whole.format(c.fixed)] }))} />}
@@ -156,23 +151,6 @@ function Charts({ d }: { d: PublicImpact }) {
   );
 }
 
-/** The drawing is hidden from screen readers; the sentence and the table carry the same figures. */
-function ChartCard({ title, summary, table, children }: { title: string; summary: string; table: ReactNode; children: ReactNode }) {
-  const headingId = useId();
-  return (
-    <Card className="min-w-0 p-4 sm:p-5">
-      <section aria-labelledby={headingId}>
-        <h2 id={headingId} className="text-lg">{title}</h2>
-        <p className="mb-2 text-sm text-ink-soft">{summary}</p>
-        {children && <div aria-hidden className="h-[260px] w-full min-w-0">{children}</div>}
-        <details className="mt-2 text-sm">
-          <summary className="min-h-11 cursor-pointer py-2 font-bold text-navy">Figures as a table</summary>
-          <div className="overflow-x-auto">{table}</div>
-        </details>
-      </section>
-    </Card>
-  );
-}
 
 function SimpleTable({ head, rows }: { head: string[]; rows: { key: string; cells: string[] }[] }) {
   return (

@@ -5,19 +5,13 @@ import { Alert, EmptyState, PageTitle, Spinner } from '../../components/ui/feedb
 import { paths } from '../../config/paths';
 import { useCategories } from '../../features/events/api/events';
 import { qs, useRecords, type RecordRow, type RecordsFilter } from '../../features/impact/api';
+import { isoDate, oneDp, positiveInt, whole } from '../../features/impact/display';
 
 const PAGE_SIZE = 50;
-const whole = new Intl.NumberFormat('en-GB');
-const oneDp = new Intl.NumberFormat('en-GB', { minimumFractionDigits: 1, maximumFractionDigits: 1 });
 const dayFormat = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric' });
 const isoDayFormat = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' });
 const monthFormat = new Intl.DateTimeFormat('en-GB', { month: 'long', year: 'numeric', timeZone: 'UTC' });
 
-function positiveInt(raw: string | null): number | undefined {
-  const n = Number(raw);
-  return raw && Number.isInteger(n) && n > 0 ? n : undefined;
-}
-const isoDate = (raw: string | null) => (raw && /^\d{4}-\d{2}-\d{2}$/.test(raw) ? raw : undefined);
 const isOutcome = (raw: string | null): raw is Outcome | 'none' => raw === 'none' || (OUTCOMES as readonly string[]).includes(raw ?? '');
 const isBarrier = (raw: string | null): raw is Barrier => (BARRIERS as readonly string[]).includes(raw ?? '');
 

@@ -7,11 +7,9 @@ import { Button } from '../../components/ui/button';
 import { Alert, EmptyState, Spinner } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
 import { useEventReport, useGroupReport, type EventReport } from '../../features/impact/api';
+import { CO2E, oneDp, percent, whole } from '../../features/impact/display';
 
-const whole = new Intl.NumberFormat('en-GB');
-const oneDp = new Intl.NumberFormat('en-GB', { minimumFractionDigits: 1, maximumFractionDigits: 1 });
 const hoursFormat = new Intl.NumberFormat('en-GB', { maximumFractionDigits: 2 });
-const percent = (rate: number | null) => (rate === null ? '—' : `${Math.round(rate * 100)}%`);
 
 const PRINT_CSS = `@page { size: A4; margin: 14mm }
 @media print { html, body { margin: 0; padding: 0; background: #fff !important; } tfoot { display: table-row-group; } }`;
@@ -19,7 +17,6 @@ const PRINT_CSS = `@page { size: A4; margin: 14mm }
 /** A4 is 210 mm less two 14 mm margins: about 690 CSS px, so a 640 px chart fits without being scaled. */
 const CHART_WIDTH = 640;
 const MAX_CHART_ROWS = 12;
-const CO2E = <>CO<sub>2</sub>e</>;
 
 /**
  * One page per session for funders and the group's own records: what came in, what was fixed, who helped and how

@@ -1,0 +1,45 @@
+import { useId, type ReactNode } from 'react';
+import { Card } from '../../components/ui/feedback';
+
+/** Number and month formats, colours and the chart frame shared by the impact pages. */
+export const whole = new Intl.NumberFormat('en-GB');
+export const oneDp = new Intl.NumberFormat('en-GB', { minimumFractionDigits: 1, maximumFractionDigits: 1 });
+export const percent = (rate: number | null) => (rate === null ? '—' : `${Math.round(rate * 100)}%`);
+const monthFormat = new Intl.DateTimeFormat('en-GB', { month: 'short', year: 'numeric', timeZone: 'UTC' });
+const longMonthFormat = new Intl.DateTimeFormat('en-GB', { month: 'long', year: 'numeric', timeZone: 'UTC' });
+export const monthLabel = (m: string) => monthFormat.format(new Date(`${m}-01T00:00:00Z`));
+export const longMonth = (m: string) => longMonthFormat.format(new Date(`${m}-01T00:00:00Z`));
+export const COLOURS = { fixed: '#5d7f6a', partsNeeded: '#b8612f', advice: '#23395d', endOfLife: '#8d949c', grid: '#e7e2da' };
+export const CO2E = <>CO<sub>2</sub>e</>;
+export const linkButton = 'inline-flex min-h-11 items-center justify-center gap-2 rounded-lg px-4 py-2 font-bold transition';
+
+/** A whole number above 0 from the URL, else nothing. */
+export function positiveInt(raw: string | null): number | undefined {
+  const n = Number(raw);
+  return raw && Number.isInteger(n) && n > 0 ? n : undefined;
+}
+export const isoDate = (raw: string | null) => (raw && /^\d{4}-\d{2}-\d{2}$/.test(raw) ? raw : undefined);
+
+/**
+ * A chart with its heading and a sentence that says what it shows; the drawing itself is hidden from screen
+ * readers, which get the same figures (with their links) in the table under it.
+ */
+export function ChartCard({ title, summary, table, children, level = 'h3' }: { title: string; summary: string; table: ReactNode; children: ReactNode; level?: 'h2' | 'h3' }) {
+  const headingId = useId();
+  const Heading = level;
+  return (
+    <Card className="min-w-0 p-4 sm:p-5">
+      <section aria-labelledby={headingId}>
+        <Heading id={headingId} className="text-lg">{title}</Heading>
+        <p className="mb-2 text-sm text-ink-soft">{summary}</p>
+        {children && <div aria-hidden className="h-[260px] w-full min-w-0">{children}</div>}
+        {table && (
+          <details className="mt-2 text-sm">
+            <summary className="min-h-11 cursor-pointer py-2 font-bold text-navy">Figures as a table</summary>
+            <div className="overflow-x-auto">{table}</div>
+          </details>
+        )}
+      </section>
+    </Card>
+  );
+}
