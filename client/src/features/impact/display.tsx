@@ -1,5 +1,6 @@
 import { useId, type ReactNode } from 'react';
 import { Card } from '../../components/ui/feedback';
+import type { Method } from './api';
 
 /** Number and month formats, colours and the chart frame shared by the impact pages. */
 export const whole = new Intl.NumberFormat('en-GB');
@@ -41,5 +42,33 @@ export function ChartCard({ title, summary, table, children, level = 'h3' }: { t
         )}
       </section>
     </Card>
+  );
+}
+
+/** The weight and emission factor of each kind of item, with their sources. */
+export function FactorTable({ categories }: { categories: Method['categories'] }) {
+  return (
+    <table className="w-full min-w-[40rem] text-sm">
+      <thead>
+        <tr className="border-b border-ink/10 text-left text-ink-soft">
+          <th scope="col" className="py-1 pr-3 font-semibold">Kind of item</th>
+          <th scope="col" className="py-1 pr-3 text-right font-semibold">Average weight (kg)</th>
+          <th scope="col" className="py-1 pr-3 font-semibold">Weight source</th>
+          <th scope="col" className="py-1 pr-3 text-right font-semibold">kg CO2e per kg</th>
+          <th scope="col" className="py-1 pr-3 font-semibold">Factor source</th>
+        </tr>
+      </thead>
+      <tbody className="divide-y divide-ink/5 align-top">
+        {categories.map((c) => (
+          <tr key={c.id}>
+            <th scope="row" className="py-1 pr-3 text-left font-semibold">{c.name}</th>
+            <td className="py-1 pr-3 text-right tabular-nums">{oneDp.format(c.avgWeightKg)}</td>
+            <td className="py-1 pr-3">{c.weightSource}</td>
+            <td className="py-1 pr-3 text-right tabular-nums">{c.co2ePerKg === null ? '—' : oneDp.format(c.co2ePerKg)}</td>
+            <td className="py-1 pr-3">{c.co2eSource ?? 'No sourced factor: counted as 0'}</td>
+          </tr>
+        ))}
+      </tbody>
+    </table>
   );
 }

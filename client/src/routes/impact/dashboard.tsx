@@ -13,7 +13,7 @@ import { useGroupEvents } from '../../features/events/api/events';
 import { useGroupSettings } from '../../features/events/api/organiser';
 import { exportUrl, qs, useImpactSettings, useMethod, useSetImpactSettings, useStats, type RecordsFilter, type Stats, type StatsFilter } from '../../features/impact/api';
 import { ApiError } from '../../lib/api';
-import { CO2E, COLOURS, ChartCard, isoDate, linkButton, longMonth, monthLabel, oneDp, percent, positiveInt, whole } from '../../features/impact/display';
+import { CO2E, COLOURS, ChartCard, FactorTable, isoDate, linkButton, longMonth, monthLabel, oneDp, percent, positiveInt, whole } from '../../features/impact/display';
 
 
 const plural = (n: number, one: string, many = `${one}s`) => `${whole.format(n)} ${n === 1 ? one : many}`;
@@ -456,28 +456,7 @@ function MethodSection() {
               <details>
                 <summary className="min-h-11 cursor-pointer py-2 font-bold text-navy">Weights and factors of the {method.data.categories.length} categories</summary>
                 <div className="overflow-x-auto">
-                  <table className="w-full min-w-[40rem] text-sm">
-                    <thead>
-                      <tr className="border-b border-ink/10 text-left text-ink-soft">
-                        <th scope="col" className="py-1 pr-3 font-semibold">Category</th>
-                        <th scope="col" className="py-1 pr-3 text-right font-semibold">Average weight (kg)</th>
-                        <th scope="col" className="py-1 pr-3 font-semibold">Weight source</th>
-                        <th scope="col" className="py-1 pr-3 text-right font-semibold">kg CO2e per kg</th>
-                        <th scope="col" className="py-1 pr-3 font-semibold">Factor source</th>
-                      </tr>
-                    </thead>
-                    <tbody className="divide-y divide-ink/5 align-top">
-                      {method.data.categories.map((c) => (
-                        <tr key={c.id}>
-                          <th scope="row" className="py-1 pr-3 text-left font-semibold">{c.name}</th>
-                          <td className="py-1 pr-3 text-right tabular-nums">{oneDp.format(c.avgWeightKg)}</td>
-                          <td className="py-1 pr-3">{c.weightSource}</td>
-                          <td className="py-1 pr-3 text-right tabular-nums">{c.co2ePerKg === null ? '—' : oneDp.format(c.co2ePerKg)}</td>
-                          <td className="py-1 pr-3">{c.co2eSource ?? 'No sourced factor: counted as 0'}</td>
-                        </tr>
-                      ))}
-                    </tbody>
-                  </table>
+                  <FactorTable categories={method.data.categories} />
                 </div>
               </details>
             )}

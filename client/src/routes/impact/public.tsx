@@ -6,7 +6,7 @@ import { Alert, Card, EmptyState, PageTitle, Spinner } from '../../components/ui
 import { paths } from '../../config/paths';
 import { usePublicImpact, type Method, type PublicImpact } from '../../features/impact/api';
 import { ApiError } from '../../lib/api';
-import { CO2E, COLOURS, ChartCard, linkButton, longMonth, monthLabel, oneDp, whole } from '../../features/impact/display';
+import { CO2E, COLOURS, ChartCard, FactorTable, linkButton, longMonth, monthLabel, oneDp, whole } from '../../features/impact/display';
 
 
 
@@ -186,28 +186,7 @@ function MethodCard({ method }: { method: Method }) {
           <details>
             <summary className="min-h-11 cursor-pointer py-2 font-bold text-navy">Weights and factors, with their sources</summary>
             <div className="overflow-x-auto">
-              <table className="w-full min-w-[40rem] text-sm">
-                <thead>
-                  <tr className="border-b border-ink/10 text-left text-ink-soft">
-                    <th scope="col" className="py-1 pr-3 font-semibold">Kind of item</th>
-                    <th scope="col" className="py-1 pr-3 text-right font-semibold">Average weight (kg)</th>
-                    <th scope="col" className="py-1 pr-3 font-semibold">Weight source</th>
-                    <th scope="col" className="py-1 pr-3 text-right font-semibold">kg CO2e per kg</th>
-                    <th scope="col" className="py-1 pr-3 font-semibold">Factor source</th>
-                  </tr>
-                </thead>
-                <tbody className="divide-y divide-ink/5 align-top">
-                  {method.categories.map((c) => (
-                    <tr key={c.id}>
-                      <th scope="row" className="py-1 pr-3 text-left font-semibold">{c.name}</th>
-                      <td className="py-1 pr-3 text-right tabular-nums">{oneDp.format(c.avgWeightKg)}</td>
-                      <td className="py-1 pr-3">{c.weightSource}</td>
-                      <td className="py-1 pr-3 text-right tabular-nums">{c.co2ePerKg === null ? '—' : oneDp.format(c.co2ePerKg)}</td>
-                      <td className="py-1 pr-3">{c.co2eSource ?? 'No sourced factor: counted as 0'}</td>
-                    </tr>
-                  ))}
-                </tbody>
-              </table>
+              <FactorTable categories={method.categories} />
             </div>
           </details>
         )}
