@@ -69,6 +69,8 @@ export interface SubstitutionResult {
   passed: string[];
 }
 
+/** "an NPN", "an N-MOSFET", "a PNP", "a P-MOSFET": the article follows how the letters are said. */
+const article = (t: TransistorType, capital = false) => (t.startsWith('N') ? (capital ? 'An' : 'an') : capital ? 'A' : 'a');
 const isBipolar = (t: TransistorType) => t === 'NPN' || t === 'PNP';
 const normalisePackage = (p: string) => p.trim().toUpperCase().replace(/\s+/g, '').replace(/^TO(\d)/, 'TO-$1').replace(/^SOT(\d)/, 'SOT-$1');
 const knownPackage = (p: string): KnownPackage | null => {
@@ -104,8 +106,8 @@ export function checkSubstitution(original: TransistorSpec, candidate: Transisto
   const [vName, iName, lead] = bipolar ? ['Vceo', 'Ic', 'collector'] : ['Vds', 'Id', 'drain'];
 
   if (original.type === candidate.type) passed.push(`Same type (${original.type}).`);
-  else if (isBipolar(original.type) !== isBipolar(candidate.type)) refusals.push(`A ${candidate.type} cannot replace a ${original.type}: a MOSFET is driven by gate voltage, a bipolar transistor by base current.`);
-  else refusals.push(`Opposite polarity: a ${candidate.type} cannot replace a ${original.type}.`);
+  else if (isBipolar(original.type) !== isBipolar(candidate.type)) refusals.push(`${article(candidate.type, true)} ${candidate.type} cannot replace ${article(original.type)} ${original.type}: a MOSFET is driven by gate voltage, a bipolar transistor by base current.`);
+  else refusals.push(`Opposite polarity: ${article(candidate.type)} ${candidate.type} cannot replace ${article(original.type)} ${original.type}.`);
 
   const ratings = [
     [vName, original.vMaxV, candidate.vMaxV, 'V'],
@@ -193,6 +195,8 @@ export function interpretDiodeTest(readings: DiodeReadings): DiodeTestResult {
   for (const p of PROBE_PAIRS) {
     const r = readings[p];
     if (r !== 'OL' && (!Number.isFinite(r) || r < 0)) throw new RangeError(`The reading with red on ${p[0]} and black on ${p[1]} must be a voltage of 0 or more, or OL.`);
+    // A meter's diode test shows at most about 2–3 V before it reads OL; 650 is millivolts typed as volts.
+    if (r !== 'OL' && r > 5) throw new RangeError(`The reading with red on ${p[0]} and black on ${p[1]} is ${r} V: enter volts (0.65, not 650), or OL.`);
   }
   const pairs = [
     ['BE', 'EB', 'base–emitter'],

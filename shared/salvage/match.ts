@@ -70,7 +70,9 @@ export function judgeSubstitute(needed: Needed, cand: Candidate, transistor: (n:
       atLeast('voltageV', 'voltage rating', 'V');
       break;
     case 'fuse':
-      if (n.currentA !== undefined && c.currentA !== n.currentA) reasons.push(c.currentA !== undefined && c.currentA > n.currentA ? `A ${c.currentA} A fuse would not protect what a ${n.currentA} A fuse protects.` : `A fuse of ${c.currentA ?? 'unknown'} A is not the ${n.currentA} A needed.`);
+      if (n.currentA === undefined) warnings.push('Give the current rating of the fuse needed: a fuse is replaced only by one of the same rating.');
+      else if (c.currentA === undefined) reasons.push('Its current rating is not recorded: a fuse is replaced only by one of the same rating.');
+      else if (c.currentA !== n.currentA) reasons.push(c.currentA > n.currentA ? `A ${c.currentA} A fuse would not protect what a ${n.currentA} A fuse protects.` : `A ${c.currentA} A fuse is not the ${n.currentA} A needed: it would blow in normal use.`);
       atLeast('voltageV', 'voltage rating', 'V');
       break;
     case 'thermal-cutout':

@@ -194,7 +194,7 @@ describe('parts-needed follow-up', () => {
     expect(groupAfter.partsNeeded).toBe(groupBefore.partsNeeded - 1);
     expect((await db.db.select().from(followUps).where(eq(followUps.itemId, lamp.id)))[0].status).toBe('fixed-at-return');
     const list = (await as.organiser.get(`/api/groups/${groupId}/follow-ups`)).json;
-    expect(list.find((x: { itemId: number }) => x.itemId === lamp.id)).toMatchObject({ statusLabel: 'Fixed at return' });
+    expect(list.find((x: { itemId: number }) => x.itemId === lamp.id)).toMatchObject({ statusLabel: 'Fixed at return', rebookUrl: null, returnVisit: { reference: back.json.reference } });
     expect((await as.fixer.get(`/api/groups/${groupId}/follow-ups`)).status).toBe(403);
   });
 });
@@ -224,5 +224,21 @@ describe('mails after the event', () => {
     const n = await sendFollowUpReminders(server.ctx);
     expect(n).toBe(due.length);
     expect(await sendFollowUpReminders(server.ctx)).toBe(0);
+  });
+});
+
+describe('return visits and skill limits', () => {
+  it('lets a return visit past a slot’s per-skill limit, once', async () => {
+    // A Kestlebridge session limits textiles to 2 a slot; fill a slot's textiles, then book a textile item's return.
+    const [coat] = await db.db.select({ id: bookingItems.id }).from(bookingItems).innerJoin(bookings, eq(bookings.id, bookingItems.bookingId)).where(eq(bookings.reference, 'T3H-7PQ'));
+    await as.organiser.post(`/api/items/${coat.id}/outcome`, { outcome: 'parts-needed', part: { description: 'Coat lining fabric, 0.5 m' } });
+    const mail = (await db.db.select().from(outbox).where(eq(outbox.toAddress, 'ada@example.org'))).find((m) => m.subject.includes('part'))!;
+    const link = /\/rebook\/([\w.-]+)/.exec(mail.text)![1];
+    const view = (await as.anon.get(`/api/rebook/${link}`)).json;
+    const target = view.events.find((e: { title: string }) => e.title === 'Kestlebridge repair session');
+    const slotId = target.slots[target.slots.length - 1].id;
+    await db.db.execute(sql`INSERT INTO slot_skill_counts (slot_id, skill, booked) VALUES (${slotId}, 'textiles', 2) ON DUPLICATE KEY UPDATE booked = 2`);
+    const r = await as.anon.post(`/api/rebook/${link}`, { slotId });
+    expect(r.status).toBe(201);
   });
 });

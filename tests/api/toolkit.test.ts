@@ -163,3 +163,22 @@ describe('the salvage stock', () => {
     expect(by(low.json.id).reasons.join(' ')).toMatch(/300/);
   });
 });
+
+describe('review fixes', () => {
+  it('keeps the chosen kind of item: a brand match of another kind does not come in', async () => {
+    const r = (await g.third.fixer.get(`/api/knowledge?categoryId=${kettle}&brand=Brewmaster`)).json;
+    expect(r.length).toBeGreaterThan(0);
+    expect(r.every((e: { categoryId: number }) => e.categoryId === kettle)).toBe(true);
+  });
+
+  it('will not call a fuse suitable when its rating or the one needed is unknown', async () => {
+    await g.third.fixer.post(`/api/groups/${g.third.id}/salvage`, { type: 'fuse', value: 'Unmarked glass fuse', quantity: 1, box: 'Fuse tin' });
+    await g.third.fixer.post(`/api/groups/${g.third.id}/salvage`, { type: 'fuse', value: '13 A', ratings: { currentA: 13 }, quantity: 1, box: 'Fuse tin' });
+    const none = (await g.third.fixer.get(`/api/groups/${g.third.id}/salvage/substitutes?type=fuse`)).json;
+    expect(none.every((x: { verdict: { verdict: string } }) => x.verdict.verdict !== 'accept')).toBe(true);
+    const r = (await g.third.fixer.get(`/api/groups/${g.third.id}/salvage/substitutes?type=fuse&currentA=13`)).json;
+    const by = (v: string) => r.find((x: { part: { value: string } }) => x.part.value === v).verdict;
+    expect(by('13 A').verdict).toBe('accept');
+    expect(by('Unmarked glass fuse').verdict).toBe('refuse');
+  });
+});

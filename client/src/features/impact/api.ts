@@ -29,7 +29,8 @@ export interface FollowUp {
   ageDays: number; reminderDue: boolean; item: string; part: string | null; partLink: string | null; partCost: number | null;
   visitor: { name: string; email: string | null; phone: string | null; reference: string };
   event: { title: string; startsAt: string };
-  rebookUrl: string;
+  rebookUrl: string | null;
+  returnVisit: { reference: string; eventTitle: string | null; startsAt: string } | null;
 }
 export interface RebookView {
   item: { categoryName: string; brand: string | null; model: string | null; part: string | null };

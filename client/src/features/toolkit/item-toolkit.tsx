@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import { Link } from 'react-router';
 import { PART_TYPES, PART_TYPE_LABELS, type PartType } from '../../../../shared/salvage/constants';
+import { formatDay } from '../../../../shared/format';
 import { Button } from '../../components/ui/button';
 import { Alert, Card, Spinner } from '../../components/ui/feedback';
 import { SelectField, TextField } from '../../components/ui/field';
@@ -23,7 +24,7 @@ export function SimilarRepairs({ item }: { item: ItemDetail }) {
       {similar.isPending ? <Spinner /> : similar.error ? <Alert tone="error">{similar.error.message}</Alert> : similar.data.length === 0 ? (
         <p className="text-sm text-ink-soft">No notes on this kind of item yet. Yours will be the first: add notes to the outcome.</p>
       ) : (
-        <ol className="mt-2 space-y-2">{similar.data.slice(0, 3).map((e) => <li key={e.itemId}><KnowledgeCard entry={e} when={new Date(e.eventDate).toLocaleDateString('en-GB')} canWrite={false} /></li>)}</ol>
+        <ol className="mt-2 space-y-2">{similar.data.slice(0, 3).map((e) => <li key={e.itemId}><KnowledgeCard entry={e} when={formatDay(e.eventDate, item.event.timeZone)} canWrite={false} /></li>)}</ol>
       )}
     </Card>
   );
@@ -55,6 +56,7 @@ export function SalvageForItem({ item }: { item: ItemDetail }) {
   const found = useSubstitutes(groupId, search ?? { type }, search !== null);
   const take = useTakePart(groupId, item.id);
   const [adding, setAdding] = useState(false);
+  const [lookupErrors, setLookupErrors] = useState<Record<string, string>>({});
   return (
     <Card>
       <h2 className="text-lg">Salvage stock</h2>
@@ -63,7 +65,14 @@ export function SalvageForItem({ item }: { item: ItemDetail }) {
           {item.partsUsed.map((p) => <li key={p.id}>Used: {p.quantity} × {p.value}{p.package && ` (${p.package})`} from {p.box}{p.takenBy && ` — ${p.takenBy}`}</li>)}
         </ul>
       )}
-      <form className="space-y-3" aria-label="Find a substitute" onSubmit={(e) => { e.preventDefault(); setSearch({ type, ...parseRatings(ratings), ...(pkg ? { package: pkg } : {}) }); }}>
+      {item.status === 'done' && item.outcome?.outcome !== 'parts-needed' ? null : (
+      <form className="space-y-3" aria-label="Find a substitute" onSubmit={(e) => {
+        e.preventDefault();
+        const parsed = parseRatings(ratings);
+        const bad = Object.entries(parsed).filter(([, v]) => typeof v === 'number' && Number.isNaN(v)).map(([k]) => k);
+        setLookupErrors(Object.fromEntries(bad.map((k) => [`ratings.${k}`, 'Enter a number (a decimal comma is fine).'])));
+        if (!bad.length) setSearch({ type, ...parsed, ...(pkg ? { package: pkg } : {}) });
+      }}>
         <p className="text-sm text-ink-soft">Say what the item needs; the stock is checked against the substitution rule.</p>
         <div className="grid gap-3 sm:grid-cols-2">
           <SelectField label="Part needed" value={type} onChange={(e) => { setType(e.target.value as PartType); setRatings({}); setSearch(null); }}>
@@ -71,9 +80,10 @@ export function SalvageForItem({ item }: { item: ItemDetail }) {
           </SelectField>
           <TextField label="Package (optional)" value={pkg} onChange={(e) => setPkg(e.target.value)} placeholder="TO-126, axial…" />
         </div>
-        <RatingFields type={type} value={ratings} onChange={setRatings} />
+        <RatingFields type={type} value={ratings} onChange={setRatings} errors={lookupErrors} />
         <Button type="submit" variant="secondary" className="w-full">Look in the stock</Button>
       </form>
+      )}
       {search && (found.isPending ? <Spinner /> : found.error ? <Alert tone="error">{found.error.message}</Alert> : found.data.length === 0 ? (
         <p className="mt-3 text-sm text-ink-soft">Nothing of that kind in the stock.</p>
       ) : (

@@ -1,5 +1,6 @@
 import type { PartRatings, PartType } from '../../../../shared/salvage/constants';
 import { SelectField, TextField } from '../../components/ui/field';
+import { decodePrintedCode, formatOhms } from '../../../../shared/bench/resistors';
 
 /** Ratings as typed: strings until they are parsed; µF and kΩ are typed as the bench says them. */
 export type RatingsDraft = Partial<Record<'polarity' | 'voltageV' | 'currentA' | 'powerW' | 'resistanceOhm' | 'capacitanceUF' | 'temperatureC' | 'tolerancePct', string>>;
@@ -19,7 +20,7 @@ const FIELDS: Record<PartType, (keyof RatingsDraft)[]> = {
   other: ['voltageV', 'currentA', 'powerW'],
 };
 const LABELS: Record<keyof RatingsDraft, string> = {
-  polarity: 'Polarity', voltageV: 'Voltage (V)', currentA: 'Current (A)', powerW: 'Power (W)', resistanceOhm: 'Resistance (Ω)', capacitanceUF: 'Capacitance (µF)', temperatureC: 'Trip temperature (°C)', tolerancePct: 'Tolerance (%)',
+  polarity: 'Polarity', voltageV: 'Voltage (V)', currentA: 'Current (A)', powerW: 'Power (W)', resistanceOhm: 'Resistance (Ω, e.g. 4k7)', capacitanceUF: 'Capacitance (µF)', temperatureC: 'Trip temperature (°C)', tolerancePct: 'Tolerance (%)',
 };
 const ERROR_KEY: Partial<Record<keyof RatingsDraft, string>> = { capacitanceUF: 'capacitanceF' };
 
@@ -42,10 +43,26 @@ export function RatingFields({ type, value, onChange, errors = {} }: { type: Par
 
 const n = (s?: string) => (s && s.trim() ? Number(s.trim().replace(',', '.')) : undefined);
 
+/** Resistance as the bench writes it: 4700, 4k7, 4.7k, 1R0 or 2M2. */
+function ohms(s?: string): number | undefined {
+  if (!s || !s.trim()) return undefined;
+  const plain = n(s);
+  if (plain !== undefined && !Number.isNaN(plain)) return plain;
+  const t = s.trim().replace(/\s*(Ω|ohms?)$/i, '');
+  const dotted = /^(\d+(?:[.,]\d+)?)([kKmM])$/.exec(t);
+  if (dotted) return Number(dotted[1].replace(',', '.')) * (dotted[2].toLowerCase() === 'k' ? 1e3 : 1e6);
+  try {
+    return decodePrintedCode(t).ohms;
+  } catch {
+    return Number.NaN;
+  }
+}
+
 export function parseRatings(d: RatingsDraft): PartRatings {
   const out: PartRatings = {};
   if (d.polarity) out.polarity = d.polarity as PartRatings['polarity'];
-  for (const k of ['voltageV', 'currentA', 'powerW', 'resistanceOhm', 'temperatureC', 'tolerancePct'] as const) if (n(d[k]) !== undefined) out[k] = n(d[k]);
+  for (const k of ['voltageV', 'currentA', 'powerW', 'temperatureC', 'tolerancePct'] as const) if (n(d[k]) !== undefined) out[k] = n(d[k]);
+  if (ohms(d.resistanceOhm) !== undefined) out.resistanceOhm = ohms(d.resistanceOhm);
   if (n(d.capacitanceUF) !== undefined) out.capacitanceF = n(d.capacitanceUF)! / 1e6;
   return out;
 }
@@ -53,7 +70,7 @@ export function parseRatings(d: RatingsDraft): PartRatings {
 export function ratingsText(r: PartRatings): string {
   return [
     r.polarity,
-    r.resistanceOhm !== undefined && `${r.resistanceOhm} Ω`,
+    r.resistanceOhm !== undefined && formatOhms(r.resistanceOhm),
     r.capacitanceF !== undefined && `${Math.round(r.capacitanceF * 1e6 * 1000) / 1000} µF`,
     r.voltageV !== undefined && `${r.voltageV} V`,
     r.currentA !== undefined && `${r.currentA} A`,

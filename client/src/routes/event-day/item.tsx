@@ -84,7 +84,7 @@ function ItemView({ item }: { item: ItemDetail }) {
       <ConfirmDialog open={confirmTake} tone="primary" title="Take over this item?" message={`It is planned for ${item.placement?.fixerName ?? 'another fixer'}. Tell them you have it, so nobody waits for it.`} confirmLabel="Take it" cancelLabel="Leave it" onCancel={() => setConfirmTake(false)} onConfirm={() => { setConfirmTake(false); start.mutate(); }} />
       {start.error && <Alert tone="error">{start.error.message}</Alert>}
 
-      {item.mains && (started || item.safetyChecks.length > 0) && <SafetySection item={item} />}
+      {item.mains && ((started && !(item.status === 'done' && item.outcome?.outcome !== 'fixed')) || item.safetyChecks.length > 0) && <SafetySection item={item} />}
 
       {!started && !item.outcome ? null : item.outcome && !editing ? (
         <Card className={item.outcome.outcome === 'fixed' ? 'ring-2 ring-sage' : ''}>

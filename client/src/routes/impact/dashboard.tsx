@@ -162,8 +162,14 @@ function Actions({ filter, groupId, groupName }: { filter: StatsFilter; groupId?
   return (
     <div className="space-y-3">
       <div className="flex flex-wrap gap-2">
-        <a href={exportUrl('records', filter)} download className={secondaryLink}>Download records (CSV)</a>
-        <a href={exportUrl('open-repair-data', filter)} download className={secondaryLink}>Open Repair Data export (CSV)</a>
+        {filter.from && filter.to && filter.from > filter.to ? (
+          <p className="text-sm text-ink-soft">Correct the dates to download the records.</p>
+        ) : (
+          <>
+            <a href={exportUrl('records', filter)} download className={secondaryLink}>Download records (CSV)</a>
+            <a href={exportUrl('open-repair-data', filter)} download className={secondaryLink}>Open Repair Data export (CSV)</a>
+          </>
+        )}
         {groupId !== undefined && (
           <>
             <Link to={filter.eventId ? paths.report(filter.eventId) : paths.groupReport(groupId, qs({ from: filter.from, to: filter.to }))} className={secondaryLink}>Printable report</Link>

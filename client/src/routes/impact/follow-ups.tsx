@@ -66,7 +66,7 @@ export function FollowUpsPage() {
 
   const copy = async (f: FollowUp) => {
     try {
-      await navigator.clipboard.writeText(f.rebookUrl);
+      await navigator.clipboard.writeText(f.rebookUrl ?? '');
       setCopied({ itemId: f.itemId, ok: true });
     } catch {
       setCopied({ itemId: f.itemId, ok: false });
@@ -146,6 +146,7 @@ export function FollowUpsPage() {
                     {f.mailedAt ? `Mailed ${shortDay(f.mailedAt, tz)}` : 'Not mailed'}
                     {f.remindedAt ? ` · reminded ${shortDay(f.remindedAt, tz)}` : ''}
                   </dd>
+                  {f.returnVisit && <><dt className="text-ink-soft">Return visit</dt><dd className="min-w-0"><span className="font-mono">{f.returnVisit.reference}</span> · {f.returnVisit.eventTitle}, {formatDay(f.returnVisit.startsAt, tz)}</dd></>}
                   {f.note && <><dt className="text-ink-soft">Note</dt><dd className="min-w-0">{f.note}</dd></>}
                 </dl>
               </div>
@@ -164,7 +165,7 @@ export function FollowUpsPage() {
                   </select>
                 </label>
                 {setStatus.isPending && setStatus.variables?.itemId === f.itemId && <p role="status" className="text-sm text-ink-soft">Saving…</p>}
-                <Button variant="secondary" className="w-full" onClick={() => copy(f)}>Copy re-booking link</Button>
+                {f.rebookUrl && <Button variant="secondary" className="w-full" onClick={() => copy(f)}>Copy re-booking link</Button>}
                 {copied?.itemId === f.itemId && (
                   <p role="status" className="text-sm font-semibold">
                     {copied.ok ? <span className="text-sage">Link copied.</span> : (

@@ -144,7 +144,7 @@ function Report({ r }: { r: EventReport }) {
         </Block>
       </div>
 
-      <Block title="Method and sources">
+      <Block title="Method and sources" long>
         <div className="space-y-2 text-sm leading-relaxed">
           <ul className="list-disc space-y-1 pl-5">
             {method.text.map((line) => <li key={line}>{line}</li>)}
@@ -194,9 +194,10 @@ function Tile({ label, value }: { label: ReactNode; value: string }) {
   );
 }
 
-function Block({ title, children }: { title: string; children: ReactNode }) {
+/** A titled block kept on one page; a long one (the method) may run on to the next instead of leaving a gap. */
+function Block({ title, children, long = false }: { title: string; children: ReactNode; long?: boolean }) {
   return (
-    <section className="break-inside-avoid">
+    <section className={long ? '' : 'break-inside-avoid'}>
       <h2 className="mb-2 text-lg">{title}</h2>
       {children}
     </section>

@@ -712,12 +712,14 @@ function EarthLimit() {
   const m = num(cord);
   const ohms = num(reading);
   const limit = m !== undefined && !Number.isNaN(m) ? attempt(() => protectiveConductorLimitOhm(m)) : null;
-  const pass = limit?.ok && ohms !== undefined && !Number.isNaN(ohms) ? ohms <= limit.value : null;
+  // A negative reading is a meter or lead fault, never a pass.
+  const negative = ohms !== undefined && ohms < 0;
+  const pass = limit?.ok && ohms !== undefined && !Number.isNaN(ohms) && !negative ? ohms <= limit.value : null;
   return (
     <>
       <div className="grid gap-3 sm:grid-cols-2">
         <TextField label="Cord length (m)" inputMode="decimal" autoComplete="off" value={cord} onChange={(e) => setCord(e.target.value)} error={bad(cord) ? 'Enter metres, e.g. 2.' : undefined} hint="0.3 Ω up to 5 m, +0.1 Ω per further 7.5 m begun, at most 1.0 Ω." />
-        <TextField label="Reading (Ω, optional)" inputMode="decimal" autoComplete="off" value={reading} onChange={(e) => setReading(e.target.value)} error={bad(reading) ? 'Enter ohms, e.g. 0.12.' : undefined} hint="Plug earth pin to the earthed metal." />
+        <TextField label="Reading (Ω, optional)" inputMode="decimal" autoComplete="off" value={reading} onChange={(e) => setReading(e.target.value)} error={bad(reading) ? 'Enter ohms, e.g. 0.12.' : negative ? 'A reading below 0 Ω means the leads were not nulled or the meter is faulty: null the leads and measure again.' : undefined} hint="Plug earth pin to the earthed metal." />
       </div>
       <Result id="earth-limit" tone={!limit ? 'neutral' : !limit.ok || pass === false ? 'bad' : pass ? 'good' : 'neutral'}>
         {!limit ? <Prompt>Enter the cord length.</Prompt> : !limit.ok ? <p className="font-semibold">{limit.error}</p> : (

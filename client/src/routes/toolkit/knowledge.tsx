@@ -52,9 +52,12 @@ export function KnowledgePage() {
       ) : results.data.length === 0 ? (
         <EmptyState title="No notes match" icon="○">Try fewer words, or the kind of item alone.</EmptyState>
       ) : (
+        <>
+        <p className="text-sm text-ink-soft" role="status">{results.data.length === 30 ? 'The 30 closest notes; narrow the search to see others.' : `${results.data.length} ${results.data.length === 1 ? 'note' : 'notes'}, closest first.`}</p>
         <ol className="space-y-3" aria-label="Results">
           {results.data.map((e: KnowledgeEntry) => <li key={e.itemId}><KnowledgeCard entry={e} when={formatDay(e.eventDate, 'Europe/London')} /></li>)}
         </ol>
+        </>
       )}
     </div>
   );

@@ -35,7 +35,9 @@ export function SalvagePage() {
         <Button type="button" onClick={() => setAdding(true)}>Add parts</Button>
       </form>
       {adding && <AddPartForm groupId={groupId} sourceItemId={Number(params.get('from')) || undefined} onDone={() => setAdding(false)} />}
-      {parts.isPending ? <Spinner /> : parts.error ? <Alert tone="error">{parts.error.message}</Alert> : parts.data.length === 0 ? (
+      {parts.isPending ? <Spinner /> : parts.error ? <Alert tone="error">{parts.error.message}</Alert> : parts.data.length === 0 && (q || type) ? (
+        <EmptyState title="No parts match" icon="○">Nothing in the boxes matches {q ? `“${q}”` : 'that kind'}{params.get('all') ? '' : ' (used-up parts are hidden)'}.</EmptyState>
+      ) : parts.data.length === 0 ? (
         <EmptyState title="No parts here yet" icon="▣">When an item reaches the end of its life, save its good parts here: fuses, switches, motors, capacitors, transistors.</EmptyState>
       ) : (
         <ul className="grid gap-3 md:grid-cols-2" aria-label="Parts">
@@ -51,6 +53,7 @@ function PartCard({ groupId, part: p, canRemove }: { groupId: number; part: Salv
   const update = useUpdatePart(groupId);
   const remove = useRemovePart(groupId);
   const [confirm, setConfirm] = useState(false);
+  const [took, setTook] = useState<string | null>(null);
   return (
     <article className="rounded-xl bg-white p-4 shadow-sm ring-1 ring-ink/5" data-testid="salvage-part">
       <div className="flex items-baseline justify-between gap-2">
@@ -60,10 +63,11 @@ function PartCard({ groupId, part: p, canRemove }: { groupId: number; part: Salv
       <p className="text-sm text-ink-soft">{p.typeLabel}{p.package && ` · ${p.package}`}{p.pinout && ` · pins ${p.pinout}`}{ratingsText(p.ratings) && ` · ${ratingsText(p.ratings)}`}</p>
       {p.notes && <p className="mt-1 text-sm">{p.notes}</p>}
       {(take.error || update.error) && <div className="mt-2"><Alert tone="error">{(take.error ?? update.error)!.message}</Alert></div>}
+      {took && <p role="status" className="mt-2 text-sm font-semibold text-sage">{took}</p>}
       <div className="mt-2 flex flex-wrap gap-2">
-        <Button variant="secondary" disabled={p.quantity === 0} busy={take.isPending} onClick={() => take.mutate(p.id)}>Take one</Button>
-        <Button variant="quiet" onClick={() => update.mutate({ id: p.id, quantity: p.quantity + 1 })}>One more in the box</Button>
-        {canRemove && <Button variant="quiet" onClick={() => setConfirm(true)}>Remove</Button>}
+        <Button variant="secondary" disabled={p.quantity === 0} busy={take.isPending} aria-label={`Take one ${p.value}`} onClick={() => take.mutate(p.id, { onSuccess: (after) => setTook(`Took one from ${after.box}: ${after.quantity} left.`) })}>Take one</Button>
+        <Button variant="quiet" aria-label={`Put one more ${p.value} in the box`} onClick={() => update.mutate({ id: p.id, quantity: p.quantity + 1 }, { onSuccess: () => setTook(null) })}>{took ? 'Put it back' : 'One more in the box'}</Button>
+        {canRemove && <Button variant="quiet" aria-label={`Remove ${p.value}`} onClick={() => setConfirm(true)}>Remove</Button>}
       </div>
       <ConfirmDialog open={confirm} title="Remove this part from the list?" message={`${p.value} (${p.quantity} in ${p.box}) goes from the stock list. The record of where earlier ones went stays with those items.`} confirmLabel="Remove" onCancel={() => setConfirm(false)} onConfirm={() => remove.mutate(p.id, { onSuccess: () => setConfirm(false) })} busy={remove.isPending} />
     </article>

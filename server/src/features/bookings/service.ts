@@ -61,9 +61,9 @@ async function takePlaces(tx: Tx, slotId: number, n: number, fromHeld: boolean, 
 }
 
 /** Per-skill limits (e.g. at most 3 textile items per slot), taken the same conditional way. */
-async function takeSkillPlaces(tx: Tx, slotId: number, limits: Record<string, number | undefined>, perSkill: Map<string, number>) {
+async function takeSkillPlaces(tx: Tx, slotId: number, limits: Record<string, number | undefined>, perSkill: Map<string, number>, spare = 0) {
   for (const [skill, n] of perSkill) {
-    const limit = limits[skill];
+    const limit = limits[skill] === undefined ? undefined : limits[skill]! + spare;
     if (limit === undefined) continue;
     await tx.insert(slotSkillCounts).values({ slotId, skill, booked: 0 }).onDuplicateKeyUpdate({ set: { booked: sql`${slotSkillCounts.booked}` } });
     const res = await tx
@@ -121,7 +121,7 @@ function prepareBooking(ctx: AppContext): Prepared {
  */
 async function insertBooking(ctx: AppContext, tx: Tx, row: Awaited<ReturnType<typeof bookableSlot>>, input: Pick<BookingInput, 'visitor' | 'items'>, fromHeld: boolean, prepared: Prepared, cats: Awaited<ReturnType<typeof screen>>, returnOfItemId?: number) {
   await takePlaces(tx, row.slot.id, input.items.length, fromHeld, returnOfItemId !== undefined);
-  await takeSkillPlaces(tx, row.slot.id, row.event.skillLimits, countBySkill(input.items.map((i) => cats.get(i.categoryId)!.skill)));
+  await takeSkillPlaces(tx, row.slot.id, row.event.skillLimits, countBySkill(input.items.map((i) => cats.get(i.categoryId)!.skill)), returnOfItemId !== undefined ? 1 : 0);
   const { reference, token } = prepared;
   const [{ id }] = await tx
     .insert(bookings)

@@ -1,5 +1,6 @@
 import { createHmac, timingSafeEqual } from 'node:crypto';
 import { and, asc, eq, gt, inArray, isNotNull, isNull, lte } from 'drizzle-orm';
+import { alias } from 'drizzle-orm/mysql-core';
 import type { Outcome } from '../../../../shared/event-day/constants';
 import { FOLLOW_UP_LABELS, FOLLOW_UP_REMINDER_DAYS, reminderDue, type FollowUpStatus } from '../../../../shared/impact/follow-ups';
 import type { AppContext } from '../../context';
@@ -75,14 +76,20 @@ export async function markCameBack(tx: DbOrTx, itemIds: number[]) {
 
 /** The organisers' list: every item of the group waiting for a part, oldest first, with what happened since. */
 export async function listFollowUps(ctx: AppContext, groupId: number) {
+  const ret = alias(bookingItems, 'return_item');
+  const retBooking = alias(bookings, 'return_booking');
+  const retEvent = alias(events, 'return_event');
   const rows = await ctx.database.db
-    .select({ f: followUps, categoryName: categories.name, brand: bookingItems.brand, model: bookingItems.model, visitorName: bookings.visitorName, visitorEmail: bookings.visitorEmail, visitorPhone: bookings.visitorPhone, reference: bookings.reference, eventTitle: events.title, eventStartsAt: events.startsAt, part: itemOutcomes.partDescription, partLink: itemOutcomes.partLink, partCostCents: itemOutcomes.partCostCents })
+    .select({ f: followUps, categoryName: categories.name, brand: bookingItems.brand, model: bookingItems.model, visitorName: bookings.visitorName, visitorEmail: bookings.visitorEmail, visitorPhone: bookings.visitorPhone, reference: bookings.reference, eventTitle: events.title, eventStartsAt: events.startsAt, part: itemOutcomes.partDescription, partLink: itemOutcomes.partLink, partCostCents: itemOutcomes.partCostCents, returnReference: retBooking.reference, returnEventTitle: retEvent.title, returnStartsAt: retEvent.startsAt })
     .from(followUps)
     .innerJoin(bookingItems, eq(bookingItems.id, followUps.itemId))
     .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
     .innerJoin(events, eq(events.id, bookings.eventId))
     .innerJoin(categories, eq(categories.id, bookingItems.categoryId))
     .leftJoin(itemOutcomes, eq(itemOutcomes.itemId, followUps.itemId))
+    .leftJoin(ret, eq(ret.id, followUps.returnItemId))
+    .leftJoin(retBooking, eq(retBooking.id, ret.bookingId))
+    .leftJoin(retEvent, eq(retEvent.id, retBooking.eventId))
     .where(eq(followUps.groupId, groupId))
     .orderBy(asc(followUps.createdAt));
   const now = new Date();
@@ -94,7 +101,8 @@ export async function listFollowUps(ctx: AppContext, groupId: number) {
     part: r.part, partLink: r.partLink, partCost: r.partCostCents === null ? null : r.partCostCents / 100,
     visitor: { name: r.visitorName, email: r.visitorEmail, phone: r.visitorPhone, reference: r.reference },
     event: { title: r.eventTitle, startsAt: r.eventStartsAt },
-    rebookUrl: rebookUrl(ctx, r.f.itemId),
+    rebookUrl: ['open', 'part-ordered'].includes(r.f.status) ? rebookUrl(ctx, r.f.itemId) : null,
+    returnVisit: r.returnReference ? { reference: r.returnReference, eventTitle: r.returnEventTitle, startsAt: r.returnStartsAt } : null,
   }));
 }
 

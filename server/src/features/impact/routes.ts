@@ -56,7 +56,8 @@ export function impactRoutes(ctx: AppContext) {
   const csv = (name: string, make: (f: ReturnType<typeof filter>) => Promise<string>) => async (req: Request, res: Response) => {
     const f = filter(req);
     res.setHeader('Content-Type', 'text/csv; charset=utf-8');
-    res.setHeader('Content-Disposition', `attachment; filename="${name}-${f.groupId ?? 'network'}-${new Date().toISOString().slice(0, 10)}.csv"`);
+    res.setHeader('Content-Disposition', `attachment; filename="${[name, f.groupId ? `group-${f.groupId}` : 'network', f.eventId ? `session-${f.eventId}` : '', f.from ? `from-${f.from}` : '', f.to ? `to-${f.to}` : '', `made-${new Date().toISOString().slice(0, 10)}`].filter(Boolean).join('-')}.csv"`);
+    res.setHeader('Cache-Control', 'private, no-store');
     res.send(await make(f));
   };
   r.get('/exports/open-repair-data.csv', guard, csv('open-repair-data', (f) => openRepairDataCsv(ctx, f)));

@@ -65,8 +65,9 @@ export async function searchKnowledge(ctx: AppContext, user: SessionUser, q: z.o
   if (text) wanted.push(sql`${match(text)} > 0`);
   if (q.brand) wanted.push(eq(knowledgeEntries.brand, q.brand));
   if (q.model) wanted.push(eq(knowledgeEntries.model, q.model));
-  if (q.categoryId) wanted.push(eq(knowledgeEntries.categoryId, q.categoryId));
-  if (wanted.length) parts.push(or(...wanted));
+  // A chosen kind of item narrows the search; brand, model and words rank within it.
+  if (q.categoryId) parts.push(eq(knowledgeEntries.categoryId, q.categoryId));
+  else if (wanted.length) parts.push(or(...wanted));
   const rows = await select(db, score).where(and(...parts)).orderBy(desc(sql`score`), desc(knowledgeEntries.writtenUp), desc(knowledgeEntries.eventDate)).limit(30);
   return withPhotos(db, rows.map(dto));
 }
