@@ -16,7 +16,12 @@ export function parseReading(text: string): ResistanceReading | null {
   const t = text.trim().replace(/\s+/g, '').toUpperCase();
   if (t === '') return null;
   if (['OL', 'O.L', 'O.L.', '-OL', 'OPEN', '∞', 'INF'].includes(t)) return 'OL';
-  const n = Number(t.replace(',', '.'));
+  // A meter's own display: "4.71k", "1.2M", or "4K7" as printed on the part, and an Ω sign or not.
+  const m = /^(\d+(?:[.,]\d+)?)([KM])?(\d*)Ω?$/.exec(t.replace(/OHMS?$/, ''));
+  if (!m) return null;
+  const scale = m[2] === 'K' ? 1e3 : m[2] === 'M' ? 1e6 : 1;
+  if (m[3] && (!m[2] || /[.,]/.test(m[1]))) return null;
+  const n = Number(`${m[1].replace(',', '.')}${m[3] ? `.${m[3]}` : ''}`) * scale;
   return Number.isFinite(n) ? n : null;
 }
 

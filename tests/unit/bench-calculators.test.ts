@@ -400,3 +400,17 @@ describe('protective conductor limit from cord length, through shared/safety/lim
     [65, 1.0],
   ])('%s m of cord → %s Ω', (m, ohm) => expect(protectiveConductorLimitOhm(m)).toBe(ohm));
 });
+
+describe('meter readings as the display shows them (common practice, no published source)', () => {
+  it('reads 1k, 4.71k, 4K7, 1.2M and 0,47 Ω; refuses nonsense', async () => {
+    const { parseReading } = await import('../../shared/bench/measure');
+    expect(parseReading('1k')).toBe(1000);
+    expect(parseReading('4.71k')).toBeCloseTo(4710, 9);
+    expect(parseReading('4K7')).toBeCloseTo(4700, 9);
+    expect(parseReading('1.2M')).toBeCloseTo(1.2e6, 3);
+    expect(parseReading('0,47 Ω')).toBeCloseTo(0.47, 9);
+    expect(parseReading('OL')).toBe('OL');
+    expect(parseReading('1.2.3')).toBeNull();
+    expect(parseReading('4.7K7')).toBeNull();
+  });
+});

@@ -1,5 +1,6 @@
 import type { ReactNode } from 'react';
 import { Link, useParams } from 'react-router';
+import { usePublicGroups } from '../../features/groups/api/public-groups';
 import { Area, AreaChart, Bar, BarChart, CartesianGrid, Legend, Pie, PieChart, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import { OUTCOME_LABELS } from '../../../../shared/event-day/constants';
 import { Alert, Card, EmptyState, PageTitle, Spinner } from '../../components/ui/feedback';
@@ -31,6 +32,7 @@ export function PublicImpactPage() {
       <title>{`Impact · ${title}`}</title>
       {groupId !== undefined && <Link to={paths.publicImpact()} className="text-sm font-bold text-navy underline">← All groups on Mendery</Link>}
       <PageTitle title={title} lead={d.group ? 'What volunteers and visitors have repaired together at this group’s sessions.' : 'What volunteers and visitors have repaired together at the community repair sessions on Mendery.'} />
+      {groupId === undefined && <GroupLinks />}
 
       {d.items === 0 ? (
         <EmptyState title="No repairs counted yet" icon="▤">Figures appear here after the first session, once the fixers have recorded what happened to each item.</EmptyState>
@@ -192,5 +194,16 @@ function MethodCard({ method }: { method: Method }) {
         )}
       </section>
     </Card>
+  );
+}
+
+/** On the network page: each group's own figures, one tap away. */
+function GroupLinks() {
+  const groups = usePublicGroups();
+  if (!groups.data?.length) return null;
+  return (
+    <nav aria-label="Groups" className="flex flex-wrap gap-2">
+      {groups.data.map((g) => <Link key={g.id} to={paths.publicImpact(g.id)} className="rounded-lg bg-white px-3 py-2 text-sm font-semibold text-navy ring-1 ring-navy/20 hover:bg-navy/5">{g.name}{g.town ? ` · ${g.town}` : ''}</Link>)}
+    </nav>
   );
 }

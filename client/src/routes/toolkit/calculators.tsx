@@ -649,7 +649,7 @@ function Transistor() {
             {result.value.refusals.length > 0 && <ul className="mt-1 list-disc space-y-1 pl-5 font-semibold">{result.value.refusals.map((r) => <li key={r}>{r}</li>)}</ul>}
             {result.value.warnings.length > 0 && <ul className="mt-1 list-disc space-y-1 pl-5 text-ink">{result.value.warnings.map((w) => <li key={w}>{w}</li>)}</ul>}
             {result.value.passed.length > 0 && <p className="mt-2 text-sm text-ink-soft">Passed: {result.value.passed.join(' ')}</p>}
-            <p className="mt-1 text-sm text-ink-soft">Not compared: speed and gain unless given. Check the datasheets.</p>
+            <p className="mt-1 text-sm text-ink-soft">Gain, speed and gate threshold are compared only when given for both parts. Check the datasheets before fitting.</p>
           </>
         )}
       </Result>
