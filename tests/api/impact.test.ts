@@ -242,3 +242,14 @@ describe('return visits and skill limits', () => {
     expect(r.status).toBe(201);
   });
 });
+
+describe('a cancelled session', () => {
+  it('counts nothing once cancelled, even after check-ins', async () => {
+    // Today's Kestlebridge session has checked-in items and outcomes.
+    const before = (await as.organiser.get(`/api/stats?eventId=${todayId}`)).json;
+    expect(before.items).toBeGreaterThan(0);
+    const c = await as.organiser.post(`/api/events/${todayId}/cancel`, { reason: 'Hall flooded.' });
+    expect(c.status).toBeLessThan(300);
+    expect((await as.organiser.get(`/api/stats?eventId=${todayId}`)).json.items).toBe(0);
+  });
+});

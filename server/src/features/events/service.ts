@@ -9,6 +9,7 @@ import type { DbOrTx } from '../../db/client';
 import { bookings, events, groupExclusions, repairGroups, slots, venues, waitlistEntries } from '../../db/schema/index';
 import { HttpError, notFound } from '../../http/errors';
 import { enqueueMail } from '../../mail/outbox';
+import { refreshEventCells } from '../impact/cells';
 import { composeMail } from '../../mail/templates';
 import { excludedCategoryIds } from '../catalogue/service';
 
@@ -133,6 +134,8 @@ export async function changeStatus(ctx: AppContext, id: number, action: keyof ty
         }));
       }
       await tx.update(bookings).set({ status: 'cancelled', cancelledAt: new Date() }).where(and(eq(bookings.eventId, id), eq(bookings.status, 'confirmed')));
+      // A cancelled session counts nothing in the statistics, even if the desk had started.
+      await refreshEventCells(tx, [id]);
       // Nothing is booked or held at a cancelled event.
       await tx.update(slots).set({ booked: 0, held: 0 }).where(eq(slots.eventId, id));
       await tx.update(waitlistEntries).set({ status: 'withdrawn' }).where(and(eq(waitlistEntries.eventId, id), inArray(waitlistEntries.status, ['waiting', 'offered'])));
