@@ -13,7 +13,7 @@ import { useGroupEvents } from '../../features/events/api/events';
 import { useGroupSettings } from '../../features/events/api/organiser';
 import { exportUrl, qs, useImpactSettings, useMethod, useSetImpactSettings, useStats, type RecordsFilter, type Stats, type StatsFilter } from '../../features/impact/api';
 import { ApiError } from '../../lib/api';
-import { CO2E, COLOURS, ChartCard, FactorTable, isoDate, linkButton, longMonth, monthLabel, oneDp, percent, positiveInt, whole } from '../../features/impact/display';
+import { CO2E, COLOURS, ChartCard, FactorTable, HorizontalBars, isoDate, linkButton, longMonth, monthLabel, oneDp, percent, positiveInt, whole } from '../../features/impact/display';
 
 
 const plural = (n: number, one: string, many = `${one}s`) => `${whole.format(n)} ${n === 1 ? one : many}`;
@@ -340,15 +340,7 @@ function Figures({ stats, filter }: { stats: Stats; filter: StatsFilter }) {
             </FigureTable>
           }
         >
-          <ResponsiveContainer width="100%" height={260}>
-            <BarChart data={topCategories} layout="vertical" margin={{ top: 0, right: 12, bottom: 0, left: 0 }} accessibilityLayer={false}>
-              <CartesianGrid horizontal={false} stroke={COLOURS.grid} />
-              <XAxis type="number" allowDecimals={false} tick={{ fontSize: 12 }} />
-              <YAxis type="category" dataKey="name" width={112} tick={{ fontSize: 12, maxLines: 2 }} />
-              <Tooltip cursor={{ fill: 'rgba(35,57,93,0.06)' }} />
-              <Bar isAnimationActive={false} dataKey="items" name="Items" fill={COLOURS.advice} radius={[0, 3, 3, 0]} maxBarSize={28} cursor="pointer" onClick={(_, i) => go({ categoryId: topCategories[i].categoryId })} />
-            </BarChart>
-          </ResponsiveContainer>
+          <HorizontalBars data={topCategories} labelKey="name" bars={[{ dataKey: 'items', name: 'Items', fill: COLOURS.advice }]} onPick={(c) => go({ categoryId: c.categoryId })} />
         </ChartCard>
 
         <ChartCard
@@ -374,15 +366,7 @@ function Figures({ stats, filter }: { stats: Stats; filter: StatsFilter }) {
           }
         >
           {ratedShown.length > 0 && (
-            <ResponsiveContainer width="100%" height={260}>
-              <BarChart data={ratedShown} layout="vertical" margin={{ top: 0, right: 12, bottom: 0, left: 0 }} accessibilityLayer={false}>
-                <CartesianGrid horizontal={false} stroke={COLOURS.grid} />
-                <XAxis type="number" domain={[0, 100]} unit="%" tick={{ fontSize: 12 }} />
-                <YAxis type="category" dataKey="name" width={112} tick={{ fontSize: 12, maxLines: 2 }} />
-                <Tooltip cursor={{ fill: 'rgba(35,57,93,0.06)' }} formatter={(v) => [`${v}%`, 'Fix rate']} />
-                <Bar isAnimationActive={false} dataKey="rate" name="Fix rate" fill={COLOURS.fixed} radius={[0, 3, 3, 0]} maxBarSize={28} cursor="pointer" onClick={(_, i) => go({ categoryId: ratedShown[i].categoryId })} />
-              </BarChart>
-            </ResponsiveContainer>
+            <HorizontalBars data={ratedShown} labelKey="name" percentAxis bars={[{ dataKey: 'rate', name: 'Fix rate', fill: COLOURS.fixed }]} onPick={(c) => go({ categoryId: c.categoryId })} />
           )}
         </ChartCard>
 
@@ -403,15 +387,7 @@ function Figures({ stats, filter }: { stats: Stats; filter: StatsFilter }) {
           }
         >
           {barriers.length > 0 && (
-            <ResponsiveContainer width="100%" height={260}>
-              <BarChart data={barriers} layout="vertical" margin={{ top: 0, right: 12, bottom: 0, left: 0 }} accessibilityLayer={false}>
-                <CartesianGrid horizontal={false} stroke={COLOURS.grid} />
-                <XAxis type="number" allowDecimals={false} tick={{ fontSize: 12 }} />
-                <YAxis type="category" dataKey="label" width={124} tick={{ fontSize: 12, maxLines: 2 }} />
-                <Tooltip cursor={{ fill: 'rgba(35,57,93,0.06)' }} />
-                <Bar isAnimationActive={false} dataKey="count" name="Items" fill={COLOURS.endOfLife} radius={[0, 3, 3, 0]} maxBarSize={28} cursor="pointer" onClick={(_, i) => go({ barrier: barriers[i].barrier })} />
-              </BarChart>
-            </ResponsiveContainer>
+            <HorizontalBars data={barriers} labelKey="label" labelWidth={140} bars={[{ dataKey: 'count', name: 'Items', fill: COLOURS.endOfLife }]} onPick={(b) => go({ barrier: b.barrier })} />
           )}
         </ChartCard>
       </div>

@@ -1,13 +1,13 @@
 import type { ReactNode } from 'react';
 import { Link, useParams } from 'react-router';
 import { usePublicGroups } from '../../features/groups/api/public-groups';
-import { Area, AreaChart, Bar, BarChart, CartesianGrid, Legend, Pie, PieChart, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
+import { Area, AreaChart, CartesianGrid, Legend, Pie, PieChart, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import { OUTCOME_LABELS } from '../../../../shared/event-day/constants';
 import { Alert, Card, EmptyState, PageTitle, Spinner } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
 import { usePublicImpact, type Method, type PublicImpact } from '../../features/impact/api';
 import { ApiError } from '../../lib/api';
-import { CO2E, COLOURS, ChartCard, FactorTable, linkButton, longMonth, monthLabel, oneDp, whole } from '../../features/impact/display';
+import { CO2E, COLOURS, ChartCard, FactorTable, HorizontalBars, linkButton, longMonth, monthLabel, oneDp, whole } from '../../features/impact/display';
 
 
 
@@ -137,17 +137,7 @@ function Charts({ d }: { d: PublicImpact }) {
         summary={top.length ? `Most often: ${top.slice(0, 3).map((c) => `${c.name.toLowerCase()} (${c.items})`).join(', ')}.` : 'No categories yet.'}
         table={<SimpleTable head={['Category', 'Items', 'Fixed']} rows={d.byCategory.map((c) => ({ key: String(c.categoryId), cells: [c.name, whole.format(c.items), whole.format(c.fixed)] }))} />}
       >
-        <ResponsiveContainer width="100%" height={260}>
-          <BarChart data={top} layout="vertical" margin={{ top: 0, right: 12, bottom: 0, left: 0 }} accessibilityLayer={false}>
-            <CartesianGrid horizontal={false} stroke={COLOURS.grid} />
-            <XAxis type="number" allowDecimals={false} tick={{ fontSize: 12 }} />
-            <YAxis type="category" dataKey="name" width={112} tick={{ fontSize: 12, maxLines: 2 }} />
-            <Tooltip cursor={{ fill: 'rgba(35,57,93,0.06)' }} />
-            <Legend wrapperStyle={{ fontSize: 12 }} itemSorter={null} formatter={(value) => <span className="text-ink">{value}</span>} />
-            <Bar isAnimationActive={false} dataKey="items" name="Brought in" fill={COLOURS.advice} radius={[0, 3, 3, 0]} maxBarSize={28} />
-            <Bar isAnimationActive={false} dataKey="fixed" name="Fixed" fill={COLOURS.fixed} radius={[0, 3, 3, 0]} maxBarSize={28} />
-          </BarChart>
-        </ResponsiveContainer>
+        <HorizontalBars data={top} labelKey="name" legend bars={[{ dataKey: 'items', name: 'Brought in', fill: COLOURS.advice }, { dataKey: 'fixed', name: 'Fixed', fill: COLOURS.fixed }]} />
       </ChartCard>
     </div>
   );
