@@ -1,13 +1,22 @@
 /** Dates as people at the event read them: in the group's time zone, in plain English. */
 export function formatDay(d: Date | string, timeZone: string): string {
-  return new Intl.DateTimeFormat('en-GB', { timeZone, weekday: 'long', day: 'numeric', month: 'long', year: 'numeric' }).format(new Date(d));
+  return new Intl.DateTimeFormat('en-GB', {
+    timeZone,
+    weekday: 'long',
+    day: 'numeric',
+    month: 'long',
+    year: 'numeric',
+  }).format(new Date(d));
 }
 
 export function formatTime(d: Date | string, timeZone: string): string {
-  return new Intl.DateTimeFormat('en-GB', { timeZone, hour: '2-digit', minute: '2-digit', hourCycle: 'h23' }).format(new Date(d));
+  return new Intl.DateTimeFormat('en-GB', { timeZone, hour: '2-digit', minute: '2-digit', hourCycle: 'h23' }).format(
+    new Date(d),
+  );
 }
 
-export const formatTimeRange = (a: Date | string, b: Date | string, timeZone: string) => `${formatTime(a, timeZone)}–${formatTime(b, timeZone)}`;
+export const formatTimeRange = (a: Date | string, b: Date | string, timeZone: string) =>
+  `${formatTime(a, timeZone)}–${formatTime(b, timeZone)}`;
 
 export const WHAT_TO_BRING = [
   'The broken item itself, cleaned if it has been in a kitchen or a garden.',

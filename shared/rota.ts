@@ -18,7 +18,8 @@ export interface Coverage {
   fixers: number;
 }
 
-const covers = (s: RotaShift, slot: RotaSlot) => s.startsAt.getTime() <= slot.startsAt.getTime() && s.endsAt.getTime() >= slot.endsAt.getTime();
+const covers = (s: RotaShift, slot: RotaSlot) =>
+  s.startsAt.getTime() <= slot.startsAt.getTime() && s.endsAt.getTime() >= slot.endsAt.getTime();
 
 export function coverage(shifts: RotaShift[], slots: RotaSlot[], skills: readonly string[]): Coverage[] {
   return slots.map((slot) => {
@@ -37,7 +38,11 @@ export interface Gap {
 }
 
 /** Runs of slots where items needing a skill are booked but no fixer with that skill is present. */
-export function gaps(cover: Coverage[], demand: { slotIndex: number; skill: string }[], skills: readonly string[]): Gap[] {
+export function gaps(
+  cover: Coverage[],
+  demand: { slotIndex: number; skill: string }[],
+  skills: readonly string[],
+): Gap[] {
   const out: Gap[] = [];
   for (const skill of skills) {
     let open: Gap | null = null;

@@ -14,7 +14,11 @@ createRoot(document.getElementById('root')!).render(
   <StrictMode>
     <PersistQueryClientProvider
       client={queryClient}
-      persistOptions={{ persister: pendingWritesPersister, maxAge: 7 * 24 * 3600_000, dehydrateOptions: { shouldDehydrateQuery: () => false } }}
+      persistOptions={{
+        persister: pendingWritesPersister,
+        maxAge: 7 * 24 * 3600_000,
+        dehydrateOptions: { shouldDehydrateQuery: () => false },
+      }}
       // Writes made offline before a reload are sent as soon as they are restored (if online).
       onSuccess={() => void queryClient.resumePausedMutations()}
     >

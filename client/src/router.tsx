@@ -18,10 +18,22 @@ import { ManageBookingPage } from './routes/bookings/manage';
 import { BookingCodePage, ClaimOfferPage } from './routes/bookings/claim';
 
 /** Pages most visitors never open load on demand, keeping the first load small on a phone. */
-const page = (load: () => Promise<Record<string, React.ComponentType>>, name: string, allow?: (u: SessionUser) => boolean) => ({
+const page = (
+  load: () => Promise<Record<string, React.ComponentType>>,
+  name: string,
+  allow?: (u: SessionUser) => boolean,
+) => ({
   lazy: async () => {
     const Component = (await load())[name];
-    return { Component: allow ? () => <RequireRole allow={allow}><Component /></RequireRole> : Component };
+    return {
+      Component: allow
+        ? () => (
+            <RequireRole allow={allow}>
+              <Component />
+            </RequireRole>
+          )
+        : Component,
+    };
   },
 });
 
@@ -38,11 +50,40 @@ function StartRedirect() {
 
 export const router = createBrowserRouter([
   // Pages for a TV and for the printer: no header, no menu.
-  { path: 'events/:eventId/hall', errorElement: <RouteError />, hydrateFallbackElement: <Spinner />, ...page(() => import('./routes/event-day/hall-display'), 'HallDisplayPage') },
-  { path: 'events/:eventId/report', errorElement: <RouteError />, hydrateFallbackElement: <Spinner />, ...page(() => import('./routes/impact/report'), 'EventReportPage', organiser) },
-  { path: 'groups/:groupId/report', errorElement: <RouteError />, hydrateFallbackElement: <Spinner />, ...page(() => import('./routes/impact/report'), 'GroupReportPage', organiser) },
-  { path: 'embed/impact', errorElement: <RouteError />, hydrateFallbackElement: <Spinner />, ...page(() => import('./routes/impact/embed'), 'ImpactWidgetPage') },
-  { path: 'events/:eventId/tags', errorElement: <RouteError />, hydrateFallbackElement: <Spinner />, ...page(() => import('./routes/event-day/tags'), 'TagSheetPage', (u) => staff(u)) },
+  {
+    path: 'events/:eventId/hall',
+    errorElement: <RouteError />,
+    hydrateFallbackElement: <Spinner />,
+    ...page(() => import('./routes/event-day/hall-display'), 'HallDisplayPage'),
+  },
+  {
+    path: 'events/:eventId/report',
+    errorElement: <RouteError />,
+    hydrateFallbackElement: <Spinner />,
+    ...page(() => import('./routes/impact/report'), 'EventReportPage', organiser),
+  },
+  {
+    path: 'groups/:groupId/report',
+    errorElement: <RouteError />,
+    hydrateFallbackElement: <Spinner />,
+    ...page(() => import('./routes/impact/report'), 'GroupReportPage', organiser),
+  },
+  {
+    path: 'embed/impact',
+    errorElement: <RouteError />,
+    hydrateFallbackElement: <Spinner />,
+    ...page(() => import('./routes/impact/embed'), 'ImpactWidgetPage'),
+  },
+  {
+    path: 'events/:eventId/tags',
+    errorElement: <RouteError />,
+    hydrateFallbackElement: <Spinner />,
+    ...page(
+      () => import('./routes/event-day/tags'),
+      'TagSheetPage',
+      (u) => staff(u),
+    ),
+  },
   {
     element: <AppShell />,
     errorElement: <RouteError />,
@@ -58,20 +99,50 @@ export const router = createBrowserRouter([
       { path: 'setup', element: <SetupPage /> },
       { path: 'join/:token', ...page(() => import('./routes/auth/join'), 'JoinPage') },
       { path: 'start', element: <StartRedirect /> },
-      { path: 'bench', ...page(() => import('./routes/volunteers/bench'), 'BenchPage', (u) => hasRole(u, 'fixer') || hasRole(u, 'host')) },
-      { path: 'me/skills', ...page(() => import('./routes/volunteers/my-skills'), 'MySkillsPage', (u) => hasRole(u, 'fixer')) },
-      { path: 'groups/:groupId/skills', ...page(() => import('./routes/volunteers/skills-matrix'), 'SkillsMatrixPage', organiser) },
+      {
+        path: 'bench',
+        ...page(
+          () => import('./routes/volunteers/bench'),
+          'BenchPage',
+          (u) => hasRole(u, 'fixer') || hasRole(u, 'host'),
+        ),
+      },
+      {
+        path: 'me/skills',
+        ...page(
+          () => import('./routes/volunteers/my-skills'),
+          'MySkillsPage',
+          (u) => hasRole(u, 'fixer'),
+        ),
+      },
+      {
+        path: 'groups/:groupId/skills',
+        ...page(() => import('./routes/volunteers/skills-matrix'), 'SkillsMatrixPage', organiser),
+      },
       { path: 'events/:eventId/board', ...page(() => import('./routes/triage/board'), 'TriageBoardPage', organiser) },
       { path: 'events/:eventId/rota', ...page(() => import('./routes/triage/rota'), 'RotaPage', organiser) },
       { path: 'events/:eventId/benches', ...page(() => import('./routes/triage/benches'), 'BenchesPage', organiser) },
       { path: 'desk', ...page(() => import('./routes/event-day/desk'), 'DeskHomePage', staff) },
       { path: 'desk/:eventId', ...page(() => import('./routes/event-day/desk'), 'DeskPage', staff) },
-      { path: 'items/:itemId', ...page(() => import('./routes/event-day/item'), 'ItemPage', (u) => staff(u) || hasRole(u, 'fixer')) },
+      {
+        path: 'items/:itemId',
+        ...page(
+          () => import('./routes/event-day/item'),
+          'ItemPage',
+          (u) => staff(u) || hasRole(u, 'fixer'),
+        ),
+      },
       { path: 't/:code', ...page(() => import('./routes/event-day/tag'), 'TagPage') },
-      { path: 'groups/:groupId/impact', ...page(() => import('./routes/impact/dashboard'), 'GroupImpactPage', organiser) },
+      {
+        path: 'groups/:groupId/impact',
+        ...page(() => import('./routes/impact/dashboard'), 'GroupImpactPage', organiser),
+      },
       { path: 'admin/impact', ...page(() => import('./routes/impact/dashboard'), 'NetworkImpactPage', admin) },
       { path: 'impact/records', ...page(() => import('./routes/impact/records'), 'ImpactRecordsPage', organiser) },
-      { path: 'groups/:groupId/follow-ups', ...page(() => import('./routes/impact/follow-ups'), 'FollowUpsPage', organiser) },
+      {
+        path: 'groups/:groupId/follow-ups',
+        ...page(() => import('./routes/impact/follow-ups'), 'FollowUpsPage', organiser),
+      },
       { path: 'impact', ...page(() => import('./routes/impact/public'), 'PublicImpactPage') },
       { path: 'impact/groups/:groupId', ...page(() => import('./routes/impact/public'), 'PublicImpactPage') },
       { path: 'toolkit/knowledge', ...page(() => import('./routes/toolkit/knowledge'), 'KnowledgePage', volunteer) },
@@ -88,8 +159,14 @@ export const router = createBrowserRouter([
       { path: 'b/:reference', element: <BookingCodePage /> },
       { path: 'groups/:groupId/people', ...page(() => import('./routes/groups/people'), 'GroupPeoplePage', organiser) },
       { path: 'groups/:groupId/events', ...page(() => import('./routes/groups/events'), 'GroupEventsPage', organiser) },
-      { path: 'groups/:groupId/events/new', ...page(() => import('./routes/groups/new-event'), 'NewEventPage', organiser) },
-      { path: 'groups/:groupId/settings', ...page(() => import('./routes/groups/settings'), 'GroupSettingsPage', organiser) },
+      {
+        path: 'groups/:groupId/events/new',
+        ...page(() => import('./routes/groups/new-event'), 'NewEventPage', organiser),
+      },
+      {
+        path: 'groups/:groupId/settings',
+        ...page(() => import('./routes/groups/settings'), 'GroupSettingsPage', organiser),
+      },
       { path: 'admin/categories', ...page(() => import('./routes/admin/categories'), 'AdminCategoriesPage', admin) },
       { path: 'admin', ...page(() => import('./routes/admin/overview'), 'AdminOverviewPage', admin) },
       { path: 'admin/mailbox/:mailId?', ...page(() => import('./routes/admin/mailbox'), 'MailboxPage', admin) },

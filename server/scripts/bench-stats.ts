@@ -23,10 +23,22 @@ const RUNS = 30;
 
 export async function benchStats() {
   const dir = mkdtempSync(path.join('/dev/shm', 'mendery-bench-stats-'));
-  const local = await startLocalDatabase({ dir, port: await freePort(), database: 'bench_stats', secrets: loadOrCreateSecrets(dir), fast: true });
+  const local = await startLocalDatabase({
+    dir,
+    port: await freePort(),
+    database: 'bench_stats',
+    secrets: loadOrCreateSecrets(dir),
+    fast: true,
+  });
   const seed = createDatabase(local.appUrl, 2);
   await ensureCategories(seed.db);
-  await seed.db.insert(users).values({ email: 'bench-admin@example.org', name: 'Bench Admin', admin: true, passwordHash: await hashPassword('bench-password-1'), emailVerifiedAt: new Date() });
+  await seed.db.insert(users).values({
+    email: 'bench-admin@example.org',
+    name: 'Bench Admin',
+    admin: true,
+    passwordHash: await hashPassword('bench-password-1'),
+    emailVerifiedAt: new Date(),
+  });
   await seed.close();
   const pool = mysql.createPool({ uri: local.appUrl, connectionLimit: 4, multipleStatements: false });
   const q = (s: string, v: unknown[] = []) => pool.query(s, v);
@@ -34,15 +46,25 @@ export async function benchStats() {
   const events = GROUPS * YEARS * 12;
   const perEvent = Math.ceil(RECORDS / events);
   step(`Generating ${GROUPS} groups, ${events} events and ${RECORDS.toLocaleString('en-GB')} repair records`);
-  await q(`INSERT INTO repair_groups (name, slug, town, description) SELECT CONCAT('Bench group ', seq), CONCAT('bench-', seq), 'Benchton', '' FROM seq_1_to_${GROUPS}`);
-  await q(`INSERT INTO venues (group_id, name, address, town, access_notes) SELECT id, 'Hall', '1 Bench Row', 'Benchton', '' FROM repair_groups`);
+  await q(
+    `INSERT INTO repair_groups (name, slug, town, description) SELECT CONCAT('Bench group ', seq), CONCAT('bench-', seq), 'Benchton', '' FROM seq_1_to_${GROUPS}`,
+  );
+  await q(
+    `INSERT INTO venues (group_id, name, address, town, access_notes) SELECT id, 'Hall', '1 Bench Row', 'Benchton', '' FROM repair_groups`,
+  );
   // One event a month for ten years up to last month, per group.
   await q(`INSERT INTO events (group_id, venue_id, title, description, starts_at, ends_at, slot_minutes, slot_capacity, skill_limits, status)
     SELECT g.id, v.id, 'Bench session', '', TIMESTAMP(DATE_SUB(DATE_FORMAT(NOW(), '%Y-%m-12'), INTERVAL m.seq MONTH), '10:00:00'), TIMESTAMP(DATE_SUB(DATE_FORMAT(NOW(), '%Y-%m-12'), INTERVAL m.seq MONTH), '13:00:00'), 180, 100, '{}', 'closed'
     FROM repair_groups g JOIN venues v ON v.group_id = g.id JOIN seq_1_to_${YEARS * 12} m`);
-  await q(`INSERT INTO slots (event_id, starts_at, ends_at, capacity, booked) SELECT id, starts_at, ends_at, 100, ${perEvent} FROM events`);
-  const [[range]] = (await q('SELECT MIN(id) AS lo, COUNT(*) AS n FROM events')) as unknown as [{ lo: number; n: number }[]];
-  const [[cats]] = (await q('SELECT MIN(id) AS lo, COUNT(*) AS n FROM categories')) as unknown as [{ lo: number; n: number }[]];
+  await q(
+    `INSERT INTO slots (event_id, starts_at, ends_at, capacity, booked) SELECT id, starts_at, ends_at, 100, ${perEvent} FROM events`,
+  );
+  const [[range]] = (await q('SELECT MIN(id) AS lo, COUNT(*) AS n FROM events')) as unknown as [
+    { lo: number; n: number }[],
+  ];
+  const [[cats]] = (await q('SELECT MIN(id) AS lo, COUNT(*) AS n FROM categories')) as unknown as [
+    { lo: number; n: number }[],
+  ];
   const chunk = 200_000;
   for (let from = 0; from < RECORDS; from += chunk) {
     const to = Math.min(RECORDS, from + chunk) - 1;
@@ -63,18 +85,41 @@ export async function benchStats() {
   const rollup = createDatabase(local.appUrl, 1);
   await rollup.db.execute(rollupSelect(null));
   await rollup.close();
-  const [[cells]] = (await q('SELECT COUNT(*) AS n, SUM(items) AS items FROM impact_cells')) as unknown as [{ n: number; items: number }[]];
-  step(`Rollup: ${Number(cells.n).toLocaleString('en-GB')} cells holding ${Number(cells.items).toLocaleString('en-GB')} records, built in ${((Date.now() - t1) / 1000).toFixed(1)} s`);
+  const [[cells]] = (await q('SELECT COUNT(*) AS n, SUM(items) AS items FROM impact_cells')) as unknown as [
+    { n: number; items: number }[],
+  ];
+  step(
+    `Rollup: ${Number(cells.n).toLocaleString('en-GB')} cells holding ${Number(cells.items).toLocaleString('en-GB')} records, built in ${((Date.now() - t1) / 1000).toFixed(1)} s`,
+  );
 
-  const env = loadEnv({ NODE_ENV: 'production', DATABASE_URL: local.appUrl, PORT: '0', SESSION_SECRET: 'bench-secret-'.padEnd(40, 'x'), OUTBOX_POLL_MS: '0', JOBS_POLL_MS: '0', DATA_DIR: dir, LOGIN_RATE_MAX: '1000' });
+  const env = loadEnv({
+    NODE_ENV: 'production',
+    DATABASE_URL: local.appUrl,
+    PORT: '0',
+    SESSION_SECRET: 'bench-secret-'.padEnd(40, 'x'),
+    OUTBOX_POLL_MS: '0',
+    JOBS_POLL_MS: '0',
+    DATA_DIR: dir,
+    LOGIN_RATE_MAX: '1000',
+  });
   const app = await startServer(env, { sender: { send: async () => {} }, log: () => {} });
   const csrf = async (cookie: string) => {
     const r = await fetch(`${app.url}/api/auth/csrf`, { headers: { cookie } });
-    return { token: (await r.json()).token as string, cookie: [cookie, ...r.headers.getSetCookie().map((c) => c.split(';')[0])].filter(Boolean).join('; ') };
+    return {
+      token: (await r.json()).token as string,
+      cookie: [cookie, ...r.headers.getSetCookie().map((c) => c.split(';')[0])].filter(Boolean).join('; '),
+    };
   };
   const pre = await csrf('');
-  const login = await fetch(`${app.url}/api/auth/login`, { method: 'POST', headers: { 'content-type': 'application/json', cookie: pre.cookie, 'x-csrf-token': pre.token }, body: JSON.stringify({ email: 'bench-admin@example.org', password: 'bench-password-1' }) });
-  const cookie = login.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ');
+  const login = await fetch(`${app.url}/api/auth/login`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json', cookie: pre.cookie, 'x-csrf-token': pre.token },
+    body: JSON.stringify({ email: 'bench-admin@example.org', password: 'bench-password-1' }),
+  });
+  const cookie = login.headers
+    .getSetCookie()
+    .map((c) => c.split(';')[0])
+    .join('; ');
   const [[g]] = (await q("SELECT id FROM repair_groups WHERE slug = 'bench-17'")) as unknown as [{ id: number }[]];
   const yearAgo = new Date(Date.now() - 365 * 86400_000).toISOString().slice(0, 10);
   const today = new Date().toISOString().slice(0, 10);
@@ -98,7 +143,9 @@ export async function benchStats() {
     }
     times.sort((a, b) => a - b);
     const p = (x: number) => times[Math.min(times.length - 1, Math.floor(x * times.length))].toFixed(1);
-    console.log(`GET /api/stats — ${c.name.padEnd(26)} ${String(items).padStart(9)} items  median ${p(0.5)} ms  p95 ${p(0.95)} ms${c.budget ? `  (budget ${c.budget} ms: ${Number(p(0.95)) < c.budget ? 'within' : 'OVER'})` : ''}`);
+    console.log(
+      `GET /api/stats — ${c.name.padEnd(26)} ${String(items).padStart(9)} items  median ${p(0.5)} ms  p95 ${p(0.95)} ms${c.budget ? `  (budget ${c.budget} ms: ${Number(p(0.95)) < c.budget ? 'within' : 'OVER'})` : ''}`,
+    );
   }
   await app.stop();
   await pool.end();

@@ -33,18 +33,39 @@ const CONNECTIONS = Number(process.env.BENCH_CONNECTIONS ?? 50);
 const secret = 'bench-secret-'.padEnd(40, 'x');
 
 const dir = mkdtempSync(path.join('/dev/shm', 'mendery-bench-'));
-const local = await startLocalDatabase({ dir, port: await freePort(), database: 'bench', secrets: loadOrCreateSecrets(dir), fast: true });
+const local = await startLocalDatabase({
+  dir,
+  port: await freePort(),
+  database: 'bench',
+  secrets: loadOrCreateSecrets(dir),
+  fast: true,
+});
 const seedDb = createDatabase(local.appUrl, 2);
 await seedDemo(seedDb.db, { linkSecret: secret });
 await seedDb.close();
 
 const pool = mysql.createPool({ uri: local.appUrl, connectionLimit: 20 });
 // One slot with room for every request the load can send, so bookings measure work, not refusals.
-await pool.query("UPDATE slots s JOIN events e ON e.id = s.event_id SET s.capacity = 10000000 WHERE e.status = 'published'");
-const [[slot]] = (await pool.query("SELECT s.id FROM slots s JOIN events e ON e.id = s.event_id WHERE e.status = 'published' ORDER BY s.starts_at LIMIT 1")) as unknown as [{ id: number }[]];
-const [[kettle]] = (await pool.query("SELECT id FROM categories WHERE slug = 'kettle'")) as unknown as [{ id: number }[]];
+await pool.query(
+  "UPDATE slots s JOIN events e ON e.id = s.event_id SET s.capacity = 10000000 WHERE e.status = 'published'",
+);
+const [[slot]] = (await pool.query(
+  "SELECT s.id FROM slots s JOIN events e ON e.id = s.event_id WHERE e.status = 'published' ORDER BY s.starts_at LIMIT 1",
+)) as unknown as [{ id: number }[]];
+const [[kettle]] = (await pool.query("SELECT id FROM categories WHERE slug = 'kettle'")) as unknown as [
+  { id: number }[],
+];
 
-const env = loadEnv({ NODE_ENV: 'production', DATABASE_URL: local.appUrl, PORT: '0', SESSION_SECRET: secret, OUTBOX_POLL_MS: '0', JOBS_POLL_MS: '0', DB_POOL_SIZE: '20', DATA_DIR: dir });
+const env = loadEnv({
+  NODE_ENV: 'production',
+  DATABASE_URL: local.appUrl,
+  PORT: '0',
+  SESSION_SECRET: secret,
+  OUTBOX_POLL_MS: '0',
+  JOBS_POLL_MS: '0',
+  DB_POOL_SIZE: '20',
+  DATA_DIR: dir,
+});
 const app = await startServer(env, { sender: { send: async () => {} }, log: () => {} });
 
 const bare = express();
@@ -63,13 +84,19 @@ bare.post('/bookings', async (req, res) => {
   const conn = await pool.getConnection();
   try {
     await conn.beginTransaction();
-    const [r] = (await conn.query('UPDATE slots SET booked = booked + 1 WHERE id = ? AND booked + held + 1 <= capacity', [req.body.slotId])) as unknown as [{ affectedRows: number }];
+    const [r] = (await conn.query(
+      'UPDATE slots SET booked = booked + 1 WHERE id = ? AND booked + held + 1 <= capacity',
+      [req.body.slotId],
+    )) as unknown as [{ affectedRows: number }];
     if (r.affectedRows !== 1) {
       await conn.rollback();
       return res.status(409).end();
     }
     const reference = randomBytes(4).toString('hex').slice(0, 7).toUpperCase();
-    await conn.query("INSERT INTO bookings (reference, event_id, slot_id, visitor_name, visitor_email, manage_token_hash, consent_at) SELECT ?, event_id, id, ?, ?, REPEAT('0', 64), NOW(3) FROM slots WHERE id = ?", [reference, req.body.visitor.name, req.body.visitor.email, req.body.slotId]);
+    await conn.query(
+      "INSERT INTO bookings (reference, event_id, slot_id, visitor_name, visitor_email, manage_token_hash, consent_at) SELECT ?, event_id, id, ?, ?, REPEAT('0', 64), NOW(3) FROM slots WHERE id = ?",
+      [reference, req.body.visitor.name, req.body.visitor.email, req.body.slotId],
+    );
     await conn.commit();
     res.status(201).json({ reference });
   } finally {
@@ -87,28 +114,53 @@ const visitors = await Promise.all(
     return { cookie: r.headers.getSetCookie()[0].split(';')[0], token: (await r.json()).token as string };
   }),
 );
-const bookingBody = JSON.stringify({ slotId: slot.id, visitor: { name: 'Bench Visitor', email: 'bench@example.org' }, items: [{ categoryId: kettle.id, fault: 'Switches off before it boils.' }], consent: true });
+const bookingBody = JSON.stringify({
+  slotId: slot.id,
+  visitor: { name: 'Bench Visitor', email: 'bench@example.org' },
+  items: [{ categoryId: kettle.id, fault: 'Switches off before it boils.' }],
+  consent: true,
+});
 
-interface Line { title: string; rps: number; p99: number; bad: number }
+interface Line {
+  title: string;
+  rps: number;
+  p99: number;
+  bad: number;
+}
 async function load(title: string, opts: autocannon.Options): Promise<Line> {
   const r = await autocannon({ connections: CONNECTIONS, duration: SECONDS, ...opts });
   const line = { title, rps: Math.round(r.requests.average), p99: r.latency.p99, bad: r.errors + r.non2xx };
-  console.log(`${title.padEnd(44)} ${String(line.rps).padStart(6)} req/s   p99 ${String(line.p99).padStart(4)} ms   non-2xx/errors ${line.bad}`);
+  console.log(
+    `${title.padEnd(44)} ${String(line.rps).padStart(6)} req/s   p99 ${String(line.p99).padStart(4)} ms   non-2xx/errors ${line.bad}`,
+  );
   return line;
 }
 
 step(`Warming up (${CONNECTIONS} connections, ${SECONDS} s per run)`);
 await autocannon({ url: `${app.url}/api/events`, connections: 10, duration: 2 });
 console.log('');
-const ratio = (a: Line, b: Line) => console.log(`${'  ratio Mendery / bare'.padEnd(44)} ${(a.rps / b.rps).toFixed(2)}× requests/s, p99 ${(a.p99 / Math.max(b.p99, 1)).toFixed(2)}×\n`);
+const ratio = (a: Line, b: Line) =>
+  console.log(
+    `${'  ratio Mendery / bare'.padEnd(44)} ${(a.rps / b.rps).toFixed(2)}× requests/s, p99 ${(a.p99 / Math.max(b.p99, 1)).toFixed(2)}×\n`,
+  );
 const bareEvents = await load('bare Express + mysql2: GET events', { url: `${bareUrl}/events` });
 const events = await load('Mendery GET /api/events', { url: `${app.url}/api/events` });
 ratio(events, bareEvents);
 const json = { 'content-type': 'application/json' };
-const bareBookings = await load('bare Express + mysql2: POST booking', { url: `${bareUrl}/bookings`, method: 'POST', headers: json, body: bookingBody });
+const bareBookings = await load('bare Express + mysql2: POST booking', {
+  url: `${bareUrl}/bookings`,
+  method: 'POST',
+  headers: json,
+  body: bookingBody,
+});
 const bookings = await load('Mendery POST /api/bookings', {
   url: `${app.url}/api/bookings`,
-  requests: visitors.map((v) => ({ method: 'POST' as const, path: '/api/bookings', headers: { ...json, cookie: v.cookie, 'x-csrf-token': v.token }, body: bookingBody })),
+  requests: visitors.map((v) => ({
+    method: 'POST' as const,
+    path: '/api/bookings',
+    headers: { ...json, cookie: v.cookie, 'x-csrf-token': v.token },
+    body: bookingBody,
+  })),
 });
 ratio(bookings, bareBookings);
 

@@ -17,7 +17,10 @@ const lock = path.join(root, 'package-lock.json');
 const stale = !existsSync(marker) || (existsSync(lock) && statSync(lock).mtimeMs > statSync(marker).mtimeMs + 1000);
 if (stale) {
   console.log('▸ Installing npm dependencies (first run)…');
-  const r = spawnSync('npm', [existsSync(lock) ? 'ci' : 'install', '--no-audit', '--no-fund'], { cwd: root, stdio: 'inherit' });
+  const r = spawnSync('npm', [existsSync(lock) ? 'ci' : 'install', '--no-audit', '--no-fund'], {
+    cwd: root,
+    stdio: 'inherit',
+  });
   if (r.status !== 0) {
     console.error('✗ npm could not install the dependencies; see the messages above.');
     process.exit(r.status ?? 1);

@@ -9,7 +9,12 @@ const apiPort = Number(process.env.API_PORT ?? 3001);
 const vitePort = Number(process.env.VITE_PORT ?? 5173);
 const smtpPort = Number(process.env.SMTP_PORT ?? 2525);
 
-const local = await startLocalDatabase({ dir: path.join(dataDir, 'mariadb'), port: Number(process.env.DB_PORT ?? 3307), database: 'mendery', secrets });
+const local = await startLocalDatabase({
+  dir: path.join(dataDir, 'mariadb'),
+  port: Number(process.env.DB_PORT ?? 3307),
+  database: 'mendery',
+  secrets,
+});
 await seedOnFirstRun(local.appUrl, secrets.sessionSecret);
 const stopMailbox = await startLocalMailbox(local.appUrl, smtpPort);
 
@@ -25,7 +30,11 @@ const env = {
   VITE_PORT: String(vitePort),
 };
 const children: ChildProcess[] = [
-  spawn(process.execPath, [path.join(root, 'node_modules/tsx/dist/cli.mjs'), 'watch', '--clear-screen=false', 'server/src/index.ts'], { cwd: root, env, stdio: 'inherit' }),
+  spawn(
+    process.execPath,
+    [path.join(root, 'node_modules/tsx/dist/cli.mjs'), 'watch', '--clear-screen=false', 'server/src/index.ts'],
+    { cwd: root, env, stdio: 'inherit' },
+  ),
   spawn(process.execPath, [path.join(root, 'node_modules/vite/bin/vite.js')], { cwd: root, env, stdio: 'inherit' }),
 ];
 step(`Open http://127.0.0.1:${vitePort} (API on ${apiPort}, Ctrl-C stops everything)`);

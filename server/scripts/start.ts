@@ -2,7 +2,15 @@ import path from 'node:path';
 import { loadEnv } from '../src/config/env';
 import { runMigrations } from '../src/db/migrate';
 import { startServer } from '../src/server';
-import { buildClientIfStale, loadOrCreateSecrets, root, seedOnFirstRun, startLocalDatabase, startLocalMailbox, step } from './local-stack';
+import {
+  buildClientIfStale,
+  loadOrCreateSecrets,
+  root,
+  seedOnFirstRun,
+  startLocalDatabase,
+  startLocalMailbox,
+  step,
+} from './local-stack';
 
 /** `npm start`: private MariaDB, local mailbox, migrations, demo data on first run, client build, server. */
 const started = Date.now();
@@ -33,7 +41,12 @@ process.on('SIGTERM', () => void shutdown(0));
 try {
   let dbUrl = process.env.DATABASE_URL ?? '';
   if (!external) {
-    const local = await startLocalDatabase({ dir: path.join(dataDir, 'mariadb'), port: dbPort, database: process.env.DB_NAME ?? 'mendery', secrets });
+    const local = await startLocalDatabase({
+      dir: path.join(dataDir, 'mariadb'),
+      port: dbPort,
+      database: process.env.DB_NAME ?? 'mendery',
+      secrets,
+    });
     stops.push(() => local.instance.stop());
     dbUrl = local.appUrl;
   } else {
@@ -50,13 +63,16 @@ try {
   });
 
   await seedOnFirstRun(env.dbUrl, env.SESSION_SECRET);
-  if (process.env.MAILBOX !== '0' && ['127.0.0.1', 'localhost'].includes(env.SMTP_HOST)) stops.push(await startLocalMailbox(env.dbUrl, env.SMTP_PORT));
+  if (process.env.MAILBOX !== '0' && ['127.0.0.1', 'localhost'].includes(env.SMTP_HOST))
+    stops.push(await startLocalMailbox(env.dbUrl, env.SMTP_PORT));
 
   buildClientIfStale();
   const running = await startServer(env);
   // Stopped in reverse order: the server first, then the mailbox and the database it uses.
   stops.push(() => running.stop());
-  step(`Mendery is running at ${running.url}  (ready in ${((Date.now() - started) / 1000).toFixed(1)} s; Ctrl-C stops it)`);
+  step(
+    `Mendery is running at ${running.url}  (ready in ${((Date.now() - started) / 1000).toFixed(1)} s; Ctrl-C stops it)`,
+  );
 } catch (err) {
   console.error(`✗ ${(err as Error).message}`);
   await shutdown(1);

@@ -86,7 +86,10 @@ export function createApp(ctx: AppContext) {
 
   const dist = path.resolve(ctx.env.CLIENT_DIST);
   if (existsSync(path.join(dist, 'index.html'))) {
-    app.use('/assets', express.static(path.join(dist, 'assets'), { immutable: true, maxAge: '1y', fallthrough: false }));
+    app.use(
+      '/assets',
+      express.static(path.join(dist, 'assets'), { immutable: true, maxAge: '1y', fallthrough: false }),
+    );
     app.use(express.static(dist, { index: false }));
     app.use((req, res, next) => {
       if (req.method !== 'GET' && req.method !== 'HEAD') return next();

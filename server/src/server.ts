@@ -18,11 +18,20 @@ export interface RunningServer {
 }
 
 /** Opens the pool, starts the outbox worker and listens. Several of these may run against one database. */
-export async function startServer(env: Env, opts: { sender?: MailSender; log?: (l: string) => void } = {}): Promise<RunningServer> {
+export async function startServer(
+  env: Env,
+  opts: { sender?: MailSender; log?: (l: string) => void } = {},
+): Promise<RunningServer> {
   const log = opts.log ?? ((l: string) => console.log(l));
   const database = createDatabase(env.dbUrl, env.DB_POOL_SIZE);
   const outbox = new OutboxWorker(database.db, opts.sender ?? smtpSender(env), log);
-  const ctx: AppContext = { env, database, outbox, log, storage: new LocalDiskStorage(path.resolve(env.DATA_DIR, 'uploads')) };
+  const ctx: AppContext = {
+    env,
+    database,
+    outbox,
+    log,
+    storage: new LocalDiskStorage(path.resolve(env.DATA_DIR, 'uploads')),
+  };
   const scheduler = new Scheduler(ctx);
   const { app, close } = createApp(ctx);
   const server = await new Promise<Server>((resolve, reject) => {

@@ -16,15 +16,45 @@ export interface SafeVoltageThreshold {
 }
 
 /** Extra-low voltage, ripple-free DC. */
-export const ELV_DC: SafeVoltageThreshold = { id: 'elv-dc', volts: 120, withinS: null, label: 'Extra-low voltage, ripple-free DC', source: 'IEC 61140, read via IEC Electropedia' };
+export const ELV_DC: SafeVoltageThreshold = {
+  id: 'elv-dc',
+  volts: 120,
+  withinS: null,
+  label: 'Extra-low voltage, ripple-free DC',
+  source: 'IEC 61140, read via IEC Electropedia',
+};
 /** Extra-low voltage, AC rms: not a limit for a charged capacitor, kept for comparison. */
-export const ELV_AC: SafeVoltageThreshold = { id: 'elv-ac', volts: 50, withinS: null, label: 'Extra-low voltage, AC rms', source: 'IEC 61140, read via IEC Electropedia' };
+export const ELV_AC: SafeVoltageThreshold = {
+  id: 'elv-ac',
+  volts: 50,
+  withinS: null,
+  label: 'Extra-low voltage, AC rms',
+  source: 'IEC 61140, read via IEC Electropedia',
+};
 /** Residual voltage on live parts after the supply is cut. */
-export const RESIDUAL_60V_5S: SafeVoltageThreshold = { id: 'residual-5s', volts: 60, withinS: 5, label: 'Residual voltage, within 5 s of disconnection', source: 'IEC 60204-1 6.2.4, secondary source' };
+export const RESIDUAL_60V_5S: SafeVoltageThreshold = {
+  id: 'residual-5s',
+  volts: 60,
+  withinS: 5,
+  label: 'Residual voltage, within 5 s of disconnection',
+  source: 'IEC 60204-1 6.2.4, secondary source',
+};
 /** The same 60 V, on accessible plug pins, within 1 s. */
-export const PLUG_PINS_60V_1S: SafeVoltageThreshold = { id: 'plug-pins-1s', volts: 60, withinS: 1, label: 'Accessible plug pins, within 1 s', source: 'IEC 60204-1 6.2.4, secondary source' };
+export const PLUG_PINS_60V_1S: SafeVoltageThreshold = {
+  id: 'plug-pins-1s',
+  volts: 60,
+  withinS: 1,
+  label: 'Accessible plug pins, within 1 s',
+  source: 'IEC 60204-1 6.2.4, secondary source',
+};
 /** Between the pins of an appliance's plug, 1 s after unplugging. */
-export const PLUG_PINS_34V_1S: SafeVoltageThreshold = { id: 'plug-pins-34v', volts: 34, withinS: 1, label: 'Between plug pins, 1 s after unplugging', source: 'IEC 60335-1 22.5, secondary source' };
+export const PLUG_PINS_34V_1S: SafeVoltageThreshold = {
+  id: 'plug-pins-34v',
+  volts: 34,
+  withinS: 1,
+  label: 'Between plug pins, 1 s after unplugging',
+  source: 'IEC 60335-1 22.5, secondary source',
+};
 
 /** The thresholds that apply to a charged capacitor, lowest last. */
 export const DC_THRESHOLDS = [ELV_DC, RESIDUAL_60V_5S, PLUG_PINS_60V_1S, PLUG_PINS_34V_1S] as const;
@@ -105,7 +135,12 @@ export interface DischargeAdvice {
 const round = (x: number, dp: number) => Math.round(x * 10 ** dp) / 10 ** dp;
 
 /** Whether a capacitor is below the chosen threshold, and how long to wait through a given resistor. */
-export function dischargeAdvice({ voltageV, capacitanceF, resistanceOhm, threshold = DEFAULT_TOUCH_THRESHOLD }: DischargeInput): DischargeAdvice {
+export function dischargeAdvice({
+  voltageV,
+  capacitanceF,
+  resistanceOhm,
+  threshold = DEFAULT_TOUCH_THRESHOLD,
+}: DischargeInput): DischargeAdvice {
   notNegative(voltageV, 'The capacitor voltage');
   positive(capacitanceF, 'The capacitance');
   if (resistanceOhm !== undefined) positive(resistanceOhm, 'The discharge resistor');
@@ -113,15 +148,30 @@ export function dischargeAdvice({ voltageV, capacitanceF, resistanceOhm, thresho
   const energyJ = storedEnergyJ(capacitanceF, voltageV);
   const withinS = threshold.withinS ?? 5;
   const maxOhm = maxResistanceFor(voltageV, threshold.volts, capacitanceF, withinS);
-  const waitS = resistanceOhm === undefined ? null : timeToVoltage(voltageV, threshold.volts, resistanceOhm, capacitanceF);
+  const waitS =
+    resistanceOhm === undefined ? null : timeToVoltage(voltageV, threshold.volts, resistanceOhm, capacitanceF);
   const fiveTauS = resistanceOhm === undefined ? null : 5 * timeConstantS(resistanceOhm, capacitanceF);
   const messages: string[] = [];
-  if (safeToTouch) messages.push(`${round(voltageV, 1)} V is at or below ${threshold.volts} V (${threshold.source}). Measure again across the capacitor before you touch it.`);
+  if (safeToTouch)
+    messages.push(
+      `${round(voltageV, 1)} V is at or below ${threshold.volts} V (${threshold.source}). Measure again across the capacitor before you touch it.`,
+    );
   else {
-    messages.push(`${round(voltageV, 1)} V is above ${threshold.volts} V (${threshold.source}): not safe to touch. The capacitor holds ${round(energyJ, 2)} J.`);
-    if (waitS !== null) messages.push(`Through ${formatOhms(resistanceOhm!)} it falls to ${threshold.volts} V after ${round(waitS, 2)} s; wait at least that long — 5τ (${round(fiveTauS!, 2)} s) leaves under 1 % — then measure before touching.`);
-    else messages.push(`Discharge it through a resistor: ${Number.isFinite(maxOhm) ? `at most ${round(maxOhm, 0)} Ω` : 'any value'} brings it to ${threshold.volts} V within ${withinS} s. Then measure before touching.`);
-    if (resistanceOhm !== undefined) messages.push(`The resistor takes up to ${round((voltageV * voltageV) / resistanceOhm, 2)} W at first and must be rated for ${round(voltageV, 0)} V; never short the terminals with a screwdriver.`);
+    messages.push(
+      `${round(voltageV, 1)} V is above ${threshold.volts} V (${threshold.source}): not safe to touch. The capacitor holds ${round(energyJ, 2)} J.`,
+    );
+    if (waitS !== null)
+      messages.push(
+        `Through ${formatOhms(resistanceOhm!)} it falls to ${threshold.volts} V after ${round(waitS, 2)} s; wait at least that long — 5τ (${round(fiveTauS!, 2)} s) leaves under 1 % — then measure before touching.`,
+      );
+    else
+      messages.push(
+        `Discharge it through a resistor: ${Number.isFinite(maxOhm) ? `at most ${round(maxOhm, 0)} Ω` : 'any value'} brings it to ${threshold.volts} V within ${withinS} s. Then measure before touching.`,
+      );
+    if (resistanceOhm !== undefined)
+      messages.push(
+        `The resistor takes up to ${round((voltageV * voltageV) / resistanceOhm, 2)} W at first and must be rated for ${round(voltageV, 0)} V; never short the terminals with a screwdriver.`,
+      );
   }
   return {
     threshold,

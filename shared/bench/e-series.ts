@@ -6,7 +6,9 @@ export const E_SERIES_SOURCE = 'IEC 60063 (from memory, not checked against the 
 
 export const E6 = [10, 15, 22, 33, 47, 68] as const;
 export const E12 = [10, 12, 15, 18, 22, 27, 33, 39, 47, 56, 68, 82] as const;
-export const E24 = [10, 11, 12, 13, 15, 16, 18, 20, 22, 24, 27, 30, 33, 36, 39, 43, 47, 51, 56, 62, 68, 75, 82, 91] as const;
+export const E24 = [
+  10, 11, 12, 13, 15, 16, 18, 20, 22, 24, 27, 30, 33, 36, 39, 43, 47, 51, 56, 62, 68, 75, 82, 91,
+] as const;
 
 export const E_SERIES = { E6, E12, E24 } as const;
 export type ESeriesName = keyof typeof E_SERIES;
@@ -29,7 +31,8 @@ export interface NearestStandard {
 const clean = (x: number) => Number(x.toPrecision(12));
 
 /** Every value of the series in the decade starting at 10^exp ohms, e.g. exp 2 → 100, 150, 220, … for E6. */
-export const decade = (series: ESeriesName, exp: number): number[] => E_SERIES[series].map((v) => clean(v * 10 ** (exp - 1)));
+export const decade = (series: ESeriesName, exp: number): number[] =>
+  E_SERIES[series].map((v) => clean(v * 10 ** (exp - 1)));
 
 /**
  * The standard value nearest to `ohms` over any decade, with the values either side of the request.

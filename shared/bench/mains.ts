@@ -4,7 +4,8 @@
  */
 export const MAINS_MIN_V = 100;
 export const MAINS_MAX_V = 253;
-export const MAINS_PEAK_SOURCE = 'Derived: peak = Vrms × √2; "multiply by 1.414" is common practice, no published source';
+export const MAINS_PEAK_SOURCE =
+  'Derived: peak = Vrms × √2; "multiply by 1.414" is common practice, no published source';
 export const RULE_OF_THUMB_FACTOR = 1.414;
 export const MAINS_PEAK_NOTE =
   'Rule of thumb: multiply the mains voltage by 1.414 for the DC on the reservoir capacitor after a bridge rectifier. A meter reads a volt or two less (two diode drops) and follows the mains of the moment.';
@@ -20,7 +21,14 @@ export interface MainsPeak {
 
 export function rectifiedPeak(vrms: number): MainsPeak {
   if (!Number.isFinite(vrms) || vrms < MAINS_MIN_V || vrms > MAINS_MAX_V) {
-    throw new RangeError(`Enter a mains voltage from ${MAINS_MIN_V} V to ${MAINS_MAX_V} V rms (230 V + 10 %); ${Number.isFinite(vrms) ? `${vrms} V` : 'that'} is outside the range this calculator covers.`);
+    throw new RangeError(
+      `Enter a mains voltage from ${MAINS_MIN_V} V to ${MAINS_MAX_V} V rms (230 V + 10 %); ${Number.isFinite(vrms) ? `${vrms} V` : 'that'} is outside the range this calculator covers.`,
+    );
   }
-  return { vrms, peakV: vrms * Math.SQRT2, ruleOfThumbV: Number((vrms * RULE_OF_THUMB_FACTOR).toPrecision(12)), note: MAINS_PEAK_NOTE };
+  return {
+    vrms,
+    peakV: vrms * Math.SQRT2,
+    ruleOfThumbV: Number((vrms * RULE_OF_THUMB_FACTOR).toPrecision(12)),
+    note: MAINS_PEAK_NOTE,
+  };
 }

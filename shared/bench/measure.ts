@@ -53,22 +53,43 @@ const round = (x: number, dp: number) => Math.round(x * 10 ** dp) / 10 ** dp;
 
 /** The reading less the shorted-lead reading, never below 0 (a reading at or under the leads is a short). */
 export function netResistance(reading: ResistanceReading, leadsOhm = 0): number | 'open' {
-  if (!(Number.isFinite(leadsOhm) && leadsOhm >= 0)) throw new RangeError('The leads reading must be zero or more ohms.');
+  if (!(Number.isFinite(leadsOhm) && leadsOhm >= 0))
+    throw new RangeError('The leads reading must be zero or more ohms.');
   if (reading === 'OL') return 'open';
-  if (!Number.isFinite(reading) || reading < 0) throw new RangeError('A resistance reading is zero or more ohms, or OL.');
+  if (!Number.isFinite(reading) || reading < 0)
+    throw new RangeError('A resistance reading is zero or more ohms, or OL.');
   return Math.max(0, clean(reading - leadsOhm));
 }
 
-export function judgeResistance({ reading, leadsOhm = 0, nominalOhm, tolerancePct, uncertaintyOhm = 0 }: MeasureInput): MeasureResult {
-  if (!Number.isFinite(nominalOhm) || nominalOhm <= 0) throw new RangeError('The nominal value must be above 0 Ω. For a 0 Ω link, check that it reads the same as the shorted leads.');
-  if (!Number.isFinite(tolerancePct) || tolerancePct <= 0 || tolerancePct >= 100) throw new RangeError('The tolerance is a percentage above 0 and below 100.');
-  if (!Number.isFinite(uncertaintyOhm) || uncertaintyOhm < 0) throw new RangeError('The meter uncertainty must be zero or more ohms.');
+export function judgeResistance({
+  reading,
+  leadsOhm = 0,
+  nominalOhm,
+  tolerancePct,
+  uncertaintyOhm = 0,
+}: MeasureInput): MeasureResult {
+  if (!Number.isFinite(nominalOhm) || nominalOhm <= 0)
+    throw new RangeError(
+      'The nominal value must be above 0 Ω. For a 0 Ω link, check that it reads the same as the shorted leads.',
+    );
+  if (!Number.isFinite(tolerancePct) || tolerancePct <= 0 || tolerancePct >= 100)
+    throw new RangeError('The tolerance is a percentage above 0 and below 100.');
+  if (!Number.isFinite(uncertaintyOhm) || uncertaintyOhm < 0)
+    throw new RangeError('The meter uncertainty must be zero or more ohms.');
   const band = (nominalOhm * tolerancePct) / 100;
   const minOhm = clean(nominalOhm - band);
   const maxOhm = clean(nominalOhm + band);
   const net = netResistance(reading, leadsOhm);
   if (net === 'open') {
-    return { verdict: 'open', netOhm: null, deviationPct: null, minOhm, maxOhm, inRightRange: false, message: 'The meter reads OL: the resistor is open circuit (or the leads are not touching it).' };
+    return {
+      verdict: 'open',
+      netOhm: null,
+      deviationPct: null,
+      minOhm,
+      maxOhm,
+      inRightRange: false,
+      message: 'The meter reads OL: the resistor is open circuit (or the leads are not touching it).',
+    };
   }
   const deviationPct = round(((net - nominalOhm) / nominalOhm) * 100, 2);
   // Compared in rounded percent so a reading exactly at the edge (1.1 Ω for 1 Ω ±10 %) counts as within.
@@ -76,11 +97,35 @@ export function judgeResistance({ reading, leadsOhm = 0, nominalOhm, tolerancePc
   const off = Math.abs(round(((net - nominalOhm) / nominalOhm) * 100, 6));
   const signed = `${deviationPct > 0 ? '+' : ''}${deviationPct} %`;
   if (off <= tolerancePct) {
-    return { verdict: 'within', netOhm: net, deviationPct, minOhm, maxOhm, inRightRange: true, message: `${net} Ω is ${signed} from ${nominalOhm} Ω: within ±${tolerancePct} %${off === tolerancePct ? ', at the edge' : ''}.` };
+    return {
+      verdict: 'within',
+      netOhm: net,
+      deviationPct,
+      minOhm,
+      maxOhm,
+      inRightRange: true,
+      message: `${net} Ω is ${signed} from ${nominalOhm} Ω: within ±${tolerancePct} %${off === tolerancePct ? ', at the edge' : ''}.`,
+    };
   }
   if (off <= tolerancePct + slackPct) {
-    return { verdict: 'within-uncertainty', netOhm: net, deviationPct, minOhm, maxOhm, inRightRange: true, message: `${net} Ω is ${signed} from ${nominalOhm} Ω: outside ±${tolerancePct} %, but within the meter's ±${uncertaintyOhm} Ω — in the right range; this meter cannot prove the tolerance.` };
+    return {
+      verdict: 'within-uncertainty',
+      netOhm: net,
+      deviationPct,
+      minOhm,
+      maxOhm,
+      inRightRange: true,
+      message: `${net} Ω is ${signed} from ${nominalOhm} Ω: outside ±${tolerancePct} %, but within the meter's ±${uncertaintyOhm} Ω — in the right range; this meter cannot prove the tolerance.`,
+    };
   }
   const hint = net === 0 ? ' It reads no more than the shorted leads: a short.' : '';
-  return { verdict: 'outside', netOhm: net, deviationPct, minOhm, maxOhm, inRightRange: false, message: `${net} Ω is ${signed} from ${nominalOhm} Ω: outside ±${tolerancePct} %.${hint} Measure it out of circuit before replacing it: parts in parallel read low.` };
+  return {
+    verdict: 'outside',
+    netOhm: net,
+    deviationPct,
+    minOhm,
+    maxOhm,
+    inRightRange: false,
+    message: `${net} Ω is ${signed} from ${nominalOhm} Ω: outside ±${tolerancePct} %.${hint} Measure it out of circuit before replacing it: parts in parallel read low.`,
+  };
 }

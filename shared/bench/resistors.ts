@@ -5,7 +5,18 @@
  */
 export const RESISTOR_CODE_SOURCE = 'IEC 60062 (from memory, not checked against the standard)';
 
-export const DIGIT_COLOURS = ['black', 'brown', 'red', 'orange', 'yellow', 'green', 'blue', 'violet', 'grey', 'white'] as const;
+export const DIGIT_COLOURS = [
+  'black',
+  'brown',
+  'red',
+  'orange',
+  'yellow',
+  'green',
+  'blue',
+  'violet',
+  'grey',
+  'white',
+] as const;
 export type DigitColour = (typeof DIGIT_COLOURS)[number];
 export const MULTIPLIER_COLOURS = [...DIGIT_COLOURS, 'gold', 'silver'] as const;
 export type MultiplierColour = (typeof MULTIPLIER_COLOURS)[number];
@@ -14,10 +25,32 @@ export type ToleranceColour = (typeof TOLERANCE_COLOURS)[number];
 export type BandColour = MultiplierColour | 'none';
 
 /** Tolerance in ± percent by colour; 'none' is a missing fourth band. Grey (0.05 %) and others of newer editions are left out: not in our reference. */
-export const TOLERANCE_BY_COLOUR: Record<ToleranceColour, number> = { brown: 1, red: 2, green: 0.5, blue: 0.25, violet: 0.1, gold: 5, silver: 10, none: 20 };
+export const TOLERANCE_BY_COLOUR: Record<ToleranceColour, number> = {
+  brown: 1,
+  red: 2,
+  green: 0.5,
+  blue: 0.25,
+  violet: 0.1,
+  gold: 5,
+  silver: 10,
+  none: 20,
+};
 
 /** Power of ten by multiplier colour. */
-export const MULTIPLIER_EXPONENT: Record<MultiplierColour, number> = { black: 0, brown: 1, red: 2, orange: 3, yellow: 4, green: 5, blue: 6, violet: 7, grey: 8, white: 9, gold: -1, silver: -2 };
+export const MULTIPLIER_EXPONENT: Record<MultiplierColour, number> = {
+  black: 0,
+  brown: 1,
+  red: 2,
+  orange: 3,
+  yellow: 4,
+  green: 5,
+  blue: 6,
+  violet: 7,
+  grey: 8,
+  white: 9,
+  gold: -1,
+  silver: -2,
+};
 
 /** Tolerance letters printed after a value code. */
 export const TOLERANCE_BY_LETTER = { B: 0.1, C: 0.25, D: 0.5, F: 1, G: 2, J: 5, K: 10, M: 20 } as const;
@@ -72,19 +105,30 @@ function valueOf(ohms: number, tolerancePct: number | null, notes: string[] = []
  */
 export function decodeBands(bands: readonly BandColour[]): ResistorValue {
   if (bands.length === 1 && bands[0] === 'black') return valueOf(0, null, ['A single black band is a 0 Ω link.']);
-  if (bands.length < 3 || bands.length > 5) throw new RangeError(`A resistor has 3, 4 or 5 bands; ${bands.length} were given.`);
+  if (bands.length < 3 || bands.length > 5)
+    throw new RangeError(`A resistor has 3, 4 or 5 bands; ${bands.length} were given.`);
   const toleranceBand: BandColour = bands.length === 3 ? 'none' : bands[bands.length - 1];
   const valueBands = bands.length === 3 ? bands : bands.slice(0, -1);
   const digitBands = valueBands.slice(0, -1);
   const multiplier = valueBands[valueBands.length - 1];
-  if (bands[0] === 'gold' || bands[0] === 'silver') throw new RangeError('The first band is never gold or silver: that is the tolerance end — read the resistor from the other end.');
-  if (bands.length === 5 && toleranceBand === 'none') throw new RangeError('A five-band resistor always has a tolerance band; check the band count.');
+  if (bands[0] === 'gold' || bands[0] === 'silver')
+    throw new RangeError(
+      'The first band is never gold or silver: that is the tolerance end — read the resistor from the other end.',
+    );
+  if (bands.length === 5 && toleranceBand === 'none')
+    throw new RangeError('A five-band resistor always has a tolerance band; check the band count.');
   digitBands.forEach((c, i) => {
     if (!isDigitColour(c)) throw new RangeError(`Band ${i + 1} is a digit and cannot be ${c}.`);
   });
-  if (digitBands[0] === 'black') throw new RangeError('The first band is never black; read the resistor from the other end, or check the colours in daylight.');
+  if (digitBands[0] === 'black')
+    throw new RangeError(
+      'The first band is never black; read the resistor from the other end, or check the colours in daylight.',
+    );
   if (!isMultiplierColour(multiplier)) throw new RangeError(`The multiplier band cannot be ${multiplier}.`);
-  if (!isToleranceColour(toleranceBand)) throw new RangeError(`The tolerance band cannot be ${toleranceBand}; tolerance colours are ${TOLERANCE_COLOURS.join(', ')}.`);
+  if (!isToleranceColour(toleranceBand))
+    throw new RangeError(
+      `The tolerance band cannot be ${toleranceBand}; tolerance colours are ${TOLERANCE_COLOURS.join(', ')}.`,
+    );
   const digits = Number(digitBands.map((c) => DIGIT_COLOURS.indexOf(c as DigitColour)).join(''));
   return valueOf(clean(digits * 10 ** MULTIPLIER_EXPONENT[multiplier]), TOLERANCE_BY_COLOUR[toleranceBand]);
 }
@@ -93,7 +137,10 @@ const isToleranceLetter = (s: string): s is ToleranceLetter => Object.hasOwn(TOL
 
 export function toleranceFromLetter(letter: string): number {
   const up = letter.toUpperCase();
-  if (!isToleranceLetter(up)) throw new RangeError(`"${letter}" is not a tolerance letter; they are ${Object.keys(TOLERANCE_BY_LETTER).join(' ')}.`);
+  if (!isToleranceLetter(up))
+    throw new RangeError(
+      `"${letter}" is not a tolerance letter; they are ${Object.keys(TOLERANCE_BY_LETTER).join(' ')}.`,
+    );
   return TOLERANCE_BY_LETTER[up];
 }
 
@@ -102,8 +149,16 @@ const RKM_SCALE = { R: 1, K: 1e3, M: 1e6, G: 1e9 } as const;
 /** The value part alone, or null when it is not a value code. */
 function valueCode(code: string): { ohms: number; notes: string[] } | null {
   if (/^0+$/.test(code) && code.length <= 4) return { ohms: 0, notes: ['A code of zeros is a 0 Ω link (a jumper).'] };
-  if (/^\d{3}$/.test(code)) return { ohms: clean(Number(code.slice(0, 2)) * 10 ** Number(code[2])), notes: ['Three-digit codes are usually ±5 % parts (common practice, not a rule).'] };
-  if (/^\d{4}$/.test(code)) return { ohms: clean(Number(code.slice(0, 3)) * 10 ** Number(code[3])), notes: ['Four-digit codes are usually ±1 % parts (common practice, not a rule).'] };
+  if (/^\d{3}$/.test(code))
+    return {
+      ohms: clean(Number(code.slice(0, 2)) * 10 ** Number(code[2])),
+      notes: ['Three-digit codes are usually ±5 % parts (common practice, not a rule).'],
+    };
+  if (/^\d{4}$/.test(code))
+    return {
+      ohms: clean(Number(code.slice(0, 3)) * 10 ** Number(code[3])),
+      notes: ['Four-digit codes are usually ±1 % parts (common practice, not a rule).'],
+    };
   // RKM: the letter stands where the decimal point would be and gives the scale (R ohms, K kilo, M mega, G giga).
   const m = /^(\d*)([RKMG])(\d*)$/.exec(code);
   if (m && m[1].length + m[3].length >= 1 && m[1].length + m[3].length <= 4) {
@@ -127,13 +182,28 @@ export function decodePrintedCode(input: string): ResistorValue {
   const head = code.slice(0, -1);
   const withLetter = isToleranceLetter(last) && head !== '' ? valueCode(head) : null;
   // Two digits and a letter is also the shape of an EIA-96 code on 1 % SMD parts; say so rather than guess silently.
-  const eia96 = /^\d{2}[A-Z]$/.test(code) ? ['On a 1 % SMD part, two digits and a letter may be an EIA-96 code instead; check the EIA-96 table.'] : [];
+  const eia96 = /^\d{2}[A-Z]$/.test(code)
+    ? ['On a 1 % SMD part, two digits and a letter may be an EIA-96 code instead; check the EIA-96 table.']
+    : [];
   if (whole) {
     const notes = [...whole.notes, ...eia96];
-    if (withLetter) notes.push(`Read as ${formatOhms(whole.ohms)}; if "${last}" is a tolerance letter instead, it is ${formatOhms(withLetter.ohms)} ${formatPct(toleranceFromLetter(last))}.`);
+    if (withLetter)
+      notes.push(
+        `Read as ${formatOhms(whole.ohms)}; if "${last}" is a tolerance letter instead, it is ${formatOhms(withLetter.ohms)} ${formatPct(toleranceFromLetter(last))}.`,
+      );
     return valueOf(whole.ohms, null, notes);
   }
-  if (withLetter) return valueOf(withLetter.ohms, toleranceFromLetter(last), withLetter.notes.filter((n) => !n.includes('usually')));
-  if (eia96.length) throw new RangeError(`"${input.trim()}" looks like an EIA-96 code (two digits and a letter), which this calculator does not decode; look it up in the EIA-96 table.`);
-  throw new RangeError(`"${input.trim()}" is not a resistor code: use 3 or 4 digits (103, 1002), R/K/M notation (4R7, R47, 4K7, 2M2), optionally with a tolerance letter (B C D F G J K M).`);
+  if (withLetter)
+    return valueOf(
+      withLetter.ohms,
+      toleranceFromLetter(last),
+      withLetter.notes.filter((n) => !n.includes('usually')),
+    );
+  if (eia96.length)
+    throw new RangeError(
+      `"${input.trim()}" looks like an EIA-96 code (two digits and a letter), which this calculator does not decode; look it up in the EIA-96 table.`,
+    );
+  throw new RangeError(
+    `"${input.trim()}" is not a resistor code: use 3 or 4 digits (103, 1002), R/K/M notation (4R7, R47, 4K7, 2M2), optionally with a tolerance letter (B C D F G J K M).`,
+  );
 }

@@ -70,26 +70,47 @@ export interface SubstitutionResult {
 }
 
 /** "an NPN", "an N-MOSFET", "a PNP", "a P-MOSFET": the article follows how the letters are said. */
-const article = (t: TransistorType, capital = false) => (t.startsWith('N') ? (capital ? 'An' : 'an') : capital ? 'A' : 'a');
+const article = (t: TransistorType, capital = false) =>
+  t.startsWith('N') ? (capital ? 'An' : 'an') : capital ? 'A' : 'a';
 const isBipolar = (t: TransistorType) => t === 'NPN' || t === 'PNP';
-const normalisePackage = (p: string) => p.trim().toUpperCase().replace(/\s+/g, '').replace(/^TO(\d)/, 'TO-$1').replace(/^SOT(\d)/, 'SOT-$1');
+const normalisePackage = (p: string) =>
+  p
+    .trim()
+    .toUpperCase()
+    .replace(/\s+/g, '')
+    .replace(/^TO(\d)/, 'TO-$1')
+    .replace(/^SOT(\d)/, 'SOT-$1');
 const knownPackage = (p: string): KnownPackage | null => {
   const n = normalisePackage(p);
   return (Object.keys(PACKAGES) as KnownPackage[]).find((k) => k.toUpperCase() === n) ?? null;
 };
 
 function checkSpec(s: TransistorSpec, which: string) {
-  if (!(TRANSISTOR_TYPES as readonly string[]).includes(s.type)) throw new RangeError(`The ${which} type must be one of ${TRANSISTOR_TYPES.join(', ')}.`);
-  for (const [v, what] of [[s.vMaxV, 'voltage rating'], [s.iMaxA, 'current rating'], [s.ptotW, 'power rating']] as const) {
+  if (!(TRANSISTOR_TYPES as readonly string[]).includes(s.type))
+    throw new RangeError(`The ${which} type must be one of ${TRANSISTOR_TYPES.join(', ')}.`);
+  for (const [v, what] of [
+    [s.vMaxV, 'voltage rating'],
+    [s.iMaxA, 'current rating'],
+    [s.ptotW, 'power rating'],
+  ] as const) {
     if (!Number.isFinite(v) || v <= 0) throw new RangeError(`The ${which} ${what} must be a number above 0.`);
   }
-  for (const [v, what] of [[s.hfeMin, 'gain'], [s.ftMHz, 'transition frequency'], [s.vgsThMaxV, 'gate threshold'], [s.fallTimeNs, 'fall time']] as const) {
-    if (v !== undefined && (!Number.isFinite(v) || v <= 0)) throw new RangeError(`The ${which} ${what}, when given, must be a number above 0.`);
+  for (const [v, what] of [
+    [s.hfeMin, 'gain'],
+    [s.ftMHz, 'transition frequency'],
+    [s.vgsThMaxV, 'gate threshold'],
+    [s.fallTimeNs, 'fall time'],
+  ] as const) {
+    if (v !== undefined && (!Number.isFinite(v) || v <= 0))
+      throw new RangeError(`The ${which} ${what}, when given, must be a number above 0.`);
   }
   if (s.package.trim() === '') throw new RangeError(`Give the ${which} package, e.g. TO-220.`);
   if (s.pinout !== undefined && s.pinout.trim() !== '') {
     const letters = isBipolar(s.type) ? /^[BCE]{2,3}$/ : /^[GDS]{2,3}$/;
-    if (!letters.test(normalisePinout(s.pinout))) throw new RangeError(`The ${which} pin-out uses the letters ${isBipolar(s.type) ? 'B, C and E' : 'G, D and S'}, e.g. ${isBipolar(s.type) ? 'BCE' : 'GDS'}.`);
+    if (!letters.test(normalisePinout(s.pinout)))
+      throw new RangeError(
+        `The ${which} pin-out uses the letters ${isBipolar(s.type) ? 'B, C and E' : 'G, D and S'}, e.g. ${isBipolar(s.type) ? 'BCE' : 'GDS'}.`,
+      );
   }
 }
 
@@ -106,8 +127,14 @@ export function checkSubstitution(original: TransistorSpec, candidate: Transisto
   const [vName, iName, lead] = bipolar ? ['Vceo', 'Ic', 'collector'] : ['Vds', 'Id', 'drain'];
 
   if (original.type === candidate.type) passed.push(`Same type (${original.type}).`);
-  else if (isBipolar(original.type) !== isBipolar(candidate.type)) refusals.push(`${article(candidate.type, true)} ${candidate.type} cannot replace ${article(original.type)} ${original.type}: a MOSFET is driven by gate voltage, a bipolar transistor by base current.`);
-  else refusals.push(`Opposite polarity: ${article(candidate.type)} ${candidate.type} cannot replace ${article(original.type)} ${original.type}.`);
+  else if (isBipolar(original.type) !== isBipolar(candidate.type))
+    refusals.push(
+      `${article(candidate.type, true)} ${candidate.type} cannot replace ${article(original.type)} ${original.type}: a MOSFET is driven by gate voltage, a bipolar transistor by base current.`,
+    );
+  else
+    refusals.push(
+      `Opposite polarity: ${article(candidate.type)} ${candidate.type} cannot replace ${article(original.type)} ${original.type}.`,
+    );
 
   const ratings = [
     [vName, original.vMaxV, candidate.vMaxV, 'V'],
@@ -124,38 +151,73 @@ export function checkSubstitution(original: TransistorSpec, candidate: Transisto
   const nameO = po ?? original.package.trim();
   const nameC = pc ?? candidate.package.trim();
   if (normalisePackage(nameO) === normalisePackage(nameC)) passed.push(`Same package (${nameO}).`);
-  else if (!po || !pc) warnings.push(`Packages ${nameO} and ${nameC} cannot be compared here: check size, mounting and pin-out against both datasheets.`);
+  else if (!po || !pc)
+    warnings.push(
+      `Packages ${nameO} and ${nameC} cannot be compared here: check size, mounting and pin-out against both datasheets.`,
+    );
   else {
     const o = PACKAGES[po];
     const c = PACKAGES[pc];
-    if (o.mount !== c.mount) refusals.push(`A ${c.mount === 'surface' ? 'surface-mount' : 'through-hole'} ${pc} does not fit the board made for a ${o.mount === 'surface' ? 'surface-mount' : 'through-hole'} ${po}.`);
-    else if (c.size > o.size) warnings.push(`Larger package (${pc} for ${po}): check it fits the space and the heatsink, that the mounting hole lines up and the leads reach, and check the pin-out — it often differs between packages.`);
-    else if (c.size < o.size) warnings.push(`Smaller package (${pc} for ${po}): it sheds heat through a smaller face; check it sits flat on the heatsink and the clamp or screw holds it, and check the pin-out.`);
-    else warnings.push(`Different package of similar size (${pc} for ${po}): check the mounting hole, the heatsink contact and the pin-out.`);
-    if (o.mount === c.mount && c.liveTab && !o.liveTab) warnings.push(`The ${pc}'s tab or case is connected to the ${lead}, the original's was not: if it touches a heatsink or the chassis, fit an insulating pad and bush and check the insulation.`);
+    if (o.mount !== c.mount)
+      refusals.push(
+        `A ${c.mount === 'surface' ? 'surface-mount' : 'through-hole'} ${pc} does not fit the board made for a ${o.mount === 'surface' ? 'surface-mount' : 'through-hole'} ${po}.`,
+      );
+    else if (c.size > o.size)
+      warnings.push(
+        `Larger package (${pc} for ${po}): check it fits the space and the heatsink, that the mounting hole lines up and the leads reach, and check the pin-out — it often differs between packages.`,
+      );
+    else if (c.size < o.size)
+      warnings.push(
+        `Smaller package (${pc} for ${po}): it sheds heat through a smaller face; check it sits flat on the heatsink and the clamp or screw holds it, and check the pin-out.`,
+      );
+    else
+      warnings.push(
+        `Different package of similar size (${pc} for ${po}): check the mounting hole, the heatsink contact and the pin-out.`,
+      );
+    if (o.mount === c.mount && c.liveTab && !o.liveTab)
+      warnings.push(
+        `The ${pc}'s tab or case is connected to the ${lead}, the original's was not: if it touches a heatsink or the chassis, fit an insulating pad and bush and check the insulation.`,
+      );
   }
 
   const pinO = original.pinout ? normalisePinout(original.pinout) : '';
   const pinC = candidate.pinout ? normalisePinout(candidate.pinout) : '';
   if (!pinO || !pinC) warnings.push('Pin-out not compared: check it on both datasheets before fitting.');
   else if (pinO === pinC) passed.push(`Same pin-out (${pinO}).`);
-  else warnings.push(`Different pin-out (${pinC} for ${pinO}): the leads must be re-formed or crossed — mark each one, keep them apart, and check against both datasheets before power goes on.`);
+  else
+    warnings.push(
+      `Different pin-out (${pinC} for ${pinO}): the leads must be re-formed or crossed — mark each one, keep them apart, and check against both datasheets before power goes on.`,
+    );
 
   if (bipolar && original.hfeMin !== undefined && candidate.hfeMin !== undefined) {
     if (candidate.hfeMin >= original.hfeMin) passed.push(`Gain hFE ${candidate.hfeMin} ≥ ${original.hfeMin}.`);
-    else warnings.push(`Lower gain (hFE ${candidate.hfeMin} for ${original.hfeMin}): it may not switch fully on with the same base drive and would then run hot.`);
+    else
+      warnings.push(
+        `Lower gain (hFE ${candidate.hfeMin} for ${original.hfeMin}): it may not switch fully on with the same base drive and would then run hot.`,
+      );
   }
   if (bipolar && original.ftMHz !== undefined && candidate.ftMHz !== undefined) {
     if (candidate.ftMHz >= original.ftMHz) passed.push(`fT ${candidate.ftMHz} MHz ≥ ${original.ftMHz} MHz.`);
-    else warnings.push(`Slower part (fT ${candidate.ftMHz} MHz for ${original.ftMHz} MHz): in a switching or high-frequency stage it can run hot or fail.`);
+    else
+      warnings.push(
+        `Slower part (fT ${candidate.ftMHz} MHz for ${original.ftMHz} MHz): in a switching or high-frequency stage it can run hot or fail.`,
+      );
   }
   if (!bipolar && original.vgsThMaxV !== undefined && candidate.vgsThMaxV !== undefined) {
-    if (candidate.vgsThMaxV <= original.vgsThMaxV) passed.push(`Gate threshold ${candidate.vgsThMaxV} V ≤ ${original.vgsThMaxV} V.`);
-    else warnings.push(`Higher gate threshold (${candidate.vgsThMaxV} V for ${original.vgsThMaxV} V): the same gate drive may not turn it fully on; check the drive voltage.`);
+    if (candidate.vgsThMaxV <= original.vgsThMaxV)
+      passed.push(`Gate threshold ${candidate.vgsThMaxV} V ≤ ${original.vgsThMaxV} V.`);
+    else
+      warnings.push(
+        `Higher gate threshold (${candidate.vgsThMaxV} V for ${original.vgsThMaxV} V): the same gate drive may not turn it fully on; check the drive voltage.`,
+      );
   }
   if (original.fallTimeNs !== undefined && candidate.fallTimeNs !== undefined) {
-    if (candidate.fallTimeNs <= original.fallTimeNs) passed.push(`Fall time ${candidate.fallTimeNs} ns ≤ ${original.fallTimeNs} ns.`);
-    else warnings.push(`Slower switching (fall time ${candidate.fallTimeNs} ns for ${original.fallTimeNs} ns): in a switch-mode supply it runs hotter and may fail.`);
+    if (candidate.fallTimeNs <= original.fallTimeNs)
+      passed.push(`Fall time ${candidate.fallTimeNs} ns ≤ ${original.fallTimeNs} ns.`);
+    else
+      warnings.push(
+        `Slower switching (fall time ${candidate.fallTimeNs} ns for ${original.fallTimeNs} ns): in a switch-mode supply it runs hotter and may fail.`,
+      );
   }
 
   const verdict: SubstitutionVerdict = refusals.length ? 'refuse' : warnings.length ? 'accept-with-warnings' : 'accept';
@@ -194,9 +256,15 @@ const isShort = (r: DiodeReading) => r !== 'OL' && r <= SHORT_MAX_V;
 export function interpretDiodeTest(readings: DiodeReadings): DiodeTestResult {
   for (const p of PROBE_PAIRS) {
     const r = readings[p];
-    if (r !== 'OL' && (!Number.isFinite(r) || r < 0)) throw new RangeError(`The reading with red on ${p[0]} and black on ${p[1]} must be a voltage of 0 or more, or OL.`);
+    if (r !== 'OL' && (!Number.isFinite(r) || r < 0))
+      throw new RangeError(
+        `The reading with red on ${p[0]} and black on ${p[1]} must be a voltage of 0 or more, or OL.`,
+      );
     // A meter's diode test shows at most about 2–3 V before it reads OL; 650 is millivolts typed as volts.
-    if (r !== 'OL' && r > 5) throw new RangeError(`The reading with red on ${p[0]} and black on ${p[1]} is ${r} V: enter volts (0.65, not 650), or OL.`);
+    if (r !== 'OL' && r > 5)
+      throw new RangeError(
+        `The reading with red on ${p[0]} and black on ${p[1]} is ${r} V: enter volts (0.65, not 650), or OL.`,
+      );
   }
   const pairs = [
     ['BE', 'EB', 'base–emitter'],
@@ -209,16 +277,30 @@ export function interpretDiodeTest(readings: DiodeReadings): DiodeTestResult {
     const back = readings[from];
     const junction = to[0] === 'B';
     const resistorNote = to === 'BE' ? ' (unless its datasheet shows a built-in base–emitter resistor)' : '';
-    if (isShort(there) && isShort(back)) failed.push(`The ${name} pair reads short both ways (${show(there)}, ${show(back)}): the transistor has failed${resistorNote}.`);
-    else if (conducts(there) && conducts(back)) failed.push(`The ${name} pair conducts both ways (${show(there)}, ${show(back)}): leaky or shorted, the transistor has failed${resistorNote}.`);
-    else if (junction && !conducts(there) && !conducts(back)) failed.push(`The ${name} junction is open both ways: the transistor has failed.`);
+    if (isShort(there) && isShort(back))
+      failed.push(
+        `The ${name} pair reads short both ways (${show(there)}, ${show(back)}): the transistor has failed${resistorNote}.`,
+      );
+    else if (conducts(there) && conducts(back))
+      failed.push(
+        `The ${name} pair conducts both ways (${show(there)}, ${show(back)}): leaky or shorted, the transistor has failed${resistorNote}.`,
+      );
+    else if (junction && !conducts(there) && !conducts(back))
+      failed.push(`The ${name} junction is open both ways: the transistor has failed.`);
   }
   if (failed.length) return { verdict: 'failed', polarity: null, reasons: failed };
 
   // Each junction now conducts exactly one way; the base is positive in both for an NPN, negative for a PNP.
   const be = conducts(readings.BE) ? 'NPN' : 'PNP';
   const bc = conducts(readings.BC) ? 'NPN' : 'PNP';
-  if (be !== bc) return { verdict: 'unclear', polarity: null, reasons: ['The base–emitter and base–collector junctions point opposite ways: check which lead is the base and measure again.'] };
+  if (be !== bc)
+    return {
+      verdict: 'unclear',
+      polarity: null,
+      reasons: [
+        'The base–emitter and base–collector junctions point opposite ways: check which lead is the base and measure again.',
+      ],
+    };
   const polarity = be;
   const vBE = (polarity === 'NPN' ? readings.BE : readings.EB) as number;
   const vBC = (polarity === 'NPN' ? readings.BC : readings.CB) as number;
@@ -229,18 +311,43 @@ export function interpretDiodeTest(readings: DiodeReadings): DiodeTestResult {
     // A damper diode across C–E conducts from emitter to collector in an NPN (red on E), the reverse in a PNP.
     const damperWay = polarity === 'NPN' ? conducts(ceBack) : conducts(ceThere);
     const value = show(conducts(ceThere) ? ceThere : ceBack);
-    if (damperWay) return { verdict: 'unclear', polarity, reasons: [`Collector–emitter conducts one way (${value}): a built-in damper diode (common in line-output and some switching transistors) reads like this — check the datasheet; without one, the transistor has failed.`] };
-    return { verdict: 'failed', polarity, reasons: [`Collector–emitter conducts (${value}) where it should be open both ways: the transistor has failed.`] };
+    if (damperWay)
+      return {
+        verdict: 'unclear',
+        polarity,
+        reasons: [
+          `Collector–emitter conducts one way (${value}): a built-in damper diode (common in line-output and some switching transistors) reads like this — check the datasheet; without one, the transistor has failed.`,
+        ],
+      };
+    return {
+      verdict: 'failed',
+      polarity,
+      reasons: [`Collector–emitter conducts (${value}) where it should be open both ways: the transistor has failed.`],
+    };
   }
 
   const odd: string[] = [];
-  for (const [v, name] of [[vBE, 'Base–emitter'], [vBC, 'Base–collector']] as const) {
-    if (v < JUNCTION_MIN_V) odd.push(`${name} reads ${v} V, low for a silicon junction: a germanium part, a leaky junction, or other parts in circuit.`);
-    else if (v > JUNCTION_MAX_V) odd.push(`${name} reads ${v} V, high for a single junction: a Darlington reads about twice a junction base–emitter; otherwise suspect it.`);
+  for (const [v, name] of [
+    [vBE, 'Base–emitter'],
+    [vBC, 'Base–collector'],
+  ] as const) {
+    if (v < JUNCTION_MIN_V)
+      odd.push(
+        `${name} reads ${v} V, low for a silicon junction: a germanium part, a leaky junction, or other parts in circuit.`,
+      );
+    else if (v > JUNCTION_MAX_V)
+      odd.push(
+        `${name} reads ${v} V, high for a single junction: a Darlington reads about twice a junction base–emitter; otherwise suspect it.`,
+      );
   }
   if (odd.length) return { verdict: 'unclear', polarity, reasons: odd };
 
-  const reasons = [`${polarity}: base–emitter ${vBE} V and base–collector ${vBC} V one way only, collector–emitter open both ways. The junctions test good; this does not prove gain or breakdown voltage.`];
-  if (vBC > vBE) reasons.push('Base–collector reads higher than base–emitter, usually the other way round: check collector and emitter are not swapped.');
+  const reasons = [
+    `${polarity}: base–emitter ${vBE} V and base–collector ${vBC} V one way only, collector–emitter open both ways. The junctions test good; this does not prove gain or breakdown voltage.`,
+  ];
+  if (vBC > vBE)
+    reasons.push(
+      'Base–collector reads higher than base–emitter, usually the other way round: check collector and emitter are not swapped.',
+    );
   return { verdict: 'good', polarity, reasons };
 }

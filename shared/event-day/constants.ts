@@ -42,7 +42,14 @@ export const OUTCOME_LABELS: Record<Outcome, string> = {
 };
 
 /** Barriers to repair for an end-of-life item, as the Open Repair Data Standard words them (REFERENCE.md §5). */
-export const BARRIERS = ['spare-parts-not-available', 'spare-parts-too-expensive', 'no-way-to-open', 'repair-information-not-available', 'lack-of-equipment', 'too-worn-out'] as const;
+export const BARRIERS = [
+  'spare-parts-not-available',
+  'spare-parts-too-expensive',
+  'no-way-to-open',
+  'repair-information-not-available',
+  'lack-of-equipment',
+  'too-worn-out',
+] as const;
 export type Barrier = (typeof BARRIERS)[number];
 export const BARRIER_LABELS: Record<Barrier, string> = {
   'spare-parts-not-available': 'Spare parts not available',

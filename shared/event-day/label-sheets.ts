@@ -18,7 +18,14 @@ export interface LabelLayout {
 
 export const A4 = { width: 210, height: 297 };
 
-function centred(id: string, name: string, label: { width: number; height: number }, columns: number, rows: number, gapX: number): LabelLayout {
+function centred(
+  id: string,
+  name: string,
+  label: { width: number; height: number },
+  columns: number,
+  rows: number,
+  gapX: number,
+): LabelLayout {
   const left = Math.round(((A4.width - columns * label.width - (columns - 1) * gapX) / 2) * 100) / 100;
   const top = Math.round(((A4.height - rows * label.height) / 2) * 100) / 100;
   return { id, name, page: A4, label, columns, rows, top, left, gapX, gapY: 0 };
@@ -27,7 +34,18 @@ function centred(id: string, name: string, label: { width: number; height: numbe
 export const LABEL_LAYOUTS: LabelLayout[] = [
   centred('a4-24', 'A4 sheet, 24 labels 63.5 × 33.9 mm (3 × 8)', { width: 63.5, height: 33.9 }, 3, 8, 2.5),
   centred('a4-21', 'A4 sheet, 21 labels 63.5 × 38.1 mm (3 × 7)', { width: 63.5, height: 38.1 }, 3, 7, 2.5),
-  { id: 'roll-62', name: 'Label roll 62 mm wide (62 × 40 mm per tag)', page: { width: 62, height: 40 }, label: { width: 62, height: 40 }, columns: 1, rows: 1, top: 0, left: 0, gapX: 0, gapY: 0 },
+  {
+    id: 'roll-62',
+    name: 'Label roll 62 mm wide (62 × 40 mm per tag)',
+    page: { width: 62, height: 40 },
+    label: { width: 62, height: 40 },
+    columns: 1,
+    rows: 1,
+    top: 0,
+    left: 0,
+    gapX: 0,
+    gapY: 0,
+  },
 ];
 
 export const layoutById = (id: string) => LABEL_LAYOUTS.find((l) => l.id === id) ?? LABEL_LAYOUTS[0];

@@ -16,7 +16,13 @@ export interface QueueItem {
 
 /** Booked items first within their slot, walk-ins after them, each in the order they checked in. */
 export function queueOrder<T extends QueueItem>(items: readonly T[]): T[] {
-  return [...items].sort((a, b) => a.slotStartsAt - b.slotStartsAt || Number(a.walkIn) - Number(b.walkIn) || a.checkedInAt - b.checkedInAt || a.id - b.id);
+  return [...items].sort(
+    (a, b) =>
+      a.slotStartsAt - b.slotStartsAt ||
+      Number(a.walkIn) - Number(b.walkIn) ||
+      a.checkedInAt - b.checkedInAt ||
+      a.id - b.id,
+  );
 }
 
 export interface FixerNow {
@@ -29,7 +35,11 @@ export interface FixerNow {
  * Estimated minutes until each waiting item reaches a bench: items go in queue order to their planned fixer, or
  * to whoever is free first; each keeps its fixer for its category's minutes. Null when no fixer is on hand.
  */
-export function estimateWaits(now: number, fixers: readonly FixerNow[], waiting: readonly QueueItem[]): Map<number, number | null> {
+export function estimateWaits(
+  now: number,
+  fixers: readonly FixerNow[],
+  waiting: readonly QueueItem[],
+): Map<number, number | null> {
   const free = new Map(fixers.map((f) => [f.id, Math.max(now, f.busyUntil)]));
   const out = new Map<number, number | null>();
   for (const item of queueOrder(waiting)) {
@@ -64,10 +74,21 @@ export function liveWarnings(
   const out: LiveWarning[] = [];
   for (const q of queued) {
     const minutes = Math.floor((now - q.checkedInAt) / 60_000);
-    if (minutes > LONG_WAIT_MINUTES) out.push({ kind: 'long-wait', itemId: q.id, message: `${q.label} has waited ${minutes} minutes since check-in.` });
+    if (minutes > LONG_WAIT_MINUTES)
+      out.push({
+        kind: 'long-wait',
+        itemId: q.id,
+        message: `${q.label} has waited ${minutes} minutes since check-in.`,
+      });
   }
   if (queued.length > 0) {
-    for (const f of fixersOnShift) if (!f.busy) out.push({ kind: 'idle-fixer', userId: f.userId, message: `${f.name} has nothing at the bench while ${queued.length} item${queued.length === 1 ? '' : 's'} wait${queued.length === 1 ? 's' : ''}.` });
+    for (const f of fixersOnShift)
+      if (!f.busy)
+        out.push({
+          kind: 'idle-fixer',
+          userId: f.userId,
+          message: `${f.name} has nothing at the bench while ${queued.length} item${queued.length === 1 ? '' : 's'} wait${queued.length === 1 ? 's' : ''}.`,
+        });
   }
   return out;
 }

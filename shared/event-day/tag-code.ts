@@ -35,7 +35,8 @@ export function readScan(text: string): { kind: 'booking'; reference: string } |
   const raw = url ? url[2] : t;
   const kind = url?.[1];
   const cleaned = raw.toUpperCase().replace(/[\s-]/g, '');
-  if (kind !== 't' && cleaned.length === 6 && /^[2-9A-HJ-NP-Z]{6}$/.test(cleaned)) return { kind: 'booking', reference: `${cleaned.slice(0, 3)}-${cleaned.slice(3)}` };
+  if (kind !== 't' && cleaned.length === 6 && /^[2-9A-HJ-NP-Z]{6}$/.test(cleaned))
+    return { kind: 'booking', reference: `${cleaned.slice(0, 3)}-${cleaned.slice(3)}` };
   if (kind !== 'b' && TAG_CODE_PATTERN.test(cleaned)) return { kind: 'tag', code: cleaned };
   return null;
 }

@@ -14,11 +14,13 @@ export const EMISSION_FACTORS = {
 } as const;
 export type FactorKind = keyof typeof EMISSION_FACTORS;
 
-export const FACTOR_SOURCE = 'UK Government GHG conversion factors, “material use”, primary production (secondary source)';
+export const FACTOR_SOURCE =
+  'UK Government GHG conversion factors, “material use”, primary production (secondary source)';
 
 /** The displacement factor shipped until an admin sets another: an assumption, not a sourced figure. */
 export const DEFAULT_DISPLACEMENT = 0.5;
-export const DISPLACEMENT_NOTE = 'The share of repairs that really save a new purchase. Mendery ships 0.5 as its assumption (half of the repaired items would otherwise have been replaced), and the network’s admins set the value in use; the idea of displacement is from Zink & Geyer, “Circular economy rebound”, Journal of Industrial Ecology, 2017 (from memory).';
+export const DISPLACEMENT_NOTE =
+  'The share of repairs that really save a new purchase. Mendery ships 0.5 as its assumption (half of the repaired items would otherwise have been replaced), and the network’s admins set the value in use; the idea of displacement is from Zink & Geyer, “Circular economy rebound”, Journal of Industrial Ecology, 2017 (from memory).';
 
 const TEXTILE_SLUGS = ['clothing', 'bag-textile'];
 

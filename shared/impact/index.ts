@@ -74,7 +74,18 @@ export function lastVisits<T extends Pick<RepairRecord, 'itemId' | 'returnOfItem
   return records.filter((r) => !superseded.has(r.itemId));
 }
 
-const emptyCell = (month: string, categoryId: number): ImpactCell => ({ month, categoryId, items: 0, fixed: 0, partsNeeded: 0, advice: 0, endOfLife: 0, fixedWeighedKg: 0, fixedUnweighed: 0, barriers: {} });
+const emptyCell = (month: string, categoryId: number): ImpactCell => ({
+  month,
+  categoryId,
+  items: 0,
+  fixed: 0,
+  partsNeeded: 0,
+  advice: 0,
+  endOfLife: 0,
+  fixedWeighedKg: 0,
+  fixedUnweighed: 0,
+  barriers: {},
+});
 
 /** Adds one record (already de-duplicated) to its cell. */
 export function addToCell(cell: ImpactCell, r: RepairRecord) {
@@ -106,7 +117,13 @@ export function cellsFromRecords(records: readonly RepairRecord[]): ImpactCell[]
 const round = (x: number, dp: number) => Math.round(x * 10 ** dp) / 10 ** dp;
 
 function counts(cells: readonly ImpactCell[], cats: Map<number, ImpactCategory>, d: number): Counts {
-  let items = 0, fixed = 0, partsNeeded = 0, advice = 0, endOfLife = 0, kg = 0, co2e = 0;
+  let items = 0,
+    fixed = 0,
+    partsNeeded = 0,
+    advice = 0,
+    endOfLife = 0,
+    kg = 0,
+    co2e = 0;
   for (const c of cells) {
     const cat = cats.get(c.categoryId);
     const mass = c.fixedWeighedKg + c.fixedUnweighed * (cat?.avgWeightKg ?? 0);
@@ -119,7 +136,16 @@ function counts(cells: readonly ImpactCell[], cats: Map<number, ImpactCategory>,
     co2e += mass * (cat?.co2ePerKg ?? 0) * d;
   }
   const known = fixed + partsNeeded + advice + endOfLife;
-  return { items, fixed, partsNeeded, advice, endOfLife, fixRate: known ? round(fixed / known, 4) : null, kgDiverted: round(kg, 6), co2eKg: round(co2e, 6) };
+  return {
+    items,
+    fixed,
+    partsNeeded,
+    advice,
+    endOfLife,
+    fixRate: known ? round(fixed / known, 4) : null,
+    kgDiverted: round(kg, 6),
+    co2eKg: round(co2e, 6),
+  };
 }
 
 function groupBy<K>(cells: readonly ImpactCell[], key: (c: ImpactCell) => K): Map<K, ImpactCell[]> {
@@ -129,19 +155,37 @@ function groupBy<K>(cells: readonly ImpactCell[], key: (c: ImpactCell) => K): Ma
 }
 
 /** Totals, by category, by skill, by month and the barriers to repair, from cells. */
-export function totalsFromCells(cells: readonly ImpactCell[], categories: readonly ImpactCategory[], displacement: number): ImpactTotals {
+export function totalsFromCells(
+  cells: readonly ImpactCell[],
+  categories: readonly ImpactCategory[],
+  displacement: number,
+): ImpactTotals {
   if (!(displacement >= 0 && displacement <= 1)) throw new RangeError('The displacement factor is between 0 and 1.');
   const cats = new Map(categories.map((c) => [c.id, c]));
   const all = counts(cells, cats, displacement);
-  const barriers = BARRIERS.map((b) => ({ barrier: b, count: cells.reduce((n, c) => n + (c.barriers[b] ?? 0), 0) })).filter((b) => b.count > 0);
+  const barriers = BARRIERS.map((b) => ({
+    barrier: b,
+    count: cells.reduce((n, c) => n + (c.barriers[b] ?? 0), 0),
+  })).filter((b) => b.count > 0);
   return {
     ...all,
     unknown: all.items - all.fixed - all.partsNeeded - all.advice - all.endOfLife,
-    byCategory: [...groupBy(cells, (c) => c.categoryId)].map(([categoryId, cs]) => ({ categoryId, name: cats.get(categoryId)?.name ?? `Category ${categoryId}`, ...counts(cs, cats, displacement) })).sort((a, b) => b.items - a.items || a.categoryId - b.categoryId),
-    bySkill: [...groupBy(cells, (c) => cats.get(c.categoryId)?.skill ?? 'other')].map(([skill, cs]) => ({ skill, ...counts(cs, cats, displacement) })).sort((a, b) => b.items - a.items || a.skill.localeCompare(b.skill)),
-    byMonth: [...groupBy(cells, (c) => c.month)].map(([month, cs]) => ({ month, ...counts(cs, cats, displacement) })).sort((a, b) => a.month.localeCompare(b.month)),
+    byCategory: [...groupBy(cells, (c) => c.categoryId)]
+      .map(([categoryId, cs]) => ({
+        categoryId,
+        name: cats.get(categoryId)?.name ?? `Category ${categoryId}`,
+        ...counts(cs, cats, displacement),
+      }))
+      .sort((a, b) => b.items - a.items || a.categoryId - b.categoryId),
+    bySkill: [...groupBy(cells, (c) => cats.get(c.categoryId)?.skill ?? 'other')]
+      .map(([skill, cs]) => ({ skill, ...counts(cs, cats, displacement) }))
+      .sort((a, b) => b.items - a.items || a.skill.localeCompare(b.skill)),
+    byMonth: [...groupBy(cells, (c) => c.month)]
+      .map(([month, cs]) => ({ month, ...counts(cs, cats, displacement) }))
+      .sort((a, b) => a.month.localeCompare(b.month)),
     barriers,
   };
 }
 
-export const impact = (records: readonly RepairRecord[], categories: readonly ImpactCategory[], displacement: number) => totalsFromCells(cellsFromRecords(records), categories, displacement);
+export const impact = (records: readonly RepairRecord[], categories: readonly ImpactCategory[], displacement: number) =>
+  totalsFromCells(cellsFromRecords(records), categories, displacement);

@@ -49,27 +49,36 @@ export interface SafetyVerdict {
 export function judgeSafety(r: SafetyReadings): SafetyVerdict {
   const failures: string[] = [];
   const missing: string[] = [];
-  if (!r.visualOk) failures.push('The visual inspection found a fault (cord, plug, strain relief, casing or signs of heat).');
+  if (!r.visualOk)
+    failures.push('The visual inspection found a fault (cord, plug, strain relief, casing or signs of heat).');
   if (r.applianceClass === 'I') {
     if (r.cordLengthM === undefined) missing.push('cord length');
     if (r.protectiveConductorOhm === undefined) missing.push('protective conductor resistance');
     else if (r.cordLengthM !== undefined) {
       const limit = protectiveConductorLimitOhm(r.cordLengthM);
-      if (r.protectiveConductorOhm > limit) failures.push(`Protective conductor ${r.protectiveConductorOhm} Ω is above the ${limit} Ω limit for ${r.cordLengthM} m of cord.`);
+      if (r.protectiveConductorOhm > limit)
+        failures.push(
+          `Protective conductor ${r.protectiveConductorOhm} Ω is above the ${limit} Ω limit for ${r.cordLengthM} m of cord.`,
+        );
     }
   }
   if (r.applianceClass !== 'III' || r.insulationMOhm !== undefined) {
     if (r.insulationMOhm === undefined) missing.push('insulation resistance');
     else {
       const limit = insulationLimitMOhm(r.applianceClass, r.heating);
-      if (r.insulationMOhm < limit) failures.push(`Insulation ${r.insulationMOhm} MΩ is below the ${limit} MΩ minimum for class ${r.applianceClass}${r.heating ? ' with heating elements' : ''}.`);
+      if (r.insulationMOhm < limit)
+        failures.push(
+          `Insulation ${r.insulationMOhm} MΩ is below the ${limit} MΩ minimum for class ${r.applianceClass}${r.heating ? ' with heating elements' : ''}.`,
+        );
     }
   }
   if (r.protectiveCurrentMA !== undefined) {
     const limit = protectiveCurrentLimitMA(r.heatingKw);
-    if (r.protectiveCurrentMA > limit) failures.push(`Protective conductor current ${r.protectiveCurrentMA} mA is above ${limit} mA.`);
+    if (r.protectiveCurrentMA > limit)
+      failures.push(`Protective conductor current ${r.protectiveCurrentMA} mA is above ${limit} mA.`);
   }
-  if (r.touchCurrentMA !== undefined && r.touchCurrentMA > TOUCH_CURRENT_LIMIT_MA) failures.push(`Touch current ${r.touchCurrentMA} mA is above ${TOUCH_CURRENT_LIMIT_MA} mA.`);
+  if (r.touchCurrentMA !== undefined && r.touchCurrentMA > TOUCH_CURRENT_LIMIT_MA)
+    failures.push(`Touch current ${r.touchCurrentMA} mA is above ${TOUCH_CURRENT_LIMIT_MA} mA.`);
   return { pass: failures.length === 0 && missing.length === 0, failures, missing };
 }
 
@@ -77,4 +86,5 @@ export function judgeSafety(r: SafetyReadings): SafetyVerdict {
  * The UK code of practice's way (IET in-service inspection; from memory, not checked): 0.1 Ω plus the resistance
  * of the cord's protective conductor, e.g. 19.5 mΩ per metre for 1.0 mm² cord.
  */
-export const cordResistanceLimitOhm = (cordLengthM: number, milliOhmPerM = 19.5) => Math.round((0.1 + (cordLengthM * milliOhmPerM) / 1000) * 1000) / 1000;
+export const cordResistanceLimitOhm = (cordLengthM: number, milliOhmPerM = 19.5) =>
+  Math.round((0.1 + (cordLengthM * milliOhmPerM) / 1000) * 1000) / 1000;

@@ -1,9 +1,32 @@
 /** Kinds of salvaged part a group keeps in its boxes. */
-export const PART_TYPES = ['resistor', 'capacitor', 'diode', 'bipolar-transistor', 'mosfet', 'fuse', 'thermal-cutout', 'motor', 'switch', 'power-supply', 'cable', 'other'] as const;
+export const PART_TYPES = [
+  'resistor',
+  'capacitor',
+  'diode',
+  'bipolar-transistor',
+  'mosfet',
+  'fuse',
+  'thermal-cutout',
+  'motor',
+  'switch',
+  'power-supply',
+  'cable',
+  'other',
+] as const;
 export type PartType = (typeof PART_TYPES)[number];
 export const PART_TYPE_LABELS: Record<PartType, string> = {
-  resistor: 'Resistor', capacitor: 'Capacitor', diode: 'Diode', 'bipolar-transistor': 'Bipolar transistor', mosfet: 'MOSFET', fuse: 'Fuse',
-  'thermal-cutout': 'Thermal cut-out', motor: 'Motor', switch: 'Switch', 'power-supply': 'Power supply', cable: 'Cable', other: 'Other',
+  resistor: 'Resistor',
+  capacitor: 'Capacitor',
+  diode: 'Diode',
+  'bipolar-transistor': 'Bipolar transistor',
+  mosfet: 'MOSFET',
+  fuse: 'Fuse',
+  'thermal-cutout': 'Thermal cut-out',
+  motor: 'Motor',
+  switch: 'Switch',
+  'power-supply': 'Power supply',
+  cable: 'Cable',
+  other: 'Other',
 };
 
 /** Ratings as a fixer reads them off a part; all optional, each in SI units. */

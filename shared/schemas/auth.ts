@@ -22,7 +22,11 @@ export const loginSchema = z.object({
 export type LoginInput = z.infer<typeof loginSchema>;
 
 export const signupSchema = z.object({
-  name: z.string({ error: 'Enter your name.' }).trim().min(1, 'Enter your name.').max(120, 'Use at most 120 characters.'),
+  name: z
+    .string({ error: 'Enter your name.' })
+    .trim()
+    .min(1, 'Enter your name.')
+    .max(120, 'Use at most 120 characters.'),
   email,
   password: newPassword,
   groupId: z.coerce.number({ error: 'Choose a group.' }).int().positive('Choose a group.'),

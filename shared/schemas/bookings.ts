@@ -3,7 +3,11 @@ import { HAZARDS } from '../constants';
 import { email } from './auth';
 
 export const visitorSchema = z.object({
-  name: z.string({ error: 'Enter your name.' }).trim().min(1, 'Enter your name.').max(120, 'Use at most 120 characters.'),
+  name: z
+    .string({ error: 'Enter your name.' })
+    .trim()
+    .min(1, 'Enter your name.')
+    .max(120, 'Use at most 120 characters.'),
   email,
   phone: z
     .string()
@@ -15,11 +19,31 @@ export const visitorSchema = z.object({
 });
 
 export const bookingItemSchema = z.object({
-  categoryId: z.coerce.number({ error: 'Choose what kind of item it is.' }).int().positive('Choose what kind of item it is.'),
-  brand: z.string().trim().max(80).optional().transform((v) => v || undefined),
-  model: z.string().trim().max(80).optional().transform((v) => v || undefined),
-  ageYears: z.preprocess((v) => (v === '' || v === null ? undefined : v), z.coerce.number().int('Use whole years.').min(0, 'Age cannot be negative.').max(150).optional()),
-  fault: z.string({ error: 'Describe what is wrong.' }).trim().min(5, 'Describe what is wrong in a few words.').max(2000, 'Keep it under 2000 characters.'),
+  categoryId: z.coerce
+    .number({ error: 'Choose what kind of item it is.' })
+    .int()
+    .positive('Choose what kind of item it is.'),
+  brand: z
+    .string()
+    .trim()
+    .max(80)
+    .optional()
+    .transform((v) => v || undefined),
+  model: z
+    .string()
+    .trim()
+    .max(80)
+    .optional()
+    .transform((v) => v || undefined),
+  ageYears: z.preprocess(
+    (v) => (v === '' || v === null ? undefined : v),
+    z.coerce.number().int('Use whole years.').min(0, 'Age cannot be negative.').max(150).optional(),
+  ),
+  fault: z
+    .string({ error: 'Describe what is wrong.' })
+    .trim()
+    .min(5, 'Describe what is wrong in a few words.')
+    .max(2000, 'Keep it under 2000 characters.'),
   mains: z.boolean().optional(),
   battery: z.boolean().optional(),
   hazards: z.array(z.enum(HAZARDS)).max(HAZARDS.length).default([]),
@@ -31,7 +55,10 @@ export const MAX_ITEMS_PER_BOOKING = 3;
 export const createBookingSchema = z.object({
   slotId: z.coerce.number({ error: 'Choose a time.' }).int().positive('Choose a time.'),
   visitor: visitorSchema,
-  items: z.array(bookingItemSchema).min(1, 'Add the item you are bringing.').max(MAX_ITEMS_PER_BOOKING, `Book at most ${MAX_ITEMS_PER_BOOKING} items at once.`),
+  items: z
+    .array(bookingItemSchema)
+    .min(1, 'Add the item you are bringing.')
+    .max(MAX_ITEMS_PER_BOOKING, `Book at most ${MAX_ITEMS_PER_BOOKING} items at once.`),
   consent: z.literal(true, { error: 'Tick the box to accept the house rules.' }),
 });
 export type CreateBookingInput = z.input<typeof createBookingSchema>;
@@ -40,4 +67,8 @@ export const moveBookingSchema = z.object({ slotId: z.coerce.number().int().posi
 
 export const waitlistSchema = createBookingSchema;
 
-export const PHOTO_LIMITS = { maxBytes: 8 * 1024 * 1024, perItem: 3, types: ['image/jpeg', 'image/png', 'image/webp'] as const };
+export const PHOTO_LIMITS = {
+  maxBytes: 8 * 1024 * 1024,
+  perItem: 3,
+  types: ['image/jpeg', 'image/png', 'image/webp'] as const,
+};

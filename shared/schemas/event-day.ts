@@ -5,10 +5,19 @@ import { email } from './auth';
 
 /** Empty means not given; a decimal comma is read as a point ("1,5" → 1.5). */
 const optionalNumber = (schema: z.ZodType<number, unknown>) =>
-  z.preprocess((v) => (v === '' || v === null || v === undefined ? undefined : typeof v === 'string' ? v.trim().replace(',', '.') : v), schema.optional());
+  z.preprocess(
+    (v) =>
+      v === '' || v === null || v === undefined ? undefined : typeof v === 'string' ? v.trim().replace(',', '.') : v,
+    schema.optional(),
+  );
 
 /** Weight on the desk's scale, in kilograms; it overrides the category's average in the statistics. */
-export const weightKg = optionalNumber(z.coerce.number({ error: 'Enter the weight in kilograms.' }).positive('Enter a weight above 0 kg.').max(500, 'Weigh items up to 500 kg.'));
+export const weightKg = optionalNumber(
+  z.coerce
+    .number({ error: 'Enter the weight in kilograms.' })
+    .positive('Enter a weight above 0 kg.')
+    .max(500, 'Weigh items up to 500 kg.'),
+);
 
 export const checkInItemSchema = z.object({
   id: z.coerce.number().int().positive(),
@@ -24,56 +33,141 @@ export type CheckInInput = z.input<typeof checkInSchema>;
 export const walkInSchema = z.object({
   slotId: z.coerce.number().int().positive().optional(),
   visitor: z.object({
-    name: z.string({ error: 'Enter the visitor’s name.' }).trim().min(1, 'Enter the visitor’s name.').max(120, 'Use at most 120 characters.'),
+    name: z
+      .string({ error: 'Enter the visitor’s name.' })
+      .trim()
+      .min(1, 'Enter the visitor’s name.')
+      .max(120, 'Use at most 120 characters.'),
     email: z.union([z.literal('').transform(() => undefined), email]).optional(),
-    phone: z.string().trim().max(40).regex(/^[+0-9 ()-]*$/, 'Use digits, spaces, + and brackets only.').optional().transform((v) => v || undefined),
+    phone: z
+      .string()
+      .trim()
+      .max(40)
+      .regex(/^[+0-9 ()-]*$/, 'Use digits, spaces, + and brackets only.')
+      .optional()
+      .transform((v) => v || undefined),
   }),
-  items: z.array(bookingItemSchema.extend({ weightKg })).min(1, 'Add the item they brought.').max(MAX_ITEMS_PER_BOOKING, `At most ${MAX_ITEMS_PER_BOOKING} items at once.`),
+  items: z
+    .array(bookingItemSchema.extend({ weightKg }))
+    .min(1, 'Add the item they brought.')
+    .max(MAX_ITEMS_PER_BOOKING, `At most ${MAX_ITEMS_PER_BOOKING} items at once.`),
   consent: z.literal(true, { error: 'The visitor must accept the house rules.' }),
-  consentName: z.string({ error: 'Type the name of the person accepting.' }).trim().min(2, 'Type the name of the person accepting.').max(120),
+  consentName: z
+    .string({ error: 'Type the name of the person accepting.' })
+    .trim()
+    .min(2, 'Type the name of the person accepting.')
+    .max(120),
 });
 export type WalkInInput = z.input<typeof walkInSchema>;
 
-const reading = (what: string, max: number) => optionalNumber(z.coerce.number({ error: `Enter the ${what} as a number.` }).min(0, `The ${what} cannot be negative.`).max(max, `That ${what} is out of range.`));
+const reading = (what: string, max: number) =>
+  optionalNumber(
+    z.coerce
+      .number({ error: `Enter the ${what} as a number.` })
+      .min(0, `The ${what} cannot be negative.`)
+      .max(max, `That ${what} is out of range.`),
+  );
 
-export const safetyCheckSchema = z.object({
-  visual: z.object({ cord: z.boolean(), plug: z.boolean(), strainRelief: z.boolean(), casing: z.boolean(), noHeatDamage: z.boolean() }),
-  applianceClass: z.enum(['I', 'II', 'III'], { error: 'Choose the appliance class.' }),
-  heating: z.boolean().default(false),
-  heatingKw: reading('heating power', 30),
-  cordLengthM: reading('cord length', 100),
-  protectiveConductorOhm: reading('protective conductor resistance', 1000),
-  insulationMOhm: reading('insulation resistance', 10000),
-  protectiveCurrentMA: reading('protective conductor current', 1000),
-  touchCurrentMA: reading('touch current', 1000),
-  instrument: z.string().trim().max(120).optional().transform((v) => v || undefined),
-}).superRefine((v, ctx) => {
-  if (v.applianceClass === 'I') {
-    if (v.cordLengthM === undefined) ctx.addIssue({ code: 'custom', path: ['cordLengthM'], message: 'Class I needs the cord length for its limit.' });
-    if (v.protectiveConductorOhm === undefined) ctx.addIssue({ code: 'custom', path: ['protectiveConductorOhm'], message: 'Class I needs the protective conductor reading.' });
-  }
-  if (v.applianceClass !== 'III' && v.insulationMOhm === undefined) ctx.addIssue({ code: 'custom', path: ['insulationMOhm'], message: 'Enter the insulation resistance at 500 V DC.' });
-});
+export const safetyCheckSchema = z
+  .object({
+    visual: z.object({
+      cord: z.boolean(),
+      plug: z.boolean(),
+      strainRelief: z.boolean(),
+      casing: z.boolean(),
+      noHeatDamage: z.boolean(),
+    }),
+    applianceClass: z.enum(['I', 'II', 'III'], { error: 'Choose the appliance class.' }),
+    heating: z.boolean().default(false),
+    heatingKw: reading('heating power', 30),
+    cordLengthM: reading('cord length', 100),
+    protectiveConductorOhm: reading('protective conductor resistance', 1000),
+    insulationMOhm: reading('insulation resistance', 10000),
+    protectiveCurrentMA: reading('protective conductor current', 1000),
+    touchCurrentMA: reading('touch current', 1000),
+    instrument: z
+      .string()
+      .trim()
+      .max(120)
+      .optional()
+      .transform((v) => v || undefined),
+  })
+  .superRefine((v, ctx) => {
+    if (v.applianceClass === 'I') {
+      if (v.cordLengthM === undefined)
+        ctx.addIssue({
+          code: 'custom',
+          path: ['cordLengthM'],
+          message: 'Class I needs the cord length for its limit.',
+        });
+      if (v.protectiveConductorOhm === undefined)
+        ctx.addIssue({
+          code: 'custom',
+          path: ['protectiveConductorOhm'],
+          message: 'Class I needs the protective conductor reading.',
+        });
+    }
+    if (v.applianceClass !== 'III' && v.insulationMOhm === undefined)
+      ctx.addIssue({
+        code: 'custom',
+        path: ['insulationMOhm'],
+        message: 'Enter the insulation resistance at 500 V DC.',
+      });
+  });
 export type SafetyCheckInput = z.input<typeof safetyCheckSchema>;
 export type SafetyCheckValues = z.output<typeof safetyCheckSchema>;
 
-export const outcomeSchema = z.object({
-  outcome: z.enum(OUTCOMES, { error: 'Choose what happened.' }),
-  barrier: z.enum(BARRIERS, { error: 'Choose the barrier to repair.' }).optional(),
-  part: z.object({
-    description: z.string({ error: 'Say which part is needed.' }).trim().min(2, 'Say which part is needed.').max(200),
-    link: z.string().trim().max(300).optional().transform((v) => v || undefined),
-    cost: optionalNumber(z.coerce.number({ error: 'Enter the cost as a number.' }).min(0, 'A cost cannot be negative.').max(100000)),
-  }).optional(),
-  minutes: optionalNumber(z.coerce.number({ error: 'Enter whole minutes.' }).int('Enter whole minutes.').min(0).max(600, 'At most 600 minutes.')),
-  notes: z.string().trim().max(4000).optional().transform((v) => v || undefined),
-  safety: safetyCheckSchema.optional(),
-}).superRefine((v, ctx) => {
-  if (v.outcome === 'end-of-life' && !v.barrier) ctx.addIssue({ code: 'custom', path: ['barrier'], message: 'Choose the barrier to repair for an end-of-life item.' });
-  if (v.outcome !== 'end-of-life' && v.barrier) ctx.addIssue({ code: 'custom', path: ['barrier'], message: 'A barrier is recorded only for end-of-life items.' });
-  if (v.outcome === 'parts-needed' && !v.part) ctx.addIssue({ code: 'custom', path: ['part', 'description'], message: 'Say which part is needed.' });
-});
+export const outcomeSchema = z
+  .object({
+    outcome: z.enum(OUTCOMES, { error: 'Choose what happened.' }),
+    barrier: z.enum(BARRIERS, { error: 'Choose the barrier to repair.' }).optional(),
+    part: z
+      .object({
+        description: z
+          .string({ error: 'Say which part is needed.' })
+          .trim()
+          .min(2, 'Say which part is needed.')
+          .max(200),
+        link: z
+          .string()
+          .trim()
+          .max(300)
+          .optional()
+          .transform((v) => v || undefined),
+        cost: optionalNumber(
+          z.coerce.number({ error: 'Enter the cost as a number.' }).min(0, 'A cost cannot be negative.').max(100000),
+        ),
+      })
+      .optional(),
+    minutes: optionalNumber(
+      z.coerce
+        .number({ error: 'Enter whole minutes.' })
+        .int('Enter whole minutes.')
+        .min(0)
+        .max(600, 'At most 600 minutes.'),
+    ),
+    notes: z
+      .string()
+      .trim()
+      .max(4000)
+      .optional()
+      .transform((v) => v || undefined),
+    safety: safetyCheckSchema.optional(),
+  })
+  .superRefine((v, ctx) => {
+    if (v.outcome === 'end-of-life' && !v.barrier)
+      ctx.addIssue({
+        code: 'custom',
+        path: ['barrier'],
+        message: 'Choose the barrier to repair for an end-of-life item.',
+      });
+    if (v.outcome !== 'end-of-life' && v.barrier)
+      ctx.addIssue({ code: 'custom', path: ['barrier'], message: 'A barrier is recorded only for end-of-life items.' });
+    if (v.outcome === 'parts-needed' && !v.part)
+      ctx.addIssue({ code: 'custom', path: ['part', 'description'], message: 'Say which part is needed.' });
+  });
 export type OutcomeInput = z.input<typeof outcomeSchema>;
 
 /** The visual part of a check passes only when every point was looked at and found sound. */
-export const visualOk = (v: SafetyCheckValues['visual']) => v.cord && v.plug && v.strainRelief && v.casing && v.noHeatDamage;
+export const visualOk = (v: SafetyCheckValues['visual']) =>
+  v.cord && v.plug && v.strainRelief && v.casing && v.noHeatDamage;

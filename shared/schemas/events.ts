@@ -4,21 +4,36 @@ import { SKILLS } from '../constants';
 const isoInstant = (label: string) =>
   z.iso.datetime({ offset: true, error: `${label} must be a date and time (ISO 8601).` }).transform((s) => new Date(s));
 
-export const skillLimitsSchema = z.partialRecord(z.enum(SKILLS), z.number().int().min(0, 'A limit cannot be negative.').max(500)).default({});
+export const skillLimitsSchema = z
+  .partialRecord(z.enum(SKILLS), z.number().int().min(0, 'A limit cannot be negative.').max(500))
+  .default({});
 
 const eventFields = {
-  title: z.string({ error: 'Give the event a title.' }).trim().min(3, 'Give the event a title of at least 3 characters.').max(160),
+  title: z
+    .string({ error: 'Give the event a title.' })
+    .trim()
+    .min(3, 'Give the event a title of at least 3 characters.')
+    .max(160),
   venueId: z.coerce.number({ error: 'Choose a venue.' }).int().positive('Choose a venue.'),
   startsAt: isoInstant('The start'),
   endsAt: isoInstant('The end'),
-  slotMinutes: z.coerce.number({ error: 'Enter the slot length in minutes.' }).int('Use whole minutes.').min(5, 'Slots must be at least 5 minutes long.').max(240, 'Slots can be at most 4 hours long.'),
-  slotCapacity: z.coerce.number({ error: 'Enter how many items can start per slot.' }).int('Use a whole number.').min(0, 'Capacity cannot be negative.').max(200),
+  slotMinutes: z.coerce
+    .number({ error: 'Enter the slot length in minutes.' })
+    .int('Use whole minutes.')
+    .min(5, 'Slots must be at least 5 minutes long.')
+    .max(240, 'Slots can be at most 4 hours long.'),
+  slotCapacity: z.coerce
+    .number({ error: 'Enter how many items can start per slot.' })
+    .int('Use a whole number.')
+    .min(0, 'Capacity cannot be negative.')
+    .max(200),
   skillLimits: skillLimitsSchema,
   description: z.string().trim().max(4000).default(''),
 };
 
 const endAfterStart = (v: { startsAt?: Date; endsAt?: Date }) => !v.startsAt || !v.endsAt || v.endsAt > v.startsAt;
-const sameDayish = (v: { startsAt?: Date; endsAt?: Date }) => !v.startsAt || !v.endsAt || v.endsAt.getTime() - v.startsAt.getTime() <= 16 * 3600_000;
+const sameDayish = (v: { startsAt?: Date; endsAt?: Date }) =>
+  !v.startsAt || !v.endsAt || v.endsAt.getTime() - v.startsAt.getTime() <= 16 * 3600_000;
 
 export const createEventSchema = z
   .object({ groupId: z.coerce.number({ error: 'Choose a group.' }).int().positive(), ...eventFields })
@@ -32,7 +47,9 @@ export const updateEventSchema = z
   .refine(endAfterStart, { path: ['endsAt'], message: 'The event must end after it starts.' })
   .refine(sameDayish, { path: ['endsAt'], message: 'An event lasts at most 16 hours.' });
 
-export const slotUpdateSchema = z.object({ capacity: z.coerce.number().int('Use a whole number.').min(0, 'Capacity cannot be negative.').max(200) });
+export const slotUpdateSchema = z.object({
+  capacity: z.coerce.number().int('Use a whole number.').min(0, 'Capacity cannot be negative.').max(200),
+});
 
 export const eventListQuery = z.object({
   from: z.iso.datetime({ offset: true }).optional(),

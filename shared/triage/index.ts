@@ -39,7 +39,8 @@ export interface TriageResult {
 const byId = <T extends { id: string }>(a: T, b: T) => (a.id < b.id ? -1 : a.id > b.id ? 1 : 0);
 const capacityOf = (v: TriageVolunteer) => Math.max(0, Math.floor(v.capacity ?? 1));
 const levelOf = (v: TriageVolunteer, skill: string) => v.skills[skill] ?? 0;
-const hasAll = (bench: TriageBench, equipment: readonly string[]) => equipment.every((e) => bench.equipment.includes(e));
+const hasAll = (bench: TriageBench, equipment: readonly string[]) =>
+  equipment.every((e) => bench.equipment.includes(e));
 
 /** Items that need the same skill, level and kit are interchangeable: the flow runs on these classes. */
 interface ItemClass {
@@ -118,7 +119,13 @@ function classesOf(items: TriageItem[], benches: TriageBench[]): ItemClass[] {
 }
 
 /** Every fixer is seated: source → item (unit, priority cost) → fixer (excess cost) → their bench → sink. */
-function seatedPlan(items: TriageItem[], volunteers: TriageVolunteer[], benches: TriageBench[], seats: Map<string, number>, itemCost: (i: TriageItem) => number): Plan {
+function seatedPlan(
+  items: TriageItem[],
+  volunteers: TriageVolunteer[],
+  benches: TriageBench[],
+  seats: Map<string, number>,
+  itemCost: (i: TriageItem) => number,
+): Plan {
   const classes = classesOf(items, benches);
   const benchIndex = new Map(benches.map((b, i) => [b.id, i]));
   const S = 0;
@@ -133,7 +140,8 @@ function seatedPlan(items: TriageItem[], volunteers: TriageVolunteer[], benches:
     volunteers.forEach((v, j) => {
       const bench = benches[benchIndex.get(v.benchId!)!];
       const level = levelOf(v, c.skill);
-      if (level >= c.minLevel && hasAll(bench, c.equipment)) cv[k].push({ j, e: g.addEdge(C0 + k, V0 + j, c.items.length, level - c.minLevel) });
+      if (level >= c.minLevel && hasAll(bench, c.equipment))
+        cv[k].push({ j, e: g.addEdge(C0 + k, V0 + j, c.items.length, level - c.minLevel) });
     }),
   );
   volunteers.forEach((v, j) => g.addEdge(V0 + j, B0 + benchIndex.get(v.benchId!)!, capacityOf(v), 0));
@@ -155,7 +163,13 @@ function seatedPlan(items: TriageItem[], volunteers: TriageVolunteer[], benches:
 }
 
 /** No fixer is seated: source → fixer → item (unit, priority cost) → bench with the kit → sink. */
-function freePlan(items: TriageItem[], volunteers: TriageVolunteer[], benches: TriageBench[], seats: Map<string, number>, itemCost: (i: TriageItem) => number): Plan {
+function freePlan(
+  items: TriageItem[],
+  volunteers: TriageVolunteer[],
+  benches: TriageBench[],
+  seats: Map<string, number>,
+  itemCost: (i: TriageItem) => number,
+): Plan {
   const classes = classesOf(items, benches);
   const S = 0;
   const V0 = 1;
@@ -174,7 +188,11 @@ function freePlan(items: TriageItem[], volunteers: TriageVolunteer[], benches: T
   );
   const unitEdges = classes.map((c, k) => c.items.map((item) => g.addEdge(Cin + k, Cout + k, 1, itemCost(item))));
   const cb: { i: number; e: number }[][] = classes.map(() => []);
-  classes.forEach((c, k) => benches.forEach((b, i) => hasAll(b, c.equipment) && cb[k].push({ i, e: g.addEdge(Cout + k, B0 + i, c.items.length, 0) })));
+  classes.forEach((c, k) =>
+    benches.forEach(
+      (b, i) => hasAll(b, c.equipment) && cb[k].push({ i, e: g.addEdge(Cout + k, B0 + i, c.items.length, 0) }),
+    ),
+  );
   benches.forEach((b, i) => g.addEdge(B0 + i, T, seats.get(b.id) ?? 0, 0));
   const { cost } = g.run(S, T);
 
@@ -189,39 +207,69 @@ function freePlan(items: TriageItem[], volunteers: TriageVolunteer[], benches: T
 }
 
 /** Mixed rounds: one kind of fixer first, the other on what is left; valid by construction. */
-function stages(items: TriageItem[], seated: TriageVolunteer[], free: TriageVolunteer[], benches: TriageBench[], seats: Map<string, number>, itemCost: (i: TriageItem) => number, order: 'seated-first' | 'free-first'): Plan {
+function stages(
+  items: TriageItem[],
+  seated: TriageVolunteer[],
+  free: TriageVolunteer[],
+  benches: TriageBench[],
+  seats: Map<string, number>,
+  itemCost: (i: TriageItem) => number,
+  order: 'seated-first' | 'free-first',
+): Plan {
   const run = (kind: 'seated' | 'free', pool: TriageItem[], left: Map<string, number>) =>
-    kind === 'seated' ? seatedPlan(pool, seated, benches, left, itemCost) : freePlan(pool, free, benches, left, itemCost);
+    kind === 'seated'
+      ? seatedPlan(pool, seated, benches, left, itemCost)
+      : freePlan(pool, free, benches, left, itemCost);
   const [first, second] = order === 'seated-first' ? (['seated', 'free'] as const) : (['free', 'seated'] as const);
   const a = run(first, items, seats);
   const left = new Map(seats);
   for (const [, [, benchId]] of a.pairs) left.set(benchId, left.get(benchId)! - 1);
-  const b = run(second, items.filter((i) => !a.pairs.has(i.id)), left);
+  const b = run(
+    second,
+    items.filter((i) => !a.pairs.has(i.id)),
+    left,
+  );
   return { pairs: new Map([...a.pairs, ...b.pairs]), cost: a.cost + b.cost };
 }
 
-const list = (words: string[]) => (words.length <= 1 ? words.join('') : `${words.slice(0, -1).join(', ')} and ${words.at(-1)}`);
+const list = (words: string[]) =>
+  words.length <= 1 ? words.join('') : `${words.slice(0, -1).join(', ')} and ${words.at(-1)}`;
 const kit = (e: string) => e.replace(/-/g, ' ');
 const levelWord = (n: number) => (n >= 3 ? 'expert' : n === 2 ? 'capable' : 'learning');
 
 /** Why an item was left out, in words an organiser can act on. */
-function explain(item: TriageItem, volunteers: TriageVolunteer[], benches: TriageBench[]): { reason: UnassignedReason; detail: string } {
+function explain(
+  item: TriageItem,
+  volunteers: TriageVolunteer[],
+  benches: TriageBench[],
+): { reason: UnassignedReason; detail: string } {
   const skilled = volunteers.filter((v) => levelOf(v, item.skill) >= item.minLevel);
   const equipped = benches.filter((b) => hasAll(b, item.equipment));
   if (!skilled.length) {
-    return { reason: 'no-skill', detail: `Nobody here has ${item.skill} at level ${item.minLevel} (${levelWord(item.minLevel)}) or above.` };
+    return {
+      reason: 'no-skill',
+      detail: `Nobody here has ${item.skill} at level ${item.minLevel} (${levelWord(item.minLevel)}) or above.`,
+    };
   }
   if (!equipped.length) {
     const missing = item.equipment.filter((e) => !benches.some((b) => b.equipment.includes(e)));
     return {
       reason: 'no-equipment',
-      detail: missing.length ? `No bench has a ${list(missing.map(kit))}.` : `No single bench has all of: ${list(item.equipment.map(kit))}.`,
+      detail: missing.length
+        ? `No bench has a ${list(missing.map(kit))}.`
+        : `No single bench has all of: ${list(item.equipment.map(kit))}.`,
     };
   }
   const canPair = skilled.some((v) => v.benchId === undefined || equipped.some((b) => b.id === v.benchId));
   if (!canPair) {
     const who = skilled.map((v) => v.name ?? v.id);
-    return { reason: 'no-pair', detail: `${list(who)} ${who.length > 1 ? 'have' : 'has'} the ${item.skill} skill but ${who.length > 1 ? 'are' : 'is'} seated at a bench without ${list(item.equipment.map(kit))}; move a fixer or the kit.` };
+    return {
+      reason: 'no-pair',
+      detail: `${list(who)} ${who.length > 1 ? 'have' : 'has'} the ${item.skill} skill but ${who.length > 1 ? 'are' : 'is'} seated at a bench without ${list(item.equipment.map(kit))}; move a fixer or the kit.`,
+    };
   }
-  return { reason: 'capacity', detail: `A fixer and a bench for it exist, but they are busy with other items (served first, or locked there); it waits for the next round.` };
+  return {
+    reason: 'capacity',
+    detail: `A fixer and a bench for it exist, but they are busy with other items (served first, or locked there); it waits for the next round.`,
+  };
 }

@@ -26,7 +26,12 @@ const linkToken = (text: string, path: string) => new RegExp(`${path}\\?token=([
 
 describe('sign-in', () => {
   it('signs in, answers me with the user and roles, and signs out', async () => {
-    const u = await makeUser(db.db, { roles: [[groupId, 'organiser'], [groupId, 'fixer']] });
+    const u = await makeUser(db.db, {
+      roles: [
+        [groupId, 'organiser'],
+        [groupId, 'fixer'],
+      ],
+    });
     const a = new Agent(server.url);
     const login = await a.login(u.email, u.password);
     expect(login.status).toBe(200);
@@ -73,7 +78,10 @@ describe('sign-in', () => {
     const before = await a.token();
     const sidBefore = a.cookies.get('mendery.sid');
     expect(sidBefore).toBeTruthy();
-    await a.raw('POST', '/api/auth/login', { body: { email: u.email, password: u.password }, headers: { 'x-csrf-token': before } });
+    await a.raw('POST', '/api/auth/login', {
+      body: { email: u.email, password: u.password },
+      headers: { 'x-csrf-token': before },
+    });
     expect(a.cookies.get('mendery.sid')).not.toBe(sidBefore);
     const stale = await a.raw('POST', '/api/auth/logout', { headers: { 'x-csrf-token': before } });
     expect(stale.status).toBe(403);
@@ -109,7 +117,10 @@ describe('CSRF', () => {
     expect(none.json.error.code).toBe('csrf');
     const other = await new Agent(server.url).token();
     await a.token();
-    const foreign = await a.raw('POST', '/api/auth/login', { body: { email: 'x@example.org', password: 'y' }, headers: { 'x-csrf-token': other } });
+    const foreign = await a.raw('POST', '/api/auth/login', {
+      body: { email: 'x@example.org', password: 'y' },
+      headers: { 'x-csrf-token': other },
+    });
     expect(foreign.status).toBe(403);
   });
 });
@@ -118,7 +129,13 @@ describe('volunteer sign-up and e-mail links', () => {
   it('mails a confirmation link; confirming lets the volunteer sign in with a pending role', async () => {
     const a = new Agent(server.url);
     const email = `new-${Date.now()}@example.org`;
-    const res = await a.post('/api/auth/signup', { name: 'Nell Tester', email, password: 'long enough pw', groupId, role: 'fixer' });
+    const res = await a.post('/api/auth/signup', {
+      name: 'Nell Tester',
+      email,
+      password: 'long enough pw',
+      groupId,
+      role: 'fixer',
+    });
     expect(res.status).toBe(202);
     await server.ctx.outbox.drain();
     const m = mail.sent.find((x) => x.to === email)!;
@@ -134,17 +151,32 @@ describe('volunteer sign-up and e-mail links', () => {
 
   it('answers a sign-up for a taken address like any other, and tells the owner by mail', async () => {
     const u = await makeUser(db.db);
-    const res = await new Agent(server.url).post('/api/auth/signup', { name: 'Someone', email: u.email, password: 'long enough pw', groupId, role: 'host' });
+    const res = await new Agent(server.url).post('/api/auth/signup', {
+      name: 'Someone',
+      email: u.email,
+      password: 'long enough pw',
+      groupId,
+      role: 'host',
+    });
     expect(res.status).toBe(202);
     await server.ctx.outbox.drain();
     expect(mail.sent.find((x) => x.to === u.email)?.subject).toMatch(/already have/);
   });
 
   it('refuses invalid sign-up fields with a message per field and writes nothing', async () => {
-    const res = await new Agent(server.url).post('/api/auth/signup', { name: '', email: 'nope', password: 'short', groupId: 0, role: 'boss' });
+    const res = await new Agent(server.url).post('/api/auth/signup', {
+      name: '',
+      email: 'nope',
+      password: 'short',
+      groupId: 0,
+      role: 'boss',
+    });
     expect(res.status).toBe(400);
     expect(Object.keys(res.json.error.fields).sort()).toEqual(['email', 'groupId', 'name', 'password', 'role']);
-    const [{ n }] = (await db.db.select({ n: sql<number>`COUNT(*)` }).from(users).where(eq(users.email, 'nope'))) as { n: number }[];
+    const [{ n }] = (await db.db
+      .select({ n: sql<number>`COUNT(*)` })
+      .from(users)
+      .where(eq(users.email, 'nope'))) as { n: number }[];
     expect(Number(n)).toBe(0);
   });
 
@@ -156,9 +188,21 @@ describe('volunteer sign-up and e-mail links', () => {
     expect((await a.post('/api/auth/password-reset', { email: u.email })).status).toBe(202);
     await server.ctx.outbox.drain();
     const token = linkToken(mail.sent.filter((x) => x.to === u.email).at(-1)!.text, '/reset-password')!;
-    const ok = await a.post('/api/auth/password-reset/confirm', { token, password: 'a brand new secret', confirm: 'a brand new secret' });
+    const ok = await a.post('/api/auth/password-reset/confirm', {
+      token,
+      password: 'a brand new secret',
+      confirm: 'a brand new secret',
+    });
     expect(ok.status).toBe(200);
-    expect((await a.post('/api/auth/password-reset/confirm', { token, password: 'another new secret', confirm: 'another new secret' })).status).toBe(400);
+    expect(
+      (
+        await a.post('/api/auth/password-reset/confirm', {
+          token,
+          password: 'another new secret',
+          confirm: 'another new secret',
+        })
+      ).status,
+    ).toBe(400);
     expect((await new Agent(server.url).login(u.email, 'a brand new secret')).status).toBe(200);
     expect((await new Agent(server.url).login(u.email, u.password)).status).toBe(401);
     expect((await old.get('/api/auth/me')).status).toBe(401);
@@ -173,8 +217,15 @@ describe('volunteer sign-up and e-mail links', () => {
     const [row] = await db.db.select().from(authTokens).where(eq(authTokens.userId, u.id));
     expect(row.expiresAt.getTime() - row.createdAt.getTime()).toBeGreaterThan(3599_000);
     expect(row.expiresAt.getTime() - row.createdAt.getTime()).toBeLessThanOrEqual(3601_000);
-    await db.db.update(authTokens).set({ expiresAt: sql`NOW(3) - INTERVAL 1 SECOND` }).where(eq(authTokens.id, row.id));
-    const res = await a.post('/api/auth/password-reset/confirm', { token, password: 'a brand new secret', confirm: 'a brand new secret' });
+    await db.db
+      .update(authTokens)
+      .set({ expiresAt: sql`NOW(3) - INTERVAL 1 SECOND` })
+      .where(eq(authTokens.id, row.id));
+    const res = await a.post('/api/auth/password-reset/confirm', {
+      token,
+      password: 'a brand new secret',
+      confirm: 'a brand new secret',
+    });
     expect(res.status).toBe(400);
     expect(res.json.error.code).toBe('link-invalid');
   });

@@ -30,7 +30,10 @@ afterAll(async () => {
 });
 
 const item = (categoryId = kettle) => ({ categoryId, fault: 'It switches off before boiling.' });
-const bookingBody = (slotId: number, items: { categoryId: number; fault: string; hazards?: string[] }[] = [item()]) => ({ slotId, visitor: visitor(), items, consent: true });
+const bookingBody = (
+  slotId: number,
+  items: { categoryId: number; fault: string; hazards?: string[] }[] = [item()],
+) => ({ slotId, visitor: visitor(), items, consent: true });
 const slotRow = async (id: number) => (await db.db.select().from(slots).where(eq(slots.id, id)))[0];
 
 describe('booking a slot', () => {
@@ -54,14 +57,19 @@ describe('booking a slot', () => {
     const { eventId, slotIds } = await makeEvent(db.db, groupId, { capacity: 5, slotCount: 1 });
     const agent = new Agent(server.url);
     await agent.token();
-    const results = await Promise.all(Array.from({ length: 200 }, () => agent.post('/api/bookings', bookingBody(slotIds[0]))));
+    const results = await Promise.all(
+      Array.from({ length: 200 }, () => agent.post('/api/bookings', bookingBody(slotIds[0]))),
+    );
     const statuses = results.map((r) => r.status);
     expect(statuses.filter((s) => s === 201)).toHaveLength(5);
     expect(statuses.filter((s) => s === 409)).toHaveLength(195);
     expect(results.find((r) => r.status === 409)!.json.error.code).toBe('slot-full');
     const event = await agent.get(`/api/events/${eventId}`);
     expect(event.json.slots[0]).toMatchObject({ id: slotIds[0], capacity: 5, booked: 5 });
-    const [{ n }] = (await db.db.select({ n: sql<number>`COUNT(*)` }).from(bookings).where(eq(bookings.slotId, slotIds[0]))) as { n: number }[];
+    const [{ n }] = (await db.db
+      .select({ n: sql<number>`COUNT(*)` })
+      .from(bookings)
+      .where(eq(bookings.slotId, slotIds[0]))) as { n: number }[];
     expect(Number(n)).toBe(5);
   });
 
@@ -90,7 +98,8 @@ describe('booking a slot', () => {
     const token = await a.token();
     const body = bookingBody(slotIds[0]);
     const key = randomUUID();
-    const send = () => a.raw('POST', '/api/bookings', { body, headers: { 'x-csrf-token': token, 'idempotency-key': key } });
+    const send = () =>
+      a.raw('POST', '/api/bookings', { body, headers: { 'x-csrf-token': token, 'idempotency-key': key } });
     const results = await Promise.all(Array.from({ length: 20 }, send));
     expect(results.map((r) => (r.status === 201 ? 201 : `${r.status} ${r.text}`))).toEqual(Array(20).fill(201));
     expect(new Set(results.map((r) => r.json.reference)).size).toBe(1);
@@ -105,7 +114,10 @@ describe('booking a slot', () => {
     const { applyDefaultExclusions } = await import('../../server/src/features/catalogue/service');
     await applyDefaultExclusions(db.db, other);
     const { slotIds } = await makeEvent(db.db, other, { slotCount: 1 });
-    const res = await new Agent(server.url).post('/api/bookings', bookingBody(slotIds[0], [item(await categoryId(db.db, 'microwave'))]));
+    const res = await new Agent(server.url).post(
+      '/api/bookings',
+      bookingBody(slotIds[0], [item(await categoryId(db.db, 'microwave'))]),
+    );
     expect(res.status).toBe(422);
     expect(res.json.error.code).toBe('item-refused');
     expect(res.json.error.fields['items.0.categoryId']).toMatch(/high-voltage capacitor.*appliance repairer/);
@@ -114,7 +126,10 @@ describe('booking a slot', () => {
 
   it('refuses a swollen lithium battery whatever the category', async () => {
     const { slotIds } = await makeEvent(db.db, groupId, { slotCount: 1 });
-    const res = await new Agent(server.url).post('/api/bookings', bookingBody(slotIds[0], [{ ...item(await categoryId(db.db, 'phone')), hazards: ['swollen-battery'] }]));
+    const res = await new Agent(server.url).post(
+      '/api/bookings',
+      bookingBody(slotIds[0], [{ ...item(await categoryId(db.db, 'phone')), hazards: ['swollen-battery'] }]),
+    );
     expect(res.status).toBe(422);
     expect(res.json.error.fields['items.0.hazards']).toMatch(/swollen lithium battery/);
   });
@@ -122,9 +137,19 @@ describe('booking a slot', () => {
   it('answers invalid input with 400 and a message per field, and writes nothing', async () => {
     const { slotIds } = await makeEvent(db.db, groupId, { slotCount: 1 });
     const before = await db.db.select({ n: sql<number>`COUNT(*)` }).from(bookings);
-    const res = await new Agent(server.url).post('/api/bookings', { slotId: slotIds[0], visitor: { name: '', email: 'x' }, items: [{ categoryId: kettle, fault: '' }], consent: false });
+    const res = await new Agent(server.url).post('/api/bookings', {
+      slotId: slotIds[0],
+      visitor: { name: '', email: 'x' },
+      items: [{ categoryId: kettle, fault: '' }],
+      consent: false,
+    });
     expect(res.status).toBe(400);
-    expect(Object.keys(res.json.error.fields).sort()).toEqual(['consent', 'items.0.fault', 'visitor.email', 'visitor.name']);
+    expect(Object.keys(res.json.error.fields).sort()).toEqual([
+      'consent',
+      'items.0.fault',
+      'visitor.email',
+      'visitor.name',
+    ]);
     expect(await db.db.select({ n: sql<number>`COUNT(*)` }).from(bookings)).toEqual(before);
   });
 
@@ -142,14 +167,21 @@ describe('managing a booking with its link', () => {
     const a = new Agent(server.url);
     const { reference, manageToken } = (await a.post('/api/bookings', bookingBody(slotIds[0]))).json;
     expect((await a.get(`/api/bookings/${reference}`)).status).toBe(404);
-    expect((await a.get(`/api/bookings/${reference}?token=wrong-token-of-the-right-length-0000000000`)).status).toBe(404);
+    expect((await a.get(`/api/bookings/${reference}?token=wrong-token-of-the-right-length-0000000000`)).status).toBe(
+      404,
+    );
     const ok = await a.get(`/api/bookings/${reference}?token=${manageToken}`);
     expect(ok.status).toBe(200);
     expect(ok.json).toMatchObject({ reference, status: 'confirmed', slot: { id: slotIds[0] } });
     expect(ok.json.qr).toMatch(/^data:image\/png;base64,/);
     // Typed in lower case without the hyphen, the reference still finds it.
-    expect((await a.get(`/api/bookings/${reference.replace('-', '').toLowerCase()}?token=${manageToken}`)).status).toBe(200);
-    expect((await a.raw('DELETE', `/api/bookings/${reference}?token=nope`, { headers: { 'x-csrf-token': await a.token() } })).status).toBe(404);
+    expect((await a.get(`/api/bookings/${reference.replace('-', '').toLowerCase()}?token=${manageToken}`)).status).toBe(
+      200,
+    );
+    expect(
+      (await a.raw('DELETE', `/api/bookings/${reference}?token=nope`, { headers: { 'x-csrf-token': await a.token() } }))
+        .status,
+    ).toBe(404);
   });
 
   it('cancelling frees the place', async () => {
@@ -171,9 +203,14 @@ describe('managing a booking with its link', () => {
     expect(moved.status).toBe(200);
     expect(moved.json.slot.id).toBe(slotIds[2]);
     expect([(await slotRow(slotIds[0])).booked, (await slotRow(slotIds[2])).booked]).toEqual([0, 1]);
-    expect((await a.post(`/api/bookings/${reference}/move?token=${manageToken}`, { slotId: slotIds[2] })).status).toBe(200);
+    expect((await a.post(`/api/bookings/${reference}/move?token=${manageToken}`, { slotId: slotIds[2] })).status).toBe(
+      200,
+    );
     const other = (await a.post('/api/bookings', bookingBody(slotIds[1]))).json;
-    expect((await a.post(`/api/bookings/${other.reference}/move?token=${other.manageToken}`, { slotId: slotIds[2] })).json.error.code).toBe('slot-full');
+    expect(
+      (await a.post(`/api/bookings/${other.reference}/move?token=${other.manageToken}`, { slotId: slotIds[2] })).json
+        .error.code,
+    ).toBe('slot-full');
   });
 });
 
@@ -200,7 +237,11 @@ describe('the waiting list', () => {
     expect(claimed.json.reference).toMatch(REFERENCE_PATTERN);
     expect(await slotRow(slotIds[0])).toMatchObject({ booked: 1, held: 0 });
     expect((await a.post(`/api/waiting-list/${token}/claim`)).status).toBe(409);
-    const waiting = await db.db.select().from(waitlistEntries).where(eq(waitlistEntries.slotId, slotIds[0])).orderBy(waitlistEntries.id);
+    const waiting = await db.db
+      .select()
+      .from(waitlistEntries)
+      .where(eq(waitlistEntries.slotId, slotIds[0]))
+      .orderBy(waitlistEntries.id);
     expect(waiting.map((w) => w.status)).toEqual(['claimed', 'waiting']);
     expect(waiting[1].visitorEmail).toBe(second.visitor.email);
   });
@@ -212,9 +253,16 @@ describe('the waiting list', () => {
     await a.post(`/api/events/${eventId}/waitlist`, bookingBody(slotIds[0]));
     await a.post(`/api/events/${eventId}/waitlist`, bookingBody(slotIds[0]));
     await a.delete(`/api/bookings/${first.reference}?token=${first.manageToken}`);
-    await db.db.update(waitlistEntries).set({ offerExpiresAt: sql`NOW(3) - INTERVAL 1 SECOND` }).where(and(eq(waitlistEntries.slotId, slotIds[0]), eq(waitlistEntries.status, 'offered')));
+    await db.db
+      .update(waitlistEntries)
+      .set({ offerExpiresAt: sql`NOW(3) - INTERVAL 1 SECOND` })
+      .where(and(eq(waitlistEntries.slotId, slotIds[0]), eq(waitlistEntries.status, 'offered')));
     expect(await expireOffers(server.ctx)).toBe(1);
-    const rows = await db.db.select().from(waitlistEntries).where(eq(waitlistEntries.slotId, slotIds[0])).orderBy(waitlistEntries.id);
+    const rows = await db.db
+      .select()
+      .from(waitlistEntries)
+      .where(eq(waitlistEntries.slotId, slotIds[0]))
+      .orderBy(waitlistEntries.id);
     expect(rows.map((w) => w.status)).toEqual(['expired', 'offered']);
     expect((await slotRow(slotIds[0])).held).toBe(1);
   });
@@ -236,10 +284,16 @@ describe('the reminder the day before', () => {
     const late = bookingBody(slotIds[1]);
     const e = (await a.post('/api/bookings', early)).json;
     await a.post('/api/bookings', late);
-    await db.db.update(bookings).set({ createdAt: sql`NOW(3) - INTERVAL 3 DAY` }).where(eq(bookings.reference, e.reference));
+    await db.db
+      .update(bookings)
+      .set({ createdAt: sql`NOW(3) - INTERVAL 3 DAY` })
+      .where(eq(bookings.reference, e.reference));
     expect(await sendReminders(server.ctx)).toBe(1);
     expect(await sendReminders(server.ctx)).toBe(0);
-    const reminders = await db.db.select().from(outbox).where(sql`${outbox.subject} LIKE 'Tomorrow:%'`);
+    const reminders = await db.db
+      .select()
+      .from(outbox)
+      .where(sql`${outbox.subject} LIKE 'Tomorrow:%'`);
     expect(reminders.map((r) => r.toAddress)).toEqual([early.visitor.email]);
     expect(reminders[0].text).toContain(`/bookings/${e.reference}?token=${e.manageToken}`);
   });
@@ -257,8 +311,19 @@ describe('what is coming', () => {
     await o.login(organiser.email, organiser.password);
     const res = await o.get(`/api/events/${eventId}/bookings`);
     expect(res.status).toBe(200);
-    expect(res.json.summary).toMatchObject({ items: 3, bookings: 2, byCategory: [{ name: 'Kettle', count: 2 }, { name: 'Clothing', count: 1 }] });
-    const [{ n }] = (await db.db.select({ n: sql<number>`COUNT(*)` }).from(bookingItems).innerJoin(bookings, eq(bookings.id, bookingItems.bookingId)).where(eq(bookings.eventId, eventId))) as { n: number }[];
+    expect(res.json.summary).toMatchObject({
+      items: 3,
+      bookings: 2,
+      byCategory: [
+        { name: 'Kettle', count: 2 },
+        { name: 'Clothing', count: 1 },
+      ],
+    });
+    const [{ n }] = (await db.db
+      .select({ n: sql<number>`COUNT(*)` })
+      .from(bookingItems)
+      .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
+      .where(eq(bookings.eventId, eventId))) as { n: number }[];
     expect(Number(n)).toBe(3);
   });
 });

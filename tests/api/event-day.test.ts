@@ -2,7 +2,14 @@ import { eq } from 'drizzle-orm';
 import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { TAG_CODE_PATTERN } from '../../shared/event-day/tag-code';
-import { bookingItems, groupExclusions, itemStatusChanges, shifts, venueBenches, volunteerSkills } from '../../server/src/db/schema/index';
+import {
+  bookingItems,
+  groupExclusions,
+  itemStatusChanges,
+  shifts,
+  venueBenches,
+  volunteerSkills,
+} from '../../server/src/db/schema/index';
 import type { RunningServer } from '../../server/src/server';
 import { createTestDatabase, type TestDatabase } from '../support/db';
 import { categoryId, makeEvent, makeGroup, makeUser, visitor } from '../support/factories';
@@ -20,7 +27,15 @@ const ids: Record<string, number> = {};
 let cats: Record<'kettle' | 'clothing' | 'lamp', number>;
 
 /** Readings that pass for a Class I kettle with 1.5 m of cord (limits from EN 50678 via instrument manuals, REFERENCE.md §3). */
-const passing = { visual: { cord: true, plug: true, strainRelief: true, casing: true, noHeatDamage: true }, applianceClass: 'I', heating: true, cordLengthM: 1.5, protectiveConductorOhm: 0.12, insulationMOhm: 45, instrument: 'PAT tester, bench 1' };
+const passing = {
+  visual: { cord: true, plug: true, strainRelief: true, casing: true, noHeatDamage: true },
+  applianceClass: 'I',
+  heating: true,
+  cordLengthM: 1.5,
+  protectiveConductorOhm: 0.12,
+  insulationMOhm: 45,
+  instrument: 'PAT tester, bench 1',
+};
 
 async function book(slot: number, items: { categoryId: number; fault: string }[], who = visitor()) {
   const r = await as.anon.post('/api/bookings', { slotId: slot, visitor: who, items, consent: true });
@@ -34,11 +49,21 @@ beforeAll(async () => {
   groupId = await makeGroup(db.db);
   const other = await makeGroup(db.db);
   // The session started 15 minutes ago: its first slot is still open for bookings, the desk is open.
-  const ev = await makeEvent(db.db, groupId, { startsAt: new Date(Date.now() - 15 * 60_000), slotCount: 4, capacity: 6 });
+  const ev = await makeEvent(db.db, groupId, {
+    startsAt: new Date(Date.now() - 15 * 60_000),
+    slotCount: 4,
+    capacity: 6,
+  });
   eventId = ev.eventId;
   slotIds = ev.slotIds;
   await db.db.insert(venueBenches).values([
-    { venueId: ev.venueId, name: 'Mains bench', seats: 2, equipment: ['multimeter', 'appliance-safety-tester', 'soldering-station'], position: 0 },
+    {
+      venueId: ev.venueId,
+      name: 'Mains bench',
+      seats: 2,
+      equipment: ['multimeter', 'appliance-safety-tester', 'soldering-station'],
+      position: 0,
+    },
     { venueId: ev.venueId, name: 'Sewing table', seats: 1, equipment: ['sewing-machine'], position: 1 },
   ]);
   const users = {
@@ -46,7 +71,12 @@ beforeAll(async () => {
     host: await makeUser(db.db, { roles: [[groupId, 'host']] }),
     fixer: await makeUser(db.db, { roles: [[groupId, 'fixer']] }),
     fixer2: await makeUser(db.db, { roles: [[groupId, 'fixer']] }),
-    outsider: await makeUser(db.db, { roles: [[other, 'fixer'], [other, 'host']] }),
+    outsider: await makeUser(db.db, {
+      roles: [
+        [other, 'fixer'],
+        [other, 'host'],
+      ],
+    }),
   };
   for (const [k, u] of Object.entries(users)) {
     ids[k] = u.id;
@@ -60,10 +90,14 @@ beforeAll(async () => {
     { userId: ids.fixer2, skill: 'electrical', level: 2 },
   ]);
   const end = new Date(Date.now() + 4 * 3600_000);
-  await db.db.insert(shifts).values([
-    { eventId, userId: ids.fixer, coming: true, startsAt: new Date(Date.now() - 3600_000), endsAt: end },
-  ]);
-  cats = { kettle: await categoryId(db.db, 'kettle'), clothing: await categoryId(db.db, 'clothing'), lamp: await categoryId(db.db, 'lamp') };
+  await db.db
+    .insert(shifts)
+    .values([{ eventId, userId: ids.fixer, coming: true, startsAt: new Date(Date.now() - 3600_000), endsAt: end }]);
+  cats = {
+    kettle: await categoryId(db.db, 'kettle'),
+    clothing: await categoryId(db.db, 'clothing'),
+    lamp: await categoryId(db.db, 'lamp'),
+  };
 });
 afterAll(async () => {
   await server.stop();
@@ -72,7 +106,10 @@ afterAll(async () => {
 
 describe('reception check-in', () => {
   it('gives each arrived item a tag code and a queue number, and checking in again changes nothing', async () => {
-    const { reference } = await book(slotIds[0], [{ categoryId: cats.kettle, fault: 'Switches off before boiling.' }, { categoryId: cats.clothing, fault: 'Zip has come off one side.' }]);
+    const { reference } = await book(slotIds[0], [
+      { categoryId: cats.kettle, fault: 'Switches off before boiling.' },
+      { categoryId: cats.clothing, fault: 'Zip has come off one side.' },
+    ]);
     const r = await as.host.post(`/api/bookings/${reference}/check-in`, {});
     expect(r.status).toBe(200);
     expect(r.json.items).toHaveLength(2);
@@ -93,18 +130,35 @@ describe('reception check-in', () => {
     const item = (await as.host.get(`/api/items/${ids.kettle}`)).json;
     expect(item.status).toBe('waiting');
     expect(item.placement).toMatchObject({ userId: ids.fixer, benchName: 'Mains bench' });
-    const history = await db.db.select().from(itemStatusChanges).where(eq(itemStatusChanges.itemId, ids.kettle)).orderBy(itemStatusChanges.id);
-    expect(history.map((h) => [h.fromStatus, h.toStatus])).toEqual([['booked', 'checked-in'], ['checked-in', 'waiting']]);
+    const history = await db.db
+      .select()
+      .from(itemStatusChanges)
+      .where(eq(itemStatusChanges.itemId, ids.kettle))
+      .orderBy(itemStatusChanges.id);
+    expect(history.map((h) => [h.fromStatus, h.toStatus])).toEqual([
+      ['booked', 'checked-in'],
+      ['checked-in', 'waiting'],
+    ]);
     expect(history[0].byUserId).toBe(ids.host);
     expect(history.every((h) => h.createdAt instanceof Date)).toBe(true);
   });
 
   it('records no-shows and withdrawals item by item, corrects the category and keeps the weight', async () => {
-    const { reference } = await book(slotIds[1], [{ categoryId: cats.lamp, fault: 'No light at all, switch loose.' }, { categoryId: cats.clothing, fault: 'Hole in the knee.' }]);
+    const { reference } = await book(slotIds[1], [
+      { categoryId: cats.lamp, fault: 'No light at all, switch loose.' },
+      { categoryId: cats.clothing, fault: 'Hole in the knee.' },
+    ]);
     const view = (await as.host.get(`/api/events/${eventId}/desk`)).json;
-    const b = view.slots.flatMap((s: { bookings: unknown[] }) => s.bookings).find((x: { reference: string }) => x.reference === reference);
+    const b = view.slots
+      .flatMap((s: { bookings: unknown[] }) => s.bookings)
+      .find((x: { reference: string }) => x.reference === reference);
     const [lamp, trousers] = b.items;
-    const r = await as.host.post(`/api/bookings/${reference}/check-in`, { items: [{ id: lamp.id, arrival: 'arrived', categoryId: cats.kettle, weightKg: '1.24' }, { id: trousers.id, arrival: 'no-show' }] });
+    const r = await as.host.post(`/api/bookings/${reference}/check-in`, {
+      items: [
+        { id: lamp.id, arrival: 'arrived', categoryId: cats.kettle, weightKg: '1.24' },
+        { id: trousers.id, arrival: 'no-show' },
+      ],
+    });
     expect(r.status).toBe(200);
     const [l, t] = r.json.items;
     expect(l.tagCode).toMatch(TAG_CODE_PATTERN);
@@ -112,7 +166,12 @@ describe('reception check-in', () => {
     const [row] = await db.db.select().from(bookingItems).where(eq(bookingItems.id, lamp.id));
     expect(row.categoryId).toBe(cats.kettle);
     expect(row.weighedKg).toBe(1.24);
-    const bad = await as.host.post(`/api/bookings/${reference}/check-in`, { items: [{ id: lamp.id, arrival: 'lost' }, { id: 999999, arrival: 'arrived' }] });
+    const bad = await as.host.post(`/api/bookings/${reference}/check-in`, {
+      items: [
+        { id: lamp.id, arrival: 'lost' },
+        { id: 999999, arrival: 'arrived' },
+      ],
+    });
     expect(bad.status).toBe(400);
     expect(Object.keys(bad.json.error.fields)).toContain('items.0.arrival');
   });
@@ -127,7 +186,12 @@ describe('reception check-in', () => {
 
   it('opens on the day: a session next week cannot check in yet', async () => {
     const later = await makeEvent(db.db, groupId, { startsAt: new Date(Date.now() + 7 * 86400_000) });
-    const r = await as.anon.post('/api/bookings', { slotId: later.slotIds[0], visitor: visitor(), items: [{ categoryId: cats.clothing, fault: 'Seam split open.' }], consent: true });
+    const r = await as.anon.post('/api/bookings', {
+      slotId: later.slotIds[0],
+      visitor: visitor(),
+      items: [{ categoryId: cats.clothing, fault: 'Seam split open.' }],
+      consent: true,
+    });
     const c = await as.host.post(`/api/bookings/${r.json.reference}/check-in`, {});
     expect(c.status).toBe(409);
     expect(c.json.error.message).toMatch(/opens on the day/);
@@ -136,18 +200,41 @@ describe('reception check-in', () => {
 
 describe('walk-ins', () => {
   it('books and checks in at once, asks for consent and the typed name, and refuses what the group does not take', async () => {
-    const noConsent = await as.host.post(`/api/events/${eventId}/walk-ins`, { visitor: { name: 'Pat Quill' }, items: [{ categoryId: cats.clothing, fault: 'Torn pocket lining.' }] });
+    const noConsent = await as.host.post(`/api/events/${eventId}/walk-ins`, {
+      visitor: { name: 'Pat Quill' },
+      items: [{ categoryId: cats.clothing, fault: 'Torn pocket lining.' }],
+    });
     expect(noConsent.status).toBe(400);
     expect(Object.keys(noConsent.json.error.fields)).toEqual(expect.arrayContaining(['consent', 'consentName']));
-    const swollen = await as.host.post(`/api/events/${eventId}/walk-ins`, { visitor: { name: 'Pat Quill' }, items: [{ categoryId: cats.lamp, fault: 'Battery lantern, will not charge.', hazards: ['swollen-battery'] }], consent: true, consentName: 'Pat Quill' });
+    const swollen = await as.host.post(`/api/events/${eventId}/walk-ins`, {
+      visitor: { name: 'Pat Quill' },
+      items: [{ categoryId: cats.lamp, fault: 'Battery lantern, will not charge.', hazards: ['swollen-battery'] }],
+      consent: true,
+      consentName: 'Pat Quill',
+    });
     expect(swollen.status).toBe(422);
     expect(swollen.json.error.fields['items.0.hazards']).toMatch(/swollen lithium battery/);
-    const r = await as.host.post(`/api/events/${eventId}/walk-ins`, { slotId: slotIds[0], visitor: { name: 'Pat Quill', email: '' }, items: [{ categoryId: cats.clothing, fault: 'Torn pocket lining.', weightKg: 0.6 }], consent: true, consentName: 'Pat Quill' });
+    const r = await as.host.post(`/api/events/${eventId}/walk-ins`, {
+      slotId: slotIds[0],
+      visitor: { name: 'Pat Quill', email: '' },
+      items: [{ categoryId: cats.clothing, fault: 'Torn pocket lining.', weightKg: 0.6 }],
+      consent: true,
+      consentName: 'Pat Quill',
+    });
     expect(r.status).toBe(201);
     expect(r.json.reference).toMatch(/^[2-9A-HJ-NP-Z]{3}-[2-9A-HJ-NP-Z]{3}$/);
     expect(r.json.items[0].tagCode).toMatch(TAG_CODE_PATTERN);
     ids.walkIn = r.json.items[0].id;
-    expect((await as.fixer.post(`/api/events/${eventId}/walk-ins`, { visitor: { name: 'X' }, items: [{ categoryId: cats.clothing, fault: 'Torn pocket.' }], consent: true, consentName: 'X Y' })).status).toBe(403);
+    expect(
+      (
+        await as.fixer.post(`/api/events/${eventId}/walk-ins`, {
+          visitor: { name: 'X' },
+          items: [{ categoryId: cats.clothing, fault: 'Torn pocket.' }],
+          consent: true,
+          consentName: 'X Y',
+        })
+      ).status,
+    ).toBe(403);
   });
 
   it('queues after the booked items of the same slot, even when it arrived first', async () => {
@@ -169,7 +256,13 @@ describe('at the bench', () => {
     expect(asFixer.status).toBe(200);
     expect(asFixer.json.booking.visitorName).toMatch(/^Visitor [0-9A-F]\.$/);
     expect(asFixer.json.booking.visitorPhone).toBeNull();
-    expect(asFixer.json.cautions.map((c: { id: string }) => c.id)).toEqual(['mains', 'capacitors', 'thermal', 'hot', 'check']);
+    expect(asFixer.json.cautions.map((c: { id: string }) => c.id)).toEqual([
+      'mains',
+      'capacitors',
+      'thermal',
+      'hot',
+      'check',
+    ]);
     expect((await as.outsider.get(`/api/items/${ids.kettle}`)).status).toBe(403);
     expect((await as.anon.get(`/api/items/${ids.kettle}`)).status).toBe(401);
   });
@@ -202,19 +295,34 @@ describe('at the bench', () => {
     expect(refused.status).toBe(422);
     expect(refused.json.error.code).toBe('safety-check-failed');
     // 0.35 Ω is above the 0.3 Ω limit for a cord up to 5 m.
-    const earth = await as.fixer.post(`/api/items/${ids.kettle}/safety-checks`, { ...passing, protectiveConductorOhm: 0.35 });
+    const earth = await as.fixer.post(`/api/items/${ids.kettle}/safety-checks`, {
+      ...passing,
+      protectiveConductorOhm: 0.35,
+    });
     expect(earth.json.pass).toBe(false);
     const ok = await as.fixer.post(`/api/items/${ids.kettle}/safety-checks`, passing);
     expect(ok.json).toMatchObject({ pass: true, failures: [], suggestion: null });
-    const fixed = await as.fixer.post(`/api/items/${ids.kettle}/outcome`, { outcome: 'fixed', minutes: 25, notes: 'Thermostat contacts cleaned.' });
+    const fixed = await as.fixer.post(`/api/items/${ids.kettle}/outcome`, {
+      outcome: 'fixed',
+      minutes: 25,
+      notes: 'Thermostat contacts cleaned.',
+    });
     expect(fixed.status).toBe(200);
     expect(fixed.json.status).toBe('done');
-    expect(fixed.json.outcome).toMatchObject({ outcome: 'fixed', minutes: 25, safetyCheckId: ok.json.id, recordedBy: ids.fixer });
+    expect(fixed.json.outcome).toMatchObject({
+      outcome: 'fixed',
+      minutes: 25,
+      safetyCheckId: ok.json.id,
+      recordedBy: ids.fixer,
+    });
     expect(fixed.json.safetyChecks.map((c: { pass: boolean }) => c.pass)).toEqual([true, false, false]);
   });
 
   it('refuses a safety check with a missing reading, naming the field', async () => {
-    const r = await as.organiser.post(`/api/items/${ids.kettle}/safety-checks`, { ...passing, protectiveConductorOhm: '' });
+    const r = await as.organiser.post(`/api/items/${ids.kettle}/safety-checks`, {
+      ...passing,
+      protectiveConductorOhm: '',
+    });
     expect(r.status).toBe(400);
     expect(r.json.error.fields.protectiveConductorOhm).toMatch(/Class I/);
     expect((await as.organiser.post(`/api/items/${ids.coat}/safety-checks`, passing)).status).toBe(409);
@@ -224,25 +332,46 @@ describe('at the bench', () => {
     const eol = await as.organiser.post(`/api/items/${ids.coat}/outcome`, { outcome: 'end-of-life' });
     expect(eol.status).toBe(400);
     expect(eol.json.error.fields.barrier).toBeTruthy();
-    const stray = await as.organiser.post(`/api/items/${ids.coat}/outcome`, { outcome: 'advice', barrier: 'too-worn-out' });
+    const stray = await as.organiser.post(`/api/items/${ids.coat}/outcome`, {
+      outcome: 'advice',
+      barrier: 'too-worn-out',
+    });
     expect(stray.status).toBe(400);
     expect(stray.json.error.fields.barrier).toMatch(/only for end-of-life/);
     const part = await as.organiser.post(`/api/items/${ids.coat}/outcome`, { outcome: 'parts-needed' });
     expect(part.status).toBe(400);
     expect(part.json.error.fields['part.description']).toBeTruthy();
-    const ok = await as.organiser.post(`/api/items/${ids.coat}/outcome`, { outcome: 'parts-needed', part: { description: 'No. 5 open-ended zip, 60 cm', cost: '3.50' } });
+    const ok = await as.organiser.post(`/api/items/${ids.coat}/outcome`, {
+      outcome: 'parts-needed',
+      part: { description: 'No. 5 open-ended zip, 60 cm', cost: '3.50' },
+    });
     expect(ok.status).toBe(200);
-    expect(ok.json.outcome).toMatchObject({ outcome: 'parts-needed', partDescription: 'No. 5 open-ended zip, 60 cm', partCost: 3.5 });
+    expect(ok.json.outcome).toMatchObject({
+      outcome: 'parts-needed',
+      partDescription: 'No. 5 open-ended zip, 60 cm',
+      partCost: 3.5,
+    });
     // A textile item needs no electrical check to be fixed; recording again corrects the outcome.
-    const fixed = await as.organiser.post(`/api/items/${ids.coat}/outcome`, { outcome: 'end-of-life', barrier: 'too-worn-out' });
-    expect(fixed.json.outcome).toMatchObject({ outcome: 'end-of-life', barrier: 'too-worn-out', barrierLabel: 'Product too worn out', partDescription: null });
+    const fixed = await as.organiser.post(`/api/items/${ids.coat}/outcome`, {
+      outcome: 'end-of-life',
+      barrier: 'too-worn-out',
+    });
+    expect(fixed.json.outcome).toMatchObject({
+      outcome: 'end-of-life',
+      barrier: 'too-worn-out',
+      barrierLabel: 'Product too worn out',
+      partDescription: null,
+    });
   });
 
   it('takes a passing check sent with the outcome, and keeps a failing one even though the outcome is refused', async () => {
     const { reference } = await book(slotIds[1], [{ categoryId: cats.kettle, fault: 'Leaks from the base.' }]);
     const c = await as.host.post(`/api/bookings/${reference}/check-in`, {});
     const id = c.json.items[0].id;
-    const bad = await as.fixer.post(`/api/items/${id}/outcome`, { outcome: 'fixed', safety: { ...passing, visual: { ...passing.visual, strainRelief: false } } });
+    const bad = await as.fixer.post(`/api/items/${id}/outcome`, {
+      outcome: 'fixed',
+      safety: { ...passing, visual: { ...passing.visual, strainRelief: false } },
+    });
     expect(bad.status).toBe(422);
     const view = (await as.fixer.get(`/api/items/${id}`)).json;
     expect(view.safetyChecks).toHaveLength(1);
@@ -259,7 +388,12 @@ describe('what the hall and the visitor see', () => {
     const item = (await as.host.get(`/api/items/${ids.kettle}`)).json;
     const r = await as.anon.get(`/api/public/tags/${item.tagCode.toLowerCase()}`);
     expect(r.status).toBe(200);
-    expect(r.json).toMatchObject({ tagCode: item.tagCode, status: 'done', outcomeLabel: 'Fixed', categoryName: item.categoryName });
+    expect(r.json).toMatchObject({
+      tagCode: item.tagCode,
+      status: 'done',
+      outcomeLabel: 'Fixed',
+      categoryName: item.categoryName,
+    });
     const everyone = await db.db.select().from(bookingItems);
     expect(r.text).not.toMatch(/Visitor [0-9a-f]|@example\.org|Switches off|Zip has come/i);
     expect(everyone.length).toBeGreaterThan(3);
@@ -282,7 +416,9 @@ describe('what the hall and the visitor see', () => {
     expect(r.status).toBe(200);
     expect(r.json.benches.map((b: { name: string }) => b.name)).toEqual(['Mains bench', 'Sewing table']);
     expect(r.json.counts.done).toBeGreaterThanOrEqual(2);
-    expect(r.json.warnings.some((w: { kind: string; userId: number }) => w.kind === 'idle-fixer' && w.userId === ids.fixer)).toBe(true);
+    expect(
+      r.json.warnings.some((w: { kind: string; userId: number }) => w.kind === 'idle-fixer' && w.userId === ids.fixer),
+    ).toBe(true);
     expect((await as.fixer.get(`/api/events/${eventId}/live`)).status).toBe(403);
   });
 
@@ -294,7 +430,12 @@ describe('what the hall and the visitor see', () => {
     expect(t.qrSvg).toMatch(/^<svg/);
     expect(t.visitor).toMatch(/^Visitor [0-9A-F]\.$/);
     expect(t.queueNumber).toBe(1);
-    expect(r.json.tags.every((x: { slotStartsAt: string }) => new Date(x.slotStartsAt).getTime() === new Date(r.json.tags[0].slotStartsAt).getTime())).toBe(true);
+    expect(
+      r.json.tags.every(
+        (x: { slotStartsAt: string }) =>
+          new Date(x.slotStartsAt).getTime() === new Date(r.json.tags[0].slotStartsAt).getTime(),
+      ),
+    ).toBe(true);
     const one = await as.host.get(`/api/events/${eventId}/tags?items=${ids.kettle}`);
     expect(one.json.tags).toHaveLength(1);
   });
@@ -302,9 +443,15 @@ describe('what the hall and the visitor see', () => {
 
 describe('the visitor’s own booking page', () => {
   it('shows their items’ status and queue number, and no longer lets them cancel once checked in', async () => {
-    const { reference } = await book(slotIds[2], [{ categoryId: cats.clothing, fault: 'Strap of a rucksack torn off.' }]);
+    const { reference } = await book(slotIds[2], [
+      { categoryId: cats.clothing, fault: 'Strap of a rucksack torn off.' },
+    ]);
     const token = manageTokenFor({ env: { SESSION_SECRET: TEST_SECRET } } as never, reference);
-    expect((await as.anon.get(`/api/bookings/${reference}?token=${token}`)).json.items[0]).toMatchObject({ status: 'booked', queueNumber: null, outcome: null });
+    expect((await as.anon.get(`/api/bookings/${reference}?token=${token}`)).json.items[0]).toMatchObject({
+      status: 'booked',
+      queueNumber: null,
+      outcome: null,
+    });
     await as.host.post(`/api/bookings/${reference}/check-in`, {});
     const view = (await as.anon.get(`/api/bookings/${reference}?token=${token}`)).json;
     expect(view.items[0].status).toMatch(/checked-in|waiting/);
@@ -317,11 +464,17 @@ describe('the visitor’s own booking page', () => {
 
 describe('repair photos from the bench', () => {
   async function upload(agent: Agent, itemId: number) {
-    const data = await sharp({ create: { width: 800, height: 600, channels: 3, background: '#23395d' } }).jpeg().toBuffer();
+    const data = await sharp({ create: { width: 800, height: 600, channels: 3, background: '#23395d' } })
+      .jpeg()
+      .toBuffer();
     const form = new FormData();
     form.append('photos', new Blob([new Uint8Array(data)], { type: 'image/jpeg' }), 'fault.jpg');
     const token = agent.csrf ?? (await agent.token());
-    const res = await fetch(`${server.url}/api/items/${itemId}/photos`, { method: 'POST', body: form, headers: { cookie: agent.cookieHeader(), 'x-csrf-token': token, accept: 'application/json' } });
+    const res = await fetch(`${server.url}/api/items/${itemId}/photos`, {
+      method: 'POST',
+      body: form,
+      headers: { cookie: agent.cookieHeader(), 'x-csrf-token': token, accept: 'application/json' },
+    });
     return { status: res.status, json: await res.json() };
   }
   it('lets the fixer on the item add them, kept apart from the visitor’s, and no one else', async () => {
@@ -341,12 +494,24 @@ describe('desk rules found in review', () => {
     await db.db.insert(groupExclusions).values({ groupId, categoryId: microwave });
     const { reference } = await book(slotIds[2], [{ categoryId: cats.lamp, fault: 'Lamp flickers when moved.' }]);
     const view = (await as.host.get(`/api/events/${eventId}/desk`)).json;
-    const item = view.slots.flatMap((s: { bookings: { reference: string; items: { id: number }[] }[] }) => s.bookings).find((b: { reference: string }) => b.reference === reference).items[0];
-    const refused = await as.host.post(`/api/bookings/${reference}/check-in`, { items: [{ id: item.id, arrival: 'arrived', categoryId: microwave }] });
+    const item = view.slots
+      .flatMap((s: { bookings: { reference: string; items: { id: number }[] }[] }) => s.bookings)
+      .find((b: { reference: string }) => b.reference === reference).items[0];
+    const refused = await as.host.post(`/api/bookings/${reference}/check-in`, {
+      items: [{ id: item.id, arrival: 'arrived', categoryId: microwave }],
+    });
     expect(refused.status).toBe(422);
     expect(refused.json.error.fields['items.0.categoryId']).toBeTruthy();
-    expect((await as.host.post(`/api/bookings/${reference}/check-in`, { items: [{ id: item.id, arrival: 'arrived', weightKg: '0,45' }] })).status).toBe(200);
-    const late = await as.host.post(`/api/bookings/${reference}/check-in`, { items: [{ id: item.id, arrival: 'no-show' }] });
+    expect(
+      (
+        await as.host.post(`/api/bookings/${reference}/check-in`, {
+          items: [{ id: item.id, arrival: 'arrived', weightKg: '0,45' }],
+        })
+      ).status,
+    ).toBe(200);
+    const late = await as.host.post(`/api/bookings/${reference}/check-in`, {
+      items: [{ id: item.id, arrival: 'no-show' }],
+    });
     expect(late.status).toBe(409);
     expect(late.json.error.fields['items.0.arrival']).toMatch(/withdrawn/);
     const [row] = await db.db.select().from(bookingItems).where(eq(bookingItems.id, item.id));

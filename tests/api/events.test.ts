@@ -19,7 +19,16 @@ const day = (d: number, h: number, m = 0) => {
   const now = new Date();
   return new Date(Date.UTC(now.getUTCFullYear(), now.getUTCMonth(), now.getUTCDate() + d, h, m)).toISOString();
 };
-const eventBody = (over: Record<string, unknown> = {}) => ({ groupId, title: 'Spring session', venueId, startsAt: day(10, 10), endsAt: day(10, 13), slotMinutes: 30, slotCapacity: 4, ...over });
+const eventBody = (over: Record<string, unknown> = {}) => ({
+  groupId,
+  title: 'Spring session',
+  venueId,
+  startsAt: day(10, 10),
+  endsAt: day(10, 13),
+  slotMinutes: 30,
+  slotCapacity: 4,
+  ...over,
+});
 
 beforeAll(async () => {
   db = await createTestDatabase();
@@ -47,7 +56,13 @@ describe('the category taxonomy', () => {
     const kettle = res.json.find((c: { slug: string }) => c.slug === 'kettle');
     // Directive 2012/19/EU Annex III: kettles are small equipment (category 5). Statistics Netherlands
     // e-waste dataset (2020), UNU-KEY 0203 hot-water appliances: 1.89 kg.
-    expect(kettle).toMatchObject({ weeeCategory: 5, avgWeightKg: 1.89, skill: 'electrical', mains: true, repairMinutes: 30 });
+    expect(kettle).toMatchObject({
+      weeeCategory: 5,
+      avgWeightKg: 1.89,
+      skill: 'electrical',
+      mains: true,
+      repairMinutes: 30,
+    });
     expect(kettle.equipment).toContain('appliance-safety-tester');
     expect(kettle.weightSource).toMatch(/UNU-KEY 0203/);
     const bike = res.json.find((c: { slug: string }) => c.slug === 'bicycle');
@@ -64,7 +79,9 @@ describe('events and slots', () => {
     // 10:00–13:00 in 20-minute slots: nine slots, the last 12:40–13:00.
     expect(res.json.slots).toHaveLength(9);
     expect(new Date(res.json.slots[8].startsAt).toISOString()).toBe(day(10, 12, 40));
-    expect(res.json.slots.every((s: { capacity: number; booked: number }) => s.capacity === 4 && s.booked === 0)).toBe(true);
+    expect(res.json.slots.every((s: { capacity: number; booked: number }) => s.capacity === 4 && s.booked === 0)).toBe(
+      true,
+    );
   });
 
   it('refuses an end before the start, a zero slot length and a negative capacity', async () => {
@@ -83,7 +100,9 @@ describe('events and slots', () => {
   it('lets only the group’s organisers create and change events', async () => {
     expect((await fixer.post('/api/events', eventBody())).status).toBe(403);
     const otherVenue = await makeVenue(db.db, otherGroupId);
-    expect((await organiser.post('/api/events', eventBody({ groupId: otherGroupId, venueId: otherVenue }))).status).toBe(403);
+    expect(
+      (await organiser.post('/api/events', eventBody({ groupId: otherGroupId, venueId: otherVenue }))).status,
+    ).toBe(403);
     const { eventId } = await makeEvent(db.db, otherGroupId, { status: 'draft' });
     expect((await organiser.send('PATCH', `/api/events/${eventId}`, { title: 'Taken over' })).status).toBe(403);
     expect((await organiser.post(`/api/events/${eventId}/publish`)).status).toBe(403);
@@ -91,7 +110,9 @@ describe('events and slots', () => {
 
   it('adjusts a slot before publishing, then publishes; published hours are fixed', async () => {
     const created = (await organiser.post('/api/events', eventBody())).json;
-    const adjusted = await organiser.send('PATCH', `/api/events/${created.id}/slots/${created.slots[0].id}`, { capacity: 1 });
+    const adjusted = await organiser.send('PATCH', `/api/events/${created.id}/slots/${created.slots[0].id}`, {
+      capacity: 1,
+    });
     expect(adjusted.json.slots[0].capacity).toBe(1);
     expect((await new Agent(server.url).get(`/api/events/${created.id}`)).status).toBe(404);
     expect((await organiser.post(`/api/events/${created.id}/publish`)).json.status).toBe('published');
@@ -110,9 +131,18 @@ describe('events and slots', () => {
     expect(ids).toContain(pub.id);
     expect(ids).not.toContain(draft.id);
     const bike = await categoryId(db.db, 'bicycle');
-    await organiser.send('PUT', `/api/groups/${groupId}/settings`, { houseRules: 'No bikes indoors.', excludedCategoryIds: [bike] });
+    await organiser.send('PUT', `/api/groups/${groupId}/settings`, {
+      houseRules: 'No bikes indoors.',
+      excludedCategoryIds: [bike],
+    });
     expect((await new Agent(server.url).get(`/api/events?groupId=${groupId}&categoryId=${bike}`)).json).toEqual([]);
-    expect((await new Agent(server.url).get(`/api/events?groupId=${groupId}&categoryId=${await categoryId(db.db, 'kettle')}`)).json.length).toBeGreaterThan(0);
+    expect(
+      (
+        await new Agent(server.url).get(
+          `/api/events?groupId=${groupId}&categoryId=${await categoryId(db.db, 'kettle')}`,
+        )
+      ).json.length,
+    ).toBeGreaterThan(0);
     await organiser.send('PUT', `/api/groups/${groupId}/settings`, { houseRules: '', excludedCategoryIds: [] });
   });
 
@@ -120,17 +150,36 @@ describe('events and slots', () => {
     const { eventId, slotIds } = await makeEvent(db.db, groupId);
     const a = new Agent(server.url);
     const people = [visitor(), visitor()];
-    for (const v of people) await a.post('/api/bookings', { slotId: slotIds[0], visitor: v, items: [{ categoryId: await categoryId(db.db, 'lamp'), fault: 'Flickers when touched.' }], consent: true });
+    for (const v of people)
+      await a.post('/api/bookings', {
+        slotId: slotIds[0],
+        visitor: v,
+        items: [{ categoryId: await categoryId(db.db, 'lamp'), fault: 'Flickers when touched.' }],
+        consent: true,
+      });
     const res = await organiser.post(`/api/events/${eventId}/cancel`, { reason: 'The hall roof is leaking.' });
     expect(res.json.status).toBe('cancelled');
     for (const v of people) {
       const [m] = await db.db.select().from(outbox).where(eq(outbox.toAddress, v.email)).orderBy(outbox.id);
       const all = await db.db.select().from(outbox).where(eq(outbox.toAddress, v.email));
       expect(m).toBeTruthy();
-      expect(all.some((x) => x.subject.startsWith('Cancelled:') && x.text.includes('The hall roof is leaking.'))).toBe(true);
+      expect(all.some((x) => x.subject.startsWith('Cancelled:') && x.text.includes('The hall roof is leaking.'))).toBe(
+        true,
+      );
     }
-    expect((await a.post('/api/bookings', { slotId: slotIds[1], visitor: visitor(), items: [{ categoryId: await categoryId(db.db, 'lamp'), fault: 'Flickers when touched.' }], consent: true })).status).toBe(409);
+    expect(
+      (
+        await a.post('/api/bookings', {
+          slotId: slotIds[1],
+          visitor: visitor(),
+          items: [{ categoryId: await categoryId(db.db, 'lamp'), fault: 'Flickers when touched.' }],
+          consent: true,
+        })
+      ).status,
+    ).toBe(409);
     // Nothing stays booked at a cancelled session.
-    expect((await organiser.get(`/api/events/${eventId}`)).json.slots.map((s: { booked: number }) => s.booked)).toEqual([0, 0, 0, 0]);
+    expect((await organiser.get(`/api/events/${eventId}`)).json.slots.map((s: { booked: number }) => s.booked)).toEqual(
+      [0, 0, 0, 0],
+    );
   });
 });

@@ -37,13 +37,20 @@ describe('HTTP basics', () => {
     expect(bad.status).toBe(400);
     expect(bad.json.error.code).toBe('bad-json');
 
-    const big = await a.raw('POST', '/api/auth/login', { rawBody: JSON.stringify({ email: 'a@b.c', password: 'x'.repeat(200_000) }), headers: { 'x-csrf-token': token } });
+    const big = await a.raw('POST', '/api/auth/login', {
+      rawBody: JSON.stringify({ email: 'a@b.c', password: 'x'.repeat(200_000) }),
+      headers: { 'x-csrf-token': token },
+    });
     expect(big.status).toBe(413);
     expect(big.json.error.code).toBe('too-large');
 
     const invalid = await a.post('/api/auth/login', { email: 'not-an-address' });
     expect(invalid.status).toBe(400);
-    expect(invalid.json.error).toEqual({ code: 'invalid', message: expect.any(String), fields: { email: expect.any(String), password: expect.any(String) } });
+    expect(invalid.json.error).toEqual({
+      code: 'invalid',
+      message: expect.any(String),
+      fields: { email: expect.any(String), password: expect.any(String) },
+    });
   });
 
   it('sends security headers and no X-Powered-By', async () => {
@@ -73,7 +80,9 @@ describe('HTTP basics', () => {
     try {
       const r = await new Agent(`http://127.0.0.1:${(s.address() as AddressInfo).port}`).get('/boom');
       expect(r.status).toBe(500);
-      expect(r.json).toEqual({ error: { code: 'internal', message: 'Something went wrong on our side. It has been logged.' } });
+      expect(r.json).toEqual({
+        error: { code: 'internal', message: 'Something went wrong on our side. It has been logged.' },
+      });
       expect(r.text).not.toContain('secret');
       expect(logged).toEqual(['unhandled error on GET /boom: secret table name leaked']);
     } finally {

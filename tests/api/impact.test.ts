@@ -2,7 +2,15 @@ import { eq, sql } from 'drizzle-orm';
 import { parse } from 'csv-parse/sync';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_PASSWORD } from '../../shared/constants';
-import { bookingItems, bookings, events, followUps, outbox, repairGroups, slots } from '../../server/src/db/schema/index';
+import {
+  bookingItems,
+  bookings,
+  events,
+  followUps,
+  outbox,
+  repairGroups,
+  slots,
+} from '../../server/src/db/schema/index';
 import { ORDS_FIELDS } from '../../server/src/features/impact/exports';
 import { sendFollowUpReminders } from '../../server/src/features/impact/follow-ups';
 import { sendThankYous } from '../../server/src/features/impact/thanks';
@@ -54,7 +62,15 @@ async function direct(where: ReturnType<typeof sql>) {
       AND NOT EXISTS (SELECT 1 FROM booking_items r JOIN bookings rb ON rb.id = r.booking_id WHERE r.return_of_item_id = bi.id AND rb.status = 'confirmed' AND r.checked_in_at IS NOT NULL AND r.status NOT IN ('no-show', 'withdrawn'))
       AND ${where}`)) as unknown as [Record<string, string>[]];
   const row = r[0];
-  return { items: Number(row.items), fixed: Number(row.fixed), partsNeeded: Number(row.parts), advice: Number(row.advice), endOfLife: Number(row.eol), kg: Number(row.kg), co2e: Number(row.co2e) };
+  return {
+    items: Number(row.items),
+    fixed: Number(row.fixed),
+    partsNeeded: Number(row.parts),
+    advice: Number(row.advice),
+    endOfLife: Number(row.eol),
+    kg: Number(row.kg),
+    co2e: Number(row.co2e),
+  };
 }
 
 describe('statistics', () => {
@@ -66,7 +82,13 @@ describe('statistics', () => {
     ] as const) {
       const s = (await (url === '/api/stats' ? as.admin : as.organiser).get(url)).json;
       const d = await direct(where);
-      expect(s).toMatchObject({ items: d.items, fixed: d.fixed, partsNeeded: d.partsNeeded, advice: d.advice, endOfLife: d.endOfLife });
+      expect(s).toMatchObject({
+        items: d.items,
+        fixed: d.fixed,
+        partsNeeded: d.partsNeeded,
+        advice: d.advice,
+        endOfLife: d.endOfLife,
+      });
       expect(s.kgDiverted).toBeCloseTo(d.kg, 3);
       expect(s.co2eKg).toBeCloseTo(d.co2e, 3);
       expect(s.byCategory.reduce((n: number, c: { items: number }) => n + c.items, 0)).toBe(d.items);
@@ -78,8 +100,15 @@ describe('statistics', () => {
 
   it('follow an outcome as soon as it is recorded', async () => {
     const before = (await as.organiser.get(`/api/stats?eventId=${todayId}`)).json;
-    const [toaster] = await db.db.select({ id: bookingItems.id }).from(bookingItems).innerJoin(bookings, eq(bookings.id, bookingItems.bookingId)).where(eq(bookings.reference, 'T4M-8RS'));
-    const r = await as.organiser.post(`/api/items/${toaster.id}/outcome`, { outcome: 'end-of-life', barrier: 'spare-parts-not-available' });
+    const [toaster] = await db.db
+      .select({ id: bookingItems.id })
+      .from(bookingItems)
+      .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
+      .where(eq(bookings.reference, 'T4M-8RS'));
+    const r = await as.organiser.post(`/api/items/${toaster.id}/outcome`, {
+      outcome: 'end-of-life',
+      barrier: 'spare-parts-not-available',
+    });
     expect(r.status).toBe(200);
     const after = (await as.organiser.get(`/api/stats?eventId=${todayId}`)).json;
     expect(after.endOfLife).toBe(before.endOfLife + 1);
@@ -103,7 +132,11 @@ describe('the report for a period', () => {
     expect(r.status).toBe(200);
     const s = (await as.organiser.get(`/api/stats?groupId=${groupId}&from=${from}&to=${to}`)).json;
     expect(r.json.stats).toMatchObject({ items: s.items, fixed: s.fixed, kgDiverted: s.kgDiverted });
-    const [{ n }] = (await db.db.execute(sql`SELECT COUNT(*) AS n FROM events WHERE group_id = ${groupId} AND status IN ('published','closed') AND starts_at <= NOW(3) AND DATE(starts_at) BETWEEN ${from} AND ${to}`) as unknown as [{ n: number }[]])[0];
+    const [{ n }] = (
+      (await db.db.execute(
+        sql`SELECT COUNT(*) AS n FROM events WHERE group_id = ${groupId} AND status IN ('published','closed') AND starts_at <= NOW(3) AND DATE(starts_at) BETWEEN ${from} AND ${to}`,
+      )) as unknown as [{ n: number }[]]
+    )[0];
     expect(r.json.range.sessions).toBe(Number(n));
     // Five volunteers, three hours at each monthly session.
     expect(r.json.volunteerHours).toBe(Number(n) * 5 * 3);
@@ -135,12 +168,32 @@ describe('exports', () => {
     expect(r.headers.get('content-type')).toMatch(/text\/csv/);
     const lines = r.text.trim().split('\n');
     expect(lines[0].split(',')).toEqual([...ORDS_FIELDS]);
-    for (const f of ['product_category', 'brand', 'year_of_manufacture', 'problem', 'repair_status', 'repair_barrier_if_end_of_life', 'group_identifier', 'event_date']) expect(lines[0].split(',')).toContain(f);
+    for (const f of [
+      'product_category',
+      'brand',
+      'year_of_manufacture',
+      'problem',
+      'repair_status',
+      'repair_barrier_if_end_of_life',
+      'group_identifier',
+      'event_date',
+    ])
+      expect(lines[0].split(',')).toContain(f);
     const rows = parse(r.text, { columns: true }) as Record<string, string>[];
     expect(rows.length).toBeGreaterThan(50);
-    expect(new Set(rows.map((x) => x.repair_status))).toEqual(new Set(['Fixed', 'Repairable', 'End of life', 'Unknown']));
+    expect(new Set(rows.map((x) => x.repair_status))).toEqual(
+      new Set(['Fixed', 'Repairable', 'End of life', 'Unknown']),
+    );
     const barriers = new Set(rows.map((x) => x.repair_barrier_if_end_of_life).filter(Boolean));
-    for (const b of barriers) expect(['Spare parts not available', 'Spare parts too expensive', 'No way to open the product', 'Repair information not available', 'Lack of equipment', 'Product too worn out']).toContain(b);
+    for (const b of barriers)
+      expect([
+        'Spare parts not available',
+        'Spare parts too expensive',
+        'No way to open the product',
+        'Repair information not available',
+        'Lack of equipment',
+        'Product too worn out',
+      ]).toContain(b);
     expect(rows.every((x) => /^\d{4}-\d{2}-\d{2}$/.test(x.event_date))).toBe(true);
     expect(r.text).not.toMatch(/@example\.org/);
     expect((await as.fixer.get(`/api/exports/open-repair-data.csv?groupId=${groupId}`)).status).toBe(403);
@@ -149,10 +202,17 @@ describe('exports', () => {
 
 describe('parts-needed follow-up', () => {
   it('mails the visitor the part and a re-booking link that books with priority, even into a full slot, and counts the item once', async () => {
-    const [lamp] = await db.db.select({ id: bookingItems.id, eventId: bookings.eventId }).from(bookingItems).innerJoin(bookings, eq(bookings.id, bookingItems.bookingId)).where(eq(bookings.reference, 'T6P-2XC'));
+    const [lamp] = await db.db
+      .select({ id: bookingItems.id, eventId: bookings.eventId })
+      .from(bookingItems)
+      .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
+      .where(eq(bookings.reference, 'T6P-2XC'));
     await as.host.post('/api/bookings/T6P-2XC/check-in', {});
     await as.organiser.post(`/api/items/${lamp.id}/start`, {});
-    const r = await as.organiser.post(`/api/items/${lamp.id}/outcome`, { outcome: 'parts-needed', part: { description: 'E27 lampholder with cord grip', cost: 4.2 } });
+    const r = await as.organiser.post(`/api/items/${lamp.id}/outcome`, {
+      outcome: 'parts-needed',
+      part: { description: 'E27 lampholder with cord grip', cost: 4.2 },
+    });
     expect(r.status).toBe(200);
     const [f] = await db.db.select().from(followUps).where(eq(followUps.itemId, lamp.id));
     expect(f).toMatchObject({ status: 'open' });
@@ -169,7 +229,12 @@ describe('parts-needed follow-up', () => {
     // Fill the slot to its capacity: an ordinary booking is refused, the return visit is not.
     const [s] = await db.db.select().from(slots).where(eq(slots.id, slotId));
     await db.db.update(slots).set({ booked: s.capacity }).where(eq(slots.id, slotId));
-    const ordinary = await as.anon.post('/api/bookings', { slotId, visitor: { name: 'Late Comer', email: 'late@example.org' }, items: [{ categoryId: 1, fault: 'Something broke.' }], consent: true });
+    const ordinary = await as.anon.post('/api/bookings', {
+      slotId,
+      visitor: { name: 'Late Comer', email: 'late@example.org' },
+      items: [{ categoryId: 1, fault: 'Something broke.' }],
+      consent: true,
+    });
     expect(ordinary.status).toBe(409);
     const back = await as.anon.post(`/api/rebook/${link}`, { slotId });
     expect(back.status).toBe(201);
@@ -182,19 +247,32 @@ describe('parts-needed follow-up', () => {
 
     // The return visit is fixed at the later session: the item counts once, as fixed.
     const groupBefore = (await as.organiser.get(`/api/stats?groupId=${groupId}`)).json;
-    await db.db.update(events).set({ startsAt: new Date(Date.now() - 3600_000) }).where(eq(events.id, next.id));
+    await db.db
+      .update(events)
+      .set({ startsAt: new Date(Date.now() - 3600_000) })
+      .where(eq(events.id, next.id));
     expect((await as.host.post(`/api/bookings/${back.json.reference}/check-in`, {})).status).toBe(200);
     expect((await db.db.select().from(followUps).where(eq(followUps.itemId, lamp.id)))[0].status).toBe('came-back');
     await as.organiser.post(`/api/items/${ret.id}/start`, {});
-    const safety = { visual: { cord: true, plug: true, strainRelief: true, casing: true, noHeatDamage: true }, applianceClass: 'II', insulationMOhm: 30 };
+    const safety = {
+      visual: { cord: true, plug: true, strainRelief: true, casing: true, noHeatDamage: true },
+      applianceClass: 'II',
+      insulationMOhm: 30,
+    };
     expect((await as.organiser.post(`/api/items/${ret.id}/outcome`, { outcome: 'fixed', safety })).status).toBe(200);
     const groupAfter = (await as.organiser.get(`/api/stats?groupId=${groupId}`)).json;
     expect(groupAfter.items).toBe(groupBefore.items);
     expect(groupAfter.fixed).toBe(groupBefore.fixed + 1);
     expect(groupAfter.partsNeeded).toBe(groupBefore.partsNeeded - 1);
-    expect((await db.db.select().from(followUps).where(eq(followUps.itemId, lamp.id)))[0].status).toBe('fixed-at-return');
+    expect((await db.db.select().from(followUps).where(eq(followUps.itemId, lamp.id)))[0].status).toBe(
+      'fixed-at-return',
+    );
     const list = (await as.organiser.get(`/api/groups/${groupId}/follow-ups`)).json;
-    expect(list.find((x: { itemId: number }) => x.itemId === lamp.id)).toMatchObject({ statusLabel: 'Fixed at return', rebookUrl: null, returnVisit: { reference: back.json.reference } });
+    expect(list.find((x: { itemId: number }) => x.itemId === lamp.id)).toMatchObject({
+      statusLabel: 'Fixed at return',
+      rebookUrl: null,
+      returnVisit: { reference: back.json.reference },
+    });
     expect((await as.fixer.get(`/api/groups/${groupId}/follow-ups`)).status).toBe(403);
   });
 });
@@ -202,7 +280,10 @@ describe('parts-needed follow-up', () => {
 describe('mails after the event', () => {
   it('thanks each visitor with what happened to their items and each volunteer with the totals, once', async () => {
     // Today's session ends; two hours later the thank-you mails go out.
-    await db.db.update(events).set({ endsAt: new Date(Date.now() - 3 * 3600_000) }).where(eq(events.id, todayId));
+    await db.db
+      .update(events)
+      .set({ endsAt: new Date(Date.now() - 3 * 3600_000) })
+      .where(eq(events.id, todayId));
     const sent = await sendThankYous(server.ctx);
     expect(sent).toBeGreaterThanOrEqual(1);
     expect(await sendThankYous(server.ctx)).toBe(0);
@@ -215,11 +296,20 @@ describe('mails after the event', () => {
     const wren = await db.db.select().from(outbox).where(eq(outbox.toAddress, 'wren.ashcombe@example.org'));
     expect(wren.some((m) => m.subject.includes('what we did together'))).toBe(true);
     // Someone who did not come gets no thank-you.
-    expect((await db.db.select().from(outbox).where(eq(outbox.toAddress, 'mae@example.org'))).some((m) => m.subject.startsWith('Thank you'))).toBe(false);
+    expect(
+      (await db.db.select().from(outbox).where(eq(outbox.toAddress, 'mae@example.org'))).some((m) =>
+        m.subject.startsWith('Thank you'),
+      ),
+    ).toBe(false);
   });
 
   it('reminds a visitor whose part has been awaited six weeks, once', async () => {
-    const due = await db.db.select().from(followUps).where(sql`${followUps.remindedAt} IS NULL AND ${followUps.createdAt} < NOW() - INTERVAL 42 DAY AND ${followUps.status} IN ('open','part-ordered')`);
+    const due = await db.db
+      .select()
+      .from(followUps)
+      .where(
+        sql`${followUps.remindedAt} IS NULL AND ${followUps.createdAt} < NOW() - INTERVAL 42 DAY AND ${followUps.status} IN ('open','part-ordered')`,
+      );
     expect(due.length).toBeGreaterThan(0);
     const n = await sendFollowUpReminders(server.ctx);
     expect(n).toBe(due.length);
@@ -230,14 +320,25 @@ describe('mails after the event', () => {
 describe('return visits and skill limits', () => {
   it('lets a return visit past a slot’s per-skill limit, once', async () => {
     // A Kestlebridge session limits textiles to 2 a slot; fill a slot's textiles, then book a textile item's return.
-    const [coat] = await db.db.select({ id: bookingItems.id }).from(bookingItems).innerJoin(bookings, eq(bookings.id, bookingItems.bookingId)).where(eq(bookings.reference, 'T3H-7PQ'));
-    await as.organiser.post(`/api/items/${coat.id}/outcome`, { outcome: 'parts-needed', part: { description: 'Coat lining fabric, 0.5 m' } });
-    const mail = (await db.db.select().from(outbox).where(eq(outbox.toAddress, 'ada@example.org'))).find((m) => m.subject.includes('part'))!;
+    const [coat] = await db.db
+      .select({ id: bookingItems.id })
+      .from(bookingItems)
+      .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
+      .where(eq(bookings.reference, 'T3H-7PQ'));
+    await as.organiser.post(`/api/items/${coat.id}/outcome`, {
+      outcome: 'parts-needed',
+      part: { description: 'Coat lining fabric, 0.5 m' },
+    });
+    const mail = (await db.db.select().from(outbox).where(eq(outbox.toAddress, 'ada@example.org'))).find((m) =>
+      m.subject.includes('part'),
+    )!;
     const link = /\/rebook\/([\w.-]+)/.exec(mail.text)![1];
     const view = (await as.anon.get(`/api/rebook/${link}`)).json;
     const target = view.events.find((e: { title: string }) => e.title === 'Kestlebridge repair session');
     const slotId = target.slots[target.slots.length - 1].id;
-    await db.db.execute(sql`INSERT INTO slot_skill_counts (slot_id, skill, booked) VALUES (${slotId}, 'textiles', 2) ON DUPLICATE KEY UPDATE booked = 2`);
+    await db.db.execute(
+      sql`INSERT INTO slot_skill_counts (slot_id, skill, booked) VALUES (${slotId}, 'textiles', 2) ON DUPLICATE KEY UPDATE booked = 2`,
+    );
     const r = await as.anon.post(`/api/rebook/${link}`, { slotId });
     expect(r.status).toBe(201);
   });

@@ -52,13 +52,17 @@ describe('inviting volunteers by e-mail', () => {
     const right = new Agent(server.url);
     await right.login(u.email, u.password);
     expect((await right.post(`/api/invites/${token}/accept`)).status).toBe(200);
-    expect((await right.get('/api/auth/me')).json.user.roles).toEqual([expect.objectContaining({ groupId, role: 'host' })]);
+    expect((await right.get('/api/auth/me')).json.user.roles).toEqual([
+      expect.objectContaining({ groupId, role: 'host' }),
+    ]);
   });
 
   it('lets only the group’s organisers send invitations', async () => {
     const f = await makeUser(db.db, { roles: [[groupId, 'fixer']] });
     const fixer = new Agent(server.url);
     await fixer.login(f.email, f.password);
-    expect((await fixer.post(`/api/groups/${groupId}/invites`, { email: 'x@example.org', role: 'organiser' })).status).toBe(403);
+    expect(
+      (await fixer.post(`/api/groups/${groupId}/invites`, { email: 'x@example.org', role: 'organiser' })).status,
+    ).toBe(403);
   });
 });

@@ -10,10 +10,16 @@ describe('migrations', () => {
     const db = await createTestDatabase({ migrate: false });
     try {
       const tables = async () =>
-        ((await adminSql('SELECT table_name AS t FROM information_schema.tables WHERE table_schema = ? ORDER BY 1', [db.name])) as { t: string }[]).map((r) => r.t);
+        (
+          (await adminSql('SELECT table_name AS t FROM information_schema.tables WHERE table_schema = ? ORDER BY 1', [
+            db.name,
+          ])) as { t: string }[]
+        ).map((r) => r.t);
       expect(await tables()).toEqual([]);
       await runMigrations(db.url);
-      const expected = Object.values(schema).filter((t) => isTable(t)).map((t) => getTableConfig(t as never).name);
+      const expected = Object.values(schema)
+        .filter((t) => isTable(t))
+        .map((t) => getTableConfig(t as never).name);
       expect((await tables()).sort()).toEqual([...expected, '__drizzle_migrations'].sort());
       const applied = await adminSql(`SELECT COUNT(*) AS n FROM \`${db.name}\`.__drizzle_migrations`);
       await runMigrations(db.url);

@@ -10,7 +10,13 @@ import { createTestDatabase, type TestDatabase } from '../support/db';
 
 let db: TestDatabase;
 let port: number;
-const senderFor = (p: number) => smtpSender({ SMTP_HOST: '127.0.0.1', SMTP_PORT: p, SMTP_SECURE: false, MAIL_FROM: 'Mendery <no-reply@mendery.test>' });
+const senderFor = (p: number) =>
+  smtpSender({
+    SMTP_HOST: '127.0.0.1',
+    SMTP_PORT: p,
+    SMTP_SECURE: false,
+    MAIL_FROM: 'Mendery <no-reply@mendery.test>',
+  });
 
 beforeAll(async () => {
   db = await createTestDatabase();
@@ -22,7 +28,9 @@ afterAll(async () => {
 
 describe('the outbox', () => {
   it('keeps a mail while the mailbox is down and delivers it once the mailbox is back', async () => {
-    await db.db.transaction((tx) => enqueueMail(tx, composeMail('wren@example.org', 'Your slot is booked', { paragraphs: ['See you on Saturday.'] })));
+    await db.db.transaction((tx) =>
+      enqueueMail(tx, composeMail('wren@example.org', 'Your slot is booked', { paragraphs: ['See you on Saturday.'] })),
+    );
     const worker = new OutboxWorker(db.db, senderFor(port));
 
     // The mailbox is down: the attempt fails, the row stays, and a retry is scheduled.
@@ -39,11 +47,17 @@ describe('the outbox', () => {
     await mailbox.start();
     try {
       // The retry comes due (we move the clock of the row rather than sleep through the back-off).
-      await db.db.update(outbox).set({ nextAttemptAt: sql`NOW(3)` }).where(eq(outbox.id, failed.id));
+      await db.db
+        .update(outbox)
+        .set({ nextAttemptAt: sql`NOW(3)` })
+        .where(eq(outbox.id, failed.id));
       expect(await worker.processBatch()).toBe(1);
       const [row] = await db.db.select().from(outbox).where(eq(outbox.id, failed.id));
       expect(row).toMatchObject({ status: 'sent', attempts: 2, lastError: null });
-      const caught = await db.db.select().from(mailboxMessages).where(eq(mailboxMessages.subject, 'Your slot is booked'));
+      const caught = await db.db
+        .select()
+        .from(mailboxMessages)
+        .where(eq(mailboxMessages.subject, 'Your slot is booked'));
       expect(caught).toHaveLength(1);
       expect(caught[0].toAddress).toBe('wren@example.org');
       expect(caught[0].text).toContain('See you on Saturday.');
@@ -65,10 +79,22 @@ describe('the outbox', () => {
 
   it('lets several workers share the queue without sending any mail twice', async () => {
     const sent: string[] = [];
-    const slowSender = { send: async (m: { to: string }) => { await new Promise((r) => setTimeout(r, 5)); sent.push(m.to); } };
-    for (let i = 0; i < 60; i++) await enqueueMail(db.db, composeMail(`share-${i}@example.org`, 'Share', { paragraphs: [String(i)] }));
+    const slowSender = {
+      send: async (m: { to: string }) => {
+        await new Promise((r) => setTimeout(r, 5));
+        sent.push(m.to);
+      },
+    };
+    for (let i = 0; i < 60; i++)
+      await enqueueMail(db.db, composeMail(`share-${i}@example.org`, 'Share', { paragraphs: [String(i)] }));
     const workers = [1, 2, 3, 4].map(() => new OutboxWorker(db.db, slowSender));
-    const counts = await Promise.all(workers.map(async (w) => { let n = 0; for (let k = 0; k < 10; k++) n += await w.processBatch(5); return n; }));
+    const counts = await Promise.all(
+      workers.map(async (w) => {
+        let n = 0;
+        for (let k = 0; k < 10; k++) n += await w.processBatch(5);
+        return n;
+      }),
+    );
     const shared = sent.filter((t) => t.startsWith('share-'));
     expect(shared).toHaveLength(60);
     expect(new Set(shared).size).toBe(60);
@@ -76,7 +102,11 @@ describe('the outbox', () => {
   });
 
   it('gives up at once on a permanent SMTP refusal and records why', async () => {
-    const refusing = { send: async () => { throw Object.assign(new Error('550 mailbox unavailable'), { responseCode: 550 }); } };
+    const refusing = {
+      send: async () => {
+        throw Object.assign(new Error('550 mailbox unavailable'), { responseCode: 550 });
+      },
+    };
     await enqueueMail(db.db, composeMail('gone@example.org', 'Refused', { paragraphs: ['x'] }));
     await new OutboxWorker(db.db, refusing).processBatch();
     const [row] = await db.db.select().from(outbox).where(eq(outbox.toAddress, 'gone@example.org'));

@@ -24,7 +24,14 @@ beforeAll(async () => {
   server = await startTestServer(db.url, { DATA_DIR: dataDir });
   groupId = await makeGroup(db.db);
   const { slotIds } = await makeEvent(db.db, groupId);
-  booking = (await a().post('/api/bookings', { slotId: slotIds[0], visitor: visitor(), items: [{ categoryId: await categoryId(db.db, 'toaster'), fault: 'One side stays cold.' }], consent: true })).json;
+  booking = (
+    await a().post('/api/bookings', {
+      slotId: slotIds[0],
+      visitor: visitor(),
+      items: [{ categoryId: await categoryId(db.db, 'toaster'), fault: 'One side stays cold.' }],
+      consent: true,
+    })
+  ).json;
 });
 afterAll(async () => {
   await server.stop();
@@ -37,13 +44,23 @@ async function upload(files: { name: string; type: string; data: Buffer }[], tok
   const csrf = await agent.token();
   const form = new FormData();
   for (const f of files) form.append('photos', new Blob([new Uint8Array(f.data)], { type: f.type }), f.name);
-  const res = await fetch(`${server.url}/api/bookings/${booking.reference}/items/${booking.itemIds[0]}/photos?token=${token}`, { method: 'POST', body: form, headers: { cookie: agent.cookieHeader(), 'x-csrf-token': csrf } });
+  const res = await fetch(
+    `${server.url}/api/bookings/${booking.reference}/items/${booking.itemIds[0]}/photos?token=${token}`,
+    { method: 'POST', body: form, headers: { cookie: agent.cookieHeader(), 'x-csrf-token': csrf } },
+  );
   return { status: res.status, json: await res.json().catch(() => null) };
 }
 
 // Real images made by libvips (through sharp), with camera metadata that must not survive.
-const jpeg = () => sharp({ create: { width: 2400, height: 1800, channels: 3, background: '#b8612f' } }).withExif({ IFD0: { Artist: 'Somebody', Copyright: 'Where it was taken' } }).jpeg().toBuffer();
-const png = () => sharp({ create: { width: 640, height: 480, channels: 4, background: '#23395d' } }).png().toBuffer();
+const jpeg = () =>
+  sharp({ create: { width: 2400, height: 1800, channels: 3, background: '#b8612f' } })
+    .withExif({ IFD0: { Artist: 'Somebody', Copyright: 'Where it was taken' } })
+    .jpeg()
+    .toBuffer();
+const png = () =>
+  sharp({ create: { width: 640, height: 480, channels: 4, background: '#23395d' } })
+    .png()
+    .toBuffer();
 
 describe('item photos', () => {
   it('accepts a real JPEG, stores it resized to 1600 px with its metadata gone', async () => {
@@ -58,7 +75,9 @@ describe('item photos', () => {
     expect(meta).toMatchObject({ format: 'jpeg', width: 1600, height: 1200 });
     expect(meta.exif).toBeUndefined();
     // The visitor sees it with the token; the group's organiser with a session; nobody else.
-    expect((await fetch(`${server.url}/api/photos/${row.id}?token=${booking.manageToken}`)).headers.get('content-type')).toBe('image/jpeg');
+    expect(
+      (await fetch(`${server.url}/api/photos/${row.id}?token=${booking.manageToken}`)).headers.get('content-type'),
+    ).toBe('image/jpeg');
     expect((await fetch(`${server.url}/api/photos/${row.id}`)).status).toBe(404);
     const o = await makeUser(db.db, { roles: [[groupId, 'organiser']] });
     const org = a();
@@ -73,7 +92,13 @@ describe('item photos', () => {
   });
 
   it('refuses a text file renamed to .jpg, judging by its bytes', async () => {
-    const res = await upload([{ name: 'holiday.jpg', type: 'image/jpeg', data: Buffer.from('This is not a picture at all, only words.\n'.repeat(20)) }]);
+    const res = await upload([
+      {
+        name: 'holiday.jpg',
+        type: 'image/jpeg',
+        data: Buffer.from('This is not a picture at all, only words.\n'.repeat(20)),
+      },
+    ]);
     expect(res.status).toBe(415);
     expect(res.json.error.code).toBe('photo-type');
     expect(res.json.error.message).toContain('holiday.jpg');

@@ -10,7 +10,12 @@ import { startTestServer } from '../support/server';
  * Later features add their rows here. `own` is the group the callers belong to; `other` is a second group.
  */
 type Caller = 'anonymous' | 'account' | 'fixer' | 'host' | 'organiser' | 'otherOrganiser' | 'admin';
-type Row = [method: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE', path: (g: Groups) => string, expected: Record<Caller, number>, body?: unknown | ((g: Groups) => unknown)];
+type Row = [
+  method: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE',
+  path: (g: Groups) => string,
+  expected: Record<Caller, number>,
+  body?: unknown | ((g: Groups) => unknown),
+];
 interface Groups {
   own: number;
   other: number;
@@ -20,11 +25,43 @@ interface Groups {
   ownVenue: number;
 }
 
-const everyone = (status: number): Record<Caller, number> => ({ anonymous: status, account: status, fixer: status, host: status, organiser: status, otherOrganiser: status, admin: status });
+const everyone = (status: number): Record<Caller, number> => ({
+  anonymous: status,
+  account: status,
+  fixer: status,
+  host: status,
+  organiser: status,
+  otherOrganiser: status,
+  admin: status,
+});
 const signedIn = (status: number) => ({ ...everyone(status), anonymous: 401 });
-const adminOnly = { anonymous: 401, account: 403, fixer: 403, host: 403, organiser: 403, otherOrganiser: 403, admin: 200 };
-const ownStaff = { anonymous: 401, account: 403, fixer: 403, host: 200, organiser: 200, otherOrganiser: 403, admin: 200 };
-const ownOrganiser = { anonymous: 401, account: 403, fixer: 403, host: 403, organiser: 200, otherOrganiser: 403, admin: 200 };
+const adminOnly = {
+  anonymous: 401,
+  account: 403,
+  fixer: 403,
+  host: 403,
+  organiser: 403,
+  otherOrganiser: 403,
+  admin: 200,
+};
+const ownStaff = {
+  anonymous: 401,
+  account: 403,
+  fixer: 403,
+  host: 200,
+  organiser: 200,
+  otherOrganiser: 403,
+  admin: 200,
+};
+const ownOrganiser = {
+  anonymous: 401,
+  account: 403,
+  fixer: 403,
+  host: 403,
+  organiser: 200,
+  otherOrganiser: 403,
+  admin: 200,
+};
 
 const table: Row[] = [
   ['GET', () => '/api/health', everyone(200)],
@@ -46,9 +83,18 @@ const table: Row[] = [
   ['POST', () => '/api/venues', { ...ownOrganiser, organiser: 400, admin: 400 }, (g: Groups) => ({ groupId: g.own })],
   ['POST', () => '/api/events', { ...ownOrganiser, organiser: 400, admin: 400 }, (g: Groups) => ({ groupId: g.own })],
   ['GET', (g) => `/api/events/${g.ownEvent}/bookings`, { ...ownOrganiser, host: 200 }],
-  ['GET', (g) => `/api/groups/${g.own}/events`, { anonymous: 401, account: 403, fixer: 200, host: 200, organiser: 200, otherOrganiser: 200, admin: 200 }],
+  [
+    'GET',
+    (g) => `/api/groups/${g.own}/events`,
+    { anonymous: 401, account: 403, fixer: 200, host: 200, organiser: 200, otherOrganiser: 200, admin: 200 },
+  ],
   ['PATCH', (g) => `/api/events/${g.ownEvent}`, ownOrganiser, { description: 'Bring cake.' }],
-  ['PATCH', (g) => `/api/events/${g.otherEvent}`, { ...ownOrganiser, organiser: 403, otherOrganiser: 200 }, { description: 'Bring cake.' }],
+  [
+    'PATCH',
+    (g) => `/api/events/${g.otherEvent}`,
+    { ...ownOrganiser, organiser: 403, otherOrganiser: 200 },
+    { description: 'Bring cake.' },
+  ],
   ['PUT', (g) => `/api/groups/${g.own}/settings`, ownOrganiser, { houseRules: 'Be kind.', excludedCategoryIds: [] }],
   ['PATCH', () => '/api/categories/1', adminOnly, { repairMinutes: 30 }],
   ['GET', (g) => `/api/groups/${g.own}/skills`, ownOrganiser],
@@ -80,9 +126,18 @@ const table: Row[] = [
   ['GET', (g) => `/api/events/${g.ownEvent}/report`, ownOrganiser],
   ['GET', (g) => `/api/groups/${g.own}/follow-ups`, ownOrganiser],
   ['GET', (g) => `/api/groups/${g.own}/report`, ownOrganiser],
-  ['GET', () => '/api/knowledge', { anonymous: 401, account: 403, fixer: 200, host: 200, organiser: 200, otherOrganiser: 200, admin: 200 }],
+  [
+    'GET',
+    () => '/api/knowledge',
+    { anonymous: 401, account: 403, fixer: 200, host: 200, organiser: 200, otherOrganiser: 200, admin: 200 },
+  ],
   ['GET', (g) => `/api/groups/${g.own}/salvage`, { ...ownStaff, fixer: 200, otherOrganiser: 200 }],
-  ['POST', (g) => `/api/groups/${g.own}/salvage`, { ...ownStaff, fixer: 400, host: 403, organiser: 400, otherOrganiser: 400, admin: 400 }, {}],
+  [
+    'POST',
+    (g) => `/api/groups/${g.own}/salvage`,
+    { ...ownStaff, fixer: 400, host: 403, organiser: 400, otherOrganiser: 400, admin: 400 },
+    {},
+  ],
   ['PUT', (g) => `/api/groups/${g.own}/knowledge-sharing`, ownOrganiser, { share: false }],
   ['GET', (g) => `/api/public/impact?groupId=${g.own}`, everyone(200)],
   ['GET', () => '/api/public/impact', everyone(200)],
@@ -90,7 +145,12 @@ const table: Row[] = [
   ['GET', () => '/api/admin/impact-settings', adminOnly],
   ['PUT', () => '/api/admin/impact-settings', { ...adminOnly, admin: 400 }, { displacement: 2 }],
   ['GET', () => '/api/rebook/1.nope', everyone(404)],
-  ['POST', (g) => `/api/groups/${g.own}/invites`, { ...ownOrganiser, organiser: 202, admin: 202 }, { email: 'invited@example.org', role: 'fixer' }],
+  [
+    'POST',
+    (g) => `/api/groups/${g.own}/invites`,
+    { ...ownOrganiser, organiser: 202, admin: 202 },
+    { email: 'invited@example.org', role: 'fixer' },
+  ],
 ];
 
 let db: TestDatabase;
@@ -109,7 +169,12 @@ beforeAll(async () => {
     host: await makeUser(db.db, { roles: [[own, 'host']] }),
     organiser: await makeUser(db.db, { roles: [[own, 'organiser']] }),
     // Organises another group and fixes in ours: a role elsewhere grants nothing here.
-    otherOrganiser: await makeUser(db.db, { roles: [[other, 'organiser'], [own, 'fixer']] }),
+    otherOrganiser: await makeUser(db.db, {
+      roles: [
+        [other, 'organiser'],
+        [own, 'fixer'],
+      ],
+    }),
     admin: await makeUser(db.db, { admin: true }),
   };
   agents.anonymous = new Agent(server.url);
@@ -119,9 +184,19 @@ beforeAll(async () => {
   }
   const volunteer = await makeUser(db.db);
   const { memberships } = await import('../../server/src/db/schema/index');
-  const [{ id }] = await db.db.insert(memberships).values({ userId: volunteer.id, groupId: own, role: 'fixer', status: 'pending' }).$returningId();
+  const [{ id }] = await db.db
+    .insert(memberships)
+    .values({ userId: volunteer.id, groupId: own, role: 'fixer', status: 'pending' })
+    .$returningId();
   const { makeEvent } = await import('../support/factories');
-  groups = { own, other, pendingMembership: id, ownEvent: (await makeEvent(db.db, own, { status: 'draft' })).eventId, otherEvent: (await makeEvent(db.db, other, { status: 'draft' })).eventId, ownVenue: 0 };
+  groups = {
+    own,
+    other,
+    pendingMembership: id,
+    ownEvent: (await makeEvent(db.db, own, { status: 'draft' })).eventId,
+    otherEvent: (await makeEvent(db.db, other, { status: 'draft' })).eventId,
+    ownVenue: 0,
+  };
 });
 afterAll(async () => {
   await server.stop();

@@ -17,7 +17,12 @@ beforeAll(async () => {
   db = await createTestDatabase();
   await seedDemo(db.db, { linkSecret: TEST_SECRET });
   server = await startTestServer(db.url);
-  const [first] = await db.db.select().from(events).where(eq(events.title, 'Kestlebridge repair session')).orderBy(events.startsAt).limit(1);
+  const [first] = await db.db
+    .select()
+    .from(events)
+    .where(eq(events.title, 'Kestlebridge repair session'))
+    .orderBy(events.startsAt)
+    .limit(1);
   eventId = first.id;
   for (const who of ['organiser', 'fixer', 'host', 'hester.mayle']) {
     as[who] = new Agent(server.url);
@@ -34,7 +39,13 @@ describe('the triage board', () => {
     const run = await as.organiser.post(`/api/events/${eventId}/triage`, {});
     expect(run.status).toBe(201);
     const board = (await as.organiser.get(`/api/events/${eventId}/board`)).json;
-    expect(board.benches.map((b: { name: string }) => b.name)).toEqual(['Mains bench', 'Electronics bench', 'Sewing table', 'Bike corner', 'Open table']);
+    expect(board.benches.map((b: { name: string }) => b.name)).toEqual([
+      'Mains bench',
+      'Electronics bench',
+      'Sewing table',
+      'Bike corner',
+      'Open table',
+    ]);
     const placed = board.items.filter((i: { placement: unknown }) => i.placement);
     expect(placed.length).toBe(run.json.assigned);
     // The whole-session run plans the day slot by slot: every item but the toy (no toys fixer) finds a fixer,
@@ -45,7 +56,11 @@ describe('the triage board', () => {
     expect(toy.reason.detail).toContain('toys');
     for (const i of placed) expect(i.warnings).toEqual([]);
     // Every item that waits gets an estimated start or none, from the day plan.
-    expect(board.items.every((i: { estimatedStart: string | null }) => i.estimatedStart === null || typeof i.estimatedStart === 'string')).toBe(true);
+    expect(
+      board.items.every(
+        (i: { estimatedStart: string | null }) => i.estimatedStart === null || typeof i.estimatedStart === 'string',
+      ),
+    ).toBe(true);
     const stored = (await as.organiser.get(`/api/events/${eventId}/triage-runs/${run.json.runId}`)).json;
     expect(stored.input.items.length).toBe(board.items.length);
     expect(stored.result.assignments.length).toBe(9);
@@ -54,21 +69,35 @@ describe('the triage board', () => {
 
   it('keeps a locked hand-made move when the engine runs again', async () => {
     const board = (await as.organiser.get(`/api/events/${eventId}/board`)).json;
-    const item = board.items.find((i: { categoryName: string }) => i.categoryName === 'Radio, hi-fi or electronic instrument');
+    const item = board.items.find(
+      (i: { categoryName: string }) => i.categoryName === 'Radio, hi-fi or electronic instrument',
+    );
     const wren = board.fixers.find((f: { name: string }) => f.name === 'Wren Ashcombe');
     const sewing = board.benches.find((b: { name: string }) => b.name === 'Sewing table');
-    const moved = await as.organiser.send('PUT', `/api/events/${eventId}/items/${item.id}/placement`, { userId: wren.userId, benchId: sewing.id, locked: true });
+    const moved = await as.organiser.send('PUT', `/api/events/${eventId}/items/${item.id}/placement`, {
+      userId: wren.userId,
+      benchId: sewing.id,
+      locked: true,
+    });
     expect(moved.status).toBe(200);
     // Moving an electronics item to the textiles fixer at the sewing table breaks rules: the organiser is told which.
-    expect(moved.json.warnings.map((w: { code: string }) => w.code)).toEqual(expect.arrayContaining(['missing-skill', 'missing-equipment']));
+    expect(moved.json.warnings.map((w: { code: string }) => w.code)).toEqual(
+      expect.arrayContaining(['missing-skill', 'missing-equipment']),
+    );
     const rerun = await as.organiser.post(`/api/events/${eventId}/triage`, {});
     expect(rerun.json.lockedKept).toBe(1);
-    const after = (await as.organiser.get(`/api/events/${eventId}/board`)).json.items.find((i: { id: number }) => i.id === item.id);
+    const after = (await as.organiser.get(`/api/events/${eventId}/board`)).json.items.find(
+      (i: { id: number }) => i.id === item.id,
+    );
     expect(after.placement).toMatchObject({ userId: wren.userId, benchId: sewing.id, locked: true, source: 'hand' });
     expect(after.warnings.length).toBeGreaterThan(0);
     // The engine plans around the locked repair: nothing else of Wren's overlaps it.
-    const wrenItems = (await as.organiser.get(`/api/events/${eventId}/board`)).json.items.filter((i: { id: number; placement: { userId: number } | null }) => i.placement?.userId === wren.userId && i.id !== item.id);
-    for (const other of wrenItems) expect(other.warnings.map((w: { code: string }) => w.code)).not.toContain('over-capacity');
+    const wrenItems = (await as.organiser.get(`/api/events/${eventId}/board`)).json.items.filter(
+      (i: { id: number; placement: { userId: number } | null }) =>
+        i.placement?.userId === wren.userId && i.id !== item.id,
+    );
+    for (const other of wrenItems)
+      expect(other.warnings.map((w: { code: string }) => w.code)).not.toContain('over-capacity');
   });
 
   it('shows a fixer their own queue only', async () => {
@@ -76,9 +105,13 @@ describe('the triage board', () => {
     expect(queue.status).toBe(200);
     const board = (await as.organiser.get(`/api/events/${eventId}/board`)).json;
     const tobin = board.fixers.find((f: { name: string }) => f.name === 'Tobin Halloway');
-    const his = board.items.filter((i: { placement: { userId: number } | null }) => i.placement?.userId === tobin.userId).map((i: { id: number }) => i.id);
+    const his = board.items
+      .filter((i: { placement: { userId: number } | null }) => i.placement?.userId === tobin.userId)
+      .map((i: { id: number }) => i.id);
     // The demo also has a session running today; this board is the next Saturday's.
-    expect(queue.json.filter((q: { eventId: number }) => q.eventId === eventId).map((q: { itemId: number }) => q.itemId)).toEqual(his);
+    expect(
+      queue.json.filter((q: { eventId: number }) => q.eventId === eventId).map((q: { itemId: number }) => q.itemId),
+    ).toEqual(his);
     expect(queue.json.every((q: { status: string }) => q.status !== 'done')).toBe(true);
     expect(queue.json[0]).toMatchObject({ fault: expect.any(String), benchName: expect.any(String) });
   });
@@ -87,7 +120,9 @@ describe('the triage board', () => {
     for (const who of ['fixer', 'host', 'hester.mayle']) {
       expect((await as[who].post(`/api/events/${eventId}/triage`, {})).status).toBe(403);
       expect((await as[who].get(`/api/events/${eventId}/board`)).status).toBe(403);
-      expect((await as[who].send('PUT', `/api/events/${eventId}/items/1/placement`, { userId: 1, benchId: 1 })).status).toBe(403);
+      expect(
+        (await as[who].send('PUT', `/api/events/${eventId}/items/1/placement`, { userId: 1, benchId: 1 })).status,
+      ).toBe(403);
     }
     expect((await new Agent(server.url).get('/api/me/queue')).status).toBe(401);
   });
@@ -111,15 +146,25 @@ describe('the rota', () => {
     // Maren (textiles 2) is a member as organiser, not a fixer, and Wren has said she comes: nobody else to ask.
     expect(res.json.sent).toBe(0);
     const asked = await as.organiser.post(`/api/events/${eventId}/rota/ask`, { skills: ['mechanical'] });
-    const mails = await db.db.select().from(outbox).where(eq(outbox.subject, 'Can you help at Kestlebridge repair session?'));
+    const mails = await db.db
+      .select()
+      .from(outbox)
+      .where(eq(outbox.subject, 'Can you help at Kestlebridge repair session?'));
     expect(mails.length).toBe(asked.json.sent);
   });
 
   it('lets a volunteer say when they come, within the opening hours', async () => {
     const [e] = await db.db.select().from(events).where(eq(events.id, eventId));
-    const ok = await as.host.send('PUT', `/api/events/${eventId}/shifts/me`, { coming: true, startsAt: e.startsAt.toISOString(), endsAt: new Date(e.startsAt.getTime() + 3600_000).toISOString() });
+    const ok = await as.host.send('PUT', `/api/events/${eventId}/shifts/me`, {
+      coming: true,
+      startsAt: e.startsAt.toISOString(),
+      endsAt: new Date(e.startsAt.getTime() + 3600_000).toISOString(),
+    });
     expect(ok.status).toBe(200);
-    const early = await as.host.send('PUT', `/api/events/${eventId}/shifts/me`, { coming: true, startsAt: new Date(e.startsAt.getTime() - 3600_000).toISOString() });
+    const early = await as.host.send('PUT', `/api/events/${eventId}/shifts/me`, {
+      coming: true,
+      startsAt: new Date(e.startsAt.getTime() - 3600_000).toISOString(),
+    });
     expect(early.status).toBe(400);
   });
 });

@@ -18,7 +18,12 @@ beforeAll(async () => {
   server = app.server;
   browser = await launchBrowser();
   photo = path.join(app.dataDir, 'kettle-label.jpg');
-  writeFileSync(photo, await sharp({ create: { width: 1200, height: 900, channels: 3, background: '#c9b79c' } }).jpeg().toBuffer());
+  writeFileSync(
+    photo,
+    await sharp({ create: { width: 1200, height: 900, channels: 3, background: '#c9b79c' } })
+      .jpeg()
+      .toBuffer(),
+  );
 });
 afterAll(async () => {
   await browser?.close();
@@ -27,7 +32,10 @@ afterAll(async () => {
 
 async function firstEvent(page: Page) {
   await page.goto(`${server.url}/events`);
-  await page.getByRole('link', { name: /Kestlebridge repair session/ }).first().click();
+  await page
+    .getByRole('link', { name: /Kestlebridge repair session/ })
+    .first()
+    .click();
   await page.getByRole('heading', { level: 1, name: 'Kestlebridge repair session' }).waitFor();
 }
 
@@ -119,7 +127,10 @@ describe('finding a session and booking a slot', () => {
     await page.getByRole('button', { name: 'Sign in', exact: true }).click();
     await page.waitForURL(/\/groups\/\d+\/events$/);
     await page.screenshot({ path: shot('organiser-sessions'), fullPage: true });
-    await page.getByRole('link', { name: /Kestlebridge repair session/ }).first().click();
+    await page
+      .getByRole('link', { name: /Kestlebridge repair session/ })
+      .first()
+      .click();
     await page.getByRole('heading', { name: 'What is coming' }).waitFor();
     await page.getByText('Orla Whitcombe').waitFor();
     await page.screenshot({ path: shot('organiser-event'), fullPage: true });

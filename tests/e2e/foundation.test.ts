@@ -31,7 +31,10 @@ async function signIn(page: Page, email: string) {
 
 describe('the foundation in a browser', () => {
   it('shows the home page on desktop and phone, in Nunito shipped with the app', async () => {
-    for (const [name, viewport] of [['home-desktop', DESKTOP], ['home-phone', PHONE]] as const) {
+    for (const [name, viewport] of [
+      ['home-desktop', DESKTOP],
+      ['home-phone', PHONE],
+    ] as const) {
       const page = await browser.newPage({ viewport });
       const remote: string[] = [];
       page.on('request', (r) => {
@@ -49,7 +52,12 @@ describe('the foundation in a browser', () => {
   });
 
   const landings = [
-    { email: 'organiser@example.org', heading: 'Kestlebridge Menders', path: /\/groups\/\d+\/events$/, viewport: DESKTOP },
+    {
+      email: 'organiser@example.org',
+      heading: 'Kestlebridge Menders',
+      path: /\/groups\/\d+\/events$/,
+      viewport: DESKTOP,
+    },
     { email: 'fixer@example.org', heading: 'My bench', path: /\/bench$/, viewport: PHONE },
     { email: 'host@example.org', heading: 'Reception desk', path: /\/desk$/, viewport: PHONE },
     { email: 'admin@example.org', heading: 'Network admin', path: /\/admin$/, viewport: DESKTOP },

@@ -39,7 +39,10 @@ describe('volunteers, rota and the triage board', () => {
     await page.screenshot({ path: shot('skills-matrix'), fullPage: true });
 
     await page.getByRole('navigation', { name: 'Group' }).getByRole('link', { name: 'Sessions' }).click();
-    await page.getByRole('link', { name: /Kestlebridge repair session/ }).first().click();
+    await page
+      .getByRole('link', { name: /Kestlebridge repair session/ })
+      .first()
+      .click();
     await page.getByRole('link', { name: 'Rota' }).click();
     await page.getByRole('heading', { name: 'Gaps' }).waitFor();
     await page.getByText(/No toys fixer/).waitFor();
@@ -51,7 +54,10 @@ describe('volunteers, rota and the triage board', () => {
     const page = await browser.newPage({ viewport: { width: 1440, height: 900 } });
     await signIn(page, 'organiser');
     await page.waitForURL(/\/groups\/\d+\/events$/);
-    await page.getByRole('link', { name: /Kestlebridge repair session/ }).first().click();
+    await page
+      .getByRole('link', { name: /Kestlebridge repair session/ })
+      .first()
+      .click();
     await page.getByRole('link', { name: 'Triage board' }).click();
     await page.getByRole('button', { name: 'Run triage' }).click();
     await page.getByText(/Placed 9 items/).waitFor();
@@ -83,7 +89,10 @@ describe('volunteers, rota and the triage board', () => {
     await page.getByRole('heading', { name: 'My queue' }).waitFor();
     await page.locator('ol li').first().waitFor();
     expect(await page.locator('ol li').count()).toBeGreaterThan(0);
-    await page.getByText(/Mains item: unplug and prove dead/).first().waitFor();
+    await page
+      .getByText(/Mains item: unplug and prove dead/)
+      .first()
+      .waitFor();
     await page.screenshot({ path: shot('fixer-queue-phone'), fullPage: true });
     await page.close();
   });

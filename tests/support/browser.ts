@@ -15,7 +15,17 @@ export const DESKTOP = { width: 1280, height: 860 };
 export function launchBrowser(extraArgs: string[] = []): Promise<Browser> {
   return chromium.launch({
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
-    args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run', '--disable-quic', ...extraArgs],
+    args: [
+      '--headless',
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+      '--no-first-run',
+      '--disable-quic',
+      ...extraArgs,
+    ],
   });
 }
 
@@ -31,17 +41,31 @@ export function qrVideo(file: string, text: string, width = 640, height = 480) {
   const x0 = Math.floor((width - n * scale) / 2);
   const y0 = Math.floor((height - n * scale) / 2);
   const y = Buffer.alloc(width * height, 235);
-  for (let r = 0; r < n; r++) for (let c = 0; c < n; c++) {
-    if (!qr.modules.get(r, c)) continue;
-    for (let dy = 0; dy < scale; dy++) y.fill(16, (y0 + r * scale + dy) * width + x0 + c * scale, (y0 + r * scale + dy) * width + x0 + (c + 1) * scale);
-  }
+  for (let r = 0; r < n; r++)
+    for (let c = 0; c < n; c++) {
+      if (!qr.modules.get(r, c)) continue;
+      for (let dy = 0; dy < scale; dy++)
+        y.fill(
+          16,
+          (y0 + r * scale + dy) * width + x0 + c * scale,
+          (y0 + r * scale + dy) * width + x0 + (c + 1) * scale,
+        );
+    }
   const chroma = Buffer.alloc((width / 2) * (height / 2) * 2, 128);
   const frame = Buffer.concat([Buffer.from('FRAME\n'), y, chroma]);
-  writeFileSync(file, Buffer.concat([Buffer.from(`YUV4MPEG2 W${width} H${height} F10:1 Ip A1:1 C420jpeg\n`), ...Array(10).fill(frame)]));
+  writeFileSync(
+    file,
+    Buffer.concat([Buffer.from(`YUV4MPEG2 W${width} H${height} F10:1 Ip A1:1 C420jpeg\n`), ...Array(10).fill(frame)]),
+  );
 }
 
 /** A fresh browser context signed in as a demo account (`organiser`, `fixer`, `host`, `admin`). */
-export async function signedIn(browser: Browser, baseUrl: string, who: string, viewport: { width: number; height: number }) {
+export async function signedIn(
+  browser: Browser,
+  baseUrl: string,
+  who: string,
+  viewport: { width: number; height: number },
+) {
   const context = await browser.newContext({ viewport });
   const page = await context.newPage();
   await page.goto(`${baseUrl}/sign-in`);

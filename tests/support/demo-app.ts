@@ -24,9 +24,16 @@ export async function startDemoApp(): Promise<DemoApp> {
   const mailbox = new LocalMailbox(db.db, smtpPort);
   await mailbox.start();
   const dataDir = mkdtempSync(path.join(os.tmpdir(), 'mendery-e2e-'));
-  const server = await startTestServer(db.url, { SMTP_PORT: String(smtpPort), OUTBOX_POLL_MS: '200', DATA_DIR: dataDir }, { sender: 'smtp' });
+  const server = await startTestServer(
+    db.url,
+    { SMTP_PORT: String(smtpPort), OUTBOX_POLL_MS: '200', DATA_DIR: dataDir },
+    { sender: 'smtp' },
+  );
   return {
-    db, server, mailbox, dataDir,
+    db,
+    server,
+    mailbox,
+    dataDir,
     async stop() {
       await server.stop();
       await mailbox.stop();

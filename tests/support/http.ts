@@ -3,13 +3,20 @@ export class Agent {
   cookies = new Map<string, string>();
   csrf: string | null = null;
   lastSetCookie: string[] = [];
-  constructor(public base: string, private headers: Record<string, string> = {}) {}
+  constructor(
+    public base: string,
+    private headers: Record<string, string> = {},
+  ) {}
 
   cookieHeader() {
     return [...this.cookies].map(([k, v]) => `${k}=${v}`).join('; ');
   }
 
-  async raw(method: string, path: string, opts: { body?: unknown; headers?: Record<string, string>; rawBody?: string } = {}) {
+  async raw(
+    method: string,
+    path: string,
+    opts: { body?: unknown; headers?: Record<string, string>; rawBody?: string } = {},
+  ) {
     const headers: Record<string, string> = { accept: 'application/json', ...this.headers, ...opts.headers };
     if (this.cookies.size) headers.cookie = this.cookieHeader();
     let body: string | undefined = opts.rawBody;

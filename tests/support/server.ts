@@ -5,7 +5,11 @@ import type { MailSender } from '../../server/src/mail/transport';
 export const TEST_SECRET = 'test-session-secret-that-is-long-enough-0123456789';
 
 /** Starts the real app in-process on a free port against a test database. */
-export function startTestServer(dbUrl: string, overrides: Partial<Record<keyof Env, string>> = {}, opts: { sender?: MailSender | 'smtp' } = {}): Promise<RunningServer> {
+export function startTestServer(
+  dbUrl: string,
+  overrides: Partial<Record<keyof Env, string>> = {},
+  opts: { sender?: MailSender | 'smtp' } = {},
+): Promise<RunningServer> {
   const env = loadEnv({
     NODE_ENV: 'test',
     DATABASE_URL: dbUrl,

@@ -20,11 +20,30 @@ export function referenceOptimum(input: TriageInput) {
     for (const v of input.volunteers)
       for (const b of input.benches) {
         const level = v.skills[i.skill] ?? 0;
-        if (level < i.minLevel || !i.equipment.every((e) => b.equipment.includes(e)) || (v.benchId !== undefined && v.benchId !== b.id)) continue;
+        if (
+          level < i.minLevel ||
+          !i.equipment.every((e) => b.equipment.includes(e)) ||
+          (v.benchId !== undefined && v.benchId !== b.id)
+        )
+          continue;
         const name = `x:${i.id}:${v.id}:${b.id}`;
-        variables[name] = { count: 1, value: K1 - priorities.indexOf(i.priority) * K2 - (level - i.minLevel), [`i:${i.id}`]: 1, [`v:${v.id}`]: 1, [`b:${b.id}`]: 1 };
+        variables[name] = {
+          count: 1,
+          value: K1 - priorities.indexOf(i.priority) * K2 - (level - i.minLevel),
+          [`i:${i.id}`]: 1,
+          [`v:${v.id}`]: 1,
+          [`b:${b.id}`]: 1,
+        };
         ints[name] = 1;
       }
-  const solve = (optimize: 'count' | 'value') => Math.round(solver.Solve({ optimize, opType: 'max', constraints, variables, ints }).result ?? 0) + 0;
-  return { count: solve('count'), value: () => solve('value'), K1, K2, priorities, variables: Object.keys(variables).length };
+  const solve = (optimize: 'count' | 'value') =>
+    Math.round(solver.Solve({ optimize, opType: 'max', constraints, variables, ints }).result ?? 0) + 0;
+  return {
+    count: solve('count'),
+    value: () => solve('value'),
+    K1,
+    K2,
+    priorities,
+    variables: Object.keys(variables).length,
+  };
 }

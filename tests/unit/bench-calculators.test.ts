@@ -1,11 +1,47 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { decodeBands, decodePrintedCode, formatOhms, toleranceFromLetter, TOLERANCE_BY_COLOUR, TOLERANCE_BY_LETTER, DIGIT_COLOURS, type BandColour } from '../../shared/bench/resistors';
-import { decade, E12, E24, E6, E_SERIES, isStandard, nearestStandard, type ESeriesName } from '../../shared/bench/e-series';
+import {
+  decodeBands,
+  decodePrintedCode,
+  formatOhms,
+  toleranceFromLetter,
+  TOLERANCE_BY_COLOUR,
+  TOLERANCE_BY_LETTER,
+  DIGIT_COLOURS,
+  type BandColour,
+} from '../../shared/bench/resistors';
+import {
+  decade,
+  E12,
+  E24,
+  E6,
+  E_SERIES,
+  isStandard,
+  nearestStandard,
+  type ESeriesName,
+} from '../../shared/bench/e-series';
 import { rectifiedPeak } from '../../shared/bench/mains';
-import { DEFAULT_TOUCH_THRESHOLD, dischargeAdvice, ELV_AC, ELV_DC, maxResistanceFor, PLUG_PINS_34V_1S, PLUG_PINS_60V_1S, RESIDUAL_60V_5S, storedEnergyJ, timeConstantS, timeToVoltage, voltageAfter } from '../../shared/bench/capacitors';
+import {
+  DEFAULT_TOUCH_THRESHOLD,
+  dischargeAdvice,
+  ELV_AC,
+  ELV_DC,
+  maxResistanceFor,
+  PLUG_PINS_34V_1S,
+  PLUG_PINS_60V_1S,
+  RESIDUAL_60V_5S,
+  storedEnergyJ,
+  timeConstantS,
+  timeToVoltage,
+  voltageAfter,
+} from '../../shared/bench/capacitors';
 import { judgeResistance, netResistance, parseReading } from '../../shared/bench/measure';
-import { checkSubstitution, interpretDiodeTest, type DiodeReadings, type TransistorSpec } from '../../shared/bench/transistors';
+import {
+  checkSubstitution,
+  interpretDiodeTest,
+  type DiodeReadings,
+  type TransistorSpec,
+} from '../../shared/bench/transistors';
 import { protectiveConductorLimitOhm } from '../../shared/safety/limits';
 
 // Sources are named beside each check, as in the project's reference notes §3–4. IEC 60062 and IEC 60063 values
@@ -26,14 +62,27 @@ describe('resistor colour bands (IEC 60062, from memory)', () => {
   });
 
   it('gives the tolerance colours brown 1, red 2, green 0.5, blue 0.25, violet 0.1, gold 5, silver 10, none 20 % (IEC 60062, from memory)', () => {
-    expect(TOLERANCE_BY_COLOUR).toEqual({ brown: 1, red: 2, green: 0.5, blue: 0.25, violet: 0.1, gold: 5, silver: 10, none: 20 });
+    expect(TOLERANCE_BY_COLOUR).toEqual({
+      brown: 1,
+      red: 2,
+      green: 0.5,
+      blue: 0.25,
+      violet: 0.1,
+      gold: 5,
+      silver: 10,
+      none: 20,
+    });
     expect(decodeBands(['brown', 'black', 'red']).tolerancePct).toBe(20);
     expect(decodeBands(['brown', 'black', 'red', 'none']).tolerancePct).toBe(20);
   });
 
   it('takes gold as ×0.1 and silver as ×0.01 in the multiplier band (IEC 60062, from memory)', () => {
     expect(decodeBands(['yellow', 'violet', 'gold', 'gold']).ohms).toBe(4.7);
-    expect(decodeBands(['yellow', 'violet', 'silver', 'silver'])).toMatchObject({ ohms: 0.47, tolerancePct: 10, text: '0.47 Ω ±10 %' });
+    expect(decodeBands(['yellow', 'violet', 'silver', 'silver'])).toMatchObject({
+      ohms: 0.47,
+      tolerancePct: 10,
+      text: '0.47 Ω ±10 %',
+    });
     expect(decodeBands(['brown', 'black', 'black', 'silver', 'brown']).ohms).toBe(1);
   });
 
@@ -97,14 +146,28 @@ describe('printed resistor codes (IEC 60062, from memory)', () => {
 
   it('agrees with the colour bands for every two digits and power of ten (derived)', () => {
     fc.assert(
-      fc.property(fc.integer({ min: 1, max: 9 }), fc.integer({ min: 0, max: 9 }), fc.integer({ min: 0, max: 9 }), (a, b, m) => {
-        expect(decodePrintedCode(`${a}${b}${m}`).ohms).toBe(decodeBands([DIGIT_COLOURS[a], DIGIT_COLOURS[b], DIGIT_COLOURS[m], 'gold']).ohms);
-      }),
+      fc.property(
+        fc.integer({ min: 1, max: 9 }),
+        fc.integer({ min: 0, max: 9 }),
+        fc.integer({ min: 0, max: 9 }),
+        (a, b, m) => {
+          expect(decodePrintedCode(`${a}${b}${m}`).ohms).toBe(
+            decodeBands([DIGIT_COLOURS[a], DIGIT_COLOURS[b], DIGIT_COLOURS[m], 'gold']).ohms,
+          );
+        },
+      ),
     );
   });
 
   it('formats ohms with the SI prefix', () => {
-    expect([formatOhms(4700), formatOhms(0.47), formatOhms(1e6), formatOhms(10), formatOhms(0), formatOhms(6293.7)]).toEqual(['4.7 kΩ', '0.47 Ω', '1 MΩ', '10 Ω', '0 Ω', '6.294 kΩ']);
+    expect([
+      formatOhms(4700),
+      formatOhms(0.47),
+      formatOhms(1e6),
+      formatOhms(10),
+      formatOhms(0),
+      formatOhms(6293.7),
+    ]).toEqual(['4.7 kΩ', '0.47 Ω', '1 MΩ', '10 Ω', '0 Ω', '6.294 kΩ']);
   });
 });
 
@@ -112,7 +175,9 @@ describe('E-series preferred values (IEC 60063, from memory)', () => {
   it('holds E6, E12 and E24 as in the reference', () => {
     expect([...E6]).toEqual([10, 15, 22, 33, 47, 68]);
     expect([...E12]).toEqual([10, 12, 15, 18, 22, 27, 33, 39, 47, 56, 68, 82]);
-    expect([...E24].filter((v) => !(E12 as readonly number[]).includes(v))).toEqual([11, 13, 16, 20, 24, 30, 36, 43, 51, 62, 75, 91]);
+    expect([...E24].filter((v) => !(E12 as readonly number[]).includes(v))).toEqual([
+      11, 13, 16, 20, 24, 30, 36, 43, 51, 62, 75, 91,
+    ]);
     expect(E6.every((v) => (E12 as readonly number[]).includes(v))).toBe(true);
   });
 
@@ -279,13 +344,31 @@ describe('measuring a low resistance (common practice, no published source)', ()
 
   it('calls that reading in the right range: at the edge of a ±10 % wirewound, or for a ±5 % part within what a meter with a 0.1 Ω last digit can tell', () => {
     // +10 % is exactly the edge of ±10 %: the edge counts as within.
-    expect(judgeResistance({ reading: 1.2, leadsOhm: 0.1, nominalOhm: 1, tolerancePct: 10 })).toMatchObject({ verdict: 'within', inRightRange: true });
+    expect(judgeResistance({ reading: 1.2, leadsOhm: 0.1, nominalOhm: 1, tolerancePct: 10 })).toMatchObject({
+      verdict: 'within',
+      inRightRange: true,
+    });
     // A ±5 % part: 1.1 Ω is outside 0.95–1.05 Ω on paper, but two readings at 0.1 Ω resolution cannot prove it; "in the right range" means no more than that.
-    const fivePct = judgeResistance({ reading: 1.2, leadsOhm: 0.1, nominalOhm: 1, tolerancePct: 5, uncertaintyOhm: 0.1 });
-    expect(fivePct).toMatchObject({ verdict: 'within-uncertainty', inRightRange: true, netOhm: 1.1, minOhm: 0.95, maxOhm: 1.05 });
+    const fivePct = judgeResistance({
+      reading: 1.2,
+      leadsOhm: 0.1,
+      nominalOhm: 1,
+      tolerancePct: 5,
+      uncertaintyOhm: 0.1,
+    });
+    expect(fivePct).toMatchObject({
+      verdict: 'within-uncertainty',
+      inRightRange: true,
+      netOhm: 1.1,
+      minOhm: 0.95,
+      maxOhm: 1.05,
+    });
     expect(fivePct.message).toContain('cannot prove the tolerance');
     // Without allowing for the meter, the same ±5 % reading is outside.
-    expect(judgeResistance({ reading: 1.2, leadsOhm: 0.1, nominalOhm: 1, tolerancePct: 5 })).toMatchObject({ verdict: 'outside', inRightRange: false });
+    expect(judgeResistance({ reading: 1.2, leadsOhm: 0.1, nominalOhm: 1, tolerancePct: 5 })).toMatchObject({
+      verdict: 'outside',
+      inRightRange: false,
+    });
   });
 
   it('reads OL as an open circuit', () => {
@@ -294,17 +377,26 @@ describe('measuring a low resistance (common practice, no published source)', ()
     expect(parseReading('1,2')).toBe(1.2);
     expect(parseReading('abc')).toBeNull();
     expect(netResistance('OL', 0.1)).toBe('open');
-    expect(judgeResistance({ reading: 'OL', leadsOhm: 0.1, nominalOhm: 4700, tolerancePct: 5 })).toMatchObject({ verdict: 'open', netOhm: null, inRightRange: false });
+    expect(judgeResistance({ reading: 'OL', leadsOhm: 0.1, nominalOhm: 4700, tolerancePct: 5 })).toMatchObject({
+      verdict: 'open',
+      netOhm: null,
+      inRightRange: false,
+    });
   });
 
   it('judges a 4.7 kΩ ±5 % part reading 4.52 kΩ within (−3.83 %) and 4.3 kΩ outside (IEC 60062 tolerance, from memory)', () => {
-    expect(judgeResistance({ reading: 4520, nominalOhm: 4700, tolerancePct: 5 })).toMatchObject({ verdict: 'within', deviationPct: -3.83 });
+    expect(judgeResistance({ reading: 4520, nominalOhm: 4700, tolerancePct: 5 })).toMatchObject({
+      verdict: 'within',
+      deviationPct: -3.83,
+    });
     expect(judgeResistance({ reading: 4300, nominalOhm: 4700, tolerancePct: 5 }).verdict).toBe('outside');
   });
 
   it('takes a reading at or below the leads as a short, and refuses a 0 Ω nominal', () => {
     expect(netResistance(0.08, 0.1)).toBe(0);
-    expect(judgeResistance({ reading: 0.1, leadsOhm: 0.1, nominalOhm: 10, tolerancePct: 5 }).message).toContain('a short');
+    expect(judgeResistance({ reading: 0.1, leadsOhm: 0.1, nominalOhm: 10, tolerancePct: 5 }).message).toContain(
+      'a short',
+    );
     expect(() => judgeResistance({ reading: 0.1, nominalOhm: 0, tolerancePct: 5 })).toThrow(/0 Ω link/);
   });
 });
@@ -313,14 +405,30 @@ describe('transistor substitution (common practice, no published source)', () =>
   const original: TransistorSpec = { type: 'NPN', vMaxV: 400, iMaxA: 4, ptotW: 75, package: 'TO-220', pinout: 'BCE' };
 
   it('accepts an NPN 450 V / 5 A / 80 W in TO-220 with the same pin-out for an NPN 400 V / 4 A / 75 W / TO-220', () => {
-    expect(checkSubstitution(original, { type: 'NPN', vMaxV: 450, iMaxA: 5, ptotW: 80, package: 'TO-220', pinout: 'BCE' })).toMatchObject({ verdict: 'accept', refusals: [], warnings: [] });
+    expect(
+      checkSubstitution(original, { type: 'NPN', vMaxV: 450, iMaxA: 5, ptotW: 80, package: 'TO-220', pinout: 'BCE' }),
+    ).toMatchObject({ verdict: 'accept', refusals: [], warnings: [] });
   });
 
   it('refuses a PNP, and an NPN rated 300 V', () => {
-    const pnp = checkSubstitution(original, { type: 'PNP', vMaxV: 450, iMaxA: 5, ptotW: 80, package: 'TO-220', pinout: 'BCE' });
+    const pnp = checkSubstitution(original, {
+      type: 'PNP',
+      vMaxV: 450,
+      iMaxA: 5,
+      ptotW: 80,
+      package: 'TO-220',
+      pinout: 'BCE',
+    });
     expect(pnp.verdict).toBe('refuse');
     expect(pnp.refusals[0]).toContain('Opposite polarity');
-    const low = checkSubstitution(original, { type: 'NPN', vMaxV: 300, iMaxA: 5, ptotW: 80, package: 'TO-220', pinout: 'BCE' });
+    const low = checkSubstitution(original, {
+      type: 'NPN',
+      vMaxV: 300,
+      iMaxA: 5,
+      ptotW: 80,
+      package: 'TO-220',
+      pinout: 'BCE',
+    });
     expect(low.verdict).toBe('refuse');
     expect(low.refusals).toEqual(["Vceo 300 V is below the original's 400 V."]);
   });
@@ -332,26 +440,42 @@ describe('transistor substitution (common practice, no published source)', () =>
   });
 
   it('accepts a 400 V NPN of higher current in TO-220 for a 400 V 1.5 A NPN switching transistor in TO-126, with a warning about size and fit', () => {
-    const r = checkSubstitution({ type: 'NPN', vMaxV: 400, iMaxA: 1.5, ptotW: 20, package: 'TO-126' }, { type: 'NPN', vMaxV: 400, iMaxA: 4, ptotW: 75, package: 'TO-220' });
+    const r = checkSubstitution(
+      { type: 'NPN', vMaxV: 400, iMaxA: 1.5, ptotW: 20, package: 'TO-126' },
+      { type: 'NPN', vMaxV: 400, iMaxA: 4, ptotW: 75, package: 'TO-220' },
+    );
     expect(r.verdict).toBe('accept-with-warnings');
     expect(r.refusals).toEqual([]);
     expect(r.warnings[0]).toMatch(/Larger package \(TO-220 for TO-126\): check it fits the space and the heatsink/);
   });
 
   it('warns on a different pin-out, a live tab where the original was insulated, and lower gain; refuses lower current or power', () => {
-    const r = checkSubstitution({ ...original, package: 'TO-220F', pinout: 'BCE', hfeMin: 20 }, { ...original, package: 'TO-220', pinout: 'ECB', hfeMin: 10 });
+    const r = checkSubstitution(
+      { ...original, package: 'TO-220F', pinout: 'BCE', hfeMin: 20 },
+      { ...original, package: 'TO-220', pinout: 'ECB', hfeMin: 10 },
+    );
     expect(r.verdict).toBe('accept-with-warnings');
     expect(r.warnings.join(' ')).toMatch(/insulating pad.*Different pin-out \(ECB for BCE\).*Lower gain/s);
     expect(checkSubstitution(original, { ...original, iMaxA: 3, ptotW: 50 }).refusals).toHaveLength(2);
   });
 
   it('checks MOSFETs the same way: channel, Vds, Id, Ptot, gate threshold; and refuses a surface-mount part for a through-hole one', () => {
-    const fet: TransistorSpec = { type: 'N-MOSFET', vMaxV: 600, iMaxA: 8, ptotW: 125, package: 'TO-220', pinout: 'GDS', vgsThMaxV: 4 };
+    const fet: TransistorSpec = {
+      type: 'N-MOSFET',
+      vMaxV: 600,
+      iMaxA: 8,
+      ptotW: 125,
+      package: 'TO-220',
+      pinout: 'GDS',
+      vgsThMaxV: 4,
+    };
     expect(checkSubstitution(fet, { ...fet, vMaxV: 650, iMaxA: 10 }).verdict).toBe('accept');
     expect(checkSubstitution(fet, { ...fet, type: 'P-MOSFET' }).verdict).toBe('refuse');
     expect(checkSubstitution(fet, { ...fet, type: 'NPN', pinout: 'BCE' }).refusals[0]).toContain('gate voltage');
     expect(checkSubstitution(fet, { ...fet, vgsThMaxV: 5 }).warnings[0]).toContain('Higher gate threshold');
-    expect(checkSubstitution(fet, { ...fet, vMaxV: 500 }).refusals).toEqual(["Vds 500 V is below the original's 600 V."]);
+    expect(checkSubstitution(fet, { ...fet, vMaxV: 500 }).refusals).toEqual([
+      "Vds 500 V is below the original's 600 V.",
+    ]);
     expect(checkSubstitution(fet, { ...fet, package: 'D2PAK' }).refusals[0]).toContain('does not fit the board');
   });
 
@@ -370,7 +494,10 @@ describe('diode test of a bipolar transistor (common practice, no published sour
   });
 
   it('finds a PNP from the direction the junctions conduct', () => {
-    expect(interpretDiodeTest({ BE: 'OL', EB: 0.66, BC: 'OL', CB: 0.63, CE: 'OL', EC: 'OL' })).toMatchObject({ verdict: 'good', polarity: 'PNP' });
+    expect(interpretDiodeTest({ BE: 'OL', EB: 0.66, BC: 'OL', CB: 0.63, CE: 'OL', EC: 'OL' })).toMatchObject({
+      verdict: 'good',
+      polarity: 'PNP',
+    });
   });
 
   it('calls a transistor whose base–collector junction reads short both ways failed', () => {

@@ -6,12 +6,31 @@ import { EMISSION_FACTORS, factorFor } from '../../shared/impact/factors';
 import { impact, lastVisits, type ImpactCategory, type RepairRecord } from '../../shared/impact/index';
 
 /** The shipped taxonomy: weights from Statistics Netherlands' UNU-KEY table (2020), factors from shared/impact/factors. */
-const categories: ImpactCategory[] = CATEGORY_SEEDS.map((c, i) => ({ id: i + 1, name: c.name, skill: c.skill, avgWeightKg: c.avgWeightKg, co2ePerKg: factorFor(c) }));
+const categories: ImpactCategory[] = CATEGORY_SEEDS.map((c, i) => ({
+  id: i + 1,
+  name: c.name,
+  skill: c.skill,
+  avgWeightKg: c.avgWeightKg,
+  co2ePerKg: factorFor(c),
+}));
 const idOf = (slug: string) => CATEGORY_SEEDS.findIndex((c) => c.slug === slug) + 1;
-const TEN = ['laptop', 'phone', 'desktop-pc', 'kettle', 'toaster', 'vacuum-cleaner', 'hair-dryer', 'television', 'microwave', 'power-tool'];
+const TEN = [
+  'laptop',
+  'phone',
+  'desktop-pc',
+  'kettle',
+  'toaster',
+  'vacuum-cleaner',
+  'hair-dryer',
+  'television',
+  'microwave',
+  'power-tool',
+];
 /** REFERENCE.md §2 gives the worked figures to 4 decimals with a tolerance of 1e-4. */
-const near = (actual: number, expected: number) => expect(Math.abs(actual - expected)).toBeLessThanOrEqual(1e-4 + 1e-12);
-const fixedAll = (): RepairRecord[] => TEN.map((slug, i) => ({ itemId: i + 1, categoryId: idOf(slug), date: '2026-03-14', outcome: 'fixed' }));
+const near = (actual: number, expected: number) =>
+  expect(Math.abs(actual - expected)).toBeLessThanOrEqual(1e-4 + 1e-12);
+const fixedAll = (): RepairRecord[] =>
+  TEN.map((slug, i) => ({ itemId: i + 1, categoryId: idOf(slug), date: '2026-03-14', outcome: 'fixed' }));
 
 describe('the worked example of REFERENCE.md §2 (weights: Statistics Netherlands 2020; factors: UK Government GHG conversion factors, material use)', () => {
   it('takes the IT factor for 03xx keys and the small-electrical factor for the rest', () => {
@@ -32,7 +51,11 @@ describe('the worked example of REFERENCE.md §2 (weights: Statistics Netherland
   });
 
   it('gives 25.22 kg and 160.5057 kg CO2e when the desktop and the microwave are end of life', () => {
-    const records = fixedAll().map((r) => (r.categoryId === idOf('desktop-pc') || r.categoryId === idOf('microwave') ? { ...r, outcome: 'end-of-life' as const, barrier: 'spare-parts-not-available' as const } : r));
+    const records = fixedAll().map((r) =>
+      r.categoryId === idOf('desktop-pc') || r.categoryId === idOf('microwave')
+        ? { ...r, outcome: 'end-of-life' as const, barrier: 'spare-parts-not-available' as const }
+        : r,
+    );
     const t = impact(records, categories, 1);
     near(t.kgDiverted, 25.22);
     near(t.co2eKg, 160.5057);
@@ -60,7 +83,16 @@ const recordArb = fc.record({
 });
 
 /** Random records where some items come back once or twice (each return points at the visit before). */
-function build(specs: { categoryId: number; month: number; outcome: (typeof OUTCOMES)[number] | null; barrier: (typeof BARRIERS)[number]; weighed: number | null; returns: number }[]): RepairRecord[] {
+function build(
+  specs: {
+    categoryId: number;
+    month: number;
+    outcome: (typeof OUTCOMES)[number] | null;
+    barrier: (typeof BARRIERS)[number];
+    weighed: number | null;
+    returns: number;
+  }[],
+): RepairRecord[] {
   const out: RepairRecord[] = [];
   let id = 1;
   for (const s of specs) {
@@ -68,7 +100,15 @@ function build(specs: { categoryId: number; month: number; outcome: (typeof OUTC
     for (let v = 0; v <= s.returns; v++) {
       const last = v === s.returns;
       const month = Math.min(23, s.month + v);
-      out.push({ itemId: id, categoryId: s.categoryId, date: `${2025 + Math.floor(month / 12)}-${String((month % 12) + 1).padStart(2, '0')}-10`, outcome: last ? s.outcome : 'parts-needed', barrier: last && s.outcome === 'end-of-life' ? s.barrier : null, weighedKg: s.weighed, returnOfItemId: prev });
+      out.push({
+        itemId: id,
+        categoryId: s.categoryId,
+        date: `${2025 + Math.floor(month / 12)}-${String((month % 12) + 1).padStart(2, '0')}-10`,
+        outcome: last ? s.outcome : 'parts-needed',
+        barrier: last && s.outcome === 'end-of-life' ? s.barrier : null,
+        weighedKg: s.weighed,
+        returnOfItemId: prev,
+      });
       prev = id++;
     }
   }
@@ -77,25 +117,30 @@ function build(specs: { categoryId: number; month: number; outcome: (typeof OUTC
 
 describe('properties of the impact engine', () => {
   it('totals equal the sum of their parts, by category, by month and by skill', () => {
-    fc.assert(fc.property(fc.array(recordArb, { maxLength: 60 }), (specs) => {
-      const t = impact(build(specs), categories, 0.7);
-      for (const parts of [t.byCategory, t.byMonth, t.bySkill]) {
-        for (const k of ['items', 'fixed', 'partsNeeded', 'advice', 'endOfLife'] as const) expect(parts.reduce((n, p) => n + p[k], 0)).toBe(t[k]);
-        expect(parts.reduce((n, p) => n + p.kgDiverted, 0)).toBeCloseTo(t.kgDiverted, 2);
-        expect(parts.reduce((n, p) => n + p.co2eKg, 0)).toBeCloseTo(t.co2eKg, 2);
-      }
-      expect(t.unknown + t.fixed + t.partsNeeded + t.advice + t.endOfLife).toBe(t.items);
-      expect(t.barriers.reduce((n, b) => n + b.count, 0)).toBe(t.endOfLife);
-    }));
+    fc.assert(
+      fc.property(fc.array(recordArb, { maxLength: 60 }), (specs) => {
+        const t = impact(build(specs), categories, 0.7);
+        for (const parts of [t.byCategory, t.byMonth, t.bySkill]) {
+          for (const k of ['items', 'fixed', 'partsNeeded', 'advice', 'endOfLife'] as const)
+            expect(parts.reduce((n, p) => n + p[k], 0)).toBe(t[k]);
+          expect(parts.reduce((n, p) => n + p.kgDiverted, 0)).toBeCloseTo(t.kgDiverted, 2);
+          expect(parts.reduce((n, p) => n + p.co2eKg, 0)).toBeCloseTo(t.co2eKg, 2);
+        }
+        expect(t.unknown + t.fixed + t.partsNeeded + t.advice + t.endOfLife).toBe(t.items);
+        expect(t.barriers.reduce((n, b) => n + b.count, 0)).toBe(t.endOfLife);
+      }),
+    );
   });
 
   it('counts an item that came back once, with the outcome of its last visit', () => {
-    fc.assert(fc.property(fc.array(recordArb, { maxLength: 60 }), (specs) => {
-      const records = build(specs);
-      const t = impact(records, categories, 1);
-      expect(t.items).toBe(specs.length);
-      expect(lastVisits(records)).toHaveLength(specs.length);
-      expect(t.fixed).toBe(specs.filter((s) => s.outcome === 'fixed').length);
-    }));
+    fc.assert(
+      fc.property(fc.array(recordArb, { maxLength: 60 }), (specs) => {
+        const records = build(specs);
+        const t = impact(records, categories, 1);
+        expect(t.items).toBe(specs.length);
+        expect(lastVisits(records)).toHaveLength(specs.length);
+        expect(t.fixed).toBe(specs.filter((s) => s.outcome === 'fixed').length);
+      }),
+    );
   });
 });

@@ -3,7 +3,13 @@ import { describe, expect, it } from 'vitest';
 import { triage, type TriageInput, type TriageResult } from '../../shared/triage';
 import { referenceOptimum as reference } from '../support/triage-reference';
 
-const item = (id: string, skill: string, minLevel: 1 | 2 | 3, equipment: string[] = [], priority = 1) => ({ id, skill, minLevel, equipment, priority });
+const item = (id: string, skill: string, minLevel: 1 | 2 | 3, equipment: string[] = [], priority = 1) => ({
+  id,
+  skill,
+  minLevel,
+  equipment,
+  priority,
+});
 
 /** Checks every rule of a result against its input; returns the objective parts. */
 function checkRules(input: TriageInput, out: TriageResult) {
@@ -21,7 +27,8 @@ function checkRules(input: TriageInput, out: TriageResult) {
     perVolunteer.set(v.id, (perVolunteer.get(v.id) ?? 0) + 1);
     perBench.set(b.id, (perBench.get(b.id) ?? 0) + 1);
   }
-  for (const [id, n] of perVolunteer) expect(n).toBeLessThanOrEqual(input.volunteers.find((v) => v.id === id)!.capacity ?? 1);
+  for (const [id, n] of perVolunteer)
+    expect(n).toBeLessThanOrEqual(input.volunteers.find((v) => v.id === id)!.capacity ?? 1);
   for (const [id, n] of perBench) expect(n).toBeLessThanOrEqual(input.benches.find((b) => b.id === id)!.seats);
 }
 
@@ -37,8 +44,14 @@ describe('triage by hand-worked examples', () => {
   it('pairs a kettle with the electrical fixer at the bench with the safety tester', () => {
     const out = triage({
       items: [item('kettle', 'electrical', 2, ['appliance-safety-tester'])],
-      volunteers: [{ id: 'ada', skills: { textiles: 3 } }, { id: 'ben', skills: { electrical: 2 } }],
-      benches: [{ id: 'sewing', equipment: ['sewing-machine'], seats: 2 }, { id: 'mains', equipment: ['appliance-safety-tester', 'multimeter'], seats: 1 }],
+      volunteers: [
+        { id: 'ada', skills: { textiles: 3 } },
+        { id: 'ben', skills: { electrical: 2 } },
+      ],
+      benches: [
+        { id: 'sewing', equipment: ['sewing-machine'], seats: 2 },
+        { id: 'mains', equipment: ['appliance-safety-tester', 'multimeter'], seats: 1 },
+      ],
     });
     expect(out).toEqual({ assignments: [{ itemId: 'kettle', volunteerId: 'ben', benchId: 'mains' }], unassigned: [] });
   });
@@ -48,11 +61,17 @@ describe('triage by hand-worked examples', () => {
     // The maximum gives the radio to Dee and the laptop to Cai.
     const out = triage({
       items: [item('radio', 'electronics', 1, [], 1), item('laptop', 'computers', 1, [], 2)],
-      volunteers: [{ id: 'cai', skills: { electronics: 1, computers: 1 } }, { id: 'dee', skills: { electronics: 2 } }],
+      volunteers: [
+        { id: 'cai', skills: { electronics: 1, computers: 1 } },
+        { id: 'dee', skills: { electronics: 2 } },
+      ],
       benches: [{ id: 'b1', equipment: [], seats: 2 }],
     });
     expect(out.assignments).toHaveLength(2);
-    expect(Object.fromEntries(out.assignments.map((a) => [a.itemId, a.volunteerId]))).toEqual({ radio: 'dee', laptop: 'cai' });
+    expect(Object.fromEntries(out.assignments.map((a) => [a.itemId, a.volunteerId]))).toEqual({
+      radio: 'dee',
+      laptop: 'cai',
+    });
   });
 
   it('serves the lower priority number when only one of two can be served', () => {
@@ -62,13 +81,18 @@ describe('triage by hand-worked examples', () => {
       benches: [{ id: 'b', equipment: [], seats: 1 }],
     });
     expect(out.assignments.map((a) => a.itemId)).toEqual(['booked']);
-    expect(out.unassigned).toEqual([{ itemId: 'walk-in', reason: 'capacity', detail: expect.stringContaining('busy') }]);
+    expect(out.unassigned).toEqual([
+      { itemId: 'walk-in', reason: 'capacity', detail: expect.stringContaining('busy') },
+    ]);
   });
 
   it('keeps the expert free: a learner-level item goes to the capable fixer, not the expert', () => {
     const out = triage({
       items: [item('lamp', 'electrical', 1)],
-      volunteers: [{ id: 'expert', skills: { electrical: 3 } }, { id: 'capable', skills: { electrical: 2 } }],
+      volunteers: [
+        { id: 'expert', skills: { electrical: 3 } },
+        { id: 'capable', skills: { electrical: 2 } },
+      ],
       benches: [{ id: 'b', equipment: [], seats: 2 }],
     });
     expect(out.assignments[0].volunteerId).toBe('capable');
@@ -76,9 +100,16 @@ describe('triage by hand-worked examples', () => {
 
   it('keeps a seated fixer at their bench and respects seats and capacity', () => {
     const out = triage({
-      items: [item('a', 'bikes', 1, ['bike-stand']), item('b', 'bikes', 1, ['bike-stand']), item('c', 'bikes', 1, ['bike-stand'])],
+      items: [
+        item('a', 'bikes', 1, ['bike-stand']),
+        item('b', 'bikes', 1, ['bike-stand']),
+        item('c', 'bikes', 1, ['bike-stand']),
+      ],
       volunteers: [{ id: 'fin', skills: { bikes: 3 }, benchId: 'yard', capacity: 3 }],
-      benches: [{ id: 'yard', equipment: ['bike-stand'], seats: 2 }, { id: 'hall', equipment: ['bike-stand'], seats: 5 }],
+      benches: [
+        { id: 'yard', equipment: ['bike-stand'], seats: 2 },
+        { id: 'hall', equipment: ['bike-stand'], seats: 5 },
+      ],
     });
     expect(out.assignments.map((a) => a.benchId)).toEqual(['yard', 'yard']);
     expect(out.unassigned.map((u) => u.reason)).toEqual(['capacity']);
@@ -86,9 +117,16 @@ describe('triage by hand-worked examples', () => {
 
   it('explains each kind of item it could not place', () => {
     const out = triage({
-      items: [item('sew', 'textiles', 1), item('phone', 'phones', 1, ['hot-air-station']), item('amp', 'electronics', 2, ['soldering-station'])],
+      items: [
+        item('sew', 'textiles', 1),
+        item('phone', 'phones', 1, ['hot-air-station']),
+        item('amp', 'electronics', 2, ['soldering-station']),
+      ],
       volunteers: [{ id: 'gus', name: 'Gus', skills: { phones: 3, electronics: 3 }, benchId: 'plain' }],
-      benches: [{ id: 'plain', equipment: ['multimeter'], seats: 3 }, { id: 'solder', equipment: ['soldering-station'], seats: 1 }],
+      benches: [
+        { id: 'plain', equipment: ['multimeter'], seats: 3 },
+        { id: 'solder', equipment: ['soldering-station'], seats: 1 },
+      ],
     });
     const why = Object.fromEntries(out.unassigned.map((u) => [u.itemId, u]));
     expect(why.sew.reason).toBe('no-skill');
@@ -96,7 +134,9 @@ describe('triage by hand-worked examples', () => {
     expect(why.phone.reason).toBe('no-equipment');
     expect(why.phone.detail).toBe('No bench has a hot air station.');
     expect(why.amp.reason).toBe('no-pair');
-    expect(why.amp.detail).toContain('Gus has the electronics skill but is seated at a bench without soldering station');
+    expect(why.amp.detail).toContain(
+      'Gus has the electronics skill but is seated at a bench without soldering station',
+    );
   });
 
   it('handles an empty round', () => {
@@ -111,9 +151,28 @@ const level = fc.constantFrom<1 | 2 | 3>(1, 2, 3);
 const instance = (mode: 'seated' | 'free' | 'mixed') =>
   fc
     .record({
-      items: fc.array(fc.record({ skill: fc.constantFrom(...SKILLS), minLevel: level, equipment: fc.subarray(KIT, { maxLength: 2 }), priority: fc.integer({ min: 1, max: 4 }) }), { maxLength: 9 }),
-      volunteers: fc.array(fc.record({ skills: fc.dictionary(fc.constantFrom(...SKILLS), level, { maxKeys: 3 }), capacity: fc.integer({ min: 1, max: 2 }), seat: fc.nat(3), seatedCoin: fc.boolean() }), { maxLength: 4 }),
-      benches: fc.array(fc.record({ equipment: fc.subarray(KIT), seats: fc.integer({ min: 0, max: 3 }) }), { minLength: 1, maxLength: 3 }),
+      items: fc.array(
+        fc.record({
+          skill: fc.constantFrom(...SKILLS),
+          minLevel: level,
+          equipment: fc.subarray(KIT, { maxLength: 2 }),
+          priority: fc.integer({ min: 1, max: 4 }),
+        }),
+        { maxLength: 9 },
+      ),
+      volunteers: fc.array(
+        fc.record({
+          skills: fc.dictionary(fc.constantFrom(...SKILLS), level, { maxKeys: 3 }),
+          capacity: fc.integer({ min: 1, max: 2 }),
+          seat: fc.nat(3),
+          seatedCoin: fc.boolean(),
+        }),
+        { maxLength: 4 },
+      ),
+      benches: fc.array(fc.record({ equipment: fc.subarray(KIT), seats: fc.integer({ min: 0, max: 3 }) }), {
+        minLength: 1,
+        maxLength: 3,
+      }),
     })
     .map(({ items, volunteers, benches }): TriageInput => ({
       items: items.map((i, n) => ({ id: `i${n}`, ...i })),
@@ -121,7 +180,12 @@ const instance = (mode: 'seated' | 'free' | 'mixed') =>
       volunteers: volunteers.map((v, n) => {
         const seated = mode === 'seated' || (mode === 'mixed' && (v.seatedCoin || n === 0));
         const forcedFree = mode === 'mixed' && n === volunteers.length - 1 && n > 0;
-        return { id: `v${n}`, skills: v.skills, capacity: v.capacity, ...(seated && !forcedFree ? { benchId: `b${v.seat % benches.length}` } : {}) };
+        return {
+          id: `v${n}`,
+          skills: v.skills,
+          capacity: v.capacity,
+          ...(seated && !forcedFree ? { benchId: `b${v.seat % benches.length}` } : {}),
+        };
       }),
     }));
 
@@ -160,8 +224,16 @@ describe('triage against an exact integer program (javascript-lp-solver), 300+ r
   it('is deterministic and ignores the order of its input', () => {
     fc.assert(
       fc.property(instance('mixed'), fc.nat(), (input, seed) => {
-        const shuffle = <T,>(xs: T[]) => xs.map((x, i) => [((i + 1) * 2654435761 + seed) % 4294967296, x] as const).sort((a, b) => a[0] - b[0]).map(([, x]) => x);
-        const again = triage({ items: shuffle(input.items), volunteers: shuffle(input.volunteers), benches: shuffle(input.benches) });
+        const shuffle = <T>(xs: T[]) =>
+          xs
+            .map((x, i) => [((i + 1) * 2654435761 + seed) % 4294967296, x] as const)
+            .sort((a, b) => a[0] - b[0])
+            .map(([, x]) => x);
+        const again = triage({
+          items: shuffle(input.items),
+          volunteers: shuffle(input.volunteers),
+          benches: shuffle(input.benches),
+        });
         expect(again).toEqual(triage(input));
         expect(triage(input)).toEqual(triage(input));
       }),

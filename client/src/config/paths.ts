@@ -18,7 +18,8 @@ export const paths = {
   event: (id: number) => `/events/${id}`,
   book: (id: number) => `/events/${id}/book`,
   manageEvent: (id: number) => `/events/${id}/manage`,
-  booking: (reference: string, token: string, fresh = false) => `/bookings/${reference}?token=${encodeURIComponent(token)}${fresh ? '&new=1' : ''}`,
+  booking: (reference: string, token: string, fresh = false) =>
+    `/bookings/${reference}?token=${encodeURIComponent(token)}${fresh ? '&new=1' : ''}`,
   groupEvents: (groupId: number) => `/groups/${groupId}/events`,
   newEvent: (groupId: number) => `/groups/${groupId}/events/new`,
   groupSettings: (groupId: number) => `/groups/${groupId}/settings`,
@@ -31,7 +32,8 @@ export const paths = {
   deskEvent: (id: number) => `/desk/${id}`,
   item: (id: number) => `/items/${id}`,
   tag: (code: string) => `/t/${code}`,
-  tags: (eventId: number, opts: { slotId?: number; items?: number[] } = {}) => `/events/${eventId}/tags${opts.slotId ? `?slot=${opts.slotId}` : opts.items?.length ? `?items=${opts.items.join(',')}` : ''}`,
+  tags: (eventId: number, opts: { slotId?: number; items?: number[] } = {}) =>
+    `/events/${eventId}/tags${opts.slotId ? `?slot=${opts.slotId}` : opts.items?.length ? `?items=${opts.items.join(',')}` : ''}`,
   hall: (eventId: number) => `/events/${eventId}/hall`,
   live: (eventId: number) => `/events/${eventId}/live`,
   impact: (groupId: number) => `/groups/${groupId}/impact`,

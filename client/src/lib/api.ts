@@ -35,14 +35,24 @@ async function parse(res: Response) {
   return data;
 }
 
-export async function api<T>(method: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE', url: string, body?: unknown, extraHeaders: Record<string, string> = {}): Promise<T> {
+export async function api<T>(
+  method: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE',
+  url: string,
+  body?: unknown,
+  extraHeaders: Record<string, string> = {},
+): Promise<T> {
   const form = typeof FormData !== 'undefined' && body instanceof FormData;
   const send = async (): Promise<Response> => {
     const headers: Record<string, string> = { Accept: 'application/json', ...extraHeaders };
     if (body !== undefined && !form) headers['Content-Type'] = 'application/json';
     if (method !== 'GET') headers['x-csrf-token'] = csrfToken ?? (await fetchCsrf());
     try {
-      return await fetch(url, { method, headers, credentials: 'same-origin', body: body === undefined ? undefined : form ? (body as FormData) : JSON.stringify(body) });
+      return await fetch(url, {
+        method,
+        headers,
+        credentials: 'same-origin',
+        body: body === undefined ? undefined : form ? (body as FormData) : JSON.stringify(body),
+      });
     } catch {
       throw new ApiError(0, 'offline', 'No connection to Mendery. Check the network and try again.');
     }

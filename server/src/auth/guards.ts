@@ -43,13 +43,23 @@ export function hasGroupRole(user: SessionUser | undefined, groupId: number, rol
 }
 
 /** Allows the request when the user holds one of `roles` in the group named by the request (admins always). */
-export function requireGroupRole(roles: readonly GroupRole[], groupIdOf: (req: Request) => number | Promise<number>): RequestHandler {
+export function requireGroupRole(
+  roles: readonly GroupRole[],
+  groupIdOf: (req: Request) => number | Promise<number>,
+): RequestHandler {
   return async (req, _res, next) => {
     if (!req.user) return next(unauthenticated());
     const groupId = await groupIdOf(req);
     // No such group: admins go on (the route answers 400 or 404), everyone else is refused before validation.
-    if (!Number.isInteger(groupId) || groupId <= 0) return next(req.user.admin ? undefined : new HttpError(403, 'forbidden', 'Your role in this group does not allow this.'));
-    next(hasGroupRole(req.user, groupId, roles) ? undefined : new HttpError(403, 'forbidden', 'Your role in this group does not allow this.'));
+    if (!Number.isInteger(groupId) || groupId <= 0)
+      return next(
+        req.user.admin ? undefined : new HttpError(403, 'forbidden', 'Your role in this group does not allow this.'),
+      );
+    next(
+      hasGroupRole(req.user, groupId, roles)
+        ? undefined
+        : new HttpError(403, 'forbidden', 'Your role in this group does not allow this.'),
+    );
   };
 }
 

@@ -1,6 +1,13 @@
 import { Router, type Request } from 'express';
 import { rateLimit, ipKeyGenerator } from 'express-rate-limit';
-import { firstAdminSchema, loginSchema, resetConfirmSchema, resetRequestSchema, signupSchema, tokenSchema } from '../../../shared/schemas/auth';
+import {
+  firstAdminSchema,
+  loginSchema,
+  resetConfirmSchema,
+  resetRequestSchema,
+  signupSchema,
+  tokenSchema,
+} from '../../../shared/schemas/auth';
 import type { AppContext } from '../context';
 import { HttpError } from '../http/errors';
 import { MariadbRateLimitStore } from '../http/rate-limit-store';
@@ -9,7 +16,8 @@ import { unauthenticated } from './guards';
 import * as auth from './service';
 import { loadSessionUser } from './users';
 
-const regenerate = (req: Request) => new Promise<void>((res, rej) => req.session.regenerate((e) => (e ? rej(e) : res())));
+const regenerate = (req: Request) =>
+  new Promise<void>((res, rej) => req.session.regenerate((e) => (e ? rej(e) : res())));
 const save = (req: Request) => new Promise<void>((res, rej) => req.session.save((e) => (e ? rej(e) : res())));
 
 export async function signIn(req: Request, ctx: AppContext, userId: number) {
@@ -20,7 +28,14 @@ export async function signIn(req: Request, ctx: AppContext, userId: number) {
   return loadSessionUser(ctx.database.db, userId);
 }
 
-function limiter(ctx: AppContext, stores: MariadbRateLimitStore[], name: string, max: number, key: (req: Request) => string, skipSuccessfulRequests = false) {
+function limiter(
+  ctx: AppContext,
+  stores: MariadbRateLimitStore[],
+  name: string,
+  max: number,
+  key: (req: Request) => string,
+  skipSuccessfulRequests = false,
+) {
   const store = new MariadbRateLimitStore(ctx.database.db, `${name}:`);
   stores.push(store);
   return rateLimit({
@@ -32,7 +47,13 @@ function limiter(ctx: AppContext, stores: MariadbRateLimitStore[], name: string,
     store,
     keyGenerator: key,
     handler: (_req, _res, next) =>
-      next(new HttpError(429, 'rate-limited', `Too many attempts. Wait ${ctx.env.LOGIN_RATE_WINDOW_MINUTES} minutes and try again.`)),
+      next(
+        new HttpError(
+          429,
+          'rate-limited',
+          `Too many attempts. Wait ${ctx.env.LOGIN_RATE_WINDOW_MINUTES} minutes and try again.`,
+        ),
+      ),
   });
 }
 
@@ -40,9 +61,20 @@ export function authRoutes(ctx: AppContext, csrfToken: (req: Request) => string)
   const r = Router();
   const stores: MariadbRateLimitStore[] = [];
   const ip = (req: Request) => ipKeyGenerator(req.ip ?? '0.0.0.0');
-  const emailOf = (req: Request) => String(req.body?.email ?? '').trim().toLowerCase().slice(0, 254);
+  const emailOf = (req: Request) =>
+    String(req.body?.email ?? '')
+      .trim()
+      .toLowerCase()
+      .slice(0, 254);
   // Failed sign-ins count per address and source, and more loosely per source alone (password spraying).
-  const loginPerAccount = limiter(ctx, stores, 'login', ctx.env.LOGIN_RATE_MAX, (req) => `${ip(req)}|${emailOf(req)}`, true);
+  const loginPerAccount = limiter(
+    ctx,
+    stores,
+    'login',
+    ctx.env.LOGIN_RATE_MAX,
+    (req) => `${ip(req)}|${emailOf(req)}`,
+    true,
+  );
   const loginPerSource = limiter(ctx, stores, 'login-ip', ctx.env.LOGIN_RATE_MAX * 5, ip, true);
   const mailLinks = limiter(ctx, stores, 'mail-link', ctx.env.LOGIN_RATE_MAX, (req) => `${ip(req)}|${emailOf(req)}`);
 

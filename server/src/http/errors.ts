@@ -37,7 +37,8 @@ export function errorHandler(log: (msg: string, err: unknown) => void = console.
     else if (err?.code === 'EBADCSRFTOKEN' || err?.message === 'invalid csrf token')
       e = new HttpError(403, 'csrf', 'The form expired or came from elsewhere. Reload the page and try again.');
     else if (err?.type === 'entity.too.large') e = new HttpError(413, 'too-large', 'The request is too large.');
-    else if (err?.type === 'entity.parse.failed') e = new HttpError(400, 'bad-json', 'The request body is not valid JSON.');
+    else if (err?.type === 'entity.parse.failed')
+      e = new HttpError(400, 'bad-json', 'The request body is not valid JSON.');
     else if (['ECONNREFUSED', 'PROTOCOL_CONNECTION_LOST', 'ER_CON_COUNT_ERROR'].includes(err?.code)) {
       log(`database unavailable on ${req.method} ${req.originalUrl}`, err);
       e = new HttpError(503, 'unavailable', 'The database is not reachable just now. Try again in a moment.');
@@ -46,6 +47,8 @@ export function errorHandler(log: (msg: string, err: unknown) => void = console.
       e = new HttpError(500, 'internal', 'Something went wrong on our side. It has been logged.');
     }
     if (res.headersSent) return;
-    res.status(e.status).json({ error: { code: e.code, message: e.message, ...(e.fields ? { fields: e.fields } : {}) } });
+    res
+      .status(e.status)
+      .json({ error: { code: e.code, message: e.message, ...(e.fields ? { fields: e.fields } : {}) } });
   };
 }

@@ -10,7 +10,10 @@ import { rateLimits } from '../db/schema/index';
 export class MariadbRateLimitStore implements Store {
   windowMs = 60_000;
   prefix: string;
-  constructor(private db: Db, prefix: string) {
+  constructor(
+    private db: Db,
+    prefix: string,
+  ) {
     this.prefix = prefix;
   }
   init(options: Options) {
@@ -28,7 +31,10 @@ export class MariadbRateLimitStore implements Store {
           resetAt: sql`IF(${rateLimits.resetAt} <= NOW(3), VALUES(${rateLimits.resetAt}), ${rateLimits.resetAt})`,
         },
       });
-    const [row] = await this.db.select().from(rateLimits).where(sql`${rateLimits.key} = ${k}`);
+    const [row] = await this.db
+      .select()
+      .from(rateLimits)
+      .where(sql`${rateLimits.key} = ${k}`);
     return { totalHits: row?.hits ?? 1, resetTime: row?.resetAt ?? reset };
   }
   private pending = new Set<Promise<unknown>>();
@@ -42,7 +48,10 @@ export class MariadbRateLimitStore implements Store {
     return p.finally(() => this.pending.delete(p));
   }
   private async doDecrement(key: string) {
-    await this.db.update(rateLimits).set({ hits: sql`GREATEST(${rateLimits.hits} - 1, 0)` }).where(sql`${rateLimits.key} = ${this.prefix + key}`);
+    await this.db
+      .update(rateLimits)
+      .set({ hits: sql`GREATEST(${rateLimits.hits} - 1, 0)` })
+      .where(sql`${rateLimits.key} = ${this.prefix + key}`);
   }
   async resetKey(key: string) {
     await this.db.delete(rateLimits).where(sql`${rateLimits.key} = ${this.prefix + key}`);

@@ -49,7 +49,11 @@ export async function freePort(): Promise<number> {
 
 function client(socket: string) {
   return (sql: string) => {
-    const r = spawnSync('mariadb', ['--no-defaults', `--socket=${socket}`, '-uroot', '--batch', '--skip-column-names', '-e', sql], { encoding: 'utf8' });
+    const r = spawnSync(
+      'mariadb',
+      ['--no-defaults', `--socket=${socket}`, '-uroot', '--batch', '--skip-column-names', '-e', sql],
+      { encoding: 'utf8' },
+    );
     if (r.status !== 0) throw new Error(`mariadb client failed: ${r.stderr.trim()}`);
     return r.stdout.trim();
   };
@@ -89,7 +93,17 @@ export async function startPrivateMariadb(opts: PrivateMariadbOptions): Promise<
 
   if (!existsSync(path.join(data, 'mysql'))) {
     log(`  Initialising a private MariaDB data folder in ${data}`);
-    const r = spawnSync('mariadb-install-db', ['--no-defaults', `--datadir=${data}`, '--user=root', '--auth-root-authentication-method=socket', '--skip-test-db'], { encoding: 'utf8' });
+    const r = spawnSync(
+      'mariadb-install-db',
+      [
+        '--no-defaults',
+        `--datadir=${data}`,
+        '--user=root',
+        '--auth-root-authentication-method=socket',
+        '--skip-test-db',
+      ],
+      { encoding: 'utf8' },
+    );
     if (r.status !== 0) throw new Error(`mariadb-install-db failed:\n${r.stdout}\n${r.stderr}`);
   }
 
@@ -98,11 +112,26 @@ export async function startPrivateMariadb(opts: PrivateMariadbOptions): Promise<
   }
 
   const args = [
-    '--no-defaults', `--datadir=${data}`, `--socket=${socket}`, `--pid-file=${pidFile}`, `--port=${opts.port}`,
-    '--bind-address=127.0.0.1', '--user=root', '--skip-name-resolve', '--character-set-server=utf8mb4',
-    '--collation-server=utf8mb4_unicode_ci', `--log-error=${errorLog}`, '--max-connections=500',
+    '--no-defaults',
+    `--datadir=${data}`,
+    `--socket=${socket}`,
+    `--pid-file=${pidFile}`,
+    `--port=${opts.port}`,
+    '--bind-address=127.0.0.1',
+    '--user=root',
+    '--skip-name-resolve',
+    '--character-set-server=utf8mb4',
+    '--collation-server=utf8mb4_unicode_ci',
+    `--log-error=${errorLog}`,
+    '--max-connections=500',
   ];
-  if (opts.fast) args.push('--innodb-flush-log-at-trx-commit=0', '--innodb-doublewrite=0', '--innodb-flush-method=nosync', '--innodb-buffer-pool-size=256M');
+  if (opts.fast)
+    args.push(
+      '--innodb-flush-log-at-trx-commit=0',
+      '--innodb-doublewrite=0',
+      '--innodb-flush-method=nosync',
+      '--innodb-buffer-pool-size=256M',
+    );
   const child = spawn('mariadbd', args, { stdio: 'ignore' });
   let exited = false;
   child.once('exit', () => (exited = true));
@@ -144,7 +173,10 @@ const literal = (s: string) => `'${s.replace(/\\/g, '\\\\').replace(/'/g, "\\'")
  * Creates the database, a migration user that may change the schema, and an application user that may only
  * read and write rows: the running app cannot drop tables.
  */
-export function provisionDatabase(db: PrivateMariadb, names: { database: string; appUser: string; appPassword: string; migrateUser: string; migratePassword: string }) {
+export function provisionDatabase(
+  db: PrivateMariadb,
+  names: { database: string; appUser: string; appPassword: string; migrateUser: string; migratePassword: string },
+) {
   const d = ident(names.database);
   db.rootSql(
     [

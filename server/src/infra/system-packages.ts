@@ -24,7 +24,10 @@ export function ensureDebianPackage(executable: string, pkg: string, log: (line:
   }
   log(`▸ Installing Debian package ${pkg} (${executable} is missing)…`);
   const env = { ...process.env, DEBIAN_FRONTEND: 'noninteractive' };
-  for (const args of [['update', '-q'], ['install', '-y', '-q', pkg]]) {
+  for (const args of [
+    ['update', '-q'],
+    ['install', '-y', '-q', pkg],
+  ]) {
     const r = spawnSync('apt-get', args, { stdio: ['ignore', 'inherit', 'inherit'], env });
     if (r.status !== 0) {
       log(`✗ apt-get ${args.join(' ')} failed (exit ${r.status}).`);

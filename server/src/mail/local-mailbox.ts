@@ -12,7 +12,11 @@ const addresses = (a: AddressObject | AddressObject[] | undefined): string =>
  */
 export class LocalMailbox {
   private server: SMTPServer | null = null;
-  constructor(private db: Db, private port: number, private log: (l: string) => void = () => {}) {}
+  constructor(
+    private db: Db,
+    private port: number,
+    private log: (l: string) => void = () => {},
+  ) {}
 
   async start(): Promise<void> {
     const server = new SMTPServer({
@@ -30,7 +34,10 @@ export class LocalMailbox {
             const parsed = await simpleParser(raw);
             let html = typeof parsed.html === 'string' ? parsed.html : null;
             for (const att of parsed.attachments ?? []) {
-              if (att.cid && html) html = html.split(`cid:${att.cid}`).join(`data:${att.contentType};base64,${att.content.toString('base64')}`);
+              if (att.cid && html)
+                html = html
+                  .split(`cid:${att.cid}`)
+                  .join(`data:${att.contentType};base64,${att.content.toString('base64')}`);
             }
             await this.db.insert(mailboxMessages).values({
               fromAddress: addresses(parsed.from).slice(0, 320),

@@ -36,7 +36,11 @@ export class OutboxWorker {
   private running: Promise<number> | null = null;
   private again = false;
 
-  constructor(private db: Db, private sender: MailSender, private log: (line: string) => void = () => {}) {}
+  constructor(
+    private db: Db,
+    private sender: MailSender,
+    private log: (line: string) => void = () => {},
+  ) {}
 
   start(pollMs: number) {
     if (pollMs <= 0 || this.timer) return;
@@ -83,7 +87,12 @@ export class OutboxWorker {
         await tx
           .update(outbox)
           .set({ attempts: sql`${outbox.attempts} + 1`, nextAttemptAt: sql`NOW(3) + INTERVAL ${LEASE_SECONDS} SECOND` })
-          .where(sql`${outbox.id} IN (${sql.join(rows.map((r) => sql`${r.id}`), sql`, `)})`);
+          .where(
+            sql`${outbox.id} IN (${sql.join(
+              rows.map((r) => sql`${r.id}`),
+              sql`, `,
+            )})`,
+          );
       }
       return rows;
     });
@@ -91,8 +100,17 @@ export class OutboxWorker {
     for (const row of claimed) {
       const attempt = row.attempts + 1;
       try {
-        await this.sender.send({ to: row.toAddress, subject: row.subject, html: row.html, text: row.text, attachments: row.attachments ?? undefined });
-        await this.db.update(outbox).set({ status: 'sent', sentAt: new Date(), lastError: null }).where(eq(outbox.id, row.id));
+        await this.sender.send({
+          to: row.toAddress,
+          subject: row.subject,
+          html: row.html,
+          text: row.text,
+          attachments: row.attachments ?? undefined,
+        });
+        await this.db
+          .update(outbox)
+          .set({ status: 'sent', sentAt: new Date(), lastError: null })
+          .where(eq(outbox.id, row.id));
         sent++;
       } catch (err) {
         const message = String((err as Error).message ?? err).slice(0, 500);
@@ -105,7 +123,9 @@ export class OutboxWorker {
             nextAttemptAt: sql`NOW(3) + INTERVAL ${backoffSeconds(attempt)} SECOND`,
           })
           .where(eq(outbox.id, row.id));
-        this.log(`mail #${row.id} to ${row.toAddress} ${giveUp ? 'failed for good' : `will be retried in ${backoffSeconds(attempt)} s`}: ${message}`);
+        this.log(
+          `mail #${row.id} to ${row.toAddress} ${giveUp ? 'failed for good' : `will be retried in ${backoffSeconds(attempt)} s`}: ${message}`,
+        );
       }
     }
     return sent;

@@ -1,6 +1,7 @@
 import type { OutgoingMail } from './transport';
 
-const escape = (s: string) => s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
+const escape = (s: string) =>
+  s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
 
 interface Block {
   paragraphs: string[];
@@ -18,8 +19,12 @@ export function composeMail(to: string, subject: string, block: Block): Outgoing
 <tr><td style="font-size:22px;font-weight:800;color:#23395d;padding-bottom:12px">Mendery</td></tr>
 ${block.paragraphs.map((p) => `<tr><td style="font-size:16px;line-height:1.5;padding:6px 0">${escape(p)}</td></tr>`).join('\n')}
 ${block.image ? `<tr><td style="padding:12px 0"><img src="cid:${escape(block.image.cid)}" alt="${escape(block.image.alt)}" width="180" height="180" style="display:block"></td></tr>` : ''}
-${block.action ? `<tr><td style="padding:18px 0"><a href="${escape(block.action.url)}" style="background:#b8612f;color:#ffffff;text-decoration:none;font-weight:700;padding:12px 20px;border-radius:8px;display:inline-block">${escape(block.action.label)}</a></td></tr>
-<tr><td style="font-size:13px;color:#56606d">If the button does not work, open this address: ${escape(block.action.url)}</td></tr>` : ''}
+${
+  block.action
+    ? `<tr><td style="padding:18px 0"><a href="${escape(block.action.url)}" style="background:#b8612f;color:#ffffff;text-decoration:none;font-weight:700;padding:12px 20px;border-radius:8px;display:inline-block">${escape(block.action.label)}</a></td></tr>
+<tr><td style="font-size:13px;color:#56606d">If the button does not work, open this address: ${escape(block.action.url)}</td></tr>`
+    : ''
+}
 ${block.footnote ? `<tr><td style="font-size:13px;color:#56606d;padding-top:16px">${escape(block.footnote)}</td></tr>` : ''}
 </table></td></tr></table></body></html>`;
   const text = [

@@ -11,14 +11,18 @@ export interface OutgoingMail {
 }
 
 /** An attachment is stored as bytes, or as the text of a QR code drawn when the mail is sent (off the request path). */
-export type MailAttachment = { filename: string; cid?: string; contentType: string } & ({ base64: string } | { qrText: string });
+export type MailAttachment = { filename: string; cid?: string; contentType: string } & (
+  { base64: string } | { qrText: string }
+);
 
 export interface MailSender {
   send(mail: OutgoingMail): Promise<void>;
 }
 
 /** The one real sender: SMTP through nodemailer. In development the SMTP server is the local mailbox. */
-export function smtpSender(env: Pick<Env, 'SMTP_HOST' | 'SMTP_PORT' | 'SMTP_SECURE' | 'SMTP_USER' | 'SMTP_PASSWORD' | 'MAIL_FROM'>): MailSender {
+export function smtpSender(
+  env: Pick<Env, 'SMTP_HOST' | 'SMTP_PORT' | 'SMTP_SECURE' | 'SMTP_USER' | 'SMTP_PASSWORD' | 'MAIL_FROM'>,
+): MailSender {
   const local = ['127.0.0.1', 'localhost', '::1'].includes(env.SMTP_HOST);
   const transport = nodemailer.createTransport({
     host: env.SMTP_HOST,
@@ -40,8 +44,13 @@ export function smtpSender(env: Pick<Env, 'SMTP_HOST' | 'SMTP_PORT' | 'SMTP_SECU
         text: mail.text,
         attachments: await Promise.all(
           (mail.attachments ?? []).map(async (a) => ({
-            filename: a.filename, cid: a.cid, contentType: a.contentType,
-            content: 'qrText' in a ? await QRCode.toBuffer(a.qrText, { errorCorrectionLevel: 'M', margin: 2, width: 240 }) : Buffer.from(a.base64, 'base64'),
+            filename: a.filename,
+            cid: a.cid,
+            contentType: a.contentType,
+            content:
+              'qrText' in a
+                ? await QRCode.toBuffer(a.qrText, { errorCorrectionLevel: 'M', margin: 2, width: 240 })
+                : Buffer.from(a.base64, 'base64'),
           })),
         ),
       });

@@ -3,7 +3,21 @@ import { eq } from 'drizzle-orm';
 import { formatReference } from '../../../shared/booking/reference';
 import { BARRIERS, type Outcome } from '../../../shared/event-day/constants';
 import type { Db } from '../db/client';
-import { bookingItems, bookings, categories, events, followUps, itemOutcomes, knowledgeEntries, repairGroups, salvageParts, shifts, slots, users, venues } from '../db/schema/index';
+import {
+  bookingItems,
+  bookings,
+  categories,
+  events,
+  followUps,
+  itemOutcomes,
+  knowledgeEntries,
+  repairGroups,
+  salvageParts,
+  shifts,
+  slots,
+  users,
+  venues,
+} from '../db/schema/index';
 import { refreshEventCells } from '../features/impact/cells';
 
 /**
@@ -21,23 +35,128 @@ function prng(seed: number) {
   };
 }
 
-const FIRST = ['Ana', 'Bram', 'Cleo', 'Dara', 'Elio', 'Fern', 'Gus', 'Hana', 'Ivo', 'Jun', 'Kit', 'Lena', 'Milo', 'Nell', 'Otto', 'Pia', 'Quin', 'Rhea', 'Sami', 'Tove'];
-const LAST = ['Ashdown', 'Brackley', 'Corran', 'Dunmere', 'Elsworth', 'Farrow', 'Gillan', 'Hatherly', 'Inchley', 'Jessop', 'Kettering', 'Lowther', 'Marlow', 'Nettleby'];
+const FIRST = [
+  'Ana',
+  'Bram',
+  'Cleo',
+  'Dara',
+  'Elio',
+  'Fern',
+  'Gus',
+  'Hana',
+  'Ivo',
+  'Jun',
+  'Kit',
+  'Lena',
+  'Milo',
+  'Nell',
+  'Otto',
+  'Pia',
+  'Quin',
+  'Rhea',
+  'Sami',
+  'Tove',
+];
+const LAST = [
+  'Ashdown',
+  'Brackley',
+  'Corran',
+  'Dunmere',
+  'Elsworth',
+  'Farrow',
+  'Gillan',
+  'Hatherly',
+  'Inchley',
+  'Jessop',
+  'Kettering',
+  'Lowther',
+  'Marlow',
+  'Nettleby',
+];
 const ITEMS: { slug: string; fault: string; brand?: string; part: string; note: string }[] = [
-  { slug: 'kettle', fault: 'Does not switch off by itself.', brand: 'Brewmaster', part: 'Steam switch for a 1.7 l kettle', note: 'Bimetal steam switch stuck; cleaned the lever and re-seated the disc. Check the steam tube is clear.' },
-  { slug: 'toaster', fault: 'One slot stays cold.', part: 'Heating element, 2-slice', note: 'Element open circuit on one side (no continuity across its tabs).' },
-  { slug: 'lamp', fault: 'Flickers when moved.', part: 'E27 lampholder with cord grip', note: 'Loose neutral in the lampholder; cord grip missing so the cord pulled on the terminals.' },
-  { slug: 'vacuum-cleaner', fault: 'Loses suction after a minute.', brand: 'Tempest', part: 'Motor filter and belt', note: 'Filter clogged solid and belt slipping on the brush roll.' },
-  { slug: 'laptop', fault: 'Will not charge.', brand: 'Nimbus', part: 'DC jack with cable', note: "Jack's centre pin loose on the board; cracked solder joints." },
-  { slug: 'phone', fault: 'Screen cracked, touch works.', part: 'Replacement screen assembly', note: 'Digitiser fine; glass only. Heat the edges before lifting.' },
-  { slug: 'radio-hifi', fault: 'Hums on every station.', brand: 'Harrowgate', part: 'Smoothing capacitor 2200 µF 25 V', note: 'Reservoir capacitor bulging, ESR high; hum at 100 Hz.' },
-  { slug: 'clothing', fault: 'Zip has come apart.', part: 'Open-ended zip, 60 cm', note: 'Slider worn; teeth fine. A new slider would do if the stop is intact.' },
+  {
+    slug: 'kettle',
+    fault: 'Does not switch off by itself.',
+    brand: 'Brewmaster',
+    part: 'Steam switch for a 1.7 l kettle',
+    note: 'Bimetal steam switch stuck; cleaned the lever and re-seated the disc. Check the steam tube is clear.',
+  },
+  {
+    slug: 'toaster',
+    fault: 'One slot stays cold.',
+    part: 'Heating element, 2-slice',
+    note: 'Element open circuit on one side (no continuity across its tabs).',
+  },
+  {
+    slug: 'lamp',
+    fault: 'Flickers when moved.',
+    part: 'E27 lampholder with cord grip',
+    note: 'Loose neutral in the lampholder; cord grip missing so the cord pulled on the terminals.',
+  },
+  {
+    slug: 'vacuum-cleaner',
+    fault: 'Loses suction after a minute.',
+    brand: 'Tempest',
+    part: 'Motor filter and belt',
+    note: 'Filter clogged solid and belt slipping on the brush roll.',
+  },
+  {
+    slug: 'laptop',
+    fault: 'Will not charge.',
+    brand: 'Nimbus',
+    part: 'DC jack with cable',
+    note: "Jack's centre pin loose on the board; cracked solder joints.",
+  },
+  {
+    slug: 'phone',
+    fault: 'Screen cracked, touch works.',
+    part: 'Replacement screen assembly',
+    note: 'Digitiser fine; glass only. Heat the edges before lifting.',
+  },
+  {
+    slug: 'radio-hifi',
+    fault: 'Hums on every station.',
+    brand: 'Harrowgate',
+    part: 'Smoothing capacitor 2200 µF 25 V',
+    note: 'Reservoir capacitor bulging, ESR high; hum at 100 Hz.',
+  },
+  {
+    slug: 'clothing',
+    fault: 'Zip has come apart.',
+    part: 'Open-ended zip, 60 cm',
+    note: 'Slider worn; teeth fine. A new slider would do if the stop is intact.',
+  },
   { slug: 'clothing', fault: 'Hole in the elbow.', part: 'Wool patch', note: 'Darned the elbow with matching wool.' },
-  { slug: 'bicycle', fault: 'Gears slip.', part: 'Rear gear cable and outer', note: 'Cable frayed at the shifter; indexing was fine once replaced.' },
-  { slug: 'hair-dryer', fault: 'Cuts out after a few seconds.', part: 'Thermal cut-out, same rating', note: 'Thermal cut-out open; motor and element fine. Fit the same temperature rating only.' },
-  { slug: 'electric-toy', fault: 'Stopped moving.', part: 'Small DC motor', note: 'Motor brushes worn; motor draws no current.' },
-  { slug: 'power-tool', fault: 'Sparks and stops.', part: 'Carbon brushes', note: 'Brushes down to 3 mm; commutator clean.' },
-  { slug: 'television', fault: 'No picture, sound works.', part: 'LED backlight strips', note: 'Two LEDs in strip 3 open; the strip reads no forward voltage.' },
+  {
+    slug: 'bicycle',
+    fault: 'Gears slip.',
+    part: 'Rear gear cable and outer',
+    note: 'Cable frayed at the shifter; indexing was fine once replaced.',
+  },
+  {
+    slug: 'hair-dryer',
+    fault: 'Cuts out after a few seconds.',
+    part: 'Thermal cut-out, same rating',
+    note: 'Thermal cut-out open; motor and element fine. Fit the same temperature rating only.',
+  },
+  {
+    slug: 'electric-toy',
+    fault: 'Stopped moving.',
+    part: 'Small DC motor',
+    note: 'Motor brushes worn; motor draws no current.',
+  },
+  {
+    slug: 'power-tool',
+    fault: 'Sparks and stops.',
+    part: 'Carbon brushes',
+    note: 'Brushes down to 3 mm; commutator clean.',
+  },
+  {
+    slug: 'television',
+    fault: 'No picture, sound works.',
+    part: 'LED backlight strips',
+    note: 'Two LEDs in strip 3 open; the strip reads no forward voltage.',
+  },
 ];
 
 function pickOutcome(r: number): Outcome | null {
@@ -54,8 +173,26 @@ export async function seedHistory(tx: Db, now: Date) {
   const people = await tx.select().from(users);
   const who = (email: string) => people.find((p) => p.email === email)!.id;
   const plan = [
-    { venue: 'Tanner’s Yard Hall', title: 'Kestlebridge monthly repairs', months: 12, items: [10, 16], team: ['fixer@example.org', 'wren.ashcombe@example.org', 'idris.pellow@example.org', 'hester.mayle@example.org', 'host@example.org'] },
-    { venue: 'Old School Library', title: 'Orrin Vale fixing evening', months: 6, items: [6, 10], team: ['organiser@example.org', 'cosmo.brightwater@example.org'] },
+    {
+      venue: 'Tanner’s Yard Hall',
+      title: 'Kestlebridge monthly repairs',
+      months: 12,
+      items: [10, 16],
+      team: [
+        'fixer@example.org',
+        'wren.ashcombe@example.org',
+        'idris.pellow@example.org',
+        'hester.mayle@example.org',
+        'host@example.org',
+      ],
+    },
+    {
+      venue: 'Old School Library',
+      title: 'Orrin Vale fixing evening',
+      months: 6,
+      items: [6, 10],
+      team: ['organiser@example.org', 'cosmo.brightwater@example.org'],
+    },
   ];
   const eventIds: number[] = [];
   let refBytes = 1;
@@ -65,33 +202,112 @@ export async function seedHistory(tx: Db, now: Date) {
     for (let m = p.months; m >= 1; m--) {
       const start = new Date(Date.UTC(now.getUTCFullYear(), now.getUTCMonth() - m, 12, 10));
       const end = new Date(start.getTime() + 3 * 3600_000);
-      const [{ id: eventId }] = await tx.insert(events).values({ groupId: group.id, venueId: venue.id, title: p.title, description: 'A past session.', startsAt: start, endsAt: end, slotMinutes: 180, slotCapacity: 20, skillLimits: {}, status: 'closed', publishedAt: new Date(start.getTime() - 20 * 86400_000), thankYouSentAt: new Date(end.getTime() + 2 * 3600_000) }).$returningId();
+      const [{ id: eventId }] = await tx
+        .insert(events)
+        .values({
+          groupId: group.id,
+          venueId: venue.id,
+          title: p.title,
+          description: 'A past session.',
+          startsAt: start,
+          endsAt: end,
+          slotMinutes: 180,
+          slotCapacity: 20,
+          skillLimits: {},
+          status: 'closed',
+          publishedAt: new Date(start.getTime() - 20 * 86400_000),
+          thankYouSentAt: new Date(end.getTime() + 2 * 3600_000),
+        })
+        .$returningId();
       eventIds.push(eventId);
-      const [{ id: slotId }] = await tx.insert(slots).values({ eventId, startsAt: start, endsAt: end, capacity: 20, booked: 0 }).$returningId();
-      await tx.insert(shifts).values(p.team.filter((e) => people.some((x) => x.email === e)).map((e) => ({ eventId, userId: who(e), coming: true, startsAt: start, endsAt: end })));
+      const [{ id: slotId }] = await tx
+        .insert(slots)
+        .values({ eventId, startsAt: start, endsAt: end, capacity: 20, booked: 0 })
+        .$returningId();
+      await tx
+        .insert(shifts)
+        .values(
+          p.team
+            .filter((e) => people.some((x) => x.email === e))
+            .map((e) => ({ eventId, userId: who(e), coming: true, startsAt: start, endsAt: end })),
+        );
       const n = p.items[0] + Math.floor(rand() * (p.items[1] - p.items[0] + 1));
       for (let i = 0; i < n; i++) {
         const spec = ITEMS[Math.floor(rand() * ITEMS.length)];
         const cat = cats.get(spec.slug)!;
         const name = `${FIRST[Math.floor(rand() * FIRST.length)]} ${LAST[Math.floor(rand() * LAST.length)]}`;
         const reference = formatReference(createHash('sha256').update(`history-${refBytes++}`).digest());
-        const [{ id: bookingId }] = await tx.insert(bookings).values({ reference, eventId, slotId, visitorName: name, visitorEmail: `${name.split(' ')[0].toLowerCase()}.${refBytes}@example.org`, manageTokenHash: createHash('sha256').update(reference).digest('hex'), consentAt: start, walkIn: rand() < 0.2 }).$returningId();
+        const [{ id: bookingId }] = await tx
+          .insert(bookings)
+          .values({
+            reference,
+            eventId,
+            slotId,
+            visitorName: name,
+            visitorEmail: `${name.split(' ')[0].toLowerCase()}.${refBytes}@example.org`,
+            manageTokenHash: createHash('sha256').update(reference).digest('hex'),
+            consentAt: start,
+            walkIn: rand() < 0.2,
+          })
+          .$returningId();
         const weighed = rand() < 0.3 ? Math.round(cat.avgWeightKg * (0.7 + rand() * 0.6) * 100) / 100 : null;
-        const [{ id: itemId }] = await tx.insert(bookingItems).values({ bookingId, categoryId: cat.id, brand: spec.brand ?? null, fault: spec.fault, mains: Boolean(cat.mains), position: 0, status: 'done', weighedKg: weighed, checkedInAt: start, startedAt: start, doneAt: end }).$returningId();
+        const [{ id: itemId }] = await tx
+          .insert(bookingItems)
+          .values({
+            bookingId,
+            categoryId: cat.id,
+            brand: spec.brand ?? null,
+            fault: spec.fault,
+            mains: Boolean(cat.mains),
+            position: 0,
+            status: 'done',
+            weighedKg: weighed,
+            checkedInAt: start,
+            startedAt: start,
+            doneAt: end,
+          })
+          .$returningId();
         const outcome = pickOutcome(rand());
         if (outcome) {
           await tx.insert(itemOutcomes).values({
-            itemId, outcome, barrier: outcome === 'end-of-life' ? BARRIERS[Math.floor(rand() * BARRIERS.length)] : null,
-            partDescription: outcome === 'parts-needed' ? spec.part : null, partCostCents: outcome === 'parts-needed' ? 300 + Math.floor(rand() * 3000) : null,
-            minutes: 10 + Math.floor(rand() * 50), notes: rand() < 0.6 ? spec.note : null, recordedBy: who(p.team[0]), recordedAt: end,
+            itemId,
+            outcome,
+            barrier: outcome === 'end-of-life' ? BARRIERS[Math.floor(rand() * BARRIERS.length)] : null,
+            partDescription: outcome === 'parts-needed' ? spec.part : null,
+            partCostCents: outcome === 'parts-needed' ? 300 + Math.floor(rand() * 3000) : null,
+            minutes: 10 + Math.floor(rand() * 50),
+            notes: rand() < 0.6 ? spec.note : null,
+            recordedBy: who(p.team[0]),
+            recordedAt: end,
           });
           const [o] = await tx.select().from(itemOutcomes).where(eq(itemOutcomes.itemId, itemId));
-          if (o.notes) await tx.insert(knowledgeEntries).values({ itemId, groupId: group.id, categoryId: cat.id, brand: spec.brand ?? '', model: '', outcome, symptom: spec.fault, notes: o.notes, measured: '', faultyPart: outcome === 'fixed' || outcome === 'parts-needed' ? spec.part : '', fix: '', eventDate: start });
+          if (o.notes)
+            await tx.insert(knowledgeEntries).values({
+              itemId,
+              groupId: group.id,
+              categoryId: cat.id,
+              brand: spec.brand ?? '',
+              model: '',
+              outcome,
+              symptom: spec.fault,
+              notes: o.notes,
+              measured: '',
+              faultyPart: outcome === 'fixed' || outcome === 'parts-needed' ? spec.part : '',
+              fix: '',
+              eventDate: start,
+            });
         }
         if (outcome === 'parts-needed') {
           // The last three months' parts are still being followed up; older ones ended one way or the other.
           const recent = m <= 3;
-          await tx.insert(followUps).values({ itemId, groupId: group.id, status: recent ? (rand() < 0.5 ? 'open' : 'part-ordered') : 'gave-up', createdAt: end, mailedAt: end, remindedAt: recent && m < 3 ? null : new Date(end.getTime() + 43 * 86400_000) });
+          await tx.insert(followUps).values({
+            itemId,
+            groupId: group.id,
+            status: recent ? (rand() < 0.5 ? 'open' : 'part-ordered') : 'gave-up',
+            createdAt: end,
+            mailedAt: end,
+            remindedAt: recent && m < 3 ? null : new Date(end.getTime() + 43 * 86400_000),
+          });
         }
       }
       await tx.update(slots).set({ booked: n }).where(eq(slots.id, slotId));
@@ -102,12 +318,67 @@ export async function seedHistory(tx: Db, now: Date) {
   const [k] = await tx.select().from(repairGroups).where(eq(repairGroups.slug, 'kestlebridge-menders'));
   await tx.update(repairGroups).set({ shareKnowledge: true }).where(eq(repairGroups.id, k.id));
   await tx.insert(salvageParts).values([
-    { groupId: k.id, type: 'bipolar-transistor', value: 'NPN switching transistor 400 V 4 A', ratings: { polarity: 'NPN', voltageV: 400, currentA: 4, powerW: 75 }, package: 'TO-220', pinout: 'BCE', quantity: 2, box: 'Box 2 · semiconductors', notes: 'From a dead desk lamp power supply.' },
-    { groupId: k.id, type: 'capacitor', value: '2200 µF 25 V electrolytic, 105 °C', ratings: { capacitanceF: 0.0022, voltageV: 25 }, package: 'radial', quantity: 3, box: 'Box 1 · capacitors' },
-    { groupId: k.id, type: 'fuse', value: '13 A ceramic plug fuse', ratings: { currentA: 13, voltageV: 240 }, quantity: 6, box: 'Fuse tin' },
-    { groupId: k.id, type: 'fuse', value: '3 A ceramic plug fuse', ratings: { currentA: 3, voltageV: 240 }, quantity: 4, box: 'Fuse tin' },
-    { groupId: k.id, type: 'thermal-cutout', value: 'Thermal cut-out 240 °C 10 A', ratings: { temperatureC: 240, currentA: 10, voltageV: 250 }, package: 'axial', quantity: 1, box: 'Box 4 · heating parts' },
-    { groupId: k.id, type: 'resistor', value: '1 Ω 5 W wirewound', ratings: { resistanceOhm: 1, powerW: 5, tolerancePct: 5 }, package: 'axial', quantity: 2, box: 'Box 3 · resistors' },
-    { groupId: k.id, type: 'motor', value: 'Small DC motor 3 V', ratings: { voltageV: 3 }, quantity: 2, box: 'Box 5 · motors' },
+    {
+      groupId: k.id,
+      type: 'bipolar-transistor',
+      value: 'NPN switching transistor 400 V 4 A',
+      ratings: { polarity: 'NPN', voltageV: 400, currentA: 4, powerW: 75 },
+      package: 'TO-220',
+      pinout: 'BCE',
+      quantity: 2,
+      box: 'Box 2 · semiconductors',
+      notes: 'From a dead desk lamp power supply.',
+    },
+    {
+      groupId: k.id,
+      type: 'capacitor',
+      value: '2200 µF 25 V electrolytic, 105 °C',
+      ratings: { capacitanceF: 0.0022, voltageV: 25 },
+      package: 'radial',
+      quantity: 3,
+      box: 'Box 1 · capacitors',
+    },
+    {
+      groupId: k.id,
+      type: 'fuse',
+      value: '13 A ceramic plug fuse',
+      ratings: { currentA: 13, voltageV: 240 },
+      quantity: 6,
+      box: 'Fuse tin',
+    },
+    {
+      groupId: k.id,
+      type: 'fuse',
+      value: '3 A ceramic plug fuse',
+      ratings: { currentA: 3, voltageV: 240 },
+      quantity: 4,
+      box: 'Fuse tin',
+    },
+    {
+      groupId: k.id,
+      type: 'thermal-cutout',
+      value: 'Thermal cut-out 240 °C 10 A',
+      ratings: { temperatureC: 240, currentA: 10, voltageV: 250 },
+      package: 'axial',
+      quantity: 1,
+      box: 'Box 4 · heating parts',
+    },
+    {
+      groupId: k.id,
+      type: 'resistor',
+      value: '1 Ω 5 W wirewound',
+      ratings: { resistanceOhm: 1, powerW: 5, tolerancePct: 5 },
+      package: 'axial',
+      quantity: 2,
+      box: 'Box 3 · resistors',
+    },
+    {
+      groupId: k.id,
+      type: 'motor',
+      value: 'Small DC motor 3 V',
+      ratings: { voltageV: 3 },
+      quantity: 2,
+      box: 'Box 5 · motors',
+    },
   ]);
 }

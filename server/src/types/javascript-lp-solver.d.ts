@@ -6,6 +6,8 @@ declare module 'javascript-lp-solver' {
     variables: Record<string, Record<string, number>>;
     ints?: Record<string, 1>;
   }
-  const solver: { Solve(model: Model): { feasible: boolean; result: number; bounded: boolean; [variable: string]: unknown } };
+  const solver: {
+    Solve(model: Model): { feasible: boolean; result: number; bounded: boolean; [variable: string]: unknown };
+  };
   export default solver;
 }

@@ -17,26 +17,58 @@ export function AppShell() {
 
   const links: { to: string; label: string; end?: boolean }[] = [{ to: paths.events(), label: 'Sessions', end: true }];
   if (user) {
-    for (const g of groupsWithRole(user, 'organiser')) links.push({ to: paths.groupEvents(g.groupId), label: `${g.groupName}` });
+    for (const g of groupsWithRole(user, 'organiser'))
+      links.push({ to: paths.groupEvents(g.groupId), label: `${g.groupName}` });
     if (groupsWithRole(user, 'host').length) links.push({ to: paths.desk(), label: 'Reception desk' });
-    if (groupsWithRole(user, 'fixer').length) links.push({ to: paths.bench(), label: 'My bench' }, { to: paths.mySkills(), label: 'My skills' });
-    if (user.roles.length) links.push({ to: paths.knowledge(), label: 'Repair notes' }, { to: paths.calculators(), label: 'Calculators' });
-    if (user.admin) links.push({ to: paths.admin(), label: 'Network admin', end: true }, { to: paths.adminCategories(), label: 'Categories' }, { to: paths.adminMailbox(), label: 'Mailbox' });
+    if (groupsWithRole(user, 'fixer').length)
+      links.push({ to: paths.bench(), label: 'My bench' }, { to: paths.mySkills(), label: 'My skills' });
+    if (user.roles.length)
+      links.push({ to: paths.knowledge(), label: 'Repair notes' }, { to: paths.calculators(), label: 'Calculators' });
+    if (user.admin)
+      links.push(
+        { to: paths.admin(), label: 'Network admin', end: true },
+        { to: paths.adminCategories(), label: 'Categories' },
+        { to: paths.adminMailbox(), label: 'Mailbox' },
+      );
   }
 
   return (
     <div className="flex min-h-dvh flex-col">
-      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:rounded focus:bg-white focus:p-2">Skip to content</a>
+      <a
+        href="#main"
+        className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:rounded focus:bg-white focus:p-2"
+      >
+        Skip to content
+      </a>
       <header className="border-b border-ink/10 bg-white">
         <div className="mx-auto flex max-w-6xl items-center justify-between gap-4 px-4 py-3">
-          <Link to={paths.home()} aria-label="Mendery home"><Logo /></Link>
-          <button className="rounded-lg p-2 text-navy ring-1 ring-navy/20 md:hidden" aria-expanded={open} aria-controls="main-nav" onClick={() => setOpen((v) => !v)}>
+          <Link to={paths.home()} aria-label="Mendery home">
+            <Logo />
+          </Link>
+          <button
+            className="rounded-lg p-2 text-navy ring-1 ring-navy/20 md:hidden"
+            aria-expanded={open}
+            aria-controls="main-nav"
+            onClick={() => setOpen((v) => !v)}
+          >
             <span className="sr-only">Menu</span>
-            <svg viewBox="0 0 24 24" className="size-6" aria-hidden><path d="M4 7h16M4 12h16M4 17h16" stroke="currentColor" strokeWidth="2" strokeLinecap="round" /></svg>
+            <svg viewBox="0 0 24 24" className="size-6" aria-hidden>
+              <path d="M4 7h16M4 12h16M4 17h16" stroke="currentColor" strokeWidth="2" strokeLinecap="round" />
+            </svg>
           </button>
-          <nav id="main-nav" aria-label="Main" className={`${open ? 'absolute inset-x-0 top-16 z-20 border-b border-ink/10 bg-white p-4 shadow-lg' : 'hidden'} md:static md:block md:border-0 md:p-0 md:shadow-none`}>
+          <nav
+            id="main-nav"
+            aria-label="Main"
+            className={`${open ? 'absolute inset-x-0 top-16 z-20 border-b border-ink/10 bg-white p-4 shadow-lg' : 'hidden'} md:static md:block md:border-0 md:p-0 md:shadow-none`}
+          >
             <ul className="flex flex-col gap-1 md:flex-row md:items-center" onClick={() => setOpen(false)}>
-              {links.map((l) => <li key={l.to}><NavLink to={l.to} end={l.end} className={linkClass}>{l.label}</NavLink></li>)}
+              {links.map((l) => (
+                <li key={l.to}>
+                  <NavLink to={l.to} end={l.end} className={linkClass}>
+                    {l.label}
+                  </NavLink>
+                </li>
+              ))}
               {user ? (
                 <li className="md:ml-3">
                   <button
@@ -48,8 +80,16 @@ export function AppShell() {
                 </li>
               ) : (
                 <>
-                  <li><NavLink to={paths.volunteer()} className={linkClass}>Volunteer</NavLink></li>
-                  <li><NavLink to={paths.signIn()} className={linkClass}>Sign in</NavLink></li>
+                  <li>
+                    <NavLink to={paths.volunteer()} className={linkClass}>
+                      Volunteer
+                    </NavLink>
+                  </li>
+                  <li>
+                    <NavLink to={paths.signIn()} className={linkClass}>
+                      Sign in
+                    </NavLink>
+                  </li>
                 </>
               )}
             </ul>
@@ -62,7 +102,9 @@ export function AppShell() {
       <footer className="border-t border-ink/10 bg-white">
         <div className="mx-auto flex max-w-6xl flex-wrap items-center justify-between gap-3 px-4 py-5 text-sm text-ink-soft">
           <span>Mendery — community repair, booked and counted.</span>
-          <Link to={paths.safety()} className="font-semibold text-navy underline">Safety at the bench</Link>
+          <Link to={paths.safety()} className="font-semibold text-navy underline">
+            Safety at the bench
+          </Link>
         </div>
       </footer>
     </div>

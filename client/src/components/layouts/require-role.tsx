@@ -10,8 +10,18 @@ export function RequireRole({ allow, children }: { allow: (user: SessionUser) =>
   const { data: user, isPending, error } = useUser();
   const location = useLocation();
   if (isPending) return <Spinner />;
-  if (error) return <Alert tone="error" title="Could not check who you are">{error.message}</Alert>;
+  if (error)
+    return (
+      <Alert tone="error" title="Could not check who you are">
+        {error.message}
+      </Alert>
+    );
   if (!user) return <Navigate to={paths.signIn(location.pathname + location.search)} replace />;
-  if (!allow(user)) return <Alert tone="error" title="Not for your role">This page is for other roles. Ask an organiser of your group if you need access.</Alert>;
+  if (!allow(user))
+    return (
+      <Alert tone="error" title="Not for your role">
+        This page is for other roles. Ask an organiser of your group if you need access.
+      </Alert>
+    );
   return <>{children}</>;
 }

@@ -7,7 +7,14 @@ const styles = {
   quiet: 'text-navy hover:bg-navy/5',
 };
 
-export function Button({ variant = 'primary', busy, className = '', children, disabled, ...rest }: ButtonHTMLAttributes<HTMLButtonElement> & { variant?: keyof typeof styles; busy?: boolean }) {
+export function Button({
+  variant = 'primary',
+  busy,
+  className = '',
+  children,
+  disabled,
+  ...rest
+}: ButtonHTMLAttributes<HTMLButtonElement> & { variant?: keyof typeof styles; busy?: boolean }) {
   return (
     <button
       {...rest}
@@ -15,7 +22,9 @@ export function Button({ variant = 'primary', busy, className = '', children, di
       aria-busy={busy || undefined}
       className={`inline-flex min-h-11 items-center justify-center gap-2 rounded-lg px-4 py-2 font-bold transition disabled:cursor-not-allowed disabled:opacity-60 ${styles[variant]} ${className}`}
     >
-      {busy && <span className="size-4 animate-spin rounded-full border-2 border-current border-r-transparent" aria-hidden />}
+      {busy && (
+        <span className="size-4 animate-spin rounded-full border-2 border-current border-r-transparent" aria-hidden />
+      )}
       {children}
     </button>
   );

@@ -2,7 +2,29 @@ import { useEffect, useRef, type ReactNode } from 'react';
 import { Button } from './button';
 
 /** A modal question before anything destructive; Escape or "Keep" cancels. */
-export function ConfirmDialog({ open, title, message, confirmLabel, onConfirm, onCancel, busy, children, tone = 'danger', cancelLabel = 'Keep' }: { open: boolean; title: string; message: string; confirmLabel: string; onConfirm: () => void; onCancel: () => void; busy?: boolean; children?: ReactNode; tone?: 'danger' | 'primary'; cancelLabel?: string }) {
+export function ConfirmDialog({
+  open,
+  title,
+  message,
+  confirmLabel,
+  onConfirm,
+  onCancel,
+  busy,
+  children,
+  tone = 'danger',
+  cancelLabel = 'Keep',
+}: {
+  open: boolean;
+  title: string;
+  message: string;
+  confirmLabel: string;
+  onConfirm: () => void;
+  onCancel: () => void;
+  busy?: boolean;
+  children?: ReactNode;
+  tone?: 'danger' | 'primary';
+  cancelLabel?: string;
+}) {
   const ref = useRef<HTMLDialogElement>(null);
   useEffect(() => {
     const d = ref.current;
@@ -11,14 +33,25 @@ export function ConfirmDialog({ open, title, message, confirmLabel, onConfirm, o
     if (!open && d.open) d.close();
   }, [open]);
   return (
-    <dialog ref={ref} onCancel={(e) => { e.preventDefault(); onCancel(); }} className="m-auto w-[min(28rem,92vw)] rounded-xl p-0 shadow-xl backdrop:bg-ink/40">
+    <dialog
+      ref={ref}
+      onCancel={(e) => {
+        e.preventDefault();
+        onCancel();
+      }}
+      className="m-auto w-[min(28rem,92vw)] rounded-xl p-0 shadow-xl backdrop:bg-ink/40"
+    >
       <div className="space-y-3 p-6">
         <h2 className="text-lg">{title}</h2>
         <p className="text-ink-soft">{message}</p>
         {children}
         <div className="flex justify-end gap-2 pt-2">
-          <Button variant="secondary" onClick={onCancel} autoFocus>{cancelLabel}</Button>
-          <Button variant={tone} onClick={onConfirm} busy={busy}>{confirmLabel}</Button>
+          <Button variant="secondary" onClick={onCancel} autoFocus>
+            {cancelLabel}
+          </Button>
+          <Button variant={tone} onClick={onConfirm} busy={busy}>
+            {confirmLabel}
+          </Button>
         </div>
       </div>
     </dialog>

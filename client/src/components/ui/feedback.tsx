@@ -1,6 +1,14 @@
 import type { ReactNode } from 'react';
 
-export function Alert({ tone = 'info', title, children }: { tone?: 'info' | 'error' | 'success' | 'caution'; title?: string; children: ReactNode }) {
+export function Alert({
+  tone = 'info',
+  title,
+  children,
+}: {
+  tone?: 'info' | 'error' | 'success' | 'caution';
+  title?: string;
+  children: ReactNode;
+}) {
   const styles = {
     info: 'bg-navy/5 border-navy/30',
     error: 'bg-alert-light border-alert text-alert',
@@ -27,15 +35,29 @@ export function Spinner({ label = 'Loading…' }: { label?: string }) {
 export function EmptyState({ title, children, icon = '○' }: { title: string; children?: ReactNode; icon?: string }) {
   return (
     <div className="rounded-xl border-2 border-dashed border-ink/15 px-6 py-10 text-center">
-      <div className="mb-2 text-3xl text-copper" aria-hidden>{icon}</div>
+      <div className="mb-2 text-3xl text-copper" aria-hidden>
+        {icon}
+      </div>
       <p className="font-bold text-navy">{title}</p>
       {children && <div className="mx-auto mt-1 max-w-md text-sm text-ink-soft">{children}</div>}
     </div>
   );
 }
 
-export function Card({ children, className = '', flush = false }: { children: ReactNode; className?: string; flush?: boolean }) {
-  return <section className={`rounded-xl bg-white shadow-sm ring-1 ring-ink/5 ${flush ? '' : 'p-5'} ${className}`}>{children}</section>;
+export function Card({
+  children,
+  className = '',
+  flush = false,
+}: {
+  children: ReactNode;
+  className?: string;
+  flush?: boolean;
+}) {
+  return (
+    <section className={`rounded-xl bg-white shadow-sm ring-1 ring-ink/5 ${flush ? '' : 'p-5'} ${className}`}>
+      {children}
+    </section>
+  );
 }
 
 export function PageTitle({ title, lead }: { title: string; lead?: ReactNode }) {

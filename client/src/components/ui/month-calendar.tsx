@@ -6,7 +6,17 @@ import type { ComponentProps } from 'react';
  * A month grid in Mendery's settings: weeks from Monday, 24-hour times, text arrows instead of an icon font,
  * events as coloured blocks with a short line of their own (time, and what `detail` says) that fits a phone.
  */
-export function MonthCalendar({ events, detail, onOpen, today = false }: { events: ComponentProps<typeof FullCalendar>['events']; detail?: (extended: Record<string, unknown>) => string; onOpen?: (id: string) => void; today?: boolean }) {
+export function MonthCalendar({
+  events,
+  detail,
+  onOpen,
+  today = false,
+}: {
+  events: ComponentProps<typeof FullCalendar>['events'];
+  detail?: (extended: Record<string, unknown>) => string;
+  onOpen?: (id: string) => void;
+  today?: boolean;
+}) {
   return (
     <FullCalendar
       plugins={[dayGridPlugin]}

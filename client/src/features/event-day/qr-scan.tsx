@@ -19,15 +19,23 @@ export function QrScan({ onResult, onClose }: { onResult: (text: string) => void
         const { default: QrScanner } = await import('qr-scanner');
         if (cancelled || !video.current) return;
         if (!(await QrScanner.hasCamera())) throw new Error('no-camera');
-        const s = new QrScanner(video.current, (r) => {
-          s.stop();
-          done.current(r.data);
-        }, { returnDetailedScanResult: true, highlightScanRegion: true, highlightCodeOutline: true });
+        const s = new QrScanner(
+          video.current,
+          (r) => {
+            s.stop();
+            done.current(r.data);
+          },
+          { returnDetailedScanResult: true, highlightScanRegion: true, highlightCodeOutline: true },
+        );
         scanner = s;
         await s.start();
       } catch (e) {
         const msg = String((e as Error)?.message ?? e);
-        setError(msg === 'no-camera' ? 'This device has no camera Mendery can use.' : 'The camera could not start (permission refused, or the page is not on https).');
+        setError(
+          msg === 'no-camera'
+            ? 'This device has no camera Mendery can use.'
+            : 'The camera could not start (permission refused, or the page is not on https).',
+        );
       }
     })();
     return () => {
@@ -40,9 +48,17 @@ export function QrScan({ onResult, onClose }: { onResult: (text: string) => void
     <div className="space-y-3 rounded-xl bg-ink p-3 text-white">
       <div className="flex items-center justify-between">
         <p className="font-bold">Hold the QR code from the booking mail up to the camera</p>
-        <Button variant="secondary" onClick={onClose}>Close camera</Button>
+        <Button variant="secondary" onClick={onClose}>
+          Close camera
+        </Button>
       </div>
-      {error ? <p role="alert" className="rounded-lg bg-white/10 p-3">{error} Type the reference instead.</p> : <video ref={video} className="aspect-video w-full rounded-lg bg-black object-cover" muted playsInline />}
+      {error ? (
+        <p role="alert" className="rounded-lg bg-white/10 p-3">
+          {error} Type the reference instead.
+        </p>
+      ) : (
+        <video ref={video} className="aspect-video w-full rounded-lg bg-black object-cover" muted playsInline />
+      )}
     </div>
   );
 }

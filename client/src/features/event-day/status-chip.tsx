@@ -11,6 +11,9 @@ const STATUS_TONE: Record<ItemStatus, string> = {
 };
 
 export function StatusChip({ status }: { status: ItemStatus }) {
-  return <span className={`inline-block rounded-full px-2 py-0.5 text-xs font-bold ${STATUS_TONE[status]}`}>{ITEM_STATUS_LABELS[status]}</span>;
+  return (
+    <span className={`inline-block rounded-full px-2 py-0.5 text-xs font-bold ${STATUS_TONE[status]}`}>
+      {ITEM_STATUS_LABELS[status]}
+    </span>
+  );
 }
-

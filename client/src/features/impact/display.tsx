@@ -11,9 +11,20 @@ const monthFormat = new Intl.DateTimeFormat('en-GB', { month: 'short', year: 'nu
 const longMonthFormat = new Intl.DateTimeFormat('en-GB', { month: 'long', year: 'numeric', timeZone: 'UTC' });
 export const monthLabel = (m: string) => monthFormat.format(new Date(`${m}-01T00:00:00Z`));
 export const longMonth = (m: string) => longMonthFormat.format(new Date(`${m}-01T00:00:00Z`));
-export const COLOURS = { fixed: '#5d7f6a', partsNeeded: '#b8612f', advice: '#23395d', endOfLife: '#8d949c', grid: '#e7e2da' };
-export const CO2E = <>CO<sub>2</sub>e</>;
-export const linkButton = 'inline-flex min-h-11 items-center justify-center gap-2 rounded-lg px-4 py-2 font-bold transition';
+export const COLOURS = {
+  fixed: '#5d7f6a',
+  partsNeeded: '#b8612f',
+  advice: '#23395d',
+  endOfLife: '#8d949c',
+  grid: '#e7e2da',
+};
+export const CO2E = (
+  <>
+    CO<sub>2</sub>e
+  </>
+);
+export const linkButton =
+  'inline-flex min-h-11 items-center justify-center gap-2 rounded-lg px-4 py-2 font-bold transition';
 
 /** A whole number above 0 from the URL, else nothing. */
 export function positiveInt(raw: string | null): number | undefined {
@@ -26,15 +37,33 @@ export const isoDate = (raw: string | null) => (raw && /^\d{4}-\d{2}-\d{2}$/.tes
  * A chart with its heading and a sentence that says what it shows; the drawing itself is hidden from screen
  * readers, which get the same figures (with their links) in the table under it.
  */
-export function ChartCard({ title, summary, table, children, level = 'h3' }: { title: string; summary: string; table: ReactNode; children: ReactNode; level?: 'h2' | 'h3' }) {
+export function ChartCard({
+  title,
+  summary,
+  table,
+  children,
+  level = 'h3',
+}: {
+  title: string;
+  summary: string;
+  table: ReactNode;
+  children: ReactNode;
+  level?: 'h2' | 'h3';
+}) {
   const headingId = useId();
   const Heading = level;
   return (
     <Card className="min-w-0 p-4 sm:p-5">
       <section aria-labelledby={headingId}>
-        <Heading id={headingId} className="text-lg">{title}</Heading>
+        <Heading id={headingId} className="text-lg">
+          {title}
+        </Heading>
         <p className="mb-2 text-sm text-ink-soft">{summary}</p>
-        {children && <div aria-hidden className="h-[260px] w-full min-w-0">{children}</div>}
+        {children && (
+          <div aria-hidden className="h-[260px] w-full min-w-0">
+            {children}
+          </div>
+        )}
         {table && (
           <details className="mt-2 text-sm">
             <summary className="min-h-11 cursor-pointer py-2 font-bold text-navy">Figures as a table</summary>
@@ -52,20 +81,34 @@ export function FactorTable({ categories }: { categories: Method['categories'] }
     <table className="w-full min-w-[40rem] text-sm">
       <thead>
         <tr className="border-b border-ink/10 text-left text-ink-soft">
-          <th scope="col" className="py-1 pr-3 font-semibold">Kind of item</th>
-          <th scope="col" className="py-1 pr-3 text-right font-semibold">Average weight (kg)</th>
-          <th scope="col" className="py-1 pr-3 font-semibold">Weight source</th>
-          <th scope="col" className="py-1 pr-3 text-right font-semibold">kg CO2e per kg</th>
-          <th scope="col" className="py-1 pr-3 font-semibold">Factor source</th>
+          <th scope="col" className="py-1 pr-3 font-semibold">
+            Kind of item
+          </th>
+          <th scope="col" className="py-1 pr-3 text-right font-semibold">
+            Average weight (kg)
+          </th>
+          <th scope="col" className="py-1 pr-3 font-semibold">
+            Weight source
+          </th>
+          <th scope="col" className="py-1 pr-3 text-right font-semibold">
+            kg CO2e per kg
+          </th>
+          <th scope="col" className="py-1 pr-3 font-semibold">
+            Factor source
+          </th>
         </tr>
       </thead>
       <tbody className="divide-y divide-ink/5 align-top">
         {categories.map((c) => (
           <tr key={c.id}>
-            <th scope="row" className="py-1 pr-3 text-left font-semibold">{c.name}</th>
+            <th scope="row" className="py-1 pr-3 text-left font-semibold">
+              {c.name}
+            </th>
             <td className="py-1 pr-3 text-right tabular-nums">{oneDp.format(c.avgWeightKg)}</td>
             <td className="py-1 pr-3">{c.weightSource}</td>
-            <td className="py-1 pr-3 text-right tabular-nums">{c.co2ePerKg === null ? '—' : oneDp.format(c.co2ePerKg)}</td>
+            <td className="py-1 pr-3 text-right tabular-nums">
+              {c.co2ePerKg === null ? '—' : oneDp.format(c.co2ePerKg)}
+            </td>
             <td className="py-1 pr-3">{c.co2eSource ?? 'No sourced factor: counted as 0'}</td>
           </tr>
         ))}
@@ -78,7 +121,15 @@ export function FactorTable({ categories }: { categories: Method['categories'] }
  * A horizontal bar chart by category (or barrier): one or more series, a whole-number or percentage axis, and a
  * bar that leads to its records when `onPick` is given.
  */
-export function HorizontalBars<T extends object>({ data, labelKey, labelWidth = 140, bars, percentAxis = false, legend = false, onPick }: {
+export function HorizontalBars<T extends object>({
+  data,
+  labelKey,
+  labelWidth = 140,
+  bars,
+  percentAxis = false,
+  legend = false,
+  onPick,
+}: {
   data: T[];
   labelKey: keyof T & string;
   labelWidth?: number;
@@ -89,14 +140,41 @@ export function HorizontalBars<T extends object>({ data, labelKey, labelWidth = 
 }) {
   return (
     <ResponsiveContainer width="100%" height={260}>
-      <BarChart data={data} layout="vertical" margin={{ top: 0, right: 12, bottom: 0, left: 0 }} accessibilityLayer={false}>
+      <BarChart
+        data={data}
+        layout="vertical"
+        margin={{ top: 0, right: 12, bottom: 0, left: 0 }}
+        accessibilityLayer={false}
+      >
         <CartesianGrid horizontal={false} stroke={COLOURS.grid} />
-        {percentAxis ? <XAxis type="number" domain={[0, 100]} unit="%" tick={{ fontSize: 12 }} /> : <XAxis type="number" allowDecimals={false} tick={{ fontSize: 12 }} />}
+        {percentAxis ? (
+          <XAxis type="number" domain={[0, 100]} unit="%" tick={{ fontSize: 12 }} />
+        ) : (
+          <XAxis type="number" allowDecimals={false} tick={{ fontSize: 12 }} />
+        )}
         <YAxis type="category" dataKey={labelKey as never} width={labelWidth} tick={{ fontSize: 11, maxLines: 2 }} />
-        <Tooltip cursor={{ fill: 'rgba(35,57,93,0.06)' }} {...(percentAxis ? { formatter: (v: unknown, name: unknown) => [`${v}%`, String(name)] } : {})} />
-        {legend && <Legend wrapperStyle={{ fontSize: 12 }} itemSorter={null} formatter={(value) => <span className="text-ink">{value}</span>} />}
+        <Tooltip
+          cursor={{ fill: 'rgba(35,57,93,0.06)' }}
+          {...(percentAxis ? { formatter: (v: unknown, name: unknown) => [`${v}%`, String(name)] } : {})}
+        />
+        {legend && (
+          <Legend
+            wrapperStyle={{ fontSize: 12 }}
+            itemSorter={null}
+            formatter={(value) => <span className="text-ink">{value}</span>}
+          />
+        )}
         {bars.map((b) => (
-          <Bar key={b.dataKey} isAnimationActive={false} dataKey={b.dataKey as never} name={b.name} fill={b.fill} radius={[0, 3, 3, 0]} maxBarSize={28} {...(onPick ? { cursor: 'pointer', onClick: (_: unknown, i: number) => onPick(data[i]) } : {})} />
+          <Bar
+            key={b.dataKey}
+            isAnimationActive={false}
+            dataKey={b.dataKey as never}
+            name={b.name}
+            fill={b.fill}
+            radius={[0, 3, 3, 0]}
+            maxBarSize={28}
+            {...(onPick ? { cursor: 'pointer', onClick: (_: unknown, i: number) => onPick(data[i]) } : {})}
+          />
         ))}
       </BarChart>
     </ResponsiveContainer>

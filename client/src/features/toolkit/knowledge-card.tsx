@@ -5,25 +5,78 @@ import { TextAreaField, TextField } from '../../components/ui/field';
 import { useWriteUp, type KnowledgeEntry } from './api';
 
 /** One record of the knowledge base: the write-up when there is one, else the fault and the fixer's notes. */
-export function KnowledgeCard({ entry: e, when, canWrite = true }: { entry: KnowledgeEntry; when: string; canWrite?: boolean }) {
+export function KnowledgeCard({
+  entry: e,
+  when,
+  canWrite = true,
+}: {
+  entry: KnowledgeEntry;
+  when: string;
+  canWrite?: boolean;
+}) {
   const [writing, setWriting] = useState(false);
   return (
     <article className="rounded-xl bg-white p-4 shadow-sm ring-1 ring-ink/5" data-testid="knowledge-entry">
       <header className="flex flex-wrap items-baseline gap-x-3 gap-y-1">
-        <h3 className="text-lg">{e.categoryName}{(e.brand || e.model) && <span className="font-semibold text-ink-soft"> — {[e.brand, e.model].filter(Boolean).join(' ')}</span>}</h3>
+        <h3 className="text-lg">
+          {e.categoryName}
+          {(e.brand || e.model) && (
+            <span className="font-semibold text-ink-soft"> — {[e.brand, e.model].filter(Boolean).join(' ')}</span>
+          )}
+        </h3>
         <span className="rounded-full bg-navy/10 px-2 py-0.5 text-xs font-bold text-navy">{e.outcomeLabel}</span>
         {e.writtenUp && <span className="rounded-full bg-sage-light px-2 py-0.5 text-xs font-bold">written up</span>}
-        <span className="ml-auto text-xs text-ink-soft">{e.groupName} · {when}</span>
+        <span className="ml-auto text-xs text-ink-soft">
+          {e.groupName} · {when}
+        </span>
       </header>
       <dl className="mt-2 grid gap-1 text-sm sm:grid-cols-[8rem_1fr]">
-        <dt className="font-bold text-ink-soft">Symptom</dt><dd>{e.symptom}</dd>
-        {e.measured && <><dt className="font-bold text-ink-soft">Measured</dt><dd>{e.measured}</dd></>}
-        {e.faultyPart && <><dt className="font-bold text-ink-soft">Faulty part</dt><dd>{e.faultyPart}</dd></>}
-        {e.fix && <><dt className="font-bold text-ink-soft">Fix</dt><dd>{e.fix}</dd></>}
-        {e.notes && <><dt className="font-bold text-ink-soft">Notes</dt><dd className="whitespace-pre-line">{e.notes}</dd></>}
+        <dt className="font-bold text-ink-soft">Symptom</dt>
+        <dd>{e.symptom}</dd>
+        {e.measured && (
+          <>
+            <dt className="font-bold text-ink-soft">Measured</dt>
+            <dd>{e.measured}</dd>
+          </>
+        )}
+        {e.faultyPart && (
+          <>
+            <dt className="font-bold text-ink-soft">Faulty part</dt>
+            <dd>{e.faultyPart}</dd>
+          </>
+        )}
+        {e.fix && (
+          <>
+            <dt className="font-bold text-ink-soft">Fix</dt>
+            <dd>{e.fix}</dd>
+          </>
+        )}
+        {e.notes && (
+          <>
+            <dt className="font-bold text-ink-soft">Notes</dt>
+            <dd className="whitespace-pre-line">{e.notes}</dd>
+          </>
+        )}
       </dl>
-      {e.photoIds.length > 0 && <div className="mt-2 flex flex-wrap gap-2">{e.photoIds.map((id) => <a key={id} href={`/api/photos/${id}`} target="_blank" rel="noreferrer"><img src={`/api/photos/${id}`} alt={`Bench photo of the ${e.categoryName.toLowerCase()}`} className="size-20 rounded-lg object-cover" loading="lazy" /></a>)}</div>}
-      {canWrite && !writing && <Button variant="quiet" className="mt-1" onClick={() => setWriting(true)}>{e.writtenUp ? 'Edit the write-up' : 'Write it up'}</Button>}
+      {e.photoIds.length > 0 && (
+        <div className="mt-2 flex flex-wrap gap-2">
+          {e.photoIds.map((id) => (
+            <a key={id} href={`/api/photos/${id}`} target="_blank" rel="noreferrer">
+              <img
+                src={`/api/photos/${id}`}
+                alt={`Bench photo of the ${e.categoryName.toLowerCase()}`}
+                className="size-20 rounded-lg object-cover"
+                loading="lazy"
+              />
+            </a>
+          ))}
+        </div>
+      )}
+      {canWrite && !writing && (
+        <Button variant="quiet" className="mt-1" onClick={() => setWriting(true)}>
+          {e.writtenUp ? 'Edit the write-up' : 'Write it up'}
+        </Button>
+      )}
       {writing && <WriteUpForm entry={e} onDone={() => setWriting(false)} />}
     </article>
   );
@@ -31,16 +84,56 @@ export function KnowledgeCard({ entry: e, when, canWrite = true }: { entry: Know
 
 function WriteUpForm({ entry, onDone }: { entry: KnowledgeEntry; onDone: () => void }) {
   const save = useWriteUp(entry.itemId);
-  const [v, setV] = useState({ symptom: entry.symptom, measured: entry.measured, faultyPart: entry.faultyPart, fix: entry.fix || entry.notes });
-  const fields = save.error && 'fields' in save.error ? (save.error as { fields?: Record<string, string> }).fields : undefined;
+  const [v, setV] = useState({
+    symptom: entry.symptom,
+    measured: entry.measured,
+    faultyPart: entry.faultyPart,
+    fix: entry.fix || entry.notes,
+  });
+  const fields =
+    save.error && 'fields' in save.error ? (save.error as { fields?: Record<string, string> }).fields : undefined;
   return (
-    <form className="mt-3 space-y-3 rounded-lg bg-navy/5 p-3" onSubmit={(ev) => { ev.preventDefault(); save.mutate(v, { onSuccess: onDone }); }}>
-      <TextAreaField label="Symptom" rows={2} value={v.symptom} onChange={(e) => setV({ ...v, symptom: e.target.value })} error={fields?.symptom} />
-      <TextAreaField label="What was measured" rows={2} value={v.measured} onChange={(e) => setV({ ...v, measured: e.target.value })} />
-      <TextField label="The faulty part" value={v.faultyPart} onChange={(e) => setV({ ...v, faultyPart: e.target.value })} />
-      <TextAreaField label="The fix" rows={2} value={v.fix} onChange={(e) => setV({ ...v, fix: e.target.value })} error={fields?.fix} />
+    <form
+      className="mt-3 space-y-3 rounded-lg bg-navy/5 p-3"
+      onSubmit={(ev) => {
+        ev.preventDefault();
+        save.mutate(v, { onSuccess: onDone });
+      }}
+    >
+      <TextAreaField
+        label="Symptom"
+        rows={2}
+        value={v.symptom}
+        onChange={(e) => setV({ ...v, symptom: e.target.value })}
+        error={fields?.symptom}
+      />
+      <TextAreaField
+        label="What was measured"
+        rows={2}
+        value={v.measured}
+        onChange={(e) => setV({ ...v, measured: e.target.value })}
+      />
+      <TextField
+        label="The faulty part"
+        value={v.faultyPart}
+        onChange={(e) => setV({ ...v, faultyPart: e.target.value })}
+      />
+      <TextAreaField
+        label="The fix"
+        rows={2}
+        value={v.fix}
+        onChange={(e) => setV({ ...v, fix: e.target.value })}
+        error={fields?.fix}
+      />
       {save.error && !fields && <Alert tone="error">{save.error.message}</Alert>}
-      <div className="flex gap-2"><Button type="submit" busy={save.isPending}>Save write-up</Button><Button type="button" variant="secondary" onClick={onDone}>Cancel</Button></div>
+      <div className="flex gap-2">
+        <Button type="submit" busy={save.isPending}>
+          Save write-up
+        </Button>
+        <Button type="button" variant="secondary" onClick={onDone}>
+          Cancel
+        </Button>
+      </div>
     </form>
   );
 }

@@ -3,7 +3,19 @@ import { SelectField, TextField } from '../../components/ui/field';
 import { decodePrintedCode, formatOhms } from '../../../../shared/bench/resistors';
 
 /** Ratings as typed: strings until they are parsed; µF and kΩ are typed as the bench says them. */
-export type RatingsDraft = Partial<Record<'polarity' | 'voltageV' | 'currentA' | 'powerW' | 'resistanceOhm' | 'capacitanceUF' | 'temperatureC' | 'tolerancePct', string>>;
+export type RatingsDraft = Partial<
+  Record<
+    | 'polarity'
+    | 'voltageV'
+    | 'currentA'
+    | 'powerW'
+    | 'resistanceOhm'
+    | 'capacitanceUF'
+    | 'temperatureC'
+    | 'tolerancePct',
+    string
+  >
+>;
 
 const FIELDS: Record<PartType, (keyof RatingsDraft)[]> = {
   resistor: ['resistanceOhm', 'powerW', 'tolerancePct'],
@@ -20,21 +32,54 @@ const FIELDS: Record<PartType, (keyof RatingsDraft)[]> = {
   other: ['voltageV', 'currentA', 'powerW'],
 };
 const LABELS: Record<keyof RatingsDraft, string> = {
-  polarity: 'Polarity', voltageV: 'Voltage (V)', currentA: 'Current (A)', powerW: 'Power (W)', resistanceOhm: 'Resistance (Ω, e.g. 4k7)', capacitanceUF: 'Capacitance (µF)', temperatureC: 'Trip temperature (°C)', tolerancePct: 'Tolerance (%)',
+  polarity: 'Polarity',
+  voltageV: 'Voltage (V)',
+  currentA: 'Current (A)',
+  powerW: 'Power (W)',
+  resistanceOhm: 'Resistance (Ω, e.g. 4k7)',
+  capacitanceUF: 'Capacitance (µF)',
+  temperatureC: 'Trip temperature (°C)',
+  tolerancePct: 'Tolerance (%)',
 };
 const ERROR_KEY: Partial<Record<keyof RatingsDraft, string>> = { capacitanceUF: 'capacitanceF' };
 
-export function RatingFields({ type, value, onChange, errors = {} }: { type: PartType; value: RatingsDraft; onChange: (v: RatingsDraft) => void; errors?: Record<string, string> }) {
+export function RatingFields({
+  type,
+  value,
+  onChange,
+  errors = {},
+}: {
+  type: PartType;
+  value: RatingsDraft;
+  onChange: (v: RatingsDraft) => void;
+  errors?: Record<string, string>;
+}) {
   return (
     <div className="grid gap-3 sm:grid-cols-3">
       {FIELDS[type].map((k) =>
         k === 'polarity' ? (
-          <SelectField key={k} label={LABELS[k]} value={value.polarity ?? ''} onChange={(e) => onChange({ ...value, polarity: e.target.value })}>
+          <SelectField
+            key={k}
+            label={LABELS[k]}
+            value={value.polarity ?? ''}
+            onChange={(e) => onChange({ ...value, polarity: e.target.value })}
+          >
             <option value="">Not known</option>
-            {(type === 'mosfet' ? ['N', 'P'] : ['NPN', 'PNP']).map((p) => <option key={p} value={p}>{type === 'mosfet' ? `${p}-channel` : p}</option>)}
+            {(type === 'mosfet' ? ['N', 'P'] : ['NPN', 'PNP']).map((p) => (
+              <option key={p} value={p}>
+                {type === 'mosfet' ? `${p}-channel` : p}
+              </option>
+            ))}
           </SelectField>
         ) : (
-          <TextField key={k} label={LABELS[k]} inputMode="decimal" value={value[k] ?? ''} onChange={(e) => onChange({ ...value, [k]: e.target.value })} error={errors[`ratings.${ERROR_KEY[k] ?? k}`]} />
+          <TextField
+            key={k}
+            label={LABELS[k]}
+            inputMode="decimal"
+            value={value[k] ?? ''}
+            onChange={(e) => onChange({ ...value, [k]: e.target.value })}
+            error={errors[`ratings.${ERROR_KEY[k] ?? k}`]}
+          />
         ),
       )}
     </div>
@@ -61,7 +106,8 @@ function ohms(s?: string): number | undefined {
 export function parseRatings(d: RatingsDraft): PartRatings {
   const out: PartRatings = {};
   if (d.polarity) out.polarity = d.polarity as PartRatings['polarity'];
-  for (const k of ['voltageV', 'currentA', 'powerW', 'temperatureC', 'tolerancePct'] as const) if (n(d[k]) !== undefined) out[k] = n(d[k]);
+  for (const k of ['voltageV', 'currentA', 'powerW', 'temperatureC', 'tolerancePct'] as const)
+    if (n(d[k]) !== undefined) out[k] = n(d[k]);
   if (ohms(d.resistanceOhm) !== undefined) out.resistanceOhm = ohms(d.resistanceOhm);
   if (n(d.capacitanceUF) !== undefined) out.capacitanceF = n(d.capacitanceUF)! / 1e6;
   return out;
@@ -77,5 +123,7 @@ export function ratingsText(r: PartRatings): string {
     r.powerW !== undefined && `${r.powerW} W`,
     r.temperatureC !== undefined && `${r.temperatureC} °C`,
     r.tolerancePct !== undefined && `±${r.tolerancePct} %`,
-  ].filter(Boolean).join(', ');
+  ]
+    .filter(Boolean)
+    .join(', ');
 }

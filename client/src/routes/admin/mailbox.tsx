@@ -15,23 +15,49 @@ export function MailboxPage() {
   const [confirming, setConfirming] = useState(false);
   return (
     <div>
-      <PageTitle title="Local mailbox" lead="Mail sent by this installation, caught by the local SMTP mailbox instead of going out." />
+      <PageTitle
+        title="Local mailbox"
+        lead="Mail sent by this installation, caught by the local SMTP mailbox instead of going out."
+      />
       <div className="grid gap-4 lg:grid-cols-[22rem_1fr]">
         <Card flush className="overflow-hidden">
           <div className="flex items-center justify-between border-b border-ink/5 px-4 py-3">
-            <h2 className="text-base">{list.data?.length ?? 0} message{list.data?.length === 1 ? '' : 's'}</h2>
-            <Button variant="quiet" disabled={!list.data?.length} onClick={() => setConfirming(true)}>Empty</Button>
+            <h2 className="text-base">
+              {list.data?.length ?? 0} message{list.data?.length === 1 ? '' : 's'}
+            </h2>
+            <Button variant="quiet" disabled={!list.data?.length} onClick={() => setConfirming(true)}>
+              Empty
+            </Button>
           </div>
-          {list.isPending && <div className="px-4"><Spinner /></div>}
-          {list.error && <div className="p-4"><Alert tone="error">{list.error.message}</Alert></div>}
-          {list.data?.length === 0 && <div className="p-4"><EmptyState title="No mail yet" icon="✉">Sign-ups, password resets and bookings send mail that lands here.</EmptyState></div>}
+          {list.isPending && (
+            <div className="px-4">
+              <Spinner />
+            </div>
+          )}
+          {list.error && (
+            <div className="p-4">
+              <Alert tone="error">{list.error.message}</Alert>
+            </div>
+          )}
+          {list.data?.length === 0 && (
+            <div className="p-4">
+              <EmptyState title="No mail yet" icon="✉">
+                Sign-ups, password resets and bookings send mail that lands here.
+              </EmptyState>
+            </div>
+          )}
           <ul className="max-h-[70vh] overflow-y-auto">
             {list.data?.map((m) => (
               <li key={m.id}>
-                <Link to={paths.adminMailbox(m.id)} className={`block border-b border-ink/5 px-4 py-3 hover:bg-navy/5 ${selected === m.id ? 'bg-copper-light/50' : ''}`}>
+                <Link
+                  to={paths.adminMailbox(m.id)}
+                  className={`block border-b border-ink/5 px-4 py-3 hover:bg-navy/5 ${selected === m.id ? 'bg-copper-light/50' : ''}`}
+                >
                   <span className="block truncate font-bold">{m.subject}</span>
                   <span className="block truncate text-sm text-ink-soft">to {m.to}</span>
-                  <span className="text-xs text-ink-soft">{format(new Date(m.receivedAt), 'd MMM yyyy, HH:mm:ss')}</span>
+                  <span className="text-xs text-ink-soft">
+                    {format(new Date(m.receivedAt), 'd MMM yyyy, HH:mm:ss')}
+                  </span>
                 </Link>
               </li>
             ))}
@@ -39,7 +65,15 @@ export function MailboxPage() {
         </Card>
         {selected ? <MailView id={selected} /> : <EmptyState title="Choose a message" icon="✉" />}
       </div>
-      <ConfirmDialog open={confirming} title="Empty the mailbox?" message="Every caught message is deleted. Mail still waiting in the outbox is not affected." confirmLabel="Empty the mailbox" busy={clear.isPending} onCancel={() => setConfirming(false)} onConfirm={() => clear.mutate(undefined, { onSettled: () => setConfirming(false) })} />
+      <ConfirmDialog
+        open={confirming}
+        title="Empty the mailbox?"
+        message="Every caught message is deleted. Mail still waiting in the outbox is not affected."
+        confirmLabel="Empty the mailbox"
+        busy={clear.isPending}
+        onCancel={() => setConfirming(false)}
+        onConfirm={() => clear.mutate(undefined, { onSettled: () => setConfirming(false) })}
+      />
     </div>
   );
 }
@@ -47,7 +81,12 @@ export function MailboxPage() {
 function MailView({ id }: { id: number }) {
   const mail = useMail(id);
   const [tab, setTab] = useState<'html' | 'text'>('html');
-  if (mail.isPending) return <Card><Spinner /></Card>;
+  if (mail.isPending)
+    return (
+      <Card>
+        <Spinner />
+      </Card>
+    );
   if (mail.error) return <Alert tone="error">{mail.error.message}</Alert>;
   const m = mail.data;
   const view = m.hasHtml ? tab : 'text';
@@ -55,14 +94,37 @@ function MailView({ id }: { id: number }) {
     <Card className="space-y-3">
       <div>
         <h2 className="text-xl">{m.subject}</h2>
-        <p className="text-sm text-ink-soft">From {m.from} to {m.to} · {format(new Date(m.receivedAt), 'd MMM yyyy, HH:mm:ss')}</p>
+        <p className="text-sm text-ink-soft">
+          From {m.from} to {m.to} · {format(new Date(m.receivedAt), 'd MMM yyyy, HH:mm:ss')}
+        </p>
       </div>
       <div role="tablist" className="flex gap-1">
-        {m.hasHtml && <button role="tab" aria-selected={view === 'html'} onClick={() => setTab('html')} className={`rounded-lg px-3 py-1 font-semibold ${view === 'html' ? 'bg-navy text-white' : 'text-navy'}`}>Rendered</button>}
-        <button role="tab" aria-selected={view === 'text'} onClick={() => setTab('text')} className={`rounded-lg px-3 py-1 font-semibold ${view === 'text' ? 'bg-navy text-white' : 'text-navy'}`}>Plain text</button>
+        {m.hasHtml && (
+          <button
+            role="tab"
+            aria-selected={view === 'html'}
+            onClick={() => setTab('html')}
+            className={`rounded-lg px-3 py-1 font-semibold ${view === 'html' ? 'bg-navy text-white' : 'text-navy'}`}
+          >
+            Rendered
+          </button>
+        )}
+        <button
+          role="tab"
+          aria-selected={view === 'text'}
+          onClick={() => setTab('text')}
+          className={`rounded-lg px-3 py-1 font-semibold ${view === 'text' ? 'bg-navy text-white' : 'text-navy'}`}
+        >
+          Plain text
+        </button>
       </div>
       {view === 'html' ? (
-        <iframe title="Rendered mail" sandbox="allow-popups allow-popups-to-escape-sandbox" src={`/api/admin/mailbox/${m.id}/html`} className="h-[60vh] w-full rounded-lg border border-ink/10 bg-white" />
+        <iframe
+          title="Rendered mail"
+          sandbox="allow-popups allow-popups-to-escape-sandbox"
+          src={`/api/admin/mailbox/${m.id}/html`}
+          className="h-[60vh] w-full rounded-lg border border-ink/10 bg-white"
+        />
       ) : (
         <pre className="max-h-[60vh] overflow-auto whitespace-pre-wrap rounded-lg bg-paper p-4 text-sm">{m.text}</pre>
       )}

@@ -9,41 +9,82 @@ export function AdminOverviewPage() {
   const outbox = useOutbox();
   return (
     <div className="space-y-6">
-      <PageTitle title="Network admin" lead="Every repair group on this installation, its people, and the mail Mendery sends." />
+      <PageTitle
+        title="Network admin"
+        lead="Every repair group on this installation, its people, and the mail Mendery sends."
+      />
       <div className="grid gap-4 md:grid-cols-3">
         <Card>
           <h2 className="text-lg">Groups</h2>
-          {groups.isPending ? <Spinner /> : groups.error ? <Alert tone="error">{groups.error.message}</Alert> : (
+          {groups.isPending ? (
+            <Spinner />
+          ) : groups.error ? (
+            <Alert tone="error">{groups.error.message}</Alert>
+          ) : (
             <ul className="mt-2 space-y-1">
-              {groups.data.map((g) => <li key={g.id}><Link className="font-semibold text-navy underline" to={paths.groupPeople(g.id)}>{g.name}</Link> <span className="text-sm text-ink-soft">· {g.town} · {g.members} roles</span></li>)}
+              {groups.data.map((g) => (
+                <li key={g.id}>
+                  <Link className="font-semibold text-navy underline" to={paths.groupPeople(g.id)}>
+                    {g.name}
+                  </Link>{' '}
+                  <span className="text-sm text-ink-soft">
+                    · {g.town} · {g.members} roles
+                  </span>
+                </li>
+              ))}
             </ul>
           )}
         </Card>
         <Card>
           <h2 className="text-lg">People</h2>
-          {users.isPending ? <Spinner /> : users.error ? <Alert tone="error">{users.error.message}</Alert> : (
-            <p className="mt-2"><span className="text-3xl font-extrabold text-navy">{users.data.length}</span> accounts, {users.data.filter((u) => !u.verified).length} not yet confirmed</p>
+          {users.isPending ? (
+            <Spinner />
+          ) : users.error ? (
+            <Alert tone="error">{users.error.message}</Alert>
+          ) : (
+            <p className="mt-2">
+              <span className="text-3xl font-extrabold text-navy">{users.data.length}</span> accounts,{' '}
+              {users.data.filter((u) => !u.verified).length} not yet confirmed
+            </p>
           )}
         </Card>
         <Card>
           <h2 className="text-lg">Outgoing mail</h2>
-          {outbox.isPending ? <Spinner /> : outbox.error ? <Alert tone="error">{outbox.error.message}</Alert> : (
+          {outbox.isPending ? (
+            <Spinner />
+          ) : outbox.error ? (
+            <Alert tone="error">{outbox.error.message}</Alert>
+          ) : (
             <dl className="mt-2 grid grid-cols-3 text-center">
               {(['sent', 'pending', 'failed'] as const).map((s) => (
-                <div key={s}><dt className="text-sm text-ink-soft">{s}</dt><dd className={`text-2xl font-extrabold ${s === 'failed' && outbox.data.totals.failed ? 'text-alert' : 'text-navy'}`}>{outbox.data.totals[s] ?? 0}</dd></div>
+                <div key={s}>
+                  <dt className="text-sm text-ink-soft">{s}</dt>
+                  <dd
+                    className={`text-2xl font-extrabold ${s === 'failed' && outbox.data.totals.failed ? 'text-alert' : 'text-navy'}`}
+                  >
+                    {outbox.data.totals[s] ?? 0}
+                  </dd>
+                </div>
               ))}
             </dl>
           )}
-          <Link to={paths.adminMailbox()} className="mt-3 inline-block font-semibold text-navy underline">Open the local mailbox</Link>
+          <Link to={paths.adminMailbox()} className="mt-3 inline-block font-semibold text-navy underline">
+            Open the local mailbox
+          </Link>
         </Card>
       </div>
       {outbox.data && outbox.data.recent.some((m) => m.status !== 'sent') && (
         <Card>
           <h2 className="text-lg">Mail not yet delivered</h2>
           <ul className="mt-2 divide-y divide-ink/5 text-sm">
-            {outbox.data.recent.filter((m) => m.status !== 'sent').map((m) => (
-              <li key={m.id} className="py-2"><span className="font-semibold">{m.subject}</span> → {m.to} · {m.status}, {m.attempts} attempts{m.lastError ? ` · ${m.lastError}` : ''}</li>
-            ))}
+            {outbox.data.recent
+              .filter((m) => m.status !== 'sent')
+              .map((m) => (
+                <li key={m.id} className="py-2">
+                  <span className="font-semibold">{m.subject}</span> → {m.to} · {m.status}, {m.attempts} attempts
+                  {m.lastError ? ` · ${m.lastError}` : ''}
+                </li>
+              ))}
           </ul>
         </Card>
       )}

@@ -25,11 +25,14 @@ export function VerifyEmailPage() {
         {verify.error && <Alert tone="error">{verify.error.message}</Alert>}
         {verify.isSuccess && (
           <Alert tone="success" title="Thank you">
-            {verify.data.message} An organiser of the group will confirm your place and you will get a mail when they have.
+            {verify.data.message} An organiser of the group will confirm your place and you will get a mail when they
+            have.
           </Alert>
         )}
       </div>
-      <Link to={paths.signIn()} className="mt-4 inline-block font-bold text-navy underline">Go to sign-in</Link>
+      <Link to={paths.signIn()} className="mt-4 inline-block font-bold text-navy underline">
+        Go to sign-in
+      </Link>
     </Card>
   );
 }
@@ -53,10 +56,20 @@ export function ForgotPasswordPage() {
         <Alert tone="success">{request.data.message} The link works once, for one hour.</Alert>
       ) : (
         <form onSubmit={onSubmit} noValidate className="mt-4 space-y-4">
-          <p className="text-ink-soft">Enter the address you signed up with. We will mail you a link to choose a new password.</p>
+          <p className="text-ink-soft">
+            Enter the address you signed up with. We will mail you a link to choose a new password.
+          </p>
           {formError && <Alert tone="error">{formError}</Alert>}
-          <TextField label="E-mail" type="email" autoComplete="email" error={form.formState.errors.email?.message} {...form.register('email')} />
-          <Button type="submit" busy={form.formState.isSubmitting} className="w-full">Send the link</Button>
+          <TextField
+            label="E-mail"
+            type="email"
+            autoComplete="email"
+            error={form.formState.errors.email?.message}
+            {...form.register('email')}
+          />
+          <Button type="submit" busy={form.formState.isSubmitting} className="w-full">
+            Send the link
+          </Button>
         </form>
       )}
     </Card>
@@ -82,10 +95,27 @@ export function ResetPasswordPage() {
     <Card className="mx-auto max-w-lg">
       <h1 className="text-2xl">Choose a new password</h1>
       <form onSubmit={onSubmit} noValidate className="mt-4 space-y-4">
-        {(formError || form.formState.errors.token) && <Alert tone="error">{formError ?? form.formState.errors.token?.message}</Alert>}
-        <TextField label="New password" type="password" autoComplete="new-password" hint="At least 10 characters." error={form.formState.errors.password?.message} {...form.register('password')} />
-        <TextField label="The same again" type="password" autoComplete="new-password" error={form.formState.errors.confirm?.message} {...form.register('confirm')} />
-        <Button type="submit" busy={form.formState.isSubmitting} className="w-full">Save the new password</Button>
+        {(formError || form.formState.errors.token) && (
+          <Alert tone="error">{formError ?? form.formState.errors.token?.message}</Alert>
+        )}
+        <TextField
+          label="New password"
+          type="password"
+          autoComplete="new-password"
+          hint="At least 10 characters."
+          error={form.formState.errors.password?.message}
+          {...form.register('password')}
+        />
+        <TextField
+          label="The same again"
+          type="password"
+          autoComplete="new-password"
+          error={form.formState.errors.confirm?.message}
+          {...form.register('confirm')}
+        />
+        <Button type="submit" busy={form.formState.isSubmitting} className="w-full">
+          Save the new password
+        </Button>
       </form>
     </Card>
   );

@@ -22,35 +22,72 @@ export function JoinPage() {
   const form = useZodForm(inviteSignupSchema, { name: '', password: '' });
   const [formError, setFormError] = useState<string | null>(null);
   if (invitation.isPending) return <Spinner />;
-  if (invitation.error) return <Alert tone="error" title="Invitation not valid">{invitation.error.message}</Alert>;
+  if (invitation.error)
+    return (
+      <Alert tone="error" title="Invitation not valid">
+        {invitation.error.message}
+      </Alert>
+    );
   const i = invitation.data;
   return (
     <Card className="mx-auto max-w-lg space-y-4">
       <h1 className="text-2xl">Join {i.groupName}</h1>
-      <p>You are invited as <strong>{ROLE_LABELS[i.role].toLowerCase()}</strong>, at {i.email}.</p>
+      <p>
+        You are invited as <strong>{ROLE_LABELS[i.role].toLowerCase()}</strong>, at {i.email}.
+      </p>
       {accept.isSuccess ? (
-        <Alert tone="success" title="Welcome">You are now {ROLE_LABELS[i.role].toLowerCase()} with {i.groupName}. <Link className="font-bold underline" to={paths.start()}>Go to your page</Link></Alert>
+        <Alert tone="success" title="Welcome">
+          You are now {ROLE_LABELS[i.role].toLowerCase()} with {i.groupName}.{' '}
+          <Link className="font-bold underline" to={paths.start()}>
+            Go to your page
+          </Link>
+        </Alert>
       ) : user ? (
         <>
           {accept.error && <Alert tone="error">{accept.error.message}</Alert>}
-          <Button busy={accept.isPending} onClick={() => accept.mutate()}>Accept as {user.name}</Button>
+          <Button busy={accept.isPending} onClick={() => accept.mutate()}>
+            Accept as {user.name}
+          </Button>
         </>
       ) : i.hasAccount ? (
-        <Link to={paths.signIn(`/join/${token}`)} className="inline-flex min-h-11 items-center rounded-lg bg-copper px-5 font-bold text-white">Sign in to accept</Link>
+        <Link
+          to={paths.signIn(`/join/${token}`)}
+          className="inline-flex min-h-11 items-center rounded-lg bg-copper px-5 font-bold text-white"
+        >
+          Sign in to accept
+        </Link>
       ) : (
-        <form noValidate className="space-y-3" onSubmit={form.handleSubmit(async (v) => {
-          setFormError(null);
-          try {
-            const { user } = await signup.mutateAsync(v);
-            navigate(landingPath(user), { replace: true });
-          } catch (err) {
-            setFormError(applyServerErrors(form, err));
-          }
-        })}>
+        <form
+          noValidate
+          className="space-y-3"
+          onSubmit={form.handleSubmit(async (v) => {
+            setFormError(null);
+            try {
+              const { user } = await signup.mutateAsync(v);
+              navigate(landingPath(user), { replace: true });
+            } catch (err) {
+              setFormError(applyServerErrors(form, err));
+            }
+          })}
+        >
           {formError && <Alert tone="error">{formError}</Alert>}
-          <TextField label="Your name" autoComplete="name" error={form.formState.errors.name?.message} {...form.register('name')} />
-          <TextField label="Choose a password" type="password" autoComplete="new-password" hint="At least 10 characters." error={form.formState.errors.password?.message} {...form.register('password')} />
-          <Button type="submit" busy={form.formState.isSubmitting} className="w-full">Create my account and join</Button>
+          <TextField
+            label="Your name"
+            autoComplete="name"
+            error={form.formState.errors.name?.message}
+            {...form.register('name')}
+          />
+          <TextField
+            label="Choose a password"
+            type="password"
+            autoComplete="new-password"
+            hint="At least 10 characters."
+            error={form.formState.errors.password?.message}
+            {...form.register('password')}
+          />
+          <Button type="submit" busy={form.formState.isSubmitting} className="w-full">
+            Create my account and join
+          </Button>
         </form>
       )}
     </Card>

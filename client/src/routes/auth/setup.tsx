@@ -30,15 +30,39 @@ export function SetupPage() {
   });
   return (
     <div className="mx-auto max-w-lg">
-      <PageTitle title="Set up Mendery" lead="This installation is empty. Create the first admin account: it runs the network, adds repair groups and reads the local mailbox." />
+      <PageTitle
+        title="Set up Mendery"
+        lead="This installation is empty. Create the first admin account: it runs the network, adds repair groups and reads the local mailbox."
+      />
       <Card>
         <form onSubmit={onSubmit} noValidate className="space-y-4">
           {formError && <Alert tone="error">{formError}</Alert>}
           <TextField label="Your name" autoComplete="name" error={errors.name?.message} {...form.register('name')} />
-          <TextField label="E-mail" type="email" autoComplete="email" error={errors.email?.message} {...form.register('email')} />
-          <TextField label="Password" type="password" autoComplete="new-password" hint="At least 10 characters." error={errors.password?.message} {...form.register('password')} />
-          <TextField label="The same again" type="password" autoComplete="new-password" error={errors.confirm?.message} {...form.register('confirm')} />
-          <Button type="submit" busy={form.formState.isSubmitting} className="w-full">Create the admin account</Button>
+          <TextField
+            label="E-mail"
+            type="email"
+            autoComplete="email"
+            error={errors.email?.message}
+            {...form.register('email')}
+          />
+          <TextField
+            label="Password"
+            type="password"
+            autoComplete="new-password"
+            hint="At least 10 characters."
+            error={errors.password?.message}
+            {...form.register('password')}
+          />
+          <TextField
+            label="The same again"
+            type="password"
+            autoComplete="new-password"
+            error={errors.confirm?.message}
+            {...form.register('confirm')}
+          />
+          <Button type="submit" busy={form.formState.isSubmitting} className="w-full">
+            Create the admin account
+          </Button>
         </form>
       </Card>
     </div>

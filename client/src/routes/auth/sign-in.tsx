@@ -54,13 +54,31 @@ export function SignInPage() {
         <h1 className="mb-4 text-2xl">Sign in</h1>
         <form onSubmit={onSubmit} noValidate className="space-y-4">
           {formError && <Alert tone="error">{formError}</Alert>}
-          <TextField label="E-mail" type="email" autoComplete="username" error={form.formState.errors.email?.message} {...form.register('email')} />
-          <TextField label="Password" type="password" autoComplete="current-password" error={form.formState.errors.password?.message} {...form.register('password')} />
-          <Button type="submit" busy={form.formState.isSubmitting} className="w-full">Sign in</Button>
+          <TextField
+            label="E-mail"
+            type="email"
+            autoComplete="username"
+            error={form.formState.errors.email?.message}
+            {...form.register('email')}
+          />
+          <TextField
+            label="Password"
+            type="password"
+            autoComplete="current-password"
+            error={form.formState.errors.password?.message}
+            {...form.register('password')}
+          />
+          <Button type="submit" busy={form.formState.isSubmitting} className="w-full">
+            Sign in
+          </Button>
         </form>
         <div className="mt-4 flex flex-wrap justify-between gap-2 text-sm">
-          <Link to={paths.forgotPassword()} className="font-semibold text-navy underline">Forgot your password?</Link>
-          <Link to={paths.volunteer()} className="font-semibold text-navy underline">New volunteer? Sign up</Link>
+          <Link to={paths.forgotPassword()} className="font-semibold text-navy underline">
+            Forgot your password?
+          </Link>
+          <Link to={paths.volunteer()} className="font-semibold text-navy underline">
+            New volunteer? Sign up
+          </Link>
         </div>
         <p className="mt-4 text-sm text-ink-soft">Visitors do not need an account to book a repair slot.</p>
       </Card>
@@ -68,12 +86,17 @@ export function SignInPage() {
         <Card className="bg-copper-light/40">
           <h2 className="text-lg">Demo accounts</h2>
           <p className="mt-1 text-sm text-ink-soft">
-            This installation holds invented demo data. Every demo account uses the password <code className="rounded bg-white px-1 font-bold">{DEMO_PASSWORD}</code>.
+            This installation holds invented demo data. Every demo account uses the password{' '}
+            <code className="rounded bg-white px-1 font-bold">{DEMO_PASSWORD}</code>.
           </p>
           <ul className="mt-3 space-y-2">
             {DEMO_ACCOUNTS.map(([email, label]) => (
               <li key={email}>
-                <button type="button" onClick={() => fill(email)} className="w-full rounded-lg bg-white px-3 py-2 text-left ring-1 ring-ink/10 hover:ring-copper">
+                <button
+                  type="button"
+                  onClick={() => fill(email)}
+                  className="w-full rounded-lg bg-white px-3 py-2 text-left ring-1 ring-ink/10 hover:ring-copper"
+                >
                   <span className="block font-bold text-navy">{email}</span>
                   <span className="text-sm text-ink-soft">{label}</span>
                 </button>

@@ -29,15 +29,22 @@ export function VolunteerPage() {
     return (
       <Card className="mx-auto max-w-lg">
         <h1 className="text-2xl">Check your mail</h1>
-        <p className="mt-2">{signUp.data.message} Once you have confirmed it, an organiser of the group confirms your place.</p>
-        <Link to={paths.signIn()} className="mt-4 inline-block font-bold text-navy underline">Go to sign-in</Link>
+        <p className="mt-2">
+          {signUp.data.message} Once you have confirmed it, an organiser of the group confirms your place.
+        </p>
+        <Link to={paths.signIn()} className="mt-4 inline-block font-bold text-navy underline">
+          Go to sign-in
+        </Link>
       </Card>
     );
   }
 
   return (
     <div className="mx-auto max-w-lg">
-      <PageTitle title="Volunteer with a repair group" lead="Fixers diagnose and mend alongside visitors; reception welcomes people and keeps the queue moving. No experience with every kind of item is needed." />
+      <PageTitle
+        title="Volunteer with a repair group"
+        lead="Fixers diagnose and mend alongside visitors; reception welcomes people and keeps the queue moving. No experience with every kind of item is needed."
+      />
       <Card>
         {groups.isPending ? (
           <Spinner label="Loading groups…" />
@@ -47,11 +54,30 @@ export function VolunteerPage() {
           <form onSubmit={onSubmit} noValidate className="space-y-4">
             {formError && <Alert tone="error">{formError}</Alert>}
             <TextField label="Your name" autoComplete="name" error={errors.name?.message} {...form.register('name')} />
-            <TextField label="E-mail" type="email" autoComplete="email" error={errors.email?.message} {...form.register('email')} />
-            <TextField label="Password" type="password" autoComplete="new-password" hint="At least 10 characters." error={errors.password?.message} {...form.register('password')} />
+            <TextField
+              label="E-mail"
+              type="email"
+              autoComplete="email"
+              error={errors.email?.message}
+              {...form.register('email')}
+            />
+            <TextField
+              label="Password"
+              type="password"
+              autoComplete="new-password"
+              hint="At least 10 characters."
+              error={errors.password?.message}
+              {...form.register('password')}
+            />
             <SelectField label="Group" error={errors.groupId?.message} defaultValue="" {...form.register('groupId')}>
-              <option value="" disabled>Choose a group…</option>
-              {groups.data?.map((g) => <option key={g.id} value={g.id}>{g.name} — {g.town}</option>)}
+              <option value="" disabled>
+                Choose a group…
+              </option>
+              {groups.data?.map((g) => (
+                <option key={g.id} value={g.id}>
+                  {g.name} — {g.town}
+                </option>
+              ))}
             </SelectField>
             <fieldset className="space-y-2">
               <legend className="font-semibold">How would you like to help?</legend>
@@ -59,14 +85,22 @@ export function VolunteerPage() {
                 ['fixer', 'As a fixer', 'Repair items with visitors at a bench.'],
                 ['host', 'At reception', 'Welcome visitors, check them in and tag their items.'],
               ].map(([value, label, text]) => (
-                <label key={value} className="flex cursor-pointer gap-3 rounded-lg p-3 ring-1 ring-ink/15 has-checked:ring-2 has-checked:ring-copper">
+                <label
+                  key={value}
+                  className="flex cursor-pointer gap-3 rounded-lg p-3 ring-1 ring-ink/15 has-checked:ring-2 has-checked:ring-copper"
+                >
                   <input type="radio" value={value} className="mt-1 accent-copper" {...form.register('role')} />
-                  <span><span className="block font-bold">{label}</span><span className="text-sm text-ink-soft">{text}</span></span>
+                  <span>
+                    <span className="block font-bold">{label}</span>
+                    <span className="text-sm text-ink-soft">{text}</span>
+                  </span>
                 </label>
               ))}
               {errors.role && <p className="text-sm font-semibold text-alert">{errors.role.message}</p>}
             </fieldset>
-            <Button type="submit" busy={form.formState.isSubmitting} className="w-full">Sign up</Button>
+            <Button type="submit" busy={form.formState.isSubmitting} className="w-full">
+              Sign up
+            </Button>
           </form>
         )}
       </Card>

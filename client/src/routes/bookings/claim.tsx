@@ -12,24 +12,52 @@ export function ClaimOfferPage() {
   const claim = useClaimOffer(token);
   const navigate = useNavigate();
   if (offer.isPending) return <Spinner />;
-  if (offer.error) return <Alert tone="error" title="Offer not found">The link may be incomplete. Open it from the mail again.</Alert>;
+  if (offer.error)
+    return (
+      <Alert tone="error" title="Offer not found">
+        The link may be incomplete. Open it from the mail again.
+      </Alert>
+    );
   const o = offer.data;
   const tz = o.event.timeZone;
   return (
     <Card className="mx-auto max-w-lg space-y-3">
       <h1 className="text-2xl">A place for you</h1>
-      <p><strong>{o.event.title}</strong> ({o.event.groupName})</p>
-      <p className="font-bold text-copper-dark">{formatDay(o.slot.startsAt, tz)} · {formatTimeRange(o.slot.startsAt, o.slot.endsAt, tz)}</p>
-      <p>{o.venue.name}, {o.venue.address}, {o.venue.town}</p>
+      <p>
+        <strong>{o.event.title}</strong> ({o.event.groupName})
+      </p>
+      <p className="font-bold text-copper-dark">
+        {formatDay(o.slot.startsAt, tz)} · {formatTimeRange(o.slot.startsAt, o.slot.endsAt, tz)}
+      </p>
+      <p>
+        {o.venue.name}, {o.venue.address}, {o.venue.town}
+      </p>
       {o.status === 'offered' && (
         <>
-          <p className="text-sm text-ink-soft">Kept for you until {o.expiresAt && `${formatDay(o.expiresAt, tz)} ${formatTimeRange(o.expiresAt, o.expiresAt, tz).split('–')[0]}`}.</p>
+          <p className="text-sm text-ink-soft">
+            Kept for you until{' '}
+            {o.expiresAt &&
+              `${formatDay(o.expiresAt, tz)} ${formatTimeRange(o.expiresAt, o.expiresAt, tz).split('–')[0]}`}
+            .
+          </p>
           {claim.error && <Alert tone="error">{claim.error.message}</Alert>}
-          <Button className="w-full" busy={claim.isPending} onClick={() => claim.mutate(undefined, { onSuccess: (b) => navigate(paths.booking(b.reference, b.manageToken, true)) })}>Take the place</Button>
+          <Button
+            className="w-full"
+            busy={claim.isPending}
+            onClick={() =>
+              claim.mutate(undefined, { onSuccess: (b) => navigate(paths.booking(b.reference, b.manageToken, true)) })
+            }
+          >
+            Take the place
+          </Button>
         </>
       )}
-      {o.status === 'claimed' && <Alert tone="success">You have taken this place already: the booking link is in your mail.</Alert>}
-      {o.status === 'expired' && <Alert tone="info">This offer ran out and the place went to the next person. Sorry!</Alert>}
+      {o.status === 'claimed' && (
+        <Alert tone="success">You have taken this place already: the booking link is in your mail.</Alert>
+      )}
+      {o.status === 'expired' && (
+        <Alert tone="info">This offer ran out and the place went to the next person. Sorry!</Alert>
+      )}
       {(o.status === 'waiting' || o.status === 'withdrawn') && <Alert tone="info">This offer is no longer open.</Alert>}
     </Card>
   );
@@ -42,7 +70,10 @@ export function BookingCodePage() {
     <Card className="mx-auto max-w-md text-center">
       <p className="text-sm font-semibold text-ink-soft">Booking reference</p>
       <p className="font-mono text-4xl font-extrabold tracking-widest text-navy">{reference}</p>
-      <p className="mt-3 text-ink-soft">Show this code at the reception desk when you arrive. To change the booking, use the link in your confirmation mail.</p>
+      <p className="mt-3 text-ink-soft">
+        Show this code at the reception desk when you arrive. To change the booking, use the link in your confirmation
+        mail.
+      </p>
     </Card>
   );
 }

@@ -29,13 +29,25 @@ export function ManageBookingPage() {
   const [newSlot, setNewSlot] = useState('');
   const [uploadError, setUploadError] = useState<string | null>(null);
 
-  if (!token) return <Alert tone="error" title="This link is incomplete">Open the link from your confirmation mail again.</Alert>;
+  if (!token)
+    return (
+      <Alert tone="error" title="This link is incomplete">
+        Open the link from your confirmation mail again.
+      </Alert>
+    );
   if (booking.isPending) return <Spinner label="Loading your booking…" />;
-  if (booking.error) return <Alert tone="error" title="Booking not found">The link may be incomplete, or the booking reference is wrong. Open the link from your confirmation mail again.</Alert>;
+  if (booking.error)
+    return (
+      <Alert tone="error" title="Booking not found">
+        The link may be incomplete, or the booking reference is wrong. Open the link from your confirmation mail again.
+      </Alert>
+    );
   const b = booking.data;
   const tz = b.event.timeZone;
   const active = b.status === 'confirmed' && b.event.status === 'published';
-  const otherSlots = (event.data?.slots ?? []).filter((s) => s.id !== b.slot.id && s.free >= b.items.length && new Date(s.endsAt).getTime() > Date.now());
+  const otherSlots = (event.data?.slots ?? []).filter(
+    (s) => s.id !== b.slot.id && s.free >= b.items.length && new Date(s.endsAt).getTime() > Date.now(),
+  );
 
   const addPhotos = async (itemId: number, files: FileList | null) => {
     setUploadError(null);
@@ -52,47 +64,102 @@ export function ManageBookingPage() {
       {fresh && b.status === 'confirmed' && (
         <div className="rounded-xl bg-sage p-5 text-white">
           <p className="text-2xl font-extrabold">You are booked</p>
-          <p className="mt-1">We have sent a confirmation to {b.visitor.email} with this page’s link. Keep it: it is how you change the booking.</p>
+          <p className="mt-1">
+            We have sent a confirmation to {b.visitor.email} with this page’s link. Keep it: it is how you change the
+            booking.
+          </p>
         </div>
       )}
-      {photoProblems.length > 0 && <Alert tone="caution" title="Some photos were not added">{photoProblems.join(' ')} You can add them below.</Alert>}
+      {photoProblems.length > 0 && (
+        <Alert tone="caution" title="Some photos were not added">
+          {photoProblems.join(' ')} You can add them below.
+        </Alert>
+      )}
       {b.status === 'cancelled' && (
         <Alert tone="info" title="This booking is cancelled">
-          The place has gone back to the session. {b.event.status === 'published' ? <Link className="font-bold underline" to={paths.book(b.event.id)}>Book again</Link> : 'You are welcome to book another session.'}
+          The place has gone back to the session.{' '}
+          {b.event.status === 'published' ? (
+            <Link className="font-bold underline" to={paths.book(b.event.id)}>
+              Book again
+            </Link>
+          ) : (
+            'You are welcome to book another session.'
+          )}
         </Alert>
       )}
 
       <Card className="grid gap-5 sm:grid-cols-[1fr_auto] sm:items-center">
         <div>
-          <div className="flex items-center gap-2"><StatusBadge status={b.status} /></div>
+          <div className="flex items-center gap-2">
+            <StatusBadge status={b.status} />
+          </div>
           <p className="mt-2 text-sm font-semibold text-ink-soft">Booking reference</p>
           <p className="font-mono text-4xl font-extrabold tracking-widest text-navy">{b.reference}</p>
           <h1 className="mt-3 text-xl">{b.event.title}</h1>
-          <p className="font-bold text-copper-dark">{formatDay(b.slot.startsAt, tz)} · {formatTimeRange(b.slot.startsAt, b.slot.endsAt, tz)}</p>
-          <p>{b.venue.name}, {b.venue.address}, {b.venue.town}</p>
+          <p className="font-bold text-copper-dark">
+            {formatDay(b.slot.startsAt, tz)} · {formatTimeRange(b.slot.startsAt, b.slot.endsAt, tz)}
+          </p>
+          <p>
+            {b.venue.name}, {b.venue.address}, {b.venue.town}
+          </p>
           <p className="text-sm text-ink-soft">{b.event.groupName}</p>
         </div>
-        {b.status === 'confirmed' && <figure className="justify-self-center text-center">
-          <img src={b.qr} alt={`QR code of booking ${b.reference}`} className="size-40 rounded-lg ring-1 ring-ink/10" />
-          <figcaption className="mt-1 text-xs text-ink-soft">Show this at reception</figcaption>
-        </figure>}
+        {b.status === 'confirmed' && (
+          <figure className="justify-self-center text-center">
+            <img
+              src={b.qr}
+              alt={`QR code of booking ${b.reference}`}
+              className="size-40 rounded-lg ring-1 ring-ink/10"
+            />
+            <figcaption className="mt-1 text-xs text-ink-soft">Show this at reception</figcaption>
+          </figure>
+        )}
       </Card>
 
       <Card>
         <h2 className="text-lg">Your items</h2>
-        {uploadError && <div className="mt-2"><Alert tone="error">{uploadError}</Alert></div>}
+        {uploadError && (
+          <div className="mt-2">
+            <Alert tone="error">{uploadError}</Alert>
+          </div>
+        )}
         <ul className="mt-2 divide-y divide-ink/5">
           {b.items.map((i) => (
             <li key={i.id} className="py-3">
-              <p className="font-bold">{i.categoryName}{i.brand || i.model ? ` — ${[i.brand, i.model].filter(Boolean).join(' ')}` : ''}</p>
-              {i.status !== 'booked' && <p className="my-1 flex items-center gap-2 text-sm"><StatusChip status={i.status} />{i.queueNumber !== null && <span>Queue number <b>{i.queueNumber}</b></span>}{i.outcome && <b>{OUTCOME_LABELS[i.outcome]}</b>}</p>}
+              <p className="font-bold">
+                {i.categoryName}
+                {i.brand || i.model ? ` — ${[i.brand, i.model].filter(Boolean).join(' ')}` : ''}
+              </p>
+              {i.status !== 'booked' && (
+                <p className="my-1 flex items-center gap-2 text-sm">
+                  <StatusChip status={i.status} />
+                  {i.queueNumber !== null && (
+                    <span>
+                      Queue number <b>{i.queueNumber}</b>
+                    </span>
+                  )}
+                  {i.outcome && <b>{OUTCOME_LABELS[i.outcome]}</b>}
+                </p>
+              )}
               <p className="text-ink-soft">{i.fault}</p>
               <div className="mt-2 flex flex-wrap items-center gap-2">
-                {i.photos.map((p) => <img key={p.id} src={`/api/photos/${p.id}?token=${encodeURIComponent(token)}`} alt="" className="size-20 rounded-lg object-cover ring-1 ring-ink/10" />)}
+                {i.photos.map((p) => (
+                  <img
+                    key={p.id}
+                    src={`/api/photos/${p.id}?token=${encodeURIComponent(token)}`}
+                    alt=""
+                    className="size-20 rounded-lg object-cover ring-1 ring-ink/10"
+                  />
+                ))}
                 {active && i.photos.length < 3 && (
                   <label className="cursor-pointer rounded-lg px-3 py-2 text-sm font-bold text-navy ring-1 ring-navy/25 has-focus-visible:outline-3 has-focus-visible:outline-copper">
                     + Add photo
-                    <input type="file" accept="image/jpeg,image/png,image/webp" className="sr-only" onChange={(e) => void addPhotos(i.id, e.target.files)} />
+                    <input
+                      type="file"
+                      accept="image/jpeg,image/png,image/webp"
+                      className="sr-only"
+                      onChange={(e) => void addPhotos(i.id, e.target.files)}
+                    />
                   </label>
                 )}
               </div>
@@ -111,16 +178,29 @@ export function ManageBookingPage() {
               <div className="min-w-48 flex-1">
                 <SelectField label="Move to another time" value={newSlot} onChange={(e) => setNewSlot(e.target.value)}>
                   <option value="">Choose a time…</option>
-                  {otherSlots.map((s) => <option key={s.id} value={s.id}>{formatTime(s.startsAt, tz)} ({s.free} free)</option>)}
+                  {otherSlots.map((s) => (
+                    <option key={s.id} value={s.id}>
+                      {formatTime(s.startsAt, tz)} ({s.free} free)
+                    </option>
+                  ))}
                 </SelectField>
               </div>
-              <Button variant="secondary" disabled={!newSlot} busy={move.isPending} onClick={() => move.mutate(Number(newSlot), { onSuccess: () => setNewSlot('') })}>Move</Button>
+              <Button
+                variant="secondary"
+                disabled={!newSlot}
+                busy={move.isPending}
+                onClick={() => move.mutate(Number(newSlot), { onSuccess: () => setNewSlot('') })}
+              >
+                Move
+              </Button>
             </div>
           ) : (
             <p className="text-sm text-ink-soft">No other time of this session has room just now.</p>
           )}
           <div className="border-t border-ink/5 pt-4">
-            <Button variant="danger" onClick={() => setConfirming(true)}>Cancel my booking</Button>
+            <Button variant="danger" onClick={() => setConfirming(true)}>
+              Cancel my booking
+            </Button>
             <p className="mt-1 text-sm text-ink-soft">Cancelling frees your place for someone on the waiting list.</p>
           </div>
         </Card>
@@ -129,10 +209,16 @@ export function ManageBookingPage() {
       {b.status === 'confirmed' && (
         <Card>
           <h2 className="text-lg">What to bring</h2>
-          <ul className="mt-2 list-disc space-y-1 pl-5 text-sm">{WHAT_TO_BRING.map((w) => <li key={w}>{w}</li>)}</ul>
+          <ul className="mt-2 list-disc space-y-1 pl-5 text-sm">
+            {WHAT_TO_BRING.map((w) => (
+              <li key={w}>{w}</li>
+            ))}
+          </ul>
         </Card>
       )}
-      <Link to={paths.event(b.event.id)} className="inline-block font-bold text-navy underline">About this session</Link>
+      <Link to={paths.event(b.event.id)} className="inline-block font-bold text-navy underline">
+        About this session
+      </Link>
 
       <ConfirmDialog
         open={confirming}

@@ -53,8 +53,14 @@ export function HallDisplayPage() {
       <title>{data ? `Queue · ${data.event.title}` : 'Queue · Mendery'}</title>
       <header className="flex items-start justify-between gap-6 border-b border-white/15 pb-4">
         <div className="min-w-0">
-          <h1 className="truncate text-xl font-extrabold text-white lg:text-2xl 2xl:text-3xl">{data?.event.title ?? 'Repair session'}</h1>
-          {data && <p className="truncate text-base font-semibold text-white/70 lg:text-lg 2xl:text-xl">{data.event.groupName}</p>}
+          <h1 className="truncate text-xl font-extrabold text-white lg:text-2xl 2xl:text-3xl">
+            {data?.event.title ?? 'Repair session'}
+          </h1>
+          {data && (
+            <p className="truncate text-base font-semibold text-white/70 lg:text-lg 2xl:text-xl">
+              {data.event.groupName}
+            </p>
+          )}
         </div>
         <p className="shrink-0 text-3xl font-extrabold tabular-nums lg:text-4xl 2xl:text-5xl" aria-label="Time now">
           <time dateTime={now.toISOString()}>{formatTime(now, tz)}</time>
@@ -62,8 +68,12 @@ export function HallDisplayPage() {
       </header>
 
       {queue.isError && data && (
-        <p role="status" className="mt-3 rounded-lg bg-white/10 px-4 py-2 text-base font-semibold text-copper-light lg:text-lg">
-          Cannot reach Mendery just now — showing the queue as it was at {formatTime(new Date(queue.dataUpdatedAt), tz)}. Trying again…
+        <p
+          role="status"
+          className="mt-3 rounded-lg bg-white/10 px-4 py-2 text-base font-semibold text-copper-light lg:text-lg"
+        >
+          Cannot reach Mendery just now — showing the queue as it was at {formatTime(new Date(queue.dataUpdatedAt), tz)}
+          . Trying again…
         </p>
       )}
 
@@ -73,7 +83,9 @@ export function HallDisplayPage() {
         <div role="alert" className="flex flex-1 flex-col items-center justify-center gap-3 text-center">
           <p className="text-4xl font-extrabold lg:text-5xl">The queue is not showing yet</p>
           <p className="max-w-2xl text-xl text-white/70 lg:text-2xl">
-            {queue.error instanceof ApiError && queue.error.status === 404 ? 'This session is not published, or the address is wrong.' : 'Cannot reach Mendery. This screen tries again by itself.'}
+            {queue.error instanceof ApiError && queue.error.status === 404
+              ? 'This session is not published, or the address is wrong.'
+              : 'Cannot reach Mendery. This screen tries again by itself.'}
           </p>
         </div>
       ) : (
@@ -87,13 +99,16 @@ export function HallDisplayPage() {
         <p>
           {data ? (
             <>
-              {data.done} item{data.done === 1 ? '' : 's'} seen to today · {data.fixersOnHand} fixer{data.fixersOnHand === 1 ? '' : 's'} on hand
+              {data.done} item{data.done === 1 ? '' : 's'} seen to today · {data.fixersOnHand} fixer
+              {data.fixersOnHand === 1 ? '' : 's'} on hand
             </>
           ) : (
             'Mendery'
           )}
         </p>
-        {queue.dataUpdatedAt > 0 && <p className="tabular-nums">Updated {formatTime(new Date(queue.dataUpdatedAt), tz)}</p>}
+        {queue.dataUpdatedAt > 0 && (
+          <p className="tabular-nums">Updated {formatTime(new Date(queue.dataUpdatedAt), tz)}</p>
+        )}
       </footer>
     </div>
   );
@@ -108,15 +123,25 @@ function Board({ data }: { data: HallQueue }) {
       <section aria-label="Now at the benches" className="min-w-0">
         <h2 className="mb-4 text-3xl font-extrabold text-copper-light lg:text-4xl 2xl:text-5xl">Now at the benches</h2>
         {data.serving.length === 0 ? (
-          <p className="rounded-2xl border-2 border-dashed border-white/20 px-6 py-10 text-center text-2xl text-white/75 lg:text-3xl">No repairs under way just now</p>
+          <p className="rounded-2xl border-2 border-dashed border-white/20 px-6 py-10 text-center text-2xl text-white/75 lg:text-3xl">
+            No repairs under way just now
+          </p>
         ) : (
           <ol data-testid="serving" className="grid grid-cols-2 gap-4 md:grid-cols-3 2xl:grid-cols-4">
             {data.serving.map((s, i) => (
-              <li key={`${s.queueNumber ?? 'x'}-${i}`} className="flex min-w-0 flex-col items-center justify-center rounded-2xl bg-white/10 px-3 py-4 text-center ring-1 ring-white/10">
-                <span data-testid="queue-number" className="text-6xl leading-none font-extrabold tabular-nums lg:text-8xl 2xl:text-9xl">
+              <li
+                key={`${s.queueNumber ?? 'x'}-${i}`}
+                className="flex min-w-0 flex-col items-center justify-center rounded-2xl bg-white/10 px-3 py-4 text-center ring-1 ring-white/10"
+              >
+                <span
+                  data-testid="queue-number"
+                  className="text-6xl leading-none font-extrabold tabular-nums lg:text-8xl 2xl:text-9xl"
+                >
                   {numberText(s.queueNumber)}
                 </span>
-                <span className="mt-2 max-w-full break-words text-center text-xl leading-tight font-bold text-copper-light lg:text-2xl 2xl:text-3xl">{s.benchName ?? 'At a bench'}</span>
+                <span className="mt-2 max-w-full break-words text-center text-xl leading-tight font-bold text-copper-light lg:text-2xl 2xl:text-3xl">
+                  {s.benchName ?? 'At a bench'}
+                </span>
               </li>
             ))}
           </ol>
@@ -125,23 +150,38 @@ function Board({ data }: { data: HallQueue }) {
 
       <section aria-label="Waiting" className="min-w-0">
         <h2 className="mb-4 text-3xl font-extrabold text-copper-light lg:text-4xl 2xl:text-5xl">
-          Waiting{data.waiting.length > 0 && <span className="ml-3 text-xl font-bold text-white/60 lg:text-2xl">{data.waiting.length}</span>}
+          Waiting
+          {data.waiting.length > 0 && (
+            <span className="ml-3 text-xl font-bold text-white/60 lg:text-2xl">{data.waiting.length}</span>
+          )}
         </h2>
         {data.waiting.length === 0 ? (
-          <p className="rounded-2xl border-2 border-dashed border-white/20 px-6 py-10 text-center text-2xl text-white/75 lg:text-3xl">No one is waiting — walk-ins welcome at reception</p>
+          <p className="rounded-2xl border-2 border-dashed border-white/20 px-6 py-10 text-center text-2xl text-white/75 lg:text-3xl">
+            No one is waiting — walk-ins welcome at reception
+          </p>
         ) : (
           <>
             <ol data-testid="waiting" className="grid grid-cols-2 gap-3 sm:grid-cols-3">
               {waitingShown.map((w, i) => (
-                <li key={`${w.queueNumber ?? 'x'}-${i}`} className={`flex min-w-0 flex-col items-center rounded-xl px-2 py-3 text-center ${i === 0 ? 'bg-sage/60 ring-1 ring-sage-light/40' : 'bg-white/5'}`}>
-                  <span data-testid="queue-number" className="text-6xl leading-none font-extrabold tabular-nums 2xl:text-7xl">
+                <li
+                  key={`${w.queueNumber ?? 'x'}-${i}`}
+                  className={`flex min-w-0 flex-col items-center rounded-xl px-2 py-3 text-center ${i === 0 ? 'bg-sage/60 ring-1 ring-sage-light/40' : 'bg-white/5'}`}
+                >
+                  <span
+                    data-testid="queue-number"
+                    className="text-6xl leading-none font-extrabold tabular-nums 2xl:text-7xl"
+                  >
                     {numberText(w.queueNumber)}
                   </span>
-                  <span className="mt-1 text-lg font-semibold text-white/80 lg:text-xl 2xl:text-2xl">{waitLabel(w.waitMinutes)}</span>
+                  <span className="mt-1 text-lg font-semibold text-white/80 lg:text-xl 2xl:text-2xl">
+                    {waitLabel(w.waitMinutes)}
+                  </span>
                 </li>
               ))}
             </ol>
-            {more > 0 && <p className="mt-3 text-xl font-semibold text-white/70 lg:text-2xl">and {more} more in the queue</p>}
+            {more > 0 && (
+              <p className="mt-3 text-xl font-semibold text-white/70 lg:text-2xl">and {more} more in the queue</p>
+            )}
           </>
         )}
       </section>

@@ -14,21 +14,46 @@ export function TagPage() {
   const { data: user, isPending: userPending } = useUser();
   const { data: tag, isPending, error } = usePublicTag(code);
   if (isPending || userPending) return <Spinner />;
-  if (error) return <Alert tone="error" title="Tag not found">No item carries the tag {code}. Check the code printed under the QR code.</Alert>;
+  if (error)
+    return (
+      <Alert tone="error" title="Tag not found">
+        No item carries the tag {code}. Check the code printed under the QR code.
+      </Alert>
+    );
   const staff = user && (user.admin || user.roles.some((r) => r.groupId === tag.groupId));
   if (staff) return <Navigate to={paths.item(tag.itemId)} replace />;
   return (
     <div className="mx-auto max-w-md space-y-4">
       <Card className="text-center">
-        <p className="text-sm text-ink-soft">{tag.groupName} · {tag.eventTitle}</p>
+        <p className="text-sm text-ink-soft">
+          {tag.groupName} · {tag.eventTitle}
+        </p>
         <p className="my-2 font-mono text-4xl font-extrabold tracking-widest text-navy">{tag.tagCode}</p>
         <h1 className="text-2xl">{tag.categoryName}</h1>
-        {tag.queueNumber !== null && <p className="mt-1 text-lg">Queue number <b>{tag.queueNumber}</b></p>}
-        <p className="mt-3"><StatusChip status={tag.status} /></p>
+        {tag.queueNumber !== null && (
+          <p className="mt-1 text-lg">
+            Queue number <b>{tag.queueNumber}</b>
+          </p>
+        )}
+        <p className="mt-3">
+          <StatusChip status={tag.status} />
+        </p>
         {tag.outcomeLabel && <p className="mt-2 text-lg font-bold">{tag.outcomeLabel}</p>}
-        {tag.waitMinutes !== null && <p className="mt-2 text-ink-soft">{tag.waitMinutes === 0 ? 'A fixer should be free for you any moment.' : `About ${tag.waitMinutes} minutes until a fixer is free.`}</p>}
+        {tag.waitMinutes !== null && (
+          <p className="mt-2 text-ink-soft">
+            {tag.waitMinutes === 0
+              ? 'A fixer should be free for you any moment.'
+              : `About ${tag.waitMinutes} minutes until a fixer is free.`}
+          </p>
+        )}
       </Card>
-      <p className="text-center text-sm text-ink-soft">This page refreshes by itself. Volunteers: <Link className="font-semibold text-navy underline" to={paths.signIn(paths.tag(tag.tagCode))}>sign in</Link> to open the item.</p>
+      <p className="text-center text-sm text-ink-soft">
+        This page refreshes by itself. Volunteers:{' '}
+        <Link className="font-semibold text-navy underline" to={paths.signIn(paths.tag(tag.tagCode))}>
+          sign in
+        </Link>{' '}
+        to open the item.
+      </p>
     </div>
   );
 }

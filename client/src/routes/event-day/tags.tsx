@@ -39,7 +39,11 @@ export function TagSheetPage() {
   const slotId = positiveInt(params.get('slot'));
   const itemsParam = params.get('items') ?? '';
   const items = useMemo(
-    () => itemsParam.split(',').map((s) => Number(s.trim())).filter((n) => Number.isInteger(n) && n > 0),
+    () =>
+      itemsParam
+        .split(',')
+        .map((s) => Number(s.trim()))
+        .filter((n) => Number.isInteger(n) && n > 0),
     [itemsParam],
   );
   const layout = layoutById(params.get('layout') ?? DEFAULT_LAYOUT);
@@ -71,18 +75,29 @@ export function TagSheetPage() {
       <div className="sticky top-0 z-10 border-b border-ink/10 bg-white shadow-sm print:hidden">
         <div className="mx-auto flex max-w-5xl flex-wrap items-end gap-x-4 gap-y-3 px-4 py-3">
           <div className="w-full sm:w-auto sm:flex-1">
-            <Link to={paths.deskEvent(eventId)} className="text-sm font-bold text-navy underline">← Back to the desk</Link>
+            <Link to={paths.deskEvent(eventId)} className="text-sm font-bold text-navy underline">
+              ← Back to the desk
+            </Link>
             <h1 className="mt-1 text-xl">Intake tags{sheet.data ? ` · ${sheet.data.event.title}` : ''}</h1>
             {tags.length > 0 && (
               <p className="text-sm text-ink-soft">
-                {tags.length} tag{tags.length === 1 ? '' : 's'} on {pages.length} {perSheet === 1 ? 'label' : 'sheet'}{pages.length === 1 ? '' : 's'}
+                {tags.length} tag{tags.length === 1 ? '' : 's'} on {pages.length} {perSheet === 1 ? 'label' : 'sheet'}
+                {pages.length === 1 ? '' : 's'}
               </p>
             )}
           </div>
           <label className="text-sm font-semibold">
             Label stock
-            <select value={layout.id} onChange={(e) => setParam('layout', e.target.value, DEFAULT_LAYOUT)} className="mt-1 block max-w-full rounded-lg border border-ink/20 px-3 py-2">
-              {LABEL_LAYOUTS.map((l) => <option key={l.id} value={l.id}>{l.name}</option>)}
+            <select
+              value={layout.id}
+              onChange={(e) => setParam('layout', e.target.value, DEFAULT_LAYOUT)}
+              className="mt-1 block max-w-full rounded-lg border border-ink/20 px-3 py-2"
+            >
+              {LABEL_LAYOUTS.map((l) => (
+                <option key={l.id} value={l.id}>
+                  {l.name}
+                </option>
+              ))}
             </select>
           </label>
           <label className="text-sm font-semibold">
@@ -94,40 +109,69 @@ export function TagSheetPage() {
               step={1}
               value={skip}
               disabled={perSheet === 1}
-              onChange={(e) => setParam('skip', String(Math.min(Math.max(0, Math.floor(Number(e.target.value)) || 0), perSheet - 1)), '0')}
+              onChange={(e) =>
+                setParam(
+                  'skip',
+                  String(Math.min(Math.max(0, Math.floor(Number(e.target.value)) || 0), perSheet - 1)),
+                  '0',
+                )
+              }
               className="mt-1 block w-28 rounded-lg border border-ink/20 px-3 py-2 disabled:opacity-50"
               aria-describedby="skip-help"
             />
           </label>
-          <Button onClick={() => window.print()} disabled={tags.length === 0}>Print</Button>
+          <Button onClick={() => window.print()} disabled={tags.length === 0}>
+            Print
+          </Button>
           <p id="skip-help" className="w-full text-sm text-ink-soft">
             <span className="font-bold text-copper-dark">Print at 100 % (actual size), no scaling, margins none.</span>{' '}
-            {perSheet > 1 ? 'On a part-used sheet, give the number of labels already gone from the top left; printing starts after them.' : 'One tag per label on the roll.'}
+            {perSheet > 1
+              ? 'On a part-used sheet, give the number of labels already gone from the top left; printing starts after them.'
+              : 'One tag per label on the roll.'}
           </p>
         </div>
       </div>
 
       <div className="overflow-x-auto px-4 py-6 print:overflow-visible print:p-0">
         {sheet.isPending ? (
-          <div className="mx-auto max-w-md rounded-xl bg-white px-6"><Spinner label="Preparing the tags…" /></div>
+          <div className="mx-auto max-w-md rounded-xl bg-white px-6">
+            <Spinner label="Preparing the tags…" />
+          </div>
         ) : sheet.isError ? (
-          <div className="mx-auto max-w-xl"><Alert tone="error" title="The tags could not be loaded">{sheet.error.message}</Alert></div>
+          <div className="mx-auto max-w-xl">
+            <Alert tone="error" title="The tags could not be loaded">
+              {sheet.error.message}
+            </Alert>
+          </div>
         ) : tags.length === 0 ? (
           <div className="mx-auto max-w-xl rounded-xl bg-white">
             <EmptyState title="No checked-in items to print yet" icon="▢">
-              A tag is made when an item is checked in at the <Link to={paths.deskEvent(eventId)} className="font-bold text-navy underline">desk</Link>.
+              A tag is made when an item is checked in at the{' '}
+              <Link to={paths.deskEvent(eventId)} className="font-bold text-navy underline">
+                desk
+              </Link>
+              .
             </EmptyState>
           </div>
         ) : (
           <div className="mx-auto w-max space-y-8 print:space-y-0">
             {pages.map((cells, p) => (
               <div key={p}>
-                <p className="mb-1 text-xs font-semibold text-ink-soft print:hidden">{perSheet === 1 ? 'Label' : 'Sheet'} {p + 1} of {pages.length}</p>
+                <p className="mb-1 text-xs font-semibold text-ink-soft print:hidden">
+                  {perSheet === 1 ? 'Label' : 'Sheet'} {p + 1} of {pages.length}
+                </p>
                 <div
                   data-testid="tag-page"
                   aria-label={`${perSheet === 1 ? 'Label' : 'Sheet'} ${p + 1} of ${pages.length}`}
                   className="bg-white shadow-lg print:shadow-none"
-                  style={{ width: mm(layout.page.width), height: mm(layout.page.height), position: 'relative', pageBreakAfter: 'always', breakAfter: 'page', overflow: 'hidden' }}
+                  style={{
+                    width: mm(layout.page.width),
+                    height: mm(layout.page.height),
+                    position: 'relative',
+                    pageBreakAfter: 'always',
+                    breakAfter: 'page',
+                    overflow: 'hidden',
+                  }}
                 >
                   {cells.map((tag, i) => {
                     if (!tag) return null;
@@ -141,7 +185,15 @@ export function TagSheetPage() {
                       height: mm(layout.label.height),
                       padding: mm(metrics.pad),
                     };
-                    return <TagLabel key={tag.itemId} tag={tag} style={style} metrics={metrics} timeZone={sheet.data.event.timeZone} />;
+                    return (
+                      <TagLabel
+                        key={tag.itemId}
+                        tag={tag}
+                        style={style}
+                        metrics={metrics}
+                        timeZone={sheet.data.event.timeZone}
+                      />
+                    );
                   })}
                 </div>
               </div>
@@ -153,10 +205,24 @@ export function TagSheetPage() {
   );
 }
 
-function TagLabel({ tag, style, metrics, timeZone }: { tag: Tag; style: CSSProperties; metrics: ReturnType<typeof labelMetrics>; timeZone: string }) {
+function TagLabel({
+  tag,
+  style,
+  metrics,
+  timeZone,
+}: {
+  tag: Tag;
+  style: CSSProperties;
+  metrics: ReturnType<typeof labelMetrics>;
+  timeZone: string;
+}) {
   const line = 'overflow-hidden text-ellipsis whitespace-nowrap';
   return (
-    <div data-testid="tag" style={style} className="flex flex-col overflow-hidden border border-dashed border-ink/35 bg-white text-black print:border-transparent">
+    <div
+      data-testid="tag"
+      style={style}
+      className="flex flex-col overflow-hidden border border-dashed border-ink/35 bg-white text-black print:border-transparent"
+    >
       <div className="flex min-h-0 flex-1 items-center" style={{ gap: mm(metrics.gap) }}>
         <div
           role="img"
@@ -166,15 +232,32 @@ function TagLabel({ tag, style, metrics, timeZone }: { tag: Tag; style: CSSPrope
           dangerouslySetInnerHTML={{ __html: tag.qrSvg }}
         />
         <div className="min-w-0 flex-1">
-          <p className="font-mono font-bold" style={{ fontSize: mm(metrics.code), lineHeight: 1, letterSpacing: '0.02em' }}>{tag.tagCode}</p>
-          <p className={`${line} font-extrabold`} style={{ fontSize: '11pt', lineHeight: 1.15, marginTop: '0.8mm' }}>{tag.queueNumber !== null ? `No. ${tag.queueNumber}` : 'No. —'}</p>
-          <p className={`${line} font-semibold`} style={{ fontSize: '8pt', lineHeight: 1.2 }}>{tag.categoryName}</p>
-          <p className={line} style={{ fontSize: '8pt', lineHeight: 1.2 }}>{tag.visitor} · {formatTime(tag.slotStartsAt, timeZone)}</p>
-          {tag.benchName && <p className={`${line} font-bold`} style={{ fontSize: '8pt', lineHeight: 1.2 }}>{tag.benchName}</p>}
+          <p
+            className="font-mono font-bold"
+            style={{ fontSize: mm(metrics.code), lineHeight: 1, letterSpacing: '0.02em' }}
+          >
+            {tag.tagCode}
+          </p>
+          <p className={`${line} font-extrabold`} style={{ fontSize: '11pt', lineHeight: 1.15, marginTop: '0.8mm' }}>
+            {tag.queueNumber !== null ? `No. ${tag.queueNumber}` : 'No. —'}
+          </p>
+          <p className={`${line} font-semibold`} style={{ fontSize: '8pt', lineHeight: 1.2 }}>
+            {tag.categoryName}
+          </p>
+          <p className={line} style={{ fontSize: '8pt', lineHeight: 1.2 }}>
+            {tag.visitor} · {formatTime(tag.slotStartsAt, timeZone)}
+          </p>
+          {tag.benchName && (
+            <p className={`${line} font-bold`} style={{ fontSize: '8pt', lineHeight: 1.2 }}>
+              {tag.benchName}
+            </p>
+          )}
         </div>
       </div>
       {tag.mains && (
-        <p className={`${line} font-bold`} style={{ fontSize: '6.5pt', lineHeight: 1.2, marginTop: '0.6mm' }}>⚡ mains — safety check before it goes home</p>
+        <p className={`${line} font-bold`} style={{ fontSize: '6.5pt', lineHeight: 1.2, marginTop: '0.6mm' }}>
+          ⚡ mains — safety check before it goes home
+        </p>
       )}
     </div>
   );

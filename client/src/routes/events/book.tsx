@@ -21,9 +21,22 @@ export function BookingPage() {
   const event = useEvent(id);
   const categories = useCategories();
   if (event.isPending || categories.isPending) return <Spinner label="Loading the booking form…" />;
-  if (event.error) return <Alert tone="error" title="Session not found">{event.error.message}</Alert>;
+  if (event.error)
+    return (
+      <Alert tone="error" title="Session not found">
+        {event.error.message}
+      </Alert>
+    );
   if (categories.error) return <Alert tone="error">{categories.error.message}</Alert>;
-  if (event.data.status !== 'published') return <Alert tone="info" title="Not open for booking">This session is not taking bookings. <Link className="underline" to={paths.event(id)}>Back to the session</Link></Alert>;
+  if (event.data.status !== 'published')
+    return (
+      <Alert tone="info" title="Not open for booking">
+        This session is not taking bookings.{' '}
+        <Link className="underline" to={paths.event(id)}>
+          Back to the session
+        </Link>
+      </Alert>
+    );
   return <BookingForm event={event.data} categories={categories.data} />;
 }
 
@@ -36,7 +49,12 @@ function BookingForm({ event, categories }: { event: EventDetail; categories: Ca
   const [search] = useSearchParams();
   const preselected = event.slots.find((s) => s.id === Number(search.get('slot')));
   const errorRef = useRef<HTMLDivElement>(null);
-  const form = useZodForm(createBookingSchema, { slotId: preselected?.id, visitor: { name: '', email: '', phone: '' }, items: [emptyItem], consent: false as never });
+  const form = useZodForm(createBookingSchema, {
+    slotId: preselected?.id,
+    visitor: { name: '', email: '', phone: '' },
+    items: [emptyItem],
+    consent: false as never,
+  });
   const items = useFieldArray({ control: form.control, name: 'items' });
   const [photos, setPhotos] = useState<Record<string, File[]>>({});
   const [photoErrors, setPhotoErrors] = useState<Record<string, string>>({});
@@ -53,8 +71,17 @@ function BookingForm({ event, categories }: { event: EventDetail; categories: Ca
 
   const pickPhotos = (fieldId: string, list: FileList | null) => {
     const files = Array.from(list ?? []).slice(0, PHOTO_LIMITS.perItem);
-    const bad = files.find((f) => !(PHOTO_LIMITS.types as readonly string[]).includes(f.type) || f.size > PHOTO_LIMITS.maxBytes);
-    setPhotoErrors((e) => ({ ...e, [fieldId]: bad ? `“${bad.name}” is ${bad.size > PHOTO_LIMITS.maxBytes ? 'larger than 8 MB' : 'not a JPEG, PNG or WebP photo'}.` : (list?.length ?? 0) > PHOTO_LIMITS.perItem ? `Only the first ${PHOTO_LIMITS.perItem} photos are kept.` : '' }));
+    const bad = files.find(
+      (f) => !(PHOTO_LIMITS.types as readonly string[]).includes(f.type) || f.size > PHOTO_LIMITS.maxBytes,
+    );
+    setPhotoErrors((e) => ({
+      ...e,
+      [fieldId]: bad
+        ? `“${bad.name}” is ${bad.size > PHOTO_LIMITS.maxBytes ? 'larger than 8 MB' : 'not a JPEG, PNG or WebP photo'}.`
+        : (list?.length ?? 0) > PHOTO_LIMITS.perItem
+          ? `Only the first ${PHOTO_LIMITS.perItem} photos are kept.`
+          : '',
+    }));
     setPhotos((p) => ({ ...p, [fieldId]: files.filter((f) => f !== bad) }));
   };
 
@@ -92,41 +119,86 @@ function BookingForm({ event, categories }: { event: EventDetail; categories: Ca
     return (
       <Card className="mx-auto max-w-lg">
         <h1 className="text-2xl">You are on the waiting list</h1>
-        <p className="mt-2">You are number <strong>{queued}</strong> in line for {chosen && formatTimeRange(chosen.startsAt, chosen.endsAt, tz)} on {formatDay(event.startsAt, tz)}. If a place comes free we will mail you a link to take it.</p>
-        <Link to={paths.event(event.id)} className="mt-4 inline-block font-bold text-navy underline">Back to the session</Link>
+        <p className="mt-2">
+          You are number <strong>{queued}</strong> in line for{' '}
+          {chosen && formatTimeRange(chosen.startsAt, chosen.endsAt, tz)} on {formatDay(event.startsAt, tz)}. If a place
+          comes free we will mail you a link to take it.
+        </p>
+        <Link to={paths.event(event.id)} className="mt-4 inline-block font-bold text-navy underline">
+          Back to the session
+        </Link>
       </Card>
     );
   }
 
   return (
     <div className="mx-auto max-w-2xl">
-      <PageTitle title="Book a repair slot" lead={`${event.title} · ${formatDay(event.startsAt, tz)} · ${event.venue.name}, ${event.venue.town}`} />
+      <PageTitle
+        title="Book a repair slot"
+        lead={`${event.title} · ${formatDay(event.startsAt, tz)} · ${event.venue.name}, ${event.venue.town}`}
+      />
       <form onSubmit={onSubmit} noValidate className="space-y-6">
-        {formError && <div ref={errorRef} tabIndex={-1}><Alert tone="error">{formError}</Alert></div>}
+        {formError && (
+          <div ref={errorRef} tabIndex={-1}>
+            <Alert tone="error">{formError}</Alert>
+          </div>
+        )}
 
         <Card>
           <fieldset>
             <legend className="text-lg font-extrabold text-navy">1. Choose a time</legend>
             <div className="mt-3 grid grid-cols-3 gap-2 sm:grid-cols-4">
-              {event.slots.filter((s) => new Date(s.endsAt).getTime() > Date.now()).map((s) => (
-                <label key={s.id} className={`cursor-pointer rounded-lg p-2 text-center ring-1 has-checked:bg-navy has-checked:text-white has-checked:ring-navy has-focus-visible:outline-3 has-focus-visible:outline-offset-2 has-focus-visible:outline-copper ${s.free ? 'ring-ink/20' : 'bg-ink/5 ring-ink/10'}`}>
-                  <input type="radio" value={s.id} className="sr-only" {...form.register('slotId')} />
-                  <span className="block text-lg font-extrabold">{formatTime(s.startsAt, tz)}</span>
-                  <span className="block text-xs font-semibold">{s.free ? `${s.free} free` : 'full · wait'}</span>
-                </label>
-              ))}
+              {event.slots
+                .filter((s) => new Date(s.endsAt).getTime() > Date.now())
+                .map((s) => (
+                  <label
+                    key={s.id}
+                    className={`cursor-pointer rounded-lg p-2 text-center ring-1 has-checked:bg-navy has-checked:text-white has-checked:ring-navy has-focus-visible:outline-3 has-focus-visible:outline-offset-2 has-focus-visible:outline-copper ${s.free ? 'ring-ink/20' : 'bg-ink/5 ring-ink/10'}`}
+                  >
+                    <input type="radio" value={s.id} className="sr-only" {...form.register('slotId')} />
+                    <span className="block text-lg font-extrabold">{formatTime(s.startsAt, tz)}</span>
+                    <span className="block text-xs font-semibold">{s.free ? `${s.free} free` : 'full · wait'}</span>
+                  </label>
+                ))}
             </div>
             {errors.slotId && <p className="mt-2 text-sm font-semibold text-alert">{errors.slotId.message}</p>}
-            {joinsWaitlist && <div className="mt-3"><Alert tone="caution">This time has no room for {watchedItems.length > 1 ? 'all your items' : 'your item'}. Send the form to join its waiting list, or choose another time.</Alert></div>}
+            {joinsWaitlist && (
+              <div className="mt-3">
+                <Alert tone="caution">
+                  This time has no room for {watchedItems.length > 1 ? 'all your items' : 'your item'}. Send the form to
+                  join its waiting list, or choose another time.
+                </Alert>
+              </div>
+            )}
           </fieldset>
         </Card>
 
         <Card>
           <fieldset className="space-y-4">
             <legend className="text-lg font-extrabold text-navy">2. About you</legend>
-            <TextField label="Your name" autoComplete="name" error={errors.visitor?.name?.message} {...form.register('visitor.name')} />
-            <TextField label="E-mail" type="email" autoComplete="email" inputMode="email" hint="We send the confirmation and your booking link here." error={errors.visitor?.email?.message} {...form.register('visitor.email')} />
-            <TextField label="Phone (optional)" type="tel" autoComplete="tel" inputMode="tel" error={errors.visitor?.phone?.message} {...form.register('visitor.phone')} />
+            <TextField
+              label="Your name"
+              autoComplete="name"
+              error={errors.visitor?.name?.message}
+              {...form.register('visitor.name')}
+            />
+            <TextField
+              label="E-mail"
+              type="email"
+              autoComplete="email"
+              inputMode="email"
+              hint="We send the confirmation and your booking link here."
+              error={errors.visitor?.email?.message}
+              {...form.register('visitor.email')}
+            />
+            <TextField
+              label="Phone (optional)"
+              type="tel"
+              autoComplete="tel"
+              inputMode="tel"
+              error={errors.visitor?.phone?.message}
+              {...form.register('visitor.phone')}
+            />
           </fieldset>
         </Card>
 
@@ -139,59 +211,143 @@ function BookingForm({ event, categories }: { event: EventDetail; categories: Ca
             <Card key={field.id}>
               <fieldset className="space-y-4">
                 <div className="flex items-center justify-between">
-                  <legend className="text-lg font-extrabold text-navy">{3 + i}. {items.fields.length > 1 ? `Item ${i + 1}` : 'Your item'}</legend>
-                  {items.fields.length > 1 && <Button type="button" variant="quiet" onClick={() => items.remove(i)}>Remove</Button>}
+                  <legend className="text-lg font-extrabold text-navy">
+                    {3 + i}. {items.fields.length > 1 ? `Item ${i + 1}` : 'Your item'}
+                  </legend>
+                  {items.fields.length > 1 && (
+                    <Button type="button" variant="quiet" onClick={() => items.remove(i)}>
+                      Remove
+                    </Button>
+                  )}
                 </div>
-                <SelectField label="What is it?" error={itemErrors?.categoryId?.message} {...form.register(`items.${i}.categoryId`, {
-                  onChange: (e) => {
-                    const c = byId.get(Number(e.target.value));
-                    if (c) form.setValue(`items.${i}.mains`, c.mains);
-                  },
-                })}>
+                <SelectField
+                  label="What is it?"
+                  error={itemErrors?.categoryId?.message}
+                  {...form.register(`items.${i}.categoryId`, {
+                    onChange: (e) => {
+                      const c = byId.get(Number(e.target.value));
+                      if (c) form.setValue(`items.${i}.mains`, c.mains);
+                    },
+                  })}
+                >
                   <option value="">Choose…</option>
                   {Object.entries(SKILL_LABELS).map(([skill, label]) => {
                     const list = categories.filter((c) => c.skill === skill);
                     return list.length ? (
                       <optgroup key={skill} label={label}>
-                        {list.map((c) => <option key={c.id} value={c.id}>{c.name}{excluded.has(c.id) ? ' (not taken)' : ''}</option>)}
+                        {list.map((c) => (
+                          <option key={c.id} value={c.id}>
+                            {c.name}
+                            {excluded.has(c.id) ? ' (not taken)' : ''}
+                          </option>
+                        ))}
                       </optgroup>
                     ) : null;
                   })}
                 </SelectField>
                 {refused && !itemErrors?.categoryId && (
-                  <Alert tone="error" title="This group does not take it">{cat.refusal ? `${cat.refusal.reason} ${cat.refusal.suggestion}` : `${event.groupName} does not take this kind of item. Look for another group’s session.`}</Alert>
+                  <Alert tone="error" title="This group does not take it">
+                    {cat.refusal
+                      ? `${cat.refusal.reason} ${cat.refusal.suggestion}`
+                      : `${event.groupName} does not take this kind of item. Look for another group’s session.`}
+                  </Alert>
                 )}
                 <div className="grid gap-4 sm:grid-cols-3">
-                  <TextField label="Brand (optional)" error={itemErrors?.brand?.message} {...form.register(`items.${i}.brand`)} />
-                  <TextField label="Model (optional)" error={itemErrors?.model?.message} {...form.register(`items.${i}.model`)} />
-                  <TextField label="Age in years (optional)" type="number" min={0} inputMode="numeric" error={itemErrors?.ageYears?.message} {...form.register(`items.${i}.ageYears`)} />
+                  <TextField
+                    label="Brand (optional)"
+                    error={itemErrors?.brand?.message}
+                    {...form.register(`items.${i}.brand`)}
+                  />
+                  <TextField
+                    label="Model (optional)"
+                    error={itemErrors?.model?.message}
+                    {...form.register(`items.${i}.model`)}
+                  />
+                  <TextField
+                    label="Age in years (optional)"
+                    type="number"
+                    min={0}
+                    inputMode="numeric"
+                    error={itemErrors?.ageYears?.message}
+                    {...form.register(`items.${i}.ageYears`)}
+                  />
                 </div>
                 <div className="space-y-1">
-                  <label htmlFor={`fault-${field.id}`} className="block font-semibold">What is wrong with it?</label>
-                  <textarea id={`fault-${field.id}`} rows={3} aria-invalid={Boolean(itemErrors?.fault)} className={`block w-full rounded-lg border bg-white px-3 py-2.5 ${itemErrors?.fault ? 'border-alert' : 'border-ink/20'}`} placeholder="In your own words: what happens, since when, anything you tried." {...form.register(`items.${i}.fault`)} />
+                  <label htmlFor={`fault-${field.id}`} className="block font-semibold">
+                    What is wrong with it?
+                  </label>
+                  <textarea
+                    id={`fault-${field.id}`}
+                    rows={3}
+                    aria-invalid={Boolean(itemErrors?.fault)}
+                    className={`block w-full rounded-lg border bg-white px-3 py-2.5 ${itemErrors?.fault ? 'border-alert' : 'border-ink/20'}`}
+                    placeholder="In your own words: what happens, since when, anything you tried."
+                    {...form.register(`items.${i}.fault`)}
+                  />
                   {itemErrors?.fault && <p className="text-sm font-semibold text-alert">{itemErrors.fault.message}</p>}
                 </div>
                 <div className="flex flex-wrap gap-x-6 gap-y-2">
-                  <label className="flex items-center gap-2"><input type="checkbox" className="size-5 accent-copper" {...form.register(`items.${i}.mains`)} />Plugs into the mains</label>
-                  <label className="flex items-center gap-2"><input type="checkbox" className="size-5 accent-copper" {...form.register(`items.${i}.battery`)} />Has a battery</label>
+                  <label className="flex items-center gap-2">
+                    <input type="checkbox" className="size-5 accent-copper" {...form.register(`items.${i}.mains`)} />
+                    Plugs into the mains
+                  </label>
+                  <label className="flex items-center gap-2">
+                    <input type="checkbox" className="size-5 accent-copper" {...form.register(`items.${i}.battery`)} />
+                    Has a battery
+                  </label>
                 </div>
                 <fieldset className="rounded-lg bg-paper p-3">
                   <legend className="px-1 text-sm font-bold">Safety questions: tick any that apply</legend>
                   {HAZARDS.map((h) => (
-                    <label key={h} className="flex items-start gap-2 py-1 text-sm"><input type="checkbox" value={h} className="mt-0.5 size-5 accent-alert" {...form.register(`items.${i}.hazards`)} />{HAZARD_REFUSALS[h].question}</label>
+                    <label key={h} className="flex items-start gap-2 py-1 text-sm">
+                      <input
+                        type="checkbox"
+                        value={h}
+                        className="mt-0.5 size-5 accent-alert"
+                        {...form.register(`items.${i}.hazards`)}
+                      />
+                      {HAZARD_REFUSALS[h].question}
+                    </label>
                   ))}
                 </fieldset>
                 {(hazards as string[]).length > 0 && (
-                  <Alert tone="error" title="Please do not bring it">{(hazards as (typeof HAZARDS)[number][]).map((h) => `${HAZARD_REFUSALS[h].reason} ${HAZARD_REFUSALS[h].suggestion}`).join(' ')}</Alert>
+                  <Alert tone="error" title="Please do not bring it">
+                    {(hazards as (typeof HAZARDS)[number][])
+                      .map((h) => `${HAZARD_REFUSALS[h].reason} ${HAZARD_REFUSALS[h].suggestion}`)
+                      .join(' ')}
+                  </Alert>
                 )}
-                {itemErrors?.hazards && <p className="text-sm font-semibold text-alert">{itemErrors.hazards.message}</p>}
+                {itemErrors?.hazards && (
+                  <p className="text-sm font-semibold text-alert">{itemErrors.hazards.message}</p>
+                )}
                 <div className="space-y-1">
-                  <label htmlFor={`photos-${field.id}`} className="block font-semibold">Photos (optional, up to 3)</label>
-                  <input id={`photos-${field.id}`} type="file" accept="image/jpeg,image/png,image/webp" multiple capture="environment" onChange={(e) => pickPhotos(field.id, e.target.files)} className="block w-full text-sm file:mr-3 file:rounded-lg file:border-0 file:bg-navy file:px-3 file:py-2 file:font-bold file:text-white" />
-                  <p className="text-sm text-ink-soft">The label with the model number, and the fault if it shows. At most 8 MB each.</p>
+                  <label htmlFor={`photos-${field.id}`} className="block font-semibold">
+                    Photos (optional, up to 3)
+                  </label>
+                  <input
+                    id={`photos-${field.id}`}
+                    type="file"
+                    accept="image/jpeg,image/png,image/webp"
+                    multiple
+                    capture="environment"
+                    onChange={(e) => pickPhotos(field.id, e.target.files)}
+                    className="block w-full text-sm file:mr-3 file:rounded-lg file:border-0 file:bg-navy file:px-3 file:py-2 file:font-bold file:text-white"
+                  />
+                  <p className="text-sm text-ink-soft">
+                    The label with the model number, and the fault if it shows. At most 8 MB each.
+                  </p>
                   {photoErrors[field.id] && <p className="text-sm font-semibold text-alert">{photoErrors[field.id]}</p>}
                   {(photos[field.id]?.length ?? 0) > 0 && (
-                    <div className="flex gap-2">{photos[field.id].map((f) => <img key={f.name + f.size} src={URL.createObjectURL(f)} alt={f.name} className="size-20 rounded-lg object-cover ring-1 ring-ink/10" />)}</div>
+                    <div className="flex gap-2">
+                      {photos[field.id].map((f) => (
+                        <img
+                          key={f.name + f.size}
+                          src={URL.createObjectURL(f)}
+                          alt={f.name}
+                          className="size-20 rounded-lg object-cover ring-1 ring-ink/10"
+                        />
+                      ))}
+                    </div>
                   )}
                 </div>
               </fieldset>
@@ -199,14 +355,29 @@ function BookingForm({ event, categories }: { event: EventDetail; categories: Ca
           );
         })}
         {items.fields.length < MAX_ITEMS_PER_BOOKING && (
-          <Button type="button" variant="secondary" onClick={() => items.append(emptyItem)}>+ Add another item</Button>
+          <Button type="button" variant="secondary" onClick={() => items.append(emptyItem)}>
+            + Add another item
+          </Button>
         )}
         {errors.items?.message && <p className="text-sm font-semibold text-alert">{errors.items.message}</p>}
 
         <Card>
           <h2 className="text-lg">{3 + items.fields.length}. House rules</h2>
-          {event.houseRules && <ul className="mt-2 list-disc space-y-1 pl-5 text-sm">{event.houseRules.split('\n').filter(Boolean).map((l) => <li key={l}>{l}</li>)}</ul>}
-          <ul className="mt-2 list-disc space-y-1 pl-5 text-sm text-ink-soft">{DISCLAIMER.map((d) => <li key={d}>{d}</li>)}</ul>
+          {event.houseRules && (
+            <ul className="mt-2 list-disc space-y-1 pl-5 text-sm">
+              {event.houseRules
+                .split('\n')
+                .filter(Boolean)
+                .map((l) => (
+                  <li key={l}>{l}</li>
+                ))}
+            </ul>
+          )}
+          <ul className="mt-2 list-disc space-y-1 pl-5 text-sm text-ink-soft">
+            {DISCLAIMER.map((d) => (
+              <li key={d}>{d}</li>
+            ))}
+          </ul>
           <label className="mt-4 flex items-start gap-3 rounded-lg p-3 ring-1 ring-ink/15">
             <input type="checkbox" className="mt-0.5 size-5 accent-copper" {...form.register('consent')} />
             <span>I accept the house rules and the conditions above.</span>
@@ -214,10 +385,15 @@ function BookingForm({ event, categories }: { event: EventDetail; categories: Ca
           {errors.consent && <p className="mt-1 text-sm font-semibold text-alert">{errors.consent.message}</p>}
         </Card>
 
-        <Button type="submit" busy={form.formState.isSubmitting} className="w-full py-3 text-lg">{joinsWaitlist ? 'Join the waiting list' : 'Book my slot'}</Button>
-        {progress && <p role="status" className="text-center text-sm text-ink-soft">{progress}</p>}
+        <Button type="submit" busy={form.formState.isSubmitting} className="w-full py-3 text-lg">
+          {joinsWaitlist ? 'Join the waiting list' : 'Book my slot'}
+        </Button>
+        {progress && (
+          <p role="status" className="text-center text-sm text-ink-soft">
+            {progress}
+          </p>
+        )}
       </form>
     </div>
   );
 }
-

@@ -13,12 +13,22 @@ export function EventPage() {
   const categories = useCategories();
   const { data: user } = useUser();
   if (event.isPending) return <Spinner label="Loading the session…" />;
-  if (event.error) return <Alert tone="error" title="Session not found">{event.error.message}</Alert>;
+  if (event.error)
+    return (
+      <Alert tone="error" title="Session not found">
+        {event.error.message}
+      </Alert>
+    );
   const e = event.data;
   const tz = e.timeZone;
   const excluded = new Set(e.excludedCategoryIds);
   const cats = categories.data ?? [];
-  const taken = Object.entries(SKILL_LABELS).map(([skill, label]) => ({ label, names: cats.filter((c) => c.skill === skill && !excluded.has(c.id)).map((c) => c.name) })).filter((g) => g.names.length);
+  const taken = Object.entries(SKILL_LABELS)
+    .map(([skill, label]) => ({
+      label,
+      names: cats.filter((c) => c.skill === skill && !excluded.has(c.id)).map((c) => c.name),
+    }))
+    .filter((g) => g.names.length);
   const refused = cats.filter((c) => excluded.has(c.id));
   const isOrganiser = user?.admin || user?.roles.some((r) => r.groupId === e.groupId && r.role === 'organiser');
   const bookable = e.status === 'published' && e.freePlaces > 0;
@@ -27,9 +37,18 @@ export function EventPage() {
     <div className="grid gap-6 lg:grid-cols-[1fr_22rem]">
       <div className="space-y-6">
         <header>
-          <div className="flex flex-wrap items-center gap-2"><StatusBadge status={e.status} />{isOrganiser && <Link to={paths.manageEvent(e.id)} className="text-sm font-bold text-navy underline">Manage this session</Link>}</div>
+          <div className="flex flex-wrap items-center gap-2">
+            <StatusBadge status={e.status} />
+            {isOrganiser && (
+              <Link to={paths.manageEvent(e.id)} className="text-sm font-bold text-navy underline">
+                Manage this session
+              </Link>
+            )}
+          </div>
           <h1 className="mt-2 text-3xl">{e.title}</h1>
-          <p className="mt-1 text-lg font-bold text-copper-dark">{formatDay(e.startsAt, tz)} · {formatTimeRange(e.startsAt, e.endsAt, tz)}</p>
+          <p className="mt-1 text-lg font-bold text-copper-dark">
+            {formatDay(e.startsAt, tz)} · {formatTimeRange(e.startsAt, e.endsAt, tz)}
+          </p>
           <p className="text-ink-soft">{e.groupName}</p>
           {e.description && <p className="mt-3 max-w-2xl">{e.description}</p>}
         </header>
@@ -37,23 +56,42 @@ export function EventPage() {
         <Card>
           <h2 className="text-lg">Where</h2>
           <p className="mt-1 font-semibold">{e.venue.name}</p>
-          <p>{e.venue.address}, {e.venue.town}</p>
+          <p>
+            {e.venue.address}, {e.venue.town}
+          </p>
           {e.venue.accessNotes && <p className="mt-2 text-sm text-ink-soft">{e.venue.accessNotes}</p>}
         </Card>
 
         <Card>
           <h2 className="text-lg">Times and free places</h2>
-          <p className="text-sm text-ink-soft">Each time is the slot in which your repair starts; most take {e.slotMinutes}–60 minutes. Tap a time to book it.</p>
+          <p className="text-sm text-ink-soft">
+            Each time is the slot in which your repair starts; most take {e.slotMinutes}–60 minutes. Tap a time to book
+            it.
+          </p>
           {Object.keys(e.skillLimits).length > 0 && (
-            <p className="mt-1 text-sm text-ink-soft">Per time, the fixers can take at most {Object.entries(e.skillLimits).map(([k, n]) => `${n} ${SKILL_LABELS[k as keyof typeof SKILL_LABELS].toLowerCase()} item${n === 1 ? '' : 's'}`).join(', ')}.</p>
+            <p className="mt-1 text-sm text-ink-soft">
+              Per time, the fixers can take at most{' '}
+              {Object.entries(e.skillLimits)
+                .map(
+                  ([k, n]) =>
+                    `${n} ${SKILL_LABELS[k as keyof typeof SKILL_LABELS].toLowerCase()} item${n === 1 ? '' : 's'}`,
+                )
+                .join(', ')}
+              .
+            </p>
           )}
           <ul className="mt-3 grid grid-cols-2 gap-2 sm:grid-cols-3">
             {e.slots.map((s) => (
               <li key={s.id}>
-                <Link to={e.status === 'published' ? `${paths.book(e.id)}?slot=${s.id}` : paths.event(e.id)} className={`block rounded-lg p-3 ring-1 hover:ring-copper ${s.free ? 'ring-ink/10' : 'bg-alert-light/50 ring-alert/30'}`}>
+                <Link
+                  to={e.status === 'published' ? `${paths.book(e.id)}?slot=${s.id}` : paths.event(e.id)}
+                  className={`block rounded-lg p-3 ring-1 hover:ring-copper ${s.free ? 'ring-ink/10' : 'bg-alert-light/50 ring-alert/30'}`}
+                >
                   <p className="font-bold">{formatTime(s.startsAt, tz)}</p>
                   <PlacesBar free={s.free} total={s.capacity} label={false} />
-                  <p className="mt-1 text-xs font-semibold text-ink-soft">{s.free ? `${s.free} free` : 'Full: waiting list'}</p>
+                  <p className="mt-1 text-xs font-semibold text-ink-soft">
+                    {s.free ? `${s.free} free` : 'Full: waiting list'}
+                  </p>
                 </Link>
               </li>
             ))}
@@ -64,24 +102,45 @@ export function EventPage() {
           <Card>
             <h2 className="text-lg">What we take</h2>
             <dl className="mt-2 space-y-2 text-sm">
-              {taken.map((g) => <div key={g.label}><dt className="font-bold">{g.label}</dt><dd className="text-ink-soft">{g.names.join(', ')}</dd></div>)}
+              {taken.map((g) => (
+                <div key={g.label}>
+                  <dt className="font-bold">{g.label}</dt>
+                  <dd className="text-ink-soft">{g.names.join(', ')}</dd>
+                </div>
+              ))}
             </dl>
           </Card>
           <Card>
             <h2 className="text-lg">What we do not take</h2>
-            {refused.length === 0 ? <p className="mt-2 text-sm text-ink-soft">This group has no exclusions beyond the safety rules below.</p> : (
+            {refused.length === 0 ? (
+              <p className="mt-2 text-sm text-ink-soft">This group has no exclusions beyond the safety rules below.</p>
+            ) : (
               <ul className="mt-2 space-y-2 text-sm">
-                {refused.map((c) => <li key={c.id}><span className="font-bold">{c.name}</span>{c.refusal && <span className="text-ink-soft"> — {c.refusal.reason}</span>}</li>)}
+                {refused.map((c) => (
+                  <li key={c.id}>
+                    <span className="font-bold">{c.name}</span>
+                    {c.refusal && <span className="text-ink-soft"> — {c.refusal.reason}</span>}
+                  </li>
+                ))}
               </ul>
             )}
-            <p className="mt-3 text-sm text-ink-soft">Nor, anywhere: items with a swollen battery or a damaged mains cable.</p>
+            <p className="mt-3 text-sm text-ink-soft">
+              Nor, anywhere: items with a swollen battery or a damaged mains cable.
+            </p>
           </Card>
         </div>
 
         {e.houseRules && (
           <Card>
             <h2 className="text-lg">House rules</h2>
-            <ul className="mt-2 list-disc space-y-1 pl-5">{e.houseRules.split('\n').filter(Boolean).map((l) => <li key={l}>{l}</li>)}</ul>
+            <ul className="mt-2 list-disc space-y-1 pl-5">
+              {e.houseRules
+                .split('\n')
+                .filter(Boolean)
+                .map((l) => (
+                  <li key={l}>{l}</li>
+                ))}
+            </ul>
           </Card>
         )}
       </div>
@@ -90,16 +149,29 @@ export function EventPage() {
         <Card>
           <PlacesBar free={e.freePlaces} total={e.totalPlaces} />
           {e.status === 'published' ? (
-            <Link to={paths.book(e.id)} className="mt-4 flex min-h-12 items-center justify-center rounded-lg bg-copper px-5 text-lg font-bold text-white hover:bg-copper-dark">
+            <Link
+              to={paths.book(e.id)}
+              className="mt-4 flex min-h-12 items-center justify-center rounded-lg bg-copper px-5 text-lg font-bold text-white hover:bg-copper-dark"
+            >
               {bookable ? 'Book a slot' : 'Join a waiting list'}
             </Link>
           ) : (
-            <Alert tone="info">{e.status === 'cancelled' ? 'This session has been cancelled.' : e.status === 'closed' ? 'Booking has closed for this session.' : 'This session is not open for booking yet.'}</Alert>
+            <Alert tone="info">
+              {e.status === 'cancelled'
+                ? 'This session has been cancelled.'
+                : e.status === 'closed'
+                  ? 'Booking has closed for this session.'
+                  : 'This session is not open for booking yet.'}
+            </Alert>
           )}
         </Card>
         <Card>
           <h2 className="text-lg">What to bring</h2>
-          <ul className="mt-2 list-disc space-y-1 pl-5 text-sm">{WHAT_TO_BRING.map((w) => <li key={w}>{w}</li>)}</ul>
+          <ul className="mt-2 list-disc space-y-1 pl-5 text-sm">
+            {WHAT_TO_BRING.map((w) => (
+              <li key={w}>{w}</li>
+            ))}
+          </ul>
         </Card>
       </aside>
     </div>

@@ -25,7 +25,10 @@ export function EventsPage() {
     else next.delete(k);
     setParams(next, { replace: true });
   };
-  const bySkill = Object.entries(SKILL_LABELS).map(([skill, label]) => ({ label, cats: (categories.data ?? []).filter((c) => c.skill === skill && !c.refusal) }));
+  const bySkill = Object.entries(SKILL_LABELS).map(([skill, label]) => ({
+    label,
+    cats: (categories.data ?? []).filter((c) => c.skill === skill && !c.refusal),
+  }));
 
   return (
     <div className="space-y-6">
@@ -33,19 +36,38 @@ export function EventsPage() {
       <div className="grid gap-3 rounded-xl bg-white p-4 ring-1 ring-ink/5 sm:grid-cols-[1fr_1fr_auto] sm:items-end">
         <SelectField label="Group" value={groupId ?? ''} onChange={(e) => set('group', e.target.value)}>
           <option value="">All groups</option>
-          {groups.data?.map((g) => <option key={g.id} value={g.id}>{g.name}</option>)}
-        </SelectField>
-        <SelectField label="What needs fixing?" value={categoryId ?? ''} onChange={(e) => set('category', e.target.value)}>
-          <option value="">Anything</option>
-          {bySkill.filter((s) => s.cats.length).map((s) => (
-            <optgroup key={s.label} label={s.label}>
-              {s.cats.map((c) => <option key={c.id} value={c.id}>{c.name}</option>)}
-            </optgroup>
+          {groups.data?.map((g) => (
+            <option key={g.id} value={g.id}>
+              {g.name}
+            </option>
           ))}
+        </SelectField>
+        <SelectField
+          label="What needs fixing?"
+          value={categoryId ?? ''}
+          onChange={(e) => set('category', e.target.value)}
+        >
+          <option value="">Anything</option>
+          {bySkill
+            .filter((s) => s.cats.length)
+            .map((s) => (
+              <optgroup key={s.label} label={s.label}>
+                {s.cats.map((c) => (
+                  <option key={c.id} value={c.id}>
+                    {c.name}
+                  </option>
+                ))}
+              </optgroup>
+            ))}
         </SelectField>
         <div role="group" aria-label="View" className="flex rounded-lg ring-1 ring-navy/20">
           {(['list', 'calendar'] as const).map((v) => (
-            <button key={v} aria-pressed={view === v} onClick={() => set('view', v === 'list' ? '' : v)} className={`min-h-11 flex-1 px-4 font-bold first:rounded-l-lg last:rounded-r-lg ${view === v ? 'bg-navy text-white' : 'text-navy'}`}>
+            <button
+              key={v}
+              aria-pressed={view === v}
+              onClick={() => set('view', v === 'list' ? '' : v)}
+              className={`min-h-11 flex-1 px-4 font-bold first:rounded-l-lg last:rounded-r-lg ${view === v ? 'bg-navy text-white' : 'text-navy'}`}
+            >
               {v === 'list' ? 'List' : 'Calendar'}
             </button>
           ))}
@@ -53,33 +75,60 @@ export function EventsPage() {
       </div>
 
       {events.isPending && <Spinner label="Loading sessions…" />}
-      {events.error && <Alert tone="error" title="Could not load the sessions">{events.error.message}</Alert>}
+      {events.error && (
+        <Alert tone="error" title="Could not load the sessions">
+          {events.error.message}
+        </Alert>
+      )}
       {events.data && view === 'calendar' && (
         <Card className="mendery-calendar">
           <MonthCalendar
             today
-            events={events.data.map((e) => ({ id: String(e.id), title: e.title, start: e.startsAt, end: e.endsAt, backgroundColor: e.freePlaces ? '#5d7f6a' : '#a8322d', borderColor: 'transparent', extendedProps: { free: e.freePlaces } }))}
+            events={events.data.map((e) => ({
+              id: String(e.id),
+              title: e.title,
+              start: e.startsAt,
+              end: e.endsAt,
+              backgroundColor: e.freePlaces ? '#5d7f6a' : '#a8322d',
+              borderColor: 'transparent',
+              extendedProps: { free: e.freePlaces },
+            }))}
             detail={(x) => (x.free ? `${x.free} free` : 'full')}
             onOpen={(id) => navigate(paths.event(Number(id)))}
           />
         </Card>
       )}
-      {events.data && view === 'list' && (events.data.length === 0 ? (
-        <EmptyState title="No sessions match" icon="▦">{groupId || categoryId ? 'Try another group or kind of item.' : 'No group has published a date yet. Check back soon.'}</EmptyState>
-      ) : (
-        <ul className="grid gap-4 md:grid-cols-2">
-          {events.data.map((e) => (
-            <li key={e.id}>
-              <Link to={paths.event(e.id)} className="block rounded-xl bg-white p-5 shadow-sm ring-1 ring-ink/5 transition hover:ring-copper">
-                <p className="text-sm font-bold text-copper-dark">{formatDay(e.startsAt, e.timeZone)} · {formatTimeRange(e.startsAt, e.endsAt, e.timeZone)}</p>
-                <h2 className="mt-1 text-lg">{e.title}</h2>
-                <p className="text-sm text-ink-soft">{e.groupName} · {e.venue.name}, {e.venue.town}</p>
-                <div className="mt-3"><PlacesBar free={e.freePlaces} total={e.totalPlaces} /></div>
-              </Link>
-            </li>
-          ))}
-        </ul>
-      ))}
+      {events.data &&
+        view === 'list' &&
+        (events.data.length === 0 ? (
+          <EmptyState title="No sessions match" icon="▦">
+            {groupId || categoryId
+              ? 'Try another group or kind of item.'
+              : 'No group has published a date yet. Check back soon.'}
+          </EmptyState>
+        ) : (
+          <ul className="grid gap-4 md:grid-cols-2">
+            {events.data.map((e) => (
+              <li key={e.id}>
+                <Link
+                  to={paths.event(e.id)}
+                  className="block rounded-xl bg-white p-5 shadow-sm ring-1 ring-ink/5 transition hover:ring-copper"
+                >
+                  <p className="text-sm font-bold text-copper-dark">
+                    {formatDay(e.startsAt, e.timeZone)} · {formatTimeRange(e.startsAt, e.endsAt, e.timeZone)}
+                  </p>
+                  <h2 className="mt-1 text-lg">{e.title}</h2>
+                  <p className="text-sm text-ink-soft">
+                    {e.groupName} · {e.venue.name}, {e.venue.town}
+                  </p>
+                  <div className="mt-3">
+                    <PlacesBar free={e.freePlaces} total={e.totalPlaces} />
+                  </div>
+                </Link>
+              </li>
+            ))}
+          </ul>
+        ))}
     </div>
   );
 }

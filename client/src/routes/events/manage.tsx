@@ -25,51 +25,131 @@ export function ManageEventPage() {
   const tz = e.timeZone;
   const draft = e.status === 'draft';
   const questions = {
-    publish: { title: 'Publish this session?', message: 'It appears on the public calendar and people can book. Hours and slots are then fixed.', label: 'Publish' },
-    close: { title: 'Close booking?', message: 'No new bookings or waiting-list entries are taken. Existing bookings stay.', label: 'Close booking' },
-    cancel: { title: 'Cancel this session?', message: `Everyone booked (${coming.data?.summary.bookings ?? 0} booking${coming.data?.summary.bookings === 1 ? '' : 's'}) gets a cancellation mail. This cannot be undone.`, label: 'Cancel the session' },
+    publish: {
+      title: 'Publish this session?',
+      message: 'It appears on the public calendar and people can book. Hours and slots are then fixed.',
+      label: 'Publish',
+    },
+    close: {
+      title: 'Close booking?',
+      message: 'No new bookings or waiting-list entries are taken. Existing bookings stay.',
+      label: 'Close booking',
+    },
+    cancel: {
+      title: 'Cancel this session?',
+      message: `Everyone booked (${coming.data?.summary.bookings ?? 0} booking${coming.data?.summary.bookings === 1 ? '' : 's'}) gets a cancellation mail. This cannot be undone.`,
+      label: 'Cancel the session',
+    },
   };
   const maxSkill = Math.max(1, ...(coming.data?.summary.bySkill.map((s) => s.count) ?? [1]));
 
   return (
     <div className="space-y-6">
       <div>
-        <Link to={paths.groupEvents(e.groupId)} className="text-sm font-bold text-navy underline">← {e.groupName}: all sessions</Link>
+        <Link to={paths.groupEvents(e.groupId)} className="text-sm font-bold text-navy underline">
+          ← {e.groupName}: all sessions
+        </Link>
         <div className="mt-2 flex flex-wrap items-center gap-3">
           <h1 className="text-2xl sm:text-3xl">{e.title}</h1>
           <StatusBadge status={e.status} />
         </div>
-        <p className="font-bold text-copper-dark">{formatDay(e.startsAt, tz)} · {formatTimeRange(e.startsAt, e.endsAt, tz)} · {e.venue.name}</p>
+        <p className="font-bold text-copper-dark">
+          {formatDay(e.startsAt, tz)} · {formatTimeRange(e.startsAt, e.endsAt, tz)} · {e.venue.name}
+        </p>
       </div>
       <EventTabs eventId={e.id} />
 
       {action.error && <Alert tone="error">{action.error.message}</Alert>}
       <div className="flex flex-wrap gap-2">
         {draft && <Button onClick={() => setAsk('publish')}>Publish</Button>}
-        {e.status === 'published' && <Button variant="secondary" onClick={() => setAsk('close')}>Close booking</Button>}
-        {e.status !== 'cancelled' && <Button variant="danger" onClick={() => setAsk('cancel')}>Cancel session</Button>}
-        {e.status !== 'draft' && <Link to={paths.event(e.id)} className="inline-flex min-h-11 items-center rounded-lg px-4 font-bold text-navy ring-1 ring-navy/25">Public page</Link>}
+        {e.status === 'published' && (
+          <Button variant="secondary" onClick={() => setAsk('close')}>
+            Close booking
+          </Button>
+        )}
+        {e.status !== 'cancelled' && (
+          <Button variant="danger" onClick={() => setAsk('cancel')}>
+            Cancel session
+          </Button>
+        )}
+        {e.status !== 'draft' && (
+          <Link
+            to={paths.event(e.id)}
+            className="inline-flex min-h-11 items-center rounded-lg px-4 font-bold text-navy ring-1 ring-navy/25"
+          >
+            Public page
+          </Link>
+        )}
       </div>
 
       <div className="grid gap-4 lg:grid-cols-[1fr_20rem]">
         <Card flush className="overflow-hidden">
           <h2 className="px-5 pt-4 text-lg">Slots</h2>
-          {draft && <p className="px-5 text-sm text-ink-soft">Adjust the places of each slot (Enter or leaving the field saves), or remove a slot, before publishing.{action.isSuccess && <span role="status" className="ml-2 font-bold text-sage">Saved.</span>}</p>}
+          {draft && (
+            <p className="px-5 text-sm text-ink-soft">
+              Adjust the places of each slot (Enter or leaving the field saves), or remove a slot, before publishing.
+              {action.isSuccess && (
+                <span role="status" className="ml-2 font-bold text-sage">
+                  Saved.
+                </span>
+              )}
+            </p>
+          )}
           <table className="mt-2 w-full text-left text-sm">
-            <thead className="bg-navy/5 text-navy"><tr><th className="px-5 py-2">Time</th><th className="px-2 py-2">Places</th><th className="px-2 py-2">Booked</th><th className="px-5 py-2"><span className="sr-only">Actions</span></th></tr></thead>
+            <thead className="bg-navy/5 text-navy">
+              <tr>
+                <th className="px-5 py-2">Time</th>
+                <th className="px-2 py-2">Places</th>
+                <th className="px-2 py-2">Booked</th>
+                <th className="px-5 py-2">
+                  <span className="sr-only">Actions</span>
+                </th>
+              </tr>
+            </thead>
             <tbody>
               {e.slots.map((s) => (
                 <tr key={s.id} className="border-t border-ink/5">
                   <td className="px-5 py-2 font-bold">{formatTimeRange(s.startsAt, s.endsAt, tz)}</td>
                   <td className="px-2 py-2">
                     {draft ? (
-                      <input type="number" min={0} aria-label={`Places at ${formatTime(s.startsAt, tz)}`} defaultValue={s.capacity} className="w-20 rounded border border-ink/20 px-2 py-1"
+                      <input
+                        type="number"
+                        min={0}
+                        aria-label={`Places at ${formatTime(s.startsAt, tz)}`}
+                        defaultValue={s.capacity}
+                        className="w-20 rounded border border-ink/20 px-2 py-1"
                         onKeyDown={(ev) => ev.key === 'Enter' && ev.currentTarget.blur()}
-                        onBlur={(ev) => Number(ev.target.value) !== s.capacity && action.mutate({ method: 'PATCH', path: `/slots/${s.id}`, body: { capacity: Number(ev.target.value) } })} />
-                    ) : s.capacity}
+                        onBlur={(ev) =>
+                          Number(ev.target.value) !== s.capacity &&
+                          action.mutate({
+                            method: 'PATCH',
+                            path: `/slots/${s.id}`,
+                            body: { capacity: Number(ev.target.value) },
+                          })
+                        }
+                      />
+                    ) : (
+                      s.capacity
+                    )}
                   </td>
-                  <td className="px-2 py-2"><div className="w-28"><PlacesBar free={s.free} total={s.capacity} label={false} /></div><span className="text-xs">{s.booked} booked{s.held ? `, ${s.held} held` : ''}</span></td>
-                  <td className="px-5 py-2 text-right">{draft && <button className="rounded px-2 py-1 font-semibold text-alert hover:bg-alert-light" onClick={() => action.mutate({ method: 'DELETE', path: `/slots/${s.id}` })}>Remove</button>}</td>
+                  <td className="px-2 py-2">
+                    <div className="w-28">
+                      <PlacesBar free={s.free} total={s.capacity} label={false} />
+                    </div>
+                    <span className="text-xs">
+                      {s.booked} booked{s.held ? `, ${s.held} held` : ''}
+                    </span>
+                  </td>
+                  <td className="px-5 py-2 text-right">
+                    {draft && (
+                      <button
+                        className="rounded px-2 py-1 font-semibold text-alert hover:bg-alert-light"
+                        onClick={() => action.mutate({ method: 'DELETE', path: `/slots/${s.id}` })}
+                      >
+                        Remove
+                      </button>
+                    )}
+                  </td>
                 </tr>
               ))}
             </tbody>
@@ -78,9 +158,16 @@ export function ManageEventPage() {
 
         <Card>
           <h2 className="text-lg">What is coming</h2>
-          {coming.isPending ? <Spinner /> : coming.error ? <Alert tone="error">{coming.error.message}</Alert> : (
+          {coming.isPending ? (
+            <Spinner />
+          ) : coming.error ? (
+            <Alert tone="error">{coming.error.message}</Alert>
+          ) : (
             <>
-              <p className="mt-1"><span className="text-3xl font-extrabold text-navy">{coming.data.summary.items}</span> items in {coming.data.summary.bookings} bookings, {coming.data.summary.mains} on mains</p>
+              <p className="mt-1">
+                <span className="text-3xl font-extrabold text-navy">{coming.data.summary.items}</span> items in{' '}
+                {coming.data.summary.bookings} bookings, {coming.data.summary.mains} on mains
+              </p>
               <h3 className="mt-4 text-sm font-bold">Fixers needed, by skill</h3>
               {coming.data.summary.bySkill.length === 0 && <p className="text-sm text-ink-soft">Nothing booked yet.</p>}
               <ul className="mt-1 space-y-1.5" aria-label="Items by skill">
@@ -93,29 +180,63 @@ export function ManageEventPage() {
                 ))}
               </ul>
               <h3 className="mt-4 text-sm font-bold">By kind of item</h3>
-              <p className="text-sm text-ink-soft">{coming.data.summary.byCategory.map((c) => `${c.name} ${c.count}`).join(' · ') || 'Nothing booked yet.'}</p>
+              <p className="text-sm text-ink-soft">
+                {coming.data.summary.byCategory.map((c) => `${c.name} ${c.count}`).join(' · ') || 'Nothing booked yet.'}
+              </p>
             </>
           )}
         </Card>
       </div>
 
       <section aria-labelledby="bookings">
-        <h2 id="bookings" className="mb-3 text-xl">Bookings</h2>
-        {coming.data?.bookings.length === 0 && <EmptyState title="No bookings yet" icon="☰">{draft ? 'Publish the session to take bookings.' : 'Bookings appear here as people make them.'}</EmptyState>}
+        <h2 id="bookings" className="mb-3 text-xl">
+          Bookings
+        </h2>
+        {coming.data?.bookings.length === 0 && (
+          <EmptyState title="No bookings yet" icon="☰">
+            {draft ? 'Publish the session to take bookings.' : 'Bookings appear here as people make them.'}
+          </EmptyState>
+        )}
         <ul className="space-y-2">
           {coming.data?.bookings.map((b) => (
-            <li key={b.id} className={`rounded-xl bg-white p-4 ring-1 ring-ink/5 ${b.status === 'cancelled' ? 'opacity-60' : ''}`}>
+            <li
+              key={b.id}
+              className={`rounded-xl bg-white p-4 ring-1 ring-ink/5 ${b.status === 'cancelled' ? 'opacity-60' : ''}`}
+            >
               <div className="flex flex-wrap items-baseline justify-between gap-2">
-                <p><span className="font-mono font-bold">{b.reference}</span> · <span className="font-bold">{b.visitorName}</span> <span className="text-sm text-ink-soft">{b.visitorEmail}{b.visitorPhone ? ` · ${b.visitorPhone}` : ''}</span></p>
-                <p className="text-sm font-bold text-copper-dark">{formatTime(b.slotStartsAt, tz)} {b.status === 'cancelled' && <StatusBadge status="cancelled" />}</p>
+                <p>
+                  <span className="font-mono font-bold">{b.reference}</span> ·{' '}
+                  <span className="font-bold">{b.visitorName}</span>{' '}
+                  <span className="text-sm text-ink-soft">
+                    {b.visitorEmail}
+                    {b.visitorPhone ? ` · ${b.visitorPhone}` : ''}
+                  </span>
+                </p>
+                <p className="text-sm font-bold text-copper-dark">
+                  {formatTime(b.slotStartsAt, tz)} {b.status === 'cancelled' && <StatusBadge status="cancelled" />}
+                </p>
               </div>
               <ul className="mt-1 space-y-1 text-sm">
                 {b.items.map((i) => (
                   <li key={i.id} className="flex flex-wrap items-center gap-2">
-                    <span className="font-semibold">{i.categoryName}{i.brand ? ` — ${i.brand}` : ''}{i.model ? ` ${i.model}` : ''}</span>
-                    {i.mains && <span className="rounded bg-copper-light px-1.5 text-xs font-bold text-copper-dark">mains</span>}
+                    <span className="font-semibold">
+                      {i.categoryName}
+                      {i.brand ? ` — ${i.brand}` : ''}
+                      {i.model ? ` ${i.model}` : ''}
+                    </span>
+                    {i.mains && (
+                      <span className="rounded bg-copper-light px-1.5 text-xs font-bold text-copper-dark">mains</span>
+                    )}
                     <span className="text-ink-soft">{i.fault}</span>
-                    {i.photoIds.map((p) => <a key={p} href={`/api/photos/${p}`} target="_blank" rel="noreferrer"><img src={`/api/photos/${p}`} alt="Photo of the item" className="size-10 rounded object-cover" /></a>)}
+                    {i.photoIds.map((p) => (
+                      <a key={p} href={`/api/photos/${p}`} target="_blank" rel="noreferrer">
+                        <img
+                          src={`/api/photos/${p}`}
+                          alt="Photo of the item"
+                          className="size-10 rounded object-cover"
+                        />
+                      </a>
+                    ))}
                   </li>
                 ))}
               </ul>
@@ -127,7 +248,11 @@ export function ManageEventPage() {
             <h3 className="text-lg">Waiting list</h3>
             <ul className="mt-2 text-sm">
               {coming.data!.waiting.map((w) => (
-                <li key={w.id}>{w.visitorName} · {w.places} item{w.places > 1 ? 's' : ''} · {formatTime(e.slots.find((s) => s.id === w.slotId)?.startsAt ?? e.startsAt, tz)} · {w.status === 'offered' ? 'offered a place' : 'waiting'}</li>
+                <li key={w.id}>
+                  {w.visitorName} · {w.places} item{w.places > 1 ? 's' : ''} ·{' '}
+                  {formatTime(e.slots.find((s) => s.id === w.slotId)?.startsAt ?? e.startsAt, tz)} ·{' '}
+                  {w.status === 'offered' ? 'offered a place' : 'waiting'}
+                </li>
               ))}
             </ul>
           </Card>
@@ -143,12 +268,30 @@ export function ManageEventPage() {
         cancelLabel={ask === 'cancel' ? 'Keep the session' : 'Not yet'}
         busy={action.isPending}
         onCancel={() => setAsk(null)}
-        onConfirm={() => ask && action.mutate({ method: 'POST', path: `/${ask}`, body: ask === 'cancel' && reason ? { reason } : {} }, { onSettled: () => { setAsk(null); setReason(''); coming.refetch(); } })}
+        onConfirm={() =>
+          ask &&
+          action.mutate(
+            { method: 'POST', path: `/${ask}`, body: ask === 'cancel' && reason ? { reason } : {} },
+            {
+              onSettled: () => {
+                setAsk(null);
+                setReason('');
+                coming.refetch();
+              },
+            },
+          )
+        }
       >
         {ask === 'cancel' && (
           <label className="block text-sm font-semibold">
             Reason, for the mail (optional)
-            <textarea rows={2} value={reason} maxLength={500} onChange={(ev) => setReason(ev.target.value)} className="mt-1 block w-full rounded-lg border border-ink/20 px-3 py-2 font-normal" />
+            <textarea
+              rows={2}
+              value={reason}
+              maxLength={500}
+              onChange={(ev) => setReason(ev.target.value)}
+              className="mt-1 block w-full rounded-lg border border-ink/20 px-3 py-2 font-normal"
+            />
           </label>
         )}
       </ConfirmDialog>

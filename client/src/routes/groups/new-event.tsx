@@ -39,7 +39,19 @@ export function NewEventPage() {
   const create = useCreateEvent();
   const navigate = useNavigate();
   const [formError, setFormError] = useState<string | null>(null);
-  const form = useForm<Values>({ defaultValues: { title: 'Repair session', venueId: '', date: '', from: '10:00', to: '13:00', slotMinutes: '30', slotCapacity: '4', description: '', limits: {} } });
+  const form = useForm<Values>({
+    defaultValues: {
+      title: 'Repair session',
+      venueId: '',
+      date: '',
+      from: '10:00',
+      to: '13:00',
+      slotMinutes: '30',
+      slotCapacity: '4',
+      description: '',
+      limits: {},
+    },
+  });
   const errors = form.formState.errors;
   const v = form.watch();
   if (group.isPending || venues.isPending) return <Spinner />;
@@ -63,21 +75,38 @@ export function NewEventPage() {
   const onSubmit = form.handleSubmit(async (values) => {
     setFormError(null);
     let missing = false;
-    if (!values.venueId) { form.setError('venueId', { message: 'Choose a venue.' }); missing = true; }
-    if (!values.date) { form.setError('date', { message: 'Choose the date.' }); missing = true; }
+    if (!values.venueId) {
+      form.setError('venueId', { message: 'Choose a venue.' });
+      missing = true;
+    }
+    if (!values.date) {
+      form.setError('date', { message: 'Choose the date.' });
+      missing = true;
+    }
     if (missing) return;
-    const skillLimits = Object.fromEntries(Object.entries(values.limits).filter(([, n]) => n !== '').map(([k, n]) => [k, Number(n)]));
+    const skillLimits = Object.fromEntries(
+      Object.entries(values.limits)
+        .filter(([, n]) => n !== '')
+        .map(([k, n]) => [k, Number(n)]),
+    );
     try {
       const e = await create.mutateAsync({
-        groupId, title: values.title, venueId: Number(values.venueId) || 0, description: values.description,
-        startsAt: instant(values.date, values.from, zone), endsAt: instant(values.date, values.to, zone),
-        slotMinutes: Number(values.slotMinutes), slotCapacity: Number(values.slotCapacity), skillLimits,
+        groupId,
+        title: values.title,
+        venueId: Number(values.venueId) || 0,
+        description: values.description,
+        startsAt: instant(values.date, values.from, zone),
+        endsAt: instant(values.date, values.to, zone),
+        slotMinutes: Number(values.slotMinutes),
+        slotCapacity: Number(values.slotCapacity),
+        skillLimits,
       });
       navigate(paths.manageEvent(e.id));
     } catch (err) {
       if (err instanceof ApiError) {
         const map: Record<string, keyof Values> = { startsAt: 'from', endsAt: 'to' };
-        for (const [k, m] of Object.entries(err.fields ?? {})) form.setError((map[k] ?? k) as keyof Values, { message: m });
+        for (const [k, m] of Object.entries(err.fields ?? {}))
+          form.setError((map[k] ?? k) as keyof Values, { message: m });
         setFormError(err.message);
       } else setFormError('Something went wrong.');
     }
@@ -96,7 +125,11 @@ export function NewEventPage() {
           ) : (
             <SelectField label="Venue" error={errors.venueId?.message} {...form.register('venueId')}>
               <option value="">Choose…</option>
-              {venues.data?.map((x) => <option key={x.id} value={x.id}>{x.name}, {x.town}</option>)}
+              {venues.data?.map((x) => (
+                <option key={x.id} value={x.id}>
+                  {x.name}, {x.town}
+                </option>
+              ))}
             </SelectField>
           )}
           <div className="grid gap-4 sm:grid-cols-3">
@@ -108,24 +141,56 @@ export function NewEventPage() {
         </Card>
         <Card className="space-y-4">
           <div className="grid gap-4 sm:grid-cols-2">
-            <TextField label="Slot length (minutes)" type="number" min={5} step={5} error={errors.slotMinutes?.message} {...form.register('slotMinutes')} />
-            <TextField label="Items that can start per slot" type="number" min={0} error={errors.slotCapacity?.message} {...form.register('slotCapacity')} />
+            <TextField
+              label="Slot length (minutes)"
+              type="number"
+              min={5}
+              step={5}
+              error={errors.slotMinutes?.message}
+              {...form.register('slotMinutes')}
+            />
+            <TextField
+              label="Items that can start per slot"
+              type="number"
+              min={0}
+              error={errors.slotCapacity?.message}
+              {...form.register('slotCapacity')}
+            />
           </div>
-          {preview && <p role="status" className="rounded-lg bg-paper px-3 py-2 text-sm font-semibold">{preview}</p>}
+          {preview && (
+            <p role="status" className="rounded-lg bg-paper px-3 py-2 text-sm font-semibold">
+              {preview}
+            </p>
+          )}
           <details>
             <summary className="cursor-pointer font-semibold text-navy">Limits per skill (optional)</summary>
-            <p className="mt-2 text-sm text-ink-soft">E.g. at most 2 textile items per slot when only one sewing machine comes. Leave empty for no limit.</p>
+            <p className="mt-2 text-sm text-ink-soft">
+              E.g. at most 2 textile items per slot when only one sewing machine comes. Leave empty for no limit.
+            </p>
             <div className="mt-2 grid grid-cols-2 gap-3 sm:grid-cols-3">
-              {SKILLS.map((s) => <TextField key={s} label={SKILL_LABELS[s]} type="number" min={0} {...form.register(`limits.${s}`)} />)}
+              {SKILLS.map((s) => (
+                <TextField key={s} label={SKILL_LABELS[s]} type="number" min={0} {...form.register(`limits.${s}`)} />
+              ))}
             </div>
           </details>
           <div className="space-y-1">
-            <label htmlFor="desc" className="block font-semibold">Note for visitors (optional)</label>
-            <textarea id="desc" rows={3} className="block w-full rounded-lg border border-ink/20 bg-white px-3 py-2.5" {...form.register('description')} />
+            <label htmlFor="desc" className="block font-semibold">
+              Note for visitors (optional)
+            </label>
+            <textarea
+              id="desc"
+              rows={3}
+              className="block w-full rounded-lg border border-ink/20 bg-white px-3 py-2.5"
+              {...form.register('description')}
+            />
           </div>
         </Card>
-        <Button type="submit" busy={form.formState.isSubmitting}>Create the draft</Button>
-        <p className="text-sm text-ink-soft">The session stays a draft, seen only by organisers, until you publish it. You can adjust each slot first.</p>
+        <Button type="submit" busy={form.formState.isSubmitting}>
+          Create the draft
+        </Button>
+        <p className="text-sm text-ink-soft">
+          The session stays a draft, seen only by organisers, until you publish it. You can adjust each slot first.
+        </p>
       </form>
     </div>
   );

@@ -31,12 +31,15 @@ export function GroupSettingsPage() {
   }, [settings.data]);
   if (settings.isPending || categories.isPending) return <Spinner />;
   if (settings.error) return <Alert tone="error">{settings.error.message}</Alert>;
-  const toggle = (id: number) => { save.reset(); setExcluded((s) => {
-    const n = new Set(s);
-    if (n.has(id)) n.delete(id);
-    else n.add(id);
-    return n;
-  }); };
+  const toggle = (id: number) => {
+    save.reset();
+    setExcluded((s) => {
+      const n = new Set(s);
+      if (n.has(id)) n.delete(id);
+      else n.add(id);
+      return n;
+    });
+  };
 
   return (
     <div>
@@ -46,8 +49,19 @@ export function GroupSettingsPage() {
         <Card className="space-y-4">
           <h2 className="text-lg">House rules and what you take</h2>
           <div className="space-y-1">
-            <label htmlFor="rules" className="block font-semibold">House rules (one per line)</label>
-            <textarea id="rules" rows={6} value={rules} onChange={(e) => { setRules(e.target.value); save.reset(); }} className="block w-full rounded-lg border border-ink/20 bg-white px-3 py-2.5" />
+            <label htmlFor="rules" className="block font-semibold">
+              House rules (one per line)
+            </label>
+            <textarea
+              id="rules"
+              rows={6}
+              value={rules}
+              onChange={(e) => {
+                setRules(e.target.value);
+                save.reset();
+              }}
+              className="block w-full rounded-lg border border-ink/20 bg-white px-3 py-2.5"
+            />
             <p className="text-sm text-ink-soft">Visitors accept these when they book.</p>
           </div>
           <fieldset>
@@ -61,8 +75,16 @@ export function GroupSettingsPage() {
                     <p className="text-sm font-bold text-ink-soft">{label}</p>
                     {list.map((c) => (
                       <label key={c.id} className="flex items-start gap-2 py-0.5 text-sm">
-                        <input type="checkbox" className="mt-0.5 size-4 accent-alert" checked={excluded.has(c.id)} onChange={() => toggle(c.id)} />
-                        <span>{c.name}{c.refusal && <span className="text-ink-soft"> — usually refused: {c.refusal.reason}</span>}</span>
+                        <input
+                          type="checkbox"
+                          className="mt-0.5 size-4 accent-alert"
+                          checked={excluded.has(c.id)}
+                          onChange={() => toggle(c.id)}
+                        />
+                        <span>
+                          {c.name}
+                          {c.refusal && <span className="text-ink-soft"> — usually refused: {c.refusal.reason}</span>}
+                        </span>
                       </label>
                     ))}
                   </div>
@@ -72,14 +94,29 @@ export function GroupSettingsPage() {
           </fieldset>
           {save.error && <Alert tone="error">{save.error.message}</Alert>}
           {save.isSuccess && <Alert tone="success">Saved.</Alert>}
-          <Button busy={save.isPending} onClick={() => save.mutate({ houseRules: rules, excludedCategoryIds: [...excluded] })}>Save rules</Button>
+          <Button
+            busy={save.isPending}
+            onClick={() => save.mutate({ houseRules: rules, excludedCategoryIds: [...excluded] })}
+          >
+            Save rules
+          </Button>
         </Card>
 
         <Card className="space-y-4">
           <h2 className="text-lg">Venues</h2>
-          {venues.data?.length === 0 && <p className="text-sm text-ink-soft">No venue yet: add the hall you meet in.</p>}
+          {venues.data?.length === 0 && (
+            <p className="text-sm text-ink-soft">No venue yet: add the hall you meet in.</p>
+          )}
           <ul className="space-y-2">
-            {venues.data?.map((v) => <li key={v.id} className="rounded-lg bg-paper p-3"><p className="font-bold">{v.name}</p><p className="text-sm">{v.address}, {v.town}</p>{v.accessNotes && <p className="text-sm text-ink-soft">{v.accessNotes}</p>}</li>)}
+            {venues.data?.map((v) => (
+              <li key={v.id} className="rounded-lg bg-paper p-3">
+                <p className="font-bold">{v.name}</p>
+                <p className="text-sm">
+                  {v.address}, {v.town}
+                </p>
+                {v.accessNotes && <p className="text-sm text-ink-soft">{v.accessNotes}</p>}
+              </li>
+            ))}
           </ul>
           <form
             noValidate
@@ -97,10 +134,20 @@ export function GroupSettingsPage() {
             <h3 className="font-bold">Add a venue</h3>
             {venueError && <Alert tone="error">{venueError}</Alert>}
             <TextField label="Name" error={venueForm.formState.errors.name?.message} {...venueForm.register('name')} />
-            <TextField label="Street address" error={venueForm.formState.errors.address?.message} {...venueForm.register('address')} />
+            <TextField
+              label="Street address"
+              error={venueForm.formState.errors.address?.message}
+              {...venueForm.register('address')}
+            />
             <TextField label="Town" error={venueForm.formState.errors.town?.message} {...venueForm.register('town')} />
-            <TextField label="Access notes (optional)" hint="Steps, lifts, parking, where the sockets are." {...venueForm.register('accessNotes')} />
-            <Button type="submit" variant="secondary" busy={venueForm.formState.isSubmitting}>Add venue</Button>
+            <TextField
+              label="Access notes (optional)"
+              hint="Steps, lifts, parking, where the sockets are."
+              {...venueForm.register('accessNotes')}
+            />
+            <Button type="submit" variant="secondary" busy={venueForm.formState.isSubmitting}>
+              Add venue
+            </Button>
           </form>
         </Card>
         <SharingCard groupId={groupId} />
@@ -116,9 +163,21 @@ function SharingCard({ groupId }: { groupId: number }) {
   return (
     <Card className="space-y-3">
       <h2 className="text-lg">Repair notes</h2>
-      <p className="text-sm text-ink-soft">Your fixers’ notes and write-ups are always searchable by your own volunteers. Sharing lets the other groups on Mendery search them too; no visitor’s name is ever in them.</p>
-      {sharing.isPending ? <Spinner /> : sharing.error ? <Alert tone="error">{sharing.error.message}</Alert> : (
-        <CheckField label="Share our repair notes with the other groups" checked={sharing.data.share} disabled={set.isPending} onChange={(e) => set.mutate(e.target.checked)} />
+      <p className="text-sm text-ink-soft">
+        Your fixers’ notes and write-ups are always searchable by your own volunteers. Sharing lets the other groups on
+        Mendery search them too; no visitor’s name is ever in them.
+      </p>
+      {sharing.isPending ? (
+        <Spinner />
+      ) : sharing.error ? (
+        <Alert tone="error">{sharing.error.message}</Alert>
+      ) : (
+        <CheckField
+          label="Share our repair notes with the other groups"
+          checked={sharing.data.share}
+          disabled={set.isPending}
+          onChange={(e) => set.mutate(e.target.checked)}
+        />
       )}
       {set.error && <Alert tone="error">{set.error.message}</Alert>}
     </Card>

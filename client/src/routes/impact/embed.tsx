@@ -5,10 +5,9 @@ import { paths } from '../../config/paths';
 import { usePublicImpact } from '../../features/impact/api';
 import { monthLabel, oneDp, positiveInt, whole } from '../../features/impact/display';
 
-
-
 /* The host page decides the frame; nothing of the app's own page background or scrolling may show inside it. */
-const FRAME_CSS = 'html, body { margin: 0; padding: 0; background: transparent !important; overflow: hidden; } #root { height: 100%; }';
+const FRAME_CSS =
+  'html, body { margin: 0; padding: 0; background: transparent !important; overflow: hidden; } #root { height: 100%; }';
 
 /**
  * The widget another website puts in an iframe of about 360×260: the group's headline figures and a sparkline,
@@ -22,7 +21,12 @@ export function ImpactWidgetPage() {
   const name = d?.group ? d.group.name : 'All groups on Mendery';
   const months = (d?.byMonth ?? []).map((m) => ({ month: m.month, kg: Math.round(m.kgDiverted * 10) / 10 }));
   const methodLink = (
-    <a href={paths.publicImpact(groupId)} target="_blank" rel="noopener" className="font-semibold text-navy underline decoration-navy/30 hover:decoration-navy">
+    <a
+      href={paths.publicImpact(groupId)}
+      target="_blank"
+      rel="noopener"
+      className="font-semibold text-navy underline decoration-navy/30 hover:decoration-navy"
+    >
       Counted with Mendery · method<span className="sr-only"> (opens in a new tab)</span>
     </a>
   );
@@ -31,9 +35,14 @@ export function ImpactWidgetPage() {
     <div className="box-border h-dvh max-h-dvh w-full overflow-hidden p-1 font-sans text-ink antialiased">
       <style>{FRAME_CSS}</style>
       <title>{`Repairs · ${name}`}</title>
-      <article data-testid="impact-widget" className="box-border flex h-full max-h-[260px] flex-col overflow-hidden rounded-xl bg-white px-3.5 py-3 ring-1 ring-ink/10">
+      <article
+        data-testid="impact-widget"
+        className="box-border flex h-full max-h-[260px] flex-col overflow-hidden rounded-xl bg-white px-3.5 py-3 ring-1 ring-ink/10"
+      >
         {impact.isPending ? (
-          <p role="status" className="m-auto text-sm text-ink-soft">Loading the figures…</p>
+          <p role="status" className="m-auto text-sm text-ink-soft">
+            Loading the figures…
+          </p>
         ) : !d ? (
           <div className="m-auto text-center text-sm">
             <p className="font-bold text-navy">The figures are not available just now.</p>
@@ -42,14 +51,26 @@ export function ImpactWidgetPage() {
         ) : (
           <>
             <header className="min-w-0">
-              <h1 className="truncate text-base font-extrabold leading-tight text-navy" title={name}>{name}</h1>
-              <p className="truncate text-xs text-ink-soft">Repairs at community sessions{d.group?.town ? ` in ${d.group.town}` : ''}</p>
+              <h1 className="truncate text-base font-extrabold leading-tight text-navy" title={name}>
+                {name}
+              </h1>
+              <p className="truncate text-xs text-ink-soft">
+                Repairs at community sessions{d.group?.town ? ` in ${d.group.town}` : ''}
+              </p>
             </header>
 
             <dl className="mt-2 grid grid-cols-3 gap-2">
               <Figure value={whole.format(d.fixed)} label="items fixed" testId="widget-fixed" />
               <Figure value={oneDp.format(d.kgDiverted)} label="kg diverted" testId="widget-kg" />
-              <Figure value={oneDp.format(d.co2eKg)} label={<>kg CO<sub>2</sub>e avoided</>} testId="widget-co2e" />
+              <Figure
+                value={oneDp.format(d.co2eKg)}
+                label={
+                  <>
+                    kg CO<sub>2</sub>e avoided
+                  </>
+                }
+                testId="widget-co2e"
+              />
             </dl>
 
             <div className="mt-2 min-h-0 flex-1">
@@ -57,8 +78,21 @@ export function ImpactWidgetPage() {
                 <figure>
                   <div aria-hidden className="h-[72px] w-full">
                     <ResponsiveContainer width="100%" height="100%">
-                      <AreaChart data={months} margin={{ top: 2, right: 0, bottom: 0, left: 0 }} accessibilityLayer={false}>
-                        <Area type="monotone" dataKey="kg" stroke="#5d7f6a" strokeWidth={2} fill="#5d7f6a" fillOpacity={0.2} isAnimationActive={false} dot={false} />
+                      <AreaChart
+                        data={months}
+                        margin={{ top: 2, right: 0, bottom: 0, left: 0 }}
+                        accessibilityLayer={false}
+                      >
+                        <Area
+                          type="monotone"
+                          dataKey="kg"
+                          stroke="#5d7f6a"
+                          strokeWidth={2}
+                          fill="#5d7f6a"
+                          fillOpacity={0.2}
+                          isAnimationActive={false}
+                          dot={false}
+                        />
                       </AreaChart>
                     </ResponsiveContainer>
                   </div>
@@ -67,7 +101,11 @@ export function ImpactWidgetPage() {
                   </figcaption>
                 </figure>
               ) : (
-                <p className="text-xs text-ink-soft">{d.items === 0 ? 'No repairs counted yet: come to a session!' : `${whole.format(d.items)} items brought in so far.`}</p>
+                <p className="text-xs text-ink-soft">
+                  {d.items === 0
+                    ? 'No repairs counted yet: come to a session!'
+                    : `${whole.format(d.items)} items brought in so far.`}
+                </p>
               )}
             </div>
 
@@ -83,7 +121,9 @@ function Figure({ value, label, testId }: { value: string; label: ReactNode; tes
   return (
     <div className="flex min-w-0 flex-col-reverse">
       <dt className="text-[11px] font-semibold leading-tight text-ink-soft">{label}</dt>
-      <dd className="truncate text-xl font-extrabold leading-tight text-navy tabular-nums" data-testid={testId}>{value}</dd>
+      <dd className="truncate text-xl font-extrabold leading-tight text-navy tabular-nums" data-testid={testId}>
+        {value}
+      </dd>
     </div>
   );
 }

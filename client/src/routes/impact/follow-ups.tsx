@@ -12,7 +12,8 @@ import { useGroupSettings } from '../../features/events/api/organiser';
 import { useFollowUps, useSetFollowUp, type FollowUp } from '../../features/impact/api';
 
 type ManualStatus = (typeof MANUAL_FOLLOW_UP_STATUSES)[number];
-const isManual = (s: FollowUpStatus): s is ManualStatus => (MANUAL_FOLLOW_UP_STATUSES as readonly FollowUpStatus[]).includes(s);
+const isManual = (s: FollowUpStatus): s is ManualStatus =>
+  (MANUAL_FOLLOW_UP_STATUSES as readonly FollowUpStatus[]).includes(s);
 
 /** Still in hand: nobody has come back with the part, and nobody has given up. */
 const OPEN_STATUSES: readonly FollowUpStatus[] = ['open', 'part-ordered', 'rebooked'];
@@ -27,7 +28,8 @@ const CHIP: Record<FollowUpStatus, string> = {
 };
 
 const localZone = () => Intl.DateTimeFormat().resolvedOptions().timeZone;
-const shortDay = (d: string, timeZone: string) => new Intl.DateTimeFormat('en-GB', { timeZone, day: 'numeric', month: 'short', year: 'numeric' }).format(new Date(d));
+const shortDay = (d: string, timeZone: string) =>
+  new Intl.DateTimeFormat('en-GB', { timeZone, day: 'numeric', month: 'short', year: 'numeric' }).format(new Date(d));
 const age = (days: number) => (days <= 0 ? 'today' : days === 1 ? '1 day ago' : `${days} days ago`);
 
 /** Items that need a part, oldest first: who to chase, what they need, and the link that books them back in. */
@@ -43,12 +45,16 @@ export function FollowUpsPage() {
   const [copied, setCopied] = useState<{ itemId: number; ok: boolean } | null>(null);
   const tz = group.data?.timeZone ?? localZone();
 
-  const show = (all: boolean) => setParams((prev) => {
-    const next = new URLSearchParams(prev);
-    if (all) next.set('show', 'all');
-    else next.delete('show');
-    return next;
-  }, { replace: true });
+  const show = (all: boolean) =>
+    setParams(
+      (prev) => {
+        const next = new URLSearchParams(prev);
+        if (all) next.set('show', 'all');
+        else next.delete('show');
+        return next;
+      },
+      { replace: true },
+    );
 
   const all = [...(followUps.data ?? [])].sort((a, b) => a.createdAt.localeCompare(b.createdAt));
   const open = all.filter((f) => OPEN_STATUSES.includes(f.status));
@@ -77,11 +83,18 @@ export function FollowUpsPage() {
     <div>
       <div className="mb-2">
         <h1 className="text-2xl sm:text-3xl">{group.data?.name ?? 'Parts follow-up'}</h1>
-        <p className="mt-1 text-ink-soft">Items that went home needing a part. Visitors get a mail with the part and a link that books them back in ahead of the queue; after six weeks a reminder.</p>
+        <p className="mt-1 text-ink-soft">
+          Items that went home needing a part. Visitors get a mail with the part and a link that books them back in
+          ahead of the queue; after six weeks a reminder.
+        </p>
       </div>
       <GroupTabs groupId={groupId} />
 
-      <div role="group" aria-label="Which follow-ups" className="mb-4 inline-flex rounded-lg bg-white p-1 ring-1 ring-ink/10">
+      <div
+        role="group"
+        aria-label="Which follow-ups"
+        className="mb-4 inline-flex rounded-lg bg-white p-1 ring-1 ring-ink/10"
+      >
         {([false, true] as const).map((wantAll) => (
           <button
             key={String(wantAll)}
@@ -97,57 +110,116 @@ export function FollowUpsPage() {
       </div>
 
       {setStatus.isError && (
-        <div className="mb-4"><Alert tone="error" title="The status was not changed">{setStatus.error.message}</Alert></div>
+        <div className="mb-4">
+          <Alert tone="error" title="The status was not changed">
+            {setStatus.error.message}
+          </Alert>
+        </div>
       )}
 
       {followUps.isPending ? (
         <Spinner label="Loading the follow-ups…" />
       ) : followUps.isError ? (
-        <Alert tone="error" title="The follow-ups could not be loaded">{followUps.error.message}</Alert>
+        <Alert tone="error" title="The follow-ups could not be loaded">
+          {followUps.error.message}
+        </Alert>
       ) : all.length === 0 ? (
         <EmptyState title="No items waiting for a part" icon="⚙">
-          When a fixer records “{OUTCOME_LABELS['parts-needed']}” for an item, it shows here with the visitor’s details, so nobody is forgotten.
+          When a fixer records “{OUTCOME_LABELS['parts-needed']}” for an item, it shows here with the visitor’s details,
+          so nobody is forgotten.
         </EmptyState>
       ) : list.length === 0 ? (
         <EmptyState title="Nothing open" icon="✓">
           Every item that needed a part came back or was closed.{' '}
-          <button type="button" onClick={() => show(true)} className="font-bold text-navy underline">Show all {all.length}</button>
+          <button type="button" onClick={() => show(true)} className="font-bold text-navy underline">
+            Show all {all.length}
+          </button>
         </EmptyState>
       ) : (
         <ul className="space-y-3">
           {list.map((f) => (
-            <li key={f.itemId} data-testid="follow-up" className="grid gap-4 rounded-xl bg-white p-4 shadow-sm ring-1 ring-ink/5 md:grid-cols-[1fr_15rem]">
+            <li
+              key={f.itemId}
+              data-testid="follow-up"
+              className="grid gap-4 rounded-xl bg-white p-4 shadow-sm ring-1 ring-ink/5 md:grid-cols-[1fr_15rem]"
+            >
               <div className="min-w-0 space-y-2">
                 <div className="flex flex-wrap items-center gap-2">
-                  <span className={`rounded-full px-2.5 py-0.5 text-xs font-bold ${CHIP[f.status]}`} data-testid="follow-up-status">{f.statusLabel}</span>
-                  {f.reminderDue && <span className="rounded-full bg-copper px-2.5 py-0.5 text-xs font-bold text-white" data-testid="reminder-due">Reminder due</span>}
+                  <span
+                    className={`rounded-full px-2.5 py-0.5 text-xs font-bold ${CHIP[f.status]}`}
+                    data-testid="follow-up-status"
+                  >
+                    {f.statusLabel}
+                  </span>
+                  {f.reminderDue && (
+                    <span
+                      className="rounded-full bg-copper px-2.5 py-0.5 text-xs font-bold text-white"
+                      data-testid="reminder-due"
+                    >
+                      Reminder due
+                    </span>
+                  )}
                   <span className="text-sm text-ink-soft">asked for {age(f.ageDays)}</span>
                 </div>
                 <p className="text-lg font-extrabold text-navy">{f.item}</p>
                 <p className="text-sm">
-                  <span className="font-semibold">Part:</span> {f.part ?? <span className="text-ink-soft">not described</span>}
+                  <span className="font-semibold">Part:</span>{' '}
+                  {f.part ?? <span className="text-ink-soft">not described</span>}
                   {f.partCost !== null && <> · about {f.partCost.toFixed(2)}</>}
-                  {f.partLink && <> · <a href={f.partLink} target="_blank" rel="noreferrer" className="font-bold text-navy underline">where to find it<span className="sr-only"> (opens in a new tab)</span></a></>}
+                  {f.partLink && (
+                    <>
+                      {' '}
+                      ·{' '}
+                      <a href={f.partLink} target="_blank" rel="noreferrer" className="font-bold text-navy underline">
+                        where to find it<span className="sr-only"> (opens in a new tab)</span>
+                      </a>
+                    </>
+                  )}
                 </p>
                 <dl className="grid grid-cols-[auto_1fr] gap-x-3 gap-y-0.5 text-sm">
                   <dt className="text-ink-soft">Visitor</dt>
-                  <dd className="min-w-0">{f.visitor.name} · ref. <span className="font-mono">{f.visitor.reference}</span></dd>
+                  <dd className="min-w-0">
+                    {f.visitor.name} · ref. <span className="font-mono">{f.visitor.reference}</span>
+                  </dd>
                   <dt className="text-ink-soft">Contact</dt>
                   <dd className="min-w-0 break-words">
-                    {f.visitor.email && <a href={`mailto:${f.visitor.email}`} className="text-navy underline">{f.visitor.email}</a>}
+                    {f.visitor.email && (
+                      <a href={`mailto:${f.visitor.email}`} className="text-navy underline">
+                        {f.visitor.email}
+                      </a>
+                    )}
                     {f.visitor.email && f.visitor.phone && ' · '}
-                    {f.visitor.phone && <a href={`tel:${f.visitor.phone}`} className="text-navy underline">{f.visitor.phone}</a>}
+                    {f.visitor.phone && (
+                      <a href={`tel:${f.visitor.phone}`} className="text-navy underline">
+                        {f.visitor.phone}
+                      </a>
+                    )}
                     {!f.visitor.email && !f.visitor.phone && <span className="text-ink-soft">none given</span>}
                   </dd>
                   <dt className="text-ink-soft">Session</dt>
-                  <dd className="min-w-0">{f.event.title}, {formatDay(f.event.startsAt, tz)}</dd>
+                  <dd className="min-w-0">
+                    {f.event.title}, {formatDay(f.event.startsAt, tz)}
+                  </dd>
                   <dt className="text-ink-soft">Mails</dt>
                   <dd className="min-w-0">
                     {f.mailedAt ? `Mailed ${shortDay(f.mailedAt, tz)}` : 'Not mailed'}
                     {f.remindedAt ? ` · reminded ${shortDay(f.remindedAt, tz)}` : ''}
                   </dd>
-                  {f.returnVisit && <><dt className="text-ink-soft">Return visit</dt><dd className="min-w-0"><span className="font-mono">{f.returnVisit.reference}</span> · {f.returnVisit.eventTitle}, {formatDay(f.returnVisit.startsAt, tz)}</dd></>}
-                  {f.note && <><dt className="text-ink-soft">Note</dt><dd className="min-w-0">{f.note}</dd></>}
+                  {f.returnVisit && (
+                    <>
+                      <dt className="text-ink-soft">Return visit</dt>
+                      <dd className="min-w-0">
+                        <span className="font-mono">{f.returnVisit.reference}</span> · {f.returnVisit.eventTitle},{' '}
+                        {formatDay(f.returnVisit.startsAt, tz)}
+                      </dd>
+                    </>
+                  )}
+                  {f.note && (
+                    <>
+                      <dt className="text-ink-soft">Note</dt>
+                      <dd className="min-w-0">{f.note}</dd>
+                    </>
+                  )}
                 </dl>
               </div>
 
@@ -160,16 +232,37 @@ export function FollowUpsPage() {
                     disabled={setStatus.isPending && setStatus.variables?.itemId === f.itemId}
                     className="mt-1 block w-full rounded-lg border border-ink/20 bg-white px-3 py-2.5 text-base font-normal"
                   >
-                    {!isManual(f.status) && <option value="" disabled>{f.statusLabel}</option>}
-                    {MANUAL_FOLLOW_UP_STATUSES.map((s) => <option key={s} value={s}>{FOLLOW_UP_LABELS[s]}</option>)}
+                    {!isManual(f.status) && (
+                      <option value="" disabled>
+                        {f.statusLabel}
+                      </option>
+                    )}
+                    {MANUAL_FOLLOW_UP_STATUSES.map((s) => (
+                      <option key={s} value={s}>
+                        {FOLLOW_UP_LABELS[s]}
+                      </option>
+                    ))}
                   </select>
                 </label>
-                {setStatus.isPending && setStatus.variables?.itemId === f.itemId && <p role="status" className="text-sm text-ink-soft">Saving…</p>}
-                {f.rebookUrl && <Button variant="secondary" className="w-full" onClick={() => copy(f)}>Copy re-booking link</Button>}
+                {setStatus.isPending && setStatus.variables?.itemId === f.itemId && (
+                  <p role="status" className="text-sm text-ink-soft">
+                    Saving…
+                  </p>
+                )}
+                {f.rebookUrl && (
+                  <Button variant="secondary" className="w-full" onClick={() => copy(f)}>
+                    Copy re-booking link
+                  </Button>
+                )}
                 {copied?.itemId === f.itemId && (
                   <p role="status" className="text-sm font-semibold">
-                    {copied.ok ? <span className="text-sage">Link copied.</span> : (
-                      <span className="text-alert">Copying did not work here. The link: <span className="break-all font-mono font-normal text-ink">{f.rebookUrl}</span></span>
+                    {copied.ok ? (
+                      <span className="text-sage">Link copied.</span>
+                    ) : (
+                      <span className="text-alert">
+                        Copying did not work here. The link:{' '}
+                        <span className="break-all font-mono font-normal text-ink">{f.rebookUrl}</span>
+                      </span>
                     )}
                   </p>
                 )}
@@ -182,17 +275,30 @@ export function FollowUpsPage() {
       <ConfirmDialog
         open={confirm !== null}
         title="Mark as given up?"
-        message={confirm ? `${confirm.item} for ${confirm.visitor.name} leaves the open list, and the re-booking link stops working.` : ''}
+        message={
+          confirm
+            ? `${confirm.item} for ${confirm.visitor.name} leaves the open list, and the re-booking link stops working.`
+            : ''
+        }
         confirmLabel="Mark as given up"
         busy={setStatus.isPending}
         onCancel={() => setConfirm(null)}
         onConfirm={() => {
           if (!confirm) return;
           const trimmed = note.trim();
-          setStatus.mutate({ itemId: confirm.itemId, status: 'gave-up', note: trimmed || undefined }, { onSettled: () => setConfirm(null) });
+          setStatus.mutate(
+            { itemId: confirm.itemId, status: 'gave-up', note: trimmed || undefined },
+            { onSettled: () => setConfirm(null) },
+          );
         }}
       >
-        <TextAreaField label="Note (optional)" value={note} maxLength={300} onChange={(e) => setNote(e.target.value)} hint="For example: the part is no longer made." />
+        <TextAreaField
+          label="Note (optional)"
+          value={note}
+          maxLength={300}
+          onChange={(e) => setNote(e.target.value)}
+          hint="For example: the part is no longer made."
+        />
       </ConfirmDialog>
     </div>
   );

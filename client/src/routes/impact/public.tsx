@@ -1,15 +1,35 @@
 import type { ReactNode } from 'react';
 import { Link, useParams } from 'react-router';
 import { usePublicGroups } from '../../features/groups/api/public-groups';
-import { Area, AreaChart, CartesianGrid, Legend, Pie, PieChart, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
+import {
+  Area,
+  AreaChart,
+  CartesianGrid,
+  Legend,
+  Pie,
+  PieChart,
+  ResponsiveContainer,
+  Tooltip,
+  XAxis,
+  YAxis,
+} from 'recharts';
 import { OUTCOME_LABELS } from '../../../../shared/event-day/constants';
 import { Alert, Card, EmptyState, PageTitle, Spinner } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
 import { usePublicImpact, type Method, type PublicImpact } from '../../features/impact/api';
 import { ApiError } from '../../lib/api';
-import { CO2E, COLOURS, ChartCard, FactorTable, HorizontalBars, linkButton, longMonth, monthLabel, oneDp, whole } from '../../features/impact/display';
-
-
+import {
+  CO2E,
+  COLOURS,
+  ChartCard,
+  FactorTable,
+  HorizontalBars,
+  linkButton,
+  longMonth,
+  monthLabel,
+  oneDp,
+  whole,
+} from '../../features/impact/display';
 
 /** What a group (or every group) has repaired, for anyone: totals and charts, never a person. */
 export function PublicImpactPage() {
@@ -22,7 +42,11 @@ export function PublicImpactPage() {
   if (impact.isPending) return <Spinner label="Counting the repairs…" />;
   if (impact.isError) {
     if (impact.error instanceof ApiError && impact.error.status === 404) return <NotFound />;
-    return <Alert tone="error" title="The figures could not be loaded">{impact.error.message} Try again in a moment.</Alert>;
+    return (
+      <Alert tone="error" title="The figures could not be loaded">
+        {impact.error.message} Try again in a moment.
+      </Alert>
+    );
   }
   const d = impact.data;
   const title = d.group ? `${d.group.name}${d.group.town ? `, ${d.group.town}` : ''}` : 'All groups on Mendery';
@@ -30,12 +54,25 @@ export function PublicImpactPage() {
   return (
     <div className="space-y-6">
       <title>{`Impact · ${title}`}</title>
-      {groupId !== undefined && <Link to={paths.publicImpact()} className="text-sm font-bold text-navy underline">← All groups on Mendery</Link>}
-      <PageTitle title={title} lead={d.group ? 'What volunteers and visitors have repaired together at this group’s sessions.' : 'What volunteers and visitors have repaired together at the community repair sessions on Mendery.'} />
+      {groupId !== undefined && (
+        <Link to={paths.publicImpact()} className="text-sm font-bold text-navy underline">
+          ← All groups on Mendery
+        </Link>
+      )}
+      <PageTitle
+        title={title}
+        lead={
+          d.group
+            ? 'What volunteers and visitors have repaired together at this group’s sessions.'
+            : 'What volunteers and visitors have repaired together at the community repair sessions on Mendery.'
+        }
+      />
       {groupId === undefined && <GroupLinks />}
 
       {d.items === 0 ? (
-        <EmptyState title="No repairs counted yet" icon="▤">Figures appear here after the first session, once the fixers have recorded what happened to each item.</EmptyState>
+        <EmptyState title="No repairs counted yet" icon="▤">
+          Figures appear here after the first session, once the fixers have recorded what happened to each item.
+        </EmptyState>
       ) : (
         <>
           <section aria-label="Totals">
@@ -44,7 +81,11 @@ export function PublicImpactPage() {
               <Tile testId="stat-fixed" value={whole.format(d.fixed)} label="fixed" />
               <Tile testId="stat-kgDiverted" value={oneDp.format(d.kgDiverted)} label="kg kept out of the bin" />
               <Tile testId="stat-co2eKg" value={oneDp.format(d.co2eKg)} label={<>kg {CO2E} avoided</>} />
-              <Tile testId="stat-events" value={whole.format(d.events)} label={d.events === 1 ? 'session' : 'sessions'} />
+              <Tile
+                testId="stat-events"
+                value={whole.format(d.events)}
+                label={d.events === 1 ? 'session' : 'sessions'}
+              />
             </ul>
           </section>
           <Charts d={d} />
@@ -52,7 +93,9 @@ export function PublicImpactPage() {
       )}
 
       <div className="flex flex-wrap gap-2">
-        <Link to={paths.events()} className={`${linkButton} bg-copper text-white hover:bg-copper-dark`}>Find a repair session</Link>
+        <Link to={paths.events()} className={`${linkButton} bg-copper text-white hover:bg-copper-dark`}>
+          Find a repair session
+        </Link>
       </div>
 
       <MethodCard method={d.method} />
@@ -65,7 +108,11 @@ function NotFound() {
     <div className="space-y-4">
       <PageTitle title="Group not found" />
       <Alert tone="info" title="We could not find that group">
-        The link may be out of date. <Link to={paths.publicImpact()} className="font-bold underline">See the figures of all groups</Link>.
+        The link may be out of date.{' '}
+        <Link to={paths.publicImpact()} className="font-bold underline">
+          See the figures of all groups
+        </Link>
+        .
       </Alert>
     </div>
   );
@@ -74,15 +121,24 @@ function NotFound() {
 function Tile({ testId, value, label }: { testId: string; value: string; label: ReactNode }) {
   return (
     <li className="rounded-lg border-t-4 border-sage bg-white px-3 py-3 shadow-sm ring-1 ring-ink/5 last:col-span-2 sm:last:col-span-1">
-      <p className="text-2xl font-extrabold text-navy tabular-nums sm:text-3xl" data-testid={testId}>{value}</p>
+      <p className="text-2xl font-extrabold text-navy tabular-nums sm:text-3xl" data-testid={testId}>
+        {value}
+      </p>
       <p className="text-sm font-semibold text-ink-soft">{label}</p>
     </li>
   );
 }
 
 function Charts({ d }: { d: PublicImpact }) {
-  const months = d.byMonth.map((m) => ({ month: m.month, label: monthLabel(m.month), kg: Math.round(m.kgDiverted * 10) / 10 }));
-  const heaviest = months.reduce<(typeof months)[number] | null>((best, m) => (!best || m.kg > best.kg ? m : best), null);
+  const months = d.byMonth.map((m) => ({
+    month: m.month,
+    label: monthLabel(m.month),
+    kg: Math.round(m.kgDiverted * 10) / 10,
+  }));
+  const heaviest = months.reduce<(typeof months)[number] | null>(
+    (best, m) => (!best || m.kg > best.kg ? m : best),
+    null,
+  );
   const outcomes = [
     { name: OUTCOME_LABELS.fixed, value: d.fixed, fill: COLOURS.fixed },
     { name: OUTCOME_LABELS['parts-needed'], value: d.partsNeeded, fill: COLOURS.partsNeeded },
@@ -98,9 +154,16 @@ function Charts({ d }: { d: PublicImpact }) {
       <ChartCard
         level="h2"
         title="Kilograms kept out of the bin, by month"
-        summary={heaviest ? `${oneDp.format(d.kgDiverted)} kg over ${months.length} ${months.length === 1 ? 'month' : 'months'}; the most in ${longMonth(heaviest.month)} (${oneDp.format(heaviest.kg)} kg).` : 'No months to show yet.'}
+        summary={
+          heaviest
+            ? `${oneDp.format(d.kgDiverted)} kg over ${months.length} ${months.length === 1 ? 'month' : 'months'}; the most in ${longMonth(heaviest.month)} (${oneDp.format(heaviest.kg)} kg).`
+            : 'No months to show yet.'
+        }
         table={
-          <SimpleTable head={['Month', 'kg']} rows={months.map((m) => ({ key: m.month, cells: [longMonth(m.month), oneDp.format(m.kg)] }))} />
+          <SimpleTable
+            head={['Month', 'kg']}
+            rows={months.map((m) => ({ key: m.month, cells: [longMonth(m.month), oneDp.format(m.kg)] }))}
+          />
         }
       >
         <ResponsiveContainer width="100%" height={260}>
@@ -109,7 +172,15 @@ function Charts({ d }: { d: PublicImpact }) {
             <XAxis dataKey="label" tick={{ fontSize: 12 }} interval="preserveStartEnd" />
             <YAxis tick={{ fontSize: 12 }} width={44} />
             <Tooltip formatter={(v) => [`${oneDp.format(Number(v))} kg`, 'Kept out of the bin']} />
-            <Area isAnimationActive={false} type="monotone" dataKey="kg" stroke={COLOURS.fixed} strokeWidth={2} fill={COLOURS.fixed} fillOpacity={0.25} />
+            <Area
+              isAnimationActive={false}
+              type="monotone"
+              dataKey="kg"
+              stroke={COLOURS.fixed}
+              strokeWidth={2}
+              fill={COLOURS.fixed}
+              fillOpacity={0.25}
+            />
           </AreaChart>
         </ResponsiveContainer>
       </ChartCard>
@@ -117,15 +188,36 @@ function Charts({ d }: { d: PublicImpact }) {
       <ChartCard
         level="h2"
         title="What happened to the items"
-        summary={known ? `${share(d.fixed)} of the items with a recorded outcome were fixed; the others needed a part, got advice, or were at the end of their life.` : 'No outcomes recorded yet.'}
-        table={<SimpleTable head={['Outcome', 'Items', 'Share']} rows={outcomes.map((o) => ({ key: o.name, cells: [o.name, whole.format(o.value), share(o.value)] }))} />}
+        summary={
+          known
+            ? `${share(d.fixed)} of the items with a recorded outcome were fixed; the others needed a part, got advice, or were at the end of their life.`
+            : 'No outcomes recorded yet.'
+        }
+        table={
+          <SimpleTable
+            head={['Outcome', 'Items', 'Share']}
+            rows={outcomes.map((o) => ({ key: o.name, cells: [o.name, whole.format(o.value), share(o.value)] }))}
+          />
+        }
       >
         {known > 0 && (
           <ResponsiveContainer width="100%" height={260}>
             <PieChart accessibilityLayer={false}>
-              <Pie data={outcomes} dataKey="value" nameKey="name" innerRadius="48%" outerRadius="78%" paddingAngle={1} isAnimationActive={false} />
+              <Pie
+                data={outcomes}
+                dataKey="value"
+                nameKey="name"
+                innerRadius="48%"
+                outerRadius="78%"
+                paddingAngle={1}
+                isAnimationActive={false}
+              />
               <Tooltip formatter={(v, name) => [`${whole.format(Number(v))} (${share(Number(v))})`, name]} />
-              <Legend wrapperStyle={{ fontSize: 12 }} itemSorter={null} formatter={(value) => <span className="text-ink">{value}</span>} />
+              <Legend
+                wrapperStyle={{ fontSize: 12 }}
+                itemSorter={null}
+                formatter={(value) => <span className="text-ink">{value}</span>}
+              />
             </PieChart>
           </ResponsiveContainer>
         )}
@@ -134,28 +226,64 @@ function Charts({ d }: { d: PublicImpact }) {
       <ChartCard
         level="h2"
         title="The items most often brought in"
-        summary={top.length ? `Most often: ${top.slice(0, 3).map((c) => `${c.name.toLowerCase()} (${c.items})`).join(', ')}.` : 'No categories yet.'}
-        table={<SimpleTable head={['Category', 'Items', 'Fixed']} rows={d.byCategory.map((c) => ({ key: String(c.categoryId), cells: [c.name, whole.format(c.items), whole.format(c.fixed)] }))} />}
+        summary={
+          top.length
+            ? `Most often: ${top
+                .slice(0, 3)
+                .map((c) => `${c.name.toLowerCase()} (${c.items})`)
+                .join(', ')}.`
+            : 'No categories yet.'
+        }
+        table={
+          <SimpleTable
+            head={['Category', 'Items', 'Fixed']}
+            rows={d.byCategory.map((c) => ({
+              key: String(c.categoryId),
+              cells: [c.name, whole.format(c.items), whole.format(c.fixed)],
+            }))}
+          />
+        }
       >
-        <HorizontalBars data={top} labelKey="name" legend bars={[{ dataKey: 'items', name: 'Brought in', fill: COLOURS.advice }, { dataKey: 'fixed', name: 'Fixed', fill: COLOURS.fixed }]} />
+        <HorizontalBars
+          data={top}
+          labelKey="name"
+          legend
+          bars={[
+            { dataKey: 'items', name: 'Brought in', fill: COLOURS.advice },
+            { dataKey: 'fixed', name: 'Fixed', fill: COLOURS.fixed },
+          ]}
+        />
       </ChartCard>
     </div>
   );
 }
-
 
 function SimpleTable({ head, rows }: { head: string[]; rows: { key: string; cells: string[] }[] }) {
   return (
     <table className="w-full text-sm">
       <thead>
         <tr className="border-b border-ink/10 text-ink-soft">
-          {head.map((h, i) => <th key={h} scope="col" className={`py-1 pr-3 font-semibold ${i === 0 ? 'text-left' : 'text-right'}`}>{h}</th>)}
+          {head.map((h, i) => (
+            <th key={h} scope="col" className={`py-1 pr-3 font-semibold ${i === 0 ? 'text-left' : 'text-right'}`}>
+              {h}
+            </th>
+          ))}
         </tr>
       </thead>
       <tbody className="divide-y divide-ink/5">
         {rows.map((r) => (
           <tr key={r.key}>
-            {r.cells.map((c, i) => (i === 0 ? <th key={i} scope="row" className="py-1 pr-3 text-left font-semibold">{c}</th> : <td key={i} className="py-1 pr-3 text-right tabular-nums">{c}</td>))}
+            {r.cells.map((c, i) =>
+              i === 0 ? (
+                <th key={i} scope="row" className="py-1 pr-3 text-left font-semibold">
+                  {c}
+                </th>
+              ) : (
+                <td key={i} className="py-1 pr-3 text-right tabular-nums">
+                  {c}
+                </td>
+              ),
+            )}
           </tr>
         ))}
       </tbody>
@@ -167,16 +295,28 @@ function MethodCard({ method }: { method: Method }) {
   return (
     <Card className="p-4 sm:p-5">
       <section aria-labelledby="method-heading" className="space-y-3 text-sm leading-relaxed">
-        <h2 id="method-heading" className="text-lg">How we count</h2>
+        <h2 id="method-heading" className="text-lg">
+          How we count
+        </h2>
         <ul className="list-disc space-y-1 pl-5">
-          {method.text.map((line) => <li key={line}>{line}</li>)}
+          {method.text.map((line) => (
+            <li key={line}>{line}</li>
+          ))}
         </ul>
-        <p><span className="font-bold">Displacement factor {method.displacement}.</span> {method.displacementNote}</p>
-        <p><span className="font-bold">Emission factors:</span> {method.factorSource}</p>
-        <p className="text-ink-soft">These figures are estimates. They count items, not people: nobody who brought an item is named here.</p>
+        <p>
+          <span className="font-bold">Displacement factor {method.displacement}.</span> {method.displacementNote}
+        </p>
+        <p>
+          <span className="font-bold">Emission factors:</span> {method.factorSource}
+        </p>
+        <p className="text-ink-soft">
+          These figures are estimates. They count items, not people: nobody who brought an item is named here.
+        </p>
         {method.categories.length > 0 && (
           <details>
-            <summary className="min-h-11 cursor-pointer py-2 font-bold text-navy">Weights and factors, with their sources</summary>
+            <summary className="min-h-11 cursor-pointer py-2 font-bold text-navy">
+              Weights and factors, with their sources
+            </summary>
             <div className="overflow-x-auto">
               <FactorTable categories={method.categories} />
             </div>
@@ -193,7 +333,16 @@ function GroupLinks() {
   if (!groups.data?.length) return null;
   return (
     <nav aria-label="Groups" className="flex flex-wrap gap-2">
-      {groups.data.map((g) => <Link key={g.id} to={paths.publicImpact(g.id)} className="rounded-lg bg-white px-3 py-2 text-sm font-semibold text-navy ring-1 ring-navy/20 hover:bg-navy/5">{g.name}{g.town ? ` · ${g.town}` : ''}</Link>)}
+      {groups.data.map((g) => (
+        <Link
+          key={g.id}
+          to={paths.publicImpact(g.id)}
+          className="rounded-lg bg-white px-3 py-2 text-sm font-semibold text-navy ring-1 ring-navy/20 hover:bg-navy/5"
+        >
+          {g.name}
+          {g.town ? ` · ${g.town}` : ''}
+        </Link>
+      ))}
     </nav>
   );
 }

@@ -1,6 +1,13 @@
 import { useMemo } from 'react';
 import { Link, useSearchParams } from 'react-router';
-import { BARRIER_LABELS, BARRIERS, OUTCOME_LABELS, OUTCOMES, type Barrier, type Outcome } from '../../../../shared/event-day/constants';
+import {
+  BARRIER_LABELS,
+  BARRIERS,
+  OUTCOME_LABELS,
+  OUTCOMES,
+  type Barrier,
+  type Outcome,
+} from '../../../../shared/event-day/constants';
 import { Alert, EmptyState, PageTitle, Spinner } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
 import { useCategories } from '../../features/events/api/events';
@@ -9,10 +16,16 @@ import { isoDate, oneDp, positiveInt, whole } from '../../features/impact/displa
 
 const PAGE_SIZE = 50;
 const dayFormat = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric' });
-const isoDayFormat = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' });
+const isoDayFormat = new Intl.DateTimeFormat('en-GB', {
+  day: 'numeric',
+  month: 'short',
+  year: 'numeric',
+  timeZone: 'UTC',
+});
 const monthFormat = new Intl.DateTimeFormat('en-GB', { month: 'long', year: 'numeric', timeZone: 'UTC' });
 
-const isOutcome = (raw: string | null): raw is Outcome | 'none' => raw === 'none' || (OUTCOMES as readonly string[]).includes(raw ?? '');
+const isOutcome = (raw: string | null): raw is Outcome | 'none' =>
+  raw === 'none' || (OUTCOMES as readonly string[]).includes(raw ?? '');
 const isBarrier = (raw: string | null): raw is Barrier => (BARRIERS as readonly string[]).includes(raw ?? '');
 
 /** The filter exactly as the URL gives it; anything malformed is left out rather than sent on. */
@@ -49,40 +62,61 @@ export function ImpactRecordsPage() {
   const page = filter.page ?? 1;
   const first = records.data?.records[0];
 
-  const categoryName = filter.categoryId ? categories.data?.find((c) => c.id === filter.categoryId)?.name ?? (first?.categoryName || `category ${filter.categoryId}`) : undefined;
+  const categoryName = filter.categoryId
+    ? (categories.data?.find((c) => c.id === filter.categoryId)?.name ??
+      (first?.categoryName || `category ${filter.categoryId}`))
+    : undefined;
   const chips: { key: keyof RecordsFilter; label: string }[] = [];
   if (filter.eventId) chips.push({ key: 'eventId', label: `Session: ${first?.eventTitle ?? `no. ${filter.eventId}`}` });
   if (filter.outcome) chips.push({ key: 'outcome', label: `Outcome: ${outcomeText(filter.outcome)}` });
   if (filter.categoryId) chips.push({ key: 'categoryId', label: `Category: ${categoryName}` });
   if (filter.barrier) chips.push({ key: 'barrier', label: `Barrier: ${BARRIER_LABELS[filter.barrier]}` });
-  if (filter.month) chips.push({ key: 'month', label: `Month: ${monthFormat.format(new Date(`${filter.month}-01T00:00:00Z`))}` });
-  if (filter.from) chips.push({ key: 'from', label: `From ${isoDayFormat.format(new Date(`${filter.from}T00:00:00Z`))}` });
+  if (filter.month)
+    chips.push({ key: 'month', label: `Month: ${monthFormat.format(new Date(`${filter.month}-01T00:00:00Z`))}` });
+  if (filter.from)
+    chips.push({ key: 'from', label: `From ${isoDayFormat.format(new Date(`${filter.from}T00:00:00Z`))}` });
   if (filter.to) chips.push({ key: 'to', label: `To ${isoDayFormat.format(new Date(`${filter.to}T00:00:00Z`))}` });
 
-  const without = (key: keyof RecordsFilter) => paths.impactRecords(qs({ ...filter, [key]: undefined, page: undefined }));
+  const without = (key: keyof RecordsFilter) =>
+    paths.impactRecords(qs({ ...filter, [key]: undefined, page: undefined }));
   const atPage = (n: number) => paths.impactRecords(qs({ ...filter, page: n > 1 ? n : undefined }));
   const back = filter.groupId ? paths.impact(filter.groupId) : paths.networkImpact();
   const backQuery = qs({ eventId: filter.groupId ? filter.eventId : undefined, from: filter.from, to: filter.to });
-  const scope = filter.groupId ? first?.groupName ?? 'this group' : 'all groups';
+  const scope = filter.groupId ? (first?.groupName ?? 'this group') : 'all groups';
 
   return (
     <div>
-      <Link to={`${back}${backQuery}`} className="text-sm font-bold text-navy underline">← Back to the impact figures</Link>
+      <Link to={`${back}${backQuery}`} className="text-sm font-bold text-navy underline">
+        ← Back to the impact figures
+      </Link>
       <div className="mt-2">
         <PageTitle title="Repair records" lead={`The items behind the figures, for ${scope}. Newest first.`} />
       </div>
 
       <section aria-label="Filter" className="mb-4 rounded-xl bg-white p-4 ring-1 ring-ink/5">
         <p className="text-sm" data-testid="records-filter">
-          {records.data ? <span className="font-bold">{whole.format(records.data.total)} {records.data.total === 1 ? 'item' : 'items'}</span> : 'Items'}
+          {records.data ? (
+            <span className="font-bold">
+              {whole.format(records.data.total)} {records.data.total === 1 ? 'item' : 'items'}
+            </span>
+          ) : (
+            'Items'
+          )}
           {chips.length === 0 ? ' — every item checked in, all dates.' : ' matching:'}
         </p>
         {chips.length > 0 && (
           <ul className="mt-2 flex flex-wrap gap-2">
             {chips.map((c) => (
-              <li key={c.key} className="inline-flex items-center gap-1 rounded-full bg-navy/5 py-1 pl-3 pr-1 text-sm font-semibold text-navy">
+              <li
+                key={c.key}
+                className="inline-flex items-center gap-1 rounded-full bg-navy/5 py-1 pl-3 pr-1 text-sm font-semibold text-navy"
+              >
                 {c.label}
-                <Link to={without(c.key)} className="inline-flex size-7 items-center justify-center rounded-full hover:bg-navy/10" aria-label={`Remove the filter ${c.label}`}>
+                <Link
+                  to={without(c.key)}
+                  className="inline-flex size-7 items-center justify-center rounded-full hover:bg-navy/10"
+                  aria-label={`Remove the filter ${c.label}`}
+                >
                   <span aria-hidden>✕</span>
                 </Link>
               </li>
@@ -94,10 +128,18 @@ export function ImpactRecordsPage() {
       {records.isPending ? (
         <Spinner label="Loading the records…" />
       ) : records.isError ? (
-        <Alert tone="error" title="The records could not be loaded">{records.error.message}</Alert>
+        <Alert tone="error" title="The records could not be loaded">
+          {records.error.message}
+        </Alert>
       ) : records.data.records.length === 0 ? (
         <EmptyState title={page > 1 ? 'No records on this page' : 'No records match'} icon="▤">
-          {page > 1 ? <Link to={atPage(1)} className="font-bold text-navy underline">Go to the first page</Link> : 'Remove a filter above to see more.'}
+          {page > 1 ? (
+            <Link to={atPage(1)} className="font-bold text-navy underline">
+              Go to the first page
+            </Link>
+          ) : (
+            'Remove a filter above to see more.'
+          )}
         </EmptyState>
       ) : (
         <>
@@ -113,13 +155,27 @@ function Kg({ row }: { row: RecordRow }) {
   return (
     <span className="tabular-nums">
       {oneDp.format(row.kg)}
-      {row.weighedKg === null && <span className="text-ink-soft" title="Average weight of its kind: not weighed at the desk"> (avg.)</span>}
+      {row.weighedKg === null && (
+        <span className="text-ink-soft" title="Average weight of its kind: not weighed at the desk">
+          {' '}
+          (avg.)
+        </span>
+      )}
     </span>
   );
 }
 
 function OutcomeBadge({ row }: { row: RecordRow }) {
-  const tone = row.outcome === 'fixed' ? 'bg-sage-light text-sage' : row.outcome === 'parts-needed' ? 'bg-copper-light text-copper-dark' : row.outcome === 'advice' ? 'bg-navy/10 text-navy' : row.outcome === 'end-of-life' ? 'bg-ink/10 text-ink' : 'bg-white text-ink-soft ring-1 ring-ink/15';
+  const tone =
+    row.outcome === 'fixed'
+      ? 'bg-sage-light text-sage'
+      : row.outcome === 'parts-needed'
+        ? 'bg-copper-light text-copper-dark'
+        : row.outcome === 'advice'
+          ? 'bg-navy/10 text-navy'
+          : row.outcome === 'end-of-life'
+            ? 'bg-ink/10 text-ink'
+            : 'bg-white text-ink-soft ring-1 ring-ink/15';
   return <span className={`inline-block rounded-full px-2 py-0.5 text-xs font-bold ${tone}`}>{row.outcomeLabel}</span>;
 }
 
@@ -130,28 +186,53 @@ function RecordsTable({ rows, showGroup }: { rows: RecordRow[]; showGroup: boole
         <table className="w-full text-sm">
           <thead>
             <tr className="border-b border-ink/10 text-left text-ink-soft">
-              <th scope="col" className="px-3 py-2 font-semibold">Date</th>
-              <th scope="col" className="px-3 py-2 font-semibold">Session</th>
-              <th scope="col" className="px-3 py-2 font-semibold">Item</th>
-              <th scope="col" className="px-3 py-2 font-semibold">Visitor</th>
-              <th scope="col" className="px-3 py-2 font-semibold">Outcome</th>
-              <th scope="col" className="px-3 py-2 font-semibold">Barrier</th>
-              <th scope="col" className="px-3 py-2 text-right font-semibold">kg</th>
+              <th scope="col" className="px-3 py-2 font-semibold">
+                Date
+              </th>
+              <th scope="col" className="px-3 py-2 font-semibold">
+                Session
+              </th>
+              <th scope="col" className="px-3 py-2 font-semibold">
+                Item
+              </th>
+              <th scope="col" className="px-3 py-2 font-semibold">
+                Visitor
+              </th>
+              <th scope="col" className="px-3 py-2 font-semibold">
+                Outcome
+              </th>
+              <th scope="col" className="px-3 py-2 font-semibold">
+                Barrier
+              </th>
+              <th scope="col" className="px-3 py-2 text-right font-semibold">
+                kg
+              </th>
             </tr>
           </thead>
           <tbody className="divide-y divide-ink/5 align-top">
             {rows.map((r) => (
               <tr key={r.itemId} data-testid="record-row">
-                <td className="whitespace-nowrap px-3 py-2 tabular-nums">{dayFormat.format(new Date(r.eventStartsAt))}</td>
-                <td className="px-3 py-2">{r.eventTitle}{showGroup && <span className="block text-xs text-ink-soft">{r.groupName}</span>}</td>
+                <td className="whitespace-nowrap px-3 py-2 tabular-nums">
+                  {dayFormat.format(new Date(r.eventStartsAt))}
+                </td>
                 <td className="px-3 py-2">
-                  <Link to={paths.item(r.itemId)} className="font-bold text-navy underline">{r.categoryName}</Link>
+                  {r.eventTitle}
+                  {showGroup && <span className="block text-xs text-ink-soft">{r.groupName}</span>}
+                </td>
+                <td className="px-3 py-2">
+                  <Link to={paths.item(r.itemId)} className="font-bold text-navy underline">
+                    {r.categoryName}
+                  </Link>
                   {itemLabel(r) && <span className="block text-xs text-ink-soft">{itemLabel(r)}</span>}
                 </td>
                 <td className="px-3 py-2">{r.visitor}</td>
-                <td className="px-3 py-2"><OutcomeBadge row={r} /></td>
+                <td className="px-3 py-2">
+                  <OutcomeBadge row={r} />
+                </td>
                 <td className="px-3 py-2">{r.barrierLabel ?? <span className="text-ink-soft">—</span>}</td>
-                <td className="whitespace-nowrap px-3 py-2 text-right"><Kg row={r} /></td>
+                <td className="whitespace-nowrap px-3 py-2 text-right">
+                  <Kg row={r} />
+                </td>
               </tr>
             ))}
           </tbody>
@@ -163,17 +244,33 @@ function RecordsTable({ rows, showGroup }: { rows: RecordRow[]; showGroup: boole
           <li key={r.itemId} data-testid="record-card" className="rounded-xl bg-white p-3 ring-1 ring-ink/5">
             <div className="flex items-start justify-between gap-3">
               <div className="min-w-0">
-                <Link to={paths.item(r.itemId)} className="font-bold text-navy underline">{r.categoryName}</Link>
+                <Link to={paths.item(r.itemId)} className="font-bold text-navy underline">
+                  {r.categoryName}
+                </Link>
                 {itemLabel(r) && <p className="truncate text-sm text-ink-soft">{itemLabel(r)}</p>}
               </div>
               <OutcomeBadge row={r} />
             </div>
             <dl className="mt-2 grid grid-cols-[auto_1fr] gap-x-3 gap-y-0.5 text-sm">
-              <dt className="text-ink-soft">Date</dt><dd>{dayFormat.format(new Date(r.eventStartsAt))}</dd>
-              <dt className="text-ink-soft">Session</dt><dd className="min-w-0">{r.eventTitle}{showGroup ? ` · ${r.groupName}` : ''}</dd>
-              <dt className="text-ink-soft">Visitor</dt><dd>{r.visitor}</dd>
-              {r.barrierLabel && <><dt className="text-ink-soft">Barrier</dt><dd>{r.barrierLabel}</dd></>}
-              <dt className="text-ink-soft">kg</dt><dd><Kg row={r} /></dd>
+              <dt className="text-ink-soft">Date</dt>
+              <dd>{dayFormat.format(new Date(r.eventStartsAt))}</dd>
+              <dt className="text-ink-soft">Session</dt>
+              <dd className="min-w-0">
+                {r.eventTitle}
+                {showGroup ? ` · ${r.groupName}` : ''}
+              </dd>
+              <dt className="text-ink-soft">Visitor</dt>
+              <dd>{r.visitor}</dd>
+              {r.barrierLabel && (
+                <>
+                  <dt className="text-ink-soft">Barrier</dt>
+                  <dd>{r.barrierLabel}</dd>
+                </>
+              )}
+              <dt className="text-ink-soft">kg</dt>
+              <dd>
+                <Kg row={r} />
+              </dd>
             </dl>
           </li>
         ))}
@@ -186,14 +283,33 @@ function Pagination({ total, page, atPage }: { total: number; page: number; atPa
   const pages = Math.max(1, Math.ceil(total / PAGE_SIZE));
   const start = (page - 1) * PAGE_SIZE + 1;
   const end = Math.min(total, page * PAGE_SIZE);
-  const pill = 'inline-flex min-h-11 items-center rounded-lg bg-white px-4 font-bold text-navy ring-1 ring-navy/25 hover:bg-navy/5';
+  const pill =
+    'inline-flex min-h-11 items-center rounded-lg bg-white px-4 font-bold text-navy ring-1 ring-navy/25 hover:bg-navy/5';
   return (
     <nav aria-label="Pages" className="mt-4 flex flex-wrap items-center justify-between gap-3">
-      <p className="text-sm text-ink-soft">{whole.format(start)}–{whole.format(end)} of {whole.format(total)} · page {page} of {pages}</p>
+      <p className="text-sm text-ink-soft">
+        {whole.format(start)}–{whole.format(end)} of {whole.format(total)} · page {page} of {pages}
+      </p>
       {pages > 1 && (
         <div className="flex gap-2">
-          {page > 1 ? <Link to={atPage(page - 1)} className={pill} rel="prev">← Previous</Link> : <span className={`${pill} pointer-events-none opacity-40`} aria-hidden>← Previous</span>}
-          {page < pages ? <Link to={atPage(page + 1)} className={pill} rel="next">Next →</Link> : <span className={`${pill} pointer-events-none opacity-40`} aria-hidden>Next →</span>}
+          {page > 1 ? (
+            <Link to={atPage(page - 1)} className={pill} rel="prev">
+              ← Previous
+            </Link>
+          ) : (
+            <span className={`${pill} pointer-events-none opacity-40`} aria-hidden>
+              ← Previous
+            </span>
+          )}
+          {page < pages ? (
+            <Link to={atPage(page + 1)} className={pill} rel="next">
+              Next →
+            </Link>
+          ) : (
+            <span className={`${pill} pointer-events-none opacity-40`} aria-hidden>
+              Next →
+            </span>
+          )}
         </div>
       )}
     </nav>

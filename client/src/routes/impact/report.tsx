@@ -24,18 +24,33 @@ const MAX_CHART_ROWS = 12;
  */
 export function EventReportPage() {
   const eventId = Number(useParams().eventId);
-  return <ReportShell report={useEventReport(eventId)} back={{ to: paths.manageEvent(eventId), label: '← Back to the session' }} />;
+  return (
+    <ReportShell
+      report={useEventReport(eventId)}
+      back={{ to: paths.manageEvent(eventId), label: '← Back to the session' }}
+    />
+  );
 }
 
 /** The same report for a group's sessions between two dates (?from=&to=). */
 export function GroupReportPage() {
   const groupId = Number(useParams().groupId);
   const [params] = useSearchParams();
-  return <ReportShell report={useGroupReport(groupId, params.get('from') || undefined, params.get('to') || undefined)} back={{ to: paths.impact(groupId), label: '← Back to the impact page' }} />;
+  return (
+    <ReportShell
+      report={useGroupReport(groupId, params.get('from') || undefined, params.get('to') || undefined)}
+      back={{ to: paths.impact(groupId), label: '← Back to the impact page' }}
+    />
+  );
 }
 
-function ReportShell({ report, back }: { report: ReturnType<typeof useEventReport>; back: { to: string; label: string } }) {
-
+function ReportShell({
+  report,
+  back,
+}: {
+  report: ReturnType<typeof useEventReport>;
+  back: { to: string; label: string };
+}) {
   return (
     <div className="min-h-dvh bg-neutral-200 text-ink print:min-h-0 print:bg-white">
       <title>{report.data ? `Report · ${report.data.event.title}` : 'Report · Mendery'}</title>
@@ -43,16 +58,26 @@ function ReportShell({ report, back }: { report: ReturnType<typeof useEventRepor
 
       <div className="sticky top-0 z-10 border-b border-ink/10 bg-white shadow-sm print:hidden">
         <div className="mx-auto flex max-w-[210mm] flex-wrap items-center justify-between gap-3 px-4 py-3">
-          <Link to={back.to} className="text-sm font-bold text-navy underline">{back.label}</Link>
-          <Button onClick={() => window.print()} disabled={!report.data}>Print or save as PDF</Button>
+          <Link to={back.to} className="text-sm font-bold text-navy underline">
+            {back.label}
+          </Link>
+          <Button onClick={() => window.print()} disabled={!report.data}>
+            Print or save as PDF
+          </Button>
         </div>
       </div>
 
       <div className="px-2 py-6 sm:px-4 print:p-0">
         {report.isPending ? (
-          <div className="mx-auto max-w-md rounded-xl bg-white px-6"><Spinner label="Preparing the report…" /></div>
+          <div className="mx-auto max-w-md rounded-xl bg-white px-6">
+            <Spinner label="Preparing the report…" />
+          </div>
         ) : report.isError ? (
-          <div className="mx-auto max-w-xl"><Alert tone="error" title="The report could not be loaded">{report.error.message}</Alert></div>
+          <div className="mx-auto max-w-xl">
+            <Alert tone="error" title="The report could not be loaded">
+              {report.error.message}
+            </Alert>
+          </div>
         ) : (
           <Report r={report.data} />
         )}
@@ -68,11 +93,20 @@ function Report({ r }: { r: EventReport }) {
   const methodCategories = method.categories.filter((c) => usedCategories.has(c.id));
 
   return (
-    <main data-testid="report" className="mx-auto w-full max-w-[210mm] space-y-6 bg-white p-5 shadow-lg sm:p-[14mm] print:max-w-none print:space-y-5 print:p-0 print:shadow-none">
+    <main
+      data-testid="report"
+      className="mx-auto w-full max-w-[210mm] space-y-6 bg-white p-5 shadow-lg sm:p-[14mm] print:max-w-none print:space-y-5 print:p-0 print:shadow-none"
+    >
       <header className="border-b-4 border-copper pb-4">
-        <p className="text-sm font-bold uppercase tracking-wide text-copper-dark">{event.groupName} · {r.range ? 'report for a period' : 'session report'}</p>
+        <p className="text-sm font-bold uppercase tracking-wide text-copper-dark">
+          {event.groupName} · {r.range ? 'report for a period' : 'session report'}
+        </p>
         <h1 className="mt-1 text-2xl sm:text-3xl">{event.title}</h1>
-        <p className="mt-1 font-semibold text-ink-soft">{r.range ? `${r.range.from ? formatDay(`${r.range.from}T12:00:00Z`, tz) : formatDay(event.startsAt, tz)} to ${r.range.to ? formatDay(`${r.range.to}T12:00:00Z`, tz) : formatDay(event.endsAt, tz)}` : `${formatDay(event.startsAt, tz)} · ${formatTimeRange(event.startsAt, event.endsAt, tz)}`}</p>
+        <p className="mt-1 font-semibold text-ink-soft">
+          {r.range
+            ? `${r.range.from ? formatDay(`${r.range.from}T12:00:00Z`, tz) : formatDay(event.startsAt, tz)} to ${r.range.to ? formatDay(`${r.range.to}T12:00:00Z`, tz) : formatDay(event.endsAt, tz)}`
+            : `${formatDay(event.startsAt, tz)} · ${formatTimeRange(event.startsAt, event.endsAt, tz)}`}
+        </p>
       </header>
 
       <section aria-label="Totals" className="break-inside-avoid">
@@ -86,11 +120,18 @@ function Report({ r }: { r: EventReport }) {
           <Tile label="kg diverted from landfill" value={oneDp.format(stats.kgDiverted)} />
           <Tile label={<>kg {CO2E} avoided</>} value={oneDp.format(stats.co2eKg)} />
         </ul>
-        {stats.unknown > 0 && <p className="mt-2 text-sm text-ink-soft">{stats.unknown} {stats.unknown === 1 ? 'item has' : 'items have'} no outcome recorded and {stats.unknown === 1 ? 'is' : 'are'} left out of the fix rate.</p>}
+        {stats.unknown > 0 && (
+          <p className="mt-2 text-sm text-ink-soft">
+            {stats.unknown} {stats.unknown === 1 ? 'item has' : 'items have'} no outcome recorded and{' '}
+            {stats.unknown === 1 ? 'is' : 'are'} left out of the fix rate.
+          </p>
+        )}
       </section>
 
       {stats.items === 0 ? (
-        <EmptyState title="No items were checked in" icon="▤">The figures fill in once items are checked in at the desk and their outcomes recorded.</EmptyState>
+        <EmptyState title="No items were checked in" icon="▤">
+          The figures fill in once items are checked in at the desk and their outcomes recorded.
+        </EmptyState>
       ) : (
         <>
           <CategoryChart r={r} />
@@ -104,12 +145,14 @@ function Report({ r }: { r: EventReport }) {
             <p className="text-sm text-ink-soft">No end-of-life item had a barrier recorded.</p>
           ) : (
             <ul className="space-y-1 text-sm">
-              {[...stats.barriers].sort((a, b) => b.count - a.count).map((b) => (
-                <li key={b.barrier} className="flex justify-between gap-3 border-b border-ink/5 py-1">
-                  <span>{BARRIER_LABELS[b.barrier]}</span>
-                  <span className="font-bold tabular-nums">{b.count}</span>
-                </li>
-              ))}
+              {[...stats.barriers]
+                .sort((a, b) => b.count - a.count)
+                .map((b) => (
+                  <li key={b.barrier} className="flex justify-between gap-3 border-b border-ink/5 py-1">
+                    <span>{BARRIER_LABELS[b.barrier]}</span>
+                    <span className="font-bold tabular-nums">{b.count}</span>
+                  </li>
+                ))}
             </ul>
           )}
         </Block>
@@ -121,8 +164,12 @@ function Report({ r }: { r: EventReport }) {
             <table className="w-full text-sm">
               <thead>
                 <tr className="border-b border-ink/10 text-left text-ink-soft">
-                  <th scope="col" className="py-1 pr-3 font-semibold">Name</th>
-                  <th scope="col" className="py-1 text-right font-semibold">Hours</th>
+                  <th scope="col" className="py-1 pr-3 font-semibold">
+                    Name
+                  </th>
+                  <th scope="col" className="py-1 text-right font-semibold">
+                    Hours
+                  </th>
                 </tr>
               </thead>
               <tbody className="divide-y divide-ink/5">
@@ -135,8 +182,12 @@ function Report({ r }: { r: EventReport }) {
               </tbody>
               <tfoot>
                 <tr className="border-t-2 border-ink/20 font-bold">
-                  <th scope="row" className="py-1 pr-3 text-left">{r.volunteers.length} {r.volunteers.length === 1 ? 'volunteer' : 'volunteers'}</th>
-                  <td className="py-1 text-right tabular-nums" data-testid="report-hours">{hoursFormat.format(r.volunteerHours)} h</td>
+                  <th scope="row" className="py-1 pr-3 text-left">
+                    {r.volunteers.length} {r.volunteers.length === 1 ? 'volunteer' : 'volunteers'}
+                  </th>
+                  <td className="py-1 text-right tabular-nums" data-testid="report-hours">
+                    {hoursFormat.format(r.volunteerHours)} h
+                  </td>
                 </tr>
               </tfoot>
             </table>
@@ -147,28 +198,48 @@ function Report({ r }: { r: EventReport }) {
       <Block title="Method and sources" long>
         <div className="space-y-2 text-sm leading-relaxed">
           <ul className="list-disc space-y-1 pl-5">
-            {method.text.map((line) => <li key={line}>{line}</li>)}
+            {method.text.map((line) => (
+              <li key={line}>{line}</li>
+            ))}
           </ul>
-          <p><span className="font-bold">Displacement factor {method.displacement}.</span> {method.displacementNote}</p>
-          <p><span className="font-bold">Emission factors:</span> {method.factorSource}</p>
+          <p>
+            <span className="font-bold">Displacement factor {method.displacement}.</span> {method.displacementNote}
+          </p>
+          <p>
+            <span className="font-bold">Emission factors:</span> {method.factorSource}
+          </p>
           {methodCategories.length > 0 && (
             <table className="mt-2 w-full text-xs">
               <thead>
                 <tr className="border-b border-ink/10 text-left text-ink-soft">
-                  <th scope="col" className="py-1 pr-2 font-semibold">Category</th>
-                  <th scope="col" className="py-1 pr-2 text-right font-semibold">Avg. kg</th>
-                  <th scope="col" className="py-1 pr-2 font-semibold">Weight source</th>
-                  <th scope="col" className="py-1 pr-2 text-right font-semibold">kg CO2e/kg</th>
-                  <th scope="col" className="py-1 font-semibold">Factor source</th>
+                  <th scope="col" className="py-1 pr-2 font-semibold">
+                    Category
+                  </th>
+                  <th scope="col" className="py-1 pr-2 text-right font-semibold">
+                    Avg. kg
+                  </th>
+                  <th scope="col" className="py-1 pr-2 font-semibold">
+                    Weight source
+                  </th>
+                  <th scope="col" className="py-1 pr-2 text-right font-semibold">
+                    kg CO2e/kg
+                  </th>
+                  <th scope="col" className="py-1 font-semibold">
+                    Factor source
+                  </th>
                 </tr>
               </thead>
               <tbody className="divide-y divide-ink/5 align-top">
                 {methodCategories.map((c) => (
                   <tr key={c.id} className="break-inside-avoid">
-                    <th scope="row" className="py-1 pr-2 text-left font-semibold">{c.name}</th>
+                    <th scope="row" className="py-1 pr-2 text-left font-semibold">
+                      {c.name}
+                    </th>
                     <td className="py-1 pr-2 text-right tabular-nums">{oneDp.format(c.avgWeightKg)}</td>
                     <td className="py-1 pr-2">{c.weightSource}</td>
-                    <td className="py-1 pr-2 text-right tabular-nums">{c.co2ePerKg === null ? '—' : oneDp.format(c.co2ePerKg)}</td>
+                    <td className="py-1 pr-2 text-right tabular-nums">
+                      {c.co2ePerKg === null ? '—' : oneDp.format(c.co2ePerKg)}
+                    </td>
                     <td className="py-1">{c.co2eSource ?? 'No sourced factor: counted as 0'}</td>
                   </tr>
                 ))}
@@ -179,7 +250,9 @@ function Report({ r }: { r: EventReport }) {
       </Block>
 
       <footer className="break-inside-avoid border-t border-ink/15 pt-3 text-xs text-ink-soft">
-        Figures are estimates: masses are weighed at the desk where possible and otherwise the average of the kind of item; emissions avoided use published production factors and a displacement factor of {method.displacement}. Counted with Mendery on {formatDay(new Date(), tz)}.
+        Figures are estimates: masses are weighed at the desk where possible and otherwise the average of the kind of
+        item; emissions avoided use published production factors and a displacement factor of {method.displacement}.
+        Counted with Mendery on {formatDay(new Date(), tz)}.
       </footer>
     </main>
   );
@@ -205,27 +278,48 @@ function Block({ title, children, long = false }: { title: string; children: Rea
 }
 
 function CategoryChart({ r }: { r: EventReport }) {
-  const rows = r.stats.byCategory.slice(0, MAX_CHART_ROWS).map((c) => ({ name: c.name, fixed: c.fixed, notFixed: c.items - c.fixed }));
+  const rows = r.stats.byCategory
+    .slice(0, MAX_CHART_ROWS)
+    .map((c) => ({ name: c.name, fixed: c.fixed, notFixed: c.items - c.fixed }));
   const height = Math.max(120, Math.min(420, 48 + rows.length * 28));
   const best = [...r.stats.byCategory].sort((a, b) => b.fixed - a.fixed)[0];
   return (
     <section className="break-inside-avoid" aria-labelledby="chart-heading">
-      <h2 id="chart-heading" className="mb-1 text-lg">Outcomes by category</h2>
+      <h2 id="chart-heading" className="mb-1 text-lg">
+        Outcomes by category
+      </h2>
       <p className="mb-2 text-sm text-ink-soft">
-        Fixed and not fixed, by kind of item{r.stats.byCategory.length > MAX_CHART_ROWS ? ` (the ${MAX_CHART_ROWS} most common)` : ''}.
-        {best && best.fixed > 0 ? ` Most fixed: ${best.name.toLowerCase()} (${best.fixed} of ${best.items}).` : ''} The table below gives every figure.
+        Fixed and not fixed, by kind of item
+        {r.stats.byCategory.length > MAX_CHART_ROWS ? ` (the ${MAX_CHART_ROWS} most common)` : ''}.
+        {best && best.fixed > 0 ? ` Most fixed: ${best.name.toLowerCase()} (${best.fixed} of ${best.items}).` : ''} The
+        table below gives every figure.
       </p>
       {/* A fixed-width box: the chart has the same size on screen and on paper, and scrolls on a phone. */}
       <div className="max-w-full overflow-x-auto print:overflow-visible">
         <div aria-hidden style={{ width: CHART_WIDTH, height }}>
           <ResponsiveContainer width="100%" height="100%">
-            <BarChart data={rows} layout="vertical" margin={{ top: 0, right: 16, bottom: 0, left: 0 }} accessibilityLayer={false}>
+            <BarChart
+              data={rows}
+              layout="vertical"
+              margin={{ top: 0, right: 16, bottom: 0, left: 0 }}
+              accessibilityLayer={false}
+            >
               <CartesianGrid horizontal={false} stroke="#e7e2da" />
               <XAxis type="number" allowDecimals={false} tick={{ fontSize: 12 }} />
               <YAxis type="category" dataKey="name" width={150} tick={{ fontSize: 12, maxLines: 2 }} />
-              <Legend wrapperStyle={{ fontSize: 12 }} itemSorter={null} formatter={(value) => <span className="text-ink">{value}</span>} />
+              <Legend
+                wrapperStyle={{ fontSize: 12 }}
+                itemSorter={null}
+                formatter={(value) => <span className="text-ink">{value}</span>}
+              />
               <Bar dataKey="fixed" name="Fixed" stackId="o" fill="#5d7f6a" isAnimationActive={false} />
-              <Bar dataKey="notFixed" name="Not fixed or not recorded" stackId="o" fill="#b8612f" isAnimationActive={false} />
+              <Bar
+                dataKey="notFixed"
+                name="Not fixed or not recorded"
+                stackId="o"
+                fill="#b8612f"
+                isAnimationActive={false}
+              />
             </BarChart>
           </ResponsiveContainer>
         </div>
@@ -238,22 +332,36 @@ function CategoryTable({ r }: { r: EventReport }) {
   const s = r.stats;
   return (
     <section aria-labelledby="categories-heading">
-      <h2 id="categories-heading" className="mb-2 text-lg">By category</h2>
+      <h2 id="categories-heading" className="mb-2 text-lg">
+        By category
+      </h2>
       <div className="overflow-x-auto print:overflow-visible">
         <table className="w-full text-sm">
           <thead>
             <tr className="border-b border-ink/10 text-ink-soft">
-              <th scope="col" className="py-1 pr-3 text-left font-semibold">Category</th>
-              <th scope="col" className="py-1 pr-3 text-right font-semibold">Items</th>
-              <th scope="col" className="py-1 pr-3 text-right font-semibold">Fixed</th>
-              <th scope="col" className="py-1 pr-3 text-right font-semibold">kg diverted</th>
-              <th scope="col" className="py-1 text-right font-semibold">kg CO2e</th>
+              <th scope="col" className="py-1 pr-3 text-left font-semibold">
+                Category
+              </th>
+              <th scope="col" className="py-1 pr-3 text-right font-semibold">
+                Items
+              </th>
+              <th scope="col" className="py-1 pr-3 text-right font-semibold">
+                Fixed
+              </th>
+              <th scope="col" className="py-1 pr-3 text-right font-semibold">
+                kg diverted
+              </th>
+              <th scope="col" className="py-1 text-right font-semibold">
+                kg CO2e
+              </th>
             </tr>
           </thead>
           <tbody className="divide-y divide-ink/5">
             {s.byCategory.map((c) => (
               <tr key={c.categoryId} className="break-inside-avoid">
-                <th scope="row" className="py-1 pr-3 text-left font-semibold">{c.name}</th>
+                <th scope="row" className="py-1 pr-3 text-left font-semibold">
+                  {c.name}
+                </th>
                 <td className="py-1 pr-3 text-right tabular-nums">{whole.format(c.items)}</td>
                 <td className="py-1 pr-3 text-right tabular-nums">{whole.format(c.fixed)}</td>
                 <td className="py-1 pr-3 text-right tabular-nums">{oneDp.format(c.kgDiverted)}</td>
@@ -263,7 +371,9 @@ function CategoryTable({ r }: { r: EventReport }) {
           </tbody>
           <tfoot>
             <tr className="border-t-2 border-ink/20 font-bold">
-              <th scope="row" className="py-1 pr-3 text-left">Total</th>
+              <th scope="row" className="py-1 pr-3 text-left">
+                Total
+              </th>
               <td className="py-1 pr-3 text-right tabular-nums">{whole.format(s.items)}</td>
               <td className="py-1 pr-3 text-right tabular-nums">{whole.format(s.fixed)}</td>
               <td className="py-1 pr-3 text-right tabular-nums">{oneDp.format(s.kgDiverted)}</td>

@@ -12,51 +12,105 @@ import { KnowledgeCard } from '../../features/toolkit/knowledge-card';
 export function KnowledgePage() {
   const [params, setParams] = useSearchParams();
   const { data: categories } = useCategories();
-  const applied = { q: params.get('q') ?? '', categoryId: Number(params.get('categoryId')) || undefined, brand: params.get('brand') ?? '', model: params.get('model') ?? '', scope: (params.get('scope') === 'mine' ? 'mine' : 'network') as 'mine' | 'network' };
+  const applied = {
+    q: params.get('q') ?? '',
+    categoryId: Number(params.get('categoryId')) || undefined,
+    brand: params.get('brand') ?? '',
+    model: params.get('model') ?? '',
+    scope: (params.get('scope') === 'mine' ? 'mine' : 'network') as 'mine' | 'network',
+  };
   const [draft, setDraft] = useState(applied);
   const searched = Boolean(applied.q || applied.categoryId || applied.brand || applied.model);
   const results = useKnowledge(applied, searched);
   return (
     <div className="mx-auto max-w-3xl space-y-5">
-      <PageTitle title="Repair notes" lead="What fixers found and did before, in your group and in the groups that share their notes." />
+      <PageTitle
+        title="Repair notes"
+        lead="What fixers found and did before, in your group and in the groups that share their notes."
+      />
       <form
         role="search"
         className="space-y-3 rounded-xl bg-white p-4 ring-1 ring-ink/5"
         onSubmit={(e) => {
           e.preventDefault();
           const next = new URLSearchParams();
-          for (const [k, v] of Object.entries(draft)) if (v && !(k === 'scope' && v === 'network')) next.set(k, String(v));
+          for (const [k, v] of Object.entries(draft))
+            if (v && !(k === 'scope' && v === 'network')) next.set(k, String(v));
           setParams(next);
         }}
       >
-        <TextField label="Symptom or words" value={draft.q} onChange={(e) => setDraft({ ...draft, q: e.target.value })} placeholder="e.g. switches off, no sound, hums" autoFocus />
+        <TextField
+          label="Symptom or words"
+          value={draft.q}
+          onChange={(e) => setDraft({ ...draft, q: e.target.value })}
+          placeholder="e.g. switches off, no sound, hums"
+          autoFocus
+        />
         <div className="grid gap-3 sm:grid-cols-3">
-          <SelectField label="Kind of item" value={draft.categoryId ?? ''} onChange={(e) => setDraft({ ...draft, categoryId: Number(e.target.value) || undefined })}>
+          <SelectField
+            label="Kind of item"
+            value={draft.categoryId ?? ''}
+            onChange={(e) => setDraft({ ...draft, categoryId: Number(e.target.value) || undefined })}
+          >
             <option value="">Any</option>
-            {categories?.map((c) => <option key={c.id} value={c.id}>{c.name}</option>)}
+            {categories?.map((c) => (
+              <option key={c.id} value={c.id}>
+                {c.name}
+              </option>
+            ))}
           </SelectField>
-          <TextField label="Brand" value={draft.brand} onChange={(e) => setDraft({ ...draft, brand: e.target.value })} />
-          <TextField label="Model" value={draft.model} onChange={(e) => setDraft({ ...draft, model: e.target.value })} />
+          <TextField
+            label="Brand"
+            value={draft.brand}
+            onChange={(e) => setDraft({ ...draft, brand: e.target.value })}
+          />
+          <TextField
+            label="Model"
+            value={draft.model}
+            onChange={(e) => setDraft({ ...draft, model: e.target.value })}
+          />
         </div>
         <div className="flex flex-wrap items-center gap-3">
-          <label className="flex items-center gap-2 text-sm"><input type="checkbox" className="size-5 accent-copper" checked={draft.scope === 'mine'} onChange={(e) => setDraft({ ...draft, scope: e.target.checked ? 'mine' : 'network' })} />Only my groups</label>
-          <Button type="submit" className="ml-auto">Search</Button>
+          <label className="flex items-center gap-2 text-sm">
+            <input
+              type="checkbox"
+              className="size-5 accent-copper"
+              checked={draft.scope === 'mine'}
+              onChange={(e) => setDraft({ ...draft, scope: e.target.checked ? 'mine' : 'network' })}
+            />
+            Only my groups
+          </label>
+          <Button type="submit" className="ml-auto">
+            Search
+          </Button>
         </div>
       </form>
       {!searched ? (
-        <EmptyState title="Search the repair notes" icon="⌕">Type a symptom, or choose the kind of item and its brand and model: exact matches come first.</EmptyState>
+        <EmptyState title="Search the repair notes" icon="⌕">
+          Type a symptom, or choose the kind of item and its brand and model: exact matches come first.
+        </EmptyState>
       ) : results.isPending ? (
         <Spinner label="Searching…" />
       ) : results.error ? (
         <Alert tone="error">{results.error.message}</Alert>
       ) : results.data.length === 0 ? (
-        <EmptyState title="No notes match" icon="○">Try fewer words, or the kind of item alone.</EmptyState>
+        <EmptyState title="No notes match" icon="○">
+          Try fewer words, or the kind of item alone.
+        </EmptyState>
       ) : (
         <>
-        <p className="text-sm text-ink-soft" role="status">{results.data.length === 30 ? 'The 30 closest notes; narrow the search to see others.' : `${results.data.length} ${results.data.length === 1 ? 'note' : 'notes'}, closest first.`}</p>
-        <ol className="space-y-3" aria-label="Results">
-          {results.data.map((e: KnowledgeEntry) => <li key={e.itemId}><KnowledgeCard entry={e} when={formatDay(e.eventDate, 'Europe/London')} /></li>)}
-        </ol>
+          <p className="text-sm text-ink-soft" role="status">
+            {results.data.length === 30
+              ? 'The 30 closest notes; narrow the search to see others.'
+              : `${results.data.length} ${results.data.length === 1 ? 'note' : 'notes'}, closest first.`}
+          </p>
+          <ol className="space-y-3" aria-label="Results">
+            {results.data.map((e: KnowledgeEntry) => (
+              <li key={e.itemId}>
+                <KnowledgeCard entry={e} when={formatDay(e.eventDate, 'Europe/London')} />
+              </li>
+            ))}
+          </ol>
         </>
       )}
     </div>

@@ -16,7 +16,9 @@ export function SalvagePage() {
   const groupId = Number(useParams().groupId);
   const { data: user } = useUser();
   const [params, setParams] = useSearchParams();
-  const type = (PART_TYPES as readonly string[]).includes(params.get('type') ?? '') ? (params.get('type') as PartType) : undefined;
+  const type = (PART_TYPES as readonly string[]).includes(params.get('type') ?? '')
+    ? (params.get('type') as PartType)
+    : undefined;
   const q = params.get('q') ?? '';
   const parts = useSalvage(groupId, { type, q: q || undefined, inStock: params.get('all') ? undefined : '1' });
   const [adding, setAdding] = useState(params.get('add') === '1');
@@ -24,24 +26,91 @@ export function SalvagePage() {
   return (
     <div className="space-y-5">
       {organiser && <GroupTabs groupId={groupId} />}
-      <PageTitle title="Salvage stock" lead="Parts saved from end-of-life items or given to the group, and the box each is in." />
-      <form role="search" className="flex flex-wrap items-end gap-3 rounded-xl bg-white p-4 ring-1 ring-ink/5" onSubmit={(e) => e.preventDefault()}>
-        <div className="min-w-40 flex-1"><TextField label="Search" value={q} onChange={(e) => { const n = new URLSearchParams(params); if (e.target.value) n.set('q', e.target.value); else n.delete('q'); setParams(n, { replace: true }); }} placeholder="value, package, box" /></div>
-        <SelectField label="Kind" value={type ?? ''} onChange={(e) => { const n = new URLSearchParams(params); if (e.target.value) n.set('type', e.target.value); else n.delete('type'); setParams(n); }}>
+      <PageTitle
+        title="Salvage stock"
+        lead="Parts saved from end-of-life items or given to the group, and the box each is in."
+      />
+      <form
+        role="search"
+        className="flex flex-wrap items-end gap-3 rounded-xl bg-white p-4 ring-1 ring-ink/5"
+        onSubmit={(e) => e.preventDefault()}
+      >
+        <div className="min-w-40 flex-1">
+          <TextField
+            label="Search"
+            value={q}
+            onChange={(e) => {
+              const n = new URLSearchParams(params);
+              if (e.target.value) n.set('q', e.target.value);
+              else n.delete('q');
+              setParams(n, { replace: true });
+            }}
+            placeholder="value, package, box"
+          />
+        </div>
+        <SelectField
+          label="Kind"
+          value={type ?? ''}
+          onChange={(e) => {
+            const n = new URLSearchParams(params);
+            if (e.target.value) n.set('type', e.target.value);
+            else n.delete('type');
+            setParams(n);
+          }}
+        >
           <option value="">All kinds</option>
-          {PART_TYPES.map((t) => <option key={t} value={t}>{PART_TYPE_LABELS[t]}</option>)}
+          {PART_TYPES.map((t) => (
+            <option key={t} value={t}>
+              {PART_TYPE_LABELS[t]}
+            </option>
+          ))}
         </SelectField>
-        <label className="flex min-h-11 items-center gap-2 text-sm"><input type="checkbox" className="size-5 accent-copper" checked={Boolean(params.get('all'))} onChange={(e) => { const n = new URLSearchParams(params); if (e.target.checked) n.set('all', '1'); else n.delete('all'); setParams(n); }} />Show used-up parts</label>
-        <Button type="button" onClick={() => setAdding(true)}>Add parts</Button>
+        <label className="flex min-h-11 items-center gap-2 text-sm">
+          <input
+            type="checkbox"
+            className="size-5 accent-copper"
+            checked={Boolean(params.get('all'))}
+            onChange={(e) => {
+              const n = new URLSearchParams(params);
+              if (e.target.checked) n.set('all', '1');
+              else n.delete('all');
+              setParams(n);
+            }}
+          />
+          Show used-up parts
+        </label>
+        <Button type="button" onClick={() => setAdding(true)}>
+          Add parts
+        </Button>
       </form>
-      {adding && <AddPartForm groupId={groupId} sourceItemId={Number(params.get('from')) || undefined} onDone={() => setAdding(false)} />}
-      {parts.isPending ? <Spinner /> : parts.error ? <Alert tone="error">{parts.error.message}</Alert> : parts.data.length === 0 && (q || type) ? (
-        <EmptyState title="No parts match" icon="○">Nothing in the boxes matches {q ? `“${q}”` : 'that kind'}{params.get('all') ? '' : ' (used-up parts are hidden)'}.</EmptyState>
+      {adding && (
+        <AddPartForm
+          groupId={groupId}
+          sourceItemId={Number(params.get('from')) || undefined}
+          onDone={() => setAdding(false)}
+        />
+      )}
+      {parts.isPending ? (
+        <Spinner />
+      ) : parts.error ? (
+        <Alert tone="error">{parts.error.message}</Alert>
+      ) : parts.data.length === 0 && (q || type) ? (
+        <EmptyState title="No parts match" icon="○">
+          Nothing in the boxes matches {q ? `“${q}”` : 'that kind'}
+          {params.get('all') ? '' : ' (used-up parts are hidden)'}.
+        </EmptyState>
       ) : parts.data.length === 0 ? (
-        <EmptyState title="No parts here yet" icon="▣">When an item reaches the end of its life, save its good parts here: fuses, switches, motors, capacitors, transistors.</EmptyState>
+        <EmptyState title="No parts here yet" icon="▣">
+          When an item reaches the end of its life, save its good parts here: fuses, switches, motors, capacitors,
+          transistors.
+        </EmptyState>
       ) : (
         <ul className="grid gap-3 md:grid-cols-2" aria-label="Parts">
-          {parts.data.map((p) => <li key={p.id}><PartCard groupId={groupId} part={p} canRemove={Boolean(organiser)} /></li>)}
+          {parts.data.map((p) => (
+            <li key={p.id}>
+              <PartCard groupId={groupId} part={p} canRemove={Boolean(organiser)} />
+            </li>
+          ))}
         </ul>
       )}
     </div>
@@ -58,18 +127,63 @@ function PartCard({ groupId, part: p, canRemove }: { groupId: number; part: Salv
     <article className="rounded-xl bg-white p-4 shadow-sm ring-1 ring-ink/5" data-testid="salvage-part">
       <div className="flex items-baseline justify-between gap-2">
         <h3 className="text-lg">{p.value}</h3>
-        <span className={`rounded-full px-2 py-0.5 text-xs font-bold ${p.quantity ? 'bg-sage-light' : 'bg-ink/5 text-ink-soft'}`}>{p.quantity} in {p.box}</span>
+        <span
+          className={`rounded-full px-2 py-0.5 text-xs font-bold ${p.quantity ? 'bg-sage-light' : 'bg-ink/5 text-ink-soft'}`}
+        >
+          {p.quantity} in {p.box}
+        </span>
       </div>
-      <p className="text-sm text-ink-soft">{p.typeLabel}{p.package && ` · ${p.package}`}{p.pinout && ` · pins ${p.pinout}`}{ratingsText(p.ratings) && ` · ${ratingsText(p.ratings)}`}</p>
+      <p className="text-sm text-ink-soft">
+        {p.typeLabel}
+        {p.package && ` · ${p.package}`}
+        {p.pinout && ` · pins ${p.pinout}`}
+        {ratingsText(p.ratings) && ` · ${ratingsText(p.ratings)}`}
+      </p>
       {p.notes && <p className="mt-1 text-sm">{p.notes}</p>}
-      {(take.error || update.error) && <div className="mt-2"><Alert tone="error">{(take.error ?? update.error)!.message}</Alert></div>}
-      {took && <p role="status" className="mt-2 text-sm font-semibold text-sage">{took}</p>}
+      {(take.error || update.error) && (
+        <div className="mt-2">
+          <Alert tone="error">{(take.error ?? update.error)!.message}</Alert>
+        </div>
+      )}
+      {took && (
+        <p role="status" className="mt-2 text-sm font-semibold text-sage">
+          {took}
+        </p>
+      )}
       <div className="mt-2 flex flex-wrap gap-2">
-        <Button variant="secondary" disabled={p.quantity === 0} busy={take.isPending} aria-label={`Take one ${p.value}`} onClick={() => take.mutate(p.id, { onSuccess: (after) => setTook(`Took one from ${after.box}: ${after.quantity} left.`) })}>Take one</Button>
-        <Button variant="quiet" aria-label={`Put one more ${p.value} in the box`} onClick={() => update.mutate({ id: p.id, quantity: p.quantity + 1 }, { onSuccess: () => setTook(null) })}>{took ? 'Put it back' : 'One more in the box'}</Button>
-        {canRemove && <Button variant="quiet" aria-label={`Remove ${p.value}`} onClick={() => setConfirm(true)}>Remove</Button>}
+        <Button
+          variant="secondary"
+          disabled={p.quantity === 0}
+          busy={take.isPending}
+          aria-label={`Take one ${p.value}`}
+          onClick={() =>
+            take.mutate(p.id, { onSuccess: (after) => setTook(`Took one from ${after.box}: ${after.quantity} left.`) })
+          }
+        >
+          Take one
+        </Button>
+        <Button
+          variant="quiet"
+          aria-label={`Put one more ${p.value} in the box`}
+          onClick={() => update.mutate({ id: p.id, quantity: p.quantity + 1 }, { onSuccess: () => setTook(null) })}
+        >
+          {took ? 'Put it back' : 'One more in the box'}
+        </Button>
+        {canRemove && (
+          <Button variant="quiet" aria-label={`Remove ${p.value}`} onClick={() => setConfirm(true)}>
+            Remove
+          </Button>
+        )}
       </div>
-      <ConfirmDialog open={confirm} title="Remove this part from the list?" message={`${p.value} (${p.quantity} in ${p.box}) goes from the stock list. The record of where earlier ones went stays with those items.`} confirmLabel="Remove" onCancel={() => setConfirm(false)} onConfirm={() => remove.mutate(p.id, { onSuccess: () => setConfirm(false) })} busy={remove.isPending} />
+      <ConfirmDialog
+        open={confirm}
+        title="Remove this part from the list?"
+        message={`${p.value} (${p.quantity} in ${p.box}) goes from the stock list. The record of where earlier ones went stays with those items.`}
+        confirmLabel="Remove"
+        onCancel={() => setConfirm(false)}
+        onConfirm={() => remove.mutate(p.id, { onSuccess: () => setConfirm(false) })}
+        busy={remove.isPending}
+      />
     </article>
   );
 }

@@ -15,10 +15,16 @@ export function BenchesPage() {
   const event = useEvent(id);
   const benches = useEventBenches(id);
   const save = useSaveBenches(id);
-  const saveVenue = useMutation({ mutationFn: (benches: Bench[]) => api('PUT', `/api/venues/${event.data!.venue.id}/benches`, { benches: benches.map(({ name, seats, equipment }) => ({ name, seats, equipment })) }) });
+  const saveVenue = useMutation({
+    mutationFn: (benches: Bench[]) =>
+      api('PUT', `/api/venues/${event.data!.venue.id}/benches`, {
+        benches: benches.map(({ name, seats, equipment }) => ({ name, seats, equipment })),
+      }),
+  });
   const [rows, setRows] = useState<Bench[]>([]);
   useEffect(() => {
-    if (benches.data) setRows(benches.data.map((b) => ({ id: b.id, name: b.name, seats: b.seats, equipment: b.equipment })));
+    if (benches.data)
+      setRows(benches.data.map((b) => ({ id: b.id, name: b.name, seats: b.seats, equipment: b.equipment })));
   }, [benches.data]);
   if (benches.isPending || event.isPending) return <Spinner />;
   if (benches.error) return <Alert tone="error">{benches.error.message}</Alert>;
@@ -35,34 +41,105 @@ export function BenchesPage() {
       <div className="space-y-3">
         {rows.map((b, i) => (
           <Card key={b.id ?? `new-${i}`} className="grid gap-3 sm:grid-cols-[14rem_6rem_1fr_auto] sm:items-start">
-            <label className="text-sm font-semibold">Name<input value={b.name} onChange={(e) => set(i, { name: e.target.value })} className="mt-1 block w-full rounded border border-ink/20 px-2 py-1.5" /></label>
-            <label className="text-sm font-semibold">Seats<input type="number" min={1} value={b.seats} onChange={(e) => set(i, { seats: Number(e.target.value) })} className="mt-1 block w-full rounded border border-ink/20 px-2 py-1.5" /></label>
+            <label className="text-sm font-semibold">
+              Name
+              <input
+                value={b.name}
+                onChange={(e) => set(i, { name: e.target.value })}
+                className="mt-1 block w-full rounded border border-ink/20 px-2 py-1.5"
+              />
+            </label>
+            <label className="text-sm font-semibold">
+              Seats
+              <input
+                type="number"
+                min={1}
+                value={b.seats}
+                onChange={(e) => set(i, { seats: Number(e.target.value) })}
+                className="mt-1 block w-full rounded border border-ink/20 px-2 py-1.5"
+              />
+            </label>
             <fieldset>
               <legend className="text-sm font-semibold">Kit</legend>
               <div className="mt-1 flex flex-wrap gap-x-4 gap-y-1">
                 {EQUIPMENT.map((e) => (
                   <label key={e} className="flex items-center gap-1.5 text-sm">
-                    <input type="checkbox" className="size-4 accent-copper" checked={b.equipment.includes(e)} onChange={(ev) => set(i, { equipment: ev.target.checked ? [...b.equipment, e] : b.equipment.filter((x) => x !== e) })} />
+                    <input
+                      type="checkbox"
+                      className="size-4 accent-copper"
+                      checked={b.equipment.includes(e)}
+                      onChange={(ev) =>
+                        set(i, {
+                          equipment: ev.target.checked ? [...b.equipment, e] : b.equipment.filter((x) => x !== e),
+                        })
+                      }
+                    />
                     {EQUIPMENT_LABELS[e]}
                   </label>
                 ))}
               </div>
             </fieldset>
-            <Button variant="quiet" onClick={() => { save.reset(); setRows((r) => r.filter((_, k) => k !== i)); }}>Remove</Button>
+            <Button
+              variant="quiet"
+              onClick={() => {
+                save.reset();
+                setRows((r) => r.filter((_, k) => k !== i));
+              }}
+            >
+              Remove
+            </Button>
           </Card>
         ))}
-        {rows.length === 0 && <Alert tone="info">No benches yet. Add the tables you will set out, with the kit on each.</Alert>}
+        {rows.length === 0 && (
+          <Alert tone="info">No benches yet. Add the tables you will set out, with the kit on each.</Alert>
+        )}
       </div>
-      {(benches.data ?? []).some((b) => !rows.some((r) => r.id === b.id)) && <div className="mt-3"><Alert tone="caution">Saving removes {(benches.data ?? []).filter((b) => !rows.some((r) => r.id === b.id)).map((b) => b.name).join(', ')}; fixers seated there become free to move, and items placed there go back to waiting.</Alert></div>}
+      {(benches.data ?? []).some((b) => !rows.some((r) => r.id === b.id)) && (
+        <div className="mt-3">
+          <Alert tone="caution">
+            Saving removes{' '}
+            {(benches.data ?? [])
+              .filter((b) => !rows.some((r) => r.id === b.id))
+              .map((b) => b.name)
+              .join(', ')}
+            ; fixers seated there become free to move, and items placed there go back to waiting.
+          </Alert>
+        </div>
+      )}
       <div className="mt-4 flex flex-wrap items-center gap-3">
-        <Button variant="secondary" onClick={() => setRows((r) => [...r, { name: `Bench ${r.length + 1}`, seats: 2, equipment: [] }])}>+ Add a bench</Button>
-        <Button busy={save.isPending} onClick={() => save.mutate(rows)}>Save benches</Button>
-        <Button variant="quiet" busy={saveVenue.isPending} onClick={() => saveVenue.mutate(rows)}>Make this the venue’s usual layout</Button>
-        {save.isSuccess && <span role="status" className="font-bold text-sage">Saved.</span>}
-        {saveVenue.isSuccess && <span role="status" className="font-bold text-sage">Later sessions at {event.data?.venue.name} start with these benches.</span>}
+        <Button
+          variant="secondary"
+          onClick={() => setRows((r) => [...r, { name: `Bench ${r.length + 1}`, seats: 2, equipment: [] }])}
+        >
+          + Add a bench
+        </Button>
+        <Button busy={save.isPending} onClick={() => save.mutate(rows)}>
+          Save benches
+        </Button>
+        <Button variant="quiet" busy={saveVenue.isPending} onClick={() => saveVenue.mutate(rows)}>
+          Make this the venue’s usual layout
+        </Button>
+        {save.isSuccess && (
+          <span role="status" className="font-bold text-sage">
+            Saved.
+          </span>
+        )}
+        {saveVenue.isSuccess && (
+          <span role="status" className="font-bold text-sage">
+            Later sessions at {event.data?.venue.name} start with these benches.
+          </span>
+        )}
       </div>
-      {save.error && <div className="mt-3"><Alert tone="error">{fields ? Object.values(fields).join(' ') : save.error.message}</Alert></div>}
-      {saveVenue.error && <div className="mt-3"><Alert tone="error">{saveVenue.error.message}</Alert></div>}
+      {save.error && (
+        <div className="mt-3">
+          <Alert tone="error">{fields ? Object.values(fields).join(' ') : save.error.message}</Alert>
+        </div>
+      )}
+      {saveVenue.error && (
+        <div className="mt-3">
+          <Alert tone="error">{saveVenue.error.message}</Alert>
+        </div>
+      )}
     </div>
   );
 }

@@ -4,7 +4,12 @@ import { Button } from '../../components/ui/button';
 import { Alert, Card, PageTitle, Spinner } from '../../components/ui/feedback';
 import { useProfile, useSaveProfile } from '../../features/volunteers/api/volunteers';
 
-const LEVELS = [['0', 'Not for me'], ['1', '1 · learning'], ['2', '2 · capable'], ['3', '3 · expert']] as const;
+const LEVELS = [
+  ['0', 'Not for me'],
+  ['1', '1 · learning'],
+  ['2', '2 · capable'],
+  ['3', '3 · expert'],
+] as const;
 
 export function MySkillsPage() {
   const profile = useProfile();
@@ -23,13 +28,27 @@ export function MySkillsPage() {
   if (profile.error) return <Alert tone="error">{profile.error.message}</Alert>;
   return (
     <div className="mx-auto max-w-2xl space-y-4">
-      <PageTitle title="My skills" lead="Organisers match items to fixers by these. Be honest: learning is welcome — you will be paired with simpler repairs." />
+      <PageTitle
+        title="My skills"
+        lead="Organisers match items to fixers by these. Be honest: learning is welcome — you will be paired with simpler repairs."
+      />
       <Card className="space-y-3">
         {SKILLS.map((s) => (
           <label key={s} className="grid grid-cols-[1fr_10rem] items-center gap-3">
             <span className="font-semibold">{SKILL_LABELS[s]}</span>
-            <select value={String(skills[s] ?? 0)} onChange={(e) => { save.reset(); setSkills({ ...skills, [s]: Number(e.target.value) }); }} className="rounded-lg border border-ink/20 px-2 py-2">
-              {LEVELS.map(([v, l]) => <option key={v} value={v}>{l}</option>)}
+            <select
+              value={String(skills[s] ?? 0)}
+              onChange={(e) => {
+                save.reset();
+                setSkills({ ...skills, [s]: Number(e.target.value) });
+              }}
+              className="rounded-lg border border-ink/20 px-2 py-2"
+            >
+              {LEVELS.map(([v, l]) => (
+                <option key={v} value={v}>
+                  {l}
+                </option>
+              ))}
             </select>
           </label>
         ))}
@@ -38,15 +57,54 @@ export function MySkillsPage() {
         <fieldset>
           <legend className="font-semibold">Kit I bring</legend>
           <div className="mt-2 grid grid-cols-2 gap-2">
-            {EQUIPMENT.map((e) => <label key={e} className="flex items-center gap-2 text-sm"><input type="checkbox" className="size-4 accent-copper" checked={kit.includes(e)} onChange={(ev) => { save.reset(); setKit(ev.target.checked ? [...kit, e] : kit.filter((x) => x !== e)); }} />{EQUIPMENT_LABELS[e]}</label>)}
+            {EQUIPMENT.map((e) => (
+              <label key={e} className="flex items-center gap-2 text-sm">
+                <input
+                  type="checkbox"
+                  className="size-4 accent-copper"
+                  checked={kit.includes(e)}
+                  onChange={(ev) => {
+                    save.reset();
+                    setKit(ev.target.checked ? [...kit, e] : kit.filter((x) => x !== e));
+                  }}
+                />
+                {EQUIPMENT_LABELS[e]}
+              </label>
+            ))}
           </div>
         </fieldset>
-        <label className="mt-4 block font-semibold">Notes for the organisers<textarea value={notes} onChange={(e) => { save.reset(); setNotes(e.target.value); }} rows={3} className="mt-1 block w-full rounded-lg border border-ink/20 px-3 py-2 font-normal" /></label>
+        <label className="mt-4 block font-semibold">
+          Notes for the organisers
+          <textarea
+            value={notes}
+            onChange={(e) => {
+              save.reset();
+              setNotes(e.target.value);
+            }}
+            rows={3}
+            className="mt-1 block w-full rounded-lg border border-ink/20 px-3 py-2 font-normal"
+          />
+        </label>
       </Card>
       {save.error && <Alert tone="error">{save.error.message}</Alert>}
       <div className="flex items-center gap-3">
-        <Button busy={save.isPending} onClick={() => save.mutate({ skills: Object.fromEntries(Object.entries(skills).filter(([, l]) => l > 0)) as never, kit: kit as never, notes })}>Save my skills</Button>
-        {save.isSuccess && <span role="status" className="font-bold text-sage">Saved.</span>}
+        <Button
+          busy={save.isPending}
+          onClick={() =>
+            save.mutate({
+              skills: Object.fromEntries(Object.entries(skills).filter(([, l]) => l > 0)) as never,
+              kit: kit as never,
+              notes,
+            })
+          }
+        >
+          Save my skills
+        </Button>
+        {save.isSuccess && (
+          <span role="status" className="font-bold text-sage">
+            Saved.
+          </span>
+        )}
       </div>
     </div>
   );

@@ -26,9 +26,15 @@ export function SkillsMatrixPage() {
   const [filter, setFilter] = useState('');
   const [needs, setNeeds] = useState('');
   const rows = useMemo(() => {
-    const list = (matrix.data?.volunteers ?? []).filter((v) => v.name.toLowerCase().includes(filter.trim().toLowerCase()) && (!needs || (v.skills[needs] ?? 0) > 0));
+    const list = (matrix.data?.volunteers ?? []).filter(
+      (v) => v.name.toLowerCase().includes(filter.trim().toLowerCase()) && (!needs || (v.skills[needs] ?? 0) > 0),
+    );
     const dir = ascending ? 1 : -1;
-    return [...list].sort((a, b) => (sortBy === 'name' ? dir * a.name.localeCompare(b.name) : dir * ((a.skills[sortBy] ?? 0) - (b.skills[sortBy] ?? 0)) || a.name.localeCompare(b.name)));
+    return [...list].sort((a, b) =>
+      sortBy === 'name'
+        ? dir * a.name.localeCompare(b.name)
+        : dir * ((a.skills[sortBy] ?? 0) - (b.skills[sortBy] ?? 0)) || a.name.localeCompare(b.name),
+    );
   }, [matrix.data, filter, needs, sortBy, ascending]);
   if (matrix.isPending) return <Spinner />;
   if (matrix.error) return <Alert tone="error">{matrix.error.message}</Alert>;
@@ -38,11 +44,28 @@ export function SkillsMatrixPage() {
       <h1 className="mb-2 text-2xl sm:text-3xl">{group.data?.name ?? 'Skills'}</h1>
       <GroupTabs groupId={groupId} />
       <div className="mb-3 flex flex-wrap gap-3">
-        <label className="text-sm font-semibold">Name<input value={filter} onChange={(e) => setFilter(e.target.value)} placeholder="Filter…" className="mt-1 block rounded-lg border border-ink/20 px-3 py-2" /></label>
-        <label className="text-sm font-semibold">Has the skill
-          <select value={needs} onChange={(e) => setNeeds(e.target.value)} className="mt-1 block rounded-lg border border-ink/20 px-3 py-2">
+        <label className="text-sm font-semibold">
+          Name
+          <input
+            value={filter}
+            onChange={(e) => setFilter(e.target.value)}
+            placeholder="Filter…"
+            className="mt-1 block rounded-lg border border-ink/20 px-3 py-2"
+          />
+        </label>
+        <label className="text-sm font-semibold">
+          Has the skill
+          <select
+            value={needs}
+            onChange={(e) => setNeeds(e.target.value)}
+            className="mt-1 block rounded-lg border border-ink/20 px-3 py-2"
+          >
             <option value="">Any</option>
-            {skills.map((s) => <option key={s} value={s}>{SKILL_LABELS[s as Skill]}</option>)}
+            {skills.map((s) => (
+              <option key={s} value={s}>
+                {SKILL_LABELS[s as Skill]}
+              </option>
+            ))}
           </select>
         </label>
       </div>
@@ -50,10 +73,24 @@ export function SkillsMatrixPage() {
         <table className="w-full text-center text-sm">
           <thead className="bg-navy/5 text-navy">
             <tr>
-              <th className="sticky left-0 bg-[#eef0f3] px-3 py-2 text-left"><button onClick={() => sortOn('name')} className="font-bold underline-offset-2 hover:underline">Volunteer{sortBy === 'name' ? (ascending ? ' ↑' : ' ↓') : ''}</button></th>
+              <th className="sticky left-0 bg-[#eef0f3] px-3 py-2 text-left">
+                <button onClick={() => sortOn('name')} className="font-bold underline-offset-2 hover:underline">
+                  Volunteer{sortBy === 'name' ? (ascending ? ' ↑' : ' ↓') : ''}
+                </button>
+              </th>
               {skills.map((s) => (
-                <th key={s} className="px-2 py-2" aria-sort={sortBy === s ? (ascending ? 'ascending' : 'descending') : 'none'}>
-                  <button onClick={() => sortOn(s)} className={`font-bold hover:underline ${sortBy === s ? 'text-copper-dark' : ''}`}>{SKILL_LABELS[s as Skill]}{sortBy === s ? (ascending ? ' ↑' : ' ↓') : ''}</button>
+                <th
+                  key={s}
+                  className="px-2 py-2"
+                  aria-sort={sortBy === s ? (ascending ? 'ascending' : 'descending') : 'none'}
+                >
+                  <button
+                    onClick={() => sortOn(s)}
+                    className={`font-bold hover:underline ${sortBy === s ? 'text-copper-dark' : ''}`}
+                  >
+                    {SKILL_LABELS[s as Skill]}
+                    {sortBy === s ? (ascending ? ' ↑' : ' ↓') : ''}
+                  </button>
                 </th>
               ))}
             </tr>
@@ -61,10 +98,26 @@ export function SkillsMatrixPage() {
           <tbody>
             {rows.map((v) => (
               <tr key={v.userId} className="border-t border-ink/5">
-                <th className="sticky left-0 bg-white px-3 py-2 text-left font-semibold">{v.name}<span className="block text-xs font-normal text-ink-soft">{v.roles.join(', ')}</span></th>
+                <th className="sticky left-0 bg-white px-3 py-2 text-left font-semibold">
+                  {v.name}
+                  <span className="block text-xs font-normal text-ink-soft">{v.roles.join(', ')}</span>
+                </th>
                 {skills.map((s) => {
                   const l = v.skills[s] ?? 0;
-                  return <td key={s} className="px-1 py-1">{l ? <span className={`inline-block min-w-16 rounded px-1.5 py-0.5 text-xs font-bold ${TONE[l]}`} title={LEVEL[l]}>{l} {LEVEL[l]}</span> : <span className="text-ink-soft">·</span>}</td>;
+                  return (
+                    <td key={s} className="px-1 py-1">
+                      {l ? (
+                        <span
+                          className={`inline-block min-w-16 rounded px-1.5 py-0.5 text-xs font-bold ${TONE[l]}`}
+                          title={LEVEL[l]}
+                        >
+                          {l} {LEVEL[l]}
+                        </span>
+                      ) : (
+                        <span className="text-ink-soft">·</span>
+                      )}
+                    </td>
+                  );
                 })}
               </tr>
             ))}
@@ -72,7 +125,9 @@ export function SkillsMatrixPage() {
         </table>
         {rows.length === 0 && <p className="p-4 text-sm text-ink-soft">Nobody matches.</p>}
       </div>
-      <p className="mt-2 text-sm text-ink-soft">Levels: 1 learning, 2 capable, 3 expert. Volunteers set their own skills on their page.</p>
+      <p className="mt-2 text-sm text-ink-soft">
+        Levels: 1 learning, 2 capable, 3 expert. Volunteers set their own skills on their page.
+      </p>
     </div>
   );
 }

@@ -3,48 +3,75 @@ import { GROUP_ROLES, MEMBERSHIP_STATUSES } from '../../../../shared/constants';
 import { createdAt, id, ref, timestamp3 } from './columns';
 import { users } from './users';
 
-export const repairGroups = mysqlTable('repair_groups', {
-  id: id(),
-  name: varchar('name', { length: 120 }).notNull(),
-  slug: varchar('slug', { length: 80 }).notNull(),
-  town: varchar('town', { length: 120 }).notNull(),
-  description: text('description').notNull(),
-  houseRules: text('house_rules'),
-  timeZone: varchar('time_zone', { length: 64 }).notNull().default('Europe/London'),
-  /** Whether the group's repair notes are searchable by the other groups of the network. */
-  shareKnowledge: boolean('share_knowledge').notNull().default(false),
-  createdAt: createdAt(),
-}, (t) => [uniqueIndex('repair_groups_slug_uq').on(t.slug)]);
+export const repairGroups = mysqlTable(
+  'repair_groups',
+  {
+    id: id(),
+    name: varchar('name', { length: 120 }).notNull(),
+    slug: varchar('slug', { length: 80 }).notNull(),
+    town: varchar('town', { length: 120 }).notNull(),
+    description: text('description').notNull(),
+    houseRules: text('house_rules'),
+    timeZone: varchar('time_zone', { length: 64 }).notNull().default('Europe/London'),
+    /** Whether the group's repair notes are searchable by the other groups of the network. */
+    shareKnowledge: boolean('share_knowledge').notNull().default(false),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex('repair_groups_slug_uq').on(t.slug)],
+);
 
 /** A person's role in one group; the same person may organise one group and fix at another. */
-export const memberships = mysqlTable('memberships', {
-  id: id(),
-  userId: ref('user_id').notNull().references(() => users.id, { onDelete: 'cascade' }),
-  groupId: ref('group_id').notNull().references(() => repairGroups.id, { onDelete: 'cascade' }),
-  role: mysqlEnum('role', GROUP_ROLES).notNull(),
-  status: mysqlEnum('status', MEMBERSHIP_STATUSES).notNull().default('active'),
-  createdAt: createdAt(),
-}, (t) => [uniqueIndex('memberships_uq').on(t.userId, t.groupId, t.role), index('memberships_group_idx').on(t.groupId, t.status)]);
+export const memberships = mysqlTable(
+  'memberships',
+  {
+    id: id(),
+    userId: ref('user_id')
+      .notNull()
+      .references(() => users.id, { onDelete: 'cascade' }),
+    groupId: ref('group_id')
+      .notNull()
+      .references(() => repairGroups.id, { onDelete: 'cascade' }),
+    role: mysqlEnum('role', GROUP_ROLES).notNull(),
+    status: mysqlEnum('status', MEMBERSHIP_STATUSES).notNull().default('active'),
+    createdAt: createdAt(),
+  },
+  (t) => [
+    uniqueIndex('memberships_uq').on(t.userId, t.groupId, t.role),
+    index('memberships_group_idx').on(t.groupId, t.status),
+  ],
+);
 
-export const venues = mysqlTable('venues', {
-  id: id(),
-  groupId: ref('group_id').notNull().references(() => repairGroups.id, { onDelete: 'cascade' }),
-  name: varchar('name', { length: 160 }).notNull(),
-  address: varchar('address', { length: 255 }).notNull(),
-  town: varchar('town', { length: 120 }).notNull(),
-  accessNotes: text('access_notes').notNull(),
-  createdAt: createdAt(),
-}, (t) => [index('venues_group_idx').on(t.groupId)]);
+export const venues = mysqlTable(
+  'venues',
+  {
+    id: id(),
+    groupId: ref('group_id')
+      .notNull()
+      .references(() => repairGroups.id, { onDelete: 'cascade' }),
+    name: varchar('name', { length: 160 }).notNull(),
+    address: varchar('address', { length: 255 }).notNull(),
+    town: varchar('town', { length: 120 }).notNull(),
+    accessNotes: text('access_notes').notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [index('venues_group_idx').on(t.groupId)],
+);
 
 /** An organiser's invitation to join a group in a role; the link in the mail carries the token, only its hash is kept. */
-export const invites = mysqlTable('invites', {
-  id: id(),
-  groupId: ref('group_id').notNull().references(() => repairGroups.id, { onDelete: 'cascade' }),
-  email: varchar('email', { length: 254 }).notNull(),
-  role: mysqlEnum('role', GROUP_ROLES).notNull(),
-  tokenHash: varchar('token_hash', { length: 64 }).notNull(),
-  expiresAt: timestamp3('expires_at').notNull(),
-  acceptedAt: timestamp3('accepted_at'),
-  invitedBy: ref('invited_by').references(() => users.id, { onDelete: 'set null' }),
-  createdAt: createdAt(),
-}, (t) => [uniqueIndex('invites_token_uq').on(t.tokenHash), index('invites_group_idx').on(t.groupId)]);
+export const invites = mysqlTable(
+  'invites',
+  {
+    id: id(),
+    groupId: ref('group_id')
+      .notNull()
+      .references(() => repairGroups.id, { onDelete: 'cascade' }),
+    email: varchar('email', { length: 254 }).notNull(),
+    role: mysqlEnum('role', GROUP_ROLES).notNull(),
+    tokenHash: varchar('token_hash', { length: 64 }).notNull(),
+    expiresAt: timestamp3('expires_at').notNull(),
+    acceptedAt: timestamp3('accepted_at'),
+    invitedBy: ref('invited_by').references(() => users.id, { onDelete: 'set null' }),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex('invites_token_uq').on(t.tokenHash), index('invites_group_idx').on(t.groupId)],
+);

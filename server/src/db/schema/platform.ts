@@ -3,11 +3,15 @@ import { createdAt, id, timestamp3 } from './columns';
 import type { MailAttachment } from '../../mail/transport';
 
 /** express-mysql-session's table, owned by our migrations (the store's own CREATE is switched off). */
-export const sessions = mysqlTable('sessions', {
-  sessionId: varchar('session_id', { length: 128 }).primaryKey(),
-  expires: int('expires', { unsigned: true }).notNull(),
-  data: mediumtext('data'),
-}, (t) => [index('sessions_expires_idx').on(t.expires)]);
+export const sessions = mysqlTable(
+  'sessions',
+  {
+    sessionId: varchar('session_id', { length: 128 }).primaryKey(),
+    expires: int('expires', { unsigned: true }).notNull(),
+    data: mediumtext('data'),
+  },
+  (t) => [index('sessions_expires_idx').on(t.expires)],
+);
 
 /** Counters for rate limits, shared by every app process. */
 export const rateLimits = mysqlTable('rate_limits', {
@@ -17,20 +21,24 @@ export const rateLimits = mysqlTable('rate_limits', {
 });
 
 /** Mail waits here, written in the same transaction as the change that causes it, until a worker sends it. */
-export const outbox = mysqlTable('outbox', {
-  id: id(),
-  toAddress: varchar('to_address', { length: 254 }).notNull(),
-  subject: varchar('subject', { length: 255 }).notNull(),
-  html: mediumtext('html').notNull(),
-  text: mediumtext('text').notNull(),
-  attachments: json('attachments').$type<MailAttachment[]>(),
-  status: mysqlEnum('status', ['pending', 'sent', 'failed']).notNull().default('pending'),
-  attempts: int('attempts', { unsigned: true }).notNull().default(0),
-  nextAttemptAt: timestamp3('next_attempt_at').notNull(),
-  lastError: varchar('last_error', { length: 500 }),
-  createdAt: createdAt(),
-  sentAt: timestamp3('sent_at'),
-}, (t) => [index('outbox_status_id_idx').on(t.status, t.id)]);
+export const outbox = mysqlTable(
+  'outbox',
+  {
+    id: id(),
+    toAddress: varchar('to_address', { length: 254 }).notNull(),
+    subject: varchar('subject', { length: 255 }).notNull(),
+    html: mediumtext('html').notNull(),
+    text: mediumtext('text').notNull(),
+    attachments: json('attachments').$type<MailAttachment[]>(),
+    status: mysqlEnum('status', ['pending', 'sent', 'failed']).notNull().default('pending'),
+    attempts: int('attempts', { unsigned: true }).notNull().default(0),
+    nextAttemptAt: timestamp3('next_attempt_at').notNull(),
+    lastError: varchar('last_error', { length: 500 }),
+    createdAt: createdAt(),
+    sentAt: timestamp3('sent_at'),
+  },
+  (t) => [index('outbox_status_id_idx').on(t.status, t.id)],
+);
 
 /** What the local mailbox caught (development and demo only). */
 export const mailboxMessages = mysqlTable('mailbox_messages', {

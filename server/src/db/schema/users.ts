@@ -1,23 +1,33 @@
 import { boolean, char, index, mysqlEnum, mysqlTable, uniqueIndex, varchar } from 'drizzle-orm/mysql-core';
 import { createdAt, id, ref, timestamp3 } from './columns';
 
-export const users = mysqlTable('users', {
-  id: id(),
-  email: varchar('email', { length: 254 }).notNull(),
-  name: varchar('name', { length: 120 }).notNull(),
-  passwordHash: varchar('password_hash', { length: 255 }),
-  admin: boolean('admin').notNull().default(false),
-  emailVerifiedAt: timestamp3('email_verified_at'),
-  createdAt: createdAt(),
-}, (t) => [uniqueIndex('users_email_uq').on(t.email)]);
+export const users = mysqlTable(
+  'users',
+  {
+    id: id(),
+    email: varchar('email', { length: 254 }).notNull(),
+    name: varchar('name', { length: 120 }).notNull(),
+    passwordHash: varchar('password_hash', { length: 255 }),
+    admin: boolean('admin').notNull().default(false),
+    emailVerifiedAt: timestamp3('email_verified_at'),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex('users_email_uq').on(t.email)],
+);
 
 /** Single-use links sent by e-mail; only the SHA-256 of the token is stored. */
-export const authTokens = mysqlTable('auth_tokens', {
-  id: id(),
-  userId: ref('user_id').notNull().references(() => users.id, { onDelete: 'cascade' }),
-  purpose: mysqlEnum('purpose', ['verify-email', 'reset-password']).notNull(),
-  tokenHash: char('token_hash', { length: 64 }).notNull(),
-  expiresAt: timestamp3('expires_at').notNull(),
-  usedAt: timestamp3('used_at'),
-  createdAt: createdAt(),
-}, (t) => [uniqueIndex('auth_tokens_hash_uq').on(t.tokenHash), index('auth_tokens_user_idx').on(t.userId, t.purpose)]);
+export const authTokens = mysqlTable(
+  'auth_tokens',
+  {
+    id: id(),
+    userId: ref('user_id')
+      .notNull()
+      .references(() => users.id, { onDelete: 'cascade' }),
+    purpose: mysqlEnum('purpose', ['verify-email', 'reset-password']).notNull(),
+    tokenHash: char('token_hash', { length: 64 }).notNull(),
+    expiresAt: timestamp3('expires_at').notNull(),
+    usedAt: timestamp3('used_at'),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex('auth_tokens_hash_uq').on(t.tokenHash), index('auth_tokens_user_idx').on(t.userId, t.purpose)],
+);

@@ -21,7 +21,8 @@ export const bookingQrText = (publicUrl: string, reference: string) => `${public
 
 export const qrDataUrl = (text: string) => QRCode.toDataURL(text, { errorCorrectionLevel: 'M', margin: 2, width: 240 });
 
-const when = (f: BookingMailFacts) => `${formatDay(f.slotStartsAt, f.timeZone)}, ${formatTimeRange(f.slotStartsAt, f.slotEndsAt, f.timeZone)}`;
+const when = (f: BookingMailFacts) =>
+  `${formatDay(f.slotStartsAt, f.timeZone)}, ${formatTimeRange(f.slotStartsAt, f.slotEndsAt, f.timeZone)}`;
 const where = (f: BookingMailFacts) => `${f.venue.name}, ${f.venue.address}, ${f.venue.town}`;
 
 export function confirmationMail(f: BookingMailFacts, qrText: string) {
@@ -45,20 +46,35 @@ export function confirmationMail(f: BookingMailFacts, qrText: string) {
 
 export const reminderMail = (f: BookingMailFacts) =>
   composeMail(f.visitorEmail, `Tomorrow: ${f.eventTitle} — ${f.reference}`, {
-    paragraphs: [`Hello ${f.visitorName},`, `a reminder of your repair slot: ${when(f)} at ${where(f)}.`, `You are bringing: ${f.items.join('; ')}.`, 'If you cannot come, please cancel so someone on the waiting list can have the place.'],
+    paragraphs: [
+      `Hello ${f.visitorName},`,
+      `a reminder of your repair slot: ${when(f)} at ${where(f)}.`,
+      `You are bringing: ${f.items.join('; ')}.`,
+      'If you cannot come, please cancel so someone on the waiting list can have the place.',
+    ],
     action: { label: 'View or cancel my booking', url: f.manageUrl },
   });
 
 export const cancelledMail = (f: BookingMailFacts) =>
   composeMail(f.visitorEmail, `Cancelled: your booking ${f.reference}`, {
-    paragraphs: [`Hello ${f.visitorName},`, `your booking ${f.reference} for ${f.eventTitle} (${when(f)}) is cancelled. Thank you for letting us know; the place goes to someone else.`],
+    paragraphs: [
+      `Hello ${f.visitorName},`,
+      `your booking ${f.reference} for ${f.eventTitle} (${when(f)}) is cancelled. Thank you for letting us know; the place goes to someone else.`,
+    ],
   });
 
 export const movedMail = (f: BookingMailFacts) =>
-  composeMail(f.visitorEmail, `New time for ${f.reference}: ${formatTimeRange(f.slotStartsAt, f.slotEndsAt, f.timeZone)}`, {
-    paragraphs: [`Hello ${f.visitorName},`, `your booking ${f.reference} now has a new time: ${when(f)} at ${where(f)}.`],
-    action: { label: 'View my booking', url: f.manageUrl },
-  });
+  composeMail(
+    f.visitorEmail,
+    `New time for ${f.reference}: ${formatTimeRange(f.slotStartsAt, f.slotEndsAt, f.timeZone)}`,
+    {
+      paragraphs: [
+        `Hello ${f.visitorName},`,
+        `your booking ${f.reference} now has a new time: ${when(f)} at ${where(f)}.`,
+      ],
+      action: { label: 'View my booking', url: f.manageUrl },
+    },
+  );
 
 export const waitlistJoinedMail = (f: Omit<BookingMailFacts, 'reference' | 'manageUrl'>, position: number) =>
   composeMail(f.visitorEmail, `Waiting list: ${f.eventTitle}`, {

@@ -16,8 +16,14 @@ export const photoUpload = multer({
 
 export function multerError(err: unknown): HttpError | null {
   if (!(err instanceof multer.MulterError)) return null;
-  if (err.code === 'LIMIT_FILE_SIZE') return new HttpError(413, 'photo-too-large', `Each photo can be at most ${PHOTO_LIMITS.maxBytes / 1024 / 1024} MB.`);
-  if (err.code === 'LIMIT_FILE_COUNT' || err.code === 'LIMIT_UNEXPECTED_FILE') return new HttpError(400, 'too-many-photos', `Add at most ${PHOTO_LIMITS.perItem} photos per item.`);
+  if (err.code === 'LIMIT_FILE_SIZE')
+    return new HttpError(
+      413,
+      'photo-too-large',
+      `Each photo can be at most ${PHOTO_LIMITS.maxBytes / 1024 / 1024} MB.`,
+    );
+  if (err.code === 'LIMIT_FILE_COUNT' || err.code === 'LIMIT_UNEXPECTED_FILE')
+    return new HttpError(400, 'too-many-photos', `Add at most ${PHOTO_LIMITS.perItem} photos per item.`);
   return new HttpError(400, 'bad-upload', 'The upload could not be read. Try again with fewer or smaller photos.');
 }
 
@@ -25,13 +31,30 @@ export function multerError(err: unknown): HttpError | null {
  * Checks each file by its bytes (not its name or the browser's word), then stores it re-encoded: at most
  * 1600 px, turned upright, with every metadata block (location included) left out.
  */
-export async function savePhotos(ctx: AppContext, bookingId: number, itemId: number, files: Express.Multer.File[], kind: 'intake' | 'repair' = 'intake') {
+export async function savePhotos(
+  ctx: AppContext,
+  bookingId: number,
+  itemId: number,
+  files: Express.Multer.File[],
+  kind: 'intake' | 'repair' = 'intake',
+) {
   const { db } = ctx.database;
-  const [item] = await db.select().from(bookingItems).where(and(eq(bookingItems.id, itemId), eq(bookingItems.bookingId, bookingId)));
+  const [item] = await db
+    .select()
+    .from(bookingItems)
+    .where(and(eq(bookingItems.id, itemId), eq(bookingItems.bookingId, bookingId)));
   if (!item) throw notFound('That item');
   if (!files.length) throw new HttpError(400, 'no-photo', 'Choose a photo to add.');
-  const [{ n }] = await db.select({ n: count() }).from(itemPhotos).where(and(eq(itemPhotos.itemId, itemId), eq(itemPhotos.kind, kind)));
-  if (n + files.length > PHOTO_LIMITS.perItem) throw new HttpError(400, 'too-many-photos', `An item can have at most ${PHOTO_LIMITS.perItem} photos; this one has ${n}.`);
+  const [{ n }] = await db
+    .select({ n: count() })
+    .from(itemPhotos)
+    .where(and(eq(itemPhotos.itemId, itemId), eq(itemPhotos.kind, kind)));
+  if (n + files.length > PHOTO_LIMITS.perItem)
+    throw new HttpError(
+      400,
+      'too-many-photos',
+      `An item can have at most ${PHOTO_LIMITS.perItem} photos; this one has ${n}.`,
+    );
 
   const prepared = [];
   for (const f of files) {
@@ -40,7 +63,11 @@ export async function savePhotos(ctx: AppContext, bookingId: number, itemId: num
       throw new HttpError(415, 'photo-type', `“${f.originalname}” is not a JPEG, PNG or WebP photo.`);
     }
     try {
-      const { data, info } = await sharp(f.buffer, { failOn: 'error' }).rotate().resize({ width: 1600, height: 1600, fit: 'inside', withoutEnlargement: true }).jpeg({ quality: 82, mozjpeg: true }).toBuffer({ resolveWithObject: true });
+      const { data, info } = await sharp(f.buffer, { failOn: 'error' })
+        .rotate()
+        .resize({ width: 1600, height: 1600, fit: 'inside', withoutEnlargement: true })
+        .jpeg({ quality: 82, mozjpeg: true })
+        .toBuffer({ resolveWithObject: true });
       prepared.push({ data, info });
     } catch {
       throw new HttpError(415, 'photo-type', `“${f.originalname}” could not be read as a photo.`);
@@ -50,7 +77,18 @@ export async function savePhotos(ctx: AppContext, bookingId: number, itemId: num
   for (const p of prepared) {
     const key = `photos/${new Date().toISOString().slice(0, 7)}/${randomBytes(12).toString('hex')}.jpg`;
     await ctx.storage.put(key, p.data, 'image/jpeg');
-    const [{ id }] = await db.insert(itemPhotos).values({ itemId, kind, storageKey: key, contentType: 'image/jpeg', width: p.info.width, height: p.info.height, bytes: p.data.length }).$returningId();
+    const [{ id }] = await db
+      .insert(itemPhotos)
+      .values({
+        itemId,
+        kind,
+        storageKey: key,
+        contentType: 'image/jpeg',
+        width: p.info.width,
+        height: p.info.height,
+        bytes: p.data.length,
+      })
+      .$returningId();
     saved.push({ id, kind, width: p.info.width, height: p.info.height });
   }
   return saved;

@@ -14,7 +14,12 @@ import { multerError, photoUpload, savePhotos } from './photos';
 import * as booking from './service';
 
 const tokenQuery = z.object({ token: z.string().max(200).optional() });
-const idempotencyKey = z.string().trim().min(8, 'Idempotency-Key must be 8 to 100 characters.').max(100, 'Idempotency-Key must be 8 to 100 characters.').regex(/^[A-Za-z0-9_.:-]+$/, 'Idempotency-Key may hold letters, digits and _ . : - only.');
+const idempotencyKey = z
+  .string()
+  .trim()
+  .min(8, 'Idempotency-Key must be 8 to 100 characters.')
+  .max(100, 'Idempotency-Key must be 8 to 100 characters.')
+  .regex(/^[A-Za-z0-9_.:-]+$/, 'Idempotency-Key may hold letters, digits and _ . : - only.');
 
 export function bookingRoutes(ctx: AppContext) {
   const r = Router();
@@ -30,7 +35,10 @@ export function bookingRoutes(ctx: AppContext) {
   r.post('/bookings', async (req, res) => {
     const header = req.get('idempotency-key');
     const key = header === undefined ? undefined : idempotencyKey.safeParse(header);
-    if (key && !key.success) throw new HttpError(400, 'invalid', key.error.issues[0].message, { 'Idempotency-Key': key.error.issues[0].message });
+    if (key && !key.success)
+      throw new HttpError(400, 'invalid', key.error.issues[0].message, {
+        'Idempotency-Key': key.error.issues[0].message,
+      });
     const input = body(req, createBookingSchema);
     const result = await booking.createBooking(ctx, input, key?.data);
     if (result.replayed) res.setHeader('Idempotent-Replayed', 'true');
@@ -75,7 +83,14 @@ export function bookingRoutes(ctx: AppContext) {
   r.get('/photos/:id', async (req, res) => {
     const { id } = params(req, z.object({ id: z.coerce.number().int().positive() }));
     const [p] = await db
-      .select({ key: itemPhotos.storageKey, type: itemPhotos.contentType, kind: itemPhotos.kind, reference: bookings.reference, groupId: events.groupId, shares: repairGroups.shareKnowledge })
+      .select({
+        key: itemPhotos.storageKey,
+        type: itemPhotos.contentType,
+        kind: itemPhotos.kind,
+        reference: bookings.reference,
+        groupId: events.groupId,
+        shares: repairGroups.shareKnowledge,
+      })
       .from(itemPhotos)
       .innerJoin(bookingItems, eq(bookingItems.id, itemPhotos.itemId))
       .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
@@ -85,8 +100,10 @@ export function bookingRoutes(ctx: AppContext) {
     if (!p) throw notFound('That photo');
     const token = tokenQuery.parse(req.query).token;
     // A bench photo of a group that shares its repair notes may be seen by any group's volunteers.
-    const sharedBenchPhoto = p.kind === 'repair' && Boolean(p.shares) && Boolean(req.user && (req.user.admin || req.user.roles.length));
-    if (!sharedBenchPhoto && !hasGroupRole(req.user, p.groupId, ['organiser', 'host', 'fixer'])) await booking.bookingByToken(ctx, p.reference, token);
+    const sharedBenchPhoto =
+      p.kind === 'repair' && Boolean(p.shares) && Boolean(req.user && (req.user.admin || req.user.roles.length));
+    if (!sharedBenchPhoto && !hasGroupRole(req.user, p.groupId, ['organiser', 'host', 'fixer']))
+      await booking.bookingByToken(ctx, p.reference, token);
     const data = await ctx.storage.get(p.key);
     if (!data) throw notFound('That photo');
     res.setHeader('Cache-Control', 'private, max-age=3600');
@@ -106,8 +123,12 @@ export function bookingRoutes(ctx: AppContext) {
     res.status(201).json(await booking.claimOffer(ctx, String(req.params.token)));
   });
 
-  r.get('/events/:id/bookings', requireGroupRole(['organiser', 'host'], (req) => eventGroupId(db, Number(req.params.id))), async (req, res) => {
-    res.json(await eventBookings(ctx, Number(req.params.id)));
-  });
+  r.get(
+    '/events/:id/bookings',
+    requireGroupRole(['organiser', 'host'], (req) => eventGroupId(db, Number(req.params.id))),
+    async (req, res) => {
+      res.json(await eventBookings(ctx, Number(req.params.id)));
+    },
+  );
   return r;
 }

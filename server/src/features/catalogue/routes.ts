@@ -23,7 +23,10 @@ const categoryPatch = z
     co2eSource: z.string().trim().min(3, 'Name the source of the factor.').max(255).nullable(),
   })
   .partial()
-  .refine((p) => p.co2ePerKg === undefined || p.co2ePerKg === null || (p.co2eSource ?? '').length >= 3, { path: ['co2eSource'], message: 'Name the source of the factor.' });
+  .refine((p) => p.co2ePerKg === undefined || p.co2ePerKg === null || (p.co2eSource ?? '').length >= 3, {
+    path: ['co2eSource'],
+    message: 'Name the source of the factor.',
+  });
 
 export function catalogueRoutes(ctx: AppContext) {
   const r = Router();

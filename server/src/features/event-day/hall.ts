@@ -4,7 +4,19 @@ import { ITEM_STATUS_LABELS, OUTCOME_LABELS, QUEUED_STATUSES } from '../../../..
 import { estimateWaits, liveWarnings, queueOrder } from '../../../../shared/event-day/queue';
 import { shortName, tagUrl } from '../../../../shared/event-day/tag-code';
 import type { AppContext } from '../../context';
-import { bookingItems, bookings, categories, eventBenches, events, itemAssignments, itemOutcomes, repairGroups, shifts, slots, users } from '../../db/schema/index';
+import {
+  bookingItems,
+  bookings,
+  categories,
+  eventBenches,
+  events,
+  itemAssignments,
+  itemOutcomes,
+  repairGroups,
+  shifts,
+  slots,
+  users,
+} from '../../db/schema/index';
 import { notFound } from '../../http/errors';
 import { eventLayout } from '../triage/benches';
 
@@ -12,9 +24,23 @@ import { eventLayout } from '../triage/benches';
 async function hallItems(ctx: AppContext, eventId: number) {
   return ctx.database.db
     .select({
-      id: bookingItems.id, status: bookingItems.status, queueNumber: bookingItems.queueNumber, tagCode: bookingItems.tagCode, checkedInAt: bookingItems.checkedInAt, startedAt: bookingItems.startedAt, doneAt: bookingItems.doneAt,
-      walkIn: bookings.walkIn, visitorName: bookings.visitorName, slotStartsAt: slots.startsAt, categoryName: categories.name, minutes: categories.repairMinutes, brand: bookingItems.brand, model: bookingItems.model,
-      fixerId: itemAssignments.userId, benchId: itemAssignments.benchId, outcome: itemOutcomes.outcome,
+      id: bookingItems.id,
+      status: bookingItems.status,
+      queueNumber: bookingItems.queueNumber,
+      tagCode: bookingItems.tagCode,
+      checkedInAt: bookingItems.checkedInAt,
+      startedAt: bookingItems.startedAt,
+      doneAt: bookingItems.doneAt,
+      walkIn: bookings.walkIn,
+      visitorName: bookings.visitorName,
+      slotStartsAt: slots.startsAt,
+      categoryName: categories.name,
+      minutes: categories.repairMinutes,
+      brand: bookingItems.brand,
+      model: bookingItems.model,
+      fixerId: itemAssignments.userId,
+      benchId: itemAssignments.benchId,
+      outcome: itemOutcomes.outcome,
     })
     .from(bookingItems)
     .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
@@ -40,13 +66,33 @@ function fixersNow(ctx: AppContext, eventId: number, now: Date) {
 
 function waitsFor(items: HallItem[], fixers: { userId: number }[], now: number) {
   const busy = new Map<number, number>();
-  for (const i of items) if (i.status === 'at-bench' && i.fixerId) busy.set(i.fixerId, Math.max(busy.get(i.fixerId) ?? 0, (i.startedAt?.getTime() ?? now) + i.minutes * 60_000));
-  const queued = items.filter(isQueued).map((i) => ({ id: i.id, slotStartsAt: i.slotStartsAt.getTime(), walkIn: Boolean(i.walkIn), checkedInAt: i.checkedInAt!.getTime(), fixerId: i.fixerId, minutes: i.minutes }));
-  return { order: queueOrder(queued), waits: estimateWaits(now, fixers.map((f) => ({ id: f.userId, busyUntil: busy.get(f.userId) ?? now })), queued) };
+  for (const i of items)
+    if (i.status === 'at-bench' && i.fixerId)
+      busy.set(i.fixerId, Math.max(busy.get(i.fixerId) ?? 0, (i.startedAt?.getTime() ?? now) + i.minutes * 60_000));
+  const queued = items.filter(isQueued).map((i) => ({
+    id: i.id,
+    slotStartsAt: i.slotStartsAt.getTime(),
+    walkIn: Boolean(i.walkIn),
+    checkedInAt: i.checkedInAt!.getTime(),
+    fixerId: i.fixerId,
+    minutes: i.minutes,
+  }));
+  return {
+    order: queueOrder(queued),
+    waits: estimateWaits(
+      now,
+      fixers.map((f) => ({ id: f.userId, busyUntil: busy.get(f.userId) ?? now })),
+      queued,
+    ),
+  };
 }
 
 async function eventHeader(ctx: AppContext, eventId: number, publicOnly: boolean) {
-  const [e] = await ctx.database.db.select({ event: events, group: repairGroups }).from(events).innerJoin(repairGroups, eq(repairGroups.id, events.groupId)).where(eq(events.id, eventId));
+  const [e] = await ctx.database.db
+    .select({ event: events, group: repairGroups })
+    .from(events)
+    .innerJoin(repairGroups, eq(repairGroups.id, events.groupId))
+    .where(eq(events.id, eventId));
   if (!e || (publicOnly && !['published', 'closed'].includes(e.event.status))) throw notFound('That event');
   return e;
 }
@@ -55,13 +101,27 @@ async function eventHeader(ctx: AppContext, eventId: number, publicOnly: boolean
 export async function hallQueue(ctx: AppContext, eventId: number) {
   const e = await eventHeader(ctx, eventId, true);
   const now = new Date();
-  const [items, fixers, benches] = await Promise.all([hallItems(ctx, eventId), fixersNow(ctx, eventId, now), eventLayout(ctx, eventId)]);
+  const [items, fixers, benches] = await Promise.all([
+    hallItems(ctx, eventId),
+    fixersNow(ctx, eventId, now),
+    eventLayout(ctx, eventId),
+  ]);
   const benchName = new Map(benches.map((b) => [b.id, b.name]));
   const { order, waits } = waitsFor(items, fixers, now.getTime());
   const byId = new Map(items.map((i) => [i.id, i]));
   return {
-    event: { id: e.event.id, title: e.event.title, groupName: e.group.name, timeZone: e.group.timeZone, startsAt: e.event.startsAt, endsAt: e.event.endsAt },
-    serving: items.filter((i) => i.status === 'at-bench').sort((a, b) => (a.startedAt?.getTime() ?? 0) - (b.startedAt?.getTime() ?? 0)).map((i) => ({ queueNumber: i.queueNumber, benchName: i.benchId ? (benchName.get(i.benchId) ?? null) : null })),
+    event: {
+      id: e.event.id,
+      title: e.event.title,
+      groupName: e.group.name,
+      timeZone: e.group.timeZone,
+      startsAt: e.event.startsAt,
+      endsAt: e.event.endsAt,
+    },
+    serving: items
+      .filter((i) => i.status === 'at-bench')
+      .sort((a, b) => (a.startedAt?.getTime() ?? 0) - (b.startedAt?.getTime() ?? 0))
+      .map((i) => ({ queueNumber: i.queueNumber, benchName: i.benchId ? (benchName.get(i.benchId) ?? null) : null })),
     waiting: order.map((q) => ({ queueNumber: byId.get(q.id)!.queueNumber, waitMinutes: waits.get(q.id) ?? null })),
     done: items.filter((i) => i.status === 'done').length,
     fixersOnHand: fixers.length,
@@ -73,31 +133,76 @@ export async function hallQueue(ctx: AppContext, eventId: number) {
 export async function liveView(ctx: AppContext, eventId: number) {
   const e = await eventHeader(ctx, eventId, false);
   const now = new Date();
-  const [items, fixers, benches] = await Promise.all([hallItems(ctx, eventId), fixersNow(ctx, eventId, now), eventLayout(ctx, eventId)]);
-  const allBooked = await ctx.database.db.select({ status: bookingItems.status }).from(bookingItems).innerJoin(bookings, eq(bookings.id, bookingItems.bookingId)).where(and(eq(bookings.eventId, eventId), eq(bookings.status, 'confirmed')));
-  const counts = Object.fromEntries(Object.keys(ITEM_STATUS_LABELS).map((s) => [s, allBooked.filter((b) => b.status === s).length]));
+  const [items, fixers, benches] = await Promise.all([
+    hallItems(ctx, eventId),
+    fixersNow(ctx, eventId, now),
+    eventLayout(ctx, eventId),
+  ]);
+  const allBooked = await ctx.database.db
+    .select({ status: bookingItems.status })
+    .from(bookingItems)
+    .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
+    .where(and(eq(bookings.eventId, eventId), eq(bookings.status, 'confirmed')));
+  const counts = Object.fromEntries(
+    Object.keys(ITEM_STATUS_LABELS).map((s) => [s, allBooked.filter((b) => b.status === s).length]),
+  );
   const { waits, order } = waitsFor(items, fixers, now.getTime());
   const rank = new Map(order.map((q, i) => [q.id, i]));
-  const names = new Map((await ctx.database.db.select({ id: users.id, name: users.name }).from(users).where(inArray(users.id, [0, ...new Set(items.map((i) => i.fixerId).filter((x): x is number => x !== null))]))).map((u) => [u.id, u.name]));
+  const names = new Map(
+    (
+      await ctx.database.db
+        .select({ id: users.id, name: users.name })
+        .from(users)
+        .where(inArray(users.id, [0, ...new Set(items.map((i) => i.fixerId).filter((x): x is number => x !== null))]))
+    ).map((u) => [u.id, u.name]),
+  );
   const card = (i: HallItem) => ({
-    id: i.id, queueNumber: i.queueNumber, tagCode: i.tagCode, label: [i.categoryName, [i.brand, i.model].filter(Boolean).join(' ')].filter(Boolean).join(' — '), visitor: shortName(i.visitorName), status: i.status,
-    fixerName: i.fixerId ? (names.get(i.fixerId) ?? null) : null, checkedInAt: i.checkedInAt, startedAt: i.startedAt, doneAt: i.doneAt, outcomeLabel: i.outcome ? OUTCOME_LABELS[i.outcome] : null,
-    waitedMinutes: i.checkedInAt ? Math.floor((now.getTime() - i.checkedInAt.getTime()) / 60_000) : null, estimatedWaitMinutes: waits.get(i.id) ?? null,
+    id: i.id,
+    queueNumber: i.queueNumber,
+    tagCode: i.tagCode,
+    label: [i.categoryName, [i.brand, i.model].filter(Boolean).join(' ')].filter(Boolean).join(' — '),
+    visitor: shortName(i.visitorName),
+    status: i.status,
+    fixerName: i.fixerId ? (names.get(i.fixerId) ?? null) : null,
+    checkedInAt: i.checkedInAt,
+    startedAt: i.startedAt,
+    doneAt: i.doneAt,
+    outcomeLabel: i.outcome ? OUTCOME_LABELS[i.outcome] : null,
+    waitedMinutes: i.checkedInAt ? Math.floor((now.getTime() - i.checkedInAt.getTime()) / 60_000) : null,
+    estimatedWaitMinutes: waits.get(i.id) ?? null,
   });
   const queued = items.filter(isQueued).sort((a, b) => (rank.get(a.id) ?? 0) - (rank.get(b.id) ?? 0));
   const busyFixers = new Set(items.filter((i) => i.status === 'at-bench').map((i) => i.fixerId));
   return {
-    event: { id: e.event.id, title: e.event.title, status: e.event.status, startsAt: e.event.startsAt, endsAt: e.event.endsAt, groupId: e.group.id, groupName: e.group.name, timeZone: e.group.timeZone },
+    event: {
+      id: e.event.id,
+      title: e.event.title,
+      status: e.event.status,
+      startsAt: e.event.startsAt,
+      endsAt: e.event.endsAt,
+      groupId: e.group.id,
+      groupName: e.group.name,
+      timeZone: e.group.timeZone,
+    },
     counts,
     benches: benches.map((b) => ({
-      id: b.id, name: b.name,
+      id: b.id,
+      name: b.name,
       atBench: items.filter((i) => i.benchId === b.id && i.status === 'at-bench').map(card),
       waiting: queued.filter((i) => i.benchId === b.id).map(card),
       done: items.filter((i) => i.benchId === b.id && i.status === 'done').map(card),
     })),
     unplaced: queued.filter((i) => !i.benchId).map(card),
     fixers: fixers.map((f) => ({ userId: f.userId, name: f.name, busy: busyFixers.has(f.userId) })),
-    warnings: liveWarnings(now.getTime(), queued.map((i) => ({ id: i.id, checkedInAt: i.checkedInAt!.getTime(), label: `No. ${i.queueNumber} (${i.categoryName})` })), fixers.map((f) => ({ userId: f.userId, name: f.name, busy: busyFixers.has(f.userId) }))),
+    warnings: liveWarnings(
+      now.getTime(),
+      queued.map((i) => ({
+        id: i.id,
+        checkedInAt: i.checkedInAt!.getTime(),
+        label: `No. ${i.queueNumber} (${i.categoryName})`,
+      })),
+      fixers.map((f) => ({ userId: f.userId, name: f.name, busy: busyFixers.has(f.userId) })),
+    ),
     updatedAt: now,
   };
 }
@@ -105,7 +210,19 @@ export async function liveView(ctx: AppContext, eventId: number) {
 /** What anyone scanning a tag sees: the item's kind, status and queue number — no names, no fault text. */
 export async function publicTag(ctx: AppContext, code: string) {
   const [r] = await ctx.database.db
-    .select({ id: bookingItems.id, status: bookingItems.status, queueNumber: bookingItems.queueNumber, tagCode: bookingItems.tagCode, categoryName: categories.name, eventId: events.id, eventTitle: events.title, eventStatus: events.status, groupId: repairGroups.id, groupName: repairGroups.name, outcome: itemOutcomes.outcome })
+    .select({
+      id: bookingItems.id,
+      status: bookingItems.status,
+      queueNumber: bookingItems.queueNumber,
+      tagCode: bookingItems.tagCode,
+      categoryName: categories.name,
+      eventId: events.id,
+      eventTitle: events.title,
+      eventStatus: events.status,
+      groupId: repairGroups.id,
+      groupName: repairGroups.name,
+      outcome: itemOutcomes.outcome,
+    })
     .from(bookingItems)
     .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
     .innerJoin(events, eq(events.id, bookings.eventId))
@@ -120,27 +237,70 @@ export async function publicTag(ctx: AppContext, code: string) {
     const [items, fixers] = await Promise.all([hallItems(ctx, r.eventId), fixersNow(ctx, r.eventId, now)]);
     waitMinutes = waitsFor(items, fixers, now.getTime()).waits.get(r.id) ?? null;
   }
-  return { tagCode: r.tagCode, itemId: r.id, groupId: r.groupId, groupName: r.groupName, eventId: r.eventId, eventTitle: r.eventTitle, categoryName: r.categoryName, status: r.status, statusLabel: ITEM_STATUS_LABELS[r.status], queueNumber: r.queueNumber, outcomeLabel: r.outcome ? OUTCOME_LABELS[r.outcome] : null, waitMinutes };
+  return {
+    tagCode: r.tagCode,
+    itemId: r.id,
+    groupId: r.groupId,
+    groupName: r.groupName,
+    eventId: r.eventId,
+    eventTitle: r.eventTitle,
+    categoryName: r.categoryName,
+    status: r.status,
+    statusLabel: ITEM_STATUS_LABELS[r.status],
+    queueNumber: r.queueNumber,
+    outcomeLabel: r.outcome ? OUTCOME_LABELS[r.outcome] : null,
+    waitMinutes,
+  };
 }
 
 /** Printable tags: one item, the items of a slot, or every checked-in item of the event. */
 export async function tags(ctx: AppContext, eventId: number, filter: { slotId?: number; itemIds?: number[] }) {
   const e = await eventHeader(ctx, eventId, false);
   const rows = await ctx.database.db
-    .select({ id: bookingItems.id, tagCode: bookingItems.tagCode, queueNumber: bookingItems.queueNumber, categoryName: categories.name, mains: bookingItems.mains, visitorName: bookings.visitorName, slotId: bookings.slotId, slotStartsAt: slots.startsAt, benchName: eventBenches.name })
+    .select({
+      id: bookingItems.id,
+      tagCode: bookingItems.tagCode,
+      queueNumber: bookingItems.queueNumber,
+      categoryName: categories.name,
+      mains: bookingItems.mains,
+      visitorName: bookings.visitorName,
+      slotId: bookings.slotId,
+      slotStartsAt: slots.startsAt,
+      benchName: eventBenches.name,
+    })
     .from(bookingItems)
     .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
     .innerJoin(slots, eq(slots.id, bookings.slotId))
     .innerJoin(categories, eq(categories.id, bookingItems.categoryId))
     .leftJoin(itemAssignments, eq(itemAssignments.itemId, bookingItems.id))
     .leftJoin(eventBenches, eq(eventBenches.id, itemAssignments.benchId))
-    .where(and(eq(bookings.eventId, eventId), isNotNull(bookingItems.tagCode), ...(filter.slotId ? [eq(bookings.slotId, filter.slotId)] : []), ...(filter.itemIds?.length ? [inArray(bookingItems.id, filter.itemIds)] : [])))
+    .where(
+      and(
+        eq(bookings.eventId, eventId),
+        isNotNull(bookingItems.tagCode),
+        ...(filter.slotId ? [eq(bookings.slotId, filter.slotId)] : []),
+        ...(filter.itemIds?.length ? [inArray(bookingItems.id, filter.itemIds)] : []),
+      ),
+    )
     .orderBy(asc(bookingItems.queueNumber));
   return {
     event: { id: e.event.id, title: e.event.title, groupName: e.group.name, timeZone: e.group.timeZone },
-    tags: await Promise.all(rows.map(async (r) => {
-      const url = tagUrl(ctx.env.publicUrl, r.tagCode!);
-      return { itemId: r.id, tagCode: r.tagCode!, url, qrSvg: await QRCode.toString(url, { type: 'svg', margin: 0, errorCorrectionLevel: 'M' }), queueNumber: r.queueNumber, categoryName: r.categoryName, mains: Boolean(r.mains), visitor: shortName(r.visitorName), slotStartsAt: r.slotStartsAt, benchName: r.benchName };
-    })),
+    tags: await Promise.all(
+      rows.map(async (r) => {
+        const url = tagUrl(ctx.env.publicUrl, r.tagCode!);
+        return {
+          itemId: r.id,
+          tagCode: r.tagCode!,
+          url,
+          qrSvg: await QRCode.toString(url, { type: 'svg', margin: 0, errorCorrectionLevel: 'M' }),
+          queueNumber: r.queueNumber,
+          categoryName: r.categoryName,
+          mains: Boolean(r.mains),
+          visitor: shortName(r.visitorName),
+          slotStartsAt: r.slotStartsAt,
+          benchName: r.benchName,
+        };
+      }),
+    ),
   };
 }

@@ -1,13 +1,32 @@
 import { randomBytes } from 'node:crypto';
 import { asc, desc, eq, inArray } from 'drizzle-orm';
-import { ITEM_STATUS_LABELS, OUTCOME_LABELS, BARRIER_LABELS, type ItemStatus } from '../../../../shared/event-day/constants';
+import {
+  ITEM_STATUS_LABELS,
+  OUTCOME_LABELS,
+  BARRIER_LABELS,
+  type ItemStatus,
+} from '../../../../shared/event-day/constants';
 import { formatTagCode, shortName } from '../../../../shared/event-day/tag-code';
 import { cautionsFor, HEATING_CATEGORY_SLUGS, LOCAL_RULES_PREVAIL } from '../../../../shared/safety/cautions';
 import { SAFETY_SOURCE } from '../../../../shared/safety/limits';
 import type { SessionUser } from '../../../../shared/schemas/auth';
 import type { AppContext } from '../../context';
 import type { DbOrTx, Tx } from '../../db/client';
-import { bookingItems, bookings, categories, eventBenches, events, itemAssignments, itemOutcomes, itemPhotos, itemStatusChanges, repairGroups, safetyChecks, slots, users } from '../../db/schema/index';
+import {
+  bookingItems,
+  bookings,
+  categories,
+  eventBenches,
+  events,
+  itemAssignments,
+  itemOutcomes,
+  itemPhotos,
+  itemStatusChanges,
+  repairGroups,
+  safetyChecks,
+  slots,
+  users,
+} from '../../db/schema/index';
 import { hasGroupRole } from '../../auth/guards';
 import { notFound } from '../../http/errors';
 import { partsUsed } from '../toolkit/salvage';
@@ -15,7 +34,14 @@ import { partsUsed } from '../toolkit/salvage';
 /** One item with its booking, slot, event, group and category. */
 export function itemWithContext(db: DbOrTx) {
   return db
-    .select({ item: bookingItems, booking: bookings, slot: slots, event: events, group: repairGroups, category: categories })
+    .select({
+      item: bookingItems,
+      booking: bookings,
+      slot: slots,
+      event: events,
+      group: repairGroups,
+      category: categories,
+    })
     .from(bookingItems)
     .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
     .innerJoin(slots, eq(slots.id, bookings.slotId))
@@ -35,23 +61,53 @@ export type ItemRow = Awaited<ReturnType<typeof loadItem>>;
 /** The group of an item, for the role guards (0 when there is no such item, which the guards refuse). */
 export async function itemGroupId(db: DbOrTx, itemId: number): Promise<number> {
   if (!Number.isInteger(itemId) || itemId <= 0) return 0;
-  const [r] = await db.select({ groupId: events.groupId }).from(bookingItems).innerJoin(bookings, eq(bookings.id, bookingItems.bookingId)).innerJoin(events, eq(events.id, bookings.eventId)).where(eq(bookingItems.id, itemId));
+  const [r] = await db
+    .select({ groupId: events.groupId })
+    .from(bookingItems)
+    .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
+    .innerJoin(events, eq(events.id, bookings.eventId))
+    .where(eq(bookingItems.id, itemId));
   return r?.groupId ?? 0;
 }
 
 /** Moves items to a status, writing one history row each with the time and who did it. */
-export async function setStatus(tx: Tx, changes: { itemId: number; from: ItemStatus | null; to: ItemStatus; extra?: Partial<typeof bookingItems.$inferInsert> }[], byUserId: number | null, note?: string) {
+export async function setStatus(
+  tx: Tx,
+  changes: {
+    itemId: number;
+    from: ItemStatus | null;
+    to: ItemStatus;
+    extra?: Partial<typeof bookingItems.$inferInsert>;
+  }[],
+  byUserId: number | null,
+  note?: string,
+) {
   for (const c of changes) {
-    await tx.update(bookingItems).set({ status: c.to, ...c.extra }).where(eq(bookingItems.id, c.itemId));
+    await tx
+      .update(bookingItems)
+      .set({ status: c.to, ...c.extra })
+      .where(eq(bookingItems.id, c.itemId));
   }
-  if (changes.length) await tx.insert(itemStatusChanges).values(changes.map((c) => ({ itemId: c.itemId, fromStatus: c.from, toStatus: c.to, byUserId, note: note ?? null })));
+  if (changes.length)
+    await tx
+      .insert(itemStatusChanges)
+      .values(
+        changes.map((c) => ({ itemId: c.itemId, fromStatus: c.from, toStatus: c.to, byUserId, note: note ?? null })),
+      );
 }
 
 /** Takes the event's next queue number under its row lock (the caller's transaction holds it until commit). */
 export async function nextQueueNumbers(tx: Tx, eventId: number, n: number): Promise<number[]> {
   if (n === 0) return [];
-  const [e] = await tx.select({ counter: events.queueCounter }).from(events).where(eq(events.id, eventId)).for('update');
-  await tx.update(events).set({ queueCounter: e.counter + n }).where(eq(events.id, eventId));
+  const [e] = await tx
+    .select({ counter: events.queueCounter })
+    .from(events)
+    .where(eq(events.id, eventId))
+    .for('update');
+  await tx
+    .update(events)
+    .set({ queueCounter: e.counter + n })
+    .where(eq(events.id, eventId));
   return Array.from({ length: n }, (_, i) => e.counter + 1 + i);
 }
 
@@ -60,13 +116,17 @@ export async function newTagCodes(tx: Tx, n: number): Promise<string[]> {
   for (let attempt = 0; attempt < 5; attempt++) {
     const codes = [...new Set(Array.from({ length: n }, () => formatTagCode(randomBytes(5))))];
     if (codes.length < n) continue;
-    const taken = await tx.select({ code: bookingItems.tagCode }).from(bookingItems).where(inArray(bookingItems.tagCode, codes));
+    const taken = await tx
+      .select({ code: bookingItems.tagCode })
+      .from(bookingItems)
+      .where(inArray(bookingItems.tagCode, codes));
     if (taken.length === 0) return codes;
   }
   throw new Error('Could not find free tag codes.');
 }
 
-export const itemLabel = (r: { categoryName: string; brand: string | null; model: string | null }) => [r.categoryName, [r.brand, r.model].filter(Boolean).join(' ')].filter(Boolean).join(' — ');
+export const itemLabel = (r: { categoryName: string; brand: string | null; model: string | null }) =>
+  [r.categoryName, [r.brand, r.model].filter(Boolean).join(' ')].filter(Boolean).join(' — ');
 
 export const isHeating = (slug: string) => (HEATING_CATEGORY_SLUGS as readonly string[]).includes(slug);
 
@@ -75,15 +135,38 @@ export async function itemView(ctx: AppContext, itemId: number, user: SessionUse
   const { db } = ctx.database;
   const row = await loadItem(db, itemId);
   const [placement] = await db
-    .select({ userId: itemAssignments.userId, benchId: itemAssignments.benchId, fixerName: users.name, benchName: eventBenches.name, startsAt: itemAssignments.startsAt })
+    .select({
+      userId: itemAssignments.userId,
+      benchId: itemAssignments.benchId,
+      fixerName: users.name,
+      benchName: eventBenches.name,
+      startsAt: itemAssignments.startsAt,
+    })
     .from(itemAssignments)
     .innerJoin(users, eq(users.id, itemAssignments.userId))
     .innerJoin(eventBenches, eq(eventBenches.id, itemAssignments.benchId))
     .where(eq(itemAssignments.itemId, itemId));
-  const [outcome] = await db.select({ o: itemOutcomes, byName: users.name }).from(itemOutcomes).leftJoin(users, eq(users.id, itemOutcomes.recordedBy)).where(eq(itemOutcomes.itemId, itemId));
-  const checks = await db.select({ c: safetyChecks, byName: users.name }).from(safetyChecks).leftJoin(users, eq(users.id, safetyChecks.checkedBy)).where(eq(safetyChecks.itemId, itemId)).orderBy(desc(safetyChecks.id));
-  const history = await db.select({ h: itemStatusChanges, byName: users.name }).from(itemStatusChanges).leftJoin(users, eq(users.id, itemStatusChanges.byUserId)).where(eq(itemStatusChanges.itemId, itemId)).orderBy(asc(itemStatusChanges.id));
-  const photos = await db.select({ id: itemPhotos.id, kind: itemPhotos.kind, width: itemPhotos.width, height: itemPhotos.height }).from(itemPhotos).where(eq(itemPhotos.itemId, itemId));
+  const [outcome] = await db
+    .select({ o: itemOutcomes, byName: users.name })
+    .from(itemOutcomes)
+    .leftJoin(users, eq(users.id, itemOutcomes.recordedBy))
+    .where(eq(itemOutcomes.itemId, itemId));
+  const checks = await db
+    .select({ c: safetyChecks, byName: users.name })
+    .from(safetyChecks)
+    .leftJoin(users, eq(users.id, safetyChecks.checkedBy))
+    .where(eq(safetyChecks.itemId, itemId))
+    .orderBy(desc(safetyChecks.id));
+  const history = await db
+    .select({ h: itemStatusChanges, byName: users.name })
+    .from(itemStatusChanges)
+    .leftJoin(users, eq(users.id, itemStatusChanges.byUserId))
+    .where(eq(itemStatusChanges.itemId, itemId))
+    .orderBy(asc(itemStatusChanges.id));
+  const photos = await db
+    .select({ id: itemPhotos.id, kind: itemPhotos.kind, width: itemPhotos.width, height: itemPhotos.height })
+    .from(itemPhotos)
+    .where(eq(itemPhotos.itemId, itemId));
   const used = await partsUsed(db, itemId);
   const { item, booking, slot, event, group, category } = row;
   const staff = hasGroupRole(user, group.id, ['organiser', 'host']);
@@ -94,19 +177,72 @@ export async function itemView(ctx: AppContext, itemId: number, user: SessionUse
   const open = !['done', 'no-show', 'withdrawn'].includes(item.status);
   const fixerHere = hasGroupRole(user, group.id, ['fixer']);
   return {
-    id: item.id, status: item.status, statusLabel: ITEM_STATUS_LABELS[item.status], tagCode: item.tagCode, queueNumber: item.queueNumber,
-    categoryId: category.id, categoryName: category.name, skill: category.skill, mains, battery: Boolean(item.battery), heating,
-    brand: item.brand, model: item.model, ageYears: item.ageYears, fault: item.fault, weighedKg: item.weighedKg, estimatedMinutes: category.repairMinutes,
-    checkedInAt: item.checkedInAt, startedAt: item.startedAt, doneAt: item.doneAt,
+    id: item.id,
+    status: item.status,
+    statusLabel: ITEM_STATUS_LABELS[item.status],
+    tagCode: item.tagCode,
+    queueNumber: item.queueNumber,
+    categoryId: category.id,
+    categoryName: category.name,
+    skill: category.skill,
+    mains,
+    battery: Boolean(item.battery),
+    heating,
+    brand: item.brand,
+    model: item.model,
+    ageYears: item.ageYears,
+    fault: item.fault,
+    weighedKg: item.weighedKg,
+    estimatedMinutes: category.repairMinutes,
+    checkedInAt: item.checkedInAt,
+    startedAt: item.startedAt,
+    doneAt: item.doneAt,
     photos,
-    booking: { reference: booking.reference, visitorName: staff ? booking.visitorName : shortName(booking.visitorName), visitorPhone: staff ? booking.visitorPhone : null, walkIn: Boolean(booking.walkIn), slotStartsAt: slot.startsAt, slotEndsAt: slot.endsAt },
-    event: { id: event.id, title: event.title, groupId: group.id, groupName: group.name, timeZone: group.timeZone, startsAt: event.startsAt, endsAt: event.endsAt },
+    booking: {
+      reference: booking.reference,
+      visitorName: staff ? booking.visitorName : shortName(booking.visitorName),
+      visitorPhone: staff ? booking.visitorPhone : null,
+      walkIn: Boolean(booking.walkIn),
+      slotStartsAt: slot.startsAt,
+      slotEndsAt: slot.endsAt,
+    },
+    event: {
+      id: event.id,
+      title: event.title,
+      groupId: group.id,
+      groupName: group.name,
+      timeZone: group.timeZone,
+      startsAt: event.startsAt,
+      endsAt: event.endsAt,
+    },
     placement: placement ?? null,
     outcome: outcome
-      ? { ...outcome.o, outcomeLabel: OUTCOME_LABELS[outcome.o.outcome], barrierLabel: outcome.o.barrier ? BARRIER_LABELS[outcome.o.barrier] : null, partCost: outcome.o.partCostCents === null ? null : outcome.o.partCostCents / 100, recordedByName: outcome.byName }
+      ? {
+          ...outcome.o,
+          outcomeLabel: OUTCOME_LABELS[outcome.o.outcome],
+          barrierLabel: outcome.o.barrier ? BARRIER_LABELS[outcome.o.barrier] : null,
+          partCost: outcome.o.partCostCents === null ? null : outcome.o.partCostCents / 100,
+          recordedByName: outcome.byName,
+        }
       : null,
-    safetyChecks: checks.map(({ c, byName }) => ({ id: c.id, pass: Boolean(c.pass), failures: c.failures, applianceClass: c.applianceClass, readings: c.readings, instrument: c.instrument, createdAt: c.createdAt, checkedByName: byName })),
-    history: history.map(({ h, byName }) => ({ from: h.fromStatus, to: h.toStatus, toLabel: ITEM_STATUS_LABELS[h.toStatus], at: h.createdAt, byName, note: h.note })),
+    safetyChecks: checks.map(({ c, byName }) => ({
+      id: c.id,
+      pass: Boolean(c.pass),
+      failures: c.failures,
+      applianceClass: c.applianceClass,
+      readings: c.readings,
+      instrument: c.instrument,
+      createdAt: c.createdAt,
+      checkedByName: byName,
+    })),
+    history: history.map(({ h, byName }) => ({
+      from: h.fromStatus,
+      to: h.toStatus,
+      toLabel: ITEM_STATUS_LABELS[h.toStatus],
+      at: h.createdAt,
+      byName,
+      note: h.note,
+    })),
     partsUsed: used,
     returnOfItemId: item.returnOfItemId,
     cautions: cautionsFor({ mains, battery: Boolean(item.battery), heating }),

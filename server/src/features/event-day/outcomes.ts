@@ -21,56 +21,128 @@ const forbidden = (message: string) => new HttpError(403, 'forbidden', message);
 /** The assigned fixer or an organiser of the group; a fixer of the group may take an item nobody has. */
 export async function assertMayRecord(tx: DbOrTx, row: ItemRow, user: SessionUser) {
   if (hasGroupRole(user, row.group.id, ['organiser'])) return;
-  if (!hasGroupRole(user, row.group.id, ['fixer'])) throw forbidden('Only the fixer working on this item or an organiser can record this.');
-  const [a] = await tx.select({ userId: itemAssignments.userId }).from(itemAssignments).where(eq(itemAssignments.itemId, row.item.id));
-  if (a && a.userId !== user.id) throw forbidden('This item is with another fixer. Ask an organiser to move it to you first.');
+  if (!hasGroupRole(user, row.group.id, ['fixer']))
+    throw forbidden('Only the fixer working on this item or an organiser can record this.');
+  const [a] = await tx
+    .select({ userId: itemAssignments.userId })
+    .from(itemAssignments)
+    .where(eq(itemAssignments.itemId, row.item.id));
+  if (a && a.userId !== user.id)
+    throw forbidden('This item is with another fixer. Ask an organiser to move it to you first.');
 }
 
 /** A fixer starts on an item: it becomes theirs (locked, so a re-plan leaves it), at their bench or a suitable one. */
 export async function startRepair(ctx: AppContext, itemId: number, user: SessionUser) {
-  await withDeadlockRetry(() => ctx.database.db.transaction(async (tx) => {
-    const row = await loadItem(tx, itemId, { lock: true });
-    if (!hasGroupRole(user, row.group.id, ['fixer', 'organiser'])) throw forbidden('Only the group’s fixers and organisers can start a repair.');
-    if (row.item.status === 'at-bench') return;
-    if (!canMove(row.item.status, 'at-bench')) throw new HttpError(409, 'bad-transition', row.item.status === 'booked' ? 'Check the item in at reception first.' : `This item is ${row.item.status}; it cannot go to a bench now.`);
-    const [a] = await tx.select().from(itemAssignments).where(eq(itemAssignments.itemId, itemId));
-    const fixerId = a && hasGroupRole(user, row.group.id, ['organiser']) && !hasGroupRole(user, row.group.id, ['fixer']) ? a.userId : user.id;
-    let benchId = a?.userId === fixerId ? a.benchId : undefined;
-    if (benchId === undefined) {
-      const [shift] = await tx.select({ benchId: shifts.benchId }).from(shifts).where(and(eq(shifts.eventId, row.event.id), eq(shifts.userId, fixerId)));
-      const benches = await eventLayout(ctx, row.event.id);
-      benchId = shift?.benchId ?? benches.find((b) => row.category.equipment.every((q) => b.equipment.includes(q)))?.id ?? benches[0]?.id ?? a?.benchId;
-    }
-    if (benchId !== undefined) {
-      await tx.insert(itemAssignments).values({ itemId, eventId: row.event.id, userId: fixerId, benchId, startsAt: new Date(), locked: true, source: 'hand' })
-        .onDuplicateKeyUpdate({ set: { userId: fixerId, benchId, startsAt: new Date(), locked: true, source: 'hand', runId: null, updatedAt: new Date() } });
-    }
-    await setStatus(tx, [{ itemId, from: row.item.status, to: 'at-bench', extra: { startedAt: new Date() } }], user.id);
-  }));
+  await withDeadlockRetry(() =>
+    ctx.database.db.transaction(async (tx) => {
+      const row = await loadItem(tx, itemId, { lock: true });
+      if (!hasGroupRole(user, row.group.id, ['fixer', 'organiser']))
+        throw forbidden('Only the group’s fixers and organisers can start a repair.');
+      if (row.item.status === 'at-bench') return;
+      if (!canMove(row.item.status, 'at-bench'))
+        throw new HttpError(
+          409,
+          'bad-transition',
+          row.item.status === 'booked'
+            ? 'Check the item in at reception first.'
+            : `This item is ${row.item.status}; it cannot go to a bench now.`,
+        );
+      const [a] = await tx.select().from(itemAssignments).where(eq(itemAssignments.itemId, itemId));
+      const fixerId =
+        a && hasGroupRole(user, row.group.id, ['organiser']) && !hasGroupRole(user, row.group.id, ['fixer'])
+          ? a.userId
+          : user.id;
+      let benchId = a?.userId === fixerId ? a.benchId : undefined;
+      if (benchId === undefined) {
+        const [shift] = await tx
+          .select({ benchId: shifts.benchId })
+          .from(shifts)
+          .where(and(eq(shifts.eventId, row.event.id), eq(shifts.userId, fixerId)));
+        const benches = await eventLayout(ctx, row.event.id);
+        benchId =
+          shift?.benchId ??
+          benches.find((b) => row.category.equipment.every((q) => b.equipment.includes(q)))?.id ??
+          benches[0]?.id ??
+          a?.benchId;
+      }
+      if (benchId !== undefined) {
+        await tx
+          .insert(itemAssignments)
+          .values({
+            itemId,
+            eventId: row.event.id,
+            userId: fixerId,
+            benchId,
+            startsAt: new Date(),
+            locked: true,
+            source: 'hand',
+          })
+          .onDuplicateKeyUpdate({
+            set: {
+              userId: fixerId,
+              benchId,
+              startsAt: new Date(),
+              locked: true,
+              source: 'hand',
+              runId: null,
+              updatedAt: new Date(),
+            },
+          });
+      }
+      await setStatus(
+        tx,
+        [{ itemId, from: row.item.status, to: 'at-bench', extra: { startedAt: new Date() } }],
+        user.id,
+      );
+    }),
+  );
 }
 
 function verdictOf(row: ItemRow, s: SafetyCheckValues): SafetyVerdict {
   return judgeSafety({
-    visualOk: visualOk(s.visual), applianceClass: s.applianceClass, cordLengthM: s.cordLengthM, protectiveConductorOhm: s.protectiveConductorOhm,
-    insulationMOhm: s.insulationMOhm, heating: s.heating || isHeating(row.category.slug), heatingKw: s.heatingKw, protectiveCurrentMA: s.protectiveCurrentMA, touchCurrentMA: s.touchCurrentMA,
+    visualOk: visualOk(s.visual),
+    applianceClass: s.applianceClass,
+    cordLengthM: s.cordLengthM,
+    protectiveConductorOhm: s.protectiveConductorOhm,
+    insulationMOhm: s.insulationMOhm,
+    heating: s.heating || isHeating(row.category.slug),
+    heatingKw: s.heatingKw,
+    protectiveCurrentMA: s.protectiveCurrentMA,
+    touchCurrentMA: s.touchCurrentMA,
   });
 }
 
 async function insertCheck(tx: Tx, row: ItemRow, s: SafetyCheckValues, user: SessionUser) {
   const v = verdictOf(row, s);
-  const [{ id }] = await tx.insert(safetyChecks).values({ itemId: row.item.id, applianceClass: s.applianceClass, readings: s, instrument: s.instrument ?? null, pass: v.pass, failures: [...v.failures, ...v.missing.map((m) => `Missing: ${m}.`)], checkedBy: user.id }).$returningId();
+  const [{ id }] = await tx
+    .insert(safetyChecks)
+    .values({
+      itemId: row.item.id,
+      applianceClass: s.applianceClass,
+      readings: s,
+      instrument: s.instrument ?? null,
+      pass: v.pass,
+      failures: [...v.failures, ...v.missing.map((m) => `Missing: ${m}.`)],
+      checkedBy: user.id,
+    })
+    .$returningId();
   return { id, ...v };
 }
 
-const suggestion = (v: SafetyVerdict) => (v.pass ? null : 'It cannot go home as fixed. Record it as needing a part, or as end of life, and tell the visitor not to use it.');
+const suggestion = (v: SafetyVerdict) =>
+  v.pass
+    ? null
+    : 'It cannot go home as fixed. Record it as needing a part, or as end of life, and tell the visitor not to use it.';
 
 /** Records an electrical safety check; the verdict comes from the shared limits table, never from the client. */
 export async function recordSafetyCheck(ctx: AppContext, itemId: number, s: SafetyCheckValues, user: SessionUser) {
   return ctx.database.db.transaction(async (tx) => {
     const row = await loadItem(tx, itemId, { lock: true });
     await assertMayRecord(tx, row, user);
-    if (!row.item.mains) throw new HttpError(409, 'not-mains', 'This item does not run on mains; it needs no electrical safety check.');
-    if (['booked', 'no-show', 'withdrawn'].includes(row.item.status)) throw new HttpError(409, 'bad-transition', 'Check the item in before testing it.');
+    if (!row.item.mains)
+      throw new HttpError(409, 'not-mains', 'This item does not run on mains; it needs no electrical safety check.');
+    if (['booked', 'no-show', 'withdrawn'].includes(row.item.status))
+      throw new HttpError(409, 'bad-transition', 'Check the item in before testing it.');
     const v = await insertCheck(tx, row, s, user);
     return { id: v.id, pass: v.pass, failures: v.failures, missing: v.missing, suggestion: suggestion(v) };
   });
@@ -80,43 +152,98 @@ export async function recordSafetyCheck(ctx: AppContext, itemId: number, s: Safe
  * Records what happened. A mains item is recorded fixed only when its latest safety check (sent with the outcome,
  * or recorded before) passed; otherwise 422 with the reasons, and nothing changes but the check itself.
  */
-export async function recordOutcome(ctx: AppContext, itemId: number, input: z.output<typeof outcomeSchema>, user: SessionUser) {
+export async function recordOutcome(
+  ctx: AppContext,
+  itemId: number,
+  input: z.output<typeof outcomeSchema>,
+  user: SessionUser,
+) {
   const { db } = ctx.database;
   // A check sent with the outcome is kept even when the outcome is refused: the readings were taken.
   if (input.safety) {
     const row = await loadItem(db, itemId);
-    if (row.item.mains) await db.transaction(async (tx) => {
-      await assertMayRecord(tx, row, user);
-      await insertCheck(tx, row, input.safety!, user);
-    });
+    if (row.item.mains)
+      await db.transaction(async (tx) => {
+        await assertMayRecord(tx, row, user);
+        await insertCheck(tx, row, input.safety!, user);
+      });
   }
-  const done = await withDeadlockRetry(() => db.transaction(async (tx) => {
-    const row = await loadItem(tx, itemId, { lock: true });
-    await assertMayRecord(tx, row, user);
-    if (['booked', 'no-show', 'withdrawn'].includes(row.item.status)) throw new HttpError(409, 'bad-transition', row.item.status === 'booked' ? 'Check the item in at reception first.' : `This item is marked ${row.item.status}.`);
-    const [latest] = await tx.select().from(safetyChecks).where(eq(safetyChecks.itemId, itemId)).orderBy(desc(safetyChecks.id)).limit(1);
-    if (input.outcome === 'fixed' && row.item.mains) {
-      if (!latest) throw new HttpError(422, 'safety-check-required', 'A mains item needs a passing electrical safety check before it can be recorded as fixed.', { safety: 'Record the safety check first.' });
-      if (!latest.pass) throw new HttpError(422, 'safety-check-failed', `The latest safety check failed: ${latest.failures.join(' ')} It cannot go home as fixed; record it as needing a part or end of life, or repair it and check again.`, { safety: latest.failures.join(' ') });
-    }
-    const values = {
-      outcome: input.outcome, barrier: input.barrier ?? null,
-      partDescription: input.part?.description ?? null, partLink: input.part?.link ?? null, partCostCents: input.part?.cost === undefined ? null : Math.round(input.part.cost * 100),
-      minutes: input.minutes ?? null, notes: input.notes ?? null, safetyCheckId: latest?.id ?? null, recordedBy: user.id, recordedAt: new Date(),
-    };
-    await tx.insert(itemOutcomes).values({ itemId, ...values }).onDuplicateKeyUpdate({ set: values });
-    const [a] = await tx.select().from(itemAssignments).where(eq(itemAssignments.itemId, itemId));
-    if (!a && hasGroupRole(user, row.group.id, ['fixer'])) {
-      const benches = await eventLayout(ctx, row.event.id);
-      if (benches[0]) await tx.insert(itemAssignments).values({ itemId, eventId: row.event.id, userId: user.id, benchId: benches[0].id, startsAt: row.item.startedAt ?? new Date(), locked: true, source: 'hand' });
-    }
-    await setStatus(tx, [{ itemId, from: row.item.status, to: 'done', extra: { doneAt: new Date() } }], user.id, `outcome: ${input.outcome}`);
-    await refreshCells(tx, [itemId]);
-    await afterOutcome(ctx, tx, row, input.outcome);
-    await syncKnowledge(tx, row, input.outcome, input.notes);
-    return { ok: true };
-  }));
+  const done = await withDeadlockRetry(() =>
+    db.transaction(async (tx) => {
+      const row = await loadItem(tx, itemId, { lock: true });
+      await assertMayRecord(tx, row, user);
+      if (['booked', 'no-show', 'withdrawn'].includes(row.item.status))
+        throw new HttpError(
+          409,
+          'bad-transition',
+          row.item.status === 'booked'
+            ? 'Check the item in at reception first.'
+            : `This item is marked ${row.item.status}.`,
+        );
+      const [latest] = await tx
+        .select()
+        .from(safetyChecks)
+        .where(eq(safetyChecks.itemId, itemId))
+        .orderBy(desc(safetyChecks.id))
+        .limit(1);
+      if (input.outcome === 'fixed' && row.item.mains) {
+        if (!latest)
+          throw new HttpError(
+            422,
+            'safety-check-required',
+            'A mains item needs a passing electrical safety check before it can be recorded as fixed.',
+            { safety: 'Record the safety check first.' },
+          );
+        if (!latest.pass)
+          throw new HttpError(
+            422,
+            'safety-check-failed',
+            `The latest safety check failed: ${latest.failures.join(' ')} It cannot go home as fixed; record it as needing a part or end of life, or repair it and check again.`,
+            { safety: latest.failures.join(' ') },
+          );
+      }
+      const values = {
+        outcome: input.outcome,
+        barrier: input.barrier ?? null,
+        partDescription: input.part?.description ?? null,
+        partLink: input.part?.link ?? null,
+        partCostCents: input.part?.cost === undefined ? null : Math.round(input.part.cost * 100),
+        minutes: input.minutes ?? null,
+        notes: input.notes ?? null,
+        safetyCheckId: latest?.id ?? null,
+        recordedBy: user.id,
+        recordedAt: new Date(),
+      };
+      await tx
+        .insert(itemOutcomes)
+        .values({ itemId, ...values })
+        .onDuplicateKeyUpdate({ set: values });
+      const [a] = await tx.select().from(itemAssignments).where(eq(itemAssignments.itemId, itemId));
+      if (!a && hasGroupRole(user, row.group.id, ['fixer'])) {
+        const benches = await eventLayout(ctx, row.event.id);
+        if (benches[0])
+          await tx.insert(itemAssignments).values({
+            itemId,
+            eventId: row.event.id,
+            userId: user.id,
+            benchId: benches[0].id,
+            startsAt: row.item.startedAt ?? new Date(),
+            locked: true,
+            source: 'hand',
+          });
+      }
+      await setStatus(
+        tx,
+        [{ itemId, from: row.item.status, to: 'done', extra: { doneAt: new Date() } }],
+        user.id,
+        `outcome: ${input.outcome}`,
+      );
+      await refreshCells(tx, [itemId]);
+      await afterOutcome(ctx, tx, row, input.outcome);
+      await syncKnowledge(tx, row, input.outcome, input.notes);
+      return { ok: true };
+    }),
+  );
   ctx.outbox.kick();
   return done;
 }
-

@@ -19,7 +19,11 @@ import { assertMayRecord, recordOutcome, recordSafetyCheck, startRepair } from '
 const idParam = z.object({ id: z.coerce.number().int().positive() });
 const tagsQuery = z.object({
   slotId: z.coerce.number().int().positive().optional(),
-  items: z.string().regex(/^\d+(,\d+)*$/, 'List item ids separated by commas.').optional().transform((v) => v?.split(',').map(Number)),
+  items: z
+    .string()
+    .regex(/^\d+(,\d+)*$/, 'List item ids separated by commas.')
+    .optional()
+    .transform((v) => v?.split(',').map(Number)),
 });
 
 /** Read without a session: the hall's TV and a scanned tag show queue numbers and status, never a name. */
@@ -43,11 +47,17 @@ export function eventDayRoutes(ctx: AppContext) {
   const r = Router();
   const { db } = ctx.database;
   const eventStaff = requireGroupRole(['organiser', 'host'], (req: Request) => eventGroupId(db, Number(req.params.id)));
-  const itemStaff = requireGroupRole(['organiser', 'host', 'fixer'], (req: Request) => itemGroupId(db, Number(req.params.id)));
+  const itemStaff = requireGroupRole(['organiser', 'host', 'fixer'], (req: Request) =>
+    itemGroupId(db, Number(req.params.id)),
+  );
   const bookingGroup = async (req: Request) => {
     const ref = normaliseReference(String(req.params.reference ?? ''));
     if (!ref) return 0;
-    const [b] = await db.select({ groupId: events.groupId }).from(bookings).innerJoin(events, eq(events.id, bookings.eventId)).where(eq(bookings.reference, ref));
+    const [b] = await db
+      .select({ groupId: events.groupId })
+      .from(bookings)
+      .innerJoin(events, eq(events.id, bookings.eventId))
+      .where(eq(bookings.reference, ref));
     return b?.groupId ?? 0;
   };
 
@@ -79,7 +89,9 @@ export function eventDayRoutes(ctx: AppContext) {
     res.json(await itemView(ctx, id, req.user!));
   });
   r.post('/items/:id/safety-checks', itemStaff, async (req, res) => {
-    res.status(201).json(await recordSafetyCheck(ctx, params(req, idParam).id, body(req, safetyCheckSchema), req.user!));
+    res
+      .status(201)
+      .json(await recordSafetyCheck(ctx, params(req, idParam).id, body(req, safetyCheckSchema), req.user!));
   });
   r.post(
     '/items/:id/photos',
@@ -93,7 +105,9 @@ export function eventDayRoutes(ctx: AppContext) {
     (req: Request, res: Response, next: NextFunction) => photoUpload(req, res, (err) => next(multerError(err) ?? err)),
     async (req, res) => {
       const row = await loadItem(db, params(req, idParam).id);
-      res.status(201).json(await savePhotos(ctx, row.booking.id, row.item.id, (req.files as Express.Multer.File[]) ?? [], 'repair'));
+      res
+        .status(201)
+        .json(await savePhotos(ctx, row.booking.id, row.item.id, (req.files as Express.Multer.File[]) ?? [], 'repair'));
     },
   );
   r.post('/items/:id/outcome', itemStaff, async (req, res) => {

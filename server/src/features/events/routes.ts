@@ -1,6 +1,11 @@
 import { Router, type Request } from 'express';
 import { z } from 'zod';
-import { createEventSchema, eventListQuery, slotUpdateSchema, updateEventSchema } from '../../../../shared/schemas/events';
+import {
+  createEventSchema,
+  eventListQuery,
+  slotUpdateSchema,
+  updateEventSchema,
+} from '../../../../shared/schemas/events';
 import type { AppContext } from '../../context';
 import { groupIdInBody, groupIdParam, hasGroupRole, requireGroupRole } from '../../auth/guards';
 import { body, params, query } from '../../http/validate';
@@ -45,7 +50,10 @@ export function eventRoutes(ctx: AppContext) {
   });
   for (const action of ['publish', 'close', 'cancel'] as const) {
     r.post(`/events/:id/${action}`, organiserOfEvent, async (req, res) => {
-      const reason = action === 'cancel' ? z.object({ reason: z.string().trim().max(500).optional() }).parse(req.body ?? {}).reason : undefined;
+      const reason =
+        action === 'cancel'
+          ? z.object({ reason: z.string().trim().max(500).optional() }).parse(req.body ?? {}).reason
+          : undefined;
       res.json(await events.changeStatus(ctx, params(req, idParams).id, action, reason));
     });
   }

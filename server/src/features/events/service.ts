@@ -30,20 +30,45 @@ export async function eventGroupId(db: DbOrTx, eventId: number): Promise<number>
 }
 
 const eventColumns = {
-  id: events.id, groupId: events.groupId, title: events.title, description: events.description, status: events.status,
-  startsAt: events.startsAt, endsAt: events.endsAt, slotMinutes: events.slotMinutes, slotCapacity: events.slotCapacity, skillLimits: events.skillLimits,
-  groupName: repairGroups.name, timeZone: repairGroups.timeZone, houseRules: repairGroups.houseRules,
-  venue: { id: venues.id, name: venues.name, address: venues.address, town: venues.town, accessNotes: venues.accessNotes },
+  id: events.id,
+  groupId: events.groupId,
+  title: events.title,
+  description: events.description,
+  status: events.status,
+  startsAt: events.startsAt,
+  endsAt: events.endsAt,
+  slotMinutes: events.slotMinutes,
+  slotCapacity: events.slotCapacity,
+  skillLimits: events.skillLimits,
+  groupName: repairGroups.name,
+  timeZone: repairGroups.timeZone,
+  houseRules: repairGroups.houseRules,
+  venue: {
+    id: venues.id,
+    name: venues.name,
+    address: venues.address,
+    town: venues.town,
+    accessNotes: venues.accessNotes,
+  },
 };
 
 export async function createEvent(ctx: AppContext, input: z.output<typeof createEventSchema>) {
   const { db } = ctx.database;
   const [venue] = await db.select().from(venues).where(eq(venues.id, input.venueId));
-  if (!venue || venue.groupId !== input.groupId) throw new HttpError(400, 'invalid', 'Some fields need attention.', { venueId: 'Choose one of the group’s venues.' });
+  if (!venue || venue.groupId !== input.groupId)
+    throw new HttpError(400, 'invalid', 'Some fields need attention.', {
+      venueId: 'Choose one of the group’s venues.',
+    });
   const plans = slotPlans(input.startsAt, input.endsAt, input.slotMinutes, input.slotCapacity);
-  if (plans.length === 0) throw new HttpError(400, 'invalid', 'Some fields need attention.', { slotMinutes: 'The opening hours are shorter than one slot.' });
+  if (plans.length === 0)
+    throw new HttpError(400, 'invalid', 'Some fields need attention.', {
+      slotMinutes: 'The opening hours are shorter than one slot.',
+    });
   const id = await db.transaction(async (tx) => {
-    const [{ id }] = await tx.insert(events).values({ ...input, description: input.description ?? '', skillLimits: input.skillLimits ?? {} }).$returningId();
+    const [{ id }] = await tx
+      .insert(events)
+      .values({ ...input, description: input.description ?? '', skillLimits: input.skillLimits ?? {} })
+      .$returningId();
     await tx.insert(slots).values(plans.map((p) => ({ eventId: id, ...p })));
     return id;
   });
@@ -54,19 +79,31 @@ export async function updateEvent(ctx: AppContext, id: number, input: z.output<t
   await ctx.database.db.transaction(async (tx) => {
     const [e] = await tx.select().from(events).where(eq(events.id, id)).for('update');
     if (!e) throw notFound('That event');
-    const changesTimes = ['startsAt', 'endsAt', 'slotMinutes', 'slotCapacity', 'venueId', 'skillLimits'].some((k) => k in input);
-    if (changesTimes && e.status !== 'draft') throw conflict('not-draft', 'Hours, venue, slots and limits can only change while the event is a draft.');
+    const changesTimes = ['startsAt', 'endsAt', 'slotMinutes', 'slotCapacity', 'venueId', 'skillLimits'].some(
+      (k) => k in input,
+    );
+    if (changesTimes && e.status !== 'draft')
+      throw conflict('not-draft', 'Hours, venue, slots and limits can only change while the event is a draft.');
     if (e.status === 'cancelled') throw conflict('cancelled', 'A cancelled event cannot be changed.');
     const next = { ...e, ...input };
-    if (next.endsAt <= next.startsAt) throw new HttpError(400, 'invalid', 'Some fields need attention.', { endsAt: 'The event must end after it starts.' });
+    if (next.endsAt <= next.startsAt)
+      throw new HttpError(400, 'invalid', 'Some fields need attention.', {
+        endsAt: 'The event must end after it starts.',
+      });
     if (input.venueId !== undefined) {
       const [venue] = await tx.select().from(venues).where(eq(venues.id, input.venueId));
-      if (!venue || venue.groupId !== e.groupId) throw new HttpError(400, 'invalid', 'Some fields need attention.', { venueId: 'Choose one of the group’s venues.' });
+      if (!venue || venue.groupId !== e.groupId)
+        throw new HttpError(400, 'invalid', 'Some fields need attention.', {
+          venueId: 'Choose one of the group’s venues.',
+        });
     }
     await tx.update(events).set(input).where(eq(events.id, id));
     if (['startsAt', 'endsAt', 'slotMinutes', 'slotCapacity'].some((k) => k in input)) {
       const plans = slotPlans(next.startsAt, next.endsAt, next.slotMinutes, next.slotCapacity);
-      if (plans.length === 0) throw new HttpError(400, 'invalid', 'Some fields need attention.', { slotMinutes: 'The opening hours are shorter than one slot.' });
+      if (plans.length === 0)
+        throw new HttpError(400, 'invalid', 'Some fields need attention.', {
+          slotMinutes: 'The opening hours are shorter than one slot.',
+        });
       await tx.delete(slots).where(eq(slots.eventId, id));
       await tx.insert(slots).values(plans.map((p) => ({ eventId: id, ...p })));
     }
@@ -78,7 +115,10 @@ async function lockDraftSlot(tx: DbOrTx, eventId: number, slotId: number) {
   const [e] = await tx.select().from(events).where(eq(events.id, eventId)).for('update');
   if (!e) throw notFound('That event');
   if (e.status !== 'draft') throw conflict('not-draft', 'Slots can only be adjusted before the event is published.');
-  const [s] = await tx.select().from(slots).where(and(eq(slots.id, slotId), eq(slots.eventId, eventId)));
+  const [s] = await tx
+    .select()
+    .from(slots)
+    .where(and(eq(slots.id, slotId), eq(slots.eventId, eventId)));
   if (!s) throw notFound('That slot');
   return s;
 }
@@ -114,31 +154,51 @@ export async function changeStatus(ctx: AppContext, id: number, action: keyof ty
     if (!t.from.includes(e.status)) throw conflict('bad-transition', `A ${e.status} event cannot be ${t.to}.`);
     if (action === 'publish') {
       const s = await tx.select().from(slots).where(eq(slots.eventId, id));
-      if (!s.some((x) => x.capacity > 0)) throw conflict('no-places', 'Give at least one slot a capacity above zero before publishing.');
+      if (!s.some((x) => x.capacity > 0))
+        throw conflict('no-places', 'Give at least one slot a capacity above zero before publishing.');
       if (e.endsAt.getTime() < Date.now()) throw conflict('in-the-past', 'This event has already ended.');
     }
-    await tx.update(events).set({ status: t.to, ...(action === 'publish' ? { publishedAt: new Date() } : {}), ...(action === 'cancel' ? { cancelledAt: new Date() } : {}) }).where(eq(events.id, id));
+    await tx
+      .update(events)
+      .set({
+        status: t.to,
+        ...(action === 'publish' ? { publishedAt: new Date() } : {}),
+        ...(action === 'cancel' ? { cancelledAt: new Date() } : {}),
+      })
+      .where(eq(events.id, id));
     if (action === 'cancel') {
       const [g] = await tx.select().from(repairGroups).where(eq(repairGroups.id, e.groupId));
-      const booked = await tx.select().from(bookings).where(and(eq(bookings.eventId, id), eq(bookings.status, 'confirmed')));
+      const booked = await tx
+        .select()
+        .from(bookings)
+        .where(and(eq(bookings.eventId, id), eq(bookings.status, 'confirmed')));
       for (const b of booked) {
         if (!b.visitorEmail) continue;
-        await enqueueMail(tx, composeMail(b.visitorEmail, `Cancelled: ${e.title} on ${formatDay(e.startsAt, g.timeZone)}`, {
-          paragraphs: [
-            `Hello ${b.visitorName},`,
-            `we are sorry: ${g.name} has had to cancel ${e.title} on ${formatDay(e.startsAt, g.timeZone)} (${formatTimeRange(e.startsAt, e.endsAt, g.timeZone)}). Your booking ${b.reference} is cancelled, so please do not come to the venue.`,
-            ...(reason ? [`The organisers say: ${reason}`] : []),
-            'Look out for the group’s next date; you are welcome to book again.',
-          ],
-          action: { label: 'See upcoming events', url: `${ctx.env.publicUrl}/events` },
-        }));
+        await enqueueMail(
+          tx,
+          composeMail(b.visitorEmail, `Cancelled: ${e.title} on ${formatDay(e.startsAt, g.timeZone)}`, {
+            paragraphs: [
+              `Hello ${b.visitorName},`,
+              `we are sorry: ${g.name} has had to cancel ${e.title} on ${formatDay(e.startsAt, g.timeZone)} (${formatTimeRange(e.startsAt, e.endsAt, g.timeZone)}). Your booking ${b.reference} is cancelled, so please do not come to the venue.`,
+              ...(reason ? [`The organisers say: ${reason}`] : []),
+              'Look out for the group’s next date; you are welcome to book again.',
+            ],
+            action: { label: 'See upcoming events', url: `${ctx.env.publicUrl}/events` },
+          }),
+        );
       }
-      await tx.update(bookings).set({ status: 'cancelled', cancelledAt: new Date() }).where(and(eq(bookings.eventId, id), eq(bookings.status, 'confirmed')));
+      await tx
+        .update(bookings)
+        .set({ status: 'cancelled', cancelledAt: new Date() })
+        .where(and(eq(bookings.eventId, id), eq(bookings.status, 'confirmed')));
       // A cancelled session counts nothing in the statistics, even if the desk had started.
       await refreshEventCells(tx, [id]);
       // Nothing is booked or held at a cancelled event.
       await tx.update(slots).set({ booked: 0, held: 0 }).where(eq(slots.eventId, id));
-      await tx.update(waitlistEntries).set({ status: 'withdrawn' }).where(and(eq(waitlistEntries.eventId, id), inArray(waitlistEntries.status, ['waiting', 'offered'])));
+      await tx
+        .update(waitlistEntries)
+        .set({ status: 'withdrawn' })
+        .where(and(eq(waitlistEntries.eventId, id), inArray(waitlistEntries.status, ['waiting', 'offered'])));
     }
   });
   ctx.outbox.kick();
@@ -147,10 +207,23 @@ export async function changeStatus(ctx: AppContext, id: number, action: keyof ty
 
 export async function getEvent(ctx: AppContext, id: number, opts: { includeDrafts: boolean }) {
   const { db } = ctx.database;
-  const [e] = await db.select(eventColumns).from(events).innerJoin(repairGroups, eq(repairGroups.id, events.groupId)).innerJoin(venues, eq(venues.id, events.venueId)).where(eq(events.id, id));
+  const [e] = await db
+    .select(eventColumns)
+    .from(events)
+    .innerJoin(repairGroups, eq(repairGroups.id, events.groupId))
+    .innerJoin(venues, eq(venues.id, events.venueId))
+    .where(eq(events.id, id));
   if (!e || (!opts.includeDrafts && e.status === 'draft')) throw notFound('That event');
   const rows = await db.select().from(slots).where(eq(slots.eventId, id)).orderBy(asc(slots.startsAt));
-  const slotDtos = rows.map((s) => ({ id: s.id, startsAt: s.startsAt, endsAt: s.endsAt, capacity: s.capacity, booked: s.booked, held: s.held, free: freePlaces(s) }));
+  const slotDtos = rows.map((s) => ({
+    id: s.id,
+    startsAt: s.startsAt,
+    endsAt: s.endsAt,
+    capacity: s.capacity,
+    booked: s.booked,
+    held: s.held,
+    free: freePlaces(s),
+  }));
   return {
     ...e,
     houseRules: e.houseRules ?? '',
@@ -169,7 +242,10 @@ export async function listPublicEvents(ctx: AppContext, q: z.output<typeof event
   if (q.to) conditions.push(lte(events.startsAt, new Date(q.to)));
   if (q.groupId) conditions.push(eq(events.groupId, q.groupId));
   if (q.categoryId) {
-    const excluding = db.select({ g: groupExclusions.groupId }).from(groupExclusions).where(eq(groupExclusions.categoryId, q.categoryId));
+    const excluding = db
+      .select({ g: groupExclusions.groupId })
+      .from(groupExclusions)
+      .where(eq(groupExclusions.categoryId, q.categoryId));
     conditions.push(notInArray(events.groupId, excluding));
   }
   return listEvents(db, and(...conditions)!);
@@ -192,5 +268,10 @@ async function listEvents(db: DbOrTx, where: ReturnType<typeof and>) {
     .where(where)
     .orderBy(asc(events.startsAt))
     .limit(500);
-  return rows.map((r) => ({ ...r, houseRules: undefined, totalPlaces: Number(r.totalPlaces), freePlaces: Number(r.freePlaces) }));
+  return rows.map((r) => ({
+    ...r,
+    houseRules: undefined,
+    totalPlaces: Number(r.totalPlaces),
+    freePlaces: Number(r.freePlaces),
+  }));
 }

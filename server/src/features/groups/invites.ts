@@ -10,25 +10,57 @@ import { composeMail } from '../../mail/templates';
 
 const INVITE_DAYS = 14;
 
-export async function invite(ctx: AppContext, groupId: number, input: { email: string; role: GroupRole }, invitedBy: number) {
+export async function invite(
+  ctx: AppContext,
+  groupId: number,
+  input: { email: string; role: GroupRole },
+  invitedBy: number,
+) {
   const { db } = ctx.database;
   const [group] = await db.select().from(repairGroups).where(eq(repairGroups.id, groupId));
   if (!group) throw notFound('That group');
   const [inviter] = await db.select().from(users).where(eq(users.id, invitedBy));
-  const [already] = await db.select({ id: memberships.id }).from(memberships).innerJoin(users, eq(users.id, memberships.userId)).where(and(eq(memberships.groupId, groupId), eq(users.email, input.email), eq(memberships.role, input.role), eq(memberships.status, 'active')));
-  if (already) throw new HttpError(409, 'already-member', `${input.email} is already ${ROLE_LABELS[input.role].toLowerCase()} with ${group.name}.`, { email: 'Already in the team in this role.' });
+  const [already] = await db
+    .select({ id: memberships.id })
+    .from(memberships)
+    .innerJoin(users, eq(users.id, memberships.userId))
+    .where(
+      and(
+        eq(memberships.groupId, groupId),
+        eq(users.email, input.email),
+        eq(memberships.role, input.role),
+        eq(memberships.status, 'active'),
+      ),
+    );
+  if (already)
+    throw new HttpError(
+      409,
+      'already-member',
+      `${input.email} is already ${ROLE_LABELS[input.role].toLowerCase()} with ${group.name}.`,
+      { email: 'Already in the team in this role.' },
+    );
   const { token, hash } = newToken();
   await db.transaction(async (tx) => {
-    await tx.insert(invites).values({ groupId, email: input.email, role: input.role, tokenHash: hash, expiresAt: new Date(Date.now() + INVITE_DAYS * 86400_000), invitedBy });
-    await enqueueMail(tx, composeMail(input.email, `${inviter?.name ?? 'An organiser'} invites you to ${group.name}`, {
-      paragraphs: [
-        'Hello,',
-        `${inviter?.name ?? 'An organiser'} invites you to join ${group.name} on Mendery as ${ROLE_LABELS[input.role].toLowerCase()}.`,
-        'Follow the link to accept; if you have no account yet you can make one there.',
-      ],
-      action: { label: 'Accept the invitation', url: `${ctx.env.publicUrl}/join/${token}` },
-      footnote: `The link works for ${INVITE_DAYS} days.`,
-    }));
+    await tx.insert(invites).values({
+      groupId,
+      email: input.email,
+      role: input.role,
+      tokenHash: hash,
+      expiresAt: new Date(Date.now() + INVITE_DAYS * 86400_000),
+      invitedBy,
+    });
+    await enqueueMail(
+      tx,
+      composeMail(input.email, `${inviter?.name ?? 'An organiser'} invites you to ${group.name}`, {
+        paragraphs: [
+          'Hello,',
+          `${inviter?.name ?? 'An organiser'} invites you to join ${group.name} on Mendery as ${ROLE_LABELS[input.role].toLowerCase()}.`,
+          'Follow the link to accept; if you have no account yet you can make one there.',
+        ],
+        action: { label: 'Accept the invitation', url: `${ctx.env.publicUrl}/join/${token}` },
+        footnote: `The link works for ${INVITE_DAYS} days.`,
+      }),
+    );
   });
   ctx.outbox.kick();
 }
@@ -39,7 +71,12 @@ async function openInvite(ctx: AppContext, token: string) {
     .from(invites)
     .innerJoin(repairGroups, eq(repairGroups.id, invites.groupId))
     .where(and(eq(invites.tokenHash, sha256(token)), isNull(invites.acceptedAt), gt(invites.expiresAt, sql`NOW(3)`)));
-  if (!row) throw new HttpError(404, 'link-invalid', 'This invitation was used already or has expired. Ask the organiser for a new one.');
+  if (!row)
+    throw new HttpError(
+      404,
+      'link-invalid',
+      'This invitation was used already or has expired. Ask the organiser for a new one.',
+    );
   return row;
 }
 
@@ -51,7 +88,10 @@ export async function viewInvite(ctx: AppContext, token: string) {
 
 async function join(ctx: AppContext, inviteId: number, groupId: number, userId: number, role: GroupRole) {
   await ctx.database.db.transaction(async (tx) => {
-    await tx.insert(memberships).values({ userId, groupId, role, status: 'active' }).onDuplicateKeyUpdate({ set: { status: 'active' } });
+    await tx
+      .insert(memberships)
+      .values({ userId, groupId, role, status: 'active' })
+      .onDuplicateKeyUpdate({ set: { status: 'active' } });
     await tx.update(invites).set({ acceptedAt: new Date() }).where(eq(invites.id, inviteId));
   });
 }
@@ -59,7 +99,12 @@ async function join(ctx: AppContext, inviteId: number, groupId: number, userId: 
 /** A signed-in person accepts; the invitation is for one address, so it must be theirs. */
 export async function acceptInvite(ctx: AppContext, token: string, user: { id: number; email: string }) {
   const { invite: i } = await openInvite(ctx, token);
-  if (i.email !== user.email) throw new HttpError(403, 'wrong-account', `This invitation is for ${i.email}. Sign out and sign in with that address.`);
+  if (i.email !== user.email)
+    throw new HttpError(
+      403,
+      'wrong-account',
+      `This invitation is for ${i.email}. Sign out and sign in with that address.`,
+    );
   await join(ctx, i.id, i.groupId, user.id, i.role);
 }
 
@@ -68,7 +113,15 @@ export async function signupFromInvite(ctx: AppContext, token: string, input: { 
   const { invite: i } = await openInvite(ctx, token);
   const [existing] = await ctx.database.db.select().from(users).where(eq(users.email, i.email));
   if (existing) throw new HttpError(409, 'has-account', 'This address already has an account: sign in to accept.');
-  const [{ id }] = await ctx.database.db.insert(users).values({ email: i.email, name: input.name, passwordHash: await hashPassword(input.password), emailVerifiedAt: new Date() }).$returningId();
+  const [{ id }] = await ctx.database.db
+    .insert(users)
+    .values({
+      email: i.email,
+      name: input.name,
+      passwordHash: await hashPassword(input.password),
+      emailVerifiedAt: new Date(),
+    })
+    .$returningId();
   await join(ctx, i.id, i.groupId, id, i.role);
   return id;
 }

@@ -9,9 +9,15 @@ import { HttpError } from '../../http/errors';
 import * as invites from './invites';
 import * as groups from './service';
 
-const memberParams = z.object({ groupId: z.coerce.number().int().positive(), membershipId: z.coerce.number().int().positive() });
+const memberParams = z.object({
+  groupId: z.coerce.number().int().positive(),
+  membershipId: z.coerce.number().int().positive(),
+});
 
-export function groupRoutes(ctx: AppContext, signIn: (req: import('express').Request, userId: number) => Promise<unknown>) {
+export function groupRoutes(
+  ctx: AppContext,
+  signIn: (req: import('express').Request, userId: number) => Promise<unknown>,
+) {
   const r = Router();
   const organiser = requireGroupRole(['organiser'], groupIdParam);
   r.get('/groups/:groupId/members', organiser, async (req, res) => {

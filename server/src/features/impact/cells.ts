@@ -8,7 +8,8 @@ import { bookingItems, bookings, impactCells } from '../../db/schema/index';
  * shared/impact `lastVisits`. `where` narrows it to some events; the bench fills the whole table with it.
  */
 export function rollupSelect(where: ReturnType<typeof sql> | null) {
-  const arrived = (a: string) => sql.raw(`${a}.checked_in_at IS NOT NULL AND ${a}.status NOT IN ('no-show','withdrawn')`);
+  const arrived = (a: string) =>
+    sql.raw(`${a}.checked_in_at IS NOT NULL AND ${a}.status NOT IN ('no-show','withdrawn')`);
   const outcome = (o: string) => sql.raw(`SUM(CASE WHEN o.outcome = '${o}' THEN 1 ELSE 0 END)`);
   const barrier = (b: string) => sql.raw(`SUM(CASE WHEN o.barrier = '${b}' THEN 1 ELSE 0 END)`);
   return sql`
@@ -32,9 +33,19 @@ export function rollupSelect(where: ReturnType<typeof sql> | null) {
  */
 export async function refreshCells(tx: DbOrTx, itemIds: number[]) {
   if (!itemIds.length) return;
-  const rows = await tx.select({ eventId: bookings.eventId, returnOf: bookingItems.returnOfItemId }).from(bookingItems).innerJoin(bookings, eq(bookings.id, bookingItems.bookingId)).where(inArray(bookingItems.id, itemIds));
+  const rows = await tx
+    .select({ eventId: bookings.eventId, returnOf: bookingItems.returnOfItemId })
+    .from(bookingItems)
+    .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
+    .where(inArray(bookingItems.id, itemIds));
   const earlier = rows.map((r) => r.returnOf).filter((x): x is number => x !== null);
-  const more = earlier.length ? await tx.select({ eventId: bookings.eventId }).from(bookingItems).innerJoin(bookings, eq(bookings.id, bookingItems.bookingId)).where(inArray(bookingItems.id, earlier)) : [];
+  const more = earlier.length
+    ? await tx
+        .select({ eventId: bookings.eventId })
+        .from(bookingItems)
+        .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
+        .where(inArray(bookingItems.id, earlier))
+    : [];
   const eventIds = [...new Set([...rows, ...more].map((r) => r.eventId))].sort((a, b) => a - b);
   await refreshEventCells(tx, eventIds);
 }
@@ -42,5 +53,12 @@ export async function refreshCells(tx: DbOrTx, itemIds: number[]) {
 export async function refreshEventCells(tx: DbOrTx, eventIds: number[]) {
   if (!eventIds.length) return;
   await tx.delete(impactCells).where(inArray(impactCells.eventId, eventIds));
-  await tx.execute(rollupSelect(sql`b.event_id IN (${sql.join(eventIds.map((id) => sql`${id}`), sql`, `)})`));
+  await tx.execute(
+    rollupSelect(
+      sql`b.event_id IN (${sql.join(
+        eventIds.map((id) => sql`${id}`),
+        sql`, `,
+      )})`,
+    ),
+  );
 }

@@ -10,14 +10,39 @@ import type { StatsFilter } from './service';
  * of manufacture, problem, repair status, barrier, group identifier, event date). The exact snake_case spellings
  * and the id / data_provider / country / product_age columns are from memory of the standard's CSV files.
  */
-export const ORDS_FIELDS = ['id', 'data_provider', 'country', 'partner_product_category', 'product_category', 'brand', 'year_of_manufacture', 'product_age', 'repair_status', 'repair_barrier_if_end_of_life', 'group_identifier', 'event_date', 'problem'] as const;
+export const ORDS_FIELDS = [
+  'id',
+  'data_provider',
+  'country',
+  'partner_product_category',
+  'product_category',
+  'brand',
+  'year_of_manufacture',
+  'product_age',
+  'repair_status',
+  'repair_barrier_if_end_of_life',
+  'group_identifier',
+  'event_date',
+  'problem',
+] as const;
 
 /** Fixed → Fixed; a part needed or advice given → Repairable; end of life → End of life; nothing recorded → Unknown. */
-export const ordsStatus = (o: Outcome | null) => (o === 'fixed' ? 'Fixed' : o === 'parts-needed' || o === 'advice' ? 'Repairable' : o === 'end-of-life' ? 'End of life' : 'Unknown');
+export const ordsStatus = (o: Outcome | null) =>
+  o === 'fixed'
+    ? 'Fixed'
+    : o === 'parts-needed' || o === 'advice'
+      ? 'Repairable'
+      : o === 'end-of-life'
+        ? 'End of life'
+        : 'Unknown';
 export const ordsBarrier = (b: Barrier | null) => (b ? BARRIER_LABELS[b] : '');
 
 function filterOf(f: StatsFilter): SQL[] {
-  const parts: SQL[] = [eq(bookings.status, 'confirmed'), isNotNull(bookingItems.checkedInAt), notInArray(bookingItems.status, ['no-show', 'withdrawn'])];
+  const parts: SQL[] = [
+    eq(bookings.status, 'confirmed'),
+    isNotNull(bookingItems.checkedInAt),
+    notInArray(bookingItems.status, ['no-show', 'withdrawn']),
+  ];
   if (f.groupId) parts.push(eq(events.groupId, f.groupId));
   if (f.eventId) parts.push(eq(events.id, f.eventId));
   if (f.from) parts.push(gte(sql`DATE(${events.startsAt})`, f.from));
@@ -26,11 +51,26 @@ function filterOf(f: StatsFilter): SQL[] {
 }
 
 /** Personal data stays out of a pooled file: addresses and phone numbers in the visitor's words are blanked. */
-const scrub = (text: string) => text.replace(/[\w.+-]+@[\w-]+\.[\w.-]+/g, '[e-mail]').replace(/\+?\d[\d ()-]{7,}\d/g, '[number]').replace(/\s+/g, ' ').trim();
+const scrub = (text: string) =>
+  text
+    .replace(/[\w.+-]+@[\w-]+\.[\w.-]+/g, '[e-mail]')
+    .replace(/\+?\d[\d ()-]{7,}\d/g, '[number]')
+    .replace(/\s+/g, ' ')
+    .trim();
 
 export async function openRepairDataCsv(ctx: AppContext, f: StatsFilter): Promise<string> {
   const rows = await ctx.database.db
-    .select({ id: bookingItems.id, groupSlug: repairGroups.slug, categoryName: categories.name, brand: bookingItems.brand, ageYears: bookingItems.ageYears, fault: bookingItems.fault, outcome: itemOutcomes.outcome, barrier: itemOutcomes.barrier, startsAt: events.startsAt })
+    .select({
+      id: bookingItems.id,
+      groupSlug: repairGroups.slug,
+      categoryName: categories.name,
+      brand: bookingItems.brand,
+      ageYears: bookingItems.ageYears,
+      fault: bookingItems.fault,
+      outcome: itemOutcomes.outcome,
+      barrier: itemOutcomes.barrier,
+      startsAt: events.startsAt,
+    })
     .from(bookingItems)
     .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
     .innerJoin(events, eq(events.id, bookings.eventId))
@@ -39,18 +79,51 @@ export async function openRepairDataCsv(ctx: AppContext, f: StatsFilter): Promis
     .leftJoin(itemOutcomes, eq(itemOutcomes.itemId, bookingItems.id))
     .where(and(...filterOf(f)))
     .orderBy(asc(events.startsAt), asc(bookingItems.id));
-  return stringify(rows.map((r) => ({
-    id: `mendery-${r.id}`, data_provider: 'Mendery', country: '', partner_product_category: r.categoryName, product_category: r.categoryName, brand: r.brand ?? '',
-    year_of_manufacture: r.ageYears !== null ? String(r.startsAt.getUTCFullYear() - r.ageYears) : '', product_age: r.ageYears ?? '',
-    repair_status: ordsStatus(r.outcome), repair_barrier_if_end_of_life: r.outcome === 'end-of-life' ? ordsBarrier(r.barrier) : '',
-    group_identifier: r.groupSlug, event_date: r.startsAt.toISOString().slice(0, 10), problem: scrub(r.fault),
-  })), { header: true, columns: [...ORDS_FIELDS] });
+  return stringify(
+    rows.map((r) => ({
+      id: `mendery-${r.id}`,
+      data_provider: 'Mendery',
+      country: '',
+      partner_product_category: r.categoryName,
+      product_category: r.categoryName,
+      brand: r.brand ?? '',
+      year_of_manufacture: r.ageYears !== null ? String(r.startsAt.getUTCFullYear() - r.ageYears) : '',
+      product_age: r.ageYears ?? '',
+      repair_status: ordsStatus(r.outcome),
+      repair_barrier_if_end_of_life: r.outcome === 'end-of-life' ? ordsBarrier(r.barrier) : '',
+      group_identifier: r.groupSlug,
+      event_date: r.startsAt.toISOString().slice(0, 10),
+      problem: scrub(r.fault),
+    })),
+    { header: true, columns: [...ORDS_FIELDS] },
+  );
 }
 
 /** The organisers' own file: every recorded detail of each repair, still without names or addresses. */
 export async function recordsCsv(ctx: AppContext, f: StatsFilter): Promise<string> {
   const rows = await ctx.database.db
-    .select({ id: bookingItems.id, startsAt: events.startsAt, event: events.title, reference: bookings.reference, walkIn: bookings.walkIn, category: categories.name, avgKg: categories.avgWeightKg, brand: bookingItems.brand, model: bookingItems.model, ageYears: bookingItems.ageYears, fault: bookingItems.fault, weighedKg: bookingItems.weighedKg, outcome: itemOutcomes.outcome, barrier: itemOutcomes.barrier, part: itemOutcomes.partDescription, partCostCents: itemOutcomes.partCostCents, minutes: itemOutcomes.minutes, notes: itemOutcomes.notes, fixer: users.name, returnOf: bookingItems.returnOfItemId })
+    .select({
+      id: bookingItems.id,
+      startsAt: events.startsAt,
+      event: events.title,
+      reference: bookings.reference,
+      walkIn: bookings.walkIn,
+      category: categories.name,
+      avgKg: categories.avgWeightKg,
+      brand: bookingItems.brand,
+      model: bookingItems.model,
+      ageYears: bookingItems.ageYears,
+      fault: bookingItems.fault,
+      weighedKg: bookingItems.weighedKg,
+      outcome: itemOutcomes.outcome,
+      barrier: itemOutcomes.barrier,
+      part: itemOutcomes.partDescription,
+      partCostCents: itemOutcomes.partCostCents,
+      minutes: itemOutcomes.minutes,
+      notes: itemOutcomes.notes,
+      fixer: users.name,
+      returnOf: bookingItems.returnOfItemId,
+    })
     .from(bookingItems)
     .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
     .innerJoin(events, eq(events.id, bookings.eventId))
@@ -59,9 +132,53 @@ export async function recordsCsv(ctx: AppContext, f: StatsFilter): Promise<strin
     .leftJoin(users, eq(users.id, itemOutcomes.recordedBy))
     .where(and(...filterOf(f)))
     .orderBy(asc(events.startsAt), asc(bookingItems.id));
-  return stringify(rows.map((r) => ({
-    item_id: r.id, event_date: r.startsAt.toISOString().slice(0, 10), event: r.event, booking: r.reference, walk_in: r.walkIn ? 'yes' : 'no', category: r.category, brand: r.brand ?? '', model: r.model ?? '', age_years: r.ageYears ?? '',
-    fault: scrub(r.fault), outcome: r.outcome ? OUTCOME_LABELS[r.outcome] : '', barrier: r.barrier ? BARRIER_LABELS[r.barrier] : '', part: r.part ?? '', part_cost: r.partCostCents === null ? '' : (r.partCostCents / 100).toFixed(2),
-    minutes: r.minutes ?? '', weighed_kg: r.weighedKg ?? '', kg_counted: r.outcome === 'fixed' ? (r.weighedKg ?? r.avgKg) : '', fixer: r.fixer ?? '', return_of_item: r.returnOf ?? '', notes: r.notes ? scrub(r.notes) : '',
-  })), { header: true, columns: ['item_id', 'event_date', 'event', 'booking', 'walk_in', 'category', 'brand', 'model', 'age_years', 'fault', 'outcome', 'barrier', 'part', 'part_cost', 'minutes', 'weighed_kg', 'kg_counted', 'fixer', 'return_of_item', 'notes'] });
+  return stringify(
+    rows.map((r) => ({
+      item_id: r.id,
+      event_date: r.startsAt.toISOString().slice(0, 10),
+      event: r.event,
+      booking: r.reference,
+      walk_in: r.walkIn ? 'yes' : 'no',
+      category: r.category,
+      brand: r.brand ?? '',
+      model: r.model ?? '',
+      age_years: r.ageYears ?? '',
+      fault: scrub(r.fault),
+      outcome: r.outcome ? OUTCOME_LABELS[r.outcome] : '',
+      barrier: r.barrier ? BARRIER_LABELS[r.barrier] : '',
+      part: r.part ?? '',
+      part_cost: r.partCostCents === null ? '' : (r.partCostCents / 100).toFixed(2),
+      minutes: r.minutes ?? '',
+      weighed_kg: r.weighedKg ?? '',
+      kg_counted: r.outcome === 'fixed' ? (r.weighedKg ?? r.avgKg) : '',
+      fixer: r.fixer ?? '',
+      return_of_item: r.returnOf ?? '',
+      notes: r.notes ? scrub(r.notes) : '',
+    })),
+    {
+      header: true,
+      columns: [
+        'item_id',
+        'event_date',
+        'event',
+        'booking',
+        'walk_in',
+        'category',
+        'brand',
+        'model',
+        'age_years',
+        'fault',
+        'outcome',
+        'barrier',
+        'part',
+        'part_cost',
+        'minutes',
+        'weighed_kg',
+        'kg_counted',
+        'fixer',
+        'return_of_item',
+        'notes',
+      ],
+    },
+  );
 }

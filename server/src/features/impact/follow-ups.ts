@@ -2,10 +2,24 @@ import { createHmac, timingSafeEqual } from 'node:crypto';
 import { and, asc, eq, gt, inArray, isNotNull, isNull, lte } from 'drizzle-orm';
 import { alias } from 'drizzle-orm/mysql-core';
 import type { Outcome } from '../../../../shared/event-day/constants';
-import { FOLLOW_UP_LABELS, FOLLOW_UP_REMINDER_DAYS, reminderDue, type FollowUpStatus } from '../../../../shared/impact/follow-ups';
+import {
+  FOLLOW_UP_LABELS,
+  FOLLOW_UP_REMINDER_DAYS,
+  reminderDue,
+  type FollowUpStatus,
+} from '../../../../shared/impact/follow-ups';
 import type { AppContext } from '../../context';
 import type { DbOrTx, Tx } from '../../db/client';
-import { bookingItems, bookings, categories, events, followUps, itemOutcomes, repairGroups, slots } from '../../db/schema/index';
+import {
+  bookingItems,
+  bookings,
+  categories,
+  events,
+  followUps,
+  itemOutcomes,
+  repairGroups,
+  slots,
+} from '../../db/schema/index';
 import { HttpError, notFound } from '../../http/errors';
 import { enqueueMail } from '../../mail/outbox';
 import { composeMail } from '../../mail/templates';
@@ -13,7 +27,8 @@ import { createReturnBooking } from '../bookings/service';
 import type { ItemRow } from '../event-day/items';
 
 /** The priority re-booking link: the item's id and an HMAC of it, so any later mail can carry the same link. */
-export const rebookToken = (ctx: AppContext, itemId: number) => `${itemId}.${createHmac('sha256', ctx.env.SESSION_SECRET).update(`rebook:${itemId}`).digest('base64url')}`;
+export const rebookToken = (ctx: AppContext, itemId: number) =>
+  `${itemId}.${createHmac('sha256', ctx.env.SESSION_SECRET).update(`rebook:${itemId}`).digest('base64url')}`;
 export const rebookUrl = (ctx: AppContext, itemId: number) => `${ctx.env.publicUrl}/rebook/${rebookToken(ctx, itemId)}`;
 
 function itemOfToken(ctx: AppContext, token: string): number {
@@ -26,19 +41,37 @@ function itemOfToken(ctx: AppContext, token: string): number {
   return itemId;
 }
 
-function partMail(ctx: AppContext, to: string, f: { visitorName: string; groupName: string; itemLabel: string; part: string; link: string | null; cost: number | null; itemId: number }, reminder: boolean) {
-  return composeMail(to, reminder ? `Still waiting for the part? ${f.itemLabel}` : `The part your ${f.itemLabel.toLowerCase()} needs`, {
-    paragraphs: [
-      `Hello ${f.visitorName.split(' ')[0]},`,
-      reminder
-        ? `six weeks ago a fixer at ${f.groupName} found that your ${f.itemLabel.toLowerCase()} needs a part. If you have it now, bring it to a session: the link below books you a place ahead of the queue.`
-        : `thank you for coming to ${f.groupName}. Your ${f.itemLabel.toLowerCase()} can be repaired once it has a new part.`,
-      `The part: ${f.part}.${f.link ? ` Where to find it: ${f.link}.` : ''}${f.cost !== null ? ` Expect to pay about ${f.cost.toFixed(2)}.` : ''}`,
-      'When you have it, book a return visit with this link: it keeps a place for you even when a session is full, and the fixers will know what to expect.',
-    ],
-    action: { label: 'Book a return visit', url: rebookUrl(ctx, f.itemId) },
-    footnote: 'Check the part’s numbers against the old one before buying. If you decide not to go ahead, let the group know by replying.',
-  });
+function partMail(
+  ctx: AppContext,
+  to: string,
+  f: {
+    visitorName: string;
+    groupName: string;
+    itemLabel: string;
+    part: string;
+    link: string | null;
+    cost: number | null;
+    itemId: number;
+  },
+  reminder: boolean,
+) {
+  return composeMail(
+    to,
+    reminder ? `Still waiting for the part? ${f.itemLabel}` : `The part your ${f.itemLabel.toLowerCase()} needs`,
+    {
+      paragraphs: [
+        `Hello ${f.visitorName.split(' ')[0]},`,
+        reminder
+          ? `six weeks ago a fixer at ${f.groupName} found that your ${f.itemLabel.toLowerCase()} needs a part. If you have it now, bring it to a session: the link below books you a place ahead of the queue.`
+          : `thank you for coming to ${f.groupName}. Your ${f.itemLabel.toLowerCase()} can be repaired once it has a new part.`,
+        `The part: ${f.part}.${f.link ? ` Where to find it: ${f.link}.` : ''}${f.cost !== null ? ` Expect to pay about ${f.cost.toFixed(2)}.` : ''}`,
+        'When you have it, book a return visit with this link: it keeps a place for you even when a session is full, and the fixers will know what to expect.',
+      ],
+      action: { label: 'Book a return visit', url: rebookUrl(ctx, f.itemId) },
+      footnote:
+        'Check the part’s numbers against the old one before buying. If you decide not to go ahead, let the group know by replying.',
+    },
+  );
 }
 
 /**
@@ -53,7 +86,23 @@ export async function afterOutcome(ctx: AppContext, tx: Tx, row: ItemRow, outcom
       await tx.insert(followUps).values({ itemId, groupId: row.group.id, status: 'open' });
       const [o] = await tx.select().from(itemOutcomes).where(eq(itemOutcomes.itemId, itemId));
       if (row.booking.visitorEmail && o?.partDescription) {
-        await enqueueMail(tx, partMail(ctx, row.booking.visitorEmail, { visitorName: row.booking.visitorName, groupName: row.group.name, itemLabel: row.category.name, part: o.partDescription, link: o.partLink, cost: o.partCostCents === null ? null : o.partCostCents / 100, itemId }, false));
+        await enqueueMail(
+          tx,
+          partMail(
+            ctx,
+            row.booking.visitorEmail,
+            {
+              visitorName: row.booking.visitorName,
+              groupName: row.group.name,
+              itemLabel: row.category.name,
+              part: o.partDescription,
+              link: o.partLink,
+              cost: o.partCostCents === null ? null : o.partCostCents / 100,
+              itemId,
+            },
+            false,
+          ),
+        );
         await tx.update(followUps).set({ mailedAt: new Date() }).where(eq(followUps.itemId, itemId));
       }
     }
@@ -61,16 +110,29 @@ export async function afterOutcome(ctx: AppContext, tx: Tx, row: ItemRow, outcom
     await tx.delete(followUps).where(and(eq(followUps.itemId, itemId), eq(followUps.status, 'open')));
   }
   if (row.item.returnOfItemId) {
-    await tx.update(followUps).set({ status: outcome === 'fixed' ? 'fixed-at-return' : 'came-back', returnItemId: itemId, updatedAt: new Date() }).where(eq(followUps.itemId, row.item.returnOfItemId));
+    await tx
+      .update(followUps)
+      .set({
+        status: outcome === 'fixed' ? 'fixed-at-return' : 'came-back',
+        returnItemId: itemId,
+        updatedAt: new Date(),
+      })
+      .where(eq(followUps.itemId, row.item.returnOfItemId));
   }
 }
 
 /** A return visit checked in at the desk: its earlier item's follow-up says it came back. */
 export async function markCameBack(tx: DbOrTx, itemIds: number[]) {
   if (!itemIds.length) return;
-  const returns = await tx.select({ id: bookingItems.id, returnOf: bookingItems.returnOfItemId }).from(bookingItems).where(and(inArray(bookingItems.id, itemIds), isNotNull(bookingItems.returnOfItemId)));
+  const returns = await tx
+    .select({ id: bookingItems.id, returnOf: bookingItems.returnOfItemId })
+    .from(bookingItems)
+    .where(and(inArray(bookingItems.id, itemIds), isNotNull(bookingItems.returnOfItemId)));
   for (const r of returns) {
-    await tx.update(followUps).set({ status: 'came-back', returnItemId: r.id, updatedAt: new Date() }).where(and(eq(followUps.itemId, r.returnOf!), inArray(followUps.status, ['open', 'part-ordered', 'rebooked'])));
+    await tx
+      .update(followUps)
+      .set({ status: 'came-back', returnItemId: r.id, updatedAt: new Date() })
+      .where(and(eq(followUps.itemId, r.returnOf!), inArray(followUps.status, ['open', 'part-ordered', 'rebooked'])));
   }
 }
 
@@ -80,7 +142,24 @@ export async function listFollowUps(ctx: AppContext, groupId: number) {
   const retBooking = alias(bookings, 'return_booking');
   const retEvent = alias(events, 'return_event');
   const rows = await ctx.database.db
-    .select({ f: followUps, categoryName: categories.name, brand: bookingItems.brand, model: bookingItems.model, visitorName: bookings.visitorName, visitorEmail: bookings.visitorEmail, visitorPhone: bookings.visitorPhone, reference: bookings.reference, eventTitle: events.title, eventStartsAt: events.startsAt, part: itemOutcomes.partDescription, partLink: itemOutcomes.partLink, partCostCents: itemOutcomes.partCostCents, returnReference: retBooking.reference, returnEventTitle: retEvent.title, returnStartsAt: retEvent.startsAt })
+    .select({
+      f: followUps,
+      categoryName: categories.name,
+      brand: bookingItems.brand,
+      model: bookingItems.model,
+      visitorName: bookings.visitorName,
+      visitorEmail: bookings.visitorEmail,
+      visitorPhone: bookings.visitorPhone,
+      reference: bookings.reference,
+      eventTitle: events.title,
+      eventStartsAt: events.startsAt,
+      part: itemOutcomes.partDescription,
+      partLink: itemOutcomes.partLink,
+      partCostCents: itemOutcomes.partCostCents,
+      returnReference: retBooking.reference,
+      returnEventTitle: retEvent.title,
+      returnStartsAt: retEvent.startsAt,
+    })
     .from(followUps)
     .innerJoin(bookingItems, eq(bookingItems.id, followUps.itemId))
     .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
@@ -94,20 +173,34 @@ export async function listFollowUps(ctx: AppContext, groupId: number) {
     .orderBy(asc(followUps.createdAt));
   const now = new Date();
   return rows.map((r) => ({
-    itemId: r.f.itemId, status: r.f.status, statusLabel: FOLLOW_UP_LABELS[r.f.status], createdAt: r.f.createdAt, mailedAt: r.f.mailedAt, remindedAt: r.f.remindedAt, returnItemId: r.f.returnItemId, note: r.f.note,
+    itemId: r.f.itemId,
+    status: r.f.status,
+    statusLabel: FOLLOW_UP_LABELS[r.f.status],
+    createdAt: r.f.createdAt,
+    mailedAt: r.f.mailedAt,
+    remindedAt: r.f.remindedAt,
+    returnItemId: r.f.returnItemId,
+    note: r.f.note,
     ageDays: Math.floor((now.getTime() - r.f.createdAt.getTime()) / 86400_000),
     reminderDue: reminderDue({ status: r.f.status, createdAt: r.f.createdAt, remindedAt: r.f.remindedAt }, now),
     item: [r.categoryName, [r.brand, r.model].filter(Boolean).join(' ')].filter(Boolean).join(' — '),
-    part: r.part, partLink: r.partLink, partCost: r.partCostCents === null ? null : r.partCostCents / 100,
+    part: r.part,
+    partLink: r.partLink,
+    partCost: r.partCostCents === null ? null : r.partCostCents / 100,
     visitor: { name: r.visitorName, email: r.visitorEmail, phone: r.visitorPhone, reference: r.reference },
     event: { title: r.eventTitle, startsAt: r.eventStartsAt },
     rebookUrl: ['open', 'part-ordered'].includes(r.f.status) ? rebookUrl(ctx, r.f.itemId) : null,
-    returnVisit: r.returnReference ? { reference: r.returnReference, eventTitle: r.returnEventTitle, startsAt: r.returnStartsAt } : null,
+    returnVisit: r.returnReference
+      ? { reference: r.returnReference, eventTitle: r.returnEventTitle, startsAt: r.returnStartsAt }
+      : null,
   }));
 }
 
 export async function setFollowUpStatus(ctx: AppContext, itemId: number, status: FollowUpStatus, note?: string) {
-  const res = await ctx.database.db.update(followUps).set({ status, updatedAt: new Date(), ...(note !== undefined ? { note } : {}) }).where(eq(followUps.itemId, itemId));
+  const res = await ctx.database.db
+    .update(followUps)
+    .set({ status, updatedAt: new Date(), ...(note !== undefined ? { note } : {}) })
+    .where(eq(followUps.itemId, itemId));
   if ((res as unknown as [{ affectedRows: number }])[0].affectedRows === 0) throw notFound('That follow-up');
 }
 
@@ -120,7 +213,14 @@ export async function followUpGroupId(db: DbOrTx, itemId: number) {
 async function rebookContext(ctx: AppContext, token: string) {
   const itemId = itemOfToken(ctx, token);
   const [r] = await ctx.database.db
-    .select({ f: followUps, item: bookingItems, booking: bookings, category: categories, group: repairGroups, part: itemOutcomes.partDescription })
+    .select({
+      f: followUps,
+      item: bookingItems,
+      booking: bookings,
+      category: categories,
+      group: repairGroups,
+      part: itemOutcomes.partDescription,
+    })
     .from(followUps)
     .innerJoin(bookingItems, eq(bookingItems.id, followUps.itemId))
     .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
@@ -135,8 +235,27 @@ async function rebookContext(ctx: AppContext, token: string) {
 /** What the re-booking page shows: the item, the part, and the group's next sessions with their times. */
 export async function rebookView(ctx: AppContext, token: string) {
   const r = await rebookContext(ctx, token);
-  const upcoming = await ctx.database.db.select().from(events).where(and(eq(events.groupId, r.group.id), eq(events.status, 'published'), gt(events.startsAt, new Date()))).orderBy(asc(events.startsAt)).limit(3);
-  const slotRows = upcoming.length ? await ctx.database.db.select().from(slots).where(and(inArray(slots.eventId, upcoming.map((e) => e.id)), gt(slots.endsAt, new Date()))).orderBy(asc(slots.startsAt)) : [];
+  const upcoming = await ctx.database.db
+    .select()
+    .from(events)
+    .where(and(eq(events.groupId, r.group.id), eq(events.status, 'published'), gt(events.startsAt, new Date())))
+    .orderBy(asc(events.startsAt))
+    .limit(3);
+  const slotRows = upcoming.length
+    ? await ctx.database.db
+        .select()
+        .from(slots)
+        .where(
+          and(
+            inArray(
+              slots.eventId,
+              upcoming.map((e) => e.id),
+            ),
+            gt(slots.endsAt, new Date()),
+          ),
+        )
+        .orderBy(asc(slots.startsAt))
+    : [];
   return {
     item: { categoryName: r.category.name, brand: r.item.brand, model: r.item.model, part: r.part },
     visitorName: r.booking.visitorName.split(' ')[0],
@@ -144,9 +263,19 @@ export async function rebookView(ctx: AppContext, token: string) {
     status: r.f.status,
     booked: r.f.returnItemId !== null,
     events: upcoming.map((e) => ({
-      id: e.id, title: e.title, startsAt: e.startsAt, endsAt: e.endsAt,
+      id: e.id,
+      title: e.title,
+      startsAt: e.startsAt,
+      endsAt: e.endsAt,
       // One place over capacity is kept for returns.
-      slots: slotRows.filter((s) => s.eventId === e.id).map((s) => ({ id: s.id, startsAt: s.startsAt, endsAt: s.endsAt, free: Math.max(0, s.capacity + 1 - s.booked - s.held) })),
+      slots: slotRows
+        .filter((s) => s.eventId === e.id)
+        .map((s) => ({
+          id: s.id,
+          startsAt: s.startsAt,
+          endsAt: s.endsAt,
+          free: Math.max(0, s.capacity + 1 - s.booked - s.held),
+        })),
     })),
   };
 }
@@ -154,19 +283,53 @@ export async function rebookView(ctx: AppContext, token: string) {
 /** Books the return visit: the visitor and item as before, marked as continuing the earlier visit. */
 export async function rebook(ctx: AppContext, token: string, slotId: number) {
   const r = await rebookContext(ctx, token);
-  if (r.f.returnItemId !== null) throw new HttpError(409, 'already-booked', 'A return visit is already booked for this item. Use the link in its confirmation mail to change it.');
-  if (!['open', 'part-ordered'].includes(r.f.status)) throw new HttpError(409, 'closed', 'This follow-up is closed. Ask the group if you still want to come back.');
-  if (!r.booking.visitorEmail) throw new HttpError(409, 'no-email', 'This visit has no e-mail address to confirm to. Come to reception on the day instead.');
+  if (r.f.returnItemId !== null)
+    throw new HttpError(
+      409,
+      'already-booked',
+      'A return visit is already booked for this item. Use the link in its confirmation mail to change it.',
+    );
+  if (!['open', 'part-ordered'].includes(r.f.status))
+    throw new HttpError(409, 'closed', 'This follow-up is closed. Ask the group if you still want to come back.');
+  if (!r.booking.visitorEmail)
+    throw new HttpError(
+      409,
+      'no-email',
+      'This visit has no e-mail address to confirm to. Come to reception on the day instead.',
+    );
   const fault = `Return visit with the part${r.part ? ` (${r.part})` : ''}. Before: ${r.item.fault}`.slice(0, 2000);
-  const result = await createReturnBooking(ctx, {
-    slotId,
-    visitor: { name: r.booking.visitorName, email: r.booking.visitorEmail, phone: r.booking.visitorPhone ?? undefined },
-    items: [{ categoryId: r.item.categoryId, brand: r.item.brand ?? undefined, model: r.item.model ?? undefined, fault, mains: Boolean(r.item.mains), battery: Boolean(r.item.battery), hazards: [] }],
-    consent: true,
-  }, r.item.id, async (tx, b) => {
-    const res = await tx.update(followUps).set({ status: 'rebooked', returnItemId: b.itemIds[0], updatedAt: new Date() }).where(and(eq(followUps.itemId, r.item.id), isNull(followUps.returnItemId)));
-    if ((res as unknown as [{ affectedRows: number }])[0].affectedRows !== 1) throw new HttpError(409, 'already-booked', 'A return visit is already booked for this item.');
-  });
+  const result = await createReturnBooking(
+    ctx,
+    {
+      slotId,
+      visitor: {
+        name: r.booking.visitorName,
+        email: r.booking.visitorEmail,
+        phone: r.booking.visitorPhone ?? undefined,
+      },
+      items: [
+        {
+          categoryId: r.item.categoryId,
+          brand: r.item.brand ?? undefined,
+          model: r.item.model ?? undefined,
+          fault,
+          mains: Boolean(r.item.mains),
+          battery: Boolean(r.item.battery),
+          hazards: [],
+        },
+      ],
+      consent: true,
+    },
+    r.item.id,
+    async (tx, b) => {
+      const res = await tx
+        .update(followUps)
+        .set({ status: 'rebooked', returnItemId: b.itemIds[0], updatedAt: new Date() })
+        .where(and(eq(followUps.itemId, r.item.id), isNull(followUps.returnItemId)));
+      if ((res as unknown as [{ affectedRows: number }])[0].affectedRows !== 1)
+        throw new HttpError(409, 'already-booked', 'A return visit is already booked for this item.');
+    },
+  );
   return { reference: result.reference, manageToken: result.manageToken, eventId: result.eventId };
 }
 
@@ -175,19 +338,47 @@ export async function sendFollowUpReminders(ctx: AppContext): Promise<number> {
   const cutoff = new Date(Date.now() - FOLLOW_UP_REMINDER_DAYS * 86400_000);
   const sent = await ctx.database.db.transaction(async (tx) => {
     const due = await tx
-      .select({ f: followUps, booking: bookings, categoryName: categories.name, groupName: repairGroups.name, o: itemOutcomes })
+      .select({
+        f: followUps,
+        booking: bookings,
+        categoryName: categories.name,
+        groupName: repairGroups.name,
+        o: itemOutcomes,
+      })
       .from(followUps)
       .innerJoin(bookingItems, eq(bookingItems.id, followUps.itemId))
       .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
       .innerJoin(categories, eq(categories.id, bookingItems.categoryId))
       .innerJoin(repairGroups, eq(repairGroups.id, followUps.groupId))
       .innerJoin(itemOutcomes, eq(itemOutcomes.itemId, followUps.itemId))
-      .where(and(inArray(followUps.status, ['open', 'part-ordered']), isNull(followUps.remindedAt), lte(followUps.createdAt, cutoff)))
+      .where(
+        and(
+          inArray(followUps.status, ['open', 'part-ordered']),
+          isNull(followUps.remindedAt),
+          lte(followUps.createdAt, cutoff),
+        ),
+      )
       .limit(200)
       .for('update', { skipLocked: true });
     for (const d of due) {
       if (d.booking.visitorEmail && d.o.partDescription) {
-        await enqueueMail(tx, partMail(ctx, d.booking.visitorEmail, { visitorName: d.booking.visitorName, groupName: d.groupName, itemLabel: d.categoryName, part: d.o.partDescription, link: d.o.partLink, cost: d.o.partCostCents === null ? null : d.o.partCostCents / 100, itemId: d.f.itemId }, true));
+        await enqueueMail(
+          tx,
+          partMail(
+            ctx,
+            d.booking.visitorEmail,
+            {
+              visitorName: d.booking.visitorName,
+              groupName: d.groupName,
+              itemLabel: d.categoryName,
+              part: d.o.partDescription,
+              link: d.o.partLink,
+              cost: d.o.partCostCents === null ? null : d.o.partCostCents / 100,
+              itemId: d.f.itemId,
+            },
+            true,
+          ),
+        );
       }
       await tx.update(followUps).set({ remindedAt: new Date() }).where(eq(followUps.itemId, d.f.itemId));
     }
@@ -196,4 +387,3 @@ export async function sendFollowUpReminders(ctx: AppContext): Promise<number> {
   if (sent) ctx.outbox.kick();
   return sent;
 }
-

@@ -1,6 +1,12 @@
 import { Router, type NextFunction, type Request, type Response } from 'express';
 import { z } from 'zod';
-import { followUpUpdate, impactSettingsSchema, rebookSchema, recordsQuery, statsQuery } from '../../../../shared/schemas/impact';
+import {
+  followUpUpdate,
+  impactSettingsSchema,
+  rebookSchema,
+  recordsQuery,
+  statsQuery,
+} from '../../../../shared/schemas/impact';
 import type { AppContext } from '../../context';
 import { hasGroupRole, requireAdmin, requireGroupRole, unauthenticated } from '../../auth/guards';
 import { HttpError } from '../../http/errors';
@@ -8,13 +14,28 @@ import { body, params, query } from '../../http/validate';
 import { eventGroupId } from '../events/service';
 import { openRepairDataCsv, recordsCsv } from './exports';
 import { followUpGroupId, listFollowUps, rebook, rebookView, setFollowUpStatus } from './follow-ups';
-import { assertDateRange, displacement, eventReport, method, publicImpact, rangeReport, records, setDisplacement, stats } from './service';
+import {
+  assertDateRange,
+  displacement,
+  eventReport,
+  method,
+  publicImpact,
+  rangeReport,
+  records,
+  setDisplacement,
+  stats,
+} from './service';
 
 /** Public figures and the embeddable widget's data: totals only, no person in them. */
 export function impactPublicRoutes(ctx: AppContext) {
   const r = Router();
   r.get('/public/impact', async (req, res) => {
-    const { groupId } = query(req, z.object({ groupId: z.preprocess((v) => (v === '' ? undefined : v), z.coerce.number().int().positive().optional()) }));
+    const { groupId } = query(
+      req,
+      z.object({
+        groupId: z.preprocess((v) => (v === '' ? undefined : v), z.coerce.number().int().positive().optional()),
+      }),
+    );
     res.setHeader('Cache-Control', 'public, max-age=300');
     res.json(await publicImpact(ctx, groupId));
   });
@@ -30,10 +51,24 @@ function statsGuard(ctx: AppContext) {
     if (!req.user) return next(unauthenticated());
     const q = statsQuery.safeParse(req.query);
     if (!q.success) return next(q.error);
-    const groupId = q.data.eventId ? await eventGroupId(ctx.database.db, q.data.eventId).catch(() => 0) : q.data.groupId;
-    if (q.data.eventId && q.data.groupId && groupId !== q.data.groupId) return next(new HttpError(400, 'invalid', 'Some fields need attention.', { eventId: 'That event belongs to another group.' }));
-    if (!groupId) return next(req.user.admin ? undefined : new HttpError(403, 'forbidden', 'Only platform admins can see the whole network.'));
-    next(hasGroupRole(req.user, groupId, ['organiser']) ? undefined : new HttpError(403, 'forbidden', 'Your role in this group does not allow this.'));
+    const groupId = q.data.eventId
+      ? await eventGroupId(ctx.database.db, q.data.eventId).catch(() => 0)
+      : q.data.groupId;
+    if (q.data.eventId && q.data.groupId && groupId !== q.data.groupId)
+      return next(
+        new HttpError(400, 'invalid', 'Some fields need attention.', {
+          eventId: 'That event belongs to another group.',
+        }),
+      );
+    if (!groupId)
+      return next(
+        req.user.admin ? undefined : new HttpError(403, 'forbidden', 'Only platform admins can see the whole network.'),
+      );
+    next(
+      hasGroupRole(req.user, groupId, ['organiser'])
+        ? undefined
+        : new HttpError(403, 'forbidden', 'Your role in this group does not allow this.'),
+    );
   };
 }
 
@@ -53,38 +88,70 @@ export function impactRoutes(ctx: AppContext) {
     res.json(await records(ctx, q));
   });
   r.get('/stats/method', async (_req, res) => res.json(await method(ctx)));
-  const csv = (name: string, make: (f: ReturnType<typeof filter>) => Promise<string>) => async (req: Request, res: Response) => {
-    const f = filter(req);
-    res.setHeader('Content-Type', 'text/csv; charset=utf-8');
-    res.setHeader('Content-Disposition', `attachment; filename="${[name, f.groupId ? `group-${f.groupId}` : 'network', f.eventId ? `session-${f.eventId}` : '', f.from ? `from-${f.from}` : '', f.to ? `to-${f.to}` : '', `made-${new Date().toISOString().slice(0, 10)}`].filter(Boolean).join('-')}.csv"`);
-    res.setHeader('Cache-Control', 'private, no-store');
-    res.send(await make(f));
-  };
-  r.get('/exports/open-repair-data.csv', guard, csv('open-repair-data', (f) => openRepairDataCsv(ctx, f)));
-  r.get('/exports/records.csv', guard, csv('repair-records', (f) => recordsCsv(ctx, f)));
+  const csv =
+    (name: string, make: (f: ReturnType<typeof filter>) => Promise<string>) => async (req: Request, res: Response) => {
+      const f = filter(req);
+      res.setHeader('Content-Type', 'text/csv; charset=utf-8');
+      res.setHeader(
+        'Content-Disposition',
+        `attachment; filename="${[name, f.groupId ? `group-${f.groupId}` : 'network', f.eventId ? `session-${f.eventId}` : '', f.from ? `from-${f.from}` : '', f.to ? `to-${f.to}` : '', `made-${new Date().toISOString().slice(0, 10)}`].filter(Boolean).join('-')}.csv"`,
+      );
+      res.setHeader('Cache-Control', 'private, no-store');
+      res.send(await make(f));
+    };
+  r.get(
+    '/exports/open-repair-data.csv',
+    guard,
+    csv('open-repair-data', (f) => openRepairDataCsv(ctx, f)),
+  );
+  r.get(
+    '/exports/records.csv',
+    guard,
+    csv('repair-records', (f) => recordsCsv(ctx, f)),
+  );
 
-  r.get('/events/:id/report', requireGroupRole(['organiser'], (req) => eventGroupId(ctx.database.db, Number(req.params.id))), async (req, res) => {
-    res.json(await eventReport(ctx, params(req, z.object({ id: z.coerce.number().int().positive() })).id));
-  });
+  r.get(
+    '/events/:id/report',
+    requireGroupRole(['organiser'], (req) => eventGroupId(ctx.database.db, Number(req.params.id))),
+    async (req, res) => {
+      res.json(await eventReport(ctx, params(req, z.object({ id: z.coerce.number().int().positive() })).id));
+    },
+  );
 
-  r.get('/groups/:groupId/report', requireGroupRole(['organiser'], (req) => Number(req.params.groupId)), async (req, res) => {
-    const f = filter(req);
-    res.json(await rangeReport(ctx, Number(req.params.groupId), f.from, f.to));
-  });
-  r.get('/groups/:groupId/follow-ups', requireGroupRole(['organiser'], (req) => Number(req.params.groupId)), async (req, res) => res.json(await listFollowUps(ctx, Number(req.params.groupId))));
-  r.patch('/follow-ups/:itemId', requireGroupRole(['organiser'], (req) => followUpGroupId(ctx.database.db, Number(req.params.itemId))), async (req, res) => {
-    const b = body(req, followUpUpdate);
-    await setFollowUpStatus(ctx, Number(req.params.itemId), b.status, b.note);
-    res.json({ ok: true });
-  });
+  r.get(
+    '/groups/:groupId/report',
+    requireGroupRole(['organiser'], (req) => Number(req.params.groupId)),
+    async (req, res) => {
+      const f = filter(req);
+      res.json(await rangeReport(ctx, Number(req.params.groupId), f.from, f.to));
+    },
+  );
+  r.get(
+    '/groups/:groupId/follow-ups',
+    requireGroupRole(['organiser'], (req) => Number(req.params.groupId)),
+    async (req, res) => res.json(await listFollowUps(ctx, Number(req.params.groupId))),
+  );
+  r.patch(
+    '/follow-ups/:itemId',
+    requireGroupRole(['organiser'], (req) => followUpGroupId(ctx.database.db, Number(req.params.itemId))),
+    async (req, res) => {
+      const b = body(req, followUpUpdate);
+      await setFollowUpStatus(ctx, Number(req.params.itemId), b.status, b.note);
+      res.json({ ok: true });
+    },
+  );
 
   r.get('/rebook/:token', async (req, res) => {
     res.setHeader('Cache-Control', 'no-store');
     res.json(await rebookView(ctx, String(req.params.token)));
   });
-  r.post('/rebook/:token', async (req, res) => res.status(201).json(await rebook(ctx, String(req.params.token), body(req, rebookSchema).slotId)));
+  r.post('/rebook/:token', async (req, res) =>
+    res.status(201).json(await rebook(ctx, String(req.params.token), body(req, rebookSchema).slotId)),
+  );
 
-  r.get('/admin/impact-settings', requireAdmin, async (_req, res) => res.json({ displacement: await displacement(ctx.database.db) }));
+  r.get('/admin/impact-settings', requireAdmin, async (_req, res) =>
+    res.json({ displacement: await displacement(ctx.database.db) }),
+  );
   r.put('/admin/impact-settings', requireAdmin, async (req, res) => {
     await setDisplacement(ctx, body(req, impactSettingsSchema).displacement);
     res.json({ displacement: await displacement(ctx.database.db) });

@@ -2,7 +2,16 @@ import { and, eq, gte, inArray, isNotNull, isNull, lte, notInArray } from 'drizz
 import { OUTCOME_LABELS } from '../../../../shared/event-day/constants';
 import { impact } from '../../../../shared/impact/index';
 import type { AppContext } from '../../context';
-import { bookingItems, bookings, categories, events, itemOutcomes, repairGroups, shifts, users } from '../../db/schema/index';
+import {
+  bookingItems,
+  bookings,
+  categories,
+  events,
+  itemOutcomes,
+  repairGroups,
+  shifts,
+  users,
+} from '../../db/schema/index';
 import { enqueueMail } from '../../mail/outbox';
 import { composeMail } from '../../mail/templates';
 import { displacement, impactCategories, stats } from './service';
@@ -21,43 +30,96 @@ export async function sendThankYous(ctx: AppContext): Promise<number> {
       .select({ event: events, group: repairGroups })
       .from(events)
       .innerJoin(repairGroups, eq(repairGroups.id, events.groupId))
-      .where(and(inArray(events.status, ['published', 'closed']), isNull(events.thankYouSentAt), lte(events.endsAt, new Date(now - 2 * 3600_000)), gte(events.endsAt, new Date(now - 7 * 86400_000))))
+      .where(
+        and(
+          inArray(events.status, ['published', 'closed']),
+          isNull(events.thankYouSentAt),
+          lte(events.endsAt, new Date(now - 2 * 3600_000)),
+          gte(events.endsAt, new Date(now - 7 * 86400_000)),
+        ),
+      )
       .limit(5)
       .for('update', { skipLocked: true });
     const cats = await impactCategories(tx);
     const d = await displacement(tx);
     for (const { event, group } of due) {
       const items = await tx
-        .select({ itemId: bookingItems.id, bookingId: bookings.id, email: bookings.visitorEmail, name: bookings.visitorName, categoryId: bookingItems.categoryId, categoryName: categories.name, weighedKg: bookingItems.weighedKg, outcome: itemOutcomes.outcome, part: itemOutcomes.partDescription })
+        .select({
+          itemId: bookingItems.id,
+          bookingId: bookings.id,
+          email: bookings.visitorEmail,
+          name: bookings.visitorName,
+          categoryId: bookingItems.categoryId,
+          categoryName: categories.name,
+          weighedKg: bookingItems.weighedKg,
+          outcome: itemOutcomes.outcome,
+          part: itemOutcomes.partDescription,
+        })
         .from(bookingItems)
         .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
         .innerJoin(categories, eq(categories.id, bookingItems.categoryId))
         .leftJoin(itemOutcomes, eq(itemOutcomes.itemId, bookingItems.id))
-        .where(and(eq(bookings.eventId, event.id), eq(bookings.status, 'confirmed'), isNotNull(bookingItems.checkedInAt), notInArray(bookingItems.status, ['no-show', 'withdrawn']), isNotNull(bookings.visitorEmail)));
+        .where(
+          and(
+            eq(bookings.eventId, event.id),
+            eq(bookings.status, 'confirmed'),
+            isNotNull(bookingItems.checkedInAt),
+            notInArray(bookingItems.status, ['no-show', 'withdrawn']),
+            isNotNull(bookings.visitorEmail),
+          ),
+        );
       for (const bookingId of new Set(items.map((i) => i.bookingId))) {
         const mine = items.filter((i) => i.bookingId === bookingId);
-        const t = impact(mine.map((i) => ({ itemId: i.itemId, categoryId: i.categoryId, date: event.startsAt, outcome: i.outcome, weighedKg: i.weighedKg })), cats, d);
-        await enqueueMail(tx, composeMail(mine[0].email!, `Thank you for coming to ${group.name}`, {
-          paragraphs: [
-            `Hello ${mine[0].name.split(' ')[0]},`,
-            `thank you for bringing your ${mine.length === 1 ? 'item' : 'items'} to ${event.title}.`,
-            ...mine.map((i) => `${i.categoryName}: ${i.outcome ? OUTCOME_LABELS[i.outcome] : 'no outcome was recorded'}${i.outcome === 'parts-needed' && i.part ? ` (${i.part}; we have sent you a link to come back)` : ''}.`),
-            ...(t.fixed ? [`Keeping ${t.fixed === 1 ? 'it' : 'them'} in use kept about ${kg(t.kgDiverted)} out of the bin and avoided about ${kg(t.co2eKg)} CO2e of making a new one.`] : []),
-          ],
-          footnote: 'Figures are estimates from average weights and published emission factors; the method is on the group’s impact page.',
-        }));
+        const t = impact(
+          mine.map((i) => ({
+            itemId: i.itemId,
+            categoryId: i.categoryId,
+            date: event.startsAt,
+            outcome: i.outcome,
+            weighedKg: i.weighedKg,
+          })),
+          cats,
+          d,
+        );
+        await enqueueMail(
+          tx,
+          composeMail(mine[0].email!, `Thank you for coming to ${group.name}`, {
+            paragraphs: [
+              `Hello ${mine[0].name.split(' ')[0]},`,
+              `thank you for bringing your ${mine.length === 1 ? 'item' : 'items'} to ${event.title}.`,
+              ...mine.map(
+                (i) =>
+                  `${i.categoryName}: ${i.outcome ? OUTCOME_LABELS[i.outcome] : 'no outcome was recorded'}${i.outcome === 'parts-needed' && i.part ? ` (${i.part}; we have sent you a link to come back)` : ''}.`,
+              ),
+              ...(t.fixed
+                ? [
+                    `Keeping ${t.fixed === 1 ? 'it' : 'them'} in use kept about ${kg(t.kgDiverted)} out of the bin and avoided about ${kg(t.co2eKg)} CO2e of making a new one.`,
+                  ]
+                : []),
+            ],
+            footnote:
+              'Figures are estimates from average weights and published emission factors; the method is on the group’s impact page.',
+          }),
+        );
       }
       const s = await stats(ctx, { eventId: event.id });
-      const team = await tx.select({ email: users.email, name: users.name }).from(shifts).innerJoin(users, eq(users.id, shifts.userId)).where(and(eq(shifts.eventId, event.id), eq(shifts.coming, true)));
+      const team = await tx
+        .select({ email: users.email, name: users.name })
+        .from(shifts)
+        .innerJoin(users, eq(users.id, shifts.userId))
+        .where(and(eq(shifts.eventId, event.id), eq(shifts.coming, true)));
       for (const v of team) {
-        await enqueueMail(tx, composeMail(v.email, `${event.title}: what we did together`, {
-          paragraphs: [
-            `Hello ${v.name.split(' ')[0]},`,
-            `thank you for your time at ${event.title}. Together we saw ${s.items} items: ${s.fixed} fixed, ${s.partsNeeded} waiting for a part, ${s.advice} with advice and ${s.endOfLife} at the end of their life.`,
-            `That kept about ${kg(s.kgDiverted)} out of landfill and avoided about ${kg(s.co2eKg)} CO2e.`,
-          ],
-          action: { label: 'See the session’s report', url: `${ctx.env.publicUrl}/events/${event.id}/report` },
-        }));
+        await enqueueMail(
+          tx,
+          composeMail(v.email, `${event.title}: what we did together`, {
+            paragraphs: [
+              `Hello ${v.name.split(' ')[0]},`,
+              `thank you for your time at ${event.title}. Together we saw ${s.items} items: ${s.fixed} fixed, ${s.partsNeeded} waiting for a part, ${s.advice} with advice and ${s.endOfLife} at the end of their life.`,
+              `That kept about ${kg(s.kgDiverted)} out of landfill and avoided about ${kg(s.co2eKg)} CO2e.`,
+            ],
+            action: { label: 'See the session’s report', url: `${ctx.env.publicUrl}/events/${event.id}/report` },
+          }),
+        );
       }
       await tx.update(events).set({ thankYouSentAt: new Date() }).where(eq(events.id, event.id));
     }

@@ -16,7 +16,13 @@ export function publicRoutes(ctx: AppContext) {
   });
   r.get('/public/groups', async (_req, res) => {
     const rows = await ctx.database.db
-      .select({ id: repairGroups.id, name: repairGroups.name, slug: repairGroups.slug, town: repairGroups.town, description: repairGroups.description })
+      .select({
+        id: repairGroups.id,
+        name: repairGroups.name,
+        slug: repairGroups.slug,
+        town: repairGroups.town,
+        description: repairGroups.description,
+      })
       .from(repairGroups)
       .orderBy(sql`${repairGroups.name}`);
     res.json(rows);

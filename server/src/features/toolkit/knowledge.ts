@@ -19,9 +19,20 @@ export async function syncKnowledge(tx: Tx, row: ItemRow, outcome: Outcome, note
     if (existing) await tx.delete(knowledgeEntries).where(eq(knowledgeEntries.itemId, row.item.id));
     return;
   }
-  const values = { groupId: row.group.id, categoryId: row.item.categoryId, brand: row.item.brand ?? '', model: row.item.model ?? '', outcome, symptom: existing?.writtenUp ? existing.symptom : row.item.fault, notes: notes ?? '', eventDate: row.event.startsAt, updatedAt: new Date() };
+  const values = {
+    groupId: row.group.id,
+    categoryId: row.item.categoryId,
+    brand: row.item.brand ?? '',
+    model: row.item.model ?? '',
+    outcome,
+    symptom: existing?.writtenUp ? existing.symptom : row.item.fault,
+    notes: notes ?? '',
+    eventDate: row.event.startsAt,
+    updatedAt: new Date(),
+  };
   if (existing) await tx.update(knowledgeEntries).set(values).where(eq(knowledgeEntries.itemId, row.item.id));
-  else await tx.insert(knowledgeEntries).values({ itemId: row.item.id, ...values, measured: '', fix: '', faultyPart: '' });
+  else
+    await tx.insert(knowledgeEntries).values({ itemId: row.item.id, ...values, measured: '', fix: '', faultyPart: '' });
 }
 
 /** The groups whose entries this person may read: their own, and every group that shares. */
@@ -31,20 +42,39 @@ function visible(user: SessionUser): SQL | undefined {
   return or(eq(repairGroups.shareKnowledge, true), own.length ? inArray(knowledgeEntries.groupId, own) : sql`FALSE`);
 }
 
-const match = (q: string) => sql<number>`MATCH(${knowledgeEntries.brand}, ${knowledgeEntries.model}, ${knowledgeEntries.symptom}, ${knowledgeEntries.notes}, ${knowledgeEntries.measured}, ${knowledgeEntries.faultyPart}, ${knowledgeEntries.fix}) AGAINST (${q} IN NATURAL LANGUAGE MODE)`;
+const match = (q: string) =>
+  sql<number>`MATCH(${knowledgeEntries.brand}, ${knowledgeEntries.model}, ${knowledgeEntries.symptom}, ${knowledgeEntries.notes}, ${knowledgeEntries.measured}, ${knowledgeEntries.faultyPart}, ${knowledgeEntries.fix}) AGAINST (${q} IN NATURAL LANGUAGE MODE)`;
 
 function select(db: DbOrTx, score: SQL<number>) {
   return db
-    .select({ e: knowledgeEntries, categoryName: categories.name, groupName: repairGroups.name, score: sql<number>`${score}`.as('score') })
+    .select({
+      e: knowledgeEntries,
+      categoryName: categories.name,
+      groupName: repairGroups.name,
+      score: sql<number>`${score}`.as('score'),
+    })
     .from(knowledgeEntries)
     .innerJoin(categories, eq(categories.id, knowledgeEntries.categoryId))
     .innerJoin(repairGroups, eq(repairGroups.id, knowledgeEntries.groupId));
 }
 
 const dto = (r: Awaited<ReturnType<ReturnType<typeof select>['execute']>>[number]) => ({
-  itemId: r.e.itemId, groupName: r.groupName, categoryId: r.e.categoryId, categoryName: r.categoryName, brand: r.e.brand, model: r.e.model,
-  outcome: r.e.outcome, outcomeLabel: OUTCOME_LABELS[r.e.outcome], symptom: r.e.symptom, notes: r.e.notes, measured: r.e.measured, faultyPart: r.e.faultyPart, fix: r.e.fix,
-  writtenUp: Boolean(r.e.writtenUp), eventDate: r.e.eventDate, score: Math.round(Number(r.score) * 100) / 100,
+  itemId: r.e.itemId,
+  groupName: r.groupName,
+  categoryId: r.e.categoryId,
+  categoryName: r.categoryName,
+  brand: r.e.brand,
+  model: r.e.model,
+  outcome: r.e.outcome,
+  outcomeLabel: OUTCOME_LABELS[r.e.outcome],
+  symptom: r.e.symptom,
+  notes: r.e.notes,
+  measured: r.e.measured,
+  faultyPart: r.e.faultyPart,
+  fix: r.e.fix,
+  writtenUp: Boolean(r.e.writtenUp),
+  eventDate: r.e.eventDate,
+  score: Math.round(Number(r.score) * 100) / 100,
 });
 
 /**
@@ -68,7 +98,10 @@ export async function searchKnowledge(ctx: AppContext, user: SessionUser, q: z.o
   // A chosen kind of item narrows the search; brand, model and words rank within it.
   if (q.categoryId) parts.push(eq(knowledgeEntries.categoryId, q.categoryId));
   else if (wanted.length) parts.push(or(...wanted));
-  const rows = await select(db, score).where(and(...parts)).orderBy(desc(sql`score`), desc(knowledgeEntries.writtenUp), desc(knowledgeEntries.eventDate)).limit(30);
+  const rows = await select(db, score)
+    .where(and(...parts))
+    .orderBy(desc(sql`score`), desc(knowledgeEntries.writtenUp), desc(knowledgeEntries.eventDate))
+    .limit(30);
   return withPhotos(db, rows.map(dto));
 }
 
@@ -81,7 +114,13 @@ export async function similarRepairs(ctx: AppContext, itemId: number, user: Sess
     + (CASE WHEN ${row.item.model ?? ''} <> '' AND ${knowledgeEntries.model} = ${row.item.model ?? ''} THEN 10 ELSE 0 END)
     + LEAST(${match(fault)}, 9)`;
   const rows = await select(ctx.database.db, score)
-    .where(and(visible(user), sql`${knowledgeEntries.itemId} <> ${itemId}`, or(eq(knowledgeEntries.categoryId, row.item.categoryId), sql`${match(fault)} > 0`)))
+    .where(
+      and(
+        visible(user),
+        sql`${knowledgeEntries.itemId} <> ${itemId}`,
+        or(eq(knowledgeEntries.categoryId, row.item.categoryId), sql`${match(fault)} > 0`),
+      ),
+    )
     .orderBy(desc(sql`score`), desc(knowledgeEntries.eventDate))
     .limit(5);
   return withPhotos(ctx.database.db, rows.map(dto));
@@ -90,7 +129,18 @@ export async function similarRepairs(ctx: AppContext, itemId: number, user: Sess
 /** The fixer's photos from the bench go with the record (the visitor's own photos stay with the booking). */
 async function withPhotos<T extends { itemId: number }>(db: DbOrTx, entries: T[]) {
   if (!entries.length) return entries.map((e) => ({ ...e, photoIds: [] as number[] }));
-  const photos = await db.select({ id: itemPhotos.id, itemId: itemPhotos.itemId }).from(itemPhotos).where(and(inArray(itemPhotos.itemId, entries.map((e) => e.itemId)), eq(itemPhotos.kind, 'repair')));
+  const photos = await db
+    .select({ id: itemPhotos.id, itemId: itemPhotos.itemId })
+    .from(itemPhotos)
+    .where(
+      and(
+        inArray(
+          itemPhotos.itemId,
+          entries.map((e) => e.itemId),
+        ),
+        eq(itemPhotos.kind, 'repair'),
+      ),
+    );
   return entries.map((e) => ({ ...e, photoIds: photos.filter((p) => p.itemId === e.itemId).map((p) => p.id) }));
 }
 
@@ -99,8 +149,12 @@ export async function writeUp(ctx: AppContext, itemId: number, w: z.output<typeo
   const { db } = ctx.database;
   const [e] = await db.select().from(knowledgeEntries).where(eq(knowledgeEntries.itemId, itemId));
   if (!e) throw notFound('That repair record');
-  if (!hasGroupRole(user, e.groupId, ['fixer', 'organiser'])) throw new HttpError(403, 'forbidden', 'Only the group’s fixers and organisers write up its repairs.');
-  await db.update(knowledgeEntries).set({ ...w, writtenUp: true, authorId: user.id, updatedAt: new Date() }).where(eq(knowledgeEntries.itemId, itemId));
+  if (!hasGroupRole(user, e.groupId, ['fixer', 'organiser']))
+    throw new HttpError(403, 'forbidden', 'Only the group’s fixers and organisers write up its repairs.');
+  await db
+    .update(knowledgeEntries)
+    .set({ ...w, writtenUp: true, authorId: user.id, updatedAt: new Date() })
+    .where(eq(knowledgeEntries.itemId, itemId));
   const [row] = await select(db, sql<number>`0`).where(eq(knowledgeEntries.itemId, itemId));
   return (await withPhotos(db, [dto(row)]))[0];
 }

@@ -2,7 +2,15 @@ import { Router, type NextFunction, type Request, type Response } from 'express'
 import { eq } from 'drizzle-orm';
 import { z } from 'zod';
 import { PART_TYPES } from '../../../../shared/salvage/constants';
-import { knowledgeQuery, salvagePartSchema, salvageUpdateSchema, sharingSchema, substituteQuery, takeSchema, writeupSchema } from '../../../../shared/schemas/toolkit';
+import {
+  knowledgeQuery,
+  salvagePartSchema,
+  salvageUpdateSchema,
+  sharingSchema,
+  substituteQuery,
+  takeSchema,
+  writeupSchema,
+} from '../../../../shared/schemas/toolkit';
 import type { AppContext } from '../../context';
 import { requireGroupRole, unauthenticated } from '../../auth/guards';
 import { repairGroups } from '../../db/schema/index';
@@ -17,7 +25,11 @@ const idParam = z.object({ id: z.coerce.number().int().positive() });
 /** Anyone who volunteers with a group (or an admin) may search the repair notes. */
 const volunteer = (req: Request, _res: Response, next: NextFunction) => {
   if (!req.user) return next(unauthenticated());
-  next(req.user.admin || req.user.roles.length > 0 ? undefined : new HttpError(403, 'forbidden', 'The repair notes are for the groups’ volunteers.'));
+  next(
+    req.user.admin || req.user.roles.length > 0
+      ? undefined
+      : new HttpError(403, 'forbidden', 'The repair notes are for the groups’ volunteers.'),
+  );
 };
 
 export function toolkitRoutes(ctx: AppContext) {
@@ -26,11 +38,22 @@ export function toolkitRoutes(ctx: AppContext) {
   const groupOf = (req: Request) => Number(req.params.groupId);
   const partOf = (req: Request) => partGroupId(db, Number(req.params.id));
 
-  r.get('/knowledge', volunteer, async (req, res) => res.json(await searchKnowledge(ctx, req.user!, query(req, knowledgeQuery))));
-  r.put('/knowledge/:id/writeup', volunteer, async (req, res) => res.json(await writeUp(ctx, params(req, idParam).id, body(req, writeupSchema), req.user!)));
-  r.get('/items/:id/similar', requireGroupRole(['fixer', 'host', 'organiser'], (req) => itemGroupId(db, Number(req.params.id))), async (req, res) => res.json(await similarRepairs(ctx, params(req, idParam).id, req.user!)));
+  r.get('/knowledge', volunteer, async (req, res) =>
+    res.json(await searchKnowledge(ctx, req.user!, query(req, knowledgeQuery))),
+  );
+  r.put('/knowledge/:id/writeup', volunteer, async (req, res) =>
+    res.json(await writeUp(ctx, params(req, idParam).id, body(req, writeupSchema), req.user!)),
+  );
+  r.get(
+    '/items/:id/similar',
+    requireGroupRole(['fixer', 'host', 'organiser'], (req) => itemGroupId(db, Number(req.params.id))),
+    async (req, res) => res.json(await similarRepairs(ctx, params(req, idParam).id, req.user!)),
+  );
   r.get('/groups/:groupId/knowledge-sharing', requireGroupRole(['organiser'], groupOf), async (req, res) => {
-    const [g] = await db.select({ share: repairGroups.shareKnowledge }).from(repairGroups).where(eq(repairGroups.id, groupOf(req)));
+    const [g] = await db
+      .select({ share: repairGroups.shareKnowledge })
+      .from(repairGroups)
+      .where(eq(repairGroups.id, groupOf(req)));
     res.json({ share: Boolean(g?.share) });
   });
   r.put('/groups/:groupId/knowledge-sharing', requireGroupRole(['organiser'], groupOf), async (req, res) => {
@@ -40,15 +63,26 @@ export function toolkitRoutes(ctx: AppContext) {
   });
 
   r.get('/groups/:groupId/salvage', requireGroupRole(['fixer', 'host', 'organiser'], groupOf), async (req, res) => {
-    const q = query(req, z.object({ type: z.enum(PART_TYPES).optional(), q: z.string().trim().max(80).optional(), inStock: z.enum(['1', '0']).optional() }));
+    const q = query(
+      req,
+      z.object({
+        type: z.enum(PART_TYPES).optional(),
+        q: z.string().trim().max(80).optional(),
+        inStock: z.enum(['1', '0']).optional(),
+      }),
+    );
     res.json(await listParts(ctx, groupOf(req), { type: q.type, q: q.q, inStock: q.inStock === '1' }));
   });
-  r.post('/groups/:groupId/salvage', requireGroupRole(['fixer', 'organiser'], groupOf), async (req, res) => res.status(201).json(await addPart(ctx, groupOf(req), body(req, salvagePartSchema), req.user!)));
+  r.post('/groups/:groupId/salvage', requireGroupRole(['fixer', 'organiser'], groupOf), async (req, res) =>
+    res.status(201).json(await addPart(ctx, groupOf(req), body(req, salvagePartSchema), req.user!)),
+  );
   r.get('/groups/:groupId/salvage/substitutes', requireGroupRole(['fixer', 'organiser'], groupOf), async (req, res) => {
     const { type, package: pkg, pinout, ...ratings } = query(req, substituteQuery);
     res.json(await substitutes(ctx, groupOf(req), { type, package: pkg, pinout, ratings }));
   });
-  r.patch('/salvage/:id', requireGroupRole(['fixer', 'organiser'], partOf), async (req, res) => res.json(await updatePart(ctx, params(req, idParam).id, body(req, salvageUpdateSchema))));
+  r.patch('/salvage/:id', requireGroupRole(['fixer', 'organiser'], partOf), async (req, res) =>
+    res.json(await updatePart(ctx, params(req, idParam).id, body(req, salvageUpdateSchema))),
+  );
   r.delete('/salvage/:id', requireGroupRole(['organiser'], partOf), async (req, res) => {
     await removePart(ctx, params(req, idParam).id);
     res.status(204).end();

@@ -12,7 +12,9 @@ const itemParams = z.object({ id: z.coerce.number().int().positive(), itemId: z.
 /** Only the event's organisers run the engine or move items; a fixer reads their own queue. */
 export function triageRoutes(ctx: AppContext) {
   const r = Router();
-  const organiser = requireGroupRole(['organiser'], (req: Request) => eventGroupId(ctx.database.db, Number(req.params.id)));
+  const organiser = requireGroupRole(['organiser'], (req: Request) =>
+    eventGroupId(ctx.database.db, Number(req.params.id)),
+  );
   const id = (req: Request) => params(req, z.object({ id: z.coerce.number().int().positive() })).id;
 
   r.post('/events/:id/triage', organiser, async (req, res) => {
@@ -20,7 +22,9 @@ export function triageRoutes(ctx: AppContext) {
     res.status(201).json(await t.runTriage(ctx, id(req), slotId, req.user!.id));
   });
   r.get('/events/:id/board', organiser, async (req, res) => res.json(await t.board(ctx, id(req))));
-  r.get('/events/:id/triage-runs/:runId', organiser, async (req, res) => res.json(await t.runDetail(ctx, id(req), Number(req.params.runId))));
+  r.get('/events/:id/triage-runs/:runId', organiser, async (req, res) =>
+    res.json(await t.runDetail(ctx, id(req), Number(req.params.runId))),
+  );
   r.put('/events/:id/items/:itemId/placement', organiser, async (req, res) => {
     const p = params(req, itemParams);
     res.json(await t.placeByHand(ctx, p.id, p.itemId, body(req, placementSchema)));

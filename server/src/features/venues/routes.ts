@@ -20,7 +20,8 @@ export function venueRoutes(ctx: AppContext) {
     const organised = user.admin ? null : user.roles.filter((x) => x.role === 'organiser').map((x) => x.groupId);
     if (groupId !== undefined && !hasGroupRole(user, groupId, ['organiser'])) throw forbidden();
     if (groupId === undefined && organised?.length === 0) throw forbidden();
-    const where = groupId !== undefined ? eq(venues.groupId, groupId) : organised ? inArray(venues.groupId, organised) : undefined;
+    const where =
+      groupId !== undefined ? eq(venues.groupId, groupId) : organised ? inArray(venues.groupId, organised) : undefined;
     res.json(await db.select().from(venues).where(where).orderBy(asc(venues.name)));
   });
 
@@ -34,7 +35,14 @@ export function venueRoutes(ctx: AppContext) {
     const groupId = groupIdParam(req);
     const [g] = await db.select().from(repairGroups).where(eq(repairGroups.id, groupId));
     if (!g) throw notFound('That group');
-    res.json({ id: g.id, name: g.name, town: g.town, timeZone: g.timeZone, houseRules: g.houseRules ?? '', excludedCategoryIds: await excludedCategoryIds(db, groupId) });
+    res.json({
+      id: g.id,
+      name: g.name,
+      town: g.town,
+      timeZone: g.timeZone,
+      houseRules: g.houseRules ?? '',
+      excludedCategoryIds: await excludedCategoryIds(db, groupId),
+    });
   });
 
   r.put('/groups/:groupId/settings', requireGroupRole(['organiser'], groupIdParam), async (req, res) => {
@@ -50,7 +58,9 @@ export function venueRoutes(ctx: AppContext) {
         try {
           await tx.insert(groupExclusions).values(ids.map((categoryId) => ({ groupId, categoryId })));
         } catch {
-          throw new HttpError(400, 'invalid', 'Some fields need attention.', { excludedCategoryIds: 'One of the categories does not exist.' });
+          throw new HttpError(400, 'invalid', 'Some fields need attention.', {
+            excludedCategoryIds: 'One of the categories does not exist.',
+          });
         }
       }
     });

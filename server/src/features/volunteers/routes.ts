@@ -1,7 +1,13 @@
 import { and, eq } from 'drizzle-orm';
 import { Router, type Request } from 'express';
 import { z } from 'zod';
-import { askSchema, benchesSchema, myShiftSchema, profileSchema, seatSchema } from '../../../../shared/schemas/volunteers';
+import {
+  askSchema,
+  benchesSchema,
+  myShiftSchema,
+  profileSchema,
+  seatSchema,
+} from '../../../../shared/schemas/volunteers';
 import type { AppContext } from '../../context';
 import { groupIdParam, requireGroupRole, requireUser } from '../../auth/guards';
 import { eventBenches, shifts, venues } from '../../db/schema/index';
@@ -16,37 +22,73 @@ const idParams = z.object({ id: z.coerce.number().int().positive() });
 export function volunteerRoutes(ctx: AppContext) {
   const r = Router();
   const { db } = ctx.database;
-  const ofEvent = (roles: ('organiser' | 'host' | 'fixer')[]) => requireGroupRole(roles, (req: Request) => eventGroupId(db, Number(req.params.id)));
-  const venueGroup = async (req: Request) => (await db.select({ g: venues.groupId }).from(venues).where(eq(venues.id, Number(req.params.venueId))))[0]?.g ?? 0;
+  const ofEvent = (roles: ('organiser' | 'host' | 'fixer')[]) =>
+    requireGroupRole(roles, (req: Request) => eventGroupId(db, Number(req.params.id)));
+  const venueGroup = async (req: Request) =>
+    (
+      await db
+        .select({ g: venues.groupId })
+        .from(venues)
+        .where(eq(venues.id, Number(req.params.venueId)))
+    )[0]?.g ?? 0;
 
   r.get('/me/profile', requireUser, async (req, res) => res.json(await volunteers.getProfile(ctx, req.user!.id)));
-  r.put('/me/profile', requireUser, async (req, res) => res.json(await volunteers.saveProfile(ctx, req.user!.id, body(req, profileSchema))));
+  r.put('/me/profile', requireUser, async (req, res) =>
+    res.json(await volunteers.saveProfile(ctx, req.user!.id, body(req, profileSchema))),
+  );
   r.get('/me/events', requireUser, async (req, res) => res.json(await volunteers.myEvents(ctx, req.user!.id)));
 
-  r.get('/groups/:groupId/skills', requireGroupRole(['organiser'], groupIdParam), async (req, res) => res.json(await volunteers.skillsMatrix(ctx, groupIdParam(req))));
+  r.get('/groups/:groupId/skills', requireGroupRole(['organiser'], groupIdParam), async (req, res) =>
+    res.json(await volunteers.skillsMatrix(ctx, groupIdParam(req))),
+  );
 
   r.put('/events/:id/shifts/me', ofEvent(['organiser', 'host', 'fixer']), async (req, res) => {
     res.json(await volunteers.setMyShift(ctx, params(req, idParams).id, req.user!.id, body(req, myShiftSchema)));
   });
-  r.get('/events/:id/rota', ofEvent(['organiser']), async (req, res) => res.json(await volunteers.rota(ctx, params(req, idParams).id)));
-  r.post('/events/:id/rota/ask', ofEvent(['organiser']), async (req, res) => res.json(await volunteers.askForSkills(ctx, params(req, idParams).id, body(req, askSchema).skills)));
+  r.get('/events/:id/rota', ofEvent(['organiser']), async (req, res) =>
+    res.json(await volunteers.rota(ctx, params(req, idParams).id)),
+  );
+  r.post('/events/:id/rota/ask', ofEvent(['organiser']), async (req, res) =>
+    res.json(await volunteers.askForSkills(ctx, params(req, idParams).id, body(req, askSchema).skills)),
+  );
   /** Seats a coming fixer at one of the event's benches, or lets them move freely (null). */
   r.patch('/events/:id/shifts/:userId', ofEvent(['organiser']), async (req, res) => {
     const { id, userId } = params(req, idParams.extend({ userId: z.coerce.number().int().positive() }));
     const { benchId } = body(req, seatSchema);
     if (benchId !== null) {
-      const [b] = await db.select().from(eventBenches).where(and(eq(eventBenches.id, benchId), eq(eventBenches.eventId, id)));
-      if (!b) throw new HttpError(400, 'invalid', 'Some fields need attention.', { benchId: 'That bench is not set out at this event.' });
+      const [b] = await db
+        .select()
+        .from(eventBenches)
+        .where(and(eq(eventBenches.id, benchId), eq(eventBenches.eventId, id)));
+      if (!b)
+        throw new HttpError(400, 'invalid', 'Some fields need attention.', {
+          benchId: 'That bench is not set out at this event.',
+        });
     }
-    const [s] = await db.select().from(shifts).where(and(eq(shifts.eventId, id), eq(shifts.userId, userId)));
+    const [s] = await db
+      .select()
+      .from(shifts)
+      .where(and(eq(shifts.eventId, id), eq(shifts.userId, userId)));
     if (!s) throw notFound('That shift');
     await db.update(shifts).set({ benchId }).where(eq(shifts.id, s.id));
     res.json({ ok: true });
   });
 
-  r.get('/venues/:venueId/benches', requireGroupRole(['organiser'], venueGroup), async (req, res) => res.json(await venueLayout(db, Number(req.params.venueId))));
-  r.put('/venues/:venueId/benches', requireGroupRole(['organiser'], venueGroup), async (req, res) => res.json(await saveVenueLayout(ctx, Number(req.params.venueId), body(req, z.object({ benches: benchesSchema })).benches)));
-  r.get('/events/:id/benches', ofEvent(['organiser', 'host', 'fixer']), async (req, res) => res.json(await eventLayout(ctx, params(req, idParams).id)));
-  r.put('/events/:id/benches', ofEvent(['organiser']), async (req, res) => res.json(await saveEventLayout(ctx, params(req, idParams).id, body(req, z.object({ benches: benchesSchema })).benches)));
+  r.get('/venues/:venueId/benches', requireGroupRole(['organiser'], venueGroup), async (req, res) =>
+    res.json(await venueLayout(db, Number(req.params.venueId))),
+  );
+  r.put('/venues/:venueId/benches', requireGroupRole(['organiser'], venueGroup), async (req, res) =>
+    res.json(
+      await saveVenueLayout(ctx, Number(req.params.venueId), body(req, z.object({ benches: benchesSchema })).benches),
+    ),
+  );
+  r.get('/events/:id/benches', ofEvent(['organiser', 'host', 'fixer']), async (req, res) =>
+    res.json(await eventLayout(ctx, params(req, idParams).id)),
+  );
+  r.put('/events/:id/benches', ofEvent(['organiser']), async (req, res) =>
+    res.json(
+      await saveEventLayout(ctx, params(req, idParams).id, body(req, z.object({ benches: benchesSchema })).benches),
+    ),
+  );
   return r;
 }

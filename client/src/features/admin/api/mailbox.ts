@@ -20,9 +20,18 @@ export const adminKeys = {
   users: ['admin', 'users'] as const,
 };
 
-export const useMailbox = () => useQuery({ queryKey: adminKeys.mailbox, queryFn: () => api<MailSummary[]>('GET', '/api/admin/mailbox'), refetchInterval: 5000 });
-export const useMail = (id: number) => useQuery({ queryKey: adminKeys.mail(id), queryFn: () => api<MailDetail>('GET', `/api/admin/mailbox/${id}`) });
+export const useMailbox = () =>
+  useQuery({
+    queryKey: adminKeys.mailbox,
+    queryFn: () => api<MailSummary[]>('GET', '/api/admin/mailbox'),
+    refetchInterval: 5000,
+  });
+export const useMail = (id: number) =>
+  useQuery({ queryKey: adminKeys.mail(id), queryFn: () => api<MailDetail>('GET', `/api/admin/mailbox/${id}`) });
 export function useClearMailbox() {
   const qc = useQueryClient();
-  return useMutation({ mutationFn: () => api('DELETE', '/api/admin/mailbox'), onSuccess: () => qc.invalidateQueries({ queryKey: adminKeys.mailbox }) });
+  return useMutation({
+    mutationFn: () => api('DELETE', '/api/admin/mailbox'),
+    onSuccess: () => qc.invalidateQueries({ queryKey: adminKeys.mailbox }),
+  });
 }

@@ -6,5 +6,8 @@ export interface PublicConfig {
   demo: boolean;
   needsSetup: boolean;
 }
-export const configQuery = queryOptions({ queryKey: authKeys.config, queryFn: () => api<PublicConfig>('GET', '/api/public/config') });
+export const configQuery = queryOptions({
+  queryKey: authKeys.config,
+  queryFn: () => api<PublicConfig>('GET', '/api/public/config'),
+});
 export const useConfig = () => useQuery(configQuery);

@@ -29,7 +29,8 @@ export function useSignOut() {
 export function useCreateFirstAdmin() {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (input: { name: string; email: string; password: string; confirm: string }) => api<{ user: SessionUser }>('POST', '/api/auth/first-admin', input),
+    mutationFn: (input: { name: string; email: string; password: string; confirm: string }) =>
+      api<{ user: SessionUser }>('POST', '/api/auth/first-admin', input),
     onSuccess: ({ user }) => {
       forgetCsrfToken();
       qc.setQueryData(authKeys.me, user);

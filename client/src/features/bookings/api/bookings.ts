@@ -15,10 +15,31 @@ export interface BookingView {
   reference: string;
   status: 'confirmed' | 'cancelled';
   visitor: { name: string; email: string; phone: string | null };
-  event: { id: number; title: string; status: string; startsAt: string; endsAt: string; groupName: string; timeZone: string; houseRules: string };
+  event: {
+    id: number;
+    title: string;
+    status: string;
+    startsAt: string;
+    endsAt: string;
+    groupName: string;
+    timeZone: string;
+    houseRules: string;
+  };
   venue: { name: string; address: string; town: string; accessNotes: string };
   slot: { id: number; startsAt: string; endsAt: string };
-  items: { id: number; categoryName: string; brand: string | null; model: string | null; ageYears: number | null; fault: string; mains: boolean; status: ItemStatus; queueNumber: number | null; outcome: Outcome | null; photos: { id: number; width: number; height: number }[] }[];
+  items: {
+    id: number;
+    categoryName: string;
+    brand: string | null;
+    model: string | null;
+    ageYears: number | null;
+    fault: string;
+    mains: boolean;
+    status: ItemStatus;
+    queueNumber: number | null;
+    outcome: Outcome | null;
+    photos: { id: number; width: number; height: number }[];
+  }[];
   qr: string;
 }
 
@@ -28,7 +49,8 @@ export const bookingKeys = { detail: (ref: string) => ['booking', ref] as const 
 export function useCreateBooking(idempotencyKey: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (input: CreateBookingInput) => api<BookingCreated>('POST', '/api/bookings', input, { 'Idempotency-Key': idempotencyKey }),
+    mutationFn: (input: CreateBookingInput) =>
+      api<BookingCreated>('POST', '/api/bookings', input, { 'Idempotency-Key': idempotencyKey }),
     onSettled: () => qc.invalidateQueries({ queryKey: eventKeys.all }),
   });
 }
@@ -37,11 +59,19 @@ export function useCreateBooking(idempotencyKey: string) {
 export function uploadPhotos(reference: string, token: string, itemId: number, files: File[]) {
   const form = new FormData();
   for (const f of files) form.append('photos', f, f.name);
-  return api<{ id: number }[]>('POST', `/api/bookings/${reference}/items/${itemId}/photos?token=${encodeURIComponent(token)}`, form);
+  return api<{ id: number }[]>(
+    'POST',
+    `/api/bookings/${reference}/items/${itemId}/photos?token=${encodeURIComponent(token)}`,
+    form,
+  );
 }
 
 export const useBooking = (reference: string, token: string) =>
-  useQuery({ queryKey: bookingKeys.detail(reference), queryFn: () => api<BookingView>('GET', `/api/bookings/${reference}?token=${encodeURIComponent(token)}`), enabled: Boolean(token) });
+  useQuery({
+    queryKey: bookingKeys.detail(reference),
+    queryFn: () => api<BookingView>('GET', `/api/bookings/${reference}?token=${encodeURIComponent(token)}`),
+    enabled: Boolean(token),
+  });
 
 export function useCancelBooking(reference: string, token: string) {
   const qc = useQueryClient();
@@ -57,7 +87,8 @@ export function useCancelBooking(reference: string, token: string) {
 export function useMoveBooking(reference: string, token: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (slotId: number) => api<BookingView>('POST', `/api/bookings/${reference}/move?token=${encodeURIComponent(token)}`, { slotId }),
+    mutationFn: (slotId: number) =>
+      api<BookingView>('POST', `/api/bookings/${reference}/move?token=${encodeURIComponent(token)}`, { slotId }),
     onSuccess: (b) => {
       qc.setQueryData(bookingKeys.detail(reference), b);
       qc.invalidateQueries({ queryKey: eventKeys.all });
@@ -65,7 +96,11 @@ export function useMoveBooking(reference: string, token: string) {
   });
 }
 
-export const useJoinWaitlist = (eventId: number) => useMutation({ mutationFn: (input: CreateBookingInput) => api<{ position: number }>('POST', `/api/events/${eventId}/waitlist`, input) });
+export const useJoinWaitlist = (eventId: number) =>
+  useMutation({
+    mutationFn: (input: CreateBookingInput) =>
+      api<{ position: number }>('POST', `/api/events/${eventId}/waitlist`, input),
+  });
 
 export interface OfferView {
   status: 'waiting' | 'offered' | 'claimed' | 'expired' | 'withdrawn';
@@ -76,5 +111,7 @@ export interface OfferView {
   venue: { name: string; address: string; town: string };
   slot: { startsAt: string; endsAt: string };
 }
-export const useOffer = (token: string) => useQuery({ queryKey: ['offer', token], queryFn: () => api<OfferView>('GET', `/api/waiting-list/${token}`) });
-export const useClaimOffer = (token: string) => useMutation({ mutationFn: () => api<BookingCreated>('POST', `/api/waiting-list/${token}/claim`) });
+export const useOffer = (token: string) =>
+  useQuery({ queryKey: ['offer', token], queryFn: () => api<OfferView>('GET', `/api/waiting-list/${token}`) });
+export const useClaimOffer = (token: string) =>
+  useMutation({ mutationFn: () => api<BookingCreated>('POST', `/api/waiting-list/${token}/claim`) });

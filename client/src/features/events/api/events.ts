@@ -69,11 +69,26 @@ const qs = (o: Record<string, unknown>) => {
   return s ? `?${s}` : '';
 };
 
-export const useEvents = (f: EventFilters) => useQuery({ queryKey: eventKeys.list(f), queryFn: () => api<EventSummary[]>('GET', `/api/events${qs({ ...f, from: new Date(Date.now() - 86400_000).toISOString() })}`) });
-export const eventQuery = (id: number) => queryOptions({ queryKey: eventKeys.detail(id), queryFn: () => api<EventDetail>('GET', `/api/events/${id}`) });
+export const useEvents = (f: EventFilters) =>
+  useQuery({
+    queryKey: eventKeys.list(f),
+    queryFn: () =>
+      api<EventSummary[]>('GET', `/api/events${qs({ ...f, from: new Date(Date.now() - 86400_000).toISOString() })}`),
+  });
+export const eventQuery = (id: number) =>
+  queryOptions({ queryKey: eventKeys.detail(id), queryFn: () => api<EventDetail>('GET', `/api/events/${id}`) });
 export const useEvent = (id: number) => useQuery({ ...eventQuery(id), enabled: id > 0 });
-export const useGroupEvents = (groupId: number) => useQuery({ queryKey: eventKeys.group(groupId), queryFn: () => api<EventSummary[]>('GET', `/api/groups/${groupId}/events`) });
-export const useCategories = () => useQuery({ queryKey: ['categories'], queryFn: () => api<Category[]>('GET', '/api/categories'), staleTime: 5 * 60_000 });
+export const useGroupEvents = (groupId: number) =>
+  useQuery({
+    queryKey: eventKeys.group(groupId),
+    queryFn: () => api<EventSummary[]>('GET', `/api/groups/${groupId}/events`),
+  });
+export const useCategories = () =>
+  useQuery({
+    queryKey: ['categories'],
+    queryFn: () => api<Category[]>('GET', '/api/categories'),
+    staleTime: 5 * 60_000,
+  });
 
 export function useCreateEvent() {
   const qc = useQueryClient();
@@ -90,7 +105,8 @@ export function useCreateEvent() {
 export function useEventAction(id: number) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: ({ method, path, body }: { method: 'POST' | 'PATCH' | 'DELETE'; path: string; body?: unknown }) => api<EventDetail>(method, `/api/events/${id}${path}`, body),
+    mutationFn: ({ method, path, body }: { method: 'POST' | 'PATCH' | 'DELETE'; path: string; body?: unknown }) =>
+      api<EventDetail>(method, `/api/events/${id}${path}`, body),
     onSuccess: (e) => {
       qc.setQueryData(eventKeys.detail(id), e);
       qc.invalidateQueries({ queryKey: eventKeys.all });

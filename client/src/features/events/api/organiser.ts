@@ -26,10 +26,24 @@ export interface ComingBooking {
 }
 export interface Coming {
   bookings: ComingBooking[];
-  waiting: { id: number; slotId: number; visitorName: string; places: number; status: string; offerExpiresAt: string | null }[];
-  summary: { items: number; bookings: number; mains: number; byCategory: { name: string; count: number }[]; bySkill: { name: string; count: number }[] };
+  waiting: {
+    id: number;
+    slotId: number;
+    visitorName: string;
+    places: number;
+    status: string;
+    offerExpiresAt: string | null;
+  }[];
+  summary: {
+    items: number;
+    bookings: number;
+    mains: number;
+    byCategory: { name: string; count: number }[];
+    bySkill: { name: string; count: number }[];
+  };
 }
-export const useEventBookings = (id: number) => useQuery({ queryKey: eventKeys.bookings(id), queryFn: () => api<Coming>('GET', `/api/events/${id}/bookings`) });
+export const useEventBookings = (id: number) =>
+  useQuery({ queryKey: eventKeys.bookings(id), queryFn: () => api<Coming>('GET', `/api/events/${id}/bookings`) });
 
 export interface Venue {
   id: number;
@@ -39,10 +53,14 @@ export interface Venue {
   town: string;
   accessNotes: string;
 }
-export const useVenues = (groupId: number) => useQuery({ queryKey: ['venues', groupId], queryFn: () => api<Venue[]>('GET', `/api/venues?groupId=${groupId}`) });
+export const useVenues = (groupId: number) =>
+  useQuery({ queryKey: ['venues', groupId], queryFn: () => api<Venue[]>('GET', `/api/venues?groupId=${groupId}`) });
 export function useCreateVenue(groupId: number) {
   const qc = useQueryClient();
-  return useMutation({ mutationFn: (v: Omit<Venue, 'id'>) => api<Venue>('POST', '/api/venues', v), onSuccess: () => qc.invalidateQueries({ queryKey: ['venues', groupId] }) });
+  return useMutation({
+    mutationFn: (v: Omit<Venue, 'id'>) => api<Venue>('POST', '/api/venues', v),
+    onSuccess: () => qc.invalidateQueries({ queryKey: ['venues', groupId] }),
+  });
 }
 
 export interface GroupSettings {
@@ -53,11 +71,16 @@ export interface GroupSettings {
   houseRules: string;
   excludedCategoryIds: number[];
 }
-export const useGroupSettings = (groupId: number) => useQuery({ queryKey: ['group-settings', groupId], queryFn: () => api<GroupSettings>('GET', `/api/groups/${groupId}/settings`) });
+export const useGroupSettings = (groupId: number) =>
+  useQuery({
+    queryKey: ['group-settings', groupId],
+    queryFn: () => api<GroupSettings>('GET', `/api/groups/${groupId}/settings`),
+  });
 export function useSaveGroupSettings(groupId: number) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (s: { houseRules: string; excludedCategoryIds: number[] }) => api('PUT', `/api/groups/${groupId}/settings`, s),
+    mutationFn: (s: { houseRules: string; excludedCategoryIds: number[] }) =>
+      api('PUT', `/api/groups/${groupId}/settings`, s),
     onSuccess: () => {
       qc.invalidateQueries({ queryKey: ['group-settings', groupId] });
       qc.invalidateQueries({ queryKey: eventKeys.all });

@@ -4,19 +4,43 @@ export function PlacesBar({ free, total, label = true }: { free: number; total: 
   const tone = free === 0 ? 'bg-alert' : free / Math.max(total, 1) < 0.25 ? 'bg-copper' : 'bg-sage';
   return (
     <div>
-      <div className="h-2 w-full overflow-hidden rounded-full bg-ink/10" role="meter" aria-valuemin={0} aria-valuemax={total} aria-valuenow={total - free} aria-label="Places taken">
+      <div
+        className="h-2 w-full overflow-hidden rounded-full bg-ink/10"
+        role="meter"
+        aria-valuemin={0}
+        aria-valuemax={total}
+        aria-valuenow={total - free}
+        aria-label="Places taken"
+      >
         <div className={`h-full ${tone}`} style={{ width: `${taken}%` }} />
       </div>
-      {label && <p className={`mt-1 text-sm font-semibold ${free === 0 ? 'text-alert' : 'text-ink-soft'}`}>{free === 0 ? 'Fully booked' : `${free} of ${total} places free`}</p>}
+      {label && (
+        <p className={`mt-1 text-sm font-semibold ${free === 0 ? 'text-alert' : 'text-ink-soft'}`}>
+          {free === 0 ? 'Fully booked' : `${free} of ${total} places free`}
+        </p>
+      )}
     </div>
   );
 }
 
 export function StatusBadge({ status }: { status: string }) {
   const tones: Record<string, string> = {
-    draft: 'bg-ink/10 text-ink', published: 'bg-sage-light text-sage', closed: 'bg-navy/10 text-navy', cancelled: 'bg-alert-light text-alert',
+    draft: 'bg-ink/10 text-ink',
+    published: 'bg-sage-light text-sage',
+    closed: 'bg-navy/10 text-navy',
+    cancelled: 'bg-alert-light text-alert',
     confirmed: 'bg-sage-light text-sage',
   };
-  const labels: Record<string, string> = { draft: 'Draft', published: 'Open for booking', closed: 'Booking closed', cancelled: 'Cancelled', confirmed: 'Booked' };
-  return <span className={`inline-block rounded-full px-2.5 py-0.5 text-xs font-bold ${tones[status] ?? 'bg-ink/10'}`}>{labels[status] ?? status}</span>;
+  const labels: Record<string, string> = {
+    draft: 'Draft',
+    published: 'Open for booking',
+    closed: 'Booking closed',
+    cancelled: 'Cancelled',
+    confirmed: 'Booked',
+  };
+  return (
+    <span className={`inline-block rounded-full px-2.5 py-0.5 text-xs font-bold ${tones[status] ?? 'bg-ink/10'}`}>
+      {labels[status] ?? status}
+    </span>
+  );
 }

@@ -15,7 +15,14 @@ export interface Member {
 }
 
 export const useMembers = (groupId: number) =>
-  useQuery({ queryKey: groupKeys.members(groupId), queryFn: () => api<{ group: { id: number; name: string; town: string }; members: Member[] }>('GET', `/api/groups/${groupId}/members`) });
+  useQuery({
+    queryKey: groupKeys.members(groupId),
+    queryFn: () =>
+      api<{ group: { id: number; name: string; town: string }; members: Member[] }>(
+        'GET',
+        `/api/groups/${groupId}/members`,
+      ),
+  });
 
 export function useApproveMember(groupId: number) {
   const qc = useQueryClient();

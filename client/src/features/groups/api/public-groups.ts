@@ -12,5 +12,8 @@ export const groupKeys = {
   public: ['groups', 'public'] as const,
   members: (groupId: number) => ['groups', groupId, 'members'] as const,
 };
-export const publicGroupsQuery = queryOptions({ queryKey: groupKeys.public, queryFn: () => api<PublicGroup[]>('GET', '/api/public/groups') });
+export const publicGroupsQuery = queryOptions({
+  queryKey: groupKeys.public,
+  queryFn: () => api<PublicGroup[]>('GET', '/api/public/groups'),
+});
 export const usePublicGroups = () => useQuery(publicGroupsQuery);

@@ -40,21 +40,44 @@ export interface QueueItem {
 }
 export interface Matrix {
   skills: string[];
-  volunteers: { userId: number; name: string; email: string; roles: string[]; skills: Record<string, number>; kit: string[]; notes: string }[];
+  volunteers: {
+    userId: number;
+    name: string;
+    email: string;
+    roles: string[];
+    skills: Record<string, number>;
+    kit: string[];
+    notes: string;
+  }[];
 }
 
-export const useProfile = () => useQuery({ queryKey: ['me', 'profile'], queryFn: () => api<Profile>('GET', '/api/me/profile') });
+export const useProfile = () =>
+  useQuery({ queryKey: ['me', 'profile'], queryFn: () => api<Profile>('GET', '/api/me/profile') });
 export function useSaveProfile() {
   const qc = useQueryClient();
-  return useMutation({ mutationFn: (p: ProfileInput) => api<Profile>('PUT', '/api/me/profile', p), onSuccess: (p) => qc.setQueryData(['me', 'profile'], p) });
+  return useMutation({
+    mutationFn: (p: ProfileInput) => api<Profile>('PUT', '/api/me/profile', p),
+    onSuccess: (p) => qc.setQueryData(['me', 'profile'], p),
+  });
 }
-export const useMyEvents = () => useQuery({ queryKey: ['me', 'events'], queryFn: () => api<MyEvent[]>('GET', '/api/me/events') });
+export const useMyEvents = () =>
+  useQuery({ queryKey: ['me', 'events'], queryFn: () => api<MyEvent[]>('GET', '/api/me/events') });
 export function useSetShift() {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: ({ eventId, ...body }: { eventId: number; coming: boolean; startsAt?: string; endsAt?: string }) => api('PUT', `/api/events/${eventId}/shifts/me`, body),
+    mutationFn: ({ eventId, ...body }: { eventId: number; coming: boolean; startsAt?: string; endsAt?: string }) =>
+      api('PUT', `/api/events/${eventId}/shifts/me`, body),
     onSuccess: () => qc.invalidateQueries({ queryKey: ['me', 'events'] }),
   });
 }
-export const useQueue = () => useQuery({ queryKey: ['me', 'queue'], queryFn: () => api<QueueItem[]>('GET', '/api/me/queue'), refetchInterval: 30_000 });
-export const useSkillsMatrix = (groupId: number) => useQuery({ queryKey: ['groups', groupId, 'skills'], queryFn: () => api<Matrix>('GET', `/api/groups/${groupId}/skills`) });
+export const useQueue = () =>
+  useQuery({
+    queryKey: ['me', 'queue'],
+    queryFn: () => api<QueueItem[]>('GET', '/api/me/queue'),
+    refetchInterval: 30_000,
+  });
+export const useSkillsMatrix = (groupId: number) =>
+  useQuery({
+    queryKey: ['groups', groupId, 'skills'],
+    queryFn: () => api<Matrix>('GET', `/api/groups/${groupId}/skills`),
+  });
