@@ -130,6 +130,7 @@ export async function startLocalMailbox(dbUrl: string, port: number): Promise<()
     await db.close();
     throw new Error(
       `The local mailbox could not listen on 127.0.0.1:${port} (${(err as Error).message}). Set SMTP_PORT to a free port.`,
+      { cause: err },
     );
   }
   return async () => {

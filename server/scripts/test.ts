@@ -24,7 +24,7 @@ db.rootSql(
   `CREATE USER 'mendery_test'@'127.0.0.1' IDENTIFIED BY '${password}'; GRANT ALL PRIVILEGES ON *.* TO 'mendery_test'@'127.0.0.1';`,
 );
 
-let code = 1;
+let code: number;
 const cleanup = async () => {
   await db.stop();
   rmSync(dir, { recursive: true, force: true });

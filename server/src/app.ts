@@ -4,22 +4,11 @@ import { csrfSync } from 'csrf-sync';
 import { existsSync } from 'node:fs';
 import path from 'node:path';
 import type { AppContext } from './context';
-import { authRoutes, signIn } from './auth/routes';
+import { authRoutes } from './auth/routes';
 import { loadUser } from './auth/guards';
 import { sessionMiddleware } from './auth/session';
 import { apiNotFound, errorHandler } from './http/errors';
-import { publicRoutes } from './features/public/routes';
-import { groupRoutes } from './features/groups/routes';
-import { adminRoutes } from './features/admin/routes';
-import { catalogueRoutes } from './features/catalogue/routes';
-import { venueRoutes } from './features/venues/routes';
-import { eventRoutes } from './features/events/routes';
-import { bookingRoutes } from './features/bookings/routes';
-import { volunteerRoutes } from './features/volunteers/routes';
-import { triageRoutes } from './features/triage/routes';
-import { eventDayPublicRoutes, eventDayRoutes } from './features/event-day/routes';
-import { impactPublicRoutes, impactRoutes } from './features/impact/routes';
-import { toolkitRoutes } from './features/toolkit/routes';
+import { FEATURES } from './features';
 
 /** Builds the Express app: middleware → routers → 404 → error handler. `listen` is the caller's business. */
 export function createApp(ctx: AppContext) {
@@ -57,9 +46,7 @@ export function createApp(ctx: AppContext) {
   const api = express.Router();
   api.use(express.json({ limit: '100kb' }));
   api.use(express.urlencoded({ extended: false, limit: '100kb' }));
-  api.use(publicRoutes(ctx));
-  api.use(eventDayPublicRoutes(ctx));
-  api.use(impactPublicRoutes(ctx));
+  for (const f of FEATURES) if (f.publicRoutes) api.use(f.publicRoutes(ctx));
 
   const { middleware: session, store } = sessionMiddleware(ctx.env, ctx.database.pool);
   const { csrfSynchronisedProtection, generateToken } = csrfSync({
@@ -70,17 +57,7 @@ export function createApp(ctx: AppContext) {
   api.use(csrfSynchronisedProtection);
   const auth = authRoutes(ctx, (req) => generateToken(req));
   api.use('/auth', auth.router);
-  api.use(groupRoutes(ctx, (req, id) => signIn(req, ctx, id)));
-  api.use(adminRoutes(ctx));
-  api.use(catalogueRoutes(ctx));
-  api.use(venueRoutes(ctx));
-  api.use(eventRoutes(ctx));
-  api.use(bookingRoutes(ctx));
-  api.use(volunteerRoutes(ctx));
-  api.use(triageRoutes(ctx));
-  api.use(eventDayRoutes(ctx));
-  api.use(impactRoutes(ctx));
-  api.use(toolkitRoutes(ctx));
+  for (const f of FEATURES) if (f.routes) api.use(f.routes(ctx));
   api.use(apiNotFound);
   app.use('/api', api);
 

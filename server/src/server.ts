@@ -8,6 +8,8 @@ import { OutboxWorker } from './mail/outbox';
 import { smtpSender, type MailSender } from './mail/transport';
 import { LocalDiskStorage } from './storage/index';
 import { Scheduler } from './jobs/scheduler';
+import { collectHooks } from './core/hooks';
+import { FEATURES } from './features';
 import path from 'node:path';
 
 export interface RunningServer {
@@ -31,8 +33,12 @@ export async function startServer(
     outbox,
     log,
     storage: new LocalDiskStorage(path.resolve(env.DATA_DIR, 'uploads')),
+    hooks: collectHooks(FEATURES),
   };
-  const scheduler = new Scheduler(ctx);
+  const scheduler = new Scheduler(
+    ctx,
+    FEATURES.flatMap((f) => f.jobs ?? []),
+  );
   const { app, close } = createApp(ctx);
   const server = await new Promise<Server>((resolve, reject) => {
     const s = app.listen(env.PORT, env.HOST, () => resolve(s));

@@ -3,7 +3,7 @@ import { and, eq, sql } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { REFERENCE_PATTERN } from '../../shared/booking/reference';
 import { bookingItems, bookings, outbox, slots, waitlistEntries } from '../../server/src/db/schema/index';
-import { expireOffers, sendReminders } from '../../server/src/jobs/scheduler';
+import { expireOffers, sendReminders } from '../../server/src/features/bookings/jobs';
 import type { RunningServer } from '../../server/src/server';
 import { createTestDatabase, type TestDatabase } from '../support/db';
 import { categoryId, makeEvent, makeGroup, visitor } from '../support/factories';
@@ -111,7 +111,7 @@ describe('booking a slot', () => {
 
   it('refuses an excluded category with the reason and a suggestion, and writes nothing', async () => {
     const other = await makeGroup(db.db);
-    const { applyDefaultExclusions } = await import('../../server/src/features/catalogue/service');
+    const { applyDefaultExclusions } = await import('../../server/src/core/screening');
     await applyDefaultExclusions(db.db, other);
     const { slotIds } = await makeEvent(db.db, other, { slotCount: 1 });
     const res = await new Agent(server.url).post(

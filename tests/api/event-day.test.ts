@@ -15,7 +15,7 @@ import { createTestDatabase, type TestDatabase } from '../support/db';
 import { categoryId, makeEvent, makeGroup, makeUser, visitor } from '../support/factories';
 import { Agent } from '../support/http';
 import { startTestServer, TEST_SECRET } from '../support/server';
-import { manageTokenFor } from '../../server/src/features/bookings/service';
+import { manageTokenFor } from '../../server/src/core/links';
 
 let db: TestDatabase;
 let server: RunningServer;

@@ -32,7 +32,7 @@ export class Agent {
       this.cookies.set(pair.slice(0, i), pair.slice(i + 1));
     }
     const text = await res.text();
-    let json: any = null;
+    let json: any;
     try {
       json = text ? JSON.parse(text) : null;
     } catch {

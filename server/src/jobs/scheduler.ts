@@ -1,21 +1,17 @@
-import { and, eq, isNotNull, isNull, lte, sql } from 'drizzle-orm';
 import type { AppContext } from '../context';
-import { bookingItems, bookings, categories, events, slots, waitlistEntries } from '../db/schema/index';
-import { enqueueMail } from '../mail/outbox';
-import { manageTokenFor, manageUrl, offerFreedPlaces } from '../features/bookings/service';
-import { reminderMail } from '../features/bookings/mails';
-import { bookingWithContext } from '../features/bookings/queries';
-import { sendFollowUpReminders } from '../features/impact/follow-ups';
-import { sendThankYous } from '../features/impact/thanks';
+import type { Job } from '../core/feature';
 
 /**
- * Timed work: day-before reminders, waiting-list offers that ran out, part follow-up reminders and thank-you mails. Each job claims its rows with
- * FOR UPDATE SKIP LOCKED, so every app process can run the scheduler.
+ * Timed work the features registered (reminders, offers that ran out, part follow-ups, thank-you mails), run in
+ * turn on one beat. Each job claims its rows with FOR UPDATE SKIP LOCKED, so every app process can run it.
  */
 export class Scheduler {
   private timer: NodeJS.Timeout | null = null;
   private running: Promise<void> | null = null;
-  constructor(private ctx: AppContext) {}
+  constructor(
+    private ctx: AppContext,
+    private jobs: Job[],
+  ) {}
 
   start(pollMs: number) {
     if (pollMs <= 0) return;
@@ -26,13 +22,12 @@ export class Scheduler {
   async tick() {
     if (this.running) return this.running;
     this.running = (async () => {
-      try {
-        await expireOffers(this.ctx);
-        await sendReminders(this.ctx);
-        await sendFollowUpReminders(this.ctx);
-        await sendThankYous(this.ctx);
-      } catch (err) {
-        this.ctx.log(`scheduled job failed: ${(err as Error).message}`);
+      for (const job of this.jobs) {
+        try {
+          await job.run(this.ctx);
+        } catch (err) {
+          this.ctx.log(`scheduled job "${job.name}" failed: ${(err as Error).message}`);
+        }
       }
     })().finally(() => (this.running = null));
     return this.running;
@@ -42,76 +37,4 @@ export class Scheduler {
     if (this.timer) clearInterval(this.timer);
     await this.running;
   }
-}
-
-/** Offers not taken in time release their places and pass them to the next in line. */
-export async function expireOffers(ctx: AppContext): Promise<number> {
-  return ctx.database.db.transaction(async (tx) => {
-    const due = await tx
-      .select()
-      .from(waitlistEntries)
-      .where(and(eq(waitlistEntries.status, 'offered'), lte(waitlistEntries.offerExpiresAt, sql`NOW(3)`)))
-      .limit(50)
-      .for('update', { skipLocked: true });
-    for (const w of due) {
-      await tx.update(waitlistEntries).set({ status: 'expired' }).where(eq(waitlistEntries.id, w.id));
-      await tx
-        .update(slots)
-        .set({ held: sql`GREATEST(${slots.held} - ${w.places}, 0)` })
-        .where(eq(slots.id, w.slotId));
-    }
-    for (const slotId of new Set(due.map((w) => w.slotId))) await offerFreedPlaces(ctx, tx, slotId);
-    if (due.length) ctx.outbox.kick();
-    return due.length;
-  });
-}
-
-/**
- * The reminder goes out within the 24 hours before the booked slot, once, and only to bookings made before that
- * window opened (someone who booked this morning just had the confirmation).
- */
-export async function sendReminders(ctx: AppContext): Promise<number> {
-  const sent = await ctx.database.db.transaction(async (tx) => {
-    const due = await bookingWithContext(tx)
-      .where(
-        and(
-          eq(bookings.status, 'confirmed'),
-          isNull(bookings.reminderSentAt),
-          isNotNull(bookings.visitorEmail),
-          eq(events.status, 'published'),
-          sql`${slots.startsAt} > NOW(3)`,
-          sql`${slots.startsAt} <= NOW(3) + INTERVAL 24 HOUR`,
-          sql`${bookings.createdAt} < ${slots.startsAt} - INTERVAL 24 HOUR`,
-        ),
-      )
-      .limit(200)
-      .for('update', { skipLocked: true });
-    for (const r of due) {
-      const items = await tx
-        .select({ name: categories.name, brand: bookingItems.brand, model: bookingItems.model })
-        .from(bookingItems)
-        .innerJoin(categories, eq(categories.id, bookingItems.categoryId))
-        .where(eq(bookingItems.bookingId, r.booking.id));
-      await enqueueMail(
-        tx,
-        reminderMail({
-          reference: r.booking.reference,
-          visitorName: r.booking.visitorName,
-          visitorEmail: r.booking.visitorEmail!,
-          eventTitle: r.event.title,
-          groupName: r.group.name,
-          timeZone: r.group.timeZone,
-          slotStartsAt: r.slot.startsAt,
-          slotEndsAt: r.slot.endsAt,
-          venue: r.venue,
-          items: items.map((i) => [i.name, [i.brand, i.model].filter(Boolean).join(' ')].filter(Boolean).join(' — ')),
-          manageUrl: manageUrl(ctx, r.booking.reference, manageTokenFor(ctx, r.booking.reference)),
-        }),
-      );
-      await tx.update(bookings).set({ reminderSentAt: new Date() }).where(eq(bookings.id, r.booking.id));
-    }
-    return due.length;
-  });
-  if (sent) ctx.outbox.kick();
-  return sent;
 }

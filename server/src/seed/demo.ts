@@ -23,7 +23,7 @@ import {
   volunteerProfiles,
   volunteerSkills,
 } from '../db/schema/index';
-import { applyDefaultExclusions } from '../features/catalogue/service';
+import { applyDefaultExclusions } from '../core/screening';
 import { ensureCategories } from './categories';
 import { seedToday } from './demo-today';
 import { seedHistory } from './demo-history';

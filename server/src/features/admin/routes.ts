@@ -7,7 +7,7 @@ import { requireAdmin } from '../../auth/guards';
 import { mailboxMessages, memberships, outbox, repairGroups, users } from '../../db/schema/index';
 import { HttpError, notFound } from '../../http/errors';
 import { body, params } from '../../http/validate';
-import { applyDefaultExclusions } from '../catalogue/service';
+import { applyDefaultExclusions } from '../../core/screening';
 
 const idParam = z.object({ id: z.coerce.number().int().positive() });
 const slugify = (s: string) =>

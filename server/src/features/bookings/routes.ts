@@ -3,15 +3,17 @@ import { Router, type NextFunction, type Request, type Response } from 'express'
 import { z } from 'zod';
 import { normaliseReference } from '../../../../shared/booking/reference';
 import { createBookingSchema, moveBookingSchema, waitlistSchema } from '../../../../shared/schemas/bookings';
+import { rebookSchema } from '../../../../shared/schemas/impact';
 import type { AppContext } from '../../context';
 import { hasGroupRole, requireGroupRole } from '../../auth/guards';
 import { bookingItems, bookings, events, itemPhotos, repairGroups } from '../../db/schema/index';
 import { HttpError, notFound } from '../../http/errors';
 import { body, params } from '../../http/validate';
-import { eventGroupId } from '../events/service';
+import { eventGroupId } from '../../core/events';
 import { eventBookings } from './organiser';
-import { multerError, photoUpload, savePhotos } from './photos';
+import { multerError, photoUpload, savePhotos } from '../../core/photos';
 import * as booking from './service';
+import { rebook, rebookView } from './return-visit';
 
 const tokenQuery = z.object({ token: z.string().max(200).optional() });
 const idempotencyKey = z
@@ -129,6 +131,13 @@ export function bookingRoutes(ctx: AppContext) {
     async (req, res) => {
       res.json(await eventBookings(ctx, Number(req.params.id)));
     },
+  );
+  r.get('/rebook/:token', async (req, res) => {
+    res.setHeader('Cache-Control', 'no-store');
+    res.json(await rebookView(ctx, String(req.params.token)));
+  });
+  r.post('/rebook/:token', async (req, res) =>
+    res.status(201).json(await rebook(ctx, String(req.params.token), body(req, rebookSchema).slotId)),
   );
   return r;
 }

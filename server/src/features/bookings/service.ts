@@ -1,8 +1,7 @@
-import { createHmac, randomBytes, timingSafeEqual } from 'node:crypto';
+import { randomBytes, timingSafeEqual } from 'node:crypto';
 import { and, asc, eq, inArray, sql } from 'drizzle-orm';
 import type { z } from 'zod';
 import { formatReference } from '../../../../shared/booking/reference';
-import { screenItem } from '../../../../shared/booking/screening';
 import type { createBookingSchema } from '../../../../shared/schemas/bookings';
 import type { AppContext } from '../../context';
 import type { DbOrTx, Tx } from '../../db/client';
@@ -24,7 +23,8 @@ import {
 import { newToken, sha256 } from '../../auth/tokens';
 import { HttpError, notFound } from '../../http/errors';
 import { enqueueMail } from '../../mail/outbox';
-import { excludedCategoryIds } from '../catalogue/service';
+import { manageTokenFor, manageUrl } from '../../core/links';
+import { screenItems } from '../../core/screening';
 import { bookingWithContext, slotWithContext } from './queries';
 import {
   bookingQrText,
@@ -57,32 +57,6 @@ async function bookableSlot(tx: DbOrTx, slotId: number, opts: { lock?: boolean }
   if (row.slot.endsAt.getTime() <= Date.now())
     throw new HttpError(409, 'not-bookable', 'That time has already passed.');
   return row;
-}
-
-/** Refuses the whole booking when any item is one the group does not take, saying why for each. */
-export async function screen(tx: DbOrTx, groupId: number, groupName: string, items: Item[]) {
-  const ids = [...new Set(items.map((i) => i.categoryId))];
-  const cats = await tx.select().from(categories).where(inArray(categories.id, ids));
-  const byId = new Map(cats.map((c) => [c.id, c]));
-  const excluded = await excludedCategoryIds(tx, groupId);
-  const fields: Record<string, string> = {};
-  items.forEach((item, i) => {
-    const c = byId.get(item.categoryId);
-    if (!c) {
-      fields[`items.${i}.categoryId`] = 'Choose one of the listed kinds of item.';
-      return;
-    }
-    const r = screenItem(c, item.hazards ?? [], { name: groupName, excludedCategoryIds: excluded });
-    if (!r.ok) fields[`items.${i}.${item.hazards?.length ? 'hazards' : 'categoryId'}`] = `${r.reason} ${r.suggestion}`;
-  });
-  if (Object.keys(fields).length)
-    throw new HttpError(
-      422,
-      'item-refused',
-      'We cannot take one of the items. The reason is shown next to it.',
-      fields,
-    );
-  return byId;
 }
 
 /** Takes `n` places atomically: the UPDATE matches only while booked + held + n fits the capacity. */
@@ -175,15 +149,6 @@ function facts(
   };
 }
 
-/**
- * The secret in a booking's manage link, derived from the server's secret so any later mail (a reminder) can
- * carry the same link; only its hash is stored.
- */
-export const manageTokenFor = (ctx: AppContext, reference: string) =>
-  createHmac('sha256', ctx.env.SESSION_SECRET).update(`manage-booking:${reference}`).digest('base64url');
-
-export const manageUrl = (ctx: AppContext, reference: string, token: string) =>
-  `${ctx.env.publicUrl}/bookings/${reference}?token=${token}`;
 const itemLabel = (cat: { name: string } | undefined, i: Item) =>
   [cat?.name ?? 'Item', [i.brand, i.model].filter(Boolean).join(' ')].filter(Boolean).join(' — ');
 
@@ -209,7 +174,7 @@ async function insertBooking(
   input: Pick<BookingInput, 'visitor' | 'items'>,
   fromHeld: boolean,
   prepared: Prepared,
-  cats: Awaited<ReturnType<typeof screen>>,
+  cats: Awaited<ReturnType<typeof screenItems>>,
   returnOfItemId?: number,
 ) {
   await takePlaces(tx, row.slot.id, input.items.length, fromHeld, returnOfItemId !== undefined);
@@ -287,7 +252,7 @@ export async function createReturnBooking(
   inTx: (tx: Tx, result: BookingResult) => Promise<void>,
 ) {
   const row = await bookableSlot(ctx.database.db, input.slotId);
-  const cats = await screen(ctx.database.db, row.group.id, row.group.name, input.items);
+  const cats = await screenItems(ctx.database.db, row.group, input.items);
   for (let attempt = 0; ; attempt++) {
     const prepared = prepareBooking(ctx);
     try {
@@ -313,7 +278,7 @@ export async function createBooking(
 ): Promise<{ status: number; body: unknown; replayed: boolean }> {
   const key = idempotencyKey ? `booking:${idempotencyKey}` : null;
   const row = await bookableSlot(ctx.database.db, input.slotId);
-  const cats = await screen(ctx.database.db, row.group.id, row.group.name, input.items);
+  const cats = await screenItems(ctx.database.db, row.group, input.items);
   for (let attempt = 0; ; attempt++) {
     const prepared = prepareBooking(ctx);
     try {
@@ -583,7 +548,7 @@ export async function joinWaitlist(ctx: AppContext, eventId: number, input: Book
     const row = await bookableSlot(tx, input.slotId, { lock: true });
     if (row.event.id !== eventId)
       throw new HttpError(400, 'invalid', 'Some fields need attention.', { slotId: 'Choose a time of this event.' });
-    await screen(tx, row.group.id, row.group.name, input.items);
+    await screenItems(tx, row.group, input.items);
     if (row.slot.capacity - row.slot.booked - row.slot.held >= input.items.length)
       throw new HttpError(409, 'places-free', 'This time still has free places: book it directly.');
     await tx.insert(waitlistEntries).values({
@@ -664,7 +629,7 @@ export async function claimOffer(ctx: AppContext, token: string) {
       if (w.status !== 'offered' || w.offerExpiresAt!.getTime() < Date.now())
         throw new HttpError(410, 'offer-expired', 'This offer has run out and the place has gone to the next person.');
       const row = await bookableSlot(tx, w.slotId);
-      const cats = await screen(tx, row.group.id, row.group.name, (w.request as BookingInput).items);
+      const cats = await screenItems(tx, row.group, (w.request as BookingInput).items);
       const booking = await insertBooking(ctx, tx, row, w.request as BookingInput, true, prepared, cats);
       await tx
         .update(waitlistEntries)

@@ -20,11 +20,10 @@ import {
 } from '../../db/schema/index';
 import { sha256 } from '../../auth/tokens';
 import { HttpError, notFound } from '../../http/errors';
-import { manageTokenFor, screen } from '../bookings/service';
-import { runTriage } from '../triage/service';
+import { runHooks } from '../../core/hooks';
+import { manageTokenFor } from '../../core/links';
+import { screenItems } from '../../core/screening';
 import { newTagCodes, nextQueueNumbers, setStatus } from './items';
-import { refreshCells } from '../impact/cells';
-import { markCameBack } from '../impact/follow-ups';
 
 /** The desk opens 12 hours before the event starts and closes 12 hours after it ends. */
 const DESK_OPENS_H = 12;
@@ -101,10 +100,9 @@ export async function checkIn(
       if (corrected.length) {
         const [g] = await tx.select().from(repairGroups).where(eq(repairGroups.id, e.groupId));
         try {
-          await screen(
+          await screenItems(
             tx,
-            g.id,
-            g.name,
+            g,
             corrected.map(({ w }) => ({
               categoryId: w.categoryId!,
               brand: undefined,
@@ -192,14 +190,10 @@ export async function checkIn(
         .from(bookingItems)
         .where(eq(bookingItems.bookingId, b.id))
         .orderBy(asc(bookingItems.position));
-      await refreshCells(
-        tx,
-        after.map((i) => i.id),
-      );
-      await markCameBack(
-        tx,
-        after.filter((i) => i.status !== 'no-show' && i.status !== 'withdrawn').map((i) => i.id),
-      );
+      await runHooks(ctx.hooks.itemsCheckedIn, tx, {
+        itemIds: after.map((i) => i.id),
+        arrivedIds: after.filter((i) => i.status !== 'no-show' && i.status !== 'withdrawn').map((i) => i.id),
+      });
       return { eventId: e.id, slotId: b.slotId, items: after as Issued[] };
     }),
   );
@@ -235,7 +229,7 @@ export async function walkIn(
     });
   slot ??= eventSlots[0];
   if (!slot) throw new HttpError(409, 'no-slots', 'This event has no times to queue in.');
-  const cats = await screen(db, e.group.id, e.group.name, input.items);
+  const cats = await screenItems(db, e.group, input.items);
   for (let attempt = 0; ; attempt++) {
     const reference = formatReference(randomBytes(6));
     try {
@@ -286,10 +280,7 @@ export async function walkIn(
             user.id,
             'walk-in',
           );
-          await refreshCells(
-            tx,
-            ids.map((x) => x.id),
-          );
+          await runHooks(ctx.hooks.itemsCheckedIn, tx, { itemIds: ids.map((x) => x.id), arrivedIds: [] });
           return { reference, ids: ids.map((x) => x.id) };
         }),
       );
@@ -331,7 +322,7 @@ async function currentStatus(ctx: AppContext, ids: number[]) {
  */
 export async function replan(ctx: AppContext, eventId: number, slotId: number, userId: number) {
   try {
-    await runTriage(ctx, eventId, slotId, userId);
+    await runHooks(ctx.hooks.arrivalsChanged, ctx, { eventId, slotId, userId });
   } catch (err) {
     ctx.log(`replan after check-in failed: ${(err as Error).message}`);
   }

@@ -18,7 +18,7 @@ import {
   users,
 } from '../../db/schema/index';
 import { notFound } from '../../http/errors';
-import { eventLayout } from '../triage/benches';
+import { eventLayout } from '../../core/benches';
 
 /** Every item of the event that reached the desk, with its slot, plan and outcome: what the hall views are made of. */
 async function hallItems(ctx: AppContext, eventId: number) {
@@ -104,7 +104,7 @@ export async function hallQueue(ctx: AppContext, eventId: number) {
   const [items, fixers, benches] = await Promise.all([
     hallItems(ctx, eventId),
     fixersNow(ctx, eventId, now),
-    eventLayout(ctx, eventId),
+    eventLayout(ctx.database.db, eventId),
   ]);
   const benchName = new Map(benches.map((b) => [b.id, b.name]));
   const { order, waits } = waitsFor(items, fixers, now.getTime());
@@ -136,7 +136,7 @@ export async function liveView(ctx: AppContext, eventId: number) {
   const [items, fixers, benches] = await Promise.all([
     hallItems(ctx, eventId),
     fixersNow(ctx, eventId, now),
-    eventLayout(ctx, eventId),
+    eventLayout(ctx.database.db, eventId),
   ]);
   const allBooked = await ctx.database.db
     .select({ status: bookingItems.status })

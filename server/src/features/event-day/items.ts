@@ -11,64 +11,20 @@ import { cautionsFor, HEATING_CATEGORY_SLUGS, LOCAL_RULES_PREVAIL } from '../../
 import { SAFETY_SOURCE } from '../../../../shared/safety/limits';
 import type { SessionUser } from '../../../../shared/schemas/auth';
 import type { AppContext } from '../../context';
-import type { DbOrTx, Tx } from '../../db/client';
+import type { Tx } from '../../db/client';
 import {
   bookingItems,
-  bookings,
-  categories,
   eventBenches,
   events,
   itemAssignments,
   itemOutcomes,
   itemPhotos,
   itemStatusChanges,
-  repairGroups,
   safetyChecks,
-  slots,
   users,
 } from '../../db/schema/index';
 import { hasGroupRole } from '../../auth/guards';
-import { notFound } from '../../http/errors';
-import { partsUsed } from '../toolkit/salvage';
-
-/** One item with its booking, slot, event, group and category. */
-export function itemWithContext(db: DbOrTx) {
-  return db
-    .select({
-      item: bookingItems,
-      booking: bookings,
-      slot: slots,
-      event: events,
-      group: repairGroups,
-      category: categories,
-    })
-    .from(bookingItems)
-    .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
-    .innerJoin(slots, eq(slots.id, bookings.slotId))
-    .innerJoin(events, eq(events.id, bookings.eventId))
-    .innerJoin(repairGroups, eq(repairGroups.id, events.groupId))
-    .innerJoin(categories, eq(categories.id, bookingItems.categoryId));
-}
-
-export async function loadItem(db: DbOrTx, itemId: number, opts: { lock?: boolean } = {}) {
-  const q = itemWithContext(db).where(eq(bookingItems.id, itemId));
-  const [row] = opts.lock ? await q.for('update') : await q;
-  if (!row) throw notFound('That item');
-  return row;
-}
-export type ItemRow = Awaited<ReturnType<typeof loadItem>>;
-
-/** The group of an item, for the role guards (0 when there is no such item, which the guards refuse). */
-export async function itemGroupId(db: DbOrTx, itemId: number): Promise<number> {
-  if (!Number.isInteger(itemId) || itemId <= 0) return 0;
-  const [r] = await db
-    .select({ groupId: events.groupId })
-    .from(bookingItems)
-    .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
-    .innerJoin(events, eq(events.id, bookings.eventId))
-    .where(eq(bookingItems.id, itemId));
-  return r?.groupId ?? 0;
-}
+import { loadItem, partsUsed } from '../../core/items';
 
 /** Moves items to a status, writing one history row each with the time and who did it. */
 export async function setStatus(

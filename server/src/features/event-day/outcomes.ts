@@ -10,11 +10,10 @@ import { withDeadlockRetry } from '../../db/retry';
 import { itemAssignments, itemOutcomes, safetyChecks, shifts } from '../../db/schema/index';
 import { hasGroupRole } from '../../auth/guards';
 import { HttpError } from '../../http/errors';
-import { eventLayout } from '../triage/benches';
-import { isHeating, loadItem, setStatus, type ItemRow } from './items';
-import { refreshCells } from '../impact/cells';
-import { afterOutcome } from '../impact/follow-ups';
-import { syncKnowledge } from '../toolkit/knowledge';
+import { eventLayout } from '../../core/benches';
+import { runHooks } from '../../core/hooks';
+import { isHeating, setStatus } from './items';
+import { loadItem, type ItemRow } from '../../core/items';
 
 const forbidden = (message: string) => new HttpError(403, 'forbidden', message);
 
@@ -58,7 +57,7 @@ export async function startRepair(ctx: AppContext, itemId: number, user: Session
           .select({ benchId: shifts.benchId })
           .from(shifts)
           .where(and(eq(shifts.eventId, row.event.id), eq(shifts.userId, fixerId)));
-        const benches = await eventLayout(ctx, row.event.id);
+        const benches = await eventLayout(tx, row.event.id);
         benchId =
           shift?.benchId ??
           benches.find((b) => row.category.equipment.every((q) => b.equipment.includes(q)))?.id ??
@@ -220,7 +219,7 @@ export async function recordOutcome(
         .onDuplicateKeyUpdate({ set: values });
       const [a] = await tx.select().from(itemAssignments).where(eq(itemAssignments.itemId, itemId));
       if (!a && hasGroupRole(user, row.group.id, ['fixer'])) {
-        const benches = await eventLayout(ctx, row.event.id);
+        const benches = await eventLayout(tx, row.event.id);
         if (benches[0])
           await tx.insert(itemAssignments).values({
             itemId,
@@ -238,9 +237,12 @@ export async function recordOutcome(
         user.id,
         `outcome: ${input.outcome}`,
       );
-      await refreshCells(tx, [itemId]);
-      await afterOutcome(ctx, tx, row, input.outcome);
-      await syncKnowledge(tx, row, input.outcome, input.notes);
+      await runHooks(ctx.hooks.outcomeRecorded, tx, {
+        ctx,
+        item: row,
+        outcome: input.outcome,
+        notes: input.notes ?? null,
+      });
       return { ok: true };
     }),
   );

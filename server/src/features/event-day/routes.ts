@@ -9,11 +9,12 @@ import { eq } from 'drizzle-orm';
 import { bookings, events } from '../../db/schema/index';
 import { notFound } from '../../http/errors';
 import { body, params, query } from '../../http/validate';
-import { eventGroupId } from '../events/service';
+import { eventGroupId } from '../../core/events';
 import { checkIn, deskEvents, deskView, walkIn } from './desk';
 import { hallQueue, liveView, publicTag, tags } from './hall';
-import { itemGroupId, itemView, loadItem } from './items';
-import { multerError, photoUpload, savePhotos } from '../bookings/photos';
+import { itemView } from './items';
+import { itemGroupId, loadItem } from '../../core/items';
+import { multerError, photoUpload, savePhotos } from '../../core/photos';
 import { assertMayRecord, recordOutcome, recordSafetyCheck, startRepair } from './outcomes';
 
 const idParam = z.object({ id: z.coerce.number().int().positive() });

@@ -10,6 +10,7 @@ import type { AppContext } from '../../context';
 import { groupIdInBody, groupIdParam, hasGroupRole, requireGroupRole } from '../../auth/guards';
 import { body, params, query } from '../../http/validate';
 import * as events from './service';
+import { eventGroupId } from '../../core/events';
 
 const idParams = z.object({ id: z.coerce.number().int().positive() });
 const slotParams = idParams.extend({ slotId: z.coerce.number().int().positive() });
@@ -18,7 +19,7 @@ export function eventRoutes(ctx: AppContext) {
   const r = Router();
   const { db } = ctx.database;
   const eventId = (req: Request) => Number(req.params.id);
-  const organiserOfEvent = requireGroupRole(['organiser'], (req) => events.eventGroupId(db, eventId(req)));
+  const organiserOfEvent = requireGroupRole(['organiser'], (req) => eventGroupId(db, eventId(req)));
 
   r.get('/events', async (req, res) => {
     res.json(await events.listPublicEvents(ctx, query(req, eventListQuery)));
@@ -32,7 +33,7 @@ export function eventRoutes(ctx: AppContext) {
   /** Published events for everyone; drafts only for the group's organisers. */
   r.get('/events/:id', async (req, res) => {
     const { id } = params(req, idParams);
-    const groupId = await events.eventGroupId(db, id);
+    const groupId = await eventGroupId(db, id);
     const includeDrafts = hasGroupRole(req.user, groupId, ['organiser']);
     res.json(await events.getEvent(ctx, id, { includeDrafts }));
   });

@@ -9,9 +9,9 @@ import type { DbOrTx } from '../../db/client';
 import { bookings, events, groupExclusions, repairGroups, slots, venues, waitlistEntries } from '../../db/schema/index';
 import { HttpError, notFound } from '../../http/errors';
 import { enqueueMail } from '../../mail/outbox';
-import { refreshEventCells } from '../impact/cells';
+import { runHooks } from '../../core/hooks';
 import { composeMail } from '../../mail/templates';
-import { excludedCategoryIds } from '../catalogue/service';
+import { excludedCategoryIds } from '../../core/screening';
 
 const conflict = (code: string, message: string) => new HttpError(409, code, message);
 
@@ -21,12 +21,6 @@ function slotPlans(startsAt: Date, endsAt: Date, slotMinutes: number, capacity: 
   } catch (err) {
     throw new HttpError(400, 'invalid', (err as Error).message, { slotMinutes: (err as Error).message });
   }
-}
-
-export async function eventGroupId(db: DbOrTx, eventId: number): Promise<number> {
-  if (!Number.isInteger(eventId) || eventId <= 0) return 0;
-  const [row] = await db.select({ groupId: events.groupId }).from(events).where(eq(events.id, eventId));
-  return row?.groupId ?? 0;
 }
 
 const eventColumns = {
@@ -192,7 +186,7 @@ export async function changeStatus(ctx: AppContext, id: number, action: keyof ty
         .set({ status: 'cancelled', cancelledAt: new Date() })
         .where(and(eq(bookings.eventId, id), eq(bookings.status, 'confirmed')));
       // A cancelled session counts nothing in the statistics, even if the desk had started.
-      await refreshEventCells(tx, [id]);
+      await runHooks(ctx.hooks.eventsCancelled, tx, { eventIds: [id] });
       // Nothing is booked or held at a cancelled event.
       await tx.update(slots).set({ booked: 0, held: 0 }).where(eq(slots.eventId, id));
       await tx

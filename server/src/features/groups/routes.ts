@@ -1,10 +1,13 @@
+import { sql } from 'drizzle-orm';
 import { Router } from 'express';
+import { repairGroups } from '../../db/schema/index';
 import { z } from 'zod';
 import type { AppContext } from '../../context';
 import { groupIdParam, requireGroupRole } from '../../auth/guards';
 import { body, params } from '../../http/validate';
 import { inviteSchema, inviteSignupSchema } from '../../../../shared/schemas/auth';
 import { requireUser } from '../../auth/guards';
+import { signIn } from '../../auth/routes';
 import { HttpError } from '../../http/errors';
 import * as invites from './invites';
 import * as groups from './service';
@@ -14,10 +17,26 @@ const memberParams = z.object({
   membershipId: z.coerce.number().int().positive(),
 });
 
-export function groupRoutes(
-  ctx: AppContext,
-  signIn: (req: import('express').Request, userId: number) => Promise<unknown>,
-) {
+/** The public list of groups: no session is created for it. */
+export function groupPublicRoutes(ctx: AppContext) {
+  const r = Router();
+  r.get('/public/groups', async (_req, res) => {
+    const rows = await ctx.database.db
+      .select({
+        id: repairGroups.id,
+        name: repairGroups.name,
+        slug: repairGroups.slug,
+        town: repairGroups.town,
+        description: repairGroups.description,
+      })
+      .from(repairGroups)
+      .orderBy(sql`${repairGroups.name}`);
+    res.json(rows);
+  });
+  return r;
+}
+
+export function groupRoutes(ctx: AppContext) {
   const r = Router();
   const organiser = requireGroupRole(['organiser'], groupIdParam);
   r.get('/groups/:groupId/members', organiser, async (req, res) => {
@@ -45,7 +64,7 @@ export function groupRoutes(
   r.post('/invites/:token/signup', async (req, res) => {
     if (req.user) throw new HttpError(409, 'signed-in', 'You are signed in already: accept the invitation instead.');
     const id = await invites.signupFromInvite(ctx, String(req.params.token), body(req, inviteSignupSchema));
-    res.status(201).json({ user: await signIn(req, id) });
+    res.status(201).json({ user: await signIn(req, ctx, id) });
   });
   return r;
 }

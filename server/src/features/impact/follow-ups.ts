@@ -1,5 +1,4 @@
-import { createHmac, timingSafeEqual } from 'node:crypto';
-import { and, asc, eq, gt, inArray, isNotNull, isNull, lte } from 'drizzle-orm';
+import { and, asc, eq, inArray, isNotNull, isNull, lte } from 'drizzle-orm';
 import { alias } from 'drizzle-orm/mysql-core';
 import type { Outcome } from '../../../../shared/event-day/constants';
 import {
@@ -18,28 +17,12 @@ import {
   followUps,
   itemOutcomes,
   repairGroups,
-  slots,
 } from '../../db/schema/index';
 import { HttpError, notFound } from '../../http/errors';
 import { enqueueMail } from '../../mail/outbox';
 import { composeMail } from '../../mail/templates';
-import { createReturnBooking } from '../bookings/service';
-import type { ItemRow } from '../event-day/items';
-
-/** The priority re-booking link: the item's id and an HMAC of it, so any later mail can carry the same link. */
-export const rebookToken = (ctx: AppContext, itemId: number) =>
-  `${itemId}.${createHmac('sha256', ctx.env.SESSION_SECRET).update(`rebook:${itemId}`).digest('base64url')}`;
-export const rebookUrl = (ctx: AppContext, itemId: number) => `${ctx.env.publicUrl}/rebook/${rebookToken(ctx, itemId)}`;
-
-function itemOfToken(ctx: AppContext, token: string): number {
-  const [id, mac] = token.split('.');
-  const itemId = Number(id);
-  if (!Number.isInteger(itemId) || itemId <= 0 || !mac) throw notFound('That link');
-  const expected = Buffer.from(rebookToken(ctx, itemId).split('.')[1]);
-  const given = Buffer.from(mac);
-  if (expected.length !== given.length || !timingSafeEqual(expected, given)) throw notFound('That link');
-  return itemId;
-}
+import type { ItemRow } from '../../core/items';
+import { rebookUrl } from '../../core/links';
 
 function partMail(
   ctx: AppContext,
@@ -210,127 +193,17 @@ export async function followUpGroupId(db: DbOrTx, itemId: number) {
   return f?.groupId ?? 0;
 }
 
-async function rebookContext(ctx: AppContext, token: string) {
-  const itemId = itemOfToken(ctx, token);
-  const [r] = await ctx.database.db
-    .select({
-      f: followUps,
-      item: bookingItems,
-      booking: bookings,
-      category: categories,
-      group: repairGroups,
-      part: itemOutcomes.partDescription,
-    })
-    .from(followUps)
-    .innerJoin(bookingItems, eq(bookingItems.id, followUps.itemId))
-    .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
-    .innerJoin(categories, eq(categories.id, bookingItems.categoryId))
-    .innerJoin(repairGroups, eq(repairGroups.id, followUps.groupId))
-    .leftJoin(itemOutcomes, eq(itemOutcomes.itemId, followUps.itemId))
-    .where(eq(followUps.itemId, itemId));
-  if (!r) throw notFound('That link');
-  return r;
-}
-
-/** What the re-booking page shows: the item, the part, and the group's next sessions with their times. */
-export async function rebookView(ctx: AppContext, token: string) {
-  const r = await rebookContext(ctx, token);
-  const upcoming = await ctx.database.db
-    .select()
-    .from(events)
-    .where(and(eq(events.groupId, r.group.id), eq(events.status, 'published'), gt(events.startsAt, new Date())))
-    .orderBy(asc(events.startsAt))
-    .limit(3);
-  const slotRows = upcoming.length
-    ? await ctx.database.db
-        .select()
-        .from(slots)
-        .where(
-          and(
-            inArray(
-              slots.eventId,
-              upcoming.map((e) => e.id),
-            ),
-            gt(slots.endsAt, new Date()),
-          ),
-        )
-        .orderBy(asc(slots.startsAt))
-    : [];
-  return {
-    item: { categoryName: r.category.name, brand: r.item.brand, model: r.item.model, part: r.part },
-    visitorName: r.booking.visitorName.split(' ')[0],
-    group: { name: r.group.name, timeZone: r.group.timeZone },
-    status: r.f.status,
-    booked: r.f.returnItemId !== null,
-    events: upcoming.map((e) => ({
-      id: e.id,
-      title: e.title,
-      startsAt: e.startsAt,
-      endsAt: e.endsAt,
-      // One place over capacity is kept for returns.
-      slots: slotRows
-        .filter((s) => s.eventId === e.id)
-        .map((s) => ({
-          id: s.id,
-          startsAt: s.startsAt,
-          endsAt: s.endsAt,
-          free: Math.max(0, s.capacity + 1 - s.booked - s.held),
-        })),
-    })),
-  };
-}
-
-/** Books the return visit: the visitor and item as before, marked as continuing the earlier visit. */
-export async function rebook(ctx: AppContext, token: string, slotId: number) {
-  const r = await rebookContext(ctx, token);
-  if (r.f.returnItemId !== null)
-    throw new HttpError(
-      409,
-      'already-booked',
-      'A return visit is already booked for this item. Use the link in its confirmation mail to change it.',
-    );
-  if (!['open', 'part-ordered'].includes(r.f.status))
-    throw new HttpError(409, 'closed', 'This follow-up is closed. Ask the group if you still want to come back.');
-  if (!r.booking.visitorEmail)
-    throw new HttpError(
-      409,
-      'no-email',
-      'This visit has no e-mail address to confirm to. Come to reception on the day instead.',
-    );
-  const fault = `Return visit with the part${r.part ? ` (${r.part})` : ''}. Before: ${r.item.fault}`.slice(0, 2000);
-  const result = await createReturnBooking(
-    ctx,
-    {
-      slotId,
-      visitor: {
-        name: r.booking.visitorName,
-        email: r.booking.visitorEmail,
-        phone: r.booking.visitorPhone ?? undefined,
-      },
-      items: [
-        {
-          categoryId: r.item.categoryId,
-          brand: r.item.brand ?? undefined,
-          model: r.item.model ?? undefined,
-          fault,
-          mains: Boolean(r.item.mains),
-          battery: Boolean(r.item.battery),
-          hazards: [],
-        },
-      ],
-      consent: true,
-    },
-    r.item.id,
-    async (tx, b) => {
-      const res = await tx
-        .update(followUps)
-        .set({ status: 'rebooked', returnItemId: b.itemIds[0], updatedAt: new Date() })
-        .where(and(eq(followUps.itemId, r.item.id), isNull(followUps.returnItemId)));
-      if ((res as unknown as [{ affectedRows: number }])[0].affectedRows !== 1)
-        throw new HttpError(409, 'already-booked', 'A return visit is already booked for this item.');
-    },
-  );
-  return { reference: result.reference, manageToken: result.manageToken, eventId: result.eventId };
+/**
+ * A return visit was booked through the follow-up's link: the follow-up says so, once. A second return visit for
+ * the same item is refused here, inside the booking's transaction, so it books nothing.
+ */
+export async function markRebooked(tx: Tx, e: { earlierItemId: number; returnItemId: number }) {
+  const res = await tx
+    .update(followUps)
+    .set({ status: 'rebooked', returnItemId: e.returnItemId, updatedAt: new Date() })
+    .where(and(eq(followUps.itemId, e.earlierItemId), isNull(followUps.returnItemId)));
+  if ((res as unknown as [{ affectedRows: number }])[0].affectedRows !== 1)
+    throw new HttpError(409, 'already-booked', 'A return visit is already booked for this item.');
 }
 
 /** Six weeks with no news: one reminder to the visitor, with the same link. */

@@ -1,19 +1,13 @@
 import { Router, type NextFunction, type Request, type Response } from 'express';
 import { z } from 'zod';
-import {
-  followUpUpdate,
-  impactSettingsSchema,
-  rebookSchema,
-  recordsQuery,
-  statsQuery,
-} from '../../../../shared/schemas/impact';
+import { followUpUpdate, impactSettingsSchema, recordsQuery, statsQuery } from '../../../../shared/schemas/impact';
 import type { AppContext } from '../../context';
 import { hasGroupRole, requireAdmin, requireGroupRole, unauthenticated } from '../../auth/guards';
 import { HttpError } from '../../http/errors';
 import { body, params, query } from '../../http/validate';
-import { eventGroupId } from '../events/service';
+import { eventGroupId } from '../../core/events';
 import { openRepairDataCsv, recordsCsv } from './exports';
-import { followUpGroupId, listFollowUps, rebook, rebookView, setFollowUpStatus } from './follow-ups';
+import { followUpGroupId, listFollowUps, setFollowUpStatus } from './follow-ups';
 import {
   assertDateRange,
   displacement,
@@ -139,14 +133,6 @@ export function impactRoutes(ctx: AppContext) {
       await setFollowUpStatus(ctx, Number(req.params.itemId), b.status, b.note);
       res.json({ ok: true });
     },
-  );
-
-  r.get('/rebook/:token', async (req, res) => {
-    res.setHeader('Cache-Control', 'no-store');
-    res.json(await rebookView(ctx, String(req.params.token)));
-  });
-  r.post('/rebook/:token', async (req, res) =>
-    res.status(201).json(await rebook(ctx, String(req.params.token), body(req, rebookSchema).slotId)),
   );
 
   r.get('/admin/impact-settings', requireAdmin, async (_req, res) =>

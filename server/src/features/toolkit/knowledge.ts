@@ -9,8 +9,7 @@ import type { DbOrTx, Tx } from '../../db/client';
 import { categories, itemPhotos, knowledgeEntries, repairGroups } from '../../db/schema/index';
 import { hasGroupRole } from '../../auth/guards';
 import { HttpError, notFound } from '../../http/errors';
-import type { ItemRow } from '../event-day/items';
-import { loadItem } from '../event-day/items';
+import { loadItem, type ItemRow } from '../../core/items';
 
 /** Keeps the item's knowledge entry in step with its outcome: notes make an entry; a write-up is never lost. */
 export async function syncKnowledge(tx: Tx, row: ItemRow, outcome: Outcome, notes: string | undefined) {

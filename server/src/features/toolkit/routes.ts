@@ -16,7 +16,7 @@ import { requireGroupRole, unauthenticated } from '../../auth/guards';
 import { repairGroups } from '../../db/schema/index';
 import { HttpError } from '../../http/errors';
 import { body, params, query } from '../../http/validate';
-import { itemGroupId } from '../event-day/items';
+import { itemGroupId } from '../../core/items';
 import { searchKnowledge, setSharing, similarRepairs, writeUp } from './knowledge';
 import { addPart, listParts, partGroupId, removePart, substitutes, takePart, updatePart } from './salvage';
 

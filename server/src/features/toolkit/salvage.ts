@@ -9,7 +9,7 @@ import type { DbOrTx } from '../../db/client';
 import { affectedRows, withDeadlockRetry } from '../../db/retry';
 import { salvageParts, salvageTakes, users } from '../../db/schema/index';
 import { HttpError, notFound } from '../../http/errors';
-import { loadItem } from '../event-day/items';
+import { loadItem } from '../../core/items';
 
 const dto = (p: typeof salvageParts.$inferSelect) => ({ ...p, typeLabel: PART_TYPE_LABELS[p.type] });
 

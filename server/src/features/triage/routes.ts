@@ -4,7 +4,7 @@ import { lockSchema, placementSchema, runSchema } from '../../../../shared/schem
 import type { AppContext } from '../../context';
 import { requireGroupRole, requireUser } from '../../auth/guards';
 import { body, params } from '../../http/validate';
-import { eventGroupId } from '../events/service';
+import { eventGroupId } from '../../core/events';
 import * as t from './service';
 
 const itemParams = z.object({ id: z.coerce.number().int().positive(), itemId: z.coerce.number().int().positive() });

@@ -17,8 +17,8 @@ import {
   users,
 } from '../../db/schema/index';
 import { HttpError, notFound } from '../../http/errors';
-import { skillsOf } from '../volunteers/service';
-import { eventLayout } from './benches';
+import { skillsOf } from '../../core/skills';
+import { eventLayout } from '../../core/benches';
 
 /** Everything the board shows and the engine needs, read in a handful of queries. */
 async function loadEvent(ctx: AppContext, eventId: number) {
@@ -83,7 +83,7 @@ async function loadEvent(ctx: AppContext, eventId: number) {
     db,
     fixers.map((f) => f.shift.userId),
   );
-  const benches = await eventLayout(ctx, eventId);
+  const benches = await eventLayout(ctx.database.db, eventId);
   const live = new Set(items.map((i) => i.id));
   const placed = (await db.select().from(itemAssignments).where(eq(itemAssignments.eventId, eventId))).filter((p) =>
     live.has(p.itemId),
@@ -556,7 +556,7 @@ export async function myQueue(ctx: AppContext, userId: number) {
         .where(inArray(itemPhotos.itemId, ids))
     : [];
   const benchNames = new Map(
-    (await Promise.all([...new Set(rows.map((r) => r.eventId))].map((e) => eventLayout(ctx, e))))
+    (await Promise.all([...new Set(rows.map((r) => r.eventId))].map((e) => eventLayout(ctx.database.db, e))))
       .flat()
       .map((b) => [b.id, b.name]),
   );

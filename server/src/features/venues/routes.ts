@@ -7,7 +7,7 @@ import { groupIdInBody, groupIdParam, hasGroupRole, requireGroupRole, requireUse
 import { groupExclusions, repairGroups, venues } from '../../db/schema/index';
 import { forbidden, HttpError, notFound } from '../../http/errors';
 import { body, query } from '../../http/validate';
-import { excludedCategoryIds } from '../catalogue/service';
+import { excludedCategoryIds } from '../../core/screening';
 
 /** Venues and the group's own rules: what it takes and what visitors agree to. */
 export function venueRoutes(ctx: AppContext) {

@@ -1,20 +1,13 @@
 import { and, eq } from 'drizzle-orm';
 import { Router, type Request } from 'express';
 import { z } from 'zod';
-import {
-  askSchema,
-  benchesSchema,
-  myShiftSchema,
-  profileSchema,
-  seatSchema,
-} from '../../../../shared/schemas/volunteers';
+import { askSchema, myShiftSchema, profileSchema, seatSchema } from '../../../../shared/schemas/volunteers';
 import type { AppContext } from '../../context';
 import { groupIdParam, requireGroupRole, requireUser } from '../../auth/guards';
-import { eventBenches, shifts, venues } from '../../db/schema/index';
+import { eventBenches, shifts } from '../../db/schema/index';
 import { HttpError, notFound } from '../../http/errors';
 import { body, params } from '../../http/validate';
-import { eventGroupId } from '../events/service';
-import { eventLayout, saveEventLayout, saveVenueLayout, venueLayout } from '../triage/benches';
+import { eventGroupId } from '../../core/events';
 import * as volunteers from './service';
 
 const idParams = z.object({ id: z.coerce.number().int().positive() });
@@ -24,13 +17,6 @@ export function volunteerRoutes(ctx: AppContext) {
   const { db } = ctx.database;
   const ofEvent = (roles: ('organiser' | 'host' | 'fixer')[]) =>
     requireGroupRole(roles, (req: Request) => eventGroupId(db, Number(req.params.id)));
-  const venueGroup = async (req: Request) =>
-    (
-      await db
-        .select({ g: venues.groupId })
-        .from(venues)
-        .where(eq(venues.id, Number(req.params.venueId)))
-    )[0]?.g ?? 0;
 
   r.get('/me/profile', requireUser, async (req, res) => res.json(await volunteers.getProfile(ctx, req.user!.id)));
   r.put('/me/profile', requireUser, async (req, res) =>
@@ -74,21 +60,5 @@ export function volunteerRoutes(ctx: AppContext) {
     res.json({ ok: true });
   });
 
-  r.get('/venues/:venueId/benches', requireGroupRole(['organiser'], venueGroup), async (req, res) =>
-    res.json(await venueLayout(db, Number(req.params.venueId))),
-  );
-  r.put('/venues/:venueId/benches', requireGroupRole(['organiser'], venueGroup), async (req, res) =>
-    res.json(
-      await saveVenueLayout(ctx, Number(req.params.venueId), body(req, z.object({ benches: benchesSchema })).benches),
-    ),
-  );
-  r.get('/events/:id/benches', ofEvent(['organiser', 'host', 'fixer']), async (req, res) =>
-    res.json(await eventLayout(ctx, params(req, idParams).id)),
-  );
-  r.put('/events/:id/benches', ofEvent(['organiser']), async (req, res) =>
-    res.json(
-      await saveEventLayout(ctx, params(req, idParams).id, body(req, z.object({ benches: benchesSchema })).benches),
-    ),
-  );
   return r;
 }

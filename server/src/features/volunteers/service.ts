@@ -5,7 +5,6 @@ import { formatDay, formatTimeRange } from '../../../../shared/format';
 import { coverage, gaps } from '../../../../shared/rota';
 import type { myShiftSchema, profileSchema } from '../../../../shared/schemas/volunteers';
 import type { AppContext } from '../../context';
-import type { DbOrTx } from '../../db/client';
 import {
   bookingItems,
   bookings,
@@ -20,16 +19,9 @@ import {
   volunteerSkills,
 } from '../../db/schema/index';
 import { HttpError, notFound } from '../../http/errors';
+import { skillsOf } from '../../core/skills';
 import { enqueueMail } from '../../mail/outbox';
 import { composeMail } from '../../mail/templates';
-
-export async function skillsOf(db: DbOrTx, userIds: number[]): Promise<Map<number, Record<string, 1 | 2 | 3>>> {
-  const map = new Map<number, Record<string, 1 | 2 | 3>>(userIds.map((id) => [id, {}]));
-  if (!userIds.length) return map;
-  for (const r of await db.select().from(volunteerSkills).where(inArray(volunteerSkills.userId, userIds)))
-    map.get(r.userId)![r.skill] = r.level as 1 | 2 | 3;
-  return map;
-}
 
 export async function getProfile(ctx: AppContext, userId: number) {
   const { db } = ctx.database;

@@ -1,6 +1,6 @@
-import { asc, eq } from 'drizzle-orm';
+import { asc } from 'drizzle-orm';
 import type { DbOrTx } from '../../db/client';
-import { categories, groupExclusions } from '../../db/schema/index';
+import { categories } from '../../db/schema/index';
 
 export type Category = typeof categories.$inferSelect;
 
@@ -26,17 +26,3 @@ export function toCategoryDto(c: Category) {
   };
 }
 export type CategoryDto = ReturnType<typeof toCategoryDto>;
-
-export async function excludedCategoryIds(db: DbOrTx, groupId: number): Promise<number[]> {
-  const rows = await db
-    .select({ id: groupExclusions.categoryId })
-    .from(groupExclusions)
-    .where(eq(groupExclusions.groupId, groupId));
-  return rows.map((r) => r.id);
-}
-
-/** A new group starts by refusing what common practice refuses (microwave ovens, refrigerant circuits, gas). */
-export async function applyDefaultExclusions(db: DbOrTx, groupId: number) {
-  const refused = (await db.select().from(categories)).filter((c) => c.refusal);
-  if (refused.length) await db.insert(groupExclusions).values(refused.map((c) => ({ groupId, categoryId: c.id })));
-}

@@ -3,10 +3,10 @@ import { and, count, eq } from 'drizzle-orm';
 import { fileTypeFromBuffer } from 'file-type';
 import multer from 'multer';
 import sharp from 'sharp';
-import { PHOTO_LIMITS } from '../../../../shared/schemas/bookings';
-import type { AppContext } from '../../context';
-import { bookingItems, itemPhotos } from '../../db/schema/index';
-import { HttpError, notFound } from '../../http/errors';
+import { PHOTO_LIMITS } from '../../../shared/schemas/bookings';
+import type { AppContext } from '../context';
+import { bookingItems, itemPhotos } from '../db/schema/index';
+import { HttpError, notFound } from '../http/errors';
 
 /** multer keeps uploads in memory within hard limits; nothing touches the disk until the content is checked. */
 export const photoUpload = multer({

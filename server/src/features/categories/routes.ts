@@ -28,7 +28,7 @@ const categoryPatch = z
     message: 'Name the source of the factor.',
   });
 
-export function catalogueRoutes(ctx: AppContext) {
+export function categoryRoutes(ctx: AppContext) {
   const r = Router();
   const { db } = ctx.database;
   r.get('/categories', async (_req, res) => {

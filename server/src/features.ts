@@ -1,0 +1,34 @@
+import type { Feature } from './core/feature';
+import { adminFeature } from './features/admin/feature';
+import { benchesFeature } from './features/benches/feature';
+import { bookingsFeature } from './features/bookings/feature';
+import { categoriesFeature } from './features/categories/feature';
+import { eventDayFeature } from './features/event-day/feature';
+import { eventsFeature } from './features/events/feature';
+import { groupsFeature } from './features/groups/feature';
+import { impactFeature } from './features/impact/feature';
+import { platformFeature } from './features/platform/feature';
+import { toolkitFeature } from './features/toolkit/feature';
+import { triageFeature } from './features/triage/feature';
+import { venuesFeature } from './features/venues/feature';
+import { volunteersFeature } from './features/volunteers/feature';
+
+/**
+ * The composition root: every feature, in the order its routers are mounted and its hook steps and jobs run.
+ * No feature imports another; they meet here and in server/src/core/.
+ */
+export const FEATURES: Feature[] = [
+  platformFeature,
+  groupsFeature,
+  adminFeature,
+  categoriesFeature,
+  venuesFeature,
+  eventsFeature,
+  bookingsFeature,
+  volunteersFeature,
+  benchesFeature,
+  triageFeature,
+  eventDayFeature,
+  impactFeature,
+  toolkitFeature,
+];

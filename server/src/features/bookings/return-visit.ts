@@ -1,0 +1,133 @@
+import { and, asc, eq, gt, inArray } from 'drizzle-orm';
+import type { AppContext } from '../../context';
+import {
+  bookingItems,
+  bookings,
+  categories,
+  events,
+  followUps,
+  itemOutcomes,
+  repairGroups,
+  slots,
+} from '../../db/schema/index';
+import { HttpError, notFound } from '../../http/errors';
+import { runHooks } from '../../core/hooks';
+import { itemOfRebookToken } from '../../core/links';
+import { createReturnBooking } from './service';
+
+/** The return visit of an item waiting for a part, booked through the priority link in the follow-up mail. */
+async function rebookContext(ctx: AppContext, token: string) {
+  const itemId = itemOfRebookToken(ctx, token);
+  const [r] = await ctx.database.db
+    .select({
+      f: followUps,
+      item: bookingItems,
+      booking: bookings,
+      category: categories,
+      group: repairGroups,
+      part: itemOutcomes.partDescription,
+    })
+    .from(followUps)
+    .innerJoin(bookingItems, eq(bookingItems.id, followUps.itemId))
+    .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
+    .innerJoin(categories, eq(categories.id, bookingItems.categoryId))
+    .innerJoin(repairGroups, eq(repairGroups.id, followUps.groupId))
+    .leftJoin(itemOutcomes, eq(itemOutcomes.itemId, followUps.itemId))
+    .where(eq(followUps.itemId, itemId));
+  if (!r) throw notFound('That link');
+  return r;
+}
+
+/** What the re-booking page shows: the item, the part, and the group's next sessions with their times. */
+export async function rebookView(ctx: AppContext, token: string) {
+  const r = await rebookContext(ctx, token);
+  const upcoming = await ctx.database.db
+    .select()
+    .from(events)
+    .where(and(eq(events.groupId, r.group.id), eq(events.status, 'published'), gt(events.startsAt, new Date())))
+    .orderBy(asc(events.startsAt))
+    .limit(3);
+  const slotRows = upcoming.length
+    ? await ctx.database.db
+        .select()
+        .from(slots)
+        .where(
+          and(
+            inArray(
+              slots.eventId,
+              upcoming.map((e) => e.id),
+            ),
+            gt(slots.endsAt, new Date()),
+          ),
+        )
+        .orderBy(asc(slots.startsAt))
+    : [];
+  return {
+    item: { categoryName: r.category.name, brand: r.item.brand, model: r.item.model, part: r.part },
+    visitorName: r.booking.visitorName.split(' ')[0],
+    group: { name: r.group.name, timeZone: r.group.timeZone },
+    status: r.f.status,
+    booked: r.f.returnItemId !== null,
+    events: upcoming.map((e) => ({
+      id: e.id,
+      title: e.title,
+      startsAt: e.startsAt,
+      endsAt: e.endsAt,
+      // One place over capacity is kept for returns.
+      slots: slotRows
+        .filter((s) => s.eventId === e.id)
+        .map((s) => ({
+          id: s.id,
+          startsAt: s.startsAt,
+          endsAt: s.endsAt,
+          free: Math.max(0, s.capacity + 1 - s.booked - s.held),
+        })),
+    })),
+  };
+}
+
+/** Books the return visit: the visitor and item as before, marked as continuing the earlier visit. */
+export async function rebook(ctx: AppContext, token: string, slotId: number) {
+  const r = await rebookContext(ctx, token);
+  if (r.f.returnItemId !== null)
+    throw new HttpError(
+      409,
+      'already-booked',
+      'A return visit is already booked for this item. Use the link in its confirmation mail to change it.',
+    );
+  if (!['open', 'part-ordered'].includes(r.f.status))
+    throw new HttpError(409, 'closed', 'This follow-up is closed. Ask the group if you still want to come back.');
+  if (!r.booking.visitorEmail)
+    throw new HttpError(
+      409,
+      'no-email',
+      'This visit has no e-mail address to confirm to. Come to reception on the day instead.',
+    );
+  const fault = `Return visit with the part${r.part ? ` (${r.part})` : ''}. Before: ${r.item.fault}`.slice(0, 2000);
+  const result = await createReturnBooking(
+    ctx,
+    {
+      slotId,
+      visitor: {
+        name: r.booking.visitorName,
+        email: r.booking.visitorEmail,
+        phone: r.booking.visitorPhone ?? undefined,
+      },
+      items: [
+        {
+          categoryId: r.item.categoryId,
+          brand: r.item.brand ?? undefined,
+          model: r.item.model ?? undefined,
+          fault,
+          mains: Boolean(r.item.mains),
+          battery: Boolean(r.item.battery),
+          hazards: [],
+        },
+      ],
+      consent: true,
+    },
+    r.item.id,
+    async (tx, b) => runHooks(ctx.hooks.returnBooked, tx, { earlierItemId: r.item.id, returnItemId: b.itemIds[0] }),
+  );
+  return { reference: result.reference, manageToken: result.manageToken, eventId: result.eventId };
+}
