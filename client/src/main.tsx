@@ -8,7 +8,12 @@ import { createRoot } from 'react-dom/client';
 import { PersistQueryClientProvider } from '@tanstack/react-query-persist-client';
 import { RouterProvider } from 'react-router';
 import { pendingWritesPersister, queryClient } from './lib/query-client';
-import { router } from './router';
+import { router } from './app/router';
+import { registerOutcomeWrites } from './features/event-day/api';
+import { myQueueKey } from './features/volunteers/api/volunteers';
+
+// An outcome recorded at the bench also changes the fixer's own queue.
+registerOutcomeWrites(queryClient, () => void queryClient.invalidateQueries({ queryKey: myQueueKey }));
 
 createRoot(document.getElementById('root')!).render(
   <StrictMode>

@@ -1,8 +1,6 @@
-import type { GroupRole } from '../../../shared/constants';
 import type { SessionUser } from '../../../shared/schemas/auth';
 import { paths } from '../config/paths';
-
-export const groupsWithRole = (user: SessionUser, role: GroupRole) => user.roles.filter((r) => r.role === role);
+import { groupsWithRole } from './auth';
 
 /** Where a person lands after signing in: the most responsible thing they do. */
 export function landingPath(user: SessionUser): string {
@@ -13,5 +11,3 @@ export function landingPath(user: SessionUser): string {
   if (groupsWithRole(user, 'fixer').length) return paths.bench();
   return paths.home();
 }
-
-export const hasRole = (user: SessionUser, role: GroupRole) => user.roles.some((r) => r.role === role);

@@ -1,8 +1,8 @@
-import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { useMutation, useQuery, useQueryClient, type QueryClient } from '@tanstack/react-query';
 import type { ItemStatus, Outcome, Barrier } from '../../../../shared/event-day/constants';
 import type { CheckInInput, OutcomeInput, SafetyCheckInput, WalkInInput } from '../../../../shared/schemas/event-day';
 import type { Caution } from '../../../../shared/safety/cautions';
-import { api } from '../../lib/api';
+import { api, ApiError } from '../../lib/api';
 
 export interface DeskEvent {
   id: number;
@@ -327,5 +327,23 @@ export function useRepairPhotos(id: number) {
       return api<{ id: number }[]>('POST', `/api/items/${id}/photos`, form);
     },
     onSuccess: () => qc.invalidateQueries({ queryKey: eventDayKeys.item(id) }),
+  });
+}
+
+/**
+ * A fixer's outcome recorded with no connection waits in the mutation cache (paused) and is sent when the browser
+ * is back online. The default function lets a paused outcome restored after a reload be sent too; a dropped
+ * request (status 0) is retried rather than lost. Recording an outcome twice stores the same thing. The app passes
+ * `onRecorded` for what other features show of the item (the fixer's queue).
+ */
+export function registerOutcomeWrites(queryClient: QueryClient, onRecorded: () => void) {
+  queryClient.setMutationDefaults(OUTCOME_MUTATION_KEY, {
+    mutationFn: sendOutcome,
+    onSuccess: (item: ItemDetail) => {
+      queryClient.setQueryData(eventDayKeys.item(item.id), item);
+      onRecorded();
+    },
+    retry: (count, err) => err instanceof ApiError && err.status === 0 && count < 20,
+    retryDelay: (n) => Math.min(30_000, 1000 * 2 ** n),
   });
 }

@@ -6,7 +6,7 @@ import { Button } from '../../components/ui/button';
 import { Alert, Card, Spinner } from '../../components/ui/feedback';
 import { TextField } from '../../components/ui/field';
 import { paths } from '../../config/paths';
-import { useUser } from '../../features/auth/api/get-me';
+import { useUser } from '../../lib/auth';
 import { useAcceptInvite, useInvitation, useSignupFromInvite } from '../../features/groups/api/invites';
 import { applyServerErrors, useZodForm } from '../../lib/form';
 import { landingPath } from '../../lib/roles';

@@ -38,7 +38,7 @@ import {
   type OutcomeVariables,
 } from '../../features/event-day/api';
 import { StatusChip } from '../../features/event-day/status-chip';
-import { useUser } from '../../features/auth/api/get-me';
+import { useUser } from '../../lib/auth';
 import { ConfirmDialog } from '../../components/ui/confirm-dialog';
 import { CalculatorLinks, SalvageForItem, SimilarRepairs } from '../../features/toolkit/item-toolkit';
 import { ApiError } from '../../lib/api';

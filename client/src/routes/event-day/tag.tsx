@@ -1,7 +1,7 @@
 import { Link, Navigate, useParams } from 'react-router';
 import { Alert, Card, Spinner } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
-import { useUser } from '../../features/auth/api/get-me';
+import { useUser } from '../../lib/auth';
 import { usePublicTag } from '../../features/event-day/api';
 import { StatusChip } from '../../features/event-day/status-chip';
 

@@ -3,7 +3,7 @@ import { SKILL_LABELS } from '../../../../shared/constants';
 import { formatDay, formatTime, formatTimeRange, WHAT_TO_BRING } from '../../../../shared/format';
 import { Alert, Card, Spinner } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
-import { useUser } from '../../features/auth/api/get-me';
+import { useUser } from '../../lib/auth';
 import { useCategories, useEvent } from '../../features/events/api/events';
 import { PlacesBar, StatusBadge } from '../../features/events/components/places-bar';
 

@@ -6,7 +6,7 @@ import { Button } from '../../components/ui/button';
 import { ConfirmDialog } from '../../components/ui/confirm-dialog';
 import { Alert, EmptyState, PageTitle, Spinner } from '../../components/ui/feedback';
 import { SelectField, TextField } from '../../components/ui/field';
-import { useUser } from '../../features/auth/api/get-me';
+import { useUser } from '../../lib/auth';
 import { useRemovePart, useSalvage, useTakePart, useUpdatePart, type SalvagePart } from '../../features/toolkit/api';
 import { ratingsText } from '../../features/toolkit/ratings';
 import { AddPartForm } from '../../features/toolkit/add-part-form';

@@ -4,7 +4,7 @@ import { Button } from '../../components/ui/button';
 import { MonthCalendar } from '../../components/ui/month-calendar';
 import { Alert, Card, EmptyState, PageTitle, Spinner } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
-import { useUser } from '../../features/auth/api/get-me';
+import { useUser } from '../../lib/auth';
 import { StatusChip } from '../../features/event-day/status-chip';
 import { useMyEvents, useQueue, useSetShift } from '../../features/volunteers/api/volunteers';
 

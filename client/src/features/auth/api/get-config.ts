@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api';
-import { authKeys } from './get-me';
+import { authKeys } from './keys';
 
 export interface PublicConfig {
   demo: boolean;

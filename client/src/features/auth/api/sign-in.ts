@@ -1,7 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { LoginInput, SessionUser } from '../../../../../shared/schemas/auth';
 import { api, forgetCsrfToken } from '../../../lib/api';
-import { authKeys } from './get-me';
+import { userKeys } from '../../../lib/auth';
+import { authKeys } from './keys';
 
 export function useSignIn() {
   const qc = useQueryClient();
@@ -9,7 +10,7 @@ export function useSignIn() {
     mutationFn: (input: LoginInput) => api<{ user: SessionUser }>('POST', '/api/auth/login', input),
     onSuccess: ({ user }) => {
       forgetCsrfToken();
-      qc.setQueryData(authKeys.me, user);
+      qc.setQueryData(userKeys.me, user);
     },
   });
 }
@@ -21,7 +22,7 @@ export function useSignOut() {
     onSettled: () => {
       forgetCsrfToken();
       qc.clear();
-      qc.setQueryData(authKeys.me, null);
+      qc.setQueryData(userKeys.me, null);
     },
   });
 }
@@ -33,7 +34,7 @@ export function useCreateFirstAdmin() {
       api<{ user: SessionUser }>('POST', '/api/auth/first-admin', input),
     onSuccess: ({ user }) => {
       forgetCsrfToken();
-      qc.setQueryData(authKeys.me, user);
+      qc.setQueryData(userKeys.me, user);
       qc.invalidateQueries({ queryKey: authKeys.config });
     },
   });

@@ -2,7 +2,7 @@ import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { GroupRole } from '../../../../../shared/constants';
 import type { SessionUser } from '../../../../../shared/schemas/auth';
 import { api, forgetCsrfToken } from '../../../lib/api';
-import { authKeys } from '../../auth/api/get-me';
+import { userKeys } from '../../../lib/auth';
 
 export const useInvite = (groupId: number) =>
   useMutation({
@@ -18,7 +18,7 @@ export function useAcceptInvite(token: string) {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: () => api('POST', `/api/invites/${token}/accept`),
-    onSuccess: () => qc.invalidateQueries({ queryKey: authKeys.me }),
+    onSuccess: () => qc.invalidateQueries({ queryKey: userKeys.me }),
   });
 }
 export function useSignupFromInvite(token: string) {
@@ -28,7 +28,7 @@ export function useSignupFromInvite(token: string) {
       api<{ user: SessionUser }>('POST', `/api/invites/${token}/signup`, v),
     onSuccess: ({ user }) => {
       forgetCsrfToken();
-      qc.setQueryData(authKeys.me, user);
+      qc.setQueryData(userKeys.me, user);
     },
   });
 }

@@ -70,9 +70,10 @@ export function useSetShift() {
     onSuccess: () => qc.invalidateQueries({ queryKey: ['me', 'events'] }),
   });
 }
+export const myQueueKey = ['me', 'queue'] as const;
 export const useQueue = () =>
   useQuery({
-    queryKey: ['me', 'queue'],
+    queryKey: myQueueKey,
     queryFn: () => api<QueueItem[]>('GET', '/api/me/queue'),
     refetchInterval: 30_000,
   });

@@ -1,10 +1,9 @@
 import { useState } from 'react';
-import { Link, NavLink, Outlet, useNavigate } from 'react-router';
-import { paths } from '../../config/paths';
-import { useUser } from '../../features/auth/api/get-me';
-import { useSignOut } from '../../features/auth/api/sign-in';
-import { groupsWithRole } from '../../lib/roles';
-import { Logo } from './logo';
+import { Link, NavLink, Outlet, useNavigate, useNavigation } from 'react-router';
+import { paths } from '../config/paths';
+import { groupsWithRole, useUser } from '../lib/auth';
+import { useSignOut } from '../features/auth/api/sign-in';
+import { Logo } from '../components/layouts/logo';
 
 const linkClass = ({ isActive }: { isActive: boolean }) =>
   `block rounded-lg px-3 py-2 font-semibold ${isActive ? 'bg-navy text-white' : 'text-navy hover:bg-navy/5'}`;
@@ -14,6 +13,7 @@ export function AppShell() {
   const signOut = useSignOut();
   const navigate = useNavigate();
   const [open, setOpen] = useState(false);
+  const loading = useNavigation().state === 'loading';
 
   const links: { to: string; label: string; end?: boolean }[] = [{ to: paths.events(), label: 'Sessions', end: true }];
   if (user) {
@@ -34,6 +34,15 @@ export function AppShell() {
 
   return (
     <div className="flex min-h-dvh flex-col">
+      {loading && (
+        <div
+          role="progressbar"
+          aria-label="Loading the page"
+          className="fixed inset-x-0 top-0 z-50 h-1 overflow-hidden"
+        >
+          <div className="h-full w-1/3 animate-[slide_1.2s_ease-in-out_infinite] bg-copper" />
+        </div>
+      )}
       <a
         href="#main"
         className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:rounded focus:bg-white focus:p-2"

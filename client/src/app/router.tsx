@@ -1,0 +1,206 @@
+import type { ComponentType } from 'react';
+import { createBrowserRouter, redirect, type LoaderFunction, type LoaderFunctionArgs } from 'react-router';
+import { Spinner } from '../components/ui/feedback';
+import { allow, meQuery, type Allow } from '../lib/auth';
+import { requireRole } from '../lib/guards';
+import { queryClient } from '../lib/query-client';
+import { landingPath } from '../lib/roles';
+import { paths } from '../config/paths';
+import { AppShell } from './app-shell';
+import { RouteError } from './route-error';
+import { HomePage } from '../routes/home';
+import { NotFoundPage } from '../routes/not-found';
+import { SafetyPage } from '../routes/safety';
+import { SignInPage } from '../routes/auth/sign-in';
+import { VolunteerPage } from '../routes/auth/volunteer';
+import { ForgotPasswordPage, ResetPasswordPage, VerifyEmailPage } from '../routes/auth/email-links';
+import { SetupPage } from '../routes/auth/setup';
+import * as eventPage from '../routes/events/detail';
+import * as manageBookingPage from '../routes/bookings/manage';
+import * as claimPages from '../routes/bookings/claim';
+
+/**
+ * A route module exports its page component and, when the page reads data, a `loader` that warms the query cache
+ * (docs/decisions/008). A guarded page checks the role before its loader runs.
+ */
+type RouteModule = { loader?: LoaderFunction } & Record<string, unknown>;
+
+const withGuard = (check: Allow | undefined, loader: LoaderFunction | undefined): LoaderFunction | undefined =>
+  check
+    ? async (args: LoaderFunctionArgs) => {
+        await requireRole(check, args);
+        return loader ? loader(args) : null;
+      }
+    : loader;
+
+/** Pages most visitors never open load on demand, keeping the first load small on a phone. */
+const page = (load: () => Promise<RouteModule>, name: string, check?: Allow) => ({
+  lazy: async () => {
+    const m = await load();
+    return { Component: m[name] as ComponentType, loader: withGuard(check, m.loader) };
+  },
+});
+
+/** Pages on the visitor's first path are in the main bundle. */
+const eager = (m: RouteModule, name: string, check?: Allow) => ({
+  Component: m[name] as ComponentType,
+  loader: withGuard(check, m.loader),
+});
+
+const start = async () => {
+  const user = await queryClient.ensureQueryData(meQuery);
+  return redirect(user ? landingPath(user) : paths.signIn());
+};
+
+export const router = createBrowserRouter([
+  // Pages for a TV and for the printer: no header, no menu.
+  {
+    path: 'events/:eventId/hall',
+    errorElement: <RouteError />,
+    hydrateFallbackElement: <Spinner />,
+    ...page(() => import('../routes/event-day/hall-display'), 'HallDisplayPage'),
+  },
+  {
+    path: 'events/:eventId/report',
+    errorElement: <RouteError />,
+    hydrateFallbackElement: <Spinner />,
+    ...page(() => import('../routes/impact/report'), 'EventReportPage', allow.organiser),
+  },
+  {
+    path: 'groups/:groupId/report',
+    errorElement: <RouteError />,
+    hydrateFallbackElement: <Spinner />,
+    ...page(() => import('../routes/impact/report'), 'GroupReportPage', allow.organiser),
+  },
+  {
+    path: 'embed/impact',
+    errorElement: <RouteError />,
+    hydrateFallbackElement: <Spinner />,
+    ...page(() => import('../routes/impact/embed'), 'ImpactWidgetPage'),
+  },
+  {
+    path: 'events/:eventId/tags',
+    errorElement: <RouteError />,
+    hydrateFallbackElement: <Spinner />,
+    ...page(() => import('../routes/event-day/tags'), 'TagSheetPage', allow.staff),
+  },
+  {
+    element: <AppShell />,
+    errorElement: <RouteError />,
+    hydrateFallbackElement: <Spinner />,
+    children: [
+      {
+        // A page that fails to load says so inside the shell, keeping the menu.
+        errorElement: <RouteError />,
+        children: [
+          { index: true, element: <HomePage /> },
+          { path: 'safety', element: <SafetyPage /> },
+          { path: 'sign-in', element: <SignInPage /> },
+          { path: 'volunteer', element: <VolunteerPage /> },
+          { path: 'verify-email', element: <VerifyEmailPage /> },
+          { path: 'forgot-password', element: <ForgotPasswordPage /> },
+          { path: 'reset-password', element: <ResetPasswordPage /> },
+          { path: 'setup', element: <SetupPage /> },
+          { path: 'join/:token', ...page(() => import('../routes/auth/join'), 'JoinPage') },
+          { path: 'start', loader: start },
+          {
+            path: 'bench',
+            ...page(() => import('../routes/volunteers/bench'), 'BenchPage', allow.fixerOrHost),
+          },
+          {
+            path: 'me/skills',
+            ...page(() => import('../routes/volunteers/my-skills'), 'MySkillsPage', allow.fixer),
+          },
+          {
+            path: 'groups/:groupId/skills',
+            ...page(() => import('../routes/volunteers/skills-matrix'), 'SkillsMatrixPage', allow.organiser),
+          },
+          {
+            path: 'events/:eventId/board',
+            ...page(() => import('../routes/triage/board'), 'TriageBoardPage', allow.organiser),
+          },
+          { path: 'events/:eventId/rota', ...page(() => import('../routes/triage/rota'), 'RotaPage', allow.organiser) },
+          {
+            path: 'events/:eventId/benches',
+            ...page(() => import('../routes/triage/benches'), 'BenchesPage', allow.organiser),
+          },
+          { path: 'desk', ...page(() => import('../routes/event-day/desk'), 'DeskHomePage', allow.staff) },
+          { path: 'desk/:eventId', ...page(() => import('../routes/event-day/desk'), 'DeskPage', allow.staff) },
+          {
+            path: 'items/:itemId',
+            ...page(() => import('../routes/event-day/item'), 'ItemPage', allow.itemReader),
+          },
+          { path: 't/:code', ...page(() => import('../routes/event-day/tag'), 'TagPage') },
+          {
+            path: 'groups/:groupId/impact',
+            ...page(() => import('../routes/impact/dashboard'), 'GroupImpactPage', allow.organiser),
+          },
+          {
+            path: 'admin/impact',
+            ...page(() => import('../routes/impact/dashboard'), 'NetworkImpactPage', allow.admin),
+          },
+          {
+            path: 'impact/records',
+            ...page(() => import('../routes/impact/records'), 'ImpactRecordsPage', allow.organiser),
+          },
+          {
+            path: 'groups/:groupId/follow-ups',
+            ...page(() => import('../routes/impact/follow-ups'), 'FollowUpsPage', allow.organiser),
+          },
+          { path: 'impact', ...page(() => import('../routes/impact/public'), 'PublicImpactPage') },
+          { path: 'impact/groups/:groupId', ...page(() => import('../routes/impact/public'), 'PublicImpactPage') },
+          {
+            path: 'toolkit/knowledge',
+            ...page(() => import('../routes/toolkit/knowledge'), 'KnowledgePage', allow.volunteer),
+          },
+          { path: 'toolkit/calculators', ...page(() => import('../routes/toolkit/calculators'), 'CalculatorsPage') },
+          {
+            path: 'groups/:groupId/salvage',
+            ...page(() => import('../routes/toolkit/salvage'), 'SalvagePage', allow.volunteer),
+          },
+          { path: 'rebook/:token', ...page(() => import('../routes/impact/rebook'), 'RebookPage') },
+          {
+            path: 'events/:eventId/live',
+            ...page(() => import('../routes/event-day/live'), 'LiveViewPage', allow.organiser),
+          },
+          { path: 'events', ...page(() => import('../routes/events/list'), 'EventsPage') },
+          { path: 'events/:eventId', ...eager(eventPage, 'EventPage') },
+          { path: 'events/:eventId/book', ...page(() => import('../routes/events/book'), 'BookingPage') },
+          {
+            path: 'events/:eventId/manage',
+            ...page(() => import('../routes/events/manage'), 'ManageEventPage', allow.organiser),
+          },
+          { path: 'bookings/:reference', ...eager(manageBookingPage, 'ManageBookingPage') },
+          { path: 'waiting-list/:token', ...eager(claimPages, 'ClaimOfferPage') },
+          { path: 'b/:reference', ...eager(claimPages, 'BookingCodePage') },
+          {
+            path: 'groups/:groupId/people',
+            ...page(() => import('../routes/groups/people'), 'GroupPeoplePage', allow.organiser),
+          },
+          {
+            path: 'groups/:groupId/events',
+            ...page(() => import('../routes/groups/events'), 'GroupEventsPage', allow.organiser),
+          },
+          {
+            path: 'groups/:groupId/events/new',
+            ...page(() => import('../routes/groups/new-event'), 'NewEventPage', allow.organiser),
+          },
+          {
+            path: 'groups/:groupId/settings',
+            ...page(() => import('../routes/groups/settings'), 'GroupSettingsPage', allow.organiser),
+          },
+          {
+            path: 'admin/categories',
+            ...page(() => import('../routes/admin/categories'), 'AdminCategoriesPage', allow.admin),
+          },
+          { path: 'admin', ...page(() => import('../routes/admin/overview'), 'AdminOverviewPage', allow.admin) },
+          {
+            path: 'admin/mailbox/:mailId?',
+            ...page(() => import('../routes/admin/mailbox'), 'MailboxPage', allow.admin),
+          },
+          { path: '*', element: <NotFoundPage /> },
+        ],
+      },
+    ],
+  },
+]);

@@ -1,0 +1,1 @@
+export const authKeys = { config: ['public', 'config'] as const };
