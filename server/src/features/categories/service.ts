@@ -1,28 +1,34 @@
-import { asc } from 'drizzle-orm';
-import type { DbOrTx } from '../../db/client';
-import { categories } from '../../db/schema/index';
+import type { Category } from '../../../../shared/api/categories';
+import type { CategoryPatch } from '../../../../shared/schemas/categories';
+import type { AppContext } from '../../context';
+import { notFound } from '../../http/errors';
+import { categoryRow, listCategoryRows, updateCategoryRow, type CategoryRow } from './queries';
 
-export type Category = typeof categories.$inferSelect;
+const toCategory = (c: CategoryRow): Category => ({
+  id: c.id,
+  slug: c.slug,
+  name: c.name,
+  weeeCategory: c.weeeCategory,
+  unuKey: c.unuKey,
+  avgWeightKg: Number(c.avgWeightKg),
+  weightSource: c.weightSource,
+  skill: c.skill,
+  equipment: c.equipment,
+  repairMinutes: c.repairMinutes,
+  mains: Boolean(c.mains),
+  refusal: c.refusal ?? null,
+  co2ePerKg: c.co2ePerKg === null ? null : Number(c.co2ePerKg),
+  co2eSource: c.co2eSource,
+});
 
-export const listCategories = (db: DbOrTx) =>
-  db.select().from(categories).orderBy(asc(categories.sort), asc(categories.name));
-
-export function toCategoryDto(c: Category) {
-  return {
-    id: c.id,
-    slug: c.slug,
-    name: c.name,
-    weeeCategory: c.weeeCategory,
-    unuKey: c.unuKey,
-    avgWeightKg: Number(c.avgWeightKg),
-    weightSource: c.weightSource,
-    skill: c.skill,
-    equipment: c.equipment,
-    repairMinutes: c.repairMinutes,
-    mains: Boolean(c.mains),
-    refusal: c.refusal ?? null,
-    co2ePerKg: c.co2ePerKg === null ? null : Number(c.co2ePerKg),
-    co2eSource: c.co2eSource,
-  };
+export async function listCategories(ctx: AppContext): Promise<Category[]> {
+  return (await listCategoryRows(ctx.database.db)).map(toCategory);
 }
-export type CategoryDto = ReturnType<typeof toCategoryDto>;
+
+/** An admin's edit; the weights and factors feed the statistics from the next figure on. */
+export async function updateCategory(ctx: AppContext, id: number, patch: CategoryPatch): Promise<Category> {
+  const { db } = ctx.database;
+  if (!(await categoryRow(db, id))) throw notFound('That category');
+  if (Object.keys(patch).length) await updateCategoryRow(db, id, patch);
+  return toCategory((await categoryRow(db, id))!);
+}
