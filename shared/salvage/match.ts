@@ -1,4 +1,4 @@
-import { checkSubstitution, type TransistorSpec } from '../bench/transistors';
+import { checkSubstitution, type TransistorSpec } from '../calculators/transistors';
 import type { PartRatings, PartType } from './constants';
 
 /**
@@ -6,7 +6,7 @@ import type { PartRatings, PartType } from './constants';
  * the same kind; the value that sets the circuit's behaviour equal (resistance within its tolerance, capacitance
  * within ±20 %, a fuse's current, a cut-out's trip temperature, a power supply's output voltage); every rating
  * that limits stress at least as high; a different package flagged, not refused. Transistors follow the rule in
- * shared/bench/transistors.
+ * shared/calculators/transistors.
  */
 export interface Needed {
   type: PartType;

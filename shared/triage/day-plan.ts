@@ -1,4 +1,4 @@
-import { triage, type Level, type TriageBench } from './index';
+import { triage, type Level, type TriageBench } from './engine';
 
 export interface PlanItem {
   id: string;

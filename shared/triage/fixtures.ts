@@ -1,4 +1,4 @@
-import type { Level, TriageInput } from './index';
+import type { Level, TriageInput } from './engine';
 
 /** A deterministic pseudo-random round of a big event, for benchmarks (mulberry32). */
 export function largeRound(opts: {

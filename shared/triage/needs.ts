@@ -1,4 +1,4 @@
-import type { Level } from './index';
+import type { Level } from './engine';
 
 /**
  * What an item needs at the bench, from its category. Our rule: a mains item needs a fixer at least capable (2)

@@ -1,6 +1,6 @@
 // javascript-lp-solver: a widely used LP/MIP solver on npm, independent of the engine's flow code.
 import solver from 'javascript-lp-solver';
-import type { TriageInput } from '../../shared/triage';
+import type { TriageInput } from '../../shared/triage/engine';
 
 /**
  * The exact optimum of a round by integer programming: one 0/1 variable per (item, fixer, bench) triple the rules

@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { triage, type TriageInput, type TriageResult } from '../../shared/triage';
+import { triage, type TriageInput, type TriageResult } from '../../shared/triage/engine';
 import { referenceOptimum as reference } from '../support/triage-reference';
 
 const item = (id: string, skill: string, minLevel: 1 | 2 | 3, equipment: string[] = [], priority = 1) => ({

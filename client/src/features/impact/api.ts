@@ -1,7 +1,7 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { Barrier, Outcome } from '../../../../shared/event-day/constants';
 import type { FollowUpStatus } from '../../../../shared/impact/follow-ups';
-import type { ImpactTotals } from '../../../../shared/impact/index';
+import type { ImpactTotals } from '../../../../shared/impact/statistics';
 import { api } from '../../lib/api';
 
 export interface StatsFilter {

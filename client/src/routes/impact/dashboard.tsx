@@ -3,7 +3,7 @@ import { Link, useNavigate, useParams, useSearchParams } from 'react-router';
 import { Bar, BarChart, CartesianGrid, Legend, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import { BARRIER_LABELS, OUTCOME_LABELS, type Outcome } from '../../../../shared/event-day/constants';
 import { formatDay } from '../../../../shared/format';
-import type { Counts } from '../../../../shared/impact/index';
+import type { Counts } from '../../../../shared/impact/statistics';
 import { GroupTabs } from '../../components/layouts/group-tabs';
 import { Button } from '../../components/ui/button';
 import { Alert, Card, EmptyState, PageTitle, Spinner } from '../../components/ui/feedback';

@@ -9,10 +9,10 @@ import {
   timeToVoltage,
   voltageAfter,
   type SafeVoltageThreshold,
-} from '../../../../shared/bench/capacitors';
-import { E_SERIES_SOURCE, nearestStandard, type ESeriesName } from '../../../../shared/bench/e-series';
-import { MAINS_MAX_V, MAINS_MIN_V, MAINS_PEAK_SOURCE, rectifiedPeak } from '../../../../shared/bench/mains';
-import { judgeResistance, MEASURE_SOURCE, parseReading, type MeasureVerdict } from '../../../../shared/bench/measure';
+} from '../../../../shared/calculators/capacitors';
+import { E_SERIES_SOURCE, nearestStandard, type ESeriesName } from '../../../../shared/calculators/e-series';
+import { MAINS_MAX_V, MAINS_MIN_V, MAINS_PEAK_SOURCE, rectifiedPeak } from '../../../../shared/calculators/mains';
+import { judgeResistance, MEASURE_SOURCE, parseReading, type MeasureVerdict } from '../../../../shared/calculators/measure';
 import {
   decodeBands,
   decodePrintedCode,
@@ -27,7 +27,7 @@ import {
   type DigitColour,
   type MultiplierColour,
   type ToleranceColour,
-} from '../../../../shared/bench/resistors';
+} from '../../../../shared/calculators/resistors';
 import {
   checkSubstitution,
   interpretDiodeTest,
@@ -39,7 +39,7 @@ import {
   type ProbePair,
   type TransistorSpec,
   type TransistorType,
-} from '../../../../shared/bench/transistors';
+} from '../../../../shared/calculators/transistors';
 import { CAUTIONS, LOCAL_RULES_PREVAIL } from '../../../../shared/safety/cautions';
 import { cordResistanceLimitOhm, protectiveConductorLimitOhm, SAFETY_SOURCE } from '../../../../shared/safety/limits';
 import { Button } from '../../components/ui/button';

@@ -7,7 +7,7 @@ import {
   type Outcome,
 } from '../../../../shared/event-day/constants';
 import { DEFAULT_DISPLACEMENT, DISPLACEMENT_NOTE, FACTOR_SOURCE } from '../../../../shared/impact/factors';
-import { totalsFromCells, type ImpactCategory, type ImpactCell } from '../../../../shared/impact/index';
+import { totalsFromCells, type ImpactCategory, type ImpactCell } from '../../../../shared/impact/statistics';
 import { shortName } from '../../../../shared/event-day/tag-code';
 import type { AppContext } from '../../context';
 import type { DbOrTx } from '../../db/client';

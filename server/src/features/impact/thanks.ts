@@ -1,6 +1,6 @@
 import { and, eq, gte, inArray, isNotNull, isNull, lte, notInArray } from 'drizzle-orm';
 import { OUTCOME_LABELS } from '../../../../shared/event-day/constants';
-import { impact } from '../../../../shared/impact/index';
+import { impact } from '../../../../shared/impact/statistics';
 import type { AppContext } from '../../context';
 import {
   bookingItems,

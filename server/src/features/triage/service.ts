@@ -1,6 +1,6 @@
 import { and, asc, desc, eq, inArray, sql } from 'drizzle-orm';
 import { itemNeeds, checkPlacement } from '../../../../shared/triage/needs';
-import { triage, type TriageInput, type TriageResult } from '../../../../shared/triage/index';
+import { triage, type TriageInput, type TriageResult } from '../../../../shared/triage/engine';
 import { dayPlan } from '../../../../shared/triage/day-plan';
 import type { AppContext } from '../../context';
 import {

@@ -5,20 +5,20 @@ import { randomBytes } from 'node:crypto';
 import { mkdtempSync, rmSync } from 'node:fs';
 import type { AddressInfo } from 'node:net';
 import path from 'node:path';
-import { loadEnv } from '../src/config/env';
-import { createDatabase } from '../src/db/client';
-import { freePort } from '../src/infra/mariadb';
-import { seedDemo } from '../src/seed/demo';
-import { startServer } from '../src/server';
-import { loadOrCreateSecrets, startLocalDatabase, step } from './local-stack';
-import { benchTriage } from './bench-triage';
-import { benchStats } from './bench-stats';
+import { loadEnv } from '../../src/config/env';
+import { createDatabase } from '../../src/db/client';
+import { freePort } from '../../src/infra/mariadb';
+import { seedDemo } from '../../src/seed/demo';
+import { startServer } from '../../src/server';
+import { loadOrCreateSecrets, startLocalDatabase, step } from '../local-stack';
+import { measureTriage } from './triage';
+import { measureStats } from './stats';
 
-benchTriage();
+measureTriage();
 if (process.env.BENCH === 'triage') process.exit(0);
 console.log('');
 if (!process.env.BENCH || process.env.BENCH === 'stats') {
-  await benchStats();
+  await measureStats();
   if (process.env.BENCH === 'stats') process.exit(0);
   console.log('');
 }

@@ -1,15 +1,15 @@
 import mysql from 'mysql2/promise';
 import { mkdtempSync, rmSync } from 'node:fs';
 import path from 'node:path';
-import { loadEnv } from '../src/config/env';
-import { createDatabase } from '../src/db/client';
-import { rollupSelect } from '../src/features/impact/cells';
-import { hashPassword } from '../src/auth/passwords';
-import { users } from '../src/db/schema/index';
-import { freePort } from '../src/infra/mariadb';
-import { ensureCategories } from '../src/seed/categories';
-import { startServer } from '../src/server';
-import { loadOrCreateSecrets, startLocalDatabase, step } from './local-stack';
+import { loadEnv } from '../../src/config/env';
+import { createDatabase } from '../../src/db/client';
+import { rollupSelect } from '../../src/features/impact/cells';
+import { hashPassword } from '../../src/auth/passwords';
+import { users } from '../../src/db/schema/index';
+import { freePort } from '../../src/infra/mariadb';
+import { ensureCategories } from '../../src/seed/categories';
+import { startServer } from '../../src/server';
+import { loadOrCreateSecrets, startLocalDatabase, step } from '../local-stack';
 
 /**
  * `BENCH=stats npm run bench`: fills a throwaway MariaDB with 1,000,000 repair records over 10 years and 200
@@ -21,7 +21,7 @@ const YEARS = 10;
 const RECORDS = Number(process.env.BENCH_RECORDS ?? 1_000_000);
 const RUNS = 30;
 
-export async function benchStats() {
+export async function measureStats() {
   const dir = mkdtempSync(path.join('/dev/shm', 'mendery-bench-stats-'));
   const local = await startLocalDatabase({
     dir,

@@ -1,7 +1,7 @@
 import fc from 'fast-check';
-import { triage, type TriageInput } from '../../shared/triage/index';
-import { largeRound } from '../../shared/triage/fixtures';
-import { referenceOptimum } from '../../tests/support/triage-reference';
+import { triage, type TriageInput } from '../../../shared/triage/engine';
+import { largeRound } from '../../../shared/triage/fixtures';
+import { referenceOptimum } from '../../../tests/support/triage-reference';
 
 /** Times the triage engine on a large event and on a random set, and the reference integer program beside it. */
 const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
@@ -17,7 +17,7 @@ function time(fn: () => unknown, runs: number) {
 
 const referenceCount = (input: TriageInput) => referenceOptimum(input);
 
-export function benchTriage() {
+export function measureTriage() {
   console.log('Triage engine (pure, no I/O)');
   for (const [label, seatedShare] of [
     ['none seated', 0],
@@ -59,4 +59,4 @@ export function benchTriage() {
   );
 }
 
-if (import.meta.url === `file://${process.argv[1]}`) benchTriage();
+if (import.meta.url === `file://${process.argv[1]}`) measureTriage();

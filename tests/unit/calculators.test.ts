@@ -9,7 +9,7 @@ import {
   TOLERANCE_BY_LETTER,
   DIGIT_COLOURS,
   type BandColour,
-} from '../../shared/bench/resistors';
+} from '../../shared/calculators/resistors';
 import {
   decade,
   E12,
@@ -19,8 +19,8 @@ import {
   isStandard,
   nearestStandard,
   type ESeriesName,
-} from '../../shared/bench/e-series';
-import { rectifiedPeak } from '../../shared/bench/mains';
+} from '../../shared/calculators/e-series';
+import { rectifiedPeak } from '../../shared/calculators/mains';
 import {
   DEFAULT_TOUCH_THRESHOLD,
   dischargeAdvice,
@@ -34,14 +34,14 @@ import {
   timeConstantS,
   timeToVoltage,
   voltageAfter,
-} from '../../shared/bench/capacitors';
-import { judgeResistance, netResistance, parseReading } from '../../shared/bench/measure';
+} from '../../shared/calculators/capacitors';
+import { judgeResistance, netResistance, parseReading } from '../../shared/calculators/measure';
 import {
   checkSubstitution,
   interpretDiodeTest,
   type DiodeReadings,
   type TransistorSpec,
-} from '../../shared/bench/transistors';
+} from '../../shared/calculators/transistors';
 import { protectiveConductorLimitOhm } from '../../shared/safety/limits';
 
 // Sources are named beside each check, as in the project's reference notes §3–4. IEC 60062 and IEC 60063 values
@@ -531,7 +531,7 @@ describe('protective conductor limit from cord length, through shared/safety/lim
 
 describe('meter readings as the display shows them (common practice, no published source)', () => {
   it('reads 1k, 4.71k, 4K7, 1.2M and 0,47 Ω; refuses nonsense', async () => {
-    const { parseReading } = await import('../../shared/bench/measure');
+    const { parseReading } = await import('../../shared/calculators/measure');
     expect(parseReading('1k')).toBe(1000);
     expect(parseReading('4.71k')).toBeCloseTo(4710, 9);
     expect(parseReading('4K7')).toBeCloseTo(4700, 9);
