@@ -3,7 +3,10 @@ import { EQUIPMENT, SKILLS } from '../constants';
 
 /** An admin's change to a kind of item. Numbers may come typed with a decimal comma, as people type them. */
 const decimal = (schema: z.ZodNumber) =>
-  z.preprocess((v) => (typeof v === 'string' ? (v.trim() === '' ? undefined : Number(v.replace(',', '.'))) : v), schema);
+  z.preprocess(
+    (v) => (typeof v === 'string' ? (v.trim() === '' ? undefined : Number(v.replace(',', '.'))) : v),
+    schema,
+  );
 
 export const categoryPatchSchema = z
   .object({

@@ -172,3 +172,12 @@ describe('the seeded taxonomy', () => {
     ).toEqual(['fridge', 'gas-appliance', 'microwave']);
   });
 });
+
+describe('the item label', () => {
+  it('names the kind, then brand and model after a dash, and leaves out what is missing', async () => {
+    const { itemLabel } = await import('../../shared/item-label');
+    expect(itemLabel({ categoryName: 'Kettle', brand: 'Brava', model: 'K200' })).toBe('Kettle — Brava K200');
+    expect(itemLabel({ categoryName: 'Kettle', brand: null, model: 'K200' })).toBe('Kettle — K200');
+    expect(itemLabel({ categoryName: 'Kettle', brand: '  ', model: undefined })).toBe('Kettle');
+  });
+});

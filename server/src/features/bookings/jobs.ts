@@ -7,6 +7,7 @@ import { manageTokenFor, manageUrl } from '../../core/links';
 import { offerFreedPlaces } from './service';
 import { reminderMail } from './mails';
 import { bookingWithContext } from './queries';
+import { itemLabel } from '../../../../shared/item-label';
 
 /** Offers not taken in time release their places and pass them to the next in line. */
 export async function expireOffers(ctx: AppContext): Promise<number> {
@@ -68,7 +69,7 @@ export async function sendReminders(ctx: AppContext): Promise<number> {
           slotStartsAt: r.slot.startsAt,
           slotEndsAt: r.slot.endsAt,
           venue: r.venue,
-          items: items.map((i) => [i.name, [i.brand, i.model].filter(Boolean).join(' ')].filter(Boolean).join(' — ')),
+          items: items.map((i) => itemLabel({ categoryName: i.name, brand: i.brand, model: i.model })),
           manageUrl: manageUrl(ctx, r.booking.reference, manageTokenFor(ctx, r.booking.reference)),
         }),
       );

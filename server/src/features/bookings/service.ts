@@ -2,6 +2,7 @@ import { randomBytes, timingSafeEqual } from 'node:crypto';
 import { and, asc, eq, inArray, sql } from 'drizzle-orm';
 import type { z } from 'zod';
 import { formatReference } from '../../../../shared/booking/reference';
+import { itemLabel } from '../../../../shared/item-label';
 import type { createBookingSchema } from '../../../../shared/schemas/bookings';
 import type { AppContext } from '../../context';
 import type { DbOrTx, Tx } from '../../db/client';
@@ -149,8 +150,8 @@ function facts(
   };
 }
 
-const itemLabel = (cat: { name: string } | undefined, i: Item) =>
-  [cat?.name ?? 'Item', [i.brand, i.model].filter(Boolean).join(' ')].filter(Boolean).join(' — ');
+const labelOf = (cat: { name: string } | undefined, i: Item) =>
+  itemLabel({ categoryName: cat?.name ?? 'Item', brand: i.brand, model: i.model });
 
 interface Prepared {
   reference: string;
@@ -220,7 +221,7 @@ async function insertBooking(
     ctx,
     row,
     { reference, visitorName: input.visitor.name, visitorEmail: input.visitor.email },
-    input.items.map((i) => itemLabel(cats.get(i.categoryId), i)),
+    input.items.map((i) => labelOf(cats.get(i.categoryId), i)),
     token,
   );
   await enqueueMail(tx, confirmationMail(f, bookingQrText(ctx.env.publicUrl, reference)));
@@ -404,7 +405,7 @@ async function itemsOf(tx: Tx, bookingId: number) {
     .where(eq(bookingItems.bookingId, bookingId));
 }
 const labelsOf = (items: { name: string; brand: string | null; model: string | null }[]) =>
-  items.map((i) => [i.name, [i.brand, i.model].filter(Boolean).join(' ')].filter(Boolean).join(' — '));
+  items.map((i) => itemLabel({ categoryName: i.name, brand: i.brand, model: i.model }));
 
 /** Frees `places` in a slot, then offers them to the waiting list in order. Runs in the caller's transaction. */
 async function releasePlaces(ctx: AppContext, tx: Tx, slotId: number, places: number) {

@@ -19,6 +19,7 @@ import {
 } from '../../db/schema/index';
 import { notFound } from '../../http/errors';
 import { eventLayout } from '../../core/benches';
+import { itemLabel } from '../../../../shared/item-label';
 
 /** Every item of the event that reached the desk, with its slot, plan and outcome: what the hall views are made of. */
 async function hallItems(ctx: AppContext, eventId: number) {
@@ -160,7 +161,7 @@ export async function liveView(ctx: AppContext, eventId: number) {
     id: i.id,
     queueNumber: i.queueNumber,
     tagCode: i.tagCode,
-    label: [i.categoryName, [i.brand, i.model].filter(Boolean).join(' ')].filter(Boolean).join(' — '),
+    label: itemLabel(i),
     visitor: shortName(i.visitorName),
     status: i.status,
     fixerName: i.fixerId ? (names.get(i.fixerId) ?? null) : null,

@@ -81,9 +81,6 @@ export async function newTagCodes(tx: Tx, n: number): Promise<string[]> {
   throw new Error('Could not find free tag codes.');
 }
 
-export const itemLabel = (r: { categoryName: string; brand: string | null; model: string | null }) =>
-  [r.categoryName, [r.brand, r.model].filter(Boolean).join(' ')].filter(Boolean).join(' — ');
-
 export const isHeating = (slug: string) => (HEATING_CATEGORY_SLUGS as readonly string[]).includes(slug);
 
 /** The item page: fixers see the visitor's first name and initial only; reception and organisers see the name and phone. */

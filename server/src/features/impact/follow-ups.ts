@@ -23,6 +23,7 @@ import { enqueueMail } from '../../mail/outbox';
 import { composeMail } from '../../mail/templates';
 import type { ItemRow } from '../../core/items';
 import { rebookUrl } from '../../core/links';
+import { itemLabel } from '../../../../shared/item-label';
 
 function partMail(
   ctx: AppContext,
@@ -166,7 +167,7 @@ export async function listFollowUps(ctx: AppContext, groupId: number) {
     note: r.f.note,
     ageDays: Math.floor((now.getTime() - r.f.createdAt.getTime()) / 86400_000),
     reminderDue: reminderDue({ status: r.f.status, createdAt: r.f.createdAt, remindedAt: r.f.remindedAt }, now),
-    item: [r.categoryName, [r.brand, r.model].filter(Boolean).join(' ')].filter(Boolean).join(' — '),
+    item: itemLabel(r),
     part: r.part,
     partLink: r.partLink,
     partCost: r.partCostCents === null ? null : r.partCostCents / 100,
