@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { CATEGORY_SEEDS } from '../../shared/categories';
+import { CATEGORY_SEEDS } from '../../shared/categories/seeds';
 import {
   formatReference,
   normaliseReference,

@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { CATEGORY_SEEDS } from '../../shared/categories';
+import { CATEGORY_SEEDS } from '../../shared/categories/seeds';
 import { OUTCOMES, BARRIERS } from '../../shared/event-day/constants';
 import { EMISSION_FACTORS, factorFor } from '../../shared/impact/factors';
 import { impact, lastVisits, type ImpactCategory, type RepairRecord } from '../../shared/impact/statistics';

@@ -1,4 +1,4 @@
-import { execFileSync, spawnSync } from 'node:child_process';
+import { spawnSync } from 'node:child_process';
 import { existsSync } from 'node:fs';
 
 /** Finds an executable on PATH or in the sbin folders Debian uses for daemons. */
@@ -40,8 +40,4 @@ export function ensureDebianPackage(executable: string, pkg: string, log: (line:
     process.exit(1);
   }
   return after;
-}
-
-export function commandOutput(file: string, args: string[]): string {
-  return execFileSync(file, args, { encoding: 'utf8' }).trim();
 }

@@ -1,6 +1,6 @@
 import { and, eq, isNull, sql } from 'drizzle-orm';
 import { EMISSION_FACTORS, FACTOR_SOURCE, factorKindFor } from '../../../shared/impact/factors';
-import { CATEGORY_SEEDS } from '../../../shared/categories';
+import { CATEGORY_SEEDS } from '../../../shared/categories/seeds';
 import type { Db } from '../db/client';
 import { categories } from '../db/schema/index';
 

@@ -108,7 +108,6 @@ const TODAY_VISITORS: {
     state: 'booked',
   },
 ];
-export const TODAY_REFERENCES = TODAY_VISITORS.map((v) => v.ref);
 export const TODAY_TITLE = 'Kestlebridge drop-in session';
 const TAGS = ['KD2A7', 'KD3B8', 'KD4C9'];
 
