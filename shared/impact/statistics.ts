@@ -1,4 +1,5 @@
 import { BARRIERS, type Barrier, type Outcome } from '../event-day/constants';
+import { countedBarrier, DIVERTING_OUTCOME, lastVisits } from './visits';
 
 /**
  * The impact engine: from repair records and the category table to items seen, outcomes, kilograms diverted
@@ -68,12 +69,6 @@ export interface ImpactTotals extends Counts {
 
 export const monthOf = (d: string | Date) => (typeof d === 'string' ? d : d.toISOString()).slice(0, 7);
 
-/** Leaves out visits that a later visit of the same item supersedes, following chains of returns. */
-export function lastVisits<T extends Pick<RepairRecord, 'itemId' | 'returnOfItemId'>>(records: readonly T[]): T[] {
-  const superseded = new Set(records.map((r) => r.returnOfItemId).filter((x): x is number => x != null));
-  return records.filter((r) => !superseded.has(r.itemId));
-}
-
 const emptyCell = (month: string, categoryId: number): ImpactCell => ({
   month,
   categoryId,
@@ -90,18 +85,18 @@ const emptyCell = (month: string, categoryId: number): ImpactCell => ({
 /** Adds one record (already de-duplicated) to its cell. */
 export function addToCell(cell: ImpactCell, r: RepairRecord) {
   cell.items++;
-  if (r.outcome === 'fixed') {
+  if (r.outcome === DIVERTING_OUTCOME) {
     cell.fixed++;
     if (r.weighedKg != null) cell.fixedWeighedKg += r.weighedKg;
     else cell.fixedUnweighed++;
   } else if (r.outcome === 'parts-needed') cell.partsNeeded++;
   else if (r.outcome === 'advice') cell.advice++;
-  else if (r.outcome === 'end-of-life') {
-    cell.endOfLife++;
-    if (r.barrier) cell.barriers[r.barrier] = (cell.barriers[r.barrier] ?? 0) + 1;
-  }
+  else if (r.outcome === 'end-of-life') cell.endOfLife++;
+  const barrier = countedBarrier(r.outcome, r.barrier);
+  if (barrier) cell.barriers[barrier] = (cell.barriers[barrier] ?? 0) + 1;
 }
 
+/** The cells of records that all happened (see visits.ts `countedVisits`); a superseded visit is left out here. */
 export function cellsFromRecords(records: readonly RepairRecord[]): ImpactCell[] {
   const cells = new Map<string, ImpactCell>();
   for (const r of lastVisits(records)) {

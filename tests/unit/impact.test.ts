@@ -3,7 +3,8 @@ import { describe, expect, it } from 'vitest';
 import { CATEGORY_SEEDS } from '../../shared/categories/seeds';
 import { OUTCOMES, BARRIERS } from '../../shared/event-day/constants';
 import { EMISSION_FACTORS, factorFor } from '../../shared/impact/factors';
-import { impact, lastVisits, type ImpactCategory, type RepairRecord } from '../../shared/impact/statistics';
+import { impact, type ImpactCategory, type RepairRecord } from '../../shared/impact/statistics';
+import { lastVisits } from '../../shared/impact/visits';
 
 /** The shipped taxonomy: weights from Statistics Netherlands' UNU-KEY table (2020), factors from shared/impact/factors. */
 const categories: ImpactCategory[] = CATEGORY_SEEDS.map((c, i) => ({

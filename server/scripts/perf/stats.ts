@@ -3,7 +3,7 @@ import { mkdtempSync, rmSync } from 'node:fs';
 import path from 'node:path';
 import { loadEnv } from '../../src/config/env';
 import { createDatabase } from '../../src/db/client';
-import { rollupSelect } from '../../src/features/impact/cells';
+import { rollupSelect } from '../../src/features/impact/queries/cells';
 import { hashPassword } from '../../src/auth/passwords';
 import { users } from '../../src/db/schema/index';
 import { freePort } from '../../src/infra/mariadb';

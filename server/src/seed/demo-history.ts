@@ -18,7 +18,7 @@ import {
   users,
   venues,
 } from '../db/schema/index';
-import { refreshEventCells } from '../features/impact/cells';
+import { refreshEventCells } from '../features/impact/queries/cells';
 
 /**
  * A year of past sessions with invented visitors and outcomes, so the impact dashboard, the public page, the

@@ -3,7 +3,7 @@ import { eq } from 'drizzle-orm';
 import { generateSlots } from '../../../shared/booking/slots';
 import type { ItemStatus } from '../../../shared/event-day/constants';
 import type { Db } from '../db/client';
-import { refreshEventCells } from '../features/impact/cells';
+import { refreshEventCells } from '../features/impact/queries/cells';
 import {
   bookingItems,
   bookings,

@@ -1,9 +1,11 @@
-import { and, asc, eq, gte, isNotNull, lte, notInArray, sql, type SQL } from 'drizzle-orm';
+import { and, asc, eq, gte, lte, sql, type SQL } from 'drizzle-orm';
 import { stringify } from 'csv-stringify/sync';
 import { BARRIER_LABELS, OUTCOME_LABELS, type Barrier, type Outcome } from '../../../../shared/event-day/constants';
+import { REPAIR_STATUS_OF, type RepairStatus } from '../../../../shared/impact/visits';
 import type { AppContext } from '../../context';
 import { bookingItems, bookings, categories, events, itemOutcomes, repairGroups, users } from '../../db/schema/index';
-import type { StatsFilter } from './service';
+import type { StatsFilter } from './queries/stats';
+import { arrivedVisit } from './queries/visits';
 
 /**
  * Field names and status values of the Open Repair Data Standard (REFERENCE.md §5: product category, brand, year
@@ -26,23 +28,17 @@ export const ORDS_FIELDS = [
   'problem',
 ] as const;
 
+const ORDS_STATUS: Record<RepairStatus, string> = {
+  fixed: 'Fixed',
+  repairable: 'Repairable',
+  'end-of-life': 'End of life',
+};
 /** Fixed → Fixed; a part needed or advice given → Repairable; end of life → End of life; nothing recorded → Unknown. */
-export const ordsStatus = (o: Outcome | null) =>
-  o === 'fixed'
-    ? 'Fixed'
-    : o === 'parts-needed' || o === 'advice'
-      ? 'Repairable'
-      : o === 'end-of-life'
-        ? 'End of life'
-        : 'Unknown';
+export const ordsStatus = (o: Outcome | null) => (o ? ORDS_STATUS[REPAIR_STATUS_OF[o]] : 'Unknown');
 export const ordsBarrier = (b: Barrier | null) => (b ? BARRIER_LABELS[b] : '');
 
 function filterOf(f: StatsFilter): SQL[] {
-  const parts: SQL[] = [
-    eq(bookings.status, 'confirmed'),
-    isNotNull(bookingItems.checkedInAt),
-    notInArray(bookingItems.status, ['no-show', 'withdrawn']),
-  ];
+  const parts: SQL[] = arrivedVisit();
   if (f.groupId) parts.push(eq(events.groupId, f.groupId));
   if (f.eventId) parts.push(eq(events.id, f.eventId));
   if (f.from) parts.push(gte(sql`DATE(${events.startsAt})`, f.from));

@@ -1,5 +1,5 @@
 import type { Feature } from '../../core/feature';
-import { refreshCells, refreshEventCells } from './cells';
+import { refreshCells, refreshEventCells, refreshItemCells } from './queries/cells';
 import { afterOutcome, markCameBack, markRebooked, sendFollowUpReminders } from './follow-ups';
 import { impactPublicRoutes, impactRoutes } from './routes';
 import { sendThankYous } from './thanks';
@@ -9,10 +9,7 @@ export const impactFeature: Feature = {
   publicRoutes: impactPublicRoutes,
   routes: impactRoutes,
   hooks: {
-    outcomeRecorded: [
-      (tx, e) => refreshCells(tx, [e.item.item.id]),
-      (tx, e) => afterOutcome(e.ctx, tx, e.item, e.outcome),
-    ],
+    outcomeRecorded: [(tx, e) => refreshItemCells(tx, e.item), (tx, e) => afterOutcome(e.ctx, tx, e.item, e.outcome)],
     itemsCheckedIn: [(tx, e) => refreshCells(tx, e.itemIds), (tx, e) => markCameBack(tx, e.arrivedIds)],
     eventsCancelled: [(tx, e) => refreshEventCells(tx, e.eventIds)],
     returnBooked: [markRebooked],

@@ -10,8 +10,8 @@ import { openRepairDataCsv, recordsCsv } from './exports';
 import { followUpGroupId, listFollowUps, setFollowUpStatus } from './follow-ups';
 import {
   assertDateRange,
-  displacement,
   eventReport,
+  getDisplacement,
   method,
   publicImpact,
   rangeReport,
@@ -136,11 +136,10 @@ export function impactRoutes(ctx: AppContext) {
   );
 
   r.get('/admin/impact-settings', requireAdmin, async (_req, res) =>
-    res.json({ displacement: await displacement(ctx.database.db) }),
+    res.json({ displacement: await getDisplacement(ctx) }),
   );
   r.put('/admin/impact-settings', requireAdmin, async (req, res) => {
-    await setDisplacement(ctx, body(req, impactSettingsSchema).displacement);
-    res.json({ displacement: await displacement(ctx.database.db) });
+    res.json({ displacement: await setDisplacement(ctx, body(req, impactSettingsSchema).displacement) });
   });
   return r;
 }

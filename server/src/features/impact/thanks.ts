@@ -1,4 +1,4 @@
-import { and, eq, gte, inArray, isNotNull, isNull, lte, notInArray } from 'drizzle-orm';
+import { and, eq, gte, inArray, isNotNull, isNull, lte } from 'drizzle-orm';
 import { OUTCOME_LABELS } from '../../../../shared/event-day/constants';
 import { impact } from '../../../../shared/impact/statistics';
 import type { AppContext } from '../../context';
@@ -14,7 +14,9 @@ import {
 } from '../../db/schema/index';
 import { enqueueMail } from '../../mail/outbox';
 import { composeMail } from '../../mail/templates';
-import { displacement, impactCategories, stats } from './service';
+import { displacement, impactCategories } from './queries/stats';
+import { arrivedVisit } from './queries/visits';
+import { stats } from './service';
 
 const kg = (x: number) => `${x.toLocaleString('en-GB', { maximumFractionDigits: 1 })} kg`;
 
@@ -59,15 +61,7 @@ export async function sendThankYous(ctx: AppContext): Promise<number> {
         .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
         .innerJoin(categories, eq(categories.id, bookingItems.categoryId))
         .leftJoin(itemOutcomes, eq(itemOutcomes.itemId, bookingItems.id))
-        .where(
-          and(
-            eq(bookings.eventId, event.id),
-            eq(bookings.status, 'confirmed'),
-            isNotNull(bookingItems.checkedInAt),
-            notInArray(bookingItems.status, ['no-show', 'withdrawn']),
-            isNotNull(bookings.visitorEmail),
-          ),
-        );
+        .where(and(eq(bookings.eventId, event.id), ...arrivedVisit(), isNotNull(bookings.visitorEmail)));
       for (const bookingId of new Set(items.map((i) => i.bookingId))) {
         const mine = items.filter((i) => i.bookingId === bookingId);
         const t = impact(
