@@ -207,3 +207,31 @@ export function decodePrintedCode(input: string): ResistorValue {
     `"${input.trim()}" is not a resistor code: use 3 or 4 digits (103, 1002), R/K/M notation (4R7, R47, 4K7, 2M2), optionally with a tolerance letter (B C D F G J K M).`,
   );
 }
+
+const SCALE = { k: 1e3, K: 1e3, M: 1e6, G: 1e9 } as const;
+
+/**
+ * Ohms as typed at the bench: a plain number of ohms ("319", "0,47 Ω"), a number with an SI prefix ("4.7k",
+ * "1M"), or the letter-and-digit code where the letter stands for the decimal point ("4k7", "2R2", "R47", "2M2").
+ * undefined when empty, NaN when it is not a resistance. Lower-case m is refused: milli or mega?
+ */
+export function parseOhms(text: string): number | undefined {
+  const t = text
+    .trim()
+    .replace(',', '.')
+    .replace(/\s*(Ω|ohms?)$/i, '')
+    .trim();
+  if (t === '') return undefined;
+  const plain = Number(t);
+  if (Number.isFinite(plain)) return plain;
+  const scaled = /^(\d*\.?\d+)\s*([kKMG])$/.exec(t);
+  if (scaled) return clean(Number(scaled[1]) * SCALE[scaled[2] as keyof typeof SCALE]);
+  if (/^\d*[RrKkMG]\d*$/.test(t)) {
+    try {
+      return decodePrintedCode(t).ohms;
+    } catch {
+      return Number.NaN;
+    }
+  }
+  return Number.NaN;
+}

@@ -18,6 +18,7 @@ import {
   decodePrintedCode,
   DIGIT_COLOURS,
   formatOhms,
+  parseOhms,
   MULTIPLIER_COLOURS,
   MULTIPLIER_EXPONENT,
   RESISTOR_CODE_SOURCE,
@@ -303,27 +304,8 @@ function attempt<T>(fn: () => T): Attempt<T> {
 /** undefined when empty, NaN when not a number; a comma decimal is accepted. */
 const num = (s: string) => (s.trim() === '' ? undefined : Number(s.trim().replace(',', '.')));
 const bad = (s: string) => Number.isNaN(num(s) as number);
-const clean = (x: number) => Number(x.toPrecision(12));
 const show = (x: number, dp = 3) => String(Number(x.toFixed(dp)));
 
-/** Ohms as typed at the bench: "319", "4.7k", "4k7", "2M2", "0.47 Ω". Lower-case m is refused: milli or mega? */
-function parseOhms(text: string): number | undefined {
-  const t = text
-    .trim()
-    .replace(',', '.')
-    .replace(/\s*(Ω|ohms?)$/i, '')
-    .trim();
-  if (t === '') return undefined;
-  const plain = Number(t);
-  if (Number.isFinite(plain)) return plain;
-  const scaled = /^(\d*\.?\d+)\s*([kKMG])$/.exec(t);
-  if (scaled) return clean(Number(scaled[1]) * { k: 1e3, K: 1e3, M: 1e6, G: 1e9 }[scaled[2] as 'k' | 'K' | 'M' | 'G']);
-  if (/^\d*[RrKkMG]\d*$/.test(t)) {
-    const r = attempt(() => decodePrintedCode(t).ohms);
-    if (r.ok) return r.value;
-  }
-  return Number.NaN;
-}
 const OHMS_HINT = 'e.g. 330, 4.7k, 4k7, 2M2';
 const ohmsError = (s: string) =>
   Number.isNaN(parseOhms(s) as number) ? 'Enter ohms, e.g. 330, 4.7k or 4k7 (M for megohms).' : undefined;
