@@ -8,10 +8,12 @@ import { eventsFeature } from './features/events/feature';
 import { groupsFeature } from './features/groups/feature';
 import { impactFeature } from './features/impact/feature';
 import { platformFeature } from './features/platform/feature';
+import { rotaFeature } from './features/rota/feature';
+import { skillsFeature } from './features/skills/feature';
 import { toolkitFeature } from './features/toolkit/feature';
 import { triageFeature } from './features/triage/feature';
 import { venuesFeature } from './features/venues/feature';
-import { volunteersFeature } from './features/volunteers/feature';
+import { workbenchFeature } from './features/workbench/feature';
 
 /**
  * The composition root: every feature, in the order its routers are mounted and its hook steps and jobs run.
@@ -25,7 +27,9 @@ export const FEATURES: Feature[] = [
   venuesFeature,
   eventsFeature,
   bookingsFeature,
-  volunteersFeature,
+  skillsFeature,
+  rotaFeature,
+  workbenchFeature,
   benchesFeature,
   triageFeature,
   eventDayFeature,

@@ -10,7 +10,6 @@ const isoDate = z
 const optionalId = z.preprocess((v) => (v === '' ? undefined : v), z.coerce.number().int().positive().optional());
 
 export const statsQuery = z.object({ groupId: optionalId, eventId: optionalId, from: isoDate, to: isoDate });
-export type StatsQuery = z.input<typeof statsQuery>;
 
 export const recordsQuery = statsQuery.extend({
   categoryId: optionalId,

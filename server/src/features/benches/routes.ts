@@ -1,13 +1,12 @@
-import { eq } from 'drizzle-orm';
 import { Router, type Request } from 'express';
 import { z } from 'zod';
-import { benchesSchema } from '../../../../shared/schemas/volunteers';
+import { layoutSchema } from '../../../../shared/schemas/benches';
 import type { AppContext } from '../../context';
 import { requireGroupRole } from '../../auth/guards';
-import { venues } from '../../db/schema/index';
 import { body, params } from '../../http/validate';
 import { eventLayout, venueLayout } from '../../core/benches';
 import { eventGroupId } from '../../core/events';
+import { venueGroupId } from './queries';
 import { saveEventLayout, saveVenueLayout } from './service';
 
 const idParams = z.object({ id: z.coerce.number().int().positive() });
@@ -18,29 +17,19 @@ export function benchRoutes(ctx: AppContext) {
   const { db } = ctx.database;
   const ofEvent = (roles: ('organiser' | 'host' | 'fixer')[]) =>
     requireGroupRole(roles, (req: Request) => eventGroupId(db, Number(req.params.id)));
-  const venueGroup = async (req: Request) =>
-    (
-      await db
-        .select({ g: venues.groupId })
-        .from(venues)
-        .where(eq(venues.id, Number(req.params.venueId)))
-    )[0]?.g ?? 0;
+  const venueGroup = (req: Request) => venueGroupId(db, Number(req.params.venueId));
 
   r.get('/venues/:venueId/benches', requireGroupRole(['organiser'], venueGroup), async (req, res) =>
     res.json(await venueLayout(db, Number(req.params.venueId))),
   );
   r.put('/venues/:venueId/benches', requireGroupRole(['organiser'], venueGroup), async (req, res) =>
-    res.json(
-      await saveVenueLayout(ctx, Number(req.params.venueId), body(req, z.object({ benches: benchesSchema })).benches),
-    ),
+    res.json(await saveVenueLayout(ctx, Number(req.params.venueId), body(req, layoutSchema).benches)),
   );
   r.get('/events/:id/benches', ofEvent(['organiser', 'host', 'fixer']), async (req, res) =>
     res.json(await eventLayout(db, params(req, idParams).id)),
   );
   r.put('/events/:id/benches', ofEvent(['organiser']), async (req, res) =>
-    res.json(
-      await saveEventLayout(ctx, params(req, idParams).id, body(req, z.object({ benches: benchesSchema })).benches),
-    ),
+    res.json(await saveEventLayout(ctx, params(req, idParams).id, body(req, layoutSchema).benches)),
   );
   return r;
 }

@@ -1,15 +1,16 @@
 import { Router, type Request } from 'express';
 import { z } from 'zod';
-import { lockSchema, placementSchema, runSchema } from '../../../../shared/schemas/volunteers';
+import { lockSchema, placementSchema, runSchema } from '../../../../shared/schemas/triage';
 import type { AppContext } from '../../context';
-import { requireGroupRole, requireUser } from '../../auth/guards';
+import { requireGroupRole } from '../../auth/guards';
 import { body, params } from '../../http/validate';
 import { eventGroupId } from '../../core/events';
+import { board } from './board';
 import * as t from './service';
 
 const itemParams = z.object({ id: z.coerce.number().int().positive(), itemId: z.coerce.number().int().positive() });
 
-/** Only the event's organisers run the engine or move items; a fixer reads their own queue. */
+/** Only the event's organisers run the engine or move items; a fixer's own queue is the workbench feature's. */
 export function triageRoutes(ctx: AppContext) {
   const r = Router();
   const organiser = requireGroupRole(['organiser'], (req: Request) =>
@@ -21,7 +22,7 @@ export function triageRoutes(ctx: AppContext) {
     const { slotId } = body(req, runSchema);
     res.status(201).json(await t.runTriage(ctx, id(req), slotId, req.user!.id));
   });
-  r.get('/events/:id/board', organiser, async (req, res) => res.json(await t.board(ctx, id(req))));
+  r.get('/events/:id/board', organiser, async (req, res) => res.json(await board(ctx, id(req))));
   r.get('/events/:id/triage-runs/:runId', organiser, async (req, res) =>
     res.json(await t.runDetail(ctx, id(req), Number(req.params.runId))),
   );
@@ -39,6 +40,5 @@ export function triageRoutes(ctx: AppContext) {
     await t.setLock(ctx, p.id, p.itemId, body(req, lockSchema).locked);
     res.json({ ok: true });
   });
-  r.get('/me/queue', requireUser, async (req, res) => res.json(await t.myQueue(ctx, req.user!.id)));
   return r;
 }

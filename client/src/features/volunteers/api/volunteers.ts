@@ -1,6 +1,6 @@
 import type { ItemStatus } from '../../../../../shared/event-day/constants';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { ProfileInput } from '../../../../../shared/schemas/volunteers';
+import type { ProfileInput } from '../../../../../shared/schemas/skills';
 import { api } from '../../../lib/api';
 
 export interface Profile {

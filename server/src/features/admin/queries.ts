@@ -1,0 +1,76 @@
+import { count, desc, eq, sql } from 'drizzle-orm';
+import type { DbOrTx } from '../../db/client';
+import { mailboxMessages, memberships, outbox, repairGroups, users } from '../../db/schema/index';
+
+export const mailboxRows = (db: DbOrTx) =>
+  db
+    .select({
+      id: mailboxMessages.id,
+      from: mailboxMessages.fromAddress,
+      to: mailboxMessages.toAddress,
+      subject: mailboxMessages.subject,
+      receivedAt: mailboxMessages.receivedAt,
+    })
+    .from(mailboxMessages)
+    .orderBy(desc(mailboxMessages.id))
+    .limit(200);
+
+export async function mailboxRow(db: DbOrTx, id: number) {
+  const [m] = await db.select().from(mailboxMessages).where(eq(mailboxMessages.id, id));
+  return m;
+}
+
+export const clearMailbox = (db: DbOrTx) => db.delete(mailboxMessages);
+
+export const outboxTotals = (db: DbOrTx) =>
+  db.select({ status: outbox.status, n: count() }).from(outbox).groupBy(outbox.status);
+
+export const recentOutbox = (db: DbOrTx) =>
+  db
+    .select({
+      id: outbox.id,
+      to: outbox.toAddress,
+      subject: outbox.subject,
+      status: outbox.status,
+      attempts: outbox.attempts,
+      lastError: outbox.lastError,
+      createdAt: outbox.createdAt,
+      sentAt: outbox.sentAt,
+      nextAttemptAt: outbox.nextAttemptAt,
+    })
+    .from(outbox)
+    .orderBy(desc(outbox.id))
+    .limit(50);
+
+export const groupRows = (db: DbOrTx) =>
+  db
+    .select({
+      id: repairGroups.id,
+      name: repairGroups.name,
+      town: repairGroups.town,
+      slug: repairGroups.slug,
+      members: sql<number>`COUNT(${memberships.id})`,
+    })
+    .from(repairGroups)
+    .leftJoin(memberships, eq(memberships.groupId, repairGroups.id))
+    .groupBy(repairGroups.id)
+    .orderBy(repairGroups.name);
+
+export async function insertGroup(db: DbOrTx, group: typeof repairGroups.$inferInsert) {
+  const [{ id }] = await db.insert(repairGroups).values(group).$returningId();
+  return id;
+}
+
+export const userRows = (db: DbOrTx) =>
+  db
+    .select({
+      id: users.id,
+      name: users.name,
+      email: users.email,
+      admin: users.admin,
+      verified: users.emailVerifiedAt,
+      createdAt: users.createdAt,
+    })
+    .from(users)
+    .orderBy(users.name)
+    .limit(500);

@@ -1,0 +1,34 @@
+import { Router, type Request } from 'express';
+import { z } from 'zod';
+import { askSchema, myShiftSchema, seatSchema } from '../../../../shared/schemas/rota';
+import type { AppContext } from '../../context';
+import { requireGroupRole, requireUser } from '../../auth/guards';
+import { body, params } from '../../http/validate';
+import { eventGroupId } from '../../core/events';
+import * as rota from './service';
+
+const idParams = z.object({ id: z.coerce.number().int().positive() });
+
+/** Shifts: a volunteer's answer per session, the organisers' rota with its gaps, and seating at benches. */
+export function rotaRoutes(ctx: AppContext) {
+  const r = Router();
+  const { db } = ctx.database;
+  const ofEvent = (roles: ('organiser' | 'host' | 'fixer')[]) =>
+    requireGroupRole(roles, (req: Request) => eventGroupId(db, Number(req.params.id)));
+
+  r.get('/me/events', requireUser, async (req, res) => res.json(await rota.myEvents(ctx, req.user!.id)));
+  r.put('/events/:id/shifts/me', ofEvent(['organiser', 'host', 'fixer']), async (req, res) => {
+    res.json(await rota.setMyShift(ctx, params(req, idParams).id, req.user!.id, body(req, myShiftSchema)));
+  });
+  r.get('/events/:id/rota', ofEvent(['organiser']), async (req, res) =>
+    res.json(await rota.rota(ctx, params(req, idParams).id)),
+  );
+  r.post('/events/:id/rota/ask', ofEvent(['organiser']), async (req, res) =>
+    res.json(await rota.askForSkills(ctx, params(req, idParams).id, body(req, askSchema).skills)),
+  );
+  r.patch('/events/:id/shifts/:userId', ofEvent(['organiser']), async (req, res) => {
+    const { id, userId } = params(req, idParams.extend({ userId: z.coerce.number().int().positive() }));
+    res.json(await rota.seat(ctx, id, userId, body(req, seatSchema).benchId));
+  });
+  return r;
+}

@@ -1,0 +1,91 @@
+import { dayPlan } from '../../../../shared/triage/day-plan';
+import type { TriageResult } from '../../../../shared/triage/engine';
+import type { AppContext } from '../../context';
+import { loadEvent, warningsFor, windowOf } from './event-data';
+import { recentRuns } from './queries';
+
+/** The triage board: benches and fixers with their items, the unplaced items with reasons, the day plan. */
+export async function board(ctx: AppContext, eventId: number) {
+  const data = await loadEvent(ctx, eventId);
+  const runs = await recentRuns(ctx.database.db, eventId);
+  const latest = runs[0]?.result as TriageResult | undefined;
+  const reasons = new Map((latest?.unassigned ?? []).map((u) => [Number(u.itemId), u]));
+  const placedBy = new Map(data.placed.map((p) => [p.itemId, p]));
+  const plan = dayPlan({
+    slots: data.slots.map((s) => ({ id: String(s.id), startsAt: s.startsAt, endsAt: s.endsAt })),
+    items: data.items.map((i) => ({
+      id: String(i.id),
+      slotIndex: i.slotIndex,
+      skill: i.needs.skill,
+      minLevel: i.needs.minLevel,
+      equipment: i.needs.equipment,
+      minutes: i.minutes,
+      order: i.order,
+    })),
+    volunteers: data.fixers.map((f) => ({
+      id: String(f.userId),
+      skills: f.skills,
+      from: f.startsAt,
+      to: f.endsAt,
+      ...(f.benchId ? { benchId: String(f.benchId) } : {}),
+    })),
+    benches: data.benches.map((b) => ({ id: String(b.id), equipment: b.equipment, seats: b.seats })),
+  });
+  const items = data.items.map((i) => {
+    const p = placedBy.get(i.id);
+    const fixer = p && data.fixers.find((f) => f.userId === p.userId);
+    const bench = p && data.benches.find((b) => b.id === p.benchId);
+    const w = p ? windowOf(data, i.id, p.startsAt) : null;
+    const warnings =
+      p && fixer && bench && w
+        ? warningsFor(data, i, fixer, bench, w)
+        : p
+          ? [{ code: 'missing-skill' as const, message: 'The fixer is no longer coming or the bench was removed.' }]
+          : [];
+    return {
+      id: i.id,
+      reference: i.reference,
+      visitorName: i.visitorName,
+      bookedAt: i.bookedAt,
+      slotId: i.slotId,
+      categoryName: i.categoryName,
+      brand: i.brand,
+      model: i.model,
+      fault: i.fault,
+      mains: i.mains,
+      minutes: i.minutes,
+      needs: i.needs,
+      photoIds: i.photoIds,
+      placement: p
+        ? { userId: p.userId, benchId: p.benchId, locked: Boolean(p.locked), source: p.source, startsAt: p.startsAt }
+        : null,
+      warnings,
+      reason: p ? null : (reasons.get(i.id) ?? null),
+      estimatedStart: p ? (p.startsAt ?? plan.start[String(i.id)]) : null,
+    };
+  });
+  return {
+    event: {
+      id: data.event.id,
+      title: data.event.title,
+      status: data.event.status,
+      startsAt: data.event.startsAt,
+      endsAt: data.event.endsAt,
+      groupId: data.group.id,
+      groupName: data.group.name,
+      timeZone: data.group.timeZone,
+    },
+    slots: data.slots.map((s) => ({ id: s.id, startsAt: s.startsAt, endsAt: s.endsAt })),
+    benches: data.benches.map((b) => ({ id: b.id, name: b.name, seats: b.seats, equipment: b.equipment })),
+    fixers: data.fixers,
+    items,
+    runs: runs.map((r) => ({
+      id: r.id,
+      slotId: r.slotId,
+      createdAt: r.createdAt,
+      assigned: (r.result as TriageResult).assignments.length,
+      unassigned: (r.result as TriageResult).unassigned.length,
+      lockedKept: r.lockedKept,
+    })),
+  };
+}

@@ -1,0 +1,4 @@
+import type { Feature } from '../../core/feature';
+import { workbenchRoutes } from './routes';
+
+export const workbenchFeature: Feature = { name: 'workbench', routes: workbenchRoutes };

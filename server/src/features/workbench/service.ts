@@ -1,0 +1,26 @@
+import type { AppContext } from '../../context';
+import { eventLayout } from '../../core/benches';
+import { photoIdsOf, queueRows } from './queries';
+
+/** A fixer's own queue across upcoming events ("My bench"), in the order the items come. */
+export async function myQueue(ctx: AppContext, userId: number) {
+  const { db } = ctx.database;
+  const rows = await queueRows(db, userId);
+  const photos = await photoIdsOf(
+    db,
+    rows.map((r) => r.itemId),
+  );
+  const benchNames = new Map(
+    (await Promise.all([...new Set(rows.map((r) => r.eventId))].map((e) => eventLayout(db, e))))
+      .flat()
+      .map((b) => [b.id, b.name]),
+  );
+  return rows.map((r) => ({
+    ...r,
+    mains: Boolean(r.mains),
+    locked: Boolean(r.locked),
+    visitorName: r.visitorName.split(' ')[0],
+    benchName: benchNames.get(r.benchId) ?? '',
+    photoIds: photos.filter((p) => p.itemId === r.itemId).map((p) => p.id),
+  }));
+}
