@@ -3,7 +3,8 @@ import { formatDay, formatTimeRange } from '../../../../shared/format';
 import { Button } from '../../components/ui/button';
 import { Alert, Card, Spinner } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
-import { useClaimOffer, useOffer } from '../../features/bookings/api/bookings';
+import { useClaimOffer } from '../../features/bookings/api/claim-offer';
+import { useOffer } from '../../features/bookings/api/get-offer';
 
 /** The link in a waiting-list offer: one button turns the held place into a booking. */
 export function ClaimOfferPage() {

@@ -1,4 +1,5 @@
 import { useState } from 'react';
+import { slotBookability } from '../../../../shared/booking/bookability';
 import { OUTCOME_LABELS } from '../../../../shared/event-day/constants';
 import { StatusChip } from '../../features/event-day/status-chip';
 import { Link, useLocation, useParams, useSearchParams } from 'react-router';
@@ -8,10 +9,13 @@ import { ConfirmDialog } from '../../components/ui/confirm-dialog';
 import { Alert, Card, Spinner } from '../../components/ui/feedback';
 import { SelectField } from '../../components/ui/field';
 import { paths } from '../../config/paths';
-import { uploadPhotos, useBooking, useCancelBooking, useMoveBooking } from '../../features/bookings/api/bookings';
-import { useEvent } from '../../features/events/api/events';
+import { useCancelBooking } from '../../features/bookings/api/cancel-booking';
+import { useBooking } from '../../features/bookings/api/get-booking';
+import { useMoveBooking, useRefreshBooking } from '../../features/bookings/api/move-booking';
+import { uploadPhotos } from '../../features/bookings/api/upload-photos';
+import { eventKeys, useEvent } from '../../features/events/api/events';
 import { StatusBadge } from '../../features/events/components/places-bar';
-import { useQueryClient } from '@tanstack/react-query';
+import { queryClient } from '../../lib/query-client';
 
 /** The visitor's own page, reached with the secret link: view, move or cancel without an account. */
 export function ManageBookingPage() {
@@ -21,10 +25,11 @@ export function ManageBookingPage() {
   const fresh = params.get('new') === '1';
   const photoProblems = ((useLocation().state as { photoProblems?: string[] } | null)?.photoProblems ?? []) as string[];
   const booking = useBooking(reference, token);
-  const cancel = useCancelBooking(reference, token);
-  const move = useMoveBooking(reference, token);
+  const refreshEvents = () => queryClient.invalidateQueries({ queryKey: eventKeys.all });
+  const cancel = useCancelBooking(reference, token, refreshEvents);
+  const move = useMoveBooking(reference, token, refreshEvents);
+  const refreshBooking = useRefreshBooking(reference);
   const event = useEvent(booking.data?.event.id ?? 0);
-  const qc = useQueryClient();
   const [confirming, setConfirming] = useState(false);
   const [newSlot, setNewSlot] = useState('');
   const [uploadError, setUploadError] = useState<string | null>(null);
@@ -45,15 +50,17 @@ export function ManageBookingPage() {
   const b = booking.data;
   const tz = b.event.timeZone;
   const active = b.status === 'confirmed' && b.event.status === 'published';
+  // The times this booking's items could move to, by the same rule the server decides with.
+  const skills = b.items.map((i) => i.skill);
   const otherSlots = (event.data?.slots ?? []).filter(
-    (s) => s.id !== b.slot.id && s.free >= b.items.length && new Date(s.endsAt).getTime() > Date.now(),
+    (s) => s.id !== b.slot.id && slotBookability({ ...s, skillLimits: event.data!.skillLimits }, skills, new Date()).ok,
   );
 
   const addPhotos = async (itemId: number, files: FileList | null) => {
     setUploadError(null);
     try {
       await uploadPhotos(b.reference, token, itemId, Array.from(files ?? []));
-      await qc.invalidateQueries({ queryKey: ['booking', reference] });
+      await refreshBooking();
     } catch (err) {
       setUploadError((err as Error).message);
     }

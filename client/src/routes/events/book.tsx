@@ -2,15 +2,21 @@ import { useMemo, useRef, useState } from 'react';
 import { useFieldArray } from 'react-hook-form';
 import { Link, useNavigate, useParams, useSearchParams } from 'react-router';
 import { HAZARDS, SKILL_LABELS } from '../../../../shared/constants';
-import { DISCLAIMER, formatDay, formatTime, formatTimeRange } from '../../../../shared/format';
+import { DISCLAIMER, formatDay } from '../../../../shared/format';
+import { slotBookability } from '../../../../shared/booking/bookability';
 import { HAZARD_REFUSALS } from '../../../../shared/booking/screening';
 import { createBookingSchema, MAX_ITEMS_PER_BOOKING, PHOTO_LIMITS } from '../../../../shared/schemas/bookings';
 import { Button } from '../../components/ui/button';
 import { Alert, Card, PageTitle, Spinner } from '../../components/ui/feedback';
 import { SelectField, TextField } from '../../components/ui/field';
 import { paths } from '../../config/paths';
-import { uploadPhotos, useCreateBooking, useJoinWaitlist } from '../../features/bookings/api/bookings';
-import { useCategories, useEvent, type Category, type EventDetail } from '../../features/events/api/events';
+import { WaitlistJoined } from '../../features/bookings/components/waitlist-joined';
+import { TimeTiles } from '../../features/bookings/components/time-tiles';
+import { useCreateBooking } from '../../features/bookings/api/create-booking';
+import { useJoinWaitlist } from '../../features/bookings/api/join-waitlist';
+import { uploadPhotos } from '../../features/bookings/api/upload-photos';
+import { eventKeys, useCategories, useEvent, type Category, type EventDetail } from '../../features/events/api/events';
+import { queryClient } from '../../lib/query-client';
 import { ApiError } from '../../lib/api';
 import { applyServerErrors, useZodForm } from '../../lib/form';
 
@@ -43,7 +49,7 @@ export function BookingPage() {
 function BookingForm({ event, categories }: { event: EventDetail; categories: Category[] }) {
   const navigate = useNavigate();
   const key = useRef(crypto.randomUUID()).current;
-  const book = useCreateBooking(key);
+  const book = useCreateBooking(key, () => queryClient.invalidateQueries({ queryKey: eventKeys.all }));
   const waitlist = useJoinWaitlist(event.id);
   const tz = event.timeZone;
   const [search] = useSearchParams();
@@ -67,7 +73,14 @@ function BookingForm({ event, categories }: { event: EventDetail; categories: Ca
   const slotId = Number(form.watch('slotId'));
   const chosen = event.slots.find((s) => s.id === slotId);
   const watchedItems = form.watch('items');
-  const joinsWaitlist = chosen ? chosen.free < watchedItems.length : false;
+  // The shared rule the server decides with, for the kinds chosen so far: each tile shows what is true for them.
+  const skills = watchedItems.flatMap((it) => byId.get(Number(it?.categoryId))?.skill ?? []);
+  const now = new Date();
+  const bookability = (s: (typeof event.slots)[number]) =>
+    slotBookability({ ...s, skillLimits: event.skillLimits }, skills.length ? skills : [], now);
+  const chosenState = chosen && bookability(chosen);
+  const joinsWaitlist = chosenState ? !chosenState.ok && chosenState.reason === 'full' : false;
+  const chosenRefused = chosenState && !chosenState.ok && chosenState.reason !== 'full' ? chosenState : null;
 
   const pickPhotos = (fieldId: string, list: FileList | null) => {
     const files = Array.from(list ?? []).slice(0, PHOTO_LIMITS.perItem);
@@ -115,21 +128,16 @@ function BookingForm({ event, categories }: { event: EventDetail; categories: Ca
     }
   });
 
-  if (queued !== null) {
+  if (queued !== null)
     return (
-      <Card className="mx-auto max-w-lg">
-        <h1 className="text-2xl">You are on the waiting list</h1>
-        <p className="mt-2">
-          You are number <strong>{queued}</strong> in line for{' '}
-          {chosen && formatTimeRange(chosen.startsAt, chosen.endsAt, tz)} on {formatDay(event.startsAt, tz)}. If a place
-          comes free we will mail you a link to take it.
-        </p>
-        <Link to={paths.event(event.id)} className="mt-4 inline-block font-bold text-navy underline">
-          Back to the session
-        </Link>
-      </Card>
+      <WaitlistJoined
+        position={queued}
+        slot={chosen}
+        day={event.startsAt}
+        timeZone={tz}
+        backTo={paths.event(event.id)}
+      />
     );
-  }
 
   return (
     <div className="mx-auto max-w-2xl">
@@ -147,21 +155,20 @@ function BookingForm({ event, categories }: { event: EventDetail; categories: Ca
         <Card>
           <fieldset>
             <legend className="text-lg font-extrabold text-navy">1. Choose a time</legend>
-            <div className="mt-3 grid grid-cols-3 gap-2 sm:grid-cols-4">
-              {event.slots
-                .filter((s) => new Date(s.endsAt).getTime() > Date.now())
-                .map((s) => (
-                  <label
-                    key={s.id}
-                    className={`cursor-pointer rounded-lg p-2 text-center ring-1 has-checked:bg-navy has-checked:text-white has-checked:ring-navy has-focus-visible:outline-3 has-focus-visible:outline-offset-2 has-focus-visible:outline-copper ${s.free ? 'ring-ink/20' : 'bg-ink/5 ring-ink/10'}`}
-                  >
-                    <input type="radio" value={s.id} className="sr-only" {...form.register('slotId')} />
-                    <span className="block text-lg font-extrabold">{formatTime(s.startsAt, tz)}</span>
-                    <span className="block text-xs font-semibold">{s.free ? `${s.free} free` : 'full · wait'}</span>
-                  </label>
-                ))}
-            </div>
+            <TimeTiles
+              slots={event.slots}
+              timeZone={tz}
+              now={now}
+              chosenId={slotId}
+              bookability={bookability}
+              field={form.register('slotId')}
+            />
             {errors.slotId && <p className="mt-2 text-sm font-semibold text-alert">{errors.slotId.message}</p>}
+            {chosenRefused && (
+              <div className="mt-3">
+                <Alert tone="error">{chosenRefused.message}</Alert>
+              </div>
+            )}
             {joinsWaitlist && (
               <div className="mt-3">
                 <Alert tone="caution">

@@ -1,4 +1,5 @@
 import { Link, useParams } from 'react-router';
+import { slotHasPassed } from '../../../../shared/booking/bookability';
 import { SKILL_LABELS } from '../../../../shared/constants';
 import { formatDay, formatTime, formatTimeRange, WHAT_TO_BRING } from '../../../../shared/format';
 import { Alert, Card, Spinner } from '../../components/ui/feedback';
@@ -81,20 +82,22 @@ export function EventPage() {
             </p>
           )}
           <ul className="mt-3 grid grid-cols-2 gap-2 sm:grid-cols-3">
-            {e.slots.map((s) => (
-              <li key={s.id}>
-                <Link
-                  to={e.status === 'published' ? `${paths.book(e.id)}?slot=${s.id}` : paths.event(e.id)}
-                  className={`block rounded-lg p-3 ring-1 hover:ring-copper ${s.free ? 'ring-ink/10' : 'bg-alert-light/50 ring-alert/30'}`}
-                >
-                  <p className="font-bold">{formatTime(s.startsAt, tz)}</p>
-                  <PlacesBar free={s.free} total={s.capacity} label={false} />
-                  <p className="mt-1 text-xs font-semibold text-ink-soft">
-                    {s.free ? `${s.free} free` : 'Full: waiting list'}
-                  </p>
-                </Link>
-              </li>
-            ))}
+            {e.slots
+              .filter((s) => !slotHasPassed(s, new Date()))
+              .map((s) => (
+                <li key={s.id}>
+                  <Link
+                    to={e.status === 'published' ? `${paths.book(e.id)}?slot=${s.id}` : paths.event(e.id)}
+                    className={`block rounded-lg p-3 ring-1 hover:ring-copper ${s.free ? 'ring-ink/10' : 'bg-alert-light/50 ring-alert/30'}`}
+                  >
+                    <p className="font-bold">{formatTime(s.startsAt, tz)}</p>
+                    <PlacesBar free={s.free} total={s.capacity} label={false} />
+                    <p className="mt-1 text-xs font-semibold text-ink-soft">
+                      {s.free ? `${s.free} free` : 'Full: waiting list'}
+                    </p>
+                  </Link>
+                </li>
+              ))}
           </ul>
         </Card>
 

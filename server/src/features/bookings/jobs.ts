@@ -4,9 +4,9 @@ import { bookingItems, bookings, categories, events, slots, waitlistEntries } fr
 import { enqueueMail } from '../../mail/outbox';
 import type { Job } from '../../core/feature';
 import { manageTokenFor, manageUrl } from '../../core/links';
-import { offerFreedPlaces } from './service';
+import { offerFreedPlaces } from './waitlist';
 import { reminderMail } from './mails';
-import { bookingWithContext } from './queries';
+import { bookingWithContext } from './queries/context';
 import { itemLabel } from '../../../../shared/item-label';
 
 /** Offers not taken in time release their places and pass them to the next in line. */

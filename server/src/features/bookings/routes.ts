@@ -1,4 +1,3 @@
-import { eq } from 'drizzle-orm';
 import { Router, type NextFunction, type Request, type Response } from 'express';
 import { z } from 'zod';
 import { normaliseReference } from '../../../../shared/booking/reference';
@@ -6,14 +5,19 @@ import { createBookingSchema, moveBookingSchema, waitlistSchema } from '../../..
 import { rebookSchema } from '../../../../shared/schemas/impact';
 import type { AppContext } from '../../context';
 import { hasGroupRole, requireGroupRole } from '../../auth/guards';
-import { bookingItems, bookings, events, itemPhotos, repairGroups } from '../../db/schema/index';
 import { HttpError, notFound } from '../../http/errors';
 import { body, params } from '../../http/validate';
 import { eventGroupId } from '../../core/events';
 import { eventBookings } from './organiser';
 import { multerError, photoUpload, savePhotos } from '../../core/photos';
-import * as booking from './service';
+import * as bookingService from './service';
+import * as changes from './changes';
+import * as waitlist from './waitlist';
+import { photoWithOwner } from './queries/photos';
+
 import { rebook, rebookView } from './return-visit';
+
+const booking = { ...bookingService, ...changes, ...waitlist };
 
 const tokenQuery = z.object({ token: z.string().max(200).optional() });
 const idempotencyKey = z
@@ -84,21 +88,7 @@ export function bookingRoutes(ctx: AppContext) {
   /** A photo: for the visitor with the booking's token, or for the organisers, reception and fixers of its group. */
   r.get('/photos/:id', async (req, res) => {
     const { id } = params(req, z.object({ id: z.coerce.number().int().positive() }));
-    const [p] = await db
-      .select({
-        key: itemPhotos.storageKey,
-        type: itemPhotos.contentType,
-        kind: itemPhotos.kind,
-        reference: bookings.reference,
-        groupId: events.groupId,
-        shares: repairGroups.shareKnowledge,
-      })
-      .from(itemPhotos)
-      .innerJoin(bookingItems, eq(bookingItems.id, itemPhotos.itemId))
-      .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
-      .innerJoin(events, eq(events.id, bookings.eventId))
-      .innerJoin(repairGroups, eq(repairGroups.id, events.groupId))
-      .where(eq(itemPhotos.id, id));
+    const p = await photoWithOwner(db, id);
     if (!p) throw notFound('That photo');
     const token = tokenQuery.parse(req.query).token;
     // A bench photo of a group that shares its repair notes may be seen by any group's volunteers.

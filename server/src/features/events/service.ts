@@ -6,7 +6,16 @@ import type { z } from 'zod';
 import type { createEventSchema, eventListQuery, updateEventSchema } from '../../../../shared/schemas/events';
 import type { AppContext } from '../../context';
 import type { DbOrTx } from '../../db/client';
-import { bookings, events, groupExclusions, repairGroups, slots, venues, waitlistEntries } from '../../db/schema/index';
+import {
+  bookings,
+  events,
+  groupExclusions,
+  repairGroups,
+  slots,
+  slotSkillCounts,
+  venues,
+  waitlistEntries,
+} from '../../db/schema/index';
 import { HttpError, notFound } from '../../http/errors';
 import { enqueueMail } from '../../mail/outbox';
 import { runHooks } from '../../core/hooks';
@@ -209,6 +218,17 @@ export async function getEvent(ctx: AppContext, id: number, opts: { includeDraft
     .where(eq(events.id, id));
   if (!e || (!opts.includeDrafts && e.status === 'draft')) throw notFound('That event');
   const rows = await db.select().from(slots).where(eq(slots.eventId, id)).orderBy(asc(slots.startsAt));
+  const counts = rows.length
+    ? await db
+        .select()
+        .from(slotSkillCounts)
+        .where(
+          inArray(
+            slotSkillCounts.slotId,
+            rows.map((r) => r.id),
+          ),
+        )
+    : [];
   const slotDtos = rows.map((s) => ({
     id: s.id,
     startsAt: s.startsAt,
@@ -217,6 +237,8 @@ export async function getEvent(ctx: AppContext, id: number, opts: { includeDraft
     booked: s.booked,
     held: s.held,
     free: freePlaces(s),
+    /** Items of each skill booked at this time, held against the event's skillLimits (shared/booking/bookability). */
+    skillTaken: Object.fromEntries(counts.filter((c) => c.slotId === s.id).map((c) => [c.skill, c.booked])),
   }));
   return {
     ...e,

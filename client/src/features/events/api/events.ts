@@ -27,6 +27,7 @@ export interface Slot {
   booked: number;
   held: number;
   free: number;
+  skillTaken: Partial<Record<Skill, number>>;
 }
 export interface EventDetail extends EventSummary {
   houseRules: string;

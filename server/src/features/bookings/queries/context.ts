@@ -1,6 +1,6 @@
 import { eq } from 'drizzle-orm';
-import type { DbOrTx } from '../../db/client';
-import { bookings, events, repairGroups, slots, venues } from '../../db/schema/index';
+import type { DbOrTx } from '../../../db/client';
+import { bookings, events, repairGroups, slots, slotSkillCounts, venues } from '../../../db/schema/index';
 
 /** A slot with the event, group and venue it belongs to: what every booking mail and check needs. */
 export const slotWithContext = (db: DbOrTx) =>
@@ -20,3 +20,18 @@ export const bookingWithContext = (db: DbOrTx) =>
     .innerJoin(events, eq(events.id, bookings.eventId))
     .innerJoin(repairGroups, eq(repairGroups.id, events.groupId))
     .innerJoin(venues, eq(venues.id, events.venueId));
+
+/** Items of each skill already booked in a slot (the counts the per-skill limits are held against). */
+export async function skillTakenOf(db: DbOrTx, slotId: number): Promise<Record<string, number>> {
+  const rows = await db.select().from(slotSkillCounts).where(eq(slotSkillCounts.slotId, slotId));
+  return Object.fromEntries(rows.map((r) => [r.skill, r.booked]));
+}
+
+/** An event with its group and venue (for the waiting list's offer mails). */
+export const eventWithContext = (db: DbOrTx, eventId: number) =>
+  db
+    .select({ event: events, group: repairGroups, venue: venues })
+    .from(events)
+    .innerJoin(repairGroups, eq(repairGroups.id, events.groupId))
+    .innerJoin(venues, eq(venues.id, events.venueId))
+    .where(eq(events.id, eventId));

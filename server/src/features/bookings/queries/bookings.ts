@@ -1,0 +1,99 @@
+import { asc, eq, inArray } from 'drizzle-orm';
+import type { DbOrTx, Tx } from '../../../db/client';
+import {
+  bookingItems,
+  bookings,
+  categories,
+  idempotencyKeys,
+  itemOutcomes,
+  itemPhotos,
+} from '../../../db/schema/index';
+
+export async function insertBookingRows(
+  tx: Tx,
+  booking: typeof bookings.$inferInsert,
+  items: Omit<typeof bookingItems.$inferInsert, 'bookingId'>[],
+) {
+  const [{ id }] = await tx.insert(bookings).values(booking).$returningId();
+  const itemIds = await tx
+    .insert(bookingItems)
+    .values(items.map((i) => ({ ...i, bookingId: id })))
+    .$returningId();
+  return { id, itemIds: itemIds.map((x) => x.id) };
+}
+
+export const bookingByReference = async (db: DbOrTx, reference: string) =>
+  (await db.select().from(bookings).where(eq(bookings.reference, reference)))[0];
+
+export const lockBooking = async (tx: Tx, bookingId: number) =>
+  (await tx.select().from(bookings).where(eq(bookings.id, bookingId)).for('update'))[0];
+
+export async function cancelBookingRow(tx: Tx, bookingId: number) {
+  await tx.update(bookings).set({ status: 'cancelled', cancelledAt: new Date() }).where(eq(bookings.id, bookingId));
+}
+
+export async function moveBookingRow(tx: Tx, bookingId: number, slotId: number) {
+  await tx.update(bookings).set({ slotId, reminderSentAt: null }).where(eq(bookings.id, bookingId));
+}
+
+export const itemStatuses = (tx: DbOrTx, bookingId: number) =>
+  tx.select({ status: bookingItems.status }).from(bookingItems).where(eq(bookingItems.bookingId, bookingId));
+
+/** Each item's skill and label parts. */
+export const itemsOf = (tx: DbOrTx, bookingId: number) =>
+  tx
+    .select({ skill: categories.skill, name: categories.name, brand: bookingItems.brand, model: bookingItems.model })
+    .from(bookingItems)
+    .innerJoin(categories, eq(categories.id, bookingItems.categoryId))
+    .where(eq(bookingItems.bookingId, bookingId));
+
+/** The items of a booking as the visitor's page shows them, with their outcome and photos. */
+export async function bookingItemsWithPhotos(db: DbOrTx, bookingId: number) {
+  const items = await db
+    .select({
+      id: bookingItems.id,
+      categoryId: bookingItems.categoryId,
+      categoryName: categories.name,
+      skill: categories.skill,
+      brand: bookingItems.brand,
+      model: bookingItems.model,
+      ageYears: bookingItems.ageYears,
+      fault: bookingItems.fault,
+      mains: bookingItems.mains,
+      battery: bookingItems.battery,
+      status: bookingItems.status,
+      queueNumber: bookingItems.queueNumber,
+      outcome: itemOutcomes.outcome,
+    })
+    .from(bookingItems)
+    .innerJoin(categories, eq(categories.id, bookingItems.categoryId))
+    .leftJoin(itemOutcomes, eq(itemOutcomes.itemId, bookingItems.id))
+    .where(eq(bookingItems.bookingId, bookingId))
+    .orderBy(asc(bookingItems.position));
+  const photos = items.length
+    ? await db
+        .select({ id: itemPhotos.id, itemId: itemPhotos.itemId, width: itemPhotos.width, height: itemPhotos.height })
+        .from(itemPhotos)
+        .where(
+          inArray(
+            itemPhotos.itemId,
+            items.map((i) => i.id),
+          ),
+        )
+    : [];
+  return items.map((i) => ({
+    ...i,
+    mains: Boolean(i.mains),
+    battery: Boolean(i.battery),
+    photos: photos.filter((p) => p.itemId === i.id).map((p) => ({ id: p.id, width: p.width, height: p.height })),
+  }));
+}
+
+export async function claimIdempotencyKey(tx: Tx, key: string) {
+  await tx.insert(idempotencyKeys).values({ key, scope: 'booking' });
+}
+export async function storeIdempotentAnswer(tx: Tx, key: string, statusCode: number, response: unknown) {
+  await tx.update(idempotencyKeys).set({ statusCode, response }).where(eq(idempotencyKeys.key, key));
+}
+export const storedIdempotentAnswer = async (db: DbOrTx, key: string) =>
+  (await db.select().from(idempotencyKeys).where(eq(idempotencyKeys.key, key)))[0];

@@ -1,0 +1,187 @@
+import { randomBytes } from 'node:crypto';
+import { eq } from 'drizzle-orm';
+import type { z } from 'zod';
+import { countSkills, skillFullMessage, slotBookability, slotHasPassed } from '../../../../shared/booking/bookability';
+import { formatReference } from '../../../../shared/booking/reference';
+import type { Skill } from '../../../../shared/constants';
+import { itemLabel } from '../../../../shared/item-label';
+import type { createBookingSchema } from '../../../../shared/schemas/bookings';
+import type { AppContext } from '../../context';
+import type { DbOrTx, Tx } from '../../db/client';
+import { slots } from '../../db/schema/index';
+import { sha256 } from '../../auth/tokens';
+import { HttpError } from '../../http/errors';
+import { enqueueMail } from '../../mail/outbox';
+import { manageTokenFor, manageUrl } from '../../core/links';
+import type { screenItems } from '../../core/screening';
+import { skillTakenOf, slotWithContext } from './queries/context';
+import { insertBookingRows } from './queries/bookings';
+import { takePlaces, takeSkillPlaces } from './queries/places';
+import { bookingQrText, confirmationMail, type BookingMailFacts } from './mails';
+
+export type BookingInput = z.output<typeof createBookingSchema>;
+type Item = BookingInput['items'][number];
+export type SlotRow = Awaited<ReturnType<typeof bookableSlot>>;
+type Screened = Awaited<ReturnType<typeof screenItems>>;
+
+export const full = () =>
+  new HttpError(409, 'slot-full', 'That time is fully booked. Choose another time, or join its waiting list.');
+
+/** Loads the slot with its event, group and venue, and checks that it can take bookings now. */
+export async function bookableSlot(tx: DbOrTx, slotId: number, opts: { lock?: boolean } = {}) {
+  const q = slotWithContext(tx).where(eq(slots.id, slotId));
+  const [row] = opts.lock ? await q.for('update') : await q;
+  if (!row) throw new HttpError(400, 'invalid', 'Some fields need attention.', { slotId: 'That time does not exist.' });
+  if (row.event.status !== 'published')
+    throw new HttpError(
+      409,
+      'not-bookable',
+      row.event.status === 'cancelled' ? 'This event has been cancelled.' : 'This event is not taking bookings.',
+    );
+  if (slotHasPassed(row.slot, new Date())) throw new HttpError(409, 'not-bookable', 'That time has already passed.');
+  return row;
+}
+
+export async function slotWithContextById(tx: DbOrTx, slotId: number) {
+  const [row] = await slotWithContext(tx).where(eq(slots.id, slotId));
+  return row;
+}
+
+/**
+ * What the shared rule (shared/booking/bookability.ts) says of this slot for these items, with the per-skill counts
+ * as they are now: the same answer the booking page showed on the time tile.
+ */
+export async function bookabilityOf(db: DbOrTx, row: SlotRow, skills: Skill[], spare = 0) {
+  const skillTaken = await skillTakenOf(db, row.slot.id);
+  return slotBookability(
+    { ...row.slot, skillLimits: row.event.skillLimits as Partial<Record<Skill, number>>, skillTaken },
+    skills,
+    new Date(),
+    { spare },
+  );
+}
+
+/** Refuses a booking the shared rule refuses: a passed time, a kind's limit reached (for all the items), no room. */
+export function refuse(b: Awaited<ReturnType<typeof bookabilityOf>>): void {
+  if (b.ok) return;
+  if (b.reason === 'past') throw new HttpError(409, 'not-bookable', b.message);
+  if (b.reason === 'skill-full') throw new HttpError(409, 'skill-full', b.message);
+  throw full();
+}
+
+export const skillsOf = (items: { categoryId: number }[], cats: Screened) =>
+  items.map((i) => cats.get(i.categoryId)!.skill as Skill);
+
+export function facts(
+  ctx: AppContext,
+  row: SlotRow,
+  b: { reference: string; visitorName: string; visitorEmail: string },
+  items: string[],
+  manageToken: string | null,
+): BookingMailFacts {
+  return {
+    reference: b.reference,
+    visitorName: b.visitorName,
+    visitorEmail: b.visitorEmail,
+    eventTitle: row.event.title,
+    groupName: row.group.name,
+    timeZone: row.group.timeZone,
+    slotStartsAt: row.slot.startsAt,
+    slotEndsAt: row.slot.endsAt,
+    venue: row.venue,
+    items,
+    manageUrl: manageToken ? manageUrl(ctx, b.reference, manageToken) : `${ctx.env.publicUrl}/events/${row.event.id}`,
+  };
+}
+
+const labelOf = (cat: { name: string } | undefined, i: Item) =>
+  itemLabel({ categoryName: cat?.name ?? 'Item', brand: i.brand, model: i.model });
+export const labelsOf = (items: { name: string; brand: string | null; model: string | null }[]) =>
+  items.map((i) => itemLabel({ categoryName: i.name, brand: i.brand, model: i.model }));
+
+export interface Prepared {
+  reference: string;
+  token: string;
+}
+
+export function prepareBooking(ctx: AppContext): Prepared {
+  const reference = formatReference(randomBytes(6));
+  return { reference, token: manageTokenFor(ctx, reference) };
+}
+
+/** Takes the places and the per-skill places of these items in the slot, or throws what the visitor must hear. */
+export async function takeAllPlaces(
+  tx: Tx,
+  row: SlotRow,
+  skills: Skill[],
+  opts: { fromHeld?: boolean; spare?: number } = {},
+) {
+  const spare = opts.spare ?? 0;
+  if (!(await takePlaces(tx, row.slot.id, skills.length, opts.fromHeld ?? false, spare))) throw full();
+  const limits = row.event.skillLimits as Partial<Record<Skill, number>>;
+  for (const [skill, n] of countSkills(skills)) {
+    if (limits[skill] === undefined) continue;
+    const limit = limits[skill] + spare;
+    const took = await takeSkillPlaces(tx, row.slot.id, skill, n, limit);
+    if (!took.ok)
+      throw new HttpError(409, 'skill-full', skillFullMessage(skill, limit, Math.max(0, limit - took.booked), n));
+  }
+}
+
+/**
+ * Writes the booking inside `tx`. The slot's row is locked first, by the conditional UPDATE that takes the places:
+ * every later insert refers to the slot, and taking the exclusive lock before those shared ones avoids deadlocks.
+ * Everything that can be done before the transaction (checking the items, the QR image) already was.
+ */
+export async function insertBooking(
+  ctx: AppContext,
+  tx: Tx,
+  row: SlotRow,
+  input: Pick<BookingInput, 'visitor' | 'items'>,
+  fromHeld: boolean,
+  prepared: Prepared,
+  cats: Screened,
+  returnOfItemId?: number,
+) {
+  // A return visit (the part bought) may take one place over the capacity: the group keeps room for its returns.
+  await takeAllPlaces(tx, row, skillsOf(input.items, cats), {
+    fromHeld,
+    spare: returnOfItemId !== undefined ? 1 : 0,
+  });
+  const { reference, token } = prepared;
+  const { id, itemIds } = await insertBookingRows(
+    tx,
+    {
+      reference,
+      eventId: row.event.id,
+      slotId: row.slot.id,
+      visitorName: input.visitor.name,
+      visitorEmail: input.visitor.email,
+      visitorPhone: input.visitor.phone ?? null,
+      manageTokenHash: sha256(token),
+      consentAt: new Date(),
+    },
+    input.items.map((i, position) => ({
+      categoryId: i.categoryId,
+      brand: i.brand ?? null,
+      model: i.model ?? null,
+      ageYears: i.ageYears ?? null,
+      fault: i.fault,
+      mains: i.mains ?? Boolean(cats.get(i.categoryId)!.mains),
+      battery: i.battery ?? false,
+      position,
+      returnOfItemId: returnOfItemId ?? null,
+    })),
+  );
+  const f = facts(
+    ctx,
+    row,
+    { reference, visitorName: input.visitor.name, visitorEmail: input.visitor.email },
+    input.items.map((i) => labelOf(cats.get(i.categoryId), i)),
+    token,
+  );
+  await enqueueMail(tx, confirmationMail(f, bookingQrText(ctx.env.publicUrl, reference)));
+  return { id, reference, manageToken: token, eventId: row.event.id, slotId: row.slot.id, itemIds };
+}
+
+export type BookingResult = Awaited<ReturnType<typeof insertBooking>>;
