@@ -1,0 +1,195 @@
+import { useId, useMemo, useState } from 'react';
+import { Link, useSearchParams } from 'react-router';
+import { formatDay } from '../../../../../shared/format';
+import { Button } from '../../../components/ui/button';
+import { Alert, EmptyState, Spinner } from '../../../components/ui/feedback';
+import { SelectField, TextField } from '../../../components/ui/field';
+import { paths } from '../../../config/paths';
+import { exportUrl, qs, useStats, type StatsFilter } from '../api';
+import { isoDate, linkButton, positiveInt } from '../display';
+import { Figures } from './figures';
+import { EmbedPanel } from './embed-panel';
+import { MethodSection } from './method-section';
+
+const secondaryLink = `${linkButton} bg-white text-navy ring-1 ring-navy/25 hover:bg-navy/5`;
+
+/** The dashboard's filter lives in the URL, so a view can be bookmarked or sent to a colleague. */
+function useUrlFilter(groupId?: number) {
+  const [params, setParams] = useSearchParams();
+  const eventId = groupId ? positiveInt(params.get('eventId')) : undefined;
+  const from = isoDate(params.get('from'));
+  const to = isoDate(params.get('to'));
+  const filter = useMemo<StatsFilter>(() => ({ groupId, eventId, from, to }), [groupId, eventId, from, to]);
+  const set = (key: 'eventId' | 'from' | 'to', value: string) =>
+    setParams(
+      (prev) => {
+        const next = new URLSearchParams(prev);
+        if (value) next.set(key, value);
+        else next.delete(key);
+        return next;
+      },
+      { replace: true },
+    );
+  const clear = () => setParams(new URLSearchParams(), { replace: true });
+  return { filter, set, clear };
+}
+
+/** A group's sessions for the filter, as the route reads them from the events feature. */
+export interface SessionChoices {
+  data?: { id: number; startsAt: string; title: string; timeZone: string }[];
+  isPending: boolean;
+  isError: boolean;
+}
+
+/** The figures with their filter, downloads and method; `sessions` only for a group's page. */
+export function ImpactBody({
+  groupId,
+  groupName,
+  sessions,
+}: {
+  groupId?: number;
+  groupName?: string;
+  sessions?: SessionChoices;
+}) {
+  const { filter, set, clear } = useUrlFilter(groupId);
+  const stats = useStats(filter);
+  const rangeError =
+    filter.from && filter.to && filter.from > filter.to ? 'The end date is before the start date.' : undefined;
+  const filtered = Boolean(filter.eventId || filter.from || filter.to);
+
+  return (
+    <div className="space-y-6">
+      <section aria-label="Filters" className="rounded-xl bg-white p-4 ring-1 ring-ink/5">
+        <div className="grid grid-cols-2 items-end gap-3 sm:grid-cols-4">
+          {sessions && <EventSelect events={sessions} value={filter.eventId} onChange={(v) => set('eventId', v)} />}
+          <TextField
+            label="From"
+            type="date"
+            value={filter.from ?? ''}
+            max={filter.to}
+            onChange={(e) => set('from', e.target.value)}
+          />
+          <TextField
+            label="To"
+            type="date"
+            value={filter.to ?? ''}
+            min={filter.from}
+            onChange={(e) => set('to', e.target.value)}
+            error={rangeError}
+          />
+          {filtered && (
+            <div className="col-span-2 sm:col-span-1">
+              <Button variant="quiet" onClick={clear} className="w-full sm:w-auto">
+                Clear filters
+              </Button>
+            </div>
+          )}
+        </div>
+      </section>
+
+      <Actions filter={filter} groupId={groupId} groupName={groupName} />
+
+      {rangeError ? (
+        <Alert tone="error" title="Check the dates">
+          {rangeError} Change one of them to see the figures.
+        </Alert>
+      ) : stats.isPending ? (
+        <Spinner label="Counting the repairs…" />
+      ) : stats.isError ? (
+        <Alert tone="error" title="The figures could not be loaded">
+          {stats.error.message}
+        </Alert>
+      ) : stats.data.items === 0 ? (
+        <EmptyState title={filtered ? 'No items in this selection' : 'No items counted yet'} icon="▤">
+          {filtered
+            ? 'Nothing was checked in for these dates or this session. Widen the dates or clear the filters.'
+            : 'Figures appear here once items are checked in at a session and their outcomes recorded.'}
+        </EmptyState>
+      ) : (
+        <Figures stats={stats.data} filter={filter} />
+      )}
+
+      <MethodSection />
+    </div>
+  );
+}
+
+function EventSelect({
+  events,
+  value,
+  onChange,
+}: {
+  events: SessionChoices;
+  value?: number;
+  onChange: (v: string) => void;
+}) {
+  const list = [...(events.data ?? [])].sort((a, b) => b.startsAt.localeCompare(a.startsAt));
+  return (
+    <div className="col-span-2">
+      <SelectField
+        label="Session"
+        value={value ?? ''}
+        onChange={(e) => onChange(e.target.value)}
+        disabled={events.isPending}
+        hint={events.isError ? 'The sessions could not be loaded; the figures cover all of them.' : undefined}
+      >
+        <option value="">{events.isPending ? 'Loading sessions…' : 'All sessions'}</option>
+        {value !== undefined && !list.some((e) => e.id === value) && <option value={value}>Session {value}</option>}
+        {list.map((e) => (
+          <option key={e.id} value={e.id}>
+            {formatDay(e.startsAt, e.timeZone)} · {e.title}
+          </option>
+        ))}
+      </SelectField>
+    </div>
+  );
+}
+
+function Actions({ filter, groupId, groupName }: { filter: StatsFilter; groupId?: number; groupName?: string }) {
+  const [embedOpen, setEmbedOpen] = useState(false);
+  const panelId = useId();
+  return (
+    <div className="space-y-3">
+      <div className="flex flex-wrap gap-2">
+        {filter.from && filter.to && filter.from > filter.to ? (
+          <p className="text-sm text-ink-soft">Correct the dates to download the records.</p>
+        ) : (
+          <>
+            <a href={exportUrl('records', filter)} download className={secondaryLink}>
+              Download records (CSV)
+            </a>
+            <a href={exportUrl('open-repair-data', filter)} download className={secondaryLink}>
+              Open Repair Data export (CSV)
+            </a>
+          </>
+        )}
+        {groupId !== undefined && (
+          <>
+            <Link
+              to={
+                filter.eventId
+                  ? paths.report(filter.eventId)
+                  : paths.groupReport(groupId, qs({ from: filter.from, to: filter.to }))
+              }
+              className={secondaryLink}
+            >
+              Printable report
+            </Link>
+            <Link to={paths.publicImpact(groupId)} className={secondaryLink}>
+              Public page
+            </Link>
+            <Button
+              variant="secondary"
+              aria-expanded={embedOpen}
+              aria-controls={panelId}
+              onClick={() => setEmbedOpen((v) => !v)}
+            >
+              Embed on your website
+            </Button>
+          </>
+        )}
+      </div>
+      {groupId !== undefined && embedOpen && <EmbedPanel id={panelId} groupId={groupId} groupName={groupName} />}
+    </div>
+  );
+}
