@@ -2,7 +2,7 @@ import { useMemo, useRef, useState } from 'react';
 import { useFieldArray } from 'react-hook-form';
 import { Link, useNavigate, useParams, useSearchParams } from 'react-router';
 import { HAZARDS, SKILL_LABELS } from '../../../../shared/constants';
-import { DISCLAIMER, formatDay } from '../../../../shared/format';
+import { formatDay } from '../../../../shared/format';
 import { slotBookability } from '../../../../shared/booking/bookability';
 import { HAZARD_REFUSALS } from '../../../../shared/booking/screening';
 import { createBookingSchema, MAX_ITEMS_PER_BOOKING, PHOTO_LIMITS } from '../../../../shared/schemas/bookings';
@@ -11,6 +11,7 @@ import { Alert, Card, PageTitle, Spinner } from '../../components/ui/feedback';
 import { SelectField, TextField } from '../../components/ui/field';
 import { paths } from '../../config/paths';
 import { WaitlistJoined } from '../../features/bookings/components/waitlist-joined';
+import { HouseRules } from '../../features/bookings/components/house-rules';
 import { TimeTiles } from '../../features/bookings/components/time-tiles';
 import { useCreateBooking } from '../../features/bookings/api/create-booking';
 import { useJoinWaitlist } from '../../features/bookings/api/join-waitlist';
@@ -368,29 +369,12 @@ function BookingForm({ event, categories }: { event: EventDetail; categories: Ca
         )}
         {errors.items?.message && <p className="text-sm font-semibold text-alert">{errors.items.message}</p>}
 
-        <Card>
-          <h2 className="text-lg">{3 + items.fields.length}. House rules</h2>
-          {event.houseRules && (
-            <ul className="mt-2 list-disc space-y-1 pl-5 text-sm">
-              {event.houseRules
-                .split('\n')
-                .filter(Boolean)
-                .map((l) => (
-                  <li key={l}>{l}</li>
-                ))}
-            </ul>
-          )}
-          <ul className="mt-2 list-disc space-y-1 pl-5 text-sm text-ink-soft">
-            {DISCLAIMER.map((d) => (
-              <li key={d}>{d}</li>
-            ))}
-          </ul>
-          <label className="mt-4 flex items-start gap-3 rounded-lg p-3 ring-1 ring-ink/15">
-            <input type="checkbox" className="mt-0.5 size-5 accent-copper" {...form.register('consent')} />
-            <span>I accept the house rules and the conditions above.</span>
-          </label>
-          {errors.consent && <p className="mt-1 text-sm font-semibold text-alert">{errors.consent.message}</p>}
-        </Card>
+        <HouseRules
+          step={3 + items.fields.length}
+          houseRules={event.houseRules}
+          consent={form.register('consent')}
+          error={errors.consent?.message}
+        />
 
         <Button type="submit" busy={form.formState.isSubmitting} className="w-full py-3 text-lg">
           {joinsWaitlist ? 'Join the waiting list' : 'Book my slot'}

@@ -1,0 +1,37 @@
+import type { UseFormRegisterReturn } from 'react-hook-form';
+import { DISCLAIMER } from '../../../../../shared/format';
+import { Card } from '../../../components/ui/feedback';
+
+/** The group's house rules and the conditions, with the visitor's consent box. */
+export function HouseRules(props: {
+  step: number;
+  houseRules: string;
+  consent: UseFormRegisterReturn;
+  error?: string;
+}) {
+  return (
+    <Card>
+      <h2 className="text-lg">{props.step}. House rules</h2>
+      {props.houseRules && (
+        <ul className="mt-2 list-disc space-y-1 pl-5 text-sm">
+          {props.houseRules
+            .split('\n')
+            .filter(Boolean)
+            .map((l) => (
+              <li key={l}>{l}</li>
+            ))}
+        </ul>
+      )}
+      <ul className="mt-2 list-disc space-y-1 pl-5 text-sm text-ink-soft">
+        {DISCLAIMER.map((d) => (
+          <li key={d}>{d}</li>
+        ))}
+      </ul>
+      <label className="mt-4 flex items-start gap-3 rounded-lg p-3 ring-1 ring-ink/15">
+        <input type="checkbox" className="mt-0.5 size-5 accent-copper" {...props.consent} />
+        <span>I accept the house rules and the conditions above.</span>
+      </label>
+      {props.error && <p className="mt-1 text-sm font-semibold text-alert">{props.error}</p>}
+    </Card>
+  );
+}
