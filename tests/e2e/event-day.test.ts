@@ -112,7 +112,7 @@ describe('event day in the browser', () => {
       const bench = await signedIn(browser, app.server.url, 'fixer', PHONE);
       await bench.page.goto(`${app.server.url}/t/${code}`);
       await bench.page.waitForURL(new RegExp(`/items/${lamp.id}$`));
-      await bench.page.getByRole('heading', { name: /lamp/i }).waitFor();
+      await bench.page.getByRole('heading', { level: 1, name: /lamp/i }).waitFor();
       await bench.page.getByText('Unplug and prove dead').first().waitFor();
       await bench.page.getByRole('button', { name: 'Start repair' }).click();
       await bench.page.getByText('At the bench').first().waitFor();
