@@ -79,6 +79,47 @@ export default tseslint.config(
     },
   },
   {
+    // Pages never build URLs or keys: the fetcher and the key factory live in the feature's api/ folder.
+    files: ['client/src/routes/**/*.{ts,tsx}', 'client/src/app/**/*.{ts,tsx}', 'client/src/components/**/*.{ts,tsx}'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            {
+              group: ['**/lib/api'],
+              importNames: ['api'],
+              message: 'Call the API through an operation in features/<f>/api/, which alone knows the URL.',
+            },
+          ],
+        },
+      ],
+      'no-restricted-syntax': [
+        'error',
+        {
+          selector: 'Property[key.name=/^(queryKey|mutationKey)$/] > ArrayExpression',
+          message: 'Take query keys from the feature\'s key factory (features/<f>/api/keys.ts).',
+        },
+        { selector: 'ExportAllDeclaration', message: 'No barrel files: import from the module that defines it.' },
+      ],
+    },
+  },
+  {
+    // Inside a feature, keys come from its key factory too, so one prefix invalidates all of them.
+    files: ['client/src/features/**/*.{ts,tsx}'],
+    ignores: ['client/src/features/*/api/keys.ts'],
+    rules: {
+      'no-restricted-syntax': [
+        'error',
+        {
+          selector: 'Property[key.name=/^(queryKey|mutationKey)$/] > ArrayExpression',
+          message: 'Take query keys from the feature\'s key factory (features/<f>/api/keys.ts).',
+        },
+        { selector: 'ExportAllDeclaration', message: 'No barrel files: import from the module that defines it.' },
+      ],
+    },
+  },
+  {
     files: ['client/**/*.{ts,tsx}'],
     plugins: { 'react-hooks': reactHooks },
     rules: {
