@@ -60,7 +60,10 @@ export default tseslint.config(
       'import-x/no-cycle': ['error', { ignoreExternal: true }],
       'import-x/no-self-import': 'error',
       'max-lines': ['error', { max: 400 }],
-      '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_', ignoreRestSiblings: true }],
+      '@typescript-eslint/no-unused-vars': [
+        'error',
+        { argsIgnorePattern: '^_', varsIgnorePattern: '^_', ignoreRestSiblings: true },
+      ],
       '@typescript-eslint/no-explicit-any': 'error',
     },
   },
@@ -98,7 +101,7 @@ export default tseslint.config(
         'error',
         {
           selector: 'Property[key.name=/^(queryKey|mutationKey)$/] > ArrayExpression',
-          message: 'Take query keys from the feature\'s key factory (features/<f>/api/keys.ts).',
+          message: "Take query keys from the feature's key factory (features/<f>/api/keys.ts).",
         },
         { selector: 'ExportAllDeclaration', message: 'No barrel files: import from the module that defines it.' },
       ],
@@ -113,7 +116,7 @@ export default tseslint.config(
         'error',
         {
           selector: 'Property[key.name=/^(queryKey|mutationKey)$/] > ArrayExpression',
-          message: 'Take query keys from the feature\'s key factory (features/<f>/api/keys.ts).',
+          message: "Take query keys from the feature's key factory (features/<f>/api/keys.ts).",
         },
         { selector: 'ExportAllDeclaration', message: 'No barrel files: import from the module that defines it.' },
       ],
