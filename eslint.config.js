@@ -123,6 +123,25 @@ export default tseslint.config(
     },
   },
   {
+    // SQL lives in a feature's queries (queries.ts or queries/): routes parse and answer, services decide.
+    files: ['server/src/features/**/*.ts'],
+    ignores: ['server/src/features/*/queries.ts', 'server/src/features/*/queries/**'],
+    rules: {
+      '@typescript-eslint/no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            {
+              group: ['drizzle-orm', 'drizzle-orm/*', '**/db/schema', '**/db/schema/*'],
+              allowTypeImports: true,
+              message: "SQL belongs in the feature's queries.ts or queries/ (docs/decisions/008).",
+            },
+          ],
+        },
+      ],
+    },
+  },
+  {
     files: ['client/**/*.{ts,tsx}'],
     plugins: { 'react-hooks': reactHooks },
     rules: {
