@@ -80,6 +80,7 @@ export const salvagePartSchema = z.object({
   notes: text(300),
 });
 export type SalvagePartInput = z.input<typeof salvagePartSchema>;
+export type WriteupInput = z.input<typeof writeupSchema>;
 
 export const salvageUpdateSchema = z.object({
   quantity: z.coerce.number().int().min(0).max(10000).optional(),

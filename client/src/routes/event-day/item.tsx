@@ -29,6 +29,7 @@ import { Alert, Card, Spinner } from '../../components/ui/feedback';
 import { CheckField, SelectField, TextAreaField, TextField } from '../../components/ui/field';
 import { paths } from '../../config/paths';
 import {
+  eventDayKeys,
   OUTCOME_MUTATION_KEY,
   useItem,
   useRepairPhotos,
@@ -40,8 +41,9 @@ import {
 import { StatusChip } from '../../features/event-day/status-chip';
 import { useUser } from '../../lib/auth';
 import { ConfirmDialog } from '../../components/ui/confirm-dialog';
-import { CalculatorLinks, SalvageForItem, SimilarRepairs } from '../../features/toolkit/item-toolkit';
+import { CalculatorLinks, SalvageForItem, SimilarRepairs } from '../../features/toolkit/components/item-toolkit';
 import { ApiError } from '../../lib/api';
+import { queryClient } from '../../lib/query-client';
 
 /** The fixer's page for one item, phone first: what is wrong, the cautions, start, safety check, outcome. */
 export function ItemPage() {
@@ -224,7 +226,12 @@ function ItemView({ item }: { item: ItemDetail }) {
       )}
 
       {(item.can.record || item.photos.some((p) => p.kind === 'repair')) && <RepairPhotos item={item} />}
-      {(started || item.partsUsed.length > 0) && <SalvageForItem item={item} />}
+      {(started || item.partsUsed.length > 0) && (
+        <SalvageForItem
+          item={item}
+          onChanged={() => void queryClient.invalidateQueries({ queryKey: eventDayKeys.item(item.id) })}
+        />
+      )}
       <CalculatorLinks item={item} />
 
       <details className="rounded-xl bg-white p-4 ring-1 ring-ink/5">

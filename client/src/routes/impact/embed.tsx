@@ -2,8 +2,8 @@ import type { ReactNode } from 'react';
 import { useSearchParams } from 'react-router';
 import { Area, AreaChart, ResponsiveContainer } from 'recharts';
 import { paths } from '../../config/paths';
-import { usePublicImpact } from '../../features/impact/api';
-import { monthLabel, oneDp, positiveInt, whole } from '../../features/impact/display';
+import { usePublicImpact } from '../../features/impact/api/get-public-impact';
+import { monthLabel, oneDp, positiveInt, whole } from '../../features/impact/components/display';
 
 /* The host page decides the frame; nothing of the app's own page background or scrolling may show inside it. */
 const FRAME_CSS =

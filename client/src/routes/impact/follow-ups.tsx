@@ -9,7 +9,9 @@ import { ConfirmDialog } from '../../components/ui/confirm-dialog';
 import { Alert, EmptyState, Spinner } from '../../components/ui/feedback';
 import { TextAreaField } from '../../components/ui/field';
 import { useGroupSettings } from '../../features/events/api/organiser';
-import { useFollowUps, useSetFollowUp, type FollowUp } from '../../features/impact/api';
+import type { FollowUp } from '../../../../shared/api/impact';
+import { useFollowUps } from '../../features/impact/api/get-follow-ups';
+import { useSetFollowUp } from '../../features/impact/api/set-follow-up';
 
 type ManualStatus = (typeof MANUAL_FOLLOW_UP_STATUSES)[number];
 const isManual = (s: FollowUpStatus): s is ManualStatus =>

@@ -16,7 +16,8 @@ import {
 import { OUTCOME_LABELS } from '../../../../shared/event-day/constants';
 import { Alert, Card, EmptyState, PageTitle, Spinner } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
-import { usePublicImpact, type Method, type PublicImpact } from '../../features/impact/api';
+import type { Method, PublicImpact } from '../../../../shared/api/impact';
+import { usePublicImpact } from '../../features/impact/api/get-public-impact';
 import { ApiError } from '../../lib/api';
 import {
   CO2E,
@@ -29,7 +30,7 @@ import {
   monthLabel,
   oneDp,
   whole,
-} from '../../features/impact/display';
+} from '../../features/impact/components/display';
 
 /** What a group (or every group) has repaired, for anyone: totals and charts, never a person. */
 export function PublicImpactPage() {

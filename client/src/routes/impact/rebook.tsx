@@ -5,7 +5,9 @@ import { Button } from '../../components/ui/button';
 import { ConfirmDialog } from '../../components/ui/confirm-dialog';
 import { Alert, Card, EmptyState, PageTitle, Spinner } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
-import { useBookReturn, useRebook, type RebookView } from '../../features/impact/api';
+import type { RebookView } from '../../../../shared/api/impact';
+import { useBookReturn } from '../../features/impact/api/book-return';
+import { useRebook } from '../../features/impact/api/get-rebook';
 import { ApiError } from '../../lib/api';
 
 type Session = RebookView['events'][number];

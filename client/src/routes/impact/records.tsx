@@ -11,8 +11,10 @@ import {
 import { Alert, EmptyState, PageTitle, Spinner } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
 import { useCategories } from '../../features/events/api/events';
-import { qs, useRecords, type RecordRow, type RecordsFilter } from '../../features/impact/api';
-import { isoDate, oneDp, positiveInt, whole } from '../../features/impact/display';
+import type { RecordRow, RecordsFilter } from '../../../../shared/api/impact';
+import { useRecords } from '../../features/impact/api/get-records';
+import { queryString as qs } from '../../lib/query-string';
+import { isoDate, oneDp, positiveInt, whole } from '../../features/impact/components/display';
 
 const PAGE_SIZE = 50;
 const dayFormat = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric' });

@@ -6,8 +6,10 @@ import { formatDay, formatTimeRange } from '../../../../shared/format';
 import { Button } from '../../components/ui/button';
 import { Alert, EmptyState, Spinner } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
-import { useEventReport, useGroupReport, type EventReport } from '../../features/impact/api';
-import { CO2E, oneDp, percent, whole } from '../../features/impact/display';
+import type { EventReport } from '../../../../shared/api/impact';
+import { useEventReport } from '../../features/impact/api/get-event-report';
+import { useGroupReport } from '../../features/impact/api/get-group-report';
+import { CO2E, oneDp, percent, whole } from '../../features/impact/components/display';
 
 const hoursFormat = new Intl.NumberFormat('en-GB', { maximumFractionDigits: 2 });
 

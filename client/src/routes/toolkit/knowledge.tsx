@@ -1,17 +1,17 @@
 import { useState } from 'react';
-import { useSearchParams } from 'react-router';
+import { useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { formatDay } from '../../../../shared/format';
 import { Button } from '../../components/ui/button';
 import { Alert, EmptyState, PageTitle, Spinner } from '../../components/ui/feedback';
 import { SelectField, TextField } from '../../components/ui/field';
-import { useCategories } from '../../features/events/api/events';
-import { useKnowledge, type KnowledgeEntry } from '../../features/toolkit/api';
-import { KnowledgeCard } from '../../features/toolkit/knowledge-card';
+import { categoriesQuery, useCategories } from '../../features/categories/api/get-categories';
+import type { KnowledgeEntry } from '../../../../shared/api/toolkit';
+import { knowledgeQuery, useKnowledge } from '../../features/toolkit/api/get-knowledge';
+import { queryClient } from '../../lib/query-client';
+import { KnowledgeCard } from '../../features/toolkit/components/knowledge-card';
 
-/** /toolkit/knowledge: what the groups have learned, searchable by kind, brand, model and the words of the fault. */
-export function KnowledgePage() {
-  const [params, setParams] = useSearchParams();
-  const { data: categories } = useCategories();
+/** The search as the address says it; nothing is searched until something is asked. */
+const searchOf = (params: URLSearchParams) => {
   const applied = {
     q: params.get('q') ?? '',
     categoryId: Number(params.get('categoryId')) || undefined,
@@ -19,8 +19,23 @@ export function KnowledgePage() {
     model: params.get('model') ?? '',
     scope: (params.get('scope') === 'mine' ? 'mine' : 'network') as 'mine' | 'network',
   };
+  return { applied, searched: Boolean(applied.q || applied.categoryId || applied.brand || applied.model) };
+};
+
+export const loader = ({ request }: LoaderFunctionArgs) => {
+  const { applied, searched } = searchOf(new URL(request.url).searchParams);
+  return Promise.all([
+    queryClient.ensureQueryData(categoriesQuery()),
+    searched ? queryClient.ensureQueryData(knowledgeQuery(applied)) : null,
+  ]);
+};
+
+/** /toolkit/knowledge: what the groups have learned, searchable by kind, brand, model and the words of the fault. */
+export function KnowledgePage() {
+  const [params, setParams] = useSearchParams();
+  const { data: categories } = useCategories();
+  const { applied, searched } = searchOf(params);
   const [draft, setDraft] = useState(applied);
-  const searched = Boolean(applied.q || applied.categoryId || applied.brand || applied.model);
   const results = useKnowledge(applied, searched);
   return (
     <div className="mx-auto max-w-3xl space-y-5">
@@ -53,7 +68,7 @@ export function KnowledgePage() {
             onChange={(e) => setDraft({ ...draft, categoryId: Number(e.target.value) || undefined })}
           >
             <option value="">Any</option>
-            {categories?.map((c) => (
+            {categories.map((c) => (
               <option key={c.id} value={c.id}>
                 {c.name}
               </option>

@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { useParams, useSearchParams } from 'react-router';
+import { useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { PART_TYPES, PART_TYPE_LABELS, type PartType } from '../../../../shared/salvage/constants';
 import { GroupTabs } from '../../components/layouts/group-tabs';
 import { Button } from '../../components/ui/button';
@@ -7,20 +7,34 @@ import { ConfirmDialog } from '../../components/ui/confirm-dialog';
 import { Alert, EmptyState, PageTitle, Spinner } from '../../components/ui/feedback';
 import { SelectField, TextField } from '../../components/ui/field';
 import { useUser } from '../../lib/auth';
-import { useRemovePart, useSalvage, useTakePart, useUpdatePart, type SalvagePart } from '../../features/toolkit/api';
-import { ratingsText } from '../../features/toolkit/ratings';
-import { AddPartForm } from '../../features/toolkit/add-part-form';
+import { queryClient } from '../../lib/query-client';
+import type { SalvagePart } from '../../../../shared/api/toolkit';
+import { useRemovePart } from '../../features/toolkit/api/remove-part';
+import { salvageQuery, useSalvage } from '../../features/toolkit/api/get-salvage';
+import { useTakePart } from '../../features/toolkit/api/take-part';
+import { useUpdatePart } from '../../features/toolkit/api/update-part';
+import { ratingsText } from '../../features/toolkit/components/ratings';
+import { AddPartForm } from '../../features/toolkit/components/add-part-form';
+
+/** The list's filters as the address says them: kind, words, and whether used-up parts show too. */
+const filterOf = (params: URLSearchParams) => {
+  const type = (PART_TYPES as readonly string[]).includes(params.get('type') ?? '')
+    ? (params.get('type') as PartType)
+    : undefined;
+  const q = params.get('q') ?? '';
+  return { type, q, filter: { type, q: q || undefined, inStock: params.get('all') ? undefined : ('1' as const) } };
+};
+
+export const loader = ({ params, request }: LoaderFunctionArgs) =>
+  queryClient.ensureQueryData(salvageQuery(Number(params.groupId), filterOf(new URL(request.url).searchParams).filter));
 
 /** /groups/:groupId/salvage: the parts the group has saved, by box, with what each is rated for. */
 export function SalvagePage() {
   const groupId = Number(useParams().groupId);
   const { data: user } = useUser();
   const [params, setParams] = useSearchParams();
-  const type = (PART_TYPES as readonly string[]).includes(params.get('type') ?? '')
-    ? (params.get('type') as PartType)
-    : undefined;
-  const q = params.get('q') ?? '';
-  const parts = useSalvage(groupId, { type, q: q || undefined, inStock: params.get('all') ? undefined : '1' });
+  const { type, q, filter } = filterOf(params);
+  const parts = useSalvage(groupId, filter);
   const [adding, setAdding] = useState(params.get('add') === '1');
   const organiser = user?.admin || user?.roles.some((r) => r.groupId === groupId && r.role === 'organiser');
   return (

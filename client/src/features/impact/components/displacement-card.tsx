@@ -2,7 +2,8 @@ import { useState, type FormEvent } from 'react';
 import { Button } from '../../../components/ui/button';
 import { Alert, Card, Spinner } from '../../../components/ui/feedback';
 import { TextField } from '../../../components/ui/field';
-import { useImpactSettings, useSetImpactSettings } from '../api';
+import { useImpactSettings } from '../api/get-impact-settings';
+import { useSetImpactSettings } from '../api/set-impact-settings';
 import { ApiError } from '../../../lib/api';
 
 export function DisplacementCard() {

@@ -2,8 +2,8 @@ import { type ReactNode } from 'react';
 import { Link } from 'react-router';
 import { OUTCOME_LABELS, type Outcome } from '../../../../../shared/event-day/constants';
 import type { Counts } from '../../../../../shared/impact/statistics';
-import { type RecordsFilter, type StatsFilter } from '../api';
-import { CO2E, COLOURS, oneDp, percent, whole } from '../display';
+import type { RecordsFilter, StatsFilter } from '../../../../../shared/api/impact';
+import { CO2E, COLOURS, oneDp, percent, whole } from './display';
 
 export const plural = (n: number, one: string, many = `${one}s`) => `${whole.format(n)} ${n === 1 ? one : many}`;
 

@@ -2,8 +2,9 @@ import { Link, useNavigate } from 'react-router';
 import { Bar, BarChart, CartesianGrid, Legend, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import { BARRIER_LABELS } from '../../../../../shared/event-day/constants';
 import { paths } from '../../../config/paths';
-import { qs, type Stats, type StatsFilter } from '../api';
-import { COLOURS, ChartCard, HorizontalBars, longMonth, monthLabel, oneDp, percent } from '../display';
+import type { Stats, StatsFilter } from '../../../../../shared/api/impact';
+import { queryString as qs } from '../../../lib/query-string';
+import { COLOURS, ChartCard, HorizontalBars, longMonth, monthLabel, oneDp, percent } from './display';
 import { FigureTable, NumberCell, plural, SERIES, TILES, type RecordsExtra } from './figure-parts';
 
 export function Figures({ stats, filter }: { stats: Stats; filter: StatsFilter }) {

@@ -1,6 +1,6 @@
 import { Alert, Card, Spinner } from '../../../components/ui/feedback';
-import { useMethod } from '../api';
-import { FactorTable } from '../display';
+import { useMethod } from '../api/get-method';
+import { FactorTable } from './display';
 
 export function MethodSection() {
   const method = useMethod();

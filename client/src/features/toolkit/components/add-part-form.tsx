@@ -1,10 +1,10 @@
 import { useState } from 'react';
-import { PART_TYPES, PART_TYPE_LABELS, type PartType } from '../../../../shared/salvage/constants';
-import { salvagePartSchema } from '../../../../shared/schemas/toolkit';
-import { Button } from '../../components/ui/button';
-import { Alert } from '../../components/ui/feedback';
-import { SelectField, TextField } from '../../components/ui/field';
-import { useAddPart } from './api';
+import { PART_TYPES, PART_TYPE_LABELS, type PartType } from '../../../../../shared/salvage/constants';
+import { salvagePartSchema } from '../../../../../shared/schemas/toolkit';
+import { Button } from '../../../components/ui/button';
+import { Alert } from '../../../components/ui/feedback';
+import { SelectField, TextField } from '../../../components/ui/field';
+import { useAddPart } from '../api/add-part';
 import { RatingFields, parseRatings, type RatingsDraft } from './ratings';
 
 /** Adding parts: the ratings asked for follow the kind of part. */
@@ -12,12 +12,15 @@ export function AddPartForm({
   groupId,
   sourceItemId,
   onDone,
+  onChanged,
 }: {
   groupId: number;
   sourceItemId?: number;
   onDone: () => void;
+  /** Runs after the part is saved, for a page that shows the parts saved from its item. */
+  onChanged?: () => void;
 }) {
-  const add = useAddPart(groupId);
+  const add = useAddPart(groupId, onChanged);
   const [v, setV] = useState({
     type: 'fuse' as PartType,
     value: '',

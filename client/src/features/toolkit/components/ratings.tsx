@@ -1,6 +1,6 @@
-import type { PartRatings, PartType } from '../../../../shared/salvage/constants';
-import { SelectField, TextField } from '../../components/ui/field';
-import { decodePrintedCode, formatOhms } from '../../../../shared/calculators/resistors';
+import type { PartRatings, PartType } from '../../../../../shared/salvage/constants';
+import { SelectField, TextField } from '../../../components/ui/field';
+import { decodePrintedCode, formatOhms } from '../../../../../shared/calculators/resistors';
 
 /** Ratings as typed: strings until they are parsed; µF and kΩ are typed as the bench says them. */
 export type RatingsDraft = Partial<

@@ -1,8 +1,9 @@
 import { useState } from 'react';
-import { Button } from '../../components/ui/button';
-import { Alert } from '../../components/ui/feedback';
-import { TextAreaField, TextField } from '../../components/ui/field';
-import { useWriteUp, type KnowledgeEntry } from './api';
+import { Button } from '../../../components/ui/button';
+import { Alert } from '../../../components/ui/feedback';
+import { TextAreaField, TextField } from '../../../components/ui/field';
+import type { KnowledgeEntry } from '../../../../../shared/api/toolkit';
+import { useWriteUp } from '../api/write-up';
 
 /** One record of the knowledge base: the write-up when there is one, else the fault and the fixer's notes. */
 export function KnowledgeCard({

@@ -1,29 +1,43 @@
 import { useState } from 'react';
 import { Link } from 'react-router';
-import { PART_TYPES, PART_TYPE_LABELS, type PartType } from '../../../../shared/salvage/constants';
-import { formatDay } from '../../../../shared/format';
-import { Button } from '../../components/ui/button';
-import { Alert, Card, Spinner } from '../../components/ui/feedback';
-import { SelectField, TextField } from '../../components/ui/field';
-import { paths } from '../../config/paths';
-import type { ItemDetail } from '../event-day/api';
+import { PART_TYPES, PART_TYPE_LABELS, type PartType } from '../../../../../shared/salvage/constants';
+import { formatDay } from '../../../../../shared/format';
+import { Button } from '../../../components/ui/button';
+import { Alert, Card, Spinner } from '../../../components/ui/feedback';
+import { SelectField, TextField } from '../../../components/ui/field';
+import { paths } from '../../../config/paths';
+import type { ItemStatus, Outcome } from '../../../../../shared/event-day/constants';
+import { queryString } from '../../../lib/query-string';
+import { useSimilarRepairs } from '../api/get-similar-repairs';
+import { useSubstitutes } from '../api/get-substitutes';
+import { useTakePart } from '../api/take-part';
 import { AddPartForm } from './add-part-form';
-import { useSimilar, useSubstitutes, useTakePart } from './api';
 import { KnowledgeCard } from './knowledge-card';
 import { parseRatings, RatingFields, ratingsText, type RatingsDraft } from './ratings';
 
+/** What the toolkit needs to know of the item on the fixer's page; the page passes its own item, which has more. */
+export interface ToolkitItem {
+  id: number;
+  status: ItemStatus;
+  categoryId: number;
+  brand: string | null;
+  model: string | null;
+  mains: boolean;
+  event: { groupId: number; timeZone: string };
+  outcome: { outcome: Outcome } | null;
+  partsUsed: { id: number; quantity: number; value: string; package: string; box: string; takenBy: string | null }[];
+}
+
 /** "Similar past repairs": start where the last fixer ended. */
-export function SimilarRepairs({ item }: { item: ItemDetail }) {
-  const similar = useSimilar(item.id);
+export function SimilarRepairs({ item }: { item: ToolkitItem }) {
+  const similar = useSimilarRepairs(item.id);
   return (
     <Card>
       <div className="flex items-baseline justify-between gap-2">
         <h2 className="text-lg">Similar past repairs</h2>
         <Link
           className="text-sm font-semibold text-navy underline"
-          to={paths.knowledge(
-            `?categoryId=${item.categoryId}${item.brand ? `&brand=${encodeURIComponent(item.brand)}` : ''}${item.model ? `&model=${encodeURIComponent(item.model)}` : ''}`,
-          )}
+          to={paths.knowledge(queryString({ categoryId: item.categoryId, brand: item.brand, model: item.model }))}
         >
           Search all notes
         </Link>
@@ -50,7 +64,7 @@ export function SimilarRepairs({ item }: { item: ItemDetail }) {
 }
 
 /** The bench calculators this item is likely to need, one tap away. */
-export function CalculatorLinks({ item }: { item: ItemDetail }) {
+export function CalculatorLinks({ item }: { item: Pick<ToolkitItem, 'mains'> }) {
   const links = [
     ...(item.mains
       ? [
@@ -85,8 +99,11 @@ export function CalculatorLinks({ item }: { item: ItemDetail }) {
   );
 }
 
-/** The parts taken for this item, and a search of the stock for one that can stand in for what is needed. */
-export function SalvageForItem({ item }: { item: ItemDetail }) {
+/**
+ * The parts taken for this item, and a search of the stock for one that can stand in for what is needed.
+ * `onChanged` runs after a part is taken for the item or saved from it, so the page can refresh its item.
+ */
+export function SalvageForItem({ item, onChanged }: { item: ToolkitItem; onChanged?: () => void }) {
   const groupId = item.event.groupId;
   const [type, setType] = useState<PartType>('fuse');
   const [ratings, setRatings] = useState<RatingsDraft>({});
@@ -95,7 +112,7 @@ export function SalvageForItem({ item }: { item: ItemDetail }) {
     null,
   );
   const found = useSubstitutes(groupId, search ?? { type }, search !== null);
-  const take = useTakePart(groupId, item.id);
+  const take = useTakePart(groupId, item.id, onChanged);
   const [adding, setAdding] = useState(false);
   const [lookupErrors, setLookupErrors] = useState<Record<string, string>>({});
   return (
@@ -219,7 +236,12 @@ export function SalvageForItem({ item }: { item: ItemDetail }) {
       {item.outcome?.outcome === 'end-of-life' && (
         <div className="mt-3 border-t border-ink/10 pt-3">
           {adding ? (
-            <AddPartForm groupId={groupId} sourceItemId={item.id} onDone={() => setAdding(false)} />
+            <AddPartForm
+              groupId={groupId}
+              sourceItemId={item.id}
+              onDone={() => setAdding(false)}
+              onChanged={onChanged}
+            />
           ) : (
             <>
               <p className="text-sm">

@@ -1,0 +1,12 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { ImpactSettings } from '../../../../../shared/api/impact';
+import { api } from '../../../lib/api';
+
+import { impactKeys } from './keys';
+
+export const getImpactSettings = () => api<ImpactSettings>('GET', `/api/admin/impact-settings`);
+
+export const impactSettingsQuery = () =>
+  queryOptions({ queryKey: impactKeys.settings(), queryFn: () => getImpactSettings() });
+
+export const useImpactSettings = () => useQuery(impactSettingsQuery());

@@ -1,0 +1,12 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { Method } from '../../../../../shared/api/impact';
+import { api } from '../../../lib/api';
+import { impactKeys } from './keys';
+
+export const getMethod = () => api<Method>('GET', '/api/stats/method');
+
+/** How the figures are counted changes only with an admin's edit: ten minutes fresh. */
+export const methodQuery = () =>
+  queryOptions({ queryKey: impactKeys.method(), queryFn: getMethod, staleTime: 10 * 60_000 });
+
+export const useMethod = () => useQuery(methodQuery());

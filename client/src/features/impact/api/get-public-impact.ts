@@ -1,0 +1,13 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { PublicImpact } from '../../../../../shared/api/impact';
+import { api } from '../../../lib/api';
+import { queryString } from '../../../lib/query-string';
+import { impactKeys } from './keys';
+
+export const getPublicImpact = (groupId?: number) =>
+  api<PublicImpact>('GET', `/api/public/impact${queryString({ groupId })}`);
+
+export const publicImpactQuery = (groupId?: number) =>
+  queryOptions({ queryKey: impactKeys.public(groupId), queryFn: () => getPublicImpact(groupId) });
+
+export const usePublicImpact = (groupId?: number) => useQuery(publicImpactQuery(groupId));

@@ -1,0 +1,12 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { RecordsFilter, RecordsPage } from '../../../../../shared/api/impact';
+import { api } from '../../../lib/api';
+import { queryString } from '../../../lib/query-string';
+import { impactKeys } from './keys';
+
+export const getRecords = (f: RecordsFilter) => api<RecordsPage>('GET', `/api/stats/records${queryString(f)}`);
+
+export const recordsQuery = (f: RecordsFilter) =>
+  queryOptions({ queryKey: impactKeys.records(f), queryFn: () => getRecords(f) });
+
+export const useRecords = (f: RecordsFilter) => useQuery(recordsQuery(f));

@@ -1,0 +1,15 @@
+import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
+import type { SalvageFilter, SalvagePart } from '../../../../../shared/api/toolkit';
+import { api } from '../../../lib/api';
+import { queryString } from '../../../lib/query-string';
+import { toolkitKeys } from './keys';
+
+export const getSalvage = (groupId: number, f: SalvageFilter) =>
+  api<SalvagePart[]>('GET', `/api/groups/${groupId}/salvage${queryString(f)}`);
+
+export const salvageQuery = (groupId: number, f: SalvageFilter) =>
+  queryOptions({ queryKey: toolkitKeys.salvage.list(groupId, f), queryFn: () => getSalvage(groupId, f) });
+
+/** The list keeps showing while a typed search loads, so the search field never loses its place. */
+export const useSalvage = (groupId: number, f: SalvageFilter) =>
+  useQuery({ ...salvageQuery(groupId, f), placeholderData: keepPreviousData });

@@ -1,0 +1,121 @@
+import type { Barrier, Outcome } from '../event-day/constants';
+import type { FollowUpStatus } from '../impact/follow-ups';
+import type { ImpactTotals } from '../impact/statistics';
+
+/* The impact API's answers and filters as the client reads them (dates as ISO strings). */
+
+export interface StatsFilter {
+  groupId?: number;
+  eventId?: number;
+  from?: string;
+  to?: string;
+}
+export type Stats = ImpactTotals & { displacement: number; filter: StatsFilter };
+export interface Method {
+  displacement: number;
+  displacementNote: string;
+  factorSource: string;
+  text: string[];
+  categories: {
+    id: number;
+    name: string;
+    avgWeightKg: number;
+    weightSource: string;
+    co2ePerKg: number | null;
+    co2eSource: string | null;
+  }[];
+}
+export interface RecordRow {
+  itemId: number;
+  eventId: number;
+  eventTitle: string;
+  eventStartsAt: string;
+  groupName: string;
+  categoryName: string;
+  brand: string | null;
+  model: string | null;
+  fault: string;
+  weighedKg: number | null;
+  outcome: Outcome | null;
+  barrier: Barrier | null;
+  visitor: string;
+  kg: number;
+  outcomeLabel: string;
+  barrierLabel: string | null;
+}
+export interface RecordsFilter extends StatsFilter {
+  categoryId?: number;
+  outcome?: Outcome | 'none';
+  barrier?: Barrier;
+  month?: string;
+  page?: number;
+}
+export type PublicImpact = Omit<Stats, 'filter'> & {
+  group: { name: string; town: string } | null;
+  events: number;
+  method: Method;
+};
+export interface EventReport {
+  range?: { from: string | null; to: string | null; sessions: number };
+  event: {
+    id: number;
+    title: string;
+    startsAt: string;
+    endsAt: string;
+    groupId: number;
+    groupName: string;
+    timeZone: string;
+  };
+  stats: Stats;
+  volunteers: { name: string; hours: number }[];
+  volunteerHours: number;
+  method: Method;
+}
+export interface FollowUp {
+  itemId: number;
+  status: FollowUpStatus;
+  statusLabel: string;
+  createdAt: string;
+  mailedAt: string | null;
+  remindedAt: string | null;
+  returnItemId: number | null;
+  note: string | null;
+  ageDays: number;
+  reminderDue: boolean;
+  item: string;
+  part: string | null;
+  partLink: string | null;
+  partCost: number | null;
+  visitor: { name: string; email: string | null; phone: string | null; reference: string };
+  event: { title: string; startsAt: string };
+  rebookUrl: string | null;
+  returnVisit: { reference: string; eventTitle: string | null; startsAt: string } | null;
+}
+export interface RebookView {
+  item: { categoryName: string; brand: string | null; model: string | null; part: string | null };
+  visitorName: string;
+  group: { name: string; timeZone: string };
+  status: FollowUpStatus;
+  booked: boolean;
+  events: {
+    id: number;
+    title: string;
+    startsAt: string;
+    endsAt: string;
+    slots: { id: number; startsAt: string; endsAt: string; free: number }[];
+  }[];
+}
+export interface RecordsPage {
+  total: number;
+  page: number;
+  records: RecordRow[];
+}
+export interface ReturnBooked {
+  reference: string;
+  manageToken: string;
+  eventId: number;
+}
+export interface ImpactSettings {
+  displacement: number;
+}
+export type FollowUpChange = 'open' | 'part-ordered' | 'gave-up';
