@@ -1,5 +1,5 @@
 import type { Feature } from '../../core/feature';
-import { syncKnowledge } from './knowledge';
+import { syncKnowledge } from './service';
 import { toolkitRoutes } from './routes';
 
 export const toolkitFeature: Feature = {

@@ -1,5 +1,4 @@
 import { Router, type NextFunction, type Request, type Response } from 'express';
-import { eq } from 'drizzle-orm';
 import { z } from 'zod';
 import { PART_TYPES } from '../../../../shared/salvage/constants';
 import {
@@ -13,12 +12,23 @@ import {
 } from '../../../../shared/schemas/toolkit';
 import type { AppContext } from '../../context';
 import { requireGroupRole, unauthenticated } from '../../auth/guards';
-import { repairGroups } from '../../db/schema/index';
 import { HttpError } from '../../http/errors';
 import { body, params, query } from '../../http/validate';
 import { itemGroupId } from '../../core/items';
-import { searchKnowledge, setSharing, similarRepairs, writeUp } from './knowledge';
-import { addPart, listParts, partGroupId, removePart, substitutes, takePart, updatePart } from './salvage';
+import {
+  addPart,
+  getSharing,
+  listParts,
+  partGroup,
+  removePart,
+  searchKnowledge,
+  setSharing,
+  similarRepairs,
+  substitutes,
+  takePart,
+  updatePart,
+  writeUp,
+} from './service';
 
 const idParam = z.object({ id: z.coerce.number().int().positive() });
 
@@ -36,7 +46,7 @@ export function toolkitRoutes(ctx: AppContext) {
   const r = Router();
   const { db } = ctx.database;
   const groupOf = (req: Request) => Number(req.params.groupId);
-  const partOf = (req: Request) => partGroupId(db, Number(req.params.id));
+  const partOf = (req: Request) => partGroup(ctx, Number(req.params.id));
 
   r.get('/knowledge', volunteer, async (req, res) =>
     res.json(await searchKnowledge(ctx, req.user!, query(req, knowledgeQuery))),
@@ -49,18 +59,12 @@ export function toolkitRoutes(ctx: AppContext) {
     requireGroupRole(['fixer', 'host', 'organiser'], (req) => itemGroupId(db, Number(req.params.id))),
     async (req, res) => res.json(await similarRepairs(ctx, params(req, idParam).id, req.user!)),
   );
-  r.get('/groups/:groupId/knowledge-sharing', requireGroupRole(['organiser'], groupOf), async (req, res) => {
-    const [g] = await db
-      .select({ share: repairGroups.shareKnowledge })
-      .from(repairGroups)
-      .where(eq(repairGroups.id, groupOf(req)));
-    res.json({ share: Boolean(g?.share) });
-  });
-  r.put('/groups/:groupId/knowledge-sharing', requireGroupRole(['organiser'], groupOf), async (req, res) => {
-    const { share } = body(req, sharingSchema);
-    await setSharing(ctx, groupOf(req), share);
-    res.json({ share });
-  });
+  r.get('/groups/:groupId/knowledge-sharing', requireGroupRole(['organiser'], groupOf), async (req, res) =>
+    res.json(await getSharing(ctx, groupOf(req))),
+  );
+  r.put('/groups/:groupId/knowledge-sharing', requireGroupRole(['organiser'], groupOf), async (req, res) =>
+    res.json(await setSharing(ctx, groupOf(req), body(req, sharingSchema).share)),
+  );
 
   r.get('/groups/:groupId/salvage', requireGroupRole(['fixer', 'host', 'organiser'], groupOf), async (req, res) => {
     const q = query(
