@@ -1,11 +1,9 @@
-import { and, asc, eq, gte, lte, sql, type SQL } from 'drizzle-orm';
 import { stringify } from 'csv-stringify/sync';
 import { BARRIER_LABELS, OUTCOME_LABELS, type Barrier, type Outcome } from '../../../../shared/event-day/constants';
 import { REPAIR_STATUS_OF, type RepairStatus } from '../../../../shared/impact/visits';
 import type { AppContext } from '../../context';
-import { bookingItems, bookings, categories, events, itemOutcomes, repairGroups, users } from '../../db/schema/index';
+import { openRepairDataRows, recordFileRows } from './queries/exports';
 import type { StatsFilter } from './queries/stats';
-import { arrivedVisit } from './queries/visits';
 
 /**
  * Field names and status values of the Open Repair Data Standard (REFERENCE.md §5: product category, brand, year
@@ -37,15 +35,6 @@ const ORDS_STATUS: Record<RepairStatus, string> = {
 export const ordsStatus = (o: Outcome | null) => (o ? ORDS_STATUS[REPAIR_STATUS_OF[o]] : 'Unknown');
 export const ordsBarrier = (b: Barrier | null) => (b ? BARRIER_LABELS[b] : '');
 
-function filterOf(f: StatsFilter): SQL[] {
-  const parts: SQL[] = arrivedVisit();
-  if (f.groupId) parts.push(eq(events.groupId, f.groupId));
-  if (f.eventId) parts.push(eq(events.id, f.eventId));
-  if (f.from) parts.push(gte(sql`DATE(${events.startsAt})`, f.from));
-  if (f.to) parts.push(lte(sql`DATE(${events.startsAt})`, f.to));
-  return parts;
-}
-
 /** Personal data stays out of a pooled file: addresses and phone numbers in the visitor's words are blanked. */
 const scrub = (text: string) =>
   text
@@ -55,26 +44,7 @@ const scrub = (text: string) =>
     .trim();
 
 export async function openRepairDataCsv(ctx: AppContext, f: StatsFilter): Promise<string> {
-  const rows = await ctx.database.db
-    .select({
-      id: bookingItems.id,
-      groupSlug: repairGroups.slug,
-      categoryName: categories.name,
-      brand: bookingItems.brand,
-      ageYears: bookingItems.ageYears,
-      fault: bookingItems.fault,
-      outcome: itemOutcomes.outcome,
-      barrier: itemOutcomes.barrier,
-      startsAt: events.startsAt,
-    })
-    .from(bookingItems)
-    .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
-    .innerJoin(events, eq(events.id, bookings.eventId))
-    .innerJoin(repairGroups, eq(repairGroups.id, events.groupId))
-    .innerJoin(categories, eq(categories.id, bookingItems.categoryId))
-    .leftJoin(itemOutcomes, eq(itemOutcomes.itemId, bookingItems.id))
-    .where(and(...filterOf(f)))
-    .orderBy(asc(events.startsAt), asc(bookingItems.id));
+  const rows = await openRepairDataRows(ctx.database.db, f);
   return stringify(
     rows.map((r) => ({
       id: `mendery-${r.id}`,
@@ -97,37 +67,7 @@ export async function openRepairDataCsv(ctx: AppContext, f: StatsFilter): Promis
 
 /** The organisers' own file: every recorded detail of each repair, still without names or addresses. */
 export async function recordsCsv(ctx: AppContext, f: StatsFilter): Promise<string> {
-  const rows = await ctx.database.db
-    .select({
-      id: bookingItems.id,
-      startsAt: events.startsAt,
-      event: events.title,
-      reference: bookings.reference,
-      walkIn: bookings.walkIn,
-      category: categories.name,
-      avgKg: categories.avgWeightKg,
-      brand: bookingItems.brand,
-      model: bookingItems.model,
-      ageYears: bookingItems.ageYears,
-      fault: bookingItems.fault,
-      weighedKg: bookingItems.weighedKg,
-      outcome: itemOutcomes.outcome,
-      barrier: itemOutcomes.barrier,
-      part: itemOutcomes.partDescription,
-      partCostCents: itemOutcomes.partCostCents,
-      minutes: itemOutcomes.minutes,
-      notes: itemOutcomes.notes,
-      fixer: users.name,
-      returnOf: bookingItems.returnOfItemId,
-    })
-    .from(bookingItems)
-    .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
-    .innerJoin(events, eq(events.id, bookings.eventId))
-    .innerJoin(categories, eq(categories.id, bookingItems.categoryId))
-    .leftJoin(itemOutcomes, eq(itemOutcomes.itemId, bookingItems.id))
-    .leftJoin(users, eq(users.id, itemOutcomes.recordedBy))
-    .where(and(...filterOf(f)))
-    .orderBy(asc(events.startsAt), asc(bookingItems.id));
+  const rows = await recordFileRows(ctx.database.db, f);
   return stringify(
     rows.map((r) => ({
       item_id: r.id,

@@ -1,5 +1,3 @@
-import { and, asc, eq, inArray, isNotNull, isNull, lte } from 'drizzle-orm';
-import { alias } from 'drizzle-orm/mysql-core';
 import type { Outcome } from '../../../../shared/event-day/constants';
 import {
   FOLLOW_UP_LABELS,
@@ -9,21 +7,28 @@ import {
 } from '../../../../shared/impact/follow-ups';
 import type { AppContext } from '../../context';
 import type { DbOrTx, Tx } from '../../db/client';
-import {
-  bookingItems,
-  bookings,
-  categories,
-  events,
-  followUps,
-  itemOutcomes,
-  repairGroups,
-} from '../../db/schema/index';
 import { HttpError, notFound } from '../../http/errors';
 import { enqueueMail } from '../../mail/outbox';
 import { composeMail } from '../../mail/templates';
 import type { ItemRow } from '../../core/items';
 import { rebookUrl } from '../../core/links';
 import { itemLabel } from '../../../../shared/item-label';
+import {
+  dropOpenFollowUp,
+  findFollowUp,
+  followUpGroupId as groupOfFollowUp,
+  followUpRows,
+  markCameBackRow,
+  markMailed,
+  markRebookedRow,
+  markReminded,
+  moveOn,
+  openFollowUp,
+  outcomeOf,
+  remindersDue,
+  returnsAmong,
+  updateFollowUpStatus,
+} from './queries/follow-ups';
 
 function partMail(
   ctx: AppContext,
@@ -65,10 +70,10 @@ function partMail(
 export async function afterOutcome(ctx: AppContext, tx: Tx, row: ItemRow, outcome: Outcome) {
   const itemId = row.item.id;
   if (outcome === 'parts-needed') {
-    const [existing] = await tx.select().from(followUps).where(eq(followUps.itemId, itemId));
+    const existing = await findFollowUp(tx, itemId);
     if (!existing) {
-      await tx.insert(followUps).values({ itemId, groupId: row.group.id, status: 'open' });
-      const [o] = await tx.select().from(itemOutcomes).where(eq(itemOutcomes.itemId, itemId));
+      await openFollowUp(tx, itemId, row.group.id);
+      const o = await outcomeOf(tx, itemId);
       if (row.booking.visitorEmail && o?.partDescription) {
         await enqueueMail(
           tx,
@@ -87,74 +92,26 @@ export async function afterOutcome(ctx: AppContext, tx: Tx, row: ItemRow, outcom
             false,
           ),
         );
-        await tx.update(followUps).set({ mailedAt: new Date() }).where(eq(followUps.itemId, itemId));
+        await markMailed(tx, itemId);
       }
     }
   } else {
-    await tx.delete(followUps).where(and(eq(followUps.itemId, itemId), eq(followUps.status, 'open')));
+    await dropOpenFollowUp(tx, itemId);
   }
   if (row.item.returnOfItemId) {
-    await tx
-      .update(followUps)
-      .set({
-        status: outcome === 'fixed' ? 'fixed-at-return' : 'came-back',
-        returnItemId: itemId,
-        updatedAt: new Date(),
-      })
-      .where(eq(followUps.itemId, row.item.returnOfItemId));
+    await moveOn(tx, row.item.returnOfItemId, outcome === 'fixed' ? 'fixed-at-return' : 'came-back', itemId);
   }
 }
 
 /** A return visit checked in at the desk: its earlier item's follow-up says it came back. */
 export async function markCameBack(tx: DbOrTx, itemIds: number[]) {
   if (!itemIds.length) return;
-  const returns = await tx
-    .select({ id: bookingItems.id, returnOf: bookingItems.returnOfItemId })
-    .from(bookingItems)
-    .where(and(inArray(bookingItems.id, itemIds), isNotNull(bookingItems.returnOfItemId)));
-  for (const r of returns) {
-    await tx
-      .update(followUps)
-      .set({ status: 'came-back', returnItemId: r.id, updatedAt: new Date() })
-      .where(and(eq(followUps.itemId, r.returnOf!), inArray(followUps.status, ['open', 'part-ordered', 'rebooked'])));
-  }
+  for (const r of await returnsAmong(tx, itemIds)) await markCameBackRow(tx, r.returnOf!, r.id);
 }
 
 /** The organisers' list: every item of the group waiting for a part, oldest first, with what happened since. */
 export async function listFollowUps(ctx: AppContext, groupId: number) {
-  const ret = alias(bookingItems, 'return_item');
-  const retBooking = alias(bookings, 'return_booking');
-  const retEvent = alias(events, 'return_event');
-  const rows = await ctx.database.db
-    .select({
-      f: followUps,
-      categoryName: categories.name,
-      brand: bookingItems.brand,
-      model: bookingItems.model,
-      visitorName: bookings.visitorName,
-      visitorEmail: bookings.visitorEmail,
-      visitorPhone: bookings.visitorPhone,
-      reference: bookings.reference,
-      eventTitle: events.title,
-      eventStartsAt: events.startsAt,
-      part: itemOutcomes.partDescription,
-      partLink: itemOutcomes.partLink,
-      partCostCents: itemOutcomes.partCostCents,
-      returnReference: retBooking.reference,
-      returnEventTitle: retEvent.title,
-      returnStartsAt: retEvent.startsAt,
-    })
-    .from(followUps)
-    .innerJoin(bookingItems, eq(bookingItems.id, followUps.itemId))
-    .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
-    .innerJoin(events, eq(events.id, bookings.eventId))
-    .innerJoin(categories, eq(categories.id, bookingItems.categoryId))
-    .leftJoin(itemOutcomes, eq(itemOutcomes.itemId, followUps.itemId))
-    .leftJoin(ret, eq(ret.id, followUps.returnItemId))
-    .leftJoin(retBooking, eq(retBooking.id, ret.bookingId))
-    .leftJoin(retEvent, eq(retEvent.id, retBooking.eventId))
-    .where(eq(followUps.groupId, groupId))
-    .orderBy(asc(followUps.createdAt));
+  const rows = await followUpRows(ctx.database.db, groupId);
   const now = new Date();
   return rows.map((r) => ({
     itemId: r.f.itemId,
@@ -181,29 +138,18 @@ export async function listFollowUps(ctx: AppContext, groupId: number) {
 }
 
 export async function setFollowUpStatus(ctx: AppContext, itemId: number, status: FollowUpStatus, note?: string) {
-  const res = await ctx.database.db
-    .update(followUps)
-    .set({ status, updatedAt: new Date(), ...(note !== undefined ? { note } : {}) })
-    .where(eq(followUps.itemId, itemId));
-  if ((res as unknown as [{ affectedRows: number }])[0].affectedRows === 0) throw notFound('That follow-up');
+  if (!(await updateFollowUpStatus(ctx.database.db, itemId, status, note))) throw notFound('That follow-up');
 }
 
-export async function followUpGroupId(db: DbOrTx, itemId: number) {
-  if (!Number.isInteger(itemId) || itemId <= 0) return 0;
-  const [f] = await db.select({ groupId: followUps.groupId }).from(followUps).where(eq(followUps.itemId, itemId));
-  return f?.groupId ?? 0;
-}
+/** The group of an item's follow-up, for the role guards (0 when there is none, which the guards refuse). */
+export const followUpGroupId = (ctx: AppContext, itemId: number) => groupOfFollowUp(ctx.database.db, itemId);
 
 /**
  * A return visit was booked through the follow-up's link: the follow-up says so, once. A second return visit for
  * the same item is refused here, inside the booking's transaction, so it books nothing.
  */
 export async function markRebooked(tx: Tx, e: { earlierItemId: number; returnItemId: number }) {
-  const res = await tx
-    .update(followUps)
-    .set({ status: 'rebooked', returnItemId: e.returnItemId, updatedAt: new Date() })
-    .where(and(eq(followUps.itemId, e.earlierItemId), isNull(followUps.returnItemId)));
-  if ((res as unknown as [{ affectedRows: number }])[0].affectedRows !== 1)
+  if (!(await markRebookedRow(tx, e.earlierItemId, e.returnItemId)))
     throw new HttpError(409, 'already-booked', 'A return visit is already booked for this item.');
 }
 
@@ -211,29 +157,7 @@ export async function markRebooked(tx: Tx, e: { earlierItemId: number; returnIte
 export async function sendFollowUpReminders(ctx: AppContext): Promise<number> {
   const cutoff = new Date(Date.now() - FOLLOW_UP_REMINDER_DAYS * 86400_000);
   const sent = await ctx.database.db.transaction(async (tx) => {
-    const due = await tx
-      .select({
-        f: followUps,
-        booking: bookings,
-        categoryName: categories.name,
-        groupName: repairGroups.name,
-        o: itemOutcomes,
-      })
-      .from(followUps)
-      .innerJoin(bookingItems, eq(bookingItems.id, followUps.itemId))
-      .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
-      .innerJoin(categories, eq(categories.id, bookingItems.categoryId))
-      .innerJoin(repairGroups, eq(repairGroups.id, followUps.groupId))
-      .innerJoin(itemOutcomes, eq(itemOutcomes.itemId, followUps.itemId))
-      .where(
-        and(
-          inArray(followUps.status, ['open', 'part-ordered']),
-          isNull(followUps.remindedAt),
-          lte(followUps.createdAt, cutoff),
-        ),
-      )
-      .limit(200)
-      .for('update', { skipLocked: true });
+    const due = await remindersDue(tx, cutoff);
     for (const d of due) {
       if (d.booking.visitorEmail && d.o.partDescription) {
         await enqueueMail(
@@ -254,7 +178,7 @@ export async function sendFollowUpReminders(ctx: AppContext): Promise<number> {
           ),
         );
       }
-      await tx.update(followUps).set({ remindedAt: new Date() }).where(eq(followUps.itemId, d.f.itemId));
+      await markReminded(tx, d.f.itemId);
     }
     return due.length;
   });

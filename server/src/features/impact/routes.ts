@@ -127,7 +127,7 @@ export function impactRoutes(ctx: AppContext) {
   );
   r.patch(
     '/follow-ups/:itemId',
-    requireGroupRole(['organiser'], (req) => followUpGroupId(ctx.database.db, Number(req.params.itemId))),
+    requireGroupRole(['organiser'], (req) => followUpGroupId(ctx, Number(req.params.itemId))),
     async (req, res) => {
       const b = body(req, followUpUpdate);
       await setFollowUpStatus(ctx, Number(req.params.itemId), b.status, b.note);

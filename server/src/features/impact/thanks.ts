@@ -1,21 +1,10 @@
-import { and, eq, gte, inArray, isNotNull, isNull, lte } from 'drizzle-orm';
 import { OUTCOME_LABELS } from '../../../../shared/event-day/constants';
 import { impact } from '../../../../shared/impact/statistics';
 import type { AppContext } from '../../context';
-import {
-  bookingItems,
-  bookings,
-  categories,
-  events,
-  itemOutcomes,
-  repairGroups,
-  shifts,
-  users,
-} from '../../db/schema/index';
 import { enqueueMail } from '../../mail/outbox';
 import { composeMail } from '../../mail/templates';
 import { displacement, impactCategories } from './queries/stats';
-import { arrivedVisit } from './queries/visits';
+import { eventsDueThanks, markThanked, visitorItems, volunteersWhoCame } from './queries/thanks';
 import { stats } from './service';
 
 const kg = (x: number) => `${x.toLocaleString('en-GB', { maximumFractionDigits: 1 })} kg`;
@@ -28,40 +17,11 @@ export async function sendThankYous(ctx: AppContext): Promise<number> {
   const { db } = ctx.database;
   const now = Date.now();
   const n = await db.transaction(async (tx) => {
-    const due = await tx
-      .select({ event: events, group: repairGroups })
-      .from(events)
-      .innerJoin(repairGroups, eq(repairGroups.id, events.groupId))
-      .where(
-        and(
-          inArray(events.status, ['published', 'closed']),
-          isNull(events.thankYouSentAt),
-          lte(events.endsAt, new Date(now - 2 * 3600_000)),
-          gte(events.endsAt, new Date(now - 7 * 86400_000)),
-        ),
-      )
-      .limit(5)
-      .for('update', { skipLocked: true });
+    const due = await eventsDueThanks(tx, now);
     const cats = await impactCategories(tx);
     const d = await displacement(tx);
     for (const { event, group } of due) {
-      const items = await tx
-        .select({
-          itemId: bookingItems.id,
-          bookingId: bookings.id,
-          email: bookings.visitorEmail,
-          name: bookings.visitorName,
-          categoryId: bookingItems.categoryId,
-          categoryName: categories.name,
-          weighedKg: bookingItems.weighedKg,
-          outcome: itemOutcomes.outcome,
-          part: itemOutcomes.partDescription,
-        })
-        .from(bookingItems)
-        .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
-        .innerJoin(categories, eq(categories.id, bookingItems.categoryId))
-        .leftJoin(itemOutcomes, eq(itemOutcomes.itemId, bookingItems.id))
-        .where(and(eq(bookings.eventId, event.id), ...arrivedVisit(), isNotNull(bookings.visitorEmail)));
+      const items = await visitorItems(tx, event.id);
       for (const bookingId of new Set(items.map((i) => i.bookingId))) {
         const mine = items.filter((i) => i.bookingId === bookingId);
         const t = impact(
@@ -97,11 +57,7 @@ export async function sendThankYous(ctx: AppContext): Promise<number> {
         );
       }
       const s = await stats(ctx, { eventId: event.id });
-      const team = await tx
-        .select({ email: users.email, name: users.name })
-        .from(shifts)
-        .innerJoin(users, eq(users.id, shifts.userId))
-        .where(and(eq(shifts.eventId, event.id), eq(shifts.coming, true)));
+      const team = await volunteersWhoCame(tx, event.id);
       for (const v of team) {
         await enqueueMail(
           tx,
@@ -115,7 +71,7 @@ export async function sendThankYous(ctx: AppContext): Promise<number> {
           }),
         );
       }
-      await tx.update(events).set({ thankYouSentAt: new Date() }).where(eq(events.id, event.id));
+      await markThanked(tx, event.id);
     }
     return due.length;
   });
