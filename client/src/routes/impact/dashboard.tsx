@@ -1,10 +1,22 @@
-import { useParams } from 'react-router';
+import { useParams, type LoaderFunctionArgs } from 'react-router';
 import { GroupTabs } from '../../components/layouts/group-tabs';
 import { PageTitle } from '../../components/ui/feedback';
 import { useGroupEvents } from '../../features/events/api/events';
 import { useGroupSettings } from '../../features/events/api/organiser';
-import { ImpactBody } from '../../features/impact/components/impact-body';
+import { methodQuery } from '../../features/impact/api/get-method';
+import { statsQuery } from '../../features/impact/api/get-stats';
+import { ImpactBody, statsFilterOf } from '../../features/impact/components/impact-body';
+import { queryClient } from '../../lib/query-client';
 import { DisplacementCard } from '../../features/impact/components/displacement-card';
+
+/** Warms the figures and the method; a failure is left for the page, which says what went wrong in its own words. */
+export const loader = ({ params, request }: LoaderFunctionArgs) => {
+  const filter = statsFilterOf(new URL(request.url).searchParams, params.groupId ? Number(params.groupId) : undefined);
+  return Promise.all([
+    queryClient.ensureQueryData(statsQuery(filter)).catch(() => null),
+    queryClient.ensureQueryData(methodQuery()).catch(() => null),
+  ]);
+};
 
 /** A group's figures for its organisers. */
 export function GroupImpactPage() {

@@ -1,13 +1,20 @@
 import type { ReactNode } from 'react';
-import { useSearchParams } from 'react-router';
+import { useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { Area, AreaChart, ResponsiveContainer } from 'recharts';
 import { paths } from '../../config/paths';
-import { usePublicImpact } from '../../features/impact/api/get-public-impact';
+import { publicImpactQuery, usePublicImpact } from '../../features/impact/api/get-public-impact';
+import { queryClient } from '../../lib/query-client';
 import { monthLabel, oneDp, positiveInt, whole } from '../../features/impact/components/display';
 
 /* The host page decides the frame; nothing of the app's own page background or scrolling may show inside it. */
 const FRAME_CSS =
   'html, body { margin: 0; padding: 0; background: transparent !important; overflow: hidden; } #root { height: 100%; }';
+
+/** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
+export const loader = ({ request }: LoaderFunctionArgs) =>
+  queryClient
+    .ensureQueryData(publicImpactQuery(positiveInt(new URL(request.url).searchParams.get('group'))))
+    .catch(() => null);
 
 /**
  * The widget another website puts in an iframe of about 360×260: the group's headline figures and a sparkline,

@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { useParams, useSearchParams } from 'react-router';
+import { useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { OUTCOME_LABELS } from '../../../../shared/event-day/constants';
 import { formatDay } from '../../../../shared/format';
 import { FOLLOW_UP_LABELS, MANUAL_FOLLOW_UP_STATUSES, type FollowUpStatus } from '../../../../shared/impact/follow-ups';
@@ -10,7 +10,8 @@ import { Alert, EmptyState, Spinner } from '../../components/ui/feedback';
 import { TextAreaField } from '../../components/ui/field';
 import { useGroupSettings } from '../../features/events/api/organiser';
 import type { FollowUp } from '../../../../shared/api/impact';
-import { useFollowUps } from '../../features/impact/api/get-follow-ups';
+import { followUpsQuery, useFollowUps } from '../../features/impact/api/get-follow-ups';
+import { queryClient } from '../../lib/query-client';
 import { useSetFollowUp } from '../../features/impact/api/set-follow-up';
 
 type ManualStatus = (typeof MANUAL_FOLLOW_UP_STATUSES)[number];
@@ -35,6 +36,10 @@ const shortDay = (d: string, timeZone: string) =>
 const age = (days: number) => (days <= 0 ? 'today' : days === 1 ? '1 day ago' : `${days} days ago`);
 
 /** Items that need a part, oldest first: who to chase, what they need, and the link that books them back in. */
+/** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
+export const loader = ({ params }: LoaderFunctionArgs) =>
+  queryClient.ensureQueryData(followUpsQuery(Number(params.groupId))).catch(() => null);
+
 export function FollowUpsPage() {
   const groupId = Number(useParams().groupId);
   const [params, setParams] = useSearchParams();

@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import { Link, useParams } from 'react-router';
+import { Link, useParams, type LoaderFunctionArgs } from 'react-router';
 import { usePublicGroups } from '../../features/groups/api/public-groups';
 import {
   Area,
@@ -17,7 +17,8 @@ import { OUTCOME_LABELS } from '../../../../shared/event-day/constants';
 import { Alert, Card, EmptyState, PageTitle, Spinner } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
 import type { Method, PublicImpact } from '../../../../shared/api/impact';
-import { usePublicImpact } from '../../features/impact/api/get-public-impact';
+import { publicImpactQuery, usePublicImpact } from '../../features/impact/api/get-public-impact';
+import { queryClient } from '../../lib/query-client';
 import { ApiError } from '../../lib/api';
 import {
   CO2E,
@@ -32,11 +33,21 @@ import {
   whole,
 } from '../../features/impact/components/display';
 
+/** The group of the address, when there is one; `valid` is false for an address no group can have. */
+const groupOf = (raw: string | undefined) => {
+  const groupId = raw === undefined ? undefined : Number(raw);
+  return { groupId, valid: groupId === undefined || (Number.isInteger(groupId) && groupId > 0) };
+};
+
+/** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
+export const loader = ({ params }: LoaderFunctionArgs) => {
+  const { groupId, valid } = groupOf(params.groupId);
+  return valid ? queryClient.ensureQueryData(publicImpactQuery(groupId)).catch(() => null) : null;
+};
+
 /** What a group (or every group) has repaired, for anyone: totals and charts, never a person. */
 export function PublicImpactPage() {
-  const raw = useParams().groupId;
-  const groupId = raw === undefined ? undefined : Number(raw);
-  const valid = groupId === undefined || (Number.isInteger(groupId) && groupId > 0);
+  const { groupId, valid } = groupOf(useParams().groupId);
   const impact = usePublicImpact(valid ? groupId : undefined);
 
   if (!valid) return <NotFound />;

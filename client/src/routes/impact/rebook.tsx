@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { Link, useParams } from 'react-router';
+import { Link, useParams, type LoaderFunctionArgs } from 'react-router';
 import { formatDay, formatTime, formatTimeRange } from '../../../../shared/format';
 import { Button } from '../../components/ui/button';
 import { ConfirmDialog } from '../../components/ui/confirm-dialog';
@@ -7,7 +7,8 @@ import { Alert, Card, EmptyState, PageTitle, Spinner } from '../../components/ui
 import { paths } from '../../config/paths';
 import type { RebookView } from '../../../../shared/api/impact';
 import { useBookReturn } from '../../features/impact/api/book-return';
-import { useRebook } from '../../features/impact/api/get-rebook';
+import { rebookQuery, useRebook } from '../../features/impact/api/get-rebook';
+import { queryClient } from '../../lib/query-client';
 import { ApiError } from '../../lib/api';
 
 type Session = RebookView['events'][number];
@@ -15,6 +16,10 @@ type Chosen = { event: Session; slot: Session['slots'][number] };
 
 const itemName = (item: RebookView['item']) =>
   [item.categoryName, [item.brand, item.model].filter(Boolean).join(' ')].filter(Boolean).join(' — ');
+
+/** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
+export const loader = ({ params }: LoaderFunctionArgs) =>
+  queryClient.ensureQueryData(rebookQuery(params.token ?? '')).catch(() => null);
 
 /** The visitor's priority link after a visit that ended needing a part: pick a time to come back with it. */
 export function RebookPage() {

@@ -1,5 +1,5 @@
 import { useMemo } from 'react';
-import { Link, useSearchParams } from 'react-router';
+import { Link, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import {
   BARRIER_LABELS,
   BARRIERS,
@@ -12,7 +12,8 @@ import { Alert, EmptyState, PageTitle, Spinner } from '../../components/ui/feedb
 import { paths } from '../../config/paths';
 import { useCategories } from '../../features/events/api/events';
 import type { RecordRow, RecordsFilter } from '../../../../shared/api/impact';
-import { useRecords } from '../../features/impact/api/get-records';
+import { recordsQuery, useRecords } from '../../features/impact/api/get-records';
+import { queryClient } from '../../lib/query-client';
 import { queryString as qs } from '../../lib/query-string';
 import { isoDate, oneDp, positiveInt, whole } from '../../features/impact/components/display';
 
@@ -31,11 +32,8 @@ const isOutcome = (raw: string | null): raw is Outcome | 'none' =>
 const isBarrier = (raw: string | null): raw is Barrier => (BARRIERS as readonly string[]).includes(raw ?? '');
 
 /** The filter exactly as the URL gives it; anything malformed is left out rather than sent on. */
-function useRecordsFilter(): RecordsFilter {
-  const [params] = useSearchParams();
-  const key = params.toString();
-  return useMemo(() => {
-    const p = new URLSearchParams(key);
+function recordsFilterOf(p: URLSearchParams): RecordsFilter {
+  {
     const outcome = p.get('outcome');
     const barrier = p.get('barrier');
     const month = p.get('month');
@@ -50,8 +48,18 @@ function useRecordsFilter(): RecordsFilter {
       month: month && /^\d{4}-\d{2}$/.test(month) ? month : undefined,
       page: positiveInt(p.get('page')),
     };
-  }, [key]);
+  }
 }
+
+function useRecordsFilter(): RecordsFilter {
+  const [params] = useSearchParams();
+  const key = params.toString();
+  return useMemo(() => recordsFilterOf(new URLSearchParams(key)), [key]);
+}
+
+/** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
+export const loader = ({ request }: LoaderFunctionArgs) =>
+  queryClient.ensureQueryData(recordsQuery(recordsFilterOf(new URL(request.url).searchParams))).catch(() => null);
 
 const outcomeText = (o: Outcome | 'none') => (o === 'none' ? 'No outcome recorded' : OUTCOME_LABELS[o]);
 const itemLabel = (r: RecordRow) => [r.brand, r.model].filter(Boolean).join(' ');

@@ -16,12 +16,18 @@ import { MethodSection } from './method-section';
 
 const secondaryLink = `${linkButton} bg-white text-navy ring-1 ring-navy/25 hover:bg-navy/5`;
 
+/** The dashboard's filter as the URL says it; a session only on a group's page. */
+export const statsFilterOf = (params: URLSearchParams, groupId?: number): StatsFilter => ({
+  groupId,
+  eventId: groupId ? positiveInt(params.get('eventId')) : undefined,
+  from: isoDate(params.get('from')),
+  to: isoDate(params.get('to')),
+});
+
 /** The dashboard's filter lives in the URL, so a view can be bookmarked or sent to a colleague. */
 function useUrlFilter(groupId?: number) {
   const [params, setParams] = useSearchParams();
-  const eventId = groupId ? positiveInt(params.get('eventId')) : undefined;
-  const from = isoDate(params.get('from'));
-  const to = isoDate(params.get('to'));
+  const { eventId, from, to } = statsFilterOf(params, groupId);
   const filter = useMemo<StatsFilter>(() => ({ groupId, eventId, from, to }), [groupId, eventId, from, to]);
   const set = (key: 'eventId' | 'from' | 'to', value: string) =>
     setParams(
