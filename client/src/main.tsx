@@ -10,10 +10,10 @@ import { RouterProvider } from 'react-router';
 import { pendingWritesPersister, queryClient } from './lib/query-client';
 import { router } from './app/router';
 import { registerOutcomeWrites } from './features/event-day/api';
-import { myQueueKey } from './features/volunteers/api/volunteers';
+import { workbenchKeys } from './features/workbench/api/keys';
 
 // An outcome recorded at the bench also changes the fixer's own queue.
-registerOutcomeWrites(queryClient, () => void queryClient.invalidateQueries({ queryKey: myQueueKey }));
+registerOutcomeWrites(queryClient, () => void queryClient.invalidateQueries({ queryKey: workbenchKeys.queue() }));
 
 createRoot(document.getElementById('root')!).render(
   <StrictMode>

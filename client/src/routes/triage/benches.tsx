@@ -5,22 +5,20 @@ import { EventTabs } from '../../components/layouts/event-tabs';
 import { Button } from '../../components/ui/button';
 import { Alert, Card, Spinner } from '../../components/ui/feedback';
 import { useEvent } from '../../features/events/api/events';
-import { useEventBenches, useSaveBenches, type Bench } from '../../features/triage/api/triage';
-import { useMutation } from '@tanstack/react-query';
-import { api, ApiError } from '../../lib/api';
+import type { Bench } from '../../../../shared/api/benches';
+import { useEventBenches } from '../../features/benches/api/get-event-benches';
+import { useSaveEventBenches } from '../../features/benches/api/save-event-benches';
+import { useSaveVenueBenches } from '../../features/benches/api/save-venue-benches';
+import { useRefreshBoard } from '../../features/triage/api/get-board';
+import { ApiError } from '../../lib/api';
 
 /** This session's benches, copied from the venue's usual layout the first time; changes stay with the session. */
 export function BenchesPage() {
   const id = Number(useParams().eventId);
   const event = useEvent(id);
   const benches = useEventBenches(id);
-  const save = useSaveBenches(id);
-  const saveVenue = useMutation({
-    mutationFn: (benches: Bench[]) =>
-      api('PUT', `/api/venues/${event.data!.venue.id}/benches`, {
-        benches: benches.map(({ name, seats, equipment }) => ({ name, seats, equipment })),
-      }),
-  });
+  const save = useSaveEventBenches(id, useRefreshBoard(id));
+  const saveVenue = useSaveVenueBenches(event.data?.venue.id);
   const [rows, setRows] = useState<Bench[]>([]);
   useEffect(() => {
     if (benches.data)

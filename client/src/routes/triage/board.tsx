@@ -6,7 +6,13 @@ import { EventTabs } from '../../components/layouts/event-tabs';
 import { Button } from '../../components/ui/button';
 import { Alert, Spinner } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
-import { useBoard, useBoardAction, type Board, type BoardItem } from '../../features/triage/api/triage';
+import type { Board, BoardItem } from '../../../../shared/api/triage';
+import { useBoard } from '../../features/triage/api/get-board';
+import { useLockItem } from '../../features/triage/api/lock-item';
+import { usePlaceItem } from '../../features/triage/api/place-item';
+import { useRunTriage } from '../../features/triage/api/run-triage';
+import { triageRunUrl } from '../../features/triage/api/triage-run-url';
+import { useUnplaceItem } from '../../features/triage/api/unplace-item';
 
 const REASON_LABEL: Record<string, string> = {
   'no-skill': 'No fixer with the skill',
@@ -19,7 +25,7 @@ const REASON_LABEL: Record<string, string> = {
 export function TriageBoardPage() {
   const id = Number(useParams().eventId);
   const board = useBoard(id);
-  const act = useBoardAction(id);
+  const runTriage = useRunTriage(id);
   const [slotId, setSlotId] = useState('');
   const [notice, setNotice] = useState<string | null>(null);
   if (board.isPending) return <Spinner label="Loading the board…" />;
@@ -28,15 +34,12 @@ export function TriageBoardPage() {
   const tz = b.event.timeZone;
   const waiting = b.items.filter((i) => !i.placement);
   const run = () =>
-    act.mutate(
-      { method: 'POST', path: '/triage', body: slotId ? { slotId: Number(slotId) } : {} },
-      {
-        onSuccess: (r) =>
-          setNotice(
-            `Placed ${r.assigned} item${r.assigned === 1 ? '' : 's'}; ${r.unassigned} wait${r.unassigned === 1 ? 's' : ''}.`,
-          ),
-      },
-    );
+    runTriage.mutate(slotId ? Number(slotId) : undefined, {
+      onSuccess: (r) =>
+        setNotice(
+          `Placed ${r.assigned} item${r.assigned === 1 ? '' : 's'}; ${r.unassigned} wait${r.unassigned === 1 ? 's' : ''}.`,
+        ),
+    });
 
   return (
     <div>
@@ -63,7 +66,7 @@ export function TriageBoardPage() {
             ))}
           </select>
         </label>
-        <Button onClick={run} busy={act.isPending && act.variables?.path === '/triage'}>
+        <Button onClick={run} busy={runTriage.isPending}>
           Run triage
         </Button>
         <p className="text-sm text-ink-soft">
@@ -75,9 +78,9 @@ export function TriageBoardPage() {
             {notice}
           </p>
         )}
-        {act.error && (
+        {runTriage.error && (
           <div className="w-full">
-            <Alert tone="error">{act.error.message}</Alert>
+            <Alert tone="error">{runTriage.error.message}</Alert>
           </div>
         )}
       </div>
@@ -140,12 +143,7 @@ export function TriageBoardPage() {
                 {r.slotId
                   ? ` (slot ${formatTime(b.slots.find((s) => s.id === r.slotId)?.startsAt ?? '', tz)})`
                   : ''} ·{' '}
-                <a
-                  className="underline"
-                  href={`/api/events/${id}/triage-runs/${r.id}`}
-                  target="_blank"
-                  rel="noreferrer"
-                >
+                <a className="underline" href={triageRunUrl(id, r.id)} target="_blank" rel="noreferrer">
                   inputs and result
                 </a>
               </li>
@@ -183,7 +181,10 @@ function Column({
 }
 
 function ItemCard({ item, board, eventId }: { item: BoardItem; board: Board; eventId: number }) {
-  const act = useBoardAction(eventId);
+  const place = usePlaceItem(eventId, item.id);
+  const lock = useLockItem(eventId, item.id);
+  const unplace = useUnplaceItem(eventId, item.id);
+  const error = place.error ?? lock.error ?? unplace.error;
   const [moving, setMoving] = useState(false);
   const [to, setTo] = useState({
     userId: item.placement?.userId ?? board.fixers[0]?.userId ?? 0,
@@ -259,13 +260,8 @@ function ItemCard({ item, board, eventId }: { item: BoardItem; board: Board; eve
           <div className="flex gap-2">
             <Button
               className="min-h-9 px-3 py-1"
-              busy={act.isPending}
-              onClick={() =>
-                act.mutate(
-                  { method: 'PUT', path: `/items/${item.id}/placement`, body: { ...to, locked: true } },
-                  { onSuccess: () => setMoving(false) },
-                )
-              }
+              busy={place.isPending}
+              onClick={() => place.mutate({ ...to, locked: true }, { onSuccess: () => setMoving(false) })}
             >
               Place and lock
             </Button>
@@ -288,30 +284,20 @@ function ItemCard({ item, board, eventId }: { item: BoardItem; board: Board; eve
             <Button
               variant="quiet"
               className="min-h-9 px-3 py-1 text-sm"
-              busy={act.isPending}
-              onClick={() =>
-                act.mutate({
-                  method: 'POST',
-                  path: `/items/${item.id}/lock`,
-                  body: { locked: !item.placement!.locked },
-                })
-              }
+              busy={lock.isPending}
+              onClick={() => lock.mutate(!item.placement!.locked)}
             >
               {item.placement.locked ? 'Unlock' : 'Lock'}
             </Button>
           )}
           {item.placement && (
-            <Button
-              variant="quiet"
-              className="min-h-9 px-3 py-1 text-sm"
-              onClick={() => act.mutate({ method: 'DELETE', path: `/items/${item.id}/placement` })}
-            >
+            <Button variant="quiet" className="min-h-9 px-3 py-1 text-sm" onClick={() => unplace.mutate()}>
               Take off
             </Button>
           )}
         </div>
       )}
-      {act.error && <p className="mt-1 text-xs font-semibold text-alert">{act.error.message}</p>}
+      {error && <p className="mt-1 text-xs font-semibold text-alert">{error.message}</p>}
     </article>
   );
 }

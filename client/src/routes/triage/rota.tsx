@@ -6,7 +6,11 @@ import { EventTabs } from '../../components/layouts/event-tabs';
 import { Button } from '../../components/ui/button';
 import { Alert, Card, EmptyState, Spinner } from '../../components/ui/feedback';
 import { useEvent } from '../../features/events/api/events';
-import { useAskForSkills, useEventBenches, useRota, useSeat } from '../../features/triage/api/triage';
+import { useEventBenches } from '../../features/benches/api/get-event-benches';
+import { useAskForSkills } from '../../features/rota/api/ask-for-skills';
+import { useRota } from '../../features/rota/api/get-rota';
+import { useSeatFixer } from '../../features/rota/api/seat-fixer';
+import { useRefreshBoard } from '../../features/triage/api/get-board';
 
 /** Who comes when, as a chart of skills × slots: green where covered, red where items wait for a skill nobody has. */
 export function RotaPage() {
@@ -15,8 +19,8 @@ export function RotaPage() {
   const rota = useRota(id);
   const benches = useEventBenches(id);
   const ask = useAskForSkills(id);
-  const seat = useSeat(id);
-  const [picked, setPicked] = useState<Set<string>>(new Set());
+  const seat = useSeatFixer(id, useRefreshBoard(id));
+  const [picked, setPicked] = useState<Set<Skill>>(new Set());
   if (rota.isPending || event.isPending) return <Spinner label="Loading the rota…" />;
   if (rota.error) return <Alert tone="error">{rota.error.message}</Alert>;
   if (event.error) return <Alert tone="error">{event.error.message}</Alert>;
@@ -25,8 +29,8 @@ export function RotaPage() {
   const shown = SKILLS.filter(
     (s) => r.coverage.some((c) => c.bySkill[s] > 0) || r.slots.some((sl) => sl.demand[s] > 0),
   );
-  const gapSkills = [...new Set(r.gaps.map((g) => g.skill))];
-  const toggle = (s: string) =>
+  const gapSkills = [...new Set(r.gaps.map((g) => g.skill as Skill))];
+  const toggle = (s: Skill) =>
     setPicked((p) => {
       const n = new Set(p);
       if (n.has(s)) n.delete(s);

@@ -6,7 +6,9 @@ import { Alert, Card, EmptyState, PageTitle, Spinner } from '../../components/ui
 import { paths } from '../../config/paths';
 import { useUser } from '../../lib/auth';
 import { StatusChip } from '../../features/event-day/status-chip';
-import { useMyEvents, useQueue, useSetShift } from '../../features/volunteers/api/volunteers';
+import { useMyEvents } from '../../features/rota/api/get-my-events';
+import { useSetShift } from '../../features/rota/api/set-shift';
+import { useQueue } from '../../features/workbench/api/get-queue';
 
 /** The fixer's page on a phone: the items coming to them in order, then the sessions they can say yes to. */
 export function BenchPage() {

@@ -2,7 +2,8 @@ import { useEffect, useState } from 'react';
 import { EQUIPMENT, EQUIPMENT_LABELS, SKILL_LABELS, SKILLS } from '../../../../shared/constants';
 import { Button } from '../../components/ui/button';
 import { Alert, Card, PageTitle, Spinner } from '../../components/ui/feedback';
-import { useProfile, useSaveProfile } from '../../features/volunteers/api/volunteers';
+import { useProfile } from '../../features/skills/api/get-profile';
+import { useSaveProfile } from '../../features/skills/api/save-profile';
 
 const LEVELS = [
   ['0', 'Not for me'],

@@ -3,7 +3,7 @@ import { useParams } from 'react-router';
 import { SKILL_LABELS, type Skill } from '../../../../shared/constants';
 import { GroupTabs } from '../../components/layouts/group-tabs';
 import { Alert, Spinner } from '../../components/ui/feedback';
-import { useSkillsMatrix } from '../../features/volunteers/api/volunteers';
+import { useSkillsMatrix } from '../../features/skills/api/get-skills-matrix';
 import { useGroupSettings } from '../../features/events/api/organiser';
 
 const LEVEL = ['', 'learning', 'capable', 'expert'];

@@ -1,0 +1,11 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { SkillsMatrix } from '../../../../../shared/api/skills';
+import { api } from '../../../lib/api';
+import { skillKeys } from './keys';
+
+export const getSkillsMatrix = (groupId: number) => api<SkillsMatrix>('GET', `/api/groups/${groupId}/skills`);
+
+export const skillsMatrixQuery = (groupId: number) =>
+  queryOptions({ queryKey: skillKeys.matrix(groupId), queryFn: () => getSkillsMatrix(groupId) });
+
+export const useSkillsMatrix = (groupId: number) => useQuery(skillsMatrixQuery(groupId));
