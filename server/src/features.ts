@@ -12,7 +12,6 @@ import { rotaFeature } from './features/rota/feature';
 import { skillsFeature } from './features/skills/feature';
 import { toolkitFeature } from './features/toolkit/feature';
 import { triageFeature } from './features/triage/feature';
-import { venuesFeature } from './features/venues/feature';
 import { workbenchFeature } from './features/workbench/feature';
 
 /**
@@ -24,7 +23,6 @@ export const FEATURES: Feature[] = [
   groupsFeature,
   adminFeature,
   categoriesFeature,
-  venuesFeature,
   eventsFeature,
   bookingsFeature,
   skillsFeature,

@@ -9,7 +9,8 @@ import { cancelBookingRow, itemsOf, itemStatuses, lockBooking, moveBookingRow } 
 import { releaseSkillPlaces } from './queries/places';
 import { cancelledMail, movedMail } from './mails';
 import { releasePlaces } from './waitlist';
-import { bookabilityOf, bookableSlot, facts, labelsOf, refuse, slotWithContextById, takeAllPlaces } from './write';
+import { slotWithContextById } from './queries/context';
+import { bookabilityOf, bookableSlot, facts, labelsOf, refuse, takeAllPlaces } from './write';
 
 /** Once reception has checked an item in, the booking is the desk's to change, not the visitor's link. */
 async function assertNotArrived(tx: Tx, bookingId: number) {

@@ -1,39 +1,13 @@
-import { and, asc, eq, gt, inArray } from 'drizzle-orm';
 import type { AppContext } from '../../context';
-import {
-  bookingItems,
-  bookings,
-  categories,
-  events,
-  followUps,
-  itemOutcomes,
-  repairGroups,
-  slots,
-} from '../../db/schema/index';
 import { HttpError, notFound } from '../../http/errors';
 import { runHooks } from '../../core/hooks';
 import { itemOfRebookToken } from '../../core/links';
 import { createReturnBooking } from './service';
+import { followUpWithItem, nextSessions, slotsStillAhead } from './queries/return-visit';
 
 /** The return visit of an item waiting for a part, booked through the priority link in the follow-up mail. */
 async function rebookContext(ctx: AppContext, token: string) {
-  const itemId = itemOfRebookToken(ctx, token);
-  const [r] = await ctx.database.db
-    .select({
-      f: followUps,
-      item: bookingItems,
-      booking: bookings,
-      category: categories,
-      group: repairGroups,
-      part: itemOutcomes.partDescription,
-    })
-    .from(followUps)
-    .innerJoin(bookingItems, eq(bookingItems.id, followUps.itemId))
-    .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
-    .innerJoin(categories, eq(categories.id, bookingItems.categoryId))
-    .innerJoin(repairGroups, eq(repairGroups.id, followUps.groupId))
-    .leftJoin(itemOutcomes, eq(itemOutcomes.itemId, followUps.itemId))
-    .where(eq(followUps.itemId, itemId));
+  const r = await followUpWithItem(ctx.database.db, itemOfRebookToken(ctx, token));
   if (!r) throw notFound('That link');
   return r;
 }
@@ -41,27 +15,11 @@ async function rebookContext(ctx: AppContext, token: string) {
 /** What the re-booking page shows: the item, the part, and the group's next sessions with their times. */
 export async function rebookView(ctx: AppContext, token: string) {
   const r = await rebookContext(ctx, token);
-  const upcoming = await ctx.database.db
-    .select()
-    .from(events)
-    .where(and(eq(events.groupId, r.group.id), eq(events.status, 'published'), gt(events.startsAt, new Date())))
-    .orderBy(asc(events.startsAt))
-    .limit(3);
-  const slotRows = upcoming.length
-    ? await ctx.database.db
-        .select()
-        .from(slots)
-        .where(
-          and(
-            inArray(
-              slots.eventId,
-              upcoming.map((e) => e.id),
-            ),
-            gt(slots.endsAt, new Date()),
-          ),
-        )
-        .orderBy(asc(slots.startsAt))
-    : [];
+  const upcoming = await nextSessions(ctx.database.db, r.group.id, 3);
+  const slotRows = await slotsStillAhead(
+    ctx.database.db,
+    upcoming.map((e) => e.id),
+  );
   return {
     item: { categoryName: r.category.name, brand: r.item.brand, model: r.item.model, part: r.part },
     visitorName: r.booking.visitorName.split(' ')[0],

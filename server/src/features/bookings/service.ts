@@ -1,13 +1,11 @@
 import { timingSafeEqual } from 'node:crypto';
-import { eq } from 'drizzle-orm';
 import type { AppContext } from '../../context';
 import type { Tx } from '../../db/client';
 import { isDuplicate, withDeadlockRetry } from '../../db/retry';
-import { bookings } from '../../db/schema/index';
 import { sha256 } from '../../auth/tokens';
 import { notFound } from '../../http/errors';
 import { screenItems } from '../../core/screening';
-import { bookingWithContext } from './queries/context';
+import { bookingWithContextById } from './queries/context';
 import {
   bookingByReference,
   bookingItemsWithPhotos,
@@ -121,7 +119,7 @@ export async function bookingByToken(ctx: AppContext, reference: string, token: 
 
 export async function bookingView(ctx: AppContext, bookingId: number) {
   const { db } = ctx.database;
-  const [row] = await bookingWithContext(db).where(eq(bookings.id, bookingId));
+  const row = await bookingWithContextById(db, bookingId);
   const items = await bookingItemsWithPhotos(db, bookingId);
   const b = row.booking;
   return {

@@ -5,7 +5,7 @@ import { newToken } from '../../auth/tokens';
 import { HttpError, notFound } from '../../http/errors';
 import { enqueueMail } from '../../mail/outbox';
 import { screenItems } from '../../core/screening';
-import { eventWithContext } from './queries/context';
+import { eventWithContext, slotWithContextById } from './queries/context';
 import { holdPlaces, lockSlot, releaseSlotPlaces } from './queries/places';
 import {
   insertWaitlistEntry,
@@ -23,7 +23,6 @@ import {
   prepareBooking,
   refuse,
   skillsOf,
-  slotWithContextById,
   type BookingInput,
 } from './write';
 

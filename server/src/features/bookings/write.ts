@@ -1,5 +1,4 @@
 import { randomBytes } from 'node:crypto';
-import { eq } from 'drizzle-orm';
 import type { z } from 'zod';
 import { countSkills, skillFullMessage, slotBookability, slotHasPassed } from '../../../../shared/booking/bookability';
 import { formatReference } from '../../../../shared/booking/reference';
@@ -8,13 +7,12 @@ import { itemLabel } from '../../../../shared/item-label';
 import type { createBookingSchema } from '../../../../shared/schemas/bookings';
 import type { AppContext } from '../../context';
 import type { DbOrTx, Tx } from '../../db/client';
-import { slots } from '../../db/schema/index';
 import { sha256 } from '../../auth/tokens';
 import { HttpError } from '../../http/errors';
 import { enqueueMail } from '../../mail/outbox';
 import { manageTokenFor, manageUrl } from '../../core/links';
 import type { screenItems } from '../../core/screening';
-import { skillTakenOf, slotWithContext } from './queries/context';
+import { skillTakenOf, slotWithContextById } from './queries/context';
 import { insertBookingRows } from './queries/bookings';
 import { takePlaces, takeSkillPlaces } from './queries/places';
 import { bookingQrText, confirmationMail, type BookingMailFacts } from './mails';
@@ -29,8 +27,7 @@ export const full = () =>
 
 /** Loads the slot with its event, group and venue, and checks that it can take bookings now. */
 export async function bookableSlot(tx: DbOrTx, slotId: number, opts: { lock?: boolean } = {}) {
-  const q = slotWithContext(tx).where(eq(slots.id, slotId));
-  const [row] = opts.lock ? await q.for('update') : await q;
+  const row = await slotWithContextById(tx, slotId, opts);
   if (!row) throw new HttpError(400, 'invalid', 'Some fields need attention.', { slotId: 'That time does not exist.' });
   if (row.event.status !== 'published')
     throw new HttpError(
@@ -39,11 +36,6 @@ export async function bookableSlot(tx: DbOrTx, slotId: number, opts: { lock?: bo
       row.event.status === 'cancelled' ? 'This event has been cancelled.' : 'This event is not taking bookings.',
     );
   if (slotHasPassed(row.slot, new Date())) throw new HttpError(409, 'not-bookable', 'That time has already passed.');
-  return row;
-}
-
-export async function slotWithContextById(tx: DbOrTx, slotId: number) {
-  const [row] = await slotWithContext(tx).where(eq(slots.id, slotId));
   return row;
 }
 

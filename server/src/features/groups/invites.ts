@@ -1,12 +1,20 @@
-import { and, eq, gt, isNull, sql } from 'drizzle-orm';
 import { ROLE_LABELS, type GroupRole } from '../../../../shared/constants';
 import type { AppContext } from '../../context';
 import { hashPassword } from '../../auth/passwords';
 import { newToken, sha256 } from '../../auth/tokens';
-import { invites, memberships, repairGroups, users } from '../../db/schema/index';
 import { HttpError, notFound } from '../../http/errors';
 import { enqueueMail } from '../../mail/outbox';
 import { composeMail } from '../../mail/templates';
+import { groupById } from './queries/members';
+import {
+  activeMembershipOf,
+  insertConfirmedUser,
+  insertInvite,
+  joinFromInvite,
+  openInviteByHash,
+  userByEmail,
+  userById,
+} from './queries/invites';
 
 const INVITE_DAYS = 14;
 
@@ -17,21 +25,10 @@ export async function invite(
   invitedBy: number,
 ) {
   const { db } = ctx.database;
-  const [group] = await db.select().from(repairGroups).where(eq(repairGroups.id, groupId));
+  const group = await groupById(db, groupId);
   if (!group) throw notFound('That group');
-  const [inviter] = await db.select().from(users).where(eq(users.id, invitedBy));
-  const [already] = await db
-    .select({ id: memberships.id })
-    .from(memberships)
-    .innerJoin(users, eq(users.id, memberships.userId))
-    .where(
-      and(
-        eq(memberships.groupId, groupId),
-        eq(users.email, input.email),
-        eq(memberships.role, input.role),
-        eq(memberships.status, 'active'),
-      ),
-    );
+  const inviter = await userById(db, invitedBy);
+  const already = await activeMembershipOf(db, groupId, input.email, input.role);
   if (already)
     throw new HttpError(
       409,
@@ -41,7 +38,7 @@ export async function invite(
     );
   const { token, hash } = newToken();
   await db.transaction(async (tx) => {
-    await tx.insert(invites).values({
+    await insertInvite(tx, {
       groupId,
       email: input.email,
       role: input.role,
@@ -66,11 +63,7 @@ export async function invite(
 }
 
 async function openInvite(ctx: AppContext, token: string) {
-  const [row] = await ctx.database.db
-    .select({ invite: invites, groupName: repairGroups.name })
-    .from(invites)
-    .innerJoin(repairGroups, eq(repairGroups.id, invites.groupId))
-    .where(and(eq(invites.tokenHash, sha256(token)), isNull(invites.acceptedAt), gt(invites.expiresAt, sql`NOW(3)`)));
+  const row = await openInviteByHash(ctx.database.db, sha256(token));
   if (!row)
     throw new HttpError(
       404,
@@ -82,18 +75,12 @@ async function openInvite(ctx: AppContext, token: string) {
 
 export async function viewInvite(ctx: AppContext, token: string) {
   const { invite: i, groupName } = await openInvite(ctx, token);
-  const [existing] = await ctx.database.db.select({ id: users.id }).from(users).where(eq(users.email, i.email));
+  const existing = await userByEmail(ctx.database.db, i.email);
   return { groupName, role: i.role, email: i.email, hasAccount: Boolean(existing) };
 }
 
 async function join(ctx: AppContext, inviteId: number, groupId: number, userId: number, role: GroupRole) {
-  await ctx.database.db.transaction(async (tx) => {
-    await tx
-      .insert(memberships)
-      .values({ userId, groupId, role, status: 'active' })
-      .onDuplicateKeyUpdate({ set: { status: 'active' } });
-    await tx.update(invites).set({ acceptedAt: new Date() }).where(eq(invites.id, inviteId));
-  });
+  await joinFromInvite(ctx.database.db, inviteId, { userId, groupId, role });
 }
 
 /** A signed-in person accepts; the invitation is for one address, so it must be theirs. */
@@ -111,17 +98,13 @@ export async function acceptInvite(ctx: AppContext, token: string, user: { id: n
 /** No account yet: the link proves the address, so the account starts confirmed. */
 export async function signupFromInvite(ctx: AppContext, token: string, input: { name: string; password: string }) {
   const { invite: i } = await openInvite(ctx, token);
-  const [existing] = await ctx.database.db.select().from(users).where(eq(users.email, i.email));
+  const existing = await userByEmail(ctx.database.db, i.email);
   if (existing) throw new HttpError(409, 'has-account', 'This address already has an account: sign in to accept.');
-  const [{ id }] = await ctx.database.db
-    .insert(users)
-    .values({
-      email: i.email,
-      name: input.name,
-      passwordHash: await hashPassword(input.password),
-      emailVerifiedAt: new Date(),
-    })
-    .$returningId();
+  const id = await insertConfirmedUser(ctx.database.db, {
+    email: i.email,
+    name: input.name,
+    passwordHash: await hashPassword(input.password),
+  });
   await join(ctx, i.id, i.groupId, id, i.role);
   return id;
 }

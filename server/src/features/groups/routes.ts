@@ -1,16 +1,15 @@
-import { sql } from 'drizzle-orm';
 import { Router } from 'express';
-import { repairGroups } from '../../db/schema/index';
 import { z } from 'zod';
 import type { AppContext } from '../../context';
-import { groupIdParam, requireGroupRole } from '../../auth/guards';
-import { body, params } from '../../http/validate';
+import { groupIdInBody, groupIdParam, requireGroupRole, requireUser } from '../../auth/guards';
+import { body, params, query } from '../../http/validate';
 import { inviteSchema, inviteSignupSchema } from '../../../../shared/schemas/auth';
-import { requireUser } from '../../auth/guards';
+import { groupSettingsSchema, venueSchema } from '../../../../shared/schemas/events';
 import { signIn } from '../../auth/routes';
 import { HttpError } from '../../http/errors';
 import * as invites from './invites';
 import * as groups from './service';
+import * as settings from './settings';
 
 const memberParams = z.object({
   groupId: z.coerce.number().int().positive(),
@@ -21,17 +20,7 @@ const memberParams = z.object({
 export function groupPublicRoutes(ctx: AppContext) {
   const r = Router();
   r.get('/public/groups', async (_req, res) => {
-    const rows = await ctx.database.db
-      .select({
-        id: repairGroups.id,
-        name: repairGroups.name,
-        slug: repairGroups.slug,
-        town: repairGroups.town,
-        description: repairGroups.description,
-      })
-      .from(repairGroups)
-      .orderBy(sql`${repairGroups.name}`);
-    res.json(rows);
+    res.json(await groups.listPublicGroups(ctx));
   });
   return r;
 }
@@ -65,6 +54,22 @@ export function groupRoutes(ctx: AppContext) {
     if (req.user) throw new HttpError(409, 'signed-in', 'You are signed in already: accept the invitation instead.');
     const id = await invites.signupFromInvite(ctx, String(req.params.token), body(req, inviteSignupSchema));
     res.status(201).json({ user: await signIn(req, ctx, id) });
+  });
+
+  // Venues and the group's own rules: what it takes and what visitors agree to.
+  r.get('/venues', requireUser, async (req, res) => {
+    const { groupId } = query(req, z.object({ groupId: z.coerce.number().int().positive().optional() }));
+    res.json(await settings.listVenues(ctx, req.user!, groupId));
+  });
+  r.post('/venues', requireGroupRole(['organiser'], groupIdInBody), async (req, res) => {
+    res.status(201).json(await settings.createVenue(ctx, body(req, venueSchema)));
+  });
+  r.get('/groups/:groupId/settings', async (req, res) => {
+    res.json(await settings.groupSettings(ctx, groupIdParam(req)));
+  });
+  r.put('/groups/:groupId/settings', organiser, async (req, res) => {
+    await settings.saveGroupSettings(ctx, groupIdParam(req), body(req, groupSettingsSchema));
+    res.json({ ok: true });
   });
   return r;
 }

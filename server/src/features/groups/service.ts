@@ -1,28 +1,24 @@
-import { and, asc, eq } from 'drizzle-orm';
 import type { AppContext } from '../../context';
-import { memberships, repairGroups, users } from '../../db/schema/index';
 import { HttpError, notFound } from '../../http/errors';
 import { enqueueMail } from '../../mail/outbox';
 import { composeMail } from '../../mail/templates';
+import {
+  activateMembership,
+  deleteMembership,
+  groupById,
+  lockActiveOrganisers,
+  membersOf,
+  membershipInGroup,
+  publicGroups,
+} from './queries/members';
+
+/** The public list of groups. */
+export const listPublicGroups = (ctx: AppContext) => publicGroups(ctx.database.db);
 
 export async function listMembers(ctx: AppContext, groupId: number) {
-  const [group] = await ctx.database.db.select().from(repairGroups).where(eq(repairGroups.id, groupId));
+  const group = await groupById(ctx.database.db, groupId);
   if (!group) throw notFound('That group');
-  const rows = await ctx.database.db
-    .select({
-      membershipId: memberships.id,
-      userId: users.id,
-      name: users.name,
-      email: users.email,
-      role: memberships.role,
-      status: memberships.status,
-      since: memberships.createdAt,
-      verified: users.emailVerifiedAt,
-    })
-    .from(memberships)
-    .innerJoin(users, eq(users.id, memberships.userId))
-    .where(eq(memberships.groupId, groupId))
-    .orderBy(asc(memberships.status), asc(users.name));
+  const rows = await membersOf(ctx.database.db, groupId);
   return {
     group: { id: group.id, name: group.name, town: group.town },
     members: rows.map((m) => ({ ...m, verified: m.verified !== null })),
@@ -30,19 +26,7 @@ export async function listMembers(ctx: AppContext, groupId: number) {
 }
 
 async function membershipIn(ctx: AppContext, groupId: number, membershipId: number) {
-  const [m] = await ctx.database.db
-    .select({
-      id: memberships.id,
-      status: memberships.status,
-      role: memberships.role,
-      email: users.email,
-      name: users.name,
-      groupName: repairGroups.name,
-    })
-    .from(memberships)
-    .innerJoin(users, eq(users.id, memberships.userId))
-    .innerJoin(repairGroups, eq(repairGroups.id, memberships.groupId))
-    .where(and(eq(memberships.id, membershipId), eq(memberships.groupId, groupId)));
+  const m = await membershipInGroup(ctx.database.db, groupId, membershipId);
   if (!m) throw notFound('That volunteer');
   return m;
 }
@@ -50,7 +34,7 @@ async function membershipIn(ctx: AppContext, groupId: number, membershipId: numb
 export async function approveMember(ctx: AppContext, groupId: number, membershipId: number) {
   const m = await membershipIn(ctx, groupId, membershipId);
   await ctx.database.db.transaction(async (tx) => {
-    await tx.update(memberships).set({ status: 'active' }).where(eq(memberships.id, m.id));
+    await activateMembership(tx, m.id);
     if (m.status === 'pending') {
       await enqueueMail(
         tx,
@@ -71,13 +55,7 @@ export async function removeMember(ctx: AppContext, groupId: number, membershipI
   const m = await membershipIn(ctx, groupId, membershipId);
   await ctx.database.db.transaction(async (tx) => {
     if (m.role === 'organiser' && m.status === 'active') {
-      const organisers = await tx
-        .select({ id: memberships.id })
-        .from(memberships)
-        .where(
-          and(eq(memberships.groupId, groupId), eq(memberships.role, 'organiser'), eq(memberships.status, 'active')),
-        )
-        .for('update');
+      const organisers = await lockActiveOrganisers(tx, groupId);
       if (organisers.length <= 1)
         throw new HttpError(
           409,
@@ -85,6 +63,6 @@ export async function removeMember(ctx: AppContext, groupId: number, membershipI
           'A group needs at least one organiser. Make someone else organiser first.',
         );
     }
-    await tx.delete(memberships).where(eq(memberships.id, m.id));
+    await deleteMembership(tx, m.id);
   });
 }

@@ -11,6 +11,13 @@ export const slotWithContext = (db: DbOrTx) =>
     .innerJoin(repairGroups, eq(repairGroups.id, events.groupId))
     .innerJoin(venues, eq(venues.id, events.venueId));
 
+/** One slot with its context; `lock` takes the slot's row for update. */
+export async function slotWithContextById(db: DbOrTx, slotId: number, opts: { lock?: boolean } = {}) {
+  const q = slotWithContext(db).where(eq(slots.id, slotId));
+  const [row] = opts.lock ? await q.for('update') : await q;
+  return row;
+}
+
 /** A booking with its slot, event, group and venue. */
 export const bookingWithContext = (db: DbOrTx) =>
   db
@@ -20,6 +27,11 @@ export const bookingWithContext = (db: DbOrTx) =>
     .innerJoin(events, eq(events.id, bookings.eventId))
     .innerJoin(repairGroups, eq(repairGroups.id, events.groupId))
     .innerJoin(venues, eq(venues.id, events.venueId));
+
+export async function bookingWithContextById(db: DbOrTx, bookingId: number) {
+  const [row] = await bookingWithContext(db).where(eq(bookings.id, bookingId));
+  return row;
+}
 
 /** Items of each skill already booked in a slot (the counts the per-skill limits are held against). */
 export async function skillTakenOf(db: DbOrTx, slotId: number): Promise<Record<string, number>> {

@@ -1,0 +1,35 @@
+import { asc, eq, inArray } from 'drizzle-orm';
+import type { DbOrTx, Tx } from '../../../db/client';
+import { groupExclusions, repairGroups, venues } from '../../../db/schema/index';
+
+/** Venues of one group, of these groups, or (null) of every group; by name. */
+export const venuesOf = (db: DbOrTx, groupIds: number[] | null) =>
+  db
+    .select()
+    .from(venues)
+    .where(groupIds === null ? undefined : inArray(venues.groupId, groupIds))
+    .orderBy(asc(venues.name));
+
+export async function insertVenue(db: DbOrTx, venue: typeof venues.$inferInsert) {
+  const [{ id }] = await db.insert(venues).values(venue).$returningId();
+  return id;
+}
+
+export const lockGroup = async (tx: Tx, groupId: number) =>
+  (await tx.select().from(repairGroups).where(eq(repairGroups.id, groupId)).for('update'))[0];
+
+export async function setHouseRules(tx: Tx, groupId: number, houseRules: string) {
+  await tx.update(repairGroups).set({ houseRules }).where(eq(repairGroups.id, groupId));
+}
+
+/** Replaces the kinds the group does not take; false when a category does not exist. */
+export async function replaceExclusions(tx: Tx, groupId: number, categoryIds: number[]) {
+  await tx.delete(groupExclusions).where(eq(groupExclusions.groupId, groupId));
+  if (!categoryIds.length) return true;
+  try {
+    await tx.insert(groupExclusions).values(categoryIds.map((categoryId) => ({ groupId, categoryId })));
+    return true;
+  } catch {
+    return false;
+  }
+}
