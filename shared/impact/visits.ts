@@ -1,5 +1,5 @@
 import type { BOOKING_STATUSES } from '../constants';
-import { type Barrier, type ItemStatus, type Outcome } from '../event-day/constants';
+import { ABSENT_STATUSES, isAbsent, type Barrier, type ItemStatus, type Outcome } from '../event-day/constants';
 
 type BookingStatus = (typeof BOOKING_STATUSES)[number];
 
@@ -15,7 +15,7 @@ type BookingStatus = (typeof BOOKING_STATUSES)[number];
 export const COUNTED_BOOKING_STATUS = 'confirmed' as const satisfies BookingStatus;
 
 /** Item states of a visit that did not happen, even if the item was once checked in. */
-export const NOT_ARRIVED_STATUSES = ['no-show', 'withdrawn'] as const satisfies readonly ItemStatus[];
+export const NOT_ARRIVED_STATUSES = ABSENT_STATUSES;
 
 /** What one visit looks like to the rule: its booking, its arrival and the earlier visit it continues. */
 export interface VisitState {
@@ -28,9 +28,7 @@ export interface VisitState {
 
 /** The visit happened: the booking stands, the item was checked in and not marked as a no-show or withdrawn. */
 export const arrived = (v: Omit<VisitState, 'itemId' | 'returnOfItemId'>) =>
-  v.bookingStatus === COUNTED_BOOKING_STATUS &&
-  v.checkedIn &&
-  !(NOT_ARRIVED_STATUSES as readonly ItemStatus[]).includes(v.itemStatus);
+  v.bookingStatus === COUNTED_BOOKING_STATUS && v.checkedIn && !isAbsent(v.itemStatus);
 
 /** Leaves out visits that a later visit of the same item supersedes, following chains of returns. */
 export function lastVisits<T extends { itemId: number; returnOfItemId?: number | null }>(visits: readonly T[]): T[] {

@@ -1,9 +1,11 @@
+import { missingReadings, type ApplianceClass } from './readings';
+
 /**
  * Limits for the electrical safety check of a portable mains appliance after repair. Values as given by
  * test-instrument manuals for EN 50678 / EN 50699 (a secondary source); local codes and a competent person's
  * judgement prevail over this table.
  */
-export type ApplianceClass = 'I' | 'II' | 'III';
+export type { ApplianceClass } from './readings';
 
 export const SAFETY_SOURCE = 'EN 50678 / EN 50699 limits as given in test-instrument manuals (secondary source)';
 
@@ -45,40 +47,71 @@ export interface SafetyVerdict {
   missing: string[];
 }
 
-/** Pass only when the visual inspection passed and every reading the class needs is present and within its limit. */
-export function judgeSafety(r: SafetyReadings): SafetyVerdict {
-  const failures: string[] = [];
-  const missing: string[] = [];
+/** Stable codes for what a check found, so a page can tell the visual fault from a reading without reading words. */
+export const SAFETY_FAULTS = {
+  visual: 'visual-fault',
+  protectiveConductor: 'protective-conductor-high',
+  insulation: 'insulation-low',
+  protectiveCurrent: 'protective-current-high',
+  touchCurrent: 'touch-current-high',
+} as const;
+export type SafetyFaultCode = (typeof SAFETY_FAULTS)[keyof typeof SAFETY_FAULTS];
+export interface SafetyFault {
+  code: SafetyFaultCode;
+  /** The form field at fault ('visual' for the inspection). */
+  field: 'visual' | 'protectiveConductorOhm' | 'insulationMOhm' | 'protectiveCurrentMA' | 'touchCurrentMA';
+  message: string;
+}
+
+/** Every reading given that is outside its limit, and the visual inspection if it found a fault. */
+export function safetyFaults(r: SafetyReadings): SafetyFault[] {
+  const faults: SafetyFault[] = [];
   if (!r.visualOk)
-    failures.push('The visual inspection found a fault (cord, plug, strain relief, casing or signs of heat).');
-  if (r.applianceClass === 'I') {
-    if (r.cordLengthM === undefined) missing.push('cord length');
-    if (r.protectiveConductorOhm === undefined) missing.push('protective conductor resistance');
-    else if (r.cordLengthM !== undefined) {
-      const limit = protectiveConductorLimitOhm(r.cordLengthM);
-      if (r.protectiveConductorOhm > limit)
-        failures.push(
-          `Protective conductor ${r.protectiveConductorOhm} Ω is above the ${limit} Ω limit for ${r.cordLengthM} m of cord.`,
-        );
-    }
+    faults.push({
+      code: SAFETY_FAULTS.visual,
+      field: 'visual',
+      message: 'The visual inspection found a fault (cord, plug, strain relief, casing or signs of heat).',
+    });
+  if (r.applianceClass === 'I' && r.protectiveConductorOhm !== undefined && r.cordLengthM !== undefined) {
+    const limit = protectiveConductorLimitOhm(r.cordLengthM);
+    if (r.protectiveConductorOhm > limit)
+      faults.push({
+        code: SAFETY_FAULTS.protectiveConductor,
+        field: 'protectiveConductorOhm',
+        message: `Protective conductor ${r.protectiveConductorOhm} Ω is above the ${limit} Ω limit for ${r.cordLengthM} m of cord.`,
+      });
   }
-  if (r.applianceClass !== 'III' || r.insulationMOhm !== undefined) {
-    if (r.insulationMOhm === undefined) missing.push('insulation resistance');
-    else {
-      const limit = insulationLimitMOhm(r.applianceClass, r.heating);
-      if (r.insulationMOhm < limit)
-        failures.push(
-          `Insulation ${r.insulationMOhm} MΩ is below the ${limit} MΩ minimum for class ${r.applianceClass}${r.heating ? ' with heating elements' : ''}.`,
-        );
-    }
+  if (r.insulationMOhm !== undefined) {
+    const limit = insulationLimitMOhm(r.applianceClass, r.heating);
+    if (r.insulationMOhm < limit)
+      faults.push({
+        code: SAFETY_FAULTS.insulation,
+        field: 'insulationMOhm',
+        message: `Insulation ${r.insulationMOhm} MΩ is below the ${limit} MΩ minimum for class ${r.applianceClass}${r.heating ? ' with heating elements' : ''}.`,
+      });
   }
   if (r.protectiveCurrentMA !== undefined) {
     const limit = protectiveCurrentLimitMA(r.heatingKw);
     if (r.protectiveCurrentMA > limit)
-      failures.push(`Protective conductor current ${r.protectiveCurrentMA} mA is above ${limit} mA.`);
+      faults.push({
+        code: SAFETY_FAULTS.protectiveCurrent,
+        field: 'protectiveCurrentMA',
+        message: `Protective conductor current ${r.protectiveCurrentMA} mA is above ${limit} mA.`,
+      });
   }
   if (r.touchCurrentMA !== undefined && r.touchCurrentMA > TOUCH_CURRENT_LIMIT_MA)
-    failures.push(`Touch current ${r.touchCurrentMA} mA is above ${TOUCH_CURRENT_LIMIT_MA} mA.`);
+    faults.push({
+      code: SAFETY_FAULTS.touchCurrent,
+      field: 'touchCurrentMA',
+      message: `Touch current ${r.touchCurrentMA} mA is above ${TOUCH_CURRENT_LIMIT_MA} mA.`,
+    });
+  return faults;
+}
+
+/** Pass only when the visual inspection passed and every reading the class needs is present and within its limit. */
+export function judgeSafety(r: SafetyReadings): SafetyVerdict {
+  const failures = safetyFaults(r).map((f) => f.message);
+  const missing = missingReadings(r).map((m) => m.name);
   return { pass: failures.length === 0 && missing.length === 0, failures, missing };
 }
 

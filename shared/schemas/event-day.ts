@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { ARRIVALS, BARRIERS, OUTCOMES } from '../event-day/constants';
 import { bookingItemSchema, MAX_ITEMS_PER_BOOKING } from './bookings';
 import { email } from './auth';
+import { APPLIANCE_CLASSES, missingReadings } from '../safety/readings';
 
 /** Empty means not given; a decimal comma is read as a point ("1,5" → 1.5). */
 const optionalNumber = (schema: z.ZodType<number, unknown>) =>
@@ -77,7 +78,7 @@ export const safetyCheckSchema = z
       casing: z.boolean(),
       noHeatDamage: z.boolean(),
     }),
-    applianceClass: z.enum(['I', 'II', 'III'], { error: 'Choose the appliance class.' }),
+    applianceClass: z.enum(APPLIANCE_CLASSES, { error: 'Choose the appliance class.' }),
     heating: z.boolean().default(false),
     heatingKw: reading('heating power', 30),
     cordLengthM: reading('cord length', 100),
@@ -93,29 +94,18 @@ export const safetyCheckSchema = z
       .transform((v) => v || undefined),
   })
   .superRefine((v, ctx) => {
-    if (v.applianceClass === 'I') {
-      if (v.cordLengthM === undefined)
-        ctx.addIssue({
-          code: 'custom',
-          path: ['cordLengthM'],
-          message: 'Class I needs the cord length for its limit.',
-        });
-      if (v.protectiveConductorOhm === undefined)
-        ctx.addIssue({
-          code: 'custom',
-          path: ['protectiveConductorOhm'],
-          message: 'Class I needs the protective conductor reading.',
-        });
-    }
-    if (v.applianceClass !== 'III' && v.insulationMOhm === undefined)
-      ctx.addIssue({
-        code: 'custom',
-        path: ['insulationMOhm'],
-        message: 'Enter the insulation resistance at 500 V DC.',
-      });
+    for (const m of missingReadings(v))
+      ctx.addIssue({ code: 'custom', path: [m.field], message: m.message, params: { code: m.code } });
   });
 export type SafetyCheckInput = z.input<typeof safetyCheckSchema>;
 export type SafetyCheckValues = z.output<typeof safetyCheckSchema>;
+
+/** Stable codes of the outcome's cross-field rules (in each zod issue's `params.code`; paths as in the schema). */
+export const OUTCOME_ISSUES = {
+  barrierRequired: 'barrier-required',
+  barrierNotAllowed: 'barrier-not-allowed',
+  partRequired: 'part-required',
+} as const;
 
 export const outcomeSchema = z
   .object({
@@ -160,11 +150,22 @@ export const outcomeSchema = z
         code: 'custom',
         path: ['barrier'],
         message: 'Choose the barrier to repair for an end-of-life item.',
+        params: { code: OUTCOME_ISSUES.barrierRequired },
       });
     if (v.outcome !== 'end-of-life' && v.barrier)
-      ctx.addIssue({ code: 'custom', path: ['barrier'], message: 'A barrier is recorded only for end-of-life items.' });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['barrier'],
+        message: 'A barrier is recorded only for end-of-life items.',
+        params: { code: OUTCOME_ISSUES.barrierNotAllowed },
+      });
     if (v.outcome === 'parts-needed' && !v.part)
-      ctx.addIssue({ code: 'custom', path: ['part', 'description'], message: 'Say which part is needed.' });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['part', 'description'],
+        message: 'Say which part is needed.',
+        params: { code: OUTCOME_ISSUES.partRequired },
+      });
   });
 export type OutcomeInput = z.input<typeof outcomeSchema>;
 

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { BARRIERS, BARRIER_LABELS, canMove, ITEM_STATUSES } from '../../shared/event-day/constants';
+import { BARRIERS, BARRIER_LABELS, canMoveTo, ITEM_STATUSES } from '../../shared/event-day/constants';
 import { fits, LABEL_LAYOUTS, layoutById, paginate, A4 } from '../../shared/event-day/label-sheets';
 import { estimateWaits, liveWarnings, queueOrder } from '../../shared/event-day/queue';
 import {
@@ -44,16 +44,16 @@ describe('tag codes', () => {
 describe('the item lifecycle', () => {
   it('goes booked → checked in → waiting → at the bench → done, with no-show and withdrawn on the side', () => {
     expect(
-      canMove('booked', 'checked-in') &&
-        canMove('checked-in', 'waiting') &&
-        canMove('waiting', 'at-bench') &&
-        canMove('at-bench', 'done'),
+      canMoveTo('booked', 'checked-in') &&
+        canMoveTo('checked-in', 'waiting') &&
+        canMoveTo('waiting', 'at-bench') &&
+        canMoveTo('at-bench', 'done'),
     ).toBe(true);
-    expect(canMove('booked', 'done')).toBe(false);
-    expect(canMove('booked', 'at-bench')).toBe(false);
-    expect(canMove('done', 'no-show')).toBe(false);
-    expect(canMove('no-show', 'checked-in')).toBe(true);
-    for (const s of ITEM_STATUSES) expect(canMove(s, 'booked')).toBe(false);
+    expect(canMoveTo('booked', 'done')).toBe(false);
+    expect(canMoveTo('booked', 'at-bench')).toBe(false);
+    expect(canMoveTo('done', 'no-show')).toBe(false);
+    expect(canMoveTo('no-show', 'checked-in')).toBe(true);
+    for (const s of ITEM_STATUSES) expect(canMoveTo(s, 'booked')).toBe(false);
   });
 
   it('words the barriers as the Open Repair Data Standard does (REFERENCE.md §5)', () => {

@@ -2,8 +2,15 @@ import { randomBytes } from 'node:crypto';
 import { and, asc, eq, gte, inArray, lte } from 'drizzle-orm';
 import type { z } from 'zod';
 import { formatReference } from '../../../../shared/booking/reference';
-import type { ItemStatus } from '../../../../shared/event-day/constants';
+import {
+  canMoveTo,
+  hasArrived,
+  isAbsent,
+  QUEUED_STATUSES,
+  type ItemStatus,
+} from '../../../../shared/event-day/constants';
 import type { checkInSchema, walkInSchema } from '../../../../shared/schemas/event-day';
+import type { CheckInResult, DeskEvent, DeskItem, DeskView, WalkInResult } from '../../../../shared/api/event-day';
 import type { SessionUser } from '../../../../shared/schemas/auth';
 import type { AppContext } from '../../context';
 import type { Tx } from '../../db/client';
@@ -53,7 +60,7 @@ export async function checkIn(
   reference: string,
   input: z.output<typeof checkInSchema>,
   user: SessionUser,
-) {
+): Promise<CheckInResult> {
   const { db } = ctx.database;
   const [found] = await db
     .select({ id: bookings.id, eventId: bookings.eventId })
@@ -130,16 +137,14 @@ export async function checkIn(
       }
       for (const [n, w] of wanted.entries()) {
         const item = items.find((i) => i.id === w.id)!;
-        if (w.arrival === 'no-show' && !['booked', 'no-show'].includes(item.status))
+        if (w.arrival === 'no-show' && item.status !== 'no-show' && !canMoveTo(item.status, 'no-show'))
           throw new HttpError(409, 'bad-transition', 'Some fields need attention.', {
             [`items.${n}.arrival`]:
               'This item has already been checked in. Mark it withdrawn if the visitor took it away.',
           });
       }
       const arriving = wanted.filter(
-        (w) =>
-          w.arrival === 'arrived' &&
-          ['booked', 'no-show', 'withdrawn'].includes(items.find((i) => i.id === w.id)!.status),
+        (w) => w.arrival === 'arrived' && !hasArrived(items.find((i) => i.id === w.id)!.status),
       );
       const needTag = arriving.filter((w) => !items.find((i) => i.id === w.id)!.tagCode);
       const needNumber = arriving.filter((w) => items.find((i) => i.id === w.id)!.queueNumber === null);
@@ -172,7 +177,7 @@ export async function checkIn(
             await tx.update(bookingItems).set(fix).where(eq(bookingItems.id, item.id));
           }
         } else if (item.status !== w.arrival) {
-          if (item.status === 'done')
+          if (!canMoveTo(item.status, w.arrival))
             throw new HttpError(409, 'bad-transition', 'That item is done; it cannot be withdrawn.');
           await setStatus(tx, [{ itemId: item.id, from: item.status, to: w.arrival, extra: fix }], user.id);
           await tx
@@ -192,7 +197,7 @@ export async function checkIn(
         .orderBy(asc(bookingItems.position));
       await runHooks(ctx.hooks.itemsCheckedIn, tx, {
         itemIds: after.map((i) => i.id),
-        arrivedIds: after.filter((i) => i.status !== 'no-show' && i.status !== 'withdrawn').map((i) => i.id),
+        arrivedIds: after.filter((i) => !isAbsent(i.status)).map((i) => i.id),
       });
       return { eventId: e.id, slotId: b.slotId, items: after as Issued[] };
     }),
@@ -212,7 +217,7 @@ export async function walkIn(
   eventId: number,
   input: z.output<typeof walkInSchema>,
   user: SessionUser,
-) {
+): Promise<WalkInResult> {
   const { db } = ctx.database;
   const [e] = await db
     .select({ event: events, group: repairGroups })
@@ -336,7 +341,7 @@ export async function syncWaiting(ctx: AppContext, eventId: number, userId: numb
       .from(bookingItems)
       .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
       .leftJoin(itemAssignments, eq(itemAssignments.itemId, bookingItems.id))
-      .where(and(eq(bookings.eventId, eventId), inArray(bookingItems.status, ['checked-in', 'waiting'])))
+      .where(and(eq(bookings.eventId, eventId), inArray(bookingItems.status, [...QUEUED_STATUSES])))
       .for('update');
     const changes = rows
       .filter((r) => (r.status === 'checked-in') === (r.placed !== null))
@@ -346,7 +351,7 @@ export async function syncWaiting(ctx: AppContext, eventId: number, userId: numb
 }
 
 /** Today's desk: every booking of the event by slot, with its items' status, tag and queue number. */
-export async function deskView(ctx: AppContext, eventId: number) {
+export async function deskView(ctx: AppContext, eventId: number): Promise<DeskView> {
   const { db } = ctx.database;
   const [e] = await db
     .select({ event: events, group: repairGroups })
@@ -371,7 +376,7 @@ export async function deskView(ctx: AppContext, eventId: number) {
       visitorPhone: string | null;
       walkIn: boolean;
       slotId: number;
-      items: unknown[];
+      items: DeskItem[];
     }
   >();
   for (const r of rows) {
@@ -428,7 +433,7 @@ export async function deskView(ctx: AppContext, eventId: number) {
 }
 
 /** Events a host or organiser may run the desk for: from those that ended up to 12 hours ago, soonest first. */
-export async function deskEvents(ctx: AppContext, user: SessionUser) {
+export async function deskEvents(ctx: AppContext, user: SessionUser): Promise<DeskEvent[]> {
   const { db } = ctx.database;
   const groupIds = user.admin
     ? undefined

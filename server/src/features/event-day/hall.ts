@@ -1,8 +1,15 @@
 import { and, asc, eq, gt, inArray, isNotNull, lte } from 'drizzle-orm';
 import QRCode from 'qrcode';
-import { ITEM_STATUS_LABELS, OUTCOME_LABELS, QUEUED_STATUSES } from '../../../../shared/event-day/constants';
+import {
+  isQueued,
+  ITEM_STATUS_LABELS,
+  ITEM_STATUSES,
+  OUTCOME_LABELS,
+  type ItemStatus,
+} from '../../../../shared/event-day/constants';
 import { estimateWaits, liveWarnings, queueOrder } from '../../../../shared/event-day/queue';
 import { shortName, tagUrl } from '../../../../shared/event-day/tag-code';
+import type { HallQueue, LiveView, PublicTag, TagSheet } from '../../../../shared/api/event-day';
 import type { AppContext } from '../../context';
 import {
   bookingItems,
@@ -53,8 +60,6 @@ async function hallItems(ctx: AppContext, eventId: number) {
 }
 type HallItem = Awaited<ReturnType<typeof hallItems>>[number];
 
-const isQueued = (i: HallItem) => (QUEUED_STATUSES as readonly string[]).includes(i.status);
-
 /** Fixers whose shift covers this moment. */
 function fixersNow(ctx: AppContext, eventId: number, now: Date) {
   return ctx.database.db
@@ -70,14 +75,16 @@ function waitsFor(items: HallItem[], fixers: { userId: number }[], now: number) 
   for (const i of items)
     if (i.status === 'at-bench' && i.fixerId)
       busy.set(i.fixerId, Math.max(busy.get(i.fixerId) ?? 0, (i.startedAt?.getTime() ?? now) + i.minutes * 60_000));
-  const queued = items.filter(isQueued).map((i) => ({
-    id: i.id,
-    slotStartsAt: i.slotStartsAt.getTime(),
-    walkIn: Boolean(i.walkIn),
-    checkedInAt: i.checkedInAt!.getTime(),
-    fixerId: i.fixerId,
-    minutes: i.minutes,
-  }));
+  const queued = items
+    .filter((i) => isQueued(i.status))
+    .map((i) => ({
+      id: i.id,
+      slotStartsAt: i.slotStartsAt.getTime(),
+      walkIn: Boolean(i.walkIn),
+      checkedInAt: i.checkedInAt!.getTime(),
+      fixerId: i.fixerId,
+      minutes: i.minutes,
+    }));
   return {
     order: queueOrder(queued),
     waits: estimateWaits(
@@ -99,7 +106,7 @@ async function eventHeader(ctx: AppContext, eventId: number, publicOnly: boolean
 }
 
 /** The hall's TV: queue numbers only — being served at which bench, and waiting with an estimate. No names. */
-export async function hallQueue(ctx: AppContext, eventId: number) {
+export async function hallQueue(ctx: AppContext, eventId: number): Promise<HallQueue> {
   const e = await eventHeader(ctx, eventId, true);
   const now = new Date();
   const [items, fixers, benches] = await Promise.all([
@@ -131,7 +138,7 @@ export async function hallQueue(ctx: AppContext, eventId: number) {
 }
 
 /** The organiser's live view: waiting, at bench and done by bench, the fixers on shift, and warnings. */
-export async function liveView(ctx: AppContext, eventId: number) {
+export async function liveView(ctx: AppContext, eventId: number): Promise<LiveView> {
   const e = await eventHeader(ctx, eventId, false);
   const now = new Date();
   const [items, fixers, benches] = await Promise.all([
@@ -145,8 +152,8 @@ export async function liveView(ctx: AppContext, eventId: number) {
     .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
     .where(and(eq(bookings.eventId, eventId), eq(bookings.status, 'confirmed')));
   const counts = Object.fromEntries(
-    Object.keys(ITEM_STATUS_LABELS).map((s) => [s, allBooked.filter((b) => b.status === s).length]),
-  );
+    ITEM_STATUSES.map((s) => [s, allBooked.filter((b) => b.status === s).length]),
+  ) as Record<ItemStatus, number>;
   const { waits, order } = waitsFor(items, fixers, now.getTime());
   const rank = new Map(order.map((q, i) => [q.id, i]));
   const names = new Map(
@@ -172,7 +179,7 @@ export async function liveView(ctx: AppContext, eventId: number) {
     waitedMinutes: i.checkedInAt ? Math.floor((now.getTime() - i.checkedInAt.getTime()) / 60_000) : null,
     estimatedWaitMinutes: waits.get(i.id) ?? null,
   });
-  const queued = items.filter(isQueued).sort((a, b) => (rank.get(a.id) ?? 0) - (rank.get(b.id) ?? 0));
+  const queued = items.filter((i) => isQueued(i.status)).sort((a, b) => (rank.get(a.id) ?? 0) - (rank.get(b.id) ?? 0));
   const busyFixers = new Set(items.filter((i) => i.status === 'at-bench').map((i) => i.fixerId));
   return {
     event: {
@@ -209,7 +216,7 @@ export async function liveView(ctx: AppContext, eventId: number) {
 }
 
 /** What anyone scanning a tag sees: the item's kind, status and queue number — no names, no fault text. */
-export async function publicTag(ctx: AppContext, code: string) {
+export async function publicTag(ctx: AppContext, code: string): Promise<PublicTag> {
   const [r] = await ctx.database.db
     .select({
       id: bookingItems.id,
@@ -233,7 +240,7 @@ export async function publicTag(ctx: AppContext, code: string) {
     .where(eq(bookingItems.tagCode, code));
   if (!r) throw notFound('That tag');
   let waitMinutes: number | null = null;
-  if ((QUEUED_STATUSES as readonly string[]).includes(r.status)) {
+  if (isQueued(r.status)) {
     const now = new Date();
     const [items, fixers] = await Promise.all([hallItems(ctx, r.eventId), fixersNow(ctx, r.eventId, now)]);
     waitMinutes = waitsFor(items, fixers, now.getTime()).waits.get(r.id) ?? null;
@@ -255,7 +262,11 @@ export async function publicTag(ctx: AppContext, code: string) {
 }
 
 /** Printable tags: one item, the items of a slot, or every checked-in item of the event. */
-export async function tags(ctx: AppContext, eventId: number, filter: { slotId?: number; itemIds?: number[] }) {
+export async function tags(
+  ctx: AppContext,
+  eventId: number,
+  filter: { slotId?: number; itemIds?: number[] },
+): Promise<TagSheet> {
   const e = await eventHeader(ctx, eventId, false);
   const rows = await ctx.database.db
     .select({

@@ -4,11 +4,15 @@ import {
   ITEM_STATUS_LABELS,
   OUTCOME_LABELS,
   BARRIER_LABELS,
+  canMoveTo,
+  isOpen,
+  mayStartRepair,
   type ItemStatus,
 } from '../../../../shared/event-day/constants';
 import { formatTagCode, shortName } from '../../../../shared/event-day/tag-code';
 import { cautionsFor, HEATING_CATEGORY_SLUGS, LOCAL_RULES_PREVAIL } from '../../../../shared/safety/cautions';
 import { SAFETY_SOURCE } from '../../../../shared/safety/limits';
+import type { ItemView } from '../../../../shared/api/event-day';
 import type { SessionUser } from '../../../../shared/schemas/auth';
 import type { AppContext } from '../../context';
 import type { Tx } from '../../db/client';
@@ -24,6 +28,7 @@ import {
   users,
 } from '../../db/schema/index';
 import { hasGroupRole } from '../../auth/guards';
+import { HttpError } from '../../http/errors';
 import { loadItem, partsUsed } from '../../core/items';
 
 /** Moves items to a status, writing one history row each with the time and who did it. */
@@ -39,6 +44,12 @@ export async function setStatus(
   note?: string,
 ) {
   for (const c of changes) {
+    if (c.from !== null && !canMoveTo(c.from, c.to))
+      throw new HttpError(
+        409,
+        'bad-transition',
+        `An item that is ${ITEM_STATUS_LABELS[c.from].toLowerCase()} cannot become ${ITEM_STATUS_LABELS[c.to].toLowerCase()}.`,
+      );
     await tx
       .update(bookingItems)
       .set({ status: c.to, ...c.extra })
@@ -84,7 +95,7 @@ export async function newTagCodes(tx: Tx, n: number): Promise<string[]> {
 export const isHeating = (slug: string) => (HEATING_CATEGORY_SLUGS as readonly string[]).includes(slug);
 
 /** The item page: fixers see the visitor's first name and initial only; reception and organisers see the name and phone. */
-export async function itemView(ctx: AppContext, itemId: number, user: SessionUser) {
+export async function itemView(ctx: AppContext, itemId: number, user: SessionUser): Promise<ItemView> {
   const { db } = ctx.database;
   const row = await loadItem(db, itemId);
   const [placement] = await db
@@ -127,7 +138,6 @@ export async function itemView(ctx: AppContext, itemId: number, user: SessionUse
   const heating = isHeating(category.slug);
   const mains = Boolean(item.mains);
   const mine = placement?.userId === user.id;
-  const open = !['done', 'no-show', 'withdrawn'].includes(item.status);
   const fixerHere = hasGroupRole(user, group.id, ['fixer']);
   return {
     id: item.id,
@@ -202,7 +212,7 @@ export async function itemView(ctx: AppContext, itemId: number, user: SessionUse
     safetyNote: LOCAL_RULES_PREVAIL,
     safetySource: SAFETY_SOURCE,
     can: {
-      start: open && item.status !== 'at-bench' && item.status !== 'booked' && (organiser || fixerHere),
+      start: isOpen(item.status) && mayStartRepair(item.status) && (organiser || fixerHere),
       record: organiser || (fixerHere && (!placement || mine)),
     },
   };

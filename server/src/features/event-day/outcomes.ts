@@ -1,8 +1,10 @@
 import { and, desc, eq } from 'drizzle-orm';
 import type { z } from 'zod';
-import { canMove } from '../../../../shared/event-day/constants';
+import { mayRecordOutcome, mayStartRepair } from '../../../../shared/event-day/constants';
+import { mayRecordFixed } from '../../../../shared/safety/may-record-fixed';
 import { judgeSafety, type SafetyVerdict } from '../../../../shared/safety/limits';
 import { visualOk, type outcomeSchema, type SafetyCheckValues } from '../../../../shared/schemas/event-day';
+import type { SafetyCheckResult } from '../../../../shared/api/event-day';
 import type { SessionUser } from '../../../../shared/schemas/auth';
 import type { AppContext } from '../../context';
 import type { DbOrTx, Tx } from '../../db/client';
@@ -38,7 +40,7 @@ export async function startRepair(ctx: AppContext, itemId: number, user: Session
       if (!hasGroupRole(user, row.group.id, ['fixer', 'organiser']))
         throw forbidden('Only the group’s fixers and organisers can start a repair.');
       if (row.item.status === 'at-bench') return;
-      if (!canMove(row.item.status, 'at-bench'))
+      if (!mayStartRepair(row.item.status))
         throw new HttpError(
           409,
           'bad-transition',
@@ -134,13 +136,18 @@ const suggestion = (v: SafetyVerdict) =>
     : 'It cannot go home as fixed. Record it as needing a part, or as end of life, and tell the visitor not to use it.';
 
 /** Records an electrical safety check; the verdict comes from the shared limits table, never from the client. */
-export async function recordSafetyCheck(ctx: AppContext, itemId: number, s: SafetyCheckValues, user: SessionUser) {
+export async function recordSafetyCheck(
+  ctx: AppContext,
+  itemId: number,
+  s: SafetyCheckValues,
+  user: SessionUser,
+): Promise<SafetyCheckResult> {
   return ctx.database.db.transaction(async (tx) => {
     const row = await loadItem(tx, itemId, { lock: true });
     await assertMayRecord(tx, row, user);
     if (!row.item.mains)
       throw new HttpError(409, 'not-mains', 'This item does not run on mains; it needs no electrical safety check.');
-    if (['booked', 'no-show', 'withdrawn'].includes(row.item.status))
+    if (!mayRecordOutcome(row.item.status))
       throw new HttpError(409, 'bad-transition', 'Check the item in before testing it.');
     const v = await insertCheck(tx, row, s, user);
     return { id: v.id, pass: v.pass, failures: v.failures, missing: v.missing, suggestion: suggestion(v) };
@@ -171,7 +178,7 @@ export async function recordOutcome(
     db.transaction(async (tx) => {
       const row = await loadItem(tx, itemId, { lock: true });
       await assertMayRecord(tx, row, user);
-      if (['booked', 'no-show', 'withdrawn'].includes(row.item.status))
+      if (!mayRecordOutcome(row.item.status))
         throw new HttpError(
           409,
           'bad-transition',
@@ -185,21 +192,9 @@ export async function recordOutcome(
         .where(eq(safetyChecks.itemId, itemId))
         .orderBy(desc(safetyChecks.id))
         .limit(1);
-      if (input.outcome === 'fixed' && row.item.mains) {
-        if (!latest)
-          throw new HttpError(
-            422,
-            'safety-check-required',
-            'A mains item needs a passing electrical safety check before it can be recorded as fixed.',
-            { safety: 'Record the safety check first.' },
-          );
-        if (!latest.pass)
-          throw new HttpError(
-            422,
-            'safety-check-failed',
-            `The latest safety check failed: ${latest.failures.join(' ')} It cannot go home as fixed; record it as needing a part or end of life, or repair it and check again.`,
-            { safety: latest.failures.join(' ') },
-          );
+      if (input.outcome === 'fixed') {
+        const fixed = mayRecordFixed({ mains: Boolean(row.item.mains) }, latest);
+        if (!fixed.ok) throw new HttpError(422, fixed.code, fixed.message, { [fixed.field]: fixed.fieldMessage });
       }
       const values = {
         outcome: input.outcome,

@@ -1,4 +1,5 @@
 import { and, asc, desc, eq, inArray } from 'drizzle-orm';
+import { OPEN_STATUSES } from '../../../../shared/event-day/constants';
 import type { DbOrTx } from '../../db/client';
 import {
   bookingItems,
@@ -55,7 +56,7 @@ export const openItemRows = (db: DbOrTx, eventId: number) =>
       and(
         eq(bookings.eventId, eventId),
         eq(bookings.status, 'confirmed'),
-        inArray(bookingItems.status, ['booked', 'checked-in', 'waiting', 'at-bench']),
+        inArray(bookingItems.status, [...OPEN_STATUSES]),
       ),
     )
     .orderBy(asc(bookings.walkIn), asc(bookings.createdAt), asc(bookingItems.position));

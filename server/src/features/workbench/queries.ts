@@ -1,4 +1,5 @@
 import { and, asc, eq, inArray, sql } from 'drizzle-orm';
+import { OPEN_STATUSES } from '../../../../shared/event-day/constants';
 import type { DbOrTx } from '../../db/client';
 import {
   bookingItems,
@@ -48,7 +49,7 @@ export const queueRows = (db: DbOrTx, userId: number) =>
         eq(itemAssignments.userId, userId),
         eq(bookings.status, 'confirmed'),
         inArray(events.status, ['published', 'closed']),
-        inArray(bookingItems.status, ['booked', 'checked-in', 'waiting', 'at-bench']),
+        inArray(bookingItems.status, [...OPEN_STATUSES]),
       ),
     )
     .orderBy(startsAt, asc(bookings.createdAt));
