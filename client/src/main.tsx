@@ -9,7 +9,7 @@ import { PersistQueryClientProvider } from '@tanstack/react-query-persist-client
 import { RouterProvider } from 'react-router';
 import { pendingWritesPersister, queryClient } from './lib/query-client';
 import { router } from './app/router';
-import { registerOutcomeWrites } from './features/event-day/api';
+import { registerOutcomeWrites } from './features/event-day/api/record-outcome';
 import { workbenchKeys } from './features/workbench/api/keys';
 
 // An outcome recorded at the bench also changes the fixer's own queue.

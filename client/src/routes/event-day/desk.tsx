@@ -10,15 +10,11 @@ import { Alert, Card, EmptyState, PageTitle, Spinner } from '../../components/ui
 import { CheckField, SelectField, TextAreaField, TextField } from '../../components/ui/field';
 import { paths } from '../../config/paths';
 import { useCategories, type Category } from '../../features/events/api/events';
-import {
-  useCheckIn,
-  useDesk,
-  useDeskEvents,
-  useWalkIn,
-  type Desk,
-  type DeskBooking,
-  type Issued,
-} from '../../features/event-day/api';
+import { useCheckIn } from '../../features/event-day/api/check-in';
+import { useAddWalkIn } from '../../features/event-day/api/add-walk-in';
+import { useDesk } from '../../features/event-day/api/get-desk';
+import { useDeskEvents } from '../../features/event-day/api/get-desk-events';
+import type { Desk, DeskBooking, Issued } from '../../features/event-day/api/types';
 import { QrScan } from '../../features/event-day/qr-scan';
 import { StatusChip } from '../../features/event-day/status-chip';
 import { ApiError } from '../../lib/api';
@@ -542,7 +538,7 @@ function CheckInPanel({ desk, booking, onClose }: { desk: Desk; booking: DeskBoo
 /** A walk-in: the same item questions as booking, fast, with the house rules accepted by a tick and a typed name. */
 function WalkInForm({ desk, onDone }: { desk: Desk; onDone: () => void }) {
   const { data: categories } = useCategories();
-  const walkIn = useWalkIn(desk.event.id);
+  const walkIn = useAddWalkIn(desk.event.id);
   const [issued, setIssued] = useState<Issued[] | null>(null);
   const [formError, setFormError] = useState<string | null>(null);
   const form = useZodForm(walkInSchema, {

@@ -1,7 +1,8 @@
 import { useEffect, useState } from 'react';
 import { useParams } from 'react-router';
 import { formatTime } from '../../../../shared/format';
-import { useHallQueue, type HallQueue } from '../../features/event-day/api';
+import { useHallQueue } from '../../features/event-day/api/get-hall-queue';
+import type { HallQueue } from '../../features/event-day/api/types';
 import { ApiError } from '../../lib/api';
 
 /** Waiting numbers that fit on the screen (three to a row) without scrolling; the rest are counted. */

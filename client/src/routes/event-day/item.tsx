@@ -1,4 +1,3 @@
-import { useMutation, useMutationState } from '@tanstack/react-query';
 import { useEffect, useState } from 'react';
 import { Link, useParams } from 'react-router';
 import {
@@ -28,16 +27,14 @@ import { Button } from '../../components/ui/button';
 import { Alert, Card, Spinner } from '../../components/ui/feedback';
 import { CheckField, SelectField, TextAreaField, TextField } from '../../components/ui/field';
 import { paths } from '../../config/paths';
-import {
-  eventDayKeys,
-  OUTCOME_MUTATION_KEY,
-  useItem,
-  useRepairPhotos,
-  useSafetyCheck,
-  useStartRepair,
-  type ItemDetail,
-  type OutcomeVariables,
-} from '../../features/event-day/api';
+import { eventDayKeys } from '../../features/event-day/api/keys';
+import { useItem } from '../../features/event-day/api/get-item';
+import { photoUrl } from '../../features/event-day/api/photo-url';
+import { usePendingOutcomes, useRecordOutcome } from '../../features/event-day/api/record-outcome';
+import { useRecordSafetyCheck } from '../../features/event-day/api/record-safety-check';
+import { useStartRepair } from '../../features/event-day/api/start-repair';
+import { useUploadRepairPhotos } from '../../features/event-day/api/upload-repair-photos';
+import type { ItemDetail } from '../../features/event-day/api/types';
 import { StatusChip } from '../../features/event-day/status-chip';
 import { useUser } from '../../lib/auth';
 import { ConfirmDialog } from '../../components/ui/confirm-dialog';
@@ -132,9 +129,9 @@ function ItemView({ item }: { item: ItemDetail }) {
             {item.photos
               .filter((p) => p.kind === 'intake')
               .map((p) => (
-                <a key={p.id} href={`/api/photos/${p.id}`} target="_blank" rel="noreferrer">
+                <a key={p.id} href={photoUrl(p.id)} target="_blank" rel="noreferrer">
                   <img
-                    src={`/api/photos/${p.id}`}
+                    src={photoUrl(p.id)}
                     alt={`Photo of the ${item.categoryName.toLowerCase()}`}
                     className="size-24 rounded-lg object-cover"
                   />
@@ -252,7 +249,7 @@ function ItemView({ item }: { item: ItemDetail }) {
 
 /** Photos from the bench (the fault, a part number, the finished repair) for the knowledge base. */
 function RepairPhotos({ item }: { item: ItemDetail }) {
-  const upload = useRepairPhotos(item.id);
+  const upload = useUploadRepairPhotos(item.id);
   const photos = item.photos.filter((p) => p.kind === 'repair');
   return (
     <Card>
@@ -263,8 +260,8 @@ function RepairPhotos({ item }: { item: ItemDetail }) {
       {photos.length > 0 && (
         <div className="mb-3 flex flex-wrap gap-2">
           {photos.map((p) => (
-            <a key={p.id} href={`/api/photos/${p.id}`} target="_blank" rel="noreferrer">
-              <img src={`/api/photos/${p.id}`} alt="Repair photo" className="size-24 rounded-lg object-cover" />
+            <a key={p.id} href={photoUrl(p.id)} target="_blank" rel="noreferrer">
+              <img src={photoUrl(p.id)} alt="Repair photo" className="size-24 rounded-lg object-cover" />
             </a>
           ))}
         </div>
@@ -347,7 +344,7 @@ function SafetySection({ item }: { item: ItemDetail }) {
 }
 
 function SafetyForm({ item }: { item: ItemDetail }) {
-  const record = useSafetyCheck(item.id);
+  const record = useRecordSafetyCheck(item.id);
   const [visual, setVisual] = useState({
     cord: false,
     plug: false,
@@ -552,12 +549,8 @@ function OutcomeForm({
   const [minutes, setMinutes] = useState(item.outcome?.minutes?.toString() ?? '');
   const [notes, setNotes] = useState(item.outcome?.notes ?? '');
   const [errors, setErrors] = useState<Record<string, string>>({});
-  // No callbacks here: the defaults in lib/query-client update the item, also for an outcome sent after a reload.
-  const save = useMutation<ItemDetail, Error, OutcomeVariables>({ mutationKey: OUTCOME_MUTATION_KEY });
-  const pending = useMutationState({
-    filters: { mutationKey: OUTCOME_MUTATION_KEY, status: 'pending' },
-    select: (m) => ({ vars: m.state.variables as OutcomeVariables, paused: m.state.isPaused }),
-  }).filter((p) => p.vars?.itemId === item.id);
+  const save = useRecordOutcome();
+  const pending = usePendingOutcomes(item.id);
   const blocked = outcome === 'fixed' && item.mains && latestPass !== true;
   const serverError = save.error instanceof ApiError ? save.error : null;
 

@@ -6,7 +6,8 @@ import { formatDay, formatTime } from '../../../../shared/format';
 import { EventTabs } from '../../components/layouts/event-tabs';
 import { Alert, Card, EmptyState, PageTitle, Spinner } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
-import { useLiveView, type LiveCard, type LiveView } from '../../features/event-day/api';
+import { useLiveView } from '../../features/event-day/api/get-live-view';
+import type { LiveCard, LiveView } from '../../features/event-day/api/types';
 
 const COUNT_TILES: { status: ItemStatus; label: string }[] = (
   ['checked-in', 'waiting', 'at-bench', 'done', 'no-show', 'withdrawn', 'booked'] as const

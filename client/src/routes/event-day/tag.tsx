@@ -2,7 +2,7 @@ import { Link, Navigate, useParams } from 'react-router';
 import { Alert, Card, Spinner } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
 import { useUser } from '../../lib/auth';
-import { usePublicTag } from '../../features/event-day/api';
+import { usePublicTag } from '../../features/event-day/api/get-public-tag';
 import { StatusChip } from '../../features/event-day/status-chip';
 
 /**

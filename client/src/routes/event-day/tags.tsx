@@ -5,7 +5,8 @@ import { formatTime } from '../../../../shared/format';
 import { Button } from '../../components/ui/button';
 import { Alert, EmptyState, Spinner } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
-import { useTagSheet, type Tag } from '../../features/event-day/api';
+import { useTagSheet } from '../../features/event-day/api/get-tag-sheet';
+import type { Tag } from '../../features/event-day/api/types';
 
 const DEFAULT_LAYOUT = 'a4-24';
 

@@ -1,0 +1,21 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { CheckInInput } from '../../../../../shared/schemas/event-day';
+import { api } from '../../../lib/api';
+import { eventDayKeys } from './keys';
+import type { Issued } from './types';
+
+export interface CheckInVariables {
+  reference: string;
+  body: CheckInInput;
+}
+
+export const checkIn = ({ reference, body }: CheckInVariables) =>
+  api<{ items: Issued[] }>('POST', `/api/bookings/${encodeURIComponent(reference)}/check-in`, body);
+
+export function useCheckIn(eventId: number) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: checkIn,
+    onSuccess: () => qc.invalidateQueries({ queryKey: eventDayKeys.desk(eventId) }),
+  });
+}

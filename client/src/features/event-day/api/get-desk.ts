@@ -1,0 +1,12 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { api } from '../../../lib/api';
+import { eventDayKeys } from './keys';
+import type { Desk } from './types';
+
+export const getDesk = (eventId: number) => api<Desk>('GET', `/api/events/${eventId}/desk`);
+
+/** Reception sees other desks' check-ins within 20 seconds. */
+export const deskQuery = (eventId: number) =>
+  queryOptions({ queryKey: eventDayKeys.desk(eventId), queryFn: () => getDesk(eventId), refetchInterval: 20_000 });
+
+export const useDesk = (eventId: number) => useQuery(deskQuery(eventId));
