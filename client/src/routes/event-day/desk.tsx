@@ -14,7 +14,7 @@ import { useCheckIn } from '../../features/event-day/api/check-in';
 import { useAddWalkIn } from '../../features/event-day/api/add-walk-in';
 import { useDesk } from '../../features/event-day/api/get-desk';
 import { useDeskEvents } from '../../features/event-day/api/get-desk-events';
-import type { Desk, DeskBooking, Issued } from '../../features/event-day/api/types';
+import type { DeskView, DeskBooking, IssuedItem } from '../../features/event-day/api/types';
 import { QrScan } from '../../features/event-day/qr-scan';
 import { StatusChip } from '../../features/event-day/status-chip';
 import { ApiError } from '../../lib/api';
@@ -323,7 +323,7 @@ function categoryOptions(categories: Category[] | undefined) {
   ));
 }
 
-function IssuedTags({ eventId, issued, onClose }: { eventId: number; issued: Issued[]; onClose: () => void }) {
+function IssuedTags({ eventId, issued, onClose }: { eventId: number; issued: IssuedItem[]; onClose: () => void }) {
   const tagged = issued.filter((i) => i.tagCode && i.status !== 'no-show' && i.status !== 'withdrawn');
   const away = issued.filter((i) => i.status === 'no-show' || i.status === 'withdrawn');
   const title =
@@ -384,7 +384,7 @@ interface Row {
 }
 
 /** Check-in item by item: arrived, did not come or withdrawn; category confirmed or corrected; weight if weighed. */
-function CheckInPanel({ desk, booking, onClose }: { desk: Desk; booking: DeskBooking; onClose: () => void }) {
+function CheckInPanel({ desk, booking, onClose }: { desk: DeskView; booking: DeskBooking; onClose: () => void }) {
   const { data: categories } = useCategories();
   const checkIn = useCheckIn(desk.event.id);
   const [rows, setRows] = useState<Record<number, Row>>(() =>
@@ -399,7 +399,7 @@ function CheckInPanel({ desk, booking, onClose }: { desk: Desk; booking: DeskBoo
       ]),
     ),
   );
-  const [issued, setIssued] = useState<Issued[] | null>(null);
+  const [issued, setIssued] = useState<IssuedItem[] | null>(null);
   const slot = desk.slots.find((s) => s.id === booking.slotId);
   const error = checkIn.error instanceof ApiError ? checkIn.error : null;
 
@@ -536,10 +536,10 @@ function CheckInPanel({ desk, booking, onClose }: { desk: Desk; booking: DeskBoo
 }
 
 /** A walk-in: the same item questions as booking, fast, with the house rules accepted by a tick and a typed name. */
-function WalkInForm({ desk, onDone }: { desk: Desk; onDone: () => void }) {
+function WalkInForm({ desk, onDone }: { desk: DeskView; onDone: () => void }) {
   const { data: categories } = useCategories();
   const walkIn = useAddWalkIn(desk.event.id);
-  const [issued, setIssued] = useState<Issued[] | null>(null);
+  const [issued, setIssued] = useState<IssuedItem[] | null>(null);
   const [formError, setFormError] = useState<string | null>(null);
   const form = useZodForm(walkInSchema, {
     slotId: desk.currentSlotId ?? undefined,

@@ -34,7 +34,7 @@ import { usePendingOutcomes, useRecordOutcome } from '../../features/event-day/a
 import { useRecordSafetyCheck } from '../../features/event-day/api/record-safety-check';
 import { useStartRepair } from '../../features/event-day/api/start-repair';
 import { useUploadRepairPhotos } from '../../features/event-day/api/upload-repair-photos';
-import type { ItemDetail } from '../../features/event-day/api/types';
+import type { ItemView } from '../../features/event-day/api/types';
 import { StatusChip } from '../../features/event-day/status-chip';
 import { useUser } from '../../lib/auth';
 import { ConfirmDialog } from '../../components/ui/confirm-dialog';
@@ -51,7 +51,7 @@ export function ItemPage() {
   return <ItemView item={item} />;
 }
 
-function ItemView({ item }: { item: ItemDetail }) {
+function ItemView({ item }: { item: ItemView }) {
   const start = useStartRepair(item.id);
   const { data: me } = useUser();
   const [confirmTake, setConfirmTake] = useState(false);
@@ -248,7 +248,7 @@ function ItemView({ item }: { item: ItemDetail }) {
 }
 
 /** Photos from the bench (the fault, a part number, the finished repair) for the knowledge base. */
-function RepairPhotos({ item }: { item: ItemDetail }) {
+function RepairPhotos({ item }: { item: ItemView }) {
   const upload = useUploadRepairPhotos(item.id);
   const photos = item.photos.filter((p) => p.kind === 'repair');
   return (
@@ -311,7 +311,7 @@ const RELEVANT: Record<ApplianceClass, Reading[]> = {
 const TILE_FOCUS = 'has-[:focus-visible]:ring-2 has-[:focus-visible]:ring-copper has-[:focus-visible]:ring-offset-2';
 
 /** The electrical safety check: visual inspection, class, readings; the verdict is worked out as you type. */
-function SafetySection({ item }: { item: ItemDetail }) {
+function SafetySection({ item }: { item: ItemView }) {
   const latest = item.safetyChecks[0];
   const closed = (l: typeof latest) => Boolean(l) && (l!.pass || item.status === 'done');
   const [open, setOpen] = useState(!closed(latest));
@@ -343,7 +343,7 @@ function SafetySection({ item }: { item: ItemDetail }) {
   return <SafetyForm item={item} />;
 }
 
-function SafetyForm({ item }: { item: ItemDetail }) {
+function SafetyForm({ item }: { item: ItemView }) {
   const record = useRecordSafetyCheck(item.id);
   const [visual, setVisual] = useState({
     cord: false,
@@ -535,7 +535,7 @@ function OutcomeForm({
   latestPass,
   onCancel,
 }: {
-  item: ItemDetail;
+  item: ItemView;
   latestPass: boolean | null;
   onCancel?: () => void;
 }) {

@@ -49,7 +49,7 @@ export function TagPage() {
       </Card>
       <p className="text-center text-sm text-ink-soft">
         This page refreshes by itself. Volunteers:{' '}
-        <Link className="font-semibold text-navy underline" to={paths.signIn(paths.tag(tag.tagCode))}>
+        <Link className="font-semibold text-navy underline" to={paths.signIn(paths.tag(tag.tagCode ?? code))}>
           sign in
         </Link>{' '}
         to open the item.

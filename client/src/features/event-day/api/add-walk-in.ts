@@ -2,10 +2,10 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { WalkInInput } from '../../../../../shared/schemas/event-day';
 import { api } from '../../../lib/api';
 import { eventDayKeys } from './keys';
-import type { Issued } from './types';
+import type { WalkInResult } from './types';
 
 export const addWalkIn = (eventId: number, body: WalkInInput) =>
-  api<{ reference: string; items: Issued[] }>('POST', `/api/events/${eventId}/walk-ins`, body);
+  api<WalkInResult>('POST', `/api/events/${eventId}/walk-ins`, body);
 
 export function useAddWalkIn(eventId: number) {
   const qc = useQueryClient();

@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { CheckInInput } from '../../../../../shared/schemas/event-day';
 import { api } from '../../../lib/api';
 import { eventDayKeys } from './keys';
-import type { Issued } from './types';
+import type { CheckInResult } from './types';
 
 export interface CheckInVariables {
   reference: string;
@@ -10,7 +10,7 @@ export interface CheckInVariables {
 }
 
 export const checkIn = ({ reference, body }: CheckInVariables) =>
-  api<{ items: Issued[] }>('POST', `/api/bookings/${encodeURIComponent(reference)}/check-in`, body);
+  api<CheckInResult>('POST', `/api/bookings/${encodeURIComponent(reference)}/check-in`, body);
 
 export function useCheckIn(eventId: number) {
   const qc = useQueryClient();

@@ -1,9 +1,9 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api';
 import { eventDayKeys } from './keys';
-import type { Desk } from './types';
+import type { DeskView } from './types';
 
-export const getDesk = (eventId: number) => api<Desk>('GET', `/api/events/${eventId}/desk`);
+export const getDesk = (eventId: number) => api<DeskView>('GET', `/api/events/${eventId}/desk`);
 
 /** Reception sees other desks' check-ins within 20 seconds. */
 export const deskQuery = (eventId: number) =>

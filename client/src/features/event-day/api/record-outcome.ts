@@ -2,7 +2,7 @@ import { useMutation, useMutationState, type QueryClient } from '@tanstack/react
 import type { OutcomeInput } from '../../../../../shared/schemas/event-day';
 import { api, ApiError } from '../../../lib/api';
 import { eventDayKeys, outcomeMutationKey } from './keys';
-import type { ItemDetail } from './types';
+import type { ItemView } from './types';
 
 export interface OutcomeVariables {
   itemId: number;
@@ -10,7 +10,7 @@ export interface OutcomeVariables {
 }
 
 export const recordOutcome = ({ itemId, body }: OutcomeVariables) =>
-  api<ItemDetail>('POST', `/api/items/${itemId}/outcome`, body);
+  api<ItemView>('POST', `/api/items/${itemId}/outcome`, body);
 
 /**
  * A fixer's outcome recorded with no connection waits in the mutation cache (paused) and is sent when the browser
@@ -21,7 +21,7 @@ export const recordOutcome = ({ itemId, body }: OutcomeVariables) =>
 export function registerOutcomeWrites(queryClient: QueryClient, onRecorded: () => void) {
   queryClient.setMutationDefaults(outcomeMutationKey, {
     mutationFn: recordOutcome,
-    onSuccess: (item: ItemDetail) => {
+    onSuccess: (item: ItemView) => {
       queryClient.setQueryData(eventDayKeys.item(item.id), item);
       onRecorded();
     },
@@ -32,7 +32,7 @@ export function registerOutcomeWrites(queryClient: QueryClient, onRecorded: () =
 
 /** No callbacks here: the defaults registered above update the item, also for an outcome sent after a reload. */
 export const useRecordOutcome = () =>
-  useMutation<ItemDetail, Error, OutcomeVariables>({ mutationKey: outcomeMutationKey });
+  useMutation<ItemView, Error, OutcomeVariables>({ mutationKey: outcomeMutationKey });
 
 /** This item's outcomes still on their way: `paused` while the phone is offline. */
 export const usePendingOutcomes = (itemId: number) =>

@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api';
 import { eventDayKeys } from './keys';
-import type { ItemDetail } from './types';
+import type { ItemView } from './types';
 
-export const startRepair = (id: number) => api<ItemDetail>('POST', `/api/items/${id}/start`, {});
+export const startRepair = (id: number) => api<ItemView>('POST', `/api/items/${id}/start`, {});
 
 export function useStartRepair(id: number) {
   const qc = useQueryClient();
