@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { Link, NavLink, Outlet, useNavigate, useNavigation } from 'react-router';
 import { paths } from '../config/paths';
 import { groupsWithRole, useUser } from '../lib/auth';
-import { useSignOut } from '../features/auth/api/sign-in';
+import { useSignOut } from '../features/auth/api/sign-out';
 import { Logo } from '../components/layouts/logo';
 
 const linkClass = ({ isActive }: { isActive: boolean }) =>

@@ -1,6 +1,6 @@
 import { Link } from 'react-router';
 import { paths } from '../config/paths';
-import { usePublicGroups } from '../features/groups/api/public-groups';
+import { usePublicGroups } from '../features/groups/api/get-public-groups';
 import { Alert, Spinner } from '../components/ui/feedback';
 
 const steps = [

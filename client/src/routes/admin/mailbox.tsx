@@ -5,7 +5,9 @@ import { Button } from '../../components/ui/button';
 import { ConfirmDialog } from '../../components/ui/confirm-dialog';
 import { Alert, Card, EmptyState, PageTitle, Spinner } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
-import { useClearMailbox, useMail, useMailbox } from '../../features/admin/api/mailbox';
+import { useClearMailbox } from '../../features/admin/api/clear-mailbox';
+import { useMail } from '../../features/admin/api/get-mail';
+import { useMailbox } from '../../features/admin/api/get-mailbox';
 
 /** The local mailbox: every mail Mendery sent while it runs with its own SMTP catcher. */
 export function MailboxPage() {

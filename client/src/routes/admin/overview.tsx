@@ -1,7 +1,9 @@
 import { Link } from 'react-router';
 import { Alert, Card, PageTitle, Spinner } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
-import { useAdminGroups, useAdminUsers, useOutbox } from '../../features/admin/api/overview';
+import { useAdminGroups } from '../../features/admin/api/get-admin-groups';
+import { useAdminUsers } from '../../features/admin/api/get-admin-users';
+import { useOutbox } from '../../features/admin/api/get-outbox';
 
 export function AdminOverviewPage() {
   const groups = useAdminGroups();

@@ -5,7 +5,9 @@ import { Button } from '../../components/ui/button';
 import { Alert, Card, Spinner } from '../../components/ui/feedback';
 import { TextField } from '../../components/ui/field';
 import { paths } from '../../config/paths';
-import { useConfirmReset, useRequestReset, useVerifyEmail } from '../../features/auth/api/account-links';
+import { useConfirmReset } from '../../features/auth/api/confirm-reset';
+import { useRequestReset } from '../../features/auth/api/request-reset';
+import { useVerifyEmail } from '../../features/auth/api/verify-email';
 import { applyServerErrors, useZodForm } from '../../lib/form';
 
 export function VerifyEmailPage() {

@@ -7,7 +7,9 @@ import { Alert, Card, Spinner } from '../../components/ui/feedback';
 import { TextField } from '../../components/ui/field';
 import { paths } from '../../config/paths';
 import { useUser } from '../../lib/auth';
-import { useAcceptInvite, useInvitation, useSignupFromInvite } from '../../features/groups/api/invites';
+import { useAcceptInvite } from '../../features/groups/api/accept-invite';
+import { useInvitation } from '../../features/groups/api/get-invitation';
+import { useSignUpFromInvite } from '../../features/groups/api/sign-up-from-invite';
 import { applyServerErrors, useZodForm } from '../../lib/form';
 import { landingPath } from '../../lib/roles';
 
@@ -17,7 +19,7 @@ export function JoinPage() {
   const invitation = useInvitation(token);
   const { data: user } = useUser();
   const accept = useAcceptInvite(token);
-  const signup = useSignupFromInvite(token);
+  const signup = useSignUpFromInvite(token);
   const navigate = useNavigate();
   const form = useZodForm(inviteSignupSchema, { name: '', password: '' });
   const [formError, setFormError] = useState<string | null>(null);

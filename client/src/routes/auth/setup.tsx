@@ -6,7 +6,7 @@ import { Alert, Card, PageTitle, Spinner } from '../../components/ui/feedback';
 import { TextField } from '../../components/ui/field';
 import { paths } from '../../config/paths';
 import { useConfig } from '../../features/auth/api/get-config';
-import { useCreateFirstAdmin } from '../../features/auth/api/sign-in';
+import { useCreateFirstAdmin } from '../../features/auth/api/create-first-admin';
 import { applyServerErrors, useZodForm } from '../../lib/form';
 
 /** Shown once, on an empty installation: the first person becomes the platform admin. */

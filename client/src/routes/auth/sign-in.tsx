@@ -7,8 +7,8 @@ import { Alert, Card } from '../../components/ui/feedback';
 import { TextField } from '../../components/ui/field';
 import { paths } from '../../config/paths';
 import { useConfig } from '../../features/auth/api/get-config';
-import { useUser } from '../../lib/auth';
 import { useSignIn } from '../../features/auth/api/sign-in';
+import { useUser } from '../../lib/auth';
 import { applyServerErrors, useZodForm } from '../../lib/form';
 import { landingPath } from '../../lib/roles';
 

@@ -5,8 +5,8 @@ import { Button } from '../../components/ui/button';
 import { Alert, Card, PageTitle, Spinner } from '../../components/ui/feedback';
 import { SelectField, TextField } from '../../components/ui/field';
 import { paths } from '../../config/paths';
-import { useSignUp } from '../../features/auth/api/account-links';
-import { usePublicGroups } from '../../features/groups/api/public-groups';
+import { useSignUp } from '../../features/auth/api/sign-up';
+import { usePublicGroups } from '../../features/groups/api/get-public-groups';
 import { applyServerErrors, useZodForm } from '../../lib/form';
 
 export function VolunteerPage() {

@@ -13,7 +13,8 @@ import { useCancelBooking } from '../../features/bookings/api/cancel-booking';
 import { useBooking } from '../../features/bookings/api/get-booking';
 import { useMoveBooking, useRefreshBooking } from '../../features/bookings/api/move-booking';
 import { uploadPhotos } from '../../features/bookings/api/upload-photos';
-import { eventKeys, useEvent } from '../../features/events/api/events';
+import { eventKeys } from '../../features/events/api/keys';
+import { useEvent } from '../../features/events/api/get-event';
 import { StatusBadge } from '../../features/events/components/places-bar';
 import { queryClient } from '../../lib/query-client';
 

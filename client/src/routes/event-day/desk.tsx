@@ -9,7 +9,8 @@ import { Button } from '../../components/ui/button';
 import { Alert, Card, EmptyState, PageTitle, Spinner } from '../../components/ui/feedback';
 import { CheckField, SelectField, TextAreaField, TextField } from '../../components/ui/field';
 import { paths } from '../../config/paths';
-import { useCategories, type Category } from '../../features/events/api/events';
+import { useCategoriesQuery } from '../../features/categories/api/get-categories';
+import type { Category } from '../../../../shared/api/categories';
 import { useCheckIn } from '../../features/event-day/api/check-in';
 import { useAddWalkIn } from '../../features/event-day/api/add-walk-in';
 import { useDesk } from '../../features/event-day/api/get-desk';
@@ -385,7 +386,7 @@ interface Row {
 
 /** Check-in item by item: arrived, did not come or withdrawn; category confirmed or corrected; weight if weighed. */
 function CheckInPanel({ desk, booking, onClose }: { desk: DeskView; booking: DeskBooking; onClose: () => void }) {
-  const { data: categories } = useCategories();
+  const { data: categories } = useCategoriesQuery();
   const checkIn = useCheckIn(desk.event.id);
   const [rows, setRows] = useState<Record<number, Row>>(() =>
     Object.fromEntries(
@@ -537,7 +538,7 @@ function CheckInPanel({ desk, booking, onClose }: { desk: DeskView; booking: Des
 
 /** A walk-in: the same item questions as booking, fast, with the house rules accepted by a tick and a typed name. */
 function WalkInForm({ desk, onDone }: { desk: DeskView; onDone: () => void }) {
-  const { data: categories } = useCategories();
+  const { data: categories } = useCategoriesQuery();
   const walkIn = useAddWalkIn(desk.event.id);
   const [issued, setIssued] = useState<IssuedItem[] | null>(null);
   const [formError, setFormError] = useState<string | null>(null);

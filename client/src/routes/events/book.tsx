@@ -16,7 +16,11 @@ import { TimeTiles } from '../../features/bookings/components/time-tiles';
 import { useCreateBooking } from '../../features/bookings/api/create-booking';
 import { useJoinWaitlist } from '../../features/bookings/api/join-waitlist';
 import { uploadPhotos } from '../../features/bookings/api/upload-photos';
-import { eventKeys, useCategories, useEvent, type Category, type EventDetail } from '../../features/events/api/events';
+import { eventKeys } from '../../features/events/api/keys';
+import { useCategoriesQuery } from '../../features/categories/api/get-categories';
+import { useEvent } from '../../features/events/api/get-event';
+import type { Category } from '../../../../shared/api/categories';
+import type { EventDetail } from '../../../../shared/api/events';
 import { queryClient } from '../../lib/query-client';
 import { ApiError } from '../../lib/api';
 import { applyServerErrors, useZodForm } from '../../lib/form';
@@ -26,7 +30,7 @@ const emptyItem = { categoryId: '' as unknown as number, brand: '', model: '', f
 export function BookingPage() {
   const id = Number(useParams().eventId);
   const event = useEvent(id);
-  const categories = useCategories();
+  const categories = useCategoriesQuery();
   if (event.isPending || categories.isPending) return <Spinner label="Loading the booking form…" />;
   if (event.error)
     return (

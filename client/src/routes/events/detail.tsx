@@ -5,13 +5,14 @@ import { formatDay, formatTime, formatTimeRange, WHAT_TO_BRING } from '../../../
 import { Alert, Card, Spinner } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
 import { useUser } from '../../lib/auth';
-import { useCategories, useEvent } from '../../features/events/api/events';
+import { useCategoriesQuery } from '../../features/categories/api/get-categories';
+import { useEvent } from '../../features/events/api/get-event';
 import { PlacesBar, StatusBadge } from '../../features/events/components/places-bar';
 
 export function EventPage() {
   const id = Number(useParams().eventId);
   const event = useEvent(id);
-  const categories = useCategories();
+  const categories = useCategoriesQuery();
   const { data: user } = useUser();
   if (event.isPending) return <Spinner label="Loading the session…" />;
   if (event.error)

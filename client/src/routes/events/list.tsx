@@ -5,9 +5,10 @@ import { Alert, Card, EmptyState, PageTitle, Spinner } from '../../components/ui
 import { MonthCalendar } from '../../components/ui/month-calendar';
 import { SelectField } from '../../components/ui/field';
 import { paths } from '../../config/paths';
-import { useCategories, useEvents } from '../../features/events/api/events';
+import { useCategoriesQuery } from '../../features/categories/api/get-categories';
+import { useEvents } from '../../features/events/api/get-events';
+import { usePublicGroups } from '../../features/groups/api/get-public-groups';
 import { PlacesBar } from '../../features/events/components/places-bar';
-import { usePublicGroups } from '../../features/groups/api/public-groups';
 
 /** Upcoming sessions as a month calendar or a list, filtered by group and by the kind of item. */
 export function EventsPage() {
@@ -18,7 +19,7 @@ export function EventsPage() {
   const categoryId = Number(params.get('category')) || undefined;
   const events = useEvents({ groupId, categoryId });
   const groups = usePublicGroups();
-  const categories = useCategories();
+  const categories = useCategoriesQuery();
   const set = (k: string, v: string) => {
     const next = new URLSearchParams(params);
     if (v) next.set(k, v);

@@ -7,8 +7,9 @@ import { Button } from '../../components/ui/button';
 import { ConfirmDialog } from '../../components/ui/confirm-dialog';
 import { Alert, Card, EmptyState, Spinner } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
-import { useEvent, useEventAction } from '../../features/events/api/events';
-import { useEventBookings } from '../../features/events/api/organiser';
+import { useEvent } from '../../features/events/api/get-event';
+import { useChangeEvent } from '../../features/events/api/change-event';
+import { useEventBookings } from '../../features/events/api/get-event-bookings';
 import { PlacesBar, StatusBadge } from '../../features/events/components/places-bar';
 
 /** The organiser's view of one session: its state, its slots, and what is coming. */
@@ -16,7 +17,7 @@ export function ManageEventPage() {
   const id = Number(useParams().eventId);
   const event = useEvent(id);
   const coming = useEventBookings(id);
-  const action = useEventAction(id);
+  const action = useChangeEvent(id);
   const [ask, setAsk] = useState<null | 'publish' | 'close' | 'cancel'>(null);
   const [reason, setReason] = useState('');
   if (event.isPending) return <Spinner />;
@@ -121,11 +122,7 @@ export function ManageEventPage() {
                         onKeyDown={(ev) => ev.key === 'Enter' && ev.currentTarget.blur()}
                         onBlur={(ev) =>
                           Number(ev.target.value) !== s.capacity &&
-                          action.mutate({
-                            method: 'PATCH',
-                            path: `/slots/${s.id}`,
-                            body: { capacity: Number(ev.target.value) },
-                          })
+                          action.mutate({ kind: 'set-capacity', slotId: s.id, capacity: Number(ev.target.value) })
                         }
                       />
                     ) : (
@@ -144,7 +141,7 @@ export function ManageEventPage() {
                     {draft && (
                       <button
                         className="rounded px-2 py-1 font-semibold text-alert hover:bg-alert-light"
-                        onClick={() => action.mutate({ method: 'DELETE', path: `/slots/${s.id}` })}
+                        onClick={() => action.mutate({ kind: 'remove-slot', slotId: s.id })}
                       >
                         Remove
                       </button>
@@ -270,16 +267,13 @@ export function ManageEventPage() {
         onCancel={() => setAsk(null)}
         onConfirm={() =>
           ask &&
-          action.mutate(
-            { method: 'POST', path: `/${ask}`, body: ask === 'cancel' && reason ? { reason } : {} },
-            {
-              onSettled: () => {
-                setAsk(null);
-                setReason('');
-                coming.refetch();
-              },
+          action.mutate(ask === 'cancel' ? { kind: 'cancel', reason: reason || undefined } : { kind: ask }, {
+            onSettled: () => {
+              setAsk(null);
+              setReason('');
+              coming.refetch();
             },
-          )
+          })
         }
       >
         {ask === 'cancel' && (

@@ -3,9 +3,9 @@ import { formatDay, formatTimeRange } from '../../../../shared/format';
 import { GroupTabs } from '../../components/layouts/group-tabs';
 import { Alert, EmptyState, Spinner } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
-import { useGroupEvents } from '../../features/events/api/events';
+import { useGroupEvents } from '../../features/events/api/get-group-events';
+import { useGroupSettings } from '../../features/groups/api/get-group-settings';
 import { PlacesBar, StatusBadge } from '../../features/events/components/places-bar';
-import { useGroupSettings } from '../../features/events/api/organiser';
 
 export function GroupEventsPage() {
   const groupId = Number(useParams().groupId);

@@ -9,8 +9,9 @@ import { Button } from '../../components/ui/button';
 import { Alert, Card, Spinner } from '../../components/ui/feedback';
 import { SelectField, TextField } from '../../components/ui/field';
 import { paths } from '../../config/paths';
-import { useCreateEvent } from '../../features/events/api/events';
-import { useGroupSettings, useVenues } from '../../features/events/api/organiser';
+import { useCreateEvent } from '../../features/events/api/create-event';
+import { useGroupSettings } from '../../features/groups/api/get-group-settings';
+import { useVenues } from '../../features/groups/api/get-venues';
 import { ApiError } from '../../lib/api';
 
 interface Values {

@@ -5,8 +5,11 @@ import { Button } from '../../components/ui/button';
 import { ConfirmDialog } from '../../components/ui/confirm-dialog';
 import { GroupTabs } from '../../components/layouts/group-tabs';
 import { Alert, Card, EmptyState, Spinner } from '../../components/ui/feedback';
-import { useApproveMember, useMembers, useRemoveMember, type Member } from '../../features/groups/api/members';
-import { useInvite } from '../../features/groups/api/invites';
+import { useApproveMember } from '../../features/groups/api/approve-member';
+import { useMembers } from '../../features/groups/api/get-members';
+import { useRemoveMember } from '../../features/groups/api/remove-member';
+import { useInviteMember } from '../../features/groups/api/invite-member';
+import type { Member } from '../../../../shared/api/groups';
 import { inviteSchema } from '../../../../shared/schemas/auth';
 import { SelectField, TextField } from '../../components/ui/field';
 import { applyServerErrors, useZodForm } from '../../lib/form';
@@ -146,7 +149,7 @@ export function GroupPeoplePage() {
 }
 
 function InviteForm({ groupId }: { groupId: number }) {
-  const invite = useInvite(groupId);
+  const invite = useInviteMember(groupId);
   const form = useZodForm(inviteSchema, { email: '', role: 'fixer' });
   const [error, setError] = useState<string | null>(null);
   return (

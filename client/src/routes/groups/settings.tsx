@@ -9,16 +9,22 @@ import { CheckField } from '../../components/ui/field';
 import { useSharing } from '../../features/toolkit/api/get-sharing';
 import { useSetSharing } from '../../features/toolkit/api/set-sharing';
 import { TextField } from '../../components/ui/field';
-import { useCategories } from '../../features/events/api/events';
-import { useCreateVenue, useGroupSettings, useSaveGroupSettings, useVenues } from '../../features/events/api/organiser';
+import { useCategoriesQuery } from '../../features/categories/api/get-categories';
+import { useCreateVenue } from '../../features/groups/api/create-venue';
+import { useGroupSettings } from '../../features/groups/api/get-group-settings';
+import { useSaveGroupSettings } from '../../features/groups/api/save-group-settings';
+import { useVenues } from '../../features/groups/api/get-venues';
+import { eventKeys } from '../../features/events/api/keys';
+import { queryClient } from '../../lib/query-client';
 import { applyServerErrors, useZodForm } from '../../lib/form';
 
 export function GroupSettingsPage() {
   const groupId = Number(useParams().groupId);
   const settings = useGroupSettings(groupId);
-  const categories = useCategories();
+  const categories = useCategoriesQuery();
   const venues = useVenues(groupId);
-  const save = useSaveGroupSettings(groupId);
+  // The house rules and refused kinds are part of every event the group shows.
+  const save = useSaveGroupSettings(groupId, () => queryClient.invalidateQueries({ queryKey: eventKeys.all }));
   const addVenue = useCreateVenue(groupId);
   const [rules, setRules] = useState('');
   const [excluded, setExcluded] = useState<Set<number>>(new Set());

@@ -1,8 +1,8 @@
 import { useParams, type LoaderFunctionArgs } from 'react-router';
 import { GroupTabs } from '../../components/layouts/group-tabs';
 import { PageTitle } from '../../components/ui/feedback';
-import { useGroupEvents } from '../../features/events/api/events';
-import { useGroupSettings } from '../../features/events/api/organiser';
+import { useGroupEvents } from '../../features/events/api/get-group-events';
+import { useGroupSettings } from '../../features/groups/api/get-group-settings';
 import { methodQuery } from '../../features/impact/api/get-method';
 import { statsQuery } from '../../features/impact/api/get-stats';
 import { ImpactBody, statsFilterOf } from '../../features/impact/components/impact-body';

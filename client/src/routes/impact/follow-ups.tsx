@@ -8,7 +8,7 @@ import { Button } from '../../components/ui/button';
 import { ConfirmDialog } from '../../components/ui/confirm-dialog';
 import { Alert, EmptyState, Spinner } from '../../components/ui/feedback';
 import { TextAreaField } from '../../components/ui/field';
-import { useGroupSettings } from '../../features/events/api/organiser';
+import { useGroupSettings } from '../../features/groups/api/get-group-settings';
 import type { FollowUp } from '../../../../shared/api/impact';
 import { followUpsQuery, useFollowUps } from '../../features/impact/api/get-follow-ups';
 import { queryClient } from '../../lib/query-client';

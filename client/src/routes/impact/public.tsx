@@ -1,6 +1,6 @@
 import type { ReactNode } from 'react';
 import { Link, useParams, type LoaderFunctionArgs } from 'react-router';
-import { usePublicGroups } from '../../features/groups/api/public-groups';
+import { usePublicGroups } from '../../features/groups/api/get-public-groups';
 import {
   Area,
   AreaChart,

@@ -10,7 +10,7 @@ import {
 } from '../../../../shared/event-day/constants';
 import { Alert, EmptyState, PageTitle, Spinner } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
-import { useCategories } from '../../features/events/api/events';
+import { useCategoriesQuery } from '../../features/categories/api/get-categories';
 import type { RecordRow, RecordsFilter } from '../../../../shared/api/impact';
 import { recordsQuery, useRecords } from '../../features/impact/api/get-records';
 import { queryClient } from '../../lib/query-client';
@@ -68,7 +68,7 @@ const itemLabel = (r: RecordRow) => [r.brand, r.model].filter(Boolean).join(' ')
 export function ImpactRecordsPage() {
   const filter = useRecordsFilter();
   const records = useRecords(filter);
-  const categories = useCategories();
+  const categories = useCategoriesQuery();
   const page = filter.page ?? 1;
   const first = records.data?.records[0];
 

@@ -4,7 +4,7 @@ import { EQUIPMENT, EQUIPMENT_LABELS } from '../../../../shared/constants';
 import { EventTabs } from '../../components/layouts/event-tabs';
 import { Button } from '../../components/ui/button';
 import { Alert, Card, Spinner } from '../../components/ui/feedback';
-import { useEvent } from '../../features/events/api/events';
+import { useEvent } from '../../features/events/api/get-event';
 import type { Bench } from '../../../../shared/api/benches';
 import { useEventBenches } from '../../features/benches/api/get-event-benches';
 import { useSaveEventBenches } from '../../features/benches/api/save-event-benches';

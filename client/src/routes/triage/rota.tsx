@@ -5,7 +5,7 @@ import { formatTime, formatTimeRange } from '../../../../shared/format';
 import { EventTabs } from '../../components/layouts/event-tabs';
 import { Button } from '../../components/ui/button';
 import { Alert, Card, EmptyState, Spinner } from '../../components/ui/feedback';
-import { useEvent } from '../../features/events/api/events';
+import { useEvent } from '../../features/events/api/get-event';
 import { useEventBenches } from '../../features/benches/api/get-event-benches';
 import { useAskForSkills } from '../../features/rota/api/ask-for-skills';
 import { useRota } from '../../features/rota/api/get-rota';

@@ -4,7 +4,7 @@ import { SKILL_LABELS, type Skill } from '../../../../shared/constants';
 import { GroupTabs } from '../../components/layouts/group-tabs';
 import { Alert, Spinner } from '../../components/ui/feedback';
 import { useSkillsMatrix } from '../../features/skills/api/get-skills-matrix';
-import { useGroupSettings } from '../../features/events/api/organiser';
+import { useGroupSettings } from '../../features/groups/api/get-group-settings';
 
 const LEVEL = ['', 'learning', 'capable', 'expert'];
 const TONE = ['', 'bg-sage-light text-sage', 'bg-sage/60 text-white', 'bg-sage text-white'];

@@ -2,12 +2,12 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api';
 import { authKeys } from './keys';
 
-export interface PublicConfig {
+interface PublicConfig {
   demo: boolean;
   needsSetup: boolean;
 }
 export const configQuery = queryOptions({
-  queryKey: authKeys.config,
+  queryKey: authKeys.config(),
   queryFn: () => api<PublicConfig>('GET', '/api/public/config'),
 });
 export const useConfig = () => useQuery(configQuery);

@@ -1,1 +1,5 @@
-export const authKeys = { config: ['public', 'config'] as const };
+/** Every query key of the auth feature. */
+export const authKeys = {
+  all: ['auth'] as const,
+  config: () => [...authKeys.all, 'config'] as const,
+};

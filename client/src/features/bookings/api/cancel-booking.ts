@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api';
 import { bookingKeys } from './keys';
 
-export const cancelBooking = (reference: string, token: string) =>
+const cancelBooking = (reference: string, token: string) =>
   api('DELETE', `/api/bookings/${reference}?token=${encodeURIComponent(token)}`);
 
 export function useCancelBooking(reference: string, token: string, onChanged?: () => void) {

@@ -3,7 +3,7 @@ import type { BookingCreated } from '../../../../../shared/api/bookings';
 import type { CreateBookingInput } from '../../../../../shared/schemas/bookings';
 import { api } from '../../../lib/api';
 
-export const createBooking = (input: CreateBookingInput, idempotencyKey: string) =>
+const createBooking = (input: CreateBookingInput, idempotencyKey: string) =>
   api<BookingCreated>('POST', '/api/bookings', input, { 'Idempotency-Key': idempotencyKey });
 
 /**

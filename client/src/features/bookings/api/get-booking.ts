@@ -3,7 +3,7 @@ import type { BookingView } from '../../../../../shared/api/bookings';
 import { api } from '../../../lib/api';
 import { bookingKeys } from './keys';
 
-export const getBooking = (reference: string, token: string) =>
+const getBooking = (reference: string, token: string) =>
   api<BookingView>('GET', `/api/bookings/${reference}?token=${encodeURIComponent(token)}`);
 
 export const bookingQuery = (reference: string, token: string) =>

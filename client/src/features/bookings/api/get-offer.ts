@@ -3,7 +3,7 @@ import type { OfferView } from '../../../../../shared/api/bookings';
 import { api } from '../../../lib/api';
 import { bookingKeys } from './keys';
 
-export const getOffer = (token: string) => api<OfferView>('GET', `/api/waiting-list/${token}`);
+const getOffer = (token: string) => api<OfferView>('GET', `/api/waiting-list/${token}`);
 
 export const offerQuery = (token: string) =>
   queryOptions({ queryKey: bookingKeys.offer(token), queryFn: () => getOffer(token) });

@@ -2,7 +2,7 @@ import { useMutation } from '@tanstack/react-query';
 import type { CreateBookingInput } from '../../../../../shared/schemas/bookings';
 import { api } from '../../../lib/api';
 
-export const joinWaitlist = (eventId: number, input: CreateBookingInput) =>
+const joinWaitlist = (eventId: number, input: CreateBookingInput) =>
   api<{ position: number }>('POST', `/api/events/${eventId}/waitlist`, input);
 
 export const useJoinWaitlist = (eventId: number) =>

@@ -3,7 +3,7 @@ import type { BookingView } from '../../../../../shared/api/bookings';
 import { api } from '../../../lib/api';
 import { bookingKeys } from './keys';
 
-export const moveBooking = (reference: string, token: string, slotId: number) =>
+const moveBooking = (reference: string, token: string, slotId: number) =>
   api<BookingView>('POST', `/api/bookings/${reference}/move?token=${encodeURIComponent(token)}`, { slotId });
 
 export function useMoveBooking(reference: string, token: string, onChanged?: () => void) {

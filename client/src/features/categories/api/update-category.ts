@@ -4,7 +4,7 @@ import type { CategoryPatchInput } from '../../../../../shared/schemas/categorie
 import { api } from '../../../lib/api';
 import { categoryKeys } from './keys';
 
-export const updateCategory = (id: number, patch: CategoryPatchInput) =>
+const updateCategory = (id: number, patch: CategoryPatchInput) =>
   api<Category>('PATCH', `/api/categories/${id}`, patch);
 
 export function useUpdateCategory(id: number) {

@@ -1,0 +1,11 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { GroupMembers } from '../../../../../shared/api/groups';
+import { api } from '../../../lib/api';
+import { groupKeys } from './keys';
+
+const getMembers = (groupId: number) => api<GroupMembers>('GET', `/api/groups/${groupId}/members`);
+
+export const membersQuery = (groupId: number) =>
+  queryOptions({ queryKey: groupKeys.members(groupId), queryFn: () => getMembers(groupId) });
+
+export const useMembers = (groupId: number) => useQuery(membersQuery(groupId));

@@ -1,0 +1,20 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { api } from '../../../lib/api';
+import { groupKeys } from './keys';
+
+type SettingsInput = { houseRules: string; excludedCategoryIds: number[] };
+
+const saveGroupSettings = (groupId: number, s: SettingsInput) =>
+  api('PUT', `/api/groups/${groupId}/settings`, s);
+
+/** `onSaved` lets the page refresh what other features show of the settings (the events' house rules). */
+export function useSaveGroupSettings(groupId: number, onSaved?: () => unknown) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (s: SettingsInput) => saveGroupSettings(groupId, s),
+    onSuccess: () => {
+      qc.invalidateQueries({ queryKey: groupKeys.settings(groupId) });
+      onSaved?.();
+    },
+  });
+}

@@ -1,0 +1,48 @@
+import type { GroupRole, MembershipStatus } from '../constants';
+
+/* The groups API's answers as the client reads them (dates as ISO strings). */
+
+export interface PublicGroup {
+  id: number;
+  name: string;
+  slug: string;
+  town: string;
+  description: string;
+}
+export interface Member {
+  membershipId: number;
+  userId: number;
+  name: string;
+  email: string;
+  role: GroupRole;
+  status: MembershipStatus;
+  since: string;
+  verified: boolean;
+}
+export interface GroupMembers {
+  group: { id: number; name: string; town: string };
+  members: Member[];
+}
+export interface Invitation {
+  groupName: string;
+  role: GroupRole;
+  email: string;
+  hasAccount: boolean;
+}
+export interface Venue {
+  id: number;
+  groupId: number;
+  name: string;
+  address: string;
+  town: string;
+  accessNotes: string;
+}
+/** The group's own rules: what it takes and what visitors agree to. */
+export interface GroupSettings {
+  id: number;
+  name: string;
+  town: string;
+  timeZone: string;
+  houseRules: string;
+  excludedCategoryIds: number[];
+}
