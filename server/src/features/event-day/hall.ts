@@ -1,4 +1,3 @@
-import { and, asc, eq, gt, inArray, isNotNull, lte } from 'drizzle-orm';
 import QRCode from 'qrcode';
 import {
   isQueued,
@@ -9,66 +8,17 @@ import {
 } from '../../../../shared/event-day/constants';
 import { estimateWaits, liveWarnings, queueOrder } from '../../../../shared/event-day/queue';
 import { shortName, tagUrl } from '../../../../shared/event-day/tag-code';
+import { itemLabel } from '../../../../shared/item-label';
 import type { HallQueue, LiveView, PublicTag, TagSheet } from '../../../../shared/api/event-day';
 import type { AppContext } from '../../context';
-import {
-  bookingItems,
-  bookings,
-  categories,
-  eventBenches,
-  events,
-  itemAssignments,
-  itemOutcomes,
-  repairGroups,
-  shifts,
-  slots,
-  users,
-} from '../../db/schema/index';
 import { notFound } from '../../http/errors';
 import { eventLayout } from '../../core/benches';
-import { itemLabel } from '../../../../shared/item-label';
+import { eventWithGroup } from './queries/desk';
+import * as q from './queries/hall';
 
-/** Every item of the event that reached the desk, with its slot, plan and outcome: what the hall views are made of. */
-async function hallItems(ctx: AppContext, eventId: number) {
-  return ctx.database.db
-    .select({
-      id: bookingItems.id,
-      status: bookingItems.status,
-      queueNumber: bookingItems.queueNumber,
-      tagCode: bookingItems.tagCode,
-      checkedInAt: bookingItems.checkedInAt,
-      startedAt: bookingItems.startedAt,
-      doneAt: bookingItems.doneAt,
-      walkIn: bookings.walkIn,
-      visitorName: bookings.visitorName,
-      slotStartsAt: slots.startsAt,
-      categoryName: categories.name,
-      minutes: categories.repairMinutes,
-      brand: bookingItems.brand,
-      model: bookingItems.model,
-      fixerId: itemAssignments.userId,
-      benchId: itemAssignments.benchId,
-      outcome: itemOutcomes.outcome,
-    })
-    .from(bookingItems)
-    .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
-    .innerJoin(slots, eq(slots.id, bookings.slotId))
-    .innerJoin(categories, eq(categories.id, bookingItems.categoryId))
-    .leftJoin(itemAssignments, eq(itemAssignments.itemId, bookingItems.id))
-    .leftJoin(itemOutcomes, eq(itemOutcomes.itemId, bookingItems.id))
-    .where(and(eq(bookings.eventId, eventId), eq(bookings.status, 'confirmed'), isNotNull(bookingItems.checkedInAt)));
-}
-type HallItem = Awaited<ReturnType<typeof hallItems>>[number];
-
-/** Fixers whose shift covers this moment. */
-function fixersNow(ctx: AppContext, eventId: number, now: Date) {
-  return ctx.database.db
-    .select({ userId: shifts.userId, name: users.name, benchId: shifts.benchId })
-    .from(shifts)
-    .innerJoin(users, eq(users.id, shifts.userId))
-    .where(and(eq(shifts.eventId, eventId), eq(shifts.coming, true), lte(shifts.startsAt, now), gt(shifts.endsAt, now)))
-    .orderBy(asc(users.name));
-}
+type HallItem = q.HallItem;
+const hallItems = (ctx: AppContext, eventId: number) => q.hallItems(ctx.database.db, eventId);
+const fixersNow = (ctx: AppContext, eventId: number, now: Date) => q.fixersNow(ctx.database.db, eventId, now);
 
 function waitsFor(items: HallItem[], fixers: { userId: number }[], now: number) {
   const busy = new Map<number, number>();
@@ -96,11 +46,7 @@ function waitsFor(items: HallItem[], fixers: { userId: number }[], now: number) 
 }
 
 async function eventHeader(ctx: AppContext, eventId: number, publicOnly: boolean) {
-  const [e] = await ctx.database.db
-    .select({ event: events, group: repairGroups })
-    .from(events)
-    .innerJoin(repairGroups, eq(repairGroups.id, events.groupId))
-    .where(eq(events.id, eventId));
+  const e = await eventWithGroup(ctx.database.db, eventId);
   if (!e || (publicOnly && !['published', 'closed'].includes(e.event.status))) throw notFound('That event');
   return e;
 }
@@ -146,24 +92,15 @@ export async function liveView(ctx: AppContext, eventId: number): Promise<LiveVi
     fixersNow(ctx, eventId, now),
     eventLayout(ctx.database.db, eventId),
   ]);
-  const allBooked = await ctx.database.db
-    .select({ status: bookingItems.status })
-    .from(bookingItems)
-    .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
-    .where(and(eq(bookings.eventId, eventId), eq(bookings.status, 'confirmed')));
+  const allBooked = await q.bookedStatuses(ctx.database.db, eventId);
   const counts = Object.fromEntries(
     ITEM_STATUSES.map((s) => [s, allBooked.filter((b) => b.status === s).length]),
   ) as Record<ItemStatus, number>;
   const { waits, order } = waitsFor(items, fixers, now.getTime());
   const rank = new Map(order.map((q, i) => [q.id, i]));
-  const names = new Map(
-    (
-      await ctx.database.db
-        .select({ id: users.id, name: users.name })
-        .from(users)
-        .where(inArray(users.id, [0, ...new Set(items.map((i) => i.fixerId).filter((x): x is number => x !== null))]))
-    ).map((u) => [u.id, u.name]),
-  );
+  const names = await q.userNames(ctx.database.db, [
+    ...new Set(items.map((i) => i.fixerId).filter((x): x is number => x !== null)),
+  ]);
   const card = (i: HallItem) => ({
     id: i.id,
     queueNumber: i.queueNumber,
@@ -217,27 +154,7 @@ export async function liveView(ctx: AppContext, eventId: number): Promise<LiveVi
 
 /** What anyone scanning a tag sees: the item's kind, status and queue number — no names, no fault text. */
 export async function publicTag(ctx: AppContext, code: string): Promise<PublicTag> {
-  const [r] = await ctx.database.db
-    .select({
-      id: bookingItems.id,
-      status: bookingItems.status,
-      queueNumber: bookingItems.queueNumber,
-      tagCode: bookingItems.tagCode,
-      categoryName: categories.name,
-      eventId: events.id,
-      eventTitle: events.title,
-      eventStatus: events.status,
-      groupId: repairGroups.id,
-      groupName: repairGroups.name,
-      outcome: itemOutcomes.outcome,
-    })
-    .from(bookingItems)
-    .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
-    .innerJoin(events, eq(events.id, bookings.eventId))
-    .innerJoin(repairGroups, eq(repairGroups.id, events.groupId))
-    .innerJoin(categories, eq(categories.id, bookingItems.categoryId))
-    .leftJoin(itemOutcomes, eq(itemOutcomes.itemId, bookingItems.id))
-    .where(eq(bookingItems.tagCode, code));
+  const r = await q.tagRow(ctx.database.db, code);
   if (!r) throw notFound('That tag');
   let waitMinutes: number | null = null;
   if (isQueued(r.status)) {
@@ -268,33 +185,7 @@ export async function tags(
   filter: { slotId?: number; itemIds?: number[] },
 ): Promise<TagSheet> {
   const e = await eventHeader(ctx, eventId, false);
-  const rows = await ctx.database.db
-    .select({
-      id: bookingItems.id,
-      tagCode: bookingItems.tagCode,
-      queueNumber: bookingItems.queueNumber,
-      categoryName: categories.name,
-      mains: bookingItems.mains,
-      visitorName: bookings.visitorName,
-      slotId: bookings.slotId,
-      slotStartsAt: slots.startsAt,
-      benchName: eventBenches.name,
-    })
-    .from(bookingItems)
-    .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
-    .innerJoin(slots, eq(slots.id, bookings.slotId))
-    .innerJoin(categories, eq(categories.id, bookingItems.categoryId))
-    .leftJoin(itemAssignments, eq(itemAssignments.itemId, bookingItems.id))
-    .leftJoin(eventBenches, eq(eventBenches.id, itemAssignments.benchId))
-    .where(
-      and(
-        eq(bookings.eventId, eventId),
-        isNotNull(bookingItems.tagCode),
-        ...(filter.slotId ? [eq(bookings.slotId, filter.slotId)] : []),
-        ...(filter.itemIds?.length ? [inArray(bookingItems.id, filter.itemIds)] : []),
-      ),
-    )
-    .orderBy(asc(bookingItems.queueNumber));
+  const rows = await q.tagSheetRows(ctx.database.db, eventId, filter);
   return {
     event: { id: e.event.id, title: e.event.title, groupName: e.group.name, timeZone: e.group.timeZone },
     tags: await Promise.all(

@@ -1,12 +1,11 @@
 import { randomBytes } from 'node:crypto';
-import { asc, desc, eq, inArray } from 'drizzle-orm';
 import {
-  ITEM_STATUS_LABELS,
-  OUTCOME_LABELS,
   BARRIER_LABELS,
   canMoveTo,
   isOpen,
+  ITEM_STATUS_LABELS,
   mayStartRepair,
+  OUTCOME_LABELS,
   type ItemStatus,
 } from '../../../../shared/event-day/constants';
 import { formatTagCode, shortName } from '../../../../shared/event-day/tag-code';
@@ -16,30 +15,15 @@ import type { ItemView } from '../../../../shared/api/event-day';
 import type { SessionUser } from '../../../../shared/schemas/auth';
 import type { AppContext } from '../../context';
 import type { Tx } from '../../db/client';
-import {
-  bookingItems,
-  eventBenches,
-  events,
-  itemAssignments,
-  itemOutcomes,
-  itemPhotos,
-  itemStatusChanges,
-  safetyChecks,
-  users,
-} from '../../db/schema/index';
 import { hasGroupRole } from '../../auth/guards';
 import { HttpError } from '../../http/errors';
 import { loadItem, partsUsed } from '../../core/items';
+import * as q from './queries/items';
 
-/** Moves items to a status, writing one history row each with the time and who did it. */
+/** Moves items to a status the transition table allows, writing one history row each with the time and who did it. */
 export async function setStatus(
   tx: Tx,
-  changes: {
-    itemId: number;
-    from: ItemStatus | null;
-    to: ItemStatus;
-    extra?: Partial<typeof bookingItems.$inferInsert>;
-  }[],
+  changes: { itemId: number; from: ItemStatus | null; to: ItemStatus; extra?: q.ItemChanges }[],
   byUserId: number | null,
   note?: string,
 ) {
@@ -50,44 +34,27 @@ export async function setStatus(
         'bad-transition',
         `An item that is ${ITEM_STATUS_LABELS[c.from].toLowerCase()} cannot become ${ITEM_STATUS_LABELS[c.to].toLowerCase()}.`,
       );
-    await tx
-      .update(bookingItems)
-      .set({ status: c.to, ...c.extra })
-      .where(eq(bookingItems.id, c.itemId));
+    await q.updateItemStatus(tx, c.itemId, c.to, c.extra);
   }
   if (changes.length)
-    await tx
-      .insert(itemStatusChanges)
-      .values(
-        changes.map((c) => ({ itemId: c.itemId, fromStatus: c.from, toStatus: c.to, byUserId, note: note ?? null })),
-      );
+    await q.insertStatusChanges(
+      tx,
+      changes.map((c) => ({ itemId: c.itemId, fromStatus: c.from, toStatus: c.to, byUserId, note: note ?? null })),
+    );
 }
 
-/** Takes the event's next queue number under its row lock (the caller's transaction holds it until commit). */
+/** The event's next queue numbers, taken under its row lock (the caller's transaction holds it until commit). */
 export async function nextQueueNumbers(tx: Tx, eventId: number, n: number): Promise<number[]> {
-  if (n === 0) return [];
-  const [e] = await tx
-    .select({ counter: events.queueCounter })
-    .from(events)
-    .where(eq(events.id, eventId))
-    .for('update');
-  await tx
-    .update(events)
-    .set({ queueCounter: e.counter + n })
-    .where(eq(events.id, eventId));
-  return Array.from({ length: n }, (_, i) => e.counter + 1 + i);
+  return n === 0 ? [] : q.takeQueueNumbers(tx, eventId, n);
 }
 
 /** Fresh tag codes, checked against those already issued (the unique index is the final guard). */
 export async function newTagCodes(tx: Tx, n: number): Promise<string[]> {
+  if (n === 0) return [];
   for (let attempt = 0; attempt < 5; attempt++) {
     const codes = [...new Set(Array.from({ length: n }, () => formatTagCode(randomBytes(5))))];
     if (codes.length < n) continue;
-    const taken = await tx
-      .select({ code: bookingItems.tagCode })
-      .from(bookingItems)
-      .where(inArray(bookingItems.tagCode, codes));
-    if (taken.length === 0) return codes;
+    if ((await q.tagCodesTaken(tx, codes)).length === 0) return codes;
   }
   throw new Error('Could not find free tag codes.');
 }
@@ -98,39 +65,13 @@ export const isHeating = (slug: string) => (HEATING_CATEGORY_SLUGS as readonly s
 export async function itemView(ctx: AppContext, itemId: number, user: SessionUser): Promise<ItemView> {
   const { db } = ctx.database;
   const row = await loadItem(db, itemId);
-  const [placement] = await db
-    .select({
-      userId: itemAssignments.userId,
-      benchId: itemAssignments.benchId,
-      fixerName: users.name,
-      benchName: eventBenches.name,
-      startsAt: itemAssignments.startsAt,
-    })
-    .from(itemAssignments)
-    .innerJoin(users, eq(users.id, itemAssignments.userId))
-    .innerJoin(eventBenches, eq(eventBenches.id, itemAssignments.benchId))
-    .where(eq(itemAssignments.itemId, itemId));
-  const [outcome] = await db
-    .select({ o: itemOutcomes, byName: users.name })
-    .from(itemOutcomes)
-    .leftJoin(users, eq(users.id, itemOutcomes.recordedBy))
-    .where(eq(itemOutcomes.itemId, itemId));
-  const checks = await db
-    .select({ c: safetyChecks, byName: users.name })
-    .from(safetyChecks)
-    .leftJoin(users, eq(users.id, safetyChecks.checkedBy))
-    .where(eq(safetyChecks.itemId, itemId))
-    .orderBy(desc(safetyChecks.id));
-  const history = await db
-    .select({ h: itemStatusChanges, byName: users.name })
-    .from(itemStatusChanges)
-    .leftJoin(users, eq(users.id, itemStatusChanges.byUserId))
-    .where(eq(itemStatusChanges.itemId, itemId))
-    .orderBy(asc(itemStatusChanges.id));
-  const photos = await db
-    .select({ id: itemPhotos.id, kind: itemPhotos.kind, width: itemPhotos.width, height: itemPhotos.height })
-    .from(itemPhotos)
-    .where(eq(itemPhotos.itemId, itemId));
+  const [placement, outcome, checks, history, photos] = await Promise.all([
+    q.placementOf(db, itemId),
+    q.outcomeOf(db, itemId),
+    q.checksOf(db, itemId),
+    q.historyOf(db, itemId),
+    q.photosOf(db, itemId),
+  ]);
   const used = await partsUsed(db, itemId);
   const { item, booking, slot, event, group, category } = row;
   const staff = hasGroupRole(user, group.id, ['organiser', 'host']);

@@ -1,4 +1,3 @@
-import { and, desc, eq } from 'drizzle-orm';
 import type { z } from 'zod';
 import { mayRecordOutcome, mayStartRepair } from '../../../../shared/event-day/constants';
 import { mayRecordFixed } from '../../../../shared/safety/may-record-fixed';
@@ -9,13 +8,13 @@ import type { SessionUser } from '../../../../shared/schemas/auth';
 import type { AppContext } from '../../context';
 import type { DbOrTx, Tx } from '../../db/client';
 import { withDeadlockRetry } from '../../db/retry';
-import { itemAssignments, itemOutcomes, safetyChecks, shifts } from '../../db/schema/index';
 import { hasGroupRole } from '../../auth/guards';
 import { HttpError } from '../../http/errors';
 import { eventLayout } from '../../core/benches';
 import { runHooks } from '../../core/hooks';
 import { isHeating, setStatus } from './items';
 import { loadItem, type ItemRow } from '../../core/items';
+import * as q from './queries/outcomes';
 
 const forbidden = (message: string) => new HttpError(403, 'forbidden', message);
 
@@ -24,10 +23,7 @@ export async function assertMayRecord(tx: DbOrTx, row: ItemRow, user: SessionUse
   if (hasGroupRole(user, row.group.id, ['organiser'])) return;
   if (!hasGroupRole(user, row.group.id, ['fixer']))
     throw forbidden('Only the fixer working on this item or an organiser can record this.');
-  const [a] = await tx
-    .select({ userId: itemAssignments.userId })
-    .from(itemAssignments)
-    .where(eq(itemAssignments.itemId, row.item.id));
+  const a = await q.assignmentOf(tx, row.item.id);
   if (a && a.userId !== user.id)
     throw forbidden('This item is with another fixer. Ask an organiser to move it to you first.');
 }
@@ -48,48 +44,23 @@ export async function startRepair(ctx: AppContext, itemId: number, user: Session
             ? 'Check the item in at reception first.'
             : `This item is ${row.item.status}; it cannot go to a bench now.`,
         );
-      const [a] = await tx.select().from(itemAssignments).where(eq(itemAssignments.itemId, itemId));
+      const a = await q.assignmentOf(tx, itemId);
       const fixerId =
         a && hasGroupRole(user, row.group.id, ['organiser']) && !hasGroupRole(user, row.group.id, ['fixer'])
           ? a.userId
           : user.id;
       let benchId = a?.userId === fixerId ? a.benchId : undefined;
       if (benchId === undefined) {
-        const [shift] = await tx
-          .select({ benchId: shifts.benchId })
-          .from(shifts)
-          .where(and(eq(shifts.eventId, row.event.id), eq(shifts.userId, fixerId)));
+        const shiftBench = await q.shiftBenchOf(tx, row.event.id, fixerId);
         const benches = await eventLayout(tx, row.event.id);
         benchId =
-          shift?.benchId ??
+          shiftBench ??
           benches.find((b) => row.category.equipment.every((q) => b.equipment.includes(q)))?.id ??
           benches[0]?.id ??
           a?.benchId;
       }
-      if (benchId !== undefined) {
-        await tx
-          .insert(itemAssignments)
-          .values({
-            itemId,
-            eventId: row.event.id,
-            userId: fixerId,
-            benchId,
-            startsAt: new Date(),
-            locked: true,
-            source: 'hand',
-          })
-          .onDuplicateKeyUpdate({
-            set: {
-              userId: fixerId,
-              benchId,
-              startsAt: new Date(),
-              locked: true,
-              source: 'hand',
-              runId: null,
-              updatedAt: new Date(),
-            },
-          });
-      }
+      if (benchId !== undefined)
+        await q.placeByHand(tx, { itemId, eventId: row.event.id, userId: fixerId, benchId, startsAt: new Date() });
       await setStatus(
         tx,
         [{ itemId, from: row.item.status, to: 'at-bench', extra: { startedAt: new Date() } }],
@@ -115,18 +86,15 @@ function verdictOf(row: ItemRow, s: SafetyCheckValues): SafetyVerdict {
 
 async function insertCheck(tx: Tx, row: ItemRow, s: SafetyCheckValues, user: SessionUser) {
   const v = verdictOf(row, s);
-  const [{ id }] = await tx
-    .insert(safetyChecks)
-    .values({
-      itemId: row.item.id,
-      applianceClass: s.applianceClass,
-      readings: s,
-      instrument: s.instrument ?? null,
-      pass: v.pass,
-      failures: [...v.failures, ...v.missing.map((m) => `Missing: ${m}.`)],
-      checkedBy: user.id,
-    })
-    .$returningId();
+  const id = await q.insertSafetyCheck(tx, {
+    itemId: row.item.id,
+    applianceClass: s.applianceClass,
+    readings: s,
+    instrument: s.instrument ?? null,
+    pass: v.pass,
+    failures: [...v.failures, ...v.missing.map((m) => `Missing: ${m}.`)],
+    checkedBy: user.id,
+  });
   return { id, ...v };
 }
 
@@ -186,12 +154,7 @@ export async function recordOutcome(
             ? 'Check the item in at reception first.'
             : `This item is marked ${row.item.status}.`,
         );
-      const [latest] = await tx
-        .select()
-        .from(safetyChecks)
-        .where(eq(safetyChecks.itemId, itemId))
-        .orderBy(desc(safetyChecks.id))
-        .limit(1);
+      const latest = await q.latestCheckOf(tx, itemId);
       if (input.outcome === 'fixed') {
         const fixed = mayRecordFixed({ mains: Boolean(row.item.mains) }, latest);
         if (!fixed.ok) throw new HttpError(422, fixed.code, fixed.message, { [fixed.field]: fixed.fieldMessage });
@@ -208,22 +171,17 @@ export async function recordOutcome(
         recordedBy: user.id,
         recordedAt: new Date(),
       };
-      await tx
-        .insert(itemOutcomes)
-        .values({ itemId, ...values })
-        .onDuplicateKeyUpdate({ set: values });
-      const [a] = await tx.select().from(itemAssignments).where(eq(itemAssignments.itemId, itemId));
-      if (!a && hasGroupRole(user, row.group.id, ['fixer'])) {
-        const benches = await eventLayout(tx, row.event.id);
-        if (benches[0])
-          await tx.insert(itemAssignments).values({
+      await q.saveOutcome(tx, itemId, values);
+      // A fixer recording an item nobody had takes it, at the event's first bench (if it has benches at all).
+      if (!(await q.assignmentOf(tx, itemId)) && hasGroupRole(user, row.group.id, ['fixer'])) {
+        const [first] = await eventLayout(tx, row.event.id);
+        if (first)
+          await q.placeByHand(tx, {
             itemId,
             eventId: row.event.id,
             userId: user.id,
-            benchId: benches[0].id,
+            benchId: first.id,
             startsAt: row.item.startedAt ?? new Date(),
-            locked: true,
-            source: 'hand',
           });
       }
       await setStatus(

@@ -5,12 +5,13 @@ import { normaliseTagCode } from '../../../../shared/event-day/tag-code';
 import { checkInSchema, outcomeSchema, safetyCheckSchema, walkInSchema } from '../../../../shared/schemas/event-day';
 import type { AppContext } from '../../context';
 import { requireGroupRole, requireUser } from '../../auth/guards';
-import { eq } from 'drizzle-orm';
-import { bookings, events } from '../../db/schema/index';
 import { notFound } from '../../http/errors';
 import { body, params, query } from '../../http/validate';
 import { eventGroupId } from '../../core/events';
-import { checkIn, deskEvents, deskView, walkIn } from './desk';
+import { checkIn } from './check-in';
+import { deskEvents, deskView } from './desk';
+import { groupOfBooking } from './queries/desk';
+import { walkIn } from './walk-in';
 import { hallQueue, liveView, publicTag, tags } from './hall';
 import { itemView } from './items';
 import { itemGroupId, loadItem } from '../../core/items';
@@ -53,13 +54,7 @@ export function eventDayRoutes(ctx: AppContext) {
   );
   const bookingGroup = async (req: Request) => {
     const ref = normaliseReference(String(req.params.reference ?? ''));
-    if (!ref) return 0;
-    const [b] = await db
-      .select({ groupId: events.groupId })
-      .from(bookings)
-      .innerJoin(events, eq(events.id, bookings.eventId))
-      .where(eq(bookings.reference, ref));
-    return b?.groupId ?? 0;
+    return ref ? groupOfBooking(db, ref) : 0;
   };
 
   r.get('/desk/events', requireUser, async (req, res) => res.json(await deskEvents(ctx, req.user!)));
