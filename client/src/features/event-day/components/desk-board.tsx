@@ -1,0 +1,207 @@
+import { useMemo, useRef, useState } from 'react';
+import { Link, useNavigate } from 'react-router';
+import { isQueued, type ItemStatus } from '../../../../../shared/event-day/constants';
+import { readScan } from '../../../../../shared/event-day/tag-code';
+import { formatDay, formatTimeRange } from '../../../../../shared/format';
+import { Button } from '../../../components/ui/button';
+import { Alert, Card, PageTitle } from '../../../components/ui/feedback';
+import { TextField } from '../../../components/ui/field';
+import { paths } from '../../../config/paths';
+import type { DeskBooking, DeskView } from '../api/types';
+import { QrScan } from '../qr-scan';
+import { CheckInPanel } from './check-in-panel';
+import type { DeskScreening } from './desk-screening';
+import { DeskSlots } from './desk-slots';
+import { WalkInForm } from './walk-in-form';
+
+/** Today's bookings by slot, search, scan, check-in item by item, walk-ins. */
+export function DeskBoard({ desk, screening }: { desk: DeskView; screening: DeskScreening }) {
+  const eventId = desk.event.id;
+  const navigate = useNavigate();
+  const [search, setSearch] = useState('');
+  const [selected, setSelected] = useState<string | null>(null);
+  const [scanning, setScanning] = useState(false);
+  const [walkIn, setWalkIn] = useState(false);
+  const [notice, setNotice] = useState<string | null>(null);
+  const searchRef = useRef<HTMLInputElement>(null);
+
+  const all = useMemo(() => desk.slots.flatMap((s) => s.bookings), [desk]);
+
+  const find = (text: string) => {
+    const scan = readScan(text);
+    if (scan?.kind === 'tag') {
+      const item = all.flatMap((b) => b.items).find((i) => i.tagCode === scan.code);
+      if (item) return navigate(paths.item(item.id));
+    }
+    if (scan?.kind === 'booking') {
+      const b = all.find((x) => x.reference === scan.reference);
+      if (b) {
+        setSelected(b.reference);
+        setNotice(null);
+        return;
+      }
+      setNotice(
+        `No booking ${scan.reference} for this session. Check the date on the visitor’s mail, or take them as a walk-in.`,
+      );
+      return;
+    }
+    const q = text.trim().toLowerCase();
+    const named = q ? all.filter((b) => b.visitorName.toLowerCase().includes(q)) : [];
+    if (named.length === 1) {
+      setSelected(named[0].reference);
+      setNotice(null);
+      return;
+    }
+    setNotice(
+      q && named.length === 0
+        ? `No booking matches “${text.trim()}”. Take them as a walk-in if they have no booking.`
+        : null,
+    );
+  };
+
+  const q = search.trim().toLowerCase();
+  const matches = (b: DeskBooking) =>
+    !q ||
+    b.visitorName.toLowerCase().includes(q) ||
+    b.reference.toLowerCase().replace('-', '').includes(q.replace('-', ''));
+  const counts = all
+    .flatMap((b) => b.items)
+    .reduce((m, i) => ({ ...m, [i.status]: (m[i.status] ?? 0) + 1 }), {} as Partial<Record<ItemStatus, number>>);
+  const current = selected ? all.find((b) => b.reference === selected) : undefined;
+  const { event } = desk;
+
+  return (
+    <div className="space-y-5">
+      <PageTitle
+        title="Reception desk"
+        lead={
+          <>
+            {event.title} · {formatDay(event.startsAt, event.timeZone)},{' '}
+            {formatTimeRange(event.startsAt, event.endsAt, event.timeZone)}
+          </>
+        }
+      />
+      {!desk.open && (
+        <Alert tone="caution" title="Check-in is not open">
+          Check-in opens on the day of the session.
+        </Alert>
+      )}
+      <div className="flex flex-wrap gap-2 text-sm" aria-label="Items today">
+        <span className="rounded-lg bg-white px-3 py-1.5 ring-1 ring-ink/10">
+          <b>{counts.booked ?? 0}</b> still to come
+        </span>
+        <span className="rounded-lg bg-white px-3 py-1.5 ring-1 ring-ink/10">
+          <b>{all.flatMap((b) => b.items).filter((i) => isQueued(i.status)).length}</b> waiting
+        </span>
+        <span className="rounded-lg bg-white px-3 py-1.5 ring-1 ring-ink/10">
+          <b>{counts['at-bench'] ?? 0}</b> at a bench
+        </span>
+        <span className="rounded-lg bg-white px-3 py-1.5 ring-1 ring-ink/10">
+          <b>{counts.done ?? 0}</b> done
+        </span>
+        <span className="rounded-lg bg-white px-3 py-1.5 ring-1 ring-ink/10">
+          <b>{counts['no-show'] ?? 0}</b> did not come
+        </span>
+        <Link className="ml-auto font-semibold text-navy underline" to={paths.tags(eventId)} target="_blank">
+          Print all tags
+        </Link>
+        <Link className="font-semibold text-navy underline" to={paths.hall(eventId)} target="_blank">
+          Hall display
+        </Link>
+      </div>
+
+      <Card>
+        <form
+          className="flex flex-wrap items-end gap-3"
+          onSubmit={(e) => {
+            e.preventDefault();
+            find(search);
+          }}
+        >
+          <div className="w-full min-w-60 flex-1 sm:w-auto">
+            <TextField
+              ref={searchRef}
+              label="Reference or name"
+              value={search}
+              onChange={(e) => setSearch(e.target.value)}
+              placeholder="K7M-2QD or Orla"
+              autoComplete="off"
+              autoFocus
+              hint="Type the reference from the visitor’s mail and press Enter, or part of their name to filter the list."
+            />
+          </div>
+          <div className="flex w-full flex-wrap gap-2 sm:w-auto sm:pb-7">
+            <Button type="submit" variant="secondary">
+              Find
+            </Button>
+            <Button type="button" variant="secondary" onClick={() => setScanning((s) => !s)}>
+              {scanning ? 'Close camera' : 'Scan QR code'}
+            </Button>
+            <Button
+              type="button"
+              onClick={() => {
+                setWalkIn(true);
+                setSelected(null);
+              }}
+            >
+              New walk-in
+            </Button>
+          </div>
+        </form>
+        {notice && (
+          <div className="mt-3">
+            <Alert tone="caution">{notice}</Alert>
+          </div>
+        )}
+        {scanning && (
+          <div className="mt-3">
+            <QrScan
+              onClose={() => setScanning(false)}
+              onResult={(text) => {
+                setScanning(false);
+                setSearch('');
+                find(text);
+              }}
+            />
+          </div>
+        )}
+      </Card>
+
+      {walkIn && (
+        <WalkInForm
+          desk={desk}
+          screening={screening}
+          onDone={() => {
+            setWalkIn(false);
+            setSearch('');
+            searchRef.current?.focus();
+          }}
+        />
+      )}
+      {current && (
+        <CheckInPanel
+          key={current.reference}
+          desk={desk}
+          booking={current}
+          screening={screening}
+          onClose={() => {
+            setSelected(null);
+            setSearch('');
+            searchRef.current?.focus();
+          }}
+        />
+      )}
+
+      <DeskSlots
+        desk={desk}
+        shown={matches}
+        filtered={q !== ''}
+        selected={selected}
+        onSelect={(reference) => {
+          setSelected(reference);
+          setWalkIn(false);
+        }}
+      />
+    </div>
+  );
+}

@@ -1,0 +1,194 @@
+import { useState } from 'react';
+import {
+  BARRIERS,
+  BARRIER_LABELS,
+  OUTCOMES,
+  OUTCOME_LABELS,
+  type Outcome,
+} from '../../../../../shared/event-day/constants';
+import { outcomeSchema, type OutcomeInput } from '../../../../../shared/schemas/event-day';
+import { Button } from '../../../components/ui/button';
+import { Alert, Card } from '../../../components/ui/feedback';
+import { SelectField, TextAreaField, TextField } from '../../../components/ui/field';
+import { ApiError } from '../../../lib/api';
+import { usePendingOutcomes, useRecordOutcome } from '../api/record-outcome';
+import type { ItemView } from '../api/types';
+import { TILE_FOCUS } from './radio-tile';
+
+/** The outcome, sent through the persisted mutation so it survives a dropped connection. */
+export function OutcomeForm({
+  item,
+  latestPass,
+  onCancel,
+}: {
+  item: ItemView;
+  latestPass: boolean | null;
+  onCancel?: () => void;
+}) {
+  const [outcome, setOutcome] = useState<Outcome | null>(item.outcome?.outcome ?? null);
+  const [barrier, setBarrier] = useState(item.outcome?.barrier ?? '');
+  const [part, setPart] = useState({
+    description: item.outcome?.partDescription ?? '',
+    link: item.outcome?.partLink ?? '',
+    cost: item.outcome?.partCost?.toString() ?? '',
+  });
+  const [minutes, setMinutes] = useState(item.outcome?.minutes?.toString() ?? '');
+  const [notes, setNotes] = useState(item.outcome?.notes ?? '');
+  const [errors, setErrors] = useState<Record<string, string>>({});
+  const save = useRecordOutcome();
+  const pending = usePendingOutcomes(item.id);
+  const blocked = outcome === 'fixed' && item.mains && latestPass !== true;
+  const serverError = save.error instanceof ApiError ? save.error : null;
+
+  const submit = () => {
+    const body: OutcomeInput = {
+      outcome: outcome ?? (undefined as never),
+      barrier: outcome === 'end-of-life' ? ((barrier || undefined) as OutcomeInput['barrier']) : undefined,
+      part:
+        outcome === 'parts-needed'
+          ? {
+              description: part.description,
+              link: part.link || undefined,
+              cost: part.cost.replace(',', '.') || undefined,
+            }
+          : undefined,
+      minutes: minutes || undefined,
+      notes: notes || undefined,
+    };
+    const parsed = outcomeSchema.safeParse(body);
+    // The cross-field rules are checked here too, so every message shows in one round.
+    const extra: Record<string, string> = {};
+    if (outcome === 'end-of-life' && !barrier) extra.barrier = 'Choose the barrier to repair for an end-of-life item.';
+    if (outcome === 'parts-needed' && part.description.trim().length < 2)
+      extra['part.description'] = 'Say which part is needed.';
+    if (!parsed.success || Object.keys(extra).length) {
+      setErrors({
+        ...extra,
+        ...Object.fromEntries((parsed.error?.issues ?? []).map((i) => [i.path.join('.'), i.message])),
+      });
+      return;
+    }
+    setErrors({});
+    save.mutate({ itemId: item.id, body });
+  };
+
+  return (
+    <Card>
+      <h2 className="mb-2 text-lg">{onCancel ? 'Correct the outcome' : 'Record the outcome'}</h2>
+      {pending.some((p) => p.paused) && (
+        <div className="mb-3" data-testid="pending-outcome">
+          <Alert tone="caution" title="Saved on this phone — not sent yet">
+            No connection. The outcome will be sent by itself when the network is back; keep this page or come back to
+            it later.
+          </Alert>
+        </div>
+      )}
+      {pending.length > 0 && !pending.some((p) => p.paused) && <p className="mb-2 text-sm text-ink-soft">Sending…</p>}
+      <div role="radiogroup" aria-label="Outcome" className="grid grid-cols-2 gap-2">
+        {OUTCOMES.map((o) => (
+          <label
+            key={o}
+            className={`flex min-h-14 cursor-pointer items-center justify-center rounded-lg px-2 text-center font-bold ring-1 ${TILE_FOCUS} ${outcome === o ? 'bg-navy text-white ring-navy' : 'bg-white ring-ink/20'}`}
+          >
+            <input
+              type="radio"
+              name="outcome"
+              className="sr-only"
+              checked={outcome === o}
+              onChange={() => setOutcome(o)}
+            />
+            {OUTCOME_LABELS[o]}
+          </label>
+        ))}
+      </div>
+      {errors.outcome && <p className="mt-1 text-sm font-semibold text-alert">{errors.outcome}</p>}
+      {blocked && (
+        <div className="mt-3">
+          <Alert tone="caution">
+            A mains item needs a passing safety check before it is recorded as fixed
+            {latestPass === false ? '; the latest one failed, so record it as needing a part or as end of life' : ''}.
+          </Alert>
+        </div>
+      )}
+      <div className="mt-3 space-y-3">
+        {outcome === 'end-of-life' && (
+          <SelectField
+            label="Barrier to repair"
+            value={barrier}
+            onChange={(e) => setBarrier(e.target.value as typeof barrier)}
+            error={errors.barrier}
+          >
+            <option value="">Choose…</option>
+            {BARRIERS.map((b) => (
+              <option key={b} value={b}>
+                {BARRIER_LABELS[b]}
+              </option>
+            ))}
+          </SelectField>
+        )}
+        {outcome === 'parts-needed' && (
+          <>
+            <TextField
+              label="Which part"
+              value={part.description}
+              onChange={(e) => setPart((p) => ({ ...p, description: e.target.value }))}
+              error={errors['part.description']}
+              placeholder="e.g. thermostat 13 A, part no. on the old one"
+            />
+            <div className="grid gap-3 sm:grid-cols-2">
+              <TextField
+                label="Supplier link or part number (optional)"
+                value={part.link}
+                onChange={(e) => setPart((p) => ({ ...p, link: e.target.value }))}
+              />
+              <TextField
+                label="Estimated cost (optional)"
+                inputMode="decimal"
+                value={part.cost}
+                onChange={(e) => setPart((p) => ({ ...p, cost: e.target.value }))}
+                error={errors['part.cost']}
+              />
+            </div>
+            <p className="text-sm text-ink-soft">
+              The visitor orders the part and comes back to a later session. Look in the salvage stock below first: a
+              saved part may do.
+            </p>
+          </>
+        )}
+        <div className="grid gap-3 sm:grid-cols-2">
+          <TextField
+            label="Time spent (minutes)"
+            inputMode="numeric"
+            value={minutes}
+            onChange={(e) => setMinutes(e.target.value)}
+            error={errors.minutes}
+          />
+        </div>
+        <TextAreaField
+          label="Notes for the next fixer (optional)"
+          value={notes}
+          onChange={(e) => setNotes(e.target.value)}
+          hint="What you measured, the faulty part, the fix."
+        />
+      </div>
+      {serverError && (
+        <div className="mt-3">
+          <Alert tone="error">{serverError.message}</Alert>
+        </div>
+      )}
+      <Button
+        className="mt-3 w-full text-lg"
+        onClick={submit}
+        busy={save.isPending && !save.isPaused}
+        disabled={blocked}
+      >
+        Save outcome
+      </Button>
+      {onCancel && (
+        <Button variant="secondary" className="mt-2 w-full" onClick={onCancel}>
+          Cancel
+        </Button>
+      )}
+    </Card>
+  );
+}
