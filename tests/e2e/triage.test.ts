@@ -82,6 +82,48 @@ describe('volunteers, rota and the triage board', () => {
     await page.close();
   });
 
+  it('saves the session benches and seats a fixer at the new one', { timeout: 60_000 }, async () => {
+    const page = await browser.newPage({ viewport: DESKTOP });
+    await signIn(page, 'organiser');
+    await page.waitForURL(/\/groups\/\d+\/events$/);
+    await page
+      .getByRole('link', { name: /Kestlebridge repair session/ })
+      .first()
+      .click();
+    await page.getByRole('link', { name: 'Benches' }).click();
+    await page.getByRole('button', { name: '+ Add a bench' }).click();
+    await page.getByLabel('Name').last().fill('Window table');
+    await page.getByRole('button', { name: 'Save benches' }).click();
+    await page.getByRole('status').filter({ hasText: 'Saved.' }).waitFor();
+    await page.screenshot({ path: shot('benches'), fullPage: true });
+
+    await page.getByRole('link', { name: 'Triage board' }).click();
+    await page.getByRole('region', { name: 'Window table' }).waitFor();
+    await page.getByRole('link', { name: 'Rota' }).click();
+    const seat = page.getByLabel(/^Seat for /).first();
+    const label = (await seat.getAttribute('aria-label'))!;
+    const saved = page.waitForResponse((r) => r.request().method() === 'PATCH' && r.url().includes('/shifts/'));
+    await seat.selectOption({ label: 'Window table' });
+    expect((await saved).ok()).toBe(true);
+    await page.reload();
+    const again = page.getByLabel(label, { exact: true });
+    expect(await again.locator('option:checked').textContent()).toBe('Window table');
+    await page.close();
+  });
+
+  it('keeps the skills a fixer saves', { timeout: 60_000 }, async () => {
+    const page = await browser.newPage({ viewport: PHONE });
+    await signIn(page, 'fixer');
+    await page.waitForURL(/\/bench$/);
+    await page.getByRole('link', { name: 'My skills' }).first().click();
+    await page.getByLabel('Textiles').selectOption('3');
+    await page.getByRole('button', { name: 'Save my skills' }).click();
+    await page.getByRole('status').filter({ hasText: 'Saved.' }).waitFor();
+    await page.reload();
+    expect(await page.getByLabel('Textiles').inputValue()).toBe('3');
+    await page.close();
+  });
+
   it('shows a fixer their queue on a phone', async () => {
     const page = await browser.newPage({ viewport: PHONE });
     await signIn(page, 'fixer');

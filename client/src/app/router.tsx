@@ -105,24 +105,24 @@ export const router = createBrowserRouter([
           { path: 'start', loader: start },
           {
             path: 'bench',
-            ...page(() => import('../routes/volunteers/bench'), 'BenchPage', allow.fixerOrHost),
+            ...page(() => import('../routes/workbench/bench'), 'BenchPage', allow.fixerOrHost),
           },
           {
             path: 'me/skills',
-            ...page(() => import('../routes/volunteers/my-skills'), 'MySkillsPage', allow.fixer),
+            ...page(() => import('../routes/skills/my-skills'), 'MySkillsPage', allow.fixer),
           },
           {
             path: 'groups/:groupId/skills',
-            ...page(() => import('../routes/volunteers/skills-matrix'), 'SkillsMatrixPage', allow.organiser),
+            ...page(() => import('../routes/skills/skills-matrix'), 'SkillsMatrixPage', allow.organiser),
           },
           {
             path: 'events/:eventId/board',
             ...page(() => import('../routes/triage/board'), 'TriageBoardPage', allow.organiser),
           },
-          { path: 'events/:eventId/rota', ...page(() => import('../routes/triage/rota'), 'RotaPage', allow.organiser) },
+          { path: 'events/:eventId/rota', ...page(() => import('../routes/rota/rota'), 'RotaPage', allow.organiser) },
           {
             path: 'events/:eventId/benches',
-            ...page(() => import('../routes/triage/benches'), 'BenchesPage', allow.organiser),
+            ...page(() => import('../routes/benches/benches'), 'BenchesPage', allow.organiser),
           },
           { path: 'desk', ...page(() => import('../routes/event-day/desk'), 'DeskHomePage', allow.staff) },
           { path: 'desk/:eventId', ...page(() => import('../routes/event-day/desk'), 'DeskPage', allow.staff) },

@@ -1,4 +1,4 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
 import type { Profile } from '../../../../../shared/api/skills';
 import { api } from '../../../lib/api';
 import { skillKeys } from './keys';
@@ -7,4 +7,5 @@ export const getProfile = () => api<Profile>('GET', '/api/me/profile');
 
 export const profileQuery = () => queryOptions({ queryKey: skillKeys.profile(), queryFn: getProfile });
 
-export const useProfile = () => useQuery(profileQuery());
+/** Read after the route's loader has the profile, so the page renders with it from the start. */
+export const useProfile = () => useSuspenseQuery(profileQuery());

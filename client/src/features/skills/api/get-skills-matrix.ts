@@ -1,4 +1,4 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
 import type { SkillsMatrix } from '../../../../../shared/api/skills';
 import { api } from '../../../lib/api';
 import { skillKeys } from './keys';
@@ -8,4 +8,5 @@ export const getSkillsMatrix = (groupId: number) => api<SkillsMatrix>('GET', `/a
 export const skillsMatrixQuery = (groupId: number) =>
   queryOptions({ queryKey: skillKeys.matrix(groupId), queryFn: () => getSkillsMatrix(groupId) });
 
-export const useSkillsMatrix = (groupId: number) => useQuery(skillsMatrixQuery(groupId));
+/** Read after the route's loader has the matrix, so the page renders with it from the start. */
+export const useSkillsMatrix = (groupId: number) => useSuspenseQuery(skillsMatrixQuery(groupId));

@@ -1,9 +1,10 @@
-import { useEffect, useState } from 'react';
+import { useState } from 'react';
 import { EQUIPMENT, EQUIPMENT_LABELS, SKILL_LABELS, SKILLS } from '../../../../shared/constants';
 import { Button } from '../../components/ui/button';
-import { Alert, Card, PageTitle, Spinner } from '../../components/ui/feedback';
-import { useProfile } from '../../features/skills/api/get-profile';
+import { Alert, Card, PageTitle } from '../../components/ui/feedback';
+import { profileQuery, useProfile } from '../../features/skills/api/get-profile';
 import { useSaveProfile } from '../../features/skills/api/save-profile';
+import { queryClient } from '../../lib/query-client';
 
 const LEVELS = [
   ['0', 'Not for me'],
@@ -12,21 +13,16 @@ const LEVELS = [
   ['3', '3 · expert'],
 ] as const;
 
+/** The form starts from the saved profile; a failure to read it is the route's error. */
+export const loader = () => queryClient.ensureQueryData(profileQuery());
+
+/** The fixer's own skill levels, the kit they bring and a note for the organisers. */
 export function MySkillsPage() {
-  const profile = useProfile();
+  const { data: profile } = useProfile();
   const save = useSaveProfile();
-  const [skills, setSkills] = useState<Record<string, number>>({});
-  const [kit, setKit] = useState<string[]>([]);
-  const [notes, setNotes] = useState('');
-  useEffect(() => {
-    if (profile.data) {
-      setSkills(profile.data.skills);
-      setKit(profile.data.kit);
-      setNotes(profile.data.notes);
-    }
-  }, [profile.data]);
-  if (profile.isPending) return <Spinner />;
-  if (profile.error) return <Alert tone="error">{profile.error.message}</Alert>;
+  const [skills, setSkills] = useState<Record<string, number>>(profile.skills);
+  const [kit, setKit] = useState<string[]>(profile.kit);
+  const [notes, setNotes] = useState(profile.notes);
   return (
     <div className="mx-auto max-w-2xl space-y-4">
       <PageTitle

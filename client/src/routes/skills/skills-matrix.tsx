@@ -1,13 +1,17 @@
 import { useMemo, useState } from 'react';
-import { useParams } from 'react-router';
+import { useParams, type LoaderFunctionArgs } from 'react-router';
 import { SKILL_LABELS, type Skill } from '../../../../shared/constants';
 import { GroupTabs } from '../../components/layouts/group-tabs';
-import { Alert, Spinner } from '../../components/ui/feedback';
-import { useSkillsMatrix } from '../../features/skills/api/get-skills-matrix';
+import { skillsMatrixQuery, useSkillsMatrix } from '../../features/skills/api/get-skills-matrix';
 import { useGroupSettings } from '../../features/groups/api/get-group-settings';
+import { queryClient } from '../../lib/query-client';
 
 const LEVEL = ['', 'learning', 'capable', 'expert'];
 const TONE = ['', 'bg-sage-light text-sage', 'bg-sage/60 text-white', 'bg-sage text-white'];
+
+/** The page reads the matrix with suspense; a failure to read it is the route's error. */
+export const loader = ({ params }: LoaderFunctionArgs) =>
+  queryClient.ensureQueryData(skillsMatrixQuery(Number(params.groupId)));
 
 /** Volunteers × skills: sort by a skill to find the experts, filter by name or by a skill someone must have. */
 export function SkillsMatrixPage() {
@@ -26,7 +30,7 @@ export function SkillsMatrixPage() {
   const [filter, setFilter] = useState('');
   const [needs, setNeeds] = useState('');
   const rows = useMemo(() => {
-    const list = (matrix.data?.volunteers ?? []).filter(
+    const list = matrix.data.volunteers.filter(
       (v) => v.name.toLowerCase().includes(filter.trim().toLowerCase()) && (!needs || (v.skills[needs] ?? 0) > 0),
     );
     const dir = ascending ? 1 : -1;
@@ -36,8 +40,6 @@ export function SkillsMatrixPage() {
         : dir * ((a.skills[sortBy] ?? 0) - (b.skills[sortBy] ?? 0)) || a.name.localeCompare(b.name),
     );
   }, [matrix.data, filter, needs, sortBy, ascending]);
-  if (matrix.isPending) return <Spinner />;
-  if (matrix.error) return <Alert tone="error">{matrix.error.message}</Alert>;
   const skills = matrix.data.skills;
   return (
     <div>

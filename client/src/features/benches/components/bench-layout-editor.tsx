@@ -1,41 +1,44 @@
-import { useEffect, useState } from 'react';
-import { useParams } from 'react-router';
-import { EQUIPMENT, EQUIPMENT_LABELS } from '../../../../shared/constants';
-import { EventTabs } from '../../components/layouts/event-tabs';
-import { Button } from '../../components/ui/button';
-import { Alert, Card, Spinner } from '../../components/ui/feedback';
-import { useEvent } from '../../features/events/api/get-event';
-import type { Bench } from '../../../../shared/api/benches';
-import { useEventBenches } from '../../features/benches/api/get-event-benches';
-import { useSaveEventBenches } from '../../features/benches/api/save-event-benches';
-import { useSaveVenueBenches } from '../../features/benches/api/save-venue-benches';
-import { useRefreshBoard } from '../../features/triage/api/get-board';
-import { ApiError } from '../../lib/api';
+import { useState } from 'react';
+import type { Bench } from '../../../../../shared/api/benches';
+import { EQUIPMENT, EQUIPMENT_LABELS } from '../../../../../shared/constants';
+import { Button } from '../../../components/ui/button';
+import { Alert, Card } from '../../../components/ui/feedback';
+import { ApiError } from '../../../lib/api';
+import { useSaveEventBenches } from '../api/save-event-benches';
+import { useSaveVenueBenches } from '../api/save-venue-benches';
 
-/** This session's benches, copied from the venue's usual layout the first time; changes stay with the session. */
-export function BenchesPage() {
-  const id = Number(useParams().eventId);
-  const event = useEvent(id);
-  const benches = useEventBenches(id);
-  const save = useSaveEventBenches(id, useRefreshBoard(id));
-  const saveVenue = useSaveVenueBenches(event.data?.venue.id);
-  const [rows, setRows] = useState<Bench[]>([]);
-  useEffect(() => {
-    if (benches.data)
-      setRows(benches.data.map((b) => ({ id: b.id, name: b.name, seats: b.seats, equipment: b.equipment })));
-  }, [benches.data]);
-  if (benches.isPending || event.isPending) return <Spinner />;
-  if (benches.error) return <Alert tone="error">{benches.error.message}</Alert>;
+/**
+ * Edits one session's benches from the saved ones; `onChanged` runs after a save (benches removed free their
+ * fixers and items), and the venue's usual layout can be replaced by these rows.
+ */
+export function BenchLayoutEditor({
+  eventId,
+  saved,
+  venue,
+  onChanged,
+}: {
+  eventId: number;
+  saved: Bench[];
+  venue: { id: number; name: string } | undefined;
+  onChanged?: () => void;
+}) {
+  const save = useSaveEventBenches(eventId, onChanged);
+  const saveVenue = useSaveVenueBenches(venue?.id);
+  const [rows, setRows] = useState<Bench[]>(() => copyOf(saved));
+  const [savedBefore, setSavedBefore] = useState(saved);
+  // The saved layout changed (a save, or a refetch): the form starts again from it.
+  if (saved !== savedBefore) {
+    setSavedBefore(saved);
+    setRows(copyOf(saved));
+  }
   const set = (i: number, patch: Partial<Bench>) => {
     save.reset();
     setRows((r) => r.map((b, k) => (k === i ? { ...b, ...patch } : b)));
   };
+  const removed = saved.filter((b) => !rows.some((r) => r.id === b.id));
   const fields = save.error instanceof ApiError ? save.error.fields : undefined;
   return (
-    <div>
-      <h1 className="text-2xl sm:text-3xl">{event.data?.title}</h1>
-      <p className="mb-3 font-bold text-copper-dark">Benches</p>
-      <EventTabs eventId={id} />
+    <>
       <div className="space-y-3">
         {rows.map((b, i) => (
           <Card key={b.id ?? `new-${i}`} className="grid gap-3 sm:grid-cols-[14rem_6rem_1fr_auto] sm:items-start">
@@ -92,15 +95,11 @@ export function BenchesPage() {
           <Alert tone="info">No benches yet. Add the tables you will set out, with the kit on each.</Alert>
         )}
       </div>
-      {(benches.data ?? []).some((b) => !rows.some((r) => r.id === b.id)) && (
+      {removed.length > 0 && (
         <div className="mt-3">
           <Alert tone="caution">
-            Saving removes{' '}
-            {(benches.data ?? [])
-              .filter((b) => !rows.some((r) => r.id === b.id))
-              .map((b) => b.name)
-              .join(', ')}
-            ; fixers seated there become free to move, and items placed there go back to waiting.
+            Saving removes {removed.map((b) => b.name).join(', ')}; fixers seated there become free to move, and items
+            placed there go back to waiting.
           </Alert>
         </div>
       )}
@@ -114,7 +113,7 @@ export function BenchesPage() {
         <Button busy={save.isPending} onClick={() => save.mutate(rows)}>
           Save benches
         </Button>
-        <Button variant="quiet" busy={saveVenue.isPending} onClick={() => saveVenue.mutate(rows)}>
+        <Button variant="quiet" busy={saveVenue.isPending} disabled={!venue} onClick={() => saveVenue.mutate(rows)}>
           Make this the venue’s usual layout
         </Button>
         {save.isSuccess && (
@@ -124,7 +123,7 @@ export function BenchesPage() {
         )}
         {saveVenue.isSuccess && (
           <span role="status" className="font-bold text-sage">
-            Later sessions at {event.data?.venue.name} start with these benches.
+            Later sessions at {venue?.name} start with these benches.
           </span>
         )}
       </div>
@@ -138,6 +137,8 @@ export function BenchesPage() {
           <Alert tone="error">{saveVenue.error.message}</Alert>
         </div>
       )}
-    </div>
+    </>
   );
 }
+
+const copyOf = (benches: Bench[]) => benches.map(({ id, name, seats, equipment }) => ({ id, name, seats, equipment }));

@@ -1,0 +1,117 @@
+import { Link } from 'react-router';
+import type { MyEvent } from '../../../../../shared/api/rota';
+import { formatDay, formatTimeRange } from '../../../../../shared/format';
+import { Button } from '../../../components/ui/button';
+import { Alert, Card, EmptyState, Spinner } from '../../../components/ui/feedback';
+import { MonthCalendar } from '../../../components/ui/month-calendar';
+import { paths } from '../../../config/paths';
+import { useMyEvents } from '../api/get-my-events';
+import { useSetShift } from '../api/set-shift';
+
+/** The sessions a volunteer can help at, each with their answer, and a calendar of the shifts they said yes to. */
+export function MySessions() {
+  const events = useMyEvents();
+  const coming = events.data?.filter((e) => e.shift?.coming) ?? [];
+  return (
+    <section aria-labelledby="sessions" className="space-y-3">
+      <div className="flex items-center justify-between">
+        <h2 id="sessions" className="text-xl">
+          Sessions I can help at
+        </h2>
+        <Link to={paths.mySkills()} className="text-sm font-bold text-navy underline">
+          My skills
+        </Link>
+      </div>
+      {events.isPending && <Spinner />}
+      {events.error && <Alert tone="error">{events.error.message}</Alert>}
+      {events.data?.length === 0 && (
+        <EmptyState title="No upcoming sessions" icon="▦">
+          Your groups have not published a date yet.
+        </EmptyState>
+      )}
+      <ShiftAnswers events={events.data ?? []} />
+      {coming.length > 0 && (
+        <Card className="mendery-calendar">
+          <h3 className="mb-2 text-lg">My shifts</h3>
+          <MonthCalendar
+            events={coming.map((e) => ({
+              id: String(e.id),
+              title: e.title,
+              start: e.shift!.startsAt,
+              end: e.shift!.endsAt,
+              backgroundColor: '#23395d',
+              borderColor: 'transparent',
+            }))}
+          />
+        </Card>
+      )}
+    </section>
+  );
+}
+
+const midpoint = (e: MyEvent) =>
+  new Date((new Date(e.startsAt).getTime() + new Date(e.endsAt).getTime()) / 2).toISOString();
+
+function ShiftAnswers({ events }: { events: MyEvent[] }) {
+  const setShift = useSetShift();
+  return (
+    <>
+      {setShift.error && <Alert tone="error">{setShift.error.message}</Alert>}
+      {events.map((e) => {
+        const allDay = Boolean(e.shift?.coming && e.shift.startsAt === e.startsAt && e.shift.endsAt === e.endsAt);
+        return (
+          <Card key={e.id}>
+            <p className="text-sm font-bold text-copper-dark">
+              {formatDay(e.startsAt, e.timeZone)} · {formatTimeRange(e.startsAt, e.endsAt, e.timeZone)}
+            </p>
+            <p className="font-extrabold text-navy">{e.title}</p>
+            <p className="text-sm text-ink-soft">
+              {e.groupName} ·{' '}
+              {e.shift
+                ? e.shift.coming
+                  ? `You come ${formatTimeRange(e.shift.startsAt, e.shift.endsAt, e.timeZone)}`
+                  : 'You said you cannot come'
+                : 'You have not answered yet'}
+            </p>
+            <div className="mt-2 flex flex-wrap gap-2">
+              <Button
+                className="min-h-10"
+                variant={allDay ? 'primary' : 'secondary'}
+                aria-pressed={allDay}
+                onClick={() => setShift.mutate({ eventId: e.id, coming: true })}
+              >
+                I’m coming, all day
+              </Button>
+              <Button
+                variant="secondary"
+                className="min-h-10"
+                onClick={() =>
+                  setShift.mutate({ eventId: e.id, coming: true, startsAt: e.startsAt, endsAt: midpoint(e) })
+                }
+              >
+                First half
+              </Button>
+              <Button
+                variant="secondary"
+                className="min-h-10"
+                onClick={() =>
+                  setShift.mutate({ eventId: e.id, coming: true, startsAt: midpoint(e), endsAt: e.endsAt })
+                }
+              >
+                Second half
+              </Button>
+              <Button
+                variant={e.shift && !e.shift.coming ? 'primary' : 'quiet'}
+                aria-pressed={Boolean(e.shift && !e.shift.coming)}
+                className="min-h-10"
+                onClick={() => setShift.mutate({ eventId: e.id, coming: false })}
+              >
+                Can’t come
+              </Button>
+            </div>
+          </Card>
+        );
+      })}
+    </>
+  );
+}

@@ -1,0 +1,81 @@
+import type { Rota } from '../../../../../shared/api/rota';
+import { SKILL_LABELS, SKILLS } from '../../../../../shared/constants';
+import { formatTime } from '../../../../../shared/format';
+import { Card } from '../../../components/ui/feedback';
+
+/** Skills × slots: fixers present for the whole slot against items booked that need the skill. */
+export function SkillCoverChart({ rota, timeZone }: { rota: Rota; timeZone: string }) {
+  const shown = SKILLS.filter(
+    (s) => rota.coverage.some((c) => c.bySkill[s] > 0) || rota.slots.some((sl) => sl.demand[s] > 0),
+  );
+  return (
+    <Card>
+      <h2 className="text-lg">Skills covered, slot by slot</h2>
+      <p className="text-sm text-ink-soft">
+        Each cell: fixers with the skill present for the whole slot / items booked that need it.
+      </p>
+      <div className="mt-3 overflow-x-auto">
+        <table className="text-center text-xs" aria-label="Skill cover by slot">
+          <thead>
+            <tr>
+              <th className="sticky left-0 bg-white px-2 py-1 text-left">Skill</th>
+              {rota.slots.map((s) => (
+                <th key={s.id} className="px-1 py-1 font-bold">
+                  {formatTime(s.startsAt, timeZone)}
+                </th>
+              ))}
+            </tr>
+          </thead>
+          <tbody>
+            {shown.map((skill) => (
+              <tr key={skill}>
+                <th className="sticky left-0 bg-white px-2 py-1 text-left font-semibold">{SKILL_LABELS[skill]}</th>
+                {rota.slots.map((s, i) => {
+                  const have = rota.coverage[i].bySkill[skill];
+                  const need = s.demand[skill];
+                  return (
+                    <td
+                      key={s.id}
+                      className={`h-9 min-w-12 border border-white px-1 font-bold ${coverTone(have, need)}`}
+                      title={`${have} fixer(s), ${need} item(s)`}
+                    >
+                      {have}/{need}
+                    </td>
+                  );
+                })}
+              </tr>
+            ))}
+            <tr>
+              <th className="sticky left-0 bg-white px-2 py-1 text-left">All fixers</th>
+              {rota.coverage.map((c, i) => (
+                <td key={i} className="font-bold">
+                  {c.fixers}
+                </td>
+              ))}
+            </tr>
+          </tbody>
+        </table>
+      </div>
+      <p className="mt-2 flex flex-wrap gap-3 text-xs text-ink-soft">
+        <span>
+          <span className="inline-block size-3 rounded bg-sage-light align-middle" /> covered
+        </span>
+        <span>
+          <span className="inline-block size-3 rounded bg-copper-light align-middle" /> more items than fixers
+        </span>
+        <span>
+          <span className="inline-block size-3 rounded bg-alert align-middle" /> items wait, nobody has the skill
+        </span>
+      </p>
+    </Card>
+  );
+}
+
+const coverTone = (have: number, need: number) =>
+  need > 0 && have === 0
+    ? 'bg-alert text-white'
+    : have === 0
+      ? 'bg-ink/5 text-ink-soft'
+      : need > have
+        ? 'bg-copper-light'
+        : 'bg-sage-light';

@@ -1,0 +1,138 @@
+import { useState } from 'react';
+import type { Board, BoardItem } from '../../../../../shared/api/triage';
+import { EQUIPMENT_LABELS, SKILL_LABELS, type Equipment, type Skill } from '../../../../../shared/constants';
+import { formatTime } from '../../../../../shared/format';
+import { Button } from '../../../components/ui/button';
+import { useLockItem } from '../api/lock-item';
+import { usePlaceItem } from '../api/place-item';
+import { useUnplaceItem } from '../api/unplace-item';
+
+const REASON_LABEL: Record<string, string> = {
+  'no-skill': 'No fixer with the skill',
+  'no-equipment': 'No bench with the kit',
+  'no-pair': 'Skill and kit never meet',
+  capacity: 'Waiting for a free place',
+};
+
+/** An item on the board: what it needs, why it waits or what its placement breaks, and moving it by hand. */
+export function BoardItemCard({ item, board, eventId }: { item: BoardItem; board: Board; eventId: number }) {
+  const place = usePlaceItem(eventId, item.id);
+  const lock = useLockItem(eventId, item.id);
+  const unplace = useUnplaceItem(eventId, item.id);
+  const error = place.error ?? lock.error ?? unplace.error;
+  const [moving, setMoving] = useState(false);
+  const [to, setTo] = useState({
+    userId: item.placement?.userId ?? board.fixers[0]?.userId ?? 0,
+    benchId: item.placement?.benchId ?? board.benches[0]?.id ?? 0,
+  });
+  const tz = board.event.timeZone;
+  const slot = board.slots.find((s) => s.id === item.slotId);
+  return (
+    <article
+      className={`rounded-lg bg-white p-3 text-sm shadow-sm ring-1 ${item.warnings.length ? 'ring-alert' : item.placement?.locked ? 'ring-navy' : 'ring-ink/10'}`}
+    >
+      <div className="flex items-start justify-between gap-2">
+        <p className="font-bold">
+          {item.categoryName}
+          {item.brand || item.model ? ` — ${[item.brand, item.model].filter(Boolean).join(' ')}` : ''}
+        </p>
+        {item.placement?.locked && (
+          <span className="rounded bg-navy px-1.5 text-xs font-bold text-white" title="Locked: a re-run keeps it here">
+            locked
+          </span>
+        )}
+      </div>
+      <p className="text-ink-soft">{item.fault}</p>
+      <p className="mt-1 text-xs">
+        {item.reference} · booked for {slot ? formatTime(slot.startsAt, tz) : '—'} · about {item.minutes} min
+        {item.placement && item.estimatedStart && <> · starts ≈ {formatTime(item.estimatedStart, tz)}</>}
+      </p>
+      <p className="text-xs text-ink-soft">
+        Needs {SKILL_LABELS[item.needs.skill as Skill] ?? item.needs.skill} level {item.needs.minLevel}
+        {item.needs.equipment.length
+          ? `, ${item.needs.equipment.map((e) => EQUIPMENT_LABELS[e as Equipment]).join(', ')}`
+          : ''}
+        {item.mains ? ' · mains' : ''}
+      </p>
+      {item.reason && (
+        <p className="mt-1 rounded bg-copper-light px-2 py-1 text-xs">
+          <span className="font-bold">{REASON_LABEL[item.reason.reason]}:</span> {item.reason.detail}
+        </p>
+      )}
+      {item.warnings.map((w) => (
+        <p key={w.code} className="mt-1 text-xs font-semibold text-alert">
+          ⚠ {w.message}
+        </p>
+      ))}
+      {moving ? (
+        <div className="mt-2 space-y-2" onKeyDown={(e) => e.key === 'Escape' && setMoving(false)}>
+          <select
+            autoFocus
+            aria-label="Fixer"
+            value={to.userId}
+            onChange={(e) => setTo({ ...to, userId: Number(e.target.value) })}
+            className="block w-full rounded border border-ink/20 px-2 py-1"
+          >
+            {board.fixers.map((f) => (
+              <option key={f.userId} value={f.userId}>
+                {f.name} ({SKILL_LABELS[item.needs.skill as Skill] ?? item.needs.skill}{' '}
+                {f.skills[item.needs.skill] ?? 0})
+              </option>
+            ))}
+          </select>
+          <select
+            aria-label="Bench"
+            value={to.benchId}
+            onChange={(e) => setTo({ ...to, benchId: Number(e.target.value) })}
+            className="block w-full rounded border border-ink/20 px-2 py-1"
+          >
+            {board.benches.map((b) => (
+              <option key={b.id} value={b.id}>
+                {b.name}
+              </option>
+            ))}
+          </select>
+          <div className="flex gap-2">
+            <Button
+              className="min-h-9 px-3 py-1"
+              busy={place.isPending}
+              onClick={() => place.mutate({ ...to, locked: true }, { onSuccess: () => setMoving(false) })}
+            >
+              Place and lock
+            </Button>
+            <Button variant="quiet" className="min-h-9 px-3 py-1" onClick={() => setMoving(false)}>
+              Cancel
+            </Button>
+          </div>
+        </div>
+      ) : (
+        <div className="mt-2 flex flex-wrap gap-1">
+          <Button
+            variant="secondary"
+            className="min-h-9 px-3 py-1 text-sm"
+            disabled={!board.fixers.length || !board.benches.length}
+            onClick={() => setMoving(true)}
+          >
+            Move…
+          </Button>
+          {item.placement && (
+            <Button
+              variant="quiet"
+              className="min-h-9 px-3 py-1 text-sm"
+              busy={lock.isPending}
+              onClick={() => lock.mutate(!item.placement!.locked)}
+            >
+              {item.placement.locked ? 'Unlock' : 'Lock'}
+            </Button>
+          )}
+          {item.placement && (
+            <Button variant="quiet" className="min-h-9 px-3 py-1 text-sm" onClick={() => unplace.mutate()}>
+              Take off
+            </Button>
+          )}
+        </div>
+      )}
+      {error && <p className="mt-1 text-xs font-semibold text-alert">{error.message}</p>}
+    </article>
+  );
+}

@@ -1,0 +1,57 @@
+import { useState } from 'react';
+import type { Board } from '../../../../../shared/api/triage';
+import { formatTime } from '../../../../../shared/format';
+import { Button } from '../../../components/ui/button';
+import { Alert } from '../../../components/ui/feedback';
+import { useRunTriage } from '../api/run-triage';
+
+/** Runs the engine on the whole session or one slot's round, and says how many items it placed. */
+export function TriageRunBar({ board }: { board: Board }) {
+  const runTriage = useRunTriage(board.event.id);
+  const [slotId, setSlotId] = useState('');
+  const [notice, setNotice] = useState<string | null>(null);
+  const tz = board.event.timeZone;
+  const run = () =>
+    runTriage.mutate(slotId ? Number(slotId) : undefined, {
+      onSuccess: (r) =>
+        setNotice(
+          `Placed ${r.assigned} item${r.assigned === 1 ? '' : 's'}; ${r.unassigned} wait${r.unassigned === 1 ? 's' : ''}.`,
+        ),
+    });
+  return (
+    <div className="mb-4 flex flex-wrap items-end gap-3 rounded-xl bg-white p-4 ring-1 ring-ink/5">
+      <label className="text-sm font-semibold">
+        Round
+        <select
+          value={slotId}
+          onChange={(e) => setSlotId(e.target.value)}
+          className="mt-1 block rounded-lg border border-ink/20 px-3 py-2"
+        >
+          <option value="">The whole session</option>
+          {board.slots.map((s) => (
+            <option key={s.id} value={s.id}>
+              Slot {formatTime(s.startsAt, tz)}
+            </option>
+          ))}
+        </select>
+      </label>
+      <Button onClick={run} busy={runTriage.isPending}>
+        Run triage
+      </Button>
+      <p className="text-sm text-ink-soft">
+        {board.fixers.length} fixers coming · {board.benches.length} benches · {board.items.length} items · locked cards
+        stay where they are
+      </p>
+      {notice && (
+        <p role="status" className="w-full text-sm font-bold text-sage">
+          {notice}
+        </p>
+      )}
+      {runTriage.error && (
+        <div className="w-full">
+          <Alert tone="error">{runTriage.error.message}</Alert>
+        </div>
+      )}
+    </div>
+  );
+}

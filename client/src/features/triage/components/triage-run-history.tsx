@@ -1,0 +1,28 @@
+import type { Board } from '../../../../../shared/api/triage';
+import { formatTime } from '../../../../../shared/format';
+import { triageRunUrl } from '../api/triage-run-url';
+
+/** Earlier runs, each with a link to the inputs and result it was given and gave. */
+export function TriageRunHistory({ board }: { board: Board }) {
+  const tz = board.event.timeZone;
+  if (board.runs.length === 0) return null;
+  return (
+    <details className="mt-4 rounded-xl bg-white p-4 ring-1 ring-ink/5">
+      <summary className="cursor-pointer font-bold text-navy">Earlier runs ({board.runs.length})</summary>
+      <ul className="mt-2 text-sm">
+        {board.runs.map((r) => (
+          <li key={r.id}>
+            {new Date(r.createdAt).toLocaleString('en-GB', { timeZone: tz })}: {r.assigned} placed, {r.unassigned}{' '}
+            waiting, {r.lockedKept} locked kept
+            {r.slotId
+              ? ` (slot ${formatTime(board.slots.find((s) => s.id === r.slotId)?.startsAt ?? '', tz)})`
+              : ''} ·{' '}
+            <a className="underline" href={triageRunUrl(board.event.id, r.id)} target="_blank" rel="noreferrer">
+              inputs and result
+            </a>
+          </li>
+        ))}
+      </ul>
+    </details>
+  );
+}

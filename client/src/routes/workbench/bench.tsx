@@ -1,0 +1,45 @@
+import { Link } from 'react-router';
+import { PageTitle } from '../../components/ui/feedback';
+import { paths } from '../../config/paths';
+import { useUser } from '../../lib/auth';
+import { queryClient } from '../../lib/query-client';
+import { StatusChip } from '../../features/event-day/status-chip';
+import { myEventsQuery } from '../../features/rota/api/get-my-events';
+import { MySessions } from '../../features/rota/components/my-sessions';
+import { queueQuery } from '../../features/workbench/api/get-queue';
+import { QueueList } from '../../features/workbench/components/queue-list';
+
+/** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
+export const loader = () =>
+  Promise.all([queryClient.ensureQueryData(queueQuery()), queryClient.ensureQueryData(myEventsQuery())]).catch(
+    () => null,
+  );
+
+const toolLink = 'rounded-lg bg-white px-3 py-2 font-semibold text-navy ring-1 ring-navy/20';
+
+/** The fixer's page on a phone: the items coming to them in order, then the sessions they can say yes to. */
+export function BenchPage() {
+  const { data: user } = useUser();
+  if (!user) return null;
+  const fixerGroups = new Map(user.roles.filter((r) => r.role === 'fixer').map((r) => [r.groupId, r.groupName]));
+  return (
+    <div className="mx-auto max-w-3xl space-y-6">
+      <PageTitle title="My bench" lead={`Hello ${user.name.split(' ')[0]}.`} />
+      <nav aria-label="Toolkit" className="flex flex-wrap gap-2 text-sm">
+        <Link to={paths.knowledge()} className={toolLink}>
+          Repair notes
+        </Link>
+        <Link to={paths.calculators()} className={toolLink}>
+          Calculators
+        </Link>
+        {[...fixerGroups.entries()].map(([id, name]) => (
+          <Link key={id} to={paths.salvage(id)} className={toolLink}>
+            Salvage stock · {name}
+          </Link>
+        ))}
+      </nav>
+      <QueueList statusChip={(status) => <StatusChip status={status} />} />
+      <MySessions />
+    </div>
+  );
+}
