@@ -1,9 +1,14 @@
 import { useEffect, useState } from 'react';
-import { useParams } from 'react-router';
+import { useParams, type LoaderFunctionArgs } from 'react-router';
 import { formatTime } from '../../../../shared/format';
-import { useHallQueue } from '../../features/event-day/api/get-hall-queue';
+import { hallQueueQuery, useHallQueue } from '../../features/event-day/api/get-hall-queue';
+import { queryClient } from '../../lib/query-client';
 import type { HallQueue } from '../../features/event-day/api/types';
 import { ApiError } from '../../lib/api';
+
+/** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
+export const loader = ({ params }: LoaderFunctionArgs) =>
+  queryClient.ensureQueryData(hallQueueQuery(Number(params.eventId))).catch(() => null);
 
 /** Waiting numbers that fit on the screen (three to a row) without scrolling; the rest are counted. */
 function useWaitingRoom() {

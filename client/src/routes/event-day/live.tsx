@@ -1,13 +1,18 @@
 import { ITEM_STATUS_LABELS } from '../../../../shared/event-day/constants';
 import type { ReactNode } from 'react';
-import { Link, useParams } from 'react-router';
+import { Link, useParams, type LoaderFunctionArgs } from 'react-router';
 import type { ItemStatus } from '../../../../shared/event-day/constants';
 import { formatDay, formatTime } from '../../../../shared/format';
 import { EventTabs } from '../../components/layouts/event-tabs';
 import { Alert, Card, EmptyState, PageTitle, Spinner } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
-import { useLiveView } from '../../features/event-day/api/get-live-view';
+import { liveViewQuery, useLiveView } from '../../features/event-day/api/get-live-view';
+import { queryClient } from '../../lib/query-client';
 import type { LiveCard, LiveView } from '../../features/event-day/api/types';
+
+/** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
+export const loader = ({ params }: LoaderFunctionArgs) =>
+  queryClient.ensureQueryData(liveViewQuery(Number(params.eventId))).catch(() => null);
 
 const COUNT_TILES: { status: ItemStatus; label: string }[] = (
   ['checked-in', 'waiting', 'at-bench', 'done', 'no-show', 'withdrawn', 'booked'] as const

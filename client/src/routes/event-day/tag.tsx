@@ -1,9 +1,14 @@
-import { Link, Navigate, useParams } from 'react-router';
+import { Link, Navigate, useParams, type LoaderFunctionArgs } from 'react-router';
 import { Alert, Card, Spinner } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
 import { useUser } from '../../lib/auth';
-import { usePublicTag } from '../../features/event-day/api/get-public-tag';
+import { publicTagQuery, usePublicTag } from '../../features/event-day/api/get-public-tag';
+import { queryClient } from '../../lib/query-client';
 import { StatusChip } from '../../features/event-day/status-chip';
+
+/** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
+export const loader = ({ params }: LoaderFunctionArgs) =>
+  queryClient.ensureQueryData(publicTagQuery(String(params.code ?? '').toUpperCase())).catch(() => null);
 
 /**
  * Where a scanned tag lands. The group's volunteers go straight to the item; anyone else (the visitor) sees the

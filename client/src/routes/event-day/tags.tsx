@@ -1,11 +1,12 @@
 import { useMemo, type CSSProperties } from 'react';
-import { Link, useParams, useSearchParams } from 'react-router';
+import { Link, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { LABEL_LAYOUTS, layoutById, paginate, type LabelLayout } from '../../../../shared/event-day/label-sheets';
 import { formatTime } from '../../../../shared/format';
 import { Button } from '../../components/ui/button';
 import { Alert, EmptyState, Spinner } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
-import { useTagSheet } from '../../features/event-day/api/get-tag-sheet';
+import { tagSheetQuery, useTagSheet, type TagSheetFilter } from '../../features/event-day/api/get-tag-sheet';
+import { queryClient } from '../../lib/query-client';
 import type { Tag } from '../../features/event-day/api/types';
 
 const DEFAULT_LAYOUT = 'a4-24';
@@ -30,6 +31,26 @@ function labelMetrics(l: LabelLayout) {
   return { pad, gap, qr, code };
 }
 
+/** The sheet's items from the address: a slot's (?slot=), some items (?items=1,2), or every tag of the event. */
+function sheetFilterOf(slot: string | null, items: string | null): TagSheetFilter {
+  const slotId = positiveInt(slot);
+  if (slotId) return { slotId };
+  return {
+    items: (items ?? '')
+      .split(',')
+      .map((s) => Number(s.trim()))
+      .filter((n) => Number.isInteger(n) && n > 0),
+  };
+}
+
+/** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
+export const loader = ({ params, request }: LoaderFunctionArgs) => {
+  const search = new URL(request.url).searchParams;
+  return queryClient
+    .ensureQueryData(tagSheetQuery(Number(params.eventId), sheetFilterOf(search.get('slot'), search.get('items'))))
+    .catch(() => null);
+};
+
 /**
  * Printable intake tags for a slot, some items, or every checked-in item of the event. On screen: a toolbar and a
  * preview of each sheet at actual size; in print only the sheets, sized to the label stock in millimetres.
@@ -37,20 +58,13 @@ function labelMetrics(l: LabelLayout) {
 export function TagSheetPage() {
   const eventId = Number(useParams().eventId);
   const [params, setParams] = useSearchParams();
-  const slotId = positiveInt(params.get('slot'));
-  const itemsParam = params.get('items') ?? '';
-  const items = useMemo(
-    () =>
-      itemsParam
-        .split(',')
-        .map((s) => Number(s.trim()))
-        .filter((n) => Number.isInteger(n) && n > 0),
-    [itemsParam],
-  );
+  const slot = params.get('slot');
+  const itemsParam = params.get('items');
+  const filter = useMemo(() => sheetFilterOf(slot, itemsParam), [slot, itemsParam]);
   const layout = layoutById(params.get('layout') ?? DEFAULT_LAYOUT);
   const perSheet = layout.columns * layout.rows;
   const skip = Math.min(Math.max(0, Math.floor(Number(params.get('skip')) || 0)), perSheet - 1);
-  const sheet = useTagSheet(eventId, slotId ? { slotId } : { items });
+  const sheet = useTagSheet(eventId, filter);
 
   const setParam = (key: 'layout' | 'skip', value: string, fallback: string) =>
     setParams(
