@@ -1,108 +1,13 @@
 import { eq } from 'drizzle-orm';
 import sharp from 'sharp';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { TAG_CODE_PATTERN } from '../../shared/event-day/tag-code';
-import {
-  bookingItems,
-  groupExclusions,
-  itemStatusChanges,
-  shifts,
-  venueBenches,
-  volunteerSkills,
-} from '../../server/src/db/schema/index';
-import type { RunningServer } from '../../server/src/server';
-import { createTestDatabase, type TestDatabase } from '../support/db';
-import { categoryId, makeEvent, makeGroup, makeUser, visitor } from '../support/factories';
+import { bookingItems, itemStatusChanges } from '../../server/src/db/schema/index';
+import { as, book, cats, db, eventId, groupId, ids, passing, server, slotIds, useEventDay } from '../support/event-day';
+import { makeEvent, visitor } from '../support/factories';
 import { Agent } from '../support/http';
-import { startTestServer, TEST_SECRET } from '../support/server';
-import { manageTokenFor } from '../../server/src/core/links';
 
-let db: TestDatabase;
-let server: RunningServer;
-let groupId: number;
-let eventId: number;
-let slotIds: number[];
-const as: Record<'organiser' | 'host' | 'fixer' | 'fixer2' | 'outsider' | 'anon', Agent> = {} as never;
-const ids: Record<string, number> = {};
-let cats: Record<'kettle' | 'clothing' | 'lamp', number>;
-
-/** Readings that pass for a Class I kettle with 1.5 m of cord (limits from EN 50678 via instrument manuals, REFERENCE.md §3). */
-const passing = {
-  visual: { cord: true, plug: true, strainRelief: true, casing: true, noHeatDamage: true },
-  applianceClass: 'I',
-  heating: true,
-  cordLengthM: 1.5,
-  protectiveConductorOhm: 0.12,
-  insulationMOhm: 45,
-  instrument: 'PAT tester, bench 1',
-};
-
-async function book(slot: number, items: { categoryId: number; fault: string }[], who = visitor()) {
-  const r = await as.anon.post('/api/bookings', { slotId: slot, visitor: who, items, consent: true });
-  expect(r.status).toBe(201);
-  return { reference: r.json.reference as string, who };
-}
-
-beforeAll(async () => {
-  db = await createTestDatabase();
-  server = await startTestServer(db.url);
-  groupId = await makeGroup(db.db);
-  const other = await makeGroup(db.db);
-  // The session started 15 minutes ago: its first slot is still open for bookings, the desk is open.
-  const ev = await makeEvent(db.db, groupId, {
-    startsAt: new Date(Date.now() - 15 * 60_000),
-    slotCount: 4,
-    capacity: 6,
-  });
-  eventId = ev.eventId;
-  slotIds = ev.slotIds;
-  await db.db.insert(venueBenches).values([
-    {
-      venueId: ev.venueId,
-      name: 'Mains bench',
-      seats: 2,
-      equipment: ['multimeter', 'appliance-safety-tester', 'soldering-station'],
-      position: 0,
-    },
-    { venueId: ev.venueId, name: 'Sewing table', seats: 1, equipment: ['sewing-machine'], position: 1 },
-  ]);
-  const users = {
-    organiser: await makeUser(db.db, { roles: [[groupId, 'organiser']] }),
-    host: await makeUser(db.db, { roles: [[groupId, 'host']] }),
-    fixer: await makeUser(db.db, { roles: [[groupId, 'fixer']] }),
-    fixer2: await makeUser(db.db, { roles: [[groupId, 'fixer']] }),
-    outsider: await makeUser(db.db, {
-      roles: [
-        [other, 'fixer'],
-        [other, 'host'],
-      ],
-    }),
-  };
-  for (const [k, u] of Object.entries(users)) {
-    ids[k] = u.id;
-    as[k as keyof typeof as] = new Agent(server.url);
-    expect((await as[k as keyof typeof as].login(u.email, u.password)).status).toBe(200);
-  }
-  as.anon = new Agent(server.url);
-  await db.db.insert(volunteerSkills).values([
-    { userId: ids.fixer, skill: 'electrical', level: 3 },
-    { userId: ids.fixer, skill: 'textiles', level: 2 },
-    { userId: ids.fixer2, skill: 'electrical', level: 2 },
-  ]);
-  const end = new Date(Date.now() + 4 * 3600_000);
-  await db.db
-    .insert(shifts)
-    .values([{ eventId, userId: ids.fixer, coming: true, startsAt: new Date(Date.now() - 3600_000), endsAt: end }]);
-  cats = {
-    kettle: await categoryId(db.db, 'kettle'),
-    clothing: await categoryId(db.db, 'clothing'),
-    lamp: await categoryId(db.db, 'lamp'),
-  };
-});
-afterAll(async () => {
-  await server.stop();
-  await db.drop();
-});
+useEventDay();
 
 describe('reception check-in', () => {
   it('gives each arrived item a tag code and a queue number, and checking in again changes nothing', async () => {
@@ -441,27 +346,6 @@ describe('what the hall and the visitor see', () => {
   });
 });
 
-describe('the visitor’s own booking page', () => {
-  it('shows their items’ status and queue number, and no longer lets them cancel once checked in', async () => {
-    const { reference } = await book(slotIds[2], [
-      { categoryId: cats.clothing, fault: 'Strap of a rucksack torn off.' },
-    ]);
-    const token = manageTokenFor({ env: { SESSION_SECRET: TEST_SECRET } } as never, reference);
-    expect((await as.anon.get(`/api/bookings/${reference}?token=${token}`)).json.items[0]).toMatchObject({
-      status: 'booked',
-      queueNumber: null,
-      outcome: null,
-    });
-    await as.host.post(`/api/bookings/${reference}/check-in`, {});
-    const view = (await as.anon.get(`/api/bookings/${reference}?token=${token}`)).json;
-    expect(view.items[0].status).toMatch(/checked-in|waiting/);
-    expect(view.items[0].queueNumber).toBeGreaterThan(0);
-    const cancel = await as.anon.delete(`/api/bookings/${reference}?token=${token}`);
-    expect(cancel.status).toBe(409);
-    expect(cancel.json.error.code).toBe('checked-in');
-  });
-});
-
 describe('repair photos from the bench', () => {
   async function upload(agent: Agent, itemId: number) {
     const data = await sharp({ create: { width: 800, height: 600, channels: 3, background: '#23395d' } })
@@ -485,36 +369,5 @@ describe('repair photos from the bench', () => {
     expect((await upload(as.outsider, ids.kettle)).status).toBe(403);
     const view = (await as.fixer.get(`/api/items/${ids.kettle}`)).json;
     expect(view.photos.map((p: { kind: string }) => p.kind)).toEqual(['repair']);
-  });
-});
-
-describe('desk rules found in review', () => {
-  it('screens a corrected kind like a booking, and will not mark an item already checked in as a no-show', async () => {
-    const microwave = await categoryId(db.db, 'microwave');
-    await db.db.insert(groupExclusions).values({ groupId, categoryId: microwave });
-    const { reference } = await book(slotIds[2], [{ categoryId: cats.lamp, fault: 'Lamp flickers when moved.' }]);
-    const view = (await as.host.get(`/api/events/${eventId}/desk`)).json;
-    const item = view.slots
-      .flatMap((s: { bookings: { reference: string; items: { id: number }[] }[] }) => s.bookings)
-      .find((b: { reference: string }) => b.reference === reference).items[0];
-    const refused = await as.host.post(`/api/bookings/${reference}/check-in`, {
-      items: [{ id: item.id, arrival: 'arrived', categoryId: microwave }],
-    });
-    expect(refused.status).toBe(422);
-    expect(refused.json.error.fields['items.0.categoryId']).toBeTruthy();
-    expect(
-      (
-        await as.host.post(`/api/bookings/${reference}/check-in`, {
-          items: [{ id: item.id, arrival: 'arrived', weightKg: '0,45' }],
-        })
-      ).status,
-    ).toBe(200);
-    const late = await as.host.post(`/api/bookings/${reference}/check-in`, {
-      items: [{ id: item.id, arrival: 'no-show' }],
-    });
-    expect(late.status).toBe(409);
-    expect(late.json.error.fields['items.0.arrival']).toMatch(/withdrawn/);
-    const [row] = await db.db.select().from(bookingItems).where(eq(bookingItems.id, item.id));
-    expect(row.weighedKg).toBe(0.45);
   });
 });
