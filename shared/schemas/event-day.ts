@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { HAZARDS } from '../constants';
 import { ARRIVALS, BARRIERS, OUTCOMES } from '../event-day/constants';
 import { bookingItemSchema, MAX_ITEMS_PER_BOOKING } from './bookings';
 import { email } from './auth';
@@ -25,6 +26,8 @@ export const checkInItemSchema = z.object({
   arrival: z.enum(ARRIVALS, { error: 'Choose arrived, did not come or withdrawn.' }),
   categoryId: z.coerce.number().int().positive().optional(),
   weightKg,
+  /** The screening questions, asked again at the desk when the kind is corrected (as when booking). */
+  hazards: z.array(z.enum(HAZARDS)).max(HAZARDS.length).optional(),
 });
 
 /** Without a list, every item of the booking has arrived. */

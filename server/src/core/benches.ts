@@ -18,25 +18,28 @@ const benchesOf = (db: DbOrTx, eventId: number) =>
     .orderBy(asc(eventBenches.position), asc(eventBenches.id));
 
 /**
- * An event's benches; the first look copies the venue's usual layout. It runs on the connection it is given: inside
- * a caller's transaction (which may already hold the event row) the copy is a savepoint of that transaction, so it
- * never waits on its own lock from a second connection.
+ * An event's benches; the first look copies the venue's usual layout. It runs on the connection it is given: a
+ * caller inside a transaction passes its `tx` (which may already hold the event row), and the copy is a savepoint
+ * of that transaction, never a second connection waiting on the caller's lock. A venue with no benches has nothing
+ * to copy, so the event row is not locked at all.
  */
-export async function eventLayout(db: DbOrTx, eventId: number) {
-  const existing = await benchesOf(db, eventId);
+export async function eventLayout(tx: DbOrTx, eventId: number) {
+  const existing = await benchesOf(tx, eventId);
   if (existing.length) return existing;
-  return db.transaction(async (tx) => {
-    const [e] = await tx.select({ venueId: events.venueId }).from(events).where(eq(events.id, eventId)).for('update');
-    if (!e) throw notFound('That event');
-    const again = await benchesOf(tx, eventId);
+  const [e] = await tx.select({ venueId: events.venueId }).from(events).where(eq(events.id, eventId));
+  if (!e) throw notFound('That event');
+  if (!(await venueLayout(tx, e.venueId)).length) return [];
+  return tx.transaction(async (sp) => {
+    await sp.select({ id: events.id }).from(events).where(eq(events.id, eventId)).for('update');
+    const again = await benchesOf(sp, eventId);
     if (again.length) return again;
-    const layout = await venueLayout(tx, e.venueId);
+    const layout = await venueLayout(sp, e.venueId);
     if (!layout.length) return [];
-    await tx
+    await sp
       .insert(eventBenches)
       .values(
         layout.map((b) => ({ eventId, name: b.name, seats: b.seats, equipment: b.equipment, position: b.position })),
       );
-    return benchesOf(tx, eventId);
+    return benchesOf(sp, eventId);
   });
 }

@@ -33,29 +33,32 @@ async function fieldErrors(tx: Tx, wanted: Wanted[], items: BookedItem[]) {
   if (Object.keys(fields).length) throw new HttpError(400, 'invalid', 'Some fields need attention.', fields);
 }
 
-/** A corrected kind goes through the same screening as booking: the group's exclusions still hold. */
-async function screenCorrectedKinds(tx: Tx, groupId: number, wanted: Wanted[], items: BookedItem[]) {
-  const corrected = wanted
-    .map((w, n) => ({ w, n }))
+/**
+ * A corrected kind, or a screening answer given at the desk, goes through the same screening as booking: hazards
+ * and the group's exclusions still hold.
+ */
+async function screenAtDesk(tx: Tx, groupId: number, wanted: Wanted[], items: BookedItem[]) {
+  const screened = wanted
+    .map((w, n) => ({ w, n, booked: items.find((i) => i.id === w.id)! }))
     .filter(
-      ({ w }) =>
+      ({ w, booked }) =>
         w.arrival === 'arrived' &&
-        w.categoryId !== undefined &&
-        w.categoryId !== items.find((i) => i.id === w.id)!.categoryId,
+        ((w.categoryId !== undefined && w.categoryId !== booked.categoryId) || Boolean(w.hazards?.length)),
     );
-  if (!corrected.length) return;
+  if (!screened.length) return;
   try {
     await screenItems(
       tx,
       await q.groupById(tx, groupId),
-      corrected.map(({ w }) => ({ categoryId: w.categoryId!, hazards: [] })),
+      screened.map(({ w, booked }) => ({ categoryId: w.categoryId ?? booked.categoryId, hazards: w.hazards ?? [] })),
     );
   } catch (err) {
     if (!(err instanceof HttpError && err.fields)) throw err;
-    const byField = Object.entries(err.fields).map(([k, v]) => [
-      `items.${corrected[Number(k.split('.')[1])].n}.categoryId`,
-      v,
-    ]);
+    // The screening numbers the items it was given; the desk's fields follow the booking's list.
+    const byField = Object.entries(err.fields).map(([k, v]) => {
+      const [, i, field] = k.split('.');
+      return [`items.${screened[Number(i)].n}.${field}`, v];
+    });
     throw new HttpError(422, 'item-refused', err.message, Object.fromEntries(byField));
   }
 }
@@ -115,7 +118,7 @@ export async function checkIn(
         input.items ??
         items.map((i) => ({ id: i.id, arrival: 'arrived' as const, categoryId: undefined, weightKg: undefined }));
       await fieldErrors(tx, wanted, items);
-      await screenCorrectedKinds(tx, e.groupId, wanted, items);
+      await screenAtDesk(tx, e.groupId, wanted, items);
       const itemOf = (w: Wanted) => items.find((i) => i.id === w.id)!;
       for (const [n, w] of wanted.entries()) {
         const status = itemOf(w).status;
