@@ -8,13 +8,13 @@ import { landingPath } from '../lib/roles';
 import { paths } from '../config/paths';
 import { AppShell } from './app-shell';
 import { RouteError } from './route-error';
-import { HomePage } from '../routes/home';
+import * as homePage from '../routes/home';
 import { NotFoundPage } from '../routes/not-found';
 import { SafetyPage } from '../routes/safety';
-import { SignInPage } from '../routes/auth/sign-in';
-import { VolunteerPage } from '../routes/auth/volunteer';
+import * as signInPage from '../routes/auth/sign-in';
+import * as volunteerPage from '../routes/auth/volunteer';
 import { ForgotPasswordPage, ResetPasswordPage, VerifyEmailPage } from '../routes/auth/email-links';
-import { SetupPage } from '../routes/auth/setup';
+import * as setupPage from '../routes/auth/setup';
 import * as eventPage from '../routes/events/detail';
 import * as manageBookingPage from '../routes/bookings/manage';
 import * as claimPages from '../routes/bookings/claim';
@@ -93,14 +93,14 @@ export const router = createBrowserRouter([
         // A page that fails to load says so inside the shell, keeping the menu.
         errorElement: <RouteError />,
         children: [
-          { index: true, element: <HomePage /> },
+          { index: true, ...eager(homePage, 'HomePage') },
           { path: 'safety', element: <SafetyPage /> },
-          { path: 'sign-in', element: <SignInPage /> },
-          { path: 'volunteer', element: <VolunteerPage /> },
+          { path: 'sign-in', ...eager(signInPage, 'SignInPage') },
+          { path: 'volunteer', ...eager(volunteerPage, 'VolunteerPage') },
           { path: 'verify-email', element: <VerifyEmailPage /> },
           { path: 'forgot-password', element: <ForgotPasswordPage /> },
           { path: 'reset-password', element: <ResetPasswordPage /> },
-          { path: 'setup', element: <SetupPage /> },
+          { path: 'setup', ...eager(setupPage, 'SetupPage') },
           { path: 'join/:token', ...page(() => import('../routes/auth/join'), 'JoinPage') },
           { path: 'start', loader: start },
           {

@@ -1,7 +1,8 @@
 import { Link } from 'react-router';
 import { paths } from '../config/paths';
-import { usePublicGroups } from '../features/groups/api/get-public-groups';
+import { usePublicGroups, publicGroupsQuery } from '../features/groups/api/get-public-groups';
 import { Alert, Spinner } from '../components/ui/feedback';
+import { queryClient } from '../lib/query-client';
 
 const steps = [
   {
@@ -20,6 +21,9 @@ const steps = [
     text: 'Sit with a volunteer fixer, watch, learn and help. Mains items get a safety check before they go home.',
   },
 ];
+
+/** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
+export const loader = () => queryClient.ensureQueryData(publicGroupsQuery()).catch(() => null);
 
 export function HomePage() {
   const groups = usePublicGroups();

@@ -1,13 +1,21 @@
 import { format } from 'date-fns';
 import { useState } from 'react';
-import { Link, useParams } from 'react-router';
+import { Link, useParams, type LoaderFunctionArgs } from 'react-router';
 import { Button } from '../../components/ui/button';
 import { ConfirmDialog } from '../../components/ui/confirm-dialog';
 import { Alert, Card, EmptyState, PageTitle, Spinner } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
 import { useClearMailbox } from '../../features/admin/api/clear-mailbox';
-import { useMail } from '../../features/admin/api/get-mail';
-import { useMailbox } from '../../features/admin/api/get-mailbox';
+import { useMail, mailQuery } from '../../features/admin/api/get-mail';
+import { useMailbox, mailboxQuery } from '../../features/admin/api/get-mailbox';
+import { queryClient } from '../../lib/query-client';
+
+/** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
+export const loader = ({ params }: LoaderFunctionArgs) =>
+  Promise.all([
+    queryClient.ensureQueryData(mailboxQuery()),
+    params.mailId ? queryClient.ensureQueryData(mailQuery(Number(params.mailId))) : null,
+  ]).catch(() => null);
 
 /** The local mailbox: every mail Mendery sent while it runs with its own SMTP catcher. */
 export function MailboxPage() {

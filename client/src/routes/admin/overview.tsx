@@ -1,9 +1,18 @@
 import { Link } from 'react-router';
 import { Alert, Card, PageTitle, Spinner } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
-import { useAdminGroups } from '../../features/admin/api/get-admin-groups';
-import { useAdminUsers } from '../../features/admin/api/get-admin-users';
-import { useOutbox } from '../../features/admin/api/get-outbox';
+import { useAdminGroups, adminGroupsQuery } from '../../features/admin/api/get-admin-groups';
+import { useAdminUsers, adminUsersQuery } from '../../features/admin/api/get-admin-users';
+import { useOutbox, outboxQuery } from '../../features/admin/api/get-outbox';
+import { queryClient } from '../../lib/query-client';
+
+/** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
+export const loader = () =>
+  Promise.all([
+    queryClient.ensureQueryData(adminGroupsQuery()),
+    queryClient.ensureQueryData(adminUsersQuery()),
+    queryClient.ensureQueryData(outboxQuery()),
+  ]).catch(() => null);
 
 export function AdminOverviewPage() {
   const groups = useAdminGroups();

@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { Link, useNavigate, useParams } from 'react-router';
+import { Link, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router';
 import { ROLE_LABELS } from '../../../../shared/constants';
 import { inviteSignupSchema } from '../../../../shared/schemas/auth';
 import { Button } from '../../components/ui/button';
@@ -8,10 +8,15 @@ import { TextField } from '../../components/ui/field';
 import { paths } from '../../config/paths';
 import { useUser } from '../../lib/auth';
 import { useAcceptInvite } from '../../features/groups/api/accept-invite';
-import { useInvitation } from '../../features/groups/api/get-invitation';
+import { useInvitation, invitationQuery } from '../../features/groups/api/get-invitation';
 import { useSignUpFromInvite } from '../../features/groups/api/sign-up-from-invite';
 import { applyServerErrors, useZodForm } from '../../lib/form';
 import { landingPath } from '../../lib/roles';
+import { queryClient } from '../../lib/query-client';
+
+/** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
+export const loader = ({ params }: LoaderFunctionArgs) =>
+  queryClient.ensureQueryData(invitationQuery(params.token ?? '')).catch(() => null);
 
 /** The link in an invitation mail: accept as the signed-in person, or make the account it was meant for. */
 export function JoinPage() {

@@ -5,9 +5,13 @@ import { Button } from '../../components/ui/button';
 import { Alert, Card, PageTitle, Spinner } from '../../components/ui/feedback';
 import { TextField } from '../../components/ui/field';
 import { paths } from '../../config/paths';
-import { useConfig } from '../../features/auth/api/get-config';
+import { useConfig, configQuery } from '../../features/auth/api/get-config';
 import { useCreateFirstAdmin } from '../../features/auth/api/create-first-admin';
 import { applyServerErrors, useZodForm } from '../../lib/form';
+import { queryClient } from '../../lib/query-client';
+
+/** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
+export const loader = () => queryClient.ensureQueryData(configQuery).catch(() => null);
 
 /** Shown once, on an empty installation: the first person becomes the platform admin. */
 export function SetupPage() {

@@ -6,11 +6,12 @@ import { Button } from '../../components/ui/button';
 import { Alert, Card } from '../../components/ui/feedback';
 import { TextField } from '../../components/ui/field';
 import { paths } from '../../config/paths';
-import { useConfig } from '../../features/auth/api/get-config';
+import { useConfig, configQuery } from '../../features/auth/api/get-config';
 import { useSignIn } from '../../features/auth/api/sign-in';
 import { useUser } from '../../lib/auth';
 import { applyServerErrors, useZodForm } from '../../lib/form';
 import { landingPath } from '../../lib/roles';
+import { queryClient } from '../../lib/query-client';
 
 const DEMO_ACCOUNTS = [
   ['organiser@example.org', 'Organiser of Kestlebridge Menders (and a fixer at Orrin Vale)'],
@@ -18,6 +19,9 @@ const DEMO_ACCOUNTS = [
   ['host@example.org', 'Reception desk'],
   ['admin@example.org', 'Network admin'],
 ];
+
+/** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
+export const loader = () => queryClient.ensureQueryData(configQuery).catch(() => null);
 
 export function SignInPage() {
   const [params] = useSearchParams();

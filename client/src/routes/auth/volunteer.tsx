@@ -6,8 +6,12 @@ import { Alert, Card, PageTitle, Spinner } from '../../components/ui/feedback';
 import { SelectField, TextField } from '../../components/ui/field';
 import { paths } from '../../config/paths';
 import { useSignUp } from '../../features/auth/api/sign-up';
-import { usePublicGroups } from '../../features/groups/api/get-public-groups';
+import { usePublicGroups, publicGroupsQuery } from '../../features/groups/api/get-public-groups';
 import { applyServerErrors, useZodForm } from '../../lib/form';
+import { queryClient } from '../../lib/query-client';
+
+/** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
+export const loader = () => queryClient.ensureQueryData(publicGroupsQuery()).catch(() => null);
 
 export function VolunteerPage() {
   const groups = usePublicGroups();

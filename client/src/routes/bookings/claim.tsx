@@ -1,10 +1,15 @@
-import { useNavigate, useParams } from 'react-router';
+import { useNavigate, useParams, type LoaderFunctionArgs } from 'react-router';
 import { formatDay, formatTimeRange } from '../../../../shared/format';
 import { Button } from '../../components/ui/button';
 import { Alert, Card, Spinner } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
 import { useClaimOffer } from '../../features/bookings/api/claim-offer';
-import { useOffer } from '../../features/bookings/api/get-offer';
+import { useOffer, offerQuery } from '../../features/bookings/api/get-offer';
+import { queryClient } from '../../lib/query-client';
+
+/** Warms the offer (the booking-code page in this module reads nothing); a failure is left for the page. */
+export const loader = ({ params }: LoaderFunctionArgs) =>
+  params.token ? queryClient.ensureQueryData(offerQuery(params.token)).catch(() => null) : null;
 
 /** The link in a waiting-list offer: one button turns the held place into a booking. */
 export function ClaimOfferPage() {

@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { slotBookability } from '../../../../shared/booking/bookability';
 import { OUTCOME_LABELS } from '../../../../shared/event-day/constants';
 import { StatusChip } from '../../features/event-day/status-chip';
-import { Link, useLocation, useParams, useSearchParams } from 'react-router';
+import { Link, useLocation, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { formatDay, formatTime, formatTimeRange, WHAT_TO_BRING } from '../../../../shared/format';
 import { Button } from '../../components/ui/button';
 import { ConfirmDialog } from '../../components/ui/confirm-dialog';
@@ -10,13 +10,26 @@ import { Alert, Card, Spinner } from '../../components/ui/feedback';
 import { SelectField } from '../../components/ui/field';
 import { paths } from '../../config/paths';
 import { useCancelBooking } from '../../features/bookings/api/cancel-booking';
-import { useBooking } from '../../features/bookings/api/get-booking';
+import { useBooking, bookingQuery } from '../../features/bookings/api/get-booking';
 import { useMoveBooking, useRefreshBooking } from '../../features/bookings/api/move-booking';
 import { uploadPhotos } from '../../features/bookings/api/upload-photos';
 import { eventKeys } from '../../features/events/api/keys';
-import { useEvent } from '../../features/events/api/get-event';
+import { useEvent, eventQuery } from '../../features/events/api/get-event';
 import { StatusBadge } from '../../features/events/components/places-bar';
 import { queryClient } from '../../lib/query-client';
+
+/** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
+export const loader = async ({ params, request }: LoaderFunctionArgs) => {
+  const token = new URL(request.url).searchParams.get('token');
+  if (!token) return null;
+  try {
+    const booking = await queryClient.ensureQueryData(bookingQuery(params.reference ?? '', token));
+    await queryClient.ensureQueryData(eventQuery(booking.event.id));
+  } catch {
+    // The page shows why the booking could not be read.
+  }
+  return null;
+};
 
 /** The visitor's own page, reached with the secret link: view, move or cancel without an account. */
 export function ManageBookingPage() {

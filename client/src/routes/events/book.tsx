@@ -1,6 +1,6 @@
 import { useMemo, useRef, useState } from 'react';
 import { useFieldArray } from 'react-hook-form';
-import { Link, useNavigate, useParams, useSearchParams } from 'react-router';
+import { Link, useNavigate, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { HAZARDS, SKILL_LABELS } from '../../../../shared/constants';
 import { formatDay } from '../../../../shared/format';
 import { slotBookability } from '../../../../shared/booking/bookability';
@@ -17,8 +17,8 @@ import { useCreateBooking } from '../../features/bookings/api/create-booking';
 import { useJoinWaitlist } from '../../features/bookings/api/join-waitlist';
 import { uploadPhotos } from '../../features/bookings/api/upload-photos';
 import { eventKeys } from '../../features/events/api/keys';
-import { useCategoriesQuery } from '../../features/categories/api/get-categories';
-import { useEvent } from '../../features/events/api/get-event';
+import { useCategoriesQuery, categoriesQuery } from '../../features/categories/api/get-categories';
+import { useEvent, eventQuery } from '../../features/events/api/get-event';
 import type { Category } from '../../../../shared/api/categories';
 import type { EventDetail } from '../../../../shared/api/events';
 import { queryClient } from '../../lib/query-client';
@@ -26,6 +26,12 @@ import { ApiError } from '../../lib/api';
 import { applyServerErrors, useZodForm } from '../../lib/form';
 
 const emptyItem = { categoryId: '' as unknown as number, brand: '', model: '', fault: '', hazards: [] as never[] };
+// Warms the cache; a failure is left to the page's own message.
+export const loader = ({ params }: LoaderFunctionArgs) =>
+  Promise.all([
+    queryClient.ensureQueryData(eventQuery(Number(params.eventId))),
+    queryClient.ensureQueryData(categoriesQuery()),
+  ]).catch(() => null);
 
 export function BookingPage() {
   const id = Number(useParams().eventId);

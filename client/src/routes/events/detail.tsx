@@ -1,13 +1,21 @@
-import { Link, useParams } from 'react-router';
+import { Link, useParams, type LoaderFunctionArgs } from 'react-router';
 import { slotHasPassed } from '../../../../shared/booking/bookability';
 import { SKILL_LABELS } from '../../../../shared/constants';
 import { formatDay, formatTime, formatTimeRange, WHAT_TO_BRING } from '../../../../shared/format';
 import { Alert, Card, Spinner } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
 import { useUser } from '../../lib/auth';
-import { useCategoriesQuery } from '../../features/categories/api/get-categories';
-import { useEvent } from '../../features/events/api/get-event';
+import { useCategoriesQuery, categoriesQuery } from '../../features/categories/api/get-categories';
+import { useEvent, eventQuery } from '../../features/events/api/get-event';
 import { PlacesBar, StatusBadge } from '../../features/events/components/places-bar';
+import { queryClient } from '../../lib/query-client';
+
+/** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
+export const loader = ({ params }: LoaderFunctionArgs) =>
+  Promise.all([
+    queryClient.ensureQueryData(eventQuery(Number(params.eventId))),
+    queryClient.ensureQueryData(categoriesQuery()),
+  ]).catch(() => null);
 
 export function EventPage() {
   const id = Number(useParams().eventId);

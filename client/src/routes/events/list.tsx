@@ -1,14 +1,29 @@
-import { Link, useNavigate, useSearchParams } from 'react-router';
+import { Link, useNavigate, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { SKILL_LABELS } from '../../../../shared/constants';
 import { formatDay, formatTimeRange } from '../../../../shared/format';
 import { Alert, Card, EmptyState, PageTitle, Spinner } from '../../components/ui/feedback';
 import { MonthCalendar } from '../../components/ui/month-calendar';
 import { SelectField } from '../../components/ui/field';
 import { paths } from '../../config/paths';
-import { useCategoriesQuery } from '../../features/categories/api/get-categories';
-import { useEvents } from '../../features/events/api/get-events';
-import { usePublicGroups } from '../../features/groups/api/get-public-groups';
+import { useCategoriesQuery, categoriesQuery } from '../../features/categories/api/get-categories';
+import { useEvents, eventsQuery } from '../../features/events/api/get-events';
+import { usePublicGroups, publicGroupsQuery } from '../../features/groups/api/get-public-groups';
 import { PlacesBar } from '../../features/events/components/places-bar';
+import { queryClient } from '../../lib/query-client';
+
+/** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
+export const loader = ({ request }: LoaderFunctionArgs) => {
+  const search = new URL(request.url).searchParams;
+  const filters = {
+    groupId: Number(search.get('group')) || undefined,
+    categoryId: Number(search.get('category')) || undefined,
+  };
+  return Promise.all([
+    queryClient.ensureQueryData(eventsQuery(filters)),
+    queryClient.ensureQueryData(publicGroupsQuery()),
+    queryClient.ensureQueryData(categoriesQuery()),
+  ]).catch(() => null);
+};
 
 /** Upcoming sessions as a month calendar or a list, filtered by group and by the kind of item. */
 export function EventsPage() {

@@ -1,5 +1,6 @@
 import { useState } from 'react';
-import { Link, useParams } from 'react-router';
+import { useSuspenseQuery } from '@tanstack/react-query';
+import { Link, useParams, type LoaderFunctionArgs } from 'react-router';
 import { SKILL_LABELS, type Skill } from '../../../../shared/constants';
 import { formatDay, formatTime, formatTimeRange } from '../../../../shared/format';
 import { EventTabs } from '../../components/layouts/event-tabs';
@@ -7,22 +8,29 @@ import { Button } from '../../components/ui/button';
 import { ConfirmDialog } from '../../components/ui/confirm-dialog';
 import { Alert, Card, EmptyState, Spinner } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
-import { useEvent } from '../../features/events/api/get-event';
+import { eventQuery } from '../../features/events/api/get-event';
 import { useChangeEvent } from '../../features/events/api/change-event';
-import { useEventBookings } from '../../features/events/api/get-event-bookings';
+import { eventBookingsQuery, useEventBookings } from '../../features/events/api/get-event-bookings';
 import { PlacesBar, StatusBadge } from '../../features/events/components/places-bar';
+import { queryClient } from '../../lib/query-client';
+
+/** The event must load (else the error page says why); what is coming may fail on its own, in its card. */
+export const loader = ({ params }: LoaderFunctionArgs) => {
+  const id = Number(params.eventId);
+  return Promise.all([
+    queryClient.ensureQueryData(eventQuery(id)),
+    queryClient.ensureQueryData(eventBookingsQuery(id)).catch(() => null),
+  ]);
+};
 
 /** The organiser's view of one session: its state, its slots, and what is coming. */
 export function ManageEventPage() {
   const id = Number(useParams().eventId);
-  const event = useEvent(id);
+  const { data: e } = useSuspenseQuery(eventQuery(id));
   const coming = useEventBookings(id);
   const action = useChangeEvent(id);
   const [ask, setAsk] = useState<null | 'publish' | 'close' | 'cancel'>(null);
   const [reason, setReason] = useState('');
-  if (event.isPending) return <Spinner />;
-  if (event.error) return <Alert tone="error">{event.error.message}</Alert>;
-  const e = event.data;
   const tz = e.timeZone;
   const draft = e.status === 'draft';
   const questions = {

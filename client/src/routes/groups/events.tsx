@@ -1,11 +1,19 @@
-import { Link, useParams } from 'react-router';
+import { Link, useParams, type LoaderFunctionArgs } from 'react-router';
 import { formatDay, formatTimeRange } from '../../../../shared/format';
 import { GroupTabs } from '../../components/layouts/group-tabs';
 import { Alert, EmptyState, Spinner } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
-import { useGroupEvents } from '../../features/events/api/get-group-events';
-import { useGroupSettings } from '../../features/groups/api/get-group-settings';
+import { useGroupEvents, groupEventsQuery } from '../../features/events/api/get-group-events';
+import { useGroupSettings, groupSettingsQuery } from '../../features/groups/api/get-group-settings';
 import { PlacesBar, StatusBadge } from '../../features/events/components/places-bar';
+import { queryClient } from '../../lib/query-client';
+
+/** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
+export const loader = ({ params }: LoaderFunctionArgs) =>
+  Promise.all([
+    queryClient.ensureQueryData(groupEventsQuery(Number(params.groupId))),
+    queryClient.ensureQueryData(groupSettingsQuery(Number(params.groupId))),
+  ]).catch(() => null);
 
 export function GroupEventsPage() {
   const groupId = Number(useParams().groupId);

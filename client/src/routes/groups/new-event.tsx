@@ -1,17 +1,19 @@
 import { TZDate } from '@date-fns/tz';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
-import { useNavigate, useParams } from 'react-router';
+import { useSuspenseQuery } from '@tanstack/react-query';
+import { useNavigate, useParams, type LoaderFunctionArgs } from 'react-router';
 import { SKILL_LABELS, SKILLS } from '../../../../shared/constants';
 import { generateSlots } from '../../../../shared/booking/slots';
 import { GroupTabs } from '../../components/layouts/group-tabs';
 import { Button } from '../../components/ui/button';
-import { Alert, Card, Spinner } from '../../components/ui/feedback';
+import { Alert, Card } from '../../components/ui/feedback';
 import { SelectField, TextField } from '../../components/ui/field';
 import { paths } from '../../config/paths';
 import { useCreateEvent } from '../../features/events/api/create-event';
-import { useGroupSettings } from '../../features/groups/api/get-group-settings';
-import { useVenues } from '../../features/groups/api/get-venues';
+import { groupSettingsQuery } from '../../features/groups/api/get-group-settings';
+import { venuesQuery } from '../../features/groups/api/get-venues';
+import { queryClient } from '../../lib/query-client';
 import { ApiError } from '../../lib/api';
 
 interface Values {
@@ -33,10 +35,18 @@ const instant = (date: string, time: string, zone: string) => {
   return new TZDate(y, m - 1, d, hh, mm, 0, zone).toISOString();
 };
 
+export const loader = ({ params }: LoaderFunctionArgs) => {
+  const groupId = Number(params.groupId);
+  return Promise.all([
+    queryClient.ensureQueryData(groupSettingsQuery(groupId)),
+    queryClient.ensureQueryData(venuesQuery(groupId)),
+  ]);
+};
+
 export function NewEventPage() {
   const groupId = Number(useParams().groupId);
-  const group = useGroupSettings(groupId);
-  const venues = useVenues(groupId);
+  const group = useSuspenseQuery(groupSettingsQuery(groupId));
+  const venues = useSuspenseQuery(venuesQuery(groupId));
   const create = useCreateEvent();
   const navigate = useNavigate();
   const [formError, setFormError] = useState<string | null>(null);
@@ -55,8 +65,6 @@ export function NewEventPage() {
   });
   const errors = form.formState.errors;
   const v = form.watch();
-  if (group.isPending || venues.isPending) return <Spinner />;
-  if (group.error) return <Alert tone="error">{group.error.message}</Alert>;
   const zone = group.data.timeZone;
 
   let preview: string | null = null;
@@ -121,12 +129,12 @@ export function NewEventPage() {
         {formError && <Alert tone="error">{formError}</Alert>}
         <Card className="space-y-4">
           <TextField label="Title" error={errors.title?.message} {...form.register('title')} />
-          {venues.data?.length === 0 ? (
+          {venues.data.length === 0 ? (
             <Alert tone="caution">Add a venue first, under “Rules and venues”.</Alert>
           ) : (
             <SelectField label="Venue" error={errors.venueId?.message} {...form.register('venueId')}>
               <option value="">Choose…</option>
-              {venues.data?.map((x) => (
+              {venues.data.map((x) => (
                 <option key={x.id} value={x.id}>
                   {x.name}, {x.town}
                 </option>

@@ -1,12 +1,14 @@
 import { useState } from 'react';
-import { useParams } from 'react-router';
+import { useSuspenseQuery } from '@tanstack/react-query';
+import { useParams, type LoaderFunctionArgs } from 'react-router';
 import { ROLE_LABELS } from '../../../../shared/constants';
 import { Button } from '../../components/ui/button';
 import { ConfirmDialog } from '../../components/ui/confirm-dialog';
 import { GroupTabs } from '../../components/layouts/group-tabs';
-import { Alert, Card, EmptyState, Spinner } from '../../components/ui/feedback';
+import { Alert, Card, EmptyState } from '../../components/ui/feedback';
 import { useApproveMember } from '../../features/groups/api/approve-member';
-import { useMembers } from '../../features/groups/api/get-members';
+import { membersQuery } from '../../features/groups/api/get-members';
+import { queryClient } from '../../lib/query-client';
 import { useRemoveMember } from '../../features/groups/api/remove-member';
 import { useInviteMember } from '../../features/groups/api/invite-member';
 import type { Member } from '../../../../shared/api/groups';
@@ -14,20 +16,16 @@ import { inviteSchema } from '../../../../shared/schemas/auth';
 import { SelectField, TextField } from '../../components/ui/field';
 import { applyServerErrors, useZodForm } from '../../lib/form';
 
+export const loader = ({ params }: LoaderFunctionArgs) =>
+  queryClient.ensureQueryData(membersQuery(Number(params.groupId)));
+
 export function GroupPeoplePage() {
   const groupId = Number(useParams().groupId);
-  const members = useMembers(groupId);
+  const members = useSuspenseQuery(membersQuery(groupId));
   const approve = useApproveMember(groupId);
   const remove = useRemoveMember(groupId);
   const [toRemove, setToRemove] = useState<Member | null>(null);
 
-  if (members.isPending) return <Spinner label="Loading the group…" />;
-  if (members.error)
-    return (
-      <Alert tone="error" title="Could not load the group">
-        {members.error.message}
-      </Alert>
-    );
   const pending = members.data.members.filter((m) => m.status === 'pending');
   const active = members.data.members.filter((m) => m.status === 'active');
   const byRole = (role: Member['role']) => active.filter((m) => m.role === role).length;

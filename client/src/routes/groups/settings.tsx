@@ -1,28 +1,37 @@
 import { useEffect, useState } from 'react';
-import { useParams } from 'react-router';
+import { useSuspenseQuery } from '@tanstack/react-query';
+import { useParams, type LoaderFunctionArgs } from 'react-router';
 import { SKILL_LABELS } from '../../../../shared/constants';
 import { venueSchema } from '../../../../shared/schemas/events';
 import { GroupTabs } from '../../components/layouts/group-tabs';
 import { Button } from '../../components/ui/button';
 import { Alert, Card, Spinner } from '../../components/ui/feedback';
-import { CheckField } from '../../components/ui/field';
+import { CheckField, TextField } from '../../components/ui/field';
 import { useSharing } from '../../features/toolkit/api/get-sharing';
 import { useSetSharing } from '../../features/toolkit/api/set-sharing';
-import { TextField } from '../../components/ui/field';
-import { useCategoriesQuery } from '../../features/categories/api/get-categories';
+import { categoriesQuery, useCategories } from '../../features/categories/api/get-categories';
 import { useCreateVenue } from '../../features/groups/api/create-venue';
-import { useGroupSettings } from '../../features/groups/api/get-group-settings';
+import { groupSettingsQuery } from '../../features/groups/api/get-group-settings';
 import { useSaveGroupSettings } from '../../features/groups/api/save-group-settings';
-import { useVenues } from '../../features/groups/api/get-venues';
+import { venuesQuery } from '../../features/groups/api/get-venues';
 import { eventKeys } from '../../features/events/api/keys';
 import { queryClient } from '../../lib/query-client';
 import { applyServerErrors, useZodForm } from '../../lib/form';
 
+export const loader = ({ params }: LoaderFunctionArgs) => {
+  const groupId = Number(params.groupId);
+  return Promise.all([
+    queryClient.ensureQueryData(groupSettingsQuery(groupId)),
+    queryClient.ensureQueryData(categoriesQuery()),
+    queryClient.ensureQueryData(venuesQuery(groupId)),
+  ]);
+};
+
 export function GroupSettingsPage() {
   const groupId = Number(useParams().groupId);
-  const settings = useGroupSettings(groupId);
-  const categories = useCategoriesQuery();
-  const venues = useVenues(groupId);
+  const settings = useSuspenseQuery(groupSettingsQuery(groupId));
+  const categories = useCategories();
+  const venues = useSuspenseQuery(venuesQuery(groupId));
   // The house rules and refused kinds are part of every event the group shows.
   const save = useSaveGroupSettings(groupId, () => queryClient.invalidateQueries({ queryKey: eventKeys.all }));
   const addVenue = useCreateVenue(groupId);
@@ -31,13 +40,9 @@ export function GroupSettingsPage() {
   const venueForm = useZodForm(venueSchema, { groupId, name: '', address: '', town: '', accessNotes: '' });
   const [venueError, setVenueError] = useState<string | null>(null);
   useEffect(() => {
-    if (settings.data) {
-      setRules(settings.data.houseRules);
-      setExcluded(new Set(settings.data.excludedCategoryIds));
-    }
+    setRules(settings.data.houseRules);
+    setExcluded(new Set(settings.data.excludedCategoryIds));
   }, [settings.data]);
-  if (settings.isPending || categories.isPending) return <Spinner />;
-  if (settings.error) return <Alert tone="error">{settings.error.message}</Alert>;
   const toggle = (id: number) => {
     save.reset();
     setExcluded((s) => {
@@ -75,7 +80,7 @@ export function GroupSettingsPage() {
             <legend className="font-semibold">Categories you do not take</legend>
             <div className="mt-2 max-h-96 space-y-3 overflow-y-auto pr-2">
               {Object.entries(SKILL_LABELS).map(([skill, label]) => {
-                const list = (categories.data ?? []).filter((c) => c.skill === skill);
+                const list = categories.data.filter((c) => c.skill === skill);
                 if (!list.length) return null;
                 return (
                   <div key={skill}>
@@ -111,11 +116,9 @@ export function GroupSettingsPage() {
 
         <Card className="space-y-4">
           <h2 className="text-lg">Venues</h2>
-          {venues.data?.length === 0 && (
-            <p className="text-sm text-ink-soft">No venue yet: add the hall you meet in.</p>
-          )}
+          {venues.data.length === 0 && <p className="text-sm text-ink-soft">No venue yet: add the hall you meet in.</p>}
           <ul className="space-y-2">
-            {venues.data?.map((v) => (
+            {venues.data.map((v) => (
               <li key={v.id} className="rounded-lg bg-paper p-3">
                 <p className="font-bold">{v.name}</p>
                 <p className="text-sm">

@@ -1,4 +1,4 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { queryOptions } from '@tanstack/react-query';
 import type { GroupMembers } from '../../../../../shared/api/groups';
 import { api } from '../../../lib/api';
 import { groupKeys } from './keys';
@@ -7,5 +7,3 @@ const getMembers = (groupId: number) => api<GroupMembers>('GET', `/api/groups/${
 
 export const membersQuery = (groupId: number) =>
   queryOptions({ queryKey: groupKeys.members(groupId), queryFn: () => getMembers(groupId) });
-
-export const useMembers = (groupId: number) => useQuery(membersQuery(groupId));

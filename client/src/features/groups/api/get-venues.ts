@@ -1,4 +1,4 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { queryOptions } from '@tanstack/react-query';
 import type { Venue } from '../../../../../shared/api/groups';
 import { api } from '../../../lib/api';
 import { groupKeys } from './keys';
@@ -7,5 +7,3 @@ const getVenues = (groupId: number) => api<Venue[]>('GET', `/api/venues?groupId=
 
 export const venuesQuery = (groupId: number) =>
   queryOptions({ queryKey: groupKeys.venues(groupId), queryFn: () => getVenues(groupId) });
-
-export const useVenues = (groupId: number) => useQuery(venuesQuery(groupId));
