@@ -11,7 +11,9 @@ const root = path.resolve(__dirname, '../..');
 const columns = [
   { name: 'screens', base: 'client/src/routes' },
   { name: 'client', base: 'client/src/features' },
-  { name: 'server', base: 'server/src/features' },
+  { name: 'routes', base: 'server/src/features' },
+  { name: 'service', base: 'server/src/features' },
+  { name: 'queries', base: 'server/src/features' },
   { name: 'schemas', base: 'shared/schemas' },
   { name: 'rules', base: 'shared' },
 ] as const;
@@ -51,6 +53,11 @@ function resolve(column: (typeof columns)[number], p: string): string[] {
 const folders = (dir: string) =>
   readdirSync(path.join(root, dir)).filter((f) => statSync(path.join(root, dir, f)).isDirectory());
 
+const files = (dir: string): string[] =>
+  readdirSync(path.join(root, dir), { withFileTypes: true }).flatMap((d) =>
+    d.isDirectory() ? files(`${dir}/${d.name}`) : [`${dir}/${d.name}`],
+  );
+
 describe('the feature map in DEVELOPERS.md', () => {
   const rows = mapRows();
 
@@ -71,22 +78,20 @@ describe('the feature map in DEVELOPERS.md', () => {
     expect(missing).toEqual([]);
   });
 
-  it('has a row for every client and server feature, and every screen folder', () => {
-    const named = (i: number) =>
-      new Set(rows.flatMap((r) => (r.cells[i] ?? []).flatMap((p) => resolve(columns[i], p))).map((p) => path.relative(root, p).replace(/\/$/, '')));
-    const clientNamed = named(1);
-    const serverNamed = named(2);
-    const screensNamed = named(0);
+  it('has a row for every client and server feature, and every screen', () => {
+    const named = (...cols: number[]) =>
+      rows.flatMap((r) =>
+        cols.flatMap((i) => (r.cells[i] ?? []).flatMap((p) => resolve(columns[i], p)).map((f) => path.relative(root, f))),
+      );
+    const covered = (names: string[]) => (dir: string) => names.some((n) => n === dir || n.startsWith(dir + '/'));
     const unmapped = [
       ...folders('client/src/features')
         .map((f) => `client/src/features/${f}`)
-        .filter((f) => !clientNamed.has(f)),
+        .filter((f) => !covered(named(1))(f)),
       ...folders('server/src/features')
         .map((f) => `server/src/features/${f}`)
-        .filter((f) => !serverNamed.has(f)),
-      ...readdirSync(path.join(root, 'client/src/routes'))
-        .map((f) => `client/src/routes/${f}`)
-        .filter((f) => !screensNamed.has(f) && ![...screensNamed].some((s) => s.startsWith(f + '/'))),
+        .filter((f) => !covered(named(2, 3, 4))(f)),
+      ...files('client/src/routes').filter((f) => !named(0).some((n) => f === n || f.startsWith(n + '/'))),
     ];
     expect(unmapped).toEqual([]);
   });
