@@ -124,8 +124,9 @@ export default tseslint.config(
   },
   {
     // SQL lives in a feature's queries (queries.ts or queries/): routes parse and answer, services decide.
-    files: ['server/src/features/**/*.ts'],
-    ignores: ['server/src/features/*/queries.ts', 'server/src/features/*/queries/**'],
+    // Sign-in (server/src/auth) follows the same layering.
+    files: ['server/src/features/**/*.ts', 'server/src/auth/**/*.ts'],
+    ignores: ['server/src/features/*/queries.ts', 'server/src/features/*/queries/**', 'server/src/auth/queries.ts'],
     rules: {
       '@typescript-eslint/no-restricted-imports': [
         'error',

@@ -81,7 +81,9 @@ describe('the feature map in DEVELOPERS.md', () => {
   it('has a row for every client and server feature, and every screen', () => {
     const named = (...cols: number[]) =>
       rows.flatMap((r) =>
-        cols.flatMap((i) => (r.cells[i] ?? []).flatMap((p) => resolve(columns[i], p)).map((f) => path.relative(root, f))),
+        cols.flatMap((i) =>
+          (r.cells[i] ?? []).flatMap((p) => resolve(columns[i], p)).map((f) => path.relative(root, f)),
+        ),
       );
     const covered = (names: string[]) => (dir: string) => names.some((n) => n === dir || n.startsWith(dir + '/'));
     const unmapped = [

@@ -3,7 +3,7 @@ import type { GroupRole } from '../../../shared/constants';
 import type { SessionUser } from '../../../shared/schemas/auth';
 import type { Db } from '../db/client';
 import { HttpError } from '../http/errors';
-import { loadSessionUser } from './users';
+import { loadSessionUser } from './queries';
 
 declare global {
   // eslint-disable-next-line @typescript-eslint/no-namespace

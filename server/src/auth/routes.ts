@@ -14,7 +14,7 @@ import { MariadbRateLimitStore } from '../http/rate-limit-store';
 import { body } from '../http/validate';
 import { unauthenticated } from './guards';
 import * as auth from './service';
-import { loadSessionUser } from './users';
+import { loadSessionUser } from './queries';
 
 const regenerate = (req: Request) =>
   new Promise<void>((res, rej) => req.session.regenerate((e) => (e ? rej(e) : res())));

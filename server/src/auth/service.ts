@@ -1,11 +1,11 @@
-import { and, count, eq, gt, isNull, sql } from 'drizzle-orm';
 import type { LoginInput, SignupInput } from '../../../shared/schemas/auth';
 import type { AppContext } from '../context';
-import { authTokens, memberships, repairGroups, sessions, settings, users } from '../db/schema/index';
+import type { Tx } from '../db/client';
 import { HttpError } from '../http/errors';
 import { enqueueMail } from '../mail/outbox';
 import { composeMail } from '../mail/templates';
 import { dummyHash, hashPassword, verifyPassword } from './passwords';
+import * as q from './queries';
 import { newToken, sha256 } from './tokens';
 
 const HOUR = 3600_000;
@@ -23,7 +23,7 @@ const invalidLink = () =>
 
 /** Returns the user id, or throws the same 401 for an unknown e-mail and a wrong password. */
 export async function authenticate(ctx: AppContext, input: LoginInput): Promise<number> {
-  const [user] = await ctx.database.db.select().from(users).where(eq(users.email, input.email));
+  const user = await q.userByEmail(ctx.database.db, input.email);
   const ok = await verifyPassword(user?.passwordHash ?? (await dummyHash()), input.password);
   if (!user || !user.passwordHash || !ok) throw invalidCredentials();
   if (!user.emailVerifiedAt) {
@@ -39,12 +39,12 @@ export async function authenticate(ctx: AppContext, input: LoginInput): Promise<
 /** Volunteer sign-up. Answers the same whether or not the e-mail already has an account. */
 export async function signup(ctx: AppContext, input: SignupInput): Promise<void> {
   const { db } = ctx.database;
-  const [group] = await db.select().from(repairGroups).where(eq(repairGroups.id, input.groupId));
+  const group = await q.groupById(db, input.groupId);
   if (!group)
     throw new HttpError(400, 'invalid', 'Some fields need attention.', { groupId: 'Choose one of the listed groups.' });
   const passwordHash = await hashPassword(input.password);
   await db.transaction(async (tx) => {
-    const [existing] = await tx.select().from(users).where(eq(users.email, input.email));
+    const existing = await q.userByEmail(tx, input.email);
     if (existing) {
       await enqueueMail(
         tx,
@@ -59,15 +59,15 @@ export async function signup(ctx: AppContext, input: SignupInput): Promise<void>
       );
       return;
     }
-    const [{ id: userId }] = await tx
-      .insert(users)
-      .values({ email: input.email, name: input.name, passwordHash })
-      .$returningId();
-    await tx.insert(memberships).values({ userId, groupId: group.id, role: input.role, status: 'pending' });
+    const userId = await q.insertUser(tx, { email: input.email, name: input.name, passwordHash });
+    await q.insertPendingMembership(tx, { userId, groupId: group.id, role: input.role });
     const { token, hash } = newToken();
-    await tx
-      .insert(authTokens)
-      .values({ userId, purpose: 'verify-email', tokenHash: hash, expiresAt: new Date(Date.now() + VERIFY_LINK_MS) });
+    await q.insertToken(tx, {
+      userId,
+      purpose: 'verify-email',
+      hash,
+      expiresAt: new Date(Date.now() + VERIFY_LINK_MS),
+    });
     await enqueueMail(
       tx,
       composeMail(input.email, 'Confirm your e-mail address for Mendery', {
@@ -83,46 +83,19 @@ export async function signup(ctx: AppContext, input: SignupInput): Promise<void>
   ctx.outbox.kick();
 }
 
-async function consumeToken(
-  tx: Parameters<Parameters<AppContext['database']['db']['transaction']>[0]>[0],
-  token: string,
-  purpose: 'verify-email' | 'reset-password',
-) {
-  const [row] = await tx
-    .select()
-    .from(authTokens)
-    .where(
-      and(
-        eq(authTokens.tokenHash, sha256(token)),
-        eq(authTokens.purpose, purpose),
-        isNull(authTokens.usedAt),
-        gt(authTokens.expiresAt, sql`NOW(3)`),
-      ),
-    )
-    .for('update');
-  if (!row) throw invalidLink();
-  await tx.update(authTokens).set({ usedAt: new Date() }).where(eq(authTokens.id, row.id));
-  return row.userId;
+async function consumeToken(tx: Tx, token: string, purpose: q.TokenPurpose): Promise<number> {
+  const userId = await q.consumeToken(tx, sha256(token), purpose);
+  if (userId == null) throw invalidLink();
+  return userId;
 }
 
 export async function verifyEmail(ctx: AppContext, token: string): Promise<void> {
   await ctx.database.db.transaction(async (tx) => {
     const userId = await consumeToken(tx, token, 'verify-email');
-    await tx.update(users).set({ emailVerifiedAt: new Date() }).where(eq(users.id, userId));
-    const [user] = await tx.select().from(users).where(eq(users.id, userId));
-    const pending = await tx
-      .select({ groupId: memberships.groupId, role: memberships.role, groupName: repairGroups.name })
-      .from(memberships)
-      .innerJoin(repairGroups, eq(repairGroups.id, memberships.groupId))
-      .where(and(eq(memberships.userId, userId), eq(memberships.status, 'pending')));
-    for (const p of pending) {
-      const organisers = await tx
-        .select({ email: users.email, name: users.name })
-        .from(memberships)
-        .innerJoin(users, eq(users.id, memberships.userId))
-        .where(
-          and(eq(memberships.groupId, p.groupId), eq(memberships.role, 'organiser'), eq(memberships.status, 'active')),
-        );
+    await q.markEmailVerified(tx, userId);
+    const user = (await q.userById(tx, userId))!;
+    for (const p of await q.pendingMemberships(tx, userId)) {
+      const organisers = await q.activeOrganisers(tx, p.groupId);
       for (const o of organisers) {
         await enqueueMail(
           tx,
@@ -144,18 +117,14 @@ export async function verifyEmail(ctx: AppContext, token: string): Promise<void>
 /** Always answers the same; mails a single-use link valid for an hour when the account exists. */
 export async function requestPasswordReset(ctx: AppContext, email: string): Promise<void> {
   await ctx.database.db.transaction(async (tx) => {
-    const [user] = await tx.select().from(users).where(eq(users.email, email));
+    const user = await q.userByEmail(tx, email);
     if (!user) return;
-    // Only the newest link works.
-    await tx
-      .update(authTokens)
-      .set({ usedAt: new Date() })
-      .where(and(eq(authTokens.userId, user.id), eq(authTokens.purpose, 'reset-password'), isNull(authTokens.usedAt)));
+    await q.spendOpenTokens(tx, user.id, 'reset-password');
     const { token, hash } = newToken();
-    await tx.insert(authTokens).values({
+    await q.insertToken(tx, {
       userId: user.id,
       purpose: 'reset-password',
-      tokenHash: hash,
+      hash,
       expiresAt: new Date(Date.now() + RESET_LINK_MS),
     });
     await enqueueMail(
@@ -178,23 +147,17 @@ export async function confirmPasswordReset(ctx: AppContext, token: string, passw
   const passwordHash = await hashPassword(password);
   await ctx.database.db.transaction(async (tx) => {
     const userId = await consumeToken(tx, token, 'reset-password');
-    await tx
-      .update(users)
-      .set({ passwordHash, emailVerifiedAt: sql`COALESCE(${users.emailVerifiedAt}, NOW(3))` })
-      .where(eq(users.id, userId));
     // A new password signs out every existing session of that person.
-    await tx.delete(sessions).where(sql`JSON_VALUE(${sessions.data}, '$.userId') = ${userId}`);
+    await q.replacePassword(tx, userId, passwordHash);
   });
 }
 
 export async function needsSetup(ctx: AppContext): Promise<boolean> {
-  const [{ n }] = await ctx.database.db.select({ n: count() }).from(users);
-  return n === 0;
+  return (await q.countUsers(ctx.database.db)) === 0;
 }
 
 export async function isDemo(ctx: AppContext): Promise<boolean> {
-  const [row] = await ctx.database.db.select().from(settings).where(eq(settings.key, 'demo'));
-  return row?.value === true;
+  return (await q.settingValue(ctx.database.db, 'demo')) === true;
 }
 
 /** Creates the first admin of an empty installation; the settings row makes a second attempt fail. */
@@ -205,14 +168,16 @@ export async function createFirstAdmin(
   const passwordHash = await hashPassword(input.password);
   try {
     return await ctx.database.db.transaction(async (tx) => {
-      const [{ n }] = await tx.select({ n: count() }).from(users);
-      if (n > 0) throw new HttpError(409, 'already-set-up', 'This installation already has an admin. Sign in instead.');
-      await tx.insert(settings).values({ key: 'first-admin', value: true });
-      const [{ id }] = await tx
-        .insert(users)
-        .values({ name: input.name, email: input.email, passwordHash, admin: true, emailVerifiedAt: new Date() })
-        .$returningId();
-      return id;
+      if ((await q.countUsers(tx)) > 0)
+        throw new HttpError(409, 'already-set-up', 'This installation already has an admin. Sign in instead.');
+      await q.insertSetting(tx, 'first-admin', true);
+      return q.insertUser(tx, {
+        name: input.name,
+        email: input.email,
+        passwordHash,
+        admin: true,
+        emailVerifiedAt: new Date(),
+      });
     });
   } catch (err) {
     if ((err as { code?: string }).code === 'ER_DUP_ENTRY')

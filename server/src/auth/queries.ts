@@ -1,0 +1,131 @@
+import { and, count, eq, gt, isNull, sql } from 'drizzle-orm';
+import type { SessionUser } from '../../../shared/schemas/auth';
+import type { DbOrTx, Tx } from '../db/client';
+import { authTokens, memberships, repairGroups, sessions, settings, users } from '../db/schema/index';
+
+/** The SQL of signing in, signing up and the mailed links; the rules are in service.ts. */
+export type TokenPurpose = 'verify-email' | 'reset-password';
+
+export async function userByEmail(db: DbOrTx, email: string) {
+  const [user] = await db.select().from(users).where(eq(users.email, email));
+  return user;
+}
+
+export async function userById(db: DbOrTx, id: number) {
+  const [user] = await db.select().from(users).where(eq(users.id, id));
+  return user;
+}
+
+export async function groupById(db: DbOrTx, id: number) {
+  const [group] = await db.select().from(repairGroups).where(eq(repairGroups.id, id));
+  return group;
+}
+
+export async function insertUser(
+  tx: Tx,
+  values: { email: string; name: string; passwordHash: string; admin?: boolean; emailVerifiedAt?: Date },
+): Promise<number> {
+  const [{ id }] = await tx.insert(users).values(values).$returningId();
+  return id;
+}
+
+export async function insertPendingMembership(
+  tx: Tx,
+  row: { userId: number; groupId: number; role: 'fixer' | 'host' | 'organiser' },
+) {
+  await tx.insert(memberships).values({ ...row, status: 'pending' });
+}
+
+export async function insertToken(
+  tx: Tx,
+  row: { userId: number; purpose: TokenPurpose; hash: string; expiresAt: Date },
+) {
+  await tx
+    .insert(authTokens)
+    .values({ userId: row.userId, purpose: row.purpose, tokenHash: row.hash, expiresAt: row.expiresAt });
+}
+
+/** Only the newest link works: earlier unused ones of this purpose are spent. */
+export async function spendOpenTokens(tx: Tx, userId: number, purpose: TokenPurpose) {
+  await tx
+    .update(authTokens)
+    .set({ usedAt: new Date() })
+    .where(and(eq(authTokens.userId, userId), eq(authTokens.purpose, purpose), isNull(authTokens.usedAt)));
+}
+
+/** Locks an unused, unexpired token with this hash and marks it used; the user id, or null when there is none. */
+export async function consumeToken(tx: Tx, hash: string, purpose: TokenPurpose): Promise<number | null> {
+  const [row] = await tx
+    .select()
+    .from(authTokens)
+    .where(
+      and(
+        eq(authTokens.tokenHash, hash),
+        eq(authTokens.purpose, purpose),
+        isNull(authTokens.usedAt),
+        gt(authTokens.expiresAt, sql`NOW(3)`),
+      ),
+    )
+    .for('update');
+  if (!row) return null;
+  await tx.update(authTokens).set({ usedAt: new Date() }).where(eq(authTokens.id, row.id));
+  return row.userId;
+}
+
+export async function markEmailVerified(tx: Tx, userId: number) {
+  await tx.update(users).set({ emailVerifiedAt: new Date() }).where(eq(users.id, userId));
+}
+
+/** The groups this person asked to join and is not yet confirmed in. */
+export const pendingMemberships = (tx: Tx, userId: number) =>
+  tx
+    .select({ groupId: memberships.groupId, role: memberships.role, groupName: repairGroups.name })
+    .from(memberships)
+    .innerJoin(repairGroups, eq(repairGroups.id, memberships.groupId))
+    .where(and(eq(memberships.userId, userId), eq(memberships.status, 'pending')));
+
+export const activeOrganisers = (tx: Tx, groupId: number) =>
+  tx
+    .select({ email: users.email, name: users.name })
+    .from(memberships)
+    .innerJoin(users, eq(users.id, memberships.userId))
+    .where(and(eq(memberships.groupId, groupId), eq(memberships.role, 'organiser'), eq(memberships.status, 'active')));
+
+/** Sets the new password (which also proves the address) and signs out every session of that person. */
+export async function replacePassword(tx: Tx, userId: number, passwordHash: string) {
+  await tx
+    .update(users)
+    .set({ passwordHash, emailVerifiedAt: sql`COALESCE(${users.emailVerifiedAt}, NOW(3))` })
+    .where(eq(users.id, userId));
+  await tx.delete(sessions).where(sql`JSON_VALUE(${sessions.data}, '$.userId') = ${userId}`);
+}
+
+export async function countUsers(db: DbOrTx): Promise<number> {
+  const [{ n }] = await db.select({ n: count() }).from(users);
+  return n;
+}
+
+export async function settingValue(db: DbOrTx, key: string): Promise<unknown> {
+  const [row] = await db.select().from(settings).where(eq(settings.key, key));
+  return row?.value;
+}
+
+export async function insertSetting(tx: Tx, key: string, value: unknown) {
+  await tx.insert(settings).values({ key, value });
+}
+
+/** The user as the API shows it: who they are and their active roles per group. */
+export async function loadSessionUser(db: DbOrTx, userId: number): Promise<SessionUser | null> {
+  const [user] = await db
+    .select({ id: users.id, email: users.email, name: users.name, admin: users.admin })
+    .from(users)
+    .where(eq(users.id, userId));
+  if (!user) return null;
+  const roles = await db
+    .select({ groupId: memberships.groupId, role: memberships.role, groupName: repairGroups.name })
+    .from(memberships)
+    .innerJoin(repairGroups, eq(repairGroups.id, memberships.groupId))
+    .where(and(eq(memberships.userId, userId), eq(memberships.status, 'active')))
+    .orderBy(repairGroups.name, memberships.role);
+  return { ...user, admin: Boolean(user.admin), roles };
+}
