@@ -1,5 +1,12 @@
 import { useEffect, useRef, useState } from 'react';
-import { canMoveTo, hasArrived, isAbsent, isQueued, type Arrival } from '../../../../../shared/event-day/constants';
+import {
+  ARRIVALS,
+  canMoveTo,
+  hasArrived,
+  isAbsent,
+  isQueued,
+  type Arrival,
+} from '../../../../../shared/event-day/constants';
 import { formatTimeRange } from '../../../../../shared/format';
 import { Button } from '../../../components/ui/button';
 import { Alert, Card } from '../../../components/ui/feedback';
@@ -118,30 +125,30 @@ export function CheckInPanel({
               ) : (
                 <>
                   <div role="radiogroup" aria-label={`Item ${n + 1} arrival`} className="flex flex-wrap gap-2">
-                    {(['arrived', 'no-show', 'withdrawn'] as const)
-                      .filter((a) => a !== 'no-show' || i.status === 'no-show' || canMoveTo(i.status, 'no-show'))
-                      .map((a) => (
-                        <label
-                          key={a}
-                          className={`flex min-h-11 cursor-pointer items-center gap-2 rounded-lg px-3 ring-1 has-[:focus-visible]:ring-2 has-[:focus-visible]:ring-copper has-[:focus-visible]:ring-offset-2 ${row.arrival === a ? 'bg-navy text-white ring-navy' : 'bg-white ring-ink/20'}`}
-                        >
-                          <input
-                            type="radio"
-                            name={`arrival-${i.id}`}
-                            value={a}
-                            checked={row.arrival === a}
-                            onChange={() => set({ arrival: a })}
-                            className="sr-only"
-                          />
-                          {a === 'arrived'
-                            ? i.tagCode
-                              ? 'Here'
-                              : 'Arrived'
-                            : a === 'no-show'
-                              ? 'Did not come'
-                              : 'Withdrawn'}
-                        </label>
-                      ))}
+                    {ARRIVALS.filter(
+                      (a) => a !== 'no-show' || i.status === 'no-show' || canMoveTo(i.status, 'no-show'),
+                    ).map((a) => (
+                      <label
+                        key={a}
+                        className={`flex min-h-11 cursor-pointer items-center gap-2 rounded-lg px-3 ring-1 has-[:focus-visible]:ring-2 has-[:focus-visible]:ring-copper has-[:focus-visible]:ring-offset-2 ${row.arrival === a ? 'bg-navy text-white ring-navy' : 'bg-white ring-ink/20'}`}
+                      >
+                        <input
+                          type="radio"
+                          name={`arrival-${i.id}`}
+                          value={a}
+                          checked={row.arrival === a}
+                          onChange={() => set({ arrival: a })}
+                          className="sr-only"
+                        />
+                        {a === 'arrived'
+                          ? i.tagCode
+                            ? 'Here'
+                            : 'Arrived'
+                          : a === 'no-show'
+                            ? 'Did not come'
+                            : 'Withdrawn'}
+                      </label>
+                    ))}
                   </div>
                   {error?.fields?.[`items.${n}.arrival`] && (
                     <p className="text-sm font-semibold text-alert">{error.fields[`items.${n}.arrival`]}</p>

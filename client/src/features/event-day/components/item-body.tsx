@@ -1,5 +1,6 @@
 import { useState, type ReactNode } from 'react';
 import { Link } from 'react-router';
+import { hasArrived, isQueued } from '../../../../../shared/event-day/constants';
 import { formatTime } from '../../../../../shared/format';
 import { Button } from '../../../components/ui/button';
 import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
@@ -27,7 +28,8 @@ export function ItemBody({ item, toolkit }: { item: ItemView; toolkit: ItemToolk
   const { data: me } = useUser();
   const [confirmTake, setConfirmTake] = useState(false);
   const othersItem = item.placement && me && item.placement.userId !== me.id;
-  const started = item.status === 'at-bench' || item.status === 'done';
+  // Reached a bench: arrived and no longer waiting in the queue (at the bench or done).
+  const started = hasArrived(item.status) && !isQueued(item.status);
   const tz = item.event.timeZone;
   const latest = item.safetyChecks[0];
   // The outcome being corrected, by when it was recorded: a newly saved one (now, or sent later from the phone's
@@ -187,11 +189,7 @@ export function ItemBody({ item, toolkit }: { item: ItemView; toolkit: ItemToolk
           )}
         </Card>
       ) : item.can.record ? (
-        <OutcomeForm
-          item={item}
-          latestPass={latest?.pass ?? null}
-          onCancel={item.outcome ? () => setCorrecting(null) : undefined}
-        />
+        <OutcomeForm item={item} latestCheck={latest} onCancel={item.outcome ? () => setCorrecting(null) : undefined} />
       ) : (
         <Alert>
           This item is with {item.placement?.fixerName ?? 'another fixer'}. An organiser can move it to you.

@@ -12,17 +12,33 @@ import { Alert, Card } from '../../../components/ui/feedback';
 import { SelectField, TextAreaField, TextField } from '../../../components/ui/field';
 import { ApiError } from '../../../lib/api';
 import { usePendingOutcomes, useRecordOutcome } from '../api/record-outcome';
-import type { ItemView } from '../api/types';
+import type { ItemView, SafetyCheckRecord } from '../api/types';
+import { mayRecordFixed } from '../../../../../shared/safety/may-record-fixed';
 import { TILE_FOCUS } from './radio-tile';
+
+/**
+ * The schema's messages by field path. Its cross-field rules (barrier, part) run only once the fields parse, so
+ * the fields that failed are left out and the rest parsed again: every message shows in one round.
+ */
+function outcomeIssues(body: OutcomeInput): Record<string, string> {
+  const first = outcomeSchema.safeParse(body);
+  if (first.success) return {};
+  const failed = new Set(first.error.issues.map((i) => String(i.path[0])));
+  const rest = Object.fromEntries(Object.entries(body).filter(([k]) => !failed.has(k))) as OutcomeInput;
+  const issues = [...first.error.issues, ...(outcomeSchema.safeParse(rest).error?.issues ?? [])];
+  const byPath: Record<string, string> = {};
+  for (const i of issues) byPath[i.path.join('.')] ??= i.message;
+  return byPath;
+}
 
 /** The outcome, sent through the persisted mutation so it survives a dropped connection. */
 export function OutcomeForm({
   item,
-  latestPass,
+  latestCheck,
   onCancel,
 }: {
   item: ItemView;
-  latestPass: boolean | null;
+  latestCheck: SafetyCheckRecord | undefined;
   onCancel?: () => void;
 }) {
   const [outcome, setOutcome] = useState<Outcome | null>(item.outcome?.outcome ?? null);
@@ -37,7 +53,9 @@ export function OutcomeForm({
   const [errors, setErrors] = useState<Record<string, string>>({});
   const save = useRecordOutcome();
   const pending = usePendingOutcomes(item.id);
-  const blocked = outcome === 'fixed' && item.mains && latestPass !== true;
+  // The server's own rule (shared/safety): a mains item goes home as fixed only after a passing check.
+  const fixed = mayRecordFixed(item, latestCheck);
+  const blocked = outcome === 'fixed' && !fixed.ok;
   const serverError = save.error instanceof ApiError ? save.error : null;
 
   const submit = () => {
@@ -55,17 +73,9 @@ export function OutcomeForm({
       minutes: minutes || undefined,
       notes: notes || undefined,
     };
-    const parsed = outcomeSchema.safeParse(body);
-    // The cross-field rules are checked here too, so every message shows in one round.
-    const extra: Record<string, string> = {};
-    if (outcome === 'end-of-life' && !barrier) extra.barrier = 'Choose the barrier to repair for an end-of-life item.';
-    if (outcome === 'parts-needed' && part.description.trim().length < 2)
-      extra['part.description'] = 'Say which part is needed.';
-    if (!parsed.success || Object.keys(extra).length) {
-      setErrors({
-        ...extra,
-        ...Object.fromEntries((parsed.error?.issues ?? []).map((i) => [i.path.join('.'), i.message])),
-      });
+    const issues = outcomeIssues(body);
+    if (Object.keys(issues).length) {
+      setErrors(issues);
       return;
     }
     setErrors({});
@@ -104,10 +114,7 @@ export function OutcomeForm({
       {errors.outcome && <p className="mt-1 text-sm font-semibold text-alert">{errors.outcome}</p>}
       {blocked && (
         <div className="mt-3">
-          <Alert tone="caution">
-            A mains item needs a passing safety check before it is recorded as fixed
-            {latestPass === false ? '; the latest one failed, so record it as needing a part or as end of life' : ''}.
-          </Alert>
+          <Alert tone="caution">{!fixed.ok && fixed.message}</Alert>
         </div>
       )}
       <div className="mt-3 space-y-3">

@@ -2,12 +2,14 @@ import { useState } from 'react';
 import { formatTime } from '../../../../../shared/format';
 import {
   insulationLimitMOhm,
-  judgeSafety,
+  safetyFaults,
+  SAFETY_FAULTS,
   protectiveConductorLimitOhm,
   protectiveCurrentLimitMA,
   TOUCH_CURRENT_LIMIT_MA,
   type ApplianceClass,
 } from '../../../../../shared/safety/limits';
+import { missingReadings, requiredReadings } from '../../../../../shared/safety/readings';
 import { safetyCheckSchema, visualOk, type SafetyCheckInput } from '../../../../../shared/schemas/event-day';
 import { Button } from '../../../components/ui/button';
 import { Alert, Card } from '../../../components/ui/feedback';
@@ -27,10 +29,42 @@ const VISUAL = [
 
 /** A typed reading: undefined when empty, NaN when it is not a number (shown as an error, never judged). */
 const num = (s: string) => (s.trim() === '' ? undefined : Number(s.trim().replace(',', '.')));
-const RELEVANT: Record<ApplianceClass, Reading[]> = {
-  I: ['cordLengthM', 'protectiveConductorOhm', 'insulationMOhm', 'protectiveCurrentMA'],
-  II: ['insulationMOhm', 'touchCurrentMA'],
+/** Readings the form also offers for a class though it does not require them; one taken is still judged. */
+const OPTIONAL_READINGS: Record<ApplianceClass, Reading[]> = {
+  I: ['protectiveCurrentMA'],
+  II: ['touchCurrentMA'],
   III: ['insulationMOhm'],
+};
+/** The class's readings in the form's order: what shared/safety requires, then the optional ones. */
+const readingsFor = (cls: ApplianceClass): Reading[] => [...requiredReadings(cls), ...OPTIONAL_READINGS[cls]];
+
+interface Limits {
+  cls: ApplianceClass;
+  heating: boolean;
+  cord: number | undefined;
+}
+/** Each reading's field: its label (marked optional where the class does not require it) and its limit. */
+const READING_FIELDS: Record<Reading, { label: (required: boolean) => string; hint: (l: Limits) => string }> = {
+  cordLengthM: { label: () => 'Cord length (m)', hint: () => 'Sets the protective conductor limit.' },
+  protectiveConductorOhm: {
+    label: () => 'Protective conductor resistance (Ω)',
+    hint: ({ cord }) =>
+      cord !== undefined && cord >= 0
+        ? `Limit ${protectiveConductorLimitOhm(cord)} Ω for ${cord} m.`
+        : 'Limit 0.3 Ω up to 5 m of cord.',
+  },
+  insulationMOhm: {
+    label: (required) => (required ? 'Insulation resistance at 500 V DC (MΩ)' : 'Insulation resistance (MΩ, optional)'),
+    hint: ({ cls, heating }) => `At least ${insulationLimitMOhm(cls, heating)} MΩ.`,
+  },
+  protectiveCurrentMA: {
+    label: () => 'Protective conductor current (mA, optional)',
+    hint: () => `At most ${protectiveCurrentLimitMA()} mA.`,
+  },
+  touchCurrentMA: {
+    label: () => 'Touch current (mA, optional)',
+    hint: () => `At most ${TOUCH_CURRENT_LIMIT_MA} mA.`,
+  },
 };
 
 /** The check's form: visual inspection, class, readings; the verdict is worked out as you type. */
@@ -56,14 +90,21 @@ export function SafetyForm({ item }: { item: ItemView }) {
   const [errors, setErrors] = useState<Record<string, string>>({});
   const latest = item.safetyChecks[0];
   // Only the readings the chosen class asks for count; a hidden field never decides the verdict.
-  const values = Object.fromEntries(RELEVANT[cls].map((k) => [k, num(r[k])])) as Partial<Record<Reading, number>>;
-  const notNumbers = RELEVANT[cls].filter((k) => Number.isNaN(values[k] as number));
-  const verdict = judgeSafety({ visualOk: visualOk(visual), applianceClass: cls, heating, ...values });
-  const touched = Object.values(visual).some(Boolean) || RELEVANT[cls].some((k) => r[k].trim() !== '');
+  const shown = readingsFor(cls);
+  const values = Object.fromEntries(shown.map((k) => [k, num(r[k])])) as Partial<Record<Reading, number>>;
+  const notNumbers = shown.filter((k) => Number.isNaN(values[k] as number));
   const allVisual = visualOk(visual);
-  const cord = values.cordLengthM;
+  // The verdict of shared/safety: faults by code (the visual one is shown apart), missing readings by field.
+  const faults = safetyFaults({ visualOk: allVisual, applianceClass: cls, heating, ...values });
+  const readingFaults = faults.filter((f) => f.code !== SAFETY_FAULTS.visual);
+  const missing = missingReadings({ applianceClass: cls, ...values });
+  const pass = faults.length === 0 && missing.length === 0;
+  const touched = Object.values(visual).some(Boolean) || shown.some((k) => r[k].trim() !== '');
+  const required = new Set<Reading>(requiredReadings(cls));
+  const limits = { cls, heating, cord: values.cordLengthM };
   const input = (key: Reading, label: string, hint: string) => (
     <TextField
+      key={key}
       label={label}
       inputMode="decimal"
       value={r[key]}
@@ -150,31 +191,7 @@ export function SafetyForm({ item }: { item: ItemView }) {
         <CheckField label="Has heating elements" checked={heating} onChange={(e) => setHeating(e.target.checked)} />
       </div>
       <div className="mt-3 grid gap-3 sm:grid-cols-2">
-        {cls === 'I' && input('cordLengthM', 'Cord length (m)', 'Sets the protective conductor limit.')}
-        {cls === 'I' &&
-          input(
-            'protectiveConductorOhm',
-            'Protective conductor resistance (Ω)',
-            cord !== undefined && cord >= 0
-              ? `Limit ${protectiveConductorLimitOhm(cord)} Ω for ${cord} m.`
-              : 'Limit 0.3 Ω up to 5 m of cord.',
-          )}
-        {cls !== 'III' &&
-          input(
-            'insulationMOhm',
-            'Insulation resistance at 500 V DC (MΩ)',
-            `At least ${insulationLimitMOhm(cls, heating)} MΩ.`,
-          )}
-        {cls === 'III' &&
-          input('insulationMOhm', 'Insulation resistance (MΩ, optional)', `At least ${insulationLimitMOhm(cls)} MΩ.`)}
-        {cls === 'I' &&
-          input(
-            'protectiveCurrentMA',
-            'Protective conductor current (mA, optional)',
-            `At most ${protectiveCurrentLimitMA()} mA.`,
-          )}
-        {cls === 'II' &&
-          input('touchCurrentMA', 'Touch current (mA, optional)', `At most ${TOUCH_CURRENT_LIMIT_MA} mA.`)}
+        {shown.map((k) => input(k, READING_FIELDS[k].label(required.has(k)), READING_FIELDS[k].hint(limits)))}
         <TextField
           label="Instrument used"
           value={instrument}
@@ -191,20 +208,20 @@ export function SafetyForm({ item }: { item: ItemView }) {
           <p className="rounded-lg bg-ink/5 px-3 py-2 text-ink-soft">
             A reading is not a number; correct it to see the verdict.
           </p>
-        ) : verdict.pass ? (
+        ) : pass ? (
           <p className="rounded-lg bg-sage-light px-3 py-2 font-bold">These readings pass.</p>
-        ) : verdict.failures.filter((f) => allVisual || !f.startsWith('The visual')).length ? (
+        ) : readingFaults.length ? (
           <p className="rounded-lg bg-alert-light px-3 py-2 font-bold text-alert">
-            Fails: {verdict.failures.filter((f) => allVisual || !f.startsWith('The visual')).join(' ')}
+            Fails: {readingFaults.map((f) => f.message).join(' ')}
           </p>
-        ) : !allVisual && verdict.missing.length === 0 ? (
+        ) : !allVisual && missing.length === 0 ? (
           <p className="rounded-lg bg-copper-light px-3 py-2 font-semibold text-copper-dark">
             The readings are within limits, but not every visual point is ticked: an unticked point is recorded as a
             fault.
           </p>
         ) : (
           <p className="rounded-lg bg-ink/5 px-3 py-2 text-ink-soft">
-            Still needed: {[...(allVisual ? [] : ['the visual points']), ...verdict.missing].join(', ')}.
+            Still needed: {[...(allVisual ? [] : ['the visual points']), ...missing.map((m) => m.name)].join(', ')}.
           </p>
         )}
       </div>
