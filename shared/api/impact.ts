@@ -2,7 +2,10 @@ import type { Barrier, Outcome } from '../event-day/constants';
 import type { FollowUpStatus } from '../impact/follow-ups';
 import type { ImpactTotals } from '../impact/statistics';
 
-/* The impact API's answers and filters as the client reads them (dates as ISO strings). */
+/*
+ * The impact API's answers as the server returns them; the client reads them as `Json<T>` (dates as ISO strings).
+ * The filters' `from`, `to` and `month` are calendar dates as typed (YYYY-MM-DD, YYYY-MM).
+ */
 
 export interface StatsFilter {
   groupId?: number;
@@ -29,7 +32,7 @@ export interface RecordRow {
   itemId: number;
   eventId: number;
   eventTitle: string;
-  eventStartsAt: string;
+  eventStartsAt: Date;
   groupName: string;
   categoryName: string;
   brand: string | null;
@@ -60,8 +63,8 @@ export interface EventReport {
   event: {
     id: number;
     title: string;
-    startsAt: string;
-    endsAt: string;
+    startsAt: Date;
+    endsAt: Date;
     groupId: number;
     groupName: string;
     timeZone: string;
@@ -75,9 +78,9 @@ export interface FollowUp {
   itemId: number;
   status: FollowUpStatus;
   statusLabel: string;
-  createdAt: string;
-  mailedAt: string | null;
-  remindedAt: string | null;
+  createdAt: Date;
+  mailedAt: Date | null;
+  remindedAt: Date | null;
   returnItemId: number | null;
   note: string | null;
   ageDays: number;
@@ -87,9 +90,9 @@ export interface FollowUp {
   partLink: string | null;
   partCost: number | null;
   visitor: { name: string; email: string | null; phone: string | null; reference: string };
-  event: { title: string; startsAt: string };
+  event: { title: string; startsAt: Date };
   rebookUrl: string | null;
-  returnVisit: { reference: string; eventTitle: string | null; startsAt: string } | null;
+  returnVisit: { reference: string; eventTitle: string | null; startsAt: Date } | null;
 }
 export interface RebookView {
   item: { categoryName: string; brand: string | null; model: string | null; part: string | null };
@@ -100,9 +103,9 @@ export interface RebookView {
   events: {
     id: number;
     title: string;
-    startsAt: string;
-    endsAt: string;
-    slots: { id: number; startsAt: string; endsAt: string; free: number }[];
+    startsAt: Date;
+    endsAt: Date;
+    slots: { id: number; startsAt: Date; endsAt: Date; free: number }[];
   }[];
 }
 export interface RecordsPage {

@@ -1,4 +1,6 @@
-/* The skills answers as the client reads them. */
+import type { Skill } from '../constants';
+
+/* The skills answers (no dates: the server's and the client's shape are the same). */
 
 export interface Profile {
   skills: Record<string, 1 | 2 | 3>;
@@ -7,7 +9,7 @@ export interface Profile {
 }
 /** The group's volunteers × skills, levels 1–3. */
 export interface SkillsMatrix {
-  skills: string[];
+  skills: readonly Skill[];
   volunteers: {
     userId: number;
     name: string;

@@ -2,7 +2,7 @@ import type { Outcome } from '../event-day/constants';
 import type { PartRatings, PartType } from '../salvage/constants';
 import type { SubstituteVerdict } from '../salvage/match';
 
-/* The toolkit API's answers as the client reads them (dates as ISO strings). */
+/* The toolkit API's answers as the server returns them; the client reads them as `Json<T>` (dates as ISO strings). */
 
 /** One repair note: the write-up when there is one, else the fault and the fixer's notes. */
 export interface KnowledgeEntry {
@@ -20,7 +20,7 @@ export interface KnowledgeEntry {
   faultyPart: string;
   fix: string;
   writtenUp: boolean;
-  eventDate: string;
+  eventDate: Date;
   score: number;
   photoIds: number[];
 }
@@ -44,7 +44,7 @@ export interface SalvagePart {
   box: string;
   sourceItemId: number | null;
   notes: string;
-  createdAt: string;
+  createdAt: Date;
 }
 export interface SalvageFilter {
   type?: PartType;

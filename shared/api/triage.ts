@@ -1,10 +1,12 @@
-/* The triage board's answers as the client reads them (dates as ISO strings). */
+import type { EventStatus } from '../constants';
+
+/* The triage board's answers as the server returns them; the client reads them as `Json<T>` (dates as ISO strings). */
 
 export interface BoardItem {
   id: number;
   reference: string;
   visitorName: string;
-  bookedAt: string;
+  bookedAt: Date;
   slotId: number;
   categoryName: string;
   brand: string | null;
@@ -19,11 +21,11 @@ export interface BoardItem {
     benchId: number;
     locked: boolean;
     source: 'engine' | 'hand';
-    startsAt: string | null;
+    startsAt: Date | null;
   } | null;
   warnings: PlacementWarning[];
   reason: { reason: string; detail: string } | null;
-  estimatedStart: string | null;
+  estimatedStart: Date | null;
 }
 export interface PlacementWarning {
   code: string;
@@ -33,20 +35,20 @@ export interface Board {
   event: {
     id: number;
     title: string;
-    status: string;
-    startsAt: string;
-    endsAt: string;
+    status: EventStatus;
+    startsAt: Date;
+    endsAt: Date;
     groupId: number;
     groupName: string;
     timeZone: string;
   };
-  slots: { id: number; startsAt: string; endsAt: string }[];
+  slots: { id: number; startsAt: Date; endsAt: Date }[];
   benches: { id: number; name: string; seats: number; equipment: string[] }[];
   fixers: {
     userId: number;
     name: string;
-    startsAt: string;
-    endsAt: string;
+    startsAt: Date;
+    endsAt: Date;
     benchId: number | null;
     skills: Record<string, number>;
   }[];
@@ -54,16 +56,18 @@ export interface Board {
   runs: {
     id: number;
     slotId: number | null;
-    createdAt: string;
+    createdAt: Date;
     assigned: number;
     unassigned: number;
     lockedKept: number;
   }[];
 }
-/** What a triage run placed and left waiting. */
+/** What a triage run placed and left waiting, and how many locked placements it kept. */
 export interface TriageRunResult {
+  runId: number;
   assigned: number;
   unassigned: number;
+  lockedKept: number;
 }
 /** A placement by hand is kept even when it breaks a rule; the warnings say which. */
 export interface PlacementResult {

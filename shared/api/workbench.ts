@@ -9,7 +9,7 @@ export interface QueueItem {
   eventId: number;
   eventTitle: string;
   timeZone: string;
-  slotStartsAt: string;
+  slotStartsAt: Date;
   reference: string;
   visitorName: string;
   categoryName: string;

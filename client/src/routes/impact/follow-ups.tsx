@@ -9,7 +9,7 @@ import { ConfirmDialog } from '../../components/ui/confirm-dialog';
 import { Alert, EmptyState, Spinner } from '../../components/ui/feedback';
 import { TextAreaField } from '../../components/ui/field';
 import { useGroupSettings } from '../../features/groups/api/get-group-settings';
-import type { FollowUp } from '../../../../shared/api/impact';
+import type { FollowUp } from '../../features/impact/api/types';
 import { followUpsQuery, useFollowUps } from '../../features/impact/api/get-follow-ups';
 import { queryClient } from '../../lib/query-client';
 import { useSetFollowUp } from '../../features/impact/api/set-follow-up';

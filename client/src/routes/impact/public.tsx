@@ -16,7 +16,7 @@ import {
 import { OUTCOME_LABELS } from '../../../../shared/event-day/constants';
 import { Alert, Card, EmptyState, PageTitle, Spinner } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
-import type { Method, PublicImpact } from '../../../../shared/api/impact';
+import type { Method, PublicImpact } from '../../features/impact/api/types';
 import { publicImpactQuery, usePublicImpact } from '../../features/impact/api/get-public-impact';
 import { queryClient } from '../../lib/query-client';
 import { ApiError } from '../../lib/api';

@@ -5,7 +5,7 @@ import { Button } from '../../components/ui/button';
 import { ConfirmDialog } from '../../components/ui/confirm-dialog';
 import { Alert, Card, EmptyState, PageTitle, Spinner } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
-import type { RebookView } from '../../../../shared/api/impact';
+import type { RebookView } from '../../features/impact/api/types';
 import { useBookReturn } from '../../features/impact/api/book-return';
 import { rebookQuery, useRebook } from '../../features/impact/api/get-rebook';
 import { queryClient } from '../../lib/query-client';

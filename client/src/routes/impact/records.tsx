@@ -11,7 +11,8 @@ import {
 import { Alert, EmptyState, PageTitle, Spinner } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
 import { useCategoriesQuery } from '../../features/categories/api/get-categories';
-import type { RecordRow, RecordsFilter } from '../../../../shared/api/impact';
+import type { RecordsFilter } from '../../../../shared/api/impact';
+import type { RecordRow } from '../../features/impact/api/types';
 import { recordsQuery, useRecords } from '../../features/impact/api/get-records';
 import { queryClient } from '../../lib/query-client';
 import { queryString as qs } from '../../lib/query-string';

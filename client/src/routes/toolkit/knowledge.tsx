@@ -5,7 +5,7 @@ import { Button } from '../../components/ui/button';
 import { Alert, EmptyState, PageTitle, Spinner } from '../../components/ui/feedback';
 import { SelectField, TextField } from '../../components/ui/field';
 import { categoriesQuery, useCategories } from '../../features/categories/api/get-categories';
-import type { KnowledgeEntry } from '../../../../shared/api/toolkit';
+import type { KnowledgeEntry } from '../../features/toolkit/api/types';
 import { knowledgeQuery, useKnowledge } from '../../features/toolkit/api/get-knowledge';
 import { queryClient } from '../../lib/query-client';
 import { KnowledgeCard } from '../../features/toolkit/components/knowledge-card';

@@ -8,7 +8,7 @@ import { Alert, EmptyState, PageTitle, Spinner } from '../../components/ui/feedb
 import { SelectField, TextField } from '../../components/ui/field';
 import { useUser } from '../../lib/auth';
 import { queryClient } from '../../lib/query-client';
-import type { SalvagePart } from '../../../../shared/api/toolkit';
+import type { SalvagePart } from '../../features/toolkit/api/types';
 import { useRemovePart } from '../../features/toolkit/api/remove-part';
 import { salvageQuery, useSalvage } from '../../features/toolkit/api/get-salvage';
 import { useTakePart } from '../../features/toolkit/api/take-part';

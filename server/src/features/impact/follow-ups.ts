@@ -1,4 +1,5 @@
 import type { Outcome } from '../../../../shared/event-day/constants';
+import type { FollowUp } from '../../../../shared/api/impact';
 import {
   FOLLOW_UP_LABELS,
   FOLLOW_UP_REMINDER_DAYS,
@@ -110,7 +111,7 @@ export async function markCameBack(tx: DbOrTx, itemIds: number[]) {
 }
 
 /** The organisers' list: every item of the group waiting for a part, oldest first, with what happened since. */
-export async function listFollowUps(ctx: AppContext, groupId: number) {
+export async function listFollowUps(ctx: AppContext, groupId: number): Promise<FollowUp[]> {
   const rows = await followUpRows(ctx.database.db, groupId);
   const now = new Date();
   return rows.map((r) => ({
@@ -131,9 +132,10 @@ export async function listFollowUps(ctx: AppContext, groupId: number) {
     visitor: { name: r.visitorName, email: r.visitorEmail, phone: r.visitorPhone, reference: r.reference },
     event: { title: r.eventTitle, startsAt: r.eventStartsAt },
     rebookUrl: ['open', 'part-ordered'].includes(r.f.status) ? rebookUrl(ctx, r.f.itemId) : null,
-    returnVisit: r.returnReference
-      ? { reference: r.returnReference, eventTitle: r.returnEventTitle, startsAt: r.returnStartsAt }
-      : null,
+    returnVisit:
+      r.returnReference && r.returnStartsAt
+        ? { reference: r.returnReference, eventTitle: r.returnEventTitle, startsAt: r.returnStartsAt }
+        : null,
   }));
 }
 

@@ -1,4 +1,5 @@
 import { BARRIER_LABELS, OUTCOME_LABELS } from '../../../../shared/event-day/constants';
+import type { EventReport, Method, PublicImpact, RecordsPage, Stats } from '../../../../shared/api/impact';
 import { DISPLACEMENT_NOTE, FACTOR_SOURCE } from '../../../../shared/impact/factors';
 import { totalsFromCells } from '../../../../shared/impact/statistics';
 import { shortName } from '../../../../shared/event-day/tag-code';
@@ -23,7 +24,7 @@ export type { StatsFilter };
 
 export const getDisplacement = (ctx: AppContext) => displacement(ctx.database.db);
 
-export async function setDisplacement(ctx: AppContext, value: number) {
+export async function setDisplacement(ctx: AppContext, value: number): Promise<number> {
   await storeDisplacement(ctx.database.db, value);
   return getDisplacement(ctx);
 }
@@ -33,14 +34,14 @@ const hoursOf = (shift: { startsAt: Date; endsAt: Date }) =>
 const round2 = (x: number) => Math.round(x * 100) / 100;
 
 /** Statistics for a group, an event, a date range or the whole network. */
-export async function stats(ctx: AppContext, f: StatsFilter) {
+export async function stats(ctx: AppContext, f: StatsFilter): Promise<Stats> {
   const { db } = ctx.database;
   const [c, cats, d] = await Promise.all([readCells(db, f), impactCategories(db), displacement(db)]);
   return { ...totalsFromCells(c, cats, d), displacement: d, filter: f };
 }
 
 /** The method and its sources, shown beside every figure. */
-export async function method(ctx: AppContext) {
+export async function method(ctx: AppContext): Promise<Method> {
   const { db } = ctx.database;
   const [cats, d] = await Promise.all([impactCategories(db), displacement(db)]);
   return {
@@ -65,7 +66,7 @@ export async function method(ctx: AppContext) {
 }
 
 /** The records behind a figure, newest first, 50 a page. */
-export async function records(ctx: AppContext, f: RecordsFilter & { page?: number }) {
+export async function records(ctx: AppContext, f: RecordsFilter & { page?: number }): Promise<RecordsPage> {
   const page = Math.max(1, f.page ?? 1);
   const rows = await recordRows(ctx.database.db, f, page);
   return {
@@ -82,7 +83,7 @@ export async function records(ctx: AppContext, f: RecordsFilter & { page?: numbe
 }
 
 /** A funder's one-page report of an event: totals, categories, the volunteers' hours, the method. */
-export async function eventReport(ctx: AppContext, eventId: number) {
+export async function eventReport(ctx: AppContext, eventId: number): Promise<EventReport> {
   const { db } = ctx.database;
   const e = await eventWithGroup(db, eventId);
   if (!e) throw notFound('That event');
@@ -105,7 +106,7 @@ export async function eventReport(ctx: AppContext, eventId: number) {
 }
 
 /** The same report for a group over a date range: every session in it, the volunteers' hours added up. */
-export async function rangeReport(ctx: AppContext, groupId: number, from?: string, to?: string) {
+export async function rangeReport(ctx: AppContext, groupId: number, from?: string, to?: string): Promise<EventReport> {
   const { db } = ctx.database;
   const g = await groupById(db, groupId);
   if (!g) throw notFound('That group');
@@ -140,7 +141,7 @@ export async function rangeReport(ctx: AppContext, groupId: number, from?: strin
 }
 
 /** Public figures: the same totals, with nothing about any person. */
-export async function publicImpact(ctx: AppContext, groupId?: number) {
+export async function publicImpact(ctx: AppContext, groupId?: number): Promise<PublicImpact> {
   const { db } = ctx.database;
   const g = groupId ? await groupById(db, groupId) : undefined;
   if (groupId && !g) throw notFound('That group');

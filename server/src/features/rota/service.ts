@@ -1,4 +1,5 @@
 import type { z } from 'zod';
+import type { AskResult, MyEvent, Rota, SeatResult, ShiftAnswer } from '../../../../shared/api/rota';
 import { SKILLS } from '../../../../shared/constants';
 import { coverage, gaps } from '../../../../shared/rota';
 import type { myShiftSchema } from '../../../../shared/schemas/rota';
@@ -14,7 +15,7 @@ export async function setMyShift(
   eventId: number,
   userId: number,
   input: z.output<typeof myShiftSchema>,
-) {
+): Promise<ShiftAnswer> {
   const { db } = ctx.database;
   const e = await q.eventRow(db, eventId);
   if (!e) throw notFound('That event');
@@ -30,7 +31,7 @@ export async function setMyShift(
 }
 
 /** Upcoming events of the groups a person volunteers with, with their answer and shift. */
-export async function myEvents(ctx: AppContext, userId: number) {
+export async function myEvents(ctx: AppContext, userId: number): Promise<MyEvent[]> {
   const { db } = ctx.database;
   const groupIds = await q.activeGroupIds(db, userId);
   if (!groupIds.length) return [];
@@ -47,7 +48,7 @@ export async function myEvents(ctx: AppContext, userId: number) {
 }
 
 /** The rota of one event: who comes when, the skills covered per slot, and the gaps against what is booked. */
-export async function rota(ctx: AppContext, eventId: number) {
+export async function rota(ctx: AppContext, eventId: number): Promise<Rota> {
   const { db } = ctx.database;
   const slotRows = await q.slotRows(db, eventId);
   const shiftRows = await q.shiftRowsOfEvent(db, eventId);
@@ -95,7 +96,7 @@ export async function rota(ctx: AppContext, eventId: number) {
 }
 
 /** Mails the group's fixers who have a wanted skill and have not said they come. */
-export async function askForSkills(ctx: AppContext, eventId: number, wanted: string[]) {
+export async function askForSkills(ctx: AppContext, eventId: number, wanted: string[]): Promise<AskResult> {
   const { db } = ctx.database;
   const e = await q.eventWithGroup(db, eventId);
   if (!e) throw notFound('That event');
@@ -116,7 +117,12 @@ export async function askForSkills(ctx: AppContext, eventId: number, wanted: str
 }
 
 /** Seats a coming fixer at one of the event's benches, or lets them move freely (null). */
-export async function seat(ctx: AppContext, eventId: number, userId: number, benchId: number | null) {
+export async function seat(
+  ctx: AppContext,
+  eventId: number,
+  userId: number,
+  benchId: number | null,
+): Promise<SeatResult> {
   const { db } = ctx.database;
   if (benchId !== null && !(await q.eventBenchRow(db, eventId, benchId)))
     throw new HttpError(400, 'invalid', 'Some fields need attention.', {

@@ -1,17 +1,22 @@
 import type { z } from 'zod';
+import type { Profile, SkillsMatrix } from '../../../../shared/api/skills';
 import { SKILLS } from '../../../../shared/constants';
 import type { profileSchema } from '../../../../shared/schemas/skills';
 import type { AppContext } from '../../context';
 import { skillsOf } from '../../core/skills';
 import { activeMemberRows, profileRow, profileRows, replaceSkills, upsertProfile } from './queries';
 
-export async function getProfile(ctx: AppContext, userId: number) {
+export async function getProfile(ctx: AppContext, userId: number): Promise<Profile> {
   const { db } = ctx.database;
   const p = await profileRow(db, userId);
   return { skills: (await skillsOf(db, [userId])).get(userId)!, kit: p?.kit ?? [], notes: p?.notes ?? '' };
 }
 
-export async function saveProfile(ctx: AppContext, userId: number, input: z.output<typeof profileSchema>) {
+export async function saveProfile(
+  ctx: AppContext,
+  userId: number,
+  input: z.output<typeof profileSchema>,
+): Promise<Profile> {
   await ctx.database.db.transaction(async (tx) => {
     const levels = Object.entries(input.skills)
       .filter(([, l]) => l)
@@ -23,7 +28,7 @@ export async function saveProfile(ctx: AppContext, userId: number, input: z.outp
 }
 
 /** The group's volunteers × skills, for the matrix. */
-export async function skillsMatrix(ctx: AppContext, groupId: number) {
+export async function skillsMatrix(ctx: AppContext, groupId: number): Promise<SkillsMatrix> {
   const { db } = ctx.database;
   const people = new Map<number, { userId: number; name: string; email: string; roles: string[] }>();
   for (const r of await activeMemberRows(db, groupId)) {

@@ -1,5 +1,5 @@
 import type { z } from 'zod';
-import type { KnowledgeSharing } from '../../../../shared/api/toolkit';
+import type { KnowledgeEntry, KnowledgeSharing, SalvagePart, Substitute } from '../../../../shared/api/toolkit';
 import { OUTCOME_LABELS, type Outcome } from '../../../../shared/event-day/constants';
 import { PART_TYPE_LABELS, type PartType } from '../../../../shared/salvage/constants';
 import { judgeSubstitute, type Needed } from '../../../../shared/salvage/match';
@@ -69,7 +69,7 @@ export async function syncKnowledge(tx: Tx, row: ItemRow, outcome: Outcome, note
 
 const readerOf = (user: SessionUser): Reader => ({ admin: user.admin, groupIds: user.roles.map((r) => r.groupId) });
 
-const entryDto = (r: EntryRow) => ({
+const entryDto = (r: EntryRow): Omit<KnowledgeEntry, 'photoIds'> => ({
   itemId: r.e.itemId,
   groupName: r.groupName,
   categoryId: r.e.categoryId,
@@ -89,7 +89,10 @@ const entryDto = (r: EntryRow) => ({
 });
 
 /** The fixer's photos from the bench go with the record (the visitor's own photos stay with the booking). */
-async function withPhotos<T extends { itemId: number }>(db: DbOrTx, entries: T[]) {
+async function withPhotos<T extends { itemId: number }>(
+  db: DbOrTx,
+  entries: T[],
+): Promise<(T & { photoIds: number[] })[]> {
   const photos = await repairPhotos(
     db,
     entries.map((e) => e.itemId),
@@ -98,14 +101,18 @@ async function withPhotos<T extends { itemId: number }>(db: DbOrTx, entries: T[]
 }
 
 /** Search the notes this person may read; exact brand and model first (queries/knowledge.ts says how it ranks). */
-export async function searchKnowledge(ctx: AppContext, user: SessionUser, q: z.output<typeof knowledgeQuery>) {
+export async function searchKnowledge(
+  ctx: AppContext,
+  user: SessionUser,
+  q: z.output<typeof knowledgeQuery>,
+): Promise<KnowledgeEntry[]> {
   const { db } = ctx.database;
   const rows = await searchEntries(db, readerOf(user), q);
   return withPhotos(db, rows.map(entryDto));
 }
 
 /** Similar past repairs for an item: same kind first, then the same brand and model, then the fault's words. */
-export async function similarRepairs(ctx: AppContext, itemId: number, user: SessionUser) {
+export async function similarRepairs(ctx: AppContext, itemId: number, user: SessionUser): Promise<KnowledgeEntry[]> {
   const { db } = ctx.database;
   const { item } = await loadItem(db, itemId);
   const rows = await similarEntries(db, readerOf(user), item);
@@ -113,7 +120,12 @@ export async function similarRepairs(ctx: AppContext, itemId: number, user: Sess
 }
 
 /** A fixer's short write-up of a repair: symptom, what was measured, the faulty part, the fix. */
-export async function writeUp(ctx: AppContext, itemId: number, w: z.output<typeof writeupSchema>, user: SessionUser) {
+export async function writeUp(
+  ctx: AppContext,
+  itemId: number,
+  w: z.output<typeof writeupSchema>,
+  user: SessionUser,
+): Promise<KnowledgeEntry> {
   const { db } = ctx.database;
   const e = await findEntry(db, itemId);
   if (!e) throw notFound('That repair record');
@@ -134,7 +146,7 @@ export async function setSharing(ctx: AppContext, groupId: number, share: boolea
   return { share };
 }
 
-const partDto = (p: PartRow) => ({ ...p, typeLabel: PART_TYPE_LABELS[p.type] });
+const partDto = (p: PartRow): SalvagePart => ({ ...p, typeLabel: PART_TYPE_LABELS[p.type] });
 
 /** The group a part belongs to, for the role guards (0 when there is no such part, which the guards refuse). */
 export const partGroup = (ctx: AppContext, partId: number) => partGroupId(ctx.database.db, partId);
@@ -143,7 +155,7 @@ export async function listParts(
   ctx: AppContext,
   groupId: number,
   f: { type?: PartType; q?: string; inStock?: boolean },
-) {
+): Promise<SalvagePart[]> {
   return (await partRows(ctx.database.db, groupId, f)).map(partDto);
 }
 
@@ -155,7 +167,7 @@ export async function addPart(
   groupId: number,
   input: z.output<typeof salvagePartSchema>,
   user: SessionUser,
-) {
+): Promise<SalvagePart> {
   const { db } = ctx.database;
   if (input.sourceItemId) {
     const row = await loadItem(db, input.sourceItemId).catch(() => null);
@@ -165,7 +177,11 @@ export async function addPart(
   return partDto((await findPart(db, id))!);
 }
 
-export async function updatePart(ctx: AppContext, partId: number, patch: z.output<typeof salvageUpdateSchema>) {
+export async function updatePart(
+  ctx: AppContext,
+  partId: number,
+  patch: z.output<typeof salvageUpdateSchema>,
+): Promise<SalvagePart> {
   await updatePartRow(ctx.database.db, partId, patch);
   const p = await findPart(ctx.database.db, partId);
   if (!p) throw notFound('That part');
@@ -186,7 +202,7 @@ export async function takePart(
   itemId: number | undefined,
   quantity: number,
   user: SessionUser,
-) {
+): Promise<SalvagePart> {
   return withDeadlockRetry(() =>
     ctx.database.db.transaction(async (tx) => {
       const p = await findPart(tx, partId);
@@ -208,7 +224,7 @@ export async function takePart(
 }
 
 /** Stock parts that could stand in for a needed one, judged by the substitution rule, best first. */
-export async function substitutes(ctx: AppContext, groupId: number, needed: Needed) {
+export async function substitutes(ctx: AppContext, groupId: number, needed: Needed): Promise<Substitute[]> {
   const stock = await stockRows(ctx.database.db, groupId);
   const rank = { accept: 0, 'accept-with-warnings': 1, refuse: 2 } as const;
   return stock

@@ -1,11 +1,12 @@
 import { dayPlan } from '../../../../shared/triage/day-plan';
+import type { Board } from '../../../../shared/api/triage';
 import type { TriageResult } from '../../../../shared/triage/engine';
 import type { AppContext } from '../../context';
 import { loadEvent, warningsFor, windowOf } from './event-data';
 import { recentRuns } from './queries';
 
 /** The triage board: benches and fixers with their items, the unplaced items with reasons, the day plan. */
-export async function board(ctx: AppContext, eventId: number) {
+export async function board(ctx: AppContext, eventId: number): Promise<Board> {
   const data = await loadEvent(ctx, eventId);
   const runs = await recentRuns(ctx.database.db, eventId);
   const latest = runs[0]?.result as TriageResult | undefined;

@@ -1,4 +1,5 @@
 import { triage, type TriageInput, type TriageResult } from '../../../../shared/triage/engine';
+import type { PlacementResult, TriageRunResult } from '../../../../shared/api/triage';
 import { dayPlan } from '../../../../shared/triage/day-plan';
 import type { AppContext } from '../../context';
 import { HttpError, notFound } from '../../http/errors';
@@ -11,7 +12,12 @@ import * as q from './queries';
  * that slot. Locked placements are kept and hold their fixer and bench for their time. Each run is stored with
  * its exact input and result.
  */
-export async function runTriage(ctx: AppContext, eventId: number, slotId: number | undefined, userId: number) {
+export async function runTriage(
+  ctx: AppContext,
+  eventId: number,
+  slotId: number | undefined,
+  userId: number,
+): Promise<TriageRunResult> {
   const data = await loadEvent(ctx, eventId);
   const slot = slotId ? data.slots.find((s) => s.id === slotId) : undefined;
   if (slotId && !slot)
@@ -163,7 +169,7 @@ export async function placeByHand(
   eventId: number,
   itemId: number,
   to: { userId: number; benchId: number; locked: boolean },
-) {
+): Promise<PlacementResult> {
   const data = await loadEvent(ctx, eventId);
   const item = data.items.find((i) => i.id === itemId);
   if (!item) throw notFound('That item');
@@ -196,12 +202,12 @@ export async function placeByHand(
   return { warnings };
 }
 
-export async function setLock(ctx: AppContext, eventId: number, itemId: number, locked: boolean) {
+export async function setLock(ctx: AppContext, eventId: number, itemId: number, locked: boolean): Promise<void> {
   if ((await q.lockPlacement(ctx.database.db, eventId, itemId, locked)) === 0)
     throw new HttpError(409, 'not-placed', 'Place the item before locking it.');
 }
 
-export async function unplace(ctx: AppContext, eventId: number, itemId: number) {
+export async function unplace(ctx: AppContext, eventId: number, itemId: number): Promise<void> {
   await q.deletePlacement(ctx.database.db, eventId, itemId);
 }
 

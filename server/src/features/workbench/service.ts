@@ -1,9 +1,10 @@
 import type { AppContext } from '../../context';
+import type { QueueItem } from '../../../../shared/api/workbench';
 import { eventLayout } from '../../core/benches';
 import { photoIdsOf, queueRows } from './queries';
 
 /** A fixer's own queue across upcoming events ("My bench"), in the order the items come. */
-export async function myQueue(ctx: AppContext, userId: number) {
+export async function myQueue(ctx: AppContext, userId: number): Promise<QueueItem[]> {
   const { db } = ctx.database;
   const rows = await queueRows(db, userId);
   const photos = await photoIdsOf(

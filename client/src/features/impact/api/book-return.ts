@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { ReturnBooked } from '../../../../../shared/api/impact';
+import type { ReturnBooked } from './types';
 import { api } from '../../../lib/api';
 import { impactKeys } from './keys';
 

@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { FollowUp } from '../../../../../shared/api/impact';
+import type { FollowUp } from './types';
 import { api } from '../../../lib/api';
 
 import { impactKeys } from './keys';

@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { EventReport } from '../../../../../shared/api/impact';
+import type { EventReport } from './types';
 import { api } from '../../../lib/api';
 import { queryString } from '../../../lib/query-string';
 import { impactKeys } from './keys';

@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { ImpactSettings } from '../../../../../shared/api/impact';
+import type { ImpactSettings } from './types';
 import { api } from '../../../lib/api';
 
 import { impactKeys } from './keys';

@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { Method } from '../../../../../shared/api/impact';
+import type { Method } from './types';
 import { api } from '../../../lib/api';
 import { impactKeys } from './keys';
 

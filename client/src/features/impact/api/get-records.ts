@@ -1,5 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { RecordsFilter, RecordsPage } from '../../../../../shared/api/impact';
+import type { RecordsFilter } from '../../../../../shared/api/impact';
+import type { RecordsPage } from './types';
 import { api } from '../../../lib/api';
 import { queryString } from '../../../lib/query-string';
 import { impactKeys } from './keys';

@@ -1,5 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { Stats, StatsFilter } from '../../../../../shared/api/impact';
+import type { StatsFilter } from '../../../../../shared/api/impact';
+import type { Stats } from './types';
 import { api } from '../../../lib/api';
 import { queryString } from '../../../lib/query-string';
 import { impactKeys } from './keys';

@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { ImpactSettings } from '../../../../../shared/api/impact';
+import type { ImpactSettings } from './types';
 import { api } from '../../../lib/api';
 
 export const setImpactSettings = (displacement: number) =>

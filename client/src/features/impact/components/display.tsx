@@ -1,7 +1,7 @@
 import { useId, type ReactNode } from 'react';
 import { Bar, BarChart, CartesianGrid, Legend, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import { Card } from '../../../components/ui/feedback';
-import type { Method } from '../../../../../shared/api/impact';
+import type { Method } from '../api/types';
 
 /** Number and month formats, colours and the chart frame shared by the impact pages. */
 export const whole = new Intl.NumberFormat('en-GB');

@@ -1,6 +1,6 @@
 import type { ReactNode } from 'react';
 import { Bar, BarChart, CartesianGrid, Legend, ResponsiveContainer, XAxis, YAxis } from 'recharts';
-import type { EventReport } from '../../../../../shared/api/impact';
+import type { EventReport } from '../api/types';
 import { BARRIER_LABELS } from '../../../../../shared/event-day/constants';
 import { formatDay, formatTimeRange } from '../../../../../shared/format';
 import { EmptyState } from '../../../components/ui/feedback';

@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { MyEvent } from '../../../../../shared/api/rota';
+import type { MyEvent } from './types';
 import { api } from '../../../lib/api';
 import { rotaKeys } from './keys';
 

@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { Rota } from '../../../../../shared/api/rota';
+import type { Rota } from './types';
 import { api } from '../../../lib/api';
 import { rotaKeys } from './keys';
 

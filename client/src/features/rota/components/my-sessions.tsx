@@ -1,5 +1,5 @@
 import { Link } from 'react-router';
-import type { MyEvent } from '../../../../../shared/api/rota';
+import type { MyEvent } from '../api/types';
 import { formatDay, formatTimeRange } from '../../../../../shared/format';
 import { Button } from '../../../components/ui/button';
 import { Alert, Card, EmptyState, Spinner } from '../../../components/ui/feedback';

@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import type { Rota } from '../../../../../shared/api/rota';
+import type { Rota } from '../api/types';
 import { SKILL_LABELS, type Skill } from '../../../../../shared/constants';
 import { formatTimeRange } from '../../../../../shared/format';
 import { Button } from '../../../components/ui/button';

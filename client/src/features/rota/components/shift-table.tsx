@@ -1,4 +1,4 @@
-import type { Rota } from '../../../../../shared/api/rota';
+import type { Rota } from '../api/types';
 import { SKILL_LABELS, type Skill } from '../../../../../shared/constants';
 import { formatTimeRange } from '../../../../../shared/format';
 import { Alert, EmptyState } from '../../../components/ui/feedback';

@@ -1,4 +1,4 @@
-import type { Rota } from '../../../../../shared/api/rota';
+import type { Rota } from '../api/types';
 import { SKILL_LABELS, SKILLS } from '../../../../../shared/constants';
 import { formatTime } from '../../../../../shared/format';
 import { Card } from '../../../components/ui/feedback';

@@ -1,5 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { KnowledgeEntry, KnowledgeQuery } from '../../../../../shared/api/toolkit';
+import type { KnowledgeQuery } from '../../../../../shared/api/toolkit';
+import type { KnowledgeEntry } from './types';
 import { api } from '../../../lib/api';
 import { queryString } from '../../../lib/query-string';
 import { toolkitKeys } from './keys';

@@ -1,5 +1,6 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
-import type { SalvageFilter, SalvagePart } from '../../../../../shared/api/toolkit';
+import type { SalvageFilter } from '../../../../../shared/api/toolkit';
+import type { SalvagePart } from './types';
 import { api } from '../../../lib/api';
 import { queryString } from '../../../lib/query-string';
 import { toolkitKeys } from './keys';

@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { KnowledgeEntry } from '../../../../../shared/api/toolkit';
+import type { KnowledgeEntry } from './types';
 import { api } from '../../../lib/api';
 import { toolkitKeys } from './keys';
 

@@ -1,5 +1,6 @@
 import { useQuery } from '@tanstack/react-query';
-import type { Substitute, SubstituteQuery } from '../../../../../shared/api/toolkit';
+import type { SubstituteQuery } from '../../../../../shared/api/toolkit';
+import type { Substitute } from './types';
 import { api } from '../../../lib/api';
 import { queryString } from '../../../lib/query-string';
 import { toolkitKeys } from './keys';

@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { KnowledgeSharing } from '../../../../../shared/api/toolkit';
+import type { KnowledgeSharing } from './types';
 import { api } from '../../../lib/api';
 import { toolkitKeys } from './keys';
 

@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { SalvagePart } from '../../../../../shared/api/toolkit';
+import type { SalvagePart } from './types';
 import { api } from '../../../lib/api';
 import { toolkitKeys } from './keys';
 

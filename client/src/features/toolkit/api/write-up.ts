@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { KnowledgeEntry } from '../../../../../shared/api/toolkit';
+import type { KnowledgeEntry } from './types';
 import type { WriteupInput } from '../../../../../shared/schemas/toolkit';
 import { api } from '../../../lib/api';
 import { toolkitKeys } from './keys';

@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { Button } from '../../../components/ui/button';
 import { Alert } from '../../../components/ui/feedback';
 import { TextAreaField, TextField } from '../../../components/ui/field';
-import type { KnowledgeEntry } from '../../../../../shared/api/toolkit';
+import type { KnowledgeEntry } from '../api/types';
 import { useWriteUp } from '../api/write-up';
 
 /** One record of the knowledge base: the write-up when there is one, else the fault and the fixer's notes. */

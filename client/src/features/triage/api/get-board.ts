@@ -1,6 +1,6 @@
 import { queryOptions, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useCallback } from 'react';
-import type { Board } from '../../../../../shared/api/triage';
+import type { Board } from './types';
 import { api } from '../../../lib/api';
 import { triageKeys } from './keys';
 

@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { PlacementResult } from '../../../../../shared/api/triage';
+import type { PlacementResult } from './types';
 import { api } from '../../../lib/api';
 import { triageKeys } from './keys';
 

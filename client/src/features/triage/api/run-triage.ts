@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { TriageRunResult } from '../../../../../shared/api/triage';
+import type { TriageRunResult } from './types';
 import { api } from '../../../lib/api';
 import { triageKeys } from './keys';
 

@@ -1,4 +1,4 @@
-import type { Board } from '../../../../../shared/api/triage';
+import type { Board } from '../api/types';
 import { EQUIPMENT_LABELS, type Equipment } from '../../../../../shared/constants';
 import { BoardColumn } from './board-column';
 import { BoardItemCard } from './board-item-card';

@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import type { Board, BoardItem } from '../../../../../shared/api/triage';
+import type { Board, BoardItem } from '../api/types';
 import { EQUIPMENT_LABELS, SKILL_LABELS, type Equipment, type Skill } from '../../../../../shared/constants';
 import { formatTime } from '../../../../../shared/format';
 import { Button } from '../../../components/ui/button';

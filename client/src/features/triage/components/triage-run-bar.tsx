@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import type { Board } from '../../../../../shared/api/triage';
+import type { Board } from '../api/types';
 import { formatTime } from '../../../../../shared/format';
 import { Button } from '../../../components/ui/button';
 import { Alert } from '../../../components/ui/feedback';

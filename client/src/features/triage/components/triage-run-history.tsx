@@ -1,4 +1,4 @@
-import type { Board } from '../../../../../shared/api/triage';
+import type { Board } from '../api/types';
 import { formatTime } from '../../../../../shared/format';
 import { triageRunUrl } from '../api/triage-run-url';
 

@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { QueueItem } from '../../../../../shared/api/workbench';
+import type { QueueItem } from './types';
 import { api } from '../../../lib/api';
 import { workbenchKeys } from './keys';
 
