@@ -2,7 +2,6 @@ import { randomBytes } from 'node:crypto';
 import {
   BARRIER_LABELS,
   canMoveTo,
-  isOpen,
   ITEM_STATUS_LABELS,
   mayStartRepair,
   OUTCOME_LABELS,
@@ -153,7 +152,7 @@ export async function itemView(ctx: AppContext, itemId: number, user: SessionUse
     safetyNote: LOCAL_RULES_PREVAIL,
     safetySource: SAFETY_SOURCE,
     can: {
-      start: isOpen(item.status) && mayStartRepair(item.status) && (organiser || fixerHere),
+      start: mayStartRepair(item.status) && (organiser || fixerHere),
       record: organiser || (fixerHere && (!placement || mine)),
     },
   };

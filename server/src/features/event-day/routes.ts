@@ -14,9 +14,10 @@ import { groupOfBooking } from './queries/desk';
 import { walkIn } from './walk-in';
 import { hallQueue, liveView, publicTag, tags } from './hall';
 import { itemView } from './items';
-import { itemGroupId, loadItem } from '../../core/items';
-import { multerError, photoUpload, savePhotos } from '../../core/photos';
-import { assertMayRecord, recordOutcome, recordSafetyCheck, startRepair } from './outcomes';
+import { itemGroupId } from '../../core/items';
+import { multerError, photoUpload } from '../../core/photos';
+import { recordOutcome, recordSafetyCheck, startRepair } from './outcomes';
+import { addRepairPhotos, assertMayAddRepairPhotos } from './repair-photos';
 
 const idParam = z.object({ id: z.coerce.number().int().positive() });
 const tagsQuery = z.object({
@@ -93,17 +94,13 @@ export function eventDayRoutes(ctx: AppContext) {
     '/items/:id/photos',
     itemStaff,
     async (req, _res, next) => {
-      // Only the fixer on the item or an organiser, checked before a byte of the upload is read.
-      const row = await loadItem(db, params(req, idParam).id);
-      await assertMayRecord(db, row, req.user!);
+      await assertMayAddRepairPhotos(ctx, params(req, idParam).id, req.user!);
       next();
     },
     (req: Request, res: Response, next: NextFunction) => photoUpload(req, res, (err) => next(multerError(err) ?? err)),
     async (req, res) => {
-      const row = await loadItem(db, params(req, idParam).id);
-      res
-        .status(201)
-        .json(await savePhotos(ctx, row.booking.id, row.item.id, (req.files as Express.Multer.File[]) ?? [], 'repair'));
+      const files = (req.files as Express.Multer.File[]) ?? [];
+      res.status(201).json(await addRepairPhotos(ctx, params(req, idParam).id, files));
     },
   );
   r.post('/items/:id/outcome', itemStaff, async (req, res) => {
