@@ -1,7 +1,7 @@
 import { Link, useParams, type LoaderFunctionArgs } from 'react-router';
 import { formatDay } from '../../../../shared/format';
 import { EventTabs } from '../../components/layouts/event-tabs';
-import { Alert, Spinner } from '../../components/ui/feedback';
+import { Alert } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
 import { boardQuery, useBoard } from '../../features/triage/api/get-board';
 import { BenchColumns } from '../../features/triage/components/bench-columns';
@@ -9,17 +9,14 @@ import { TriageRunBar } from '../../features/triage/components/triage-run-bar';
 import { TriageRunHistory } from '../../features/triage/components/triage-run-history';
 import { queryClient } from '../../lib/query-client';
 
-/** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
+/** The page reads what the loader fetched; a failure to fetch it is the route's error, shown in the page frame. */
 export const loader = ({ params }: LoaderFunctionArgs) =>
-  queryClient.ensureQueryData(boardQuery(Number(params.eventId))).catch(() => null);
+  queryClient.ensureQueryData(boardQuery(Number(params.eventId)));
 
 /** Columns per bench, each with its fixers' item cards; one column of items still waiting, with the reason. */
 export function TriageBoardPage() {
   const id = Number(useParams().eventId);
-  const board = useBoard(id);
-  if (board.isPending) return <Spinner label="Loading the board…" />;
-  if (board.error) return <Alert tone="error">{board.error.message}</Alert>;
-  const b = board.data;
+  const { data: b } = useBoard(id);
   return (
     <div>
       <Link to={paths.groupEvents(b.event.groupId)} className="text-sm font-bold text-navy underline">

@@ -9,11 +9,9 @@ import { MySessions } from '../../features/rota/components/my-sessions';
 import { queueQuery } from '../../features/workbench/api/get-queue';
 import { QueueList } from '../../features/workbench/components/queue-list';
 
-/** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
+/** The page reads what the loader fetched; a failure to fetch it is the route's error, shown in the page frame. */
 export const loader = () =>
-  Promise.all([queryClient.ensureQueryData(queueQuery()), queryClient.ensureQueryData(myEventsQuery())]).catch(
-    () => null,
-  );
+  Promise.all([queryClient.ensureQueryData(queueQuery()), queryClient.ensureQueryData(myEventsQuery())]);
 
 const toolLink = 'rounded-lg bg-white px-3 py-2 font-semibold text-navy ring-1 ring-navy/20';
 

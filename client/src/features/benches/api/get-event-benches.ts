@@ -1,4 +1,4 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
 import type { Bench } from '../../../../../shared/api/benches';
 import { api } from '../../../lib/api';
 import { benchKeys } from './keys';
@@ -8,4 +8,5 @@ export const getEventBenches = (eventId: number) => api<Bench[]>('GET', `/api/ev
 export const eventBenchesQuery = (eventId: number) =>
   queryOptions({ queryKey: benchKeys.event(eventId), queryFn: () => getEventBenches(eventId) });
 
-export const useEventBenches = (eventId: number) => useQuery(eventBenchesQuery(eventId));
+/** Read after the route's loader has the benches, so the page renders with them from the start. */
+export const useEventBenches = (eventId: number) => useSuspenseQuery(eventBenchesQuery(eventId));

@@ -1,4 +1,4 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
 import type { Rota } from './types';
 import { api } from '../../../lib/api';
 import { rotaKeys } from './keys';
@@ -8,4 +8,5 @@ export const getRota = (eventId: number) => api<Rota>('GET', `/api/events/${even
 export const rotaQuery = (eventId: number) =>
   queryOptions({ queryKey: rotaKeys.event(eventId), queryFn: () => getRota(eventId) });
 
-export const useRota = (eventId: number) => useQuery(rotaQuery(eventId));
+/** Read after the route's loader has the rota, so the page renders with it from the start. */
+export const useRota = (eventId: number) => useSuspenseQuery(rotaQuery(eventId));

@@ -2,7 +2,7 @@ import { Link } from 'react-router';
 import type { MyEvent } from '../api/types';
 import { formatDay, formatTimeRange } from '../../../../../shared/format';
 import { Button } from '../../../components/ui/button';
-import { Alert, Card, EmptyState, Spinner } from '../../../components/ui/feedback';
+import { Alert, Card, EmptyState } from '../../../components/ui/feedback';
 import { MonthCalendar } from '../../../components/ui/month-calendar';
 import { paths } from '../../../config/paths';
 import { useMyEvents } from '../api/get-my-events';
@@ -10,8 +10,8 @@ import { useSetShift } from '../api/set-shift';
 
 /** The sessions a volunteer can help at, each with their answer, and a calendar of the shifts they said yes to. */
 export function MySessions() {
-  const events = useMyEvents();
-  const coming = events.data?.filter((e) => e.shift?.coming) ?? [];
+  const { data: events } = useMyEvents();
+  const coming = events.filter((e) => e.shift?.coming);
   return (
     <section aria-labelledby="sessions" className="space-y-3">
       <div className="flex items-center justify-between">
@@ -22,14 +22,12 @@ export function MySessions() {
           My skills
         </Link>
       </div>
-      {events.isPending && <Spinner />}
-      {events.error && <Alert tone="error">{events.error.message}</Alert>}
-      {events.data?.length === 0 && (
+      {events.length === 0 && (
         <EmptyState title="No upcoming sessions" icon="▦">
           Your groups have not published a date yet.
         </EmptyState>
       )}
-      <ShiftAnswers events={events.data ?? []} />
+      <ShiftAnswers events={events} />
       {coming.length > 0 && (
         <Card className="mendery-calendar">
           <h3 className="mb-2 text-lg">My shifts</h3>

@@ -1,4 +1,4 @@
-import { queryOptions, useQuery, useQueryClient } from '@tanstack/react-query';
+import { queryOptions, useQueryClient, useSuspenseQuery } from '@tanstack/react-query';
 import { useCallback } from 'react';
 import type { Board } from './types';
 import { api } from '../../../lib/api';
@@ -9,7 +9,8 @@ export const getBoard = (eventId: number) => api<Board>('GET', `/api/events/${ev
 export const boardQuery = (eventId: number) =>
   queryOptions({ queryKey: triageKeys.board(eventId), queryFn: () => getBoard(eventId) });
 
-export const useBoard = (eventId: number) => useQuery(boardQuery(eventId));
+/** Read after the route's loader has the board, so the page renders with it from the start. */
+export const useBoard = (eventId: number) => useSuspenseQuery(boardQuery(eventId));
 
 /** For pages whose changes move items on the board (benches, seats): call it after the change. */
 export function useRefreshBoard(eventId: number) {

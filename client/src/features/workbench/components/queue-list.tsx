@@ -2,28 +2,26 @@ import type { ReactNode } from 'react';
 import { Link } from 'react-router';
 import type { ItemStatus } from '../../../../../shared/event-day/constants';
 import { formatTime } from '../../../../../shared/format';
-import { Alert, EmptyState, Spinner } from '../../../components/ui/feedback';
+import { EmptyState } from '../../../components/ui/feedback';
 import { paths } from '../../../config/paths';
 import { useQueue } from '../api/get-queue';
 import { photoUrl } from '../api/photo-url';
 
 /** The items coming to the fixer, in order; `statusChip` shows an item's status once it has arrived. */
 export function QueueList({ statusChip }: { statusChip: (status: ItemStatus) => ReactNode }) {
-  const queue = useQueue();
+  const { data: queue } = useQueue();
   return (
     <section aria-labelledby="queue" className="space-y-3">
       <h2 id="queue" className="text-xl">
         My queue
       </h2>
-      {queue.isPending && <Spinner />}
-      {queue.error && <Alert tone="error">{queue.error.message}</Alert>}
-      {queue.data?.length === 0 && (
+      {queue.length === 0 && (
         <EmptyState title="No items are waiting for you" icon="⚒">
           When the organiser runs triage, the items matched to you appear here in order.
         </EmptyState>
       )}
       <ol className="space-y-3">
-        {queue.data?.map((q, n) => (
+        {queue.map((q, n) => (
           <li key={q.itemId} className="rounded-xl bg-white p-4 shadow-sm ring-1 ring-ink/5">
             <div className="flex items-baseline justify-between gap-2">
               <p className="text-lg font-extrabold text-navy">
