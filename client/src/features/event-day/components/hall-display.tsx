@@ -1,0 +1,189 @@
+import { useEffect, useState } from 'react';
+import { formatTime } from '../../../../../shared/format';
+import { ApiError } from '../../../lib/api';
+import { useHallQueue } from '../api/get-hall-queue';
+import type { HallQueue } from '../api/types';
+
+/** Waiting numbers that fit on the screen (three to a row) without scrolling; the rest are counted. */
+function useWaitingRoom() {
+  const rowsFor = (h: number) => (h >= 1000 ? 5 : h >= 800 ? 4 : 3);
+  const [rows, setRows] = useState(() => rowsFor(window.innerHeight));
+  useEffect(() => {
+    const onResize = () => setRows(rowsFor(window.innerHeight));
+    window.addEventListener('resize', onResize);
+    return () => window.removeEventListener('resize', onResize);
+  }, []);
+  return rows * 3;
+}
+
+const localTimeZone = () => Intl.DateTimeFormat().resolvedOptions().timeZone;
+
+/** The wall clock, ticking often enough that the minute changes on time. */
+function useNow(intervalMs = 5_000) {
+  const [now, setNow] = useState(() => new Date());
+  useEffect(() => {
+    const t = window.setInterval(() => setNow(new Date()), intervalMs);
+    return () => window.clearInterval(t);
+  }, [intervalMs]);
+  return now;
+}
+
+/** "about 15 min", "next", or "—" when nobody can say (no fixer on hand). */
+function waitLabel(minutes: number | null): string {
+  if (minutes === null) return '—';
+  if (minutes <= 0) return 'any moment';
+  return `about ${minutes} min`;
+}
+
+const numberText = (n: number | null) => (n === null ? '—' : String(n));
+
+/**
+ * The hall's TV: queue numbers being served and at which bench, then the numbers waiting with an estimate.
+ * No names. Refreshes itself; when a refresh fails it keeps showing the last answer with a quiet banner.
+ */
+export function HallDisplay({ eventId }: { eventId: number }) {
+  const queue = useHallQueue(eventId);
+  const now = useNow();
+  const data = queue.data;
+  const tz = data?.event.timeZone ?? localTimeZone();
+
+  return (
+    <div className="flex min-h-dvh flex-col bg-navy px-6 py-5 text-white antialiased lg:px-10 lg:py-8">
+      <title>{data ? `Queue · ${data.event.title}` : 'Queue · Mendery'}</title>
+      <header className="flex items-start justify-between gap-6 border-b border-white/15 pb-4">
+        <div className="min-w-0">
+          <h1 className="truncate text-xl font-extrabold text-white lg:text-2xl 2xl:text-3xl">
+            {data?.event.title ?? 'Repair session'}
+          </h1>
+          {data && (
+            <p className="truncate text-base font-semibold text-white/70 lg:text-lg 2xl:text-xl">
+              {data.event.groupName}
+            </p>
+          )}
+        </div>
+        <p className="shrink-0 text-3xl font-extrabold tabular-nums lg:text-4xl 2xl:text-5xl" aria-label="Time now">
+          <time dateTime={now.toISOString()}>{formatTime(now, tz)}</time>
+        </p>
+      </header>
+
+      {queue.isError && data && (
+        <p
+          role="status"
+          className="mt-3 rounded-lg bg-white/10 px-4 py-2 text-base font-semibold text-copper-light lg:text-lg"
+        >
+          Cannot reach Mendery just now — showing the queue as it was at {formatTime(new Date(queue.dataUpdatedAt), tz)}
+          . Trying again…
+        </p>
+      )}
+
+      {data ? (
+        <Board data={data} />
+      ) : queue.isError ? (
+        <div role="alert" className="flex flex-1 flex-col items-center justify-center gap-3 text-center">
+          <p className="text-4xl font-extrabold lg:text-5xl">The queue is not showing yet</p>
+          <p className="max-w-2xl text-xl text-white/70 lg:text-2xl">
+            {queue.error instanceof ApiError && queue.error.status === 404
+              ? 'This session is not published, or the address is wrong.'
+              : 'Cannot reach Mendery. This screen tries again by itself.'}
+          </p>
+        </div>
+      ) : (
+        <div role="status" className="flex flex-1 items-center justify-center gap-4 text-2xl text-white/80 lg:text-3xl">
+          <span className="size-8 animate-spin rounded-full border-4 border-white border-r-transparent" aria-hidden />
+          Loading the queue…
+        </div>
+      )}
+
+      <footer className="mt-4 flex flex-wrap items-center justify-between gap-x-6 gap-y-1 border-t border-white/15 pt-3 text-base text-white/70 lg:text-lg 2xl:text-xl">
+        <p>
+          {data ? (
+            <>
+              {data.done} item{data.done === 1 ? '' : 's'} seen to today · {data.fixersOnHand} fixer
+              {data.fixersOnHand === 1 ? '' : 's'} on hand
+            </>
+          ) : (
+            'Mendery'
+          )}
+        </p>
+        {queue.dataUpdatedAt > 0 && (
+          <p className="tabular-nums">Updated {formatTime(new Date(queue.dataUpdatedAt), tz)}</p>
+        )}
+      </footer>
+    </div>
+  );
+}
+
+function Board({ data }: { data: HallQueue }) {
+  const room = useWaitingRoom();
+  const waitingShown = data.waiting.slice(0, room);
+  const more = data.waiting.length - waitingShown.length;
+  return (
+    <main className="mt-6 grid flex-1 content-start gap-8 lg:grid-cols-[3fr_2fr] lg:gap-10">
+      <section aria-label="Now at the benches" className="min-w-0">
+        <h2 className="mb-4 text-3xl font-extrabold text-copper-light lg:text-4xl 2xl:text-5xl">Now at the benches</h2>
+        {data.serving.length === 0 ? (
+          <p className="rounded-2xl border-2 border-dashed border-white/20 px-6 py-10 text-center text-2xl text-white/75 lg:text-3xl">
+            No repairs under way just now
+          </p>
+        ) : (
+          <ol data-testid="serving" className="grid grid-cols-2 gap-4 md:grid-cols-3 2xl:grid-cols-4">
+            {data.serving.map((s, i) => (
+              <li
+                key={`${s.queueNumber ?? 'x'}-${i}`}
+                className="flex min-w-0 flex-col items-center justify-center rounded-2xl bg-white/10 px-3 py-4 text-center ring-1 ring-white/10"
+              >
+                <span
+                  data-testid="queue-number"
+                  className="text-6xl leading-none font-extrabold tabular-nums lg:text-8xl 2xl:text-9xl"
+                >
+                  {numberText(s.queueNumber)}
+                </span>
+                <span className="mt-2 max-w-full break-words text-center text-xl leading-tight font-bold text-copper-light lg:text-2xl 2xl:text-3xl">
+                  {s.benchName ?? 'At a bench'}
+                </span>
+              </li>
+            ))}
+          </ol>
+        )}
+      </section>
+
+      <section aria-label="Waiting" className="min-w-0">
+        <h2 className="mb-4 text-3xl font-extrabold text-copper-light lg:text-4xl 2xl:text-5xl">
+          Waiting
+          {data.waiting.length > 0 && (
+            <span className="ml-3 text-xl font-bold text-white/60 lg:text-2xl">{data.waiting.length}</span>
+          )}
+        </h2>
+        {data.waiting.length === 0 ? (
+          <p className="rounded-2xl border-2 border-dashed border-white/20 px-6 py-10 text-center text-2xl text-white/75 lg:text-3xl">
+            No one is waiting — walk-ins welcome at reception
+          </p>
+        ) : (
+          <>
+            <ol data-testid="waiting" className="grid grid-cols-2 gap-3 sm:grid-cols-3">
+              {waitingShown.map((w, i) => (
+                <li
+                  key={`${w.queueNumber ?? 'x'}-${i}`}
+                  className={`flex min-w-0 flex-col items-center rounded-xl px-2 py-3 text-center ${i === 0 ? 'bg-sage/60 ring-1 ring-sage-light/40' : 'bg-white/5'}`}
+                >
+                  <span
+                    data-testid="queue-number"
+                    className="text-6xl leading-none font-extrabold tabular-nums 2xl:text-7xl"
+                  >
+                    {numberText(w.queueNumber)}
+                  </span>
+                  <span className="mt-1 text-lg font-semibold text-white/80 lg:text-xl 2xl:text-2xl">
+                    {waitLabel(w.waitMinutes)}
+                  </span>
+                </li>
+              ))}
+            </ol>
+            {more > 0 && (
+              <p className="mt-3 text-xl font-semibold text-white/70 lg:text-2xl">and {more} more in the queue</p>
+            )}
+          </>
+        )}
+      </section>
+    </main>
+  );
+}
