@@ -1,7 +1,6 @@
 import { useQuery } from '@tanstack/react-query';
 import { useParams, type LoaderFunctionArgs } from 'react-router';
-import { Alert, Spinner } from '../../components/ui/feedback';
-import { categoriesQuery } from '../../features/categories/api/get-categories';
+import { categoriesQuery, useCategories } from '../../features/categories/api/get-categories';
 import { eventQuery } from '../../features/events/api/get-event';
 import { deskQuery, useDesk } from '../../features/event-day/api/get-desk';
 import { deskEventsQuery, useDeskEvents } from '../../features/event-day/api/get-desk-events';
@@ -9,23 +8,20 @@ import { DeskBoard } from '../../features/event-day/components/desk-board';
 import { DeskHome } from '../../features/event-day/components/desk-home';
 import { queryClient } from '../../lib/query-client';
 
-/** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
-export const loader = ({ params }: LoaderFunctionArgs) => {
-  if (!params.eventId) return queryClient.ensureQueryData(deskEventsQuery()).catch(() => null);
+/**
+ * The pages read what the loader fetched; a failure to fetch it is the route's error, shown in the page frame. The
+ * event (for the group's excluded kinds) is fetched alongside but may fail: the server screens every walk-in too.
+ */
+export const loader = async ({ params }: LoaderFunctionArgs) => {
+  if (!params.eventId) return queryClient.ensureQueryData(deskEventsQuery());
   const eventId = Number(params.eventId);
-  return Promise.all([
-    queryClient.ensureQueryData(deskQuery(eventId)),
-    queryClient.ensureQueryData(eventQuery(eventId)),
-    queryClient.ensureQueryData(categoriesQuery()),
-  ]).catch(() => null);
+  void queryClient.prefetchQuery(eventQuery(eventId));
+  return Promise.all([queryClient.ensureQueryData(deskQuery(eventId)), queryClient.ensureQueryData(categoriesQuery())]);
 };
 
 /** /desk: the sessions reception can open, today's first. */
 export function DeskHomePage() {
-  const { data, isPending, error } = useDeskEvents();
-  if (isPending) return <Spinner />;
-  if (error) return <Alert tone="error">{error.message}</Alert>;
-  return <DeskHome events={data} />;
+  return <DeskHome events={useDeskEvents().data} />;
 }
 
 /**
@@ -34,20 +30,15 @@ export function DeskHomePage() {
  */
 export function DeskPage() {
   const eventId = Number(useParams().eventId);
-  const desk = useDesk(eventId);
+  const { data: desk } = useDesk(eventId);
+  const { data: categories } = useCategories();
   const event = useQuery(eventQuery(eventId));
-  const categories = useQuery(categoriesQuery());
-  if (desk.isPending || categories.isPending || event.isPending) return <Spinner label="Loading today’s bookings…" />;
-  const error = desk.error ?? categories.error;
-  if (error || !desk.data || !categories.data)
-    return <Alert tone="error">{error?.message ?? 'The desk could not be loaded.'}</Alert>;
-  // The server screens every walk-in too; without the event's exclusions the form still asks the hazard questions.
   return (
     <DeskBoard
-      desk={desk.data}
+      desk={desk}
       screening={{
-        categories: categories.data,
-        groupName: desk.data.event.groupName,
+        categories,
+        groupName: desk.event.groupName,
         excludedCategoryIds: event.data?.excludedCategoryIds ?? [],
       }}
     />

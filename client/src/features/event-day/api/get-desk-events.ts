@@ -1,4 +1,4 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api';
 import { eventDayKeys } from './keys';
 import type { DeskEvent } from './types';
@@ -7,4 +7,5 @@ export const getDeskEvents = () => api<DeskEvent[]>('GET', '/api/desk/events');
 
 export const deskEventsQuery = () => queryOptions({ queryKey: eventDayKeys.deskEvents(), queryFn: getDeskEvents });
 
-export const useDeskEvents = () => useQuery(deskEventsQuery());
+/** Read after the route's loader has it; a failure to load is the route's error. */
+export const useDeskEvents = () => useSuspenseQuery(deskEventsQuery());

@@ -1,4 +1,4 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api';
 import { eventDayKeys } from './keys';
 import type { DeskView } from './types';
@@ -9,4 +9,5 @@ export const getDesk = (eventId: number) => api<DeskView>('GET', `/api/events/${
 export const deskQuery = (eventId: number) =>
   queryOptions({ queryKey: eventDayKeys.desk(eventId), queryFn: () => getDesk(eventId), refetchInterval: 20_000 });
 
-export const useDesk = (eventId: number) => useQuery(deskQuery(eventId));
+/** Read after the route's loader has it; a failure to load is the route's error. */
+export const useDesk = (eventId: number) => useSuspenseQuery(deskQuery(eventId));

@@ -1,4 +1,4 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api';
 import { eventDayKeys } from './keys';
 import type { ItemView } from './types';
@@ -7,4 +7,5 @@ export const getItem = (id: number) => api<ItemView>('GET', `/api/items/${id}`);
 
 export const itemQuery = (id: number) => queryOptions({ queryKey: eventDayKeys.item(id), queryFn: () => getItem(id) });
 
-export const useItem = (id: number) => useQuery(itemQuery(id));
+/** Read after the route's loader has it; a failure to load is the route's error. */
+export const useItem = (id: number) => useSuspenseQuery(itemQuery(id));
