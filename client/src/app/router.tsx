@@ -21,9 +21,10 @@ import * as claimPages from '../routes/bookings/claim';
 
 /**
  * A route module exports its page component and, when the page reads data, a `loader` that warms the query cache
- * (docs/decisions/008). A guarded page checks the role before its loader runs.
+ * (docs/decisions/008). A guarded page checks the role before its loader runs. A module may export an
+ * `ErrorBoundary` that says in its own words why its data failed; without one the enclosing `RouteError` does.
  */
-type RouteModule = { loader?: LoaderFunction } & Record<string, unknown>;
+type RouteModule = { loader?: LoaderFunction; ErrorBoundary?: ComponentType } & Record<string, unknown>;
 
 const withGuard = (check: Allow | undefined, loader: LoaderFunction | undefined): LoaderFunction | undefined =>
   check
@@ -37,7 +38,7 @@ const withGuard = (check: Allow | undefined, loader: LoaderFunction | undefined)
 const page = (load: () => Promise<RouteModule>, name: string, check?: Allow) => ({
   lazy: async () => {
     const m = await load();
-    return { Component: m[name] as ComponentType, loader: withGuard(check, m.loader) };
+    return { Component: m[name] as ComponentType, loader: withGuard(check, m.loader), ErrorBoundary: m.ErrorBoundary };
   },
 });
 

@@ -1,8 +1,9 @@
+import { useQuery } from '@tanstack/react-query';
 import type { ReactNode } from 'react';
 import { useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { Area, AreaChart, ResponsiveContainer } from 'recharts';
 import { paths } from '../../config/paths';
-import { publicImpactQuery, usePublicImpact } from '../../features/impact/api/get-public-impact';
+import { publicImpactQuery } from '../../features/impact/api/get-public-impact';
 import { queryClient } from '../../lib/query-client';
 import { monthLabel, oneDp, positiveInt, whole } from '../../features/impact/components/display';
 
@@ -10,7 +11,10 @@ import { monthLabel, oneDp, positiveInt, whole } from '../../features/impact/com
 const FRAME_CSS =
   'html, body { margin: 0; padding: 0; background: transparent !important; overflow: hidden; } #root { height: 100%; }';
 
-/** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
+/**
+ * Warms the cache. The widget sits in another site's iframe, where the app's error page (its menu and links) would
+ * be out of place: a failure is left to the widget's own quiet line, so it reads with `useQuery`, not suspense.
+ */
 export const loader = ({ request }: LoaderFunctionArgs) =>
   queryClient
     .ensureQueryData(publicImpactQuery(positiveInt(new URL(request.url).searchParams.get('group'))))
@@ -23,7 +27,7 @@ export const loader = ({ request }: LoaderFunctionArgs) =>
 export function ImpactWidgetPage() {
   const [params] = useSearchParams();
   const groupId = positiveInt(params.get('group'));
-  const impact = usePublicImpact(groupId);
+  const impact = useQuery(publicImpactQuery(groupId));
   const d = impact.data;
   const name = d?.group ? d.group.name : 'All groups on Mendery';
   const months = (d?.byMonth ?? []).map((m) => ({ month: m.month, kg: Math.round(m.kgDiverted * 10) / 10 }));

@@ -6,7 +6,7 @@ import { FOLLOW_UP_LABELS, MANUAL_FOLLOW_UP_STATUSES, type FollowUpStatus } from
 import { GroupTabs } from '../../components/layouts/group-tabs';
 import { Button } from '../../components/ui/button';
 import { ConfirmDialog } from '../../components/ui/confirm-dialog';
-import { Alert, EmptyState, Spinner } from '../../components/ui/feedback';
+import { Alert, EmptyState } from '../../components/ui/feedback';
 import { TextAreaField } from '../../components/ui/field';
 import { useGroupSettings } from '../../features/groups/api/get-group-settings';
 import type { FollowUp } from '../../features/impact/api/types';
@@ -35,16 +35,16 @@ const shortDay = (d: string, timeZone: string) =>
   new Intl.DateTimeFormat('en-GB', { timeZone, day: 'numeric', month: 'short', year: 'numeric' }).format(new Date(d));
 const age = (days: number) => (days <= 0 ? 'today' : days === 1 ? '1 day ago' : `${days} days ago`);
 
-/** Items that need a part, oldest first: who to chase, what they need, and the link that books them back in. */
-/** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
+/** The page reads what the loader fetched; a failure to fetch it is the route's error, shown in the page frame. */
 export const loader = ({ params }: LoaderFunctionArgs) =>
-  queryClient.ensureQueryData(followUpsQuery(Number(params.groupId))).catch(() => null);
+  queryClient.ensureQueryData(followUpsQuery(Number(params.groupId)));
 
+/** Items that need a part, oldest first: who to chase, what they need, and the link that books them back in. */
 export function FollowUpsPage() {
   const groupId = Number(useParams().groupId);
   const [params, setParams] = useSearchParams();
   const showAll = params.get('show') === 'all';
-  const followUps = useFollowUps(groupId);
+  const { data: followUps } = useFollowUps(groupId);
   const group = useGroupSettings(groupId);
   const setStatus = useSetFollowUp(groupId);
   const [confirm, setConfirm] = useState<FollowUp | null>(null);
@@ -63,7 +63,7 @@ export function FollowUpsPage() {
       { replace: true },
     );
 
-  const all = [...(followUps.data ?? [])].sort((a, b) => a.createdAt.localeCompare(b.createdAt));
+  const all = [...followUps].sort((a, b) => a.createdAt.localeCompare(b.createdAt));
   const open = all.filter((f) => OPEN_STATUSES.includes(f.status));
   const list = showAll ? all : open;
 
@@ -111,7 +111,7 @@ export function FollowUpsPage() {
             className={`min-h-11 rounded-md px-4 font-bold ${showAll === wantAll ? 'bg-navy text-white' : 'text-navy hover:bg-navy/5'}`}
           >
             {wantAll ? 'All' : 'Open only'}
-            {followUps.data && <span className="font-semibold"> ({wantAll ? all.length : open.length})</span>}
+            <span className="font-semibold"> ({wantAll ? all.length : open.length})</span>
           </button>
         ))}
       </div>
@@ -124,13 +124,7 @@ export function FollowUpsPage() {
         </div>
       )}
 
-      {followUps.isPending ? (
-        <Spinner label="Loading the follow-ups…" />
-      ) : followUps.isError ? (
-        <Alert tone="error" title="The follow-ups could not be loaded">
-          {followUps.error.message}
-        </Alert>
-      ) : all.length === 0 ? (
+      {all.length === 0 ? (
         <EmptyState title="No items waiting for a part" icon="⚙">
           When a fixer records “{OUTCOME_LABELS['parts-needed']}” for an item, it shows here with the visitor’s details,
           so nobody is forgotten.

@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import { Link, useParams, type LoaderFunctionArgs } from 'react-router';
+import { Link, useParams, useRouteError, type LoaderFunctionArgs } from 'react-router';
 import { usePublicGroups } from '../../features/groups/api/get-public-groups';
 import {
   Area,
@@ -14,7 +14,7 @@ import {
   YAxis,
 } from 'recharts';
 import { OUTCOME_LABELS } from '../../../../shared/event-day/constants';
-import { Alert, Card, EmptyState, PageTitle, Spinner } from '../../components/ui/feedback';
+import { Alert, Card, EmptyState, PageTitle } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
 import type { Method, PublicImpact } from '../../features/impact/api/types';
 import { publicImpactQuery, usePublicImpact } from '../../features/impact/api/get-public-impact';
@@ -39,28 +39,31 @@ const groupOf = (raw: string | undefined) => {
   return { groupId, valid: groupId === undefined || (Number.isInteger(groupId) && groupId > 0) };
 };
 
-/** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
+/** The page reads what the loader fetched; a failure to fetch it is told by this module's `ErrorBoundary`. */
 export const loader = ({ params }: LoaderFunctionArgs) => {
   const { groupId, valid } = groupOf(params.groupId);
-  return valid ? queryClient.ensureQueryData(publicImpactQuery(groupId)).catch(() => null) : null;
+  return valid ? queryClient.ensureQueryData(publicImpactQuery(groupId)) : null;
 };
+
+/** A group that does not exist is a page of its own; anything else failing says so and suggests trying again. */
+export function ErrorBoundary() {
+  const err = useRouteError();
+  if (err instanceof ApiError && err.status === 404) return <NotFound />;
+  return (
+    <Alert tone="error" title="The figures could not be loaded">
+      {err instanceof Error ? err.message : ''} Try again in a moment.
+    </Alert>
+  );
+}
 
 /** What a group (or every group) has repaired, for anyone: totals and charts, never a person. */
 export function PublicImpactPage() {
   const { groupId, valid } = groupOf(useParams().groupId);
-  const impact = usePublicImpact(valid ? groupId : undefined);
+  return valid ? <PublicFigures groupId={groupId} /> : <NotFound />;
+}
 
-  if (!valid) return <NotFound />;
-  if (impact.isPending) return <Spinner label="Counting the repairs…" />;
-  if (impact.isError) {
-    if (impact.error instanceof ApiError && impact.error.status === 404) return <NotFound />;
-    return (
-      <Alert tone="error" title="The figures could not be loaded">
-        {impact.error.message} Try again in a moment.
-      </Alert>
-    );
-  }
-  const d = impact.data;
+function PublicFigures({ groupId }: { groupId?: number }) {
+  const { data: d } = usePublicImpact(groupId);
   const title = d.group ? `${d.group.name}${d.group.town ? `, ${d.group.town}` : ''}` : 'All groups on Mendery';
 
   return (

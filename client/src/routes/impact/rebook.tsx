@@ -1,9 +1,9 @@
 import { useState } from 'react';
-import { Link, useParams, type LoaderFunctionArgs } from 'react-router';
+import { Link, useParams, useRevalidator, useRouteError, type LoaderFunctionArgs } from 'react-router';
 import { formatDay, formatTime, formatTimeRange } from '../../../../shared/format';
 import { Button } from '../../components/ui/button';
 import { ConfirmDialog } from '../../components/ui/confirm-dialog';
-import { Alert, Card, EmptyState, PageTitle, Spinner } from '../../components/ui/feedback';
+import { Alert, Card, EmptyState, PageTitle } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
 import type { RebookView } from '../../features/impact/api/types';
 import { useBookReturn } from '../../features/impact/api/book-return';
@@ -17,45 +17,45 @@ type Chosen = { event: Session; slot: Session['slots'][number] };
 const itemName = (item: RebookView['item']) =>
   [item.categoryName, [item.brand, item.model].filter(Boolean).join(' ')].filter(Boolean).join(' — ');
 
-/** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
-export const loader = ({ params }: LoaderFunctionArgs) =>
-  queryClient.ensureQueryData(rebookQuery(params.token ?? '')).catch(() => null);
+/** The page reads what the loader fetched; a failure to fetch it is told by this module's `ErrorBoundary`. */
+export const loader = ({ params }: LoaderFunctionArgs) => queryClient.ensureQueryData(rebookQuery(params.token ?? ''));
+
+/** A link that does not work, in the visitor's words; anything else can be tried again. */
+export function ErrorBoundary() {
+  const err = useRouteError();
+  const revalidator = useRevalidator();
+  const notValid = err instanceof ApiError && (err.status === 404 || err.status === 400);
+  return (
+    <div className="mx-auto max-w-xl space-y-4">
+      <PageTitle title={notValid ? 'This link does not work' : 'Something went wrong'} />
+      {notValid ? (
+        <Alert tone="info" title="We could not find this re-booking link">
+          It may be incomplete: open it again from the mail we sent you, or copy the whole address. If it still does not
+          work, reply to that mail and the group will book you in.
+        </Alert>
+      ) : (
+        <>
+          <Alert tone="error" title="The page could not be loaded">
+            {err instanceof Error ? err.message : 'Try again in a moment.'}
+          </Alert>
+          <Button variant="secondary" busy={revalidator.state === 'loading'} onClick={() => revalidator.revalidate()}>
+            Try again
+          </Button>
+        </>
+      )}
+    </div>
+  );
+}
 
 /** The visitor's priority link after a visit that ended needing a part: pick a time to come back with it. */
 export function RebookPage() {
   const token = useParams().token ?? '';
-  const view = useRebook(token);
+  const { data: v } = useRebook(token);
   const book = useBookReturn(token);
   const [chosen, setChosen] = useState<Chosen | null>(null);
   const [when, setWhen] = useState('');
   const done = book.isSuccess ? book.data : null;
 
-  if (view.isPending) return <Spinner label="Opening your link…" />;
-  if (view.isError) {
-    const notValid = view.error instanceof ApiError && (view.error.status === 404 || view.error.status === 400);
-    return (
-      <div className="mx-auto max-w-xl space-y-4">
-        <PageTitle title={notValid ? 'This link does not work' : 'Something went wrong'} />
-        {notValid ? (
-          <Alert tone="info" title="We could not find this re-booking link">
-            It may be incomplete: open it again from the mail we sent you, or copy the whole address. If it still does
-            not work, reply to that mail and the group will book you in.
-          </Alert>
-        ) : (
-          <>
-            <Alert tone="error" title="The page could not be loaded">
-              {view.error.message}
-            </Alert>
-            <Button variant="secondary" onClick={() => view.refetch()}>
-              Try again
-            </Button>
-          </>
-        )}
-      </div>
-    );
-  }
-
-  const v = view.data;
   const tz = v.group.timeZone;
   const item = itemName(v.item);
 

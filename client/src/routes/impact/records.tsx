@@ -8,7 +8,7 @@ import {
   type Barrier,
   type Outcome,
 } from '../../../../shared/event-day/constants';
-import { Alert, EmptyState, PageTitle, Spinner } from '../../components/ui/feedback';
+import { EmptyState, PageTitle } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
 import { useCategoriesQuery } from '../../features/categories/api/get-categories';
 import type { RecordsFilter } from '../../../../shared/api/impact';
@@ -58,9 +58,9 @@ function useRecordsFilter(): RecordsFilter {
   return useMemo(() => recordsFilterOf(new URLSearchParams(key)), [key]);
 }
 
-/** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
+/** The page reads what the loader fetched; a failure to fetch it is the route's error, shown in the page frame. */
 export const loader = ({ request }: LoaderFunctionArgs) =>
-  queryClient.ensureQueryData(recordsQuery(recordsFilterOf(new URL(request.url).searchParams))).catch(() => null);
+  queryClient.ensureQueryData(recordsQuery(recordsFilterOf(new URL(request.url).searchParams)));
 
 const outcomeText = (o: Outcome | 'none') => (o === 'none' ? 'No outcome recorded' : OUTCOME_LABELS[o]);
 const itemLabel = (r: RecordRow) => [r.brand, r.model].filter(Boolean).join(' ');
@@ -68,10 +68,10 @@ const itemLabel = (r: RecordRow) => [r.brand, r.model].filter(Boolean).join(' ')
 /** The records behind a figure of the impact dashboard, 50 a page. */
 export function ImpactRecordsPage() {
   const filter = useRecordsFilter();
-  const records = useRecords(filter);
+  const { data: records } = useRecords(filter);
   const categories = useCategoriesQuery();
   const page = filter.page ?? 1;
-  const first = records.data?.records[0];
+  const first = records.records[0];
 
   const categoryName = filter.categoryId
     ? (categories.data?.find((c) => c.id === filter.categoryId)?.name ??
@@ -106,13 +106,9 @@ export function ImpactRecordsPage() {
 
       <section aria-label="Filter" className="mb-4 rounded-xl bg-white p-4 ring-1 ring-ink/5">
         <p className="text-sm" data-testid="records-filter">
-          {records.data ? (
-            <span className="font-bold">
-              {whole.format(records.data.total)} {records.data.total === 1 ? 'item' : 'items'}
-            </span>
-          ) : (
-            'Items'
-          )}
+          <span className="font-bold">
+            {whole.format(records.total)} {records.total === 1 ? 'item' : 'items'}
+          </span>
           {chips.length === 0 ? ' — every item checked in, all dates.' : ' matching:'}
         </p>
         {chips.length > 0 && (
@@ -136,13 +132,7 @@ export function ImpactRecordsPage() {
         )}
       </section>
 
-      {records.isPending ? (
-        <Spinner label="Loading the records…" />
-      ) : records.isError ? (
-        <Alert tone="error" title="The records could not be loaded">
-          {records.error.message}
-        </Alert>
-      ) : records.data.records.length === 0 ? (
+      {records.records.length === 0 ? (
         <EmptyState title={page > 1 ? 'No records on this page' : 'No records match'} icon="▤">
           {page > 1 ? (
             <Link to={atPage(1)} className="font-bold text-navy underline">
@@ -154,8 +144,8 @@ export function ImpactRecordsPage() {
         </EmptyState>
       ) : (
         <>
-          <RecordsTable rows={records.data.records} showGroup={!filter.groupId} />
-          <Pagination total={records.data.total} page={page} atPage={atPage} />
+          <RecordsTable rows={records.records} showGroup={!filter.groupId} />
+          <Pagination total={records.total} page={page} atPage={atPage} />
         </>
       )}
     </div>

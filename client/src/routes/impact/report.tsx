@@ -1,6 +1,6 @@
 import { Link, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { Button } from '../../components/ui/button';
-import { Alert, Spinner } from '../../components/ui/feedback';
+import type { EventReport } from '../../features/impact/api/types';
 import { paths } from '../../config/paths';
 import { eventReportQuery, useEventReport } from '../../features/impact/api/get-event-report';
 import { groupReportQuery, useGroupReport } from '../../features/impact/api/get-group-report';
@@ -10,7 +10,7 @@ import { ReportBody } from '../../features/impact/components/report-body';
 const PRINT_CSS = `@page { size: A4; margin: 14mm }
 @media print { html, body { margin: 0; padding: 0; background: #fff !important; } tfoot { display: table-row-group; } }`;
 
-/** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
+/** The page reads what the loader fetched; a failure to fetch it is the route's error. */
 export const loader = ({ params, request }: LoaderFunctionArgs) => {
   const search = new URL(request.url).searchParams;
   const warm = params.eventId
@@ -18,7 +18,7 @@ export const loader = ({ params, request }: LoaderFunctionArgs) => {
     : queryClient.ensureQueryData(
         groupReportQuery(Number(params.groupId), search.get('from') || undefined, search.get('to') || undefined),
       );
-  return warm.catch(() => null);
+  return warm;
 };
 
 /**
@@ -29,7 +29,7 @@ export function EventReportPage() {
   const eventId = Number(useParams().eventId);
   return (
     <ReportShell
-      report={useEventReport(eventId)}
+      report={useEventReport(eventId).data}
       back={{ to: paths.manageEvent(eventId), label: '← Back to the session' }}
     />
   );
@@ -41,22 +41,16 @@ export function GroupReportPage() {
   const [params] = useSearchParams();
   return (
     <ReportShell
-      report={useGroupReport(groupId, params.get('from') || undefined, params.get('to') || undefined)}
+      report={useGroupReport(groupId, params.get('from') || undefined, params.get('to') || undefined).data}
       back={{ to: paths.impact(groupId), label: '← Back to the impact page' }}
     />
   );
 }
 
-function ReportShell({
-  report,
-  back,
-}: {
-  report: ReturnType<typeof useEventReport>;
-  back: { to: string; label: string };
-}) {
+function ReportShell({ report, back }: { report: EventReport; back: { to: string; label: string } }) {
   return (
     <div className="min-h-dvh bg-neutral-200 text-ink print:min-h-0 print:bg-white">
-      <title>{report.data ? `Report · ${report.data.event.title}` : 'Report · Mendery'}</title>
+      <title>{`Report · ${report.event.title}`}</title>
       <style>{PRINT_CSS}</style>
 
       <div className="sticky top-0 z-10 border-b border-ink/10 bg-white shadow-sm print:hidden">
@@ -64,26 +58,12 @@ function ReportShell({
           <Link to={back.to} className="text-sm font-bold text-navy underline">
             {back.label}
           </Link>
-          <Button onClick={() => window.print()} disabled={!report.data}>
-            Print or save as PDF
-          </Button>
+          <Button onClick={() => window.print()}>Print or save as PDF</Button>
         </div>
       </div>
 
       <div className="px-2 py-6 sm:px-4 print:p-0">
-        {report.isPending ? (
-          <div className="mx-auto max-w-md rounded-xl bg-white px-6">
-            <Spinner label="Preparing the report…" />
-          </div>
-        ) : report.isError ? (
-          <div className="mx-auto max-w-xl">
-            <Alert tone="error" title="The report could not be loaded">
-              {report.error.message}
-            </Alert>
-          </div>
-        ) : (
-          <ReportBody r={report.data} />
-        )}
+        <ReportBody r={report} />
       </div>
     </div>
   );

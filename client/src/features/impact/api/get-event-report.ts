@@ -1,4 +1,4 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
 import type { EventReport } from './types';
 import { api } from '../../../lib/api';
 
@@ -9,4 +9,5 @@ export const getEventReport = (eventId: number) => api<EventReport>('GET', `/api
 export const eventReportQuery = (eventId: number) =>
   queryOptions({ queryKey: impactKeys.eventReport(eventId), queryFn: () => getEventReport(eventId) });
 
-export const useEventReport = (eventId: number) => useQuery(eventReportQuery(eventId));
+/** Read after the route's loader has the report, so the page renders with it from the start. */
+export const useEventReport = (eventId: number) => useSuspenseQuery(eventReportQuery(eventId));

@@ -1,4 +1,4 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
 import type { FollowUp } from './types';
 import { api } from '../../../lib/api';
 
@@ -9,4 +9,5 @@ export const getFollowUps = (groupId: number) => api<FollowUp[]>('GET', `/api/gr
 export const followUpsQuery = (groupId: number) =>
   queryOptions({ queryKey: impactKeys.followUps(groupId), queryFn: () => getFollowUps(groupId) });
 
-export const useFollowUps = (groupId: number) => useQuery(followUpsQuery(groupId));
+/** Read after the route's loader has the follow-ups list, so the page renders with it from the start. */
+export const useFollowUps = (groupId: number) => useSuspenseQuery(followUpsQuery(groupId));

@@ -1,4 +1,4 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
 import type { EventReport } from './types';
 import { api } from '../../../lib/api';
 import { queryString } from '../../../lib/query-string';
@@ -13,5 +13,6 @@ export const groupReportQuery = (groupId: number, from?: string, to?: string) =>
     queryFn: () => getGroupReport(groupId, from, to),
   });
 
+/** Read after the route's loader has the report, so the page renders with it from the start. */
 export const useGroupReport = (groupId: number, from?: string, to?: string) =>
-  useQuery(groupReportQuery(groupId, from, to));
+  useSuspenseQuery(groupReportQuery(groupId, from, to));

@@ -1,4 +1,4 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
 import type { PublicImpact } from './types';
 import { api } from '../../../lib/api';
 import { queryString } from '../../../lib/query-string';
@@ -10,4 +10,5 @@ export const getPublicImpact = (groupId?: number) =>
 export const publicImpactQuery = (groupId?: number) =>
   queryOptions({ queryKey: impactKeys.public(groupId), queryFn: () => getPublicImpact(groupId) });
 
-export const usePublicImpact = (groupId?: number) => useQuery(publicImpactQuery(groupId));
+/** Read after the route's loader has the figures, so the page renders with them from the start. */
+export const usePublicImpact = (groupId?: number) => useSuspenseQuery(publicImpactQuery(groupId));

@@ -1,4 +1,4 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
 import type { RebookView } from './types';
 import { api } from '../../../lib/api';
 
@@ -9,4 +9,5 @@ export const getRebook = (token: string) => api<RebookView>('GET', `/api/rebook/
 export const rebookQuery = (token: string) =>
   queryOptions({ queryKey: impactKeys.rebook(token), queryFn: () => getRebook(token) });
 
-export const useRebook = (token: string) => useQuery(rebookQuery(token));
+/** Read after the route's loader has the link's view, so the page renders with it from the start. */
+export const useRebook = (token: string) => useSuspenseQuery(rebookQuery(token));

@@ -1,4 +1,4 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
 import type { RecordsFilter } from '../../../../../shared/api/impact';
 import type { RecordsPage } from './types';
 import { api } from '../../../lib/api';
@@ -10,4 +10,5 @@ export const getRecords = (f: RecordsFilter) => api<RecordsPage>('GET', `/api/st
 export const recordsQuery = (f: RecordsFilter) =>
   queryOptions({ queryKey: impactKeys.records(f), queryFn: () => getRecords(f) });
 
-export const useRecords = (f: RecordsFilter) => useQuery(recordsQuery(f));
+/** Read after the route's loader has the records page, so the page renders with it from the start. */
+export const useRecords = (f: RecordsFilter) => useSuspenseQuery(recordsQuery(f));
