@@ -3,18 +3,23 @@ import { GroupTabs } from '../../components/layouts/group-tabs';
 import { PageTitle } from '../../components/ui/feedback';
 import { useGroupEvents } from '../../features/events/api/get-group-events';
 import { useGroupSettings } from '../../features/groups/api/get-group-settings';
+import { impactSettingsQuery } from '../../features/impact/api/get-impact-settings';
 import { methodQuery } from '../../features/impact/api/get-method';
 import { statsQuery } from '../../features/impact/api/get-stats';
-import { ImpactBody, statsFilterOf } from '../../features/impact/components/impact-body';
+import { datesInOrder, ImpactBody, statsFilterOf } from '../../features/impact/components/impact-body';
 import { queryClient } from '../../lib/query-client';
 import { DisplacementCard } from '../../features/impact/components/displacement-card';
 
-/** Warms the figures and the method; a failure is left for the page, which says what went wrong in its own words. */
+/**
+ * Fetches the figures (unless the dates are the wrong way round, which the page says itself), the method and, on the
+ * network page, the displacement setting; the page reads them, and a failure to fetch them is the route's error.
+ */
 export const loader = ({ params, request }: LoaderFunctionArgs) => {
   const filter = statsFilterOf(new URL(request.url).searchParams, params.groupId ? Number(params.groupId) : undefined);
   return Promise.all([
-    queryClient.ensureQueryData(statsQuery(filter)).catch(() => null),
-    queryClient.ensureQueryData(methodQuery()).catch(() => null),
+    datesInOrder(filter) ? queryClient.ensureQueryData(statsQuery(filter)) : null,
+    queryClient.ensureQueryData(methodQuery()),
+    params.groupId ? null : queryClient.ensureQueryData(impactSettingsQuery()),
   ]);
 };
 

@@ -1,4 +1,4 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
 import type { ImpactSettings } from './types';
 import { api } from '../../../lib/api';
 
@@ -9,4 +9,5 @@ export const getImpactSettings = () => api<ImpactSettings>('GET', `/api/admin/im
 export const impactSettingsQuery = () =>
   queryOptions({ queryKey: impactKeys.settings(), queryFn: () => getImpactSettings() });
 
-export const useImpactSettings = () => useQuery(impactSettingsQuery());
+/** Read after the route's loader has the setting, so the page renders with it from the start. */
+export const useImpactSettings = () => useSuspenseQuery(impactSettingsQuery());

@@ -1,4 +1,4 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
 import type { Method } from './types';
 import { api } from '../../../lib/api';
 import { impactKeys } from './keys';
@@ -9,4 +9,5 @@ export const getMethod = () => api<Method>('GET', '/api/stats/method');
 export const methodQuery = () =>
   queryOptions({ queryKey: impactKeys.method(), queryFn: getMethod, staleTime: 10 * 60_000 });
 
-export const useMethod = () => useQuery(methodQuery());
+/** Read after the route's loader has the method, so the page renders with it from the start. */
+export const useMethod = () => useSuspenseQuery(methodQuery());

@@ -1,4 +1,4 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
 import type { StatsFilter } from '../../../../../shared/api/impact';
 import type { Stats } from './types';
 import { api } from '../../../lib/api';
@@ -10,4 +10,5 @@ export const getStats = (f: StatsFilter) => api<Stats>('GET', `/api/stats${query
 export const statsQuery = (f: StatsFilter) =>
   queryOptions({ queryKey: impactKeys.stats(f), queryFn: () => getStats(f) });
 
-export const useStats = (f: StatsFilter) => useQuery(statsQuery(f));
+/** Read after the route's loader has the figures, so the page renders with it from the start. */
+export const useStats = (f: StatsFilter) => useSuspenseQuery(statsQuery(f));

@@ -1,13 +1,13 @@
 import { useState, type FormEvent } from 'react';
 import { Button } from '../../../components/ui/button';
-import { Alert, Card, Spinner } from '../../../components/ui/feedback';
+import { Alert, Card } from '../../../components/ui/feedback';
 import { TextField } from '../../../components/ui/field';
 import { useImpactSettings } from '../api/get-impact-settings';
 import { useSetImpactSettings } from '../api/set-impact-settings';
 import { ApiError } from '../../../lib/api';
 
 export function DisplacementCard() {
-  const settings = useImpactSettings();
+  const { data: settings } = useImpactSettings();
   return (
     <Card className="p-4 sm:p-5">
       <section aria-labelledby="displacement-heading">
@@ -18,15 +18,7 @@ export function DisplacementCard() {
           The share of repairs that really spare a purchase, between 0 and 1. It scales every emissions figure on
           Mendery, for every group.
         </p>
-        {settings.isPending ? (
-          <Spinner label="Loading the setting…" />
-        ) : settings.isError ? (
-          <Alert tone="error" title="The setting could not be loaded">
-            {settings.error.message}
-          </Alert>
-        ) : (
-          <DisplacementForm current={settings.data.displacement} />
-        )}
+        <DisplacementForm current={settings.displacement} />
       </section>
     </Card>
   );

@@ -2,7 +2,7 @@ import { useId, useMemo, useState } from 'react';
 import { Link, useSearchParams } from 'react-router';
 import { formatDay } from '../../../../../shared/format';
 import { Button } from '../../../components/ui/button';
-import { Alert, EmptyState, Spinner } from '../../../components/ui/feedback';
+import { Alert, EmptyState } from '../../../components/ui/feedback';
 import { SelectField, TextField } from '../../../components/ui/field';
 import { paths } from '../../../config/paths';
 import type { StatsFilter } from '../../../../../shared/api/impact';
@@ -23,6 +23,9 @@ export const statsFilterOf = (params: URLSearchParams, groupId?: number): StatsF
   from: isoDate(params.get('from')),
   to: isoDate(params.get('to')),
 });
+
+/** The server refuses an end date before the start date; the page says so instead of asking. */
+export const datesInOrder = (f: StatsFilter) => !(f.from && f.to && f.from > f.to);
 
 /** The dashboard's filter lives in the URL, so a view can be bookmarked or sent to a colleague. */
 function useUrlFilter(groupId?: number) {
@@ -61,9 +64,7 @@ export function ImpactBody({
   sessions?: SessionChoices;
 }) {
   const { filter, set, clear } = useUrlFilter(groupId);
-  const stats = useStats(filter);
-  const rangeError =
-    filter.from && filter.to && filter.from > filter.to ? 'The end date is before the start date.' : undefined;
+  const rangeError = datesInOrder(filter) ? undefined : 'The end date is before the start date.';
   const filtered = Boolean(filter.eventId || filter.from || filter.to);
 
   return (
@@ -102,24 +103,26 @@ export function ImpactBody({
         <Alert tone="error" title="Check the dates">
           {rangeError} Change one of them to see the figures.
         </Alert>
-      ) : stats.isPending ? (
-        <Spinner label="Counting the repairs…" />
-      ) : stats.isError ? (
-        <Alert tone="error" title="The figures could not be loaded">
-          {stats.error.message}
-        </Alert>
-      ) : stats.data.items === 0 ? (
-        <EmptyState title={filtered ? 'No items in this selection' : 'No items counted yet'} icon="▤">
-          {filtered
-            ? 'Nothing was checked in for these dates or this session. Widen the dates or clear the filters.'
-            : 'Figures appear here once items are checked in at a session and their outcomes recorded.'}
-        </EmptyState>
       ) : (
-        <Figures stats={stats.data} filter={filter} />
+        <FiguresFor filter={filter} filtered={filtered} />
       )}
 
       <MethodSection />
     </div>
+  );
+}
+
+/** The figures the route's loader fetched for this filter, or what to do when there are none. */
+function FiguresFor({ filter, filtered }: { filter: StatsFilter; filtered: boolean }) {
+  const { data: stats } = useStats(filter);
+  return stats.items === 0 ? (
+    <EmptyState title={filtered ? 'No items in this selection' : 'No items counted yet'} icon="▤">
+      {filtered
+        ? 'Nothing was checked in for these dates or this session. Widen the dates or clear the filters.'
+        : 'Figures appear here once items are checked in at a session and their outcomes recorded.'}
+    </EmptyState>
+  ) : (
+    <Figures stats={stats} filter={filter} />
   );
 }
 
