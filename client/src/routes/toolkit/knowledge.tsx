@@ -2,9 +2,10 @@ import { useState } from 'react';
 import { useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { formatDay } from '../../../../shared/format';
 import { Button } from '../../components/ui/button';
-import { Alert, EmptyState, PageTitle, Spinner } from '../../components/ui/feedback';
+import { EmptyState, PageTitle } from '../../components/ui/feedback';
 import { SelectField, TextField } from '../../components/ui/field';
 import { categoriesQuery, useCategories } from '../../features/categories/api/get-categories';
+import type { KnowledgeQuery } from '../../../../shared/api/toolkit';
 import type { KnowledgeEntry } from '../../features/toolkit/api/types';
 import { knowledgeQuery, useKnowledge } from '../../features/toolkit/api/get-knowledge';
 import { queryClient } from '../../lib/query-client';
@@ -22,6 +23,7 @@ const searchOf = (params: URLSearchParams) => {
   return { applied, searched: Boolean(applied.q || applied.categoryId || applied.brand || applied.model) };
 };
 
+/** The page reads what the loader fetched; a failure to fetch it is the route's error, shown in the page frame. */
 export const loader = ({ request }: LoaderFunctionArgs) => {
   const { applied, searched } = searchOf(new URL(request.url).searchParams);
   return Promise.all([
@@ -36,7 +38,6 @@ export function KnowledgePage() {
   const { data: categories } = useCategories();
   const { applied, searched } = searchOf(params);
   const [draft, setDraft] = useState(applied);
-  const results = useKnowledge(applied, searched);
   return (
     <div className="mx-auto max-w-3xl space-y-5">
       <PageTitle
@@ -104,30 +105,36 @@ export function KnowledgePage() {
         <EmptyState title="Search the repair notes" icon="⌕">
           Type a symptom, or choose the kind of item and its brand and model: exact matches come first.
         </EmptyState>
-      ) : results.isPending ? (
-        <Spinner label="Searching…" />
-      ) : results.error ? (
-        <Alert tone="error">{results.error.message}</Alert>
-      ) : results.data.length === 0 ? (
-        <EmptyState title="No notes match" icon="○">
-          Try fewer words, or the kind of item alone.
-        </EmptyState>
       ) : (
-        <>
-          <p className="text-sm text-ink-soft" role="status">
-            {results.data.length === 30
-              ? 'The 30 closest notes; narrow the search to see others.'
-              : `${results.data.length} ${results.data.length === 1 ? 'note' : 'notes'}, closest first.`}
-          </p>
-          <ol className="space-y-3" aria-label="Results">
-            {results.data.map((e: KnowledgeEntry) => (
-              <li key={e.itemId}>
-                <KnowledgeCard entry={e} when={formatDay(e.eventDate, 'Europe/London')} />
-              </li>
-            ))}
-          </ol>
-        </>
+        <KnowledgeResults search={applied} />
       )}
     </div>
+  );
+}
+
+/** The notes the route's loader found for the search in the address, closest first. */
+function KnowledgeResults({ search }: { search: KnowledgeQuery }) {
+  const { data: results } = useKnowledge(search);
+  if (results.length === 0)
+    return (
+      <EmptyState title="No notes match" icon="○">
+        Try fewer words, or the kind of item alone.
+      </EmptyState>
+    );
+  return (
+    <>
+      <p className="text-sm text-ink-soft" role="status">
+        {results.length === 30
+          ? 'The 30 closest notes; narrow the search to see others.'
+          : `${results.length} ${results.length === 1 ? 'note' : 'notes'}, closest first.`}
+      </p>
+      <ol className="space-y-3" aria-label="Results">
+        {results.map((e: KnowledgeEntry) => (
+          <li key={e.itemId}>
+            <KnowledgeCard entry={e} when={formatDay(e.eventDate, 'Europe/London')} />
+          </li>
+        ))}
+      </ol>
+    </>
   );
 }

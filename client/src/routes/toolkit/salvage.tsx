@@ -4,7 +4,7 @@ import { PART_TYPES, PART_TYPE_LABELS, type PartType } from '../../../../shared/
 import { GroupTabs } from '../../components/layouts/group-tabs';
 import { Button } from '../../components/ui/button';
 import { ConfirmDialog } from '../../components/ui/confirm-dialog';
-import { Alert, EmptyState, PageTitle, Spinner } from '../../components/ui/feedback';
+import { Alert, EmptyState, PageTitle } from '../../components/ui/feedback';
 import { SelectField, TextField } from '../../components/ui/field';
 import { useUser } from '../../lib/auth';
 import { queryClient } from '../../lib/query-client';
@@ -25,6 +25,7 @@ const filterOf = (params: URLSearchParams) => {
   return { type, q, filter: { type, q: q || undefined, inStock: params.get('all') ? undefined : ('1' as const) } };
 };
 
+/** The page reads what the loader fetched; a failure to fetch it is the route's error, shown in the page frame. */
 export const loader = ({ params, request }: LoaderFunctionArgs) =>
   queryClient.ensureQueryData(salvageQuery(Number(params.groupId), filterOf(new URL(request.url).searchParams).filter));
 
@@ -34,8 +35,10 @@ export function SalvagePage() {
   const { data: user } = useUser();
   const [params, setParams] = useSearchParams();
   const { type, q, filter } = filterOf(params);
-  const parts = useSalvage(groupId, filter);
+  const { data: parts } = useSalvage(groupId, filter);
   const [adding, setAdding] = useState(params.get('add') === '1');
+  // The field keeps what is typed: the address (and so `q`) changes only once the loader has the list for it.
+  const [typed, setTyped] = useState(q);
   const organiser = user?.admin || user?.roles.some((r) => r.groupId === groupId && r.role === 'organiser');
   return (
     <div className="space-y-5">
@@ -52,8 +55,9 @@ export function SalvagePage() {
         <div className="min-w-40 flex-1">
           <TextField
             label="Search"
-            value={q}
+            value={typed}
             onChange={(e) => {
+              setTyped(e.target.value);
               const n = new URLSearchParams(params);
               if (e.target.value) n.set('q', e.target.value);
               else n.delete('q');
@@ -104,23 +108,19 @@ export function SalvagePage() {
           onDone={() => setAdding(false)}
         />
       )}
-      {parts.isPending ? (
-        <Spinner />
-      ) : parts.error ? (
-        <Alert tone="error">{parts.error.message}</Alert>
-      ) : parts.data.length === 0 && (q || type) ? (
+      {parts.length === 0 && (q || type) ? (
         <EmptyState title="No parts match" icon="○">
           Nothing in the boxes matches {q ? `“${q}”` : 'that kind'}
           {params.get('all') ? '' : ' (used-up parts are hidden)'}.
         </EmptyState>
-      ) : parts.data.length === 0 ? (
+      ) : parts.length === 0 ? (
         <EmptyState title="No parts here yet" icon="▣">
           When an item reaches the end of its life, save its good parts here: fuses, switches, motors, capacitors,
           transistors.
         </EmptyState>
       ) : (
         <ul className="grid gap-3 md:grid-cols-2" aria-label="Parts">
-          {parts.data.map((p) => (
+          {parts.map((p) => (
             <li key={p.id}>
               <PartCard groupId={groupId} part={p} canRemove={Boolean(organiser)} />
             </li>

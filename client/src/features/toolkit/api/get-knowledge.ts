@@ -1,4 +1,4 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
 import type { KnowledgeQuery } from '../../../../../shared/api/toolkit';
 import type { KnowledgeEntry } from './types';
 import { api } from '../../../lib/api';
@@ -10,5 +10,5 @@ export const getKnowledge = (q: KnowledgeQuery) => api<KnowledgeEntry[]>('GET', 
 export const knowledgeQuery = (q: KnowledgeQuery) =>
   queryOptions({ queryKey: toolkitKeys.knowledge.search(q), queryFn: () => getKnowledge(q) });
 
-/** The search runs only once something is asked (`enabled`). */
-export const useKnowledge = (q: KnowledgeQuery, enabled = true) => useQuery({ ...knowledgeQuery(q), enabled });
+/** Read after the route's loader has searched, so the results render with the page. */
+export const useKnowledge = (q: KnowledgeQuery) => useSuspenseQuery(knowledgeQuery(q));

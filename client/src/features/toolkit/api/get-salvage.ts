@@ -1,4 +1,4 @@
-import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
+import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
 import type { SalvageFilter } from '../../../../../shared/api/toolkit';
 import type { SalvagePart } from './types';
 import { api } from '../../../lib/api';
@@ -11,6 +11,5 @@ export const getSalvage = (groupId: number, f: SalvageFilter) =>
 export const salvageQuery = (groupId: number, f: SalvageFilter) =>
   queryOptions({ queryKey: toolkitKeys.salvage.list(groupId, f), queryFn: () => getSalvage(groupId, f) });
 
-/** The list keeps showing while a typed search loads, so the search field never loses its place. */
-export const useSalvage = (groupId: number, f: SalvageFilter) =>
-  useQuery({ ...salvageQuery(groupId, f), placeholderData: keepPreviousData });
+/** Read after the route's loader has the list for these filters (it runs again when they change). */
+export const useSalvage = (groupId: number, f: SalvageFilter) => useSuspenseQuery(salvageQuery(groupId, f));
