@@ -1,3 +1,4 @@
+import { useSuspenseQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { OUTCOME_LABELS } from '../../../../shared/event-day/constants';
@@ -8,7 +9,7 @@ import { Button } from '../../components/ui/button';
 import { ConfirmDialog } from '../../components/ui/confirm-dialog';
 import { Alert, EmptyState } from '../../components/ui/feedback';
 import { TextAreaField } from '../../components/ui/field';
-import { useGroupSettings } from '../../features/groups/api/get-group-settings';
+import { groupSettingsQuery } from '../../features/groups/api/get-group-settings';
 import type { FollowUp } from '../../features/impact/api/types';
 import { followUpsQuery, useFollowUps } from '../../features/impact/api/get-follow-ups';
 import { queryClient } from '../../lib/query-client';
@@ -30,14 +31,18 @@ const CHIP: Record<FollowUpStatus, string> = {
   'gave-up': 'bg-ink/10 text-ink-soft',
 };
 
-const localZone = () => Intl.DateTimeFormat().resolvedOptions().timeZone;
 const shortDay = (d: string, timeZone: string) =>
   new Intl.DateTimeFormat('en-GB', { timeZone, day: 'numeric', month: 'short', year: 'numeric' }).format(new Date(d));
 const age = (days: number) => (days <= 0 ? 'today' : days === 1 ? '1 day ago' : `${days} days ago`);
 
 /** The page reads what the loader fetched; a failure to fetch it is the route's error, shown in the page frame. */
-export const loader = ({ params }: LoaderFunctionArgs) =>
-  queryClient.ensureQueryData(followUpsQuery(Number(params.groupId)));
+export const loader = ({ params }: LoaderFunctionArgs) => {
+  const groupId = Number(params.groupId);
+  return Promise.all([
+    queryClient.ensureQueryData(followUpsQuery(groupId)),
+    queryClient.ensureQueryData(groupSettingsQuery(groupId)),
+  ]);
+};
 
 /** Items that need a part, oldest first: who to chase, what they need, and the link that books them back in. */
 export function FollowUpsPage() {
@@ -45,12 +50,12 @@ export function FollowUpsPage() {
   const [params, setParams] = useSearchParams();
   const showAll = params.get('show') === 'all';
   const { data: followUps } = useFollowUps(groupId);
-  const group = useGroupSettings(groupId);
+  const { data: group } = useSuspenseQuery(groupSettingsQuery(groupId));
   const setStatus = useSetFollowUp(groupId);
   const [confirm, setConfirm] = useState<FollowUp | null>(null);
   const [note, setNote] = useState('');
   const [copied, setCopied] = useState<{ itemId: number; ok: boolean } | null>(null);
-  const tz = group.data?.timeZone ?? localZone();
+  const tz = group.timeZone;
 
   const show = (all: boolean) =>
     setParams(
@@ -89,7 +94,7 @@ export function FollowUpsPage() {
   return (
     <div>
       <div className="mb-2">
-        <h1 className="text-2xl sm:text-3xl">{group.data?.name ?? 'Parts follow-up'}</h1>
+        <h1 className="text-2xl sm:text-3xl">{group.name}</h1>
         <p className="mt-1 text-ink-soft">
           Items that went home needing a part. Visitors get a mail with the part and a link that books them back in
           ahead of the queue; after six weeks a reminder.

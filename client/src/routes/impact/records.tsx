@@ -10,7 +10,7 @@ import {
 } from '../../../../shared/event-day/constants';
 import { EmptyState, PageTitle } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
-import { useCategoriesQuery } from '../../features/categories/api/get-categories';
+import { categoriesQuery, useCategories } from '../../features/categories/api/get-categories';
 import type { RecordsFilter } from '../../../../shared/api/impact';
 import type { RecordRow } from '../../features/impact/api/types';
 import { recordsQuery, useRecords } from '../../features/impact/api/get-records';
@@ -60,7 +60,10 @@ function useRecordsFilter(): RecordsFilter {
 
 /** The page reads what the loader fetched; a failure to fetch it is the route's error, shown in the page frame. */
 export const loader = ({ request }: LoaderFunctionArgs) =>
-  queryClient.ensureQueryData(recordsQuery(recordsFilterOf(new URL(request.url).searchParams)));
+  Promise.all([
+    queryClient.ensureQueryData(recordsQuery(recordsFilterOf(new URL(request.url).searchParams))),
+    queryClient.ensureQueryData(categoriesQuery()),
+  ]);
 
 const outcomeText = (o: Outcome | 'none') => (o === 'none' ? 'No outcome recorded' : OUTCOME_LABELS[o]);
 const itemLabel = (r: RecordRow) => [r.brand, r.model].filter(Boolean).join(' ');
@@ -69,12 +72,12 @@ const itemLabel = (r: RecordRow) => [r.brand, r.model].filter(Boolean).join(' ')
 export function ImpactRecordsPage() {
   const filter = useRecordsFilter();
   const { data: records } = useRecords(filter);
-  const categories = useCategoriesQuery();
+  const { data: categories } = useCategories();
   const page = filter.page ?? 1;
   const first = records.records[0];
 
   const categoryName = filter.categoryId
-    ? (categories.data?.find((c) => c.id === filter.categoryId)?.name ??
+    ? (categories.find((c) => c.id === filter.categoryId)?.name ??
       (first?.categoryName || `category ${filter.categoryId}`))
     : undefined;
   const chips: { key: keyof RecordsFilter; label: string }[] = [];
