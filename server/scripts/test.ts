@@ -7,10 +7,50 @@ import { ensureMariadbInstalled, freePort, startPrivateMariadb } from '../src/in
 import { buildClientIfStale, root, step } from './local-stack';
 
 /**
- * `npm test`: a throwaway MariaDB in memory, the client build, then vitest (unit, API, browser).
- * Ends with the plain line `N passed, N failed[, N skipped]` counted from vitest's JSON report.
+ * `npm test`: typecheck, lint and format check (whole runs only), a throwaway MariaDB in memory, the client build, then vitest
+ * (unit, API, browser). Ends with the plain line `N passed, N failed[, N skipped]` counted from vitest's JSON report;
+ * a failing typecheck, lint or format check counts as one failed check each, so CI fails on them too.
  */
 const started = Date.now();
+const fileArgs = process.argv.slice(3);
+
+function runCheck(name: string, bin: string, args: string[]): Promise<boolean> {
+  step(name);
+  return new Promise((resolve) => {
+    const child = spawn(process.execPath, [path.join(root, bin), ...args], { cwd: root, stdio: 'inherit' });
+    child.on('exit', (c) => resolve(c === 0));
+  });
+}
+
+let staticFailures = 0;
+if (fileArgs.length === 0) {
+  if (
+    !(await runCheck('Typecheck (tsc --noEmit)', 'node_modules/typescript/bin/tsc', [
+      '--noEmit',
+      '-p',
+      'tsconfig.json',
+    ]))
+  )
+    staticFailures++;
+  if (
+    !(await runCheck('Lint (eslint --max-warnings 0)', 'node_modules/eslint/bin/eslint.js', [
+      '--max-warnings',
+      '0',
+      '.',
+    ]))
+  )
+    staticFailures++;
+  if (
+    !(await runCheck('Format (prettier --check)', 'node_modules/prettier/bin/prettier.cjs', [
+      '--check',
+      '--log-level',
+      'warn',
+      '.',
+    ]))
+  )
+    staticFailures++;
+  if (staticFailures) console.error(`✗ ${staticFailures} static check(s) failed; running the tests anyway`);
+}
 ensureMariadbInstalled(console.error);
 ensureDebianPackage('chromium', 'chromium', console.error);
 
@@ -45,7 +85,7 @@ try {
     '--reporter=default',
     '--reporter=json',
     `--outputFile.json=${report}`,
-    ...process.argv.slice(3),
+    ...fileArgs,
   ];
   step('Running vitest');
   code = await new Promise<number>((resolve) => {
@@ -66,14 +106,14 @@ try {
     const failedSuites = (r.testResults ?? []).filter(
       (s: { status: string; assertionResults: unknown[] }) => s.status === 'failed' && s.assertionResults.length === 0,
     ).length;
-    const failed = r.numFailedTests + failedSuites;
+    const failed = r.numFailedTests + failedSuites + staticFailures;
     const skipped = r.numPendingTests + r.numTodoTests;
     if (failed > 0) code = code || 1;
     if (r.numTotalTests === 0) code = code || 1;
     console.log(`\nfinished in ${((Date.now() - started) / 1000).toFixed(0)} s`);
     console.log(`${r.numPassedTests} passed, ${failed} failed${skipped ? `, ${skipped} skipped` : ''}`);
   } else {
-    console.log('0 passed, 1 failed');
+    console.log(`0 passed, ${1 + staticFailures} failed`);
     code = code || 1;
   }
 } catch (err) {

@@ -57,7 +57,6 @@ export const groupSchema = z.object({
   description: z.string().trim().max(2000).default(''),
 });
 
-
 export interface SessionUser {
   id: number;
   email: string;
