@@ -6,8 +6,7 @@ import { authKeys } from './keys';
 
 type FirstAdminInput = { name: string; email: string; password: string; confirm: string };
 
-const createFirstAdmin = (input: FirstAdminInput) =>
-  api<{ user: SessionUser }>('POST', '/api/auth/first-admin', input);
+const createFirstAdmin = (input: FirstAdminInput) => api<{ user: SessionUser }>('POST', '/api/auth/first-admin', input);
 
 export function useCreateFirstAdmin() {
   const qc = useQueryClient();

@@ -4,8 +4,7 @@ import { groupKeys } from './keys';
 
 type SettingsInput = { houseRules: string; excludedCategoryIds: number[] };
 
-const saveGroupSettings = (groupId: number, s: SettingsInput) =>
-  api('PUT', `/api/groups/${groupId}/settings`, s);
+const saveGroupSettings = (groupId: number, s: SettingsInput) => api('PUT', `/api/groups/${groupId}/settings`, s);
 
 /** `onSaved` lets the page refresh what other features show of the settings (the events' house rules). */
 export function useSaveGroupSettings(groupId: number, onSaved?: () => unknown) {
