@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { slotBookability } from '../../../../shared/booking/bookability';
 import { OUTCOME_LABELS } from '../../../../shared/event-day/constants';
-import { StatusChip } from '../../features/event-day/status-chip';
+import { StatusChip } from '../../features/event-day/components/status-chip';
 import { Link, useLocation, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { formatDay, formatTime, formatTimeRange, WHAT_TO_BRING } from '../../../../shared/format';
 import { Button } from '../../components/ui/button';

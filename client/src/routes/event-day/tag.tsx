@@ -4,7 +4,7 @@ import { paths } from '../../config/paths';
 import { useUser } from '../../lib/auth';
 import { publicTagQuery, usePublicTag } from '../../features/event-day/api/get-public-tag';
 import { queryClient } from '../../lib/query-client';
-import { StatusChip } from '../../features/event-day/status-chip';
+import { StatusChip } from '../../features/event-day/components/status-chip';
 
 /** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
 export const loader = ({ params }: LoaderFunctionArgs) =>

@@ -3,7 +3,7 @@ import { PageTitle } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
 import { useUser } from '../../lib/auth';
 import { queryClient } from '../../lib/query-client';
-import { StatusChip } from '../../features/event-day/status-chip';
+import { StatusChip } from '../../features/event-day/components/status-chip';
 import { myEventsQuery } from '../../features/rota/api/get-my-events';
 import { MySessions } from '../../features/rota/components/my-sessions';
 import { queueQuery } from '../../features/workbench/api/get-queue';

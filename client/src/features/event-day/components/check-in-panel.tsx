@@ -14,7 +14,7 @@ import { SelectField, TextField } from '../../../components/ui/field';
 import { ApiError } from '../../../lib/api';
 import { useCheckIn } from '../api/check-in';
 import type { DeskBooking, DeskView, IssuedItem } from '../api/types';
-import { StatusChip } from '../status-chip';
+import { StatusChip } from './status-chip';
 import { CategoryOptions, Refusal, screenAtDesk, type DeskScreening } from './desk-screening';
 import { IssuedTags } from './issued-tags';
 

@@ -8,7 +8,7 @@ import { Alert, Card, PageTitle } from '../../../components/ui/feedback';
 import { TextField } from '../../../components/ui/field';
 import { paths } from '../../../config/paths';
 import type { DeskBooking, DeskView } from '../api/types';
-import { QrScan } from '../qr-scan';
+import { QrScan } from './qr-scan';
 import { CheckInPanel } from './check-in-panel';
 import type { DeskScreening } from './desk-screening';
 import { DeskSlots } from './desk-slots';

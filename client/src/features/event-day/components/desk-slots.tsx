@@ -2,7 +2,7 @@ import { Link } from 'react-router';
 import { formatTimeRange } from '../../../../../shared/format';
 import { paths } from '../../../config/paths';
 import type { DeskBooking, DeskView } from '../api/types';
-import { StatusChip } from '../status-chip';
+import { StatusChip } from './status-chip';
 
 /** The day's bookings under their slot, the current slot marked; choosing one opens its check-in. */
 export function DeskSlots({

@@ -10,7 +10,7 @@ import { useUser } from '../../../lib/auth';
 import { photoUrl } from '../api/photo-url';
 import { useStartRepair } from '../api/start-repair';
 import type { ItemView } from '../api/types';
-import { StatusChip } from '../status-chip';
+import { StatusChip } from './status-chip';
 import { OutcomeForm } from './outcome-form';
 import { RepairPhotos } from './repair-photos';
 import { SafetySection } from './safety-section';

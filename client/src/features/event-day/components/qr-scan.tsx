@@ -1,5 +1,5 @@
 import { useEffect, useRef, useState } from 'react';
-import { Button } from '../../components/ui/button';
+import { Button } from '../../../components/ui/button';
 
 /**
  * The device camera reading a QR code (the qr-scanner package, loaded only when the desk opens the camera).

@@ -1,4 +1,4 @@
-import { ITEM_STATUS_LABELS, type ItemStatus } from '../../../../shared/event-day/constants';
+import { ITEM_STATUS_LABELS, type ItemStatus } from '../../../../../shared/event-day/constants';
 
 const STATUS_TONE: Record<ItemStatus, string> = {
   booked: 'bg-ink/5 text-ink-soft',
