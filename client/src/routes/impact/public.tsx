@@ -32,6 +32,7 @@ import {
   oneDp,
   whole,
 } from '../../features/impact/components/display';
+import { MethodNotes } from '../../features/impact/components/method-notes';
 
 /** The group of the address, when there is one; `valid` is false for an address no group can have. */
 const groupOf = (raw: string | undefined) => {
@@ -313,17 +314,7 @@ function MethodCard({ method }: { method: Method }) {
         <h2 id="method-heading" className="text-lg">
           How we count
         </h2>
-        <ul className="list-disc space-y-1 pl-5">
-          {method.text.map((line) => (
-            <li key={line}>{line}</li>
-          ))}
-        </ul>
-        <p>
-          <span className="font-bold">Displacement factor {method.displacement}.</span> {method.displacementNote}
-        </p>
-        <p>
-          <span className="font-bold">Emission factors:</span> {method.factorSource}
-        </p>
+        <MethodNotes method={method} />
         <p className="text-ink-soft">
           These figures are estimates. They count items, not people: nobody who brought an item is named here.
         </p>

@@ -1,6 +1,7 @@
 import { Card } from '../../../components/ui/feedback';
 import { useMethod } from '../api/get-method';
 import { FactorTable } from './display';
+import { MethodNotes } from './method-notes';
 
 export function MethodSection() {
   const { data: method } = useMethod();
@@ -11,17 +12,7 @@ export function MethodSection() {
           Method and sources
         </h2>
         <div className="mt-2 space-y-3 text-sm leading-relaxed">
-          <ul className="list-disc space-y-1 pl-5">
-            {method.text.map((line) => (
-              <li key={line}>{line}</li>
-            ))}
-          </ul>
-          <p>
-            <span className="font-bold">Displacement factor {method.displacement}.</span> {method.displacementNote}
-          </p>
-          <p>
-            <span className="font-bold">Emission factors:</span> {method.factorSource}
-          </p>
+          <MethodNotes method={method} />
           {method.categories.length > 0 && (
             <details>
               <summary className="min-h-11 cursor-pointer py-2 font-bold text-navy">

@@ -5,6 +5,7 @@ import { BARRIER_LABELS } from '../../../../../shared/event-day/constants';
 import { formatDay, formatTimeRange } from '../../../../../shared/format';
 import { EmptyState } from '../../../components/ui/feedback';
 import { CO2E, oneDp, percent, whole } from './display';
+import { MethodNotes } from './method-notes';
 
 const hoursFormat = new Intl.NumberFormat('en-GB', { maximumFractionDigits: 2 });
 
@@ -123,17 +124,7 @@ export function ReportBody({ r }: { r: EventReport }) {
 
       <Block title="Method and sources" long>
         <div className="space-y-2 text-sm leading-relaxed">
-          <ul className="list-disc space-y-1 pl-5">
-            {method.text.map((line) => (
-              <li key={line}>{line}</li>
-            ))}
-          </ul>
-          <p>
-            <span className="font-bold">Displacement factor {method.displacement}.</span> {method.displacementNote}
-          </p>
-          <p>
-            <span className="font-bold">Emission factors:</span> {method.factorSource}
-          </p>
+          <MethodNotes method={method} />
           {methodCategories.length > 0 && (
             <table className="mt-2 w-full text-xs">
               <thead>
