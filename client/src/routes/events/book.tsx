@@ -24,6 +24,9 @@ import type { EventDetail } from '../../../../shared/api/events';
 import { queryClient } from '../../lib/query-client';
 import { ApiError } from '../../lib/api';
 import { applyServerErrors, useZodForm } from '../../lib/form';
+import { CheckGroup } from '../../components/ui/check-group';
+
+const HAZARD_QUESTIONS = HAZARDS.map((h) => ({ value: h, label: HAZARD_REFUSALS[h].question }));
 
 const emptyItem = { categoryId: '' as unknown as number, brand: '', model: '', fault: '', hazards: [] as never[] };
 // Warms the cache; a failure is left to the page's own message.
@@ -314,20 +317,11 @@ function BookingForm({ event, categories }: { event: EventDetail; categories: Ca
                     Has a battery
                   </label>
                 </div>
-                <fieldset className="rounded-lg bg-paper p-3">
-                  <legend className="px-1 text-sm font-bold">Safety questions: tick any that apply</legend>
-                  {HAZARDS.map((h) => (
-                    <label key={h} className="flex items-start gap-2 py-1 text-sm">
-                      <input
-                        type="checkbox"
-                        value={h}
-                        className="mt-0.5 size-5 accent-alert"
-                        {...form.register(`items.${i}.hazards`)}
-                      />
-                      {HAZARD_REFUSALS[h].question}
-                    </label>
-                  ))}
-                </fieldset>
+                <CheckGroup
+                  legend="Safety questions: tick any that apply"
+                  options={HAZARD_QUESTIONS}
+                  field={form.register(`items.${i}.hazards`)}
+                />
                 {(hazards as string[]).length > 0 && (
                   <Alert tone="error" title="Please do not bring it">
                     {(hazards as (typeof HAZARDS)[number][])

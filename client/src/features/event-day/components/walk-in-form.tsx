@@ -12,6 +12,9 @@ import { useAddWalkIn } from '../api/add-walk-in';
 import type { DeskView, IssuedItem } from '../api/types';
 import { CategoryOptions, Refusal, screenAtDesk, type DeskScreening } from './desk-screening';
 import { IssuedTags } from './issued-tags';
+import { CheckGroup } from '../../../components/ui/check-group';
+
+const HAZARD_QUESTIONS = HAZARDS.map((h) => ({ value: h, label: HAZARD_REFUSALS[h].question }));
 
 /** A walk-in: the same item questions as booking, fast, with the house rules accepted by a tick and a typed name. */
 export function WalkInForm({
@@ -128,20 +131,11 @@ export function WalkInForm({
                 (errs.items?.[n] as { hazards?: { message?: string } } | undefined)?.hazards?.message
               }
             />
-            <fieldset className="rounded-lg bg-paper p-3">
-              <legend className="px-1 text-sm font-bold">Safety questions: tick any that apply</legend>
-              {HAZARDS.map((h) => (
-                <label key={h} className="flex items-start gap-2 py-1 text-sm">
-                  <input
-                    type="checkbox"
-                    value={h}
-                    className="mt-0.5 size-5 accent-alert"
-                    {...form.register(`items.${n}.hazards`)}
-                  />
-                  {HAZARD_REFUSALS[h].question}
-                </label>
-              ))}
-            </fieldset>
+            <CheckGroup
+              legend="Safety questions: tick any that apply"
+              options={HAZARD_QUESTIONS}
+              field={form.register(`items.${n}.hazards`)}
+            />
             {screened[n] && <Refusal result={screened[n]} />}
             {items.fields.length > 1 && (
               <Button type="button" variant="quiet" onClick={() => items.remove(n)}>
