@@ -29,7 +29,8 @@ export function confirmationMail(f: BookingMailFacts, qrText: string) {
   const mail = composeMail(f.visitorEmail, `Booked: ${f.eventTitle} — ${f.reference}`, {
     paragraphs: [
       `Hello ${f.visitorName},`,
-      `your place at ${f.eventTitle} (${f.groupName}) is booked. Your booking reference is ${f.reference}: show it, or the QR code in this mail, at the reception desk.`,
+      `your place at ${f.eventTitle} (${f.groupName}) is booked. Your booking reference is ${f.reference}. At the reception desk, show the reference or your QR code.`,
+      'Your QR code is always on your booking page (the link below). It is in this mail as a picture too, if your mail program shows pictures.',
       `When: ${when(f)}.`,
       `Where: ${where(f)}.`,
       `You are bringing: ${f.items.join('; ')}.`,
@@ -37,7 +38,7 @@ export function confirmationMail(f: BookingMailFacts, qrText: string) {
       ...DISCLAIMER,
     ],
     image: { cid: 'booking-qr', alt: `Booking ${f.reference}` },
-    action: { label: 'View, move or cancel my booking', url: f.manageUrl },
+    action: { label: 'My booking page: QR code, move or cancel', url: f.manageUrl },
     footnote: 'Keep this mail: the link is the only way to change the booking without calling the group.',
   });
   mail.attachments = [{ filename: `booking-${f.reference}.png`, cid: 'booking-qr', contentType: 'image/png', qrText }];
