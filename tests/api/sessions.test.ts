@@ -38,7 +38,9 @@ describe('sessions stored in MariaDB', () => {
       const a = new Agent(one.url);
       await a.login(u.email, u.password);
       a.base = two.url;
-      expect((await a.get('/api/auth/me')).status).toBe(200);
+      const me = await a.get('/api/auth/me');
+      expect(me.status).toBe(200);
+      expect(me.json.user.email).toBe(u.email);
     } finally {
       await Promise.all([one.stop(), two.stop()]);
     }
@@ -55,10 +57,15 @@ describe('sessions stored in MariaDB', () => {
       await idle.login(u.email, u.password);
       for (let i = 0; i < 4; i++) {
         await new Promise((r) => setTimeout(r, 1000));
-        expect((await active.get('/api/auth/me')).status).toBe(200);
+        const me = await active.get('/api/auth/me');
+        expect(me.status).toBe(200);
+        expect(me.json.user.email).toBe(u.email);
       }
       // Over 4 s have passed: longer than the timeout for the idle one, about 1 s at a time for the active one.
-      expect((await idle.get('/api/auth/me')).status).toBe(401);
+      // Signed out is not an error: /auth/me answers 200 with no user (issue 12).
+      const idleMe = await idle.get('/api/auth/me');
+      expect(idleMe.status).toBe(200);
+      expect(idleMe.json.user).toBeNull();
     } finally {
       await server.stop();
     }

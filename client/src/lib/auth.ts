@@ -1,21 +1,15 @@
 import { queryOptions, useQuery, useSuspenseQuery } from '@tanstack/react-query';
 import type { GroupRole } from '../../../shared/constants';
 import type { SessionUser } from '../../../shared/schemas/auth';
-import { api, ApiError } from './api';
+import { api } from './api';
 
 /** The signed-in person: every feature and the shell read it, so it lives below them all. */
 export const userKeys = { me: ['auth', 'me'] as const };
 
 export const meQuery = queryOptions({
   queryKey: userKeys.me,
-  queryFn: async (): Promise<SessionUser | null> => {
-    try {
-      return (await api<{ user: SessionUser }>('GET', '/api/auth/me')).user;
-    } catch (err) {
-      if (err instanceof ApiError && err.status === 401) return null;
-      throw err;
-    }
-  },
+  queryFn: async (): Promise<SessionUser | null> =>
+    (await api<{ user: SessionUser | null }>('GET', '/api/auth/me')).user,
   staleTime: 60_000,
 });
 

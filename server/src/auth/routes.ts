@@ -12,7 +12,6 @@ import type { AppContext } from '../context';
 import { HttpError } from '../http/errors';
 import { MariadbRateLimitStore } from '../http/rate-limit-store';
 import { body } from '../http/validate';
-import { unauthenticated } from './guards';
 import * as auth from './service';
 import { loadSessionUser } from './queries';
 
@@ -88,9 +87,9 @@ export function authRoutes(ctx: AppContext, csrfToken: (req: Request) => string)
     res.json({ user: await signIn(req, ctx, userId) });
   });
 
+  // Signed out is an answer, not an error: a 401 here would log in every anonymous visitor's console.
   r.get('/me', (req, res) => {
-    if (!req.user) throw unauthenticated();
-    res.json({ user: req.user });
+    res.json({ user: req.user ?? null });
   });
 
   r.post('/logout', (req, res, next) => {
