@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import { Link, NavLink, Outlet, useNavigate, useNavigation } from 'react-router';
 import { paths } from '../config/paths';
 import { groupsWithRole, useUser } from '../lib/auth';
@@ -13,6 +13,17 @@ export function AppShell() {
   const signOut = useSignOut();
   const navigate = useNavigate();
   const [open, setOpen] = useState(false);
+  const menuButton = useRef<HTMLButtonElement>(null);
+  useEffect(() => {
+    if (!open) return;
+    const closeOnEscape = (e: KeyboardEvent) => {
+      if (e.key !== 'Escape') return;
+      setOpen(false);
+      menuButton.current?.focus();
+    };
+    document.addEventListener('keydown', closeOnEscape);
+    return () => document.removeEventListener('keydown', closeOnEscape);
+  }, [open]);
   const loading = useNavigation().state === 'loading';
 
   const links: { to: string; label: string; end?: boolean }[] = [{ to: paths.events(), label: 'Sessions', end: true }];
@@ -55,6 +66,7 @@ export function AppShell() {
             <Logo />
           </Link>
           <button
+            ref={menuButton}
             className="rounded-lg p-2 text-navy ring-1 ring-navy/20 md:hidden"
             aria-expanded={open}
             aria-controls="main-nav"
