@@ -19,6 +19,7 @@ import { uploadPhotos } from '../../features/bookings/api/upload-photos';
 import { eventKeys } from '../../features/events/api/keys';
 import { useCategoriesQuery, categoriesQuery } from '../../features/categories/api/get-categories';
 import { useEvent, eventQuery } from '../../features/events/api/get-event';
+import { SessionMissing } from '../../features/events/components/session-missing';
 import type { Category } from '../../../../shared/api/categories';
 import type { EventDetail } from '../../../../shared/api/events';
 import { queryClient } from '../../lib/query-client';
@@ -41,12 +42,7 @@ export function BookingPage() {
   const event = useEvent(id);
   const categories = useCategoriesQuery();
   if (event.isPending || categories.isPending) return <Spinner label="Loading the booking form…" />;
-  if (event.error)
-    return (
-      <Alert tone="error" title="Session not found">
-        {event.error.message}
-      </Alert>
-    );
+  if (event.error) return <SessionMissing error={event.error} />;
   if (categories.error) return <Alert tone="error">{categories.error.message}</Alert>;
   if (event.data.status !== 'published')
     return (

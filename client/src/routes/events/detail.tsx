@@ -8,6 +8,7 @@ import { useUser } from '../../lib/auth';
 import { useCategoriesQuery, categoriesQuery } from '../../features/categories/api/get-categories';
 import { useEvent, eventQuery } from '../../features/events/api/get-event';
 import { PlacesBar, StatusBadge } from '../../features/events/components/places-bar';
+import { SessionMissing } from '../../features/events/components/session-missing';
 import { queryClient } from '../../lib/query-client';
 
 /** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
@@ -23,12 +24,7 @@ export function EventPage() {
   const categories = useCategoriesQuery();
   const { data: user } = useUser();
   if (event.isPending) return <Spinner label="Loading the session…" />;
-  if (event.error)
-    return (
-      <Alert tone="error" title="Session not found">
-        {event.error.message}
-      </Alert>
-    );
+  if (event.error) return <SessionMissing error={event.error} />;
   const e = event.data;
   const tz = e.timeZone;
   const excluded = new Set(e.excludedCategoryIds);

@@ -62,7 +62,7 @@ export async function createEvent(ctx: AppContext, input: z.output<typeof create
 export async function updateEvent(ctx: AppContext, id: number, input: z.output<typeof updateEventSchema>) {
   await ctx.database.db.transaction(async (tx) => {
     const e = await lockEvent(tx, id);
-    if (!e) throw notFound('That event');
+    if (!e) throw notFound('That session');
     const changesTimes = ['startsAt', 'endsAt', 'slotMinutes', 'slotCapacity', 'venueId', 'skillLimits'].some(
       (k) => k in input,
     );
@@ -96,7 +96,7 @@ export async function updateEvent(ctx: AppContext, id: number, input: z.output<t
 
 async function lockDraftSlot(tx: Tx, eventId: number, slotId: number) {
   const e = await lockEvent(tx, eventId);
-  if (!e) throw notFound('That event');
+  if (!e) throw notFound('That session');
   if (e.status !== 'draft') throw conflict('not-draft', 'Slots can only be adjusted before the event is published.');
   const s = await slotOfEvent(tx, eventId, slotId);
   if (!s) throw notFound('That slot');
@@ -130,7 +130,7 @@ export async function changeStatus(ctx: AppContext, id: number, action: keyof ty
   const t = transitions[action];
   await ctx.database.db.transaction(async (tx) => {
     const e = await lockEvent(tx, id);
-    if (!e) throw notFound('That event');
+    if (!e) throw notFound('That session');
     if (!t.from.includes(e.status)) throw conflict('bad-transition', `A ${e.status} event cannot be ${t.to}.`);
     if (action === 'publish') {
       const s = await slotsOfEvent(tx, id);
@@ -174,7 +174,7 @@ export async function changeStatus(ctx: AppContext, id: number, action: keyof ty
 export async function getEvent(ctx: AppContext, id: number, opts: { includeDrafts: boolean }) {
   const { db } = ctx.database;
   const e = await eventWithGroupAndVenue(db, id);
-  if (!e || (!opts.includeDrafts && e.status === 'draft')) throw notFound('That event');
+  if (!e || (!opts.includeDrafts && e.status === 'draft')) throw notFound('That session');
   const rows = await slotsOfEvent(db, id);
   const counts = await skillCountsOf(
     db,
