@@ -10,6 +10,11 @@ export interface BookingCreated {
   slotId: number;
   itemIds: number[];
 }
+/** The page behind a booking's QR code: whether the reference stands, and nothing about the visitor. */
+export interface BookingCodeStatus {
+  reference: string;
+  status: 'confirmed' | 'cancelled';
+}
 export interface BookingView {
   reference: string;
   status: 'confirmed' | 'cancelled';

@@ -142,6 +142,7 @@ const table: Row[] = [
   ['PUT', (g) => `/api/groups/${g.own}/knowledge-sharing`, ownOrganiser, { share: false }],
   ['GET', (g) => `/api/public/impact?groupId=${g.own}`, everyone(200)],
   ['GET', () => '/api/public/impact', everyone(200)],
+  ['GET', () => '/api/public/bookings/ZZZ-ZZZ', everyone(404)],
   ['GET', () => '/api/stats/method', everyone(200)],
   ['GET', () => '/api/admin/impact-settings', adminOnly],
   ['PUT', () => '/api/admin/impact-settings', { ...adminOnly, admin: 400 }, { displacement: 2 }],

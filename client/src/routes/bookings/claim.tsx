@@ -1,15 +1,20 @@
-import { useNavigate, useParams, type LoaderFunctionArgs } from 'react-router';
+import { Link, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router';
 import { formatDay, formatTimeRange } from '../../../../shared/format';
 import { Button } from '../../components/ui/button';
 import { Alert, Card, Spinner } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
 import { useClaimOffer } from '../../features/bookings/api/claim-offer';
 import { useOffer, offerQuery } from '../../features/bookings/api/get-offer';
+import { useBookingCode, bookingCodeQuery } from '../../features/bookings/api/get-booking-code';
 import { queryClient } from '../../lib/query-client';
 
-/** Warms the offer (the booking-code page in this module reads nothing); a failure is left for the page. */
+/** Warms the offer or the booking code's status, whichever page this is; a failure is left for the page. */
 export const loader = ({ params }: LoaderFunctionArgs) =>
-  params.token ? queryClient.ensureQueryData(offerQuery(params.token)).catch(() => null) : null;
+  params.token
+    ? queryClient.ensureQueryData(offerQuery(params.token)).catch(() => null)
+    : params.reference
+      ? queryClient.ensureQueryData(bookingCodeQuery(params.reference)).catch(() => null)
+      : null;
 
 /** The link in a waiting-list offer: one button turns the held place into a booking. */
 export function ClaimOfferPage() {
@@ -72,10 +77,49 @@ export function ClaimOfferPage() {
 /** Where a booking's QR code leads someone who is not at the desk. */
 export function BookingCodePage() {
   const reference = useParams().reference ?? '';
+  const code = useBookingCode(reference);
+  if (code.isPending) return <Spinner />;
+  const sessionsLink = (
+    <Link to={paths.events()} className="font-bold underline">
+      See the sessions
+    </Link>
+  );
+  if (code.error) {
+    const missing = (code.error as Error & { status?: number }).status === 404;
+    return (
+      <div className="mx-auto max-w-md">
+        <Alert tone="error" title={missing ? 'Booking not found' : 'The booking could not be loaded'}>
+          <p>
+            {missing ? (
+              <>
+                There is no booking with the reference <span className="font-mono font-bold">{reference}</span>. Check
+                the reference in your confirmation mail.
+              </>
+            ) : (
+              code.error.message
+            )}
+          </p>
+          <p className="mt-2">{sessionsLink}</p>
+        </Alert>
+      </div>
+    );
+  }
+  if (code.data.status === 'cancelled')
+    return (
+      <div className="mx-auto max-w-md">
+        <Alert tone="info" title="This booking is cancelled">
+          <p>
+            Booking <span className="font-mono font-bold">{code.data.reference}</span> was cancelled, so there is
+            nothing to show at the reception desk. To bring something to a session, book a new slot.
+          </p>
+          <p className="mt-2">{sessionsLink}</p>
+        </Alert>
+      </div>
+    );
   return (
     <Card className="mx-auto max-w-md text-center">
       <p className="text-sm font-semibold text-ink-soft">Booking reference</p>
-      <p className="font-mono text-4xl font-extrabold tracking-widest text-navy">{reference}</p>
+      <p className="font-mono text-4xl font-extrabold tracking-widest text-navy">{code.data.reference}</p>
       <p className="mt-3 text-ink-soft">
         Show this code at the reception desk when you arrive. To change the booking, use the link in your confirmation
         mail.

@@ -57,6 +57,11 @@ export function bookingRoutes(ctx: AppContext) {
     res.json(await booking.bookingView(ctx, b.id));
   });
 
+  r.get('/public/bookings/:reference', async (req, res) => {
+    res.setHeader('Cache-Control', 'no-store');
+    res.json(await booking.bookingCodeStatus(ctx, reference(req)));
+  });
+
   r.delete('/bookings/:reference', async (req, res) => {
     const b = await byToken(req);
     await booking.cancelBooking(ctx, b.id);

@@ -1,5 +1,6 @@
 import { timingSafeEqual } from 'node:crypto';
 import type { AppContext } from '../../context';
+import type { BookingCodeStatus } from '../../../../shared/api/bookings';
 import type { Tx } from '../../db/client';
 import { isDuplicate, withDeadlockRetry } from '../../db/retry';
 import { sha256 } from '../../auth/tokens';
@@ -115,6 +116,13 @@ export async function bookingByToken(ctx: AppContext, reference: string, token: 
   const c = Buffer.from(sha256(token), 'hex');
   if (a.length !== c.length || !timingSafeEqual(a, c)) throw notFound('That booking');
   return b;
+}
+
+/** What the page behind a booking's QR code may say to anyone holding it: the reference and whether it stands. */
+export async function bookingCodeStatus(ctx: AppContext, reference: string): Promise<BookingCodeStatus> {
+  const b = await bookingByReference(ctx.database.db, reference);
+  if (!b) throw notFound('That booking');
+  return { reference: b.reference, status: b.status };
 }
 
 export async function bookingView(ctx: AppContext, bookingId: number) {
