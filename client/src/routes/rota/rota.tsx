@@ -34,7 +34,7 @@ export function RotaPage() {
       <h1 className="text-2xl sm:text-3xl">{event.title}</h1>
       <p className="mb-3 font-bold text-copper-dark">Rota · {formatTimeRange(event.startsAt, event.endsAt, tz)}</p>
       <EventTabs eventId={id} />
-      <div className="grid gap-4 lg:grid-cols-[1fr_20rem]">
+      <div className="grid grid-cols-[minmax(0,1fr)] gap-4 lg:grid-cols-[minmax(0,1fr)_20rem]">
         <SkillCoverChart rota={rota} timeZone={tz} />
         <RotaGaps eventId={id} gaps={rota.gaps} timeZone={tz} />
       </div>

@@ -18,7 +18,7 @@ export function SkillCoverChart({ rota, timeZone }: { rota: Rota; timeZone: stri
         <table className="text-center text-xs" aria-label="Skill cover by slot">
           <thead>
             <tr>
-              <th className="sticky left-0 bg-white px-2 py-1 text-left">Skill</th>
+              <th className="sticky left-0 bg-white py-1 pl-0 pr-1 text-left sm:px-2">Skill</th>
               {rota.slots.map((s) => (
                 <th key={s.id} className="px-1 py-1 font-bold">
                   {formatTime(s.startsAt, timeZone)}
@@ -29,14 +29,16 @@ export function SkillCoverChart({ rota, timeZone }: { rota: Rota; timeZone: stri
           <tbody>
             {shown.map((skill) => (
               <tr key={skill}>
-                <th className="sticky left-0 bg-white px-2 py-1 text-left font-semibold">{SKILL_LABELS[skill]}</th>
+                <th className="sticky left-0 bg-white py-1 pl-0 pr-1 text-left sm:px-2 font-semibold">
+                  {SKILL_LABELS[skill]}
+                </th>
                 {rota.slots.map((s, i) => {
                   const have = rota.coverage[i].bySkill[skill];
                   const need = s.demand[skill];
                   return (
                     <td
                       key={s.id}
-                      className={`h-9 min-w-12 border border-white px-1 font-bold ${coverTone(have, need)}`}
+                      className={`h-9 min-w-10 border border-white px-0.5 font-bold sm:min-w-12 sm:px-1 ${coverTone(have, need)}`}
                       title={`${have} fixer(s), ${need} item(s)`}
                     >
                       {have}/{need}
@@ -46,7 +48,7 @@ export function SkillCoverChart({ rota, timeZone }: { rota: Rota; timeZone: stri
               </tr>
             ))}
             <tr>
-              <th className="sticky left-0 bg-white px-2 py-1 text-left">All fixers</th>
+              <th className="sticky left-0 bg-white py-1 pl-0 pr-1 text-left sm:px-2">All fixers</th>
               {rota.coverage.map((c, i) => (
                 <td key={i} className="font-bold">
                   {c.fixers}
