@@ -4,7 +4,8 @@ import type { ComponentProps } from 'react';
 
 /**
  * A month grid in Mendery's settings: weeks from Monday, 24-hour times, text arrows instead of an icon font,
- * events as coloured blocks with a short line of their own (time, and what `detail` says) that fits a phone.
+ * events as coloured blocks with a short line of their own (time, and what `detail` says). On a phone a day is
+ * about 45 px wide, so an event shows its time alone and the rest is read out, not cut off.
  */
 export function MonthCalendar({
   events,
@@ -27,15 +28,23 @@ export function MonthCalendar({
       buttonIcons={false}
       buttonText={{ prev: '‹', next: '›', today: 'Today' }}
       buttonHints={{ prev: 'Previous month', next: 'Next month', today: 'This month' }}
+      viewDidMount={({ el }) => {
+        // The arrows are text, so their hint would only be a tooltip: give it to screen readers as the name too.
+        el.closest('.fc')
+          ?.querySelectorAll('.fc-prev-button, .fc-next-button')
+          .forEach((b) => b.setAttribute('aria-label', b.getAttribute('title') ?? ''));
+      }}
       eventDisplay="block"
       dayMaxEvents={3}
+      moreLinkText={(n) => `+${n}`}
+      moreLinkHint={(n) => `${n} more on this day`}
       events={events}
       eventTimeFormat={{ hour: '2-digit', minute: '2-digit', hour12: false }}
       eventContent={(arg) => (
-        <div className="overflow-hidden px-0.5 text-xs leading-tight text-white">
-          <span className="font-bold">{arg.timeText}</span>
-          <span className="hidden sm:inline"> {arg.event.title}</span>
-          {detail && <span className="block">{detail(arg.event.extendedProps)}</span>}
+        <div className="overflow-hidden text-center text-xs leading-tight text-white sm:px-0.5 sm:text-left">
+          <span className="font-bold">{arg.timeText}</span>{' '}
+          <span className="sr-only sm:not-sr-only">{arg.event.title}</span>
+          {detail && <span className="sr-only sm:not-sr-only sm:block">{detail(arg.event.extendedProps)}</span>}
         </div>
       )}
       eventClick={(info) => {

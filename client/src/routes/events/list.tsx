@@ -97,7 +97,7 @@ export function EventsPage() {
         </Alert>
       )}
       {events.data && view === 'calendar' && (
-        <Card className="mendery-calendar">
+        <Card flush className="mendery-calendar p-3 sm:p-5">
           <MonthCalendar
             today
             events={events.data.map((e) => ({

@@ -29,7 +29,7 @@ export function MySessions() {
       )}
       <ShiftAnswers events={events} />
       {coming.length > 0 && (
-        <Card className="mendery-calendar">
+        <Card flush className="mendery-calendar p-3 sm:p-5">
           <h3 className="mb-2 text-lg">My shifts</h3>
           <MonthCalendar
             events={coming.map((e) => ({
