@@ -115,6 +115,10 @@ export function SalvageForItem({ item, onChanged }: { item: ToolkitItem; onChang
   const take = useTakePart(groupId, item.id, onChanged);
   const [adding, setAdding] = useState(false);
   const [lookupErrors, setLookupErrors] = useState<Record<string, string>>({});
+  const canLookUp = item.status !== 'done' || item.outcome?.outcome === 'parts-needed';
+  const endOfLife = item.outcome?.outcome === 'end-of-life';
+  // Once the outcome is in, a card with no part taken and nothing to save would be a heading alone.
+  if (!canLookUp && !endOfLife && item.partsUsed.length === 0) return null;
   return (
     <Card>
       <h2 className="text-lg">Salvage stock</h2>
@@ -129,7 +133,7 @@ export function SalvageForItem({ item, onChanged }: { item: ToolkitItem; onChang
           ))}
         </ul>
       )}
-      {item.status === 'done' && item.outcome?.outcome !== 'parts-needed' ? null : (
+      {canLookUp && (
         <form
           className="space-y-3"
           aria-label="Find a substitute"
@@ -233,7 +237,7 @@ export function SalvageForItem({ item, onChanged }: { item: ToolkitItem; onChang
           <Alert tone="error">{take.error.message}</Alert>
         </div>
       )}
-      {item.outcome?.outcome === 'end-of-life' && (
+      {endOfLife && (
         <div className="mt-3 border-t border-ink/10 pt-3">
           {adding ? (
             <AddPartForm
