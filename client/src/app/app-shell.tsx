@@ -38,6 +38,7 @@ export function AppShell() {
     if (user.admin)
       links.push(
         { to: paths.admin(), label: 'Network admin', end: true },
+        { to: paths.networkImpact(), label: 'Network impact' },
         { to: paths.adminCategories(), label: 'Categories' },
         { to: paths.adminMailbox(), label: 'Mailbox' },
       );

@@ -24,6 +24,14 @@ export function AdminOverviewPage() {
         title="Network admin"
         lead="Every repair group on this installation, its people, and the mail Mendery sends."
       />
+      <p>
+        <Link to={paths.networkImpact()} className="font-semibold text-navy underline">
+          Network impact
+        </Link>{' '}
+        <span className="text-ink-soft">
+          — the figures of every group together, and the displacement factor their emission estimates use.
+        </span>
+      </p>
       <div className="grid gap-4 md:grid-cols-3">
         <Card>
           <h2 className="text-lg">Groups</h2>
