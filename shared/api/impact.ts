@@ -17,6 +17,7 @@ export type Stats = ImpactTotals & { displacement: number; filter: StatsFilter }
 export interface Method {
   displacement: number;
   displacementNote: string;
+  displacementSource: string;
   factorSource: string;
   text: string[];
   categories: {

@@ -20,7 +20,10 @@ export const FACTOR_SOURCE =
 /** The displacement factor shipped until an admin sets another: an assumption, not a sourced figure. */
 export const DEFAULT_DISPLACEMENT = 0.5;
 export const DISPLACEMENT_NOTE =
-  'The share of repairs that really save a new purchase. Mendery ships 0.5 as its assumption (half of the repaired items would otherwise have been replaced), and the network’s admins set the value in use; the idea of displacement is from Zink & Geyer, “Circular economy rebound”, Journal of Industrial Ecology, 2017 (from memory).';
+  'The share of repairs that really save a new purchase. Mendery ships 0.5 as its assumption (half of the repaired items would otherwise have been replaced), and the network’s admins set the value in use. It is an estimate: nobody can count the purchases that did not happen.';
+/** Where the idea comes from; shown in the dashboard's method section only, with its mark. */
+export const DISPLACEMENT_SOURCE =
+  'The idea of displacement is from Zink & Geyer, “Circular economy rebound”, Journal of Industrial Ecology, 2017 (from memory, not checked).';
 
 const TEXTILE_SLUGS = ['clothing', 'bag-textile'];
 

@@ -33,6 +33,7 @@ import {
   whole,
 } from '../../features/impact/components/display';
 import { MethodNotes } from '../../features/impact/components/method-notes';
+import { sourceForReaders } from '../../../../shared/impact/for-readers';
 
 /** The group of the address, when there is one; `valid` is false for an address no group can have. */
 const groupOf = (raw: string | undefined) => {
@@ -324,7 +325,9 @@ function MethodCard({ method }: { method: Method }) {
               Weights and factors, with their sources
             </summary>
             <div className="overflow-x-auto">
-              <FactorTable categories={method.categories} />
+              <FactorTable
+                categories={method.categories.map((c) => ({ ...c, weightSource: sourceForReaders(c.weightSource) }))}
+              />
             </div>
           </details>
         )}

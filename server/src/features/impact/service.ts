@@ -1,6 +1,6 @@
 import { BARRIER_LABELS, OUTCOME_LABELS } from '../../../../shared/event-day/constants';
 import type { EventReport, Method, PublicImpact, RecordsPage, Stats } from '../../../../shared/api/impact';
-import { DISPLACEMENT_NOTE, FACTOR_SOURCE } from '../../../../shared/impact/factors';
+import { DISPLACEMENT_NOTE, DISPLACEMENT_SOURCE, FACTOR_SOURCE } from '../../../../shared/impact/factors';
 import { totalsFromCells } from '../../../../shared/impact/statistics';
 import { shortName } from '../../../../shared/event-day/tag-code';
 import type { AppContext } from '../../context';
@@ -47,6 +47,7 @@ export async function method(ctx: AppContext): Promise<Method> {
   return {
     displacement: d,
     displacementNote: DISPLACEMENT_NOTE,
+    displacementSource: DISPLACEMENT_SOURCE,
     factorSource: FACTOR_SOURCE,
     text: [
       'Items: every item that reached the reception desk. An item that came back with its part counts once, with the outcome of its last visit.',

@@ -13,6 +13,7 @@ export function MethodSection() {
         </h2>
         <div className="mt-2 space-y-3 text-sm leading-relaxed">
           <MethodNotes method={method} />
+          <p>{method.displacementSource}</p>
           {method.categories.length > 0 && (
             <details>
               <summary className="min-h-11 cursor-pointer py-2 font-bold text-navy">

@@ -6,6 +6,7 @@ import { formatDay, formatTimeRange } from '../../../../../shared/format';
 import { EmptyState } from '../../../components/ui/feedback';
 import { CO2E, oneDp, percent, whole } from './display';
 import { MethodNotes } from './method-notes';
+import { sourceForReaders } from '../../../../../shared/impact/for-readers';
 
 const hoursFormat = new Intl.NumberFormat('en-GB', { maximumFractionDigits: 2 });
 
@@ -153,7 +154,7 @@ export function ReportBody({ r }: { r: EventReport }) {
                       {c.name}
                     </th>
                     <td className="py-1 pr-2 text-right tabular-nums">{oneDp.format(c.avgWeightKg)}</td>
-                    <td className="py-1 pr-2">{c.weightSource}</td>
+                    <td className="py-1 pr-2">{sourceForReaders(c.weightSource)}</td>
                     <td className="py-1 pr-2 text-right tabular-nums">
                       {c.co2ePerKg === null ? '—' : oneDp.format(c.co2ePerKg)}
                     </td>
