@@ -6,7 +6,7 @@ import { useSignOut } from '../features/auth/api/sign-out';
 import { Logo } from '../components/layouts/logo';
 
 const linkClass = ({ isActive }: { isActive: boolean }) =>
-  `block rounded-lg px-3 py-2 font-semibold ${isActive ? 'bg-navy text-white' : 'text-navy hover:bg-navy/5'}`;
+  `block whitespace-nowrap rounded-lg px-3 py-2 font-semibold ${isActive ? 'bg-navy text-white' : 'text-navy hover:bg-navy/5'}`;
 
 export function AppShell() {
   const { data: user } = useUser();
@@ -68,7 +68,7 @@ export function AppShell() {
           </Link>
           <button
             ref={menuButton}
-            className="rounded-lg p-2 text-navy ring-1 ring-navy/20 md:hidden"
+            className="rounded-lg p-2 text-navy ring-1 ring-navy/20 lg:hidden"
             aria-expanded={open}
             aria-controls="main-nav"
             onClick={() => setOpen((v) => !v)}
@@ -81,9 +81,9 @@ export function AppShell() {
           <nav
             id="main-nav"
             aria-label="Main"
-            className={`${open ? 'absolute inset-x-0 top-16 z-20 border-b border-ink/10 bg-white p-4 shadow-lg' : 'hidden'} md:static md:block md:border-0 md:p-0 md:shadow-none`}
+            className={`${open ? 'absolute inset-x-0 top-16 z-20 border-b border-ink/10 bg-white p-4 shadow-lg' : 'hidden'} lg:static lg:block lg:border-0 lg:p-0 lg:shadow-none`}
           >
-            <ul className="flex flex-col gap-1 md:flex-row md:items-center" onClick={() => setOpen(false)}>
+            <ul className="flex flex-col gap-1 lg:flex-row lg:items-center" onClick={() => setOpen(false)}>
               {links.map((l) => (
                 <li key={l.to}>
                   <NavLink to={l.to} end={l.end} className={linkClass}>
@@ -92,9 +92,9 @@ export function AppShell() {
                 </li>
               ))}
               {user ? (
-                <li className="md:ml-3">
+                <li className="lg:ml-3">
                   <button
-                    className="w-full rounded-lg px-3 py-2 text-left font-semibold text-ink-soft hover:bg-navy/5"
+                    className="w-full whitespace-nowrap rounded-lg px-3 py-2 text-left font-semibold text-ink-soft hover:bg-navy/5"
                     onClick={() => signOut.mutate(undefined, { onSettled: () => navigate(paths.home()) })}
                   >
                     Sign out <span className="text-xs font-normal">({user.name})</span>

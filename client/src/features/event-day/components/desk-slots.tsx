@@ -25,14 +25,14 @@ export function DeskSlots({
         if (filtered && list.length === 0) return null;
         return (
           <section key={s.id} aria-label={`Slot ${formatTimeRange(s.startsAt, s.endsAt, desk.event.timeZone)}`}>
-            <div className="mb-2 flex items-baseline gap-3">
+            <div className="mb-2 flex flex-wrap items-center gap-3">
               <h2 className="text-lg">{formatTimeRange(s.startsAt, s.endsAt, desk.event.timeZone)}</h2>
               {s.id === desk.currentSlotId && (
                 <span className="rounded-full bg-copper px-2 py-0.5 text-xs font-bold text-white">now</span>
               )}
               {s.bookings.some((b) => b.items.some((i) => i.tagCode)) && (
                 <Link
-                  className="text-sm font-semibold text-navy underline"
+                  className="ml-auto inline-flex min-h-11 items-center rounded-lg px-4 text-sm font-semibold text-navy ring-1 ring-navy/30 hover:bg-navy/5"
                   to={paths.tags(desk.event.id, { slotId: s.id })}
                   target="_blank"
                 >
