@@ -22,8 +22,11 @@ export interface ItemToolkit {
   calculators: ReactNode;
 }
 
-/** The fixer's page for one item, phone first: what is wrong, the cautions, start, safety check, outcome. */
-export function ItemBody({ item, toolkit }: { item: ItemView; toolkit: ItemToolkit }) {
+/**
+ * The fixer's page for one item, phone first: "Start repair" and the cautions on the first screen, then what is
+ * wrong, the safety check and the outcome. `whatNext` (composed by the route) shows once an outcome is in.
+ */
+export function ItemBody({ item, toolkit, whatNext }: { item: ItemView; toolkit: ItemToolkit; whatNext?: ReactNode }) {
   const start = useStartRepair(item.id);
   const { data: me } = useUser();
   const [confirmTake, setConfirmTake] = useState(false);
@@ -77,6 +80,39 @@ export function ItemBody({ item, toolkit }: { item: ItemView; toolkit: ItemToolk
         </p>
       </header>
 
+      {item.can.start && !started && (
+        <div className="space-y-2">
+          {othersItem && (
+            <Alert>The plan gives this item to {item.placement!.fixerName}. Starting it makes it yours.</Alert>
+          )}
+          <Button
+            className="w-full text-lg"
+            onClick={() => (othersItem ? setConfirmTake(true) : start.mutate())}
+            busy={start.isPending}
+          >
+            Start repair
+          </Button>
+          <p className="text-center text-sm text-ink-soft">
+            {item.cautions.length > 0 ? 'Read the cautions below before you open it. ' : ''}The safety check and the
+            outcome open once the repair has started.
+          </p>
+        </div>
+      )}
+      <ConfirmDialog
+        open={confirmTake}
+        tone="primary"
+        title="Take over this item?"
+        message={`It is planned for ${item.placement?.fixerName ?? 'another fixer'}. Tell them you have it, so nobody waits for it.`}
+        confirmLabel="Take it"
+        cancelLabel="Leave it"
+        onCancel={() => setConfirmTake(false)}
+        onConfirm={() => {
+          setConfirmTake(false);
+          start.mutate();
+        }}
+      />
+      {start.error && <Alert tone="error">{start.error.message}</Alert>}
+
       {item.cautions.length > 0 && (
         <Alert tone="caution" title="Before you open it">
           <ul className="mt-1 list-disc space-y-1 pl-5">
@@ -117,77 +153,48 @@ export function ItemBody({ item, toolkit }: { item: ItemView; toolkit: ItemToolk
 
       {toolkit.similarRepairs}
 
-      {item.can.start && !started && (
-        <div className="space-y-2">
-          {othersItem && (
-            <Alert>The plan gives this item to {item.placement!.fixerName}. Starting it makes it yours.</Alert>
-          )}
-          <Button
-            className="w-full text-lg"
-            onClick={() => (othersItem ? setConfirmTake(true) : start.mutate())}
-            busy={start.isPending}
-          >
-            Start repair
-          </Button>
-          <p className="text-center text-sm text-ink-soft">
-            The safety check and the outcome open once the repair has started.
-          </p>
-        </div>
-      )}
-      <ConfirmDialog
-        open={confirmTake}
-        tone="primary"
-        title="Take over this item?"
-        message={`It is planned for ${item.placement?.fixerName ?? 'another fixer'}. Tell them you have it, so nobody waits for it.`}
-        confirmLabel="Take it"
-        cancelLabel="Leave it"
-        onCancel={() => setConfirmTake(false)}
-        onConfirm={() => {
-          setConfirmTake(false);
-          start.mutate();
-        }}
-      />
-      {start.error && <Alert tone="error">{start.error.message}</Alert>}
-
       {item.mains &&
         ((started && !(item.status === 'done' && item.outcome?.outcome !== 'fixed')) ||
           item.safetyChecks.length > 0) && <SafetySection item={item} />}
 
       {!started && !item.outcome ? null : item.outcome && !editing ? (
-        <Card className={item.outcome.outcome === 'fixed' ? 'ring-2 ring-sage' : ''}>
-          <h2 className="text-lg">Outcome: {item.outcome.outcomeLabel}</h2>
-          {item.outcome.barrierLabel && <p>Barrier: {item.outcome.barrierLabel}</p>}
-          {item.outcome.partDescription && (
-            <p>
-              Part needed: {item.outcome.partDescription}
-              {item.outcome.partCost !== null && ` (estimated cost ${item.outcome.partCost.toFixed(2)})`}
-              {item.outcome.partLink && (
-                <>
-                  {' '}
-                  ·{' '}
-                  <a className="underline" href={item.outcome.partLink} target="_blank" rel="noreferrer">
-                    link
-                  </a>
-                </>
-              )}
+        <>
+          <Card className={item.outcome.outcome === 'fixed' ? 'ring-2 ring-sage' : ''}>
+            <h2 className="text-lg">Outcome: {item.outcome.outcomeLabel}</h2>
+            {item.outcome.barrierLabel && <p>Barrier: {item.outcome.barrierLabel}</p>}
+            {item.outcome.partDescription && (
+              <p>
+                Part needed: {item.outcome.partDescription}
+                {item.outcome.partCost !== null && ` (estimated cost ${item.outcome.partCost.toFixed(2)})`}
+                {item.outcome.partLink && (
+                  <>
+                    {' '}
+                    ·{' '}
+                    <a className="underline" href={item.outcome.partLink} target="_blank" rel="noreferrer">
+                      link
+                    </a>
+                  </>
+                )}
+              </p>
+            )}
+            {item.outcome.minutes !== null && <p>{item.outcome.minutes} minutes</p>}
+            {item.outcome.notes && <p className="whitespace-pre-line text-ink-soft">{item.outcome.notes}</p>}
+            <p className="text-sm text-ink-soft">
+              Recorded {formatTime(item.outcome.recordedAt, tz)}
+              {item.outcome.recordedByName && ` by ${item.outcome.recordedByName}`}
             </p>
-          )}
-          {item.outcome.minutes !== null && <p>{item.outcome.minutes} minutes</p>}
-          {item.outcome.notes && <p className="whitespace-pre-line text-ink-soft">{item.outcome.notes}</p>}
-          <p className="text-sm text-ink-soft">
-            Recorded {formatTime(item.outcome.recordedAt, tz)}
-            {item.outcome.recordedByName && ` by ${item.outcome.recordedByName}`}
-          </p>
-          {item.can.record && (
-            <Button
-              variant="secondary"
-              className="mt-2"
-              onClick={() => setCorrecting(item.outcome?.recordedAt ?? null)}
-            >
-              Correct the outcome
-            </Button>
-          )}
-        </Card>
+            {item.can.record && (
+              <Button
+                variant="secondary"
+                className="mt-2"
+                onClick={() => setCorrecting(item.outcome?.recordedAt ?? null)}
+              >
+                Correct the outcome
+              </Button>
+            )}
+          </Card>
+          {whatNext}
+        </>
       ) : item.can.record ? (
         <OutcomeForm item={item} latestCheck={latest} onCancel={item.outcome ? () => setCorrecting(null) : undefined} />
       ) : (
