@@ -3,6 +3,7 @@ import type { SessionUser } from '../../../../shared/schemas/auth';
 import type { AppContext } from '../../context';
 import { HttpError, notFound } from '../../http/errors';
 import * as q from './queries/desk';
+import { eventWithGroup, slotsOfEvent } from '../../core/events';
 
 /** The desk opens 12 hours before the event starts and closes 12 hours after it ends. */
 const DESK_OPENS_H = 12;
@@ -28,9 +29,9 @@ export function currentSlot<T extends { startsAt: Date; endsAt: Date }>(list: T[
 /** Today's desk: every booking of the event by slot, with its items' status, tag and queue number. */
 export async function deskView(ctx: AppContext, eventId: number): Promise<DeskView> {
   const { db } = ctx.database;
-  const e = await q.eventWithGroup(db, eventId);
+  const e = await eventWithGroup(db, eventId);
   if (!e) throw notFound('That event');
-  const slotRows = await q.slotsOfEvent(db, eventId);
+  const slotRows = await slotsOfEvent(db, eventId);
   const rows = await q.deskRows(db, eventId);
   const byBooking = new Map<number, DeskBooking>();
   for (const r of rows) {

@@ -13,8 +13,8 @@ import type { HallQueue, LiveView, PublicTag, TagSheet } from '../../../../share
 import type { AppContext } from '../../context';
 import { notFound } from '../../http/errors';
 import { eventLayout } from '../../core/benches';
-import { eventWithGroup } from './queries/desk';
 import * as q from './queries/hall';
+import { eventWithGroup } from '../../core/events';
 
 type HallItem = q.HallItem;
 const hallItems = (ctx: AppContext, eventId: number) => q.hallItems(ctx.database.db, eventId);

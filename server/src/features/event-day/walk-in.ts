@@ -15,6 +15,7 @@ import { assertDeskOpen, currentSlot } from './desk';
 import { newTagCodes, nextQueueNumbers, setStatus } from './items';
 import { issuedAfterPlan, replan } from './plan';
 import * as q from './queries/desk';
+import { eventWithGroup, slotsOfEvent } from '../../core/events';
 
 /**
  * A walk-in: the booking and its items are made already checked in; they queue after the booked items of their
@@ -28,10 +29,10 @@ export async function walkIn(
   user: SessionUser,
 ): Promise<WalkInResult> {
   const { db } = ctx.database;
-  const e = await q.eventWithGroup(db, eventId);
+  const e = await eventWithGroup(db, eventId);
   if (!e) throw notFound('That event');
   assertDeskOpen(e.event);
-  const eventSlots = await q.slotsOfEvent(db, eventId);
+  const eventSlots = await slotsOfEvent(db, eventId);
   let slot = input.slotId ? eventSlots.find((s) => s.id === input.slotId) : currentSlot(eventSlots, Date.now());
   if (input.slotId && !slot)
     throw new HttpError(400, 'invalid', 'Some fields need attention.', {

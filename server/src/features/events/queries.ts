@@ -76,9 +76,6 @@ export async function deleteSlotRow(tx: Tx, slotId: number) {
   await tx.delete(slots).where(eq(slots.id, slotId));
 }
 
-export const slotsOfEvent = (db: DbOrTx, eventId: number) =>
-  db.select().from(slots).where(eq(slots.eventId, eventId)).orderBy(asc(slots.startsAt));
-
 export const groupById = async (tx: DbOrTx, groupId: number) =>
   (await tx.select().from(repairGroups).where(eq(repairGroups.id, groupId)))[0];
 

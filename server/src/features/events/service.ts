@@ -24,10 +24,10 @@ import {
   setSlotCapacity,
   skillCountsOf,
   slotOfEvent,
-  slotsOfEvent,
   updateEventRow,
   venueById,
 } from './queries';
+import { slotsOfEvent } from '../../core/events';
 
 const conflict = (code: string, message: string) => new HttpError(409, code, message);
 

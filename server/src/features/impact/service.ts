@@ -8,7 +8,6 @@ import { HttpError, notFound } from '../../http/errors';
 import {
   countEventsWithFigures,
   displacement,
-  eventWithGroup,
   groupById,
   impactCategories,
   readCells,
@@ -19,6 +18,7 @@ import {
   type RecordsFilter,
   type StatsFilter,
 } from './queries/stats';
+import { eventWithGroup } from '../../core/events';
 
 export type { StatsFilter };
 

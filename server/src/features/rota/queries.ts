@@ -9,21 +9,11 @@ import {
   memberships,
   repairGroups,
   shifts,
-  slots,
   users,
 } from '../../db/schema/index';
 
 export async function eventRow(db: DbOrTx, eventId: number) {
   const [e] = await db.select().from(events).where(eq(events.id, eventId));
-  return e;
-}
-
-export async function eventWithGroup(db: DbOrTx, eventId: number) {
-  const [e] = await db
-    .select({ event: events, group: repairGroups })
-    .from(events)
-    .innerJoin(repairGroups, eq(repairGroups.id, events.groupId))
-    .where(eq(events.id, eventId));
   return e;
 }
 
@@ -74,9 +64,6 @@ export const shiftsOfUser = (db: DbOrTx, userId: number, eventIds: number[]) =>
         .from(shifts)
         .where(and(eq(shifts.userId, userId), inArray(shifts.eventId, eventIds)))
     : [];
-
-export const slotRows = (db: DbOrTx, eventId: number) =>
-  db.select().from(slots).where(eq(slots.eventId, eventId)).orderBy(asc(slots.startsAt));
 
 /** Everyone who answered for the event (coming or not), by name. */
 export const shiftRowsOfEvent = (db: DbOrTx, eventId: number) =>

@@ -9,6 +9,7 @@ import { skillsOf } from '../../core/skills';
 import { enqueueMail } from '../../mail/outbox';
 import { askForSkillMail } from './mails';
 import * as q from './queries';
+import { eventWithGroup, slotsOfEvent } from '../../core/events';
 
 export async function setMyShift(
   ctx: AppContext,
@@ -50,7 +51,7 @@ export async function myEvents(ctx: AppContext, userId: number): Promise<MyEvent
 /** The rota of one event: who comes when, the skills covered per slot, and the gaps against what is booked. */
 export async function rota(ctx: AppContext, eventId: number): Promise<Rota> {
   const { db } = ctx.database;
-  const slotRows = await q.slotRows(db, eventId);
+  const slotRows = await slotsOfEvent(db, eventId);
   const shiftRows = await q.shiftRowsOfEvent(db, eventId);
   const skills = await skillsOf(
     db,
@@ -98,7 +99,7 @@ export async function rota(ctx: AppContext, eventId: number): Promise<Rota> {
 /** Mails the group's fixers who have a wanted skill and have not said they come. */
 export async function askForSkills(ctx: AppContext, eventId: number, wanted: string[]): Promise<AskResult> {
   const { db } = ctx.database;
-  const e = await q.eventWithGroup(db, eventId);
+  const e = await eventWithGroup(db, eventId);
   if (!e) throw notFound('That event');
   const fixers = await q.activeFixers(db, e.group.id);
   const skills = await skillsOf(

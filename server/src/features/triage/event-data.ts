@@ -4,13 +4,14 @@ import { notFound } from '../../http/errors';
 import { skillsOf } from '../../core/skills';
 import { eventLayout } from '../../core/benches';
 import * as q from './queries';
+import { eventWithGroup, slotsOfEvent } from '../../core/events';
 
 /** Everything the board shows and the engine needs, read in a handful of queries. */
 export async function loadEvent(ctx: AppContext, eventId: number) {
   const { db } = ctx.database;
-  const e = await q.eventWithGroup(db, eventId);
+  const e = await eventWithGroup(db, eventId);
   if (!e) throw notFound('That event');
-  const slotRows = await q.slotRows(db, eventId);
+  const slotRows = await slotsOfEvent(db, eventId);
   const items = await q.openItemRows(db, eventId);
   const photos = await q.photoIdsOf(
     db,

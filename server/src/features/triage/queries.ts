@@ -5,27 +5,12 @@ import {
   bookingItems,
   bookings,
   categories,
-  events,
   itemAssignments,
   itemPhotos,
-  repairGroups,
   shifts,
-  slots,
   triageRuns,
   users,
 } from '../../db/schema/index';
-
-export async function eventWithGroup(db: DbOrTx, eventId: number) {
-  const [e] = await db
-    .select({ event: events, group: repairGroups })
-    .from(events)
-    .innerJoin(repairGroups, eq(repairGroups.id, events.groupId))
-    .where(eq(events.id, eventId));
-  return e;
-}
-
-export const slotRows = (db: DbOrTx, eventId: number) =>
-  db.select().from(slots).where(eq(slots.eventId, eventId)).orderBy(asc(slots.startsAt));
 
 /** Items still to be repaired, and those at a bench now (they hold their fixer and bench); walk-ins after the booked. */
 export const openItemRows = (db: DbOrTx, eventId: number) =>

@@ -9,7 +9,6 @@ import {
   itemAssignments,
   memberships,
   repairGroups,
-  slots,
 } from '../../../db/schema/index';
 
 /* The desk's reads and writes: bookings, their items and the event's slots. */
@@ -78,18 +77,6 @@ export async function issuedItems(db: DbOrTx, ids: number[]) {
   if (!ids.length) return [];
   return db.select(issued).from(bookingItems).where(inArray(bookingItems.id, ids)).orderBy(asc(bookingItems.id));
 }
-
-export async function eventWithGroup(db: DbOrTx, eventId: number) {
-  const [e] = await db
-    .select({ event: events, group: repairGroups })
-    .from(events)
-    .innerJoin(repairGroups, eq(repairGroups.id, events.groupId))
-    .where(eq(events.id, eventId));
-  return e;
-}
-
-export const slotsOfEvent = (db: DbOrTx, eventId: number) =>
-  db.select().from(slots).where(eq(slots.eventId, eventId)).orderBy(asc(slots.startsAt));
 
 export async function insertBooking(tx: Tx, values: typeof bookings.$inferInsert) {
   const [{ id }] = await tx.insert(bookings).values(values).$returningId();

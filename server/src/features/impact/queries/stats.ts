@@ -158,15 +158,6 @@ export async function recordRows(db: DbOrTx, f: RecordsFilter, page: number) {
     .offset((page - 1) * 50);
 }
 
-export async function eventWithGroup(db: DbOrTx, eventId: number) {
-  const [e] = await db
-    .select({ event: events, group: repairGroups })
-    .from(events)
-    .innerJoin(repairGroups, eq(repairGroups.id, events.groupId))
-    .where(eq(events.id, eventId));
-  return e;
-}
-
 export async function groupById(db: DbOrTx, groupId: number) {
   const [g] = await db.select().from(repairGroups).where(eq(repairGroups.id, groupId));
   return g;
