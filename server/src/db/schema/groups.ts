@@ -1,4 +1,4 @@
-import { boolean, index, mysqlEnum, mysqlTable, text, uniqueIndex, varchar } from 'drizzle-orm/mysql-core';
+import { boolean, char, index, mysqlEnum, mysqlTable, text, uniqueIndex, varchar } from 'drizzle-orm/mysql-core';
 import { GROUP_ROLES, MEMBERSHIP_STATUSES } from '../../../../shared/constants';
 import { createdAt, id, ref, timestamp3 } from './columns';
 import { users } from './users';
@@ -13,6 +13,8 @@ export const repairGroups = mysqlTable(
     description: text('description').notNull(),
     houseRules: text('house_rules'),
     timeZone: varchar('time_zone', { length: 64 }).notNull().default('Europe/London'),
+    /** ISO 4217 code used to show part costs (formatted with Intl.NumberFormat). */
+    currency: char('currency', { length: 3 }).notNull().default('GBP'),
     /** Whether the group's repair notes are searchable by the other groups of the network. */
     shareKnowledge: boolean('share_knowledge').notNull().default(false),
     createdAt: createdAt(),

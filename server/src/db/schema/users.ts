@@ -10,9 +10,11 @@ export const users = mysqlTable(
     passwordHash: varchar('password_hash', { length: 255 }),
     admin: boolean('admin').notNull().default(false),
     emailVerifiedAt: timestamp3('email_verified_at'),
+    /** SHA-256 of the secret in the person's shift-calendar feed URL; null when no feed link is live (revoked). */
+    calendarFeedHash: char('calendar_feed_hash', { length: 64 }),
     createdAt: createdAt(),
   },
-  (t) => [uniqueIndex('users_email_uq').on(t.email)],
+  (t) => [uniqueIndex('users_email_uq').on(t.email), uniqueIndex('users_calendar_feed_uq').on(t.calendarFeedHash)],
 );
 
 /** Single-use links sent by e-mail; only the SHA-256 of the token is stored. */
