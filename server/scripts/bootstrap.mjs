@@ -6,7 +6,14 @@ import path from 'node:path';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
 const command = process.argv[2];
-const scripts = { start: 'start.ts', dev: 'dev.ts', test: 'test.ts', bench: 'perf/http.ts', migrate: 'migrate.ts' };
+const scripts = {
+  start: 'start.ts',
+  dev: 'dev.ts',
+  test: 'test.ts',
+  bench: 'perf/http.ts',
+  migrate: 'migrate.ts',
+  screenshots: 'screenshots.ts',
+};
 if (!scripts[command]) {
   console.error(`usage: bootstrap.mjs ${Object.keys(scripts).join('|')}`);
   process.exit(2);
