@@ -66,7 +66,7 @@ describe('volunteers, rota and the triage board', () => {
     // Move the radio's card to the sewing table with Wren, and lock it.
     const card = page.locator('article').filter({ hasText: 'Radio' }).first();
     await card.getByRole('button', { name: 'Move…' }).click();
-    await card.getByLabel('Fixer').selectOption({ label: 'Wren Ashcombe (Electronics 0)' });
+    await card.getByLabel('Fixer').selectOption({ label: 'Wren Ashcombe — no Electronics skill yet' });
     await card.getByLabel('Bench').selectOption({ label: 'Sewing table' });
     await card.getByRole('button', { name: 'Place and lock' }).click();
     const sewing = page.getByRole('region', { name: 'Sewing table' });

@@ -1,3 +1,4 @@
+import { useEffect, useRef, useState } from 'react';
 import type { Board } from '../api/types';
 import { EQUIPMENT_LABELS, type Equipment } from '../../../../../shared/constants';
 import { BoardColumn } from './board-column';
@@ -5,47 +6,85 @@ import { BoardItemCard } from './board-item-card';
 
 const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
 
-/** The waiting items first, then one column per bench with each fixer's cards. */
+/** Whether the element is wider than its box, kept up to date as the window or the board changes size. */
+function useOverflows() {
+  const ref = useRef<HTMLDivElement>(null);
+  const [overflows, setOverflows] = useState(false);
+  useEffect(() => {
+    const el = ref.current;
+    if (!el) return;
+    const check = () => setOverflows(el.scrollWidth > el.clientWidth + 1);
+    check();
+    const seen = new ResizeObserver(check);
+    seen.observe(el);
+    for (const child of el.children) seen.observe(child);
+    return () => seen.disconnect();
+  });
+  return { ref, overflows };
+}
+
+/**
+ * The waiting items first, then one column per bench with each fixer's cards. When the columns are wider than the
+ * screen the board scrolls inside its own box, says so above it, and takes the focus so arrow keys scroll it.
+ */
 export function BenchColumns({ board }: { board: Board }) {
   const eventId = board.event.id;
   const waiting = board.items.filter((i) => !i.placement);
+  const { ref, overflows } = useOverflows();
+  const columns = board.benches.length + 1;
   return (
-    <div className="flex gap-4 overflow-x-auto pb-4">
-      <BoardColumn title="Waiting" subtitle={plural(waiting.length, 'item')} tone="wait">
-        {waiting.length === 0 ? (
-          <p className="text-sm text-ink-soft">Every item has a place.</p>
-        ) : (
-          waiting.map((i) => <BoardItemCard key={i.id} item={i} board={board} eventId={eventId} />)
-        )}
-      </BoardColumn>
-      {board.benches.map((bench) => {
-        const here = board.items.filter((i) => i.placement?.benchId === bench.id);
-        const kit = bench.equipment.map((e) => EQUIPMENT_LABELS[e as Equipment]).join(', ') || 'no kit';
-        return (
-          <BoardColumn
-            key={bench.id}
-            title={bench.name}
-            subtitle={`${plural(bench.seats, 'seat')} · ${plural(here.length, 'item')} over the day · ${kit}`}
-          >
-            {board.fixers
-              .filter((f) => here.some((i) => i.placement!.userId === f.userId))
-              .map((f) => (
-                <div key={f.userId} className="space-y-2">
-                  <p className="text-sm font-extrabold text-navy">
-                    {f.name}
-                    {f.benchId === bench.id ? ' · seated here' : ''}
-                  </p>
-                  {here
-                    .filter((i) => i.placement!.userId === f.userId)
-                    .map((i) => (
-                      <BoardItemCard key={i.id} item={i} board={board} eventId={eventId} />
-                    ))}
-                </div>
-              ))}
-            {here.length === 0 && <p className="text-sm text-ink-soft">Free.</p>}
-          </BoardColumn>
-        );
-      })}
-    </div>
+    <>
+      {overflows && (
+        <p id="board-scroll-hint" className="mb-2 text-sm font-semibold text-navy">
+          <span aria-hidden>⇆ </span>
+          {columns} columns are wider than this screen: scroll the board sideways to see every bench. From the keyboard,
+          tab to the board and use the arrow keys.
+        </p>
+      )}
+      <div
+        ref={ref}
+        role="region"
+        aria-label="Triage board: waiting items and benches"
+        aria-describedby={overflows ? 'board-scroll-hint' : undefined}
+        tabIndex={overflows ? 0 : undefined}
+        className="flex gap-4 overflow-x-auto rounded-xl pb-4"
+      >
+        <BoardColumn title="Waiting" subtitle={plural(waiting.length, 'item')} tone="wait">
+          {waiting.length === 0 ? (
+            <p className="text-sm text-ink-soft">Every item has a place.</p>
+          ) : (
+            waiting.map((i) => <BoardItemCard key={i.id} item={i} board={board} eventId={eventId} />)
+          )}
+        </BoardColumn>
+        {board.benches.map((bench) => {
+          const here = board.items.filter((i) => i.placement?.benchId === bench.id);
+          const kit = bench.equipment.map((e) => EQUIPMENT_LABELS[e as Equipment]).join(', ') || 'no kit';
+          return (
+            <BoardColumn
+              key={bench.id}
+              title={bench.name}
+              subtitle={`${plural(bench.seats, 'seat')} · ${plural(here.length, 'item')} over the day · ${kit}`}
+            >
+              {board.fixers
+                .filter((f) => here.some((i) => i.placement!.userId === f.userId))
+                .map((f) => (
+                  <div key={f.userId} className="space-y-2">
+                    <p className="text-sm font-extrabold text-navy">
+                      {f.name}
+                      {f.benchId === bench.id ? ' · seated here' : ''}
+                    </p>
+                    {here
+                      .filter((i) => i.placement!.userId === f.userId)
+                      .map((i) => (
+                        <BoardItemCard key={i.id} item={i} board={board} eventId={eventId} />
+                      ))}
+                  </div>
+                ))}
+              {here.length === 0 && <p className="text-sm text-ink-soft">Free.</p>}
+            </BoardColumn>
+          );
+        })}
+      </div>
+    </>
   );
 }

@@ -2,6 +2,7 @@ import { useState } from 'react';
 import type { Board, BoardItem } from '../api/types';
 import { EQUIPMENT_LABELS, SKILL_LABELS, type Equipment, type Skill } from '../../../../../shared/constants';
 import { formatTime } from '../../../../../shared/format';
+import { fixerSkillPhrase, skillNeedPhrase } from '../../../../../shared/triage/skill-words';
 import { Button } from '../../../components/ui/button';
 import { useLockItem } from '../api/lock-item';
 import { usePlaceItem } from '../api/place-item';
@@ -27,6 +28,10 @@ export function BoardItemCard({ item, board, eventId }: { item: BoardItem; board
   });
   const tz = board.event.timeZone;
   const slot = board.slots.find((s) => s.id === item.slotId);
+  const skill = SKILL_LABELS[item.needs.skill as Skill] ?? item.needs.skill;
+  const standing = (f: Board['fixers'][number]) =>
+    `${f.name} — ${fixerSkillPhrase(skill, f.skills[item.needs.skill] ?? 0, item.needs.minLevel)}`;
+  const chosen = board.fixers.find((f) => f.userId === to.userId);
   return (
     <article
       className={`rounded-lg bg-white p-3 text-sm shadow-sm ring-1 ${item.warnings.length ? 'ring-alert' : item.placement?.locked ? 'ring-navy' : 'ring-ink/10'}`}
@@ -48,7 +53,7 @@ export function BoardItemCard({ item, board, eventId }: { item: BoardItem; board
         {item.placement && item.estimatedStart && <> · starts ≈ {formatTime(item.estimatedStart, tz)}</>}
       </p>
       <p className="text-xs text-ink-soft">
-        Needs {SKILL_LABELS[item.needs.skill as Skill] ?? item.needs.skill} level {item.needs.minLevel}
+        Needs {skillNeedPhrase(skill, item.needs.minLevel)}
         {item.needs.equipment.length
           ? `, ${item.needs.equipment.map((e) => EQUIPMENT_LABELS[e as Equipment]).join(', ')}`
           : ''}
@@ -69,17 +74,21 @@ export function BoardItemCard({ item, board, eventId }: { item: BoardItem; board
           <select
             autoFocus
             aria-label="Fixer"
+            aria-describedby={`fixer-standing-${item.id}`}
             value={to.userId}
             onChange={(e) => setTo({ ...to, userId: Number(e.target.value) })}
             className="block w-full rounded border border-ink/20 px-2 py-1"
           >
             {board.fixers.map((f) => (
               <option key={f.userId} value={f.userId}>
-                {f.name} ({SKILL_LABELS[item.needs.skill as Skill] ?? item.needs.skill}{' '}
-                {f.skills[item.needs.skill] ?? 0})
+                {standing(f)}
               </option>
             ))}
           </select>
+          {/* The closed picker cuts long text off; the whole line shows here, and is read out with the picker. */}
+          <p id={`fixer-standing-${item.id}`} className="text-xs text-ink-soft">
+            {chosen ? standing(chosen) : ''}
+          </p>
           <select
             aria-label="Bench"
             value={to.benchId}
