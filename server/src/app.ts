@@ -8,6 +8,7 @@ import { authRoutes } from './auth/routes';
 import { loadUser } from './auth/guards';
 import { sessionMiddleware } from './auth/session';
 import { apiNotFound, errorHandler } from './http/errors';
+import { clientFiles } from './http/client-files';
 import { FEATURES } from './features';
 
 /** Builds the Express app: middleware → routers → 404 → error handler. `listen` is the caller's business. */
@@ -62,18 +63,7 @@ export function createApp(ctx: AppContext) {
   app.use('/api', api);
 
   const dist = path.resolve(ctx.env.CLIENT_DIST);
-  if (existsSync(path.join(dist, 'index.html'))) {
-    app.use(
-      '/assets',
-      express.static(path.join(dist, 'assets'), { immutable: true, maxAge: '1y', fallthrough: false }),
-    );
-    app.use(express.static(dist, { index: false }));
-    app.use((req, res, next) => {
-      if (req.method !== 'GET' && req.method !== 'HEAD') return next();
-      res.setHeader('Cache-Control', 'no-cache');
-      res.sendFile(path.join(dist, 'index.html'));
-    });
-  }
+  if (existsSync(path.join(dist, 'index.html'))) app.use(clientFiles(dist));
   app.use(errorHandler((msg, err) => ctx.log(`${msg}: ${(err as Error)?.stack ?? err}`)));
 
   return {

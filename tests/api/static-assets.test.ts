@@ -1,0 +1,169 @@
+import http from 'node:http';
+import { readdirSync, readFileSync } from 'node:fs';
+import path from 'node:path';
+import { brotliDecompressSync, gunzipSync } from 'node:zlib';
+import robotsParser from 'robots-parser';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { RunningServer } from '../../server/src/server';
+import { createTestDatabase, type TestDatabase } from '../support/db';
+import { startTestServer } from '../support/server';
+
+const dist = path.resolve('dist/client');
+
+let db: TestDatabase;
+let server: RunningServer;
+beforeAll(async () => {
+  db = await createTestDatabase();
+  server = await startTestServer(db.url);
+});
+afterAll(async () => {
+  await server.stop();
+  await db.drop();
+});
+
+/** A plain GET that sends exactly the headers given (fetch would add its own Accept-Encoding and decode). */
+function get(url: string, headers: Record<string, string> = {}) {
+  return new Promise<{ status: number; headers: http.IncomingHttpHeaders; body: Buffer }>((resolve, reject) => {
+    http
+      .get(server.url + url, { headers }, (res) => {
+        const chunks: Buffer[] = [];
+        res.on('data', (c: Buffer) => chunks.push(c));
+        res.on('end', () => resolve({ status: res.statusCode!, headers: res.headers, body: Buffer.concat(chunks) }));
+      })
+      .on('error', reject);
+  });
+}
+
+async function builtHtml() {
+  return (await get('/', { 'accept-encoding': 'identity' })).body.toString('utf8');
+}
+
+async function mainScript() {
+  const src = /<script type="module" crossorigin src="([^"]+)"/.exec(await builtHtml())?.[1];
+  expect(src).toMatch(/^\/assets\/index-[\w-]+\.js$/);
+  return src!;
+}
+
+describe('Static files for a phone on mobile data', () => {
+  it('sends a script as brotli when the browser takes it, as gzip when it only takes gzip, and plain otherwise', async () => {
+    const src = await mainScript();
+    const onDisk = readFileSync(path.join(dist, src));
+
+    const br = await get(src, { 'accept-encoding': 'gzip, deflate, br, zstd' });
+    expect(br.status).toBe(200);
+    expect(br.headers['content-encoding']).toBe('br');
+    expect(br.headers['content-type']).toMatch(/^(text|application)\/javascript/);
+    expect(br.headers.vary).toMatch(/Accept-Encoding/i);
+    expect(br.body.length).toBeLessThan(onDisk.length / 2);
+    expect(brotliDecompressSync(br.body).equals(onDisk)).toBe(true);
+
+    const gz = await get(src, { 'accept-encoding': 'gzip' });
+    expect(gz.headers['content-encoding']).toBe('gzip');
+    expect(gz.headers.vary).toMatch(/Accept-Encoding/i);
+    expect(gunzipSync(gz.body).equals(onDisk)).toBe(true);
+
+    for (const accept of [undefined, 'identity', 'deflate']) {
+      const plain = await get(src, accept ? { 'accept-encoding': accept } : {});
+      expect(plain.headers['content-encoding'], `Accept-Encoding: ${accept}`).toBeUndefined();
+      expect(plain.headers.vary).toMatch(/Accept-Encoding/i);
+      expect(plain.body.equals(onDisk)).toBe(true);
+    }
+  });
+
+  it('compresses the stylesheet and the page itself too', async () => {
+    const html = await builtHtml();
+    const css = /<link rel="stylesheet" crossorigin href="([^"]+)"/.exec(html)![1];
+    const r = await get(css, { 'accept-encoding': 'br' });
+    expect(r.headers['content-encoding']).toBe('br');
+    expect(r.headers['content-type']).toMatch(/^text\/css/);
+    expect(brotliDecompressSync(r.body).equals(readFileSync(path.join(dist, css)))).toBe(true);
+
+    const page = await get('/events', { 'accept-encoding': 'gzip, br' });
+    expect(page.headers['content-encoding']).toBe('br');
+    expect(page.headers['content-type']).toMatch(/^text\/html/);
+    expect(brotliDecompressSync(page.body).toString('utf8')).toBe(html);
+  });
+
+  it('lets browsers keep hashed files for a year and makes them revalidate every page', async () => {
+    const asset = await get(await mainScript(), { 'accept-encoding': 'br' });
+    expect(asset.headers['cache-control']).toBe('public, max-age=31536000, immutable');
+
+    for (const page of ['/', '/index.html', '/events', '/events/12/book', '/admin', '/no/such/page']) {
+      for (const accept of ['br', 'gzip', 'identity']) {
+        const r = await get(page, { 'accept-encoding': accept });
+        expect(r.status, page).toBe(200);
+        expect(r.headers['content-type'], page).toMatch(/^text\/html/);
+        expect(r.headers['cache-control'], `${page} (${accept})`).toBe('no-cache');
+      }
+    }
+  });
+
+  it('serves no source map and names none in any script', async () => {
+    const scripts = readdirSync(path.join(dist, 'assets')).filter((f) => f.endsWith('.js'));
+    expect(scripts.length).toBeGreaterThan(5);
+    for (const f of scripts) {
+      const r = await get(`/assets/${f}`);
+      expect(r.status).toBe(200);
+      expect(r.body.toString('utf8'), f).not.toContain('sourceMappingURL');
+      const map = await get(`/assets/${f}.map`);
+      expect(map.status, `${f}.map`).toBe(404);
+    }
+    expect(readdirSync(path.join(dist, 'assets')).filter((f) => /\.map(\.|$)/.test(f))).toEqual([]);
+    // A missing asset is a plain 404, never the page or a server error.
+    expect((await get('/assets/no-such-file-abc123.js')).status).toBe(404);
+  });
+
+  it('keeps the build manifest to itself', async () => {
+    const r = await get('/.vite/manifest.json');
+    expect(r.headers['content-type']).toMatch(/^text\/html/);
+  });
+
+  it('serves a robots.txt that opens the public pages and closes the API, admin and private screens', async () => {
+    const r = await get('/robots.txt');
+    expect(r.status).toBe(200);
+    expect(r.headers['content-type']).toMatch(/^text\/plain/);
+    const robots = robotsParser(`${server.url}/robots.txt`, r.body.toString('utf8'));
+    const allowed = (p: string) => robots.isAllowed(server.url + p, 'AnyBot');
+    for (const p of ['/', '/events', '/events/12', '/events/12/book', '/impact', '/impact/groups/3', '/safety'])
+      expect(allowed(p), p).toBe(true);
+    for (const p of [
+      '/api/events',
+      '/admin',
+      '/admin/mailbox',
+      '/desk/12',
+      '/bench',
+      '/items/40',
+      '/me/skills',
+      '/groups/3/people',
+      '/bookings/T5N-9WZ?token=x',
+      '/events/12/manage',
+      '/events/12/board',
+      '/events/12/live',
+    ])
+      expect(allowed(p), p).toBe(false);
+  });
+
+  it('ships Nunito in latin and latin-ext only, in the weights used, and preloads the body weight', async () => {
+    const html = await builtHtml();
+    const preload = /<link rel="preload" href="([^"]+)" as="font" type="font\/woff2" crossorigin[^>]*>/.exec(html);
+    expect(preload?.[1]).toMatch(/^\/assets\/nunito-latin-400-normal-[\w-]+\.woff2$/);
+    const font = await get(preload![1]);
+    expect(font.status).toBe(200);
+    expect(font.headers['content-type']).toBe('font/woff2');
+    expect(font.headers['cache-control']).toContain('immutable');
+
+    const css = (await get(/<link rel="stylesheet" crossorigin href="([^"]+)"/.exec(html)![1])).body.toString('utf8');
+    const faces = [...css.matchAll(/@font-face\s*\{([^}]*)\}/g)].map((m) => m[1]);
+    const nunito = faces.filter((f) => /font-family:\s*["']?Nunito/.test(f));
+    const urls = nunito.flatMap((f) => [...f.matchAll(/url\(([^)]+)\)/g)].map((m) => m[1]));
+    const weights = new Set(nunito.map((f) => /font-weight:\s*(\d+)/.exec(f)![1]));
+    expect([...weights].sort()).toEqual(['400', '600', '700', '800']);
+    expect(urls).toHaveLength(8);
+    for (const u of urls) expect(u).toMatch(/\/assets\/nunito-latin(-ext)?-(400|600|700|800)-normal-[\w-]+\.woff2$/);
+    expect(urls).toContain(preload![1]);
+    // Every face says which characters it covers, so a page in English fetches the latin files alone.
+    for (const f of nunito) expect(f).toMatch(/unicode-range:/);
+    const fontFiles = readdirSync(path.join(dist, 'assets')).filter((f) => /\.(woff2?|ttf)$/.test(f));
+    expect(fontFiles.filter((f) => /cyrillic|vietnamese|greek/.test(f) || !f.endsWith('.woff2'))).toEqual([]);
+  });
+});
