@@ -143,6 +143,8 @@ const table: Row[] = [
   ['GET', (g) => `/api/public/impact?groupId=${g.own}`, everyone(200)],
   ['GET', () => '/api/public/impact', everyone(200)],
   ['GET', () => '/api/public/bookings/ZZZ-ZZZ', everyone(404)],
+  // The calendar file needs the booking's secret token, whoever asks.
+  ['GET', () => '/api/bookings/ZZZ-ZZZ/calendar?token=nope', everyone(404)],
   ['GET', () => '/api/stats/method', everyone(200)],
   ['GET', () => '/api/admin/impact-settings', adminOnly],
   ['PUT', () => '/api/admin/impact-settings', { ...adminOnly, admin: 400 }, { displacement: 2 }],

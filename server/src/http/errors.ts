@@ -36,6 +36,8 @@ export function errorHandler(log: (msg: string, err: unknown) => void = console.
     else if (err instanceof ZodError) e = new HttpError(400, 'invalid', 'Some fields need attention.', zodFields(err));
     else if (err?.code === 'EBADCSRFTOKEN' || err?.message === 'invalid csrf token')
       e = new HttpError(403, 'csrf', 'The form expired or came from elsewhere. Reload the page and try again.');
+    else if (err instanceof URIError)
+      e = new HttpError(400, 'bad-url', 'The address holds a broken %-escape. Check the link and try again.');
     else if (err?.type === 'entity.too.large') e = new HttpError(413, 'too-large', 'The request is too large.');
     else if (err?.type === 'entity.parse.failed')
       e = new HttpError(400, 'bad-json', 'The request body is not valid JSON.');

@@ -9,6 +9,7 @@ import { ConfirmDialog } from '../../components/ui/confirm-dialog';
 import { Alert, Card, Spinner } from '../../components/ui/feedback';
 import { SelectField } from '../../components/ui/field';
 import { paths } from '../../config/paths';
+import { bookingCalendarUrl } from '../../features/bookings/api/calendar-url';
 import { useCancelBooking } from '../../features/bookings/api/cancel-booking';
 import { useBooking, bookingQuery } from '../../features/bookings/api/get-booking';
 import { useMoveBooking, useRefreshBooking } from '../../features/bookings/api/move-booking';
@@ -124,6 +125,15 @@ export function ManageBookingPage() {
             {b.venue.name}, {b.venue.address}, {b.venue.town}
           </p>
           <p className="text-sm text-ink-soft">{b.event.groupName}</p>
+          {b.status === 'confirmed' && b.event.status !== 'cancelled' && (
+            <a
+              href={bookingCalendarUrl(b.reference, token)}
+              download={`mendery-${b.reference}.ics`}
+              className="mt-3 inline-flex min-h-11 items-center justify-center gap-2 rounded-lg bg-white px-4 py-2 font-bold text-navy ring-1 ring-navy/25 transition hover:bg-navy/5"
+            >
+              Add to calendar
+            </a>
+          )}
         </div>
         {b.status === 'confirmed' && (
           <figure className="justify-self-center text-center">

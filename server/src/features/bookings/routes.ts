@@ -14,6 +14,8 @@ import * as bookingService from './service';
 import * as changes from './changes';
 import * as waitlist from './waitlist';
 import { photoWithOwner } from './queries/photos';
+import { bookingCalendar } from './calendar';
+import { sendCalendar } from '../../core/calendar';
 
 import { rebook, rebookView } from './return-visit';
 
@@ -55,6 +57,13 @@ export function bookingRoutes(ctx: AppContext) {
     const b = await byToken(req);
     res.setHeader('Cache-Control', 'no-store');
     res.json(await booking.bookingView(ctx, b.id));
+  });
+
+  /** The booked slot for the visitor's calendar: the same secret link as the booking page. */
+  r.get('/bookings/:reference/calendar', async (req, res) => {
+    const b = await byToken(req);
+    const { text, filename } = await bookingCalendar(ctx, b.id);
+    sendCalendar(res, text, filename, 'attachment');
   });
 
   r.get('/public/bookings/:reference', async (req, res) => {

@@ -1,0 +1,110 @@
+import type { GroupRole } from './constants';
+
+/** One event of a calendar file, in Mendery's words; the server writes it as iCalendar. Times are instants (UTC). */
+export interface CalendarEntry {
+  /** Stable across downloads, so a calendar app updates the entry instead of adding a second one. */
+  uid: string;
+  start: Date;
+  end: Date;
+  summary: string;
+  location: string;
+  description: string;
+  url: string;
+  /** DTSTAMP: when the file was written, so an app that imports it again takes it as the newest word. */
+  stamp: Date;
+}
+
+export interface CalendarVenue {
+  name: string;
+  address: string;
+  town: string;
+}
+
+/** The venue as one line: name, address and town, empty parts left out. */
+export const venueLine = (v: CalendarVenue) =>
+  [v.name, v.address, v.town]
+    .map((s) => s.trim())
+    .filter(Boolean)
+    .join(', ');
+
+/** The host part of the UIDs: the public URL's host, so two Mendery sites never share a UID. */
+export const uidHost = (publicUrl: string) => {
+  try {
+    return new URL(publicUrl).host || 'mendery.local';
+  } catch {
+    return 'mendery.local';
+  }
+};
+
+export interface BookingFacts {
+  reference: string;
+  eventTitle: string;
+  groupName: string;
+  slotStartsAt: Date;
+  slotEndsAt: Date;
+  venue: CalendarVenue;
+  manageUrl: string;
+  itemNames: string[];
+}
+
+/** A visitor's booked slot as a calendar entry: the slot's times, the venue, the reference and the booking page. */
+export function bookingEntry(b: BookingFacts, publicUrl: string, now: Date): CalendarEntry {
+  return {
+    uid: `booking-${b.reference}@${uidHost(publicUrl)}`,
+    start: b.slotStartsAt,
+    end: b.slotEndsAt,
+    summary: `Repair slot: ${b.eventTitle}`,
+    location: venueLine(b.venue),
+    description: [
+      `Booking reference: ${b.reference}`,
+      `${b.groupName}.`,
+      b.itemNames.length ? `You are bringing: ${b.itemNames.join('; ')}.` : '',
+      `Show the reference or the QR code on your booking page at the reception desk.`,
+      `Your booking page (move or cancel): ${b.manageUrl}`,
+    ]
+      .filter(Boolean)
+      .join('\n'),
+    url: b.manageUrl,
+    stamp: now,
+  };
+}
+
+/** What a volunteer does at a session, in the words of the volunteer's page. */
+export const shiftSummary = (role: GroupRole, eventTitle: string) =>
+  role === 'fixer'
+    ? `Fixing at ${eventTitle}`
+    : role === 'host'
+      ? `Reception at ${eventTitle}`
+      : `Organising ${eventTitle}`;
+
+export interface ShiftFacts {
+  shiftId: number;
+  eventId: number;
+  eventTitle: string;
+  groupName: string;
+  role: GroupRole;
+  startsAt: Date;
+  endsAt: Date;
+  venue: CalendarVenue;
+  bench: string | null;
+}
+
+/** A volunteer's shift as a calendar entry: the shift's hours (not the whole session's), the venue, the session's page. */
+export function shiftEntry(s: ShiftFacts, publicUrl: string, now: Date): CalendarEntry {
+  const url = `${publicUrl}/events/${s.eventId}`;
+  return {
+    uid: `shift-${s.shiftId}@${uidHost(publicUrl)}`,
+    start: s.startsAt,
+    end: s.endsAt,
+    summary: shiftSummary(s.role, s.eventTitle),
+    location: venueLine(s.venue),
+    description: [`${s.groupName}.`, s.bench ? `Your bench: ${s.bench}.` : '', `The session in Mendery: ${url}`]
+      .filter(Boolean)
+      .join('\n'),
+    url,
+    stamp: now,
+  };
+}
+
+/** How far back a volunteer's feed reaches, so last week's shift is still there to look back on. */
+export const FEED_PAST_DAYS = 30;
