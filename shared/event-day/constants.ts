@@ -50,17 +50,17 @@ export const mayRecordOutcome = (status: ItemStatus) => canMoveTo(status, 'done'
 /** A fixer may start on an item that waits in the hall, not on one already at a bench. */
 export const mayStartRepair = (status: ItemStatus) => canMoveTo(status, 'at-bench');
 
-/** What the fixer records. The first three map onto the open repair data vocabulary's Fixed / Repairable / End of life. */
+/** What the fixer records. The file formats map these onto their own status words (shared/impact/open-repair-data.ts). */
 export const OUTCOMES = ['fixed', 'parts-needed', 'advice', 'end-of-life'] as const;
 export type Outcome = (typeof OUTCOMES)[number];
 export const OUTCOME_LABELS: Record<Outcome, string> = {
   fixed: 'Fixed',
   'parts-needed': 'Needs a part',
   advice: 'Advice given',
-  'end-of-life': 'End of life',
+  'end-of-life': 'Beyond mending',
 };
 
-/** Barriers to repair for an end-of-life item, as the Open Repair Data Standard words them (REFERENCE.md §5). */
+/** Why an item is beyond mending. Stored codes; the words on screen and their order are below. */
 export const BARRIERS = [
   'spare-parts-not-available',
   'spare-parts-too-expensive',
@@ -70,13 +70,30 @@ export const BARRIERS = [
   'too-worn-out',
 ] as const;
 export type Barrier = (typeof BARRIERS)[number];
+/** The order a fixer meets them at the bench: the item itself, getting in, finding the fault, then the part. */
+export const BARRIER_CHOICES: readonly Barrier[] = [
+  'too-worn-out',
+  'no-way-to-open',
+  'lack-of-equipment',
+  'repair-information-not-available',
+  'spare-parts-not-available',
+  'spare-parts-too-expensive',
+];
 export const BARRIER_LABELS: Record<Barrier, string> = {
-  'spare-parts-not-available': 'Spare parts not available',
-  'spare-parts-too-expensive': 'Spare parts too expensive',
-  'no-way-to-open': 'No way to open the product',
-  'repair-information-not-available': 'Repair information not available',
-  'lack-of-equipment': 'Lack of equipment',
-  'too-worn-out': 'Product too worn out',
+  'too-worn-out': 'Worn past use',
+  'no-way-to-open': 'We couldn’t get inside',
+  'lack-of-equipment': 'It needs a tool we lack',
+  'repair-information-not-available': 'No guide or diagram to go by',
+  'spare-parts-not-available': 'The part can’t be had',
+  'spare-parts-too-expensive': 'The part costs too much',
+};
+export const BARRIER_HINTS: Record<Barrier, string> = {
+  'too-worn-out': 'Too many faults at once, or not safe to use again.',
+  'no-way-to-open': 'Glued or welded shut, or it would break on opening.',
+  'lack-of-equipment': 'A special tool, meter or jig the group does not have.',
+  'repair-information-not-available': 'No manual, circuit diagram or fault guide to be found.',
+  'spare-parts-not-available': 'No longer made or sold, and nothing fits from salvage.',
+  'spare-parts-too-expensive': 'More than the item is worth to its owner.',
 };
 
 /** Arrival answers at the desk, item by item. */

@@ -1,4 +1,4 @@
-import { BARRIERS, type Barrier, type Outcome } from '../event-day/constants';
+import { BARRIER_CHOICES, type Barrier, type Outcome } from '../event-day/constants';
 import { countedBarrier, DIVERTING_OUTCOME, lastVisits } from './visits';
 
 /**
@@ -158,7 +158,7 @@ export function totalsFromCells(
   if (!(displacement >= 0 && displacement <= 1)) throw new RangeError('The displacement factor is between 0 and 1.');
   const cats = new Map(categories.map((c) => [c.id, c]));
   const all = counts(cells, cats, displacement);
-  const barriers = BARRIERS.map((b) => ({
+  const barriers = BARRIER_CHOICES.map((b) => ({
     barrier: b,
     count: cells.reduce((n, c) => n + (c.barriers[b] ?? 0), 0),
   })).filter((b) => b.count > 0);

@@ -38,7 +38,7 @@ export function mayRecordFixed(item: { mains: boolean }, latest: CheckOutcome | 
   return {
     ok: false,
     code: FIXED_REFUSALS.checkFailed,
-    message: `The latest safety check failed: ${reasons} It cannot go home as fixed; record it as needing a part or end of life, or repair it and check again.`,
+    message: `The latest safety check failed: ${reasons} It cannot go home as fixed; record it as needing a part or as beyond mending, or repair it and check again.`,
     field: 'safety',
     fieldMessage: reasons,
   };

@@ -113,7 +113,7 @@ export const OUTCOME_ISSUES = {
 export const outcomeSchema = z
   .object({
     outcome: z.enum(OUTCOMES, { error: 'Choose what happened.' }),
-    barrier: z.enum(BARRIERS, { error: 'Choose the barrier to repair.' }).optional(),
+    barrier: z.enum(BARRIERS, { error: 'Choose one of the reasons listed.' }).optional(),
     part: z
       .object({
         description: z
@@ -152,14 +152,14 @@ export const outcomeSchema = z
       ctx.addIssue({
         code: 'custom',
         path: ['barrier'],
-        message: 'Choose the barrier to repair for an end-of-life item.',
+        message: 'Choose why it can’t be mended.',
         params: { code: OUTCOME_ISSUES.barrierRequired },
       });
     if (v.outcome !== 'end-of-life' && v.barrier)
       ctx.addIssue({
         code: 'custom',
         path: ['barrier'],
-        message: 'A barrier is recorded only for end-of-life items.',
+        message: 'A reason is recorded only for an item beyond mending.',
         params: { code: OUTCOME_ISSUES.barrierNotAllowed },
       });
     if (v.outcome === 'parts-needed' && !v.part)

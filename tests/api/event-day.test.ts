@@ -195,7 +195,7 @@ describe('at the bench', () => {
     expect(failed.status).toBe(201);
     expect(failed.json.pass).toBe(false);
     expect(failed.json.failures.join(' ')).toMatch(/0\.3 MΩ/);
-    expect(failed.json.suggestion).toMatch(/needing a part, or as end of life/);
+    expect(failed.json.suggestion).toMatch(/needing a part, or as beyond mending/);
     const refused = await as.fixer.post(`/api/items/${ids.kettle}/outcome`, { outcome: 'fixed', minutes: 25 });
     expect(refused.status).toBe(422);
     expect(refused.json.error.code).toBe('safety-check-failed');
@@ -242,7 +242,7 @@ describe('at the bench', () => {
       barrier: 'too-worn-out',
     });
     expect(stray.status).toBe(400);
-    expect(stray.json.error.fields.barrier).toMatch(/only for end-of-life/);
+    expect(stray.json.error.fields.barrier).toMatch(/only for an item beyond mending/);
     const part = await as.organiser.post(`/api/items/${ids.coat}/outcome`, { outcome: 'parts-needed' });
     expect(part.status).toBe(400);
     expect(part.json.error.fields['part.description']).toBeTruthy();
@@ -264,7 +264,7 @@ describe('at the bench', () => {
     expect(fixed.json.outcome).toMatchObject({
       outcome: 'end-of-life',
       barrier: 'too-worn-out',
-      barrierLabel: 'Product too worn out',
+      barrierLabel: 'Worn past use',
       partDescription: null,
     });
   });

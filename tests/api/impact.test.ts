@@ -189,14 +189,46 @@ describe('exports', () => {
       expect([
         'Spare parts not available',
         'Spare parts too expensive',
-        'No way to open the product',
+        'No way to open product',
         'Repair information not available',
         'Lack of equipment',
-        'Product too worn out',
+        'Item too worn out',
       ]).toContain(b);
     expect(rows.every((x) => /^\d{4}-\d{2}-\d{2}$/.test(x.event_date))).toBe(true);
     expect(r.text).not.toMatch(/@example\.org/);
     expect((await as.fixer.get(`/api/exports/open-repair-data.csv?groupId=${groupId}`)).status).toBe(403);
+  });
+
+  it('writes the codelist’s own texts for each stored reason, while the screens use other words', async () => {
+    // Source: REFERENCE.md §5, ORDS v0.3 repair_barrier_if_end_of_life codelist, codes 1–6 in order.
+    const codelist: Record<string, string> = {
+      'spare-parts-not-available': 'Spare parts not available',
+      'spare-parts-too-expensive': 'Spare parts too expensive',
+      'no-way-to-open': 'No way to open product',
+      'repair-information-not-available': 'Repair information not available',
+      'lack-of-equipment': 'Lack of equipment',
+      'too-worn-out': 'Item too worn out',
+    };
+    const r = await as.organiser.get(`/api/exports/open-repair-data.csv?groupId=${groupId}`);
+    const rows = parse(r.text, { columns: true }) as Record<string, string>[];
+    const stored = (await db.db.execute(sql`SELECT item_id AS id, outcome, barrier FROM item_outcomes`)) as unknown as [
+      { id: number; outcome: string; barrier: string | null }[],
+    ];
+    const byId = new Map(stored[0].map((o) => [`mendery-${o.id}`, o]));
+    let checked = 0;
+    for (const row of rows) {
+      const o = byId.get(row.id);
+      if (o?.outcome === 'end-of-life' && o.barrier) {
+        expect(row.repair_status).toBe('End of life');
+        expect(row.repair_barrier_if_end_of_life).toBe(codelist[o.barrier]);
+        checked++;
+      } else expect(row.repair_barrier_if_end_of_life).toBe('');
+    }
+    expect(checked).toBeGreaterThan(0);
+    // Mendery's own file and screens keep their own words.
+    const own = await as.organiser.get(`/api/exports/records.csv?groupId=${groupId}`);
+    expect(own.text).not.toMatch(/End of life|Spare parts|No way to open/);
+    expect(own.text).toMatch(/Beyond mending/);
   });
 });
 

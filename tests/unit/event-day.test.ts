@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { BARRIERS, BARRIER_LABELS, canMoveTo, ITEM_STATUSES } from '../../shared/event-day/constants';
+import { canMoveTo, ITEM_STATUSES } from '../../shared/event-day/constants';
 import { fits, LABEL_LAYOUTS, layoutById, paginate, A4 } from '../../shared/event-day/label-sheets';
 import { estimateWaits, liveWarnings, queueOrder } from '../../shared/event-day/queue';
 import {
@@ -54,17 +54,6 @@ describe('the item lifecycle', () => {
     expect(canMoveTo('done', 'no-show')).toBe(false);
     expect(canMoveTo('no-show', 'checked-in')).toBe(true);
     for (const s of ITEM_STATUSES) expect(canMoveTo(s, 'booked')).toBe(false);
-  });
-
-  it('words the barriers as the Open Repair Data Standard does (REFERENCE.md §5)', () => {
-    expect(BARRIERS.map((b) => BARRIER_LABELS[b].toLowerCase())).toEqual([
-      'spare parts not available',
-      'spare parts too expensive',
-      'no way to open the product',
-      'repair information not available',
-      'lack of equipment',
-      'product too worn out',
-    ]);
   });
 
   it('asks for a barrier exactly for end of life, and for the part when one is needed', () => {

@@ -207,7 +207,7 @@ function Charts({ d }: { d: PublicImpact }) {
         title="What happened to the items"
         summary={
           known
-            ? `${share(d.fixed)} of the items with a recorded outcome were fixed; the others needed a part, got advice, or were at the end of their life.`
+            ? `${share(d.fixed)} of the items with a recorded outcome were fixed; the others needed a part, got advice, or were beyond mending.`
             : 'No outcomes recorded yet.'
         }
         table={

@@ -84,7 +84,7 @@ export function ImpactRecordsPage() {
   if (filter.eventId) chips.push({ key: 'eventId', label: `Session: ${first?.eventTitle ?? `no. ${filter.eventId}`}` });
   if (filter.outcome) chips.push({ key: 'outcome', label: `Outcome: ${outcomeText(filter.outcome)}` });
   if (filter.categoryId) chips.push({ key: 'categoryId', label: `Category: ${categoryName}` });
-  if (filter.barrier) chips.push({ key: 'barrier', label: `Barrier: ${BARRIER_LABELS[filter.barrier]}` });
+  if (filter.barrier) chips.push({ key: 'barrier', label: `Why: ${BARRIER_LABELS[filter.barrier]}` });
   if (filter.month)
     chips.push({ key: 'month', label: `Month: ${monthFormat.format(new Date(`${filter.month}-01T00:00:00Z`))}` });
   if (filter.from)
@@ -206,7 +206,7 @@ function RecordsTable({ rows, showGroup }: { rows: RecordRow[]; showGroup: boole
                 Outcome
               </th>
               <th scope="col" className="px-3 py-2 font-semibold">
-                Barrier
+                Why not mended
               </th>
               <th scope="col" className="px-3 py-2 text-right font-semibold">
                 kg
@@ -267,7 +267,7 @@ function RecordsTable({ rows, showGroup }: { rows: RecordRow[]; showGroup: boole
               <dd>{r.visitor}</dd>
               {r.barrierLabel && (
                 <>
-                  <dt className="text-ink-soft">Barrier</dt>
+                  <dt className="text-ink-soft">Why not mended</dt>
                   <dd>{r.barrierLabel}</dd>
                 </>
               )}

@@ -45,7 +45,7 @@ export function SalvagePage() {
       {organiser && <GroupTabs groupId={groupId} />}
       <PageTitle
         title="Salvage stock"
-        lead="Parts saved from end-of-life items or given to the group, and the box each is in."
+        lead="Parts saved from items beyond mending or given to the group, and the box each is in."
       />
       <form
         role="search"

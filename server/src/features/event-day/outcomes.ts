@@ -101,7 +101,7 @@ async function insertCheck(tx: Tx, row: ItemRow, s: SafetyCheckValues, user: Ses
 const suggestion = (v: SafetyVerdict) =>
   v.pass
     ? null
-    : 'It cannot go home as fixed. Record it as needing a part, or as end of life, and tell the visitor not to use it.';
+    : 'It cannot go home as fixed. Record it as needing a part, or as beyond mending, and tell the visitor not to use it.';
 
 /** Records an electrical safety check; the verdict comes from the shared limits table, never from the client. */
 export async function recordSafetyCheck(

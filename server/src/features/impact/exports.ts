@@ -1,6 +1,6 @@
 import { stringify } from 'csv-stringify/sync';
-import { BARRIER_LABELS, OUTCOME_LABELS, type Barrier, type Outcome } from '../../../../shared/event-day/constants';
-import { REPAIR_STATUS_OF, type RepairStatus } from '../../../../shared/impact/visits';
+import { BARRIER_LABELS, OUTCOME_LABELS } from '../../../../shared/event-day/constants';
+import { ordsBarrierText, ordsStatusText } from '../../../../shared/impact/open-repair-data';
 import type { AppContext } from '../../context';
 import { openRepairDataRows, recordFileRows } from './queries/exports';
 import type { StatsFilter } from './queries/stats';
@@ -26,15 +26,6 @@ export const ORDS_FIELDS = [
   'problem',
 ] as const;
 
-const ORDS_STATUS: Record<RepairStatus, string> = {
-  fixed: 'Fixed',
-  repairable: 'Repairable',
-  'end-of-life': 'End of life',
-};
-/** Fixed → Fixed; a part needed or advice given → Repairable; end of life → End of life; nothing recorded → Unknown. */
-export const ordsStatus = (o: Outcome | null) => (o ? ORDS_STATUS[REPAIR_STATUS_OF[o]] : 'Unknown');
-export const ordsBarrier = (b: Barrier | null) => (b ? BARRIER_LABELS[b] : '');
-
 /** Personal data stays out of a pooled file: addresses and phone numbers in the visitor's words are blanked. */
 const scrub = (text: string) =>
   text
@@ -55,8 +46,8 @@ export async function openRepairDataCsv(ctx: AppContext, f: StatsFilter): Promis
       brand: r.brand ?? '',
       year_of_manufacture: r.ageYears !== null ? String(r.startsAt.getUTCFullYear() - r.ageYears) : '',
       product_age: r.ageYears ?? '',
-      repair_status: ordsStatus(r.outcome),
-      repair_barrier_if_end_of_life: r.outcome === 'end-of-life' ? ordsBarrier(r.barrier) : '',
+      repair_status: ordsStatusText(r.outcome),
+      repair_barrier_if_end_of_life: ordsBarrierText(r.outcome, r.barrier),
       group_identifier: r.groupSlug,
       event_date: r.startsAt.toISOString().slice(0, 10),
       problem: scrub(r.fault),

@@ -64,7 +64,7 @@ export async function sendThankYous(ctx: AppContext): Promise<number> {
           composeMail(v.email, `${event.title}: what we did together`, {
             paragraphs: [
               `Hello ${v.name.split(' ')[0]},`,
-              `thank you for your time at ${event.title}. Together we saw ${s.items} items: ${s.fixed} fixed, ${s.partsNeeded} waiting for a part, ${s.advice} with advice and ${s.endOfLife} at the end of their life.`,
+              `thank you for your time at ${event.title}. Together we saw ${s.items} items: ${s.fixed} fixed, ${s.partsNeeded} waiting for a part, ${s.advice} with advice and ${s.endOfLife} beyond mending.`,
               `That kept about ${kg(s.kgDiverted)} out of landfill and avoided about ${kg(s.co2eKg)} CO2e.`,
             ],
             action: { label: 'See the session’s report', url: `${ctx.env.publicUrl}/events/${event.id}/report` },

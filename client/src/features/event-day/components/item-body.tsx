@@ -161,7 +161,7 @@ export function ItemBody({ item, toolkit, whatNext }: { item: ItemView; toolkit:
         <>
           <Card className={item.outcome.outcome === 'fixed' ? 'ring-2 ring-sage' : ''}>
             <h2 className="text-lg">Outcome: {item.outcome.outcomeLabel}</h2>
-            {item.outcome.barrierLabel && <p>Barrier: {item.outcome.barrierLabel}</p>}
+            {item.outcome.barrierLabel && <p>Why: {item.outcome.barrierLabel}</p>}
             {item.outcome.partDescription && (
               <p>
                 Part needed: {item.outcome.partDescription}

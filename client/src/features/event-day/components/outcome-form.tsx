@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import {
-  BARRIERS,
+  BARRIER_CHOICES,
+  BARRIER_HINTS,
   BARRIER_LABELS,
   OUTCOMES,
   OUTCOME_LABELS,
@@ -9,7 +10,7 @@ import {
 import { outcomeSchema, type OutcomeInput } from '../../../../../shared/schemas/event-day';
 import { Button } from '../../../components/ui/button';
 import { Alert, Card } from '../../../components/ui/feedback';
-import { SelectField, TextAreaField, TextField } from '../../../components/ui/field';
+import { TextAreaField, TextField } from '../../../components/ui/field';
 import { ApiError } from '../../../lib/api';
 import { usePendingOutcomes, useRecordOutcome } from '../api/record-outcome';
 import type { ItemView, SafetyCheckRecord } from '../api/types';
@@ -119,19 +120,37 @@ export function OutcomeForm({
       )}
       <div className="mt-3 space-y-3">
         {outcome === 'end-of-life' && (
-          <SelectField
-            label="Barrier to repair"
-            value={barrier}
-            onChange={(e) => setBarrier(e.target.value as typeof barrier)}
-            error={errors.barrier}
-          >
-            <option value="">Choose…</option>
-            {BARRIERS.map((b) => (
-              <option key={b} value={b}>
-                {BARRIER_LABELS[b]}
-              </option>
-            ))}
-          </SelectField>
+          <fieldset aria-describedby={errors.barrier ? 'barrier-error' : undefined}>
+            <legend className="mb-1 font-semibold">Why can’t it be mended?</legend>
+            <div className="space-y-1.5">
+              {BARRIER_CHOICES.map((b) => (
+                <label
+                  key={b}
+                  className={`flex min-h-11 cursor-pointer items-start gap-2 rounded-lg px-3 py-2 ring-1 ${TILE_FOCUS} ${barrier === b ? 'bg-navy/10 ring-navy' : 'bg-white ring-ink/20'}`}
+                >
+                  <input
+                    type="radio"
+                    name="barrier"
+                    className="mt-1 size-4 shrink-0 accent-navy"
+                    checked={barrier === b}
+                    onChange={() => {
+                      setBarrier(b);
+                      setErrors(({ barrier: _, ...rest }) => rest);
+                    }}
+                  />
+                  <span>
+                    <span className="block font-semibold">{BARRIER_LABELS[b]}</span>
+                    <span className="block text-sm text-ink-soft">{BARRIER_HINTS[b]}</span>
+                  </span>
+                </label>
+              ))}
+            </div>
+            {errors.barrier && (
+              <p id="barrier-error" className="mt-1 text-sm font-semibold text-alert">
+                {errors.barrier}
+              </p>
+            )}
+          </fieldset>
         )}
         {outcome === 'parts-needed' && (
           <>

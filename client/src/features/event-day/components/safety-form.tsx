@@ -151,8 +151,8 @@ export function SafetyForm({ item }: { item: ItemView }) {
               'It may be recorded as fixed.'
             ) : (
               <>
-                {latest.failures.join(' ')} It cannot go home as fixed: record it as needing a part, or as end of life —
-                or repair it and check again.
+                {latest.failures.join(' ')} It cannot go home as fixed: record it as needing a part, or as beyond
+                mending — or repair it and check again.
               </>
             )}
           </Alert>

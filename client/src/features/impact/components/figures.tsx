@@ -255,15 +255,15 @@ export function Figures({ stats, filter }: { stats: Stats; filter: StatsFilter }
         </ChartCard>
 
         <ChartCard
-          title="Barriers to repair"
+          title="Why items were beyond mending"
           summary={
             barriers.length === 0
-              ? 'No end-of-life item has a barrier recorded.'
-              : `${plural(barrierTotal, 'end-of-life item')} with a barrier recorded; most often: ${barriers[0].label.toLowerCase()} (${barriers[0].count}).`
+              ? 'No item beyond mending has a reason recorded.'
+              : `${plural(barrierTotal, 'item')} beyond mending with a reason recorded; most often: ${barriers[0].label.toLowerCase()} (${barriers[0].count}).`
           }
           table={
             barriers.length > 0 && (
-              <FigureTable head={['Barrier', 'Items']}>
+              <FigureTable head={['Reason', 'Items']}>
                 {barriers.map((b) => (
                   <tr key={b.barrier}>
                     <th scope="row" className="py-1 pr-3 text-left font-semibold">

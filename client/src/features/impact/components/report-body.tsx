@@ -1,7 +1,7 @@
 import type { ReactNode } from 'react';
 import { Bar, BarChart, CartesianGrid, Legend, ResponsiveContainer, XAxis, YAxis } from 'recharts';
 import type { EventReport } from '../api/types';
-import { BARRIER_LABELS } from '../../../../../shared/event-day/constants';
+import { BARRIER_LABELS, OUTCOME_LABELS } from '../../../../../shared/event-day/constants';
 import { formatDay, formatTimeRange } from '../../../../../shared/format';
 import { EmptyState } from '../../../components/ui/feedback';
 import { CO2E, oneDp, percent, whole } from './display';
@@ -43,7 +43,7 @@ export function ReportBody({ r }: { r: EventReport }) {
           <Tile label="Fixed" value={whole.format(stats.fixed)} />
           <Tile label="Need a part" value={whole.format(stats.partsNeeded)} />
           <Tile label="Advice given" value={whole.format(stats.advice)} />
-          <Tile label="End of life" value={whole.format(stats.endOfLife)} />
+          <Tile label={OUTCOME_LABELS['end-of-life']} value={whole.format(stats.endOfLife)} />
           <Tile label="Fix rate" value={percent(stats.fixRate)} />
           <Tile label="kg diverted from landfill" value={oneDp.format(stats.kgDiverted)} />
           <Tile label={<>kg {CO2E} avoided</>} value={oneDp.format(stats.co2eKg)} />
@@ -68,9 +68,9 @@ export function ReportBody({ r }: { r: EventReport }) {
       )}
 
       <div className="grid gap-6 sm:grid-cols-2 print:grid-cols-2">
-        <Block title="Barriers to repair">
+        <Block title="Why items were beyond mending">
           {stats.barriers.length === 0 ? (
-            <p className="text-sm text-ink-soft">No end-of-life item had a barrier recorded.</p>
+            <p className="text-sm text-ink-soft">No item beyond mending had a reason recorded.</p>
           ) : (
             <ul className="space-y-1 text-sm">
               {[...stats.barriers]

@@ -1,0 +1,29 @@
+import type { Barrier, Outcome } from '../event-day/constants';
+import { REPAIR_STATUS_OF, type RepairStatus } from './visits';
+
+/**
+ * The Open Repair Data Standard's codelists (v0.3, REFERENCE.md §5). Their wording belongs to the file only: the
+ * screens use Mendery's own words (shared/event-day/constants.ts).
+ */
+export const ORDS_REPAIR_STATUS: Record<RepairStatus | 'unknown', { code: number; text: string }> = {
+  unknown: { code: 0, text: 'Unknown' },
+  fixed: { code: 1, text: 'Fixed' },
+  repairable: { code: 2, text: 'Repairable' },
+  'end-of-life': { code: 3, text: 'End of life' },
+};
+
+export const ORDS_BARRIER: Record<Barrier, { code: number; text: string }> = {
+  'spare-parts-not-available': { code: 1, text: 'Spare parts not available' },
+  'spare-parts-too-expensive': { code: 2, text: 'Spare parts too expensive' },
+  'no-way-to-open': { code: 3, text: 'No way to open product' },
+  'repair-information-not-available': { code: 4, text: 'Repair information not available' },
+  'lack-of-equipment': { code: 5, text: 'Lack of equipment' },
+  'too-worn-out': { code: 6, text: 'Item too worn out' },
+};
+
+/** Fixed → Fixed; a part needed or advice given → Repairable; beyond mending → End of life; none → Unknown. */
+export const ordsStatusText = (o: Outcome | null) => ORDS_REPAIR_STATUS[o ? REPAIR_STATUS_OF[o] : 'unknown'].text;
+
+/** The barrier column is filled only where the status is End of life. */
+export const ordsBarrierText = (o: Outcome | null, b: Barrier | null) =>
+  o && REPAIR_STATUS_OF[o] === 'end-of-life' && b ? ORDS_BARRIER[b].text : '';
