@@ -68,7 +68,7 @@ async function demoIds(app: DemoApp) {
     .limit(1);
   const tagged = async (code: string) =>
     (await db.select().from(bookingItems).where(eq(bookingItems.tagCode, code)))[0].id;
-  const [followUp] = await db.select().from(followUps).limit(1);
+  const [followUp] = await db.select().from(followUps).where(eq(followUps.status, 'open')).limit(1);
   // An invitation and a waiting-list offer with known tokens: their real links only ever travel by mail.
   await db.insert(invites).values({
     groupId: kb,
@@ -173,7 +173,8 @@ function screens(d: Awaited<ReturnType<typeof demoIds>>): Shot[] {
     s('organiser', 'settings', `/groups/${d.kb}/settings`),
     s('organiser', 'impact', `/groups/${d.kb}/impact`),
     s('organiser', 'follow-ups', `/groups/${d.kb}/follow-ups`),
-    s('organiser', 'records', '/impact/records'),
+    s('organiser', 'records', `/impact/records?groupId=${d.kb}`),
+    s('organiser', 'records-unfiltered', '/impact/records'),
     s('organiser', 'event-report', `/events/${d.past}/report`),
     s('organiser', 'group-report', `/groups/${d.kb}/report`),
     s('organiser', 'salvage', `/groups/${d.kb}/salvage`),

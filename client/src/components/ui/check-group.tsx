@@ -16,7 +16,7 @@ export function CheckGroup({
       <legend className="px-1 text-sm font-bold">{legend}</legend>
       {options.map((o) => (
         <label key={o.value} className="flex items-start gap-2 py-1 text-sm">
-          <input type="checkbox" value={o.value} className="mt-0.5 size-5 accent-alert" {...field} />
+          <input type="checkbox" value={o.value} className="mt-0.5 size-5 shrink-0 accent-alert" {...field} />
           {o.label}
         </label>
       ))}

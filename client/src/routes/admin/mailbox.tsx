@@ -36,7 +36,7 @@ export function MailboxPage() {
               {list.data?.length ?? 0} message{list.data?.length === 1 ? '' : 's'}
             </h2>
             <Button variant="quiet" disabled={!list.data?.length} onClick={() => setConfirming(true)}>
-              Empty
+              Delete all mail
             </Button>
           </div>
           {list.isPending && (

@@ -8,6 +8,7 @@ import { paths } from '../../config/paths';
 import { useConfirmReset } from '../../features/auth/api/confirm-reset';
 import { useRequestReset } from '../../features/auth/api/request-reset';
 import { useVerifyEmail } from '../../features/auth/api/verify-email';
+import { ApiError } from '../../lib/api';
 import { applyServerErrors, useZodForm } from '../../lib/form';
 
 export function VerifyEmailPage() {
@@ -24,7 +25,13 @@ export function VerifyEmailPage() {
       <div className="mt-4">
         {!token && <Alert tone="error">This link has no token. Open the link from the mail again.</Alert>}
         {verify.isPending && <Spinner label="Confirming…" />}
-        {verify.error && <Alert tone="error">{verify.error.message}</Alert>}
+        {verify.error && (
+          <Alert tone="error">
+            {verify.error instanceof ApiError && verify.error.fields?.token
+              ? `${verify.error.fields.token} Open the link from the mail again, or copy the whole address into the browser.`
+              : verify.error.message}
+          </Alert>
+        )}
         {verify.isSuccess && (
           <Alert tone="success" title="Thank you">
             {verify.data.message} An organiser of the group will confirm your place and you will get a mail when they

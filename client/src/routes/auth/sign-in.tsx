@@ -91,7 +91,7 @@ export function SignInPage() {
           <h2 className="text-lg">Demo accounts</h2>
           <p className="mt-1 text-sm text-ink-soft">
             This installation holds invented demo data. Every demo account uses the password{' '}
-            <code className="rounded bg-white px-1 font-bold">{DEMO_PASSWORD}</code>.
+            <code className="rounded bg-white px-1 font-bold whitespace-nowrap">{DEMO_PASSWORD}</code>.
           </p>
           <ul className="mt-3 space-y-2">
             {DEMO_ACCOUNTS.map(([email, label]) => (

@@ -1,6 +1,9 @@
 import { useSuspenseQuery } from '@tanstack/react-query';
 import { useParams, type LoaderFunctionArgs } from 'react-router';
+import { formatDay, formatTimeRange } from '../../../../shared/format';
 import { EventTabs } from '../../components/layouts/event-tabs';
+import { SessionHeading } from '../../components/layouts/session-heading';
+import { paths } from '../../config/paths';
 import { eventBenchesQuery, useEventBenches } from '../../features/benches/api/get-event-benches';
 import { BenchLayoutEditor } from '../../features/benches/components/bench-layout-editor';
 import { eventQuery } from '../../features/events/api/get-event';
@@ -24,8 +27,11 @@ export function BenchesPage() {
   const refreshBoard = useRefreshBoard(id);
   return (
     <div>
-      <h1 className="text-2xl sm:text-3xl">{event.title}</h1>
-      <p className="mb-3 font-bold text-copper-dark">Benches</p>
+      <SessionHeading
+        back={{ to: paths.groupEvents(event.groupId), label: `${event.groupName}: all sessions` }}
+        title={event.title}
+        when={`Benches · ${formatDay(event.startsAt, event.timeZone)} · ${formatTimeRange(event.startsAt, event.endsAt, event.timeZone)}`}
+      />
       <EventTabs eventId={id} />
       <BenchLayoutEditor eventId={id} saved={benches} venue={event.venue} onChanged={refreshBoard} />
     </div>

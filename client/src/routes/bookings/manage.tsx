@@ -59,7 +59,13 @@ export function ManageBookingPage() {
   if (booking.error)
     return (
       <Alert tone="error" title="Booking not found">
-        The link may be incomplete, or the booking reference is wrong. Open the link from your confirmation mail again.
+        <p>
+          The link may be incomplete, or the booking reference is wrong. Open the link from your confirmation mail
+          again.
+        </p>
+        <Link to={paths.events()} className="mt-2 inline-block font-bold underline">
+          See all sessions
+        </Link>
       </Alert>
     );
   const b = booking.data;

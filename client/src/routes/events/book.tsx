@@ -372,6 +372,7 @@ function BookingForm({ event, categories }: { event: EventDetail; categories: Ca
         <HouseRules
           step={3 + items.fields.length}
           houseRules={event.houseRules}
+          groupName={event.groupName}
           consent={form.register('consent')}
           error={errors.consent?.message}
         />

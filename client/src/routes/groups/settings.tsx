@@ -66,7 +66,7 @@ export function GroupSettingsPage() {
             </label>
             <textarea
               id="rules"
-              rows={6}
+              rows={Math.max(6, rules.split('\n').length + 4)}
               value={rules}
               onChange={(e) => {
                 setRules(e.target.value);
@@ -78,7 +78,7 @@ export function GroupSettingsPage() {
           </div>
           <fieldset>
             <legend className="font-semibold">Categories you do not take</legend>
-            <div className="mt-2 max-h-96 space-y-3 overflow-y-auto pr-2">
+            <div className="mt-2 space-y-3">
               {Object.entries(SKILL_LABELS).map(([skill, label]) => {
                 const list = categories.data.filter((c) => c.skill === skill);
                 if (!list.length) return null;

@@ -1,5 +1,5 @@
 import { useMemo } from 'react';
-import { Link, useSearchParams, type LoaderFunctionArgs } from 'react-router';
+import { Link, redirect, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import {
   BARRIER_LABELS,
   BARRIERS,
@@ -14,6 +14,7 @@ import { categoriesQuery, useCategories } from '../../features/categories/api/ge
 import type { RecordsFilter } from '../../../../shared/api/impact';
 import type { RecordRow } from '../../features/impact/api/types';
 import { recordsQuery, useRecords } from '../../features/impact/api/get-records';
+import { groupsWithRole, meQuery } from '../../lib/auth';
 import { queryClient } from '../../lib/query-client';
 import { queryString as qs } from '../../lib/query-string';
 import { isoDate, oneDp, positiveInt, whole } from '../../features/impact/components/display';
@@ -59,11 +60,20 @@ function useRecordsFilter(): RecordsFilter {
 }
 
 /** The page reads what the loader fetched; a failure to fetch it is the route's error, shown in the page frame. */
-export const loader = ({ request }: LoaderFunctionArgs) =>
-  Promise.all([
-    queryClient.ensureQueryData(recordsQuery(recordsFilterOf(new URL(request.url).searchParams))),
+export const loader = async ({ request }: LoaderFunctionArgs) => {
+  const url = new URL(request.url);
+  const filter = recordsFilterOf(url.searchParams);
+  // Every group's records are the admin's; an organiser without a group in the address gets their own group's.
+  if (!filter.groupId && !filter.eventId) {
+    const user = await queryClient.ensureQueryData(meQuery);
+    const own = user && !user.admin ? groupsWithRole(user, 'organiser')[0] : undefined;
+    if (own) return redirect(paths.impactRecords(qs({ ...filter, groupId: own.groupId })));
+  }
+  return Promise.all([
+    queryClient.ensureQueryData(recordsQuery(filter)),
     queryClient.ensureQueryData(categoriesQuery()),
   ]);
+};
 
 const outcomeText = (o: Outcome | 'none') => (o === 'none' ? 'No outcome recorded' : OUTCOME_LABELS[o]);
 const itemLabel = (r: RecordRow) => [r.brand, r.model].filter(Boolean).join(' ');

@@ -1,7 +1,9 @@
 import { useSuspenseQuery } from '@tanstack/react-query';
 import { useParams, type LoaderFunctionArgs } from 'react-router';
-import { formatTimeRange } from '../../../../shared/format';
+import { formatDay, formatTimeRange } from '../../../../shared/format';
 import { EventTabs } from '../../components/layouts/event-tabs';
+import { SessionHeading } from '../../components/layouts/session-heading';
+import { paths } from '../../config/paths';
 import { eventBenchesQuery, useEventBenches } from '../../features/benches/api/get-event-benches';
 import { eventQuery } from '../../features/events/api/get-event';
 import { rotaQuery, useRota } from '../../features/rota/api/get-rota';
@@ -31,8 +33,11 @@ export function RotaPage() {
   const tz = event.timeZone;
   return (
     <div>
-      <h1 className="text-2xl sm:text-3xl">{event.title}</h1>
-      <p className="mb-3 font-bold text-copper-dark">Rota · {formatTimeRange(event.startsAt, event.endsAt, tz)}</p>
+      <SessionHeading
+        back={{ to: paths.groupEvents(event.groupId), label: `${event.groupName}: all sessions` }}
+        title={event.title}
+        when={`Rota · ${formatDay(event.startsAt, tz)} · ${formatTimeRange(event.startsAt, event.endsAt, tz)}`}
+      />
       <EventTabs eventId={id} />
       <div className="grid grid-cols-[minmax(0,1fr)] gap-4 lg:grid-cols-[minmax(0,1fr)_20rem]">
         <SkillCoverChart rota={rota} timeZone={tz} />

@@ -178,10 +178,10 @@ function PartCard({ groupId, part: p, canRemove }: { groupId: number; part: Salv
         </Button>
         <Button
           variant="quiet"
-          aria-label={`Put one more ${p.value} in the box`}
+          aria-label={took ? `Put the ${p.value} back in the box` : `Add one ${p.value} to the box`}
           onClick={() => update.mutate({ id: p.id, quantity: p.quantity + 1 }, { onSuccess: () => setTook(null) })}
         >
-          {took ? 'Put it back' : 'One more in the box'}
+          {took ? 'Put it back' : 'Add one to the box'}
         </Button>
         {canRemove && (
           <Button variant="quiet" aria-label={`Remove ${p.value}`} onClick={() => setConfirm(true)}>

@@ -113,7 +113,7 @@ export function BenchLayoutEditor({
         <Button busy={save.isPending} onClick={() => save.mutate(rows)}>
           Save benches
         </Button>
-        <Button variant="quiet" busy={saveVenue.isPending} disabled={!venue} onClick={() => saveVenue.mutate(rows)}>
+        <Button variant="secondary" busy={saveVenue.isPending} disabled={!venue} onClick={() => saveVenue.mutate(rows)}>
           Make this the venue’s usual layout
         </Button>
         {save.isSuccess && (

@@ -6,14 +6,16 @@ import { Card } from '../../../components/ui/feedback';
 export function HouseRules(props: {
   step: number;
   houseRules: string;
+  groupName: string;
   consent: UseFormRegisterReturn;
   error?: string;
 }) {
   return (
     <Card>
       <h2 className="text-lg">{props.step}. House rules</h2>
+      {props.houseRules && <h3 className="mt-3 text-sm font-bold">{props.groupName}</h3>}
       {props.houseRules && (
-        <ul className="mt-2 list-disc space-y-1 pl-5 text-sm">
+        <ul className="mt-1 list-disc space-y-1 pl-5 text-sm">
           {props.houseRules
             .split('\n')
             .filter(Boolean)
@@ -22,7 +24,8 @@ export function HouseRules(props: {
             ))}
         </ul>
       )}
-      <ul className="mt-2 list-disc space-y-1 pl-5 text-sm text-ink-soft">
+      <h3 className="mt-3 text-sm font-bold">At every Mendery session</h3>
+      <ul className="mt-1 list-disc space-y-1 pl-5 text-sm text-ink-soft">
         {DISCLAIMER.map((d) => (
           <li key={d}>{d}</li>
         ))}

@@ -13,8 +13,12 @@ export function CategoryTable({ categories }: { categories: Category[] }) {
         <thead className="bg-navy/5 text-navy">
           <tr>
             <th className="px-3 py-2">Category</th>
-            <th className="px-3 py-2">WEEE</th>
-            <th className="px-3 py-2">kg</th>
+            <th className="px-3 py-2">
+              <abbr title="The EU e-waste (WEEE) category, 1 to 6" className="no-underline">
+                E-waste class
+              </abbr>
+            </th>
+            <th className="px-3 py-2">Avg. kg</th>
             <th className="px-3 py-2">kg CO2e / kg</th>
             <th className="px-3 py-2">Skill</th>
             <th className="px-3 py-2">Bench kit</th>
@@ -39,7 +43,7 @@ export function CategoryTable({ categories }: { categories: Category[] }) {
                 <td className="px-3 py-2">{c.weeeCategory ?? '—'}</td>
                 <td className="px-3 py-2">{c.avgWeightKg}</td>
                 <td className="px-3 py-2">
-                  {c.co2ePerKg ?? '—'}
+                  {c.co2ePerKg == null ? '—' : <span title={String(c.co2ePerKg)}>{c.co2ePerKg.toFixed(2)}</span>}
                   {c.co2eSource && <p className="text-xs text-ink-soft">{c.co2eSource.split(':')[0]}</p>}
                 </td>
                 <td className="px-3 py-2">{SKILL_LABELS[c.skill]}</td>

@@ -15,6 +15,10 @@ import { DeskSlots } from './desk-slots';
 import { WalkInForm } from './walk-in-form';
 
 /** Today's bookings by slot, search, scan, check-in item by item, walk-ins. */
+/** The desk's links to the tag sheet and the hall display: 44 px targets for a finger on the tablet. */
+const deskLink =
+  'inline-flex min-h-11 items-center rounded-lg px-3 font-semibold text-navy underline ring-1 ring-navy/20 hover:bg-navy/5';
+
 export function DeskBoard({ desk, screening }: { desk: DeskView; screening: DeskScreening }) {
   const eventId = desk.event.id;
   const navigate = useNavigate();
@@ -102,10 +106,10 @@ export function DeskBoard({ desk, screening }: { desk: DeskView; screening: Desk
         <span className="rounded-lg bg-white px-3 py-1.5 ring-1 ring-ink/10">
           <b>{counts['no-show'] ?? 0}</b> did not come
         </span>
-        <Link className="ml-auto font-semibold text-navy underline" to={paths.tags(eventId)} target="_blank">
+        <Link className={`ml-auto ${deskLink}`} to={paths.tags(eventId)} target="_blank">
           Print all tags
         </Link>
-        <Link className="font-semibold text-navy underline" to={paths.hall(eventId)} target="_blank">
+        <Link className={deskLink} to={paths.hall(eventId)} target="_blank">
           Hall display
         </Link>
       </div>

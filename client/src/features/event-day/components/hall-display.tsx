@@ -28,10 +28,10 @@ function useNow(intervalMs = 5_000) {
   return now;
 }
 
-/** "about 15 min", "next", or "—" when nobody can say (no fixer on hand). */
+/** "about 15 min", "up next", or "—" when nobody can say (no fixer on hand). */
 function waitLabel(minutes: number | null): string {
   if (minutes === null) return '—';
-  if (minutes <= 0) return 'any moment';
+  if (minutes <= 0) return 'up next';
   return `about ${minutes} min`;
 }
 

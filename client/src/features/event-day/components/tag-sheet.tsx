@@ -79,7 +79,7 @@ export function TagSheet({ eventId }: { eventId: number }) {
 
       <div className="sticky top-0 z-10 border-b border-ink/10 bg-white shadow-sm print:hidden">
         <div className="mx-auto flex max-w-5xl flex-wrap items-end gap-x-4 gap-y-3 px-4 py-3">
-          <div className="w-full sm:w-auto sm:flex-1">
+          <div className="w-full lg:w-auto lg:flex-1">
             <Link to={paths.deskEvent(eventId)} className="text-sm font-bold text-navy underline">
               ← Back to the desk
             </Link>

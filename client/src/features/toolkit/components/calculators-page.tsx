@@ -48,8 +48,8 @@ export function Calculators() {
           </>
         }
       />
-      <nav aria-label="Calculators" className="mb-5">
-        {/* One scrolling row on a phone, so the cards start on the first screen. */}
+      {/* On a phone the cards below are the list; a row of chips would run off the screen. */}
+      <nav aria-label="Calculators" className="mb-5 hidden sm:block">
         <ul className="-mx-4 flex gap-2 overflow-x-auto px-4 pb-2 sm:mx-0 sm:flex-wrap sm:overflow-visible sm:px-0">
           {ORDER.map((id) => (
             <li key={id} className="shrink-0">
