@@ -1,7 +1,8 @@
-import { and, asc, eq, gt } from 'drizzle-orm';
+import { and, asc, eq, gt, notInArray } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
-import { events, repairGroups } from '../../server/src/db/schema/index';
+import { rebookToken } from '../../server/src/core/links';
+import { events, followUps, repairGroups } from '../../server/src/db/schema/index';
 import { TODAY_TITLE } from '../../server/src/seed/demo-today';
 import { DESKTOP, launchBrowser, PHONE, shot, signedIn } from '../support/browser';
 import { startDemoApp, type DemoApp } from '../support/demo-app';
@@ -109,6 +110,31 @@ describe('visitors and volunteers on a phone', () => {
     );
     expect(new Set(boxes).size, `checkbox left:width ${boxes.join(', ')}`).toBe(1);
     await page.getByRole('heading', { name: 'At every Mendery session' }).waitFor();
+    await context.close();
+  });
+
+  it('says a cut password link is incomplete before asking for a new password twice', async () => {
+    const { context, page } = await anonymous(PHONE);
+    await page.goto(`${app.server.url}/reset-password?token=cut-short`);
+    await page
+      .getByRole('alert')
+      .filter({ hasText: /incomplete/ })
+      .waitFor();
+    await page.getByRole('link', { name: 'Ask for a new link' }).waitFor();
+    expect(await page.getByLabel('New password').count()).toBe(0);
+    await context.close();
+  });
+
+  it("speaks of the visitor's repair, not the organisers' follow-up, when a re-booking link is closed", async () => {
+    const [closed] = await app.db.db
+      .select()
+      .from(followUps)
+      .where(notInArray(followUps.status, ['open', 'part-ordered']))
+      .limit(1);
+    const { context, page } = await anonymous(PHONE);
+    await page.goto(`${app.server.url}/rebook/${rebookToken(app.server.ctx, closed.itemId)}`);
+    await page.getByText('This repair is closed').waitFor();
+    expect(await page.getByText(/follow-up/i).count()).toBe(0);
     await context.close();
   });
 

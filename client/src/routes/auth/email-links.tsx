@@ -1,6 +1,6 @@
 import { useEffect, useState } from 'react';
 import { Link, useNavigate, useSearchParams } from 'react-router';
-import { resetConfirmSchema, resetRequestSchema } from '../../../../shared/schemas/auth';
+import { resetConfirmSchema, resetRequestSchema, tokenSchema } from '../../../../shared/schemas/auth';
 import { Button } from '../../components/ui/button';
 import { Alert, Card, Spinner } from '../../components/ui/feedback';
 import { TextField } from '../../components/ui/field';
@@ -91,6 +91,7 @@ export function ResetPasswordPage() {
   const confirm = useConfirmReset();
   const form = useZodForm(resetConfirmSchema, { token: params.get('token') ?? '', password: '', confirm: '' });
   const [formError, setFormError] = useState<string | null>(null);
+  const token = tokenSchema.safeParse({ token: params.get('token') ?? '' });
   const onSubmit = form.handleSubmit(async (values) => {
     setFormError(null);
     try {
@@ -103,29 +104,42 @@ export function ResetPasswordPage() {
   return (
     <Card className="mx-auto max-w-lg">
       <h1 className="text-2xl">Choose a new password</h1>
-      <form onSubmit={onSubmit} noValidate className="mt-4 space-y-4">
-        {(formError || form.formState.errors.token) && (
-          <Alert tone="error">{formError ?? form.formState.errors.token?.message}</Alert>
-        )}
-        <TextField
-          label="New password"
-          type="password"
-          autoComplete="new-password"
-          hint="At least 10 characters."
-          error={form.formState.errors.password?.message}
-          {...form.register('password')}
-        />
-        <TextField
-          label="The same again"
-          type="password"
-          autoComplete="new-password"
-          error={form.formState.errors.confirm?.message}
-          {...form.register('confirm')}
-        />
-        <Button type="submit" busy={form.formState.isSubmitting} className="w-full">
-          Save the new password
-        </Button>
-      </form>
+      {!token.success ? (
+        // A cut link is told apart before anyone types a new password twice for nothing.
+        <div className="mt-4 space-y-3">
+          <Alert tone="error">
+            {token.error.issues[0]?.message ?? 'The link is incomplete.'} Open the link from the mail again, or ask for
+            a new one.
+          </Alert>
+          <Link to={paths.forgotPassword()} className="inline-block font-bold text-navy underline">
+            Ask for a new link
+          </Link>
+        </div>
+      ) : (
+        <form onSubmit={onSubmit} noValidate className="mt-4 space-y-4">
+          {(formError || form.formState.errors.token) && (
+            <Alert tone="error">{formError ?? form.formState.errors.token?.message}</Alert>
+          )}
+          <TextField
+            label="New password"
+            type="password"
+            autoComplete="new-password"
+            hint="At least 10 characters."
+            error={form.formState.errors.password?.message}
+            {...form.register('password')}
+          />
+          <TextField
+            label="The same again"
+            type="password"
+            autoComplete="new-password"
+            error={form.formState.errors.confirm?.message}
+            {...form.register('confirm')}
+          />
+          <Button type="submit" busy={form.formState.isSubmitting} className="w-full">
+            Save the new password
+          </Button>
+        </form>
+      )}
     </Card>
   );
 }

@@ -116,9 +116,9 @@ export function RebookPage() {
           {v.item.categoryName.toLowerCase()} again.
         </Alert>
       ) : closed ? (
-        <Alert tone="info" title="This follow-up is closed">
-          The group has closed this repair. If you still want to come back with the part, reply to their mail or book a
-          normal slot on the{' '}
+        <Alert tone="info" title="This repair is closed">
+          {v.group.name} has closed this repair. If you still want to come back with the part, reply to their mail or
+          book a normal slot on the{' '}
           <Link to={paths.events()} className="font-bold underline">
             sessions page
           </Link>
