@@ -69,6 +69,10 @@ export function bookingEntry(b: BookingFacts, publicUrl: string, now: Date): Cal
   };
 }
 
+/** The role a person's shift stands for in a group where they hold several: fixing first, then reception. */
+export const shiftRole = (roles: GroupRole[]): GroupRole =>
+  roles.includes('fixer') ? 'fixer' : roles.includes('host') ? 'host' : 'organiser';
+
 /** What a volunteer does at a session, in the words of the volunteer's page. */
 export const shiftSummary = (role: GroupRole, eventTitle: string) =>
   role === 'fixer'

@@ -41,3 +41,13 @@ export interface AskResult {
 export interface SeatResult {
   ok: true;
 }
+
+/** Whether a person's shift-calendar link is live; the link itself is shown only when made. */
+export interface CalendarLinkStatus {
+  live: boolean;
+}
+/** A newly made shift-calendar link: the one time its URL is shown. */
+export interface CalendarLink {
+  live: true;
+  url: string;
+}

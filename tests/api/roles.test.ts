@@ -102,6 +102,12 @@ const table: Row[] = [
   ['GET', () => '/api/me/profile', signedIn(200)],
   ['GET', () => '/api/me/queue', signedIn(200)],
   ['GET', () => '/api/me/events', signedIn(200)],
+  ['GET', () => '/api/me/shifts/calendar', signedIn(200)],
+  ['GET', () => '/api/me/calendar-link', signedIn(200)],
+  ['POST', () => '/api/me/calendar-link', signedIn(201)],
+  ['DELETE', () => '/api/me/calendar-link', signedIn(204)],
+  // The shift feed answers by its secret alone; an unknown one is not found for everyone.
+  ['GET', () => `/api/public/shift-calendars/${'A'.repeat(43)}.ics`, everyone(404)],
   ['POST', (g) => `/api/events/${g.ownEvent}/triage`, { ...ownOrganiser, organiser: 201, admin: 201 }],
   ['GET', (g) => `/api/events/${g.ownEvent}/board`, ownOrganiser],
   ['GET', (g) => `/api/events/${g.ownEvent}/rota`, ownOrganiser],

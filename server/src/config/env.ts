@@ -28,6 +28,7 @@ const schema = z.object({
   JOBS_POLL_MS: z.coerce.number().int().min(0).default(60_000),
   LOGIN_RATE_MAX: z.coerce.number().int().min(1).default(10),
   LOGIN_RATE_WINDOW_MINUTES: z.coerce.number().positive().default(15),
+  FEED_RATE_MAX: z.coerce.number().int().min(1).default(300),
   CLIENT_DIST: z.string().default('dist/client'),
 });
 

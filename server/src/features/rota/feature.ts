@@ -1,4 +1,4 @@
 import type { Feature } from '../../core/feature';
-import { rotaRoutes } from './routes';
+import { rotaPublicRoutes, rotaRoutes } from './routes';
 
-export const rotaFeature: Feature = { name: 'rota', routes: rotaRoutes };
+export const rotaFeature: Feature = { name: 'rota', publicRoutes: rotaPublicRoutes, routes: rotaRoutes };

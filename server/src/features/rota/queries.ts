@@ -10,6 +10,7 @@ import {
   repairGroups,
   shifts,
   users,
+  venues,
 } from '../../db/schema/index';
 
 export async function eventRow(db: DbOrTx, eventId: number) {
@@ -116,3 +117,53 @@ export async function shiftRow(db: DbOrTx, eventId: number, userId: number) {
 
 export const setShiftBench = (db: DbOrTx, shiftId: number, benchId: number | null) =>
   db.update(shifts).set({ benchId }).where(eq(shifts.id, shiftId));
+
+export const setCalendarFeedHash = (db: DbOrTx, userId: number, hash: string | null) =>
+  db.update(users).set({ calendarFeedHash: hash }).where(eq(users.id, userId));
+
+export async function calendarFeedHashOf(db: DbOrTx, userId: number) {
+  const [u] = await db.select({ hash: users.calendarFeedHash }).from(users).where(eq(users.id, userId));
+  return u?.hash ?? null;
+}
+
+export async function userOfCalendarFeedHash(db: DbOrTx, hash: string) {
+  const [u] = await db.select({ id: users.id }).from(users).where(eq(users.calendarFeedHash, hash));
+  return u?.id ?? null;
+}
+
+export const activeRolesOf = (db: DbOrTx, userId: number) =>
+  db
+    .select({ groupId: memberships.groupId, role: memberships.role })
+    .from(memberships)
+    .where(and(eq(memberships.userId, userId), eq(memberships.status, 'active')));
+
+/** The shifts a person said they come to that end after `since`, of published or closed sessions, soonest first. */
+export const comingShiftsOf = (db: DbOrTx, userId: number, since: Date) =>
+  db
+    .select({
+      shiftId: shifts.id,
+      eventId: events.id,
+      groupId: events.groupId,
+      eventTitle: events.title,
+      groupName: repairGroups.name,
+      startsAt: shifts.startsAt,
+      endsAt: shifts.endsAt,
+      venueName: venues.name,
+      venueAddress: venues.address,
+      venueTown: venues.town,
+      bench: eventBenches.name,
+    })
+    .from(shifts)
+    .innerJoin(events, eq(events.id, shifts.eventId))
+    .innerJoin(repairGroups, eq(repairGroups.id, events.groupId))
+    .innerJoin(venues, eq(venues.id, events.venueId))
+    .leftJoin(eventBenches, eq(eventBenches.id, shifts.benchId))
+    .where(
+      and(
+        eq(shifts.userId, userId),
+        eq(shifts.coming, true),
+        inArray(events.status, ['published', 'closed']),
+        gte(shifts.endsAt, since),
+      ),
+    )
+    .orderBy(asc(shifts.startsAt));

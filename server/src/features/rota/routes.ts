@@ -6,6 +6,9 @@ import { requireGroupRole, requireUser } from '../../auth/guards';
 import { body, params } from '../../http/validate';
 import { eventGroupId } from '../../core/events';
 import * as rota from './service';
+import { calendarLinkStatus, feedOwner, makeCalendarLink, shiftsCalendar, stopCalendarLink } from './calendar';
+import { sendCalendar } from '../../core/calendar';
+import { publicReadLimiter } from '../../http/rate-limit';
 
 const idParams = z.object({ id: z.coerce.number().int().positive() });
 
@@ -17,6 +20,21 @@ export function rotaRoutes(ctx: AppContext) {
     requireGroupRole(roles, (req: Request) => eventGroupId(db, Number(req.params.id)));
 
   r.get('/me/events', requireUser, async (req, res) => res.json(await rota.myEvents(ctx, req.user!.id)));
+  r.get('/me/shifts/calendar', requireUser, async (req, res) => {
+    sendCalendar(res, await shiftsCalendar(ctx, req.user!.id), 'mendery-shifts.ics', 'attachment');
+  });
+  r.get('/me/calendar-link', requireUser, async (req, res) => {
+    res.setHeader('Cache-Control', 'no-store');
+    res.json(await calendarLinkStatus(ctx, req.user!.id));
+  });
+  r.post('/me/calendar-link', requireUser, async (req, res) => {
+    res.setHeader('Cache-Control', 'no-store');
+    res.status(201).json(await makeCalendarLink(ctx, req.user!.id));
+  });
+  r.delete('/me/calendar-link', requireUser, async (req, res) => {
+    await stopCalendarLink(ctx, req.user!.id);
+    res.status(204).end();
+  });
   r.put('/events/:id/shifts/me', ofEvent(['organiser', 'host', 'fixer']), async (req, res) => {
     res.json(await rota.setMyShift(ctx, params(req, idParams).id, req.user!.id, body(req, myShiftSchema)));
   });
@@ -29,6 +47,18 @@ export function rotaRoutes(ctx: AppContext) {
   r.patch('/events/:id/shifts/:userId', ofEvent(['organiser']), async (req, res) => {
     const { id, userId } = params(req, idParams.extend({ userId: z.coerce.number().int().positive() }));
     res.json(await rota.seat(ctx, id, userId, body(req, seatSchema).benchId));
+  });
+  return r;
+}
+
+/** The shift feed a calendar app subscribes to: no session, only the secret in the URL. */
+export function rotaPublicRoutes(ctx: AppContext) {
+  const r = Router();
+  const limit = publicReadLimiter(ctx, 'shift-feed', ctx.env.FEED_RATE_MAX);
+  r.get('/public/shift-calendars/:file', limit, async (req, res) => {
+    const secret = String(req.params.file).replace(/\.ics$/, '');
+    const userId = await feedOwner(ctx, secret);
+    sendCalendar(res, await shiftsCalendar(ctx, userId), 'mendery-shifts.ics', 'inline');
   });
   return r;
 }

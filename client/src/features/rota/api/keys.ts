@@ -3,4 +3,5 @@ export const rotaKeys = {
   all: ['rota'] as const,
   myEvents: () => [...rotaKeys.all, 'my-events'] as const,
   event: (eventId: number) => [...rotaKeys.all, 'event', eventId] as const,
+  calendarLink: () => [...rotaKeys.all, 'calendar-link'] as const,
 };

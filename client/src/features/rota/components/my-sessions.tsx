@@ -7,6 +7,7 @@ import { MonthCalendar } from '../../../components/ui/month-calendar';
 import { paths } from '../../../config/paths';
 import { useMyEvents } from '../api/get-my-events';
 import { useSetShift } from '../api/set-shift';
+import { ShiftCalendarLink } from './shift-calendar-link';
 
 /** The sessions a volunteer can help at, each with their answer, and a calendar of the shifts they said yes to. */
 export function MySessions() {
@@ -43,6 +44,7 @@ export function MySessions() {
           />
         </Card>
       )}
+      <ShiftCalendarLink />
     </section>
   );
 }
