@@ -6,7 +6,7 @@ export const ITEM_STATUSES = ['booked', 'checked-in', 'waiting', 'at-bench', 'do
 export type ItemStatus = (typeof ITEM_STATUSES)[number];
 
 export const ITEM_STATUS_LABELS: Record<ItemStatus, string> = {
-  booked: 'Booked',
+  booked: 'Still to come',
   'checked-in': 'Checked in',
   waiting: 'In the queue',
   'at-bench': 'At the bench',

@@ -1,11 +1,6 @@
 import QRCode from 'qrcode';
-import {
-  isQueued,
-  ITEM_STATUS_LABELS,
-  ITEM_STATUSES,
-  OUTCOME_LABELS,
-  type ItemStatus,
-} from '../../../../shared/event-day/constants';
+import { isQueued, ITEM_STATUS_LABELS, OUTCOME_LABELS } from '../../../../shared/event-day/constants';
+import { tallyStatuses } from '../../../../shared/event-day/tallies';
 import { estimateWaits, liveWarnings, queueOrder } from '../../../../shared/event-day/queue';
 import { shortName, tagUrl } from '../../../../shared/event-day/tag-code';
 import { itemLabel } from '../../../../shared/item-label';
@@ -77,7 +72,7 @@ export async function hallQueue(ctx: AppContext, eventId: number): Promise<HallQ
       .sort((a, b) => (a.startedAt?.getTime() ?? 0) - (b.startedAt?.getTime() ?? 0))
       .map((i) => ({ queueNumber: i.queueNumber, benchName: i.benchId ? (benchName.get(i.benchId) ?? null) : null })),
     waiting: order.map((q) => ({ queueNumber: byId.get(q.id)!.queueNumber, waitMinutes: waits.get(q.id) ?? null })),
-    done: items.filter((i) => i.status === 'done').length,
+    done: tallyStatuses(items.map((i) => i.status)).done,
     fixersOnHand: fixers.length,
     updatedAt: now,
   };
@@ -93,9 +88,7 @@ export async function liveView(ctx: AppContext, eventId: number): Promise<LiveVi
     eventLayout(ctx.database.db, eventId),
   ]);
   const allBooked = await q.bookedStatuses(ctx.database.db, eventId);
-  const counts = Object.fromEntries(
-    ITEM_STATUSES.map((s) => [s, allBooked.filter((b) => b.status === s).length]),
-  ) as Record<ItemStatus, number>;
+  const counts = tallyStatuses(allBooked.map((b) => b.status));
   const { waits, order } = waitsFor(items, fixers, now.getTime());
   const rank = new Map(order.map((q, i) => [q.id, i]));
   const names = await q.userNames(ctx.database.db, [

@@ -1,6 +1,6 @@
 import { useMemo, useRef, useState } from 'react';
 import { Link, useNavigate } from 'react-router';
-import { isQueued, type ItemStatus } from '../../../../../shared/event-day/constants';
+import { tallyStatuses } from '../../../../../shared/event-day/tallies';
 import { readScan } from '../../../../../shared/event-day/tag-code';
 import { formatDay, formatTimeRange } from '../../../../../shared/format';
 import { Button } from '../../../components/ui/button';
@@ -9,6 +9,7 @@ import { TextField } from '../../../components/ui/field';
 import { paths } from '../../../config/paths';
 import type { DeskBooking, DeskView } from '../api/types';
 import { QrScan } from './qr-scan';
+import { StatusTallies } from './status-tallies';
 import { CheckInPanel } from './check-in-panel';
 import type { DeskScreening } from './desk-screening';
 import { DeskSlots } from './desk-slots';
@@ -68,9 +69,7 @@ export function DeskBoard({ desk, screening }: { desk: DeskView; screening: Desk
     !q ||
     b.visitorName.toLowerCase().includes(q) ||
     b.reference.toLowerCase().replace('-', '').includes(q.replace('-', ''));
-  const counts = all
-    .flatMap((b) => b.items)
-    .reduce((m, i) => ({ ...m, [i.status]: (m[i.status] ?? 0) + 1 }), {} as Partial<Record<ItemStatus, number>>);
+  const counts = tallyStatuses(all.flatMap((b) => b.items.map((i) => i.status)));
   const current = selected ? all.find((b) => b.reference === selected) : undefined;
   const { event } = desk;
 
@@ -90,22 +89,8 @@ export function DeskBoard({ desk, screening }: { desk: DeskView; screening: Desk
           Check-in opens on the day of the session.
         </Alert>
       )}
-      <div className="flex flex-wrap gap-2 text-sm" aria-label="Items today">
-        <span className="rounded-lg bg-white px-3 py-1.5 ring-1 ring-ink/10">
-          <b>{counts.booked ?? 0}</b> still to come
-        </span>
-        <span className="rounded-lg bg-white px-3 py-1.5 ring-1 ring-ink/10">
-          <b>{all.flatMap((b) => b.items).filter((i) => isQueued(i.status)).length}</b> waiting
-        </span>
-        <span className="rounded-lg bg-white px-3 py-1.5 ring-1 ring-ink/10">
-          <b>{counts['at-bench'] ?? 0}</b> at a bench
-        </span>
-        <span className="rounded-lg bg-white px-3 py-1.5 ring-1 ring-ink/10">
-          <b>{counts.done ?? 0}</b> done
-        </span>
-        <span className="rounded-lg bg-white px-3 py-1.5 ring-1 ring-ink/10">
-          <b>{counts['no-show'] ?? 0}</b> did not come
-        </span>
+      <div className="flex flex-wrap items-center gap-x-4 gap-y-2 text-sm">
+        <StatusTallies counts={counts} compact />
         <Link className={`ml-auto ${deskLink}`} to={paths.tags(eventId)} target="_blank">
           Print all tags
         </Link>

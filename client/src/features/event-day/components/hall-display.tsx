@@ -98,7 +98,7 @@ export function HallDisplay({ eventId }: { eventId: number }) {
         <p>
           {data ? (
             <>
-              {data.done} item{data.done === 1 ? '' : 's'} seen to today · {data.fixersOnHand} fixer
+              {data.done} item{data.done === 1 ? '' : 's'} done today · {data.fixersOnHand} fixer
               {data.fixersOnHand === 1 ? '' : 's'} on hand
             </>
           ) : (

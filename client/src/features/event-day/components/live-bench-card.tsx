@@ -1,5 +1,6 @@
 import type { ReactNode } from 'react';
 import { Link } from 'react-router';
+import { ITEM_STATUS_LABELS as LABEL } from '../../../../../shared/event-day/constants';
 import { formatTime } from '../../../../../shared/format';
 import { Card } from '../../../components/ui/feedback';
 import { paths } from '../../../config/paths';
@@ -16,11 +17,12 @@ export function BenchCard({ bench, tz }: { bench: LiveView['benches'][number]; t
         <header className="mb-3 flex flex-wrap items-baseline justify-between gap-x-3">
           <h2 className="text-lg">{bench.name}</h2>
           <p className="text-sm text-ink-soft">
-            {bench.atBench.length} at the bench · {bench.waiting.length} waiting · {bench.done.length} done
+            {bench.atBench.length} {LABEL['at-bench'].toLowerCase()} · {bench.waiting.length}{' '}
+            {LABEL.waiting.toLowerCase()} · {bench.done.length} {LABEL.done.toLowerCase()}
           </p>
         </header>
         <div className="grid gap-4 md:grid-cols-3">
-          <Column title="At the bench" count={bench.atBench.length} empty="Nothing in hand.">
+          <Column title={LABEL['at-bench']} count={bench.atBench.length} empty="Nothing in hand.">
             {bench.atBench.map((c) => (
               <li key={c.id}>
                 <ItemLink card={c} tone="active">
@@ -32,7 +34,7 @@ export function BenchCard({ bench, tz }: { bench: LiveView['benches'][number]; t
               </li>
             ))}
           </Column>
-          <Column title="Waiting" count={bench.waiting.length} empty="No one waiting.">
+          <Column title={LABEL.waiting} count={bench.waiting.length} empty="No one waiting.">
             {bench.waiting.map((c) => (
               <li key={c.id}>
                 <ItemLink card={c}>
@@ -41,7 +43,7 @@ export function BenchCard({ bench, tz }: { bench: LiveView['benches'][number]; t
               </li>
             ))}
           </Column>
-          <Column title="Done" count={bench.done.length} empty="None yet.">
+          <Column title={LABEL.done} count={bench.done.length} empty="None yet.">
             {bench.done.map((c) => (
               <li key={c.id}>
                 <ItemLink card={c} tone="done">

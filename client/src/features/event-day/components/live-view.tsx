@@ -1,15 +1,11 @@
 import { Link } from 'react-router';
-import { ITEM_STATUS_LABELS, type ItemStatus } from '../../../../../shared/event-day/constants';
 import { formatDay, formatTime } from '../../../../../shared/format';
 import { EventTabs } from '../../../components/layouts/event-tabs';
 import { Alert, Card, EmptyState, PageTitle, Spinner } from '../../../components/ui/feedback';
 import { paths } from '../../../config/paths';
 import { useLiveView } from '../api/get-live-view';
 import { BenchCard, ItemLink, WaitLine } from './live-bench-card';
-
-const COUNT_TILES: { status: ItemStatus; label: string }[] = (
-  ['checked-in', 'waiting', 'at-bench', 'done', 'no-show', 'withdrawn', 'booked'] as const
-).map((status) => ({ status, label: status === 'booked' ? 'Still to come' : ITEM_STATUS_LABELS[status] }));
+import { StatusTallies } from './status-tallies';
 
 const linkButton = 'inline-flex min-h-11 items-center justify-center gap-2 rounded-lg px-4 py-2 font-bold transition';
 
@@ -70,16 +66,7 @@ export function LiveViewBody({ eventId }: { eventId: number }) {
       )}
 
       <section aria-label="Counts" className="mb-5">
-        <ul className="grid grid-cols-[repeat(auto-fill,minmax(6.5rem,1fr))] gap-2">
-          {COUNT_TILES.map((t) => (
-            <li key={t.status} className="rounded-lg bg-white px-3 py-2 shadow-sm ring-1 ring-ink/5">
-              <p className="text-2xl font-extrabold text-navy tabular-nums" data-testid={`count-${t.status}`}>
-                {v.counts[t.status] ?? 0}
-              </p>
-              <p className="text-xs font-semibold text-ink-soft">{t.label}</p>
-            </li>
-          ))}
-        </ul>
+        <StatusTallies counts={v.counts} />
       </section>
 
       {v.warnings.length > 0 && (
