@@ -1,4 +1,5 @@
 import type { EventStatus } from '../constants';
+import type { RunSummary } from '../triage/run-summary';
 
 /* The triage board's answers as the server returns them; the client reads them as `Json<T>` (dates as ISO strings). */
 
@@ -72,4 +73,11 @@ export interface TriageRunResult {
 /** A placement by hand is kept even when it breaks a rule; the warnings say which. */
 export interface PlacementResult {
   warnings?: PlacementWarning[];
+}
+/** One stored run read back: the summary in words, and the exact input and result behind "technical details". */
+export interface TriageRunDetail {
+  run: { id: number; createdAt: Date; slotStartsAt: Date | null; lockedKept: number };
+  event: { id: number; title: string; startsAt: Date; timeZone: string; groupId: number; groupName: string };
+  summary: RunSummary | null;
+  technical: { input: unknown; result: unknown };
 }

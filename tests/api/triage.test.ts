@@ -62,9 +62,15 @@ describe('the triage board', () => {
       ),
     ).toBe(true);
     const stored = (await as.organiser.get(`/api/events/${eventId}/triage-runs/${run.json.runId}`)).json;
-    expect(stored.input.items.length).toBe(board.items.length);
-    expect(stored.result.assignments.length).toBe(9);
-    expect(stored.input.slots.length).toBe(6);
+    expect(stored.technical.input.items.length).toBe(board.items.length);
+    expect(stored.technical.result.assignments.length).toBe(9);
+    expect(stored.technical.input.slots.length).toBe(6);
+    // The same run in words: every item named, nine placed, the rest waiting with a reason.
+    expect(stored.summary.items.length).toBe(board.items.length);
+    expect(stored.summary.placed.length).toBe(9);
+    expect(stored.summary.waiting.map((w: { reason: string }) => w.reason)).toContain('No fixer with the skill');
+    expect((await as.organiser.get(`/api/events/${eventId}/triage-runs/nope`)).status).toBe(400);
+    expect((await as.organiser.get(`/api/events/${eventId}/triage-runs/99999`)).status).toBe(404);
   });
 
   it('keeps a locked hand-made move when the engine runs again', async () => {

@@ -70,4 +70,43 @@ describe('the organiser’s triage board at 1280 px', () => {
     await page.screenshot({ path: shot('triage-fixer-picker') });
     await context.close();
   });
+
+  it('reads an earlier run back as a summary in words and tables, its stored data only behind a disclosure', async () => {
+    const { context, page } = await signedIn(browser, app.server.url, 'organiser', DESKTOP);
+    await page.goto(`${app.server.url}/events/${eventId}/board`);
+    await page.getByRole('button', { name: 'Run triage' }).click();
+    await page.getByText(/Placed \d+ items?/).waitFor();
+    await page.getByText(/Earlier runs/).click();
+    // Whatever the link says, follow it in this tab.
+    const link = page.locator('details li a').first();
+    await page.goto(new URL((await link.getAttribute('href'))!, app.server.url).href);
+
+    await page.getByRole('heading', { name: 'What came out' }).waitFor();
+    expect(await page.locator('body').innerText()).not.toMatch(/"assignments"|"volunteerId"|\{\s*"/);
+    const placed = page.getByRole('table', { name: 'Who takes which item, and where' });
+    expect(await placed.getByRole('row').count()).toBeGreaterThan(1);
+    // No fixer coming has the toys skill (server/src/seed/demo-volunteers.ts): the toy waits, and the page says why.
+    const waiting = page.getByRole('table', { name: 'Items left waiting, and why' });
+    await waiting
+      .getByRole('row', { name: /Electric or battery toy/ })
+      .getByText('No fixer with the skill')
+      .waitFor();
+    // What went in: the items, the four fixers with their levels in words, the five benches, the rules.
+    const fixers = page.getByRole('table', { name: 'Fixers the run could use' });
+    expect(await fixers.getByRole('row').count()).toBe(1 + 4);
+    await fixers
+      .getByRole('row', { name: /Wren Ashcombe/ })
+      .getByText('Textiles (expert), Jewellery (capable)')
+      .waitFor();
+    expect(await page.getByRole('table', { name: 'Benches the run could use' }).getByRole('row').count()).toBe(1 + 5);
+    await page.getByRole('heading', { name: 'Rules the run kept' }).waitFor();
+    await page.screenshot({ path: shot('triage-run-summary'), fullPage: true });
+
+    // The stored data stays available, folded away.
+    const raw = page.getByLabel('Stored data');
+    expect(await raw.isVisible()).toBe(false);
+    await page.getByText(/Technical details/).click();
+    expect(JSON.parse((await raw.textContent())!).result.assignments.length).toBeGreaterThan(0);
+    await context.close();
+  });
 });

@@ -120,6 +120,10 @@ export const router = createBrowserRouter([
             path: 'events/:eventId/board',
             ...page(() => import('../routes/triage/board'), 'TriageBoardPage', allow.organiser),
           },
+          {
+            path: 'events/:eventId/board/runs/:runId',
+            ...page(() => import('../routes/triage/run'), 'TriageRunPage', allow.organiser),
+          },
           { path: 'events/:eventId/rota', ...page(() => import('../routes/rota/rota'), 'RotaPage', allow.organiser) },
           {
             path: 'events/:eventId/benches',

@@ -26,6 +26,7 @@ export const paths = {
   adminCategories: () => '/admin/categories',
   rota: (id: number) => `/events/${id}/rota`,
   board: (id: number) => `/events/${id}/board`,
+  triageRun: (eventId: number, runId: number) => `/events/${eventId}/board/runs/${runId}`,
   benches: (id: number) => `/events/${id}/benches`,
   skillsMatrix: (groupId: number) => `/groups/${groupId}/skills`,
   mySkills: () => '/me/skills',

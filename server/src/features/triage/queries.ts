@@ -138,3 +138,18 @@ export async function runRow(db: DbOrTx, eventId: number, runId: number) {
     .where(and(eq(triageRuns.id, runId), eq(triageRuns.eventId, eventId)));
   return r;
 }
+
+/** Every item of the event with what names it on screen, for reading back a run (its items may have moved on). */
+export const itemNameRows = (db: DbOrTx, eventId: number) =>
+  db
+    .select({
+      id: bookingItems.id,
+      reference: bookings.reference,
+      categoryName: categories.name,
+      brand: bookingItems.brand,
+      model: bookingItems.model,
+    })
+    .from(bookingItems)
+    .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
+    .innerJoin(categories, eq(categories.id, bookingItems.categoryId))
+    .where(eq(bookings.eventId, eventId));

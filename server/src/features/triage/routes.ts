@@ -9,6 +9,7 @@ import { board } from './board';
 import * as t from './service';
 
 const itemParams = z.object({ id: z.coerce.number().int().positive(), itemId: z.coerce.number().int().positive() });
+const runParams = z.object({ id: z.coerce.number().int().positive(), runId: z.coerce.number().int().positive() });
 
 /** Only the event's organisers run the engine or move items; a fixer's own queue is the workbench feature's. */
 export function triageRoutes(ctx: AppContext) {
@@ -23,9 +24,10 @@ export function triageRoutes(ctx: AppContext) {
     res.status(201).json(await t.runTriage(ctx, id(req), slotId, req.user!.id));
   });
   r.get('/events/:id/board', organiser, async (req, res) => res.json(await board(ctx, id(req))));
-  r.get('/events/:id/triage-runs/:runId', organiser, async (req, res) =>
-    res.json(await t.runDetail(ctx, id(req), Number(req.params.runId))),
-  );
+  r.get('/events/:id/triage-runs/:runId', organiser, async (req, res) => {
+    const p = params(req, runParams);
+    res.json(await t.runDetail(ctx, p.id, p.runId));
+  });
   r.put('/events/:id/items/:itemId/placement', organiser, async (req, res) => {
     const p = params(req, itemParams);
     res.json(await t.placeByHand(ctx, p.id, p.itemId, body(req, placementSchema)));

@@ -1,5 +1,8 @@
 import { triage, type TriageInput, type TriageResult } from '../../../../shared/triage/engine';
-import type { PlacementResult, TriageRunResult } from '../../../../shared/api/triage';
+import type { PlacementResult, TriageRunDetail, TriageRunResult } from '../../../../shared/api/triage';
+import { itemLabel } from '../../../../shared/item-label';
+import { summariseRun } from '../../../../shared/triage/run-summary';
+import { eventWithGroup, slotsOfEvent } from '../../core/events';
 import { dayPlan } from '../../../../shared/triage/day-plan';
 import type { AppContext } from '../../context';
 import { HttpError, notFound } from '../../http/errors';
@@ -211,8 +214,30 @@ export async function unplace(ctx: AppContext, eventId: number, itemId: number):
   await q.deletePlacement(ctx.database.db, eventId, itemId);
 }
 
-export async function runDetail(ctx: AppContext, eventId: number, runId: number) {
-  const r = await q.runRow(ctx.database.db, eventId, runId);
-  if (!r) throw notFound('That run');
-  return r;
+/** A stored run read back for the organiser: the summary in words, and the exact input and result it kept. */
+export async function runDetail(ctx: AppContext, eventId: number, runId: number): Promise<TriageRunDetail> {
+  const { db } = ctx.database;
+  const e = await eventWithGroup(db, eventId);
+  const r = e && (await q.runRow(db, eventId, runId));
+  if (!e || !r) throw notFound('That run');
+  const [names, slots] = await Promise.all([q.itemNameRows(db, eventId), slotsOfEvent(db, eventId)]);
+  const labels = new Map(names.map((n) => [String(n.id), `${itemLabel(n)} · ${n.reference}`]));
+  return {
+    run: {
+      id: r.id,
+      createdAt: r.createdAt,
+      slotStartsAt: slots.find((s) => s.id === r.slotId)?.startsAt ?? null,
+      lockedKept: r.lockedKept,
+    },
+    event: {
+      id: e.event.id,
+      title: e.event.title,
+      startsAt: e.event.startsAt,
+      timeZone: e.group.timeZone,
+      groupId: e.group.id,
+      groupName: e.group.name,
+    },
+    summary: summariseRun(r.input, r.result, labels, r.lockedKept),
+    technical: { input: r.input, result: r.result },
+  };
 }

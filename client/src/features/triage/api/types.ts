@@ -6,3 +6,4 @@ export type Board = Json<TriageApi.Board>;
 export type BoardItem = Json<TriageApi.BoardItem>;
 export type PlacementResult = Json<TriageApi.PlacementResult>;
 export type TriageRunResult = Json<TriageApi.TriageRunResult>;
+export type TriageRunDetail = Json<TriageApi.TriageRunDetail>;

@@ -2,18 +2,12 @@ import { useState } from 'react';
 import type { Board, BoardItem } from '../api/types';
 import { EQUIPMENT_LABELS, SKILL_LABELS, type Equipment, type Skill } from '../../../../../shared/constants';
 import { formatTime } from '../../../../../shared/format';
+import { WAITING_REASON_LABELS } from '../../../../../shared/triage/run-summary';
 import { fixerSkillPhrase, skillNeedPhrase } from '../../../../../shared/triage/skill-words';
 import { Button } from '../../../components/ui/button';
 import { useLockItem } from '../api/lock-item';
 import { usePlaceItem } from '../api/place-item';
 import { useUnplaceItem } from '../api/unplace-item';
-
-const REASON_LABEL: Record<string, string> = {
-  'no-skill': 'No fixer with the skill',
-  'no-equipment': 'No bench with the kit',
-  'no-pair': 'Skill and kit never meet',
-  capacity: 'Waiting for a free place',
-};
 
 /** An item on the board: what it needs, why it waits or what its placement breaks, and moving it by hand. */
 export function BoardItemCard({ item, board, eventId }: { item: BoardItem; board: Board; eventId: number }) {
@@ -61,7 +55,8 @@ export function BoardItemCard({ item, board, eventId }: { item: BoardItem; board
       </p>
       {item.reason && (
         <p className="mt-1 rounded bg-copper-light px-2 py-1 text-xs">
-          <span className="font-bold">{REASON_LABEL[item.reason.reason]}:</span> {item.reason.detail}
+          <span className="font-bold">{WAITING_REASON_LABELS[item.reason.reason] ?? item.reason.reason}:</span>{' '}
+          {item.reason.detail}
         </p>
       )}
       {item.warnings.map((w) => (

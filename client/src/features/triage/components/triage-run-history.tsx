@@ -1,8 +1,9 @@
 import type { Board } from '../api/types';
 import { formatTime } from '../../../../../shared/format';
-import { triageRunUrl } from '../api/triage-run-url';
+import { Link } from 'react-router';
+import { paths } from '../../../config/paths';
 
-/** Earlier runs, each with a link to the inputs and result it was given and gave. */
+/** Earlier runs, each with a link to a summary of what went in and what came out. */
 export function TriageRunHistory({ board }: { board: Board }) {
   const tz = board.event.timeZone;
   if (board.runs.length === 0) return null;
@@ -17,9 +18,9 @@ export function TriageRunHistory({ board }: { board: Board }) {
             {r.slotId
               ? ` (slot ${formatTime(board.slots.find((s) => s.id === r.slotId)?.startsAt ?? '', tz)})`
               : ''} ·{' '}
-            <a className="underline" href={triageRunUrl(board.event.id, r.id)} target="_blank" rel="noreferrer">
-              inputs and result
-            </a>
+            <Link className="underline" to={paths.triageRun(board.event.id, r.id)}>
+              what went in and came out
+            </Link>
           </li>
         ))}
       </ul>
