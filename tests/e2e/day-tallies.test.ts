@@ -95,4 +95,14 @@ describe('the live view and the reception desk count the day alike', () => {
     for (const [status, n] of Object.entries(db)) expect(onLive[ITEM_STATUS_LABELS[status as ItemStatus]]).toBe(n);
     await context.close();
   });
+
+  it('fits the tallies on the reception tablet at 820 px', { timeout: 60_000 }, async () => {
+    const { context, page } = await signedIn(browser, app.server.url, 'host', { width: 820, height: 1180 });
+    await page.goto(`${app.server.url}/desk/${eventId}`);
+    await page.getByRole('heading', { name: 'Reception desk' }).waitFor();
+    expect(Object.keys(await tallies(page.getByLabel(/^Items today/).first())).length).toBe(7);
+    expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(820);
+    await page.screenshot({ path: shot('desk-tallies-tablet') });
+    await context.close();
+  });
 });
