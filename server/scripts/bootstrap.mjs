@@ -1,5 +1,5 @@
 // Entry of `npm start|dev|test|bench`: plain Node with no dependencies, so it can install them first.
-import { existsSync, statSync } from 'node:fs';
+import { existsSync, lstatSync, statSync } from 'node:fs';
 import { spawnSync } from 'node:child_process';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import path from 'node:path';
@@ -22,7 +22,12 @@ if (!scripts[command]) {
 const marker = path.join(root, 'node_modules', '.package-lock.json');
 const lock = path.join(root, 'package-lock.json');
 const stale = !existsSync(marker) || (existsSync(lock) && statSync(lock).mtimeMs > statSync(marker).mtimeMs + 1000);
-if (stale) {
+// A node_modules that is a link to another checkout's belongs to that checkout: `npm ci` through the link would
+// empty it for everyone who shares it, so install there instead.
+const modules = path.join(root, 'node_modules');
+const shared = existsSync(modules) && lstatSync(modules).isSymbolicLink();
+if (stale && shared) console.log('▸ node_modules is a link to another checkout: install there, not through the link');
+else if (stale) {
   console.log('▸ Installing npm dependencies (first run)…');
   const r = spawnSync('npm', [existsSync(lock) ? 'ci' : 'install', '--no-audit', '--no-fund'], {
     cwd: root,
