@@ -8,16 +8,7 @@ import { landingPath } from '../lib/roles';
 import { paths } from '../config/paths';
 import { AppShell } from './app-shell';
 import { RouteError } from './route-error';
-import * as homePage from '../routes/home';
 import { NotFoundPage } from '../routes/not-found';
-import { SafetyPage } from '../routes/safety';
-import * as signInPage from '../routes/auth/sign-in';
-import * as volunteerPage from '../routes/auth/volunteer';
-import { ForgotPasswordPage, ResetPasswordPage, VerifyEmailPage } from '../routes/auth/email-links';
-import * as setupPage from '../routes/auth/setup';
-import * as eventPage from '../routes/events/detail';
-import * as manageBookingPage from '../routes/bookings/manage';
-import * as claimPages from '../routes/bookings/claim';
 
 /**
  * A route module exports its page component and, when the page reads data, a `loader` that warms the query cache
@@ -34,18 +25,12 @@ const withGuard = (check: Allow | undefined, loader: LoaderFunction | undefined)
       }
     : loader;
 
-/** Pages most visitors never open load on demand, keeping the first load small on a phone. */
+/** Every page loads on demand: the first load on a phone carries the shell and the page asked for, nothing else. */
 const page = (load: () => Promise<RouteModule>, name: string, check?: Allow) => ({
   lazy: async () => {
     const m = await load();
     return { Component: m[name] as ComponentType, loader: withGuard(check, m.loader), ErrorBoundary: m.ErrorBoundary };
   },
-});
-
-/** Pages on the visitor's first path are in the main bundle. */
-const eager = (m: RouteModule, name: string, check?: Allow) => ({
-  Component: m[name] as ComponentType,
-  loader: withGuard(check, m.loader),
 });
 
 const start = async () => {
@@ -94,14 +79,14 @@ export const router = createBrowserRouter([
         // A page that fails to load says so inside the shell, keeping the menu.
         errorElement: <RouteError />,
         children: [
-          { index: true, ...eager(homePage, 'HomePage') },
-          { path: 'safety', element: <SafetyPage /> },
-          { path: 'sign-in', ...eager(signInPage, 'SignInPage') },
-          { path: 'volunteer', ...eager(volunteerPage, 'VolunteerPage') },
-          { path: 'verify-email', element: <VerifyEmailPage /> },
-          { path: 'forgot-password', element: <ForgotPasswordPage /> },
-          { path: 'reset-password', element: <ResetPasswordPage /> },
-          { path: 'setup', ...eager(setupPage, 'SetupPage') },
+          { index: true, ...page(() => import('../routes/home'), 'HomePage') },
+          { path: 'safety', ...page(() => import('../routes/safety'), 'SafetyPage') },
+          { path: 'sign-in', ...page(() => import('../routes/auth/sign-in'), 'SignInPage') },
+          { path: 'volunteer', ...page(() => import('../routes/auth/volunteer'), 'VolunteerPage') },
+          { path: 'verify-email', ...page(() => import('../routes/auth/email-links'), 'VerifyEmailPage') },
+          { path: 'forgot-password', ...page(() => import('../routes/auth/email-links'), 'ForgotPasswordPage') },
+          { path: 'reset-password', ...page(() => import('../routes/auth/email-links'), 'ResetPasswordPage') },
+          { path: 'setup', ...page(() => import('../routes/auth/setup'), 'SetupPage') },
           { path: 'join/:token', ...page(() => import('../routes/auth/join'), 'JoinPage') },
           { path: 'start', loader: start },
           {
@@ -169,15 +154,15 @@ export const router = createBrowserRouter([
             ...page(() => import('../routes/event-day/live'), 'LiveViewPage', allow.organiser),
           },
           { path: 'events', ...page(() => import('../routes/events/list'), 'EventsPage') },
-          { path: 'events/:eventId', ...eager(eventPage, 'EventPage') },
+          { path: 'events/:eventId', ...page(() => import('../routes/events/detail'), 'EventPage') },
           { path: 'events/:eventId/book', ...page(() => import('../routes/events/book'), 'BookingPage') },
           {
             path: 'events/:eventId/manage',
             ...page(() => import('../routes/events/manage'), 'ManageEventPage', allow.organiser),
           },
-          { path: 'bookings/:reference', ...eager(manageBookingPage, 'ManageBookingPage') },
-          { path: 'waiting-list/:token', ...eager(claimPages, 'ClaimOfferPage') },
-          { path: 'b/:reference', ...eager(claimPages, 'BookingCodePage') },
+          { path: 'bookings/:reference', ...page(() => import('../routes/bookings/manage'), 'ManageBookingPage') },
+          { path: 'waiting-list/:token', ...page(() => import('../routes/bookings/claim'), 'ClaimOfferPage') },
+          { path: 'b/:reference', ...page(() => import('../routes/bookings/claim'), 'BookingCodePage') },
           {
             path: 'groups/:groupId/people',
             ...page(() => import('../routes/groups/people'), 'GroupPeoplePage', allow.organiser),

@@ -1,0 +1,116 @@
+import http from 'node:http';
+import { readFileSync } from 'node:fs';
+import path from 'node:path';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { RunningServer } from '../../server/src/server';
+import { createTestDatabase, type TestDatabase } from '../support/db';
+import { startTestServer } from '../support/server';
+
+/** Vite's build manifest (build.manifest in vite.config.ts): each chunk with its static and dynamic imports. */
+type Manifest = Record<string, { file: string; isEntry?: boolean; imports?: string[]; dynamicImports?: string[] }>;
+
+const dist = path.resolve('dist/client');
+const manifest: Manifest = JSON.parse(readFileSync(path.join(dist, '.vite/manifest.json'), 'utf8'));
+const entry = Object.keys(manifest).find((k) => manifest[k].isEntry)!;
+// The issue's budget for the public booking path: at most 120 KB of gzipped JavaScript before it is interactive.
+const BUDGET = 120_000;
+
+let db: TestDatabase;
+let server: RunningServer;
+beforeAll(async () => {
+  db = await createTestDatabase();
+  server = await startTestServer(db.url);
+});
+afterAll(async () => {
+  await server.stop();
+  await db.drop();
+});
+
+/** The chunks a browser must fetch before `keys` run: the keys and everything they import statically. */
+function staticClosure(keys: string[]): string[] {
+  const seen = new Set<string>();
+  const walk = (k: string) => {
+    if (seen.has(k)) return;
+    seen.add(k);
+    for (const i of manifest[k].imports ?? []) walk(i);
+  };
+  keys.forEach(walk);
+  return [...seen];
+}
+
+/** Bytes the app sends for a file with this Accept-Encoding. */
+function servedBytes(file: string, encoding: 'gzip' | 'br') {
+  return new Promise<{ bytes: number; encoding?: string; body: Buffer }>((resolve, reject) => {
+    http
+      .get(`${server.url}/${file}`, { headers: { 'accept-encoding': encoding } }, (res) => {
+        const chunks: Buffer[] = [];
+        res.on('data', (c: Buffer) => chunks.push(c));
+        res.on('end', () => {
+          const body = Buffer.concat(chunks);
+          resolve({ bytes: body.length, encoding: res.headers['content-encoding'], body });
+        });
+      })
+      .on('error', reject);
+  });
+}
+
+async function weigh(keys: string[]) {
+  let gzip = 0;
+  let br = 0;
+  for (const k of keys) {
+    const g = await servedBytes(manifest[k].file, 'gzip');
+    const b = await servedBytes(manifest[k].file, 'br');
+    // A file too small to gain from compression goes out as it is.
+    expect([undefined, 'gzip']).toContain(g.encoding);
+    gzip += g.bytes;
+    br += b.bytes;
+  }
+  return { gzip, br };
+}
+
+const kb = (n: number) => `${(n / 1000).toFixed(1)} KB`;
+
+describe('What a phone downloads before the public pages work', () => {
+  it('keeps the entry and its static imports within 120 KB gzipped', async () => {
+    const chunks = staticClosure([entry]);
+    const { gzip, br } = await weigh(chunks);
+    console.log(`entry: ${chunks.length} chunk(s), ${kb(gzip)} gzip, ${kb(br)} brotli`);
+    expect(gzip).toBeLessThanOrEqual(BUDGET);
+  });
+
+  it('loads every screen on demand: no route module is a static import of the entry', () => {
+    const routes = staticClosure([entry]).filter((k) => k.startsWith('src/routes/'));
+    expect(routes).toEqual([]);
+    const lazy = manifest[entry].dynamicImports ?? [];
+    for (const screen of [
+      'src/routes/events/list.tsx',
+      'src/routes/events/manage.tsx',
+      'src/routes/admin/overview.tsx',
+      'src/routes/workbench/bench.tsx',
+      'src/routes/triage/board.tsx',
+      'src/routes/impact/dashboard.tsx',
+      'src/routes/event-day/desk.tsx',
+    ])
+      expect(lazy, screen).toContain(screen);
+  });
+
+  it('weighs the public booking path page by page, with FullCalendar and the charts left out', async () => {
+    for (const page of ['src/routes/events/list.tsx', 'src/routes/events/detail.tsx', 'src/routes/events/book.tsx']) {
+      const chunks = staticClosure([entry, page]);
+      const { gzip, br } = await weigh(chunks);
+      console.log(`${page}: ${chunks.length} chunks, ${kb(gzip)} gzip, ${kb(br)} brotli`);
+      for (const k of chunks) {
+        const js = readFileSync(path.join(dist, manifest[k].file), 'utf8');
+        expect(js, `${k} in ${page}`).not.toContain('fc-daygrid');
+        expect(js, `${k} in ${page}`).not.toContain('recharts');
+      }
+    }
+    // The markers are real: the calendar's and the public impact page's own chunks carry them.
+    const text = (keys: string[]) => keys.map((k) => readFileSync(path.join(dist, manifest[k].file), 'utf8')).join('');
+    expect(text(staticClosure(['src/components/ui/month-calendar-grid.tsx']))).toContain('fc-daygrid');
+    expect(text(staticClosure(['src/routes/impact/public.tsx']))).toContain('recharts');
+    // The sessions list is the way in: with its own chunks it stays within the budget as the browser receives it.
+    const events = await weigh(staticClosure([entry, 'src/routes/events/list.tsx']));
+    expect(events.br).toBeLessThanOrEqual(BUDGET);
+  });
+});
