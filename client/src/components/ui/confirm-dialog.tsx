@@ -1,4 +1,4 @@
-import { useEffect, useRef, type ReactNode } from 'react';
+import { useEffect, useId, useRef, type ReactNode } from 'react';
 import { Button } from './button';
 
 /** A modal question before anything destructive; Escape or "Keep" cancels. */
@@ -26,15 +26,22 @@ export function ConfirmDialog({
   cancelLabel?: string;
 }) {
   const ref = useRef<HTMLDialogElement>(null);
+  const id = useId();
   useEffect(() => {
     const d = ref.current;
     if (!d) return;
-    if (open && !d.open) d.showModal();
+    if (open && !d.open) {
+      d.showModal();
+      // The safe answer takes the first focus, so Enter or Escape both leave things as they were.
+      d.querySelector<HTMLButtonElement>('[data-keep]')?.focus();
+    }
     if (!open && d.open) d.close();
   }, [open]);
   return (
     <dialog
       ref={ref}
+      aria-labelledby={`${id}-title`}
+      aria-describedby={`${id}-message`}
       onCancel={(e) => {
         e.preventDefault();
         onCancel();
@@ -42,11 +49,15 @@ export function ConfirmDialog({
       className="m-auto w-[min(28rem,92vw)] rounded-xl p-0 shadow-xl backdrop:bg-ink/40"
     >
       <div className="space-y-3 p-6">
-        <h2 className="text-lg">{title}</h2>
-        <p className="text-ink-soft">{message}</p>
+        <h2 id={`${id}-title`} className="text-lg">
+          {title}
+        </h2>
+        <p id={`${id}-message`} className="text-ink-soft">
+          {message}
+        </p>
         {children}
         <div className="flex justify-end gap-2 pt-2">
-          <Button variant="secondary" onClick={onCancel} autoFocus>
+          <Button data-keep variant="secondary" onClick={onCancel}>
             {cancelLabel}
           </Button>
           <Button variant={tone} onClick={onConfirm} busy={busy}>

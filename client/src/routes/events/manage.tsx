@@ -11,6 +11,7 @@ import { paths } from '../../config/paths';
 import { eventQuery } from '../../features/events/api/get-event';
 import { useChangeEvent } from '../../features/events/api/change-event';
 import { eventBookingsQuery, useEventBookings } from '../../features/events/api/get-event-bookings';
+import { CancelSession } from '../../features/events/components/cancel-session';
 import { PlacesBar, StatusBadge } from '../../features/events/components/places-bar';
 import { queryClient } from '../../lib/query-client';
 
@@ -29,8 +30,7 @@ export function ManageEventPage() {
   const { data: e } = useSuspenseQuery(eventQuery(id));
   const coming = useEventBookings(id);
   const action = useChangeEvent(id);
-  const [ask, setAsk] = useState<null | 'publish' | 'close' | 'cancel'>(null);
-  const [reason, setReason] = useState('');
+  const [ask, setAsk] = useState<null | 'publish' | 'close'>(null);
   const tz = e.timeZone;
   const draft = e.status === 'draft';
   const questions = {
@@ -43,11 +43,6 @@ export function ManageEventPage() {
       title: 'Close booking?',
       message: 'No new bookings or waiting-list entries are taken. Existing bookings stay.',
       label: 'Close booking',
-    },
-    cancel: {
-      title: 'Cancel this session?',
-      message: `Everyone booked (${coming.data?.summary.bookings ?? 0} booking${coming.data?.summary.bookings === 1 ? '' : 's'}) gets a cancellation mail. This cannot be undone.`,
-      label: 'Cancel the session',
     },
   };
   const maxSkill = Math.max(1, ...(coming.data?.summary.bySkill.map((s) => s.count) ?? [1]));
@@ -74,11 +69,6 @@ export function ManageEventPage() {
         {e.status === 'published' && (
           <Button variant="secondary" onClick={() => setAsk('close')}>
             Close booking
-          </Button>
-        )}
-        {e.status !== 'cancelled' && (
-          <Button variant="danger" onClick={() => setAsk('cancel')}>
-            Cancel session
           </Button>
         )}
         {e.status !== 'draft' && (
@@ -264,39 +254,49 @@ export function ManageEventPage() {
         )}
       </section>
 
+      {e.status !== 'cancelled' && (
+        <CancelSession
+          event={e}
+          toTell={
+            coming.data ? coming.data.bookings.filter((b) => b.status === 'confirmed' && b.visitorEmail).length : null
+          }
+          busy={action.isPending}
+          onConfirm={(reason, done) =>
+            action.mutate(
+              { kind: 'cancel', reason },
+              {
+                onSettled: () => {
+                  done();
+                  coming.refetch();
+                },
+              },
+            )
+          }
+        />
+      )}
+
       <ConfirmDialog
         open={ask !== null}
         title={ask ? questions[ask].title : ''}
         message={ask ? questions[ask].message : ''}
         confirmLabel={ask ? questions[ask].label : ''}
-        tone={ask === 'cancel' ? 'danger' : 'primary'}
-        cancelLabel={ask === 'cancel' ? 'Keep the session' : 'Not yet'}
+        tone="primary"
+        cancelLabel="Not yet"
         busy={action.isPending}
         onCancel={() => setAsk(null)}
         onConfirm={() =>
           ask &&
-          action.mutate(ask === 'cancel' ? { kind: 'cancel', reason: reason || undefined } : { kind: ask }, {
-            onSettled: () => {
-              setAsk(null);
-              setReason('');
-              coming.refetch();
+          action.mutate(
+            { kind: ask },
+            {
+              onSettled: () => {
+                setAsk(null);
+                coming.refetch();
+              },
             },
-          })
+          )
         }
-      >
-        {ask === 'cancel' && (
-          <label className="block text-sm font-semibold">
-            Reason, for the mail (optional)
-            <textarea
-              rows={2}
-              value={reason}
-              maxLength={500}
-              onChange={(ev) => setReason(ev.target.value)}
-              className="mt-1 block w-full rounded-lg border border-ink/20 px-3 py-2 font-normal"
-            />
-          </label>
-        )}
-      </ConfirmDialog>
+      />
     </div>
   );
 }
