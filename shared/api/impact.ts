@@ -14,6 +14,11 @@ export interface StatsFilter {
   to?: string;
 }
 export type Stats = ImpactTotals & { displacement: number; filter: StatsFilter };
+/** One session's figures for the group's list of past sessions. */
+export type SessionFigures = { eventId: number } & Pick<
+  ImpactTotals,
+  'items' | 'fixed' | 'partsNeeded' | 'advice' | 'endOfLife' | 'unknown' | 'kgDiverted'
+>;
 export interface Method {
   displacement: number;
   displacementNote: string;

@@ -133,6 +133,7 @@ const table: Row[] = [
   ['GET', (g) => `/api/events/${g.ownEvent}/report`, ownOrganiser],
   ['GET', (g) => `/api/groups/${g.own}/follow-ups`, ownOrganiser],
   ['GET', (g) => `/api/groups/${g.own}/report`, ownOrganiser],
+  ['GET', (g) => `/api/groups/${g.own}/session-figures`, ownOrganiser],
   [
     'GET',
     () => '/api/knowledge',

@@ -1,7 +1,9 @@
-import { and, asc, eq, isNotNull, like } from 'drizzle-orm';
+import { and, asc, desc, eq, isNotNull, like, lt, sql } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser } from 'playwright-core';
-import { bookings, events } from '../../server/src/db/schema/index';
+import { bookings, events, impactCells, memberships, repairGroups, users } from '../../server/src/db/schema/index';
+import { TODAY_TITLE } from '../../server/src/seed/demo-today';
+import { makeGroup } from '../support/factories';
 import { DESKTOP, launchBrowser, shot, signedIn } from '../support/browser';
 import { startDemoApp, type DemoApp } from '../support/demo-app';
 
@@ -19,6 +21,76 @@ afterAll(async () => {
 
 const statusOf = async (id: number) =>
   (await app.db.db.select({ s: events.status }).from(events).where(eq(events.id, id)))[0].s;
+
+describe('the organiser at 1280 px: the group’s sessions', () => {
+  it('lists today and the coming sessions first, and the past ones apart with what came of them', async () => {
+    const [g] = await app.db.db.select().from(repairGroups).where(eq(repairGroups.slug, 'kestlebridge-menders'));
+    const { context, page } = await signedIn(browser, app.server.url, 'organiser', DESKTOP);
+    await page.goto(`${app.server.url}/groups/${g.id}/events`);
+    const coming = page.getByRole('region', { name: 'Today and coming up' });
+    const past = page.getByRole('region', { name: /^Past sessions/ });
+    await coming.getByRole('listitem').first().waitFor();
+    await past
+      .getByText(/items? seen/)
+      .first()
+      .waitFor();
+    await page.screenshot({ path: shot('group-sessions-desktop'), fullPage: true });
+
+    // Today's session leads and is marked; then the rest, soonest first; nothing that is over.
+    const upcoming = await app.db.db
+      .select({ title: events.title, startsAt: events.startsAt })
+      .from(events)
+      .where(and(eq(events.groupId, g.id), sql`${events.startsAt} > NOW()`))
+      .orderBy(asc(events.startsAt));
+    const comingRows = coming.getByRole('listitem');
+    expect(await comingRows.count()).toBe(upcoming.length + 1);
+    await expect(comingRows.first().textContent()).resolves.toMatch(new RegExp(`^Today.*${TODAY_TITLE}`));
+    const titles = (await comingRows.allTextContents()).slice(1);
+    titles.forEach((t, i) => expect(t).toContain(upcoming[i].title));
+    expect(await coming.getByText('Today', { exact: true }).count()).toBe(1);
+
+    // Past: most recent first, with its figures from the statistics rollup, and no places free.
+    const [last] = await app.db.db
+      .select({ id: events.id })
+      .from(events)
+      .where(and(eq(events.groupId, g.id), lt(events.endsAt, sql`CURDATE()`)))
+      .orderBy(desc(events.startsAt))
+      .limit(1);
+    const [cells] = await app.db.db
+      .select({ items: sql<string>`SUM(${impactCells.items})`, fixed: sql<string>`SUM(${impactCells.fixed})` })
+      .from(impactCells)
+      .where(eq(impactCells.eventId, last.id));
+    const firstPast = past.getByRole('listitem').first();
+    const text = await firstPast.textContent();
+    expect(text).toContain(`${Number(cells.items)} items seen`);
+    expect(text).toContain(`${Number(cells.fixed)} fixed`);
+    expect(text).toMatch(/[\d.]+ kg kept out of the bin/);
+    expect(await past.getByText(/places free|Fully booked/).count()).toBe(0);
+    await expect(firstPast.getByRole('link', { name: /^Report/ }).getAttribute('href')).resolves.toBe(
+      `/events/${last.id}/report`,
+    );
+
+    // Paged: six at first, then more on request.
+    expect(await past.getByRole('listitem').count()).toBe(6);
+    await past.getByRole('button', { name: /^Show \d+ earlier sessions$/ }).click();
+    expect(await past.getByRole('listitem').count()).toBeGreaterThan(6);
+    await context.close();
+  });
+
+  it('says so when a group has no sessions in either list', async () => {
+    const groupId = await makeGroup(app.db.db, 'Newcombe Fixers');
+    const [me] = await app.db.db.select().from(users).where(eq(users.email, 'organiser@example.org'));
+    await app.db.db.insert(memberships).values({ userId: me.id, groupId, role: 'organiser', status: 'active' });
+    const { context, page } = await signedIn(browser, app.server.url, 'organiser', DESKTOP);
+    await page.goto(`${app.server.url}/groups/${groupId}/events`);
+    await page.getByRole('region', { name: 'Today and coming up' }).getByText('Nothing planned yet').waitFor();
+    await page
+      .getByRole('region', { name: /^Past sessions/ })
+      .getByText('No past sessions yet')
+      .waitFor();
+    await context.close();
+  });
+});
 
 describe('the organiser at 1280 px: cancelling a session', () => {
   it('keeps “Cancel session” apart from “Close booking” and asks first, naming the session and the bookings to tell', async () => {

@@ -1,11 +1,14 @@
+import { useState } from 'react';
 import { Link, useParams, type LoaderFunctionArgs } from 'react-router';
-import { formatDay, formatTimeRange } from '../../../../shared/format';
+import { splitSessions } from '../../../../shared/sessions';
 import { GroupTabs } from '../../components/layouts/group-tabs';
 import { Alert, EmptyState, Spinner } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
 import { useGroupEvents, groupEventsQuery } from '../../features/events/api/get-group-events';
+import { ComingRow, PastRow } from '../../features/events/components/session-rows';
 import { useGroupSettings, groupSettingsQuery } from '../../features/groups/api/get-group-settings';
-import { PlacesBar, StatusBadge } from '../../features/events/components/places-bar';
+import { useSessionFigures } from '../../features/impact/api/get-session-figures';
+import { organises, useUser } from '../../lib/auth';
 import { queryClient } from '../../lib/query-client';
 
 /** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
@@ -15,10 +18,20 @@ export const loader = ({ params }: LoaderFunctionArgs) =>
     queryClient.ensureQueryData(groupSettingsQuery(Number(params.groupId))),
   ]).catch(() => null);
 
+/** Past sessions shown at first; the rest come a page at a time. */
+const PAST_PAGE = 6;
+
+/** A group's sessions: today's and the coming ones first, soonest first; past ones apart, with what came of them. */
 export function GroupEventsPage() {
   const groupId = Number(useParams().groupId);
   const events = useGroupEvents(groupId);
   const group = useGroupSettings(groupId);
+  const { data: user } = useUser();
+  const figures = useSessionFigures(groupId, organises(user, groupId));
+  const [pastShown, setPastShown] = useState(PAST_PAGE);
+  const { coming, past } = splitSessions(events.data ?? [], new Date());
+  const figuresOf = (eventId: number) =>
+    figures.data ? (figures.data.find((f) => f.eventId === eventId) ?? null) : undefined;
   return (
     <div>
       <div className="mb-2 flex flex-wrap items-center justify-between gap-3">
@@ -33,33 +46,58 @@ export function GroupEventsPage() {
       <GroupTabs groupId={groupId} />
       {events.isPending && <Spinner />}
       {events.error && <Alert tone="error">{events.error.message}</Alert>}
-      {events.data?.length === 0 && (
-        <EmptyState title="No sessions yet" icon="▦">
-          Plan the first one: pick a date, the venue and the opening hours, and Mendery cuts the slots.
-        </EmptyState>
+      {events.data && (
+        <div className="space-y-8">
+          <section aria-labelledby="coming-sessions">
+            <h2 id="coming-sessions" className="mb-3 text-xl">
+              Today and coming up
+            </h2>
+            {coming.length === 0 ? (
+              <EmptyState title="Nothing planned yet" icon="▦">
+                Plan the next one: pick a date, the venue and the opening hours, and Mendery cuts the slots.
+              </EmptyState>
+            ) : (
+              <ul className="space-y-3">
+                {coming.map((e) => (
+                  <li key={e.id}>
+                    <ComingRow e={e} today={e.when === 'today'} />
+                  </li>
+                ))}
+              </ul>
+            )}
+          </section>
+          <section aria-labelledby="past-sessions">
+            <h2 id="past-sessions" className="mb-3 text-xl">
+              Past sessions {past.length > 0 && <span className="text-base text-ink-soft">({past.length})</span>}
+            </h2>
+            {figures.error && <Alert tone="error">The figures could not be read: {figures.error.message}</Alert>}
+            {past.length === 0 ? (
+              <EmptyState title="No past sessions yet" icon="◷">
+                Once a session is over, it moves here with what came of it: items seen, fixed and kilograms kept.
+              </EmptyState>
+            ) : (
+              <>
+                <ul className="space-y-2">
+                  {past.slice(0, pastShown).map((e) => (
+                    <li key={e.id}>
+                      <PastRow e={e} figures={figuresOf(e.id)} />
+                    </li>
+                  ))}
+                </ul>
+                {past.length > pastShown && (
+                  <button
+                    type="button"
+                    onClick={() => setPastShown((n) => n + PAST_PAGE)}
+                    className="mt-3 inline-flex min-h-11 items-center rounded-lg px-4 font-bold text-navy ring-1 ring-navy/25 hover:bg-navy/5"
+                  >
+                    Show {Math.min(PAST_PAGE, past.length - pastShown)} earlier sessions
+                  </button>
+                )}
+              </>
+            )}
+          </section>
+        </div>
       )}
-      <ul className="space-y-3">
-        {events.data?.map((e) => (
-          <li key={e.id}>
-            <Link
-              to={paths.manageEvent(e.id)}
-              className="grid gap-3 rounded-xl bg-white p-4 ring-1 ring-ink/5 hover:ring-copper sm:grid-cols-[1fr_14rem] sm:items-center"
-            >
-              <div>
-                <div className="flex items-center gap-2">
-                  <StatusBadge status={e.status} />
-                  <span className="text-sm font-bold text-copper-dark">
-                    {formatDay(e.startsAt, e.timeZone)} · {formatTimeRange(e.startsAt, e.endsAt, e.timeZone)}
-                  </span>
-                </div>
-                <p className="mt-1 text-lg font-extrabold text-navy">{e.title}</p>
-                <p className="text-sm text-ink-soft">{e.venue.name}</p>
-              </div>
-              <PlacesBar free={e.freePlaces} total={e.totalPlaces} />
-            </Link>
-          </li>
-        ))}
-      </ul>
     </div>
   );
 }

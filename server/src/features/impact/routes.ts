@@ -16,6 +16,7 @@ import {
   publicImpact,
   rangeReport,
   records,
+  sessionFigures,
   setDisplacement,
   stats,
 } from './service';
@@ -118,6 +119,14 @@ export function impactRoutes(ctx: AppContext) {
     async (req, res) => {
       const f = filter(req);
       res.json(await rangeReport(ctx, Number(req.params.groupId), f.from, f.to));
+    },
+  );
+  r.get(
+    '/groups/:groupId/session-figures',
+    requireGroupRole(['organiser'], (req) => Number(req.params.groupId)),
+    async (req, res) => {
+      const { groupId } = params(req, z.object({ groupId: z.coerce.number().int().positive() }));
+      res.json(await sessionFigures(ctx, groupId));
     },
   );
   r.get(

@@ -1,5 +1,12 @@
 import { BARRIER_LABELS, OUTCOME_LABELS } from '../../../../shared/event-day/constants';
-import type { EventReport, Method, PublicImpact, RecordsPage, Stats } from '../../../../shared/api/impact';
+import type {
+  EventReport,
+  Method,
+  PublicImpact,
+  RecordsPage,
+  SessionFigures,
+  Stats,
+} from '../../../../shared/api/impact';
 import { DISPLACEMENT_NOTE, DISPLACEMENT_SOURCE, FACTOR_SOURCE } from '../../../../shared/impact/factors';
 import { totalsFromCells } from '../../../../shared/impact/statistics';
 import { shortName } from '../../../../shared/event-day/tag-code';
@@ -11,6 +18,7 @@ import {
   groupById,
   impactCategories,
   readCells,
+  readSessionCells,
   recordRows,
   sessionsInRange,
   setDisplacement as storeDisplacement,
@@ -38,6 +46,27 @@ export async function stats(ctx: AppContext, f: StatsFilter): Promise<Stats> {
   const { db } = ctx.database;
   const [c, cats, d] = await Promise.all([readCells(db, f), impactCategories(db), displacement(db)]);
   return { ...totalsFromCells(c, cats, d), displacement: d, filter: f };
+}
+
+/** Each past session's outcomes and kilograms, for the group's session list (the same engine as every figure). */
+export async function sessionFigures(ctx: AppContext, groupId: number): Promise<SessionFigures[]> {
+  const { db } = ctx.database;
+  const [cells, cats, d] = await Promise.all([readSessionCells(db, groupId), impactCategories(db), displacement(db)]);
+  const byEvent = new Map<number, typeof cells>();
+  for (const c of cells) byEvent.set(c.eventId, [...(byEvent.get(c.eventId) ?? []), c]);
+  return [...byEvent].map(([eventId, cs]) => {
+    const t = totalsFromCells(cs, cats, d);
+    return {
+      eventId,
+      items: t.items,
+      fixed: t.fixed,
+      partsNeeded: t.partsNeeded,
+      advice: t.advice,
+      endOfLife: t.endOfLife,
+      unknown: t.unknown,
+      kgDiverted: t.kgDiverted,
+    };
+  });
 }
 
 /** The method and its sources, shown beside every figure. */

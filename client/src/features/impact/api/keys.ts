@@ -10,6 +10,7 @@ export const impactKeys = {
   eventReport: (eventId: number) => [...impactKeys.all, 'report', 'event', eventId] as const,
   groupReport: (groupId: number, from?: string, to?: string) =>
     [...impactKeys.all, 'report', 'group', groupId, from ?? '', to ?? ''] as const,
+  sessionFigures: (groupId: number) => [...impactKeys.all, 'session-figures', groupId] as const,
   followUps: (groupId: number) => [...impactKeys.all, 'follow-ups', groupId] as const,
   rebook: (token: string) => [...impactKeys.all, 'rebook', token] as const,
   settings: () => [...impactKeys.all, 'settings'] as const,

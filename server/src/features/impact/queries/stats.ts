@@ -198,3 +198,22 @@ export async function sessionsInRange(db: DbOrTx, groupId: number, from?: string
     )
     .orderBy(asc(events.startsAt));
 }
+
+/** A group's rolled-up cells one session at a time (a session has a cell per category it saw). */
+export async function readSessionCells(db: DbOrTx, groupId: number): Promise<(ImpactCell & { eventId: number })[]> {
+  const rows = await db.select().from(impactCells).where(eq(impactCells.groupId, groupId));
+  return rows.map((r) => ({
+    eventId: r.eventId,
+    month: r.eventDate.slice(0, 7),
+    categoryId: r.categoryId,
+    items: r.items,
+    fixed: r.fixed,
+    partsNeeded: r.partsNeeded,
+    advice: r.advice,
+    endOfLife: r.endOfLife,
+    fixedWeighedKg: Number(r.fixedWeighedKg),
+    fixedUnweighed: r.fixedUnweighed,
+    // The session list shows outcomes and mass only; barriers stay with the dashboard.
+    barriers: {},
+  }));
+}
