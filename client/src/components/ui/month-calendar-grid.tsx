@@ -31,6 +31,10 @@ export default function MonthCalendarGrid({ events, detail, onOpen, today = fals
           ?.querySelectorAll('.fc-prev-button, .fc-next-button')
           .forEach((b) => b.setAttribute('aria-label', b.getAttribute('title') ?? ''));
       }}
+      dayCellDidMount={({ el }) => {
+        // A day's name would be its number alone, while the cell also shows its events: let the content name it.
+        el.removeAttribute('aria-labelledby');
+      }}
       eventDisplay="block"
       dayMaxEvents={3}
       moreLinkText={(n) => `+${n}`}

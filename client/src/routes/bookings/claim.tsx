@@ -118,7 +118,7 @@ export function BookingCodePage() {
     );
   return (
     <Card className="mx-auto max-w-md text-center">
-      <p className="text-sm font-semibold text-ink-soft">Booking reference</p>
+      <h1 className="text-sm font-semibold text-ink-soft">Booking reference</h1>
       <p className="font-mono text-4xl font-extrabold tracking-widest text-navy">{code.data.reference}</p>
       <p className="mt-3 text-ink-soft">
         Show this code at the reception desk when you arrive. To change the booking, use the link in your confirmation

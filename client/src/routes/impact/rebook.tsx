@@ -156,12 +156,17 @@ export function RebookPage() {
                             type="button"
                             disabled={s.free === 0 || book.isPending}
                             onClick={() => setChosen({ event: e, slot: s })}
-                            aria-label={`${formatTime(s.startsAt, tz)}, ${s.free === 0 ? 'full' : `${s.free} ${s.free === 1 ? 'place' : 'places'} free`}`}
                             className="w-full rounded-lg p-2 text-center ring-1 ring-ink/20 transition hover:bg-navy hover:text-white hover:ring-navy disabled:cursor-not-allowed disabled:bg-ink/5 disabled:text-ink-soft disabled:ring-ink/10 disabled:hover:bg-ink/5 disabled:hover:text-ink-soft"
                           >
                             <span className="block text-lg font-extrabold">{formatTime(s.startsAt, tz)}</span>
                             <span className="block text-xs font-semibold">
-                              {s.free === 0 ? 'full' : `${s.free} free`}
+                              {s.free === 0 ? (
+                                'full'
+                              ) : (
+                                <>
+                                  {s.free} <span className="sr-only">{s.free === 1 ? 'place' : 'places'}</span> free
+                                </>
+                              )}
                             </span>
                           </button>
                         </li>

@@ -299,6 +299,9 @@ function Pagination({ total, page, atPage }: { total: number; page: number; atPa
   const end = Math.min(total, page * PAGE_SIZE);
   const pill =
     'inline-flex min-h-11 items-center rounded-lg bg-white px-4 font-bold text-navy ring-1 ring-navy/25 hover:bg-navy/5';
+  // The end of the list: greyed, but still readable (a faded copy of the link fell below 3:1).
+  const endPill =
+    'inline-flex min-h-11 items-center rounded-lg bg-white px-4 font-bold text-ink-soft ring-1 ring-ink/15';
   return (
     <nav aria-label="Pages" className="mt-4 flex flex-wrap items-center justify-between gap-3">
       <p className="text-sm text-ink-soft">
@@ -311,7 +314,7 @@ function Pagination({ total, page, atPage }: { total: number; page: number; atPa
               ← Previous
             </Link>
           ) : (
-            <span className={`${pill} pointer-events-none opacity-40`} aria-hidden>
+            <span className={endPill} aria-hidden>
               ← Previous
             </span>
           )}
@@ -320,7 +323,7 @@ function Pagination({ total, page, atPage }: { total: number; page: number; atPa
               Next →
             </Link>
           ) : (
-            <span className={`${pill} pointer-events-none opacity-40`} aria-hidden>
+            <span className={endPill} aria-hidden>
               Next →
             </span>
           )}

@@ -7,7 +7,7 @@ import { useGroupSettings } from '../../features/groups/api/get-group-settings';
 import { queryClient } from '../../lib/query-client';
 
 const LEVEL = ['', 'learning', 'capable', 'expert'];
-const TONE = ['', 'bg-sage-light text-sage', 'bg-sage/60 text-white', 'bg-sage text-white'];
+const TONE = ['', 'bg-sage-light text-sage', 'bg-sage/60 text-ink', 'bg-sage text-white'];
 
 /** The page reads the matrix with suspense; a failure to read it is the route's error. */
 export const loader = ({ params }: LoaderFunctionArgs) =>

@@ -178,10 +178,18 @@ function PartCard({ groupId, part: p, canRemove }: { groupId: number; part: Salv
         </Button>
         <Button
           variant="quiet"
-          aria-label={took ? `Put the ${p.value} back in the box` : `Add one ${p.value} to the box`}
           onClick={() => update.mutate({ id: p.id, quantity: p.quantity + 1 }, { onSuccess: () => setTook(null) })}
         >
-          {took ? 'Put it back' : 'Add one to the box'}
+          {/* The part's name is read out but not shown: each card already has it as its title. */}
+          {took ? (
+            <>
+              Put it back<span className="sr-only">: {p.value}</span>
+            </>
+          ) : (
+            <>
+              Add one<span className="sr-only"> {p.value}</span> to the box
+            </>
+          )}
         </Button>
         {canRemove && (
           <Button variant="quiet" aria-label={`Remove ${p.value}`} onClick={() => setConfirm(true)}>

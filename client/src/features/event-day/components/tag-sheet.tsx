@@ -137,7 +137,13 @@ export function TagSheet({ eventId }: { eventId: number }) {
         </div>
       </div>
 
-      <div className="overflow-x-auto px-4 py-6 print:overflow-visible print:p-0">
+      {/* Sheets wider than a phone scroll sideways; the region takes the focus so arrow keys can scroll it. */}
+      <div
+        role="region"
+        aria-label="Tags to print"
+        tabIndex={0}
+        className="overflow-x-auto px-4 py-6 print:overflow-visible print:p-0"
+      >
         {sheet.isPending ? (
           <div className="mx-auto max-w-md rounded-xl bg-white px-6">
             <Spinner label="Preparing the tags…" />
@@ -162,7 +168,7 @@ export function TagSheet({ eventId }: { eventId: number }) {
           <div className="mx-auto w-max space-y-8 print:space-y-0">
             {pages.map((cells, p) => (
               <div key={p}>
-                <p className="mb-1 text-xs font-semibold text-ink-soft print:hidden">
+                <p className="mb-1 text-xs font-semibold text-ink print:hidden">
                   {perSheet === 1 ? 'Label' : 'Sheet'} {p + 1} of {pages.length}
                 </p>
                 <div

@@ -60,7 +60,8 @@ export function ChartCard({
         </Heading>
         <p className="mb-2 text-sm text-ink-soft">{summary}</p>
         {children && (
-          <div aria-hidden className="h-[260px] w-full min-w-0">
+          // The summary and the table say what the chart shows; inert keeps its parts out of the Tab order.
+          <div aria-hidden inert className="h-[260px] w-full min-w-0">
             {children}
           </div>
         )}
