@@ -1,11 +1,10 @@
 import { useQuery } from '@tanstack/react-query';
-import type { ReactNode } from 'react';
 import { useSearchParams, type LoaderFunctionArgs } from 'react-router';
-import { Area, AreaChart, ResponsiveContainer } from 'recharts';
 import { paths } from '../../config/paths';
 import { publicImpactQuery } from '../../features/impact/api/get-public-impact';
 import { queryClient } from '../../lib/query-client';
-import { monthLabel, oneDp, positiveInt, whole } from '../../features/impact/components/display';
+import { oneDp, positiveInt, whole } from '../../features/impact/components/display';
+import { Quilt } from '../../features/impact/components/impact-story';
 
 /* The host page decides the frame; nothing of the app's own page background or scrolling may show inside it. */
 const FRAME_CSS =
@@ -21,8 +20,8 @@ export const loader = ({ request }: LoaderFunctionArgs) =>
     .catch(() => null);
 
 /**
- * The widget another website puts in an iframe of about 360×260: the group's headline figures and a sparkline,
- * with a link to the public page that explains the method.
+ * The piece another website puts in an iframe of about 360×260: the group's figures in a sentence and its quilt of
+ * outcomes, with a link to the public page that explains the method.
  */
 export function ImpactWidgetPage() {
   const [params] = useSearchParams();
@@ -30,7 +29,6 @@ export function ImpactWidgetPage() {
   const impact = useQuery(publicImpactQuery(groupId));
   const d = impact.data;
   const name = d?.group ? d.group.name : 'All groups on Mendery';
-  const months = (d?.byMonth ?? []).map((m) => ({ month: m.month, kg: Math.round(m.kgDiverted * 10) / 10 }));
   const methodLink = (
     <a
       href={paths.publicImpact(groupId)}
@@ -70,53 +68,23 @@ export function ImpactWidgetPage() {
               </p>
             </header>
 
-            <dl className="mt-2 grid grid-cols-3 gap-2">
-              <Figure value={whole.format(d.fixed)} label="items fixed" testId="widget-fixed" />
-              <Figure value={oneDp.format(d.kgDiverted)} label="kg diverted" testId="widget-kg" />
-              <Figure
-                value={oneDp.format(d.co2eKg)}
-                label={
-                  <>
-                    kg CO<sub>2</sub>e avoided
-                  </>
-                }
-                testId="widget-co2e"
-              />
-            </dl>
+            <p className="mt-2 text-[15px] leading-snug">
+              <Figure value={whole.format(d.fixed)} testId="widget-fixed" /> things mended so far, keeping{' '}
+              <Figure value={oneDp.format(d.kgDiverted)} testId="widget-kg" /> kg out of the bin and about{' '}
+              <Figure value={oneDp.format(d.co2eKg)} testId="widget-co2e" /> kg CO<sub>2</sub>e out of the air.
+            </p>
 
             <div className="mt-2 min-h-0 flex-1">
-              {months.length > 1 ? (
-                <figure>
-                  <div aria-hidden className="h-[72px] w-full">
-                    <ResponsiveContainer width="100%" height="100%">
-                      <AreaChart
-                        data={months}
-                        margin={{ top: 2, right: 0, bottom: 0, left: 0 }}
-                        accessibilityLayer={false}
-                      >
-                        <Area
-                          type="monotone"
-                          dataKey="kg"
-                          stroke="#5d7f6a"
-                          strokeWidth={2}
-                          fill="#5d7f6a"
-                          fillOpacity={0.2}
-                          isAnimationActive={false}
-                          dot={false}
-                        />
-                      </AreaChart>
-                    </ResponsiveContainer>
-                  </div>
-                  <figcaption className="text-[11px] text-ink-soft">
-                    kg by month, {monthLabel(months[0].month)}–{monthLabel(months[months.length - 1].month)}
+              {d.items > 0 ? (
+                <figure className="flex items-center gap-3">
+                  <Quilt d={d} columns={5} className="h-[76px] w-auto shrink-0" />
+                  <figcaption className="text-xs leading-snug text-ink-soft">
+                    {whole.format(d.items)} items brought in; each patch is a twentieth of them, stitched ones went home
+                    fixed.
                   </figcaption>
                 </figure>
               ) : (
-                <p className="text-xs text-ink-soft">
-                  {d.items === 0
-                    ? 'No repairs counted yet: come to a session!'
-                    : `${whole.format(d.items)} items brought in so far.`}
-                </p>
+                <p className="text-xs text-ink-soft">No repairs counted yet: come to a session!</p>
               )}
             </div>
 
@@ -128,13 +96,10 @@ export function ImpactWidgetPage() {
   );
 }
 
-function Figure({ value, label, testId }: { value: string; label: ReactNode; testId: string }) {
+function Figure({ value, testId }: { value: string; testId: string }) {
   return (
-    <div className="flex min-w-0 flex-col-reverse">
-      <dt className="text-[11px] font-semibold leading-tight text-ink-soft">{label}</dt>
-      <dd className="truncate text-xl font-extrabold leading-tight text-navy tabular-nums" data-testid={testId}>
-        {value}
-      </dd>
-    </div>
+    <strong className="font-extrabold text-navy tabular-nums" data-testid={testId}>
+      {value}
+    </strong>
   );
 }

@@ -1,19 +1,6 @@
-import type { ReactNode } from 'react';
 import { Link, useParams, useRouteError, type LoaderFunctionArgs } from 'react-router';
 import { usePublicGroups } from '../../features/groups/api/get-public-groups';
-import {
-  Area,
-  AreaChart,
-  CartesianGrid,
-  Legend,
-  Pie,
-  PieChart,
-  ResponsiveContainer,
-  Tooltip,
-  XAxis,
-  YAxis,
-} from 'recharts';
-import { OUTCOME_LABELS } from '../../../../shared/event-day/constants';
+import { Area, AreaChart, CartesianGrid, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import { Alert, Card, EmptyState, PageTitle } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
 import type { Method, PublicImpact } from '../../features/impact/api/types';
@@ -21,7 +8,6 @@ import { publicImpactQuery, usePublicImpact } from '../../features/impact/api/ge
 import { queryClient } from '../../lib/query-client';
 import { ApiError } from '../../lib/api';
 import {
-  CO2E,
   COLOURS,
   ChartCard,
   FactorTable,
@@ -33,6 +19,7 @@ import {
   whole,
 } from '../../features/impact/components/display';
 import { MethodNotes } from '../../features/impact/components/method-notes';
+import { ImpactStory } from '../../features/impact/components/impact-story';
 import { sourceForReaders } from '../../../../shared/impact/for-readers';
 
 /** The group of the address, when there is one; `valid` is false for an address no group can have. */
@@ -92,19 +79,7 @@ function PublicFigures({ groupId }: { groupId?: number }) {
         </EmptyState>
       ) : (
         <>
-          <section aria-label="Totals">
-            <ul className="grid grid-cols-2 gap-2 sm:grid-cols-5">
-              <Tile testId="stat-items" value={whole.format(d.items)} label="items brought in" />
-              <Tile testId="stat-fixed" value={whole.format(d.fixed)} label="fixed" />
-              <Tile testId="stat-kgDiverted" value={oneDp.format(d.kgDiverted)} label="kg kept out of the bin" />
-              <Tile testId="stat-co2eKg" value={oneDp.format(d.co2eKg)} label={<>kg {CO2E} avoided</>} />
-              <Tile
-                testId="stat-events"
-                value={whole.format(d.events)}
-                label={d.events === 1 ? 'session' : 'sessions'}
-              />
-            </ul>
-          </section>
+          <ImpactStory d={d} />
           <Charts d={d} />
         </>
       )}
@@ -135,17 +110,6 @@ function NotFound() {
   );
 }
 
-function Tile({ testId, value, label }: { testId: string; value: string; label: ReactNode }) {
-  return (
-    <li className="rounded-lg border-t-4 border-sage bg-white px-3 py-3 shadow-sm ring-1 ring-ink/5 last:col-span-2 sm:last:col-span-1">
-      <p className="text-2xl font-extrabold text-navy tabular-nums sm:text-3xl" data-testid={testId}>
-        {value}
-      </p>
-      <p className="text-sm font-semibold text-ink-soft">{label}</p>
-    </li>
-  );
-}
-
 function Charts({ d }: { d: PublicImpact }) {
   const months = d.byMonth.map((m) => ({
     month: m.month,
@@ -156,14 +120,6 @@ function Charts({ d }: { d: PublicImpact }) {
     (best, m) => (!best || m.kg > best.kg ? m : best),
     null,
   );
-  const outcomes = [
-    { name: OUTCOME_LABELS.fixed, value: d.fixed, fill: COLOURS.fixed },
-    { name: OUTCOME_LABELS['parts-needed'], value: d.partsNeeded, fill: COLOURS.partsNeeded },
-    { name: OUTCOME_LABELS.advice, value: d.advice, fill: COLOURS.advice },
-    { name: OUTCOME_LABELS['end-of-life'], value: d.endOfLife, fill: COLOURS.endOfLife },
-  ].filter((o) => o.value > 0);
-  const known = outcomes.reduce((n, o) => n + o.value, 0);
-  const share = (n: number) => (known ? `${Math.round((n / known) * 100)}%` : '—');
   const top = d.byCategory.slice(0, 8);
 
   return (
@@ -200,44 +156,6 @@ function Charts({ d }: { d: PublicImpact }) {
             />
           </AreaChart>
         </ResponsiveContainer>
-      </ChartCard>
-
-      <ChartCard
-        level="h2"
-        title="What happened to the items"
-        summary={
-          known
-            ? `${share(d.fixed)} of the items with a recorded outcome were fixed; the others needed a part, got advice, or were beyond mending.`
-            : 'No outcomes recorded yet.'
-        }
-        table={
-          <SimpleTable
-            head={['Outcome', 'Items', 'Share']}
-            rows={outcomes.map((o) => ({ key: o.name, cells: [o.name, whole.format(o.value), share(o.value)] }))}
-          />
-        }
-      >
-        {known > 0 && (
-          <ResponsiveContainer width="100%" height={260}>
-            <PieChart accessibilityLayer={false}>
-              <Pie
-                data={outcomes}
-                dataKey="value"
-                nameKey="name"
-                innerRadius="48%"
-                outerRadius="78%"
-                paddingAngle={1}
-                isAnimationActive={false}
-              />
-              <Tooltip formatter={(v, name) => [`${whole.format(Number(v))} (${share(Number(v))})`, name]} />
-              <Legend
-                wrapperStyle={{ fontSize: 12 }}
-                itemSorter={null}
-                formatter={(value) => <span className="text-ink">{value}</span>}
-              />
-            </PieChart>
-          </ResponsiveContainer>
-        )}
       </ChartCard>
 
       <ChartCard

@@ -22,9 +22,10 @@ export function EmbedPanel({ id, groupId, groupName }: { id: string; groupId: nu
     <Card className="p-4 sm:p-5">
       <div id={id} className="grid gap-4 lg:grid-cols-[1fr_auto]">
         <div className="min-w-0 space-y-2">
-          <h2 className="text-lg">Embed on your website</h2>
+          <h2 className="text-lg">Your figures on your own website</h2>
           <p className="text-sm text-ink-soft">
-            Paste this code where the figures should show. They update by themselves and name nobody.
+            Paste this code into a page of your group’s website. The sentence and the quilt update by themselves after
+            each session and name nobody.
           </p>
           <label htmlFor={`${id}-code`} className="sr-only">
             Code to paste
@@ -48,14 +49,14 @@ export function EmbedPanel({ id, groupId, groupName }: { id: string; groupId: nu
           </div>
         </div>
         <div className="min-w-0">
-          <p className="mb-1 text-sm font-semibold text-ink-soft">Preview</p>
+          <p className="mb-1 text-sm font-semibold text-ink-soft">How it will look</p>
           <div className="max-w-full overflow-x-auto">
             <iframe
               src={paths.embed(groupId)}
               width={360}
               height={260}
-              style={{ border: 0 }}
-              title={`Preview: ${title}`}
+              style={{ border: 0, maxWidth: '100%' }}
+              title={`How it will look: ${title}`}
               className="rounded-xl bg-white"
             />
           </div>

@@ -196,7 +196,7 @@ function Actions({ filter, groupId, groupName }: { filter: StatsFilter; groupId?
               aria-controls={panelId}
               onClick={() => setEmbedOpen((v) => !v)}
             >
-              Embed on your website
+              Show the figures on your own website
             </Button>
           </>
         )}
