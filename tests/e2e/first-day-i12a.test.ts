@@ -79,7 +79,7 @@ describe('first-day rough edges in a browser', () => {
     await page.getByText('Booking not found').waitFor();
     expect(await mainText(page)).not.toContain('Show this code at the reception desk');
     await page.screenshot({ path: shot('i12a-booking-code-unknown'), fullPage: true });
-    await page.getByRole('link', { name: 'See the sessions' }).click();
+    await page.getByRole('link', { name: 'See all sessions' }).click();
     await page.waitForURL(`${server.url}/events`);
     await page.close();
   });
@@ -109,7 +109,7 @@ describe('first-day rough edges in a browser', () => {
     expect(text).not.toContain('Show this code at the reception desk');
     expect(text).toContain(reference);
     await page.screenshot({ path: shot('i12a-booking-code-cancelled'), fullPage: true });
-    await page.getByRole('link', { name: 'See the sessions' }).waitFor();
+    await page.getByRole('link', { name: 'See all sessions' }).waitFor();
 
     await page.goto(`${server.url}/b/${standing.json.reference}`);
     await page.getByText('Show this code at the reception desk').waitFor();

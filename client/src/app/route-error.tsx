@@ -32,7 +32,7 @@ export function RouteError() {
       <p className="mt-2 text-ink-soft">{message}</p>
       <div className="mt-6 flex flex-wrap gap-4">
         <Link to={paths.events()} className="font-bold text-copper-dark underline">
-          See upcoming sessions
+          See all sessions
         </Link>
         <Link to={paths.home()} className="font-bold text-navy underline">
           Back to the start

@@ -19,6 +19,7 @@ import {
   venues,
 } from '../db/schema/index';
 import { refreshEventCells } from '../features/impact/queries/cells';
+import { FIRST, ITEMS, LAST } from './demo-history-data';
 
 /**
  * A year of past sessions with invented visitors and outcomes, so the impact dashboard, the public page, the
@@ -35,130 +36,6 @@ function prng(seed: number) {
   };
 }
 
-const FIRST = [
-  'Ana',
-  'Bram',
-  'Cleo',
-  'Dara',
-  'Elio',
-  'Fern',
-  'Gus',
-  'Hana',
-  'Ivo',
-  'Jun',
-  'Kit',
-  'Lena',
-  'Milo',
-  'Nell',
-  'Otto',
-  'Pia',
-  'Quin',
-  'Rhea',
-  'Sami',
-  'Tove',
-];
-const LAST = [
-  'Ashdown',
-  'Brackley',
-  'Corran',
-  'Dunmere',
-  'Elsworth',
-  'Farrow',
-  'Gillan',
-  'Hatherly',
-  'Inchley',
-  'Jessop',
-  'Kettering',
-  'Lowther',
-  'Marlow',
-  'Nettleby',
-];
-const ITEMS: { slug: string; fault: string; brand?: string; part: string; note: string }[] = [
-  {
-    slug: 'kettle',
-    fault: 'Does not switch off by itself.',
-    brand: 'Brewmaster',
-    part: 'Steam switch for a 1.7 l kettle',
-    note: 'Bimetal steam switch stuck; cleaned the lever and re-seated the disc. Check the steam tube is clear.',
-  },
-  {
-    slug: 'toaster',
-    fault: 'One slot stays cold.',
-    part: 'Heating element, 2-slice',
-    note: 'Element open circuit on one side (no continuity across its tabs).',
-  },
-  {
-    slug: 'lamp',
-    fault: 'Flickers when moved.',
-    part: 'E27 lampholder with cord grip',
-    note: 'Loose neutral in the lampholder; cord grip missing so the cord pulled on the terminals.',
-  },
-  {
-    slug: 'vacuum-cleaner',
-    fault: 'Loses suction after a minute.',
-    brand: 'Tempest',
-    part: 'Motor filter and belt',
-    note: 'Filter clogged solid and belt slipping on the brush roll.',
-  },
-  {
-    slug: 'laptop',
-    fault: 'Will not charge.',
-    brand: 'Nimbus',
-    part: 'DC jack with cable',
-    note: "Jack's centre pin loose on the board; cracked solder joints.",
-  },
-  {
-    slug: 'phone',
-    fault: 'Screen cracked, touch works.',
-    part: 'Replacement screen assembly',
-    note: 'Digitiser fine; glass only. Heat the edges before lifting.',
-  },
-  {
-    slug: 'radio-hifi',
-    fault: 'Hums on every station.',
-    brand: 'Harrowgate',
-    part: 'Smoothing capacitor 2200 µF 25 V',
-    note: 'Reservoir capacitor bulging, ESR high; hum at 100 Hz.',
-  },
-  {
-    slug: 'clothing',
-    fault: 'Zip has come apart.',
-    part: 'Open-ended zip, 60 cm',
-    note: 'Slider worn; teeth fine. A new slider would do if the stop is intact.',
-  },
-  { slug: 'clothing', fault: 'Hole in the elbow.', part: 'Wool patch', note: 'Darned the elbow with matching wool.' },
-  {
-    slug: 'bicycle',
-    fault: 'Gears slip.',
-    part: 'Rear gear cable and outer',
-    note: 'Cable frayed at the shifter; indexing was fine once replaced.',
-  },
-  {
-    slug: 'hair-dryer',
-    fault: 'Cuts out after a few seconds.',
-    part: 'Thermal cut-out, same rating',
-    note: 'Thermal cut-out open; motor and element fine. Fit the same temperature rating only.',
-  },
-  {
-    slug: 'electric-toy',
-    fault: 'Stopped moving.',
-    part: 'Small DC motor',
-    note: 'Motor brushes worn; motor draws no current.',
-  },
-  {
-    slug: 'power-tool',
-    fault: 'Sparks and stops.',
-    part: 'Carbon brushes',
-    note: 'Brushes down to 3 mm; commutator clean.',
-  },
-  {
-    slug: 'television',
-    fault: 'No picture, sound works.',
-    part: 'LED backlight strips',
-    note: 'Two LEDs in strip 3 open; the strip reads no forward voltage.',
-  },
-];
-
 function pickOutcome(r: number): Outcome | null {
   if (r < 0.55) return 'fixed';
   if (r < 0.67) return 'parts-needed';
@@ -169,6 +46,7 @@ function pickOutcome(r: number): Outcome | null {
 
 export async function seedHistory(tx: Db, now: Date) {
   const rand = prng(20260314);
+  const notesLeft = new Map(ITEMS.map((spec) => [spec, [...spec.notes]]));
   const cats = new Map((await tx.select().from(categories)).map((c) => [c.slug, c]));
   const people = await tx.select().from(users);
   const who = (email: string) => people.find((p) => p.email === email)!.id;
@@ -276,7 +154,7 @@ export async function seedHistory(tx: Db, now: Date) {
             partDescription: outcome === 'parts-needed' ? spec.part : null,
             partCostCents: outcome === 'parts-needed' ? 300 + Math.floor(rand() * 3000) : null,
             minutes: 10 + Math.floor(rand() * 50),
-            notes: rand() < 0.6 ? spec.note : null,
+            notes: rand() < 0.6 ? (notesLeft.get(spec)!.shift() ?? null) : null,
             recordedBy: who(p.team[0]),
             recordedAt: end,
           });

@@ -81,7 +81,7 @@ export function BookingCodePage() {
   if (code.isPending) return <Spinner />;
   const sessionsLink = (
     <Link to={paths.events()} className="font-bold underline">
-      See the sessions
+      See all sessions
     </Link>
   );
   if (code.error) {

@@ -40,8 +40,10 @@ export function EventPage() {
   const bookable = e.status === 'published' && e.freePlaces > 0;
 
   return (
+    // On a phone the session's name, date and place come first, then the free places and "Book a slot", then the
+    // rest; on a wide screen the booking card stands beside them.
     <div className="grid gap-6 lg:grid-cols-[1fr_22rem]">
-      <div className="space-y-6">
+      <div className="space-y-6 lg:col-start-1">
         <header>
           <div className="flex flex-wrap items-center gap-2">
             <StatusBadge status={e.status} />
@@ -67,7 +69,39 @@ export function EventPage() {
           </p>
           {e.venue.accessNotes && <p className="mt-2 text-sm text-ink-soft">{e.venue.accessNotes}</p>}
         </Card>
+      </div>
 
+      <aside className="space-y-4 lg:sticky lg:top-4 lg:col-start-2 lg:row-span-2 lg:row-start-1 lg:self-start">
+        <Card>
+          <PlacesBar free={e.freePlaces} total={e.totalPlaces} />
+          {e.status === 'published' ? (
+            <Link
+              to={paths.book(e.id)}
+              className="mt-4 flex min-h-12 items-center justify-center rounded-lg bg-copper px-5 text-lg font-bold text-white hover:bg-copper-dark"
+            >
+              {bookable ? 'Book a slot' : 'Join a waiting list'}
+            </Link>
+          ) : (
+            <Alert tone="info">
+              {e.status === 'cancelled'
+                ? 'This session has been cancelled.'
+                : e.status === 'closed'
+                  ? 'Booking has closed for this session.'
+                  : 'This session is not open for booking yet.'}
+            </Alert>
+          )}
+        </Card>
+        <Card>
+          <h2 className="text-lg">What to bring</h2>
+          <ul className="mt-2 list-disc space-y-1 pl-5 text-sm">
+            {WHAT_TO_BRING.map((w) => (
+              <li key={w}>{w}</li>
+            ))}
+          </ul>
+        </Card>
+      </aside>
+
+      <div className="space-y-6 lg:col-start-1">
         <Card>
           <h2 className="text-lg">Times and free places</h2>
           <p className="text-sm text-ink-soft">
@@ -152,36 +186,6 @@ export function EventPage() {
           </Card>
         )}
       </div>
-
-      <aside className="order-first space-y-4 lg:sticky lg:top-4 lg:order-none lg:self-start">
-        <Card>
-          <PlacesBar free={e.freePlaces} total={e.totalPlaces} />
-          {e.status === 'published' ? (
-            <Link
-              to={paths.book(e.id)}
-              className="mt-4 flex min-h-12 items-center justify-center rounded-lg bg-copper px-5 text-lg font-bold text-white hover:bg-copper-dark"
-            >
-              {bookable ? 'Book a slot' : 'Join a waiting list'}
-            </Link>
-          ) : (
-            <Alert tone="info">
-              {e.status === 'cancelled'
-                ? 'This session has been cancelled.'
-                : e.status === 'closed'
-                  ? 'Booking has closed for this session.'
-                  : 'This session is not open for booking yet.'}
-            </Alert>
-          )}
-        </Card>
-        <Card>
-          <h2 className="text-lg">What to bring</h2>
-          <ul className="mt-2 list-disc space-y-1 pl-5 text-sm">
-            {WHAT_TO_BRING.map((w) => (
-              <li key={w}>{w}</li>
-            ))}
-          </ul>
-        </Card>
-      </aside>
     </div>
   );
 }

@@ -174,8 +174,8 @@ function SharingCard({ groupId }: { groupId: number }) {
     <Card className="space-y-3">
       <h2 className="text-lg">Repair notes</h2>
       <p className="text-sm text-ink-soft">
-        Your fixers’ notes and write-ups are always searchable by your own volunteers. Sharing lets the other groups on
-        Mendery search them too; no visitor’s name is ever in them.
+        Your fixers’ repair notes, and the fixes they add, are always searchable by your own volunteers. Sharing lets
+        the other groups on Mendery search them too; no visitor’s name is ever in them.
       </p>
       {sharing.isPending ? (
         <Spinner />

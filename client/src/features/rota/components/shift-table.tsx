@@ -4,6 +4,8 @@ import { formatTimeRange } from '../../../../../shared/format';
 import { Alert, EmptyState } from '../../../components/ui/feedback';
 import { useSeatFixer } from '../api/seat-fixer';
 
+const phoneLabel = 'font-bold text-ink-soft sm:hidden';
+
 /**
  * Who answered, with their hours and skills, and a seat for each one coming; `benches` are the session's, and
  * `onSeated` runs after a seat changes (the triage board places by seats).
@@ -31,9 +33,10 @@ export function ShiftTable({
   return (
     <>
       {seat.error && <Alert tone="error">{seat.error.message}</Alert>}
-      <div className="overflow-x-auto rounded-xl bg-white ring-1 ring-ink/5">
-        <table className="w-full text-left text-sm">
-          <thead className="bg-navy/5 text-navy">
+      {/* On a phone each person is a card, with the column's name beside each value; from 640 px it is a table. */}
+      <div className="rounded-xl bg-white ring-1 ring-ink/5">
+        <table className="block w-full text-left text-sm sm:table">
+          <thead className="hidden bg-navy/5 text-navy sm:table-header-group">
             <tr>
               <th className="px-4 py-2">Name</th>
               <th className="px-4 py-2">Answer</th>
@@ -42,34 +45,44 @@ export function ShiftTable({
               <th className="px-4 py-2">Seat</th>
             </tr>
           </thead>
-          <tbody>
+          <tbody className="block sm:table-row-group">
             {shifts.map((s) => (
-              <tr key={s.userId} className="border-t border-ink/5">
-                <td className="px-4 py-2 font-semibold">{s.name}</td>
-                <td className="px-4 py-2">{s.coming ? 'Coming' : 'Not coming'}</td>
-                <td className="px-4 py-2">{s.coming ? formatTimeRange(s.startsAt, s.endsAt, timeZone) : '—'}</td>
-                <td className="px-4 py-2 text-ink-soft">
+              <tr key={s.userId} className="block border-t border-ink/5 py-2 first:border-t-0 sm:table-row sm:py-0">
+                <td className="block px-4 py-1 font-semibold sm:table-cell sm:py-2">{s.name}</td>
+                <td className="block px-4 py-1 sm:table-cell sm:py-2">
+                  <span className={phoneLabel}>Answer: </span>
+                  {s.coming ? 'Coming' : 'Not coming'}
+                </td>
+                <td className="block px-4 py-1 sm:table-cell sm:py-2">
+                  <span className={phoneLabel}>Hours: </span>
+                  {s.coming ? formatTimeRange(s.startsAt, s.endsAt, timeZone) : '—'}
+                </td>
+                <td className="block px-4 py-1 text-ink-soft sm:table-cell sm:py-2">
+                  <span className={phoneLabel}>Skills: </span>
                   {Object.entries(s.skills)
                     .map(([k, l]) => `${SKILL_LABELS[k as Skill] ?? k} ${l}`)
                     .join(', ') || '—'}
                 </td>
-                <td className="px-4 py-2">
+                <td className="block px-4 py-1 sm:table-cell sm:py-2">
                   {s.coming && (
-                    <select
-                      aria-label={`Seat for ${s.name}`}
-                      value={s.benchId ?? ''}
-                      onChange={(e) =>
-                        seat.mutate({ userId: s.userId, benchId: e.target.value ? Number(e.target.value) : null })
-                      }
-                      className="rounded border border-ink/20 px-2 py-1"
-                    >
-                      <option value="">Free to move</option>
-                      {benches.map((b) => (
-                        <option key={b.id} value={b.id}>
-                          {b.name}
-                        </option>
-                      ))}
-                    </select>
+                    <label className="flex flex-col gap-1 sm:block">
+                      <span className={phoneLabel}>Seat</span>
+                      <select
+                        aria-label={`Seat for ${s.name}`}
+                        value={s.benchId ?? ''}
+                        onChange={(e) =>
+                          seat.mutate({ userId: s.userId, benchId: e.target.value ? Number(e.target.value) : null })
+                        }
+                        className="min-h-11 w-full rounded border border-ink/20 px-2 py-1 sm:w-auto"
+                      >
+                        <option value="">Free to move</option>
+                        {benches.map((b) => (
+                          <option key={b.id} value={b.id}>
+                            {b.name}
+                          </option>
+                        ))}
+                      </select>
+                    </label>
                   )}
                 </td>
               </tr>

@@ -5,7 +5,10 @@ import { TextAreaField, TextField } from '../../../components/ui/field';
 import type { KnowledgeEntry } from '../api/types';
 import { useWriteUp } from '../api/write-up';
 
-/** One record of the knowledge base: the write-up when there is one, else the fault and the fixer's notes. */
+/**
+ * One repair note: the fault and the fixer's notes, and the fix once a fixer has added it (symptom, what was measured,
+ * the faulty part, the fix) for the next fixer.
+ */
 export function KnowledgeCard({
   entry: e,
   when,
@@ -26,7 +29,7 @@ export function KnowledgeCard({
           )}
         </h3>
         <span className="rounded-full bg-navy/10 px-2 py-0.5 text-xs font-bold text-navy">{e.outcomeLabel}</span>
-        {e.writtenUp && <span className="rounded-full bg-sage-light px-2 py-0.5 text-xs font-bold">written up</span>}
+        {e.writtenUp && <span className="rounded-full bg-sage-light px-2 py-0.5 text-xs font-bold">Fix added</span>}
         <span className="ml-auto text-xs text-ink-soft">
           {e.groupName} · {when}
         </span>
@@ -75,7 +78,7 @@ export function KnowledgeCard({
       )}
       {canWrite && !writing && (
         <Button variant="quiet" className="mt-1" onClick={() => setWriting(true)}>
-          {e.writtenUp ? 'Edit the write-up' : 'Write it up'}
+          {e.writtenUp ? 'Edit the fix' : 'Add the fix for the next fixer'}
         </Button>
       )}
       {writing && <WriteUpForm entry={e} onDone={() => setWriting(false)} />}
@@ -95,12 +98,16 @@ function WriteUpForm({ entry, onDone }: { entry: KnowledgeEntry; onDone: () => v
     save.error && 'fields' in save.error ? (save.error as { fields?: Record<string, string> }).fields : undefined;
   return (
     <form
+      aria-label="The fix for the next fixer"
       className="mt-3 space-y-3 rounded-lg bg-navy/5 p-3"
       onSubmit={(ev) => {
         ev.preventDefault();
         save.mutate(v, { onSuccess: onDone });
       }}
     >
+      <p className="text-sm text-ink-soft">
+        What the next fixer with this kind of item needs: the symptom, what you measured, the faulty part and the fix.
+      </p>
       <TextAreaField
         label="Symptom"
         rows={2}
@@ -129,7 +136,7 @@ function WriteUpForm({ entry, onDone }: { entry: KnowledgeEntry; onDone: () => v
       {save.error && !fields && <Alert tone="error">{save.error.message}</Alert>}
       <div className="flex gap-2">
         <Button type="submit" busy={save.isPending}>
-          Save write-up
+          Save the fix
         </Button>
         <Button type="button" variant="secondary" onClick={onDone}>
           Cancel

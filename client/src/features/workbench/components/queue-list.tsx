@@ -1,76 +1,107 @@
 import type { ReactNode } from 'react';
 import { Link } from 'react-router';
 import type { ItemStatus } from '../../../../../shared/event-day/constants';
+import { queueDays } from '../../../../../shared/event-day/queue-days';
 import { formatTime } from '../../../../../shared/format';
 import { EmptyState } from '../../../components/ui/feedback';
 import { paths } from '../../../config/paths';
 import { useQueue } from '../api/get-queue';
 import { photoUrl } from '../api/photo-url';
+import type { QueueItem } from '../api/types';
 
-/** The items coming to the fixer, in order; `statusChip` shows an item's status once it has arrived. */
+/**
+ * The items coming to the fixer, by day in the group's time zone: today first, then the days to come, then items
+ * left open from past days, apart. `statusChip` shows an item's status once it has arrived.
+ */
 export function QueueList({ statusChip }: { statusChip: (status: ItemStatus) => ReactNode }) {
   const { data: queue } = useQueue();
+  const days = queueDays(queue, new Date());
+  const coming = days.filter((d) => d.kind !== 'past');
+  const past = days.filter((d) => d.kind === 'past');
+  const day = (d: (typeof days)[number]) => (
+    <section key={d.date} aria-labelledby={`queue-${d.date}`} className="space-y-3" data-testid="queue-day">
+      <h3 id={`queue-${d.date}`} className="text-lg text-copper-dark">
+        {d.kind === 'today' ? `Today · ${d.label}` : d.label}
+      </h3>
+      <ol className="space-y-3">
+        {d.items.map((q, n) => (
+          <QueueCard key={q.itemId} q={q} n={n} statusChip={statusChip} />
+        ))}
+      </ol>
+    </section>
+  );
   return (
-    <section aria-labelledby="queue" className="space-y-3">
+    <section aria-labelledby="queue" className="space-y-4">
       <h2 id="queue" className="text-xl">
         My queue
       </h2>
-      {queue.length === 0 && (
+      {coming.length === 0 && (
         <EmptyState title="No items are waiting for you" icon="⚒">
           When the organiser runs triage, the items matched to you appear here in order.
         </EmptyState>
       )}
-      <ol className="space-y-3">
-        {queue.map((q, n) => (
-          <li key={q.itemId} className="rounded-xl bg-white p-4 shadow-sm ring-1 ring-ink/5">
-            <div className="flex items-baseline justify-between gap-2">
-              <p className="text-lg font-extrabold text-navy">
-                <span className="mr-2 inline-flex size-7 items-center justify-center rounded-full bg-copper text-sm text-white">
-                  {n + 1}
-                </span>
-                <Link
-                  to={paths.item(q.itemId)}
-                  className="underline decoration-copper/40 underline-offset-4 hover:decoration-copper"
-                >
-                  {q.categoryName}
-                </Link>
-              </p>
-              <p className="text-sm font-bold text-copper-dark">planned {formatTime(q.slotStartsAt, q.timeZone)}</p>
-            </div>
-            {q.status !== 'booked' && (
-              <p className="mt-1 flex items-center gap-2">
-                {statusChip(q.status)}
-                {q.queueNumber !== null && <b>No. {q.queueNumber}</b>}
-                {q.tagCode && <span className="font-mono text-sm">{q.tagCode}</span>}
-              </p>
-            )}
-            <p className="mt-1">{q.fault}</p>
-            <p className="mt-1 text-sm text-ink-soft">
-              {[q.brand, q.model].filter(Boolean).join(' ') || 'Brand not given'} · {q.visitorName} · {q.benchName} ·
-              about {q.minutes} min · {q.reference}
-            </p>
-            {q.mains && (
-              <p className="mt-2 rounded bg-copper-light px-2 py-1 text-sm font-semibold text-copper-dark">
-                ⚠ Mains item: unplug and prove dead before opening; safety-check before it goes home.
-              </p>
-            )}
-            {q.photoIds.length > 0 && (
-              <div className="mt-2 flex gap-2">
-                {q.photoIds.map((p) => (
-                  <a key={p} href={photoUrl(p)} target="_blank" rel="noreferrer">
-                    <img
-                      src={photoUrl(p)}
-                      alt={`Photo of the ${q.categoryName.toLowerCase()}`}
-                      className="size-24 rounded-lg object-cover"
-                    />
-                  </a>
-                ))}
-              </div>
-            )}
-            <p className="mt-1 text-xs text-ink-soft">{q.eventTitle}</p>
-          </li>
-        ))}
-      </ol>
+      {coming.map(day)}
+      {past.length > 0 && (
+        <section aria-labelledby="queue-past" className="space-y-3 border-t border-ink/10 pt-4">
+          <h3 id="queue-past" className="text-lg">
+            Past sessions: items never closed
+          </h3>
+          <p className="text-sm text-ink-soft">These sessions are over, but these items were never marked done.</p>
+          {past.map(day)}
+        </section>
+      )}
     </section>
+  );
+}
+
+function QueueCard({ q, n, statusChip }: { q: QueueItem; n: number; statusChip: (status: ItemStatus) => ReactNode }) {
+  return (
+    <li className="rounded-xl bg-white p-4 shadow-sm ring-1 ring-ink/5">
+      <div className="flex items-baseline justify-between gap-2">
+        <p className="text-lg font-extrabold text-navy">
+          <span className="mr-2 inline-flex size-7 items-center justify-center rounded-full bg-copper text-sm text-white">
+            {n + 1}
+          </span>
+          <Link
+            to={paths.item(q.itemId)}
+            className="underline decoration-copper/40 underline-offset-4 hover:decoration-copper"
+          >
+            {q.categoryName}
+          </Link>
+        </p>
+        <p className="text-sm font-bold text-copper-dark">planned {formatTime(q.slotStartsAt, q.timeZone)}</p>
+      </div>
+      {q.status !== 'booked' && (
+        <p className="mt-1 flex items-center gap-2">
+          {statusChip(q.status)}
+          {q.queueNumber !== null && <b>No. {q.queueNumber}</b>}
+          {q.tagCode && <span className="font-mono text-sm">{q.tagCode}</span>}
+        </p>
+      )}
+      <p className="mt-1">{q.fault}</p>
+      <p className="mt-1 text-sm text-ink-soft">
+        {[q.brand, q.model].filter(Boolean).join(' ') || 'Brand not given'} · {q.visitorName} · {q.benchName} · about{' '}
+        {q.minutes} min · {q.reference}
+      </p>
+      {q.mains && (
+        <p className="mt-2 rounded bg-copper-light px-2 py-1 text-sm font-semibold text-copper-dark">
+          ⚠ Mains item: unplug and prove dead before opening; safety-check before it goes home.
+        </p>
+      )}
+      {q.photoIds.length > 0 && (
+        <div className="mt-2 flex gap-2">
+          {q.photoIds.map((p) => (
+            <a key={p} href={photoUrl(p)} target="_blank" rel="noreferrer">
+              <img
+                src={photoUrl(p)}
+                alt={`Photo of the ${q.categoryName.toLowerCase()}`}
+                className="size-24 rounded-lg object-cover"
+              />
+            </a>
+          ))}
+        </div>
+      )}
+      <p className="mt-1 text-xs text-ink-soft">{q.eventTitle}</p>
+    </li>
   );
 }

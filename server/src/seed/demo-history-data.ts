@@ -1,0 +1,186 @@
+/** The invented visitors and the kinds of item, faults, parts and repair notes of the demo's past sessions. */
+export const FIRST = [
+  'Ana',
+  'Bram',
+  'Cleo',
+  'Dara',
+  'Elio',
+  'Fern',
+  'Gus',
+  'Hana',
+  'Ivo',
+  'Jun',
+  'Kit',
+  'Lena',
+  'Milo',
+  'Nell',
+  'Otto',
+  'Pia',
+  'Quin',
+  'Rhea',
+  'Sami',
+  'Tove',
+];
+export const LAST = [
+  'Ashdown',
+  'Brackley',
+  'Corran',
+  'Dunmere',
+  'Elsworth',
+  'Farrow',
+  'Gillan',
+  'Hatherly',
+  'Inchley',
+  'Jessop',
+  'Kettering',
+  'Lowther',
+  'Marlow',
+  'Nettleby',
+];
+/** Each kind's notes are different repairs: a note is given to one past repair only, as a fixer writes it once. */
+export const ITEMS: { slug: string; fault: string; brand?: string; part: string; notes: string[] }[] = [
+  {
+    slug: 'kettle',
+    fault: 'Does not switch off by itself.',
+    brand: 'Brewmaster',
+    part: 'Steam switch for a 1.7 l kettle',
+    notes: [
+      'Bimetal steam switch stuck; cleaned the lever and re-seated the disc. Check the steam tube is clear.',
+      'Scale packed round the steam switch; descaled with citric acid and the switch clicks off again.',
+      'Steam tube pushed off its spigot inside the handle, so no steam reached the switch; refitted it.',
+    ],
+  },
+  {
+    slug: 'toaster',
+    fault: 'One slot stays cold.',
+    part: 'Heating element, 2-slice',
+    notes: [
+      'Element open circuit on one side (no continuity across its tabs).',
+      'Crumb tray jammed the carriage so one side never latched; cleared it and bent the tray lip back.',
+      'Crimp on the element tab burnt through; fitted a high-temperature crimp.',
+    ],
+  },
+  {
+    slug: 'lamp',
+    fault: 'Flickers when moved.',
+    part: 'E27 lampholder with cord grip',
+    notes: [
+      'Loose neutral in the lampholder; cord grip missing so the cord pulled on the terminals.',
+      'Switch in the cord worn: contacts pitted. Replaced with a rated inline switch.',
+      'Cable broken inside the insulation where it enters the base; shortened it and re-terminated.',
+    ],
+  },
+  {
+    slug: 'vacuum-cleaner',
+    fault: 'Loses suction after a minute.',
+    brand: 'Tempest',
+    part: 'Motor filter and belt',
+    notes: [
+      'Filter clogged solid and belt slipping on the brush roll.',
+      'Hose blocked by a sock halfway along; pushed it out with a broom handle.',
+      'Cyclone seal split, so it sucked air at the bin; the seal had to be ordered.',
+    ],
+  },
+  {
+    slug: 'laptop',
+    fault: 'Will not charge.',
+    brand: 'Nimbus',
+    part: 'DC jack with cable',
+    notes: [
+      "Jack's centre pin loose on the board; cracked solder joints.",
+      'Charger tip bent, not the laptop; a new charger of the same voltage fixed it.',
+      'Battery reads 0 % and will not take charge; runs on the charger. Battery to order.',
+    ],
+  },
+  {
+    slug: 'phone',
+    fault: 'Screen cracked, touch works.',
+    part: 'Replacement screen assembly',
+    notes: [
+      'Digitiser fine; glass only. Heat the edges before lifting.',
+      'Charging port full of pocket lint; picked it out with a wooden toothpick.',
+      'Flex cable to the screen unseated after a drop; re-seated it, no part needed.',
+    ],
+  },
+  {
+    slug: 'radio-hifi',
+    fault: 'Hums on every station.',
+    brand: 'Harrowgate',
+    part: 'Smoothing capacitor 2200 µF 25 V',
+    notes: [
+      'Reservoir capacitor bulging, ESR high; hum at 100 Hz.',
+      'Earth tag on the chassis loose; hum went once it was tightened.',
+      'Volume control crackles and cuts out; cleaned the track with switch cleaner.',
+    ],
+  },
+  {
+    slug: 'clothing',
+    fault: 'Zip has come apart.',
+    part: 'Open-ended zip, 60 cm',
+    notes: [
+      'Slider worn; teeth fine. A new slider would do if the stop is intact.',
+      'Two teeth missing near the bottom; the whole zip needs replacing.',
+      'Slider pulled off the top; refitted it and sewed a new top stop.',
+    ],
+  },
+  {
+    slug: 'clothing',
+    fault: 'Hole in the elbow.',
+    part: 'Wool patch',
+    notes: [
+      'Darned the elbow with matching wool.',
+      'Hole too big to darn; sewed a leather patch over it.',
+      'Worn thin rather than holed; reinforced from inside with iron-on fabric.',
+    ],
+  },
+  {
+    slug: 'bicycle',
+    fault: 'Gears slip.',
+    part: 'Rear gear cable and outer',
+    notes: [
+      'Cable frayed at the shifter; indexing was fine once replaced.',
+      'Rear hanger bent inwards after a fall; straightened it and re-indexed.',
+      'Chain stretched past 0.75 %, so it skipped on the small cogs; new chain advised.',
+    ],
+  },
+  {
+    slug: 'hair-dryer',
+    fault: 'Cuts out after a few seconds.',
+    part: 'Thermal cut-out, same rating',
+    notes: [
+      'Thermal cut-out open; motor and element fine. Fit the same temperature rating only.',
+      'Intake grille clogged with fluff, so it overheated and cut out; cleaned it.',
+      'Cord broken at the strain relief; shortened the cord and refitted the grip.',
+    ],
+  },
+  {
+    slug: 'electric-toy',
+    fault: 'Stopped moving.',
+    part: 'Small DC motor',
+    notes: [
+      'Motor brushes worn; motor draws no current.',
+      'Battery contacts corroded green; cleaned them with vinegar and a fibre pen.',
+      'Wire off the motor tab; resoldered it.',
+    ],
+  },
+  {
+    slug: 'power-tool',
+    fault: 'Sparks and stops.',
+    part: 'Carbon brushes',
+    notes: [
+      'Brushes down to 3 mm; commutator clean.',
+      'Trigger switch burnt inside; a matching switch had to be ordered.',
+      'Cord cut near the plug; fitted a new plug after shortening the cord.',
+    ],
+  },
+  {
+    slug: 'television',
+    fault: 'No picture, sound works.',
+    part: 'LED backlight strips',
+    notes: [
+      'Two LEDs in strip 3 open; the strip reads no forward voltage.',
+      'Power board fuse open; the standby supply was fine once the fuse was replaced with its rating.',
+      'Backlight fine with a torch test; the board-to-panel ribbon was loose. Re-seated it.',
+    ],
+  },
+];
