@@ -81,6 +81,37 @@ describe('the fixer on a phone', () => {
     await context.close();
   });
 
+  it('shows the hall’s queue number alone, "due since" for a time gone by, and no queue to reception', async () => {
+    const { context, page } = await signedIn(browser, app.server.url, 'fixer', PHONE);
+    const queue = (await (await page.request.get(`${app.server.url}/api/me/queue`)).json()) as {
+      itemId: number;
+      slotStartsAt: string;
+      queueNumber: number | null;
+    }[];
+    await page.goto(`${app.server.url}/bench`);
+    const region = page.getByRole('region', { name: 'My queue' });
+    await region.getByRole('heading', { level: 3 }).first().waitFor();
+    await page.screenshot({ path: shot('fixer-bench-numbers-phone'), fullPage: true });
+    const today = queue.filter((q) => new Date(q.slotStartsAt).toDateString() === new Date().toDateString());
+    expect(today.length).toBeGreaterThan(0);
+    for (const q of today) {
+      const card = region.getByRole('listitem').filter({ has: page.locator(`a[href="/items/${q.itemId}"]`) });
+      const text = (await card.textContent()) ?? '';
+      // One number only, the hall's ("No. 3"): the card opens with the item, not with a count of the fixer's own.
+      expect(text.trim()).toMatch(/^\D/);
+      if (new Date(q.slotStartsAt) < new Date()) expect(text).toMatch(/due since \d\d:\d\d/);
+      else expect(text).toMatch(/planned \d\d:\d\d/);
+    }
+    await context.close();
+
+    const host = await signedIn(browser, app.server.url, 'host', PHONE);
+    await host.page.goto(`${app.server.url}/bench`);
+    await host.page.getByRole('heading', { name: 'My bench' }).waitFor();
+    await host.page.getByRole('heading', { name: 'Sessions I can help at' }).waitFor();
+    expect(await host.page.getByRole('heading', { name: 'My queue' }).count()).toBe(0);
+    await host.context.close();
+  });
+
   it('shows each repair note once on the item page, and a note written once appears once', async () => {
     const { context, page } = await signedIn(browser, app.server.url, 'fixer', PHONE);
     const [toaster] = await app.db.db

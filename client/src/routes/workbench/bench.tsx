@@ -6,7 +6,7 @@ import { queryClient } from '../../lib/query-client';
 import { StatusChip } from '../../features/event-day/components/status-chip';
 import { myEventsQuery } from '../../features/rota/api/get-my-events';
 import { MySessions } from '../../features/rota/components/my-sessions';
-import { queueQuery } from '../../features/workbench/api/get-queue';
+import { queueQuery, useQueue } from '../../features/workbench/api/get-queue';
 import { QueueList } from '../../features/workbench/components/queue-list';
 
 /** The page reads what the loader fetched; a failure to fetch it is the route's error, shown in the page frame. */
@@ -18,6 +18,7 @@ const toolLink = 'rounded-lg bg-white px-3 py-2 font-semibold text-navy ring-1 r
 /** The fixer's page on a phone: the items coming to them in order, then the sessions they can say yes to. */
 export function BenchPage() {
   const { data: user } = useUser();
+  const { data: queue } = useQueue();
   if (!user) return null;
   const fixerGroups = new Map(user.roles.filter((r) => r.role === 'fixer').map((r) => [r.groupId, r.groupName]));
   return (
@@ -36,7 +37,10 @@ export function BenchPage() {
           </Link>
         ))}
       </nav>
-      <QueueList statusChip={(status) => <StatusChip status={status} />} />
+      {/* Reception and other helpers get no items from triage: an empty "My queue" would only puzzle them. */}
+      {(fixerGroups.size > 0 || queue.length > 0) && (
+        <QueueList statusChip={(status) => <StatusChip status={status} />} />
+      )}
       <MySessions />
     </div>
   );

@@ -15,7 +15,8 @@ import type { QueueItem } from '../api/types';
  */
 export function QueueList({ statusChip }: { statusChip: (status: ItemStatus) => ReactNode }) {
   const { data: queue } = useQueue();
-  const days = queueDays(queue, new Date());
+  const now = new Date();
+  const days = queueDays(queue, now);
   const coming = days.filter((d) => d.kind !== 'past');
   const past = days.filter((d) => d.kind === 'past');
   const day = (d: (typeof days)[number]) => (
@@ -24,8 +25,13 @@ export function QueueList({ statusChip }: { statusChip: (status: ItemStatus) => 
         {d.kind === 'today' ? `Today · ${d.label}` : d.label}
       </h3>
       <ol className="space-y-3">
-        {d.items.map((q, n) => (
-          <QueueCard key={q.itemId} q={q} n={n} statusChip={statusChip} />
+        {d.items.map((q) => (
+          <QueueCard
+            key={q.itemId}
+            q={q}
+            late={d.kind === 'today' && new Date(q.slotStartsAt) < now}
+            statusChip={statusChip}
+          />
         ))}
       </ol>
     </section>
@@ -54,14 +60,19 @@ export function QueueList({ statusChip }: { statusChip: (status: ItemStatus) => 
   );
 }
 
-function QueueCard({ q, n, statusChip }: { q: QueueItem; n: number; statusChip: (status: ItemStatus) => ReactNode }) {
+function QueueCard({
+  q,
+  late,
+  statusChip,
+}: {
+  q: QueueItem;
+  late: boolean;
+  statusChip: (status: ItemStatus) => ReactNode;
+}) {
   return (
     <li className="rounded-xl bg-white p-4 shadow-sm ring-1 ring-ink/5">
       <div className="flex items-baseline justify-between gap-2">
         <p className="text-lg font-extrabold text-navy">
-          <span className="mr-2 inline-flex size-7 items-center justify-center rounded-full bg-copper text-sm text-white">
-            {n + 1}
-          </span>
           <Link
             to={paths.item(q.itemId)}
             className="underline decoration-copper/40 underline-offset-4 hover:decoration-copper"
@@ -69,7 +80,10 @@ function QueueCard({ q, n, statusChip }: { q: QueueItem; n: number; statusChip: 
             {q.categoryName}
           </Link>
         </p>
-        <p className="text-sm font-bold text-copper-dark">planned {formatTime(q.slotStartsAt, q.timeZone)}</p>
+        <p className="text-sm font-bold text-copper-dark">
+          {/* A time already gone says so: "planned 07:52" an hour later reads as a mistake. */}
+          {late ? 'due since' : 'planned'} {formatTime(q.slotStartsAt, q.timeZone)}
+        </p>
       </div>
       {q.status !== 'booked' && (
         <p className="mt-1 flex items-center gap-2">
