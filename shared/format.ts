@@ -30,3 +30,36 @@ export const DISCLAIMER = [
   'You stay the owner of your item and stay with it while it is looked at.',
   'Mains items are safety-checked before they go home where local practice requires it; an item that fails is not returned as fixed.',
 ];
+
+/**
+ * The currencies offered first on a group's settings page (ISO 4217 codes); any code the runtime's Intl knows is
+ * accepted, so a group elsewhere can still pick its own.
+ */
+export const COMMON_CURRENCIES = [
+  'EUR',
+  'GBP',
+  'CHF',
+  'DKK',
+  'SEK',
+  'NOK',
+  'ISK',
+  'PLN',
+  'CZK',
+  'HUF',
+  'RON',
+  'BGN',
+  'USD',
+  'CAD',
+  'AUD',
+  'NZD',
+] as const;
+
+/** Whether a code is an ISO 4217 currency the runtime can format (ECMA-402 Intl.supportedValuesOf). */
+export const isKnownCurrency = (code: string) => Intl.supportedValuesOf('currency').includes(code);
+
+/** A currency's name in words, e.g. "Euro" for EUR. */
+export const currencyName = (code: string) => new Intl.DisplayNames(['en-GB'], { type: 'currency' }).of(code) ?? code;
+
+/** An amount of money in the group's currency as people in Britain write it, e.g. €12.50 or CHF 7.50. */
+export const formatMoney = (amount: number, currency: string) =>
+  new Intl.NumberFormat('en-GB', { style: 'currency', currency }).format(amount);

@@ -160,7 +160,8 @@ export interface ItemView {
     slotStartsAt: Date;
     slotEndsAt: Date;
   };
-  event: Omit<EventHeader, 'status'>;
+  /** currency: the group's ISO 4217 code, for the part cost. */
+  event: Omit<EventHeader, 'status'> & { currency: string };
   placement: { userId: number; benchId: number; fixerName: string; benchName: string; startsAt: Date | null } | null;
   outcome: ItemOutcomeRecord | null;
   safetyChecks: SafetyCheckRecord[];

@@ -43,6 +43,8 @@ export interface GroupSettings {
   name: string;
   town: string;
   timeZone: string;
+  /** ISO 4217 code in which the group's part costs are shown. */
+  currency: string;
   houseRules: string;
   excludedCategoryIds: number[];
 }

@@ -95,6 +95,8 @@ export interface FollowUp {
   part: string | null;
   partLink: string | null;
   partCost: number | null;
+  /** The group's ISO 4217 code, in which partCost is written. */
+  currency: string;
   visitor: { name: string; email: string | null; phone: string | null; reference: string };
   event: { title: string; startsAt: Date };
   rebookUrl: string | null;

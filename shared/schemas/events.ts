@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { SKILLS } from '../constants';
+import { isKnownCurrency } from '../format';
 
 const isoInstant = (label: string) =>
   z.iso.datetime({ offset: true, error: `${label} must be a date and time (ISO 8601).` }).transform((s) => new Date(s));
@@ -66,7 +67,16 @@ export const venueSchema = z.object({
   accessNotes: z.string().trim().max(2000).default(''),
 });
 
+/** An ISO 4217 code that Intl can format; lower case is taken as meant. */
+export const currencyCode = z
+  .string()
+  .trim()
+  .toUpperCase()
+  .refine(isKnownCurrency, 'Choose a currency by its three-letter code, e.g. EUR or GBP.');
+
+/** The group's settings; each part is saved only when it is sent. */
 export const groupSettingsSchema = z.object({
-  houseRules: z.string().trim().max(6000),
-  excludedCategoryIds: z.array(z.number().int().positive()).max(200),
+  houseRules: z.string().trim().max(6000).optional(),
+  excludedCategoryIds: z.array(z.number().int().positive()).max(200).optional(),
+  currency: currencyCode.optional(),
 });

@@ -146,6 +146,18 @@ describe('events and slots', () => {
     await organiser.send('PUT', `/api/groups/${groupId}/settings`, { houseRules: '', excludedCategoryIds: [] });
   });
 
+  it('keeps the group’s currency as an ISO 4217 code and refuses one Intl does not know', async () => {
+    const bad = await organiser.send('PUT', `/api/groups/${groupId}/settings`, { currency: 'XYZ' });
+    expect(bad.status).toBe(400);
+    expect(bad.json.error.fields.currency).toMatch(/three-letter code/);
+    expect((await organiser.get(`/api/groups/${groupId}/settings`)).json.currency).toBe('GBP');
+    const ok = await organiser.send('PUT', `/api/groups/${groupId}/settings`, { currency: 'chf' });
+    expect(ok.status).toBe(200);
+    const after = (await organiser.get(`/api/groups/${groupId}/settings`)).json;
+    expect(after.currency).toBe('CHF');
+    await organiser.send('PUT', `/api/groups/${groupId}/settings`, { currency: 'GBP' });
+  });
+
   it('cancelling an event mails everyone booked and cancels their bookings', async () => {
     const { eventId, slotIds } = await makeEvent(db.db, groupId);
     const a = new Agent(server.url);

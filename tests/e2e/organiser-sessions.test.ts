@@ -149,3 +149,31 @@ describe('the organiser at 1280 px: cancelling a session', () => {
     await context.close();
   });
 });
+
+describe('the organiser at 1280 px: the group’s currency', () => {
+  it('sets the currency on the settings page and shows part costs in it', async () => {
+    const [g] = await app.db.db.select().from(repairGroups).where(eq(repairGroups.slug, 'kestlebridge-menders'));
+    const { context, page } = await signedIn(browser, app.server.url, 'organiser', DESKTOP);
+    await page.goto(`${app.server.url}/groups/${g.id}/follow-ups`);
+    await page
+      .getByText(/about £\d+\.\d\d/)
+      .first()
+      .waitFor();
+
+    await page.goto(`${app.server.url}/groups/${g.id}/settings`);
+    await page.getByLabel('Currency of part costs').selectOption('EUR');
+    await page.getByRole('button', { name: 'Save currency' }).click();
+    await page.getByText('Saved.').waitFor();
+    await page.screenshot({ path: shot('group-settings-currency-desktop'), fullPage: true });
+    expect((await app.db.db.select().from(repairGroups).where(eq(repairGroups.id, g.id)))[0].currency).toBe('EUR');
+
+    await page.goto(`${app.server.url}/groups/${g.id}/follow-ups`);
+    // en-GB writes euros as €12.50 (ECMA-402 Intl.NumberFormat with CLDR data).
+    await page
+      .getByText(/about €\d+\.\d\d/)
+      .first()
+      .waitFor();
+    expect(await page.getByText(/about £\d/).count()).toBe(0);
+    await context.close();
+  });
+});

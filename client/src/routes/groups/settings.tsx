@@ -2,6 +2,7 @@ import { useEffect, useState } from 'react';
 import { useSuspenseQuery } from '@tanstack/react-query';
 import { useParams, type LoaderFunctionArgs } from 'react-router';
 import { SKILL_LABELS } from '../../../../shared/constants';
+import { COMMON_CURRENCIES, currencyName, formatMoney } from '../../../../shared/format';
 import { venueSchema } from '../../../../shared/schemas/events';
 import { GroupTabs } from '../../components/layouts/group-tabs';
 import { Button } from '../../components/ui/button';
@@ -160,9 +161,51 @@ export function GroupSettingsPage() {
             </Button>
           </form>
         </Card>
+        <CurrencyCard groupId={groupId} current={settings.data.currency} />
         <SharingCard groupId={groupId} />
       </div>
     </div>
+  );
+}
+
+/** The currency the group's part costs are written and shown in. */
+function CurrencyCard({ groupId, current }: { groupId: number; current: string }) {
+  const save = useSaveGroupSettings(groupId);
+  const [currency, setCurrency] = useState(current);
+  useEffect(() => setCurrency(current), [current]);
+  const codes = COMMON_CURRENCIES.includes(current as never) ? COMMON_CURRENCIES : [current, ...COMMON_CURRENCIES];
+  return (
+    <Card className="space-y-3">
+      <h2 className="text-lg">Money</h2>
+      <div className="space-y-1">
+        <label htmlFor="currency" className="block font-semibold">
+          Currency of part costs
+        </label>
+        <select
+          id="currency"
+          value={currency}
+          onChange={(e) => {
+            setCurrency(e.target.value);
+            save.reset();
+          }}
+          className="block min-h-11 w-full rounded-lg border border-ink/20 bg-white px-3"
+        >
+          {codes.map((c) => (
+            <option key={c} value={c}>
+              {c} — {currencyName(c)}
+            </option>
+          ))}
+        </select>
+        <p className="text-sm text-ink-soft">
+          Fixers note what a part should cost in it, and follow-up mails quote it: {formatMoney(12.5, currency)}.
+        </p>
+      </div>
+      {save.error && <Alert tone="error">{save.error.message}</Alert>}
+      {save.isSuccess && <Alert tone="success">Saved.</Alert>}
+      <Button variant="secondary" busy={save.isPending} onClick={() => save.mutate({ currency })}>
+        Save currency
+      </Button>
+    </Card>
   );
 }
 

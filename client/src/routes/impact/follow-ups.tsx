@@ -2,7 +2,7 @@ import { useSuspenseQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { OUTCOME_LABELS } from '../../../../shared/event-day/constants';
-import { formatDay } from '../../../../shared/format';
+import { formatDay, formatMoney } from '../../../../shared/format';
 import { FOLLOW_UP_LABELS, MANUAL_FOLLOW_UP_STATUSES, type FollowUpStatus } from '../../../../shared/impact/follow-ups';
 import { GroupTabs } from '../../components/layouts/group-tabs';
 import { Button } from '../../components/ui/button';
@@ -171,7 +171,7 @@ export function FollowUpsPage() {
                 <p className="text-sm">
                   <span className="font-semibold">Part:</span>{' '}
                   {f.part ?? <span className="text-ink-soft">not described</span>}
-                  {f.partCost !== null && <> · about {f.partCost.toFixed(2)}</>}
+                  {f.partCost !== null && <> · about {formatMoney(f.partCost, f.currency)}</>}
                   {f.partLink && (
                     <>
                       {' '}

@@ -115,6 +115,7 @@ export async function itemView(ctx: AppContext, itemId: number, user: SessionUse
       groupId: group.id,
       groupName: group.name,
       timeZone: group.timeZone,
+      currency: group.currency,
       startsAt: event.startsAt,
       endsAt: event.endsAt,
     },

@@ -6,7 +6,7 @@ import { hasGroupRole } from '../../auth/guards';
 import { forbidden, HttpError, notFound } from '../../http/errors';
 import { excludedCategoryIds } from '../../core/screening';
 import { groupById } from './queries/members';
-import { insertVenue, lockGroup, replaceExclusions, setHouseRules, venuesOf } from './queries/settings';
+import { insertVenue, lockGroup, replaceExclusions, setCurrency, setHouseRules, venuesOf } from './queries/settings';
 
 /** Venues of one group the user organises, or of all the groups they organise (every venue for an admin). */
 export async function listVenues(ctx: AppContext, user: SessionUser, groupId: number | undefined) {
@@ -31,6 +31,7 @@ export async function groupSettings(ctx: AppContext, groupId: number) {
     name: g.name,
     town: g.town,
     timeZone: g.timeZone,
+    currency: g.currency,
     houseRules: g.houseRules ?? '',
     excludedCategoryIds: await excludedCategoryIds(db, groupId),
   };
@@ -39,8 +40,12 @@ export async function groupSettings(ctx: AppContext, groupId: number) {
 export async function saveGroupSettings(ctx: AppContext, groupId: number, input: z.output<typeof groupSettingsSchema>) {
   await ctx.database.db.transaction(async (tx) => {
     if (!(await lockGroup(tx, groupId))) throw notFound('That group');
-    await setHouseRules(tx, groupId, input.houseRules);
-    if (!(await replaceExclusions(tx, groupId, [...new Set(input.excludedCategoryIds)])))
+    if (input.houseRules !== undefined) await setHouseRules(tx, groupId, input.houseRules);
+    if (input.currency !== undefined) await setCurrency(tx, groupId, input.currency);
+    if (
+      input.excludedCategoryIds !== undefined &&
+      !(await replaceExclusions(tx, groupId, [...new Set(input.excludedCategoryIds)]))
+    )
       throw new HttpError(400, 'invalid', 'Some fields need attention.', {
         excludedCategoryIds: 'One of the categories does not exist.',
       });

@@ -1,5 +1,7 @@
 import type { Outcome } from '../../../../shared/event-day/constants';
 import type { FollowUp } from '../../../../shared/api/impact';
+import { formatMoney } from '../../../../shared/format';
+import { groupById } from './queries/stats';
 import {
   FOLLOW_UP_LABELS,
   FOLLOW_UP_REMINDER_DAYS,
@@ -41,6 +43,7 @@ function partMail(
     part: string;
     link: string | null;
     cost: number | null;
+    currency: string;
     itemId: number;
   },
   reminder: boolean,
@@ -54,7 +57,7 @@ function partMail(
         reminder
           ? `six weeks ago a fixer at ${f.groupName} found that your ${f.itemLabel.toLowerCase()} needs a part. If you have it now, bring it to a session: the link below books you a place ahead of the queue.`
           : `thank you for coming to ${f.groupName}. Your ${f.itemLabel.toLowerCase()} can be repaired once it has a new part.`,
-        `The part: ${f.part}.${f.link ? ` Where to find it: ${f.link}.` : ''}${f.cost !== null ? ` Expect to pay about ${f.cost.toFixed(2)}.` : ''}`,
+        `The part: ${f.part}.${f.link ? ` Where to find it: ${f.link}.` : ''}${f.cost !== null ? ` Expect to pay about ${formatMoney(f.cost, f.currency)}.` : ''}`,
         'When you have it, book a return visit with this link: it keeps a place for you even when a session is full, and the fixers will know what to expect.',
       ],
       action: { label: 'Book a return visit', url: rebookUrl(ctx, f.itemId) },
@@ -88,6 +91,7 @@ export async function afterOutcome(ctx: AppContext, tx: Tx, row: ItemRow, outcom
               part: o.partDescription,
               link: o.partLink,
               cost: o.partCostCents === null ? null : o.partCostCents / 100,
+              currency: row.group.currency,
               itemId,
             },
             false,
@@ -112,7 +116,10 @@ export async function markCameBack(tx: DbOrTx, itemIds: number[]) {
 
 /** The organisers' list: every item of the group waiting for a part, oldest first, with what happened since. */
 export async function listFollowUps(ctx: AppContext, groupId: number): Promise<FollowUp[]> {
-  const rows = await followUpRows(ctx.database.db, groupId);
+  const [rows, group] = await Promise.all([
+    followUpRows(ctx.database.db, groupId),
+    groupById(ctx.database.db, groupId),
+  ]);
   const now = new Date();
   return rows.map((r) => ({
     itemId: r.f.itemId,
@@ -129,6 +136,7 @@ export async function listFollowUps(ctx: AppContext, groupId: number): Promise<F
     part: r.part,
     partLink: r.partLink,
     partCost: r.partCostCents === null ? null : r.partCostCents / 100,
+    currency: group?.currency ?? 'GBP',
     visitor: { name: r.visitorName, email: r.visitorEmail, phone: r.visitorPhone, reference: r.reference },
     event: { title: r.eventTitle, startsAt: r.eventStartsAt },
     rebookUrl: ['open', 'part-ordered'].includes(r.f.status) ? rebookUrl(ctx, r.f.itemId) : null,
@@ -174,6 +182,7 @@ export async function sendFollowUpReminders(ctx: AppContext): Promise<number> {
               part: d.o.partDescription,
               link: d.o.partLink,
               cost: d.o.partCostCents === null ? null : d.o.partCostCents / 100,
+              currency: d.currency,
               itemId: d.f.itemId,
             },
             true,

@@ -1,7 +1,7 @@
 import { useState, type ReactNode } from 'react';
 import { Link } from 'react-router';
 import { hasArrived, isQueued } from '../../../../../shared/event-day/constants';
-import { formatTime } from '../../../../../shared/format';
+import { formatMoney, formatTime } from '../../../../../shared/format';
 import { Button } from '../../../components/ui/button';
 import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
 import { Alert, Card } from '../../../components/ui/feedback';
@@ -165,7 +165,8 @@ export function ItemBody({ item, toolkit, whatNext }: { item: ItemView; toolkit:
             {item.outcome.partDescription && (
               <p>
                 Part needed: {item.outcome.partDescription}
-                {item.outcome.partCost !== null && ` (estimated cost ${item.outcome.partCost.toFixed(2)})`}
+                {item.outcome.partCost !== null &&
+                  ` (about ${formatMoney(item.outcome.partCost, item.event.currency)})`}
                 {item.outcome.partLink && (
                   <>
                     {' '}

@@ -168,7 +168,7 @@ export function OutcomeForm({
                 onChange={(e) => setPart((p) => ({ ...p, link: e.target.value }))}
               />
               <TextField
-                label="Estimated cost (optional)"
+                label={`Estimated cost in ${item.event.currency} (optional)`}
                 inputMode="decimal"
                 value={part.cost}
                 onChange={(e) => setPart((p) => ({ ...p, cost: e.target.value }))}

@@ -2,7 +2,8 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api';
 import { groupKeys } from './keys';
 
-type SettingsInput = { houseRules: string; excludedCategoryIds: number[] };
+/** Only the parts sent are saved. */
+type SettingsInput = { houseRules?: string; excludedCategoryIds?: number[]; currency?: string };
 
 const saveGroupSettings = (groupId: number, s: SettingsInput) => api('PUT', `/api/groups/${groupId}/settings`, s);
 

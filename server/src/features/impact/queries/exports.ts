@@ -65,6 +65,7 @@ export const recordFileRows = (db: DbOrTx, f: StatsFilter) =>
       barrier: itemOutcomes.barrier,
       part: itemOutcomes.partDescription,
       partCostCents: itemOutcomes.partCostCents,
+      currency: repairGroups.currency,
       minutes: itemOutcomes.minutes,
       notes: itemOutcomes.notes,
       fixer: users.name,
@@ -73,6 +74,7 @@ export const recordFileRows = (db: DbOrTx, f: StatsFilter) =>
     .from(bookingItems)
     .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
     .innerJoin(events, eq(events.id, bookings.eventId))
+    .innerJoin(repairGroups, eq(repairGroups.id, events.groupId))
     .innerJoin(categories, eq(categories.id, bookingItems.categoryId))
     .leftJoin(itemOutcomes, eq(itemOutcomes.itemId, bookingItems.id))
     .leftJoin(users, eq(users.id, itemOutcomes.recordedBy))

@@ -132,6 +132,7 @@ export const remindersDue = (tx: DbOrTx, cutoff: Date) =>
       booking: bookings,
       categoryName: categories.name,
       groupName: repairGroups.name,
+      currency: repairGroups.currency,
       o: itemOutcomes,
     })
     .from(followUps)
