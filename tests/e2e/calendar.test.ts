@@ -92,7 +92,7 @@ describe('calendar files on a phone', () => {
     // WCAG 2.2 SC 2.5.5 (target size, enhanced): 44 CSS px high.
     expect((await make.boundingBox())!.height).toBeGreaterThanOrEqual(44);
     await make.click();
-    const field = page.getByLabel('Your calendar link');
+    const field = page.getByLabel('Your calendar link', { exact: true });
     const feedUrl = await field.inputValue();
     expect(feedUrl).toMatch(/\/api\/public\/shift-calendars\/[A-Za-z0-9_-]{43}\.ics$/);
     await page.getByRole('button', { name: 'Copy the link' }).click();
@@ -126,7 +126,7 @@ describe('calendar files on a phone', () => {
     await page.getByRole('button', { name: 'Stop this link' }).click();
     await page.getByRole('dialog').getByRole('button', { name: 'Stop the link' }).click();
     await page.getByRole('button', { name: 'Make a calendar link' }).waitFor();
-    await expect(page.getByLabel('Your calendar link').count()).resolves.toBe(0);
+    await expect(page.getByLabel('Your calendar link', { exact: true }).count()).resolves.toBe(0);
     expect((await fetch(`${url}${feedPath}`)).status).toBe(404);
     await context.close();
   });
