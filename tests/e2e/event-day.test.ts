@@ -180,7 +180,7 @@ describe('event day in the browser', () => {
       await context.setOffline(true);
       await page.getByRole('radiogroup', { name: 'Outcome' }).getByText('Needs a part', { exact: true }).click();
       await page.getByLabel('Which part').fill('Smoothing capacitor 2200 µF 25 V, 105 °C');
-      await page.getByLabel('Estimated cost (optional)').fill('1.80');
+      await page.getByLabel('Estimated cost in GBP (optional)').fill('1.80');
       await page.getByRole('button', { name: 'Save outcome' }).click();
       await page.getByTestId('pending-outcome').waitFor();
       await page.screenshot({ path: shot('item-offline-pending-phone'), fullPage: true });
