@@ -213,7 +213,12 @@ function CategoryChart({ r }: { r: EventReport }) {
         table below gives every figure.
       </p>
       {/* A fixed-width box: the chart has the same size on screen and on paper, and scrolls on a phone. */}
-      <div className="max-w-full overflow-x-auto print:overflow-visible">
+      <div
+        className="max-w-full overflow-x-auto print:overflow-visible"
+        tabIndex={0}
+        role="region"
+        aria-label="Chart of outcomes by category (scrolls sideways on a narrow screen)"
+      >
         <div aria-hidden style={{ width: CHART_WIDTH, height }}>
           <ResponsiveContainer width="100%" height="100%">
             <BarChart
