@@ -7,7 +7,7 @@ import type { AppContext } from './context';
 import { authRoutes } from './auth/routes';
 import { loadUser } from './auth/guards';
 import { sessionMiddleware } from './auth/session';
-import { apiNotFound, errorHandler } from './http/errors';
+import { apiNotFound, errorHandler, wellFormedText } from './http/errors';
 import { clientFiles } from './http/client-files';
 import { FEATURES } from './features';
 
@@ -47,6 +47,7 @@ export function createApp(ctx: AppContext) {
   const api = express.Router();
   api.use(express.json({ limit: '100kb' }));
   api.use(express.urlencoded({ extended: false, limit: '100kb' }));
+  api.use(wellFormedText);
   for (const f of FEATURES) if (f.publicRoutes) api.use(f.publicRoutes(ctx));
 
   const { middleware: session, store } = sessionMiddleware(ctx.env, ctx.database.pool);

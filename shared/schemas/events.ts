@@ -32,9 +32,12 @@ const eventFields = {
   description: z.string().trim().max(4000).default(''),
 };
 
-const endAfterStart = (v: { startsAt?: Date; endsAt?: Date }) => !v.startsAt || !v.endsAt || v.endsAt > v.startsAt;
-const sameDayish = (v: { startsAt?: Date; endsAt?: Date }) =>
-  !v.startsAt || !v.endsAt || v.endsAt.getTime() - v.startsAt.getTime() <= 16 * 3600_000;
+// Zod runs an object's refinements even when a field failed, so they see the raw value then: check it is a date.
+const isDate = (d: unknown): d is Date => d instanceof Date && !Number.isNaN(d.getTime());
+const endAfterStart = (v: { startsAt?: unknown; endsAt?: unknown }) =>
+  !isDate(v.startsAt) || !isDate(v.endsAt) || v.endsAt > v.startsAt;
+const sameDayish = (v: { startsAt?: unknown; endsAt?: unknown }) =>
+  !isDate(v.startsAt) || !isDate(v.endsAt) || v.endsAt.getTime() - v.startsAt.getTime() <= 16 * 3600_000;
 
 export const createEventSchema = z
   .object({ groupId: z.coerce.number({ error: 'Choose a group.' }).int().positive(), ...eventFields })

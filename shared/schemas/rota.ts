@@ -14,7 +14,7 @@ export const myShiftSchema = z
       .transform((s) => new Date(s))
       .optional(),
   })
-  .refine((v) => !v.startsAt || !v.endsAt || v.endsAt > v.startsAt, {
+  .refine((v) => !(v.startsAt instanceof Date) || !(v.endsAt instanceof Date) || v.endsAt > v.startsAt, {
     path: ['endsAt'],
     message: 'Your shift must end after it starts.',
   });

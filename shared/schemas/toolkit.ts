@@ -82,11 +82,15 @@ export const salvagePartSchema = z.object({
 export type SalvagePartInput = z.input<typeof salvagePartSchema>;
 export type WriteupInput = z.input<typeof writeupSchema>;
 
-export const salvageUpdateSchema = z.object({
-  quantity: z.coerce.number().int().min(0).max(10000).optional(),
-  box: z.string().trim().min(1).max(60).optional(),
-  notes: z.string().trim().max(300).optional(),
-});
+export const salvageUpdateSchema = z
+  .object({
+    quantity: z.coerce.number().int().min(0).max(10000).optional(),
+    box: z.string().trim().min(1).max(60).optional(),
+    notes: z.string().trim().max(300).optional(),
+  })
+  .refine((v) => Object.values(v).some((x) => x !== undefined), {
+    message: 'Change at least one of quantity, box or notes.',
+  });
 
 export const takeSchema = z.object({
   itemId: z.coerce.number().int().positive().optional(),

@@ -1,6 +1,7 @@
 import type { LoginInput, SignupInput } from '../../../shared/schemas/auth';
 import type { AppContext } from '../context';
 import type { Tx } from '../db/client';
+import { isDuplicate } from '../db/retry';
 import { HttpError } from '../http/errors';
 import { enqueueMail } from '../mail/outbox';
 import { composeMail } from '../mail/templates';
@@ -180,7 +181,7 @@ export async function createFirstAdmin(
       });
     });
   } catch (err) {
-    if ((err as { code?: string }).code === 'ER_DUP_ENTRY')
+    if (isDuplicate(err))
       throw new HttpError(409, 'already-set-up', 'This installation already has an admin. Sign in instead.');
     throw err;
   }

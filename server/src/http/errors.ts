@@ -29,6 +29,46 @@ export const apiNotFound: RequestHandler = (req, _res, next) => {
   next(new HttpError(404, 'not-found', `No API route ${req.method} ${req.path}.`));
 };
 
+/** The driver's error code, also when the ORM wraps the driver error and keeps it as the cause. */
+export const driverCode = (err: unknown): string | undefined => {
+  const e = err as { code?: unknown; cause?: { code?: unknown } } | null;
+  const code = typeof e?.code === 'string' ? e.code : e?.cause?.code;
+  return typeof code === 'string' ? code : undefined;
+};
+
+const UNAVAILABLE = new Set([
+  'ECONNREFUSED',
+  'ECONNRESET',
+  'ETIMEDOUT',
+  'PROTOCOL_CONNECTION_LOST',
+  'PROTOCOL_SEQUENCE_TIMEOUT',
+  'ER_CON_COUNT_ERROR',
+  'ER_SERVER_SHUTDOWN',
+]);
+
+/** body-parser's refusals (http-errors with a 4xx status and a `type`), as our own. */
+function bodyParserError(err: { type?: unknown; status?: unknown; expose?: unknown }): HttpError | null {
+  if (typeof err?.status !== 'number' || err.status < 400 || err.status >= 500) return null;
+  if (typeof err.type !== 'string' && err.expose !== true) return null;
+  if (err.type === 'entity.too.large') return new HttpError(413, 'too-large', 'The request is too large.');
+  if (err.type === 'entity.parse.failed') return new HttpError(400, 'bad-json', 'The request body is not valid JSON.');
+  if (err.type === 'charset.unsupported' || err.type === 'encoding.unsupported')
+    return new HttpError(415, 'unsupported', 'Send the body as UTF-8 JSON, plain or gzip-compressed.');
+  return new HttpError(400, 'bad-body', 'The request body could not be read. Send it again.');
+}
+
+/** Refuses text that holds half of a UTF-16 surrogate pair: it cannot be stored or shown. */
+export const wellFormedText: RequestHandler = (req, _res, next) => {
+  const broken = (v: unknown, depth = 0): boolean => {
+    if (typeof v === 'string') return /\p{Surrogate}/u.test(v);
+    if (depth > 32 || v === null || typeof v !== 'object') return false;
+    return Object.entries(v).some(([k, x]) => /\p{Surrogate}/u.test(k) || broken(x, depth + 1));
+  };
+  if (broken(req.body) || broken(req.query))
+    return next(new HttpError(400, 'bad-text', 'Some text holds a broken character. Type it again and resend.'));
+  next();
+};
+
 export function errorHandler(log: (msg: string, err: unknown) => void = console.error): ErrorRequestHandler {
   return (err, req, res, _next) => {
     let e: HttpError;
@@ -38,12 +78,12 @@ export function errorHandler(log: (msg: string, err: unknown) => void = console.
       e = new HttpError(403, 'csrf', 'The form expired or came from elsewhere. Reload the page and try again.');
     else if (err instanceof URIError)
       e = new HttpError(400, 'bad-url', 'The address holds a broken %-escape. Check the link and try again.');
-    else if (err?.type === 'entity.too.large') e = new HttpError(413, 'too-large', 'The request is too large.');
-    else if (err?.type === 'entity.parse.failed')
-      e = new HttpError(400, 'bad-json', 'The request body is not valid JSON.');
-    else if (['ECONNREFUSED', 'PROTOCOL_CONNECTION_LOST', 'ER_CON_COUNT_ERROR'].includes(err?.code)) {
+    else if (bodyParserError(err)) e = bodyParserError(err)!;
+    else if (driverCode(err) === 'ER_DUP_ENTRY') e = new HttpError(409, 'duplicate', 'That exists already.');
+    else if (UNAVAILABLE.has(driverCode(err) ?? '') || err?.message === 'Pool is closed.') {
       log(`database unavailable on ${req.method} ${req.originalUrl}`, err);
       e = new HttpError(503, 'unavailable', 'The database is not reachable just now. Try again in a moment.');
+      if (!res.headersSent) res.set('Retry-After', '5');
     } else {
       log(`unhandled error on ${req.method} ${req.originalUrl}`, err);
       e = new HttpError(500, 'internal', 'Something went wrong on our side. It has been logged.');

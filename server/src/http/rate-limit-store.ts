@@ -1,4 +1,5 @@
 import { sql } from 'drizzle-orm';
+import { createHash } from 'node:crypto';
 import type { Store, IncrementResponse, Options } from 'express-rate-limit';
 import type { Db } from '../db/client';
 import { rateLimits } from '../db/schema/index';
@@ -7,6 +8,10 @@ import { rateLimits } from '../db/schema/index';
  * An express-rate-limit store in MariaDB, so the limit holds across app processes. One upsert per hit:
  * a window that has ended starts again at 1.
  */
+/** The stored key: as given when it fits the column (191), else the prefix and a SHA-256 of the rest. */
+export const storedKey = (prefix: string, key: string) =>
+  prefix.length + key.length <= 191 ? prefix + key : prefix + createHash('sha256').update(key).digest('hex');
+
 export class MariadbRateLimitStore implements Store {
   windowMs = 60_000;
   prefix: string;
@@ -20,7 +25,7 @@ export class MariadbRateLimitStore implements Store {
     this.windowMs = options.windowMs;
   }
   async increment(key: string): Promise<IncrementResponse> {
-    const k = this.prefix + key;
+    const k = storedKey(this.prefix, key);
     const reset = new Date(Date.now() + this.windowMs);
     await this.db
       .insert(rateLimits)
@@ -51,9 +56,9 @@ export class MariadbRateLimitStore implements Store {
     await this.db
       .update(rateLimits)
       .set({ hits: sql`GREATEST(${rateLimits.hits} - 1, 0)` })
-      .where(sql`${rateLimits.key} = ${this.prefix + key}`);
+      .where(sql`${rateLimits.key} = ${storedKey(this.prefix, key)}`);
   }
   async resetKey(key: string) {
-    await this.db.delete(rateLimits).where(sql`${rateLimits.key} = ${this.prefix + key}`);
+    await this.db.delete(rateLimits).where(sql`${rateLimits.key} = ${storedKey(this.prefix, key)}`);
   }
 }

@@ -1,3 +1,4 @@
+import { isDuplicate } from '../../db/retry';
 import type { z } from 'zod';
 import type { groupSchema } from '../../../../shared/schemas/auth';
 import type { AppContext } from '../../context';
@@ -58,7 +59,7 @@ export async function createGroup(ctx: AppContext, input: z.output<typeof groupS
     });
     return { id, ...input };
   } catch (err) {
-    if ((err as { code?: string }).code === 'ER_DUP_ENTRY')
+    if (isDuplicate(err))
       throw new HttpError(409, 'duplicate', 'A group with that name exists.', {
         name: 'A group with that name exists.',
       });

@@ -25,8 +25,8 @@ const tokenQuery = z.object({ token: z.string().max(200).optional() });
 const idempotencyKey = z
   .string()
   .trim()
-  .min(8, 'Idempotency-Key must be 8 to 100 characters.')
-  .max(100, 'Idempotency-Key must be 8 to 100 characters.')
+  .min(8, 'Idempotency-Key must be 8 to 90 characters.')
+  .max(90, 'Idempotency-Key must be 8 to 90 characters.')
   .regex(/^[A-Za-z0-9_.:-]+$/, 'Idempotency-Key may hold letters, digits and _ . : - only.');
 
 export function bookingRoutes(ctx: AppContext) {
