@@ -12,6 +12,7 @@ const scripts = {
   test: 'test.ts',
   bench: 'perf/http.ts',
   migrate: 'migrate.ts',
+  'stats-rebuild': 'stats-rebuild.ts',
   screenshots: 'screenshots.ts',
 };
 if (!scripts[command]) {

@@ -12,8 +12,9 @@ import {
 } from '../../shared/event-day/constants';
 import { cellsFromRecords, type ImpactCell, type RepairRecord } from '../../shared/impact/statistics';
 import { countedVisits, type VisitState } from '../../shared/impact/visits';
-import { bookingItems, bookings, categories, itemOutcomes } from '../../server/src/db/schema/index';
-import { refreshCells, refreshEventCells } from '../../server/src/features/impact/queries/cells';
+import { eq, inArray } from 'drizzle-orm';
+import { bookingItems, bookings, categories, impactDays, itemOutcomes } from '../../server/src/db/schema/index';
+import { rebuildRollups, refreshCells, refreshEventCells } from '../../server/src/features/impact/queries/cells';
 import { readCells } from '../../server/src/features/impact/queries/stats';
 import { createTestDatabase, type TestDatabase } from '../support/db';
 import { makeEvent, makeGroup } from '../support/factories';
@@ -24,9 +25,13 @@ import { makeEvent, makeGroup } from '../support/factories';
  * records. The pure computation itself is checked against worked examples in tests/unit/impact.test.ts.
  * Random records include what should not count: cancelled bookings, no-shows, withdrawn items, items never
  * checked in, returns that never arrived, and barriers given with an outcome other than end of life.
+ * The whole network is read from impact_days (moved by each refresh), so it is checked the same way, also after
+ * outcomes change and records are deleted, and against a rebuild from nothing.
  */
 let db: TestDatabase;
 let categoryIds: number[];
+/** Every visit inserted into this database so far, over all groups: the network. */
+const network: Visit[] = [];
 
 beforeAll(async () => {
   db = await createTestDatabase();
@@ -65,17 +70,20 @@ const spec: fc.Arbitrary<Spec> = fc.record({
   returnPick: fc.option(fc.nat(1000), { freq: 2 }),
 });
 
-type Visit = RepairRecord & VisitState;
+type Visit = RepairRecord & VisitState & { date: string };
 
 /** Inserts the records event by event, refreshing the cells of each event's items as the desk does. */
-async function insert(specs: Spec[]): Promise<{ groupId: number; eventIds: number[]; visits: Visit[] }> {
+async function insert(
+  specs: Spec[],
+  dates = EVENT_DATES,
+): Promise<{ groupId: number; eventIds: number[]; visits: Visit[] }> {
   const groupId = await makeGroup(db.db);
   const made = [];
-  for (const date of EVENT_DATES)
+  for (const date of dates)
     made.push(await makeEvent(db.db, groupId, { startsAt: new Date(`${date}T12:00:00Z`), slotCount: 1 }));
   const sorted = [...specs].sort((a, b) => a.event - b.event);
   const visits: Visit[] = [];
-  for (let e = 0; e < EVENT_DATES.length; e++) {
+  for (let e = 0; e < dates.length; e++) {
     const earlier = visits.slice();
     const ids: number[] = [];
     for (const s of sorted.filter((x) => x.event === e)) {
@@ -102,7 +110,7 @@ async function insert(specs: Spec[]): Promise<{ groupId: number; eventIds: numbe
           mains: false,
           position: 1,
           status: s.itemStatus,
-          checkedInAt: s.checkedIn ? new Date(`${EVENT_DATES[e]}T12:05:00Z`) : null,
+          checkedInAt: s.checkedIn ? new Date(`${dates[e]}T12:05:00Z`) : null,
           weighedKg,
           returnOfItemId: returnOf,
         })
@@ -115,7 +123,7 @@ async function insert(specs: Spec[]): Promise<{ groupId: number; eventIds: numbe
       visits.push({
         itemId,
         categoryId: categoryIds[s.category],
-        date: EVENT_DATES[e],
+        date: dates[e],
         outcome: s.outcome,
         barrier: s.barrier,
         weighedKg,
@@ -127,6 +135,7 @@ async function insert(specs: Spec[]): Promise<{ groupId: number; eventIds: numbe
     }
     await refreshCells(db.db, ids);
   }
+  network.push(...visits);
   return { groupId, eventIds: made.map((m) => m.eventId), visits };
 }
 
@@ -144,11 +153,91 @@ describe('the impact rollup', () => {
           const { groupId, eventIds, visits } = await insert(specs);
           const expected = normal(cellsFromRecords(countedVisits(visits)));
           expect(normal(await readCells(db.db, { groupId }))).toEqual(expected);
+          expect(normal(await readCells(db.db, {}))).toEqual(pureNetwork());
           await refreshEventCells(db.db, eventIds);
           expect(normal(await readCells(db.db, { groupId }))).toEqual(expected);
+          expect(normal(await readCells(db.db, {}))).toEqual(pureNetwork());
         }),
         { seed, numRuns: 1, endOnFailure: true },
       );
     }
+  });
+});
+
+const pureNetwork = (from = '0000', to = '9999') =>
+  normal(cellsFromRecords(countedVisits(network).filter((v) => v.date >= from && v.date <= to)));
+const dayRows = async () =>
+  (await db.db.select().from(impactDays)).sort(
+    (a, b) => a.eventDate.localeCompare(b.eventDate) || a.categoryId - b.categoryId,
+  );
+
+describe('the network day sums', () => {
+  it('still equal the pure computation after outcomes change and bookings are deleted, and equal a rebuild', async () => {
+    await fc.assert(
+      fc.asyncProperty(
+        fc.array(spec, { minLength: 100, maxLength: 200 }),
+        fc.array(fc.tuple(fc.nat(10_000), fc.option(fc.constantFrom(...OUTCOMES), { freq: 4 })), { maxLength: 40 }),
+        fc.array(fc.nat(10_000), { maxLength: 10 }),
+        async (specs, changes, deletions) => {
+          const { visits, eventIds } = await insert(specs);
+          // Outcome changes and removals, each refreshed as the outcome hook does.
+          for (const [pick, outcome] of changes) {
+            const v = visits[pick % visits.length];
+            await db.db.delete(itemOutcomes).where(eq(itemOutcomes.itemId, v.itemId));
+            if (outcome) await db.db.insert(itemOutcomes).values({ itemId: v.itemId, outcome, recordedAt: new Date() });
+            Object.assign(v, { outcome, barrier: null });
+            await refreshCells(db.db, [v.itemId]);
+          }
+          // Deleting a booking (with its item) that no return visit points at, then refreshing its event.
+          for (const pick of deletions) {
+            const v = visits[pick % visits.length];
+            if (!network.includes(v) || network.some((w) => w.returnOfItemId === v.itemId)) continue;
+            const [item] = await db.db.select().from(bookingItems).where(eq(bookingItems.id, v.itemId));
+            const [booking] = await db.db.select().from(bookings).where(eq(bookings.id, item.bookingId));
+            const earlier = network.find((w) => w.itemId === v.returnOfItemId);
+            await db.db.delete(bookings).where(inArray(bookings.id, [booking.id]));
+            network.splice(network.indexOf(v), 1);
+            const affected = [eventIds[EVENT_DATES.indexOf(v.date)]];
+            if (earlier) affected.push(eventIds[EVENT_DATES.indexOf(earlier.date)]);
+            await refreshEventCells(db.db, affected);
+          }
+          expect(normal(await readCells(db.db, {}))).toEqual(pureNetwork());
+          expect(normal(await readCells(db.db, { from: '2024-01-20', to: '2024-03-31' }))).toEqual(
+            pureNetwork('2024-01-20', '2024-03-31'),
+          );
+          const kept = await dayRows();
+          await rebuildRollups(db.db);
+          expect(await dayRows()).toEqual(kept);
+        },
+      ),
+      { seed: 1313, numRuns: 3, endOnFailure: true },
+    );
+  });
+});
+
+describe('a day whose only record goes', () => {
+  it('leaves no row in the network day sums', async () => {
+    const date = '2025-05-17';
+    const specs: Spec[] = [
+      {
+        event: 0,
+        category: 0,
+        bookingStatus: 'confirmed',
+        itemStatus: 'done',
+        checkedIn: true,
+        outcome: 'fixed',
+        barrier: null,
+        grams: 1234,
+        returnPick: null,
+      },
+    ];
+    const { visits, eventIds } = await insert(specs, [date]);
+    expect((await dayRows()).filter((r) => r.eventDate === date)).toMatchObject([{ items: 1, fixedWeighedKg: 1.234 }]);
+    const [item] = await db.db.select().from(bookingItems).where(eq(bookingItems.id, visits[0].itemId));
+    await db.db.delete(bookings).where(eq(bookings.id, item.bookingId));
+    network.splice(network.indexOf(visits[0]), 1);
+    await refreshEventCells(db.db, eventIds);
+    expect((await dayRows()).filter((r) => r.eventDate === date)).toEqual([]);
+    expect(normal(await readCells(db.db, {}))).toEqual(pureNetwork());
   });
 });

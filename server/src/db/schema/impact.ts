@@ -45,6 +45,35 @@ export const impactCells = mysqlTable(
   ],
 );
 
+/**
+ * The same counters for the whole network, per day and category: the sum of impact_cells by (event_date,
+ * category_id), moved by the difference each time an event's cells are rewritten (same transaction), so a
+ * network read sums a few rows a day instead of every event's cells. `npm run stats:rebuild` rebuilds both.
+ */
+export const impactDays = mysqlTable(
+  'impact_days',
+  {
+    eventDate: date('event_date', { mode: 'string' }).notNull(),
+    categoryId: ref('category_id')
+      .notNull()
+      .references(() => categories.id),
+    items: int('items').notNull(),
+    fixed: int('fixed').notNull(),
+    partsNeeded: int('parts_needed').notNull(),
+    advice: int('advice').notNull(),
+    endOfLife: int('end_of_life').notNull(),
+    fixedWeighedKg: decimal('fixed_weighed_kg', { precision: 14, scale: 3, mode: 'number' }).notNull(),
+    fixedUnweighed: int('fixed_unweighed').notNull(),
+    bSparePartsNotAvailable: int('b_spare_parts_not_available').notNull().default(0),
+    bSparePartsTooExpensive: int('b_spare_parts_too_expensive').notNull().default(0),
+    bNoWayToOpen: int('b_no_way_to_open').notNull().default(0),
+    bRepairInformationNotAvailable: int('b_repair_information_not_available').notNull().default(0),
+    bLackOfEquipment: int('b_lack_of_equipment').notNull().default(0),
+    bTooWornOut: int('b_too_worn_out').notNull().default(0),
+  },
+  (t) => [primaryKey({ columns: [t.eventDate, t.categoryId] })],
+);
+
 /** An item waiting for a part: what the group did about it and what the visitor did. */
 export const followUps = mysqlTable(
   'follow_ups',

@@ -1,8 +1,8 @@
 import { eq, inArray, sql, type SQL } from 'drizzle-orm';
 import { BARRIERS, OUTCOMES, type Barrier, type Outcome } from '../../../../../shared/event-day/constants';
 import { DIVERTING_OUTCOME } from '../../../../../shared/impact/visits';
-import type { DbOrTx } from '../../../db/client';
-import { bookingItems, bookings, impactCells } from '../../../db/schema/index';
+import type { Db, DbOrTx } from '../../../db/client';
+import { bookingItems, bookings, impactCells, impactDays } from '../../../db/schema/index';
 import { arrivedAs, countBarrier, countOutcome, notSupersededAs } from './visits';
 
 /** The rollup table's counter for each outcome and each barrier: adding one to shared/ without a column fails here. */
@@ -92,13 +92,101 @@ export async function refreshItemCells(
 
 export async function refreshEventCells(tx: DbOrTx, eventIds: number[]) {
   if (!eventIds.length) return;
+  const events = sql.join(
+    eventIds.map((id) => sql`${id}`),
+    sql`, `,
+  );
+  const before = await daySums(tx, events);
   await tx.delete(impactCells).where(inArray(impactCells.eventId, eventIds));
+  await tx.execute(rollupSelect(sql`b.event_id IN (${events})`));
+  await moveDays(tx, before, await daySums(tx, events));
+}
+
+/** Every integer counter of a cell, in one order: the rollup's item count, the unweighed count, outcomes, barriers. */
+const COUNTERS = [
+  'items',
+  'fixed_unweighed',
+  ...OUTCOMES.map((o) => OUTCOME_COLUMN[o]),
+  ...BARRIERS.map((b) => BARRIER_COLUMN[b]),
+];
+/** A day-and-category sum: the counters, then the weighed mass of fixed items in grams (exact integers). */
+type DaySums = Map<string, number[]>;
+
+/**
+ * The cells of these events summed by day and category, as a locking read: the rows as they are now (not this
+ * transaction's snapshot), held until commit, so two refreshes of one event cannot both move the days.
+ */
+async function daySums(tx: DbOrTx, events: SQL): Promise<DaySums> {
+  const sums = [...COUNTERS.map((c) => `SUM(${c})`), 'SUM(ROUND(fixed_weighed_kg * 1000))'];
+  const [rows] = (await tx.execute(sql`
+    SELECT DATE_FORMAT(event_date, '%Y-%m-%d') AS d, category_id AS c, ${sql.raw(sums.map((x, i) => `${x} AS v${i}`).join(', '))}
+    FROM impact_cells WHERE event_id IN (${events}) GROUP BY event_date, category_id FOR UPDATE`)) as unknown as [
+    Record<string, unknown>[],
+  ];
+  return new Map(rows.map((r) => [`${String(r.d)}|${String(r.c)}`, sums.map((_, i) => Number(r[`v${i}`]))]));
+}
+
+/**
+ * Adds after − before to impact_days in one statement, keys in order (so concurrent refreshes lock rows in the
+ * same order), then drops the rows left with no items.
+ */
+async function moveDays(tx: DbOrTx, before: DaySums, after: DaySums) {
+  const zero = Array<number>(COUNTERS.length + 1).fill(0);
+  const rows = [...new Set([...before.keys(), ...after.keys()])]
+    .sort()
+    .map((key) => {
+      const a = after.get(key) ?? zero;
+      const b = before.get(key) ?? zero;
+      return { key, delta: a.map((x, i) => x - b[i]) };
+    })
+    .filter((r) => r.delta.some((x) => x !== 0));
+  if (!rows.length) return;
+  const columns = sql.raw([...COUNTERS, 'fixed_weighed_kg'].join(', '));
+  const values = sql.join(
+    rows.map(({ key, delta }) => {
+      const [d, c] = key.split('|');
+      const grams = delta[COUNTERS.length];
+      const counters = delta.slice(0, COUNTERS.length).map((x) => sql`${x}`);
+      return sql`(${d}, ${Number(c)}, ${sql.join(counters, sql`, `)}, ${(grams / 1000).toFixed(3)})`;
+    }),
+    sql`, `,
+  );
+  const update = sql.raw([...COUNTERS, 'fixed_weighed_kg'].map((c) => `${c} = ${c} + VALUES(${c})`).join(', '));
   await tx.execute(
-    rollupSelect(
-      sql`b.event_id IN (${sql.join(
-        eventIds.map((id) => sql`${id}`),
+    sql`INSERT INTO impact_days (event_date, category_id, ${columns}) VALUES ${values} ON DUPLICATE KEY UPDATE ${update}`,
+  );
+  const emptied = rows.filter((r) => r.delta[0] < 0);
+  if (emptied.length)
+    await tx.execute(
+      sql`DELETE FROM impact_days WHERE items = 0 AND (event_date, category_id) IN (${sql.join(
+        emptied.map((r) => {
+          const [d, c] = r.key.split('|');
+          return sql`(${d}, ${Number(c)})`;
+        }),
         sql`, `,
       )})`,
-    ),
+    );
+}
+
+/** impact_days as the sum of impact_cells: for the migration's first fill and for a rebuild. */
+const daysFromCells = () => {
+  const columns = [...COUNTERS, 'fixed_weighed_kg'];
+  return sql.raw(
+    `INSERT INTO impact_days (event_date, category_id, ${columns.join(', ')})
+     SELECT event_date, category_id, ${columns.map((c) => `SUM(${c})`).join(', ')}
+     FROM impact_cells GROUP BY event_date, category_id`,
   );
+};
+
+/**
+ * Rebuilds both rollups from the records in one transaction (`npm run stats:rebuild`; the perf script fills its
+ * generated data with it). Needed only if rows were changed behind the application's back.
+ */
+export async function rebuildRollups(db: Db) {
+  await db.transaction(async (tx) => {
+    await tx.delete(impactCells);
+    await tx.execute(rollupSelect(null));
+    await tx.delete(impactDays);
+    await tx.execute(daysFromCells());
+  });
 }
