@@ -2,8 +2,8 @@ import { createDatabase } from '../src/db/client';
 import { rebuildRollups } from '../src/features/impact/queries/cells';
 
 /**
- * `npm run stats:rebuild`: rewrites the statistics rollups (impact_cells per event, impact_days for the network)
- * from the records, in one transaction. The application keeps them exact itself; this is for rows changed by hand.
+ * `node server/scripts/bootstrap.mjs stats-rebuild`: rewrites the statistics rollups (impact_cells per event,
+ * impact_days for the network) from the records, in one transaction. The application keeps them exact itself; this is for rows changed by hand.
  */
 const url = process.env.DATABASE_URL;
 if (!url) {

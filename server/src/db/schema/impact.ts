@@ -48,7 +48,8 @@ export const impactCells = mysqlTable(
 /**
  * The same counters for the whole network, per day and category: the sum of impact_cells by (event_date,
  * category_id), moved by the difference each time an event's cells are rewritten (same transaction), so a
- * network read sums a few rows a day instead of every event's cells. `npm run stats:rebuild` rebuilds both.
+ * network read sums a few rows a day instead of every event's cells. `node server/scripts/bootstrap.mjs
+ * stats-rebuild` rebuilds both.
  */
 export const impactDays = mysqlTable(
   'impact_days',

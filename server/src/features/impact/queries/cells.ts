@@ -179,8 +179,8 @@ const daysFromCells = () => {
 };
 
 /**
- * Rebuilds both rollups from the records in one transaction (`npm run stats:rebuild`; the perf script fills its
- * generated data with it). Needed only if rows were changed behind the application's back.
+ * Rebuilds both rollups from the records in one transaction (`node server/scripts/bootstrap.mjs stats-rebuild`;
+ * the perf script fills its generated data with it). Needed only if rows were changed behind the application's back.
  */
 export async function rebuildRollups(db: Db) {
   await db.transaction(async (tx) => {
