@@ -13,6 +13,7 @@ import { startServer } from '../../src/server';
 import { loadOrCreateSecrets, startLocalDatabase, step } from '../local-stack';
 import { measureTriage } from './triage';
 import { measureStats } from './stats';
+import { measureLighthouse } from './lighthouse';
 
 measureTriage();
 if (process.env.BENCH === 'triage') process.exit(0);
@@ -20,6 +21,11 @@ console.log('');
 if (!process.env.BENCH || process.env.BENCH === 'stats') {
   await measureStats();
   if (process.env.BENCH === 'stats') process.exit(0);
+  console.log('');
+}
+if (!process.env.BENCH || process.env.BENCH === 'lighthouse') {
+  await measureLighthouse();
+  if (process.env.BENCH === 'lighthouse') process.exit(0);
   console.log('');
 }
 
