@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { isWebLink } from '../files/web-links';
 import { HAZARDS } from '../constants';
 import { ARRIVALS, BARRIERS, OUTCOMES } from '../event-day/constants';
 import { bookingItemSchema, MAX_ITEMS_PER_BOOKING } from './bookings';
@@ -126,6 +127,7 @@ export const outcomeSchema = z
           .trim()
           .max(300)
           .optional()
+          .refine((v) => !v || isWebLink(v), 'Give a web address starting with https:// or http://, or leave it empty.')
           .transform((v) => v || undefined),
         cost: optionalNumber(
           z.coerce.number({ error: 'Enter the cost as a number.' }).min(0, 'A cost cannot be negative.').max(100000),

@@ -246,15 +246,25 @@ describe('at the bench', () => {
     const part = await as.organiser.post(`/api/items/${ids.coat}/outcome`, { outcome: 'parts-needed' });
     expect(part.status).toBe(400);
     expect(part.json.error.fields['part.description']).toBeTruthy();
+    // A part's link becomes a link on screen and in the visitor's mail: only http(s) (issue 14, finding 6).
+    for (const link of ['javascript:alert(1)', 'data:text/html,<b>x</b>', 'file:///etc/passwd', 'www.example.org']) {
+      const bad = await as.organiser.post(`/api/items/${ids.coat}/outcome`, {
+        outcome: 'parts-needed',
+        part: { description: 'No. 5 open-ended zip, 60 cm', link },
+      });
+      expect(bad.status, link).toBe(400);
+      expect(bad.json.error.fields['part.link']).toMatch(/https:\/\//);
+    }
     const ok = await as.organiser.post(`/api/items/${ids.coat}/outcome`, {
       outcome: 'parts-needed',
-      part: { description: 'No. 5 open-ended zip, 60 cm', cost: '3.50' },
+      part: { description: 'No. 5 open-ended zip, 60 cm', cost: '3.50', link: 'https://parts.example.org/zip-60' },
     });
     expect(ok.status).toBe(200);
     expect(ok.json.outcome).toMatchObject({
       outcome: 'parts-needed',
       partDescription: 'No. 5 open-ended zip, 60 cm',
       partCost: 3.5,
+      partLink: 'https://parts.example.org/zip-60',
     });
     // A textile item needs no electrical check to be fixed; recording again corrects the outcome.
     const fixed = await as.organiser.post(`/api/items/${ids.coat}/outcome`, {

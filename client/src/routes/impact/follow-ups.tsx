@@ -10,6 +10,7 @@ import { ConfirmDialog } from '../../components/ui/confirm-dialog';
 import { Alert, EmptyState } from '../../components/ui/feedback';
 import { TextAreaField } from '../../components/ui/field';
 import { groupSettingsQuery } from '../../features/groups/api/get-group-settings';
+import { isWebLink } from '../../../../shared/files/web-links';
 import type { FollowUp } from '../../features/impact/api/types';
 import { followUpsQuery, useFollowUps } from '../../features/impact/api/get-follow-ups';
 import { queryClient } from '../../lib/query-client';
@@ -172,7 +173,7 @@ export function FollowUpsPage() {
                   <span className="font-semibold">Part:</span>{' '}
                   {f.part ?? <span className="text-ink-soft">not described</span>}
                   {f.partCost !== null && <> · about {formatMoney(f.partCost, f.currency)}</>}
-                  {f.partLink && (
+                  {isWebLink(f.partLink) && (
                     <>
                       {' '}
                       ·{' '}

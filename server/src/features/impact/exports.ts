@@ -1,4 +1,5 @@
 import { stringify } from 'csv-stringify/sync';
+import { safeCsvCast } from '../../../../shared/files/csv-cells';
 import { BARRIER_LABELS, OUTCOME_LABELS } from '../../../../shared/event-day/constants';
 import { ordsBarrierText, ordsStatusText } from '../../../../shared/impact/open-repair-data';
 import type { AppContext } from '../../context';
@@ -52,7 +53,7 @@ export async function openRepairDataCsv(ctx: AppContext, f: StatsFilter): Promis
       event_date: r.startsAt.toISOString().slice(0, 10),
       problem: scrub(r.fault),
     })),
-    { header: true, columns: [...ORDS_FIELDS] },
+    { header: true, columns: [...ORDS_FIELDS], cast: safeCsvCast },
   );
 }
 
@@ -85,6 +86,7 @@ export async function recordsCsv(ctx: AppContext, f: StatsFilter): Promise<strin
     })),
     {
       header: true,
+      cast: safeCsvCast,
       columns: [
         'item_id',
         'event_date',

@@ -1,6 +1,7 @@
 import type { Outcome } from '../../../../shared/event-day/constants';
 import type { FollowUp } from '../../../../shared/api/impact';
 import { formatMoney } from '../../../../shared/format';
+import { isWebLink } from '../../../../shared/files/web-links';
 import { groupById } from './queries/stats';
 import {
   FOLLOW_UP_LABELS,
@@ -57,7 +58,7 @@ function partMail(
         reminder
           ? `six weeks ago a fixer at ${f.groupName} found that your ${f.itemLabel.toLowerCase()} needs a part. If you have it now, bring it to a session: the link below books you a place ahead of the queue.`
           : `thank you for coming to ${f.groupName}. Your ${f.itemLabel.toLowerCase()} can be repaired once it has a new part.`,
-        `The part: ${f.part}.${f.link ? ` Where to find it: ${f.link}.` : ''}${f.cost !== null ? ` Expect to pay about ${formatMoney(f.cost, f.currency)}.` : ''}`,
+        `The part: ${f.part}.${isWebLink(f.link) ? ` Where to find it: ${f.link}.` : ''}${f.cost !== null ? ` Expect to pay about ${formatMoney(f.cost, f.currency)}.` : ''}`,
         'When you have it, book a return visit with this link: it keeps a place for you even when a session is full, and the fixers will know what to expect.',
       ],
       action: { label: 'Book a return visit', url: rebookUrl(ctx, f.itemId) },

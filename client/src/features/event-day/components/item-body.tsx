@@ -2,6 +2,7 @@ import { useState, type ReactNode } from 'react';
 import { Link } from 'react-router';
 import { hasArrived, isQueued } from '../../../../../shared/event-day/constants';
 import { formatMoney, formatTime } from '../../../../../shared/format';
+import { isWebLink } from '../../../../../shared/files/web-links';
 import { Button } from '../../../components/ui/button';
 import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
 import { Alert, Card } from '../../../components/ui/feedback';
@@ -167,7 +168,7 @@ export function ItemBody({ item, toolkit, whatNext }: { item: ItemView; toolkit:
                 Part needed: {item.outcome.partDescription}
                 {item.outcome.partCost !== null &&
                   ` (about ${formatMoney(item.outcome.partCost, item.event.currency)})`}
-                {item.outcome.partLink && (
+                {isWebLink(item.outcome.partLink) && (
                   <>
                     {' '}
                     ·{' '}
