@@ -268,6 +268,18 @@ describe('parts-needed follow-up', () => {
       consent: true,
     });
     expect(ordinary.status).toBe(409);
+    // The link books only its own group's sessions (issue 14, finding 5): another group's slot is refused, untouched.
+    const [other] = (await db.db.execute(sql`
+      SELECT s.id, s.booked FROM slots s JOIN events e ON e.id = s.event_id
+       WHERE e.group_id <> ${groupId} AND e.status = 'published' AND s.starts_at > NOW() ORDER BY s.starts_at LIMIT 1`)) as unknown as [
+      { id: number; booked: number }[],
+    ];
+    expect(other).toBeDefined();
+    const foreign = await as.anon.post(`/api/rebook/${link}`, { slotId: other[0].id });
+    expect(foreign.status).toBe(409);
+    expect(foreign.json.error.code).toBe('not-offered');
+    const [untouched] = await db.db.select().from(slots).where(eq(slots.id, other[0].id));
+    expect(untouched.booked).toBe(other[0].booked);
     const back = await as.anon.post(`/api/rebook/${link}`, { slotId });
     expect(back.status).toBe(201);
     expect((await as.anon.post(`/api/rebook/${link}`, { slotId })).status).toBe(409);

@@ -61,6 +61,15 @@ export async function rebook(ctx: AppContext, token: string, slotId: number) {
       'no-email',
       'This visit has no e-mail address to confirm to. Come to reception on the day instead.',
     );
+  // Only a time the re-booking page offers: one of this group's next sessions, never another group's slot.
+  const offered = await slotsStillAhead(
+    ctx.database.db,
+    (await nextSessions(ctx.database.db, r.group.id, 3)).map((e) => e.id),
+  );
+  if (!offered.some((s) => s.id === slotId))
+    throw new HttpError(409, 'not-offered', `Choose one of the times ${r.group.name} offers on this page.`, {
+      slotId: 'Choose one of the times listed on this page.',
+    });
   const fault = `Return visit with the part${r.part ? ` (${r.part})` : ''}. Before: ${r.item.fault}`.slice(0, 2000);
   const result = await createReturnBooking(
     ctx,
