@@ -1,4 +1,5 @@
 import { MinCostFlow } from './min-cost-flow';
+import { EXACT_SEARCH_SIZE, searchMixed } from './mixed-search';
 
 export type Level = 1 | 2 | 3;
 export interface TriageItem {
@@ -65,7 +66,8 @@ interface Plan {
  * the fixer's level above the minimum: among maximum assignments, the flow serves the lowest priority numbers
  * first (items that can be served together form a matroid, so the cheapest set is the greedy one) and, among
  * those, keeps experts free. With seated and free fixers mixed, seated fixers and free fixers are matched in two
- * stages, in both orders, and the better result is kept: always valid, usually maximal.
+ * stages, in both orders, and the better plan starts an exact branch and bound (mixed-search.ts) on rounds the size
+ * of a slot; docs/decisions/004 says why it is exact.
  */
 export function triage(input: TriageInput): TriageResult {
   const items = [...input.items].sort((a, b) => a.priority - b.priority || byId(a, b));
@@ -89,17 +91,28 @@ export function triage(input: TriageInput): TriageResult {
   if (free.length === 0) plan = seatedPlan(items, seated, benches, seats, itemCost);
   else if (seated.length === 0) plan = freePlan(items, free, benches, seats, itemCost);
   else {
+    // The better of the two staged plans is the search's first incumbent; small rounds are then searched exactly.
     const a = stages(items, seated, free, benches, seats, itemCost, 'seated-first');
     const b = stages(items, seated, free, benches, seats, itemCost, 'free-first');
     plan = a.pairs.size > b.pairs.size || (a.pairs.size === b.pairs.size && a.cost <= b.cost) ? a : b;
+    if (items.length * working.length <= EXACT_SEARCH_SIZE)
+      plan = mixedPlan(items, working, benches, seats, itemCost, plan);
   }
 
   const assignments: TriageResult['assignments'] = [];
   const unassigned: TriageResult['unassigned'] = [];
+  // Items with the same need and kit wait for the same reason: explain each kind once.
+  const reasons = new Map<string, ReturnType<typeof explain>>();
   for (const item of items) {
     const p = plan.pairs.get(item.id);
-    if (p) assignments.push({ itemId: item.id, volunteerId: p[0], benchId: p[1] });
-    else unassigned.push({ itemId: item.id, ...explain(item, present, allBenches) });
+    if (p) {
+      assignments.push({ itemId: item.id, volunteerId: p[0], benchId: p[1] });
+      continue;
+    }
+    const key = `${item.skill}\u0000${item.minLevel}\u0000${item.equipment.join('\u0000')}`;
+    let why = reasons.get(key);
+    if (!why) reasons.set(key, (why = explain(item, present, allBenches)));
+    unassigned.push({ itemId: item.id, ...why });
   }
   return { assignments, unassigned };
 }
@@ -107,9 +120,13 @@ export function triage(input: TriageInput): TriageResult {
 /** Items are alike for the flow when they need the same skill and level and fit the same benches. */
 function classesOf(items: TriageItem[], benches: TriageBench[]): ItemClass[] {
   const map = new Map<string, ItemClass>();
+  const fitsOf = new Map<string, string>();
   for (const item of items) {
     const equipment = [...new Set(item.equipment)].sort();
-    const fits = benches.map((b) => (hasAll(b, equipment) ? '1' : '0')).join('');
+    const kitKey = equipment.join('\u0000');
+    let fits = fitsOf.get(kitKey);
+    if (fits === undefined)
+      fitsOf.set(kitKey, (fits = benches.map((b) => (hasAll(b, equipment) ? '1' : '0')).join('')));
     const key = `${item.skill}\u0000${item.minLevel}\u0000${fits}`;
     let c = map.get(key);
     if (!c) map.set(key, (c = { skill: item.skill, minLevel: item.minLevel, equipment, items: [] }));
@@ -162,7 +179,7 @@ function seatedPlan(
   return { pairs, cost };
 }
 
-/** No fixer is seated: source → fixer → item (unit, priority cost) → bench with the kit → sink. */
+/** No fixer is seated: the search's flow (fixer → need → item class → kit pattern → bench), solved at its root. */
 function freePlan(
   items: TriageItem[],
   volunteers: TriageVolunteer[],
@@ -170,40 +187,7 @@ function freePlan(
   seats: Map<string, number>,
   itemCost: (i: TriageItem) => number,
 ): Plan {
-  const classes = classesOf(items, benches);
-  const S = 0;
-  const V0 = 1;
-  const Cin = V0 + volunteers.length;
-  const Cout = Cin + classes.length;
-  const B0 = Cout + classes.length;
-  const T = B0 + benches.length;
-  const g = new MinCostFlow(T + 1);
-  volunteers.forEach((v, j) => g.addEdge(S, V0 + j, capacityOf(v), 0));
-  const vc: { j: number; e: number }[][] = classes.map(() => []);
-  classes.forEach((c, k) =>
-    volunteers.forEach((v, j) => {
-      const level = levelOf(v, c.skill);
-      if (level >= c.minLevel) vc[k].push({ j, e: g.addEdge(V0 + j, Cin + k, c.items.length, level - c.minLevel) });
-    }),
-  );
-  const unitEdges = classes.map((c, k) => c.items.map((item) => g.addEdge(Cin + k, Cout + k, 1, itemCost(item))));
-  const cb: { i: number; e: number }[][] = classes.map(() => []);
-  classes.forEach((c, k) =>
-    benches.forEach(
-      (b, i) => hasAll(b, c.equipment) && cb[k].push({ i, e: g.addEdge(Cout + k, B0 + i, c.items.length, 0) }),
-    ),
-  );
-  benches.forEach((b, i) => g.addEdge(B0 + i, T, seats.get(b.id) ?? 0, 0));
-  const { cost } = g.run(S, T);
-
-  const pairs = new Map<string, [string, string]>();
-  classes.forEach((c, k) => {
-    const chosen = c.items.filter((_, u) => g.flow(unitEdges[k][u]) > 0);
-    const fixers = vc[k].flatMap((x) => Array<string>(g.flow(x.e)).fill(volunteers[x.j].id));
-    const places = cb[k].flatMap((x) => Array<string>(g.flow(x.e)).fill(benches[x.i].id));
-    chosen.forEach((item, n) => pairs.set(item.id, [fixers[n], places[n]]));
-  });
-  return { pairs, cost };
+  return mixedPlan(items, volunteers, benches, seats, itemCost, { pairs: new Map(), cost: 0 });
 }
 
 /** Mixed rounds: one kind of fixer first, the other on what is left; valid by construction. */
@@ -230,6 +214,77 @@ function stages(
     left,
   );
   return { pairs: new Map([...a.pairs, ...b.pairs]), cost: a.cost + b.cost };
+}
+
+/** Seated and free fixers together: the exact search of mixed-search.ts, on indices. */
+function mixedPlan(
+  items: TriageItem[],
+  volunteers: TriageVolunteer[],
+  benches: TriageBench[],
+  seats: Map<string, number>,
+  itemCost: (i: TriageItem) => number,
+  start: Plan,
+): Plan {
+  const benchIndex = new Map(benches.map((b, i) => [b.id, i]));
+  const fixerIndex = new Map(volunteers.map((v, i) => [v.id, i]));
+  const needs = new Map<string, number>();
+  const needExcess: Int8Array[] = [];
+  const patterns = new Map<string, number>();
+  const patternFits: Uint8Array[] = [];
+  const patternOf = new Map<string, number>();
+  const classes = new Map<string, number>();
+  const classNeed: number[] = [];
+  const classPattern: number[] = [];
+  const itemClass = items.map((item) => {
+    const needKey = `${item.skill}\u0000${item.minLevel}`;
+    let need = needs.get(needKey);
+    if (need === undefined) {
+      needs.set(needKey, (need = needExcess.length));
+      needExcess.push(Int8Array.from(volunteers, (v) => Math.max(-1, levelOf(v, item.skill) - item.minLevel)));
+    }
+    const kitKey = item.equipment.join('\u0000');
+    let pattern = patternOf.get(kitKey);
+    if (pattern === undefined) {
+      const fits = Uint8Array.from(benches, (b) => (hasAll(b, item.equipment) ? 1 : 0));
+      const fitsKey = fits.join('');
+      pattern = patterns.get(fitsKey);
+      if (pattern === undefined) {
+        patterns.set(fitsKey, (pattern = patternFits.length));
+        patternFits.push(fits);
+      }
+      patternOf.set(kitKey, pattern);
+    }
+    const classKey = `${need}:${pattern}`;
+    let cls = classes.get(classKey);
+    if (cls === undefined) {
+      classes.set(classKey, (cls = classNeed.length));
+      classNeed.push(need);
+      classPattern.push(pattern);
+    }
+    return cls;
+  });
+  const r = searchMixed({
+    itemCost: items.map(itemCost),
+    itemClass,
+    classNeed,
+    classPattern,
+    patternFits,
+    needExcess,
+    fixerCap: volunteers.map(capacityOf),
+    fixerBench: volunteers.map((v) => (v.benchId === undefined ? -1 : benchIndex.get(v.benchId)!)),
+    seats: benches.map((b) => seats.get(b.id) ?? 0),
+    start: {
+      count: start.pairs.size,
+      cost: start.cost,
+      fixer: Int32Array.from(items, (i) => (start.pairs.has(i.id) ? fixerIndex.get(start.pairs.get(i.id)![0])! : -1)),
+      bench: Int32Array.from(items, (i) => (start.pairs.has(i.id) ? benchIndex.get(start.pairs.get(i.id)![1])! : -1)),
+    },
+  });
+  const pairs = new Map<string, [string, string]>();
+  items.forEach((item, i) => {
+    if (r.fixer[i] >= 0) pairs.set(item.id, [volunteers[r.fixer[i]].id, benches[r.bench[i]].id]);
+  });
+  return { pairs, cost: r.cost };
 }
 
 const list = (words: string[]) =>
@@ -260,7 +315,8 @@ function explain(
         : `No single bench has all of: ${list(item.equipment.map(kit))}.`,
     };
   }
-  const canPair = skilled.some((v) => v.benchId === undefined || equipped.some((b) => b.id === v.benchId));
+  const equippedIds = new Set(equipped.map((b) => b.id));
+  const canPair = skilled.some((v) => v.benchId === undefined || equippedIds.has(v.benchId));
   if (!canPair) {
     const who = skilled.map((v) => v.name ?? v.id);
     return {

@@ -1,27 +1,53 @@
 /**
- * Minimum-cost maximum flow by successive shortest paths (Dijkstra with Johnson potentials). All edge costs are
- * non-negative at the start, so the first potentials are zero. Pure and deterministic: the same graph built in
- * the same order gives the same flow.
+ * Minimum-cost maximum flow by successive shortest paths (Dijkstra with Johnson potentials on a binary heap),
+ * each pass filled with a blocking flow on the edges of zero reduced cost. Costs are non-negative integers, so the
+ * first potentials are zero and every comparison is exact. Edges live in typed arrays that grow by doubling; the
+ * work arrays of a run are allocated once. Pure and deterministic: the same graph built in the same order gives
+ * the same flow.
  */
 export class MinCostFlow {
-  private to: number[] = [];
-  private cap: number[] = [];
-  private cost: number[] = [];
-  private head: number[];
-  private next: number[] = [];
+  private m = 0;
+  private to: Int32Array;
+  private cap: Int32Array;
+  private cost: Float64Array;
+  private next: Int32Array;
+  private head: Int32Array;
 
-  constructor(private n: number) {
-    this.head = new Array(n).fill(-1);
+  constructor(
+    private n: number,
+    edgeHint = 64,
+  ) {
+    this.head = new Int32Array(n).fill(-1);
+    const size = Math.max(16, edgeHint * 2);
+    this.to = new Int32Array(size);
+    this.cap = new Int32Array(size);
+    this.cost = new Float64Array(size);
+    this.next = new Int32Array(size);
+  }
+
+  private grow() {
+    const size = this.to.length * 2;
+    const copy = <T extends Int32Array | Float64Array>(a: T, b: T) => (b.set(a), b);
+    this.to = copy(this.to, new Int32Array(size));
+    this.cap = copy(this.cap, new Int32Array(size));
+    this.cost = copy(this.cost, new Float64Array(size));
+    this.next = copy(this.next, new Int32Array(size));
   }
 
   /** Adds an edge and its residual twin; returns the edge's index for reading its flow later. */
   addEdge(from: number, to: number, capacity: number, cost: number): number {
     if (cost < 0) throw new RangeError('costs must be non-negative');
-    const e = this.to.length;
-    this.to.push(to, from);
-    this.cap.push(capacity, 0);
-    this.cost.push(cost, -cost);
-    this.next.push(this.head[from], this.head[to]);
+    if (this.m + 2 > this.to.length) this.grow();
+    const e = this.m;
+    this.m += 2;
+    this.to[e] = to;
+    this.to[e + 1] = from;
+    this.cap[e] = Math.min(capacity, 0x3fffffff);
+    this.cap[e + 1] = 0;
+    this.cost[e] = cost;
+    this.cost[e + 1] = -cost;
+    this.next[e] = this.head[from];
+    this.next[e + 1] = this.head[to];
     this.head[from] = e;
     this.head[to] = e + 1;
     return e;
@@ -34,38 +60,79 @@ export class MinCostFlow {
 
   /**
    * After each Dijkstra pass the potentials make every shortest path a path of zero reduced cost; all of them are
-   * then filled at once with a blocking flow (Dinic's method on the zero-cost edges) before the next pass.
+   * then filled at once (Dinic's method on the zero-cost edges) before the next pass. Dijkstra stops at the sink:
+   * potentials grow by min(distance, distance of the sink), which keeps every reduced cost non-negative.
    */
   run(s: number, t: number): { flow: number; cost: number } {
-    const n = this.n;
+    const { n, to, cap, cost, next, head } = this;
     const potential = new Float64Array(n);
     const dist = new Float64Array(n);
+    const done = new Uint8Array(n);
     const level = new Int32Array(n);
     const arc = new Int32Array(n);
     const queue = new Int32Array(n);
+    const stack = new Int32Array(n + 1);
+    // Each edge is relaxed at most once a pass, so the heap never holds more than m + 1 entries.
+    const heapKey = new Float64Array(this.m + 1);
+    const heapVal = new Int32Array(this.m + 1);
     let flow = 0;
     let total = 0;
-    const reduced = (e: number, u: number) => this.cost[e] + potential[u] - potential[this.to[e]];
     for (;;) {
       dist.fill(Infinity);
+      done.fill(0);
       dist[s] = 0;
-      const heap = new MinHeap();
-      heap.push(0, s);
-      while (heap.size) {
-        const [d, u] = heap.pop();
-        if (d > dist[u]) continue;
-        for (let e = this.head[u]; e !== -1; e = this.next[e]) {
-          if (this.cap[e] <= 0) continue;
-          const v = this.to[e];
-          const nd = d + reduced(e, u);
-          if (nd < dist[v] - 1e-9) {
+      // Binary heap with lazy deletion; ties go to the smaller node, which keeps runs deterministic.
+      let size = 0;
+      const push = (k: number, v: number) => {
+        let i = size++;
+        while (i > 0) {
+          const p = (i - 1) >> 1;
+          if (heapKey[p] < k || (heapKey[p] === k && heapVal[p] < v)) break;
+          heapKey[i] = heapKey[p];
+          heapVal[i] = heapVal[p];
+          i = p;
+        }
+        heapKey[i] = k;
+        heapVal[i] = v;
+      };
+      push(0, s);
+      while (size > 0) {
+        const d = heapKey[0];
+        const u = heapVal[0];
+        const lk = heapKey[--size];
+        const lv = heapVal[size];
+        let i = 0;
+        for (;;) {
+          const l = 2 * i + 1;
+          if (l >= size) break;
+          let c = l;
+          const r = l + 1;
+          if (r < size && (heapKey[r] < heapKey[l] || (heapKey[r] === heapKey[l] && heapVal[r] < heapVal[l]))) c = r;
+          if (lk < heapKey[c] || (lk === heapKey[c] && lv < heapVal[c])) break;
+          heapKey[i] = heapKey[c];
+          heapVal[i] = heapVal[c];
+          i = c;
+        }
+        heapKey[i] = lk;
+        heapVal[i] = lv;
+        if (done[u] || d > dist[u]) continue;
+        done[u] = 1;
+        if (u === t) break;
+        const pu = potential[u];
+        for (let e = head[u]; e !== -1; e = next[e]) {
+          if (cap[e] <= 0) continue;
+          const v = to[e];
+          if (done[v]) continue;
+          const nd = d + cost[e] + pu - potential[v];
+          if (nd < dist[v]) {
             dist[v] = nd;
-            heap.push(nd, v);
+            push(nd, v);
           }
         }
       }
-      if (dist[t] === Infinity) break;
-      for (let v = 0; v < n; v++) if (dist[v] < Infinity) potential[v] += dist[v];
+      const dt = dist[t];
+      if (dt === Infinity) break;
+      for (let v = 0; v < n; v++) potential[v] += dist[v] < dt ? dist[v] : dt;
       // Blocking flow on the edges whose reduced cost is now zero.
       for (;;) {
         level.fill(-1);
@@ -75,84 +142,51 @@ export class MinCostFlow {
         queue[qt++] = s;
         while (qh < qt) {
           const u = queue[qh++];
-          for (let e = this.head[u]; e !== -1; e = this.next[e]) {
-            const v = this.to[e];
-            if (this.cap[e] > 0 && level[v] < 0 && Math.abs(reduced(e, u)) < 1e-9) {
+          const pu = potential[u];
+          for (let e = head[u]; e !== -1; e = next[e]) {
+            const v = to[e];
+            if (cap[e] > 0 && level[v] < 0 && cost[e] + pu - potential[v] === 0) {
               level[v] = level[u] + 1;
               queue[qt++] = v;
             }
           }
         }
         if (level[t] < 0) break;
-        for (let v = 0; v < n; v++) arc[v] = this.head[v];
-        const dfs = (u: number, limit: number): number => {
-          if (u === t) return limit;
-          for (; arc[u] !== -1; arc[u] = this.next[arc[u]]) {
-            const e = arc[u];
-            const v = this.to[e];
-            if (this.cap[e] <= 0 || level[v] !== level[u] + 1 || Math.abs(reduced(e, u)) >= 1e-9) continue;
-            const pushed = dfs(v, Math.min(limit, this.cap[e]));
-            if (pushed > 0) {
-              this.cap[e] -= pushed;
-              this.cap[e ^ 1] += pushed;
-              total += pushed * this.cost[e];
-              return pushed;
+        arc.set(head);
+        // Iterative depth-first search for one path at a time along the level graph.
+        for (;;) {
+          let depth = 0;
+          let u = s;
+          while (u !== t) {
+            let e = arc[u];
+            for (; e !== -1; e = next[e]) {
+              const v = to[e];
+              if (cap[e] > 0 && level[v] === level[u] + 1 && cost[e] + potential[u] - potential[v] === 0) break;
             }
+            arc[u] = e;
+            if (e === -1) {
+              if (depth === 0) break;
+              level[u] = -1; // dead end: never visit again in this phase
+              u = to[stack[--depth] ^ 1];
+              arc[u] = next[arc[u]];
+              continue;
+            }
+            stack[depth++] = e;
+            u = to[e];
           }
-          return 0;
-        };
-        let pushed: number;
-        while ((pushed = dfs(s, Infinity)) > 0) flow += pushed;
+          if (u !== t) break;
+          let push1 = 0x3fffffff;
+          for (let k = 0; k < depth; k++) push1 = Math.min(push1, cap[stack[k]]);
+          for (let k = 0; k < depth; k++) {
+            const e = stack[k];
+            cap[e] -= push1;
+            cap[e ^ 1] += push1;
+            total += push1 * cost[e];
+          }
+          flow += push1;
+        }
       }
     }
     return { flow, cost: total };
-  }
-}
-
-/** A binary heap of (key, value) pairs; ties go to the smaller value, which keeps runs deterministic. */
-class MinHeap {
-  private keys: number[] = [];
-  private vals: number[] = [];
-  get size() {
-    return this.keys.length;
-  }
-  private less(i: number, j: number) {
-    return this.keys[i] < this.keys[j] || (this.keys[i] === this.keys[j] && this.vals[i] < this.vals[j]);
-  }
-  private swap(i: number, j: number) {
-    [this.keys[i], this.keys[j]] = [this.keys[j], this.keys[i]];
-    [this.vals[i], this.vals[j]] = [this.vals[j], this.vals[i]];
-  }
-  push(key: number, val: number) {
-    this.keys.push(key);
-    this.vals.push(val);
-    let i = this.keys.length - 1;
-    while (i > 0) {
-      const p = (i - 1) >> 1;
-      if (!this.less(i, p)) break;
-      this.swap(i, p);
-      i = p;
-    }
-  }
-  pop(): [number, number] {
-    const top: [number, number] = [this.keys[0], this.vals[0]];
-    const lastK = this.keys.pop()!;
-    const lastV = this.vals.pop()!;
-    if (this.keys.length) {
-      this.keys[0] = lastK;
-      this.vals[0] = lastV;
-      let i = 0;
-      for (;;) {
-        const l = 2 * i + 1;
-        const r = l + 1;
-        let m = i;
-        if (l < this.keys.length && this.less(l, m)) m = l;
-        if (r < this.keys.length && this.less(r, m)) m = r;
-        if (m === i) break;
-        this.swap(i, m);
-        i = m;
-      }
-    }
-    return top;
   }
 }
