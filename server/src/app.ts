@@ -48,6 +48,7 @@ export function createApp(ctx: AppContext) {
   api.use(express.json({ limit: '100kb' }));
   api.use(express.urlencoded({ extended: false, limit: '100kb' }));
   api.use(wellFormedText);
+  api.use(ctx.publicCache.invalidateOnWrite);
   for (const f of FEATURES) if (f.publicRoutes) api.use(f.publicRoutes(ctx));
 
   const { middleware: session, store } = sessionMiddleware(ctx.env, ctx.database.pool);

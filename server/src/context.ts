@@ -1,3 +1,4 @@
+import type { PublicReadCache } from './http/public-cache';
 import type { Env } from './config/env';
 import type { Database } from './db/client';
 import type { OutboxWorker } from './mail/outbox';
@@ -13,4 +14,6 @@ export interface AppContext {
   log: (line: string) => void;
   /** The steps features registered for each other's use cases (server/src/core/hooks.ts). */
   hooks: HookSteps;
+  /** Public reads kept in memory, emptied by writes in any process (server/src/http/public-cache.ts). */
+  publicCache: PublicReadCache;
 }

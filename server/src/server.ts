@@ -8,6 +8,7 @@ import { OutboxWorker } from './mail/outbox';
 import { smtpSender, type MailSender } from './mail/transport';
 import { LocalDiskStorage } from './storage/index';
 import { Scheduler } from './jobs/scheduler';
+import { PublicReadCache } from './http/public-cache';
 import { collectHooks } from './core/hooks';
 import { FEATURES } from './features';
 import path from 'node:path';
@@ -34,6 +35,10 @@ export async function startServer(
     log,
     storage: new LocalDiskStorage(path.resolve(env.DATA_DIR, 'uploads')),
     hooks: collectHooks(FEATURES),
+    publicCache: new PublicReadCache(database.db, {
+      pollMs: env.READ_CACHE_POLL_MS,
+      maxAgeMs: env.READ_CACHE_MAX_AGE_MS,
+    }),
   };
   const scheduler = new Scheduler(
     ctx,
@@ -45,6 +50,7 @@ export async function startServer(
     s.once('error', reject);
   });
   outbox.start(env.OUTBOX_POLL_MS);
+  ctx.publicCache.start();
   scheduler.start(env.JOBS_POLL_MS);
   const { port } = server.address() as AddressInfo;
   const url = `http://${env.HOST}:${port}`;
@@ -56,6 +62,7 @@ export async function startServer(
     url,
     async stop() {
       await scheduler.stop();
+      await ctx.publicCache.stop();
       await outbox.stop();
       await new Promise<void>((resolve) => {
         server.close(() => resolve());

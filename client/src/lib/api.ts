@@ -51,6 +51,9 @@ export async function api<T>(
         method,
         headers,
         credentials: 'same-origin',
+        // Public reads may be kept by shared caches for a few seconds; the app itself always asks again, and an
+        // unchanged answer comes back as a cheap 304.
+        cache: 'no-cache',
         body: body === undefined ? undefined : form ? (body as FormData) : JSON.stringify(body),
       });
     } catch {

@@ -26,6 +26,8 @@ const schema = z.object({
   MAIL_FROM: z.string().default('Mendery <no-reply@mendery.local>'),
   OUTBOX_POLL_MS: z.coerce.number().int().min(0).default(2000),
   JOBS_POLL_MS: z.coerce.number().int().min(0).default(60_000),
+  READ_CACHE_POLL_MS: z.coerce.number().int().min(0).default(250),
+  READ_CACHE_MAX_AGE_MS: z.coerce.number().int().min(0).default(5000),
   LOGIN_RATE_MAX: z.coerce.number().int().min(1).default(10),
   LOGIN_RATE_WINDOW_MINUTES: z.coerce.number().positive().default(15),
   FEED_RATE_MAX: z.coerce.number().int().min(1).default(300),

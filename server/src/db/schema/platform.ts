@@ -1,4 +1,4 @@
-import { index, int, json, mediumtext, mysqlEnum, mysqlTable, varchar } from 'drizzle-orm/mysql-core';
+import { bigint, index, int, json, mediumtext, mysqlEnum, mysqlTable, varchar } from 'drizzle-orm/mysql-core';
 import { createdAt, id, timestamp3 } from './columns';
 import type { MailAttachment } from '../../mail/transport';
 
@@ -55,4 +55,13 @@ export const mailboxMessages = mysqlTable('mailbox_messages', {
 export const settings = mysqlTable('settings', {
   key: varchar('setting_key', { length: 64 }).primaryKey(),
   value: json('value').notNull(),
+});
+
+/**
+ * One row whose number moves on every successful write through the API. Each app process polls it and drops its
+ * cached public reads when it moved, so a write in one process reaches the others within the poll interval.
+ */
+export const readGeneration = mysqlTable('read_generation', {
+  id: int('id', { unsigned: true }).primaryKey(),
+  generation: bigint('generation', { mode: 'number', unsigned: true }).notNull().default(0),
 });

@@ -22,7 +22,8 @@ export function eventRoutes(ctx: AppContext) {
   const organiserOfEvent = requireGroupRole(['organiser'], (req) => eventGroupId(db, eventId(req)));
 
   r.get('/events', async (req, res) => {
-    res.json(await events.listPublicEvents(ctx, query(req, eventListQuery)));
+    const q = query(req, eventListQuery);
+    await ctx.publicCache.send(req, res, () => events.listPublicEvents(ctx, q));
   });
 
   r.post('/events', requireGroupRole(['organiser'], groupIdInBody), async (req, res) => {
@@ -33,9 +34,14 @@ export function eventRoutes(ctx: AppContext) {
   /** Published events for everyone; drafts only for the group's organisers. */
   r.get('/events/:id', async (req, res) => {
     const { id } = params(req, idParams);
-    const groupId = await eventGroupId(db, id);
-    const includeDrafts = hasGroupRole(req.user, groupId, ['organiser']);
-    res.json(await events.getEvent(ctx, id, { includeDrafts }));
+    // Only a signed-in organiser may see a draft; a visitor's request goes straight to the public answer.
+    const includeDrafts = req.user ? hasGroupRole(req.user, await eventGroupId(db, id), ['organiser']) : false;
+    // An organiser may see a draft: their answer is theirs alone and never kept.
+    if (includeDrafts) {
+      res.set('Cache-Control', 'private, no-store');
+      return void res.json(await events.getEvent(ctx, id, { includeDrafts }));
+    }
+    await ctx.publicCache.send(req, res, () => events.getEvent(ctx, id, { includeDrafts }));
   });
 
   r.patch('/events/:id', organiserOfEvent, async (req, res) => {

@@ -19,8 +19,8 @@ const memberParams = z.object({
 /** The public list of groups: no session is created for it. */
 export function groupPublicRoutes(ctx: AppContext) {
   const r = Router();
-  r.get('/public/groups', async (_req, res) => {
-    res.json(await groups.listPublicGroups(ctx));
+  r.get('/public/groups', async (req, res) => {
+    await ctx.publicCache.send(req, res, () => groups.listPublicGroups(ctx));
   });
   return r;
 }

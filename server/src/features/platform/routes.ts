@@ -9,8 +9,8 @@ export function platformRoutes(ctx: AppContext) {
     const [rows] = await ctx.database.pool.query('SELECT VERSION() AS v');
     res.json({ ok: true, db: (rows as { v: string }[])[0].v });
   });
-  r.get('/public/config', async (_req, res) => {
-    res.json({ demo: await isDemo(ctx), needsSetup: await needsSetup(ctx) });
+  r.get('/public/config', async (req, res) => {
+    await ctx.publicCache.send(req, res, async () => ({ demo: await isDemo(ctx), needsSetup: await needsSetup(ctx) }));
   });
   return r;
 }
