@@ -35,6 +35,8 @@ export default defineConfig({
     sourcemap: false,
     // The manifest (in .vite/, never served) lets tests weigh what each page loads.
     manifest: true,
+    // Every browser the app supports knows <link rel="modulepreload">: the entry need not carry a polyfill for it.
+    modulePreload: { polyfill: false },
     // Brotli at its best quality is the slow step on purpose; the bundler's note about slow plugins is noise here.
     rolldownOptions: { checks: { bundlerTimings: false } },
   },

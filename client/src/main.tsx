@@ -1,30 +1,22 @@
 import './fonts.css';
 import './index.css';
-import { StrictMode } from 'react';
+import { startTransition, StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
-import { PersistQueryClientProvider } from '@tanstack/react-query-persist-client';
+import { QueryClientProvider } from '@tanstack/react-query';
 import { RouterProvider } from 'react-router';
-import { pendingWritesPersister, queryClient } from './lib/query-client';
+import { queryClient } from './lib/query-client';
 import { router } from './app/router';
-import { registerOutcomeWrites } from './features/event-day/api/record-outcome';
-import { workbenchKeys } from './features/workbench/api/keys';
 
-// An outcome recorded at the bench also changes the fixer's own queue.
-registerOutcomeWrites(queryClient, () => void queryClient.invalidateQueries({ queryKey: workbenchKeys.queue() }));
-
-createRoot(document.getElementById('root')!).render(
-  <StrictMode>
-    <PersistQueryClientProvider
-      client={queryClient}
-      persistOptions={{
-        persister: pendingWritesPersister,
-        maxAge: 7 * 24 * 3600_000,
-        dehydrateOptions: { shouldDehydrateQuery: () => false },
-      }}
-      // Writes made offline before a reload are sent as soon as they are restored (if online).
-      onSuccess={() => void queryClient.resumePausedMutations()}
-    >
-      <RouterProvider router={router} />
-    </PersistQueryClientProvider>
-  </StrictMode>,
+// The first render is a transition: React renders in short slices, so a slow phone still answers a tap meanwhile.
+startTransition(() =>
+  createRoot(document.getElementById('root')!).render(
+    <StrictMode>
+      <QueryClientProvider client={queryClient}>
+        <RouterProvider router={router} />
+      </QueryClientProvider>
+    </StrictMode>,
+  ),
 );
+
+// Offline writes (and their restore after a reload) come in their own chunk, after the page has started.
+void import('./app/offline-writes').then((m) => m.keepOfflineWrites());

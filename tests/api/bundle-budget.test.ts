@@ -94,23 +94,38 @@ describe('What a phone downloads before the public pages work', () => {
       expect(lazy, screen).toContain(screen);
   });
 
-  it('weighs the public booking path page by page, with FullCalendar and the charts left out', async () => {
-    for (const page of ['src/routes/events/list.tsx', 'src/routes/events/detail.tsx', 'src/routes/events/book.tsx']) {
+  it('keeps each page of the public booking path within 120 KB before it works, form and charts left out', async () => {
+    const pages = {
+      '/': 'src/routes/home.tsx',
+      '/events': 'src/routes/events/list.tsx',
+      '/events/:id': 'src/routes/events/detail.tsx',
+      '/events/:id/book': 'src/routes/events/book.tsx',
+    };
+    for (const [url, page] of Object.entries(pages)) {
       const chunks = staticClosure([entry, page]);
       const { gzip, br } = await weigh(chunks);
-      console.log(`${page}: ${chunks.length} chunks, ${kb(gzip)} gzip, ${kb(br)} brotli`);
+      console.log(`${url}: ${chunks.length} chunks, ${kb(gzip)} gzip, ${kb(br)} brotli`);
+      // As every current browser receives it (it asks for brotli), each page is within the budget.
+      expect(br, url).toBeLessThanOrEqual(BUDGET);
+      // As gzip: the landing page and the booking form's page are within it; the list and the session page are
+      // about 1 KB over (the entry alone is 115 KB: React, the router and the query cache), held here at 122 KB.
+      expect(gzip, url).toBeLessThanOrEqual(url === '/' || url.endsWith('/book') ? BUDGET : 122_000);
       for (const k of chunks) {
         const js = readFileSync(path.join(dist, manifest[k].file), 'utf8');
-        expect(js, `${k} in ${page}`).not.toContain('fc-daygrid');
-        expect(js, `${k} in ${page}`).not.toContain('recharts');
+        expect(js, `${k} in ${url}`).not.toContain('fc-daygrid');
+        expect(js, `${k} in ${url}`).not.toContain('recharts');
       }
     }
-    // The markers are real: the calendar's and the public impact page's own chunks carry them.
-    const text = (keys: string[]) => keys.map((k) => readFileSync(path.join(dist, manifest[k].file), 'utf8')).join('');
+    // The booking form, with react-hook-form and the zod schema, comes after the page: not a static import of it.
+    const form = 'src/features/bookings/components/booking-form.tsx';
+    expect(staticClosure([entry, pages['/events/:id/book']])).not.toContain(form);
+    expect(manifest[pages['/events/:id/book']].dynamicImports).toContain(form);
+    expect(text(staticClosure([form]))).toContain('ZodError');
+    // The markers are real: the calendar's and the public impact drawings' own chunks carry them.
     expect(text(staticClosure(['src/components/ui/month-calendar-grid.tsx']))).toContain('fc-daygrid');
-    expect(text(staticClosure(['src/routes/impact/public.tsx']))).toContain('recharts');
-    // The sessions list is the way in: with its own chunks it stays within the budget as the browser receives it.
-    const events = await weigh(staticClosure([entry, 'src/routes/events/list.tsx']));
-    expect(events.br).toBeLessThanOrEqual(BUDGET);
+    expect(text(staticClosure(['src/features/impact/components/public-graphics.tsx']))).toContain('recharts');
+    expect(text(staticClosure([entry, 'src/routes/impact/public.tsx']))).not.toContain('recharts');
   });
 });
+
+const text = (keys: string[]) => keys.map((k) => readFileSync(path.join(dist, manifest[k].file), 'utf8')).join('');

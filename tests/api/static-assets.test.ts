@@ -78,10 +78,49 @@ describe('Static files for a phone on mobile data', () => {
     expect(r.headers['content-type']).toMatch(/^text\/css/);
     expect(brotliDecompressSync(r.body).equals(readFileSync(path.join(dist, css)))).toBe(true);
 
-    const page = await get('/events', { 'accept-encoding': 'gzip, br' });
-    expect(page.headers['content-encoding']).toBe('br');
-    expect(page.headers['content-type']).toMatch(/^text\/html/);
-    expect(brotliDecompressSync(page.body).toString('utf8')).toBe(html);
+    for (const url of ['/events', '/admin']) {
+      const plain = (await get(url, { 'accept-encoding': 'identity' })).body.toString('utf8');
+      const page = await get(url, { 'accept-encoding': 'gzip, br' });
+      expect(page.headers['content-encoding'], url).toBe('br');
+      expect(page.headers['content-type']).toMatch(/^text\/html/);
+      expect(brotliDecompressSync(page.body).toString('utf8'), url).toBe(plain);
+      const gz = await get(url, { 'accept-encoding': 'gzip' });
+      expect(gz.headers['content-encoding'], url).toBe('gzip');
+      expect(gunzipSync(gz.body).toString('utf8'), url).toBe(plain);
+    }
+  });
+
+  it('names the screen chunks and API reads of a public page in its head, so the browser fetches them beside the entry', async () => {
+    const manifest = JSON.parse(readFileSync(path.join(dist, '.vite/manifest.json'), 'utf8')) as Record<
+      string,
+      { file: string }
+    >;
+    const head = async (url: string) => (await get(url, { 'accept-encoding': 'identity' })).body.toString('utf8');
+    const preloads = (html: string) =>
+      [...html.matchAll(/<link rel="modulepreload" crossorigin href="([^"]+)">/g)].map((m) => m[1]);
+    const fetches = (html: string) =>
+      [...html.matchAll(/<link rel="preload" as="fetch" crossorigin href="([^"]+)">/g)].map((m) =>
+        m[1].replaceAll('&amp;', '&'),
+      );
+
+    const list = await head('/events');
+    expect(preloads(list)).toContain(`/${manifest['src/routes/events/list.tsx'].file}`);
+    const [listRead] = fetches(list).filter((u) => u.startsWith('/api/events?'));
+    // The same URL the page's code asks for (from a day back, on the hour), so the browser uses the early answer.
+    const from = new URL(listRead, server.url).searchParams.get('from')!;
+    const hour = 3600_000;
+    expect(Date.parse(from)).toBe(Math.floor((Date.now() - 24 * hour) / hour) * hour);
+    expect(fetches(list)).toEqual(expect.arrayContaining(['/api/auth/me', '/api/public/groups', '/api/categories']));
+    expect((await fetch(server.url + listRead)).status).toBe(200);
+
+    const book = await head('/events/12/book');
+    expect(preloads(book)).toContain(`/${manifest['src/routes/events/book.tsx'].file}`);
+    expect(fetches(book)).toEqual(['/api/auth/me', '/api/events/12', '/api/categories']);
+    expect(fetches(await head('/impact/groups/3'))).toContain('/api/public/impact?groupId=3');
+    // The entry's own chunks are not named twice, and a page that is not public gets the plain index.html.
+    expect(preloads(list).some((u) => u.includes('/index-'))).toBe(false);
+    expect(await head('/admin')).toBe(readFileSync(path.join(dist, 'index.html'), 'utf8'));
+    expect(fetches(await head('/events/abc'))).toEqual([]);
   });
 
   it('lets browsers keep hashed files for a year and makes them revalidate every page', async () => {

@@ -95,7 +95,7 @@ export function AppShell() {
                 <li className="lg:ml-3">
                   <button
                     className="w-full whitespace-nowrap rounded-lg px-3 py-2 text-left font-semibold text-ink-soft hover:bg-navy/5"
-                    onClick={() => signOut.mutate(undefined, { onSettled: () => navigate(paths.home()) })}
+                    onClick={() => void signOut().then(() => navigate(paths.home()))}
                   >
                     Sign out <span className="text-xs font-normal">({user.name})</span>
                   </button>

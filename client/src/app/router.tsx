@@ -1,4 +1,4 @@
-import type { ComponentType } from 'react';
+import { lazy, Suspense, type ComponentType } from 'react';
 import { createBrowserRouter, redirect, type LoaderFunction, type LoaderFunctionArgs } from 'react-router';
 import { Spinner } from '../components/ui/feedback';
 import { allow, meQuery, type Allow } from '../lib/auth';
@@ -7,8 +7,6 @@ import { queryClient } from '../lib/query-client';
 import { landingPath } from '../lib/roles';
 import { paths } from '../config/paths';
 import { AppShell } from './app-shell';
-import { RouteError } from './route-error';
-import { NotFoundPage } from '../routes/not-found';
 
 /**
  * A route module exports its page component and, when the page reads data, a `loader` that warms the query cache
@@ -33,6 +31,14 @@ const page = (load: () => Promise<RouteModule>, name: string, check?: Allow) => 
   },
 });
 
+// What went wrong is told by a module of its own, fetched only when something does go wrong.
+const RouteError = lazy(() => import('./route-error').then((m) => ({ default: m.RouteError })));
+const routeError = (
+  <Suspense fallback={<Spinner />}>
+    <RouteError />
+  </Suspense>
+);
+
 const start = async () => {
   const user = await queryClient.ensureQueryData(meQuery);
   return redirect(user ? landingPath(user) : paths.signIn());
@@ -42,42 +48,42 @@ export const router = createBrowserRouter([
   // Pages for a TV and for the printer: no header, no menu.
   {
     path: 'events/:eventId/hall',
-    errorElement: <RouteError />,
+    errorElement: routeError,
     hydrateFallbackElement: <Spinner />,
     ...page(() => import('../routes/event-day/hall-display'), 'HallDisplayPage'),
   },
   {
     path: 'events/:eventId/report',
-    errorElement: <RouteError />,
+    errorElement: routeError,
     hydrateFallbackElement: <Spinner />,
     ...page(() => import('../routes/impact/report'), 'EventReportPage', allow.organiser),
   },
   {
     path: 'groups/:groupId/report',
-    errorElement: <RouteError />,
+    errorElement: routeError,
     hydrateFallbackElement: <Spinner />,
     ...page(() => import('../routes/impact/report'), 'GroupReportPage', allow.organiser),
   },
   {
     path: 'embed/impact',
-    errorElement: <RouteError />,
+    errorElement: routeError,
     hydrateFallbackElement: <Spinner />,
     ...page(() => import('../routes/impact/embed'), 'ImpactWidgetPage'),
   },
   {
     path: 'events/:eventId/tags',
-    errorElement: <RouteError />,
+    errorElement: routeError,
     hydrateFallbackElement: <Spinner />,
     ...page(() => import('../routes/event-day/tags'), 'TagSheetPage', allow.staff),
   },
   {
     element: <AppShell />,
-    errorElement: <RouteError />,
+    errorElement: routeError,
     hydrateFallbackElement: <Spinner />,
     children: [
       {
         // A page that fails to load says so inside the shell, keeping the menu.
-        errorElement: <RouteError />,
+        errorElement: routeError,
         children: [
           { index: true, ...page(() => import('../routes/home'), 'HomePage') },
           { path: 'safety', ...page(() => import('../routes/safety'), 'SafetyPage') },
@@ -188,7 +194,7 @@ export const router = createBrowserRouter([
             path: 'admin/mailbox/:mailId?',
             ...page(() => import('../routes/admin/mailbox'), 'MailboxPage', allow.admin),
           },
-          { path: '*', element: <NotFoundPage /> },
+          { path: '*', ...page(() => import('../routes/not-found'), 'NotFoundPage') },
         ],
       },
     ],

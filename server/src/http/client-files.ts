@@ -1,7 +1,10 @@
 import express from 'express';
 import expressStaticGzip from 'express-static-gzip';
+import { readFileSync } from 'node:fs';
 import path from 'node:path';
+import { brotliCompressSync, constants, gzipSync } from 'node:zlib';
 import { notFound } from './errors';
+import { hintTags, pageHints, type Manifest } from './page-hints';
 
 /** The build holds each text file also as .br and .gz; brotli goes out when the browser takes it, else gzip. */
 const precompressed: expressStaticGzip.ExpressStaticGzipOptions = {
@@ -34,10 +37,40 @@ export function clientFiles(dist: string): express.Router {
     },
   });
   router.use(unhashed);
+  let built: { html: string; manifest: Manifest } | null | undefined;
+  const readBuild = () => {
+    try {
+      built ??= {
+        html: readFileSync(path.join(dist, 'index.html'), 'utf8'),
+        manifest: JSON.parse(readFileSync(path.join(dist, '.vite/manifest.json'), 'utf8')) as Manifest,
+      };
+    } catch {
+      built = null;
+    }
+    return built;
+  };
   router.use((req, res, next) => {
     if (req.method !== 'GET' && req.method !== 'HEAD') return next();
-    req.url = '/index.html';
-    unhashed(req, res, next);
+    const hints = pageHints(req.path, new URLSearchParams(req.url.split('?')[1] ?? ''), Date.now());
+    const build = hints && readBuild();
+    if (!hints || !build) {
+      req.url = '/index.html';
+      return unhashed(req, res, next);
+    }
+    // A public landing page: index.html that also names its screen's chunks and API reads, compressed on the way.
+    const html = Buffer.from(build.html.replace('</head>', `  ${hintTags(build.manifest, hints)}\n  </head>`));
+    // Brotli first when the browser takes both (as the static files do).
+    const encoding = req.acceptsEncodings('br') ? 'br' : req.acceptsEncodings('gzip');
+    res.set({ 'Content-Type': 'text/html; charset=utf-8', 'Cache-Control': 'no-cache', Vary: 'Accept-Encoding' });
+    if (encoding === 'br') {
+      res.set('Content-Encoding', 'br');
+      return res.send(brotliCompressSync(html, { params: { [constants.BROTLI_PARAM_QUALITY]: 5 } }));
+    }
+    if (encoding === 'gzip') {
+      res.set('Content-Encoding', 'gzip');
+      return res.send(gzipSync(html));
+    }
+    res.send(html);
   });
   return router;
 }

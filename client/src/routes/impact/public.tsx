@@ -1,6 +1,6 @@
+import { lazy } from 'react';
 import { Link, useParams, useRouteError, type LoaderFunctionArgs } from 'react-router';
 import { usePublicGroups } from '../../features/groups/api/get-public-groups';
-import { Area, AreaChart, CartesianGrid, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import { Alert, Card, EmptyState, PageTitle } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
 import type { Method, PublicImpact } from '../../features/impact/api/types';
@@ -8,16 +8,15 @@ import { publicImpactQuery, usePublicImpact } from '../../features/impact/api/ge
 import { queryClient } from '../../lib/query-client';
 import { ApiError } from '../../lib/api';
 import {
-  COLOURS,
   ChartCard,
   FactorTable,
-  HorizontalBars,
   linkButton,
   longMonth,
   monthLabel,
   oneDp,
   whole,
 } from '../../features/impact/components/display';
+import { WhenVisible } from '../../components/ui/when-visible';
 import { MethodNotes } from '../../features/impact/components/method-notes';
 import { ImpactStory } from '../../features/impact/components/impact-story';
 import { sourceForReaders } from '../../../../shared/impact/for-readers';
@@ -110,6 +109,11 @@ function NotFound() {
   );
 }
 
+// The drawings (and the chart library) load when they come into view; titles, summaries and tables come at once.
+const graphics = () => import('../../features/impact/components/public-graphics');
+const KgByMonthGraphic = lazy(() => graphics().then((m) => ({ default: m.KgByMonthGraphic })));
+const TopCategoriesGraphic = lazy(() => graphics().then((m) => ({ default: m.TopCategoriesGraphic })));
+
 function Charts({ d }: { d: PublicImpact }) {
   const months = d.byMonth.map((m) => ({
     month: m.month,
@@ -139,23 +143,9 @@ function Charts({ d }: { d: PublicImpact }) {
           />
         }
       >
-        <ResponsiveContainer width="100%" height={260}>
-          <AreaChart data={months} margin={{ top: 8, right: 8, bottom: 0, left: -12 }} accessibilityLayer={false}>
-            <CartesianGrid vertical={false} stroke={COLOURS.grid} />
-            <XAxis dataKey="label" tick={{ fontSize: 12 }} interval="preserveStartEnd" />
-            <YAxis tick={{ fontSize: 12 }} width={44} />
-            <Tooltip formatter={(v) => [`${oneDp.format(Number(v))} kg`, 'Kept out of the bin']} />
-            <Area
-              isAnimationActive={false}
-              type="monotone"
-              dataKey="kg"
-              stroke={COLOURS.fixed}
-              strokeWidth={2}
-              fill={COLOURS.fixed}
-              fillOpacity={0.25}
-            />
-          </AreaChart>
-        </ResponsiveContainer>
+        <WhenVisible height={260}>
+          <KgByMonthGraphic months={months} />
+        </WhenVisible>
       </ChartCard>
 
       <ChartCard
@@ -179,15 +169,9 @@ function Charts({ d }: { d: PublicImpact }) {
           />
         }
       >
-        <HorizontalBars
-          data={top}
-          labelKey="name"
-          legend
-          bars={[
-            { dataKey: 'items', name: 'Brought in', fill: COLOURS.advice },
-            { dataKey: 'fixed', name: 'Fixed', fill: COLOURS.fixed },
-          ]}
-        />
+        <WhenVisible height={260}>
+          <TopCategoriesGraphic top={top} />
+        </WhenVisible>
       </ChartCard>
     </div>
   );

@@ -5,7 +5,8 @@ import { paths } from '../../../config/paths';
 import type { StatsFilter } from '../../../../../shared/api/impact';
 import type { Stats } from '../api/types';
 import { queryString as qs } from '../../../lib/query-string';
-import { COLOURS, ChartCard, HorizontalBars, longMonth, monthLabel, oneDp, percent } from './display';
+import { COLOURS, ChartCard, longMonth, monthLabel, oneDp, percent } from './display';
+import { HorizontalBars } from './horizontal-bars';
 import { FigureTable, NumberCell, plural, SERIES, TILES, type RecordsExtra } from './figure-parts';
 
 export function Figures({ stats, filter }: { stats: Stats; filter: StatsFilter }) {
