@@ -34,7 +34,17 @@ export async function measureStats() {
     secrets: loadOrCreateSecrets(dir),
     fast: true,
   });
-  const seed = createDatabase(local.appUrl, 2);
+  // A failed run still stops its MariaDB and removes its folder.
+  try {
+    await measure(local.appUrl, dir);
+  } finally {
+    await local.instance.stop();
+    rmSync(dir, { recursive: true, force: true });
+  }
+}
+
+async function measure(appUrl: string, dir: string) {
+  const seed = createDatabase(appUrl, 2);
   await ensureCategories(seed.db);
   await seed.db.insert(users).values({
     email: 'bench-admin@example.org',
@@ -44,7 +54,7 @@ export async function measureStats() {
     emailVerifiedAt: new Date(),
   });
   await seed.close();
-  const pool = mysql.createPool({ uri: local.appUrl, connectionLimit: 4, multipleStatements: false });
+  const pool = mysql.createPool({ uri: appUrl, connectionLimit: 4, multipleStatements: false });
   const q = (s: string, v: unknown[] = []) => pool.query(s, v);
   const t0 = Date.now();
   const events = GROUPS * YEARS * 12;
@@ -86,7 +96,7 @@ export async function measureStats() {
     FROM (SELECT id, done_at, (id * 2654435761) MOD 100 AS r FROM booking_items) bi WHERE bi.r < 95`);
   step(`Generated in ${((Date.now() - t0) / 1000).toFixed(1)} s; building the rollups`);
   const t1 = Date.now();
-  const rollup = createDatabase(local.appUrl, 1);
+  const rollup = createDatabase(appUrl, 1);
   await rebuildRollups(rollup.db);
   await rollup.close();
   const [[cells]] = (await q(
@@ -98,7 +108,7 @@ export async function measureStats() {
 
   const env = loadEnv({
     NODE_ENV: 'production',
-    DATABASE_URL: local.appUrl,
+    DATABASE_URL: appUrl,
     PORT: '0',
     SESSION_SECRET: 'bench-secret-'.padEnd(40, 'x'),
     OUTBOX_POLL_MS: '0',
@@ -151,8 +161,6 @@ export async function measureStats() {
   await new Promise((r) => bare.server.close(r));
   await app.stop();
   await pool.end();
-  await local.instance.stop();
-  rmSync(dir, { recursive: true, force: true });
 }
 
 /**

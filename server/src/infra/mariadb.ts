@@ -123,6 +123,8 @@ export async function startPrivateMariadb(opts: PrivateMariadbOptions): Promise<
     '--character-set-server=utf8mb4',
     '--collation-server=utf8mb4_unicode_ci',
     `--log-error=${errorLog}`,
+    // Temporary tables in the instance's own folder: a cleaner of /tmp cannot delete them in the middle of a query.
+    `--tmpdir=${dir}`,
     '--max-connections=500',
   ];
   if (opts.fast)
