@@ -71,6 +71,11 @@ describe('booking a slot', () => {
       .from(bookings)
       .where(eq(bookings.slotId, slotIds[0]))) as { n: number }[];
     expect(Number(n)).toBe(5);
+    // Once the outbox has run: one confirmation mail per confirmed booking, none for the refused ones.
+    await server.ctx.outbox.drain();
+    const refs = results.filter((r) => r.status === 201).map((r) => r.json.reference as string);
+    const confirmations = mail.sent.filter((m) => refs.some((ref) => m.subject.endsWith(`— ${ref}`)));
+    expect(confirmations.map((m) => m.subject.split('— ')[1]).sort()).toEqual([...refs].sort());
   });
 
   it('takes one place per item, and refuses a booking whose items do not fit', async () => {

@@ -135,12 +135,23 @@ export async function insertBooking(
   cats: Screened,
   returnOfItemId?: number,
 ) {
+  const { reference, token } = prepared;
+  // Everything that needs no lock is ready before the first one is taken: the confirmation mail (its render is the
+  // costly part), the token's hash and the rows. While the slot's row is locked only the inserts run.
+  const f = facts(
+    ctx,
+    row,
+    { reference, visitorName: input.visitor.name, visitorEmail: input.visitor.email },
+    input.items.map((i) => labelOf(cats.get(i.categoryId), i)),
+    token,
+  );
+  const mail = confirmationMail(f, bookingQrText(ctx.env.publicUrl, reference));
+  const manageTokenHash = sha256(token);
   // A return visit (the part bought) may take one place over the capacity: the group keeps room for its returns.
   await takeAllPlaces(tx, row, skillsOf(input.items, cats), {
     fromHeld,
     spare: returnOfItemId !== undefined ? 1 : 0,
   });
-  const { reference, token } = prepared;
   const { id, itemIds } = await insertBookingRows(
     tx,
     {
@@ -150,7 +161,7 @@ export async function insertBooking(
       visitorName: input.visitor.name,
       visitorEmail: input.visitor.email,
       visitorPhone: input.visitor.phone ?? null,
-      manageTokenHash: sha256(token),
+      manageTokenHash,
       consentAt: new Date(),
     },
     input.items.map((i, position) => ({
@@ -165,14 +176,7 @@ export async function insertBooking(
       returnOfItemId: returnOfItemId ?? null,
     })),
   );
-  const f = facts(
-    ctx,
-    row,
-    { reference, visitorName: input.visitor.name, visitorEmail: input.visitor.email },
-    input.items.map((i) => labelOf(cats.get(i.categoryId), i)),
-    token,
-  );
-  await enqueueMail(tx, confirmationMail(f, bookingQrText(ctx.env.publicUrl, reference)));
+  await enqueueMail(tx, mail);
   return { id, reference, manageToken: token, eventId: row.event.id, slotId: row.slot.id, itemIds };
 }
 
