@@ -1,7 +1,6 @@
 import autocannon from 'autocannon';
 import express from 'express';
 import mysql from 'mysql2/promise';
-import { randomBytes } from 'node:crypto';
 import { mkdtempSync, rmSync } from 'node:fs';
 import type { AddressInfo } from 'node:net';
 import path from 'node:path';
@@ -14,6 +13,7 @@ import { loadOrCreateSecrets, startLocalDatabase, step } from '../local-stack';
 import { measureTriage } from './triage';
 import { measureStats } from './stats';
 import { measureLighthouse } from './lighthouse';
+import { bareBookingHandler, measureBooking } from './booking';
 
 measureTriage();
 if (process.env.BENCH === 'triage') process.exit(0);
@@ -56,7 +56,7 @@ await pool.query(
   "UPDATE slots s JOIN events e ON e.id = s.event_id SET s.capacity = 10000000 WHERE e.status = 'published'",
 );
 const [[slot]] = (await pool.query(
-  "SELECT s.id FROM slots s JOIN events e ON e.id = s.event_id WHERE e.status = 'published' ORDER BY s.starts_at LIMIT 1",
+  "SELECT s.id FROM slots s JOIN events e ON e.id = s.event_id WHERE e.status = 'published' AND s.starts_at > NOW() ORDER BY s.starts_at LIMIT 1",
 )) as unknown as [{ id: number }[]];
 const [[kettle]] = (await pool.query("SELECT id FROM categories WHERE slug = 'kettle'")) as unknown as [
   { id: number }[],
@@ -86,29 +86,7 @@ bare.get('/events', async (_req, res) => {
   );
   res.json(rows);
 });
-bare.post('/bookings', async (req, res) => {
-  const conn = await pool.getConnection();
-  try {
-    await conn.beginTransaction();
-    const [r] = (await conn.query(
-      'UPDATE slots SET booked = booked + 1 WHERE id = ? AND booked + held + 1 <= capacity',
-      [req.body.slotId],
-    )) as unknown as [{ affectedRows: number }];
-    if (r.affectedRows !== 1) {
-      await conn.rollback();
-      return res.status(409).end();
-    }
-    const reference = randomBytes(4).toString('hex').slice(0, 7).toUpperCase();
-    await conn.query(
-      "INSERT INTO bookings (reference, event_id, slot_id, visitor_name, visitor_email, manage_token_hash, consent_at) SELECT ?, event_id, id, ?, ?, REPEAT('0', 64), NOW(3) FROM slots WHERE id = ?",
-      [reference, req.body.visitor.name, req.body.visitor.email, req.body.slotId],
-    );
-    await conn.commit();
-    res.status(201).json({ reference });
-  } finally {
-    conn.release();
-  }
-});
+bare.post('/bookings', bareBookingHandler(pool));
 const bareServer = bare.listen(0, '127.0.0.1');
 await new Promise((r) => bareServer.once('listening', r));
 const bareUrl = `http://127.0.0.1:${(bareServer.address() as AddressInfo).port}`;
@@ -120,13 +98,6 @@ const visitors = await Promise.all(
     return { cookie: r.headers.getSetCookie()[0].split(';')[0], token: (await r.json()).token as string };
   }),
 );
-const bookingBody = JSON.stringify({
-  slotId: slot.id,
-  visitor: { name: 'Bench Visitor', email: 'bench@example.org' },
-  items: [{ categoryId: kettle.id, fault: 'Switches off before it boils.' }],
-  consent: true,
-});
-
 interface Line {
   title: string;
   rps: number;
@@ -149,26 +120,21 @@ const ratio = (a: Line, b: Line) =>
   console.log(
     `${'  ratio Mendery / bare'.padEnd(44)} ${(a.rps / b.rps).toFixed(2)}× requests/s, p99 ${(a.p99 / Math.max(b.p99, 1)).toFixed(2)}×\n`,
   );
-const bareEvents = await load('bare Express + mysql2: GET events', { url: `${bareUrl}/events` });
-const events = await load('Mendery GET /api/events', { url: `${app.url}/api/events` });
-ratio(events, bareEvents);
-const json = { 'content-type': 'application/json' };
-const bareBookings = await load('bare Express + mysql2: POST booking', {
-  url: `${bareUrl}/bookings`,
-  method: 'POST',
-  headers: json,
-  body: bookingBody,
+if (process.env.BENCH !== 'booking') {
+  const bareEvents = await load('bare Express + mysql2: GET events', { url: `${bareUrl}/events` });
+  const events = await load('Mendery GET /api/events', { url: `${app.url}/api/events` });
+  ratio(events, bareEvents);
+}
+await measureBooking({
+  appUrl: app.url,
+  bareUrl,
+  pool,
+  slotId: slot.id,
+  kettleId: kettle.id,
+  visitors,
+  load,
+  ratio,
 });
-const bookings = await load('Mendery POST /api/bookings', {
-  url: `${app.url}/api/bookings`,
-  requests: visitors.map((v) => ({
-    method: 'POST' as const,
-    path: '/api/bookings',
-    headers: { ...json, cookie: v.cookie, 'x-csrf-token': v.token },
-    body: bookingBody,
-  })),
-});
-ratio(bookings, bareBookings);
 
 bareServer.close();
 await pool.end();
