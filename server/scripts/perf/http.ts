@@ -17,13 +17,15 @@ import { bareBookingHandler, measureBooking } from './booking';
 
 measureTriage();
 if (process.env.BENCH === 'triage') process.exit(0);
+// BENCH=reads or BENCH=booking: only that HTTP section (after the quick triage figures).
+const only = process.env.BENCH === 'reads' || process.env.BENCH === 'booking';
 console.log('');
-if (!process.env.BENCH || process.env.BENCH === 'stats') {
+if (!only && (!process.env.BENCH || process.env.BENCH === 'stats')) {
   await measureStats();
   if (process.env.BENCH === 'stats') process.exit(0);
   console.log('');
 }
-if (!process.env.BENCH || process.env.BENCH === 'lighthouse') {
+if (!only && (!process.env.BENCH || process.env.BENCH === 'lighthouse')) {
   await measureLighthouse();
   if (process.env.BENCH === 'lighthouse') process.exit(0);
   console.log('');
@@ -86,6 +88,22 @@ bare.get('/events', async (_req, res) => {
   );
   res.json(rows);
 });
+bare.get('/events/:id', async (req, res) => {
+  const [[event]] = (await pool.query(
+    `SELECT e.*, g.name AS group_name, g.time_zone, v.name AS venue, v.address, v.town, v.access_notes
+       FROM events e JOIN repair_groups g ON g.id = e.group_id JOIN venues v ON v.id = e.venue_id
+      WHERE e.id = ? AND e.status <> 'draft'`,
+    [Number(req.params.id)],
+  )) as unknown as [Record<string, unknown>[]];
+  const [slotRows] = await pool.query('SELECT * FROM slots WHERE event_id = ? ORDER BY starts_at', [
+    Number(req.params.id),
+  ]);
+  res.json({ ...event, slots: slotRows });
+});
+bare.get('/public/groups', async (_req, res) => {
+  const [rows] = await pool.query('SELECT id, name, slug, town, description FROM repair_groups ORDER BY name');
+  res.json(rows);
+});
 bare.post('/bookings', bareBookingHandler(pool));
 const bareServer = bare.listen(0, '127.0.0.1');
 await new Promise((r) => bareServer.once('listening', r));
@@ -120,21 +138,38 @@ const ratio = (a: Line, b: Line) =>
   console.log(
     `${'  ratio Mendery / bare'.padEnd(44)} ${(a.rps / b.rps).toFixed(2)}× requests/s, p99 ${(a.p99 / Math.max(b.p99, 1)).toFixed(2)}×\n`,
   );
+// Public reads: a first visit sends no If-None-Match, so these figures are the full answer, from memory or not
+// (docs/decisions/009). The 304 line shows a returning browser's revalidation.
 if (process.env.BENCH !== 'booking') {
-  const bareEvents = await load('bare Express + mysql2: GET events', { url: `${bareUrl}/events` });
-  const events = await load('Mendery GET /api/events', { url: `${app.url}/api/events` });
-  ratio(events, bareEvents);
+  const [[event]] = (await pool.query(
+    "SELECT e.id FROM events e WHERE e.status = 'published' AND e.ends_at > NOW() ORDER BY e.starts_at LIMIT 1",
+  )) as unknown as [{ id: number }[]];
+  for (const [name, bareUrlPath, appPath] of [
+    ['GET events', '/events', '/api/events'],
+    ['GET one session', `/events/${event.id}`, `/api/events/${event.id}`],
+    ['GET public groups', '/public/groups', '/api/public/groups'],
+  ]) {
+    const bareLine = await load(`bare Express + mysql2: ${name}`, { url: bareUrl + bareUrlPath });
+    const appLine = await load(`Mendery ${appPath}`, { url: app.url + appPath });
+    ratio(appLine, bareLine);
+  }
+  const etag = (await fetch(`${app.url}/api/events`)).headers.get('etag') ?? '';
+  await load('Mendery /api/events, ETag sent (304s count as non-2xx)', {
+    url: `${app.url}/api/events`,
+    headers: { 'if-none-match': etag },
+  });
 }
-await measureBooking({
-  appUrl: app.url,
-  bareUrl,
-  pool,
-  slotId: slot.id,
-  kettleId: kettle.id,
-  visitors,
-  load,
-  ratio,
-});
+if (process.env.BENCH !== 'reads')
+  await measureBooking({
+    appUrl: app.url,
+    bareUrl,
+    pool,
+    slotId: slot.id,
+    kettleId: kettle.id,
+    visitors,
+    load,
+    ratio,
+  });
 
 bareServer.close();
 await pool.end();
