@@ -1,68 +1,28 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { match } from 'path-to-regexp';
 import type { RunningServer } from '../../server/src/server';
 import { createTestDatabase, type TestDatabase } from '../support/db';
-import { makeGroup, makeUser } from '../support/factories';
-import { Agent } from '../support/http';
+import type { Agent } from '../support/http';
+import { lastRows, moreRows } from '../support/role-rows';
+import {
+  adminOnly,
+  everyone,
+  ownOrganiser,
+  ownStaff,
+  setUpCallers,
+  signedIn,
+  TITLE_FIXTURES,
+  type Caller,
+  type Fixtures,
+  type Row,
+} from '../support/roles';
+import { listRoutes } from '../support/routes';
 import { startTestServer } from '../support/server';
 
 /**
- * Who may call what. Each row: a route, then the expected status for each kind of caller.
- * Later features add their rows here. `own` is the group the callers belong to; `other` is a second group.
+ * Who may call what, for every API route the app answers (the last test checks that no route is left out).
+ * Rows and callers are defined in tests/support/roles.ts; more rows are in tests/support/role-rows.ts.
  */
-type Caller = 'anonymous' | 'account' | 'fixer' | 'host' | 'organiser' | 'otherOrganiser' | 'admin';
-type Row = [
-  method: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE',
-  path: (g: Groups) => string,
-  expected: Record<Caller, number>,
-  body?: unknown | ((g: Groups) => unknown),
-];
-interface Groups {
-  own: number;
-  other: number;
-  pendingMembership: number;
-  ownEvent: number;
-  otherEvent: number;
-  ownVenue: number;
-}
-
-const everyone = (status: number): Record<Caller, number> => ({
-  anonymous: status,
-  account: status,
-  fixer: status,
-  host: status,
-  organiser: status,
-  otherOrganiser: status,
-  admin: status,
-});
-const signedIn = (status: number) => ({ ...everyone(status), anonymous: 401 });
-const adminOnly = {
-  anonymous: 401,
-  account: 403,
-  fixer: 403,
-  host: 403,
-  organiser: 403,
-  otherOrganiser: 403,
-  admin: 200,
-};
-const ownStaff = {
-  anonymous: 401,
-  account: 403,
-  fixer: 403,
-  host: 200,
-  organiser: 200,
-  otherOrganiser: 403,
-  admin: 200,
-};
-const ownOrganiser = {
-  anonymous: 401,
-  account: 403,
-  fixer: 403,
-  host: 403,
-  organiser: 200,
-  otherOrganiser: 403,
-  admin: 200,
-};
-
 const table: Row[] = [
   ['GET', () => '/api/health', everyone(200)],
   ['GET', () => '/api/public/config', everyone(200)],
@@ -81,8 +41,8 @@ const table: Row[] = [
   ['GET', (g) => `/api/groups/${g.own}/settings`, everyone(200)],
   ['GET', (g) => `/api/venues?groupId=${g.own}`, ownOrganiser],
   // Validation comes after the role check: a permitted caller gets 400 for the empty body.
-  ['POST', () => '/api/venues', { ...ownOrganiser, organiser: 400, admin: 400 }, (g: Groups) => ({ groupId: g.own })],
-  ['POST', () => '/api/events', { ...ownOrganiser, organiser: 400, admin: 400 }, (g: Groups) => ({ groupId: g.own })],
+  ['POST', () => '/api/venues', { ...ownOrganiser, organiser: 400, admin: 400 }, (g: Fixtures) => ({ groupId: g.own })],
+  ['POST', () => '/api/events', { ...ownOrganiser, organiser: 400, admin: 400 }, (g: Fixtures) => ({ groupId: g.own })],
   ['GET', (g) => `/api/events/${g.ownEvent}/bookings`, { ...ownOrganiser, host: 200 }],
   [
     'GET',
@@ -166,66 +126,41 @@ const table: Row[] = [
 
 let db: TestDatabase;
 let server: RunningServer;
-let groups: Groups;
-const agents = {} as Record<Caller, Agent>;
+let groups: Fixtures;
+let agents: Record<Caller, Agent>;
 
 beforeAll(async () => {
   db = await createTestDatabase();
-  server = await startTestServer(db.url);
-  const own = await makeGroup(db.db);
-  const other = await makeGroup(db.db);
-  const people: Record<Exclude<Caller, 'anonymous'>, Awaited<ReturnType<typeof makeUser>>> = {
-    account: await makeUser(db.db),
-    fixer: await makeUser(db.db, { roles: [[own, 'fixer']] }),
-    host: await makeUser(db.db, { roles: [[own, 'host']] }),
-    organiser: await makeUser(db.db, { roles: [[own, 'organiser']] }),
-    // Organises another group and fixes in ours: a role elsewhere grants nothing here.
-    otherOrganiser: await makeUser(db.db, {
-      roles: [
-        [other, 'organiser'],
-        [own, 'fixer'],
-      ],
-    }),
-    admin: await makeUser(db.db, { admin: true }),
-  };
-  agents.anonymous = new Agent(server.url);
-  for (const [caller, u] of Object.entries(people)) {
-    agents[caller as Caller] = new Agent(server.url);
-    expect((await agents[caller as Caller].login(u.email, u.password)).status).toBe(200);
-  }
-  const volunteer = await makeUser(db.db);
-  const { memberships } = await import('../../server/src/db/schema/index');
-  const [{ id }] = await db.db
-    .insert(memberships)
-    .values({ userId: volunteer.id, groupId: own, role: 'fixer', status: 'pending' })
-    .$returningId();
-  const { makeEvent } = await import('../support/factories');
-  groups = {
-    own,
-    other,
-    pendingMembership: id,
-    ownEvent: (await makeEvent(db.db, own, { status: 'draft' })).eventId,
-    otherEvent: (await makeEvent(db.db, other, { status: 'draft' })).eventId,
-    ownVenue: 0,
-  };
+  server = await startTestServer(db.url, { TRUST_PROXY: '1' });
+  ({ agents, fixtures: groups } = await setUpCallers(db, server));
 });
 afterAll(async () => {
   await server.stop();
   await db.drop();
 });
 
+const titleOf = (method: string, path: Row[1]) =>
+  `${method} ${path(TITLE_FIXTURES)
+    .replace(/\/\d+/g, '/:id')
+    .replace(/REF|TOKEN/g, ':$&')}`;
+
+async function statuses([method, path, expected, body]: Row) {
+  const got: Record<string, number> = {};
+  for (const caller of Object.keys(expected) as Caller[]) {
+    const a = agents[caller];
+    const url = path(groups);
+    const payload = typeof body === 'function' ? body(groups) : (body ?? {});
+    const res = method === 'GET' ? await a.get(url) : await a.send(method, url, payload);
+    got[caller] = res.status;
+  }
+  return got;
+}
+
 describe('routes × roles', () => {
-  for (const [method, path, expected, body] of table) {
-    it(`${method} ${path({ own: 1, other: 2, pendingMembership: 3, ownEvent: 4, otherEvent: 5, ownVenue: 6 }).replace(/\/\d+/g, '/:id')} answers ${JSON.stringify(expected)}`, async () => {
-      const got: Record<string, number> = {};
-      for (const caller of Object.keys(expected) as Caller[]) {
-        const a = agents[caller];
-        const url = path(groups);
-        const payload = typeof body === 'function' ? body(groups) : (body ?? {});
-        const res = method === 'GET' ? await a.get(url) : await a.send(method, url, payload);
-        got[caller] = res.status;
-      }
-      expect(got).toEqual(expected);
+  for (const row of [...table, ...moreRows]) {
+    const [method, path, expected] = row;
+    it(`${titleOf(method, path)} answers ${JSON.stringify(expected)}`, async () => {
+      expect(await statuses(row)).toEqual(expected);
     });
   }
 
@@ -242,4 +177,25 @@ describe('routes × roles', () => {
     expect(res.status).toBe(403);
     expect(res.json.error.code).toBe('forbidden');
   });
+
+  it('has a row for every API route the app answers, and no row for a route it does not', async () => {
+    const routes = listRoutes(server.server);
+    expect(routes.length).toBeGreaterThan(100);
+    const rows = [...table, ...moreRows, ...lastRows].map(([method, path]) => ({
+      method,
+      url: path(groups).split('?')[0],
+    }));
+    const matches = (route: string, row: { method: string; url: string }) => {
+      const [method, pattern] = route.split(' ');
+      return method === row.method && match(pattern, { decode: false })(row.url) !== false;
+    };
+    expect(routes.filter((r) => !rows.some((row) => matches(r, row)))).toEqual([]);
+    expect(rows.filter((row) => !routes.some((r) => matches(r, row)))).toEqual([]);
+  });
+
+  for (const row of lastRows) {
+    it(`${titleOf(row[0], row[1])} answers ${JSON.stringify(row[2])} (last: it signs everyone out)`, async () => {
+      expect(await statuses(row)).toEqual(row[2]);
+    });
+  }
 });
