@@ -8,7 +8,7 @@ export const TEST_SECRET = 'test-session-secret-that-is-long-enough-0123456789';
 export function startTestServer(
   dbUrl: string,
   overrides: Partial<Record<keyof Env, string>> = {},
-  opts: { sender?: MailSender | 'smtp' } = {},
+  opts: { sender?: MailSender | 'smtp'; log?: (line: string) => void } = {},
 ): Promise<RunningServer> {
   const env = loadEnv({
     NODE_ENV: 'test',
@@ -23,7 +23,7 @@ export function startTestServer(
   });
   // 'smtp' sends through the real SMTP path (to a local mailbox the test started).
   const sender = opts.sender === 'smtp' ? undefined : (opts.sender ?? { send: async () => {} });
-  return startServer(env, { sender, log: () => {} });
+  return startServer(env, { sender, log: opts.log ?? (() => {}) });
 }
 
 /** A mail sender that keeps what it was given, for tests that read the links in a mail. */

@@ -1,3 +1,4 @@
+import { paramId } from '../http/validate';
 import type { Request, RequestHandler } from 'express';
 import type { GroupRole } from '../../../shared/constants';
 import type { SessionUser } from '../../../shared/schemas/auth';
@@ -63,6 +64,6 @@ export function requireGroupRole(
   };
 }
 
-export const groupIdParam = (req: Request) => Number(req.params.groupId);
+export const groupIdParam = (req: Request) => paramId(req, 'groupId');
 
 export const groupIdInBody = (req: Request) => Number(req.body?.groupId);

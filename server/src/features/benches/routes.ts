@@ -3,7 +3,7 @@ import { z } from 'zod';
 import { layoutSchema } from '../../../../shared/schemas/benches';
 import type { AppContext } from '../../context';
 import { requireGroupRole } from '../../auth/guards';
-import { body, params } from '../../http/validate';
+import { body, params, paramId } from '../../http/validate';
 import { eventLayout, venueLayout } from '../../core/benches';
 import { eventGroupId } from '../../core/events';
 import { venueGroupId } from './queries';
@@ -16,14 +16,14 @@ export function benchRoutes(ctx: AppContext) {
   const r = Router();
   const { db } = ctx.database;
   const ofEvent = (roles: ('organiser' | 'host' | 'fixer')[]) =>
-    requireGroupRole(roles, (req: Request) => eventGroupId(db, Number(req.params.id)));
-  const venueGroup = (req: Request) => venueGroupId(db, Number(req.params.venueId));
+    requireGroupRole(roles, (req: Request) => eventGroupId(db, paramId(req, 'id')));
+  const venueGroup = (req: Request) => venueGroupId(db, paramId(req, 'venueId'));
 
   r.get('/venues/:venueId/benches', requireGroupRole(['organiser'], venueGroup), async (req, res) =>
-    res.json(await venueLayout(db, Number(req.params.venueId))),
+    res.json(await venueLayout(db, paramId(req, 'venueId'))),
   );
   r.put('/venues/:venueId/benches', requireGroupRole(['organiser'], venueGroup), async (req, res) =>
-    res.json(await saveVenueLayout(ctx, Number(req.params.venueId), body(req, layoutSchema).benches)),
+    res.json(await saveVenueLayout(ctx, paramId(req, 'venueId'), body(req, layoutSchema).benches)),
   );
   r.get('/events/:id/benches', ofEvent(['organiser', 'host', 'fixer']), async (req, res) =>
     res.json(await eventLayout(db, params(req, idParams).id)),

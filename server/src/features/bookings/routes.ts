@@ -6,7 +6,7 @@ import { rebookSchema } from '../../../../shared/schemas/impact';
 import type { AppContext } from '../../context';
 import { hasGroupRole, requireGroupRole } from '../../auth/guards';
 import { HttpError, notFound } from '../../http/errors';
-import { body, params } from '../../http/validate';
+import { body, params, paramId } from '../../http/validate';
 import { eventGroupId } from '../../core/events';
 import { eventBookings } from './organiser';
 import { multerError, photoUpload, savePhotos } from '../../core/photos';
@@ -131,9 +131,9 @@ export function bookingRoutes(ctx: AppContext) {
 
   r.get(
     '/events/:id/bookings',
-    requireGroupRole(['organiser', 'host'], (req) => eventGroupId(db, Number(req.params.id))),
+    requireGroupRole(['organiser', 'host'], (req) => eventGroupId(db, paramId(req, 'id'))),
     async (req, res) => {
-      res.json(await eventBookings(ctx, Number(req.params.id)));
+      res.json(await eventBookings(ctx, paramId(req, 'id')));
     },
   );
   r.get('/rebook/:token', async (req, res) => {

@@ -6,7 +6,7 @@ import { checkInSchema, outcomeSchema, safetyCheckSchema, walkInSchema } from '.
 import type { AppContext } from '../../context';
 import { requireGroupRole, requireUser } from '../../auth/guards';
 import { notFound } from '../../http/errors';
-import { body, params, query } from '../../http/validate';
+import { body, params, query, paramId } from '../../http/validate';
 import { eventGroupId } from '../../core/events';
 import { checkIn } from './check-in';
 import { deskEvents, deskView } from './desk';
@@ -49,9 +49,9 @@ export function eventDayPublicRoutes(ctx: AppContext) {
 export function eventDayRoutes(ctx: AppContext) {
   const r = Router();
   const { db } = ctx.database;
-  const eventStaff = requireGroupRole(['organiser', 'host'], (req: Request) => eventGroupId(db, Number(req.params.id)));
+  const eventStaff = requireGroupRole(['organiser', 'host'], (req: Request) => eventGroupId(db, paramId(req, 'id')));
   const itemStaff = requireGroupRole(['organiser', 'host', 'fixer'], (req: Request) =>
-    itemGroupId(db, Number(req.params.id)),
+    itemGroupId(db, paramId(req, 'id')),
   );
   const bookingGroup = async (req: Request) => {
     const ref = normaliseReference(String(req.params.reference ?? ''));

@@ -8,7 +8,7 @@ import {
 } from '../../../../shared/schemas/events';
 import type { AppContext } from '../../context';
 import { groupIdInBody, groupIdParam, hasGroupRole, requireGroupRole } from '../../auth/guards';
-import { body, params, query } from '../../http/validate';
+import { body, params, query, paramId } from '../../http/validate';
 import * as events from './service';
 import { eventGroupId } from '../../core/events';
 
@@ -18,7 +18,7 @@ const slotParams = idParams.extend({ slotId: z.coerce.number().int().positive() 
 export function eventRoutes(ctx: AppContext) {
   const r = Router();
   const { db } = ctx.database;
-  const eventId = (req: Request) => Number(req.params.id);
+  const eventId = (req: Request) => paramId(req, 'id');
   const organiserOfEvent = requireGroupRole(['organiser'], (req) => eventGroupId(db, eventId(req)));
 
   r.get('/events', async (req, res) => {

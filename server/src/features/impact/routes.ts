@@ -4,7 +4,7 @@ import { followUpUpdate, impactSettingsSchema, recordsQuery, statsQuery } from '
 import type { AppContext } from '../../context';
 import { hasGroupRole, requireAdmin, requireGroupRole, unauthenticated } from '../../auth/guards';
 import { HttpError } from '../../http/errors';
-import { body, params, query } from '../../http/validate';
+import { body, params, query, paramId } from '../../http/validate';
 import { eventGroupId } from '../../core/events';
 import { openRepairDataCsv, recordsCsv } from './exports';
 import { followUpGroupId, listFollowUps, setFollowUpStatus } from './follow-ups';
@@ -107,7 +107,7 @@ export function impactRoutes(ctx: AppContext) {
 
   r.get(
     '/events/:id/report',
-    requireGroupRole(['organiser'], (req) => eventGroupId(ctx.database.db, Number(req.params.id))),
+    requireGroupRole(['organiser'], (req) => eventGroupId(ctx.database.db, paramId(req, 'id'))),
     async (req, res) => {
       res.json(await eventReport(ctx, params(req, z.object({ id: z.coerce.number().int().positive() })).id));
     },
@@ -115,15 +115,15 @@ export function impactRoutes(ctx: AppContext) {
 
   r.get(
     '/groups/:groupId/report',
-    requireGroupRole(['organiser'], (req) => Number(req.params.groupId)),
+    requireGroupRole(['organiser'], (req) => paramId(req, 'groupId')),
     async (req, res) => {
       const f = filter(req);
-      res.json(await rangeReport(ctx, Number(req.params.groupId), f.from, f.to));
+      res.json(await rangeReport(ctx, paramId(req, 'groupId'), f.from, f.to));
     },
   );
   r.get(
     '/groups/:groupId/session-figures',
-    requireGroupRole(['organiser'], (req) => Number(req.params.groupId)),
+    requireGroupRole(['organiser'], (req) => paramId(req, 'groupId')),
     async (req, res) => {
       const { groupId } = params(req, z.object({ groupId: z.coerce.number().int().positive() }));
       res.json(await sessionFigures(ctx, groupId));
@@ -131,15 +131,15 @@ export function impactRoutes(ctx: AppContext) {
   );
   r.get(
     '/groups/:groupId/follow-ups',
-    requireGroupRole(['organiser'], (req) => Number(req.params.groupId)),
-    async (req, res) => res.json(await listFollowUps(ctx, Number(req.params.groupId))),
+    requireGroupRole(['organiser'], (req) => paramId(req, 'groupId')),
+    async (req, res) => res.json(await listFollowUps(ctx, paramId(req, 'groupId'))),
   );
   r.patch(
     '/follow-ups/:itemId',
-    requireGroupRole(['organiser'], (req) => followUpGroupId(ctx, Number(req.params.itemId))),
+    requireGroupRole(['organiser'], (req) => followUpGroupId(ctx, paramId(req, 'itemId'))),
     async (req, res) => {
       const b = body(req, followUpUpdate);
-      await setFollowUpStatus(ctx, Number(req.params.itemId), b.status, b.note);
+      await setFollowUpStatus(ctx, paramId(req, 'itemId'), b.status, b.note);
       res.json({ ok: true });
     },
   );

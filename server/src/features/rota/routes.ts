@@ -3,7 +3,7 @@ import { z } from 'zod';
 import { askSchema, myShiftSchema, seatSchema } from '../../../../shared/schemas/rota';
 import type { AppContext } from '../../context';
 import { requireGroupRole, requireUser } from '../../auth/guards';
-import { body, params } from '../../http/validate';
+import { body, params, paramId } from '../../http/validate';
 import { eventGroupId } from '../../core/events';
 import * as rota from './service';
 import { calendarLinkStatus, feedOwner, makeCalendarLink, shiftsCalendar, stopCalendarLink } from './calendar';
@@ -17,7 +17,7 @@ export function rotaRoutes(ctx: AppContext) {
   const r = Router();
   const { db } = ctx.database;
   const ofEvent = (roles: ('organiser' | 'host' | 'fixer')[]) =>
-    requireGroupRole(roles, (req: Request) => eventGroupId(db, Number(req.params.id)));
+    requireGroupRole(roles, (req: Request) => eventGroupId(db, paramId(req, 'id')));
 
   r.get('/me/events', requireUser, async (req, res) => res.json(await rota.myEvents(ctx, req.user!.id)));
   r.get('/me/shifts/calendar', requireUser, async (req, res) => {

@@ -13,7 +13,7 @@ import {
 import type { AppContext } from '../../context';
 import { requireGroupRole, unauthenticated } from '../../auth/guards';
 import { HttpError } from '../../http/errors';
-import { body, params, query } from '../../http/validate';
+import { body, params, query, paramId } from '../../http/validate';
 import { itemGroupId } from '../../core/items';
 import {
   addPart,
@@ -45,8 +45,8 @@ const volunteer = (req: Request, _res: Response, next: NextFunction) => {
 export function toolkitRoutes(ctx: AppContext) {
   const r = Router();
   const { db } = ctx.database;
-  const groupOf = (req: Request) => Number(req.params.groupId);
-  const partOf = (req: Request) => partGroup(ctx, Number(req.params.id));
+  const groupOf = (req: Request) => paramId(req, 'groupId');
+  const partOf = (req: Request) => partGroup(ctx, paramId(req, 'id'));
 
   r.get('/knowledge', volunteer, async (req, res) =>
     res.json(await searchKnowledge(ctx, req.user!, query(req, knowledgeQuery))),
@@ -56,7 +56,7 @@ export function toolkitRoutes(ctx: AppContext) {
   );
   r.get(
     '/items/:id/similar',
-    requireGroupRole(['fixer', 'host', 'organiser'], (req) => itemGroupId(db, Number(req.params.id))),
+    requireGroupRole(['fixer', 'host', 'organiser'], (req) => itemGroupId(db, paramId(req, 'id'))),
     async (req, res) => res.json(await similarRepairs(ctx, params(req, idParam).id, req.user!)),
   );
   r.get('/groups/:groupId/knowledge-sharing', requireGroupRole(['organiser'], groupOf), async (req, res) =>

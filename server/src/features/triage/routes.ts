@@ -3,7 +3,7 @@ import { z } from 'zod';
 import { lockSchema, placementSchema, runSchema } from '../../../../shared/schemas/triage';
 import type { AppContext } from '../../context';
 import { requireGroupRole } from '../../auth/guards';
-import { body, params } from '../../http/validate';
+import { body, params, paramId } from '../../http/validate';
 import { eventGroupId } from '../../core/events';
 import { board } from './board';
 import * as t from './service';
@@ -15,7 +15,7 @@ const runParams = z.object({ id: z.coerce.number().int().positive(), runId: z.co
 export function triageRoutes(ctx: AppContext) {
   const r = Router();
   const organiser = requireGroupRole(['organiser'], (req: Request) =>
-    eventGroupId(ctx.database.db, Number(req.params.id)),
+    eventGroupId(ctx.database.db, paramId(req, 'id')),
   );
   const id = (req: Request) => params(req, z.object({ id: z.coerce.number().int().positive() })).id;
 
