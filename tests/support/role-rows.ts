@@ -95,6 +95,8 @@ export const moreRows: Row[] = [
   ['POST', (g) => `/api/events/${g.liveEvent}/walk-ins`, staffOr(400), {}],
   // An item that waits for nothing is no follow-up: only an admin's request reaches the check of the body.
   ['PATCH', (g) => `/api/follow-ups/${g.item}`, { ...ownOrganiser, organiser: 403, admin: 400 }, {}],
+  // The open data file of items without power, beside the main one (tests/api/roles.test.ts has that one).
+  ['GET', (g) => `/api/exports/open-repair-data-unpowered.csv?groupId=${g.own}`, ownOrganiser],
   // The toolkit: knowledge and the parts drawer.
   ['PUT', () => '/api/knowledge/999999/writeup', volunteersOr(400), {}],
   ['GET', (g) => `/api/groups/${g.own}/knowledge-sharing`, ownOrganiser],

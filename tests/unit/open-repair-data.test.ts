@@ -6,6 +6,14 @@ import {
   ordsBarrierText,
   ordsStatusText,
 } from '../../shared/impact/open-repair-data';
+import { CATEGORY_SEEDS } from '../../shared/categories/seeds';
+import {
+  ORDS_CATEGORY_OF_SLUG,
+  ORDS_PRODUCT_CATEGORIES,
+  ordsCategoryId,
+  ordsCategoryOf,
+  UNPOWERED_KIND_OF_SLUG,
+} from '../../shared/impact/ords-categories';
 
 describe('the Open Repair Data file’s words', () => {
   it('maps each stored reason to the codelist’s code and text', () => {
@@ -45,5 +53,48 @@ describe('the Open Repair Data file’s words', () => {
     expect(OUTCOME_LABELS['end-of-life']).not.toMatch(/end of life/i);
     expect([...BARRIER_CHOICES].sort()).toEqual([...BARRIERS].sort());
     expect(BARRIER_CHOICES).not.toEqual(BARRIERS);
+  });
+});
+
+describe('the Open Repair Data product categories', () => {
+  it('numbers the codelist as the standard does', () => {
+    // Source: REFERENCE.md §5, ORDS v0.3 product_category codelist (id, text).
+    expect(ORDS_PRODUCT_CATEGORIES).toHaveLength(40);
+    expect(
+      (['Aircon/dehumidifier', 'Kettle', 'Laptop', 'Misc', 'Toy', 'Vacuum', 'Iron'] as const).map((t) => [
+        t,
+        ordsCategoryId(t),
+      ]),
+    ).toEqual([
+      ['Aircon/dehumidifier', 1],
+      ['Kettle', 14],
+      ['Laptop', 16],
+      ['Misc', 18],
+      ['Toy', 32],
+      ['Vacuum', 34],
+      ['Iron', 40],
+    ]);
+  });
+
+  it('gives every seeded electrical category a codelist entry of its own, and every other one an unpowered kind', () => {
+    for (const c of CATEGORY_SEEDS) {
+      const o = ordsCategoryOf(c);
+      if (c.weeeCategory === null) {
+        expect(o.powered, c.slug).toBe(false);
+        // Source: REFERENCE.md §5, the 2025-07 open data writes unpowered categories "Unpowered - <kind>".
+        expect(o.text, c.slug).toMatch(/^Unpowered - [A-Z][a-z]+$/);
+        expect(UNPOWERED_KIND_OF_SLUG[c.slug], c.slug).toBeDefined();
+      } else {
+        expect(o.powered, c.slug).toBe(true);
+        expect(ORDS_CATEGORY_OF_SLUG[c.slug], `${c.slug} has a mapping of its own`).toBeDefined();
+      }
+    }
+    expect(ordsCategoryOf({ slug: 'kettle', weeeCategory: 5 })).toEqual({ powered: true, id: 14, text: 'Kettle' });
+    expect(ordsCategoryOf({ slug: 'bicycle', weeeCategory: null })).toEqual({
+      powered: false,
+      text: 'Unpowered - Bicycle',
+    });
+    // An electrical category an admin added later has no mapping: it is counted as Misc (id 18), not dropped.
+    expect(ordsCategoryOf({ slug: 'bread-maker', weeeCategory: 5 })).toEqual({ powered: true, id: 18, text: 'Misc' });
   });
 });

@@ -2,14 +2,14 @@ import { stringify } from 'csv-stringify/sync';
 import { safeCsvCast } from '../../../../shared/files/csv-cells';
 import { BARRIER_LABELS, OUTCOME_LABELS } from '../../../../shared/event-day/constants';
 import { ordsBarrierText, ordsStatusText } from '../../../../shared/impact/open-repair-data';
+import { ordsCategoryOf } from '../../../../shared/impact/ords-categories';
 import type { AppContext } from '../../context';
 import { openRepairDataRows, recordFileRows } from './queries/exports';
 import type { StatsFilter } from './queries/stats';
 
 /**
- * Field names and status values of the Open Repair Data Standard (REFERENCE.md §5: product category, brand, year
- * of manufacture, problem, repair status, barrier, group identifier, event date). The exact snake_case spellings
- * and the id / data_provider / country / product_age columns are from memory of the standard's CSV files.
+ * The Open Repair Data Standard v0.3 columns, in the order of the published data files (REFERENCE.md §5). The
+ * optional `record_date` is left out, as the published files leave it out.
  */
 export const ORDS_FIELDS = [
   'id',
@@ -17,6 +17,7 @@ export const ORDS_FIELDS = [
   'country',
   'partner_product_category',
   'product_category',
+  'product_category_id',
   'brand',
   'year_of_manufacture',
   'product_age',
@@ -35,24 +36,37 @@ const scrub = (text: string) =>
     .replace(/\s+/g, ' ')
     .trim();
 
-export async function openRepairDataCsv(ctx: AppContext, f: StatsFilter): Promise<string> {
+/**
+ * One Open Repair Data file. The codelist covers powered items only, so `powered: false` writes the unpowered
+ * records in a file of their own, with the categories the published open data uses for them ("Unpowered - Bicycle")
+ * and no product_category_id (docs/decisions/010).
+ */
+export async function openRepairDataCsv(ctx: AppContext, f: StatsFilter, powered = true): Promise<string> {
   const rows = await openRepairDataRows(ctx.database.db, f);
   return stringify(
-    rows.map((r) => ({
-      id: `mendery-${r.id}`,
-      data_provider: 'Mendery',
-      country: '',
-      partner_product_category: r.categoryName,
-      product_category: r.categoryName,
-      brand: r.brand ?? '',
-      year_of_manufacture: r.ageYears !== null ? String(r.startsAt.getUTCFullYear() - r.ageYears) : '',
-      product_age: r.ageYears ?? '',
-      repair_status: ordsStatusText(r.outcome),
-      repair_barrier_if_end_of_life: ordsBarrierText(r.outcome, r.barrier),
-      group_identifier: r.groupSlug,
-      event_date: r.startsAt.toISOString().slice(0, 10),
-      problem: scrub(r.fault),
-    })),
+    rows.flatMap((r) => {
+      const category = ordsCategoryOf({ slug: r.categorySlug, weeeCategory: r.weeeCategory });
+      if (category.powered !== powered) return [];
+      const age = r.ageYears === null ? null : Math.round(r.ageYears * 10) / 10;
+      return [
+        {
+          id: `mendery-${r.id}`,
+          data_provider: 'Mendery',
+          country: '',
+          partner_product_category: r.categoryName,
+          product_category: category.text,
+          product_category_id: category.powered ? category.id : '',
+          brand: r.brand ?? '',
+          year_of_manufacture: age === null ? '' : String(Math.round(r.startsAt.getUTCFullYear() - age)),
+          product_age: age ?? '',
+          repair_status: ordsStatusText(r.outcome),
+          repair_barrier_if_end_of_life: ordsBarrierText(r.outcome, r.barrier),
+          group_identifier: r.groupSlug,
+          event_date: r.startsAt.toISOString().slice(0, 10),
+          problem: scrub(r.fault),
+        },
+      ];
+    }),
     { header: true, columns: [...ORDS_FIELDS], cast: safeCsvCast },
   );
 }

@@ -100,6 +100,11 @@ export function impactRoutes(ctx: AppContext) {
     csv('open-repair-data', (f) => openRepairDataCsv(ctx, f)),
   );
   r.get(
+    '/exports/open-repair-data-unpowered.csv',
+    guard,
+    csv('open-repair-data-unpowered', (f) => openRepairDataCsv(ctx, f, false)),
+  );
+  r.get(
     '/exports/records.csv',
     guard,
     csv('repair-records', (f) => recordsCsv(ctx, f)),

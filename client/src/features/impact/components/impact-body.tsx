@@ -173,6 +173,14 @@ function Actions({ filter, groupId, groupName }: { filter: StatsFilter; groupId?
             <a href={exportUrl('open-repair-data', filter)} download className={secondaryLink}>
               Open Repair Data export (CSV)
             </a>
+            <a
+              href={exportUrl('open-repair-data-unpowered', filter)}
+              download
+              className={secondaryLink}
+              title="The open standard lists powered items only: clothes, bikes, furniture and other items without power come in this file of their own."
+            >
+              Open Repair Data, items without power (CSV)
+            </a>
           </>
         )}
         {groupId !== undefined && (

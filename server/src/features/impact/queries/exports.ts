@@ -29,6 +29,8 @@ export const openRepairDataRows = (db: DbOrTx, f: StatsFilter) =>
       id: bookingItems.id,
       groupSlug: repairGroups.slug,
       categoryName: categories.name,
+      categorySlug: categories.slug,
+      weeeCategory: categories.weeeCategory,
       brand: bookingItems.brand,
       ageYears: bookingItems.ageYears,
       fault: bookingItems.fault,

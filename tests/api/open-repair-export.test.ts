@@ -1,0 +1,130 @@
+import { eq, sql } from 'drizzle-orm';
+import { parse } from 'csv-parse/sync';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { DEMO_PASSWORD } from '../../shared/constants';
+import { ORDS_PRODUCT_CATEGORIES } from '../../shared/impact/ords-categories';
+import { repairGroups } from '../../server/src/db/schema/index';
+import { ORDS_FIELDS } from '../../server/src/features/impact/exports';
+import { seedDemo } from '../../server/src/seed/demo';
+import type { RunningServer } from '../../server/src/server';
+import { createTestDatabase, type TestDatabase } from '../support/db';
+import { Agent } from '../support/http';
+import { startTestServer, TEST_SECRET } from '../support/server';
+
+/**
+ * The Open Repair Data export checked value by value against the v0.3 columns, codelists and patterns written out in
+ * REFERENCE.md §5 (the standard's text and the table schema published with the 2025-07 open data).
+ */
+let db: TestDatabase;
+let server: RunningServer;
+let groupId: number;
+let as: Agent;
+
+beforeAll(async () => {
+  db = await createTestDatabase();
+  await seedDemo(db.db, { linkSecret: TEST_SECRET });
+  server = await startTestServer(db.url);
+  const [g] = await db.db.select().from(repairGroups).where(eq(repairGroups.slug, 'kestlebridge-menders'));
+  groupId = g.id;
+  as = new Agent(server.url);
+  expect((await as.login('organiser@example.org', DEMO_PASSWORD)).status).toBe(200);
+});
+afterAll(async () => {
+  await server.stop();
+  await db.drop();
+});
+
+const STATUSES = ['Unknown', 'Fixed', 'Repairable', 'End of life'];
+const BARRIERS = [
+  'Spare parts not available',
+  'Spare parts too expensive',
+  'No way to open product',
+  'Repair information not available',
+  'Lack of equipment',
+  'Item too worn out',
+];
+
+async function file(kind: string) {
+  const r = await as.get(`/api/exports/${kind}.csv?groupId=${groupId}`);
+  expect(r.status).toBe(200);
+  const header = r.text.split('\n')[0].trim().split(',');
+  return { header, rows: parse(r.text, { columns: true }) as Record<string, string>[] };
+}
+
+/** The table schema's patterns and the codelists, for every column (REFERENCE.md §5). */
+function checkRow(x: Record<string, string>) {
+  expect(x.id).toMatch(/^[a-z]+-\d+$/);
+  expect(x.data_provider).not.toBe('');
+  expect(x.year_of_manufacture).toMatch(/^(\d{4})?$/);
+  expect(x.product_age).toMatch(/^(\d+(\.\d)?)?$/);
+  expect(STATUSES).toContain(x.repair_status);
+  if (x.repair_barrier_if_end_of_life) {
+    expect(BARRIERS).toContain(x.repair_barrier_if_end_of_life);
+    expect(x.repair_status).toBe('End of life');
+  }
+  expect(x.group_identifier).toMatch(/^\S+$/);
+  expect(x.event_date).toMatch(/^\d{4}-\d{2}-\d{2}$/);
+  expect(new Date(`${x.event_date}T00:00:00Z`).toISOString().slice(0, 10)).toBe(x.event_date);
+  if (x.year_of_manufacture && x.product_age)
+    expect(
+      Math.abs(Number(x.event_date.slice(0, 4)) - Number(x.year_of_manufacture) - Number(x.product_age)),
+    ).toBeLessThanOrEqual(0.5);
+  expect(x.problem).not.toMatch(/[\w.+-]+@[\w-]+\.[\w.-]+/);
+}
+
+describe('the Open Repair Data export, v0.3', () => {
+  it('writes the columns in the published order, and every value fits the codelists and patterns', async () => {
+    const { header, rows } = await file('open-repair-data');
+    expect(header).toEqual([
+      'id',
+      'data_provider',
+      'country',
+      'partner_product_category',
+      'product_category',
+      'product_category_id',
+      'brand',
+      'year_of_manufacture',
+      'product_age',
+      'repair_status',
+      'repair_barrier_if_end_of_life',
+      'group_identifier',
+      'event_date',
+      'problem',
+    ]);
+    expect(header).toEqual([...ORDS_FIELDS]);
+    expect(rows.length).toBeGreaterThan(50);
+    for (const x of rows) {
+      checkRow(x);
+      // One of the 40 powered categories, with its id.
+      expect(ORDS_PRODUCT_CATEGORIES as readonly string[]).toContain(x.product_category);
+      expect(Number(x.product_category_id)).toBe(ORDS_PRODUCT_CATEGORIES.indexOf(x.product_category as never) + 1);
+    }
+    // The codelist's words, not Mendery's category names.
+    expect(rows.some((x) => x.product_category !== x.partner_product_category)).toBe(true);
+    expect(new Set(rows.map((x) => x.repair_status)).size).toBeGreaterThan(2);
+  });
+
+  it('puts items without power in a file of their own, and each record in exactly one of the two files', async () => {
+    const powered = await file('open-repair-data');
+    const unpowered = await file('open-repair-data-unpowered');
+    expect(unpowered.header).toEqual([...ORDS_FIELDS]);
+    expect(unpowered.rows.length).toBeGreaterThan(0);
+    for (const x of unpowered.rows) {
+      checkRow(x);
+      expect(x.product_category).toMatch(/^Unpowered - [A-Z][a-z]+$/);
+      expect(x.product_category_id).toBe('');
+    }
+    const ids = [...powered.rows, ...unpowered.rows].map((x) => x.id);
+    expect(new Set(ids).size).toBe(ids.length);
+    const [[{ n }]] = (await db.db.execute(sql`
+      SELECT COUNT(*) AS n FROM booking_items bi JOIN bookings b ON b.id = bi.booking_id
+      JOIN events e ON e.id = b.event_id WHERE e.group_id = ${groupId} AND e.status <> 'cancelled'`)) as unknown as [
+      { n: number }[],
+    ];
+    expect(ids.length).toBeLessThanOrEqual(Number(n));
+    expect(powered.rows.some((x) => /Clothing|Bicycle|Chair/.test(x.partner_product_category))).toBe(false);
+    expect(
+      (await new Agent(server.url).get(`/api/exports/open-repair-data-unpowered.csv?groupId=${groupId}`)).status,
+    ).toBe(401);
+  });
+});
