@@ -45,6 +45,8 @@ export interface GroupSettings {
   timeZone: string;
   /** ISO 4217 code in which the group's part costs are shown. */
   currency: string;
+  /** ISO 3166-1 alpha-3 code, or '' until an organiser chooses one. */
+  country: string;
   houseRules: string;
   excludedCategoryIds: number[];
 }

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { SKILLS } from '../constants';
 import { isKnownCurrency } from '../format';
+import { isKnownCountry } from '../places/countries';
 
 const isoInstant = (label: string) =>
   z.iso.datetime({ offset: true, error: `${label} must be a date and time (ISO 8601).` }).transform((s) => new Date(s));
@@ -77,9 +78,13 @@ export const currencyCode = z
   .toUpperCase()
   .refine(isKnownCurrency, 'Choose a currency by its three-letter code, e.g. EUR or GBP.');
 
+/** A country by its ISO 3166-1 alpha-3 code (the form the Open Repair Data file writes). */
+export const countryCode = z.string().trim().toUpperCase().refine(isKnownCountry, 'Choose a country from the list.');
+
 /** The group's settings; each part is saved only when it is sent. */
 export const groupSettingsSchema = z.object({
   houseRules: z.string().trim().max(6000).optional(),
   excludedCategoryIds: z.array(z.number().int().positive()).max(200).optional(),
   currency: currencyCode.optional(),
+  country: countryCode.optional(),
 });

@@ -55,6 +55,8 @@ async function file(kind: string) {
 function checkRow(x: Record<string, string>) {
   expect(x.id).toMatch(/^[a-z]+-\d+$/);
   expect(x.data_provider).not.toBe('');
+  // ISO 3166-1 alpha-3, from the group's setting (the demo groups are in the United Kingdom).
+  expect(x.country).toBe('GBR');
   expect(x.year_of_manufacture).toMatch(/^(\d{4})?$/);
   expect(x.product_age).toMatch(/^(\d+(\.\d)?)?$/);
   expect(STATUSES).toContain(x.repair_status);
@@ -126,5 +128,17 @@ describe('the Open Repair Data export, v0.3', () => {
     expect(
       (await new Agent(server.url).get(`/api/exports/open-repair-data-unpowered.csv?groupId=${groupId}`)).status,
     ).toBe(401);
+  });
+
+  it('takes the country from the group’s setting, as an ISO 3166-1 alpha-3 code', async () => {
+    // Source: ISO 3166-1 (alpha-3 NLD = Netherlands), through the i18n-iso-countries package's code table.
+    const bad = await as.send('PUT', `/api/groups/${groupId}/settings`, { country: 'XYZ' });
+    expect(bad.status).toBe(400);
+    expect(bad.json.error.fields.country).toMatch(/country/);
+    expect((await as.send('PUT', `/api/groups/${groupId}/settings`, { country: 'nld' })).status).toBe(200);
+    expect((await as.get(`/api/groups/${groupId}/settings`)).json.country).toBe('NLD');
+    const { rows } = await file('open-repair-data');
+    expect(new Set(rows.map((x) => x.country))).toEqual(new Set(['NLD']));
+    await as.send('PUT', `/api/groups/${groupId}/settings`, { country: 'GBR' });
   });
 });

@@ -162,10 +162,12 @@ describe('the organiser at 1280 px: the group’s currency', () => {
 
     await page.goto(`${app.server.url}/groups/${g.id}/settings`);
     await page.getByLabel('Currency of part costs').selectOption('EUR');
-    await page.getByRole('button', { name: 'Save currency' }).click();
+    await page.getByLabel('Country').selectOption({ label: 'Ireland' });
+    await page.getByRole('button', { name: 'Save country and currency' }).click();
     await page.getByText('Saved.').waitFor();
     await page.screenshot({ path: shot('group-settings-currency-desktop'), fullPage: true });
-    expect((await app.db.db.select().from(repairGroups).where(eq(repairGroups.id, g.id)))[0].currency).toBe('EUR');
+    const [saved] = await app.db.db.select().from(repairGroups).where(eq(repairGroups.id, g.id));
+    expect([saved.currency, saved.country]).toEqual(['EUR', 'IRL']);
 
     await page.goto(`${app.server.url}/groups/${g.id}/follow-ups`);
     // en-GB writes euros as €12.50 (ECMA-402 Intl.NumberFormat with CLDR data).

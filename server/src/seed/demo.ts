@@ -19,6 +19,7 @@ export const DEMO_GROUPS = [
     slug: 'kestlebridge-menders',
     name: 'Kestlebridge Menders',
     town: 'Kestlebridge',
+    country: 'GBR',
     description:
       'Monthly repair sessions in Tanner’s Yard Hall: lamps, kettles, laptops, clothes and bikes. Bring the thing, its charger, and the story of what went wrong.',
   },
@@ -26,6 +27,7 @@ export const DEMO_GROUPS = [
     slug: 'orrin-vale-fixing-circle',
     name: 'Orrin Vale Fixing Circle',
     town: 'Orrin Vale',
+    country: 'GBR',
     description:
       'A small group meeting in the old school library on the second Saturday of the month. Strong on textiles and woodwork.',
   },

@@ -1,8 +1,9 @@
-import { useEffect, useState } from 'react';
+import { useEffect, useMemo, useState } from 'react';
 import { useSuspenseQuery } from '@tanstack/react-query';
 import { useParams, type LoaderFunctionArgs } from 'react-router';
 import { SKILL_LABELS } from '../../../../shared/constants';
 import { COMMON_CURRENCIES, currencyName, formatMoney } from '../../../../shared/format';
+import { countryChoices } from '../../../../shared/places/countries';
 import { venueSchema } from '../../../../shared/schemas/events';
 import { GroupTabs } from '../../components/layouts/group-tabs';
 import { Button } from '../../components/ui/button';
@@ -161,22 +162,57 @@ export function GroupSettingsPage() {
             </Button>
           </form>
         </Card>
-        <CurrencyCard groupId={groupId} current={settings.data.currency} />
+        <CurrencyCard groupId={groupId} current={settings.data.currency} country={settings.data.country} />
         <SharingCard groupId={groupId} />
       </div>
     </div>
   );
 }
 
-/** The currency the group's part costs are written and shown in. */
-function CurrencyCard({ groupId, current }: { groupId: number; current: string }) {
+/** The group's country (for the open data file) and the currency its part costs are written and shown in. */
+function CurrencyCard({
+  groupId,
+  current,
+  country: savedCountry,
+}: {
+  groupId: number;
+  current: string;
+  country: string;
+}) {
   const save = useSaveGroupSettings(groupId);
   const [currency, setCurrency] = useState(current);
+  const [country, setCountry] = useState(savedCountry);
   useEffect(() => setCurrency(current), [current]);
+  useEffect(() => setCountry(savedCountry), [savedCountry]);
+  const countries = useMemo(() => countryChoices(), []);
   const codes = COMMON_CURRENCIES.includes(current as never) ? COMMON_CURRENCIES : [current, ...COMMON_CURRENCIES];
   return (
     <Card className="space-y-3">
-      <h2 className="text-lg">Money</h2>
+      <h2 className="text-lg">Country and money</h2>
+      <div className="space-y-1">
+        <label htmlFor="country" className="block font-semibold">
+          Country
+        </label>
+        <select
+          id="country"
+          value={country}
+          onChange={(e) => {
+            setCountry(e.target.value);
+            save.reset();
+          }}
+          className="block min-h-11 w-full rounded-lg border border-ink/20 bg-white px-3"
+        >
+          <option value="" disabled>
+            Choose the country your sessions are in
+          </option>
+          {countries.map((c) => (
+            <option key={c.code} value={c.code}>
+              {c.name}
+            </option>
+          ))}
+        </select>
+        <p className="text-sm text-ink-soft">Written in the open repair data file that networks and funders read.</p>
+      </div>
       <div className="space-y-1">
         <label htmlFor="currency" className="block font-semibold">
           Currency of part costs
@@ -202,8 +238,12 @@ function CurrencyCard({ groupId, current }: { groupId: number; current: string }
       </div>
       {save.error && <Alert tone="error">{save.error.message}</Alert>}
       {save.isSuccess && <Alert tone="success">Saved.</Alert>}
-      <Button variant="secondary" busy={save.isPending} onClick={() => save.mutate({ currency })}>
-        Save currency
+      <Button
+        variant="secondary"
+        busy={save.isPending}
+        onClick={() => save.mutate(country ? { currency, country } : { currency })}
+      >
+        Save country and currency
       </Button>
     </Card>
   );

@@ -15,6 +15,8 @@ export const repairGroups = mysqlTable(
     timeZone: varchar('time_zone', { length: 64 }).notNull().default('Europe/London'),
     /** ISO 4217 code used to show part costs (formatted with Intl.NumberFormat). */
     currency: char('currency', { length: 3 }).notNull().default('GBP'),
+    /** ISO 3166-1 alpha-3 code of the group's country, for the Open Repair Data file; empty until an organiser sets it. */
+    country: char('country', { length: 3 }),
     /** Whether the group's repair notes are searchable by the other groups of the network. */
     shareKnowledge: boolean('share_knowledge').notNull().default(false),
     createdAt: createdAt(),

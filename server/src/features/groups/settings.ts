@@ -6,7 +6,15 @@ import { hasGroupRole } from '../../auth/guards';
 import { forbidden, HttpError, notFound } from '../../http/errors';
 import { excludedCategoryIds } from '../../core/screening';
 import { groupById } from './queries/members';
-import { insertVenue, lockGroup, replaceExclusions, setCurrency, setHouseRules, venuesOf } from './queries/settings';
+import {
+  insertVenue,
+  lockGroup,
+  replaceExclusions,
+  setCurrency,
+  setCountry,
+  setHouseRules,
+  venuesOf,
+} from './queries/settings';
 
 /** Venues of one group the user organises, or of all the groups they organise (every venue for an admin). */
 export async function listVenues(ctx: AppContext, user: SessionUser, groupId: number | undefined) {
@@ -32,6 +40,7 @@ export async function groupSettings(ctx: AppContext, groupId: number) {
     town: g.town,
     timeZone: g.timeZone,
     currency: g.currency,
+    country: g.country ?? '',
     houseRules: g.houseRules ?? '',
     excludedCategoryIds: await excludedCategoryIds(db, groupId),
   };
@@ -42,6 +51,7 @@ export async function saveGroupSettings(ctx: AppContext, groupId: number, input:
     if (!(await lockGroup(tx, groupId))) throw notFound('That group');
     if (input.houseRules !== undefined) await setHouseRules(tx, groupId, input.houseRules);
     if (input.currency !== undefined) await setCurrency(tx, groupId, input.currency);
+    if (input.country !== undefined) await setCountry(tx, groupId, input.country);
     if (
       input.excludedCategoryIds !== undefined &&
       !(await replaceExclusions(tx, groupId, [...new Set(input.excludedCategoryIds)]))

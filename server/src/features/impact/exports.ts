@@ -52,7 +52,7 @@ export async function openRepairDataCsv(ctx: AppContext, f: StatsFilter, powered
         {
           id: `mendery-${r.id}`,
           data_provider: 'Mendery',
-          country: '',
+          country: r.country ?? '',
           partner_product_category: r.categoryName,
           product_category: category.text,
           product_category_id: category.powered ? category.id : '',

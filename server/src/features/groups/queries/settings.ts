@@ -26,6 +26,10 @@ export async function setCurrency(tx: Tx, groupId: number, currency: string) {
   await tx.update(repairGroups).set({ currency }).where(eq(repairGroups.id, groupId));
 }
 
+export async function setCountry(tx: Tx, groupId: number, country: string) {
+  await tx.update(repairGroups).set({ country }).where(eq(repairGroups.id, groupId));
+}
+
 /** Replaces the kinds the group does not take; false when a category does not exist. */
 export async function replaceExclusions(tx: Tx, groupId: number, categoryIds: number[]) {
   await tx.delete(groupExclusions).where(eq(groupExclusions.groupId, groupId));

@@ -28,6 +28,7 @@ export const openRepairDataRows = (db: DbOrTx, f: StatsFilter) =>
     .select({
       id: bookingItems.id,
       groupSlug: repairGroups.slug,
+      country: repairGroups.country,
       categoryName: categories.name,
       categorySlug: categories.slug,
       weeeCategory: categories.weeeCategory,

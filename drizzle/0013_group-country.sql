@@ -1,0 +1,1 @@
+ALTER TABLE `repair_groups` ADD `country` char(3);
