@@ -45,6 +45,11 @@ export function createApp(ctx: AppContext) {
   app.use((req, res, next) => (req.path.startsWith('/embed/') ? embedHeaders : pageHeaders)(req, res, next));
 
   const api = express.Router();
+  // API answers hold personal data unless a route says otherwise (public reads set their own caching).
+  api.use((_req, res, next) => {
+    res.setHeader('Cache-Control', 'no-store');
+    next();
+  });
   api.use(express.json({ limit: '100kb' }));
   api.use(express.urlencoded({ extended: false, limit: '100kb' }));
   api.use(wellFormedText);

@@ -19,11 +19,10 @@ afterAll(async () => {
 });
 
 describe('HTTP basics', () => {
-  it('reports health with the MariaDB server version', async () => {
+  it('reports health once the database answers, without naming its version', async () => {
     const r = await new Agent(server.url).get('/api/health');
     expect(r.status).toBe(200);
-    expect(r.json.ok).toBe(true);
-    expect(r.json.db).toMatch(/^\d+\.\d+\.\d+-MariaDB/);
+    expect(r.json).toEqual({ ok: true });
   });
 
   it('answers errors in one shape: unknown route, bad JSON, too large, invalid fields', async () => {

@@ -1,5 +1,6 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { ZodError } from 'zod';
+import { redactUrl } from './redact';
 
 /** The one error type services throw; the handler turns it into `{"error":{code,message,fields?}}`. */
 export class HttpError extends Error {
@@ -81,11 +82,11 @@ export function errorHandler(log: (msg: string, err: unknown) => void = console.
     else if (bodyParserError(err)) e = bodyParserError(err)!;
     else if (driverCode(err) === 'ER_DUP_ENTRY') e = new HttpError(409, 'duplicate', 'That exists already.');
     else if (UNAVAILABLE.has(driverCode(err) ?? '') || err?.message === 'Pool is closed.') {
-      log(`database unavailable on ${req.method} ${req.originalUrl}`, err);
+      log(`database unavailable on ${req.method} ${redactUrl(req.originalUrl)}`, err);
       e = new HttpError(503, 'unavailable', 'The database is not reachable just now. Try again in a moment.');
       if (!res.headersSent) res.set('Retry-After', '5');
     } else {
-      log(`unhandled error on ${req.method} ${req.originalUrl}`, err);
+      log(`unhandled error on ${req.method} ${redactUrl(req.originalUrl)}`, err);
       e = new HttpError(500, 'internal', 'Something went wrong on our side. It has been logged.');
     }
     if (res.headersSent) return;

@@ -182,6 +182,8 @@ export const idempotencyKeys = mysqlTable('idempotency_keys', {
   scope: varchar('scope', { length: 40 }).notNull(),
   statusCode: int('status_code'),
   response: json('response'),
+  /** SHA-256 of the request body: the key replays only for the same form. */
+  bodyHash: char('body_hash', { length: 64 }),
   createdAt: createdAt(),
 });
 

@@ -4,7 +4,8 @@ import type { Job } from '../../core/feature';
 import { manageTokenFor, manageUrl } from '../../core/links';
 import { offerFreedPlaces } from './waitlist';
 import { reminderMail } from './mails';
-import { dueReminders, expiredOffers, expireOffer, markReminded } from './queries/jobs';
+import { dropIdempotencyKeysBefore, dueReminders, expiredOffers, expireOffer, markReminded } from './queries/jobs';
+import { IDEMPOTENCY_HOURS } from './service';
 import { itemsOf } from './queries/bookings';
 import { itemLabel } from '../../../../shared/item-label';
 
@@ -52,7 +53,14 @@ export async function sendReminders(ctx: AppContext): Promise<number> {
   return sent;
 }
 
+/** Idempotency keys past their lifetime no longer replay; their stored answers hold manage tokens, so they go. */
+export const forgetIdempotencyKeys = (ctx: AppContext) =>
+  ctx.database.db.transaction((tx) =>
+    dropIdempotencyKeysBefore(tx, new Date(Date.now() - IDEMPOTENCY_HOURS * 3600_000)),
+  );
+
 export const bookingJobs: Job[] = [
   { name: 'expire waiting-list offers', run: expireOffers },
   { name: 'day-before reminders', run: sendReminders },
+  { name: 'forget expired idempotency keys', run: forgetIdempotencyKeys },
 ];

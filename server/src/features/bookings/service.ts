@@ -4,7 +4,7 @@ import type { BookingCodeStatus } from '../../../../shared/api/bookings';
 import type { Tx } from '../../db/client';
 import { isDuplicate, withDeadlockRetry } from '../../db/retry';
 import { sha256 } from '../../auth/tokens';
-import { notFound } from '../../http/errors';
+import { HttpError, notFound } from '../../http/errors';
 import { screenItems } from '../../core/screening';
 import { bookingWithContextById } from './queries/context';
 import {
@@ -59,11 +59,14 @@ export async function createReturnBooking(
   }
 }
 
+/** How long an Idempotency-Key replays its first answer; after that the key books anew. */
+export const IDEMPOTENCY_HOURS = 24;
+
 /**
  * Books a slot. The shared rule decides first (a passed time, a kind's limit, places); then the places are taken
  * with a conditional UPDATE in the same transaction as the booking, so the capacity holds under any number of
- * simultaneous requests. With an idempotency key the first answer is stored and replayed for the same key, so a
- * form sent twice books once.
+ * simultaneous requests. With an idempotency key the first answer is stored and replayed for the same key and the
+ * same form within IDEMPOTENCY_HOURS, so a form sent twice books once; the key with another form is refused.
  */
 export async function createBooking(
   ctx: AppContext,
@@ -71,6 +74,7 @@ export async function createBooking(
   idempotencyKey?: string,
 ): Promise<{ status: number; body: unknown; replayed: boolean }> {
   const key = idempotencyKey ? `booking:${idempotencyKey}` : null;
+  const bodyHash = sha256(JSON.stringify(input));
   const row = await bookableSlot(ctx.database.db, input.slotId);
   const cats = await screenItems(ctx.database.db, row.group, input.items);
   for (let attempt = 0; ; attempt++) {
@@ -80,7 +84,7 @@ export async function createBooking(
         ctx.database.db.transaction(async (tx) => {
           // The key's row is written first: a second request with the same key waits here on the row lock,
           // then fails as a duplicate once the first has committed.
-          if (key) await claimIdempotencyKey(tx, key);
+          if (key) await claimIdempotencyKey(tx, key, bodyHash, new Date(Date.now() - IDEMPOTENCY_HOURS * 3600_000));
           refuse(await bookabilityOf(tx, row, skillsOf(input.items, cats)));
           const result = await insertBooking(ctx, tx, row, input, false, prepared, cats);
           const body = {
@@ -100,6 +104,12 @@ export async function createBooking(
       if (!isDuplicate(err)) throw err;
       if (key) {
         const stored = await storedIdempotentAnswer(ctx.database.db, key);
+        if (stored && stored.bodyHash !== bodyHash)
+          throw new HttpError(
+            422,
+            'idempotency-key-reused',
+            'This Idempotency-Key was sent with another booking form. Send the new form with a new key.',
+          );
         if (stored?.response) return { status: stored.statusCode ?? 201, body: stored.response, replayed: true };
       }
       // A reference drawn twice (one in a billion): draw again.

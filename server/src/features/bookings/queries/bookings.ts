@@ -1,4 +1,4 @@
-import { asc, eq, inArray } from 'drizzle-orm';
+import { and, asc, eq, inArray, lt } from 'drizzle-orm';
 import type { DbOrTx, Tx } from '../../../db/client';
 import {
   bookingItems,
@@ -89,8 +89,12 @@ export async function bookingItemsWithPhotos(db: DbOrTx, bookingId: number) {
   }));
 }
 
-export async function claimIdempotencyKey(tx: Tx, key: string) {
-  await tx.insert(idempotencyKeys).values({ key, scope: 'booking' });
+/** Writes the key's row; a key older than `expiredBefore` is dropped first, so it books anew. */
+export async function claimIdempotencyKey(tx: Tx, key: string, bodyHash: string, expiredBefore: Date) {
+  await tx
+    .delete(idempotencyKeys)
+    .where(and(eq(idempotencyKeys.key, key), lt(idempotencyKeys.createdAt, expiredBefore)));
+  await tx.insert(idempotencyKeys).values({ key, scope: 'booking', bodyHash });
 }
 export async function storeIdempotentAnswer(tx: Tx, key: string, statusCode: number, response: unknown) {
   await tx.update(idempotencyKeys).set({ statusCode, response }).where(eq(idempotencyKeys.key, key));

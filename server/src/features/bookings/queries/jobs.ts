@@ -1,6 +1,6 @@
-import { and, eq, isNotNull, isNull, lte, sql } from 'drizzle-orm';
+import { and, eq, isNotNull, isNull, lt, lte, sql } from 'drizzle-orm';
 import type { Tx } from '../../../db/client';
-import { bookings, events, slots, waitlistEntries } from '../../../db/schema/index';
+import { bookings, events, idempotencyKeys, slots, waitlistEntries } from '../../../db/schema/index';
 import { bookingWithContext } from './context';
 
 /** Offers whose time ran out, locked; rows another process is handling are skipped. */
@@ -43,4 +43,10 @@ export const dueReminders = (tx: Tx) =>
 
 export async function markReminded(tx: Tx, bookingId: number) {
   await tx.update(bookings).set({ reminderSentAt: new Date() }).where(eq(bookings.id, bookingId));
+}
+
+/** Drops stored answers (manage tokens in them) whose key no longer replays. */
+export async function dropIdempotencyKeysBefore(tx: Tx, before: Date) {
+  const [r] = await tx.delete(idempotencyKeys).where(lt(idempotencyKeys.createdAt, before));
+  return r.affectedRows;
 }
