@@ -1,11 +1,11 @@
 import express from 'express';
 import helmet from 'helmet';
-import { csrfSync } from 'csrf-sync';
 import { existsSync } from 'node:fs';
 import path from 'node:path';
 import type { AppContext } from './context';
 import { authRoutes } from './auth/routes';
 import { loadUser } from './auth/guards';
+import { csrfProtection } from './auth/csrf';
 import { sessionMiddleware } from './auth/session';
 import { apiNotFound, errorHandler, wellFormedText } from './http/errors';
 import { clientFiles } from './http/client-files';
@@ -57,13 +57,11 @@ export function createApp(ctx: AppContext) {
   for (const f of FEATURES) if (f.publicRoutes) api.use(f.publicRoutes(ctx));
 
   const { middleware: session, store } = sessionMiddleware(ctx.env, ctx.database.pool);
-  const { csrfSynchronisedProtection, generateToken } = csrfSync({
-    getTokenFromRequest: (req) => req.headers['x-csrf-token'] as string | undefined,
-  });
+  const { csrfSynchronisedProtection, token: csrfToken } = csrfProtection(ctx.env.SESSION_SECRET);
   api.use(session);
   api.use(loadUser(ctx.database.db));
   api.use(csrfSynchronisedProtection);
-  const auth = authRoutes(ctx, (req) => generateToken(req));
+  const auth = authRoutes(ctx, csrfToken);
   api.use('/auth', auth.router);
   for (const f of FEATURES) if (f.routes) api.use(f.routes(ctx));
   api.use(apiNotFound);

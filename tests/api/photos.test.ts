@@ -116,7 +116,7 @@ describe('item photos', () => {
     const third = await upload([{ name: 'c.png', type: 'image/png', data: await png() }]);
     expect(third.status).toBe(201);
     const fourth = await upload([{ name: 'd.png', type: 'image/png', data: await png() }]);
-    expect(fourth.status).toBe(400);
+    expect(fourth.status).toBe(409);
     expect(fourth.json.error.code).toBe('too-many-photos');
   });
 });

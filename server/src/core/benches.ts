@@ -17,6 +17,9 @@ const benchesOf = (db: DbOrTx, eventId: number) =>
     .where(eq(eventBenches.eventId, eventId))
     .orderBy(asc(eventBenches.position), asc(eventBenches.id));
 
+/** An event's benches as they stand, without copying the venue's layout: for public reads that must never write. */
+export const eventBenchesAsTheyStand = (db: DbOrTx, eventId: number) => benchesOf(db, eventId);
+
 /**
  * An event's benches; the first look copies the venue's usual layout. It runs on the connection it is given: a
  * caller inside a transaction passes its `tx` (which may already hold the event row), and the copy is a savepoint

@@ -7,7 +7,7 @@ import { itemLabel } from '../../../../shared/item-label';
 import type { HallQueue, LiveView, PublicTag, TagSheet } from '../../../../shared/api/event-day';
 import type { AppContext } from '../../context';
 import { notFound } from '../../http/errors';
-import { eventLayout } from '../../core/benches';
+import { eventBenchesAsTheyStand, eventLayout } from '../../core/benches';
 import * as q from './queries/hall';
 import { eventWithGroup } from '../../core/events';
 
@@ -53,7 +53,8 @@ export async function hallQueue(ctx: AppContext, eventId: number): Promise<HallQ
   const [items, fixers, benches] = await Promise.all([
     hallItems(ctx, eventId),
     fixersNow(ctx, eventId, now),
-    eventLayout(ctx.database.db, eventId),
+    // The public display takes no lock and writes nothing: until the layout is copied, no item has a bench.
+    eventBenchesAsTheyStand(ctx.database.db, eventId),
   ]);
   const benchName = new Map(benches.map((b) => [b.id, b.name]));
   const { order, waits } = waitsFor(items, fixers, now.getTime());
