@@ -11,8 +11,7 @@ import {
 import { runMigrations } from '../src/db/migrate';
 import { createDatabase } from '../src/db/client';
 import { LocalMailbox } from '../src/mail/local-mailbox';
-import { isSeeded, markEmptyInstall, seedDemo } from '../src/seed/demo';
-import { ensureCategories } from '../src/seed/categories';
+import { prepareData } from '../src/seed/first-run';
 
 export const root = path.resolve(import.meta.dirname, '../..');
 export const step = (line: string) => console.log(`▸ ${line}`);
@@ -101,19 +100,14 @@ export function buildClientIfStale(force = false): void {
   if (r.status !== 0) throw new Error('vite build failed');
 }
 
-/** Demo data on the very first run; DEMO=0 starts empty and the first visit asks for an admin. */
+/**
+ * Demo data on the very first run of a local start; a production start (NODE_ENV=production, DATABASE_URL or an
+ * https PUBLIC_URL) starts empty unless DEMO=1, and DEMO=0 always starts empty (server/src/seed/first-run.ts).
+ */
 export async function seedOnFirstRun(dbUrl: string, linkSecret: string): Promise<void> {
   const db = createDatabase(dbUrl, 2);
   try {
-    await ensureCategories(db.db);
-    if (await isSeeded(db.db)) return;
-    if (process.env.DEMO === '0') {
-      step('Starting empty (DEMO=0): the first visit asks for the first admin');
-      await markEmptyInstall(db.db);
-    } else {
-      step('Loading the demo scenario (first run)');
-      await seedDemo(db.db, { linkSecret });
-    }
+    await prepareData(db.db, process.env, { linkSecret, log: step });
   } finally {
     await db.close();
   }

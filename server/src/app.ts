@@ -59,7 +59,7 @@ export function createApp(ctx: AppContext) {
   const { middleware: session, store } = sessionMiddleware(ctx.env, ctx.database.pool);
   const { csrfSynchronisedProtection, token: csrfToken } = csrfProtection(ctx.env.SESSION_SECRET);
   api.use(session);
-  api.use(loadUser(ctx.database.db));
+  api.use(loadUser(ctx.database.db, ctx.env.SESSION_ABSOLUTE_HOURS));
   api.use(csrfSynchronisedProtection);
   const auth = authRoutes(ctx, csrfToken);
   api.use('/auth', auth.router);

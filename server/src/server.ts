@@ -11,6 +11,7 @@ import { Scheduler } from './jobs/scheduler';
 import { PublicReadCache } from './http/public-cache';
 import { collectHooks } from './core/hooks';
 import { FEATURES } from './features';
+import { announceSetup } from './auth/setup';
 import path from 'node:path';
 
 export interface RunningServer {
@@ -56,6 +57,7 @@ export async function startServer(
   const url = `http://${env.HOST}:${port}`;
   // With PORT=0 the real port is known only now; links in mail must carry it.
   if (!env.PUBLIC_URL) env.publicUrl = url;
+  await announceSetup(ctx);
   return {
     ctx,
     server,

@@ -48,8 +48,14 @@ export const firstAdminSchema = z
     email,
     password: newPassword,
     confirm: z.string(),
+    setupCode: z
+      .string({ error: 'Enter the setup code from the server’s console.' })
+      .trim()
+      .min(1, 'Enter the setup code from the server’s console.')
+      .max(200),
   })
   .refine((v) => v.password === v.confirm, { path: ['confirm'], message: 'The two passwords differ.' });
+export type FirstAdminInput = z.infer<typeof firstAdminSchema>;
 
 export const groupSchema = z.object({
   name: z.string().trim().min(2, 'Give the group a name.').max(120),

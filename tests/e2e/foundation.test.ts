@@ -1,12 +1,13 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
 import { DEMO_PASSWORD } from '../../shared/constants';
+import { setupCode } from '../../server/src/auth/setup';
 import { markEmptyInstall } from '../../server/src/seed/demo';
 import type { RunningServer } from '../../server/src/server';
 import { DESKTOP, launchBrowser, PHONE, shot } from '../support/browser';
 import { createTestDatabase } from '../support/db';
 import { startDemoApp, type DemoApp } from '../support/demo-app';
-import { startTestServer } from '../support/server';
+import { startTestServer, TEST_SECRET } from '../support/server';
 
 let app: DemoApp;
 let server: RunningServer;
@@ -139,6 +140,7 @@ describe('an empty installation', () => {
       await page.getByRole('button', { name: 'Create the admin account' }).click();
       await page.getByText('Enter your name.').waitFor();
       await page.screenshot({ path: shot('setup-errors'), fullPage: true });
+      await page.getByLabel('Setup code').fill(setupCode(TEST_SECRET));
       await page.getByLabel('Your name').fill('Olwen Firstadmin');
       await page.getByLabel('E-mail').fill('olwen@example.org');
       await page.getByLabel('Password', { exact: true }).fill('first admin secret');

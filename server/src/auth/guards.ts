@@ -5,6 +5,7 @@ import type { SessionUser } from '../../../shared/schemas/auth';
 import type { Db } from '../db/client';
 import { HttpError } from '../http/errors';
 import { loadSessionUser } from './queries';
+import { signInExpired } from './session';
 
 declare global {
   // eslint-disable-next-line @typescript-eslint/no-namespace
@@ -17,11 +18,17 @@ declare global {
 
 export const unauthenticated = () => new HttpError(401, 'unauthenticated', 'Sign in to continue.');
 
-/** Loads the signed-in user (if any) once per request; roles are read fresh so a revoked role takes effect at once. */
-export function loadUser(db: Db): RequestHandler {
+/**
+ * Loads the signed-in user (if any) once per request; roles are read fresh so a revoked role takes effect at once.
+ * A sign-in older than the absolute lifetime is dropped here, so activity cannot keep it alive for ever.
+ */
+export function loadUser(db: Db, absoluteHours: number, now: () => number = Date.now): RequestHandler {
   return async (req, _res, next) => {
     const id = req.session?.userId;
-    if (id) {
+    if (id && signInExpired(req.session.signedInAt, absoluteHours, now())) {
+      delete req.session.userId;
+      delete req.session.signedInAt;
+    } else if (id) {
       const user = await loadSessionUser(db, id);
       if (user) req.user = user;
       else delete req.session.userId;

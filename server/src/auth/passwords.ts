@@ -11,11 +11,34 @@ export const ARGON2_PARAMS = {
   parallelism: 1,
 } as const;
 
-export const hashPassword = (password: string): Promise<string> => hash(password, ARGON2_PARAMS);
+/** At most this many argon2 runs at once per process (19 MiB each); the rest wait their turn. */
+export const MAX_CONCURRENT_HASHES = 4;
+
+/** Counts every argon2 run (hash or verify), so tests can tell that a refusal came before any hashing. */
+export const argon2Runs = { started: 0, active: 0, peak: 0 };
+
+const waiting: (() => void)[] = [];
+
+async function limited<T>(work: () => Promise<T>): Promise<T> {
+  if (argon2Runs.active >= MAX_CONCURRENT_HASHES) await new Promise<void>((go) => waiting.push(go));
+  // A released slot is handed over without lowering `active`, so no newcomer can slip in between.
+  else argon2Runs.active++;
+  argon2Runs.started++;
+  argon2Runs.peak = Math.max(argon2Runs.peak, argon2Runs.active);
+  try {
+    return await work();
+  } finally {
+    const next = waiting.shift();
+    if (next) next();
+    else argon2Runs.active--;
+  }
+}
+
+export const hashPassword = (password: string): Promise<string> => limited(() => hash(password, ARGON2_PARAMS));
 
 export async function verifyPassword(stored: string, password: string): Promise<boolean> {
   try {
-    return await verify(stored, password);
+    return await limited(() => verify(stored, password));
   } catch {
     return false;
   }

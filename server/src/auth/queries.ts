@@ -29,20 +29,49 @@ export async function insertUser(
   return id;
 }
 
+/** Asks to join; asking again for the same group and role changes nothing. */
 export async function insertPendingMembership(
   tx: Tx,
   row: { userId: number; groupId: number; role: 'fixer' | 'host' | 'organiser' },
 ) {
-  await tx.insert(memberships).values({ ...row, status: 'pending' });
+  await tx
+    .insert(memberships)
+    .values({ ...row, status: 'pending' })
+    .onDuplicateKeyUpdate({ set: { userId: sql`${memberships.userId}` } });
 }
 
 export async function insertToken(
   tx: Tx,
-  row: { userId: number; purpose: TokenPurpose; hash: string; expiresAt: Date },
+  row: {
+    userId: number;
+    purpose: TokenPurpose;
+    hash: string;
+    expiresAt: Date;
+    signup?: { passwordHash: string; name: string };
+  },
 ) {
-  await tx
-    .insert(authTokens)
-    .values({ userId: row.userId, purpose: row.purpose, tokenHash: row.hash, expiresAt: row.expiresAt });
+  await tx.insert(authTokens).values({
+    userId: row.userId,
+    purpose: row.purpose,
+    tokenHash: row.hash,
+    expiresAt: row.expiresAt,
+    passwordHash: row.signup?.passwordHash ?? null,
+    name: row.signup?.name ?? null,
+  });
+}
+
+const liveToken = (hash: string, purpose: TokenPurpose) =>
+  and(
+    eq(authTokens.tokenHash, hash),
+    eq(authTokens.purpose, purpose),
+    isNull(authTokens.usedAt),
+    gt(authTokens.expiresAt, sql`NOW(3)`),
+  );
+
+/** Whether a link is unused and unexpired, without spending it: checked before any costly work. */
+export async function tokenIsLive(db: DbOrTx, hash: string, purpose: TokenPurpose): Promise<boolean> {
+  const [row] = await db.select({ id: authTokens.id }).from(authTokens).where(liveToken(hash, purpose));
+  return Boolean(row);
 }
 
 /** Only the newest link works: earlier unused ones of this purpose are spent. */
@@ -53,27 +82,20 @@ export async function spendOpenTokens(tx: Tx, userId: number, purpose: TokenPurp
     .where(and(eq(authTokens.userId, userId), eq(authTokens.purpose, purpose), isNull(authTokens.usedAt)));
 }
 
-/** Locks an unused, unexpired token with this hash and marks it used; the user id, or null when there is none. */
-export async function consumeToken(tx: Tx, hash: string, purpose: TokenPurpose): Promise<number | null> {
-  const [row] = await tx
-    .select()
-    .from(authTokens)
-    .where(
-      and(
-        eq(authTokens.tokenHash, hash),
-        eq(authTokens.purpose, purpose),
-        isNull(authTokens.usedAt),
-        gt(authTokens.expiresAt, sql`NOW(3)`),
-      ),
-    )
-    .for('update');
+/** Locks an unused, unexpired token with this hash and marks it used; its row, or null when there is none. */
+export async function consumeToken(tx: Tx, hash: string, purpose: TokenPurpose) {
+  const [row] = await tx.select().from(authTokens).where(liveToken(hash, purpose)).for('update');
   if (!row) return null;
   await tx.update(authTokens).set({ usedAt: new Date() }).where(eq(authTokens.id, row.id));
-  return row.userId;
+  return row;
 }
 
-export async function markEmailVerified(tx: Tx, userId: number) {
-  await tx.update(users).set({ emailVerifiedAt: new Date() }).where(eq(users.id, userId));
+/** Confirms the address; a sign-up's own password and name replace those of any earlier sign-up. */
+export async function markEmailVerified(tx: Tx, userId: number, signup?: { passwordHash: string; name: string }) {
+  await tx
+    .update(users)
+    .set({ emailVerifiedAt: new Date(), ...(signup ?? {}) })
+    .where(eq(users.id, userId));
 }
 
 /** The groups this person asked to join and is not yet confirmed in. */

@@ -10,10 +10,13 @@ import {
 } from '../../../shared/schemas/auth';
 import type { AppContext } from '../context';
 import { HttpError } from '../http/errors';
+import { publicReadLimiter } from '../http/rate-limit';
 import { MariadbRateLimitStore } from '../http/rate-limit-store';
 import { body } from '../http/validate';
 import * as auth from './service';
 import { loadSessionUser } from './queries';
+import { sessionCookie } from './session';
+import { createFirstAdmin } from './setup';
 
 const regenerate = (req: Request) =>
   new Promise<void>((res, rej) => req.session.regenerate((e) => (e ? rej(e) : res())));
@@ -23,9 +26,13 @@ export async function signIn(req: Request, ctx: AppContext, userId: number) {
   // A new session id at sign-in defeats session fixation; it also drops the old CSRF token.
   await regenerate(req);
   req.session.userId = userId;
+  req.session.signedInAt = Date.now();
   await save(req);
   return loadSessionUser(ctx.database.db, userId);
 }
+
+/** The per-source budget for auth POSTs; invitation sign-ups use it too, so both count against one figure. */
+export const authPostLimiter = (ctx: AppContext) => publicReadLimiter(ctx, 'auth-ip', ctx.env.AUTH_RATE_MAX);
 
 function limiter(
   ctx: AppContext,
@@ -76,6 +83,10 @@ export function authRoutes(ctx: AppContext, csrfToken: (req: Request) => string)
   );
   const loginPerSource = limiter(ctx, stores, 'login-ip', ctx.env.LOGIN_RATE_MAX * 5, ip, true);
   const mailLinks = limiter(ctx, stores, 'mail-link', ctx.env.LOGIN_RATE_MAX, (req) => `${ip(req)}|${emailOf(req)}`);
+  // Every auth POST but signing out counts against one budget per source address, whatever the e-mail: each may
+  // cost a password hash, and a script that varies the address must not get more of them.
+  const perSource = authPostLimiter(ctx);
+  r.use((req, res, next) => (req.method === 'POST' && req.path !== '/logout' ? perSource(req, res, next) : next()));
 
   r.get('/csrf', (req, res) => {
     res.json({ token: csrfToken(req) });
@@ -95,7 +106,8 @@ export function authRoutes(ctx: AppContext, csrfToken: (req: Request) => string)
   r.post('/logout', (req, res, next) => {
     req.session.destroy((err) => {
       if (err) return next(err);
-      res.clearCookie('mendery.sid', { httpOnly: true, sameSite: 'lax' });
+      const cookie = sessionCookie(ctx.env);
+      res.clearCookie(cookie.name, { ...cookie.options, secure: ctx.env.hostPrefixCookie });
       res.status(204).end();
     });
   });
@@ -123,7 +135,7 @@ export function authRoutes(ctx: AppContext, csrfToken: (req: Request) => string)
 
   r.post('/first-admin', async (req, res) => {
     const input = body(req, firstAdminSchema);
-    const id = await auth.createFirstAdmin(ctx, input);
+    const id = await createFirstAdmin(ctx, input);
     res.status(201).json({ user: await signIn(req, ctx, id) });
   });
 

@@ -1,7 +1,6 @@
 import type { LoginInput, SignupInput } from '../../../shared/schemas/auth';
 import type { AppContext } from '../context';
 import type { Tx } from '../db/client';
-import { isDuplicate } from '../db/retry';
 import { HttpError } from '../http/errors';
 import { enqueueMail } from '../mail/outbox';
 import { composeMail } from '../mail/templates';
@@ -37,7 +36,11 @@ export async function authenticate(ctx: AppContext, input: LoginInput): Promise<
   return user.id;
 }
 
-/** Volunteer sign-up. Answers the same whether or not the e-mail already has an account. */
+/**
+ * Volunteer sign-up. Answers the same whether or not the e-mail already has an account. A sign-up for an address
+ * whose account is not yet confirmed mails a link of its own that carries this sign-up's password and name:
+ * whichever link the owner of the mailbox follows decides the password, and the other links die with it.
+ */
 export async function signup(ctx: AppContext, input: SignupInput): Promise<void> {
   const { db } = ctx.database;
   const group = await q.groupById(db, input.groupId);
@@ -46,7 +49,7 @@ export async function signup(ctx: AppContext, input: SignupInput): Promise<void>
   const passwordHash = await hashPassword(input.password);
   await db.transaction(async (tx) => {
     const existing = await q.userByEmail(tx, input.email);
-    if (existing) {
+    if (existing?.emailVerifiedAt) {
       await enqueueMail(
         tx,
         composeMail(input.email, 'You already have a Mendery account', {
@@ -60,7 +63,7 @@ export async function signup(ctx: AppContext, input: SignupInput): Promise<void>
       );
       return;
     }
-    const userId = await q.insertUser(tx, { email: input.email, name: input.name, passwordHash });
+    const userId = existing?.id ?? (await q.insertUser(tx, { email: input.email, name: input.name, passwordHash }));
     await q.insertPendingMembership(tx, { userId, groupId: group.id, role: input.role });
     const { token, hash } = newToken();
     await q.insertToken(tx, {
@@ -68,6 +71,7 @@ export async function signup(ctx: AppContext, input: SignupInput): Promise<void>
       purpose: 'verify-email',
       hash,
       expiresAt: new Date(Date.now() + VERIFY_LINK_MS),
+      signup: { passwordHash, name: input.name },
     });
     await enqueueMail(
       tx,
@@ -84,16 +88,24 @@ export async function signup(ctx: AppContext, input: SignupInput): Promise<void>
   ctx.outbox.kick();
 }
 
-async function consumeToken(tx: Tx, token: string, purpose: q.TokenPurpose): Promise<number> {
-  const userId = await q.consumeToken(tx, sha256(token), purpose);
-  if (userId == null) throw invalidLink();
-  return userId;
+async function consumeToken(tx: Tx, token: string, purpose: q.TokenPurpose) {
+  const row = await q.consumeToken(tx, sha256(token), purpose);
+  if (!row) throw invalidLink();
+  return row;
 }
 
 export async function verifyEmail(ctx: AppContext, token: string): Promise<void> {
   await ctx.database.db.transaction(async (tx) => {
-    const userId = await consumeToken(tx, token, 'verify-email');
-    await q.markEmailVerified(tx, userId);
+    const link = await consumeToken(tx, token, 'verify-email');
+    const userId = link.userId;
+    const before = (await q.userById(tx, userId))!;
+    // Only a first confirmation sets the sign-up's password: a stray link must not change a confirmed account's.
+    const signup =
+      !before.emailVerifiedAt && link.passwordHash && link.name
+        ? { passwordHash: link.passwordHash, name: link.name }
+        : undefined;
+    await q.markEmailVerified(tx, userId, signup);
+    await q.spendOpenTokens(tx, userId, 'verify-email');
     const user = (await q.userById(tx, userId))!;
     for (const p of await q.pendingMemberships(tx, userId)) {
       const organisers = await q.activeOrganisers(tx, p.groupId);
@@ -145,11 +157,14 @@ export async function requestPasswordReset(ctx: AppContext, email: string): Prom
 }
 
 export async function confirmPasswordReset(ctx: AppContext, token: string, password: string): Promise<void> {
+  // A dead link is refused before the costly hash; the transaction checks again as it spends the link.
+  if (!(await q.tokenIsLive(ctx.database.db, sha256(token), 'reset-password'))) throw invalidLink();
   const passwordHash = await hashPassword(password);
   await ctx.database.db.transaction(async (tx) => {
-    const userId = await consumeToken(tx, token, 'reset-password');
-    // A new password signs out every existing session of that person.
+    const { userId } = await consumeToken(tx, token, 'reset-password');
+    // A new password signs out every existing session of that person, and proves the address: sign-up links die.
     await q.replacePassword(tx, userId, passwordHash);
+    await q.spendOpenTokens(tx, userId, 'verify-email');
   });
 }
 
@@ -159,30 +174,4 @@ export async function needsSetup(ctx: AppContext): Promise<boolean> {
 
 export async function isDemo(ctx: AppContext): Promise<boolean> {
   return (await q.settingValue(ctx.database.db, 'demo')) === true;
-}
-
-/** Creates the first admin of an empty installation; the settings row makes a second attempt fail. */
-export async function createFirstAdmin(
-  ctx: AppContext,
-  input: { name: string; email: string; password: string },
-): Promise<number> {
-  const passwordHash = await hashPassword(input.password);
-  try {
-    return await ctx.database.db.transaction(async (tx) => {
-      if ((await q.countUsers(tx)) > 0)
-        throw new HttpError(409, 'already-set-up', 'This installation already has an admin. Sign in instead.');
-      await q.insertSetting(tx, 'first-admin', true);
-      return q.insertUser(tx, {
-        name: input.name,
-        email: input.email,
-        passwordHash,
-        admin: true,
-        emailVerifiedAt: new Date(),
-      });
-    });
-  } catch (err) {
-    if (isDuplicate(err))
-      throw new HttpError(409, 'already-set-up', 'This installation already has an admin. Sign in instead.');
-    throw err;
-  }
 }

@@ -6,7 +6,26 @@ import type { Env } from '../config/env';
 declare module 'express-session' {
   interface SessionData {
     userId?: number;
+    /** Milliseconds since the epoch at sign-in: the absolute lifetime counts from here, whatever `rolling` does. */
+    signedInAt?: number;
   }
+}
+
+/** `__Host-` makes the browser refuse the cookie unless it is Secure, has Path=/ and no Domain (RFC 6265bis 4.1.3.2). */
+export const sessionCookie = (env: Env) => ({
+  name: env.hostPrefixCookie ? '__Host-mendery.sid' : 'mendery.sid',
+  options: {
+    httpOnly: true,
+    sameSite: 'lax' as const,
+    path: '/',
+    // 'auto' marks the cookie Secure whenever the request came over HTTPS (directly or via a trusted proxy).
+    secure: env.hostPrefixCookie ? true : ('auto' as const),
+  },
+});
+
+/** A sign-in is over after `SESSION_ABSOLUTE_HOURS`, however active; one with no sign-in time is over too. */
+export function signInExpired(signedInAt: unknown, absoluteHours: number, now: number): boolean {
+  return typeof signedInAt !== 'number' || now - signedInAt >= absoluteHours * 3600_000 || signedInAt > now + 60_000;
 }
 
 /**
@@ -26,21 +45,16 @@ export function sessionMiddleware(env: Env, pool: Pool) {
     },
     pool as never,
   );
+  const cookie = sessionCookie(env);
   const middleware = session({
-    name: 'mendery.sid',
+    name: cookie.name,
     secret: env.SESSION_SECRET,
     store,
     resave: false,
     saveUninitialized: false,
     rolling: true,
     proxy: env.TRUST_PROXY ? true : undefined,
-    cookie: {
-      httpOnly: true,
-      sameSite: 'lax',
-      // 'auto' marks the cookie Secure whenever the request came over HTTPS (directly or via a trusted proxy).
-      secure: 'auto',
-      maxAge: idleMs,
-    },
+    cookie: { ...cookie.options, maxAge: idleMs },
   });
   return { middleware, store: store as unknown as { close(): Promise<void> } };
 }

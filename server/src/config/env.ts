@@ -17,6 +17,9 @@ const schema = z.object({
   DB_POOL_SIZE: z.coerce.number().int().min(1).default(10),
   SESSION_SECRET: z.string().min(32, 'SESSION_SECRET must be at least 32 characters'),
   SESSION_IDLE_MINUTES: z.coerce.number().positive().default(60),
+  SESSION_ABSOLUTE_HOURS: z.coerce.number().positive().default(12),
+  /** `__Host-` cookie (Secure, Path=/, no Domain): set it where the site is served over HTTPS. */
+  COOKIE_HOST_PREFIX: flag.optional(),
   TRUST_PROXY: z.string().optional(),
   SMTP_HOST: z.string().default('127.0.0.1'),
   SMTP_PORT: z.coerce.number().int().default(2525),
@@ -29,12 +32,13 @@ const schema = z.object({
   READ_CACHE_POLL_MS: z.coerce.number().int().min(0).default(250),
   READ_CACHE_MAX_AGE_MS: z.coerce.number().int().min(0).default(5000),
   LOGIN_RATE_MAX: z.coerce.number().int().min(1).default(10),
+  AUTH_RATE_MAX: z.coerce.number().int().min(1).default(100),
   LOGIN_RATE_WINDOW_MINUTES: z.coerce.number().positive().default(15),
   FEED_RATE_MAX: z.coerce.number().int().min(1).default(300),
   CLIENT_DIST: z.string().default('dist/client'),
 });
 
-export type Env = z.infer<typeof schema> & { publicUrl: string; dbUrl: string };
+export type Env = z.infer<typeof schema> & { publicUrl: string; dbUrl: string; hostPrefixCookie: boolean };
 
 /** Reads the environment once at boot; a wrong value stops the server with a message that names it. */
 export function loadEnv(source: NodeJS.ProcessEnv = process.env): Env {
@@ -47,5 +51,11 @@ export function loadEnv(source: NodeJS.ProcessEnv = process.env): Env {
   const dbUrl =
     e.DATABASE_URL ??
     `mysql://${encodeURIComponent(e.DB_USER)}:${encodeURIComponent(e.DB_PASSWORD)}@${e.DB_HOST}:${e.DB_PORT}/${e.DB_NAME}`;
-  return { ...e, dbUrl, publicUrl: (e.PUBLIC_URL ?? `http://127.0.0.1:${e.PORT}`).replace(/\/$/, '') };
+  const hostPrefixCookie = e.COOKIE_HOST_PREFIX ?? false;
+  return {
+    ...e,
+    dbUrl,
+    hostPrefixCookie,
+    publicUrl: (e.PUBLIC_URL ?? `http://127.0.0.1:${e.PORT}`).replace(/\/$/, ''),
+  };
 }

@@ -64,13 +64,19 @@ export async function isSeeded(db: Db): Promise<boolean> {
   return Boolean(row);
 }
 
-/** Seeds once; later runs find the `seeded` setting and leave the data alone. */
-export async function seedDemo(db: Db, opts: { linkSecret?: string; now?: Date } = {}): Promise<void> {
+/**
+ * Seeds once; later runs find the `seeded` setting and leave the data alone. With `password` the demo accounts get
+ * that password instead of the published one, and the sign-in page does not show it (`demo` is then 'private').
+ */
+export async function seedDemo(
+  db: Db,
+  opts: { linkSecret?: string; now?: Date; password?: string } = {},
+): Promise<void> {
   await ensureCategories(db);
-  const passwordHash = await hashPassword(DEMO_PASSWORD);
+  const passwordHash = await hashPassword(opts.password ?? DEMO_PASSWORD);
   await db.transaction(async (tx) => {
     await tx.insert(settings).values({ key: 'seeded', value: true });
-    await tx.insert(settings).values({ key: 'demo', value: true });
+    await tx.insert(settings).values({ key: 'demo', value: opts.password ? 'private' : true });
     const groupIds: Record<string, number> = {};
     for (const g of DEMO_GROUPS) {
       const [{ id }] = await tx.insert(repairGroups).values(g).$returningId();

@@ -18,7 +18,7 @@ export function SetupPage() {
   const config = useConfig();
   const create = useCreateFirstAdmin();
   const navigate = useNavigate();
-  const form = useZodForm(firstAdminSchema, { name: '', email: '', password: '', confirm: '' });
+  const form = useZodForm(firstAdminSchema, { name: '', email: '', password: '', confirm: '', setupCode: '' });
   const [formError, setFormError] = useState<string | null>(null);
   const errors = form.formState.errors;
   if (config.isPending) return <Spinner />;
@@ -41,6 +41,14 @@ export function SetupPage() {
       <Card>
         <form onSubmit={onSubmit} noValidate className="space-y-4">
           {formError && <Alert tone="error">{formError}</Alert>}
+          <TextField
+            label="Setup code"
+            autoComplete="off"
+            spellCheck={false}
+            hint="Mendery printed it in the server’s console when it started, on the line that begins “Setup code”."
+            error={errors.setupCode?.message}
+            {...form.register('setupCode')}
+          />
           <TextField label="Your name" autoComplete="name" error={errors.name?.message} {...form.register('name')} />
           <TextField
             label="E-mail"

@@ -29,6 +29,9 @@ export const authTokens = mysqlTable(
     tokenHash: char('token_hash', { length: 64 }).notNull(),
     expiresAt: timestamp3('expires_at').notNull(),
     usedAt: timestamp3('used_at'),
+    /** A sign-up's own password and name: confirming that sign-up's link sets them, so a later sign-up cannot lose them. */
+    passwordHash: varchar('password_hash', { length: 255 }),
+    name: varchar('name', { length: 120 }),
     createdAt: createdAt(),
   },
   (t) => [uniqueIndex('auth_tokens_hash_uq').on(t.tokenHash), index('auth_tokens_user_idx').on(t.userId, t.purpose)],

@@ -5,7 +5,7 @@ import { groupIdInBody, groupIdParam, requireGroupRole, requireUser } from '../.
 import { body, params, query } from '../../http/validate';
 import { inviteSchema, inviteSignupSchema } from '../../../../shared/schemas/auth';
 import { groupSettingsSchema, venueSchema } from '../../../../shared/schemas/events';
-import { signIn } from '../../auth/routes';
+import { authPostLimiter, signIn } from '../../auth/routes';
 import { HttpError } from '../../http/errors';
 import * as invites from './invites';
 import * as groups from './service';
@@ -28,6 +28,7 @@ export function groupPublicRoutes(ctx: AppContext) {
 export function groupRoutes(ctx: AppContext) {
   const r = Router();
   const organiser = requireGroupRole(['organiser'], groupIdParam);
+  const authPosts = authPostLimiter(ctx);
   r.get('/groups/:groupId/members', organiser, async (req, res) => {
     res.json(await groups.listMembers(ctx, groupIdParam(req)));
   });
@@ -46,11 +47,11 @@ export function groupRoutes(ctx: AppContext) {
     res.status(202).json({ ok: true });
   });
   r.get('/invites/:token', async (req, res) => res.json(await invites.viewInvite(ctx, String(req.params.token))));
-  r.post('/invites/:token/accept', requireUser, async (req, res) => {
+  r.post('/invites/:token/accept', authPosts, requireUser, async (req, res) => {
     await invites.acceptInvite(ctx, String(req.params.token), req.user!);
     res.json({ ok: true });
   });
-  r.post('/invites/:token/signup', async (req, res) => {
+  r.post('/invites/:token/signup', authPosts, async (req, res) => {
     if (req.user) throw new HttpError(409, 'signed-in', 'You are signed in already: accept the invitation instead.');
     const id = await invites.signupFromInvite(ctx, String(req.params.token), body(req, inviteSignupSchema));
     res.status(201).json({ user: await signIn(req, ctx, id) });

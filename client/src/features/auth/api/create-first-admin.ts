@@ -4,7 +4,7 @@ import { api, forgetCsrfToken } from '../../../lib/api';
 import { userKeys } from '../../../lib/auth';
 import { authKeys } from './keys';
 
-type FirstAdminInput = { name: string; email: string; password: string; confirm: string };
+type FirstAdminInput = { name: string; email: string; password: string; confirm: string; setupCode: string };
 
 const createFirstAdmin = (input: FirstAdminInput) => api<{ user: SessionUser }>('POST', '/api/auth/first-admin', input);
 
