@@ -88,7 +88,11 @@ export async function measureLighthouse(): Promise<void> {
     const events = (await (await fetch(`${app.url}/api/events`)).json()) as { id: number }[];
     if (!events.length) throw new Error('the demo scenario has no published session');
     const id = events[0].id;
-    const pages = ['/', '/events', `/events/${id}`, `/events/${id}/book`, '/impact'];
+    // LIGHTHOUSE_ONLY=/impact (a comma-separated list of the paths below, with :id for the session) narrows the run.
+    const only = process.env.LIGHTHOUSE_ONLY?.split(',').map((p) => p.replace(':id', String(id)));
+    const pages = ['/', '/events', `/events/${id}`, `/events/${id}/book`, '/impact'].filter(
+      (p) => !only || only.includes(p),
+    );
     step(`Lighthouse ${RUNS}× per page, mobile preset (simulated throttling), ${app.url}`);
     // One unmeasured visit so the server's first-request work does not land in the first page's figures.
     await audit(`${app.url}/events`, chrome.port);
