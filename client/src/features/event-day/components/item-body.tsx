@@ -40,6 +40,53 @@ export function ItemBody({ item, toolkit, whatNext }: { item: ItemView; toolkit:
   // queue) has another time, which closes the form.
   const [correcting, setCorrecting] = useState<string | null>(null);
   const editing = item.outcome !== null && correcting === item.outcome.recordedAt;
+  // A finished item leads with what happened to it; its cautions follow for whoever opens it again.
+  const finished = item.status === 'done' && item.outcome !== null && !editing;
+  const outcomeSection =
+    !started && !item.outcome ? null : item.outcome && !editing ? (
+      <>
+        <Card className={item.outcome.outcome === 'fixed' ? 'ring-2 ring-sage' : ''}>
+          <h2 className="text-lg">Outcome: {item.outcome.outcomeLabel}</h2>
+          {item.outcome.barrierLabel && <p>Why: {item.outcome.barrierLabel}</p>}
+          {item.outcome.partDescription && (
+            <p>
+              Part needed: {item.outcome.partDescription}
+              {item.outcome.partCost !== null && ` (about ${formatMoney(item.outcome.partCost, item.event.currency)})`}
+              {isWebLink(item.outcome.partLink) && (
+                <>
+                  {' '}
+                  ·{' '}
+                  <a className="underline" href={item.outcome.partLink} target="_blank" rel="noreferrer">
+                    link
+                  </a>
+                </>
+              )}
+            </p>
+          )}
+          {item.outcome.minutes !== null && <p>{item.outcome.minutes} minutes</p>}
+          {item.outcome.notes && <p className="whitespace-pre-line text-ink-soft">{item.outcome.notes}</p>}
+          <p className="text-sm text-ink-soft">
+            Recorded {formatTime(item.outcome.recordedAt, tz)}
+            {item.outcome.recordedByName && ` by ${item.outcome.recordedByName}`}
+          </p>
+          {item.can.record && (
+            <Button
+              variant="secondary"
+              className="mt-2"
+              onClick={() => setCorrecting(item.outcome?.recordedAt ?? null)}
+            >
+              Correct the outcome
+            </Button>
+          )}
+        </Card>
+        {whatNext}
+      </>
+    ) : item.can.record ? (
+      <OutcomeForm item={item} latestCheck={latest} onCancel={item.outcome ? () => setCorrecting(null) : undefined} />
+    ) : (
+      <Alert>This item is with {item.placement?.fixerName ?? 'another fixer'}. An organiser can move it to you.</Alert>
+    );
+
   return (
     <div className="mx-auto max-w-2xl space-y-4">
       <header className="space-y-1">
@@ -114,6 +161,8 @@ export function ItemBody({ item, toolkit, whatNext }: { item: ItemView; toolkit:
       />
       {start.error && <Alert tone="error">{start.error.message}</Alert>}
 
+      {finished && outcomeSection}
+
       {item.cautions.length > 0 && (
         <Alert tone="caution" title="Before you open it">
           <ul className="mt-1 list-disc space-y-1 pl-5">
@@ -158,52 +207,7 @@ export function ItemBody({ item, toolkit, whatNext }: { item: ItemView; toolkit:
         ((started && !(item.status === 'done' && item.outcome?.outcome !== 'fixed')) ||
           item.safetyChecks.length > 0) && <SafetySection item={item} />}
 
-      {!started && !item.outcome ? null : item.outcome && !editing ? (
-        <>
-          <Card className={item.outcome.outcome === 'fixed' ? 'ring-2 ring-sage' : ''}>
-            <h2 className="text-lg">Outcome: {item.outcome.outcomeLabel}</h2>
-            {item.outcome.barrierLabel && <p>Why: {item.outcome.barrierLabel}</p>}
-            {item.outcome.partDescription && (
-              <p>
-                Part needed: {item.outcome.partDescription}
-                {item.outcome.partCost !== null &&
-                  ` (about ${formatMoney(item.outcome.partCost, item.event.currency)})`}
-                {isWebLink(item.outcome.partLink) && (
-                  <>
-                    {' '}
-                    ·{' '}
-                    <a className="underline" href={item.outcome.partLink} target="_blank" rel="noreferrer">
-                      link
-                    </a>
-                  </>
-                )}
-              </p>
-            )}
-            {item.outcome.minutes !== null && <p>{item.outcome.minutes} minutes</p>}
-            {item.outcome.notes && <p className="whitespace-pre-line text-ink-soft">{item.outcome.notes}</p>}
-            <p className="text-sm text-ink-soft">
-              Recorded {formatTime(item.outcome.recordedAt, tz)}
-              {item.outcome.recordedByName && ` by ${item.outcome.recordedByName}`}
-            </p>
-            {item.can.record && (
-              <Button
-                variant="secondary"
-                className="mt-2"
-                onClick={() => setCorrecting(item.outcome?.recordedAt ?? null)}
-              >
-                Correct the outcome
-              </Button>
-            )}
-          </Card>
-          {whatNext}
-        </>
-      ) : item.can.record ? (
-        <OutcomeForm item={item} latestCheck={latest} onCancel={item.outcome ? () => setCorrecting(null) : undefined} />
-      ) : (
-        <Alert>
-          This item is with {item.placement?.fixerName ?? 'another fixer'}. An organiser can move it to you.
-        </Alert>
-      )}
+      {!finished && outcomeSection}
 
       {(item.can.record || item.photos.some((p) => p.kind === 'repair')) && <RepairPhotos item={item} />}
       {(started || item.partsUsed.length > 0) && toolkit.salvage}

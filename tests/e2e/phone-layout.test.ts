@@ -1,7 +1,7 @@
-import { eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser } from 'playwright-core';
-import { events, repairGroups } from '../../server/src/db/schema/index';
+import { and, eq, inArray } from 'drizzle-orm';
+import { bookingItems, bookings, categories, events, repairGroups } from '../../server/src/db/schema/index';
 import { TODAY_TITLE } from '../../server/src/seed/demo-today';
 import { launchBrowser, PHONE, shot, signedIn } from '../support/browser';
 import { startDemoApp, type DemoApp } from '../support/demo-app';
@@ -44,4 +44,43 @@ describe('the organiser’s section links on a phone', () => {
       expect(await navBox.evaluate((n) => n.scrollWidth <= n.clientWidth)).toBe(true);
       await context.close();
     });
+});
+
+describe('a finished item on a fixer’s phone', () => {
+  it('leads with its outcome, and shows the cautions after it', async () => {
+    const [done] = await app.db.db
+      .select({ id: bookingItems.id })
+      .from(bookingItems)
+      .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
+      .innerJoin(categories, eq(categories.id, bookingItems.categoryId))
+      .where(
+        and(
+          eq(bookings.eventId, eventId),
+          eq(bookingItems.status, 'done'),
+          eq(categories.mains, true),
+          inArray(categories.slug, [
+            'kettle',
+            'toaster',
+            'lamp',
+            'iron',
+            'vacuum-cleaner',
+            'coffee-maker',
+            'hair-dryer',
+          ]),
+        ),
+      )
+      .limit(1);
+    expect(done, 'the demo day has a finished mains item').toBeDefined();
+    const { context, page } = await signedIn(browser, app.server.url, 'organiser', PHONE);
+    await page.goto(`${app.server.url}/items/${done.id}`);
+    const outcome = page.getByRole('heading', { name: /^Outcome:/ });
+    const cautions = page.getByText('Before you open it');
+    await outcome.waitFor();
+    await page.screenshot({ path: shot('item-finished-390'), fullPage: true });
+    const [o, c] = [await outcome.boundingBox(), await cautions.boundingBox()];
+    expect(o!.y).toBeLessThan(c!.y);
+    // The outcome is on the first screen of the phone.
+    expect(o!.y + o!.height).toBeLessThanOrEqual(PHONE.height);
+    await context.close();
+  });
 });
