@@ -33,10 +33,14 @@ export class PublicReadCache {
   constructor(
     private db: Db,
     private opts: { pollMs: number; maxAgeMs: number; maxEntries?: number },
-  ) {}
+  ) {
+    // Without polling (one process only), nothing else writes: the generation is known from the start.
+    if (opts.pollMs <= 0) this.shared = 0;
+  }
 
   start() {
     if (this.opts.pollMs > 0 && !this.timer) {
+      void this.poll();
       this.timer = setInterval(() => void this.poll(), this.opts.pollMs);
       this.timer.unref();
     }
@@ -57,7 +61,9 @@ export class PublicReadCache {
           .from(readGeneration)
           .where(eq(readGeneration.id, 1));
         const g = Number(row?.g ?? 0);
-        if (this.shared !== null && g !== this.shared) this.clear();
+        // Unknown before (first poll, or the last one failed) counts as a move: an entry kept meanwhile may predate
+        // another process's write, and nothing else would ever drop it before maxAgeMs.
+        if (g !== this.shared) this.clear();
         this.shared = g;
       } catch {
         // The database is away: keep serving until maxAgeMs, as a cache should, and try again next tick.
@@ -78,13 +84,18 @@ export class PublicReadCache {
   /** After a write in this process: empty the cache now, and tell the other processes. */
   async written() {
     this.clear();
-    try {
-      await this.db
-        .insert(readGeneration)
-        .values({ id: 1, generation: 1 })
-        .onDuplicateKeyUpdate({ set: { generation: sql`${readGeneration.generation} + 1` } });
-    } catch {
-      // If the row cannot move, the other processes still drop their entries within maxAgeMs.
+    for (let attempt = 0; attempt < 3; attempt++) {
+      try {
+        await this.db
+          .insert(readGeneration)
+          .values({ id: 1, generation: 1 })
+          .onDuplicateKeyUpdate({ set: { generation: sql`${readGeneration.generation} + 1` } });
+        return;
+      } catch {
+        // A busy moment (lock wait, lost connection): try again; if the row never moves, the other processes
+        // still drop their entries within maxAgeMs.
+        await new Promise((r) => setTimeout(r, 20 * (attempt + 1)));
+      }
     }
   }
 
@@ -105,7 +116,9 @@ export class PublicReadCache {
       const started = this.local;
       const body = Buffer.from(JSON.stringify(await produce()));
       entry = { body, etag: `"${createHash('sha1').update(body).digest('base64url')}"`, at: Date.now() };
-      if (started === this.local) {
+      // Kept only while the shared generation is known: an answer read while it is not (before the first poll, or
+      // while the database is away) cannot be tied to the other processes' writes.
+      if (started === this.local && this.shared !== null) {
         if (this.entries.size >= (this.opts.maxEntries ?? 500)) this.entries.clear();
         this.entries.set(key, entry);
       }
