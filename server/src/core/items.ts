@@ -32,9 +32,14 @@ export function itemWithContext(db: DbOrTx) {
     .innerJoin(categories, eq(categories.id, bookingItems.categoryId));
 }
 
+/**
+ * With `lock`, only the item's own row is locked. FOR UPDATE on the join would also lock its booking, slot, event,
+ * group and category rows, which every other item of the session (and every kettle) shares: a busy desk deadlocked.
+ */
 export async function loadItem(db: DbOrTx, itemId: number, opts: { lock?: boolean } = {}) {
-  const q = itemWithContext(db).where(eq(bookingItems.id, itemId));
-  const [row] = opts.lock ? await q.for('update') : await q;
+  if (opts.lock)
+    await db.select({ id: bookingItems.id }).from(bookingItems).where(eq(bookingItems.id, itemId)).for('update');
+  const [row] = await itemWithContext(db).where(eq(bookingItems.id, itemId));
   if (!row) throw notFound('That item');
   return row;
 }

@@ -15,6 +15,7 @@ import { runHooks } from '../../core/hooks';
 import { isHeating, setStatus } from './items';
 import { loadItem, type ItemRow } from '../../core/items';
 import * as q from './queries/outcomes';
+import { lockEvent } from './queries/desk';
 
 const forbidden = (message: string) => new HttpError(403, 'forbidden', message);
 
@@ -110,16 +111,18 @@ export async function recordSafetyCheck(
   s: SafetyCheckValues,
   user: SessionUser,
 ): Promise<SafetyCheckResult> {
-  return ctx.database.db.transaction(async (tx) => {
-    const row = await loadItem(tx, itemId, { lock: true });
-    await assertMayRecord(tx, row, user);
-    if (!row.item.mains)
-      throw new HttpError(409, 'not-mains', 'This item does not run on mains; it needs no electrical safety check.');
-    if (!mayRecordOutcome(row.item.status))
-      throw new HttpError(409, 'bad-transition', 'Check the item in before testing it.');
-    const v = await insertCheck(tx, row, s, user);
-    return { id: v.id, pass: v.pass, failures: v.failures, missing: v.missing, suggestion: suggestion(v) };
-  });
+  return withDeadlockRetry(() =>
+    ctx.database.db.transaction(async (tx) => {
+      const row = await loadItem(tx, itemId, { lock: true });
+      await assertMayRecord(tx, row, user);
+      if (!row.item.mains)
+        throw new HttpError(409, 'not-mains', 'This item does not run on mains; it needs no electrical safety check.');
+      if (!mayRecordOutcome(row.item.status))
+        throw new HttpError(409, 'bad-transition', 'Check the item in before testing it.');
+      const v = await insertCheck(tx, row, s, user);
+      return { id: v.id, pass: v.pass, failures: v.failures, missing: v.missing, suggestion: suggestion(v) };
+    }),
+  );
 }
 
 /**
@@ -137,13 +140,19 @@ export async function recordOutcome(
   if (input.safety) {
     const row = await loadItem(db, itemId);
     if (row.item.mains)
-      await db.transaction(async (tx) => {
-        await assertMayRecord(tx, row, user);
-        await insertCheck(tx, row, input.safety!, user);
-      });
+      await withDeadlockRetry(() =>
+        db.transaction(async (tx) => {
+          await assertMayRecord(tx, row, user);
+          await insertCheck(tx, row, input.safety!, user);
+        }),
+      );
   }
+  const { event } = await loadItem(db, itemId);
   const done = await withDeadlockRetry(() =>
     db.transaction(async (tx) => {
+      // The session's row first, as check-ins and walk-ins take it: its figures are rewritten below, and writers of
+      // one session's figures in a different order deadlocked at a busy desk.
+      await lockEvent(tx, event.id);
       const row = await loadItem(tx, itemId, { lock: true });
       await assertMayRecord(tx, row, user);
       if (!mayRecordOutcome(row.item.status))

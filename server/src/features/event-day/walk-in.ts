@@ -91,9 +91,11 @@ export async function walkIn(
           return itemIds;
         }),
       );
+      // Stored: from here on nothing may answer as if it was not (reception would enter it again).
       await replan(ctx, eventId, slotId, user.id);
       return { reference, items: await issuedAfterPlan(ctx, ids) };
     } catch (err) {
+      // Only the insert can collide on a reference; once stored, the loop never runs again.
       if (isDuplicate(err) && attempt < 4) continue;
       throw err;
     }

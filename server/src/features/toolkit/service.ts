@@ -10,6 +10,8 @@ import type {
   salvageUpdateSchema,
   writeupSchema,
 } from '../../../../shared/schemas/toolkit';
+import { scrubSharedNote } from '../../../../shared/privacy/shared-note';
+import { scrubPersonalData } from '../../../../shared/privacy/scrub';
 import { hasGroupRole } from '../../auth/guards';
 import type { AppContext } from '../../context';
 import type { DbOrTx, Tx } from '../../db/client';
@@ -58,7 +60,8 @@ export async function syncKnowledge(tx: Tx, row: ItemRow, outcome: Outcome, note
     brand: row.item.brand ?? '',
     model: row.item.model ?? '',
     outcome,
-    symptom: existing?.writtenUp ? existing.symptom : row.item.fault,
+    // The visitor's own words, without their name, address or number: the note may be read across the network.
+    symptom: existing?.writtenUp ? existing.symptom : scrubPersonalData(row.item.fault, [row.booking.visitorName]),
     notes: notes ?? '',
     eventDate: row.event.startsAt,
     updatedAt: new Date(),
@@ -68,6 +71,14 @@ export async function syncKnowledge(tx: Tx, row: ItemRow, outcome: Outcome, note
 }
 
 const readerOf = (user: SessionUser): Reader => ({ admin: user.admin, groupIds: user.roles.map((r) => r.groupId) });
+
+/** Readers outside the note's group get it without the visitor's name, address or number (finding 8). */
+const entryFor =
+  (user: SessionUser) =>
+  (r: EntryRow): Omit<KnowledgeEntry, 'photoIds'> => {
+    const dto = entryDto(r);
+    return user.roles.some((g) => g.groupId === r.e.groupId) ? dto : scrubSharedNote(dto, r.visitorName);
+  };
 
 const entryDto = (r: EntryRow): Omit<KnowledgeEntry, 'photoIds'> => ({
   itemId: r.e.itemId,
@@ -108,7 +119,7 @@ export async function searchKnowledge(
 ): Promise<KnowledgeEntry[]> {
   const { db } = ctx.database;
   const rows = await searchEntries(db, readerOf(user), q);
-  return withPhotos(db, rows.map(entryDto));
+  return withPhotos(db, rows.map(entryFor(user)));
 }
 
 /** Similar past repairs for an item: same kind first, then the same brand and model, then the fault's words. */
@@ -116,7 +127,7 @@ export async function similarRepairs(ctx: AppContext, itemId: number, user: Sess
   const { db } = ctx.database;
   const { item } = await loadItem(db, itemId);
   const rows = await similarEntries(db, readerOf(user), item);
-  return withPhotos(db, rows.map(entryDto));
+  return withPhotos(db, rows.map(entryFor(user)));
 }
 
 /** A fixer's short write-up of a repair: symptom, what was measured, the faulty part, the fix. */

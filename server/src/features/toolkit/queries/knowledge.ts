@@ -1,6 +1,13 @@
 import { and, desc, eq, inArray, or, sql, type SQL } from 'drizzle-orm';
 import type { DbOrTx } from '../../../db/client';
-import { categories, itemPhotos, knowledgeEntries, repairGroups } from '../../../db/schema/index';
+import {
+  bookingItems,
+  bookings,
+  categories,
+  itemPhotos,
+  knowledgeEntries,
+  repairGroups,
+} from '../../../db/schema/index';
 
 /** Who is reading: an admin reads every group's notes; others their own groups' and those of groups that share. */
 export interface Reader {
@@ -43,11 +50,15 @@ function select(db: DbOrTx, score: SQL<number>) {
       e: knowledgeEntries,
       categoryName: categories.name,
       groupName: repairGroups.name,
+      // Only to take the visitor's name out of the note for readers outside the group; never sent.
+      visitorName: bookings.visitorName,
       score: sql<number>`${score}`.as('score'),
     })
     .from(knowledgeEntries)
     .innerJoin(categories, eq(categories.id, knowledgeEntries.categoryId))
-    .innerJoin(repairGroups, eq(repairGroups.id, knowledgeEntries.groupId));
+    .innerJoin(repairGroups, eq(repairGroups.id, knowledgeEntries.groupId))
+    .leftJoin(bookingItems, eq(bookingItems.id, knowledgeEntries.itemId))
+    .leftJoin(bookings, eq(bookings.id, bookingItems.bookingId));
 }
 
 export type EntryRow = Awaited<ReturnType<ReturnType<typeof select>['execute']>>[number];
