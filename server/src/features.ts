@@ -8,6 +8,7 @@ import { eventsFeature } from './features/events/feature';
 import { groupsFeature } from './features/groups/feature';
 import { impactFeature } from './features/impact/feature';
 import { platformFeature } from './features/platform/feature';
+import { privacyFeature } from './features/privacy/feature';
 import { rotaFeature } from './features/rota/feature';
 import { skillsFeature } from './features/skills/feature';
 import { toolkitFeature } from './features/toolkit/feature';
@@ -33,4 +34,5 @@ export const FEATURES: Feature[] = [
   eventDayFeature,
   impactFeature,
   toolkitFeature,
+  privacyFeature,
 ];

@@ -49,4 +49,8 @@ export interface GroupSettings {
   country: string;
   houseRules: string;
   excludedCategoryIds: number[];
+  /** Where visitors write about their details, or ''. */
+  contactEmail: string;
+  /** How long visitors' details are kept, and the retention job's last run for the group. */
+  retention: { months: number; lastRunAt: string | null; lastRunAnonymised: number };
 }

@@ -1,3 +1,4 @@
+import { RETENTION_MONTHS } from '../privacy/scrub';
 import { z } from 'zod';
 import { SKILLS } from '../constants';
 import { isKnownCurrency } from '../format';
@@ -87,4 +88,18 @@ export const groupSettingsSchema = z.object({
   excludedCategoryIds: z.array(z.number().int().positive()).max(200).optional(),
   currency: currencyCode.optional(),
   country: countryCode.optional(),
+  /** Months after a session that visitors' details are kept; then the daily job anonymises them. */
+  retentionMonths: z.coerce
+    .number({ message: 'Enter a number of months.' })
+    .int('Enter a whole number of months.')
+    .min(RETENTION_MONTHS.min, `Keep details for ${RETENTION_MONTHS.min} to ${RETENTION_MONTHS.max} months.`)
+    .max(RETENTION_MONTHS.max, `Keep details for ${RETENTION_MONTHS.min} to ${RETENTION_MONTHS.max} months.`)
+    .optional(),
+  /** Where visitors write about their details; '' for none. */
+  contactEmail: z
+    .string()
+    .trim()
+    .max(254)
+    .refine((s) => s === '' || z.string().email().safeParse(s).success, 'Enter an e-mail address, or leave it empty.')
+    .optional(),
 });

@@ -79,6 +79,13 @@ export const moreRows: Row[] = [
   ['POST', (g) => `/api/bookings/${g.reference}/move?token=${WRONG_TOKEN}`, everyone(404), { slotId: 1 }],
   ['POST', (g) => `/api/bookings/${g.reference}/items/${g.item}/photos?token=${WRONG_TOKEN}`, everyone(404)],
   ['GET', (g) => `/api/bookings/${g.reference}/calendar?token=${g.manageToken}`, everyone(200)],
+  // Personal data (issue 14): the copy with the token; erasure with a wrong token and no organiser role is not found.
+  ['GET', (g) => `/api/bookings/${g.reference}/personal-data?token=${g.manageToken}`, everyone(200)],
+  ['DELETE', (g) => `/api/bookings/${g.reference}/personal-data?token=${WRONG_TOKEN}`, everyone(404)],
+  ['GET', () => '/api/me/personal-data', signedIn(200)],
+  // Without `confirm: true` nothing is closed: 400 for anyone signed in.
+  ['DELETE', () => '/api/me/account', signedIn(400)],
+  ['GET', (g) => `/api/public/groups/${g.own}/privacy`, everyone(200)],
   ['GET', () => '/api/photos/999999', everyone(404)],
   ['POST', (g) => `/api/events/${g.liveEvent}/waitlist`, everyone(400), {}],
   ['GET', () => '/api/waiting-list/nope', everyone(404)],

@@ -181,6 +181,8 @@ export const router = createBrowserRouter([
             path: 'groups/:groupId/events/new',
             ...page(() => import('../routes/groups/new-event'), 'NewEventPage', allow.organiser),
           },
+          { path: 'groups/:groupId/privacy', ...page(() => import('../routes/privacy/group'), 'GroupPrivacyPage') },
+          { path: 'me/data', ...page(() => import('../routes/privacy/account'), 'MyDataPage', allow.signedIn) },
           {
             path: 'groups/:groupId/settings',
             ...page(() => import('../routes/groups/settings'), 'GroupSettingsPage', allow.organiser),

@@ -18,6 +18,7 @@ import { eventKeys } from '../../features/events/api/keys';
 import { useEvent, eventQuery } from '../../features/events/api/get-event';
 import { StatusBadge } from '../../features/events/components/places-bar';
 import { queryClient } from '../../lib/query-client';
+import { BookingDataPanel } from '../../features/privacy/components/booking-data-panel';
 
 /** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
 export const loader = async ({ params, request }: LoaderFunctionArgs) => {
@@ -253,6 +254,7 @@ export function ManageBookingPage() {
           </ul>
         </Card>
       )}
+      {event.data && <BookingDataPanel reference={b.reference} token={token} groupId={event.data.groupId} />}
       <Link to={paths.event(b.event.id)} className="inline-block font-bold text-navy underline">
         About this session
       </Link>

@@ -12,6 +12,9 @@ import { eventQuery } from '../../features/events/api/get-event';
 import { useChangeEvent } from '../../features/events/api/change-event';
 import { eventBookingsQuery, useEventBookings } from '../../features/events/api/get-event-bookings';
 import { CancelSession } from '../../features/events/components/cancel-session';
+import { EraseBookingButton } from '../../features/privacy/components/erase-booking-button';
+import { organises, useUser } from '../../lib/auth';
+import { ERASED_NAME } from '../../../../shared/privacy/scrub';
 import { PlacesBar, StatusBadge } from '../../features/events/components/places-bar';
 import { queryClient } from '../../lib/query-client';
 
@@ -29,6 +32,8 @@ export function ManageEventPage() {
   const id = Number(useParams().eventId);
   const { data: e } = useSuspenseQuery(eventQuery(id));
   const coming = useEventBookings(id);
+  // Erasing a visitor's details on request is the organisers' (a host sees the list too).
+  const canErase = organises(useUser().data, e.groupId);
   const action = useChangeEvent(id);
   const [ask, setAsk] = useState<null | 'publish' | 'close'>(null);
   const tz = e.timeZone;
@@ -209,6 +214,13 @@ export function ManageEventPage() {
                 </p>
                 <p className="text-sm font-bold text-copper-dark">
                   {formatTime(b.slotStartsAt, tz)} {b.status === 'cancelled' && <StatusBadge status="cancelled" />}
+                  {canErase && b.visitorName !== ERASED_NAME && (
+                    <EraseBookingButton
+                      reference={b.reference}
+                      name={b.visitorName}
+                      onErased={() => void coming.refetch()}
+                    />
+                  )}
                 </p>
               </div>
               <ul className="mt-1 space-y-1 text-sm">

@@ -6,6 +6,8 @@ import { COMMON_CURRENCIES, currencyName, formatMoney } from '../../../../shared
 import { countryChoices } from '../../../../shared/places/countries';
 import { venueSchema } from '../../../../shared/schemas/events';
 import { GroupTabs } from '../../components/layouts/group-tabs';
+import { PrivacySettings } from '../../features/groups/components/privacy-settings';
+import { paths } from '../../config/paths';
 import { Button } from '../../components/ui/button';
 import { Alert, Card, Spinner } from '../../components/ui/feedback';
 import { CheckField, TextField } from '../../components/ui/field';
@@ -115,6 +117,8 @@ export function GroupSettingsPage() {
             Save rules
           </Button>
         </Card>
+
+        <PrivacySettings settings={settings.data} privacyPath={paths.groupPrivacy(groupId)} />
 
         <Card className="space-y-4">
           <h2 className="text-lg">Venues</h2>

@@ -111,6 +111,8 @@ export const bookings = mysqlTable(
     consentAt: timestamp3('consent_at').notNull(),
     reminderSentAt: timestamp3('reminder_sent_at'),
     cancelledAt: timestamp3('cancelled_at'),
+    /** When the visitor's personal data was erased (on request or after the group's retention period). */
+    anonymisedAt: timestamp3('anonymised_at'),
     createdAt: createdAt(),
   },
   (t) => [

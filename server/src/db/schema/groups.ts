@@ -1,4 +1,4 @@
-import { boolean, char, index, mysqlEnum, mysqlTable, text, uniqueIndex, varchar } from 'drizzle-orm/mysql-core';
+import { boolean, char, index, int, mysqlEnum, mysqlTable, text, uniqueIndex, varchar } from 'drizzle-orm/mysql-core';
 import { GROUP_ROLES, MEMBERSHIP_STATUSES } from '../../../../shared/constants';
 import { createdAt, id, ref, timestamp3 } from './columns';
 import { users } from './users';
@@ -19,6 +19,13 @@ export const repairGroups = mysqlTable(
     country: char('country', { length: 3 }),
     /** Whether the group's repair notes are searchable by the other groups of the network. */
     shareKnowledge: boolean('share_knowledge').notNull().default(false),
+    /** Months after a session that visitors' names, addresses, phone numbers and photos are kept (then anonymised). */
+    retentionMonths: int('retention_months').notNull().default(12),
+    /** Where visitors write about their data; shown on the group's privacy page. */
+    contactEmail: varchar('contact_email', { length: 254 }),
+    /** When the retention job last ran for the group, and how many bookings it anonymised then. */
+    retentionRanAt: timestamp3('retention_ran_at'),
+    retentionAnonymised: int('retention_anonymised').notNull().default(0),
     createdAt: createdAt(),
   },
   (t) => [uniqueIndex('repair_groups_slug_uq').on(t.slug)],

@@ -13,6 +13,7 @@ import {
   setCurrency,
   setCountry,
   setHouseRules,
+  setPrivacy,
   venuesOf,
 } from './queries/settings';
 
@@ -42,6 +43,8 @@ export async function groupSettings(ctx: AppContext, groupId: number) {
     currency: g.currency,
     country: g.country ?? '',
     houseRules: g.houseRules ?? '',
+    contactEmail: g.contactEmail ?? '',
+    retention: { months: g.retentionMonths, lastRunAt: g.retentionRanAt, lastRunAnonymised: g.retentionAnonymised },
     excludedCategoryIds: await excludedCategoryIds(db, groupId),
   };
 }
@@ -52,6 +55,8 @@ export async function saveGroupSettings(ctx: AppContext, groupId: number, input:
     if (input.houseRules !== undefined) await setHouseRules(tx, groupId, input.houseRules);
     if (input.currency !== undefined) await setCurrency(tx, groupId, input.currency);
     if (input.country !== undefined) await setCountry(tx, groupId, input.country);
+    if (input.retentionMonths !== undefined || input.contactEmail !== undefined)
+      await setPrivacy(tx, groupId, { retentionMonths: input.retentionMonths, contactEmail: input.contactEmail });
     if (
       input.excludedCategoryIds !== undefined &&
       !(await replaceExclusions(tx, groupId, [...new Set(input.excludedCategoryIds)]))

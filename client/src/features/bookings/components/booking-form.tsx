@@ -355,6 +355,7 @@ export function BookingForm({
           step={3 + items.fields.length}
           houseRules={event.houseRules}
           groupName={event.groupName}
+          privacyPath={paths.groupPrivacy(event.groupId)}
           consent={form.register('consent')}
           error={errors.consent?.message}
         />

@@ -1,4 +1,5 @@
 import type { UseFormRegisterReturn } from 'react-hook-form';
+import { Link } from 'react-router';
 import { DISCLAIMER } from '../../../../../shared/format';
 import { Card } from '../../../components/ui/feedback';
 
@@ -7,6 +8,8 @@ export function HouseRules(props: {
   step: number;
   houseRules: string;
   groupName: string;
+  /** The group's privacy page: what it keeps of the visitor's details and for how long. */
+  privacyPath: string;
   consent: UseFormRegisterReturn;
   error?: string;
 }) {
@@ -35,6 +38,11 @@ export function HouseRules(props: {
         <span>I accept the house rules and the conditions above.</span>
       </label>
       {props.error && <p className="mt-1 text-sm font-semibold text-alert">{props.error}</p>}
+      <p className="mt-3 text-sm">
+        <Link to={props.privacyPath} className="font-bold text-navy underline">
+          How {props.groupName} looks after your details
+        </Link>
+      </p>
     </Card>
   );
 }

@@ -3,7 +3,14 @@ import { api } from '../../../lib/api';
 import { groupKeys } from './keys';
 
 /** Only the parts sent are saved. */
-type SettingsInput = { houseRules?: string; excludedCategoryIds?: number[]; currency?: string; country?: string };
+type SettingsInput = {
+  houseRules?: string;
+  excludedCategoryIds?: number[];
+  currency?: string;
+  country?: string;
+  retentionMonths?: number;
+  contactEmail?: string;
+};
 
 const saveGroupSettings = (groupId: number, s: SettingsInput) => api('PUT', `/api/groups/${groupId}/settings`, s);
 

@@ -26,6 +26,17 @@ export async function setCurrency(tx: Tx, groupId: number, currency: string) {
   await tx.update(repairGroups).set({ currency }).where(eq(repairGroups.id, groupId));
 }
 
+/** How long visitors' details are kept and where they write about them; an empty address is none. */
+export async function setPrivacy(tx: Tx, groupId: number, p: { retentionMonths?: number; contactEmail?: string }) {
+  await tx
+    .update(repairGroups)
+    .set({
+      ...(p.retentionMonths !== undefined ? { retentionMonths: p.retentionMonths } : {}),
+      ...(p.contactEmail !== undefined ? { contactEmail: p.contactEmail || null } : {}),
+    })
+    .where(eq(repairGroups.id, groupId));
+}
+
 export async function setCountry(tx: Tx, groupId: number, country: string) {
   await tx.update(repairGroups).set({ country }).where(eq(repairGroups.id, groupId));
 }

@@ -1,0 +1,24 @@
+import { useNavigate } from 'react-router';
+import { PageTitle } from '../../components/ui/feedback';
+import { paths } from '../../config/paths';
+import { AccountDataPanel } from '../../features/privacy/components/account-data-panel';
+import { forgetCsrfToken } from '../../lib/api';
+import { userKeys } from '../../lib/auth';
+import { queryClient } from '../../lib/query-client';
+
+/** The signed-in person's own data: a copy of the account, and closing it. */
+export function MyDataPage() {
+  const navigate = useNavigate();
+  const closed = () => {
+    forgetCsrfToken();
+    queryClient.clear();
+    queryClient.setQueryData(userKeys.me, null);
+    void navigate(paths.home(), { replace: true });
+  };
+  return (
+    <div className="mx-auto max-w-2xl space-y-4">
+      <PageTitle title="My data" lead="What Mendery holds about you, and how to leave." />
+      <AccountDataPanel onClosed={closed} />
+    </div>
+  );
+}
