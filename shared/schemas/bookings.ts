@@ -70,5 +70,7 @@ export const waitlistSchema = createBookingSchema;
 export const PHOTO_LIMITS = {
   maxBytes: 8 * 1024 * 1024,
   perItem: 3,
+  /** All the visitor's photos of one booking together. */
+  perBooking: 6,
   types: ['image/jpeg', 'image/png', 'image/webp'] as const,
 };

@@ -19,6 +19,7 @@ const mail = memorySender();
 
 beforeAll(async () => {
   db = await createTestDatabase();
+  // Hundreds of bookings from one test address: startTestServer raises the limits, which have their own test file.
   server = await startTestServer(db.url, { DB_POOL_SIZE: '20' }, { sender: mail });
   groupId = await makeGroup(db.db);
   kettle = await categoryId(db.db, 'kettle');

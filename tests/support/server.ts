@@ -4,11 +4,22 @@ import type { MailSender } from '../../server/src/mail/transport';
 
 export const TEST_SECRET = 'test-session-secret-that-is-long-enough-0123456789';
 
+/**
+ * The limits on anonymous bookings, waiting-list joins and mails to one address, raised for tests whose load comes
+ * from one address: tests/api/booking-limits.test.ts tests the shipped values (`opts.shippedLimits`).
+ */
+const LOAD_LIMITS = {
+  BOOKING_RATE_MAX: '100000',
+  BOOKING_EMAIL_RATE_MAX: '100000',
+  BOOKINGS_PER_SESSION_MAX: '100000',
+  VISITOR_MAIL_MAX_PER_HOUR: '100000',
+};
+
 /** Starts the real app in-process on a free port against a test database. */
 export function startTestServer(
   dbUrl: string,
   overrides: Partial<Record<keyof Env, string>> = {},
-  opts: { sender?: MailSender | 'smtp'; log?: (line: string) => void } = {},
+  opts: { sender?: MailSender | 'smtp'; log?: (line: string) => void; shippedLimits?: boolean } = {},
 ): Promise<RunningServer> {
   const env = loadEnv({
     NODE_ENV: 'test',
@@ -19,6 +30,7 @@ export function startTestServer(
     SMTP_PORT: '1',
     CLIENT_DIST: 'dist/client',
     JOBS_POLL_MS: '0',
+    ...(opts.shippedLimits ? {} : LOAD_LIMITS),
     ...overrides,
   });
   // 'smtp' sends through the real SMTP path (to a local mailbox the test started).

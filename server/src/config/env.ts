@@ -35,6 +35,13 @@ const schema = z.object({
   AUTH_RATE_MAX: z.coerce.number().int().min(1).default(100),
   LOGIN_RATE_WINDOW_MINUTES: z.coerce.number().positive().default(15),
   FEED_RATE_MAX: z.coerce.number().int().min(1).default(300),
+  /** Bookings and waiting-list joins per source address, and per e-mail address, in the sign-in window. */
+  BOOKING_RATE_MAX: z.coerce.number().int().min(1).default(10),
+  BOOKING_EMAIL_RATE_MAX: z.coerce.number().int().min(1).default(5),
+  /** Confirmed bookings (and, apart, open waiting-list places) one e-mail address may hold in one session. */
+  BOOKINGS_PER_SESSION_MAX: z.coerce.number().int().min(1).default(2),
+  /** Mails an anonymous form may cause to one address in an hour. */
+  VISITOR_MAIL_MAX_PER_HOUR: z.coerce.number().int().min(1).default(6),
   CLIENT_DIST: z.string().default('dist/client'),
 });
 

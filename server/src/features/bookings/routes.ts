@@ -1,12 +1,19 @@
 import { Router, type NextFunction, type Request, type Response } from 'express';
 import { z } from 'zod';
 import { normaliseReference } from '../../../../shared/booking/reference';
-import { createBookingSchema, moveBookingSchema, waitlistSchema } from '../../../../shared/schemas/bookings';
+import {
+  createBookingSchema,
+  moveBookingSchema,
+  PHOTO_LIMITS,
+  waitlistSchema,
+} from '../../../../shared/schemas/bookings';
 import { rebookSchema } from '../../../../shared/schemas/impact';
 import type { AppContext } from '../../context';
 import { hasGroupRole, requireGroupRole } from '../../auth/guards';
 import { HttpError, notFound } from '../../http/errors';
 import { body, params, paramId } from '../../http/validate';
+import { visitorLimits } from '../../http/visitor-limits';
+import { intakePhotosOf } from './queries/limits';
 import { eventGroupId } from '../../core/events';
 import { eventBookings } from './organiser';
 import { multerError, photoUpload, savePhotos } from '../../core/photos';
@@ -39,8 +46,13 @@ export function bookingRoutes(ctx: AppContext) {
     return ref;
   };
   const byToken = (req: Request) => booking.bookingByToken(ctx, reference(req), tokenQuery.parse(req.query).token);
+  // Bookings and waiting-list joins share one count per source address and one per e-mail address.
+  const limits = visitorLimits(ctx, 'booking', {
+    perAddress: ctx.env.BOOKING_RATE_MAX,
+    perEmail: ctx.env.BOOKING_EMAIL_RATE_MAX,
+  });
 
-  r.post('/bookings', async (req, res) => {
+  r.post('/bookings', ...limits, async (req, res) => {
     const header = req.get('idempotency-key');
     const key = header === undefined ? undefined : idempotencyKey.safeParse(header);
     if (key && !key.success)
@@ -95,7 +107,15 @@ export function bookingRoutes(ctx: AppContext) {
       const b = await byToken(req);
       const { itemId } = params(req, z.object({ itemId: z.coerce.number().int().positive(), reference: z.string() }));
       if (b.status !== 'confirmed') throw new HttpError(409, 'cancelled', 'This booking is cancelled.');
-      res.status(201).json(await savePhotos(ctx, b.id, itemId, (req.files as Express.Multer.File[]) ?? []));
+      const files = (req.files as Express.Multer.File[]) ?? [];
+      const has = await intakePhotosOf(db, b.id);
+      if (has + files.length > PHOTO_LIMITS.perBooking)
+        throw new HttpError(
+          400,
+          'too-many-photos',
+          `A booking can have at most ${PHOTO_LIMITS.perBooking} photos in all; this one has ${has}.`,
+        );
+      res.status(201).json(await savePhotos(ctx, b.id, itemId, files));
     },
   );
 
@@ -116,7 +136,7 @@ export function bookingRoutes(ctx: AppContext) {
     res.type(p.type).send(data);
   });
 
-  r.post('/events/:id/waitlist', async (req, res) => {
+  r.post('/events/:id/waitlist', ...limits, async (req, res) => {
     const input = body(req, waitlistSchema);
     const { id } = params(req, z.object({ id: z.coerce.number().int().positive() }));
     res.status(201).json(await booking.joinWaitlist(ctx, id, input));

@@ -6,6 +6,8 @@ import { isDuplicate, withDeadlockRetry } from '../../db/retry';
 import { sha256 } from '../../auth/tokens';
 import { HttpError, notFound } from '../../http/errors';
 import { screenItems } from '../../core/screening';
+import { mailAllowance } from '../../mail/allowance';
+import { activeBookingsFor } from './queries/limits';
 import { bookingWithContextById } from './queries/context';
 import {
   bookingByReference,
@@ -77,6 +79,27 @@ export async function createBooking(
   const bodyHash = sha256(JSON.stringify(input));
   const row = await bookableSlot(ctx.database.db, input.slotId);
   const cats = await screenItems(ctx.database.db, row.group, input.items);
+  // The confirmation mail is counted before the booking; it is given back if no booking (so no mail) comes of it.
+  const allowance = mailAllowance(ctx);
+  await allowance.takeOrRefuse(input.visitor.email);
+  let mailed = false;
+  try {
+    const result = await bookOnce(ctx, input, key, bodyHash, row, cats);
+    mailed = !result.replayed;
+    return result;
+  } finally {
+    if (!mailed) await allowance.giveBack(input.visitor.email);
+  }
+}
+
+async function bookOnce(
+  ctx: AppContext,
+  input: BookingInput,
+  key: string | null,
+  bodyHash: string,
+  row: Awaited<ReturnType<typeof bookableSlot>>,
+  cats: Awaited<ReturnType<typeof screenItems>>,
+): Promise<{ status: number; body: unknown; replayed: boolean }> {
   for (let attempt = 0; ; attempt++) {
     const prepared = prepareBooking(ctx);
     try {
@@ -86,6 +109,13 @@ export async function createBooking(
           // then fails as a duplicate once the first has committed.
           if (key) await claimIdempotencyKey(tx, key, bodyHash, new Date(Date.now() - IDEMPOTENCY_HOURS * 3600_000));
           refuse(await bookabilityOf(tx, row, skillsOf(input.items, cats)));
+          const max = ctx.env.BOOKINGS_PER_SESSION_MAX;
+          if ((await activeBookingsFor(tx, row.event.id, input.visitor.email)) >= max)
+            throw new HttpError(
+              409,
+              'booking-cap',
+              `This e-mail address already has ${max} bookings for this session. Cancel one from its link to book another time, or ask the organisers.`,
+            );
           const result = await insertBooking(ctx, tx, row, input, false, prepared, cats);
           const body = {
             reference: result.reference,

@@ -5,6 +5,8 @@ import { newToken } from '../../auth/tokens';
 import { HttpError, notFound } from '../../http/errors';
 import { enqueueMail } from '../../mail/outbox';
 import { screenItems } from '../../core/screening';
+import { mailAllowance } from '../../mail/allowance';
+import { openWaitsFor } from './queries/limits';
 import { eventWithContext, slotWithContextById } from './queries/context';
 import { holdPlaces, lockSlot, releaseSlotPlaces } from './queries/places';
 import {
@@ -79,7 +81,18 @@ export async function offerFreedPlaces(ctx: AppContext, tx: Tx, slotId: number) 
  * not make room for it), so no item of a booking waits while another is refused.
  */
 export async function joinWaitlist(ctx: AppContext, eventId: number, input: BookingInput) {
-  const position = await ctx.database.db.transaction(async (tx) => {
+  const allowance = mailAllowance(ctx);
+  await allowance.takeOrRefuse(input.visitor.email);
+  const position = await joinLine(ctx, eventId, input).catch(async (err: unknown) => {
+    await allowance.giveBack(input.visitor.email);
+    throw err;
+  });
+  ctx.outbox.kick();
+  return { position };
+}
+
+async function joinLine(ctx: AppContext, eventId: number, input: BookingInput) {
+  return ctx.database.db.transaction(async (tx) => {
     const row = await bookableSlot(tx, input.slotId, { lock: true });
     if (row.event.id !== eventId)
       throw new HttpError(400, 'invalid', 'Some fields need attention.', { slotId: 'Choose a time of this event.' });
@@ -87,6 +100,13 @@ export async function joinWaitlist(ctx: AppContext, eventId: number, input: Book
     const bookability = await bookabilityOf(tx, row, skillsOf(input.items, cats));
     if (bookability.ok) throw new HttpError(409, 'places-free', 'This time still has free places: book it directly.');
     if (bookability.reason !== 'full') refuse(bookability);
+    const max = ctx.env.BOOKINGS_PER_SESSION_MAX;
+    if ((await openWaitsFor(tx, row.event.id, input.visitor.email)) >= max)
+      throw new HttpError(
+        409,
+        'waitlist-cap',
+        `This e-mail address is already waiting for ${max} places in this session. We will write when one comes free.`,
+      );
     await insertWaitlistEntry(tx, {
       eventId: row.event.id,
       slotId: row.slot.id,
@@ -115,8 +135,6 @@ export async function joinWaitlist(ctx: AppContext, eventId: number, input: Book
     );
     return n;
   });
-  ctx.outbox.kick();
-  return { position };
 }
 
 export async function offerView(ctx: AppContext, token: string) {
