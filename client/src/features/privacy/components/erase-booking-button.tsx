@@ -27,15 +27,18 @@ export function EraseBookingButton({
         Erase details
       </Button>
       {erase.error && <Alert tone="error">{erase.error.message}</Alert>}
-      <ConfirmDialog
-        open={asking}
-        title={`Erase the details of ${name}?`}
-        message={`Booking ${reference} keeps its place and repair record, but the visitor's name, e-mail address, phone number and photos are erased, names and numbers are taken out of the fault, and mail still waiting for them is not sent. Do this when the visitor asks. It cannot be undone.`}
-        confirmLabel="Erase the details"
-        busy={erase.isPending}
-        onCancel={() => setAsking(false)}
-        onConfirm={() => erase.mutate({ reference }, { onSettled: () => setAsking(false) })}
-      />
+      {/* Mounted only while asking: one closed dialog per row would put every visitor's name in the page twice. */}
+      {asking && (
+        <ConfirmDialog
+          open
+          title={`Erase the details of ${name}?`}
+          message={`Booking ${reference} keeps its place and repair record, but the visitor's name, e-mail address, phone number and photos are erased, names and numbers are taken out of the fault, and mail still waiting for them is not sent. Do this when the visitor asks. It cannot be undone.`}
+          confirmLabel="Erase the details"
+          busy={erase.isPending}
+          onCancel={() => setAsking(false)}
+          onConfirm={() => erase.mutate({ reference }, { onSettled: () => setAsking(false) })}
+        />
+      )}
     </>
   );
 }
