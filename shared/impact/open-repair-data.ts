@@ -2,6 +2,27 @@ import type { Barrier, Outcome } from '../event-day/constants';
 import { REPAIR_STATUS_OF, type RepairStatus } from './visits';
 
 /**
+ * The Open Repair Data Standard v0.3 columns, in the order of the published data files (REFERENCE.md §5). The
+ * optional `record_date` is left out, as the published files leave it out.
+ */
+export const ORDS_FIELDS = [
+  'id',
+  'data_provider',
+  'country',
+  'partner_product_category',
+  'product_category',
+  'product_category_id',
+  'brand',
+  'year_of_manufacture',
+  'product_age',
+  'repair_status',
+  'repair_barrier_if_end_of_life',
+  'group_identifier',
+  'event_date',
+  'problem',
+] as const;
+export type OrdsField = (typeof ORDS_FIELDS)[number];
+/**
  * The Open Repair Data Standard's codelists (v0.3, REFERENCE.md §5). Their wording belongs to the file only: the
  * screens use Mendery's own words (shared/event-day/constants.ts).
  */

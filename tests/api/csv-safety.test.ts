@@ -1,13 +1,10 @@
 import { and, eq, isNotNull } from 'drizzle-orm';
 import { parse } from 'csv-parse/sync';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { DEMO_PASSWORD } from '../../shared/constants';
-import { bookingItems, bookings, events, itemOutcomes, repairGroups, users } from '../../server/src/db/schema/index';
-import { seedDemo } from '../../server/src/seed/demo';
-import type { RunningServer } from '../../server/src/server';
-import { createTestDatabase, type TestDatabase } from '../support/db';
+import { bookingItems, bookings, events, itemOutcomes, users } from '../../server/src/db/schema/index';
+import { type TestDatabase } from '../support/db';
 import { Agent } from '../support/http';
-import { startTestServer, TEST_SECRET } from '../support/server';
+import { startDemoApi, type DemoApi } from '../support/demo-app';
 
 /**
  * Formula injection (issue 14, finding 4). Source for the rule: OWASP "CSV Injection": a cell that starts with
@@ -15,7 +12,7 @@ import { startTestServer, TEST_SECRET } from '../support/server';
  * reach the files, so each is planted here and must come out as text.
  */
 let db: TestDatabase;
-let server: RunningServer;
+let app: DemoApi;
 let groupId: number;
 let itemId: number;
 let as: Agent;
@@ -29,11 +26,8 @@ const PLANTED = {
 };
 
 beforeAll(async () => {
-  db = await createTestDatabase();
-  await seedDemo(db.db, { linkSecret: TEST_SECRET });
-  server = await startTestServer(db.url);
-  const [g] = await db.db.select().from(repairGroups).where(eq(repairGroups.slug, 'kestlebridge-menders'));
-  groupId = g.id;
+  app = await startDemoApi();
+  ({ db, groupId } = app);
   const [row] = await db.db
     .select({ id: bookingItems.id, fixer: itemOutcomes.recordedBy })
     .from(bookingItems)
@@ -49,13 +43,9 @@ beforeAll(async () => {
     .where(eq(bookingItems.id, itemId));
   await db.db.update(itemOutcomes).set({ notes: PLANTED.notes }).where(eq(itemOutcomes.itemId, itemId));
   await db.db.update(users).set({ name: PLANTED.fixer }).where(eq(users.id, row.fixer!));
-  as = new Agent(server.url);
-  expect((await as.login('organiser@example.org', DEMO_PASSWORD)).status).toBe(200);
+  as = await app.signIn('organiser');
 });
-afterAll(async () => {
-  await server.stop();
-  await db.drop();
-});
+afterAll(() => app.stop());
 
 const starts = /^[=+\-@\t\r]/;
 

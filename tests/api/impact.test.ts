@@ -1,50 +1,32 @@
 import { eq, sql } from 'drizzle-orm';
 import { parse } from 'csv-parse/sync';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { DEMO_PASSWORD } from '../../shared/constants';
-import {
-  bookingItems,
-  bookings,
-  events,
-  followUps,
-  outbox,
-  repairGroups,
-  slots,
-} from '../../server/src/db/schema/index';
-import { ORDS_FIELDS } from '../../server/src/features/impact/exports';
+import { bookingItems, bookings, events, followUps, outbox, slots } from '../../server/src/db/schema/index';
+import { ORDS_FIELDS } from '../../shared/impact/open-repair-data';
 import { sendFollowUpReminders } from '../../server/src/features/impact/follow-ups';
 import { sendThankYous } from '../../server/src/features/impact/thanks';
-import { seedDemo } from '../../server/src/seed/demo';
 import { TODAY_TITLE } from '../../server/src/seed/demo-today';
 import type { RunningServer } from '../../server/src/server';
-import { createTestDatabase, type TestDatabase } from '../support/db';
+import { type TestDatabase } from '../support/db';
 import { Agent } from '../support/http';
-import { startTestServer, TEST_SECRET } from '../support/server';
+import { startDemoApi, type DemoApi } from '../support/demo-app';
 
 let db: TestDatabase;
+let app: DemoApi;
 let server: RunningServer;
 let groupId: number;
 let todayId: number;
 const as: Record<string, Agent> = {};
 
 beforeAll(async () => {
-  db = await createTestDatabase();
-  await seedDemo(db.db, { linkSecret: TEST_SECRET });
-  server = await startTestServer(db.url);
-  const [g] = await db.db.select().from(repairGroups).where(eq(repairGroups.slug, 'kestlebridge-menders'));
-  groupId = g.id;
+  app = await startDemoApi();
+  ({ db, server, groupId } = app);
   const [t] = await db.db.select().from(events).where(eq(events.title, TODAY_TITLE));
   todayId = t.id;
-  for (const who of ['organiser', 'fixer', 'host', 'admin']) {
-    as[who] = new Agent(server.url);
-    expect((await as[who].login(`${who}@example.org`, DEMO_PASSWORD)).status).toBe(200);
-  }
+  for (const who of ['organiser', 'fixer', 'host', 'admin']) as[who] = await app.signIn(who);
   as.anon = new Agent(server.url);
 });
-afterAll(async () => {
-  await server.stop();
-  await db.drop();
-});
+afterAll(() => app.stop());
 
 /**
  * The same figures counted straight from the records, without the rollup: items that reached the desk, not

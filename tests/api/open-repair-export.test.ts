@@ -1,38 +1,28 @@
 import { eq, sql } from 'drizzle-orm';
 import { parse } from 'csv-parse/sync';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { DEMO_PASSWORD } from '../../shared/constants';
 import { ORDS_PRODUCT_CATEGORIES } from '../../shared/impact/ords-categories';
-import { repairGroups } from '../../server/src/db/schema/index';
-import { ORDS_FIELDS } from '../../server/src/features/impact/exports';
-import { seedDemo } from '../../server/src/seed/demo';
-import type { RunningServer } from '../../server/src/server';
-import { createTestDatabase, type TestDatabase } from '../support/db';
+import { bookingItems, bookings } from '../../server/src/db/schema/index';
+import { ORDS_FIELDS } from '../../shared/impact/open-repair-data';
+import { type TestDatabase } from '../support/db';
 import { Agent } from '../support/http';
-import { startTestServer, TEST_SECRET } from '../support/server';
+import { startDemoApi, type DemoApi } from '../support/demo-app';
 
 /**
  * The Open Repair Data export checked value by value against the v0.3 columns, codelists and patterns written out in
  * REFERENCE.md §5 (the standard's text and the table schema published with the 2025-07 open data).
  */
 let db: TestDatabase;
-let server: RunningServer;
+let app: DemoApi;
 let groupId: number;
 let as: Agent;
 
 beforeAll(async () => {
-  db = await createTestDatabase();
-  await seedDemo(db.db, { linkSecret: TEST_SECRET });
-  server = await startTestServer(db.url);
-  const [g] = await db.db.select().from(repairGroups).where(eq(repairGroups.slug, 'kestlebridge-menders'));
-  groupId = g.id;
-  as = new Agent(server.url);
-  expect((await as.login('organiser@example.org', DEMO_PASSWORD)).status).toBe(200);
+  app = await startDemoApi();
+  ({ db, groupId } = app);
+  as = await app.signIn('organiser');
 });
-afterAll(async () => {
-  await server.stop();
-  await db.drop();
-});
+afterAll(() => app.stop());
 
 const STATUSES = ['Unknown', 'Fixed', 'Repairable', 'End of life'];
 const BARRIERS = [
@@ -126,7 +116,7 @@ describe('the Open Repair Data export, v0.3', () => {
     expect(ids.length).toBeLessThanOrEqual(Number(n));
     expect(powered.rows.some((x) => /Clothing|Bicycle|Chair/.test(x.partner_product_category))).toBe(false);
     expect(
-      (await new Agent(server.url).get(`/api/exports/open-repair-data-unpowered.csv?groupId=${groupId}`)).status,
+      (await new Agent(app.server.url).get(`/api/exports/open-repair-data-unpowered.csv?groupId=${groupId}`)).status,
     ).toBe(401);
   });
 
@@ -140,5 +130,20 @@ describe('the Open Repair Data export, v0.3', () => {
     const { rows } = await file('open-repair-data');
     expect(new Set(rows.map((x) => x.country))).toEqual(new Set(['NLD']));
     await as.send('PUT', `/api/groups/${groupId}/settings`, { country: 'GBR' });
+  });
+
+  it('takes the visitor’s name, e-mail address and phone number out of the problem text', async () => {
+    const { rows } = await file('open-repair-data');
+    const itemId = Number(rows[0].id.replace('mendery-', ''));
+    const [item] = await db.db.select().from(bookingItems).where(eq(bookingItems.id, itemId));
+    const [booking] = await db.db.select().from(bookings).where(eq(bookings.id, item.bookingId));
+    const first = booking.visitorName.split(' ')[0];
+    await db.db
+      .update(bookingItems)
+      .set({ fault: `${first} says it trips the fuse; ring 07700 900123 or ${first.toLowerCase()}@example.org` })
+      .where(eq(bookingItems.id, itemId));
+    const again = (await file('open-repair-data')).rows.find((x) => x.id === rows[0].id)!;
+    expect(again.problem).toBe('[name] says it trips the fuse; ring [number] or [e-mail]');
+    await db.db.update(bookingItems).set({ fault: item.fault }).where(eq(bookingItems.id, itemId));
   });
 });

@@ -1,38 +1,19 @@
 import { stringify } from 'csv-stringify/sync';
 import { safeCsvCast } from '../../../../shared/files/csv-cells';
 import { BARRIER_LABELS, OUTCOME_LABELS } from '../../../../shared/event-day/constants';
-import { ordsBarrierText, ordsStatusText } from '../../../../shared/impact/open-repair-data';
+import { ORDS_FIELDS, ordsBarrierText, ordsStatusText } from '../../../../shared/impact/open-repair-data';
+import { scrubPersonalData } from '../../../../shared/privacy/scrub';
 import { ordsCategoryOf } from '../../../../shared/impact/ords-categories';
 import type { AppContext } from '../../context';
 import { openRepairDataRows, recordFileRows } from './queries/exports';
 import type { StatsFilter } from './queries/stats';
 
 /**
- * The Open Repair Data Standard v0.3 columns, in the order of the published data files (REFERENCE.md §5). The
- * optional `record_date` is left out, as the published files leave it out.
+ * Personal data stays out of a file: e-mail addresses, phone numbers and the visitor's name in their own words are
+ * taken out (shared/privacy/scrub.ts), and the text is kept to one line.
  */
-export const ORDS_FIELDS = [
-  'id',
-  'data_provider',
-  'country',
-  'partner_product_category',
-  'product_category',
-  'product_category_id',
-  'brand',
-  'year_of_manufacture',
-  'product_age',
-  'repair_status',
-  'repair_barrier_if_end_of_life',
-  'group_identifier',
-  'event_date',
-  'problem',
-] as const;
-
-/** Personal data stays out of a pooled file: addresses and phone numbers in the visitor's words are blanked. */
-const scrub = (text: string) =>
-  text
-    .replace(/[\w.+-]+@[\w-]+\.[\w.-]+/g, '[e-mail]')
-    .replace(/\+?\d[\d ()-]{7,}\d/g, '[number]')
+const scrub = (text: string, visitor: string | null) =>
+  scrubPersonalData(text, visitor ? [visitor] : [])
     .replace(/\s+/g, ' ')
     .trim();
 
@@ -63,7 +44,7 @@ export async function openRepairDataCsv(ctx: AppContext, f: StatsFilter, powered
           repair_barrier_if_end_of_life: ordsBarrierText(r.outcome, r.barrier),
           group_identifier: r.groupSlug,
           event_date: r.startsAt.toISOString().slice(0, 10),
-          problem: scrub(r.fault),
+          problem: scrub(r.fault, r.visitor),
         },
       ];
     }),
@@ -85,7 +66,7 @@ export async function recordsCsv(ctx: AppContext, f: StatsFilter): Promise<strin
       brand: r.brand ?? '',
       model: r.model ?? '',
       age_years: r.ageYears ?? '',
-      fault: scrub(r.fault),
+      fault: scrub(r.fault, r.visitor),
       outcome: r.outcome ? OUTCOME_LABELS[r.outcome] : '',
       barrier: r.barrier ? BARRIER_LABELS[r.barrier] : '',
       part: r.part ?? '',
@@ -96,7 +77,7 @@ export async function recordsCsv(ctx: AppContext, f: StatsFilter): Promise<strin
       kg_counted: r.outcome === 'fixed' ? (r.weighedKg ?? r.avgKg) : '',
       fixer: r.fixer ?? '',
       return_of_item: r.returnOf ?? '',
-      notes: r.notes ? scrub(r.notes) : '',
+      notes: r.notes ? scrub(r.notes, r.visitor) : '',
     })),
     {
       header: true,
