@@ -107,7 +107,11 @@ export type OrdsCategory = { powered: true; id: number; text: OrdsProductCategor
  * Where a category goes in the file. An electrical category (one with a WEEE category) that has no mapping of its
  * own, such as one an admin added, is "Misc"; a category with no WEEE category is unpowered.
  */
-export function ordsCategoryOf(c: { slug: string; weeeCategory: number | null }): OrdsCategory {
+export function ordsCategoryOf(c: { slug: string; weeeCategory: number | null }, kept?: string | null): OrdsCategory {
+  // A record brought in from a file keeps the category the file gave it.
+  if (kept && (ORDS_PRODUCT_CATEGORIES as readonly string[]).includes(kept))
+    return { powered: true, id: ordsCategoryId(kept as OrdsProductCategory), text: kept as OrdsProductCategory };
+  if (kept && /^Unpowered - \S/.test(kept)) return { powered: false, text: kept };
   const mapped = ORDS_CATEGORY_OF_SLUG[c.slug];
   if (mapped) return { powered: true, id: ordsCategoryId(mapped), text: mapped };
   if (c.weeeCategory !== null) return { powered: true, id: ordsCategoryId('Misc'), text: 'Misc' };

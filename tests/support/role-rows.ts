@@ -1,4 +1,4 @@
-import { adminOnly, everyone, ownOrganiser, ownStaff, ownVolunteers, signedIn, type Row } from './roles';
+import { adminOnly, everyone, ownOrganiser, ownStaff, ownVolunteers, signedIn, type Fixtures, type Row } from './roles';
 
 /**
  * Rows for the routes the first table left out: auth, invites, the mailbox, slots, publish, close and cancel, bookings,
@@ -104,6 +104,12 @@ export const moreRows: Row[] = [
   ['PATCH', (g) => `/api/follow-ups/${g.item}`, { ...ownOrganiser, organiser: 403, admin: 400 }, {}],
   // The open data file of items without power, beside the main one (tests/api/roles.test.ts has that one).
   ['GET', (g) => `/api/exports/open-repair-data-unpowered.csv?groupId=${g.own}`, ownOrganiser],
+  // Bringing in earlier records: organisers of the group, or admins (a whole network's file: admins only).
+  ['GET', (g) => `/api/imports?groupId=${g.own}`, ownOrganiser],
+  ['GET', () => '/api/imports', adminOnly],
+  ['GET', () => '/api/imports/999999', signedIn(404)],
+  ['POST', () => '/api/imports/preview', signedIn(400), {}],
+  ['POST', () => '/api/imports', { ...adminOnly, organiser: 400, admin: 400 }, (g: Fixtures) => ({ groupId: g.own })],
   // The toolkit: knowledge and the parts drawer.
   ['PUT', () => '/api/knowledge/999999/writeup', volunteersOr(400), {}],
   ['GET', (g) => `/api/groups/${g.own}/knowledge-sharing`, ownOrganiser],

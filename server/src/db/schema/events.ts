@@ -48,6 +48,8 @@ export const events = mysqlTable(
     thankYouSentAt: timestamp3('thank_you_sent_at'),
     /** The last queue number handed out at the desk; taken under the event row's lock. */
     queueCounter: int('queue_counter').notNull().default(0),
+    /** A past session made to hold records brought in from a file (one per group and date). */
+    imported: boolean('imported').notNull().default(false),
     createdAt: createdAt(),
   },
   (t) => [

@@ -26,6 +26,8 @@ export const repairGroups = mysqlTable(
     /** When the retention job last ran for the group, and how many bookings it anonymised then. */
     retentionRanAt: timestamp3('retention_ran_at'),
     retentionAnonymised: int('retention_anonymised').notNull().default(0),
+    /** Made by a network import for a group_identifier with no group yet: records only, until an admin hands it on. */
+    historyOnly: boolean('history_only').notNull().default(false),
     createdAt: createdAt(),
   },
   (t) => [uniqueIndex('repair_groups_slug_uq').on(t.slug)],

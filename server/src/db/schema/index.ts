@@ -7,3 +7,4 @@ export * from './volunteers';
 export * from './event-day';
 export * from './impact';
 export * from './toolkit';
+export * from './imports';

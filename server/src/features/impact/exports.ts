@@ -26,7 +26,7 @@ export async function openRepairDataCsv(ctx: AppContext, f: StatsFilter, powered
   const rows = await openRepairDataRows(ctx.database.db, f);
   return stringify(
     rows.flatMap((r) => {
-      const category = ordsCategoryOf({ slug: r.categorySlug, weeeCategory: r.weeeCategory });
+      const category = ordsCategoryOf({ slug: r.categorySlug, weeeCategory: r.weeeCategory }, r.ordsCategory);
       if (category.powered !== powered) return [];
       const age = r.ageYears === null ? null : Math.round(r.ageYears * 10) / 10;
       return [

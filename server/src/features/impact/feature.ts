@@ -2,6 +2,7 @@ import type { Feature } from '../../core/feature';
 import { refreshCells, refreshEventCells, refreshItemCells } from './queries/cells';
 import { afterOutcome, markCameBack, markRebooked, sendFollowUpReminders } from './follow-ups';
 import { impactPublicRoutes, impactRoutes } from './routes';
+import { runImports } from './imports';
 import { sendThankYous } from './thanks';
 
 export const impactFeature: Feature = {
@@ -17,5 +18,6 @@ export const impactFeature: Feature = {
   jobs: [
     { name: 'part follow-up reminders', run: sendFollowUpReminders },
     { name: 'thank-you mails', run: sendThankYous },
+    { name: 'imports of earlier records', run: runImports },
   ],
 };

@@ -7,6 +7,7 @@ import { HttpError } from '../../http/errors';
 import { body, params, query, paramId } from '../../http/validate';
 import { eventGroupId } from '../../core/events';
 import { openRepairDataCsv, recordsCsv } from './exports';
+import { importRoutes } from './import-routes';
 import { followUpGroupId, listFollowUps, setFollowUpStatus } from './follow-ups';
 import {
   assertDateRange,
@@ -69,6 +70,7 @@ function statsGuard(ctx: AppContext) {
 
 export function impactRoutes(ctx: AppContext) {
   const r = Router();
+  r.use(importRoutes(ctx));
   const guard = statsGuard(ctx);
   const filter = (req: Request) => {
     const q = query(req, statsQuery);

@@ -5,6 +5,7 @@ import {
   bookings,
   categories,
   events,
+  importedRecords,
   itemOutcomes,
   repairGroups,
   users,
@@ -39,6 +40,7 @@ export const openRepairDataRows = (db: DbOrTx, f: StatsFilter) =>
       outcome: itemOutcomes.outcome,
       barrier: itemOutcomes.barrier,
       startsAt: events.startsAt,
+      ordsCategory: importedRecords.ordsCategory,
     })
     .from(bookingItems)
     .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
@@ -46,6 +48,7 @@ export const openRepairDataRows = (db: DbOrTx, f: StatsFilter) =>
     .innerJoin(repairGroups, eq(repairGroups.id, events.groupId))
     .innerJoin(categories, eq(categories.id, bookingItems.categoryId))
     .leftJoin(itemOutcomes, eq(itemOutcomes.itemId, bookingItems.id))
+    .leftJoin(importedRecords, eq(importedRecords.itemId, bookingItems.id))
     .where(and(...filterOf(f)))
     .orderBy(asc(events.startsAt), asc(bookingItems.id));
 

@@ -1,0 +1,34 @@
+import { z } from 'zod';
+import { IMPORT_FIELDS } from '../impact/ords-reader';
+
+const fieldMatch = z.partialRecord(z.enum(IMPORT_FIELDS), z.string().trim().max(200));
+
+/** The form fields sent with a file to bring in. `mapping` is JSON text: our field → the sheet's column. */
+export const importForm = z
+  .object({
+    scope: z.enum(['group', 'network'], { error: 'Choose one group or the whole network.' }).default('group'),
+    groupId: z.preprocess((v) => (v === '' ? undefined : v), z.coerce.number().int().positive().optional()),
+    mapping: z
+      .string()
+      .max(10_000)
+      .optional()
+      .transform((s, c) => {
+        if (!s) return {};
+        try {
+          const parsed = fieldMatch.safeParse(JSON.parse(s));
+          if (parsed.success) return Object.fromEntries(Object.entries(parsed.data).filter(([, v]) => v));
+        } catch {
+          // Reported below.
+        }
+        c.addIssue({ code: 'custom', message: 'The column matching could not be read. Match the columns again.' });
+        return z.NEVER;
+      }),
+  })
+  .refine((v) => v.scope === 'network' || v.groupId !== undefined, {
+    path: ['groupId'],
+    message: 'Choose the group the records belong to.',
+  });
+
+export const importListQuery = z.object({
+  groupId: z.preprocess((v) => (v === '' ? undefined : v), z.coerce.number().int().positive().optional()),
+});
