@@ -22,6 +22,12 @@ export const ORDS_FIELDS = [
   'problem',
 ] as const;
 export type OrdsField = (typeof ORDS_FIELDS)[number];
+
+/** The v0.3 columns a file may bring; the category's id is read from its text, which every version carries. */
+export type ImportField = Exclude<OrdsField, 'product_category_id'>;
+export const IMPORT_FIELDS = ORDS_FIELDS.filter((f): f is ImportField => f !== 'product_category_id');
+/** The fields a row cannot do without. */
+export const REQUIRED_FIELDS: readonly ImportField[] = ['id', 'repair_status', 'event_date'];
 /**
  * The Open Repair Data Standard's codelists (v0.3, REFERENCE.md §5). Their wording belongs to the file only: the
  * screens use Mendery's own words (shared/event-day/constants.ts).

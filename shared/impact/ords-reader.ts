@@ -1,6 +1,6 @@
 import { parse } from 'csv-parse/sync';
 import type { Barrier } from '../event-day/constants';
-import { ORDS_BARRIER, ORDS_FIELDS, ORDS_REPAIR_STATUS, type OrdsField } from './open-repair-data';
+import { IMPORT_FIELDS, ORDS_BARRIER, ORDS_REPAIR_STATUS, REQUIRED_FIELDS, type ImportField } from './open-repair-data';
 import { ORDS_PRODUCT_CATEGORIES, ordsCategoryId, type OrdsProductCategory } from './ords-categories';
 import type { RepairStatus } from './visits';
 
@@ -9,11 +9,7 @@ import type { RepairStatus } from './visits';
  * matched to ours. Pure: bytes in, records and refusals out. Each refusal names its row (the file's line number,
  * header = 1), field and reason, in Mendery's words; good rows are kept.
  */
-/** The v0.3 columns a file may bring; the category's id is read from its text, which every version carries. */
-export type ImportField = Exclude<OrdsField, 'product_category_id'>;
-export const IMPORT_FIELDS = ORDS_FIELDS.filter((f): f is ImportField => f !== 'product_category_id');
-/** The fields a row cannot do without. */
-export const REQUIRED_FIELDS: readonly ImportField[] = ['id', 'repair_status', 'event_date'];
+export { IMPORT_FIELDS, REQUIRED_FIELDS, type ImportField } from './open-repair-data';
 
 export type FileKind = 'ords-0.3' | 'ords-0.2' | 'plain';
 

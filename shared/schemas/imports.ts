@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { IMPORT_FIELDS } from '../impact/ords-reader';
+import { IMPORT_FIELDS } from '../impact/open-repair-data';
 
 const fieldMatch = z.partialRecord(z.enum(IMPORT_FIELDS), z.string().trim().max(200));
 

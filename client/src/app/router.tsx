@@ -140,6 +140,10 @@ export const router = createBrowserRouter([
             ...page(() => import('../routes/impact/records'), 'ImpactRecordsPage', allow.organiser),
           },
           {
+            path: 'groups/:groupId/import',
+            ...page(() => import('../routes/impact/import'), 'GroupImportPage', allow.organiser),
+          },
+          {
             path: 'groups/:groupId/follow-ups',
             ...page(() => import('../routes/impact/follow-ups'), 'FollowUpsPage', allow.organiser),
           },

@@ -43,6 +43,7 @@ export const paths = {
   networkImpact: () => '/admin/impact',
   impactRecords: (q: string) => `/impact/records${q}`,
   followUps: (groupId: number) => `/groups/${groupId}/follow-ups`,
+  groupImport: (groupId: number) => `/groups/${groupId}/import`,
   report: (eventId: number) => `/events/${eventId}/report`,
   groupReport: (groupId: number, q = '') => `/groups/${groupId}/report${q}`,
   publicImpact: (groupId?: number) => (groupId ? `/impact/groups/${groupId}` : '/impact'),

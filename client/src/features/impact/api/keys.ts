@@ -14,4 +14,6 @@ export const impactKeys = {
   followUps: (groupId: number) => [...impactKeys.all, 'follow-ups', groupId] as const,
   rebook: (token: string) => [...impactKeys.all, 'rebook', token] as const,
   settings: () => [...impactKeys.all, 'settings'] as const,
+  imports: (groupId: number) => [...impactKeys.all, 'imports', groupId] as const,
+  import: (id: number) => [...impactKeys.all, 'import', id] as const,
 };

@@ -198,6 +198,9 @@ function Actions({ filter, groupId, groupName }: { filter: StatsFilter; groupId?
             <Link to={paths.publicImpact(groupId)} className={secondaryLink}>
               Public page
             </Link>
+            <Link to={paths.groupImport(groupId)} className={secondaryLink}>
+              Bring in earlier records
+            </Link>
             <Button
               variant="secondary"
               aria-expanded={embedOpen}

@@ -1,0 +1,90 @@
+import type { ImportJobView } from '../../../../../shared/api/imports';
+import { Alert } from '../../../components/ui/feedback';
+import { IMPORT_FIELD_WORDS } from './import-words';
+
+const STATUS_WORDS: Record<ImportJobView['status'], string> = {
+  queued: 'Waiting to start',
+  running: 'Bringing records in',
+  done: 'Finished',
+  failed: 'Stopped',
+};
+
+/** One import: a progress bar while it works, then its counts and every row it refused, with the reason. */
+export function ImportProgress({ job }: { job: ImportJobView }) {
+  const readable = Math.max(0, job.total - job.refused);
+  const share = job.status === 'done' ? 1 : readable ? Math.min(1, job.done / readable) : 0;
+  const percent = Math.round(share * 100);
+  return (
+    <div className="space-y-4">
+      <div>
+        <div className="flex flex-wrap items-baseline justify-between gap-2">
+          <p className="font-bold text-navy">
+            {STATUS_WORDS[job.status]} · {job.fileName}
+          </p>
+          <p className="text-sm text-ink-soft">{percent}%</p>
+        </div>
+        <div
+          role="progressbar"
+          aria-label={`Progress of ${job.fileName}`}
+          aria-valuemin={0}
+          aria-valuemax={100}
+          aria-valuenow={percent}
+          className="mt-2 h-3 overflow-hidden rounded-full bg-ink/10"
+        >
+          <div
+            className={`h-full rounded-full transition-[width] ${job.status === 'failed' ? 'bg-alert' : 'bg-sage'}`}
+            style={{ width: `${percent}%` }}
+          />
+        </div>
+      </div>
+      <dl className="grid grid-cols-2 gap-3 text-center sm:grid-cols-4">
+        {[
+          ['Rows in the file', job.total],
+          ['Brought in', job.imported],
+          ['Here already', job.skipped],
+          ['Refused', job.refused],
+        ].map(([label, n]) => (
+          <div key={label} className="rounded-lg bg-paper px-2 py-3">
+            <dt className="text-xs font-semibold text-ink-soft">{label}</dt>
+            <dd className="text-xl font-bold text-navy">{n}</dd>
+          </div>
+        ))}
+      </dl>
+      {job.status === 'failed' && <Alert tone="error">{job.message ?? 'The import stopped.'}</Alert>}
+      {job.skipped > 0 && (
+        <p className="text-sm text-ink-soft">
+          Records already brought in by an earlier import (the same source and record number) are not added twice.
+        </p>
+      )}
+      {job.errors.length > 0 && (
+        <div>
+          <h3 className="font-bold">Rows left out</h3>
+          <p className="text-sm text-ink-soft">
+            Correct these rows in the file and bring it in again: the rows already in are not added twice.
+            {job.refused > job.errors.length && ` The first ${job.errors.length} of ${job.refused} are shown.`}
+          </p>
+          <div className="mt-2 max-h-96 overflow-auto rounded-lg ring-1 ring-ink/10">
+            <table className="w-full text-left text-sm">
+              <thead className="sticky top-0 bg-white">
+                <tr>
+                  <th className="px-3 py-2">Row</th>
+                  <th className="px-3 py-2">Column</th>
+                  <th className="px-3 py-2">Reason</th>
+                </tr>
+              </thead>
+              <tbody>
+                {job.errors.map((e) => (
+                  <tr key={`${e.row}-${e.field}`} className="border-t border-ink/5">
+                    <td className="px-3 py-2 tabular-nums">{e.row}</td>
+                    <td className="px-3 py-2">{IMPORT_FIELD_WORDS[e.field] ?? e.field}</td>
+                    <td className="px-3 py-2">{e.message}</td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          </div>
+        </div>
+      )}
+    </div>
+  );
+}
