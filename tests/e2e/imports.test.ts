@@ -32,10 +32,13 @@ describe('bringing in earlier records on a phone', () => {
     const { context, page } = await signedIn(browser, app.server.url, 'organiser', PHONE);
     await page.goto(`${app.server.url}/groups/${groupId}/impact`);
     await page.getByRole('link', { name: 'Bring in earlier records' }).click();
-    await page.getByRole('heading', { name: '1. Choose a file' }).waitFor({ timeout: 10_000 }).catch(async (e) => {
-      await page.screenshot({ path: shot('import-debug'), fullPage: true });
-      throw e;
-    });
+    await page
+      .getByRole('heading', { name: '1. Choose a file' })
+      .waitFor({ timeout: 10_000 })
+      .catch(async (e) => {
+        await page.screenshot({ path: shot('import-debug'), fullPage: true });
+        throw e;
+      });
     await page
       .getByLabel('CSV file')
       .setInputFiles({ name: 'old-records.csv', mimeType: 'text/csv', buffer: Buffer.from(SHEET) });
