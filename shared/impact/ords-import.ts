@@ -3,7 +3,7 @@ import { ORDS_CATEGORY_OF_SLUG, UNPOWERED_KIND_OF_SLUG, type OrdsProductCategory
 import type { ImportedRecord } from './ords-reader';
 
 /** Limits on one file brought in: its size, and the refusals kept to show (the count is always exact). */
-export const IMPORT_LIMITS = { maxBytes: 20 * 1024 * 1024, maxRows: 200_000, refusalsKept: 1000 } as const;
+export const IMPORT_LIMITS = { maxBytes: 30 * 1024 * 1024, maxRows: 200_000, refusalsKept: 1000 } as const;
 
 /** Where no Mendery kind is named after one of the standard's categories, the nearest kind by use and weight. */
 const NEAREST_KIND: Partial<Record<OrdsProductCategory, string>> = {

@@ -13,6 +13,7 @@ import { loadOrCreateSecrets, startLocalDatabase, step } from '../local-stack';
 import { measureTriage } from './triage';
 import { measureStats } from './stats';
 import { measureLighthouse } from './lighthouse';
+import { measureImport } from './import';
 import { bareBookingHandler, measureBooking } from './booking';
 
 measureTriage();
@@ -23,6 +24,11 @@ console.log('');
 if (!only && (!process.env.BENCH || process.env.BENCH === 'stats')) {
   await measureStats();
   if (process.env.BENCH === 'stats') process.exit(0);
+  console.log('');
+}
+if (!only && (!process.env.BENCH || process.env.BENCH === 'import')) {
+  await measureImport();
+  if (process.env.BENCH === 'import') process.exit(0);
   console.log('');
 }
 if (!only && (!process.env.BENCH || process.env.BENCH === 'lighthouse')) {

@@ -27,14 +27,14 @@ import {
   kindsForImport,
   knownKeys,
   recentJobs,
-  sessionForDate,
+  sessionsForDates,
   setJob,
   writeItems,
   type ImportJob,
   type ItemToWrite,
 } from './queries/imports';
 
-const BATCH = 500;
+const BATCH = 2000;
 const LEASE_MS = 60_000;
 const today = () => new Date().toISOString().slice(0, 10);
 
@@ -198,30 +198,36 @@ async function writeBatch(
         ctx.database.db.transaction(async (tx) => {
           const known = await knownKeys(tx, batch);
           const fresh = batch.filter((r) => !known.has(`${r.provider}\u0000${r.recordId}`));
-          const sessions = new Map<string, { eventId: number; bookingId: number }>();
+          // Whose each record is, then the sessions of each group's dates, made together.
           const groups = new Map<string, number>();
-          const items: ItemToWrite[] = [];
+          const groupOf = new Map<ImportedRecord, number>();
           for (const r of fresh) {
-            let groupId = job.groupId;
-            if (job.scope === 'network') {
-              const slug = slugForIdentifier(r.group!);
-              if (!groups.has(slug)) groups.set(slug, await groupForIdentifier(tx, slug, r.group!, r.country));
-              groupId = groups.get(slug)!;
+            if (job.scope !== 'network') {
+              groupOf.set(r, job.groupId!);
+              continue;
             }
-            const key = `${groupId}:${r.eventDate}`;
-            if (!sessions.has(key)) sessions.set(key, await sessionForDate(tx, groupId!, r.eventDate));
+            const slug = slugForIdentifier(r.group!);
+            if (!groups.has(slug)) groups.set(slug, await groupForIdentifier(tx, slug, r.group!, r.country));
+            groupOf.set(r, groups.get(slug)!);
+          }
+          const sessions = new Map<string, { eventId: number; bookingId: number }>();
+          for (const g of new Set(groupOf.values())) {
+            const dates = [...new Set(fresh.filter((r) => groupOf.get(r) === g).map((r) => r.eventDate))];
+            for (const [d, s] of await sessionsForDates(tx, g, dates)) sessions.set(`${g}:${d}`, s);
+          }
+          const items: ItemToWrite[] = fresh.map((r) => {
             const kind = bySlug.get(kindForRecord(r, kinds)) ?? kinds[0];
-            items.push({
+            return {
               record: r,
-              bookingId: sessions.get(key)!.bookingId,
+              bookingId: sessions.get(`${groupOf.get(r)}:${r.eventDate}`)!.bookingId,
               categoryId: kind.id,
               mains: Boolean(kind.mains),
               fault: scrubPersonalData(r.problem),
               outcome: outcomeForStatus(r.status),
               at: new Date(`${r.eventDate}T12:00:00Z`),
               jobId: job.id,
-            });
-          }
+            };
+          });
           await writeItems(tx, items);
           await refreshEventCells(tx, [...new Set([...sessions.values()].map((s) => s.eventId))]);
           const imported = items.length;

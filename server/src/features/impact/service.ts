@@ -83,6 +83,8 @@ export async function method(ctx: AppContext): Promise<Method> {
       'Kilograms diverted from landfill: the mass of the items fixed — weighed at the desk where it was, otherwise the average weight of its kind.',
       `Emissions avoided (kg CO2e): mass fixed × the production emission factor of its kind × the displacement factor (${d}).`,
       'Fix rate: items fixed ÷ items with a recorded outcome.',
+      'Items with no outcome recorded (and records brought in from a file with the status "Unknown") count as items, and in no outcome: not in the fix rate, and not in the kilograms or emissions.',
+      'Records brought in from a file count like any other: "Repairable" as a part needed, "End of life" with its reason, and their kind of item as the nearest Mendery kind, whose average weight is used.',
     ],
     categories: cats.map((c) => ({
       id: c.id,

@@ -1,3 +1,4 @@
+import mysql from 'mysql2';
 import { randomBytes } from 'node:crypto';
 import { and, desc, eq, inArray, isNull, lt, or, sql } from 'drizzle-orm';
 import { formatReference } from '../../../../../shared/booking/reference';
@@ -11,7 +12,6 @@ import {
   events,
   importedRecords,
   importJobs,
-  itemOutcomes,
   repairGroups,
   slots,
   venues,
@@ -88,19 +88,18 @@ export const kindsForImport = (db: DbOrTx) =>
     .select({ id: categories.id, slug: categories.slug, name: categories.name, mains: categories.mains })
     .from(categories);
 
-/** The keys among these that an earlier import already brought in. */
+/** The keys among these that an earlier import already brought in (one indexed lookup per data provider). */
 export async function knownKeys(tx: DbOrTx, records: ImportedRecord[]): Promise<Set<string>> {
-  if (!records.length) return new Set();
-  const rows = await tx
-    .select({ provider: importedRecords.provider, recordId: importedRecords.recordId })
-    .from(importedRecords)
-    .where(
-      inArray(
-        importedRecords.recordId,
-        records.map((r) => r.recordId),
-      ),
-    );
-  return new Set(rows.map((r) => `${r.provider}\u0000${r.recordId}`));
+  const known = new Set<string>();
+  for (const provider of new Set(records.map((r) => r.provider))) {
+    const ids = records.filter((r) => r.provider === provider).map((r) => r.recordId);
+    for (const r of await tx
+      .select({ recordId: importedRecords.recordId })
+      .from(importedRecords)
+      .where(and(eq(importedRecords.provider, provider), inArray(importedRecords.recordId, ids))))
+      known.add(`${provider}\u0000${r.recordId}`);
+  }
+  return known;
 }
 
 /** The group a network file names, made as a history-only group when there is none yet. */
@@ -125,18 +124,26 @@ export const IMPORT_VENUE = 'Records brought in';
 const NOON = 12;
 
 /**
- * The past session holding a group's records of one date, with its one booking: made on first use. Its thank-you
- * is marked sent, so no job writes to anyone about it.
+ * The past sessions holding a group's records of these dates, each with its one booking: made on first use, all of a
+ * batch's new ones in a few multi-row statements. Their thank-you is marked sent, so no job writes about them.
  */
-export async function sessionForDate(tx: DbOrTx, groupId: number, date: string) {
-  const startsAt = new Date(`${date}T${String(NOON).padStart(2, '0')}:00:00Z`);
-  const [found] = await tx
-    .select({ eventId: events.id, bookingId: bookings.id })
-    .from(events)
-    .innerJoin(bookings, eq(bookings.eventId, events.id))
-    .where(and(eq(events.groupId, groupId), eq(events.imported, true), eq(events.startsAt, startsAt)))
-    .limit(1);
-  if (found) return found;
+export async function sessionsForDates(tx: DbOrTx, groupId: number, dates: string[]) {
+  const startOf = (d: string) => new Date(`${d}T${String(NOON).padStart(2, '0')}:00:00Z`);
+  const keyOf = (d: Date) => d.toISOString().slice(0, 10);
+  const found = new Map<string, { eventId: number; bookingId: number }>();
+  const importedOn = (starts: Date[]) =>
+    and(eq(events.groupId, groupId), eq(events.imported, true), inArray(events.startsAt, starts));
+  const read = async (starts: Date[]) => {
+    for (const r of await tx
+      .select({ eventId: events.id, startsAt: events.startsAt, bookingId: bookings.id })
+      .from(events)
+      .innerJoin(bookings, eq(bookings.eventId, events.id))
+      .where(importedOn(starts)))
+      found.set(keyOf(r.startsAt), { eventId: r.eventId, bookingId: r.bookingId });
+  };
+  await read(dates.map(startOf));
+  const missing = dates.filter((d) => !found.has(d)).map(startOf);
+  if (!missing.length) return found;
   let [venue] = await tx
     .select({ id: venues.id })
     .from(venues)
@@ -146,48 +153,76 @@ export async function sessionForDate(tx: DbOrTx, groupId: number, date: string) 
       .insert(venues)
       .values({ groupId, name: IMPORT_VENUE, address: '', town: '', accessNotes: '' })
       .$returningId();
-  const endsAt = new Date(startsAt.getTime() + 3600_000);
-  const [{ id: eventId }] = await tx
-    .insert(events)
-    .values({
+  const hour = 3600_000;
+  await tx.insert(events).values(
+    missing.map((startsAt) => ({
       groupId,
       venueId: venue.id,
-      title: `Records of ${date}`,
+      title: `Records of ${keyOf(startsAt)}`,
       description: 'Repairs brought in from an earlier record.',
       startsAt,
-      endsAt,
+      endsAt: new Date(startsAt.getTime() + hour),
       slotMinutes: 60,
       slotCapacity: 1,
       skillLimits: {},
-      status: 'closed',
+      status: 'closed' as const,
       imported: true,
-      thankYouSentAt: endsAt,
-    })
-    .$returningId();
-  const [{ id: slotId }] = await tx
-    .insert(slots)
-    .values({ eventId, startsAt, endsAt, capacity: 1, booked: 1 })
-    .$returningId();
+      thankYouSentAt: new Date(startsAt.getTime() + hour),
+    })),
+  );
+  const made = await tx.select({ id: events.id, startsAt: events.startsAt }).from(events).where(importedOn(missing));
+  await tx.insert(slots).values(
+    made.map((e) => ({
+      eventId: e.id,
+      startsAt: e.startsAt,
+      endsAt: new Date(e.startsAt.getTime() + hour),
+      capacity: 1,
+      booked: 1,
+    })),
+  );
+  const slotOf = new Map(
+    (
+      await tx
+        .select({ id: slots.id, eventId: slots.eventId })
+        .from(slots)
+        .where(
+          inArray(
+            slots.eventId,
+            made.map((e) => e.id),
+          ),
+        )
+    ).map((r) => [r.eventId, r.id]),
+  );
   for (let attempt = 0; ; attempt++) {
     try {
-      const [{ id: bookingId }] = await tx
-        .insert(bookings)
-        .values({
+      await tx.insert(bookings).values(
+        made.map((e) => ({
           reference: formatReference(randomBytes(6)),
-          eventId,
-          slotId,
+          eventId: e.id,
+          slotId: slotOf.get(e.id)!,
           visitorName: 'Records brought in',
           manageTokenHash: randomBytes(32).toString('hex'),
-          consentAt: startsAt,
+          consentAt: e.startsAt,
           anonymisedAt: new Date(),
-        })
-        .$returningId();
-      return { eventId, bookingId };
+        })),
+      );
+      break;
     } catch (err) {
-      // A reference taken already (about a billion exist): draw another.
+      // A reference taken already (about a billion exist): the statement alone is undone; draw others.
       if (!isDuplicate(err) || attempt > 5) throw err;
     }
   }
+  await read(missing);
+  return found;
+}
+
+/**
+ * One multi-row INSERT, its values escaped by mysql2 (dates in UTC, as the pool reads them). Drizzle's builder takes
+ * most of a batch's time on thousands of rows; this is the same statement without it.
+ */
+async function bulkInsert(tx: DbOrTx, table: string, columns: string[], rows: unknown[][]) {
+  if (!rows.length) return;
+  await tx.execute(sql.raw(mysql.format('INSERT INTO ?? (??) VALUES ?', [table, columns, rows] as never, false, 'Z')));
 }
 
 export interface ItemToWrite {
@@ -217,20 +252,35 @@ export async function writeItems(tx: DbOrTx, items: ItemToWrite[]) {
     next.set(i.bookingId, position + 1);
     return { ...i, position };
   });
-  await tx.insert(bookingItems).values(
-    placed.map((i) => ({
-      bookingId: i.bookingId,
-      categoryId: i.categoryId,
-      brand: i.record.brand?.slice(0, 80) ?? null,
-      ageYears: i.record.ageYears === null ? null : Math.round(i.record.ageYears),
-      fault: i.fault,
-      mains: i.mains,
-      position: i.position,
-      status: 'done' as const,
-      checkedInAt: i.at,
-      startedAt: i.at,
-      doneAt: i.at,
-    })),
+  await bulkInsert(
+    tx,
+    'booking_items',
+    [
+      'booking_id',
+      'category_id',
+      'brand',
+      'age_years',
+      'fault',
+      'mains',
+      'position',
+      'status',
+      'checked_in_at',
+      'started_at',
+      'done_at',
+    ],
+    placed.map((i) => [
+      i.bookingId,
+      i.categoryId,
+      i.record.brand?.slice(0, 80) ?? null,
+      i.record.ageYears === null ? null : Math.round(i.record.ageYears),
+      i.fault,
+      i.mains,
+      i.position,
+      'done',
+      i.at,
+      i.at,
+      i.at,
+    ]),
   );
   const ids = new Map(
     (
@@ -242,22 +292,16 @@ export async function writeItems(tx: DbOrTx, items: ItemToWrite[]) {
   );
   const withIds = placed.map((i) => ({ ...i, itemId: ids.get(`${i.bookingId}:${i.position}`)! }));
   const outcomes = withIds.filter((i) => i.outcome);
-  if (outcomes.length)
-    await tx.insert(itemOutcomes).values(
-      outcomes.map((i) => ({
-        itemId: i.itemId,
-        outcome: i.outcome!,
-        barrier: i.outcome === 'end-of-life' ? i.record.barrier : null,
-        recordedAt: i.at,
-      })),
-    );
-  await tx.insert(importedRecords).values(
-    withIds.map((i) => ({
-      provider: i.record.provider,
-      recordId: i.record.recordId,
-      itemId: i.itemId,
-      jobId: i.jobId,
-      ordsCategory: i.record.ordsCategory,
-    })),
+  await bulkInsert(
+    tx,
+    'item_outcomes',
+    ['item_id', 'outcome', 'barrier', 'recorded_at'],
+    outcomes.map((i) => [i.itemId, i.outcome, i.outcome === 'end-of-life' ? i.record.barrier : null, i.at]),
+  );
+  await bulkInsert(
+    tx,
+    'imported_records',
+    ['provider', 'record_id', 'item_id', 'job_id', 'ords_category'],
+    withIds.map((i) => [i.record.provider, i.record.recordId, i.itemId, i.jobId, i.record.ordsCategory]),
   );
 }
