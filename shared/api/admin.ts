@@ -30,6 +30,8 @@ export interface AdminGroup {
   name: string;
   town: string;
   members: number;
+  /** Made by a network import for records only; an admin may merge it into the group it belongs to. */
+  historyOnly: boolean;
 }
 export interface AdminUser {
   id: number;

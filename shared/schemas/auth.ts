@@ -76,3 +76,8 @@ export const inviteSignupSchema = z.object({
   name: z.string().trim().min(1, 'Enter your name.').max(120),
   password: newPassword,
 });
+
+/** An admin merges a group made by a network import into the group its records belong to. */
+export const mergeGroupSchema = z.object({
+  into: z.coerce.number({ error: 'Choose a group.' }).int().positive('Choose a group.'),
+});

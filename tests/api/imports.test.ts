@@ -167,6 +167,20 @@ describe('bringing in earlier records', () => {
     expect((await as.admin.get(`/api/stats?groupId=${otherGroup}`)).json.items).toBe(1);
   });
 
+  it('lets an admin merge a history-only group into the group its records belong to, and nothing else', async () => {
+    const [made] = await db.db.select().from(repairGroups).where(eq(repairGroups.slug, 'repair-hub-zandvoort'));
+    const before = (await as.admin.get(`/api/stats?groupId=${otherGroup}`)).json.items;
+    expect((await as.organiser.post(`/api/admin/groups/${made.id}/merge`, { into: otherGroup })).status).toBe(403);
+    const real = await as.admin.post(`/api/admin/groups/${groupId}/merge`, { into: otherGroup });
+    expect(real.status).toBe(409);
+    expect((await as.admin.post(`/api/admin/groups/${made.id}/merge`, { into: made.id })).status).toBe(400);
+    expect((await as.admin.post(`/api/admin/groups/${made.id}/merge`, { into: otherGroup })).status).toBe(204);
+    expect((await as.admin.get(`/api/stats?groupId=${otherGroup}`)).json.items).toBe(before + 1);
+    const groups = (await as.admin.get('/api/admin/groups')).json as { id: number }[];
+    expect(groups.some((g) => g.id === made.id)).toBe(false);
+    expect((await as.admin.get(`/api/stats?groupId=${made.id}`)).json.items).toBe(0);
+  });
+
   it('lets only the group’s organisers and admins bring records in or read an import', async () => {
     const r = await upload(as.fixer, '/api/imports', { groupId: String(groupId) }, V03);
     expect(r.status).toBe(403);

@@ -104,6 +104,8 @@ export const moreRows: Row[] = [
   ['PATCH', (g) => `/api/follow-ups/${g.item}`, { ...ownOrganiser, organiser: 403, admin: 400 }, {}],
   // The open data file of items without power, beside the main one (tests/api/roles.test.ts has that one).
   ['GET', (g) => `/api/exports/open-repair-data-unpowered.csv?groupId=${g.own}`, ownOrganiser],
+  // An admin merges a history-only group (made by a network import) into another.
+  ['POST', () => `/api/admin/groups/999999/merge`, { ...adminOnly, admin: 404 }, (g: Fixtures) => ({ into: g.own })],
   // Bringing in earlier records: organisers of the group, or admins (a whole network's file: admins only).
   ['GET', (g) => `/api/imports?groupId=${g.own}`, ownOrganiser],
   ['GET', () => '/api/imports', adminOnly],

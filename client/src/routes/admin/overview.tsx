@@ -1,6 +1,7 @@
 import { Link } from 'react-router';
 import { Alert, Card, PageTitle, Spinner } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
+import { MergeGroup } from '../../features/admin/components/merge-group';
 import { useAdminGroups, adminGroupsQuery } from '../../features/admin/api/get-admin-groups';
 import { useAdminUsers, adminUsersQuery } from '../../features/admin/api/get-admin-users';
 import { useOutbox, outboxQuery } from '../../features/admin/api/get-outbox';
@@ -47,8 +48,9 @@ export function AdminOverviewPage() {
                     {g.name}
                   </Link>{' '}
                   <span className="text-sm text-ink-soft">
-                    · {g.town} · {g.members} roles
+                    {g.historyOnly ? ' · records brought in only' : ` · ${g.town} · ${g.members} roles`}
                   </span>
+                  {g.historyOnly && <MergeGroup group={g} groups={groups.data} />}
                 </li>
               ))}
             </ul>

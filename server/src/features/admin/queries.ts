@@ -1,6 +1,19 @@
 import { count, desc, eq, sql } from 'drizzle-orm';
 import type { DbOrTx } from '../../db/client';
-import { mailboxMessages, memberships, outbox, repairGroups, users } from '../../db/schema/index';
+import {
+  events,
+  followUps,
+  impactCells,
+  importJobs,
+  knowledgeEntries,
+  mailboxMessages,
+  memberships,
+  outbox,
+  repairGroups,
+  salvageParts,
+  users,
+  venues,
+} from '../../db/schema/index';
 
 export const mailboxRows = (db: DbOrTx) =>
   db
@@ -49,6 +62,7 @@ export const groupRows = (db: DbOrTx) =>
       name: repairGroups.name,
       town: repairGroups.town,
       slug: repairGroups.slug,
+      historyOnly: repairGroups.historyOnly,
       members: sql<number>`COUNT(${memberships.id})`,
     })
     .from(repairGroups)
@@ -74,3 +88,23 @@ export const userRows = (db: DbOrTx) =>
     .from(users)
     .orderBy(users.name)
     .limit(500);
+
+export const groupForMerge = async (db: DbOrTx, id: number) =>
+  (
+    await db
+      .select({ id: repairGroups.id, name: repairGroups.name, historyOnly: repairGroups.historyOnly })
+      .from(repairGroups)
+      .where(eq(repairGroups.id, id))
+      .for('update')
+  )[0] ?? null;
+
+/**
+ * Moves everything a history-only group holds (its past sessions and their venues, the figures' rollup, follow-ups,
+ * repair notes, parts and import jobs) to another group, then removes it. Items, bookings and outcomes hang off the
+ * sessions, so they move with them; the network's day sums do not name groups and stay as they are.
+ */
+export async function moveGroupInto(tx: DbOrTx, from: number, into: number) {
+  for (const table of [events, venues, impactCells, followUps, knowledgeEntries, salvageParts, importJobs])
+    await tx.update(table).set({ groupId: into }).where(eq(table.groupId, from));
+  await tx.delete(repairGroups).where(eq(repairGroups.id, from));
+}

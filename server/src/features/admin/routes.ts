@@ -1,9 +1,9 @@
 import { Router } from 'express';
 import { z } from 'zod';
-import { groupSchema } from '../../../../shared/schemas/auth';
+import { groupSchema, mergeGroupSchema } from '../../../../shared/schemas/auth';
 import type { AppContext } from '../../context';
 import { requireAdmin } from '../../auth/guards';
-import { body, params } from '../../http/validate';
+import { body, paramId, params } from '../../http/validate';
 import * as admin from './service';
 
 const idParam = z.object({ id: z.coerce.number().int().positive() });
@@ -34,6 +34,10 @@ export function adminRoutes(ctx: AppContext) {
   r.post('/admin/groups', async (req, res) =>
     res.status(201).json(await admin.createGroup(ctx, body(req, groupSchema))),
   );
+  r.post('/admin/groups/:id/merge', async (req, res) => {
+    await admin.mergeGroup(ctx, paramId(req, 'id'), body(req, mergeGroupSchema).into);
+    res.status(204).end();
+  });
   r.get('/admin/users', async (_req, res) => res.json(await admin.allUsers(ctx)));
   return r;
 }

@@ -74,3 +74,26 @@ export async function allUsers(ctx: AppContext) {
     verified: u.verified !== null,
   }));
 }
+
+/**
+ * Merges a group made by a network import (records only) into a real group: an admin's way to give its history to
+ * the group it belongs to. A group with people or its own sessions is never merged away.
+ */
+export async function mergeGroup(ctx: AppContext, from: number, into: number) {
+  if (from === into)
+    throw new HttpError(400, 'invalid', 'Some fields need attention.', { into: 'Choose another group.' });
+  await ctx.database.db.transaction(async (tx) => {
+    const source = await q.groupForMerge(tx, from);
+    const target = await q.groupForMerge(tx, into);
+    if (!source) throw notFound('That group');
+    if (!target)
+      throw new HttpError(400, 'invalid', 'Some fields need attention.', { into: 'That group was not found.' });
+    if (!source.historyOnly)
+      throw new HttpError(
+        409,
+        'not-history-only',
+        'Only a group made by an import, holding records only, can be merged away.',
+      );
+    await q.moveGroupInto(tx, from, into);
+  });
+}
