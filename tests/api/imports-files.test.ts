@@ -5,6 +5,7 @@ import type { RunningServer } from '../../server/src/server';
 import { createTestDatabase, type TestDatabase } from '../support/db';
 import { makeGroup, makeUser } from '../support/factories';
 import { Agent } from '../support/http';
+import { ORDS_BARRIER_TEXTS as BARRIERS } from '../support/ords-codelists';
 import { startTestServer } from '../support/server';
 
 /**
@@ -28,18 +29,8 @@ afterAll(async () => {
   await db.drop();
 });
 
-async function upload(groupId: number, body: string | Uint8Array<ArrayBuffer>) {
-  const form = new FormData();
-  form.append('groupId', String(groupId));
-  form.append('file', new Blob([body], { type: 'text/csv' }), 'records.csv');
-  const token = organiser.csrf ?? (await organiser.token());
-  const res = await fetch(`${server.url}/api/imports`, {
-    method: 'POST',
-    headers: { cookie: organiser.cookieHeader(), 'x-csrf-token': token, accept: 'application/json' },
-    body: form,
-  });
-  return { status: res.status, json: await res.json() };
-}
+const upload = (groupId: number, body: string | Uint8Array<ArrayBuffer>) =>
+  organiser.upload('/api/imports', { groupId: String(groupId) }, body);
 
 async function importDone(groupId: number, body: string | Uint8Array<ArrayBuffer>) {
   const r = await upload(groupId, body);
@@ -52,17 +43,10 @@ async function importDone(groupId: number, body: string | Uint8Array<ArrayBuffer
   throw new Error('the import did not finish');
 }
 
+/** The four statuses, in the order the rows cycle through them. */
+const STATUSES = ['Fixed', 'Repairable', 'End of life', 'Unknown'];
 const HEADER =
   'id,data_provider,country,partner_product_category,product_category,product_category_id,brand,year_of_manufacture,product_age,repair_status,repair_barrier_if_end_of_life,group_identifier,event_date,problem';
-const STATUSES = ['Fixed', 'Repairable', 'End of life', 'Unknown'];
-const BARRIERS = [
-  'Spare parts not available',
-  'Spare parts too expensive',
-  'No way to open product',
-  'Repair information not available',
-  'Lack of equipment',
-  'Item too worn out',
-];
 const UNPOWERED = ['Unpowered - Bicycle', 'Unpowered - Clothing', 'Unpowered - Furniture'];
 
 /** 120 invented records: every category, status and barrier, three unpowered kinds, dates over two years. */

@@ -42,23 +42,8 @@ afterAll(async () => {
   await db.drop();
 });
 
-async function upload(
-  agent: Agent,
-  path: string,
-  fields: Record<string, string>,
-  csv: string | Uint8Array<ArrayBuffer>,
-) {
-  const form = new FormData();
-  for (const [k, v] of Object.entries(fields)) form.append(k, v);
-  form.append('file', new Blob([csv], { type: 'text/csv' }), 'records.csv');
-  const token = agent.csrf ?? (await agent.token());
-  const res = await fetch(server.url + path, {
-    method: 'POST',
-    headers: { cookie: agent.cookieHeader(), 'x-csrf-token': token, accept: 'application/json' },
-    body: form,
-  });
-  return { status: res.status, json: await res.json() };
-}
+const upload = (agent: Agent, path: string, fields: Record<string, string>, csv: string | Uint8Array<ArrayBuffer>) =>
+  agent.upload(path, fields, csv);
 
 async function finished(agent: Agent, id: number) {
   for (let i = 0; i < 200; i++) {

@@ -6,6 +6,7 @@ import { bookingItems, bookings } from '../../server/src/db/schema/index';
 import { ORDS_FIELDS } from '../../shared/impact/open-repair-data';
 import { type TestDatabase } from '../support/db';
 import { Agent } from '../support/http';
+import { ORDS_BARRIER_TEXTS as BARRIERS, ORDS_STATUS_TEXTS as STATUSES } from '../support/ords-codelists';
 import { startDemoApi, type DemoApi } from '../support/demo-app';
 
 /**
@@ -23,16 +24,6 @@ beforeAll(async () => {
   as = await app.signIn('organiser');
 });
 afterAll(() => app.stop());
-
-const STATUSES = ['Unknown', 'Fixed', 'Repairable', 'End of life'];
-const BARRIERS = [
-  'Spare parts not available',
-  'Spare parts too expensive',
-  'No way to open product',
-  'Repair information not available',
-  'Lack of equipment',
-  'Item too worn out',
-];
 
 async function file(kind: string) {
   const r = await as.get(`/api/exports/${kind}.csv?groupId=${groupId}`);

@@ -64,6 +64,25 @@ export class Agent {
     return this.send('DELETE', path);
   }
 
+  /** A multipart form with one file in the field `file`, as a browser sends an upload. */
+  async upload(
+    path: string,
+    fields: Record<string, string>,
+    file: string | Uint8Array<ArrayBuffer>,
+    name = 'records.csv',
+  ) {
+    const form = new FormData();
+    for (const [k, v] of Object.entries(fields)) form.append(k, v);
+    form.append('file', new Blob([file], { type: 'text/csv' }), name);
+    const token = this.csrf ?? (await this.token());
+    const res = await fetch(this.base + path, {
+      method: 'POST',
+      headers: { cookie: this.cookieHeader(), 'x-csrf-token': token, accept: 'application/json' },
+      body: form,
+    });
+    return { status: res.status, json: await res.json() };
+  }
+
   /** Signs in and fetches the new token the new session needs. */
   async login(email: string, password: string) {
     const r = await this.post('/api/auth/login', { email, password });
