@@ -1,7 +1,7 @@
 import { eq } from 'drizzle-orm';
 import { parse } from 'csv-parse/sync';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { events, importJobs, repairGroups } from '../../server/src/db/schema/index';
+import { events, importJobs, memberships, repairGroups } from '../../server/src/db/schema/index';
 import { runImports } from '../../server/src/features/impact/imports';
 import type { RunningServer } from '../../server/src/server';
 import { createTestDatabase, type TestDatabase } from '../support/db';
@@ -159,6 +159,13 @@ describe('bringing in earlier records', () => {
     const real = await as.admin.post(`/api/admin/groups/${groupId}/merge`, { into: otherGroup });
     expect(real.status).toBe(409);
     expect((await as.admin.post(`/api/admin/groups/${made.id}/merge`, { into: made.id })).status).toBe(400);
+    // Once someone organises it, it is a group of its own and is never merged away.
+    const [m] = await db.db
+      .insert(memberships)
+      .values({ userId: (await makeUser(db.db)).id, groupId: made.id, role: 'organiser', status: 'active' })
+      .$returningId();
+    expect((await as.admin.post(`/api/admin/groups/${made.id}/merge`, { into: otherGroup })).status).toBe(409);
+    await db.db.delete(memberships).where(eq(memberships.id, m.id));
     expect((await as.admin.post(`/api/admin/groups/${made.id}/merge`, { into: otherGroup })).status).toBe(204);
     expect((await as.admin.get(`/api/stats?groupId=${otherGroup}`)).json.items).toBe(before + 1);
     const groups = (await as.admin.get('/api/admin/groups')).json as { id: number }[];

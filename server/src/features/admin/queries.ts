@@ -1,4 +1,4 @@
-import { count, desc, eq, sql } from 'drizzle-orm';
+import { and, count, desc, eq, sql } from 'drizzle-orm';
 import type { DbOrTx } from '../../db/client';
 import {
   events,
@@ -97,6 +97,16 @@ export const groupForMerge = async (db: DbOrTx, id: number) =>
       .where(eq(repairGroups.id, id))
       .for('update')
   )[0] ?? null;
+
+/** What would be lost or moved wrongly if a group were merged away: its people, and sessions of its own. */
+export async function groupHasOwnLife(db: DbOrTx, id: number) {
+  const [people] = await db.select({ n: count() }).from(memberships).where(eq(memberships.groupId, id));
+  const [own] = await db
+    .select({ n: count() })
+    .from(events)
+    .where(and(eq(events.groupId, id), eq(events.imported, false)));
+  return people.n > 0 || own.n > 0;
+}
 
 /**
  * Moves everything a history-only group holds (its past sessions and their venues, the figures' rollup, follow-ups,

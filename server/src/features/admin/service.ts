@@ -88,11 +88,11 @@ export async function mergeGroup(ctx: AppContext, from: number, into: number) {
     if (!source) throw notFound('That group');
     if (!target)
       throw new HttpError(400, 'invalid', 'Some fields need attention.', { into: 'That group was not found.' });
-    if (!source.historyOnly)
+    if (!source.historyOnly || (await q.groupHasOwnLife(tx, from)))
       throw new HttpError(
         409,
         'not-history-only',
-        'Only a group made by an import, holding records only, can be merged away.',
+        'Only a group made by an import, holding records only, can be merged away. This one has people or sessions of its own.',
       );
     await q.moveGroupInto(tx, from, into);
   });
