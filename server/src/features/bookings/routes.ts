@@ -29,6 +29,15 @@ import { rebook, rebookView } from './return-visit';
 const booking = { ...bookingService, ...changes, ...waitlist };
 
 const tokenQuery = z.object({ token: z.string().max(200).optional() });
+/**
+ * The booking's manage token: the client sends it in the X-Manage-Token header, which stays out of URLs and request
+ * logs; ?token= is still read for links mailed before.
+ */
+const manageToken = (req: Request) => {
+  const header = req.get('x-manage-token');
+  if (header !== undefined && header.length > 0 && header.length <= 200) return header;
+  return tokenQuery.parse(req.query).token;
+};
 const idempotencyKey = z
   .string()
   .trim()
@@ -45,7 +54,7 @@ export function bookingRoutes(ctx: AppContext) {
     if (!ref) throw notFound('That booking');
     return ref;
   };
-  const byToken = (req: Request) => booking.bookingByToken(ctx, reference(req), tokenQuery.parse(req.query).token);
+  const byToken = (req: Request) => booking.bookingByToken(ctx, reference(req), manageToken(req));
   // Bookings and waiting-list joins share one count per source address and one per e-mail address.
   const limits = visitorLimits(ctx, 'booking', {
     perAddress: ctx.env.BOOKING_RATE_MAX,
@@ -91,7 +100,7 @@ export function bookingRoutes(ctx: AppContext) {
 
   r.post('/bookings/:reference/move', async (req, res) => {
     const b = await byToken(req);
-    await booking.moveBooking(ctx, b.id, body(req, moveBookingSchema).slotId, tokenQuery.parse(req.query).token!);
+    await booking.moveBooking(ctx, b.id, body(req, moveBookingSchema).slotId, manageToken(req)!);
     res.json(await booking.bookingView(ctx, b.id));
   });
 
@@ -124,7 +133,7 @@ export function bookingRoutes(ctx: AppContext) {
     const { id } = params(req, z.object({ id: z.coerce.number().int().positive() }));
     const p = await photoWithOwner(db, id);
     if (!p) throw notFound('That photo');
-    const token = tokenQuery.parse(req.query).token;
+    const token = manageToken(req);
     // A bench photo of a group that shares its repair notes may be seen by any group's volunteers.
     const sharedBenchPhoto =
       p.kind === 'repair' && Boolean(p.shares) && Boolean(req.user && (req.user.admin || req.user.roles.length));

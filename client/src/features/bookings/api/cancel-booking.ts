@@ -3,7 +3,7 @@ import { api } from '../../../lib/api';
 import { bookingKeys } from './keys';
 
 const cancelBooking = (reference: string, token: string) =>
-  api('DELETE', `/api/bookings/${reference}?token=${encodeURIComponent(token)}`);
+  api('DELETE', `/api/bookings/${reference}`, undefined, { 'X-Manage-Token': token });
 
 export function useCancelBooking(reference: string, token: string, onChanged?: () => void) {
   const qc = useQueryClient();

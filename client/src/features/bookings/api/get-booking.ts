@@ -4,7 +4,7 @@ import { api } from '../../../lib/api';
 import { bookingKeys } from './keys';
 
 const getBooking = (reference: string, token: string) =>
-  api<BookingView>('GET', `/api/bookings/${reference}?token=${encodeURIComponent(token)}`);
+  api<BookingView>('GET', `/api/bookings/${reference}`, undefined, { 'X-Manage-Token': token });
 
 export const bookingQuery = (reference: string, token: string) =>
   queryOptions({ queryKey: bookingKeys.detail(reference), queryFn: () => getBooking(reference, token) });

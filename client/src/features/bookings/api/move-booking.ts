@@ -4,7 +4,7 @@ import { api } from '../../../lib/api';
 import { bookingKeys } from './keys';
 
 const moveBooking = (reference: string, token: string, slotId: number) =>
-  api<BookingView>('POST', `/api/bookings/${reference}/move?token=${encodeURIComponent(token)}`, { slotId });
+  api<BookingView>('POST', `/api/bookings/${reference}/move`, { slotId }, { 'X-Manage-Token': token });
 
 export function useMoveBooking(reference: string, token: string, onChanged?: () => void) {
   const qc = useQueryClient();
