@@ -57,6 +57,19 @@ export const firstAdminSchema = z
   .refine((v) => v.password === v.confirm, { path: ['confirm'], message: 'The two passwords differ.' });
 export type FirstAdminInput = z.infer<typeof firstAdminSchema>;
 
+/** A signed-in person changes their own password: the current one proves it is them. */
+export const changePasswordSchema = z
+  .object({
+    currentPassword: z
+      .string({ error: 'Enter your current password.' })
+      .min(1, 'Enter your current password.')
+      .max(128),
+    password: newPassword,
+    confirm: z.string({ error: 'Type the new password again.' }).max(128),
+  })
+  .refine((v) => v.password === v.confirm, { path: ['confirm'], message: 'The two passwords differ.' });
+export type ChangePasswordInput = z.infer<typeof changePasswordSchema>;
+
 export const groupSchema = z.object({
   name: z.string().trim().min(2, 'Give the group a name.').max(120),
   town: z.string().trim().min(1, 'Enter the town.').max(120),

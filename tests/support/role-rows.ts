@@ -29,6 +29,7 @@ export const moreRows: Row[] = [
   ['POST', () => '/api/auth/password-reset', everyone(400), {}],
   ['POST', () => '/api/auth/password-reset/confirm', everyone(400), {}],
   ['POST', () => '/api/auth/first-admin', everyone(400), {}],
+  ['POST', () => '/api/auth/password', signedIn(400), {}],
   // Invitations: the token is the key, whoever holds it.
   ['GET', () => '/api/invites/nope', everyone(404)],
   ['POST', () => '/api/invites/nope/accept', signedIn(404)],

@@ -1,4 +1,4 @@
-import { and, count, eq, gt, isNull, sql } from 'drizzle-orm';
+import { and, count, eq, gt, isNull, ne, sql } from 'drizzle-orm';
 import type { SessionUser } from '../../../shared/schemas/auth';
 import type { DbOrTx, Tx } from '../db/client';
 import { authTokens, memberships, repairGroups, sessions, settings, users } from '../db/schema/index';
@@ -120,6 +120,14 @@ export async function replacePassword(tx: Tx, userId: number, passwordHash: stri
     .set({ passwordHash, emailVerifiedAt: sql`COALESCE(${users.emailVerifiedAt}, NOW(3))` })
     .where(eq(users.id, userId));
   await tx.delete(sessions).where(sql`JSON_VALUE(${sessions.data}, '$.userId') = ${userId}`);
+}
+
+/** A new password chosen while signed in: every other session of that person ends, the one in use stays. */
+export async function changePassword(tx: Tx, userId: number, passwordHash: string, keepSessionId: string) {
+  await tx.update(users).set({ passwordHash }).where(eq(users.id, userId));
+  await tx
+    .delete(sessions)
+    .where(and(sql`JSON_VALUE(${sessions.data}, '$.userId') = ${userId}`, ne(sessions.sessionId, keepSessionId)));
 }
 
 export async function countUsers(db: DbOrTx): Promise<number> {

@@ -1,6 +1,7 @@
 import { Router, type Request } from 'express';
 import { rateLimit, ipKeyGenerator } from 'express-rate-limit';
 import {
+  changePasswordSchema,
   firstAdminSchema,
   loginSchema,
   resetConfirmSchema,
@@ -15,6 +16,7 @@ import { MariadbRateLimitStore } from '../http/rate-limit-store';
 import { body } from '../http/validate';
 import * as auth from './service';
 import { loadSessionUser } from './queries';
+import { requireUser } from './guards';
 import { sessionCookie } from './session';
 import { createFirstAdmin } from './setup';
 
@@ -131,6 +133,13 @@ export function authRoutes(ctx: AppContext, csrfToken: (req: Request) => string)
     const input = body(req, resetConfirmSchema);
     await auth.confirmPasswordReset(ctx, input.token, input.password);
     res.json({ message: 'Your password is changed. Sign in with the new one.' });
+  });
+
+  // A wrong current password counts as a failed sign-in from that source.
+  r.post('/password', requireUser, loginPerSource, async (req, res) => {
+    const input = body(req, changePasswordSchema);
+    await auth.changePassword(ctx, req.user!.id, req.sessionID, input);
+    res.json({ message: 'Your password is changed. Other devices signed in to your account are signed out.' });
   });
 
   r.post('/first-admin', async (req, res) => {

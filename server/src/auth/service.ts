@@ -1,9 +1,10 @@
-import type { LoginInput, SignupInput } from '../../../shared/schemas/auth';
+import type { ChangePasswordInput, LoginInput, SignupInput } from '../../../shared/schemas/auth';
 import type { AppContext } from '../context';
 import type { Tx } from '../db/client';
 import { HttpError } from '../http/errors';
 import { enqueueMail } from '../mail/outbox';
 import { composeMail } from '../mail/templates';
+import { refuseCommonPassword } from './common-passwords';
 import { dummyHash, hashPassword, verifyPassword } from './passwords';
 import * as q from './queries';
 import { newToken, sha256 } from './tokens';
@@ -46,6 +47,7 @@ export async function signup(ctx: AppContext, input: SignupInput): Promise<void>
   const group = await q.groupById(db, input.groupId);
   if (!group)
     throw new HttpError(400, 'invalid', 'Some fields need attention.', { groupId: 'Choose one of the listed groups.' });
+  refuseCommonPassword(input.password);
   const passwordHash = await hashPassword(input.password);
   await db.transaction(async (tx) => {
     const existing = await q.userByEmail(tx, input.email);
@@ -158,6 +160,7 @@ export async function requestPasswordReset(ctx: AppContext, email: string): Prom
 
 export async function confirmPasswordReset(ctx: AppContext, token: string, password: string): Promise<void> {
   // A dead link is refused before the costly hash; the transaction checks again as it spends the link.
+  refuseCommonPassword(password);
   if (!(await q.tokenIsLive(ctx.database.db, sha256(token), 'reset-password'))) throw invalidLink();
   const passwordHash = await hashPassword(password);
   await ctx.database.db.transaction(async (tx) => {
@@ -166,6 +169,45 @@ export async function confirmPasswordReset(ctx: AppContext, token: string, passw
     await q.replacePassword(tx, userId, passwordHash);
     await q.spendOpenTokens(tx, userId, 'verify-email');
   });
+}
+
+/**
+ * A signed-in person changes their password: the current one must be right (403 otherwise), the new one must not be
+ * a common one. Every other session of theirs ends, and a notice goes to their address in case it was not them.
+ */
+export async function changePassword(
+  ctx: AppContext,
+  userId: number,
+  sessionId: string,
+  input: ChangePasswordInput,
+): Promise<void> {
+  const { db } = ctx.database;
+  refuseCommonPassword(input.password);
+  const user = await q.userById(db, userId);
+  if (!user?.passwordHash || !(await verifyPassword(user.passwordHash, input.currentPassword))) {
+    const message = 'That is not your current password.';
+    throw new HttpError(403, 'wrong-password', message, { currentPassword: message });
+  }
+  if (input.password === input.currentPassword) {
+    const message = 'Choose a password that differs from the current one.';
+    throw new HttpError(400, 'invalid', message, { password: message });
+  }
+  const passwordHash = await hashPassword(input.password);
+  await db.transaction(async (tx) => {
+    await q.changePassword(tx, userId, passwordHash, sessionId);
+    await enqueueMail(
+      tx,
+      composeMail(user.email, 'Your Mendery password was changed', {
+        paragraphs: [
+          `Hello ${user.name},`,
+          'the password of your Mendery account was just changed, and every other device signed in to it was signed out.',
+          'If you did this, there is nothing more to do. If you did not, choose a new password at once with the button below and tell your group’s organiser.',
+        ],
+        action: { label: 'Choose a new password', url: `${ctx.env.publicUrl}/forgot-password` },
+      }),
+    );
+  });
+  ctx.outbox.kick();
 }
 
 export async function needsSetup(ctx: AppContext): Promise<boolean> {

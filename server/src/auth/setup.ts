@@ -3,6 +3,7 @@ import type { FirstAdminInput } from '../../../shared/schemas/auth';
 import type { AppContext } from '../context';
 import { isDuplicate } from '../db/retry';
 import { HttpError } from '../http/errors';
+import { refuseCommonPassword } from './common-passwords';
 import { hashPassword } from './passwords';
 import * as q from './queries';
 
@@ -42,6 +43,7 @@ export async function createFirstAdmin(ctx: AppContext, input: FirstAdminInput):
     const message = 'That setup code is not right. Copy it from the server’s console.';
     throw new HttpError(403, 'setup-code', message, { setupCode: message });
   }
+  refuseCommonPassword(input.password);
   const passwordHash = await hashPassword(input.password);
   try {
     return await ctx.database.db.transaction(async (tx) => {

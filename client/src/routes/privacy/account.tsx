@@ -1,12 +1,13 @@
 import { useNavigate } from 'react-router';
 import { PageTitle } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
+import { SignInSettingsCard } from '../../features/auth/components/sign-in-card';
 import { AccountDataPanel } from '../../features/privacy/components/account-data-panel';
 import { forgetCsrfToken } from '../../lib/api';
 import { userKeys } from '../../lib/auth';
 import { queryClient } from '../../lib/query-client';
 
-/** The signed-in person's own data: a copy of the account, and closing it. */
+/** The signed-in person's own account: password and sign-in, a copy of the account, and closing it. */
 export function MyDataPage() {
   const navigate = useNavigate();
   const closed = () => {
@@ -17,7 +18,8 @@ export function MyDataPage() {
   };
   return (
     <div className="mx-auto max-w-2xl space-y-4">
-      <PageTitle title="My data" lead="What Mendery holds about you, and how to leave." />
+      <PageTitle title="My data" lead="How you sign in, what Mendery holds about you, and how to leave." />
+      <SignInSettingsCard />
       <AccountDataPanel onClosed={closed} />
     </div>
   );

@@ -1,5 +1,6 @@
 import { ROLE_LABELS, type GroupRole } from '../../../../shared/constants';
 import type { AppContext } from '../../context';
+import { refuseCommonPassword } from '../../auth/common-passwords';
 import { hashPassword } from '../../auth/passwords';
 import { newToken, sha256 } from '../../auth/tokens';
 import { HttpError, notFound } from '../../http/errors';
@@ -100,6 +101,7 @@ export async function signupFromInvite(ctx: AppContext, token: string, input: { 
   const { invite: i } = await openInvite(ctx, token);
   const existing = await userByEmail(ctx.database.db, i.email);
   if (existing) throw new HttpError(409, 'has-account', 'This address already has an account: sign in to accept.');
+  refuseCommonPassword(input.password);
   const id = await insertConfirmedUser(ctx.database.db, {
     email: i.email,
     name: input.name,

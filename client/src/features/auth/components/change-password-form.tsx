@@ -1,0 +1,60 @@
+import { useState } from 'react';
+import { changePasswordSchema } from '../../../../../shared/schemas/auth';
+import { Button } from '../../../components/ui/button';
+import { Alert } from '../../../components/ui/feedback';
+import { TextField } from '../../../components/ui/field';
+import { applyServerErrors, useZodForm } from '../../../lib/form';
+import { useChangePassword } from '../api/change-password';
+
+/** The current password, then the new one twice; other devices are signed out when it is saved. */
+export function ChangePasswordForm() {
+  const change = useChangePassword();
+  const form = useZodForm(changePasswordSchema, { currentPassword: '', password: '', confirm: '' });
+  const [formError, setFormError] = useState<string | null>(null);
+  const [done, setDone] = useState<string | null>(null);
+  const onSubmit = form.handleSubmit(async (values) => {
+    setFormError(null);
+    setDone(null);
+    try {
+      const { message } = await change.mutateAsync(values);
+      form.reset({ currentPassword: '', password: '', confirm: '' });
+      setDone(message);
+    } catch (err) {
+      setFormError(applyServerErrors(form, err));
+    }
+  });
+  return (
+    <form onSubmit={onSubmit} noValidate className="space-y-4" aria-labelledby="change-password-title">
+      <h3 id="change-password-title" className="font-bold text-navy">
+        Change your password
+      </h3>
+      {formError && <Alert tone="error">{formError}</Alert>}
+      {done && <Alert tone="success">{done}</Alert>}
+      <TextField
+        label="Current password"
+        type="password"
+        autoComplete="current-password"
+        error={form.formState.errors.currentPassword?.message}
+        {...form.register('currentPassword')}
+      />
+      <TextField
+        label="New password"
+        type="password"
+        autoComplete="new-password"
+        hint="At least 10 characters, and not one of the passwords that are often used or have leaked."
+        error={form.formState.errors.password?.message}
+        {...form.register('password')}
+      />
+      <TextField
+        label="The new password again"
+        type="password"
+        autoComplete="new-password"
+        error={form.formState.errors.confirm?.message}
+        {...form.register('confirm')}
+      />
+      <Button type="submit" busy={form.formState.isSubmitting}>
+        Save the new password
+      </Button>
+    </form>
+  );
+}

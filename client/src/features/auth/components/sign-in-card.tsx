@@ -1,0 +1,15 @@
+import { Card } from '../../../components/ui/feedback';
+import { ChangePasswordForm } from './change-password-form';
+
+/** The signed-in person's password and, later, their second step at sign-in. */
+export function SignInSettingsCard() {
+  return (
+    <Card className="space-y-3">
+      <h2 className="text-lg">Password and sign-in</h2>
+      <p className="text-sm text-ink-soft">
+        Saving a new password signs you out on every other device, and we mail you a note that it changed.
+      </p>
+      <ChangePasswordForm />
+    </Card>
+  );
+}
