@@ -42,7 +42,12 @@ export function photoUpload(req: Request, res: Response, next: (err?: unknown) =
   multerUpload(req, res, next as NextFunction);
 }
 
+/** What busboy throws for a body it cannot split into parts (no boundary, a broken header, a cut-off body). */
+const BUSBOY_REFUSAL = /^(Multipart: |Unsupported content type|Malformed |Unexpected end of )/;
+
 export function multerError(err: unknown): HttpError | null {
+  if (err instanceof Error && !(err instanceof multer.MulterError) && BUSBOY_REFUSAL.test(err.message))
+    return new HttpError(400, 'bad-upload', 'The upload could not be read. Send the photos as a multipart form.');
   if (!(err instanceof multer.MulterError)) return null;
   if (err.code === 'LIMIT_FILE_SIZE')
     return new HttpError(
