@@ -70,6 +70,18 @@ export const changePasswordSchema = z
   .refine((v) => v.password === v.confirm, { path: ['confirm'], message: 'The two passwords differ.' });
 export type ChangePasswordInput = z.infer<typeof changePasswordSchema>;
 
+/** A code from an authenticator app: 6 digits; spaces (as some apps show them) are dropped. */
+export const totpCode = z
+  .string({ error: 'Enter the 6 digits your app shows.' })
+  .max(20, 'Enter the 6 digits your app shows.')
+  .transform((v) => v.replace(/\s+/g, ''))
+  .pipe(z.string().regex(/^\d{6}$/, 'Enter the 6 digits your app shows.'));
+export const totpCodeSchema = z.object({ code: totpCode });
+export const turnOffTwoFactorSchema = z.object({
+  password: z.string({ error: 'Enter your password.' }).min(1, 'Enter your password.').max(128),
+  code: totpCode,
+});
+
 export const groupSchema = z.object({
   name: z.string().trim().min(2, 'Give the group a name.').max(120),
   town: z.string().trim().min(1, 'Enter the town.').max(120),

@@ -30,6 +30,12 @@ export const moreRows: Row[] = [
   ['POST', () => '/api/auth/password-reset/confirm', everyone(400), {}],
   ['POST', () => '/api/auth/first-admin', everyone(400), {}],
   ['POST', () => '/api/auth/password', signedIn(400), {}],
+  ['POST', () => '/api/auth/login/code', everyone(400), {}],
+  ['GET', () => '/api/auth/two-factor', signedIn(200)],
+  // Set-up only stores a secret that is not on until a code confirms it.
+  ['POST', () => '/api/auth/two-factor/setup', adminOnly],
+  ['POST', () => '/api/auth/two-factor/enable', { ...adminOnly, admin: 400 }, {}],
+  ['POST', () => '/api/auth/two-factor/disable', signedIn(400), {}],
   // Invitations: the token is the key, whoever holds it.
   ['GET', () => '/api/invites/nope', everyone(404)],
   ['POST', () => '/api/invites/nope/accept', signedIn(404)],

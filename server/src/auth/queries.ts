@@ -159,3 +159,42 @@ export async function loadSessionUser(db: DbOrTx, userId: number): Promise<Sessi
     .orderBy(repairGroups.name, memberships.role);
   return { ...user, admin: Boolean(user.admin), roles };
 }
+
+/** The two-factor columns of one person. */
+export async function twoFactorOf(db: DbOrTx, userId: number) {
+  const [row] = await db
+    .select({
+      email: users.email,
+      name: users.name,
+      admin: users.admin,
+      passwordHash: users.passwordHash,
+      totpSecret: users.totpSecret,
+      totpPending: users.totpPending,
+      totpLastStep: users.totpLastStep,
+    })
+    .from(users)
+    .where(eq(users.id, userId));
+  return row;
+}
+
+export async function setTotpPending(db: DbOrTx, userId: number, sealed: string | null) {
+  await db.update(users).set({ totpPending: sealed }).where(eq(users.id, userId));
+}
+
+/** Turns two-factor sign-in on with the pending secret, the step of its first code counting as used. */
+export async function enableTotp(db: DbOrTx, userId: number, sealed: string, step: number) {
+  await db.update(users).set({ totpSecret: sealed, totpPending: null, totpLastStep: step }).where(eq(users.id, userId));
+}
+
+export async function disableTotp(db: DbOrTx, userId: number) {
+  await db.update(users).set({ totpSecret: null, totpPending: null, totpLastStep: null }).where(eq(users.id, userId));
+}
+
+/** Spends a code's time step; false when a code of this step or a later one was taken already (a replay or a race). */
+export async function spendTotpStep(db: DbOrTx, userId: number, step: number): Promise<boolean> {
+  const [result] = await db
+    .update(users)
+    .set({ totpLastStep: step })
+    .where(and(eq(users.id, userId), sql`(${users.totpLastStep} IS NULL OR ${users.totpLastStep} < ${step})`));
+  return (result as { affectedRows: number }).affectedRows === 1;
+}

@@ -8,6 +8,8 @@ import {
   resetRequestSchema,
   signupSchema,
   tokenSchema,
+  totpCodeSchema,
+  turnOffTwoFactorSchema,
 } from '../../../shared/schemas/auth';
 import type { AppContext } from '../context';
 import { HttpError } from '../http/errors';
@@ -16,7 +18,8 @@ import { MariadbRateLimitStore } from '../http/rate-limit-store';
 import { body } from '../http/validate';
 import * as auth from './service';
 import { loadSessionUser } from './queries';
-import { requireUser } from './guards';
+import { requireAdmin, requireUser } from './guards';
+import * as twoFactor from './two-factor';
 import { sessionCookie } from './session';
 import { createFirstAdmin } from './setup';
 
@@ -32,6 +35,10 @@ export async function signIn(req: Request, ctx: AppContext, userId: number) {
   await save(req);
   return loadSessionUser(ctx.database.db, userId);
 }
+
+/** A password accepted for a two-step sign-in waits this long for its code, and takes this many wrong ones. */
+const PENDING_MS = 5 * 60_000;
+const PENDING_TRIES = 5;
 
 /** The per-source budget for auth POSTs; invitation sign-ups use it too, so both count against one figure. */
 export const authPostLimiter = (ctx: AppContext) => publicReadLimiter(ctx, 'auth-ip', ctx.env.AUTH_RATE_MAX);
@@ -97,7 +104,56 @@ export function authRoutes(ctx: AppContext, csrfToken: (req: Request) => string)
   r.post('/login', loginPerSource, loginPerAccount, async (req, res) => {
     const input = body(req, loginSchema);
     const userId = await auth.authenticate(ctx, input);
-    res.json({ user: await signIn(req, ctx, userId) });
+    if (!(await twoFactor.needsCode(ctx, userId))) return void res.json({ user: await signIn(req, ctx, userId) });
+    // The password was right, but the session stays signed out until the code is: a new session holds who it is.
+    await regenerate(req);
+    Object.assign(req.session, { pendingUserId: userId, pendingAt: Date.now(), pendingTries: 0 });
+    await save(req);
+    res.json({ user: null, needsCode: true });
+  });
+
+  // Wrong codes count per source (with failed passwords) and per account across sources; 5 per password entry.
+  const codesPerAccount = limiter(
+    ctx,
+    stores,
+    'login-code',
+    ctx.env.LOGIN_RATE_MAX,
+    (req) => (req.session?.pendingUserId ? `user:${req.session.pendingUserId}` : ip(req)),
+    true,
+  );
+  r.post('/login/code', loginPerSource, codesPerAccount, async (req, res) => {
+    const { code } = body(req, totpCodeSchema);
+    const { pendingUserId, pendingAt, pendingTries = 0 } = req.session;
+    if (!pendingUserId || !pendingAt || Date.now() - pendingAt > PENDING_MS || pendingTries >= PENDING_TRIES) {
+      delete req.session.pendingUserId;
+      throw new HttpError(400, 'sign-in-again', 'Sign in again: enter your e-mail and password first.');
+    }
+    try {
+      await twoFactor.takeCode(ctx, pendingUserId, code, 401);
+    } catch (err) {
+      req.session.pendingTries = pendingTries + 1;
+      await save(req);
+      throw err;
+    }
+    res.json({ user: await signIn(req, ctx, pendingUserId) });
+  });
+
+  r.get('/two-factor', requireUser, async (req, res) => {
+    res.json(await twoFactor.twoFactorStatus(ctx, req.user!.id));
+  });
+
+  r.post('/two-factor/setup', requireAdmin, async (req, res) => {
+    res.json(await twoFactor.startSetup(ctx, req.user!.id));
+  });
+
+  r.post('/two-factor/enable', requireAdmin, loginPerSource, async (req, res) => {
+    await twoFactor.confirmSetup(ctx, req.user!.id, body(req, totpCodeSchema).code);
+    res.json({ enabled: true, message: 'Two-step sign-in is on. Keep your app: you need it each time you sign in.' });
+  });
+
+  r.post('/two-factor/disable', requireUser, loginPerSource, async (req, res) => {
+    await twoFactor.turnOff(ctx, req.user!.id, body(req, turnOffTwoFactorSchema));
+    res.json({ enabled: false, message: 'Two-step sign-in is off.' });
   });
 
   // Signed out is an answer, not an error: a 401 here would log in every anonymous visitor's console.

@@ -8,6 +8,10 @@ declare module 'express-session' {
     userId?: number;
     /** Milliseconds since the epoch at sign-in: the absolute lifetime counts from here, whatever `rolling` does. */
     signedInAt?: number;
+    /** Password right, code still to come (two-step sign-in): who, since when, and how many wrong codes so far. */
+    pendingUserId?: number;
+    pendingAt?: number;
+    pendingTries?: number;
   }
 }
 

@@ -8,6 +8,7 @@ import { TextField } from '../../components/ui/field';
 import { paths } from '../../config/paths';
 import { useConfig, configQuery } from '../../features/auth/api/get-config';
 import { useSignIn } from '../../features/auth/api/sign-in';
+import { SignInCodeForm } from '../../features/auth/components/sign-in-code-form';
 import { useUser } from '../../lib/auth';
 import { applyServerErrors, useZodForm } from '../../lib/form';
 import { landingPath } from '../../lib/roles';
@@ -31,6 +32,7 @@ export function SignInPage() {
   const signIn = useSignIn();
   const form = useZodForm(loginSchema, { email: '', password: '' });
   const [formError, setFormError] = useState<string | null>(null);
+  const [codeStep, setCodeStep] = useState(false);
   const next = params.get('next');
   const safeNext = next && next.startsWith('/') && !next.startsWith('//') ? next : null;
 
@@ -41,7 +43,8 @@ export function SignInPage() {
     setFormError(null);
     try {
       const { user } = await signIn.mutateAsync(values);
-      navigate(safeNext ?? landingPath(user), { replace: true });
+      if (user) navigate(safeNext ?? landingPath(user), { replace: true });
+      else setCodeStep(true);
     } catch (err) {
       setFormError(applyServerErrors(form, err));
     }
@@ -56,26 +59,37 @@ export function SignInPage() {
     <div className="mx-auto grid max-w-4xl gap-6 md:grid-cols-2">
       <Card>
         <h1 className="mb-4 text-2xl">Sign in</h1>
-        <form onSubmit={onSubmit} noValidate className="space-y-4">
-          {formError && <Alert tone="error">{formError}</Alert>}
-          <TextField
-            label="E-mail"
-            type="email"
-            autoComplete="username"
-            error={form.formState.errors.email?.message}
-            {...form.register('email')}
+        {codeStep ? (
+          <SignInCodeForm
+            onSignedIn={(u) => navigate(safeNext ?? landingPath(u), { replace: true })}
+            onRestart={(why) => {
+              setCodeStep(false);
+              form.setValue('password', '');
+              setFormError(why ?? null);
+            }}
           />
-          <TextField
-            label="Password"
-            type="password"
-            autoComplete="current-password"
-            error={form.formState.errors.password?.message}
-            {...form.register('password')}
-          />
-          <Button type="submit" busy={form.formState.isSubmitting} className="w-full">
-            Sign in
-          </Button>
-        </form>
+        ) : (
+          <form onSubmit={onSubmit} noValidate className="space-y-4">
+            {formError && <Alert tone="error">{formError}</Alert>}
+            <TextField
+              label="E-mail"
+              type="email"
+              autoComplete="username"
+              error={form.formState.errors.email?.message}
+              {...form.register('email')}
+            />
+            <TextField
+              label="Password"
+              type="password"
+              autoComplete="current-password"
+              error={form.formState.errors.password?.message}
+              {...form.register('password')}
+            />
+            <Button type="submit" busy={form.formState.isSubmitting} className="w-full">
+              Sign in
+            </Button>
+          </form>
+        )}
         <div className="mt-4 flex flex-wrap justify-between gap-2 text-sm">
           <Link to={paths.forgotPassword()} className="font-semibold text-navy underline">
             Forgot your password?

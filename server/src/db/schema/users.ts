@@ -1,4 +1,4 @@
-import { boolean, char, index, mysqlEnum, mysqlTable, uniqueIndex, varchar } from 'drizzle-orm/mysql-core';
+import { bigint, boolean, char, index, mysqlEnum, mysqlTable, uniqueIndex, varchar } from 'drizzle-orm/mysql-core';
 import { createdAt, id, ref, timestamp3 } from './columns';
 
 export const users = mysqlTable(
@@ -12,6 +12,12 @@ export const users = mysqlTable(
     emailVerifiedAt: timestamp3('email_verified_at'),
     /** SHA-256 of the secret in the person's shift-calendar feed URL; null when no feed link is live (revoked). */
     calendarFeedHash: char('calendar_feed_hash', { length: 64 }),
+    /** Two-factor sign-in: the TOTP secret, AES-256-GCM with a key derived from SESSION_SECRET (auth/totp.ts). */
+    totpSecret: varchar('totp_secret', { length: 255 }),
+    /** A secret shown at set-up and not yet confirmed with a first code; encrypted the same way. */
+    totpPending: varchar('totp_pending', { length: 255 }),
+    /** The time step of the last code accepted, so a code works only once. */
+    totpLastStep: bigint('totp_last_step', { mode: 'number' }),
     createdAt: createdAt(),
   },
   (t) => [uniqueIndex('users_email_uq').on(t.email), uniqueIndex('users_calendar_feed_uq').on(t.calendarFeedHash)],

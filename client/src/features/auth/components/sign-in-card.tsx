@@ -1,7 +1,8 @@
 import { Card } from '../../../components/ui/feedback';
 import { ChangePasswordForm } from './change-password-form';
+import { TwoFactorPanel } from './two-factor-panel';
 
-/** The signed-in person's password and, later, their second step at sign-in. */
+/** The signed-in person's password and, for admins, the second step at sign-in. */
 export function SignInSettingsCard() {
   return (
     <Card className="space-y-3">
@@ -10,6 +11,7 @@ export function SignInSettingsCard() {
         Saving a new password signs you out on every other device, and we mail you a note that it changed.
       </p>
       <ChangePasswordForm />
+      <TwoFactorPanel />
     </Card>
   );
 }

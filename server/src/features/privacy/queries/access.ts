@@ -140,6 +140,8 @@ export async function closeAccountRows(tx: Tx, userId: number) {
       email: `closed-${userId}@accounts.invalid`,
       passwordHash: null,
       calendarFeedHash: null,
+      totpSecret: null,
+      totpPending: null,
       admin: false,
       emailVerifiedAt: null,
     })
