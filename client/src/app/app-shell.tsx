@@ -35,7 +35,7 @@ export function AppShell() {
       links.push({ to: paths.bench(), label: 'My bench' }, { to: paths.mySkills(), label: 'My skills' });
     if (user.roles.length)
       links.push({ to: paths.knowledge(), label: 'Repair notes' }, { to: paths.calculators(), label: 'Calculators' });
-    links.push({ to: paths.myData(), label: 'My data' });
+    links.push({ to: paths.myData(), label: 'Account' });
     if (user.admin)
       links.push(
         { to: paths.admin(), label: 'Network admin', end: true },

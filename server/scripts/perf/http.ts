@@ -14,6 +14,7 @@ import { measureTriage } from './triage';
 import { measureStats } from './stats';
 import { measureLighthouse } from './lighthouse';
 import { measureImport } from './import';
+import { measureMemory } from './memory';
 import { bareBookingHandler, measureBooking } from './booking';
 
 measureTriage();
@@ -29,6 +30,11 @@ if (!only && (!process.env.BENCH || process.env.BENCH === 'stats')) {
 if (!only && (!process.env.BENCH || process.env.BENCH === 'import')) {
   await measureImport();
   if (process.env.BENCH === 'import') process.exit(0);
+  console.log('');
+}
+if (!only && (!process.env.BENCH || process.env.BENCH === 'memory')) {
+  await measureMemory();
+  if (process.env.BENCH === 'memory') process.exit(0);
   console.log('');
 }
 if (!only && (!process.env.BENCH || process.env.BENCH === 'lighthouse')) {

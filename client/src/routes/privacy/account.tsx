@@ -18,7 +18,7 @@ export function MyDataPage() {
   };
   return (
     <div className="mx-auto max-w-2xl space-y-4">
-      <PageTitle title="My data" lead="How you sign in, what Mendery holds about you, and how to leave." />
+      <PageTitle title="Account" lead="How you sign in, what Mendery holds about you, and how to leave." />
       <SignInSettingsCard />
       <AccountDataPanel onClosed={closed} />
     </div>
