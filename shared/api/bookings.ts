@@ -43,7 +43,7 @@ export interface BookingView {
     status: ItemStatus;
     queueNumber: number | null;
     outcome: Outcome | null;
-    photos: { id: number; width: number; height: number }[];
+    photos: { id: string; width: number; height: number }[];
   }[];
   qr: string;
 }

@@ -151,7 +151,7 @@ export interface ItemView {
   checkedInAt: Date | null;
   startedAt: Date | null;
   doneAt: Date | null;
-  photos: { id: number; kind: 'intake' | 'repair'; width: number; height: number }[];
+  photos: { id: string; kind: 'intake' | 'repair'; width: number; height: number }[];
   booking: {
     reference: string;
     visitorName: string;

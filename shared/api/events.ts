@@ -51,7 +51,7 @@ interface ComingItem {
   ageYears: number | null;
   fault: string;
   mains: boolean;
-  photoIds: number[];
+  photoIds: string[];
 }
 interface ComingBooking {
   id: number;

@@ -22,7 +22,7 @@ export interface KnowledgeEntry {
   writtenUp: boolean;
   eventDate: Date;
   score: number;
-  photoIds: number[];
+  photoIds: string[];
 }
 export interface KnowledgeQuery {
   q?: string;

@@ -16,7 +16,7 @@ export interface BoardItem {
   mains: boolean;
   minutes: number;
   needs: { skill: string; minLevel: number; equipment: string[] };
-  photoIds: number[];
+  photoIds: string[];
   placement: {
     userId: number;
     benchId: number;

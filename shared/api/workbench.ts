@@ -19,5 +19,5 @@ export interface QueueItem {
   fault: string;
   mains: boolean;
   benchName: string;
-  photoIds: number[];
+  photoIds: string[];
 }

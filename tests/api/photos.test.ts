@@ -69,20 +69,22 @@ describe('item photos', () => {
     const res = await upload([{ name: 'toaster.jpg', type: 'image/jpeg', data: original }]);
     expect(res.status).toBe(201);
     expect(res.json[0]).toMatchObject({ width: 1600, height: 1200 });
-    const [row] = await db.db.select().from(itemPhotos).where(eq(itemPhotos.id, res.json[0].id));
+    const [row] = await db.db.select().from(itemPhotos).where(eq(itemPhotos.publicId, res.json[0].id));
     const stored = await server.ctx.storage.get(row.storageKey);
     const meta = await sharp(stored!).metadata();
     expect(meta).toMatchObject({ format: 'jpeg', width: 1600, height: 1200 });
     expect(meta.exif).toBeUndefined();
     // The visitor sees it with the token; the group's organiser with a session; nobody else.
     expect(
-      (await fetch(`${server.url}/api/photos/${row.id}?token=${booking.manageToken}`)).headers.get('content-type'),
+      (await fetch(`${server.url}/api/photos/${row.publicId}?token=${booking.manageToken}`)).headers.get(
+        'content-type',
+      ),
     ).toBe('image/jpeg');
-    expect((await fetch(`${server.url}/api/photos/${row.id}`)).status).toBe(404);
+    expect((await fetch(`${server.url}/api/photos/${row.publicId}`)).status).toBe(404);
     const o = await makeUser(db.db, { roles: [[groupId, 'organiser']] });
     const org = a();
     await org.login(o.email, o.password);
-    expect((await org.get(`/api/photos/${row.id}`)).status).toBe(200);
+    expect((await org.get(`/api/photos/${row.publicId}`)).status).toBe(200);
   });
 
   it('accepts a real PNG', async () => {

@@ -199,7 +199,7 @@ describe('the repair knowledge base', () => {
         headers: { cookie: agent.cookieHeader(), 'x-csrf-token': agent.csrf ?? (await agent.token()) },
       });
       expect(res.status).toBe(201);
-      return ((await res.json()) as { id: number }[])[0].id;
+      return ((await res.json()) as { id: string }[])[0].id;
     };
     const shared = await upload(g.share.organiser, ids.exact);
     const quiet = await upload(g.quiet.organiser, ids.quiet);

@@ -129,19 +129,18 @@ export async function savePhotos(
         const saved = [];
         for (let i = 0; i < prepared.length; i++) {
           const p = prepared[i];
-          const [{ id }] = await tx
-            .insert(itemPhotos)
-            .values({
-              itemId,
-              kind,
-              storageKey: keys[i],
-              contentType: 'image/jpeg',
-              width: p.info.width,
-              height: p.info.height,
-              bytes: p.data.length,
-            })
-            .$returningId();
-          saved.push({ id, kind, width: p.info.width, height: p.info.height });
+          const publicId = randomBytes(16).toString('base64url');
+          await tx.insert(itemPhotos).values({
+            publicId,
+            itemId,
+            kind,
+            storageKey: keys[i],
+            contentType: 'image/jpeg',
+            width: p.info.width,
+            height: p.info.height,
+            bytes: p.data.length,
+          });
+          saved.push({ id: publicId, kind, width: p.info.width, height: p.info.height });
         }
         return saved;
       }),

@@ -1,3 +1,4 @@
+import { randomBytes } from 'node:crypto';
 import {
   boolean,
   char,
@@ -165,6 +166,10 @@ export const itemPhotos = mysqlTable(
   'item_photos',
   {
     id: id(),
+    /** The photo's name in every URL: 128 random bits, so nobody can walk from one photo to the next. */
+    publicId: varchar('public_id', { length: 32 })
+      .notNull()
+      .$defaultFn(() => randomBytes(16).toString('base64url')),
     itemId: ref('item_id')
       .notNull()
       .references(() => bookingItems.id, { onDelete: 'cascade' }),
@@ -177,7 +182,7 @@ export const itemPhotos = mysqlTable(
     bytes: int('bytes').notNull(),
     createdAt: createdAt(),
   },
-  (t) => [index('item_photos_item_idx').on(t.itemId)],
+  (t) => [index('item_photos_item_idx').on(t.itemId), uniqueIndex('item_photos_public_uq').on(t.publicId)],
 );
 
 /** A submitted form's key and its first answer: the same key replays the answer instead of booking again. */

@@ -38,6 +38,7 @@ const manageToken = (req: Request) => {
   if (header !== undefined && header.length > 0 && header.length <= 200) return header;
   return tokenQuery.parse(req.query).token;
 };
+const PHOTO_ID = /^[A-Za-z0-9_-]{16,32}$/;
 const idempotencyKey = z
   .string()
   .trim()
@@ -130,8 +131,9 @@ export function bookingRoutes(ctx: AppContext) {
 
   /** A photo: for the visitor with the booking's token, or for the organisers, reception and fixers of its group. */
   r.get('/photos/:id', async (req, res) => {
-    const { id } = params(req, z.object({ id: z.coerce.number().int().positive() }));
-    const p = await photoWithOwner(db, id);
+    const { id } = params(req, z.object({ id: z.string() }));
+    // A photo is named by its random public id only; anything else (an old numeric id) is simply not found.
+    const p = PHOTO_ID.test(id) ? await photoWithOwner(db, id) : undefined;
     if (!p) throw notFound('That photo');
     const token = manageToken(req);
     // A bench photo of a group that shares its repair notes may be seen by any group's volunteers.

@@ -103,7 +103,7 @@ const entryDto = (r: EntryRow): Omit<KnowledgeEntry, 'photoIds'> => ({
 async function withPhotos<T extends { itemId: number }>(
   db: DbOrTx,
   entries: T[],
-): Promise<(T & { photoIds: number[] })[]> {
+): Promise<(T & { photoIds: string[] })[]> {
   const photos = await repairPhotos(
     db,
     entries.map((e) => e.itemId),

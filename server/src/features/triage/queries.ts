@@ -49,7 +49,7 @@ export const openItemRows = (db: DbOrTx, eventId: number) =>
 export const photoIdsOf = (db: DbOrTx, itemIds: number[]) =>
   itemIds.length
     ? db
-        .select({ id: itemPhotos.id, itemId: itemPhotos.itemId })
+        .select({ id: itemPhotos.publicId, itemId: itemPhotos.itemId })
         .from(itemPhotos)
         .where(inArray(itemPhotos.itemId, itemIds))
     : Promise.resolve([]);

@@ -57,7 +57,7 @@ export const queueRows = (db: DbOrTx, userId: number) =>
 export const photoIdsOf = (db: DbOrTx, itemIds: number[]) =>
   itemIds.length
     ? db
-        .select({ id: itemPhotos.id, itemId: itemPhotos.itemId })
+        .select({ id: itemPhotos.publicId, itemId: itemPhotos.itemId })
         .from(itemPhotos)
         .where(inArray(itemPhotos.itemId, itemIds))
     : Promise.resolve([]);

@@ -1,2 +1,2 @@
 /** The address of an item's photo; the browser loads it in an <img>, so this is a link, not a query. */
-export const photoUrl = (photoId: number) => `/api/photos/${photoId}`;
+export const photoUrl = (photoId: string) => `/api/photos/${photoId}`;

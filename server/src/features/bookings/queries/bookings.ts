@@ -72,7 +72,12 @@ export async function bookingItemsWithPhotos(db: DbOrTx, bookingId: number) {
     .orderBy(asc(bookingItems.position));
   const photos = items.length
     ? await db
-        .select({ id: itemPhotos.id, itemId: itemPhotos.itemId, width: itemPhotos.width, height: itemPhotos.height })
+        .select({
+          id: itemPhotos.publicId,
+          itemId: itemPhotos.itemId,
+          width: itemPhotos.width,
+          height: itemPhotos.height,
+        })
         .from(itemPhotos)
         .where(
           inArray(

@@ -43,7 +43,7 @@ export async function eventBookingRows(db: DbOrTx, eventId: number) {
     : [];
   const photos = items.length
     ? await db
-        .select({ id: itemPhotos.id, itemId: itemPhotos.itemId })
+        .select({ id: itemPhotos.publicId, itemId: itemPhotos.itemId })
         .from(itemPhotos)
         .where(
           inArray(

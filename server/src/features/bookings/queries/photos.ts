@@ -3,7 +3,7 @@ import type { DbOrTx } from '../../../db/client';
 import { bookingItems, bookings, events, itemPhotos, repairGroups } from '../../../db/schema/index';
 
 /** A stored photo with what decides who may see it: its booking, its group and whether the group shares notes. */
-export async function photoWithOwner(db: DbOrTx, id: number) {
+export async function photoWithOwner(db: DbOrTx, publicId: string) {
   const [p] = await db
     .select({
       key: itemPhotos.storageKey,
@@ -18,6 +18,6 @@ export async function photoWithOwner(db: DbOrTx, id: number) {
     .innerJoin(bookings, eq(bookings.id, bookingItems.bookingId))
     .innerJoin(events, eq(events.id, bookings.eventId))
     .innerJoin(repairGroups, eq(repairGroups.id, events.groupId))
-    .where(eq(itemPhotos.id, id));
+    .where(eq(itemPhotos.publicId, publicId));
   return p;
 }

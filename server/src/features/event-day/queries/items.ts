@@ -91,6 +91,6 @@ export const historyOf = (db: DbOrTx, itemId: number) =>
 
 export const photosOf = (db: DbOrTx, itemId: number) =>
   db
-    .select({ id: itemPhotos.id, kind: itemPhotos.kind, width: itemPhotos.width, height: itemPhotos.height })
+    .select({ id: itemPhotos.publicId, kind: itemPhotos.kind, width: itemPhotos.width, height: itemPhotos.height })
     .from(itemPhotos)
     .where(eq(itemPhotos.itemId, itemId));

@@ -54,7 +54,7 @@ export const photosOfItems = (db: DbOrTx, itemIds: number[]) =>
   itemIds.length
     ? db
         .select({
-          id: itemPhotos.id,
+          id: itemPhotos.publicId,
           itemId: itemPhotos.itemId,
           kind: itemPhotos.kind,
           createdAt: itemPhotos.createdAt,

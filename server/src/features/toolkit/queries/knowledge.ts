@@ -130,7 +130,7 @@ export async function entryRow(db: DbOrTx, itemId: number): Promise<EntryRow | u
 export async function repairPhotos(db: DbOrTx, itemIds: number[]) {
   if (!itemIds.length) return [];
   return db
-    .select({ id: itemPhotos.id, itemId: itemPhotos.itemId })
+    .select({ id: itemPhotos.publicId, itemId: itemPhotos.itemId })
     .from(itemPhotos)
     .where(and(inArray(itemPhotos.itemId, itemIds), eq(itemPhotos.kind, 'repair')));
 }
