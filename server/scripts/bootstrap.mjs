@@ -14,6 +14,8 @@ const scripts = {
   migrate: 'migrate.ts',
   'stats-rebuild': 'stats-rebuild.ts',
   screenshots: 'screenshots.ts',
+  'start:cluster': 'cluster/start.ts',
+  'test:cluster': 'cluster/test.ts',
 };
 if (!scripts[command]) {
   console.error(`usage: bootstrap.mjs ${Object.keys(scripts).join('|')}`);

@@ -25,6 +25,7 @@ import { startTestServer } from '../support/server';
  */
 const table: Row[] = [
   ['GET', () => '/api/health', everyone(200)],
+  ['GET', () => '/api/live', everyone(200)],
   ['GET', () => '/api/public/config', everyone(200)],
   ['GET', () => '/api/public/groups', everyone(200)],
   // Signed out is not an error: anonymous gets 200 with `user: null` (issue 12).

@@ -5,6 +5,11 @@ import { isDemo, needsSetup } from '../../auth/service';
 /** Health and public configuration: answered before the session, so they create none. */
 export function platformRoutes(ctx: AppContext) {
   const r = Router();
+  // The process answers, whatever the database does: what a proxy asks before it sends a request here (while the
+  // database fails over every process answers 503 itself, and none should be taken out of the rotation).
+  r.get('/live', (_req, res) => {
+    res.json({ ok: true });
+  });
   r.get('/health', async (_req, res) => {
     // The database answers, and nothing more: its version would tell a caller which flaws to try.
     await ctx.database.pool.query('SELECT 1');
