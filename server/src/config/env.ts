@@ -42,6 +42,8 @@ const schema = z.object({
   BOOKINGS_PER_SESSION_MAX: z.coerce.number().int().min(1).default(2),
   /** Mails an anonymous form may cause to one address in an hour. */
   VISITOR_MAIL_MAX_PER_HOUR: z.coerce.number().int().min(1).default(6),
+  /** Days after its session's end that a booking's manage link still works. */
+  MANAGE_LINK_DAYS: z.coerce.number().int().min(1).default(30),
   CLIENT_DIST: z.string().default('dist/client'),
 });
 

@@ -1,6 +1,11 @@
 import { createHmac, timingSafeEqual } from 'node:crypto';
+import type { Request } from 'express';
+import { z } from 'zod';
+import { manageLinkExpired } from '../../../shared/booking/manage-link';
 import type { AppContext } from '../context';
-import { notFound } from '../http/errors';
+import { sha256 } from '../auth/tokens';
+import { HttpError, notFound } from '../http/errors';
+import { eventWithGroup } from './events';
 
 /**
  * Links in mail that must outlive the first mail carry a secret derived from the server's secret, so any later mail
@@ -11,6 +16,40 @@ const mac = (ctx: AppContext, purpose: string) =>
 
 /** The secret in a booking's manage link. */
 export const manageTokenFor = (ctx: AppContext, reference: string) => mac(ctx, `manage-booking:${reference}`);
+
+const tokenQuery = z.object({ token: z.string().max(200).optional() });
+/**
+ * The booking's manage token: the client sends it in the X-Manage-Token header, which stays out of URLs and request
+ * logs; ?token= is still read for links mailed before and for downloads the browser fetches as plain links.
+ */
+export const manageTokenOf = (req: Request): string | undefined => {
+  const header = req.get('x-manage-token');
+  if (header !== undefined && header.length > 0 && header.length <= 200) return header;
+  return tokenQuery.parse(req.query).token;
+};
+
+/**
+ * Checks a manage link's token against the booking's stored hash (a wrong or missing one is "not found", so references
+ * leak nothing), then its lifetime: MANAGE_LINK_DAYS after the session's end the link answers 410.
+ */
+export async function checkManageToken(
+  ctx: AppContext,
+  b: { manageTokenHash: string; eventId: number },
+  token: string | undefined,
+): Promise<void> {
+  if (!token) throw notFound('That booking');
+  const a = Buffer.from(b.manageTokenHash, 'hex');
+  const c = Buffer.from(sha256(token), 'hex');
+  if (a.length !== c.length || !timingSafeEqual(a, c)) throw notFound('That booking');
+  const e = await eventWithGroup(ctx.database.db, b.eventId);
+  const days = ctx.env.MANAGE_LINK_DAYS;
+  if (!e || manageLinkExpired(e.event.endsAt, days, new Date()))
+    throw new HttpError(
+      410,
+      'link-expired',
+      `This booking link has run out: a booking's link works until ${days} days after its session. For a booking still to come, ask for a fresh link by e-mail.`,
+    );
+}
 
 export const manageUrl = (ctx: AppContext, reference: string, token: string) =>
   `${ctx.env.publicUrl}/bookings/${reference}?token=${token}`;

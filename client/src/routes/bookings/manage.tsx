@@ -14,6 +14,7 @@ import { useCancelBooking } from '../../features/bookings/api/cancel-booking';
 import { useBooking, bookingQuery } from '../../features/bookings/api/get-booking';
 import { useMoveBooking, useRefreshBooking } from '../../features/bookings/api/move-booking';
 import { uploadPhotos } from '../../features/bookings/api/upload-photos';
+import { LinkProblem } from '../../features/bookings/components/link-problem';
 import { eventKeys } from '../../features/events/api/keys';
 import { useEvent, eventQuery } from '../../features/events/api/get-event';
 import { StatusBadge } from '../../features/events/components/places-bar';
@@ -57,18 +58,7 @@ export function ManageBookingPage() {
       </Alert>
     );
   if (booking.isPending) return <Spinner label="Loading your booking…" />;
-  if (booking.error)
-    return (
-      <Alert tone="error" title="Booking not found">
-        <p>
-          The link may be incomplete, or the booking reference is wrong. Open the link from your confirmation mail
-          again.
-        </p>
-        <Link to={paths.events()} className="mt-2 inline-block font-bold underline">
-          See all sessions
-        </Link>
-      </Alert>
-    );
+  if (booking.error) return <LinkProblem error={booking.error} />;
   const b = booking.data;
   const tz = b.event.timeZone;
   const active = b.status === 'confirmed' && b.event.status === 'published';

@@ -23,21 +23,14 @@ import * as waitlist from './waitlist';
 import { photoWithOwner } from './queries/photos';
 import { bookingCalendar } from './calendar';
 import { sendCalendar } from '../../core/calendar';
+import { manageTokenOf } from '../../core/links';
 
 import { rebook, rebookView } from './return-visit';
 
 const booking = { ...bookingService, ...changes, ...waitlist };
 
-const tokenQuery = z.object({ token: z.string().max(200).optional() });
-/**
- * The booking's manage token: the client sends it in the X-Manage-Token header, which stays out of URLs and request
- * logs; ?token= is still read for links mailed before.
- */
-const manageToken = (req: Request) => {
-  const header = req.get('x-manage-token');
-  if (header !== undefined && header.length > 0 && header.length <= 200) return header;
-  return tokenQuery.parse(req.query).token;
-};
+/** The manage token from the X-Manage-Token header, or ?token= for links mailed before. */
+const manageToken = manageTokenOf;
 const PHOTO_ID = /^[A-Za-z0-9_-]{16,32}$/;
 const idempotencyKey = z
   .string()

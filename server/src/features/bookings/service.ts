@@ -1,10 +1,10 @@
-import { timingSafeEqual } from 'node:crypto';
 import type { AppContext } from '../../context';
 import type { BookingCodeStatus } from '../../../../shared/api/bookings';
 import type { Tx } from '../../db/client';
 import { isDuplicate, withDeadlockRetry } from '../../db/retry';
 import { sha256 } from '../../auth/tokens';
 import { HttpError, notFound } from '../../http/errors';
+import { checkManageToken } from '../../core/links';
 import { screenItems } from '../../core/screening';
 import { mailAllowance } from '../../mail/allowance';
 import { activeBookingsFor } from './queries/limits';
@@ -148,13 +148,14 @@ async function bookOnce(
   }
 }
 
-/** Finds a booking by reference and its secret token; anything else is "not found", so references leak nothing. */
+/**
+ * Finds a booking by reference and its secret token; anything else is "not found", so references leak nothing. A link
+ * past its lifetime answers 410.
+ */
 export async function bookingByToken(ctx: AppContext, reference: string, token: string | undefined) {
   const b = await bookingByReference(ctx.database.db, reference);
-  if (!b || !token) throw notFound('That booking');
-  const a = Buffer.from(b.manageTokenHash, 'hex');
-  const c = Buffer.from(sha256(token), 'hex');
-  if (a.length !== c.length || !timingSafeEqual(a, c)) throw notFound('That booking');
+  if (!b) throw notFound('That booking');
+  await checkManageToken(ctx, b, token);
   return b;
 }
 

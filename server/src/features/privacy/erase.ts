@@ -1,9 +1,10 @@
-import { randomBytes, timingSafeEqual } from 'node:crypto';
+import { randomBytes } from 'node:crypto';
 import type { AppContext } from '../../context';
 import type { Tx } from '../../db/client';
 import { withDeadlockRetry } from '../../db/retry';
 import { sha256 } from '../../auth/tokens';
 import { hasGroupRole } from '../../auth/guards';
+import { checkManageToken } from '../../core/links';
 import { notFound } from '../../http/errors';
 import type { SessionUser } from '../../../../shared/schemas/auth';
 import { ERASED_NAME, retentionCutoff, scrubPersonalData } from '../../../../shared/privacy/scrub';
@@ -38,10 +39,8 @@ export async function bookingForPersonalData(
   const b = await bookingByReference(ctx.database.db, reference);
   if (!b) throw notFound('That booking');
   if (token) {
-    const a = Buffer.from(b.manageTokenHash, 'hex');
-    const c = Buffer.from(sha256(token), 'hex');
-    if (a.length === c.length && timingSafeEqual(a, c)) return b;
-    throw notFound('That booking');
+    await checkManageToken(ctx, b, token);
+    return b;
   }
   const groupId = await groupOfEvent(ctx.database.db, b.eventId);
   if (groupId !== undefined && hasGroupRole(user, groupId, ['organiser'])) return b;

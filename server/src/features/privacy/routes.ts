@@ -1,17 +1,15 @@
 import { Router, type Request } from 'express';
-import { z } from 'zod';
 import { normaliseReference } from '../../../../shared/booking/reference';
 import { privacyNotice } from '../../../../shared/privacy/notice';
 import type { AppContext } from '../../context';
 import { requireUser } from '../../auth/guards';
+import { manageTokenOf } from '../../core/links';
 import { notFound } from '../../http/errors';
 import { body, paramId } from '../../http/validate';
 import { closeAccountSchema } from '../../../../shared/schemas/privacy';
 import { accountDataCopy, bookingDataCopy, closeAccount } from './access';
 import { bookingForPersonalData, eraseBooking } from './erase';
 import { groupForNotice } from './queries/erase';
-
-const tokenQuery = z.object({ token: z.string().max(200).optional() });
 
 const download = (name: string) => ({
   'Cache-Control': 'no-store',
@@ -24,7 +22,7 @@ export function privacyRoutes(ctx: AppContext) {
   const booking = (req: Request) => {
     const ref = normaliseReference(String(req.params.reference ?? ''));
     if (!ref) throw notFound('That booking');
-    return bookingForPersonalData(ctx, ref, tokenQuery.parse(req.query).token, req.user);
+    return bookingForPersonalData(ctx, ref, manageTokenOf(req), req.user);
   };
 
   r.get('/bookings/:reference/personal-data', async (req, res) => {
