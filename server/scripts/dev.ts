@@ -14,6 +14,7 @@ const local = await startLocalDatabase({
   port: Number(process.env.DB_PORT ?? 3307),
   database: 'mendery',
   secrets,
+  supervise: true,
 });
 await seedOnFirstRun(local.appUrl, secrets.sessionSecret);
 const stopMailbox = await startLocalMailbox(local.appUrl, smtpPort);

@@ -50,10 +50,18 @@ export async function startLocalDatabase(opts: {
   database: string;
   secrets: Secrets;
   fast?: boolean;
+  /** Start MariaDB again when it exits unexpectedly (npm start and npm run dev). */
+  supervise?: boolean;
 }): Promise<LocalDatabase> {
   ensureMariadbInstalled(console.error);
   step(`Starting a private MariaDB on 127.0.0.1:${opts.port} (data in ${path.relative(root, opts.dir) || opts.dir})`);
-  const instance = await startPrivateMariadb({ dir: opts.dir, port: opts.port, fast: opts.fast, log: console.log });
+  const instance = await startPrivateMariadb({
+    dir: opts.dir,
+    port: opts.port,
+    fast: opts.fast,
+    supervise: opts.supervise,
+    log: console.log,
+  });
   const names = {
     database: opts.database,
     appUser: 'mendery_app',

@@ -46,6 +46,7 @@ try {
       port: dbPort,
       database: process.env.DB_NAME ?? 'mendery',
       secrets,
+      supervise: true,
     });
     stops.push(() => local.instance.stop());
     dbUrl = local.appUrl;

@@ -56,7 +56,7 @@ export function createApp(ctx: AppContext) {
   api.use(ctx.publicCache.invalidateOnWrite);
   for (const f of FEATURES) if (f.publicRoutes) api.use(f.publicRoutes(ctx));
 
-  const { middleware: session, store } = sessionMiddleware(ctx.env, ctx.database.pool);
+  const { middleware: session, store } = sessionMiddleware(ctx.env, ctx.database.pool, ctx.log);
   const { csrfSynchronisedProtection, token: csrfToken } = csrfProtection(ctx.env.SESSION_SECRET);
   api.use(session);
   api.use(loadUser(ctx.database.db, ctx.env.SESSION_ABSOLUTE_HOURS));

@@ -27,7 +27,11 @@ export async function startServer(
   opts: { sender?: MailSender; log?: (l: string) => void } = {},
 ): Promise<RunningServer> {
   const log = opts.log ?? ((l: string) => console.log(l));
-  const database = createDatabase(env.dbUrl, env.DB_POOL_SIZE);
+  const database = createDatabase(env.dbUrl, env.DB_POOL_SIZE, {
+    queryMs: env.DB_QUERY_TIMEOUT_MS,
+    connectMs: env.DB_CONNECT_TIMEOUT_MS,
+    acquireMs: env.DB_ACQUIRE_TIMEOUT_MS,
+  });
   const outbox = new OutboxWorker(database.db, opts.sender ?? smtpSender(env), log);
   const ctx: AppContext = {
     env,

@@ -1,7 +1,9 @@
+import type { RequestHandler } from 'express';
 import session from 'express-session';
 import MySQLStoreFactory from 'express-mysql-session';
 import type { Pool } from 'mysql2/promise';
 import type { Env } from '../config/env';
+import { redactUrl } from '../http/redact';
 
 declare module 'express-session' {
   interface SessionData {
@@ -36,7 +38,7 @@ export function signInExpired(signedInAt: unknown, absoluteHours: number, now: n
  * Sessions live in MariaDB so any app process can serve any request. The cookie's maxAge is the idle timeout:
  * `rolling` renews it on every response, so a session ends after that long without a request.
  */
-export function sessionMiddleware(env: Env, pool: Pool) {
+export function sessionMiddleware(env: Env, pool: Pool, log: (line: string) => void = () => {}) {
   const MySQLStore = MySQLStoreFactory(session as never);
   const idleMs = env.SESSION_IDLE_MINUTES * 60_000;
   const store = new MySQLStore(
@@ -49,8 +51,13 @@ export function sessionMiddleware(env: Env, pool: Pool) {
     },
     pool as never,
   );
+  // The store clears expired rows on a timer and rethrows a failure, which would end the process while the
+  // database is away: the next pass clears them instead.
+  const timed = store as unknown as { clearExpiredSessions(): Promise<void> };
+  const clearExpired = timed.clearExpiredSessions.bind(store);
+  timed.clearExpiredSessions = () => clearExpired().catch(() => undefined);
   const cookie = sessionCookie(env);
-  const middleware = session({
+  const inner = session({
     name: cookie.name,
     secret: env.SESSION_SECRET,
     store,
@@ -60,5 +67,18 @@ export function sessionMiddleware(env: Env, pool: Pool) {
     proxy: env.TRUST_PROXY ? true : undefined,
     cookie: { ...cookie.options, maxAge: idleMs },
   });
+  // The session is saved or touched while the answer is being sent, and a store failure then reaches `next` after
+  // the answer has gone: passed on, it would skip the error handler and make Express destroy the keep-alive socket,
+  // failing the client's next request on it. The answer stands; the failure is only logged.
+  const middleware: RequestHandler = (req, res, next) =>
+    inner(req, res, (err?: unknown) => {
+      if (err && res.headersSent) {
+        log(
+          `session store failed after the answer to ${req.method} ${redactUrl(req.originalUrl)}: ${(err as Error)?.message}`,
+        );
+        return;
+      }
+      next(err);
+    });
   return { middleware, store: store as unknown as { close(): Promise<void> } };
 }

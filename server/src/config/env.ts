@@ -15,6 +15,10 @@ const schema = z.object({
   DB_USER: z.string().default('mendery_app'),
   DB_PASSWORD: z.string().default(''),
   DB_POOL_SIZE: z.coerce.number().int().min(1).default(10),
+  // Bounds on waiting for the database (db/timeouts.ts): a statement, a new connection, a free pooled connection.
+  DB_QUERY_TIMEOUT_MS: z.coerce.number().int().min(100).default(10_000),
+  DB_CONNECT_TIMEOUT_MS: z.coerce.number().int().min(100).default(3000),
+  DB_ACQUIRE_TIMEOUT_MS: z.coerce.number().int().min(100).default(10_000),
   SESSION_SECRET: z.string().min(32, 'SESSION_SECRET must be at least 32 characters'),
   SESSION_IDLE_MINUTES: z.coerce.number().positive().default(60),
   SESSION_ABSOLUTE_HOURS: z.coerce.number().positive().default(12),

@@ -1,6 +1,7 @@
 import { drizzle, type MySql2Database } from 'drizzle-orm/mysql2';
 import mysql from 'mysql2/promise';
 import * as schema from './schema/index';
+import { guardPool, type DbTimeouts } from './timeouts';
 
 export type Db = MySql2Database<typeof schema>;
 export type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
@@ -12,7 +13,8 @@ export interface Database {
   close(): Promise<void>;
 }
 
-export function createDatabase(url: string, poolSize = 10): Database {
+/** A pool and its Drizzle handle. The app passes timeouts (db/timeouts.ts); scripts that run long statements do not. */
+export function createDatabase(url: string, poolSize = 10, timeouts?: DbTimeouts): Database {
   const pool = mysql.createPool({
     uri: url,
     connectionLimit: poolSize,
@@ -21,10 +23,13 @@ export function createDatabase(url: string, poolSize = 10): Database {
     dateStrings: false,
     charset: 'utf8mb4_unicode_ci',
     enableKeepAlive: true,
+    ...(timeouts ? { connectTimeout: timeouts.connectMs } : {}),
   });
+  const guard = timeouts ? guardPool(pool, timeouts) : null;
   // Every connection works in UTC, whatever the server's zone.
   pool.on('connection', (conn) => {
-    conn.query("SET time_zone = '+00:00'");
+    const limit = guard?.onConnection(conn);
+    conn.query(`SET time_zone = '+00:00'${limit ? `, ${limit}` : ''}`);
   });
   const db = drizzle(pool, { schema, mode: 'default' });
   return { pool, db, close: () => pool.end() };

@@ -37,15 +37,52 @@ export const driverCode = (err: unknown): string | undefined => {
   return typeof code === 'string' ? code : undefined;
 };
 
+/** Driver codes that mean "the database cannot be reached or did not answer in time", not "the request is wrong". */
 const UNAVAILABLE = new Set([
   'ECONNREFUSED',
   'ECONNRESET',
+  'ECONNABORTED',
+  'EPIPE',
   'ETIMEDOUT',
+  'EHOSTUNREACH',
+  'ENETUNREACH',
+  'ENOTFOUND',
+  'EAI_AGAIN',
   'PROTOCOL_CONNECTION_LOST',
   'PROTOCOL_SEQUENCE_TIMEOUT',
+  'PROTOCOL_ENQUEUE_AFTER_FATAL_ERROR',
+  'POOL_ACQUIRE_TIMEOUT',
   'ER_CON_COUNT_ERROR',
   'ER_SERVER_SHUTDOWN',
+  'ER_CONNECTION_KILLED',
+  'ER_QUERY_INTERRUPTED',
 ]);
+/** MariaDB's own error numbers mysql2 has no code for: 1969 is max_statement_time exceeded (ER_STATEMENT_TIMEOUT). */
+const UNAVAILABLE_ERRNOS = new Set([1969]);
+/** mysql2's messages without a code, for a pool or connection that is already closed. */
+const UNAVAILABLE_MESSAGES = [
+  'Pool is closed.',
+  "Can't add new command when connection is in closed state",
+  "Can't write in closed state",
+  'No connections available.',
+];
+
+/**
+ * True when an error, or any error it wraps (Drizzle keeps the driver's error as the cause), says the database is
+ * unreachable, closed or too slow: answered with 503 and Retry-After rather than 500. Fatal mysql2 errors are all
+ * about the connection, never about the statement.
+ */
+export function databaseUnavailable(err: unknown): boolean {
+  type Cause = { code?: unknown; errno?: unknown; message?: unknown; fatal?: unknown; cause?: unknown };
+  let e = err as Cause | null | undefined;
+  for (let depth = 0; e && typeof e === 'object' && depth < 5; depth++, e = e.cause as typeof e) {
+    if (typeof e.code === 'string' && UNAVAILABLE.has(e.code)) return true;
+    if (typeof e.errno === 'number' && UNAVAILABLE_ERRNOS.has(e.errno)) return true;
+    if (typeof e.message === 'string' && UNAVAILABLE_MESSAGES.includes(e.message)) return true;
+    if (e.fatal === true) return true;
+  }
+  return false;
+}
 
 /** body-parser's refusals (http-errors with a 4xx status and a `type`), as our own. */
 function bodyParserError(err: { type?: unknown; status?: unknown; expose?: unknown }): HttpError | null {
@@ -81,7 +118,7 @@ export function errorHandler(log: (msg: string, err: unknown) => void = console.
       e = new HttpError(400, 'bad-url', 'The address holds a broken %-escape. Check the link and try again.');
     else if (bodyParserError(err)) e = bodyParserError(err)!;
     else if (driverCode(err) === 'ER_DUP_ENTRY') e = new HttpError(409, 'duplicate', 'That exists already.');
-    else if (UNAVAILABLE.has(driverCode(err) ?? '') || err?.message === 'Pool is closed.') {
+    else if (databaseUnavailable(err)) {
       log(`database unavailable on ${req.method} ${redactUrl(req.originalUrl)}`, err);
       e = new HttpError(503, 'unavailable', 'The database is not reachable just now. Try again in a moment.');
       if (!res.headersSent) res.set('Retry-After', '5');

@@ -13,6 +13,8 @@ export interface PrivateMariadb {
   socket: string;
   /** Runs SQL as the instance's root over the socket (unix_socket authentication). */
   rootSql(sql: string): string;
+  /** The server's process id now (it changes when a supervised server is restarted; 0 while it is down). */
+  pid(): number;
   stop(): Promise<void>;
 }
 
@@ -22,6 +24,8 @@ export interface PrivateMariadbOptions {
   /** Throwaway test instances trade durability for speed. */
   fast?: boolean;
   log?: (line: string) => void;
+  /** Start the server again after an unexpected exit, with backoff (npm start). */
+  supervise?: boolean;
 }
 
 export function ensureMariadbInstalled(log: (line: string) => void) {
@@ -73,44 +77,12 @@ function alive(pid: number): boolean {
   }
 }
 
-export async function startPrivateMariadb(opts: PrivateMariadbOptions): Promise<PrivateMariadb> {
-  const log = opts.log ?? (() => {});
-  const dir = path.resolve(opts.dir);
+/** mariadbd's command line: its own files only, loopback, utf8mb4. */
+function serverArgs(opts: PrivateMariadbOptions, dir: string): string[] {
   const data = path.join(dir, 'data');
   const socket = path.join(dir, 'mysqld.sock');
   const pidFile = path.join(dir, 'mysqld.pid');
   const errorLog = path.join(dir, 'error.log');
-  mkdirSync(dir, { recursive: true });
-
-  // A server left running by an earlier run that was killed hard: adopt it rather than fight over the files.
-  if (existsSync(pidFile)) {
-    const pid = Number(readFileSync(pidFile, 'utf8').trim());
-    if (pid && alive(pid) && ping(socket)) {
-      log(`  MariaDB already running from an earlier start (pid ${pid}); reusing it.`);
-      return handle(opts.port, socket, null, pid);
-    }
-  }
-
-  if (!existsSync(path.join(data, 'mysql'))) {
-    log(`  Initialising a private MariaDB data folder in ${data}`);
-    const r = spawnSync(
-      'mariadb-install-db',
-      [
-        '--no-defaults',
-        `--datadir=${data}`,
-        '--user=root',
-        '--auth-root-authentication-method=socket',
-        '--skip-test-db',
-      ],
-      { encoding: 'utf8' },
-    );
-    if (r.status !== 0) throw new Error(`mariadb-install-db failed:\n${r.stdout}\n${r.stderr}`);
-  }
-
-  if (!(await portIsFree(opts.port))) {
-    throw new Error(`Port ${opts.port} on 127.0.0.1 is already taken by another program. Set DB_PORT to a free port.`);
-  }
-
   const args = [
     '--no-defaults',
     `--datadir=${data}`,
@@ -134,19 +106,172 @@ export async function startPrivateMariadb(opts: PrivateMariadbOptions): Promise<
       '--innodb-flush-method=nosync',
       '--innodb-buffer-pool-size=256M',
     );
-  const child = spawn('mariadbd', args, { stdio: 'ignore' });
-  let exited = false;
-  child.once('exit', () => (exited = true));
+  return args;
+}
 
-  const deadline = Date.now() + 30_000;
-  while (!ping(socket)) {
-    if (exited || Date.now() > deadline) {
-      const tail = existsSync(errorLog) ? readFileSync(errorLog, 'utf8').split('\n').slice(-15).join('\n') : '';
-      throw new Error(`MariaDB did not start on port ${opts.port}.\n${tail}`);
+export async function startPrivateMariadb(opts: PrivateMariadbOptions): Promise<PrivateMariadb> {
+  const log = opts.log ?? (() => {});
+  const dir = path.resolve(opts.dir);
+  const data = path.join(dir, 'data');
+  const socket = path.join(dir, 'mysqld.sock');
+  const pidFile = path.join(dir, 'mysqld.pid');
+  const errorLog = path.join(dir, 'error.log');
+  mkdirSync(dir, { recursive: true });
+
+  // A server left running by an earlier run that was killed hard: adopt it rather than fight over the files.
+  if (existsSync(pidFile)) {
+    const pid = Number(readFileSync(pidFile, 'utf8').trim());
+    if (pid && alive(pid) && ping(socket)) {
+      log(`  MariaDB already running from an earlier start (pid ${pid}); reusing it.`);
+      if (!opts.supervise) return handle(opts.port, socket, null, pid);
+      const restart = () => launchMariadbd(serverArgs(opts, dir), errorLog, opts.port);
+      return supervise(opts.port, socket, adopt(pid), restart, log);
     }
-    await new Promise((r) => setTimeout(r, 100));
   }
-  return handle(opts.port, socket, child, child.pid!);
+
+  if (!existsSync(path.join(data, 'mysql'))) {
+    log(`  Initialising a private MariaDB data folder in ${data}`);
+    const r = spawnSync(
+      'mariadb-install-db',
+      [
+        '--no-defaults',
+        `--datadir=${data}`,
+        '--user=root',
+        '--auth-root-authentication-method=socket',
+        '--skip-test-db',
+      ],
+      { encoding: 'utf8' },
+    );
+    if (r.status !== 0) throw new Error(`mariadb-install-db failed:\n${r.stdout}\n${r.stderr}`);
+  }
+
+  if (!(await portIsFree(opts.port))) {
+    throw new Error(`Port ${opts.port} on 127.0.0.1 is already taken by another program. Set DB_PORT to a free port.`);
+  }
+
+  const args = serverArgs(opts, dir);
+  const launch = () => launchMariadbd(args, errorLog, opts.port);
+  const first = await launch();
+  return opts.supervise
+    ? supervise(opts.port, socket, first, launch, log)
+    : handle(opts.port, socket, first.child, first.pid);
+}
+
+interface Launched {
+  child: ChildProcess | null;
+  pid: number;
+  exited: Promise<string>;
+}
+
+/** Starts mariadbd and waits until it answers a ping; `exited` settles with how the process ended. */
+async function launchMariadbd(args: string[], errorLog: string, port: number): Promise<Launched> {
+  const child = spawn('mariadbd', args, { stdio: 'ignore' });
+  let gone: string | null = null;
+  const exited = new Promise<string>((resolve) => {
+    child.once('exit', (code, signal) => resolve((gone = signal ? `signal ${signal}` : `exit code ${code}`)));
+    child.once('error', (err) => resolve((gone = err.message)));
+  });
+  const deadline = Date.now() + 60_000;
+  while (!(await greets(port))) {
+    if (gone !== null || Date.now() > deadline) {
+      if (gone === null) child.kill('SIGKILL');
+      const tail = existsSync(errorLog) ? readFileSync(errorLog, 'utf8').split('\n').slice(-15).join('\n') : '';
+      throw new Error(`MariaDB did not start on port ${port}.\n${tail}`);
+    }
+    await sleep(100);
+  }
+  return { child, pid: child.pid!, exited };
+}
+
+/**
+ * Keeps the server running: after an unexpected exit it is started again after restartDelayMs(n), and each restart
+ * is logged. A server that stayed up for a minute counts as healthy again, so the next failure waits 0.5 s again.
+ */
+function supervise(
+  port: number,
+  socket: string,
+  first: Launched,
+  launch: () => Promise<Launched>,
+  log: (line: string) => void,
+): PrivateMariadb {
+  let current: Launched | null = first;
+  let upSince = Date.now();
+  let failures = 0;
+  let stopping = false;
+  let wake: (() => void) | null = null;
+  const pause = (ms: number) =>
+    new Promise<void>((resolve) => {
+      const t = setTimeout(resolve, ms);
+      wake = () => {
+        clearTimeout(t);
+        resolve();
+      };
+    });
+
+  const loop = (async () => {
+    let exitedHow = await first.exited;
+    while (!stopping) {
+      current = null;
+      if (Date.now() - upSince > 60_000) failures = 0;
+      const delay = restartDelayMs(failures++);
+      log(`  MariaDB stopped unexpectedly (${exitedHow}); restart ${failures} in ${(delay / 1000).toFixed(1)} s`);
+      await pause(delay);
+      if (stopping) return;
+      try {
+        const started = Date.now();
+        current = await launch();
+        upSince = Date.now();
+        if (stopping) return await handle(port, socket, current.child, current.pid).stop();
+        log(`  MariaDB is running again (pid ${current.pid}, started in ${((upSince - started) / 1000).toFixed(1)} s)`);
+        exitedHow = await current.exited;
+      } catch (err) {
+        exitedHow = (err as Error).message.split('\n')[0];
+      }
+    }
+  })();
+
+  const base = handle(port, socket, null, first.pid);
+  return {
+    ...base,
+    pid: () => current?.pid ?? 0,
+    async stop() {
+      stopping = true;
+      wake?.();
+      const running = current;
+      if (running) await handle(port, socket, running.child, running.pid).stop();
+      await loop;
+    },
+  };
+}
+
+/** Restart waits: 0.5 s, 1 s, 2 s, 4 s … doubling from the first, never more than 30 s. */
+export function restartDelayMs(failuresBefore: number): number {
+  return Math.min(30_000, 500 * 2 ** Math.min(failuresBefore, 16));
+}
+
+/** A server this process did not start: its end is noticed by polling its process id. */
+function adopt(pid: number): Launched {
+  const exited = (async () => {
+    while (alive(pid)) await sleep(500);
+    return 'the earlier server ended';
+  })();
+  return { child: null, pid, exited };
+}
+
+const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
+
+/** Ready once the server greets a client on its port (it opens the port only when ready for connections). */
+function greets(port: number): Promise<boolean> {
+  return new Promise((resolve) => {
+    const sock = net.connect({ port, host: '127.0.0.1' });
+    const done = (ok: boolean) => {
+      sock.destroy();
+      resolve(ok);
+    };
+    sock.setTimeout(2000, () => done(false));
+    sock.once('data', () => done(true));
+    sock.once('error', () => done(false));
+  });
 }
 
 function handle(port: number, socket: string, child: ChildProcess | null, pid: number): PrivateMariadb {
@@ -155,8 +280,12 @@ function handle(port: number, socket: string, child: ChildProcess | null, pid: n
     port,
     socket,
     rootSql,
+    pid: () => pid,
     async stop() {
-      spawnSync('mariadb-admin', ['--no-defaults', `--socket=${socket}`, '-uroot', 'shutdown'], { encoding: 'utf8' });
+      spawnSync('mariadb-admin', ['--no-defaults', `--socket=${socket}`, '-uroot', 'shutdown'], {
+        encoding: 'utf8',
+        timeout: 15_000,
+      });
       const deadline = Date.now() + 15_000;
       while (alive(pid) && Date.now() < deadline) await new Promise((r) => setTimeout(r, 50));
       if (alive(pid)) process.kill(pid, 'SIGKILL');

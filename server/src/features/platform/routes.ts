@@ -1,6 +1,10 @@
 import { Router } from 'express';
 import type { AppContext } from '../../context';
 import { isDemo, needsSetup } from '../../auth/service';
+import { withDeadline } from '../../db/timeouts';
+
+/** Health answers within this long even when every pooled connection is stuck: 503 when the database is away. */
+const HEALTH_DEADLINE_MS = 2000;
 
 /** Health and public configuration: answered before the session, so they create none. */
 export function platformRoutes(ctx: AppContext) {
@@ -12,7 +16,7 @@ export function platformRoutes(ctx: AppContext) {
   });
   r.get('/health', async (_req, res) => {
     // The database answers, and nothing more: its version would tell a caller which flaws to try.
-    await ctx.database.pool.query('SELECT 1');
+    await withDeadline(ctx.database.pool.query('SELECT 1'), HEALTH_DEADLINE_MS);
     res.json({ ok: true });
   });
   r.get('/public/config', async (req, res) => {
