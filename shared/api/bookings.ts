@@ -43,8 +43,11 @@ export interface BookingView {
     status: ItemStatus;
     queueNumber: number | null;
     outcome: Outcome | null;
-    photos: { id: string; width: number; height: number }[];
+    /** `url`: a signed address good for 10 to 15 minutes (the page refetches before then). */
+    photos: { id: string; width: number; height: number; url: string }[];
   }[];
+  /** The booking's calendar file: a signed address good for 10 to 15 minutes. */
+  calendarUrl: string;
   qr: string;
 }
 

@@ -55,7 +55,7 @@ describe('personal data at phone width', () => {
     await page.getByRole('heading', { name: 'Your details' }).waitFor();
     await page.screenshot({ path: shot('booking-your-details-phone'), fullPage: true });
     const download = page.waitForEvent('download');
-    await page.getByRole('link', { name: 'Download my details' }).click();
+    await page.getByRole('button', { name: 'Download my details' }).click();
     const copy = JSON.parse(readFileSync((await (await download).path())!, 'utf8'));
     expect(copy.you).toMatchObject({ name: b.name, email: b.email, phone: '07700 900456' });
 

@@ -9,7 +9,6 @@ import { ConfirmDialog } from '../../components/ui/confirm-dialog';
 import { Alert, Card, Spinner } from '../../components/ui/feedback';
 import { SelectField } from '../../components/ui/field';
 import { paths } from '../../config/paths';
-import { bookingCalendarUrl } from '../../features/bookings/api/calendar-url';
 import { useCancelBooking } from '../../features/bookings/api/cancel-booking';
 import { useBooking, bookingQuery } from '../../features/bookings/api/get-booking';
 import { useMoveBooking, useRefreshBooking } from '../../features/bookings/api/move-booking';
@@ -124,7 +123,7 @@ export function ManageBookingPage() {
           <p className="text-sm text-ink-soft">{b.event.groupName}</p>
           {b.status === 'confirmed' && b.event.status !== 'cancelled' && (
             <a
-              href={bookingCalendarUrl(b.reference, token)}
+              href={b.calendarUrl}
               download={`mendery-${b.reference}.ics`}
               className="mt-3 inline-flex min-h-11 items-center justify-center gap-2 rounded-lg bg-white px-4 py-2 font-bold text-navy ring-1 ring-navy/25 transition hover:bg-navy/5"
             >
@@ -172,12 +171,7 @@ export function ManageBookingPage() {
               <p className="text-ink-soft">{i.fault}</p>
               <div className="mt-2 flex flex-wrap items-center gap-2">
                 {i.photos.map((p) => (
-                  <img
-                    key={p.id}
-                    src={`/api/photos/${p.id}?token=${encodeURIComponent(token)}`}
-                    alt=""
-                    className="size-20 rounded-lg object-cover ring-1 ring-ink/10"
-                  />
+                  <img key={p.id} src={p.url} alt="" className="size-20 rounded-lg object-cover ring-1 ring-ink/10" />
                 ))}
                 {active && i.photos.length < 3 && (
                   <label className="cursor-pointer rounded-lg px-3 py-2 text-sm font-bold text-navy ring-1 ring-navy/25 has-focus-visible:outline-3 has-focus-visible:outline-copper">

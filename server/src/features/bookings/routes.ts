@@ -12,6 +12,7 @@ import type { AppContext } from '../../context';
 import { hasGroupRole, requireGroupRole } from '../../auth/guards';
 import { HttpError, notFound } from '../../http/errors';
 import { body, params, paramId } from '../../http/validate';
+import { signingKey, verifySignedPath } from '../../http/signed-url';
 import { visitorLimits } from '../../http/visitor-limits';
 import { intakePhotosOf } from './queries/limits';
 import { eventGroupId } from '../../core/events';
@@ -49,6 +50,9 @@ export function bookingRoutes(ctx: AppContext) {
     return ref;
   };
   const byToken = (req: Request) => booking.bookingByToken(ctx, reference(req), manageToken(req));
+  const key = signingKey(ctx.env.SESSION_SECRET);
+  /** A request for the very path the booking page was given a signed address for, before its expiry. */
+  const signed = (req: Request) => verifySignedPath(key, req.baseUrl + req.path, req.query, Date.now());
   // Bookings and waiting-list joins share one count per source address and one per e-mail address.
   const limits = visitorLimits(ctx, 'booking', {
     perAddress: ctx.env.BOOKING_RATE_MAX,
@@ -74,9 +78,9 @@ export function bookingRoutes(ctx: AppContext) {
     res.json(await booking.bookingView(ctx, b.id));
   });
 
-  /** The booked slot for the visitor's calendar: the same secret link as the booking page. */
+  /** The booked slot for the visitor's calendar: a signed address from the booking page, or the manage token. */
   r.get('/bookings/:reference/calendar', async (req, res) => {
-    const b = await byToken(req);
+    const b = signed(req) ? await booking.bookingOfSignedPath(ctx, reference(req)) : await byToken(req);
     const { text, filename } = await bookingCalendar(ctx, b.id);
     sendCalendar(res, text, filename, 'attachment');
   });
@@ -122,7 +126,10 @@ export function bookingRoutes(ctx: AppContext) {
     },
   );
 
-  /** A photo: for the visitor with the booking's token, or for the organisers, reception and fixers of its group. */
+  /**
+   * A photo: by a signed address from the booking page or with the booking's token (the visitor), or for the
+   * organisers, reception and fixers of its group.
+   */
   r.get('/photos/:id', async (req, res) => {
     const { id } = params(req, z.object({ id: z.string() }));
     // A photo is named by its random public id only; anything else (an old numeric id) is simply not found.
@@ -132,7 +139,7 @@ export function bookingRoutes(ctx: AppContext) {
     // A bench photo of a group that shares its repair notes may be seen by any group's volunteers.
     const sharedBenchPhoto =
       p.kind === 'repair' && Boolean(p.shares) && Boolean(req.user && (req.user.admin || req.user.roles.length));
-    if (!sharedBenchPhoto && !hasGroupRole(req.user, p.groupId, ['organiser', 'host', 'fixer']))
+    if (!sharedBenchPhoto && !signed(req) && !hasGroupRole(req.user, p.groupId, ['organiser', 'host', 'fixer']))
       await booking.bookingByToken(ctx, p.reference, token);
     const data = await ctx.storage.get(p.key);
     if (!data) throw notFound('That photo');

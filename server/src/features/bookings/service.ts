@@ -5,6 +5,7 @@ import { isDuplicate, withDeadlockRetry } from '../../db/retry';
 import { sha256 } from '../../auth/tokens';
 import { HttpError, notFound } from '../../http/errors';
 import { checkManageToken } from '../../core/links';
+import { signPath, signingKey } from '../../http/signed-url';
 import { screenItems } from '../../core/screening';
 import { mailAllowance } from '../../mail/allowance';
 import { activeBookingsFor } from './queries/limits';
@@ -159,6 +160,13 @@ export async function bookingByToken(ctx: AppContext, reference: string, token: 
   return b;
 }
 
+/** The booking a signed address names (the route has checked the signature for this very path). */
+export async function bookingOfSignedPath(ctx: AppContext, reference: string) {
+  const b = await bookingByReference(ctx.database.db, reference);
+  if (!b) throw notFound('That booking');
+  return b;
+}
+
 /** What the page behind a booking's QR code may say to anyone holding it: the reference and whether it stands. */
 export async function bookingCodeStatus(ctx: AppContext, reference: string): Promise<BookingCodeStatus> {
   const b = await bookingByReference(ctx.database.db, reference);
@@ -169,8 +177,14 @@ export async function bookingCodeStatus(ctx: AppContext, reference: string): Pro
 export async function bookingView(ctx: AppContext, bookingId: number) {
   const { db } = ctx.database;
   const row = await bookingWithContextById(db, bookingId);
-  const items = await bookingItemsWithPhotos(db, bookingId);
   const b = row.booking;
+  // The page loads photos and the calendar file as plain links: short-lived signed addresses, never the token.
+  const key = signingKey(ctx.env.SESSION_SECRET);
+  const now = Date.now();
+  const items = (await bookingItemsWithPhotos(db, bookingId)).map((i) => ({
+    ...i,
+    photos: i.photos.map((p) => ({ ...p, url: signPath(key, `/api/photos/${p.id}`, now) })),
+  }));
   return {
     reference: b.reference,
     status: b.status,
@@ -195,6 +209,7 @@ export async function bookingView(ctx: AppContext, bookingId: number) {
     },
     slot: { id: row.slot.id, startsAt: row.slot.startsAt, endsAt: row.slot.endsAt },
     items,
+    calendarUrl: signPath(key, `/api/bookings/${b.reference}/calendar`, now),
     qr: await qrDataUrl(bookingQrText(ctx.env.publicUrl, b.reference)),
   };
 }

@@ -4,13 +4,14 @@ import { Button } from '../../../components/ui/button';
 import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
 import { Alert, Card } from '../../../components/ui/feedback';
 import { paths } from '../../../config/paths';
-import { bookingDataUrl, useErasePersonalData } from '../api/personal-data';
+import { useDownloadBookingData, useErasePersonalData } from '../api/personal-data';
 
 /** On the visitor's booking page: a copy of what is held about them, and erasing it. */
 export function BookingDataPanel({ reference, token, groupId }: { reference: string; token: string; groupId: number }) {
   const [asking, setAsking] = useState(false);
   const [erased, setErased] = useState(false);
   const erase = useErasePersonalData(() => setErased(true));
+  const download = useDownloadBookingData();
   if (erased)
     return (
       <Alert tone="success" title="Your details are erased">
@@ -29,14 +30,11 @@ export function BookingDataPanel({ reference, token, groupId }: { reference: str
         </Link>
       </p>
       {erase.error && <Alert tone="error">{erase.error.message}</Alert>}
+      {download.error && <Alert tone="error">{download.error.message}</Alert>}
       <div className="flex flex-wrap gap-2">
-        <a
-          href={bookingDataUrl(reference, token)}
-          download={`mendery-booking-${reference}.json`}
-          className="inline-flex min-h-11 items-center rounded-lg px-4 py-2 font-bold text-navy ring-1 ring-navy/25 hover:bg-navy/5 focus-visible:outline-3 focus-visible:outline-copper"
-        >
+        <Button variant="secondary" busy={download.isPending} onClick={() => download.mutate({ reference, token })}>
           Download my details
-        </a>
+        </Button>
         <Button variant="danger" onClick={() => setAsking(true)}>
           Erase my details
         </Button>
