@@ -10,3 +10,6 @@ export const manageLinkEndsAt = (sessionEndsAt: Date, days: number): Date =>
 /** Whether a manage link for a session that ends at `sessionEndsAt` has run out at `now`. */
 export const manageLinkExpired = (sessionEndsAt: Date, days: number, now: Date): boolean =>
   now.getTime() > manageLinkEndsAt(sessionEndsAt, days).getTime();
+
+/** The earliest session end whose manage links still work at `now`. */
+export const earliestLiveSessionEnd = (now: Date, days: number): Date => new Date(now.getTime() - days * DAY_MS);

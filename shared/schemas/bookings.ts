@@ -18,6 +18,10 @@ export const visitorSchema = z.object({
     .transform((v) => v || undefined),
 });
 
+/** Asking for a fresh manage link for every current booking of an e-mail address. */
+export const freshLinkSchema = z.object({ email });
+export type FreshLinkInput = z.input<typeof freshLinkSchema>;
+
 export const bookingItemSchema = z.object({
   categoryId: z.coerce
     .number({ error: 'Choose what kind of item it is.' })

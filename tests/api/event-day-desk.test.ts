@@ -13,7 +13,7 @@ describe('the visitor’s own booking page', () => {
     const { reference } = await book(slotIds[2], [
       { categoryId: cats.clothing, fault: 'Strap of a rucksack torn off.' },
     ]);
-    const token = manageTokenFor({ env: { SESSION_SECRET: TEST_SECRET } } as never, reference);
+    const token = manageTokenFor({ env: { SESSION_SECRET: TEST_SECRET } } as never, reference, 1);
     expect((await as.anon.get(`/api/bookings/${reference}?token=${token}`)).json.items[0]).toMatchObject({
       status: 'booked',
       queueNumber: null,

@@ -80,6 +80,8 @@ export const moreRows: Row[] = [
   ['POST', (g) => `/api/events/${g.ownEvent}/items/999999/lock`, organiserOr(400), {}],
   // A visitor's booking: the manage token is the key, whoever holds it.
   ['POST', () => '/api/bookings', everyone(400), {}],
+  // A fresh link: an empty form is refused; a good one answers 202 whoever sends it.
+  ['POST', () => '/api/bookings/new-link', everyone(400), {}],
   ['GET', (g) => `/api/bookings/${g.reference}?token=${g.manageToken}`, everyone(200)],
   ['GET', (g) => `/api/bookings/${g.reference}?token=${WRONG_TOKEN}`, everyone(404)],
   ['DELETE', (g) => `/api/bookings/${g.reference}?token=${WRONG_TOKEN}`, everyone(404)],

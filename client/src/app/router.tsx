@@ -170,6 +170,7 @@ export const router = createBrowserRouter([
             path: 'events/:eventId/manage',
             ...page(() => import('../routes/events/manage'), 'ManageEventPage', allow.organiser),
           },
+          { path: 'bookings/new-link', ...page(() => import('../routes/bookings/new-link'), 'FreshLinkPage') },
           { path: 'bookings/:reference', ...page(() => import('../routes/bookings/manage'), 'ManageBookingPage') },
           { path: 'waiting-list/:token', ...page(() => import('../routes/bookings/claim'), 'ClaimOfferPage') },
           { path: 'b/:reference', ...page(() => import('../routes/bookings/claim'), 'BookingCodePage') },

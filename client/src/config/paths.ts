@@ -20,6 +20,7 @@ export const paths = {
   manageEvent: (id: number) => `/events/${id}/manage`,
   booking: (reference: string, token: string, fresh = false) =>
     `/bookings/${reference}?token=${encodeURIComponent(token)}${fresh ? '&new=1' : ''}`,
+  freshLink: () => '/bookings/new-link',
   groupEvents: (groupId: number) => `/groups/${groupId}/events`,
   newEvent: (groupId: number) => `/groups/${groupId}/events/new`,
   groupSettings: (groupId: number) => `/groups/${groupId}/settings`,

@@ -48,6 +48,9 @@ const schema = z.object({
   VISITOR_MAIL_MAX_PER_HOUR: z.coerce.number().int().min(1).default(6),
   /** Days after its session's end that a booking's manage link still works. */
   MANAGE_LINK_DAYS: z.coerce.number().int().min(1).default(30),
+  /** Requests for a fresh manage link per source address, and per e-mail address, in the sign-in window. */
+  NEW_LINK_RATE_MAX: z.coerce.number().int().min(1).default(10),
+  NEW_LINK_EMAIL_RATE_MAX: z.coerce.number().int().min(1).default(3),
   CLIENT_DIST: z.string().default('dist/client'),
 });
 

@@ -14,8 +14,12 @@ import { eventWithGroup } from './events';
 const mac = (ctx: AppContext, purpose: string) =>
   createHmac('sha256', ctx.env.SESSION_SECRET).update(purpose).digest('base64url');
 
-/** The secret in a booking's manage link. */
-export const manageTokenFor = (ctx: AppContext, reference: string) => mac(ctx, `manage-booking:${reference}`);
+/**
+ * The secret in a booking's manage link, at the booking's token version: each fresh link mailed raises the version, so
+ * the links mailed before stop working. Version 1 keeps the form of the links mailed before versions existed.
+ */
+export const manageTokenFor = (ctx: AppContext, reference: string, version: number) =>
+  mac(ctx, version === 1 ? `manage-booking:${reference}` : `manage-booking:${reference}:${version}`);
 
 const tokenQuery = z.object({ token: z.string().max(200).optional() });
 /**

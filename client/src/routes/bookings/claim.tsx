@@ -124,6 +124,9 @@ export function BookingCodePage() {
         Show this code at the reception desk when you arrive. To change the booking, use the link in your confirmation
         mail.
       </p>
+      <Link to={paths.freshLink()} className="mt-3 inline-flex min-h-11 items-center font-bold text-navy underline">
+        Lost the mail? Get a fresh link
+      </Link>
     </Card>
   );
 }

@@ -110,6 +110,8 @@ export const bookings = mysqlTable(
     /** For walk-ins: the name typed at the desk by the person accepting the house rules. */
     consentName: varchar('consent_name', { length: 120 }),
     manageTokenHash: char('manage_token_hash', { length: 64 }).notNull(),
+    /** Goes up by one with each fresh manage link mailed; the token is an HMAC of the reference and this. */
+    manageTokenVersion: int('manage_token_version').notNull().default(1),
     status: mysqlEnum('status', BOOKING_STATUSES).notNull().default('confirmed'),
     consentAt: timestamp3('consent_at').notNull(),
     reminderSentAt: timestamp3('reminder_sent_at'),
@@ -122,6 +124,7 @@ export const bookings = mysqlTable(
     uniqueIndex('bookings_reference_uq').on(t.reference),
     index('bookings_event_idx').on(t.eventId, t.status),
     index('bookings_slot_idx').on(t.slotId),
+    index('bookings_email_idx').on(t.visitorEmail),
   ],
 );
 

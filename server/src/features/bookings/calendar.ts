@@ -25,7 +25,7 @@ export async function bookingCalendar(ctx: AppContext, bookingId: number) {
       slotStartsAt: row.slot.startsAt,
       slotEndsAt: row.slot.endsAt,
       venue: row.venue,
-      manageUrl: manageUrl(ctx, b.reference, manageTokenFor(ctx, b.reference)),
+      manageUrl: manageUrl(ctx, b.reference, manageTokenFor(ctx, b.reference, b.manageTokenVersion)),
       itemNames: labelsOf(await itemsOf(db, bookingId)),
     },
     ctx.env.publicUrl,

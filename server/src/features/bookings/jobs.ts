@@ -42,7 +42,11 @@ export async function sendReminders(ctx: AppContext): Promise<number> {
           slotEndsAt: r.slot.endsAt,
           venue: r.venue,
           items: items.map((i) => itemLabel({ categoryName: i.name, brand: i.brand, model: i.model })),
-          manageUrl: manageUrl(ctx, r.booking.reference, manageTokenFor(ctx, r.booking.reference)),
+          manageUrl: manageUrl(
+            ctx,
+            r.booking.reference,
+            manageTokenFor(ctx, r.booking.reference, r.booking.manageTokenVersion),
+          ),
         }),
       );
       await markReminded(tx, r.booking.id);

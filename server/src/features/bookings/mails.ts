@@ -77,6 +77,18 @@ export const movedMail = (f: BookingMailFacts) =>
     },
   );
 
+/** A fresh manage link asked for on the site; the links mailed before for this booking no longer work. */
+export const freshLinkMail = (f: BookingMailFacts) =>
+  composeMail(f.visitorEmail, `Your booking link: ${f.eventTitle} — ${f.reference}`, {
+    paragraphs: [
+      `Hello ${f.visitorName},`,
+      `someone asked on the Mendery site for a fresh link to your booking ${f.reference}: ${f.eventTitle} (${f.groupName}), ${when(f)} at ${where(f)}.`,
+      'The links we mailed you before for this booking no longer work; use the one below.',
+    ],
+    action: { label: 'My booking page: QR code, move or cancel', url: f.manageUrl },
+    footnote: 'If you did not ask for this, you need do nothing: only this mailbox has the new link.',
+  });
+
 export const waitlistJoinedMail = (f: Omit<BookingMailFacts, 'reference' | 'manageUrl'>, position: number) =>
   composeMail(f.visitorEmail, `Waiting list: ${f.eventTitle}`, {
     paragraphs: [

@@ -3,6 +3,7 @@ import { z } from 'zod';
 import { normaliseReference } from '../../../../shared/booking/reference';
 import {
   createBookingSchema,
+  freshLinkSchema,
   moveBookingSchema,
   PHOTO_LIMITS,
   waitlistSchema,
@@ -27,6 +28,7 @@ import { sendCalendar } from '../../core/calendar';
 import { manageTokenOf } from '../../core/links';
 
 import { rebook, rebookView } from './return-visit';
+import { mailFreshLinks } from './fresh-links';
 
 const booking = { ...bookingService, ...changes, ...waitlist };
 
@@ -39,6 +41,9 @@ const idempotencyKey = z
   .min(8, 'Idempotency-Key must be 8 to 90 characters.')
   .max(90, 'Idempotency-Key must be 8 to 90 characters.')
   .regex(/^[A-Za-z0-9_.:-]+$/, 'Idempotency-Key may hold letters, digits and _ . : - only.');
+
+const FRESH_LINK_ANSWER =
+  'If this address has bookings for sessions coming up or just past, we have mailed a fresh link for each. Links mailed before no longer work.';
 
 export function bookingRoutes(ctx: AppContext) {
   const r = Router();
@@ -70,6 +75,16 @@ export function bookingRoutes(ctx: AppContext) {
     const result = await booking.createBooking(ctx, input, key?.data);
     if (result.replayed) res.setHeader('Idempotent-Replayed', 'true');
     res.status(result.status).json(result.body);
+  });
+
+  /** A fresh manage link for each current booking of an address. The answer is the same whether it has any or not. */
+  const linkLimits = visitorLimits(ctx, 'new-link', {
+    perAddress: ctx.env.NEW_LINK_RATE_MAX,
+    perEmail: ctx.env.NEW_LINK_EMAIL_RATE_MAX,
+  });
+  r.post('/bookings/new-link', ...linkLimits, async (req, res) => {
+    await mailFreshLinks(ctx, body(req, freshLinkSchema).email);
+    res.status(202).json({ message: FRESH_LINK_ANSWER });
   });
 
   r.get('/bookings/:reference', async (req, res) => {

@@ -98,7 +98,7 @@ export interface Prepared {
 
 export function prepareBooking(ctx: AppContext): Prepared {
   const reference = formatReference(randomBytes(6));
-  return { reference, token: manageTokenFor(ctx, reference) };
+  return { reference, token: manageTokenFor(ctx, reference, 1) };
 }
 
 /** Takes the places and the per-skill places of these items in the slot, or throws what the visitor must hear. */

@@ -58,7 +58,7 @@ export async function walkIn(
             visitorPhone: input.visitor.phone ?? null,
             walkIn: true,
             consentName: input.consentName,
-            manageTokenHash: sha256(manageTokenFor(ctx, reference)),
+            manageTokenHash: sha256(manageTokenFor(ctx, reference, 1)),
             consentAt: new Date(),
           });
           const now = new Date();
