@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { restartDelayMs } from '../../server/src/infra/mariadb';
-import { databaseUnavailable } from '../../server/src/http/errors';
+import { databaseUnavailable, unavailableReason } from '../../server/src/http/errors';
 
 describe('restart waits of the supervised MariaDB', () => {
   it('double from 0.5 s and stop at 30 s', () => {
@@ -37,5 +37,21 @@ describe('which errors mean the database is unavailable', () => {
     expect(databaseUnavailable(wrapped({ code: 'ER_PARSE_ERROR' }))).toBe(false);
     expect(databaseUnavailable(new TypeError('x is not a function'))).toBe(false);
     expect(databaseUnavailable(null)).toBe(false);
+  });
+  it('logs the innermost reason on one line, without the statement and its values', () => {
+    const driver = Object.assign(new Error('connect ECONNREFUSED 127.0.0.1:3307'), { code: 'ECONNREFUSED' });
+    const orm = Object.assign(new Error('Failed query: insert into `bookings` ...\nparams: visitor@example.org'), {
+      cause: driver,
+    });
+    expect(unavailableReason(orm)).toBe('connect ECONNREFUSED 127.0.0.1:3307');
+    const timeout = Object.assign(new Error('Query execution was interrupted (max_statement_time exceeded)'), {
+      errno: 1969,
+    });
+    expect(unavailableReason(wrapped(timeout))).toBe('Query execution was interrupted (max_statement_time exceeded)');
+    expect(
+      unavailableReason(
+        wrapped({ code: 'POOL_ACQUIRE_TIMEOUT', message: 'No database connection became free within 10000 ms.' }),
+      ),
+    ).toBe('No database connection became free within 10000 ms. (POOL_ACQUIRE_TIMEOUT)');
   });
 });
