@@ -49,7 +49,7 @@ describe('booking a slot', () => {
     expect((await slotRow(slotIds[0])).booked).toBe(1);
     const [queued] = await db.db.select().from(outbox).where(eq(outbox.toAddress, body.visitor.email));
     expect(queued.subject).toContain(res.json.reference);
-    expect(queued.text).toContain(`/bookings/${res.json.reference}?token=${res.json.manageToken}`);
+    expect(queued.text).toContain(`/bookings/${res.json.reference}#token=${res.json.manageToken}`);
     expect(queued.html).toContain('cid:booking-qr');
     expect(queued.attachments?.[0]).toMatchObject({ cid: 'booking-qr', contentType: 'image/png' });
   });
@@ -301,7 +301,7 @@ describe('the reminder the day before', () => {
       .from(outbox)
       .where(sql`${outbox.subject} LIKE 'Tomorrow:%'`);
     expect(reminders.map((r) => r.toAddress)).toEqual([early.visitor.email]);
-    expect(reminders[0].text).toContain(`/bookings/${e.reference}?token=${e.manageToken}`);
+    expect(reminders[0].text).toContain(`/bookings/${e.reference}#token=${e.manageToken}`);
   });
 });
 

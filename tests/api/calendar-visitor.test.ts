@@ -74,7 +74,7 @@ describe("the visitor's calendar file", () => {
       .where(like(outbox.subject, `%${reference}%`));
     const mailedLink = confirmation.text.match(/https?:\/\/\S+\/bookings\/\S+/)![0];
     expect(e.url).toBe(mailedLink);
-    expect(e.url.endsWith(`/bookings/${reference}?token=${manageToken}`)).toBe(true);
+    expect(e.url.endsWith(`/bookings/${reference}#token=${manageToken}`)).toBe(true);
     // RFC 5545 §3.8.1.5 DESCRIPTION: the reference and what is brought.
     expect(e.description).toContain(`Booking reference: ${reference}`);
     expect(e.description).toContain('Kettle — Brava K200');

@@ -88,7 +88,7 @@ describe('the booking confirmation mail', () => {
     const html = String(parsed.html);
     expect(html).toContain(`src="cid:${qr.cid}"`);
     expect(html).not.toContain('data:image');
-    const bookingPage = `${PUBLIC_URL}/bookings/${reference}?token=${manageToken}`;
+    const bookingPage = `${PUBLIC_URL}/bookings/${reference}#token=${manageToken}`;
     expect(html).toContain(bookingPage);
 
     // The words say where the code always shows; the plain text part, which has no picture, does not claim one.

@@ -171,3 +171,21 @@ describe('finding 10: a fresh manage link by e-mail', () => {
     expect(statuses).toEqual([202, 202, 202, 429]);
   });
 });
+
+describe('finding 10: mailed links carry the token in the fragment', () => {
+  it('puts #token= and no ?token= in the confirmation mail and in a fresh-link mail', async () => {
+    const email = `fragment-${Date.now()}@example.org`;
+    const { reference, token } = await bookOne(email);
+    await new Agent(server.url).post('/api/bookings/new-link', { email });
+    await server.ctx.outbox.drain();
+    const [confirmation, fresh] = mailsTo(email);
+    expect(confirmation.subject).toMatch(/^Booked:/);
+    expect(confirmation.text).toContain(`/bookings/${reference}#token=${token}`);
+    expect(fresh.subject).toMatch(/^Your booking link:/);
+    expect(fresh.text).toMatch(new RegExp(`/bookings/${reference}#token=[A-Za-z0-9_-]{43}`));
+    for (const m of [confirmation, fresh]) {
+      expect(m.text).not.toContain('?token=');
+      expect(m.html).not.toContain('?token=');
+    }
+  });
+});

@@ -106,7 +106,7 @@ describe('finding a session and booking a slot', () => {
     await admin.frameLocator('iframe[title="Rendered mail"]').getByAltText(`Booking ${reference}`).waitFor();
     await admin.screenshot({ path: shot('booking-mail'), fullPage: true });
     await admin.getByRole('tab', { name: 'Plain text' }).click();
-    const link = /http\S+\/bookings\/\S+\?token=\S+/.exec((await admin.locator('pre').textContent()) ?? '')![0];
+    const link = /http\S+\/bookings\/\S+#token=\S+/.exec((await admin.locator('pre').textContent()) ?? '')![0];
     await admin.close();
 
     const visitor = await browser.newPage({ viewport: PHONE });

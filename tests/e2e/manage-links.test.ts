@@ -61,4 +61,23 @@ describe('manage links on a phone', () => {
     await page.screenshot({ path: shot('booking-link-ran-out-phone'), fullPage: true });
     await page.close();
   });
+
+  it('opens a mailed #token= link, and moves an older ?token= link into the fragment without a request carrying it', async () => {
+    const { reference, token } = await book(`fragment-${Date.now()}@example.org`);
+    const page = await browser.newPage({ viewport: PHONE });
+    const asked: string[] = [];
+    page.on('request', (r) => asked.push(r.url()));
+    await page.goto(`${server.url}/bookings/${reference}#token=${token}`);
+    await page.getByRole('button', { name: 'Cancel my booking' }).waitFor();
+    expect(asked.filter((u) => u.includes(token))).toEqual([]);
+
+    await page.goto(`${server.url}/bookings/${reference}?token=${token}`);
+    await page.getByRole('button', { name: 'Cancel my booking' }).waitFor();
+    await page.waitForURL((u) => !u.search.includes('token='));
+    expect(new URL(page.url()).hash).toBe(`#token=${token}`);
+    await page.reload();
+    await page.getByRole('button', { name: 'Cancel my booking' }).waitFor();
+    await page.screenshot({ path: shot('booking-link-fragment-phone'), fullPage: true });
+    await page.close();
+  });
 });

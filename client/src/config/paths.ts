@@ -19,7 +19,7 @@ export const paths = {
   book: (id: number) => `/events/${id}/book`,
   manageEvent: (id: number) => `/events/${id}/manage`,
   booking: (reference: string, token: string, fresh = false) =>
-    `/bookings/${reference}?token=${encodeURIComponent(token)}${fresh ? '&new=1' : ''}`,
+    `/bookings/${reference}${fresh ? '?new=1' : ''}#token=${encodeURIComponent(token)}`,
   freshLink: () => '/bookings/new-link',
   groupEvents: (groupId: number) => `/groups/${groupId}/events`,
   newEvent: (groupId: number) => `/groups/${groupId}/events/new`,

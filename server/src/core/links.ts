@@ -55,8 +55,12 @@ export async function checkManageToken(
     );
 }
 
+/**
+ * A mailed manage link. The token is in the fragment, which browsers never send: it stays out of server and proxy
+ * logs and Referer headers; the page reads it there and sends it in the X-Manage-Token header.
+ */
 export const manageUrl = (ctx: AppContext, reference: string, token: string) =>
-  `${ctx.env.publicUrl}/bookings/${reference}?token=${token}`;
+  `${ctx.env.publicUrl}/bookings/${reference}#token=${token}`;
 
 /** The priority re-booking link of an item waiting for a part: the item's id and an HMAC of it. */
 export const rebookToken = (ctx: AppContext, itemId: number) => `${itemId}.${mac(ctx, `rebook:${itemId}`)}`;

@@ -14,13 +14,17 @@ import { useBooking, bookingQuery } from '../../features/bookings/api/get-bookin
 import { useMoveBooking, useRefreshBooking } from '../../features/bookings/api/move-booking';
 import { uploadPhotos } from '../../features/bookings/api/upload-photos';
 import { LinkProblem } from '../../features/bookings/components/link-problem';
+import { useManageToken } from '../../features/bookings/components/use-manage-token';
 import { eventKeys } from '../../features/events/api/keys';
 import { useEvent, eventQuery } from '../../features/events/api/get-event';
 import { StatusBadge } from '../../features/events/components/places-bar';
 import { queryClient } from '../../lib/query-client';
 import { BookingDataPanel } from '../../features/privacy/components/booking-data-panel';
 
-/** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
+/**
+ * Warms the cache for a link with ?token= (mailed before the token moved to the fragment, which a loader cannot
+ * see); a failure is left for the page, which says what went wrong in its own words.
+ */
 export const loader = async ({ params, request }: LoaderFunctionArgs) => {
   const token = new URL(request.url).searchParams.get('token');
   if (!token) return null;
@@ -37,7 +41,7 @@ export const loader = async ({ params, request }: LoaderFunctionArgs) => {
 export function ManageBookingPage() {
   const reference = useParams().reference ?? '';
   const [params] = useSearchParams();
-  const token = params.get('token') ?? '';
+  const token = useManageToken();
   const fresh = params.get('new') === '1';
   const photoProblems = ((useLocation().state as { photoProblems?: string[] } | null)?.photoProblems ?? []) as string[];
   const booking = useBooking(reference, token);
