@@ -69,7 +69,12 @@ export function createApp(ctx: AppContext) {
 
   const dist = path.resolve(ctx.env.CLIENT_DIST);
   if (existsSync(path.join(dist, 'index.html'))) app.use(clientFiles(dist));
-  app.use(errorHandler((msg, err) => ctx.log(`${msg}: ${(err as Error)?.stack ?? err}`)));
+  // Drizzle wraps the driver's error: its code and number are in the cause, which the stack does not show.
+  const causeOf = (err: unknown) => {
+    const c = (err as { cause?: { code?: string; errno?: number; message?: string } })?.cause;
+    return c ? `\n  cause: ${c.code ?? ''} ${c.errno ?? ''} ${c.message ?? ''}` : '';
+  };
+  app.use(errorHandler((msg, err) => ctx.log(`${msg}: ${(err as Error)?.stack ?? err}${causeOf(err)}`)));
 
   return {
     app,

@@ -113,4 +113,49 @@ describe('the outbox', () => {
     expect(row.status).toBe('failed');
     expect(row.lastError).toContain('550');
   });
+
+  it('records a sent mail even when the database drops the first write of "sent", so it does not go twice', async () => {
+    const sent: string[] = [];
+    await enqueueMail(db.db, composeMail('once@example.org', 'Once', { paragraphs: ['x'] }));
+    // The first UPDATE of the row to "sent" fails as a lost connection would; later ones go through.
+    let failures = 1;
+    const flaky = new Proxy(db.db, {
+      get(target, prop, receiver) {
+        if (prop === 'update' && failures > 0)
+          return () => ({
+            set: () => ({
+              where: () => {
+                failures--;
+                return Promise.reject(
+                  Object.assign(new Error('Connection lost'), { code: 'PROTOCOL_CONNECTION_LOST' }),
+                );
+              },
+            }),
+          });
+        return Reflect.get(target, prop, receiver);
+      },
+    });
+    const worker = new OutboxWorker(flaky, { send: async (m) => void sent.push(m.to) });
+    expect(await worker.processBatch()).toBe(1);
+    const [row] = await db.db.select().from(outbox).where(eq(outbox.toAddress, 'once@example.org'));
+    expect(row.status).toBe('sent');
+    expect(sent).toEqual(['once@example.org']);
+  });
+
+  it('the local mailbox keeps one copy of a mail sent again with the same Message-ID', async () => {
+    const p = await freePort();
+    const mailbox = new LocalMailbox(db.db, p);
+    await mailbox.start();
+    try {
+      const send = senderFor(p);
+      const mail = { to: 'twice@example.org', subject: 'Twice', html: '<p>x</p>', text: 'x' };
+      await send.send({ ...mail, messageId: '<resend-1@mendery.test>' });
+      await send.send({ ...mail, messageId: '<resend-1@mendery.test>' });
+      await send.send({ ...mail, messageId: '<resend-2@mendery.test>' });
+      const rows = await db.db.select().from(mailboxMessages).where(eq(mailboxMessages.toAddress, 'twice@example.org'));
+      expect(rows.map((r) => r.messageId).sort()).toEqual(['<resend-1@mendery.test>', '<resend-2@mendery.test>']);
+    } finally {
+      await mailbox.stop();
+    }
+  });
 });

@@ -21,6 +21,9 @@ export interface ClusterSettings {
   gcacheSize: string;
   fcLimit: number;
   syncWait: number;
+  keepalivePeriod: string;
+  suspectTimeout: string;
+  inactiveTimeout: string;
 }
 
 const MYSQL_USER = 'mysql';
@@ -109,10 +112,17 @@ export async function startNode(
     GCACHE_SIZE: settings.gcacheSize,
     FC_LIMIT: settings.fcLimit,
     SYNC_WAIT: settings.syncWait,
+    KEEPALIVE_PERIOD: settings.keepalivePeriod,
+    SUSPECT_TIMEOUT: settings.suspectTimeout,
+    INACTIVE_TIMEOUT: settings.inactiveTimeout,
   });
   chownTree(n.dir, uid, gid);
   const args = [`--defaults-file=${cnf}`, `--user=${MYSQL_USER}`];
   if (opts.bootstrap) args.push('--wsrep-new-cluster');
+  else {
+    const position = recoveredPosition(cnf, n.dir);
+    if (position) args.push(`--wsrep-start-position=${position}`);
+  }
   const child = spawn('mariadbd', args, { stdio: 'ignore' });
   let exited = false;
   child.once('exit', () => (exited = true));
@@ -127,6 +137,21 @@ export async function startNode(
     await new Promise((r) => setTimeout(r, 200));
   }
   return child;
+}
+
+/**
+ * After a crash the node's saved state has no position (seqno -1), and without one it would ask for a full copy
+ * (SST), blocking its donor meanwhile. `--wsrep-recover` reads the last committed position from InnoDB, as Debian's
+ * galera_recovery does under systemd, so the node can ask for the missing write-sets only (IST).
+ */
+function recoveredPosition(cnf: string, dir: string): string | null {
+  const log = path.join(dir, 'recover.log');
+  spawnSync('mariadbd', [`--defaults-file=${cnf}`, `--user=${MYSQL_USER}`, '--wsrep-recover', `--log-error=${log}`], {
+    encoding: 'utf8',
+  });
+  const text = existsSync(log) ? readFileSync(log, 'utf8') : '';
+  const m = /WSREP: Recovered position: ([0-9a-f-]{36}:-?\d+)/.exec(text);
+  return m && !m[1].endsWith(':-1') ? m[1] : null;
 }
 
 /** A clean shutdown, or SIGKILL after 20 s. */

@@ -1,6 +1,6 @@
 import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
 import { randomBytes } from 'node:crypto';
-import { chmodSync, mkdirSync } from 'node:fs';
+import { chmodSync, mkdirSync, openSync, writeSync } from 'node:fs';
 import type http from 'node:http';
 import path from 'node:path';
 import mysql from 'mysql2/promise';
@@ -56,6 +56,11 @@ const SETTINGS: Omit<ClusterSettings, 'peers'> = {
   gcacheSize: '64M',
   fcLimit: 64,
   syncWait: 1,
+  // Loopback never drops packets: a node that is silent for 2 s is gone. Galera's defaults (PT5S, PT15S) suit real
+  // networks. Keepalives must come at least three times within the suspect timeout.
+  keepalivePeriod: 'PT0.5S',
+  suspectTimeout: 'PT2S',
+  inactiveTimeout: 'PT4S',
 };
 
 async function waitFor(what: string, ok: () => Promise<boolean>, timeoutMs: number) {
@@ -148,7 +153,9 @@ export async function startCluster(opts: ClusterOptions): Promise<ClusterStack> 
     if (check.status !== 0) throw new Error(`haproxy rejected ${cfg}:\n${check.stdout}${check.stderr}`);
     log(`▸ Starting HAProxy: the database on 127.0.0.1:${dbPort}, Mendery on 127.0.0.1:${opts.appPort}`);
     const haproxy = spawn('haproxy', ['-db', '-f', cfg], { stdio: ['ignore', 'ignore', 'pipe'] });
+    const haproxyLog = openSync(path.join(opts.dir, 'haproxy.log'), 'a');
     haproxy.stderr?.on('data', (d: Buffer) => {
+      writeSync(haproxyLog, d);
       for (const line of String(d).split('\n')) if (/ALERT|is DOWN|is UP/.test(line)) log(`  haproxy: ${line.trim()}`);
     });
     stops.push(async () => {
@@ -178,9 +185,11 @@ export async function startCluster(opts: ClusterOptions): Promise<ClusterStack> 
     stops.push(await startLocalMailbox(dbUrl, smtpPort));
 
     const startApp = async (a: AppProcess) => {
+      const logFile = openSync(path.join(opts.dir, `${a.name}.log`), 'a');
       const child = spawn(process.execPath, ['--import', 'tsx', path.join(root, 'server/src/index.ts')], {
         cwd: root,
-        stdio: ['ignore', 'ignore', 'pipe'],
+        // Each process's output goes to <dir>/<name>.log (mail bodies included, so not to the console).
+        stdio: ['ignore', logFile, logFile],
         env: {
           ...process.env,
           NODE_ENV: 'production',
@@ -196,7 +205,6 @@ export async function startCluster(opts: ClusterOptions): Promise<ClusterStack> 
           ...opts.appEnv,
         },
       });
-      child.stderr?.on('data', (d: Buffer) => log(`  ${a.name}: ${String(d).trim()}`));
       a.child = child;
       await waitFor(
         `App process ${a.name}`,

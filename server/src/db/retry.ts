@@ -1,5 +1,8 @@
-/** Runs a transaction again on a deadlock (1213) or lock-wait timeout (1205), with jitter, a few times. */
-export async function withDeadlockRetry<T>(fn: () => Promise<T>, attempts = 5): Promise<T> {
+/**
+ * Runs a transaction again on a deadlock (1213; on Galera also a certification conflict at commit) or lock-wait
+ * timeout (1205), with a backoff that doubles from about 10 ms (jittered, at most 400 ms), up to 8 times.
+ */
+export async function withDeadlockRetry<T>(fn: () => Promise<T>, attempts = 8): Promise<T> {
   for (let i = 1; ; i++) {
     try {
       return await fn();
@@ -7,7 +10,7 @@ export async function withDeadlockRetry<T>(fn: () => Promise<T>, attempts = 5): 
       const e = err as { errno?: number; cause?: { errno?: number } };
       const errno = e.errno ?? e.cause?.errno;
       if (i >= attempts || (errno !== 1213 && errno !== 1205)) throw err;
-      await new Promise((r) => setTimeout(r, 5 + Math.random() * 20 * i));
+      await new Promise((r) => setTimeout(r, Math.min(400, 5 + Math.random() * 10 * 2 ** i)));
     }
   }
 }

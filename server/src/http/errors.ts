@@ -57,8 +57,11 @@ const UNAVAILABLE = new Set([
   'ER_CONNECTION_KILLED',
   'ER_QUERY_INTERRUPTED',
 ]);
-/** MariaDB's own error numbers mysql2 has no code for: 1969 is max_statement_time exceeded (ER_STATEMENT_TIMEOUT). */
-const UNAVAILABLE_ERRNOS = new Set([1969]);
+/**
+ * MariaDB's own error numbers mysql2 has no code for: 1969 is max_statement_time exceeded (ER_STATEMENT_TIMEOUT);
+ * 1047 is what a Galera node answers while it is not ready for queries (joining, or cut off from the others).
+ */
+const UNAVAILABLE_ERRNOS = new Set([1969, 1047]);
 /** mysql2's messages without a code, for a pool or connection that is already closed. */
 const UNAVAILABLE_MESSAGES = [
   'Pool is closed.',
@@ -98,6 +101,13 @@ export function unavailableReason(err: unknown): string {
   return reason;
 }
 
+const errnoOf = (err: unknown): number | undefined => {
+  const e = err as { errno?: unknown; cause?: { errno?: unknown } } | null;
+  const n = typeof e?.errno === 'number' ? e.errno : e?.cause?.errno;
+  return typeof n === 'number' ? n : undefined;
+};
+/** Deadlock (1213) or lock-wait timeout (1205). */
+const stillLocked = (err: unknown) => [1213, 1205].includes(errnoOf(err) ?? 0);
 /** body-parser's refusals (http-errors with a 4xx status and a `type`), as our own. */
 function bodyParserError(err: { type?: unknown; status?: unknown; expose?: unknown }): HttpError | null {
   if (typeof err?.status !== 'number' || err.status < 400 || err.status >= 500) return null;
@@ -132,7 +142,12 @@ export function errorHandler(log: (msg: string, err: unknown) => void = console.
       e = new HttpError(400, 'bad-url', 'The address holds a broken %-escape. Check the link and try again.');
     else if (bodyParserError(err)) e = bodyParserError(err)!;
     else if (driverCode(err) === 'ER_DUP_ENTRY') e = new HttpError(409, 'duplicate', 'That exists already.');
-    else if (databaseUnavailable(err)) {
+    else if (stillLocked(err)) {
+      // Deadlocks (on Galera, certification conflicts too) that outlasted the transaction's retries: nothing was
+      // written, and the same request will most likely go through a moment later.
+      e = new HttpError(503, 'busy', 'Many people are doing this at once. Try again in a moment.');
+      if (!res.headersSent) res.set('Retry-After', '1');
+    } else if (databaseUnavailable(err)) {
       log(`database unavailable on ${req.method} ${redactUrl(req.originalUrl)}`, unavailableReason(err));
       e = new HttpError(503, 'unavailable', 'The database is not reachable just now. Try again in a moment.');
       if (!res.headersSent) res.set('Retry-After', '5');

@@ -1,5 +1,6 @@
 import { SMTPServer } from 'smtp-server';
 import { simpleParser, type AddressObject } from 'mailparser';
+import { isDuplicate } from '../db/retry';
 import type { Db } from '../db/client';
 import { mailboxMessages } from '../db/schema/index';
 
@@ -46,9 +47,12 @@ export class LocalMailbox {
               html,
               text: parsed.text ?? null,
               raw: raw.toString('utf8'),
+              messageId: parsed.messageId?.slice(0, 255) ?? null,
             });
             callback();
           } catch (err) {
+            // Stored by an earlier attempt whose answer did not reach the sender: accept it, keep one.
+            if (isDuplicate(err)) return callback();
             this.log(`local mailbox could not store a message: ${(err as Error).message}`);
             callback(Object.assign(new Error('Mailbox storage failed, try later'), { responseCode: 451 }));
           }

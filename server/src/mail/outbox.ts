@@ -27,6 +27,18 @@ function permanent(err: unknown): boolean {
   return (e.responseCode !== undefined && e.responseCode >= 500) || e.code === 'EENVELOPE';
 }
 
+/** Runs a write again after a failure, backing off from 250 ms to 4 s, for up to about a minute (half the lease). */
+async function untilWritten(write: () => Promise<unknown>) {
+  for (let waited = 0, wait = 250; ; waited += wait, wait = Math.min(wait * 2, 4000)) {
+    try {
+      return await write();
+    } catch (err) {
+      if (waited >= (LEASE_SECONDS * 1000) / 2) throw err;
+      await new Promise((r) => setTimeout(r, wait));
+    }
+  }
+}
+
 /**
  * Sends outbox rows. Rows are claimed with FOR UPDATE SKIP LOCKED and leased by moving next_attempt_at ahead,
  * so several workers in several processes share the work without sending a mail twice.
@@ -106,11 +118,16 @@ export class OutboxWorker {
           html: row.html,
           text: row.text,
           attachments: row.attachments ?? undefined,
+          messageId: `<outbox-${row.id}-${row.createdAt.getTime()}@mendery.invalid>`,
         });
-        await this.db
-          .update(outbox)
-          .set({ status: 'sent', sentAt: new Date(), lastError: null })
-          .where(eq(outbox.id, row.id));
+        // The mail is out: recording that must not be lost to a database that is away for a moment (a failover),
+        // or the row's lease would run out and the mail go twice. Keep trying for well under the lease.
+        await untilWritten(() =>
+          this.db
+            .update(outbox)
+            .set({ status: 'sent', sentAt: new Date(), lastError: null })
+            .where(eq(outbox.id, row.id)),
+        );
         sent++;
       } catch (err) {
         const message = String((err as Error).message ?? err).slice(0, 500);

@@ -8,6 +8,8 @@ export interface OutgoingMail {
   html: string;
   text: string;
   attachments?: MailAttachment[];
+  /** The same for every attempt at one mail, so a receiver can tell a resend from a new mail. */
+  messageId?: string;
 }
 
 /** An attachment is stored as bytes, or as the text of a QR code drawn when the mail is sent (off the request path). */
@@ -38,6 +40,7 @@ export function smtpSender(
     async send(mail) {
       await transport.sendMail({
         from: env.MAIL_FROM,
+        messageId: mail.messageId,
         to: mail.to,
         subject: mail.subject,
         html: mail.html,

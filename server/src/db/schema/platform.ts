@@ -49,6 +49,8 @@ export const mailboxMessages = mysqlTable('mailbox_messages', {
   html: mediumtext('html'),
   text: mediumtext('text'),
   raw: mediumtext('raw').notNull(),
+  /** The sender's Message-ID: a resend of a mail already stored (its first answer was lost) is not stored again. */
+  messageId: varchar('message_id', { length: 255 }).unique('mailbox_messages_message_id_unique'),
   receivedAt: createdAt(),
 });
 

@@ -94,11 +94,21 @@ export async function bookingItemsWithPhotos(db: DbOrTx, bookingId: number) {
   }));
 }
 
-/** Writes the key's row; a key older than `expiredBefore` is dropped first, so it books anew. */
+/**
+ * Writes the key's row; a key older than `expiredBefore` is dropped first, so it books anew. The plain read first
+ * means a new key takes no lock before its insert: a DELETE of a key that is not there locks the gap where it would
+ * go, and concurrent bookings whose keys share that gap then deadlock on their inserts (on one server, and more on
+ * Galera, where 200 of 600 racing bookings failed that way).
+ */
 export async function claimIdempotencyKey(tx: Tx, key: string, bodyHash: string, expiredBefore: Date) {
-  await tx
-    .delete(idempotencyKeys)
+  const [stale] = await tx
+    .select({ key: idempotencyKeys.key })
+    .from(idempotencyKeys)
     .where(and(eq(idempotencyKeys.key, key), lt(idempotencyKeys.createdAt, expiredBefore)));
+  if (stale)
+    await tx
+      .delete(idempotencyKeys)
+      .where(and(eq(idempotencyKeys.key, key), lt(idempotencyKeys.createdAt, expiredBefore)));
   await tx.insert(idempotencyKeys).values({ key, scope: 'booking', bodyHash });
 }
 export async function storeIdempotentAnswer(tx: Tx, key: string, statusCode: number, response: unknown) {
