@@ -1,3 +1,10 @@
+/** A deadlock (1213) or lock-wait timeout (1205), also when the ORM keeps the driver's error as the cause. */
+export const lockConflict = (err: unknown): boolean => {
+  const e = err as { errno?: number; cause?: { errno?: number } } | null;
+  const errno = e?.errno ?? e?.cause?.errno;
+  return errno === 1213 || errno === 1205;
+};
+
 /**
  * Runs a transaction again on a deadlock (1213; on Galera also a certification conflict at commit) or lock-wait
  * timeout (1205), with a backoff that doubles from about 10 ms (jittered, at most 400 ms), up to 8 times.
@@ -7,9 +14,7 @@ export async function withDeadlockRetry<T>(fn: () => Promise<T>, attempts = 8): 
     try {
       return await fn();
     } catch (err) {
-      const e = err as { errno?: number; cause?: { errno?: number } };
-      const errno = e.errno ?? e.cause?.errno;
-      if (i >= attempts || (errno !== 1213 && errno !== 1205)) throw err;
+      if (i >= attempts || !lockConflict(err)) throw err;
       await new Promise((r) => setTimeout(r, Math.min(400, 5 + Math.random() * 10 * 2 ** i)));
     }
   }

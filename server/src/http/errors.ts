@@ -1,5 +1,6 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { ZodError } from 'zod';
+import { lockConflict } from '../db/retry';
 import { redactUrl } from './redact';
 
 /** The one error type services throw; the handler turns it into `{"error":{code,message,fields?}}`. */
@@ -101,13 +102,6 @@ export function unavailableReason(err: unknown): string {
   return reason;
 }
 
-const errnoOf = (err: unknown): number | undefined => {
-  const e = err as { errno?: unknown; cause?: { errno?: unknown } } | null;
-  const n = typeof e?.errno === 'number' ? e.errno : e?.cause?.errno;
-  return typeof n === 'number' ? n : undefined;
-};
-/** Deadlock (1213) or lock-wait timeout (1205). */
-const stillLocked = (err: unknown) => [1213, 1205].includes(errnoOf(err) ?? 0);
 /** body-parser's refusals (http-errors with a 4xx status and a `type`), as our own. */
 function bodyParserError(err: { type?: unknown; status?: unknown; expose?: unknown }): HttpError | null {
   if (typeof err?.status !== 'number' || err.status < 400 || err.status >= 500) return null;
@@ -142,7 +136,7 @@ export function errorHandler(log: (msg: string, err: unknown) => void = console.
       e = new HttpError(400, 'bad-url', 'The address holds a broken %-escape. Check the link and try again.');
     else if (bodyParserError(err)) e = bodyParserError(err)!;
     else if (driverCode(err) === 'ER_DUP_ENTRY') e = new HttpError(409, 'duplicate', 'That exists already.');
-    else if (stillLocked(err)) {
+    else if (lockConflict(err)) {
       // Deadlocks (on Galera, certification conflicts too) that outlasted the transaction's retries: nothing was
       // written, and the same request will most likely go through a moment later.
       e = new HttpError(503, 'busy', 'Many people are doing this at once. Try again in a moment.');
