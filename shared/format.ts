@@ -1,6 +1,14 @@
-/** Dates as people at the event read them: in the group's time zone, in plain English. */
-export function formatDay(d: Date | string, timeZone: string): string {
-  return new Intl.DateTimeFormat('en-GB', {
+import { DEFAULT_LANGUAGE, type Language } from './i18n/languages';
+
+/**
+ * The Intl locale for a reader's language. English is British English: day before month, 24-hour clock, as the
+ * European groups read it.
+ */
+export const intlLocale = (lang: Language): string => (lang === 'en' ? 'en-GB' : lang);
+
+/** Dates as people at the event read them: in the group's time zone, in the reader's language. */
+export function formatDay(d: Date | string, timeZone: string, lang: Language = DEFAULT_LANGUAGE): string {
+  return new Intl.DateTimeFormat(intlLocale(lang), {
     timeZone,
     weekday: 'long',
     day: 'numeric',
@@ -9,14 +17,21 @@ export function formatDay(d: Date | string, timeZone: string): string {
   }).format(new Date(d));
 }
 
-export function formatTime(d: Date | string, timeZone: string): string {
-  return new Intl.DateTimeFormat('en-GB', { timeZone, hour: '2-digit', minute: '2-digit', hourCycle: 'h23' }).format(
-    new Date(d),
-  );
+export function formatTime(d: Date | string, timeZone: string, lang: Language = DEFAULT_LANGUAGE): string {
+  return new Intl.DateTimeFormat(intlLocale(lang), {
+    timeZone,
+    hour: '2-digit',
+    minute: '2-digit',
+    hourCycle: 'h23',
+  }).format(new Date(d));
 }
 
-export const formatTimeRange = (a: Date | string, b: Date | string, timeZone: string) =>
-  `${formatTime(a, timeZone)}–${formatTime(b, timeZone)}`;
+export const formatTimeRange = (
+  a: Date | string,
+  b: Date | string,
+  timeZone: string,
+  lang: Language = DEFAULT_LANGUAGE,
+) => `${formatTime(a, timeZone, lang)}–${formatTime(b, timeZone, lang)}`;
 
 export const WHAT_TO_BRING = [
   'The broken item itself, cleaned if it has been in a kitchen or a garden.',

@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { formatDay, formatTimeRange } from '../../shared/format';
 import { acceptLanguageTags, pickLanguage } from '../../shared/i18n/languages';
 
 describe('choosing the reader’s language', () => {
@@ -17,5 +18,16 @@ describe('choosing the reader’s language', () => {
     expect(pickLanguage(['fr_CA'])).toBe('fr');
     expect(pickLanguage(['pt', 'es'])).toBe('en');
     expect(pickLanguage([undefined, 'x-pseudo'], 'nl')).toBe('nl');
+  });
+
+  it('writes a session’s day and times in the reader’s language, in the group’s time zone', () => {
+    // Expected strings are CLDR's long date patterns as the runtime's ICU (the reference implementation) gives them:
+    // weekday first, day before month in nl/de/fr, German "5." with a period, lower-case month names in nl and fr.
+    const at = '2026-12-05T10:00:00Z';
+    expect(formatDay(at, 'Europe/Amsterdam')).toBe('Saturday, 5 December 2026');
+    expect(formatDay(at, 'Europe/Amsterdam', 'nl')).toBe('zaterdag 5 december 2026');
+    expect(formatDay(at, 'Europe/Berlin', 'de')).toBe('Samstag, 5. Dezember 2026');
+    expect(formatDay(at, 'Europe/Paris', 'fr')).toBe('samedi 5 décembre 2026');
+    expect(formatTimeRange(at, '2026-12-05T13:30:00Z', 'Europe/London', 'fr')).toBe('10:00–13:30');
   });
 });
