@@ -6,13 +6,19 @@ import { errorHandler } from '../../server/src/http/errors';
 /**
  * What the error handler answers for the database's own failures, as Drizzle hands them on (the driver's error as the
  * cause). Error numbers are MariaDB's (ER_LOCK_DEADLOCK 1213, ER_LOCK_WAIT_TIMEOUT 1205, ER_UNKNOWN_COM_ERROR 1047,
- * which a Galera node that is not ready answers); the closed-connection message is mysql2's.
+ * which a Galera node that is not ready answers, ER_ERROR_DURING_COMMIT 1180); the closed-connection message is mysql2's.
  */
 const wrapped = (cause: object) => Object.assign(new Error('Failed query: …'), { cause });
 const cases: [string, Error, number, string][] = [
   ['a deadlock left after the retries', wrapped({ code: 'ER_LOCK_DEADLOCK', errno: 1213 }), 503, 'busy'],
   ['a lock-wait timeout', wrapped({ code: 'ER_LOCK_WAIT_TIMEOUT', errno: 1205 }), 503, 'busy'],
   ['a Galera node not ready for queries', wrapped({ code: 'ER_UNKNOWN_COM_ERROR', errno: 1047 }), 503, 'unavailable'],
+  [
+    'a commit a Galera node could not replicate (seen in npm run test:cluster when the writing node was killed)',
+    wrapped({ code: 'ER_ERROR_DURING_COMMIT', errno: 1180 }),
+    503,
+    'unavailable',
+  ],
   [
     'a rollback on a connection that closed under the transaction',
     wrapped(new Error("Can't add new command when connection is in closed state")),

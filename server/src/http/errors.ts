@@ -60,9 +60,11 @@ const UNAVAILABLE = new Set([
 ]);
 /**
  * MariaDB's own error numbers mysql2 has no code for: 1969 is max_statement_time exceeded (ER_STATEMENT_TIMEOUT);
- * 1047 is what a Galera node answers while it is not ready for queries (joining, or cut off from the others).
+ * 1047 is what a Galera node answers while it is not ready for queries (joining, or cut off from the others);
+ * 1180 (ER_ERROR_DURING_COMMIT) is its answer to a commit it could not replicate, e.g. "Not connected to Primary
+ * Component" while a node of the cluster has just died: the transaction was rolled back, so trying again is right.
  */
-const UNAVAILABLE_ERRNOS = new Set([1969, 1047]);
+const UNAVAILABLE_ERRNOS = new Set([1969, 1047, 1180]);
 /** mysql2's messages without a code, for a pool or connection that is already closed. */
 const UNAVAILABLE_MESSAGES = [
   'Pool is closed.',
