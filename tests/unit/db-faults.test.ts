@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { restartDelayMs } from '../../server/src/infra/mariadb';
-import { databaseUnavailable, unavailableReason } from '../../server/src/http/errors';
+import { logReason } from '../../server/src/db/log-reason';
+import { databaseUnavailable } from '../../server/src/http/errors';
 
 describe('restart waits of the supervised MariaDB', () => {
   it('double from 0.5 s and stop at 30 s', () => {
@@ -43,15 +44,38 @@ describe('which errors mean the database is unavailable', () => {
     const orm = Object.assign(new Error('Failed query: insert into `bookings` ...\nparams: visitor@example.org'), {
       cause: driver,
     });
-    expect(unavailableReason(orm)).toBe('connect ECONNREFUSED 127.0.0.1:3307');
+    expect(logReason(orm)).toBe('connect ECONNREFUSED 127.0.0.1:3307');
     const timeout = Object.assign(new Error('Query execution was interrupted (max_statement_time exceeded)'), {
       errno: 1969,
     });
-    expect(unavailableReason(wrapped(timeout))).toBe('Query execution was interrupted (max_statement_time exceeded)');
+    expect(logReason(wrapped(timeout))).toBe('Query execution was interrupted (max_statement_time exceeded)');
     expect(
-      unavailableReason(
+      logReason(
         wrapped({ code: 'POOL_ACQUIRE_TIMEOUT', message: 'No database connection became free within 10000 ms.' }),
       ),
     ).toBe('No database connection became free within 10000 ms. (POOL_ACQUIRE_TIMEOUT)');
+  });
+});
+
+describe('logs of background work', () => {
+  it('name a failed job and its reason, never the statement’s values', async () => {
+    const { Scheduler } = await import('../../server/src/jobs/scheduler');
+    const lines: string[] = [];
+    const failing = Object.assign(
+      new Error('Failed query: update `bookings` set `email` = ? where `id` = ?\nparams: visitor@example.org,7'),
+      {
+        cause: Object.assign(new Error('Connection lost: The server closed the connection.'), {
+          code: 'PROTOCOL_CONNECTION_LOST',
+        }),
+      },
+    );
+    const ctx = { log: (line: string) => lines.push(line) } as never;
+    await new Scheduler(ctx, [
+      { name: 'day-before reminders', run: async () => Promise.reject(failing) } as never,
+    ]).tick();
+    expect(lines).toEqual([
+      'scheduled job "day-before reminders" failed: Connection lost: The server closed the connection. (PROTOCOL_CONNECTION_LOST)',
+    ]);
+    expect(lines.join('')).not.toContain('example.org');
   });
 });

@@ -1,4 +1,5 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
+import { logReason } from '../db/log-reason';
 import { ZodError } from 'zod';
 import { lockConflict } from '../db/retry';
 import { redactUrl } from './redact';
@@ -90,20 +91,6 @@ export function databaseUnavailable(err: unknown): boolean {
   return false;
 }
 
-/**
- * The innermost reason an unavailable database gave, as one log line: no stack, and not the ORM's wrapper, whose
- * message repeats the statement with its values (people's e-mail addresses among them).
- */
-export function unavailableReason(err: unknown): string {
-  let reason = 'unknown';
-  let e = err as { code?: unknown; message?: unknown; cause?: unknown } | null | undefined;
-  for (let depth = 0; e && typeof e === 'object' && depth < 5; depth++, e = e.cause as typeof e) {
-    if (typeof e.message === 'string') reason = e.message.split('\n')[0];
-    if (typeof e.code === 'string' && !reason.includes(e.code)) reason += ` (${e.code})`;
-  }
-  return reason;
-}
-
 /** body-parser's refusals (http-errors with a 4xx status and a `type`), as our own. */
 function bodyParserError(err: { type?: unknown; status?: unknown; expose?: unknown }): HttpError | null {
   if (typeof err?.status !== 'number' || err.status < 400 || err.status >= 500) return null;
@@ -144,7 +131,7 @@ export function errorHandler(log: (msg: string, err: unknown) => void = console.
       e = new HttpError(503, 'busy', 'Many people are doing this at once. Try again in a moment.');
       if (!res.headersSent) res.set('Retry-After', '1');
     } else if (databaseUnavailable(err)) {
-      log(`database unavailable on ${req.method} ${redactUrl(req.originalUrl)}`, unavailableReason(err));
+      log(`database unavailable on ${req.method} ${redactUrl(req.originalUrl)}`, logReason(err));
       e = new HttpError(503, 'unavailable', 'The database is not reachable just now. Try again in a moment.');
       if (!res.headersSent) res.set('Retry-After', '5');
     } else {

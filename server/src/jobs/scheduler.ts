@@ -1,4 +1,5 @@
 import type { AppContext } from '../context';
+import { logReason } from '../db/log-reason';
 import type { Job } from '../core/feature';
 
 /**
@@ -26,7 +27,7 @@ export class Scheduler {
         try {
           await job.run(this.ctx);
         } catch (err) {
-          this.ctx.log(`scheduled job "${job.name}" failed: ${(err as Error).message}`);
+          this.ctx.log(`scheduled job "${job.name}" failed: ${logReason(err)}`);
         }
       }
     })().finally(() => (this.running = null));

@@ -1,4 +1,5 @@
 import { SMTPServer } from 'smtp-server';
+import { logReason } from '../db/log-reason';
 import { simpleParser, type AddressObject } from 'mailparser';
 import { isDuplicate } from '../db/retry';
 import type { Db } from '../db/client';
@@ -53,7 +54,7 @@ export class LocalMailbox {
           } catch (err) {
             // Stored by an earlier attempt whose answer did not reach the sender: accept it, keep one.
             if (isDuplicate(err)) return callback();
-            this.log(`local mailbox could not store a message: ${(err as Error).message}`);
+            this.log(`local mailbox could not store a message: ${logReason(err)}`);
             callback(Object.assign(new Error('Mailbox storage failed, try later'), { responseCode: 451 }));
           }
         });

@@ -1,4 +1,5 @@
 import { and, asc, eq, lte, sql } from 'drizzle-orm';
+import { logReason } from '../db/log-reason';
 import type { Db, DbOrTx } from '../db/client';
 import { outbox } from '../db/schema/index';
 import type { MailSender, OutgoingMail } from './transport';
@@ -78,7 +79,7 @@ export class OutboxWorker {
           total += await this.processBatch();
         } while (this.again);
       } catch (err) {
-        this.log(`outbox pass failed: ${(err as Error).message}`);
+        this.log(`outbox pass failed: ${logReason(err)}`);
       }
       return total;
     })().finally(() => (this.running = null));
