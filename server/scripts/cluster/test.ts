@@ -15,6 +15,7 @@ import { startCluster, type ClusterStack } from './stack';
  * Scheduled jobs run every half second in both processes meanwhile (reminders are made due for the race's bookings).
  * Then it counts what must be 0 and prints one line with the counts and the failover time (the longest stretch without
  * a confirmed booking during the node's death and return); it exits 1 unless every count is 0.
+ * `.ci/run` runs it after `npm test`; CLUSTER_KEEP=1 keeps the folder with every process's log.
  */
 const log = (line: string) => console.log(line);
 const RACE = 600;
