@@ -2,6 +2,48 @@ import { defineConfig, type Plugin } from 'vite';
 import react from '@vitejs/plugin-react';
 import tailwindcss from '@tailwindcss/vite';
 import { compression } from 'vite-plugin-compression2';
+import { readdirSync, readFileSync } from 'node:fs';
+import path from 'node:path';
+import { compileCatalog, mergeNamespaces, type RawCatalog } from './shared/i18n/catalog.js';
+import { LANGUAGES } from './shared/i18n/languages.js';
+import { PSEUDO_LANGUAGE, pseudoText } from './shared/i18n/pseudo.js';
+
+/**
+ * The message catalogs for the browser: `virtual:mendery-catalogs` exports one loader per language, each a chunk of
+ * its own with that language's messages precompiled (so Lingui's compiler never ships). The mail namespace is the
+ * server's alone. The pseudo-locale is English run through pseudoText.
+ */
+function catalogs(): Plugin {
+  const dir = path.resolve('locales');
+  const serverOnly = new Set(['mail']);
+  const list = 'virtual:mendery-catalogs';
+  const one = 'virtual:mendery-catalog/';
+  const read = (lang: string) => {
+    const files: Record<string, RawCatalog> = {};
+    for (const f of readdirSync(path.join(dir, lang))
+      .filter((f) => f.endsWith('.json'))
+      .sort()) {
+      const namespace = f.slice(0, -'.json'.length);
+      if (!serverOnly.has(namespace)) files[namespace] = JSON.parse(readFileSync(path.join(dir, lang, f), 'utf8'));
+    }
+    return mergeNamespaces(files);
+  };
+  return {
+    name: 'mendery:catalogs',
+    resolveId: (id) => (id === list || id.startsWith(one) ? `\0${id}` : undefined),
+    load(id) {
+      if (id === `\0${list}`) {
+        const loaders = [...LANGUAGES, PSEUDO_LANGUAGE].map((l) => `${JSON.stringify(l)}: () => import('${one}${l}')`);
+        return `export const catalogs = {${loaders.join(',')}};`;
+      }
+      if (!id.startsWith(`\0${one}`)) return undefined;
+      const lang = id.slice(one.length + 1);
+      for (const l of LANGUAGES) this.addWatchFile(path.join(dir, l));
+      const messages = lang === PSEUDO_LANGUAGE ? compileCatalog(read('en'), pseudoText) : compileCatalog(read(lang));
+      return `export const messages = ${JSON.stringify(messages)};`;
+    },
+  };
+}
 
 /** Asks for the body text's face (Nunito 400, latin) with the HTML, instead of after the CSS has arrived. */
 function preloadBodyFont(): Plugin {
@@ -27,7 +69,13 @@ function preloadBodyFont(): Plugin {
 // The client lives in client/; the API server serves the build from dist/client, each text file also as .br and .gz.
 export default defineConfig({
   root: 'client',
-  plugins: [react(), tailwindcss(), preloadBodyFont(), compression({ algorithms: ['brotliCompress', 'gzip'] })],
+  plugins: [
+    catalogs(),
+    react(),
+    tailwindcss(),
+    preloadBodyFont(),
+    compression({ algorithms: ['brotliCompress', 'gzip'] }),
+  ],
   // No source maps in the build: they would be served to anyone.
   build: {
     outDir: '../dist/client',

@@ -93,6 +93,7 @@ export function buildClientIfStale(force = false): void {
   const sources = Math.max(
     newestMtime(path.join(root, 'client')),
     newestMtime(path.join(root, 'shared')),
+    newestMtime(path.join(root, 'locales')),
     statSync(path.join(root, 'vite.config.ts')).mtimeMs,
   );
   if (!force && existsSync(index) && statSync(index).mtimeMs > sources) {

@@ -126,6 +126,26 @@ describe('What a phone downloads before the public pages work', () => {
     expect(text(staticClosure(['src/features/impact/components/public-graphics.tsx']))).toContain('recharts');
     expect(text(staticClosure([entry, 'src/routes/impact/public.tsx']))).not.toContain('recharts');
   });
+
+  it('fetches one language beside the page: its precompiled messages and Lingui at run time, never the compiler', async () => {
+    const languages = Object.keys(manifest).filter((k) => k.includes('virtual:mendery-catalog/'));
+    expect(languages.map((k) => k.split('/').pop()).sort()).toEqual(['de', 'en', 'fr', 'nl', 'xx-pseudo']);
+    const runtime = Object.keys(manifest).find((k) => k.includes('@lingui/core'))!;
+    expect(manifest[entry].dynamicImports).toEqual(expect.arrayContaining([runtime, ...languages]));
+    expect(staticClosure([entry])).not.toContain(runtime);
+    for (const k of languages) {
+      const { gzip, br } = await weigh([k]);
+      console.log(`${k.split('/').pop()}: ${kb(gzip)} gzip, ${kb(br)} brotli (messages)`);
+      expect(gzip, k).toBeLessThanOrEqual(10_000);
+    }
+    const lingui = await weigh([runtime]);
+    console.log(`Lingui at run time: ${kb(lingui.gzip)} gzip, ${kb(lingui.br)} brotli`);
+    expect(lingui.gzip).toBeLessThanOrEqual(3_000);
+    // The message parser behind Lingui's compiler is nowhere in the build: messages arrive compiled.
+    for (const k of Object.keys(manifest)) expect(text([k]), k).not.toContain('Unexpected lexer');
+    // The marker is real: the parser carries it.
+    expect(readFileSync('node_modules/@messageformat/parser/lib/parser.js', 'utf8')).toContain('Unexpected lexer');
+  });
 });
 
 const text = (keys: string[]) => keys.map((k) => readFileSync(path.join(dist, manifest[k].file), 'utf8')).join('');

@@ -1,14 +1,21 @@
-import { useEffect, useRef, useState } from 'react';
+import { lazy, Suspense, useEffect, useRef, useState } from 'react';
 import { Link, NavLink, Outlet, useNavigate, useNavigation } from 'react-router';
 import { paths } from '../config/paths';
 import { groupsWithRole, useUser } from '../lib/auth';
 import { useSignOut } from '../features/auth/api/sign-out';
 import { Logo } from '../components/layouts/logo';
+import { useT } from '../lib/i18n';
+
+// The picker sits in the footer, below what the visitor came for: it loads after the page.
+const LanguagePicker = lazy(() =>
+  import('../components/layouts/language-picker').then((m) => ({ default: m.LanguagePicker })),
+);
 
 const linkClass = ({ isActive }: { isActive: boolean }) =>
   `block whitespace-nowrap rounded-lg px-3 py-2 font-semibold ${isActive ? 'bg-navy text-white' : 'text-navy hover:bg-navy/5'}`;
 
 export function AppShell() {
+  const t = useT();
   const { data: user } = useUser();
   const signOut = useSignOut();
   const navigate = useNavigate();
@@ -26,22 +33,30 @@ export function AppShell() {
   }, [open]);
   const loading = useNavigation().state === 'loading';
 
-  const links: { to: string; label: string; end?: boolean }[] = [{ to: paths.events(), label: 'Sessions', end: true }];
+  const links: { to: string; label: string; end?: boolean }[] = [
+    { to: paths.events(), label: t('common.nav.sessions'), end: true },
+  ];
   if (user) {
     for (const g of groupsWithRole(user, 'organiser'))
       links.push({ to: paths.groupEvents(g.groupId), label: `${g.groupName}` });
-    if (groupsWithRole(user, 'host').length) links.push({ to: paths.desk(), label: 'Reception desk' });
+    if (groupsWithRole(user, 'host').length) links.push({ to: paths.desk(), label: t('common.nav.reception') });
     if (groupsWithRole(user, 'fixer').length)
-      links.push({ to: paths.bench(), label: 'My bench' }, { to: paths.mySkills(), label: 'My skills' });
+      links.push(
+        { to: paths.bench(), label: t('common.nav.bench') },
+        { to: paths.mySkills(), label: t('common.nav.skills') },
+      );
     if (user.roles.length)
-      links.push({ to: paths.knowledge(), label: 'Repair notes' }, { to: paths.calculators(), label: 'Calculators' });
-    links.push({ to: paths.myData(), label: 'Account' });
+      links.push(
+        { to: paths.knowledge(), label: t('common.nav.notes') },
+        { to: paths.calculators(), label: t('common.nav.calculators') },
+      );
+    links.push({ to: paths.myData(), label: t('common.nav.account') });
     if (user.admin)
       links.push(
-        { to: paths.admin(), label: 'Network admin', end: true },
-        { to: paths.networkImpact(), label: 'Network impact' },
-        { to: paths.adminCategories(), label: 'Categories' },
-        { to: paths.adminMailbox(), label: 'Mailbox' },
+        { to: paths.admin(), label: t('common.nav.admin'), end: true },
+        { to: paths.networkImpact(), label: t('common.nav.impact') },
+        { to: paths.adminCategories(), label: t('common.nav.categories') },
+        { to: paths.adminMailbox(), label: t('common.nav.mailbox') },
       );
   }
 
@@ -50,7 +65,7 @@ export function AppShell() {
       {loading && (
         <div
           role="progressbar"
-          aria-label="Loading the page"
+          aria-label={t('common.shell.loadingPage')}
           className="fixed inset-x-0 top-0 z-50 h-1 overflow-hidden"
         >
           <div className="h-full w-1/3 animate-[slide_1.2s_ease-in-out_infinite] bg-copper" />
@@ -60,11 +75,11 @@ export function AppShell() {
         href="#main"
         className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:rounded focus:bg-white focus:p-2"
       >
-        Skip to content
+        {t('common.shell.skip')}
       </a>
       <header className="border-b border-ink/10 bg-white">
         <div className="mx-auto flex max-w-6xl items-center justify-between gap-4 px-4 py-3">
-          <Link to={paths.home()} aria-label="Mendery home">
+          <Link to={paths.home()} aria-label={t('common.shell.home')}>
             <Logo />
           </Link>
           <button
@@ -74,14 +89,14 @@ export function AppShell() {
             aria-controls="main-nav"
             onClick={() => setOpen((v) => !v)}
           >
-            <span className="sr-only">Menu</span>
+            <span className="sr-only">{t('common.shell.menu')}</span>
             <svg viewBox="0 0 24 24" className="size-6" aria-hidden>
               <path d="M4 7h16M4 12h16M4 17h16" stroke="currentColor" strokeWidth="2" strokeLinecap="round" />
             </svg>
           </button>
           <nav
             id="main-nav"
-            aria-label="Main"
+            aria-label={t('common.shell.mainNav')}
             className={`${open ? 'absolute inset-x-0 top-16 z-20 border-b border-ink/10 bg-white p-4 shadow-lg' : 'hidden'} lg:static lg:block lg:border-0 lg:p-0 lg:shadow-none`}
           >
             <ul className="flex flex-col gap-1 lg:flex-row lg:items-center" onClick={() => setOpen(false)}>
@@ -98,19 +113,19 @@ export function AppShell() {
                     className="w-full whitespace-nowrap rounded-lg px-3 py-2 text-left font-semibold text-ink-soft hover:bg-navy/5"
                     onClick={() => void signOut().then(() => navigate(paths.home()))}
                   >
-                    Sign out <span className="text-xs font-normal">({user.name})</span>
+                    {t('common.nav.signOut')} <span className="text-xs font-normal">({user.name})</span>
                   </button>
                 </li>
               ) : (
                 <>
                   <li>
                     <NavLink to={paths.volunteer()} className={linkClass}>
-                      Volunteer
+                      {t('common.nav.volunteer')}
                     </NavLink>
                   </li>
                   <li>
                     <NavLink to={paths.signIn()} className={linkClass}>
-                      Sign in
+                      {t('common.nav.signIn')}
                     </NavLink>
                   </li>
                 </>
@@ -124,9 +139,12 @@ export function AppShell() {
       </main>
       <footer className="border-t border-ink/10 bg-white">
         <div className="mx-auto flex max-w-6xl flex-wrap items-center justify-between gap-3 px-4 py-5 text-sm text-ink-soft">
-          <span>Mendery — community repair, booked and counted.</span>
+          <span>{t('common.footer.tagline')}</span>
+          <Suspense fallback={<div className="min-h-11" />}>
+            <LanguagePicker />
+          </Suspense>
           <Link to={paths.safety()} className="font-semibold text-navy underline">
-            Safety at the bench
+            {t('common.footer.safety')}
           </Link>
         </div>
       </footer>

@@ -1,4 +1,9 @@
-/** The one API client: JSON in and out, the session cookie, and the CSRF token on every state-changing call. */
+import { currentLanguage, tr } from './i18n';
+
+/**
+ * The one API client: JSON in and out, the session cookie, the CSRF token on every state-changing call, and the
+ * reader's language as Accept-Language, so the server's messages come back in it.
+ */
 export class ApiError extends Error {
   constructor(
     public status: number,
@@ -30,7 +35,12 @@ async function parse(res: Response) {
   const data = type.includes('json') ? await res.json() : null;
   if (!res.ok) {
     const e = data?.error;
-    throw new ApiError(res.status, e?.code ?? 'http', e?.message ?? `The server answered ${res.status}.`, e?.fields);
+    throw new ApiError(
+      res.status,
+      e?.code ?? 'http',
+      e?.message ?? tr('common.error.status', { status: res.status }),
+      e?.fields,
+    );
   }
   return data;
 }
@@ -43,7 +53,11 @@ export async function api<T>(
 ): Promise<T> {
   const form = typeof FormData !== 'undefined' && body instanceof FormData;
   const send = async (): Promise<Response> => {
-    const headers: Record<string, string> = { Accept: 'application/json', ...extraHeaders };
+    const headers: Record<string, string> = {
+      Accept: 'application/json',
+      'Accept-Language': currentLanguage(),
+      ...extraHeaders,
+    };
     if (body !== undefined && !form) headers['Content-Type'] = 'application/json';
     if (method !== 'GET') headers['x-csrf-token'] = csrfToken ?? (await fetchCsrf());
     try {
@@ -57,7 +71,7 @@ export async function api<T>(
         body: body === undefined ? undefined : form ? (body as FormData) : JSON.stringify(body),
       });
     } catch {
-      throw new ApiError(0, 'offline', 'No connection to Mendery. Check the network and try again.');
+      throw new ApiError(0, 'offline', tr('common.error.offline'));
     }
   };
   let res = await send();

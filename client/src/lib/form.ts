@@ -2,6 +2,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm, type FieldValues, type Path, type UseFormReturn } from 'react-hook-form';
 import type { z } from 'zod';
 import { ApiError } from './api';
+import { tr } from './i18n';
 
 /** react-hook-form with the zod schema the server also uses. */
 export function useZodForm<S extends z.ZodType<FieldValues, FieldValues>>(
@@ -26,5 +27,5 @@ export function applyServerErrors<T extends FieldValues>(
     );
     return err.message;
   }
-  return 'Something went wrong. Try again.';
+  return tr('common.error.unknown');
 }

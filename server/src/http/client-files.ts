@@ -5,6 +5,7 @@ import path from 'node:path';
 import { brotliCompressSync, constants, gzipSync } from 'node:zlib';
 import { notFound } from './errors';
 import { hintTags, pageHints, type Manifest } from './page-hints';
+import { acceptLanguageTags, pickLanguage } from '../../../shared/i18n/languages';
 
 /** The build holds each text file also as .br and .gz; brotli goes out when the browser takes it, else gzip. */
 const precompressed: expressStaticGzip.ExpressStaticGzipOptions = {
@@ -58,10 +59,22 @@ export function clientFiles(dist: string): express.Router {
       return unhashed(req, res, next);
     }
     // A public landing page: index.html that also names its screen's chunks and API reads, compressed on the way.
-    const html = Buffer.from(build.html.replace('</head>', `  ${hintTags(build.manifest, hints)}\n  </head>`));
+    // The page starts in the language it will most likely show (the browser's own choice, kept on the device, may
+    // still change it): ?lang= first, then Accept-Language.
+    const query = new URLSearchParams(req.url.split('?')[1] ?? '').get('lang');
+    const lang = pickLanguage([query, ...acceptLanguageTags(req.get('accept-language'))]);
+    const html = Buffer.from(
+      build.html
+        .replace('<html lang="en">', `<html lang="${lang}">`)
+        .replace('</head>', `  ${hintTags(build.manifest, hints)}\n  </head>`),
+    );
     // Brotli first when the browser takes both (as the static files do).
     const encoding = req.acceptsEncodings('br') ? 'br' : req.acceptsEncodings('gzip');
-    res.set({ 'Content-Type': 'text/html; charset=utf-8', 'Cache-Control': 'no-cache', Vary: 'Accept-Encoding' });
+    res.set({
+      'Content-Type': 'text/html; charset=utf-8',
+      'Cache-Control': 'no-cache',
+      Vary: 'Accept-Encoding, Accept-Language',
+    });
     if (encoding === 'br') {
       res.set('Content-Encoding', 'br');
       return res.send(brotliCompressSync(html, { params: { [constants.BROTLI_PARAM_QUALITY]: 5 } }));

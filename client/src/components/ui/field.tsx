@@ -6,6 +6,7 @@ import {
   type SelectHTMLAttributes,
   type TextareaHTMLAttributes,
 } from 'react';
+import { tr } from '../../lib/i18n';
 
 interface FieldProps {
   label: string;
@@ -34,7 +35,7 @@ export const TextField = forwardRef<HTMLInputElement, FieldProps & InputHTMLAttr
         />
         {(error || hint) && (
           <p id={`${id}-msg`} className={`text-sm ${error ? 'font-semibold text-alert' : 'text-ink-soft'}`}>
-            {error ?? hint}
+            {error ? tr(error) : hint}
           </p>
         )}
       </div>
@@ -62,7 +63,7 @@ export const SelectField = forwardRef<HTMLSelectElement, FieldProps & SelectHTML
         </select>
         {(error || hint) && (
           <p id={`${id}-msg`} className={`text-sm ${error ? 'font-semibold text-alert' : 'text-ink-soft'}`}>
-            {error ?? hint}
+            {error ? tr(error) : hint}
           </p>
         )}
       </div>
@@ -89,7 +90,7 @@ export const TextAreaField = forwardRef<HTMLTextAreaElement, FieldProps & Textar
         />
         {(error || hint) && (
           <p id={`${id}-msg`} className={`text-sm ${error ? 'font-semibold text-alert' : 'text-ink-soft'}`}>
-            {error ?? hint}
+            {error ? tr(error) : hint}
           </p>
         )}
       </div>
@@ -117,7 +118,7 @@ export const CheckField = forwardRef<HTMLInputElement, FieldProps & InputHTMLAtt
         </label>
         {(error || hint) && (
           <p id={`${id}-msg`} className={`text-sm ${error ? 'font-semibold text-alert' : 'text-ink-soft'}`}>
-            {error ?? hint}
+            {error ? tr(error) : hint}
           </p>
         )}
       </div>

@@ -1,15 +1,21 @@
+import { lazy, Suspense } from 'react';
 import { Link, useParams, type LoaderFunctionArgs } from 'react-router';
 import { slotHasPassed } from '../../../../shared/booking/bookability';
-import { SKILL_LABELS } from '../../../../shared/constants';
-import { formatDay, formatTime, formatTimeRange, WHAT_TO_BRING } from '../../../../shared/format';
+import { SKILLS, type Skill } from '../../../../shared/constants';
+import { formatDay, formatTime, formatTimeRange } from '../../../../shared/format';
 import { Alert, Card, Spinner } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
 import { useUser } from '../../lib/auth';
 import { useCategoriesQuery, categoriesQuery } from '../../features/categories/api/get-categories';
 import { useEvent, eventQuery } from '../../features/events/api/get-event';
 import { PlacesBar, StatusBadge } from '../../features/events/components/places-bar';
-import { SessionMissing } from '../../features/events/components/session-missing';
+import { useLanguage, useT } from '../../lib/i18n';
 import { queryClient } from '../../lib/query-client';
+
+// Said only when the session cannot be shown: it comes on demand, not with every visit to the page.
+const SessionMissing = lazy(() =>
+  import('../../features/events/components/session-missing').then((m) => ({ default: m.SessionMissing })),
+);
 
 /** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
 export const loader = ({ params }: LoaderFunctionArgs) =>
@@ -19,22 +25,28 @@ export const loader = ({ params }: LoaderFunctionArgs) =>
   ]).catch(() => null);
 
 export function EventPage() {
+  const t = useT();
+  const lang = useLanguage();
   const id = Number(useParams().eventId);
   const event = useEvent(id);
   const categories = useCategoriesQuery();
   const { data: user } = useUser();
-  if (event.isPending) return <Spinner label="Loading the session…" />;
-  if (event.error) return <SessionMissing error={event.error} />;
+  if (event.isPending) return <Spinner label={t('events.detail.loading')} />;
+  if (event.error)
+    return (
+      <Suspense fallback={<Spinner />}>
+        <SessionMissing error={event.error} />
+      </Suspense>
+    );
   const e = event.data;
   const tz = e.timeZone;
   const excluded = new Set(e.excludedCategoryIds);
   const cats = categories.data ?? [];
-  const taken = Object.entries(SKILL_LABELS)
-    .map(([skill, label]) => ({
-      label,
-      names: cats.filter((c) => c.skill === skill && !excluded.has(c.id)).map((c) => c.name),
-    }))
-    .filter((g) => g.names.length);
+  const skillName = (skill: string) => t(`common.skill.${skill}`);
+  const taken = SKILLS.map((skill) => ({
+    label: skillName(skill),
+    names: cats.filter((c) => c.skill === skill && !excluded.has(c.id)).map((c) => c.name),
+  })).filter((g) => g.names.length);
   const refused = cats.filter((c) => excluded.has(c.id));
   const isOrganiser = user?.admin || user?.roles.some((r) => r.groupId === e.groupId && r.role === 'organiser');
   const bookable = e.status === 'published' && e.freePlaces > 0;
@@ -49,20 +61,20 @@ export function EventPage() {
             <StatusBadge status={e.status} />
             {isOrganiser && (
               <Link to={paths.manageEvent(e.id)} className="text-sm font-bold text-navy underline">
-                Manage this session
+                {t('events.detail.manage')}
               </Link>
             )}
           </div>
           <h1 className="mt-2 text-3xl">{e.title}</h1>
           <p className="mt-1 text-lg font-bold text-copper-dark">
-            {formatDay(e.startsAt, tz)} · {formatTimeRange(e.startsAt, e.endsAt, tz)}
+            {formatDay(e.startsAt, tz, lang)} · {formatTimeRange(e.startsAt, e.endsAt, tz, lang)}
           </p>
           <p className="text-ink-soft">{e.groupName}</p>
           {e.description && <p className="mt-3 max-w-2xl">{e.description}</p>}
         </header>
 
         <Card>
-          <h2 className="text-lg">Where</h2>
+          <h2 className="text-lg">{t('events.detail.where')}</h2>
           <p className="mt-1 font-semibold">{e.venue.name}</p>
           <p>
             {e.venue.address}, {e.venue.town}
@@ -79,23 +91,23 @@ export function EventPage() {
               to={paths.book(e.id)}
               className="mt-4 flex min-h-12 items-center justify-center rounded-lg bg-copper px-5 text-lg font-bold text-white hover:bg-copper-dark"
             >
-              {bookable ? 'Book a slot' : 'Join a waiting list'}
+              {bookable ? t('events.detail.book') : t('events.detail.waitlist')}
             </Link>
           ) : (
             <Alert tone="info">
               {e.status === 'cancelled'
-                ? 'This session has been cancelled.'
+                ? t('events.detail.cancelled')
                 : e.status === 'closed'
-                  ? 'Booking has closed for this session.'
-                  : 'This session is not open for booking yet.'}
+                  ? t('events.detail.closed')
+                  : t('events.detail.notOpen')}
             </Alert>
           )}
         </Card>
         <Card>
-          <h2 className="text-lg">What to bring</h2>
+          <h2 className="text-lg">{t('events.detail.bringTitle')}</h2>
           <ul className="mt-2 list-disc space-y-1 pl-5 text-sm">
-            {WHAT_TO_BRING.map((w) => (
-              <li key={w}>{w}</li>
+            {[1, 2, 3, 4].map((n) => (
+              <li key={n}>{t(`events.detail.bring${n}`)}</li>
             ))}
           </ul>
         </Card>
@@ -103,21 +115,15 @@ export function EventPage() {
 
       <div className="space-y-6 lg:col-start-1">
         <Card>
-          <h2 className="text-lg">Times and free places</h2>
-          <p className="text-sm text-ink-soft">
-            Each time is the slot in which your repair starts; most take {e.slotMinutes}–60 minutes. Tap a time to book
-            it.
-          </p>
+          <h2 className="text-lg">{t('events.detail.timesTitle')}</h2>
+          <p className="text-sm text-ink-soft">{t('events.detail.timesLead', { minutes: e.slotMinutes })}</p>
           {Object.keys(e.skillLimits).length > 0 && (
             <p className="mt-1 text-sm text-ink-soft">
-              Per time, the fixers can take at most{' '}
-              {Object.entries(e.skillLimits)
-                .map(
-                  ([k, n]) =>
-                    `${n} ${SKILL_LABELS[k as keyof typeof SKILL_LABELS].toLowerCase()} item${n === 1 ? '' : 's'}`,
-                )
-                .join(', ')}
-              .
+              {t('events.detail.skillLimits', {
+                limits: Object.entries(e.skillLimits)
+                  .map(([k, n]) => `${skillName(k as Skill)} ${n}`)
+                  .join(', '),
+              })}
             </p>
           )}
           <ul className="mt-3 grid grid-cols-2 gap-2 sm:grid-cols-3">
@@ -129,10 +135,10 @@ export function EventPage() {
                     to={e.status === 'published' ? `${paths.book(e.id)}?slot=${s.id}` : paths.event(e.id)}
                     className={`block rounded-lg p-3 ring-1 hover:ring-copper ${s.free ? 'ring-ink/10' : 'bg-alert-light/50 ring-alert/30'}`}
                   >
-                    <p className="font-bold">{formatTime(s.startsAt, tz)}</p>
+                    <p className="font-bold">{formatTime(s.startsAt, tz, lang)}</p>
                     <PlacesBar free={s.free} total={s.capacity} label={false} />
                     <p className="mt-1 text-xs font-semibold text-ink-soft">
-                      {s.free ? `${s.free} free` : 'Full: waiting list'}
+                      {s.free ? t('events.detail.slotFree', { free: s.free }) : t('events.detail.slotFull')}
                     </p>
                   </Link>
                 </li>
@@ -142,7 +148,7 @@ export function EventPage() {
 
         <div className="grid gap-4 md:grid-cols-2">
           <Card>
-            <h2 className="text-lg">What we take</h2>
+            <h2 className="text-lg">{t('events.detail.takeTitle')}</h2>
             <dl className="mt-2 space-y-2 text-sm">
               {taken.map((g) => (
                 <div key={g.label}>
@@ -153,9 +159,9 @@ export function EventPage() {
             </dl>
           </Card>
           <Card>
-            <h2 className="text-lg">What we do not take</h2>
+            <h2 className="text-lg">{t('events.detail.refuseTitle')}</h2>
             {refused.length === 0 ? (
-              <p className="mt-2 text-sm text-ink-soft">This group has no exclusions beyond the safety rules below.</p>
+              <p className="mt-2 text-sm text-ink-soft">{t('events.detail.noExclusions')}</p>
             ) : (
               <ul className="mt-2 space-y-2 text-sm">
                 {refused.map((c) => (
@@ -166,15 +172,13 @@ export function EventPage() {
                 ))}
               </ul>
             )}
-            <p className="mt-3 text-sm text-ink-soft">
-              Nor, anywhere: items with a swollen battery or a damaged mains cable.
-            </p>
+            <p className="mt-3 text-sm text-ink-soft">{t('events.detail.neverTaken')}</p>
           </Card>
         </div>
 
         {e.houseRules && (
           <Card>
-            <h2 className="text-lg">House rules</h2>
+            <h2 className="text-lg">{t('events.detail.houseRules')}</h2>
             <ul className="mt-2 list-disc space-y-1 pl-5">
               {e.houseRules
                 .split('\n')

@@ -1,5 +1,5 @@
 import { Link, useNavigate, useSearchParams, type LoaderFunctionArgs } from 'react-router';
-import { SKILL_LABELS } from '../../../../shared/constants';
+import { SKILLS } from '../../../../shared/constants';
 import { formatDay, formatTimeRange } from '../../../../shared/format';
 import { Alert, Card, EmptyState, PageTitle, Spinner } from '../../components/ui/feedback';
 import { MonthCalendar } from '../../components/ui/month-calendar';
@@ -9,6 +9,7 @@ import { useCategoriesQuery, categoriesQuery } from '../../features/categories/a
 import { useEvents, eventsQuery } from '../../features/events/api/get-events';
 import { usePublicGroups, publicGroupsQuery } from '../../features/groups/api/get-public-groups';
 import { PlacesBar } from '../../features/events/components/places-bar';
+import { useLanguage, useT } from '../../lib/i18n';
 import { queryClient } from '../../lib/query-client';
 
 /** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
@@ -27,6 +28,8 @@ export const loader = ({ request }: LoaderFunctionArgs) => {
 
 /** Upcoming sessions as a month calendar or a list, filtered by group and by the kind of item. */
 export function EventsPage() {
+  const t = useT();
+  const lang = useLanguage();
   const [params, setParams] = useSearchParams();
   const navigate = useNavigate();
   const view = params.get('view') === 'calendar' ? 'calendar' : 'list';
@@ -41,17 +44,21 @@ export function EventsPage() {
     else next.delete(k);
     setParams(next, { replace: true });
   };
-  const bySkill = Object.entries(SKILL_LABELS).map(([skill, label]) => ({
-    label,
+  const bySkill = SKILLS.map((skill) => ({
+    label: t(`common.skill.${skill}`),
     cats: (categories.data ?? []).filter((c) => c.skill === skill && !c.refusal),
   }));
 
   return (
     <div className="space-y-6">
-      <PageTitle title="Repair sessions" lead="Find a session near you and book a slot for your broken item." />
+      <PageTitle title={t('events.list.title')} lead={t('events.list.lead')} />
       <div className="grid gap-3 rounded-xl bg-white p-4 ring-1 ring-ink/5 sm:grid-cols-[1fr_1fr_auto] sm:items-end">
-        <SelectField label="Group" value={groupId ?? ''} onChange={(e) => set('group', e.target.value)}>
-          <option value="">All groups</option>
+        <SelectField
+          label={t('events.list.group')}
+          value={groupId ?? ''}
+          onChange={(e) => set('group', e.target.value)}
+        >
+          <option value="">{t('events.list.allGroups')}</option>
           {groups.data?.map((g) => (
             <option key={g.id} value={g.id}>
               {g.name}
@@ -59,11 +66,11 @@ export function EventsPage() {
           ))}
         </SelectField>
         <SelectField
-          label="What needs fixing?"
+          label={t('events.list.category')}
           value={categoryId ?? ''}
           onChange={(e) => set('category', e.target.value)}
         >
-          <option value="">Anything</option>
+          <option value="">{t('events.list.anything')}</option>
           {bySkill
             .filter((s) => s.cats.length)
             .map((s) => (
@@ -76,7 +83,7 @@ export function EventsPage() {
               </optgroup>
             ))}
         </SelectField>
-        <div role="group" aria-label="View" className="flex rounded-lg ring-1 ring-navy/20">
+        <div role="group" aria-label={t('events.list.view')} className="flex rounded-lg ring-1 ring-navy/20">
           {(['list', 'calendar'] as const).map((v) => (
             <button
               key={v}
@@ -84,15 +91,15 @@ export function EventsPage() {
               onClick={() => set('view', v === 'list' ? '' : v)}
               className={`min-h-11 flex-1 px-4 font-bold first:rounded-l-lg last:rounded-r-lg ${view === v ? 'bg-navy text-white' : 'text-navy'}`}
             >
-              {v === 'list' ? 'List' : 'Calendar'}
+              {v === 'list' ? t('events.list.viewList') : t('events.list.viewCalendar')}
             </button>
           ))}
         </div>
       </div>
 
-      {events.isPending && <Spinner label="Loading sessions…" />}
+      {events.isPending && <Spinner label={t('events.list.loading')} />}
       {events.error && (
-        <Alert tone="error" title="Could not load the sessions">
+        <Alert tone="error" title={t('events.list.loadError')}>
           {events.error.message}
         </Alert>
       )}
@@ -109,7 +116,7 @@ export function EventsPage() {
               borderColor: 'transparent',
               extendedProps: { free: e.freePlaces },
             }))}
-            detail={(x) => (x.free ? `${x.free} free` : 'full')}
+            detail={(x) => (x.free ? t('events.list.calendarFree', { free: x.free }) : t('events.list.calendarFull'))}
             onOpen={(id) => navigate(paths.event(Number(id)))}
           />
         </Card>
@@ -117,10 +124,8 @@ export function EventsPage() {
       {events.data &&
         view === 'list' &&
         (events.data.length === 0 ? (
-          <EmptyState title="No sessions match" icon="▦">
-            {groupId || categoryId
-              ? 'Try another group or kind of item.'
-              : 'No group has published a date yet. Check back soon.'}
+          <EmptyState title={t('events.list.emptyTitle')} icon="▦">
+            {groupId || categoryId ? t('events.list.emptyFiltered') : t('events.list.emptyNone')}
           </EmptyState>
         ) : (
           <ul className="grid gap-4 md:grid-cols-2">
@@ -131,7 +136,8 @@ export function EventsPage() {
                   className="block rounded-xl bg-white p-5 shadow-sm ring-1 ring-ink/5 transition hover:ring-copper"
                 >
                   <p className="text-sm font-bold text-copper-dark">
-                    {formatDay(e.startsAt, e.timeZone)} · {formatTimeRange(e.startsAt, e.endsAt, e.timeZone)}
+                    {formatDay(e.startsAt, e.timeZone, lang)} ·{' '}
+                    {formatTimeRange(e.startsAt, e.endsAt, e.timeZone, lang)}
                   </p>
                   <h2 className="mt-1 text-lg">{e.title}</h2>
                   <p className="text-sm text-ink-soft">

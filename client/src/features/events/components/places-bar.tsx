@@ -1,5 +1,8 @@
+import { useT } from '../../../lib/i18n';
+
 /** Free places as a bar: people would rather see "nearly full" than read "3 of 24". */
 export function PlacesBar({ free, total, label = true }: { free: number; total: number; label?: boolean }) {
+  const t = useT();
   const taken = total ? Math.round(((total - free) / total) * 100) : 100;
   const tone = free === 0 ? 'bg-alert' : free / Math.max(total, 1) < 0.25 ? 'bg-copper' : 'bg-sage';
   return (
@@ -10,13 +13,13 @@ export function PlacesBar({ free, total, label = true }: { free: number; total: 
         aria-valuemin={0}
         aria-valuemax={total}
         aria-valuenow={total - free}
-        aria-label="Places taken"
+        aria-label={t('events.places.taken')}
       >
         <div className={`h-full ${tone}`} style={{ width: `${taken}%` }} />
       </div>
       {label && (
         <p className={`mt-1 text-sm font-semibold ${free === 0 ? 'text-alert' : 'text-ink-soft'}`}>
-          {free === 0 ? 'Fully booked' : `${free} of ${total} places free`}
+          {free === 0 ? t('events.places.full') : t('events.places.free', { free, total })}
         </p>
       )}
     </div>
@@ -31,16 +34,10 @@ export function StatusBadge({ status }: { status: string }) {
     cancelled: 'bg-alert-light text-alert',
     confirmed: 'bg-sage-light text-sage',
   };
-  const labels: Record<string, string> = {
-    draft: 'Draft',
-    published: 'Open for booking',
-    closed: 'Booking closed',
-    cancelled: 'Cancelled',
-    confirmed: 'Booked',
-  };
+  const t = useT();
   return (
     <span className={`inline-block rounded-full px-2.5 py-0.5 text-xs font-bold ${tones[status] ?? 'bg-ink/10'}`}>
-      {labels[status] ?? status}
+      {status in tones ? t(`events.status.${status}`) : status}
     </span>
   );
 }

@@ -1,19 +1,20 @@
 import { Link } from 'react-router';
 import { Alert } from '../../../components/ui/feedback';
 import { paths } from '../../../config/paths';
+import { useT } from '../../../lib/i18n';
 
 /** What a session's page says when the session cannot be shown, with the way back to the list. */
 export function SessionMissing({ error }: { error: Error & { status?: number } }) {
+  const t = useT();
   return (
-    <Alert tone="error" title={error.status === 404 ? 'Session not found' : 'The session could not be loaded'}>
-      <p>
-        {error.status === 404
-          ? 'There is no session at this address. It may have been removed, or the link may be incomplete.'
-          : error.message}
-      </p>
+    <Alert
+      tone="error"
+      title={error.status === 404 ? t('events.missing.notFoundTitle') : t('events.missing.errorTitle')}
+    >
+      <p>{error.status === 404 ? t('events.missing.notFound') : error.message}</p>
       <p className="mt-2">
         <Link to={paths.events()} className="font-bold underline">
-          See all sessions
+          {t('events.missing.back')}
         </Link>
       </p>
     </Alert>

@@ -1,0 +1,85 @@
+import type { I18n } from '@lingui/core';
+import { useSyncExternalStore } from 'react';
+import { catalogs } from 'virtual:mendery-catalogs';
+import { DEFAULT_LANGUAGE, isLanguage, pickLanguage, type Language } from '../../../shared/i18n/languages';
+import { PSEUDO_LANGUAGE } from '../../../shared/i18n/pseudo';
+
+/**
+ * The reader's language in the browser. Lingui's runtime comes in the same lazy step as the language's precompiled
+ * messages, so the first page waits for one small fetch that runs beside the page's own chunks (see main.tsx).
+ */
+export type UiLanguage = Language | typeof PSEUDO_LANGUAGE;
+type Values = Record<string, unknown>;
+
+const STORAGE_KEY = 'mendery.language';
+let instance: I18n | undefined;
+let formats: Language = DEFAULT_LANGUAGE;
+const chosenListeners = new Set<(lang: Language) => void>();
+
+/** The language for dates, numbers and the API's Accept-Language (the pseudo-locale formats as English). */
+export const currentLanguage = (): Language => formats;
+
+function storedLanguage(): string | null {
+  try {
+    return localStorage.getItem(STORAGE_KEY);
+  } catch {
+    return null;
+  }
+}
+
+/** ?lang= in the address, else the visitor's stored choice, else the browser's languages, else English. */
+export function initialLanguage(): UiLanguage {
+  const asked = new URLSearchParams(location.search).get('lang');
+  if (asked === PSEUDO_LANGUAGE) return PSEUDO_LANGUAGE;
+  return pickLanguage([asked, storedLanguage(), ...(navigator.languages ?? [navigator.language])]);
+}
+
+/** Loads the language's messages (and Lingui with the first one), switches to it and sets `<html lang>`. */
+export async function activate(lang: UiLanguage): Promise<void> {
+  const [{ setupI18n }, { messages }] = await Promise.all([import('@lingui/core'), catalogs[lang]()]);
+  instance ??= setupI18n();
+  formats = isLanguage(lang) ? lang : DEFAULT_LANGUAGE;
+  instance.load(lang, messages);
+  instance.activate(lang, [formats]);
+  document.documentElement.lang = isLanguage(lang) ? lang : 'en-XA';
+}
+
+/**
+ * The visitor picked a language: remember it on this device, switch, and tell whoever listens (a signed-in person's
+ * account keeps it too: see onLanguageChosen).
+ */
+export async function chooseLanguage(lang: Language): Promise<void> {
+  try {
+    localStorage.setItem(STORAGE_KEY, lang);
+  } catch {
+    // A browser that keeps nothing still switches for this visit.
+  }
+  await activate(lang);
+  for (const listener of chosenListeners) listener(lang);
+}
+
+/** Runs `listener` after each choice made in the language picker; returns the way to stop. */
+export function onLanguageChosen(listener: (lang: Language) => void): () => void {
+  chosenListeners.add(listener);
+  return () => chosenListeners.delete(listener);
+}
+
+/** A message's text when `keyOrText` is a catalog key, else `keyOrText` itself (an API message already in words). */
+export function tr(keyOrText: string, values?: Values): string {
+  return instance && keyOrText in instance.messages ? instance._(keyOrText, values) : keyOrText;
+}
+
+const subscribe = (onChange: () => void) => instance!.on('change', onChange);
+const locale = () => instance!.locale;
+
+/** The translate function for a component; the component renders again when the language changes. */
+export function useT(): (key: string, values?: Values) => string {
+  useSyncExternalStore(subscribe, locale);
+  return tr;
+}
+
+/** The active language (as for formats) for a component, kept current. */
+export function useLanguage(): Language {
+  const lang = useSyncExternalStore(subscribe, locale);
+  return isLanguage(lang) ? lang : DEFAULT_LANGUAGE;
+}

@@ -1,0 +1,85 @@
+import { eq } from 'drizzle-orm';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Browser, Page } from 'playwright-core';
+import { formatDay } from '../../shared/format';
+import { events, repairGroups } from '../../server/src/db/schema/index';
+import { launchBrowser, PHONE, shot } from '../support/browser';
+import { startDemoApp, type DemoApp } from '../support/demo-app';
+import { makeEvent, makeGroup } from '../support/factories';
+
+// The visitor's language on the public pages: the browser's choice on a first visit, the picker's choice after it,
+// and room for longer words at 390 px (the pseudo-locale: English with accents, about 35 % longer).
+let app: DemoApp;
+let browser: Browser;
+let eventId: number;
+let startsAt: Date;
+let tz: string;
+
+beforeAll(async () => {
+  app = await startDemoApp();
+  browser = await launchBrowser();
+  const db = app.db.db;
+  const groupId = await makeGroup(db, `Taalgroep ${Date.now()}`);
+  [{ timeZone: tz }] = await db.select().from(repairGroups).where(eq(repairGroups.id, groupId));
+  ({ eventId } = await makeEvent(db, groupId, { capacity: 4, slotCount: 4 }));
+  [{ startsAt }] = await db.select().from(events).where(eq(events.id, eventId));
+}, 120_000);
+afterAll(async () => {
+  await browser?.close();
+  await app?.stop();
+});
+
+const widthOf = (page: Page) => page.evaluate(() => document.documentElement.scrollWidth);
+
+describe('the public pages in the visitor’s language', () => {
+  it('/events with a Dutch browser: Dutch words, lang="nl" and Dutch dates', async () => {
+    const context = await browser.newContext({ viewport: PHONE, locale: 'nl-NL' });
+    const page = await context.newPage();
+    await page.goto(`${app.server.url}/events`);
+    await page.getByRole('heading', { name: 'Reparatiemomenten', level: 1 }).waitFor();
+    expect(await page.getAttribute('html', 'lang')).toBe('nl');
+    await page.getByLabel('Wat moet er gemaakt worden?').waitFor();
+    // The date as CLDR writes it in Dutch (weekday and month names in Dutch, e.g. "zaterdag 5 december 2026").
+    const day = formatDay(startsAt, tz, 'nl');
+    expect(day).toMatch(/^(maandag|dinsdag|woensdag|donderdag|vrijdag|zaterdag|zondag) /);
+    await page.getByText(day, { exact: false }).first().waitFor();
+    expect(await page.getByText('Repair sessions').count()).toBe(0);
+    await page.screenshot({ path: shot('i18n-events-nl'), fullPage: true });
+    await context.close();
+  });
+
+  it('the picker switches to French, and a reload remembers it', async () => {
+    const context = await browser.newContext({ viewport: PHONE, locale: 'en-GB' });
+    const page = await context.newPage();
+    await page.goto(`${app.server.url}/events`);
+    await page.getByRole('heading', { name: 'Repair sessions', level: 1 }).waitFor();
+    const picker = page.getByLabel('Language');
+    await picker.focus();
+    await picker.selectOption('fr');
+    await page.getByRole('heading', { name: 'Ateliers de réparation', level: 1 }).waitFor();
+    expect(await page.getAttribute('html', 'lang')).toBe('fr');
+    await page.reload();
+    await page.getByRole('heading', { name: 'Ateliers de réparation', level: 1 }).waitFor();
+    expect(await page.getAttribute('html', 'lang')).toBe('fr');
+    expect(await page.getByLabel('Langue').inputValue()).toBe('fr');
+    await context.close();
+  });
+
+  it('the pseudo-locale fits at 390 px on /events and the session page', async () => {
+    const context = await browser.newContext({ viewport: PHONE });
+    const page = await context.newPage();
+    await page.goto(`${app.server.url}/events?lang=xx-pseudo`);
+    await page.getByRole('heading', { level: 1 }).waitFor();
+    expect(await page.getByRole('heading', { level: 1 }).textContent()).toMatch(/R[ée]+p[àa]+[ïi]+r/);
+    expect(await widthOf(page)).toBeLessThanOrEqual(PHONE.width);
+    await page.screenshot({ path: shot('i18n-events-pseudo'), fullPage: true });
+    await page.goto(`${app.server.url}/events/${eventId}?lang=xx-pseudo`);
+    await page
+      .getByRole('link', { name: /B[öo]+k/ })
+      .first()
+      .waitFor();
+    expect(await widthOf(page)).toBeLessThanOrEqual(PHONE.width);
+    await page.screenshot({ path: shot('i18n-session-pseudo'), fullPage: true });
+    await context.close();
+  });
+});
