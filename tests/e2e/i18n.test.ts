@@ -65,7 +65,7 @@ describe('the public pages in the visitor’s language', () => {
     await context.close();
   });
 
-  it('the pseudo-locale fits at 390 px on /events and the session page', async () => {
+  it('the pseudo-locale fits at 390 px on /events, the session page and the booking page', async () => {
     const context = await browser.newContext({ viewport: PHONE });
     const page = await context.newPage();
     await page.goto(`${app.server.url}/events?lang=xx-pseudo`);
@@ -80,6 +80,36 @@ describe('the public pages in the visitor’s language', () => {
       .waitFor();
     expect(await widthOf(page)).toBeLessThanOrEqual(PHONE.width);
     await page.screenshot({ path: shot('i18n-session-pseudo'), fullPage: true });
+    await page.goto(`${app.server.url}/events/${eventId}/book?lang=xx-pseudo`);
+    await page.getByRole('button', { name: /B[öo]+k m[ýy]/ }).waitFor();
+    expect(await widthOf(page)).toBeLessThanOrEqual(PHONE.width);
+    await page.screenshot({ path: shot('i18n-book-pseudo'), fullPage: true });
     await context.close();
+  });
+
+  it('the booking page in each language: its words and its safety questions, within 390 px', async () => {
+    const expected = {
+      en: { title: 'Book a repair slot', gas: 'It runs on gas', submit: 'Book my slot' },
+      nl: { title: 'Boek een tijdvak voor je reparatie', gas: 'Het werkt op gas', submit: 'Boek mijn tijdvak' },
+      de: { title: 'Reparaturtermin buchen', gas: 'Es läuft mit Gas', submit: 'Zeitfenster buchen' },
+      fr: { title: 'Réserver un créneau de réparation', gas: 'Il fonctionne au gaz', submit: 'Réserver mon créneau' },
+    };
+    for (const [lang, words] of Object.entries(expected)) {
+      const context = await browser.newContext({ viewport: PHONE, locale: lang });
+      const page = await context.newPage();
+      await page.goto(`${app.server.url}/events/${eventId}/book`);
+      await page.getByRole('heading', { name: words.title, level: 1 }).waitFor();
+      expect(await page.getAttribute('html', 'lang')).toBe(lang);
+      await page.getByText(words.gas).first().waitFor();
+      await page.getByRole('button', { name: words.submit }).waitFor();
+      if (lang !== 'en') expect(await page.getByText('Book my slot').count()).toBe(0);
+      expect(await widthOf(page)).toBeLessThanOrEqual(PHONE.width);
+      await page.screenshot({ path: shot(`i18n-book-${lang}`), fullPage: true });
+      await page.goto(`${app.server.url}/events`);
+      await page.getByRole('heading', { level: 1 }).waitFor();
+      expect(await widthOf(page)).toBeLessThanOrEqual(PHONE.width);
+      await page.screenshot({ path: shot(`i18n-events-${lang}`), fullPage: true });
+      await context.close();
+    }
   });
 });

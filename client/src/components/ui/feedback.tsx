@@ -1,4 +1,5 @@
 import type { ReactNode } from 'react';
+import { useT } from '../../lib/i18n';
 
 export function Alert({
   tone = 'info',
@@ -23,11 +24,12 @@ export function Alert({
   );
 }
 
-export function Spinner({ label = 'Loading…' }: { label?: string }) {
+export function Spinner({ label }: { label?: string }) {
+  const t = useT();
   return (
     <div role="status" className="flex items-center gap-3 py-8 text-ink-soft">
       <span className="size-5 animate-spin rounded-full border-2 border-navy border-r-transparent" aria-hidden />
-      {label}
+      {label ?? t('common.loading')}
     </div>
   );
 }

@@ -7,6 +7,7 @@ import { eventKeys } from '../../features/events/api/keys';
 import { useCategoriesQuery, categoriesQuery } from '../../features/categories/api/get-categories';
 import { useEvent, eventQuery } from '../../features/events/api/get-event';
 import { SessionMissing } from '../../features/events/components/session-missing';
+import { useLanguage, useT } from '../../lib/i18n';
 import { queryClient } from '../../lib/query-client';
 
 // The form and its validation load beside the page, not before it: the session shows first.
@@ -24,19 +25,21 @@ export const loader = ({ params }: LoaderFunctionArgs) => {
 };
 
 export function BookingPage() {
+  const t = useT();
+  const lang = useLanguage();
   const id = Number(useParams().eventId);
   const event = useEvent(id);
   const categories = useCategoriesQuery();
-  if (event.isPending || categories.isPending) return <Spinner label="Loading the booking form…" />;
+  if (event.isPending || categories.isPending) return <Spinner label={t('booking.loading')} />;
   if (event.error) return <SessionMissing error={event.error} />;
   if (categories.error) return <Alert tone="error">{categories.error.message}</Alert>;
   const e = event.data;
   if (e.status !== 'published')
     return (
-      <Alert tone="info" title="Not open for booking">
-        This session is not taking bookings.{' '}
+      <Alert tone="info" title={t('booking.notOpenTitle')}>
+        {t('booking.notOpen')}{' '}
         <Link className="underline" to={paths.event(id)}>
-          Back to the session
+          {t('booking.backToSession')}
         </Link>
       </Alert>
     );
@@ -45,10 +48,10 @@ export function BookingPage() {
       fallback={
         <div className="mx-auto max-w-2xl">
           <PageTitle
-            title="Book a repair slot"
-            lead={`${e.title} · ${formatDay(e.startsAt, e.timeZone)} · ${e.venue.name}, ${e.venue.town}`}
+            title={t('booking.title')}
+            lead={`${e.title} · ${formatDay(e.startsAt, e.timeZone, lang)} · ${e.venue.name}, ${e.venue.town}`}
           />
-          <Spinner label="Loading the booking form…" />
+          <Spinner label={t('booking.loading')} />
         </div>
       }
     >

@@ -1,10 +1,9 @@
 import { useMemo, useRef, useState } from 'react';
 import { useFieldArray } from 'react-hook-form';
 import { useNavigate, useSearchParams } from 'react-router';
-import { HAZARDS, SKILL_LABELS } from '../../../../../shared/constants';
+import { HAZARDS, SKILLS } from '../../../../../shared/constants';
 import { formatDay } from '../../../../../shared/format';
 import { slotBookability } from '../../../../../shared/booking/bookability';
-import { HAZARD_REFUSALS } from '../../../../../shared/booking/screening';
 import { createBookingSchema, MAX_ITEMS_PER_BOOKING, PHOTO_LIMITS } from '../../../../../shared/schemas/bookings';
 import type { Category } from '../../../../../shared/api/categories';
 import type { EventDetail } from '../../../../../shared/api/events';
@@ -15,14 +14,14 @@ import { CheckGroup } from '../../../components/ui/check-group';
 import { paths } from '../../../config/paths';
 import { ApiError } from '../../../lib/api';
 import { applyServerErrors, useZodForm } from '../../../lib/form';
+import { tr, useLanguage, useT } from '../../../lib/i18n';
+import { slotWords } from './slot-words';
 import { WaitlistJoined } from './waitlist-joined';
 import { HouseRules } from './house-rules';
 import { TimeTiles } from './time-tiles';
 import { useCreateBooking } from '../api/create-booking';
 import { useJoinWaitlist } from '../api/join-waitlist';
 import { uploadPhotos } from '../api/upload-photos';
-
-const HAZARD_QUESTIONS = HAZARDS.map((h) => ({ value: h, label: HAZARD_REFUSALS[h].question }));
 
 const emptyItem = { categoryId: '' as unknown as number, brand: '', model: '', fault: '', hazards: [] as never[] };
 
@@ -39,6 +38,9 @@ export function BookingForm({
   categories: Category[];
   onBooked: () => unknown;
 }) {
+  const t = useT();
+  const lang = useLanguage();
+  const hazardQuestions = HAZARDS.map((h) => ({ value: h, label: t(`booking.hazard.${h}.question`) }));
   const navigate = useNavigate();
   const key = useRef(crypto.randomUUID()).current;
   const book = useCreateBooking(key, onBooked);
@@ -82,9 +84,9 @@ export function BookingForm({
     setPhotoErrors((e) => ({
       ...e,
       [fieldId]: bad
-        ? `“${bad.name}” is ${bad.size > PHOTO_LIMITS.maxBytes ? 'larger than 8 MB' : 'not a JPEG, PNG or WebP photo'}.`
+        ? t(bad.size > PHOTO_LIMITS.maxBytes ? 'booking.photo.tooLarge' : 'booking.photo.badType', { name: bad.name })
         : (list?.length ?? 0) > PHOTO_LIMITS.perItem
-          ? `Only the first ${PHOTO_LIMITS.perItem} photos are kept.`
+          ? t('booking.photo.tooMany', { max: PHOTO_LIMITS.perItem })
           : '',
     }));
     setPhotos((p) => ({ ...p, [fieldId]: files.filter((f) => f !== bad) }));
@@ -98,17 +100,17 @@ export function BookingForm({
         setQueued(r.position);
         return;
       }
-      setProgress('Booking your place…');
+      setProgress(t('booking.progress.booking'));
       const created = await book.mutateAsync(values);
       const failed: string[] = [];
       for (const [i, field] of items.fields.entries()) {
         const files = photos[field.id] ?? [];
         if (!files.length) continue;
-        setProgress(`Uploading photos of item ${i + 1}…`);
+        setProgress(t('booking.progress.photos', { n: i + 1 }));
         try {
           await uploadPhotos(created.reference, created.manageToken, created.itemIds[i], files);
         } catch (err) {
-          failed.push(err instanceof ApiError ? err.message : 'A photo could not be uploaded.');
+          failed.push(err instanceof ApiError ? err.message : t('booking.photo.failed'));
         }
       }
       navigate(paths.booking(created.reference, created.manageToken, true), { state: { photoProblems: failed } });
@@ -134,8 +136,8 @@ export function BookingForm({
   return (
     <div className="mx-auto max-w-2xl">
       <PageTitle
-        title="Book a repair slot"
-        lead={`${event.title} · ${formatDay(event.startsAt, tz)} · ${event.venue.name}, ${event.venue.town}`}
+        title={t('booking.title')}
+        lead={`${event.title} · ${formatDay(event.startsAt, tz, lang)} · ${event.venue.name}, ${event.venue.town}`}
       />
       <form onSubmit={onSubmit} noValidate className="space-y-6">
         {formError && (
@@ -146,7 +148,7 @@ export function BookingForm({
 
         <Card>
           <fieldset>
-            <legend className="text-lg font-extrabold text-navy">1. Choose a time</legend>
+            <legend className="text-lg font-extrabold text-navy">{t('booking.step.time', { n: 1 })}</legend>
             <TimeTiles
               slots={event.slots}
               timeZone={tz}
@@ -155,18 +157,17 @@ export function BookingForm({
               bookability={bookability}
               field={form.register('slotId')}
             />
-            {errors.slotId && <p className="mt-2 text-sm font-semibold text-alert">{errors.slotId.message}</p>}
+            {errors.slotId?.message && (
+              <p className="mt-2 text-sm font-semibold text-alert">{tr(errors.slotId.message)}</p>
+            )}
             {chosenRefused && (
               <div className="mt-3">
-                <Alert tone="error">{chosenRefused.message}</Alert>
+                <Alert tone="error">{slotWords(chosenRefused, t).message}</Alert>
               </div>
             )}
             {joinsWaitlist && (
               <div className="mt-3">
-                <Alert tone="caution">
-                  This time has no room for {watchedItems.length > 1 ? 'all your items' : 'your item'}. Send the form to
-                  join its waiting list, or choose another time.
-                </Alert>
+                <Alert tone="caution">{t('booking.waitlistHint', { count: watchedItems.length })}</Alert>
               </div>
             )}
           </fieldset>
@@ -174,24 +175,24 @@ export function BookingForm({
 
         <Card>
           <fieldset className="space-y-4">
-            <legend className="text-lg font-extrabold text-navy">2. About you</legend>
+            <legend className="text-lg font-extrabold text-navy">{t('booking.step.you', { n: 2 })}</legend>
             <TextField
-              label="Your name"
+              label={t('booking.name')}
               autoComplete="name"
               error={errors.visitor?.name?.message}
               {...form.register('visitor.name')}
             />
             <TextField
-              label="E-mail"
+              label={t('booking.email')}
               type="email"
               autoComplete="email"
               inputMode="email"
-              hint="We send the confirmation and your booking link here."
+              hint={t('booking.emailHint')}
               error={errors.visitor?.email?.message}
               {...form.register('visitor.email')}
             />
             <TextField
-              label="Phone (optional)"
+              label={t('booking.phone')}
               type="tel"
               autoComplete="tel"
               inputMode="tel"
@@ -211,16 +212,18 @@ export function BookingForm({
               <fieldset className="space-y-4">
                 <div className="flex items-center justify-between">
                   <legend className="text-lg font-extrabold text-navy">
-                    {3 + i}. {items.fields.length > 1 ? `Item ${i + 1}` : 'Your item'}
+                    {items.fields.length > 1
+                      ? t('booking.step.item', { n: 3 + i, item: i + 1 })
+                      : t('booking.step.yourItem', { n: 3 })}
                   </legend>
                   {items.fields.length > 1 && (
                     <Button type="button" variant="quiet" onClick={() => items.remove(i)}>
-                      Remove
+                      {t('booking.remove')}
                     </Button>
                   )}
                 </div>
                 <SelectField
-                  label="What is it?"
+                  label={t('booking.what')}
                   error={itemErrors?.categoryId?.message}
                   {...form.register(`items.${i}.categoryId`, {
                     onChange: (e) => {
@@ -229,15 +232,14 @@ export function BookingForm({
                     },
                   })}
                 >
-                  <option value="">Choose…</option>
-                  {Object.entries(SKILL_LABELS).map(([skill, label]) => {
+                  <option value="">{t('booking.choose')}</option>
+                  {SKILLS.map((skill) => {
                     const list = categories.filter((c) => c.skill === skill);
                     return list.length ? (
-                      <optgroup key={skill} label={label}>
+                      <optgroup key={skill} label={t(`common.skill.${skill}`)}>
                         {list.map((c) => (
                           <option key={c.id} value={c.id}>
-                            {c.name}
-                            {excluded.has(c.id) ? ' (not taken)' : ''}
+                            {excluded.has(c.id) ? t('booking.categoryNotTaken', { name: c.name }) : c.name}
                           </option>
                         ))}
                       </optgroup>
@@ -245,25 +247,25 @@ export function BookingForm({
                   })}
                 </SelectField>
                 {refused && !itemErrors?.categoryId && (
-                  <Alert tone="error" title="This group does not take it">
+                  <Alert tone="error" title={t('booking.refusedTitle')}>
                     {cat.refusal
                       ? `${cat.refusal.reason} ${cat.refusal.suggestion}`
-                      : `${event.groupName} does not take this kind of item. Look for another group’s session.`}
+                      : t('booking.refusedGeneric', { group: event.groupName })}
                   </Alert>
                 )}
                 <div className="grid gap-4 sm:grid-cols-3">
                   <TextField
-                    label="Brand (optional)"
+                    label={t('booking.brand')}
                     error={itemErrors?.brand?.message}
                     {...form.register(`items.${i}.brand`)}
                   />
                   <TextField
-                    label="Model (optional)"
+                    label={t('booking.model')}
                     error={itemErrors?.model?.message}
                     {...form.register(`items.${i}.model`)}
                   />
                   <TextField
-                    label="Age in years (optional)"
+                    label={t('booking.age')}
                     type="number"
                     min={0}
                     inputMode="numeric"
@@ -273,46 +275,48 @@ export function BookingForm({
                 </div>
                 <div className="space-y-1">
                   <label htmlFor={`fault-${field.id}`} className="block font-semibold">
-                    What is wrong with it?
+                    {t('booking.fault')}
                   </label>
                   <textarea
                     id={`fault-${field.id}`}
                     rows={3}
                     aria-invalid={Boolean(itemErrors?.fault)}
                     className={`block w-full rounded-lg border bg-white px-3 py-2.5 ${itemErrors?.fault ? 'border-alert' : 'border-ink/20'}`}
-                    placeholder="In your own words: what happens, since when, anything you tried."
+                    placeholder={t('booking.faultPlaceholder')}
                     {...form.register(`items.${i}.fault`)}
                   />
-                  {itemErrors?.fault && <p className="text-sm font-semibold text-alert">{itemErrors.fault.message}</p>}
+                  {itemErrors?.fault?.message && (
+                    <p className="text-sm font-semibold text-alert">{tr(itemErrors.fault.message)}</p>
+                  )}
                 </div>
                 <div className="flex flex-wrap gap-x-6 gap-y-2">
                   <label className="flex items-center gap-2">
                     <input type="checkbox" className="size-5 accent-copper" {...form.register(`items.${i}.mains`)} />
-                    Plugs into the mains
+                    {t('booking.mains')}
                   </label>
                   <label className="flex items-center gap-2">
                     <input type="checkbox" className="size-5 accent-copper" {...form.register(`items.${i}.battery`)} />
-                    Has a battery
+                    {t('booking.battery')}
                   </label>
                 </div>
                 <CheckGroup
-                  legend="Safety questions: tick any that apply"
-                  options={HAZARD_QUESTIONS}
+                  legend={t('booking.hazardsLegend')}
+                  options={hazardQuestions}
                   field={form.register(`items.${i}.hazards`)}
                 />
                 {(hazards as string[]).length > 0 && (
-                  <Alert tone="error" title="Please do not bring it">
+                  <Alert tone="error" title={t('booking.hazardTitle')}>
                     {(hazards as (typeof HAZARDS)[number][])
-                      .map((h) => `${HAZARD_REFUSALS[h].reason} ${HAZARD_REFUSALS[h].suggestion}`)
+                      .map((h) => `${t(`booking.hazard.${h}.reason`)} ${t(`booking.hazard.${h}.suggestion`)}`)
                       .join(' ')}
                   </Alert>
                 )}
-                {itemErrors?.hazards && (
-                  <p className="text-sm font-semibold text-alert">{itemErrors.hazards.message}</p>
+                {itemErrors?.hazards?.message && (
+                  <p className="text-sm font-semibold text-alert">{tr(itemErrors.hazards.message)}</p>
                 )}
                 <div className="space-y-1">
                   <label htmlFor={`photos-${field.id}`} className="block font-semibold">
-                    Photos (optional, up to 3)
+                    {t('booking.photos', { max: PHOTO_LIMITS.perItem })}
                   </label>
                   <input
                     id={`photos-${field.id}`}
@@ -323,9 +327,7 @@ export function BookingForm({
                     onChange={(e) => pickPhotos(field.id, e.target.files)}
                     className="block w-full text-sm file:mr-3 file:rounded-lg file:border-0 file:bg-navy file:px-3 file:py-2 file:font-bold file:text-white"
                   />
-                  <p className="text-sm text-ink-soft">
-                    The label with the model number, and the fault if it shows. At most 8 MB each.
-                  </p>
+                  <p className="text-sm text-ink-soft">{t('booking.photosHint')}</p>
                   {photoErrors[field.id] && <p className="text-sm font-semibold text-alert">{photoErrors[field.id]}</p>}
                   {(photos[field.id]?.length ?? 0) > 0 && (
                     <div className="flex gap-2">
@@ -346,10 +348,10 @@ export function BookingForm({
         })}
         {items.fields.length < MAX_ITEMS_PER_BOOKING && (
           <Button type="button" variant="secondary" onClick={() => items.append(emptyItem)}>
-            + Add another item
+            {t('booking.addItem')}
           </Button>
         )}
-        {errors.items?.message && <p className="text-sm font-semibold text-alert">{errors.items.message}</p>}
+        {errors.items?.message && <p className="text-sm font-semibold text-alert">{tr(errors.items.message)}</p>}
 
         <HouseRules
           step={3 + items.fields.length}
@@ -361,7 +363,7 @@ export function BookingForm({
         />
 
         <Button type="submit" busy={form.formState.isSubmitting} className="w-full py-3 text-lg">
-          {joinsWaitlist ? 'Join the waiting list' : 'Book my slot'}
+          {joinsWaitlist ? t('booking.submitWaitlist') : t('booking.submit')}
         </Button>
         {progress && (
           <p role="status" className="text-center text-sm text-ink-soft">

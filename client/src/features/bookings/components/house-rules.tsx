@@ -1,7 +1,7 @@
 import type { UseFormRegisterReturn } from 'react-hook-form';
 import { Link } from 'react-router';
-import { DISCLAIMER } from '../../../../../shared/format';
 import { Card } from '../../../components/ui/feedback';
+import { tr, useT } from '../../../lib/i18n';
 
 /** The group's house rules and the conditions, with the visitor's consent box. */
 export function HouseRules(props: {
@@ -13,9 +13,10 @@ export function HouseRules(props: {
   consent: UseFormRegisterReturn;
   error?: string;
 }) {
+  const t = useT();
   return (
     <Card>
-      <h2 className="text-lg">{props.step}. House rules</h2>
+      <h2 className="text-lg">{t('booking.step.rules', { n: props.step })}</h2>
       {props.houseRules && <h3 className="mt-3 text-sm font-bold">{props.groupName}</h3>}
       {props.houseRules && (
         <ul className="mt-1 list-disc space-y-1 pl-5 text-sm">
@@ -27,20 +28,20 @@ export function HouseRules(props: {
             ))}
         </ul>
       )}
-      <h3 className="mt-3 text-sm font-bold">At every Mendery session</h3>
+      <h3 className="mt-3 text-sm font-bold">{t('booking.rules.everywhere')}</h3>
       <ul className="mt-1 list-disc space-y-1 pl-5 text-sm text-ink-soft">
-        {DISCLAIMER.map((d) => (
-          <li key={d}>{d}</li>
+        {[1, 2, 3].map((n) => (
+          <li key={n}>{t(`booking.rules.d${n}`)}</li>
         ))}
       </ul>
       <label className="mt-4 flex items-start gap-3 rounded-lg p-3 ring-1 ring-ink/15">
         <input type="checkbox" className="mt-0.5 size-5 accent-copper" {...props.consent} />
-        <span>I accept the house rules and the conditions above.</span>
+        <span>{t('booking.rules.consent')}</span>
       </label>
-      {props.error && <p className="mt-1 text-sm font-semibold text-alert">{props.error}</p>}
+      {props.error && <p className="mt-1 text-sm font-semibold text-alert">{tr(props.error)}</p>}
       <p className="mt-3 text-sm">
         <Link to={props.privacyPath} className="font-bold text-navy underline">
-          How {props.groupName} looks after your details
+          {t('booking.rules.privacy', { group: props.groupName })}
         </Link>
       </p>
     </Card>
