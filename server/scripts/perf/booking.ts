@@ -41,7 +41,16 @@ interface Line {
   rps: number;
   p99: number;
   bad: number;
+  total: number;
 }
+
+/** Statements the server has received so far (MariaDB's `Questions` status counter, every client together). */
+async function statementsSoFar(pool: Pool) {
+  const [[row]] = (await pool.query("SHOW GLOBAL STATUS LIKE 'Questions'")) as unknown as [{ Value: string }[]];
+  return Number(row.Value);
+}
+const perRequest = (title: string, statements: number, line: Line) =>
+  console.log(`${title.padEnd(44)} ${(statements / Math.max(line.total, 1)).toFixed(1)} statements a booking`);
 interface Setup {
   appUrl: string;
   bareUrl: string;
@@ -113,12 +122,15 @@ export async function measureBooking(setup: Setup) {
   });
   // The load must measure bookings, not refusals: one booking first, and stop if it is refused.
   if (probe.status !== 201) throw new Error(`The bench slot refuses bookings: ${probe.status} ${await probe.text()}`);
+  const bareBefore = await statementsSoFar(setup.pool);
   const bareBookings = await setup.load('bare Express + mysql2: POST booking', {
     url: `${setup.bareUrl}/bookings`,
     method: 'POST',
     headers: json,
     body: body(setup.slotId, setup.kettleId),
   });
+  const bareStatements = (await statementsSoFar(setup.pool)) - bareBefore - 1;
+  const appBefore = await statementsSoFar(setup.pool);
   const bookings = await setup.load('Mendery POST /api/bookings', {
     url: `${setup.appUrl}/api/bookings`,
     requests: setup.visitors.map((v) => ({
@@ -128,6 +140,10 @@ export async function measureBooking(setup: Setup) {
       body: body(setup.slotId, setup.kettleId),
     })),
   });
+  const appStatements = (await statementsSoFar(setup.pool)) - appBefore - 1;
+  // Every statement is a round trip and a socket write; on this machine those dominate the app's CPU.
+  perRequest('  bare Express + mysql2', bareStatements, bareBookings);
+  perRequest('  Mendery POST /api/bookings', appStatements, bookings);
   setup.ratio(bookings, bareBookings);
 
   console.log(`Race: ${RACE} simultaneous requests on one slot with ${RACE_CAPACITY} places`);

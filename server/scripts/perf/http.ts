@@ -138,10 +138,18 @@ interface Line {
   rps: number;
   p99: number;
   bad: number;
+  /** Requests completed in the run. */
+  total: number;
 }
 async function load(title: string, opts: autocannon.Options): Promise<Line> {
   const r = await autocannon({ connections: CONNECTIONS, duration: SECONDS, ...opts });
-  const line = { title, rps: Math.round(r.requests.average), p99: r.latency.p99, bad: r.errors + r.non2xx };
+  const line = {
+    title,
+    rps: Math.round(r.requests.average),
+    p99: r.latency.p99,
+    bad: r.errors + r.non2xx,
+    total: r.requests.total,
+  };
   console.log(
     `${title.padEnd(44)} ${String(line.rps).padStart(6)} req/s   p99 ${String(line.p99).padStart(4)} ms   non-2xx/errors ${line.bad}`,
   );

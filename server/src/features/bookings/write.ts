@@ -137,7 +137,7 @@ export async function insertBooking(
 ) {
   const { reference, token } = prepared;
   // Everything that needs no lock is ready before the first one is taken: the confirmation mail (its render is the
-  // costly part), the token's hash and the rows. While the slot's row is locked only the inserts run.
+  // costly part), the token's hash and the rows. While the slot's row is locked only the booking's own inserts run.
   const f = facts(
     ctx,
     row,
@@ -147,6 +147,9 @@ export async function insertBooking(
   );
   const mail = confirmationMail(f, bookingQrText(ctx.env.publicUrl, reference));
   const manageTokenHash = sha256(token);
+  // The mail is queued before the slot's row is locked: it needs no lock, and its row is the largest write (the
+  // QR code's picture). If the places are refused, the transaction rolls it back with everything else.
+  await enqueueMail(tx, mail);
   // A return visit (the part bought) may take one place over the capacity: the group keeps room for its returns.
   await takeAllPlaces(tx, row, skillsOf(input.items, cats), {
     fromHeld,
@@ -176,7 +179,6 @@ export async function insertBooking(
       returnOfItemId: returnOfItemId ?? null,
     })),
   );
-  await enqueueMail(tx, mail);
   return { id, reference, manageToken: token, eventId: row.event.id, slotId: row.slot.id, itemIds };
 }
 
