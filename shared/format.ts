@@ -6,24 +6,33 @@ import { DEFAULT_LANGUAGE, type Language } from './i18n/languages';
  */
 export const intlLocale = (lang: Language): string => (lang === 'en' ? 'en-GB' : lang);
 
+/**
+ * One Intl.DateTimeFormat per language, time zone and kind: building one costs far more than using it (ICU loads the
+ * locale's patterns), and a booking's mail or a page of sessions formats dozens of dates.
+ */
+const formatters = new Map<string, Intl.DateTimeFormat>();
+function formatter(kind: 'day' | 'time', lang: Language, timeZone: string): Intl.DateTimeFormat {
+  const key = `${kind} ${lang} ${timeZone}`;
+  let f = formatters.get(key);
+  if (!f) {
+    f = new Intl.DateTimeFormat(
+      intlLocale(lang),
+      kind === 'day'
+        ? { timeZone, weekday: 'long', day: 'numeric', month: 'long', year: 'numeric' }
+        : { timeZone, hour: '2-digit', minute: '2-digit', hourCycle: 'h23' },
+    );
+    formatters.set(key, f);
+  }
+  return f;
+}
+
 /** Dates as people at the event read them: in the group's time zone, in the reader's language. */
 export function formatDay(d: Date | string, timeZone: string, lang: Language = DEFAULT_LANGUAGE): string {
-  return new Intl.DateTimeFormat(intlLocale(lang), {
-    timeZone,
-    weekday: 'long',
-    day: 'numeric',
-    month: 'long',
-    year: 'numeric',
-  }).format(new Date(d));
+  return formatter('day', lang, timeZone).format(new Date(d));
 }
 
 export function formatTime(d: Date | string, timeZone: string, lang: Language = DEFAULT_LANGUAGE): string {
-  return new Intl.DateTimeFormat(intlLocale(lang), {
-    timeZone,
-    hour: '2-digit',
-    minute: '2-digit',
-    hourCycle: 'h23',
-  }).format(new Date(d));
+  return formatter('time', lang, timeZone).format(new Date(d));
 }
 
 export const formatTimeRange = (
