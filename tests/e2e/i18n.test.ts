@@ -87,6 +87,34 @@ describe('the public pages in the visitor’s language', () => {
     await context.close();
   });
 
+  it('the landing page in Dutch, and a booking made in German ends on its own page in German', async () => {
+    const nl = await browser.newContext({ viewport: PHONE, locale: 'nl-BE' });
+    const home = await nl.newPage();
+    await home.goto(`${app.server.url}/`);
+    await home.getByRole('link', { name: 'Zoek een reparatiemoment en boek' }).waitFor();
+    expect(await home.getAttribute('html', 'lang')).toBe('nl');
+    expect(await widthOf(home)).toBeLessThanOrEqual(PHONE.width);
+    await nl.close();
+
+    const context = await browser.newContext({ viewport: PHONE, locale: 'de-DE' });
+    const page = await context.newPage();
+    await page.goto(`${app.server.url}/events/${eventId}/book`);
+    await page.getByRole('heading', { name: 'Reparaturtermin buchen', level: 1 }).waitFor();
+    await page.locator('label', { hasText: '4 frei' }).first().click();
+    await page.getByLabel('Ihr Name').fill('Wiebke Sandhage');
+    await page.getByLabel('E-Mail').fill('wiebke@example.org');
+    await page.getByLabel('Was ist es?').selectOption({ label: 'Kettle' });
+    await page.getByLabel('Was ist kaputt?').fill('Schaltet nach wenigen Sekunden ab.');
+    await page.getByLabel(/Ich akzeptiere die Hausregeln/).check();
+    await page.getByRole('button', { name: 'Zeitfenster buchen' }).click();
+    await page.getByText('Sie sind gebucht').waitFor({ timeout: 15_000 });
+    await page.getByText('Buchungsnummer').waitFor();
+    await page.getByRole('button', { name: 'Meine Buchung stornieren' }).waitFor();
+    expect(await widthOf(page)).toBeLessThanOrEqual(PHONE.width);
+    await page.screenshot({ path: shot('i18n-manage-de'), fullPage: true });
+    await context.close();
+  });
+
   it('the booking page in each language: its words and its safety questions, within 390 px', async () => {
     const expected = {
       en: { title: 'Book a repair slot', gas: 'It runs on gas', submit: 'Book my slot' },

@@ -24,6 +24,9 @@ const CONVERTED = [
   'client/src/features/bookings/components/time-tiles.tsx',
   'client/src/features/bookings/components/waitlist-joined.tsx',
   'client/src/features/bookings/components/slot-words.ts',
+  'client/src/routes/home.tsx',
+  'client/src/routes/bookings/manage.tsx',
+  'client/src/features/bookings/components/link-problem.tsx',
 ];
 const READ_PROPS = new Set(['aria-label', 'placeholder', 'title', 'alt', 'label', 'legend', 'lead', 'hint']);
 const WORDS = /\p{L}{2,}/u;

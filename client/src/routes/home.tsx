@@ -2,57 +2,36 @@ import { Link } from 'react-router';
 import { paths } from '../config/paths';
 import { usePublicGroups, publicGroupsQuery } from '../features/groups/api/get-public-groups';
 import { Alert, Spinner } from '../components/ui/feedback';
+import { useT } from '../lib/i18n';
 import { queryClient } from '../lib/query-client';
-
-const steps = [
-  {
-    n: '1',
-    title: 'Book a slot',
-    text: 'Pick a session near you and a time, and tell us what is broken. Booking keeps the queue short.',
-  },
-  {
-    n: '2',
-    title: 'Bring it along',
-    text: 'Bring the item, its charger or loose parts, and the story of what went wrong and when.',
-  },
-  {
-    n: '3',
-    title: 'Mend it together',
-    text: 'Sit with a volunteer fixer, watch, learn and help. Mains items get a safety check before they go home.',
-  },
-];
 
 /** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
 export const loader = () => queryClient.ensureQueryData(publicGroupsQuery()).catch(() => null);
 
 export function HomePage() {
+  const t = useT();
   const groups = usePublicGroups();
   return (
     <div className="space-y-12">
       <section className="grid items-center gap-8 md:grid-cols-[1.2fr_1fr]">
         <div className="space-y-5">
           <p className="inline-block rounded-full bg-copper-light px-3 py-1 text-sm font-bold text-copper-dark">
-            Community repair sessions
+            {t('common.home.badge')}
           </p>
-          <h1 className="text-4xl leading-tight sm:text-5xl">
-            Bring the broken thing. Leave with it working — and knowing how.
-          </h1>
-          <p className="max-w-xl text-lg text-ink-soft">
-            Volunteer fixers in your town look at kettles, lamps, laptops, clothes, bikes and toys with you, for free.
-            Mendery lets you book a place, and helps the groups plan benches, fixers and parts.
-          </p>
+          <h1 className="text-4xl leading-tight sm:text-5xl">{t('common.home.title')}</h1>
+          <p className="max-w-xl text-lg text-ink-soft">{t('common.home.lead')}</p>
           <div className="flex flex-wrap gap-3">
             <Link
               to={paths.events()}
               className="inline-flex min-h-11 items-center rounded-lg bg-copper px-5 font-bold text-white hover:bg-copper-dark"
             >
-              Find a session and book
+              {t('common.home.find')}
             </Link>
             <Link
               to={paths.volunteer()}
               className="inline-flex min-h-11 items-center rounded-lg bg-white px-5 font-bold text-navy ring-1 ring-navy/25 hover:bg-navy/5"
             >
-              Volunteer as a fixer
+              {t('common.home.volunteer')}
             </Link>
           </div>
         </div>
@@ -61,16 +40,16 @@ export function HomePage() {
 
       <section aria-labelledby="how">
         <h2 id="how" className="mb-4 text-2xl">
-          How a session works
+          {t('common.home.howTitle')}
         </h2>
         <ol className="grid gap-4 sm:grid-cols-3">
-          {steps.map((s) => (
-            <li key={s.n} className="rounded-xl bg-white p-5 shadow-sm ring-1 ring-ink/5">
+          {[1, 2, 3].map((n) => (
+            <li key={n} className="rounded-xl bg-white p-5 shadow-sm ring-1 ring-ink/5">
               <span className="flex size-9 items-center justify-center rounded-full bg-navy font-extrabold text-white">
-                {s.n}
+                {n}
               </span>
-              <h3 className="mt-3 text-lg">{s.title}</h3>
-              <p className="mt-1 text-ink-soft">{s.text}</p>
+              <h3 className="mt-3 text-lg">{t(`common.home.step${n}Title`)}</h3>
+              <p className="mt-1 text-ink-soft">{t(`common.home.step${n}`)}</p>
             </li>
           ))}
         </ol>
@@ -78,11 +57,11 @@ export function HomePage() {
 
       <section aria-labelledby="groups">
         <h2 id="groups" className="mb-4 text-2xl">
-          Repair groups on Mendery
+          {t('common.home.groupsTitle')}
         </h2>
-        {groups.isPending && <Spinner label="Loading groups…" />}
-        {groups.error && <Alert tone="error">Could not load the groups: {groups.error.message}</Alert>}
-        {groups.data?.length === 0 && <Alert>No repair group has joined yet.</Alert>}
+        {groups.isPending && <Spinner label={t('common.home.groupsLoading')} />}
+        {groups.error && <Alert tone="error">{t('common.home.groupsError', { message: groups.error.message })}</Alert>}
+        {groups.data?.length === 0 && <Alert>{t('common.home.groupsNone')}</Alert>}
         <div className="grid gap-4 sm:grid-cols-2">
           {groups.data?.map((g) => (
             <Link
@@ -93,21 +72,17 @@ export function HomePage() {
               <h3 className="text-lg">{g.name}</h3>
               <p className="text-sm font-semibold text-copper-dark">{g.town}</p>
               <p className="mt-2 text-ink-soft">{g.description}</p>
-              <p className="mt-3 text-sm font-bold text-navy underline">See its sessions</p>
+              <p className="mt-3 text-sm font-bold text-navy underline">{t('common.home.groupSessions')}</p>
             </Link>
           ))}
         </div>
       </section>
 
       <section className="rounded-xl bg-navy p-6 text-white sm:p-8">
-        <h2 className="text-2xl text-white">Not everything can come to the table</h2>
-        <p className="mt-2 max-w-3xl text-white/85">
-          By common practice groups do not take gas appliances, microwave ovens, anything with a refrigerant circuit,
-          swollen lithium batteries or items whose mains cable is damaged. Each group's own house rules say what it
-          takes.
-        </p>
+        <h2 className="text-2xl text-white">{t('common.home.safetyTitle')}</h2>
+        <p className="mt-2 max-w-3xl text-white/85">{t('common.home.safety')}</p>
         <Link to={paths.safety()} className="mt-4 inline-block font-bold text-copper-light underline">
-          Read how we keep the bench safe
+          {t('common.home.safetyLink')}
         </Link>
       </section>
     </div>
@@ -116,11 +91,12 @@ export function HomePage() {
 
 /** A drawing of a workbench: a lamp, a kettle and a spool of thread. */
 function HeroPicture() {
+  const t = useT();
   return (
     <svg
       viewBox="0 0 320 220"
       role="img"
-      aria-label="A workbench with a lamp, a kettle and a spool of thread"
+      aria-label={t('common.home.picture')}
       className="w-full max-w-md justify-self-center"
     >
       <rect x="10" y="160" width="300" height="14" rx="4" fill="#23395d" />

@@ -3,7 +3,7 @@ import { slotBookability } from '../../../../shared/booking/bookability';
 import { OUTCOME_LABELS } from '../../../../shared/event-day/constants';
 import { StatusChip } from '../../features/event-day/components/status-chip';
 import { Link, useLocation, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
-import { formatDay, formatTime, formatTimeRange, WHAT_TO_BRING } from '../../../../shared/format';
+import { formatDay, formatTime, formatTimeRange } from '../../../../shared/format';
 import { Button } from '../../components/ui/button';
 import { ConfirmDialog } from '../../components/ui/confirm-dialog';
 import { Alert, Card, Spinner } from '../../components/ui/feedback';
@@ -18,6 +18,7 @@ import { useManageToken } from '../../features/bookings/components/use-manage-to
 import { eventKeys } from '../../features/events/api/keys';
 import { useEvent, eventQuery } from '../../features/events/api/get-event';
 import { StatusBadge } from '../../features/events/components/places-bar';
+import { useLanguage, useT } from '../../lib/i18n';
 import { queryClient } from '../../lib/query-client';
 import { BookingDataPanel } from '../../features/privacy/components/booking-data-panel';
 
@@ -39,6 +40,8 @@ export const loader = async ({ params, request }: LoaderFunctionArgs) => {
 
 /** The visitor's own page, reached with the secret link: view, move or cancel without an account. */
 export function ManageBookingPage() {
+  const t = useT();
+  const lang = useLanguage();
   const reference = useParams().reference ?? '';
   const [params] = useSearchParams();
   const token = useManageToken();
@@ -56,11 +59,11 @@ export function ManageBookingPage() {
 
   if (!token)
     return (
-      <Alert tone="error" title="This link is incomplete">
-        Open the link from your confirmation mail again.
+      <Alert tone="error" title={t('booking.manage.incompleteTitle')}>
+        {t('booking.manage.incomplete')}
       </Alert>
     );
-  if (booking.isPending) return <Spinner label="Loading your booking…" />;
+  if (booking.isPending) return <Spinner label={t('booking.manage.loading')} />;
   if (booking.error) return <LinkProblem error={booking.error} />;
   const b = booking.data;
   const tz = b.event.timeZone;
@@ -85,27 +88,24 @@ export function ManageBookingPage() {
     <div className="mx-auto max-w-2xl space-y-5">
       {fresh && b.status === 'confirmed' && (
         <div className="rounded-xl bg-sage p-5 text-white">
-          <p className="text-2xl font-extrabold">You are booked</p>
-          <p className="mt-1">
-            We have sent a confirmation to {b.visitor.email} with this page’s link. Keep it: it is how you change the
-            booking.
-          </p>
+          <p className="text-2xl font-extrabold">{t('booking.manage.bookedTitle')}</p>
+          <p className="mt-1">{t('booking.manage.booked', { email: b.visitor.email })}</p>
         </div>
       )}
       {photoProblems.length > 0 && (
-        <Alert tone="caution" title="Some photos were not added">
-          {photoProblems.join(' ')} You can add them below.
+        <Alert tone="caution" title={t('booking.manage.photoProblemsTitle')}>
+          {t('booking.manage.photoProblems', { problems: photoProblems.join(' ') })}
         </Alert>
       )}
       {b.status === 'cancelled' && (
-        <Alert tone="info" title="This booking is cancelled">
-          The place has gone back to the session.{' '}
+        <Alert tone="info" title={t('booking.manage.cancelledTitle')}>
+          {t('booking.manage.cancelled')}{' '}
           {b.event.status === 'published' ? (
             <Link className="font-bold underline" to={paths.book(b.event.id)}>
-              Book again
+              {t('booking.manage.bookAgain')}
             </Link>
           ) : (
-            'You are welcome to book another session.'
+            t('booking.manage.bookAnother')
           )}
         </Alert>
       )}
@@ -115,11 +115,11 @@ export function ManageBookingPage() {
           <div className="flex items-center gap-2">
             <StatusBadge status={b.status} />
           </div>
-          <p className="mt-2 text-sm font-semibold text-ink-soft">Booking reference</p>
+          <p className="mt-2 text-sm font-semibold text-ink-soft">{t('booking.manage.reference')}</p>
           <p className="font-mono text-4xl font-extrabold tracking-widest text-navy">{b.reference}</p>
           <h1 className="mt-3 text-xl">{b.event.title}</h1>
           <p className="font-bold text-copper-dark">
-            {formatDay(b.slot.startsAt, tz)} · {formatTimeRange(b.slot.startsAt, b.slot.endsAt, tz)}
+            {formatDay(b.slot.startsAt, tz, lang)} · {formatTimeRange(b.slot.startsAt, b.slot.endsAt, tz, lang)}
           </p>
           <p>
             {b.venue.name}, {b.venue.address}, {b.venue.town}
@@ -131,7 +131,7 @@ export function ManageBookingPage() {
               download={`mendery-${b.reference}.ics`}
               className="mt-3 inline-flex min-h-11 items-center justify-center gap-2 rounded-lg bg-white px-4 py-2 font-bold text-navy ring-1 ring-navy/25 transition hover:bg-navy/5"
             >
-              Add to calendar
+              {t('booking.manage.calendar')}
             </a>
           )}
         </div>
@@ -139,16 +139,16 @@ export function ManageBookingPage() {
           <figure className="justify-self-center text-center">
             <img
               src={b.qr}
-              alt={`QR code of booking ${b.reference}`}
+              alt={t('booking.manage.qr', { reference: b.reference })}
               className="size-40 rounded-lg ring-1 ring-ink/10"
             />
-            <figcaption className="mt-1 text-xs text-ink-soft">Show this at reception</figcaption>
+            <figcaption className="mt-1 text-xs text-ink-soft">{t('booking.manage.showAtReception')}</figcaption>
           </figure>
         )}
       </Card>
 
       <Card>
-        <h2 className="text-lg">Your items</h2>
+        <h2 className="text-lg">{t('booking.manage.items')}</h2>
         {uploadError && (
           <div className="mt-2">
             <Alert tone="error">{uploadError}</Alert>
@@ -164,11 +164,7 @@ export function ManageBookingPage() {
               {i.status !== 'booked' && (
                 <p className="my-1 flex items-center gap-2 text-sm">
                   <StatusChip status={i.status} />
-                  {i.queueNumber !== null && (
-                    <span>
-                      Queue number <b>{i.queueNumber}</b>
-                    </span>
-                  )}
+                  {i.queueNumber !== null && <span>{t('booking.manage.queueNumber', { number: i.queueNumber })}</span>}
                   {i.outcome && <b>{OUTCOME_LABELS[i.outcome]}</b>}
                 </p>
               )}
@@ -179,7 +175,7 @@ export function ManageBookingPage() {
                 ))}
                 {active && i.photos.length < 3 && (
                   <label className="cursor-pointer rounded-lg px-3 py-2 text-sm font-bold text-navy ring-1 ring-navy/25 has-focus-visible:outline-3 has-focus-visible:outline-copper">
-                    + Add photo
+                    {t('booking.manage.addPhoto')}
                     <input
                       type="file"
                       accept="image/jpeg,image/png,image/webp"
@@ -196,17 +192,21 @@ export function ManageBookingPage() {
 
       {active && (
         <Card className="space-y-4">
-          <h2 className="text-lg">Change the booking</h2>
+          <h2 className="text-lg">{t('booking.manage.changeTitle')}</h2>
           {move.error && <Alert tone="error">{move.error.message}</Alert>}
-          {move.isSuccess && <Alert tone="success">Moved. We have mailed you the new time.</Alert>}
+          {move.isSuccess && <Alert tone="success">{t('booking.manage.moved')}</Alert>}
           {otherSlots.length ? (
             <div className="flex flex-wrap items-end gap-2">
               <div className="min-w-48 flex-1">
-                <SelectField label="Move to another time" value={newSlot} onChange={(e) => setNewSlot(e.target.value)}>
-                  <option value="">Choose a time…</option>
+                <SelectField
+                  label={t('booking.manage.moveTo')}
+                  value={newSlot}
+                  onChange={(e) => setNewSlot(e.target.value)}
+                >
+                  <option value="">{t('booking.manage.chooseTime')}</option>
                   {otherSlots.map((s) => (
                     <option key={s.id} value={s.id}>
-                      {formatTime(s.startsAt, tz)} ({s.free} free)
+                      {t('booking.manage.timeOption', { time: formatTime(s.startsAt, tz, lang), free: s.free })}
                     </option>
                   ))}
                 </SelectField>
@@ -217,41 +217,46 @@ export function ManageBookingPage() {
                 busy={move.isPending}
                 onClick={() => move.mutate(Number(newSlot), { onSuccess: () => setNewSlot('') })}
               >
-                Move
+                {t('booking.manage.move')}
               </Button>
             </div>
           ) : (
-            <p className="text-sm text-ink-soft">No other time of this session has room just now.</p>
+            <p className="text-sm text-ink-soft">{t('booking.manage.noOtherTime')}</p>
           )}
           <div className="border-t border-ink/5 pt-4">
             <Button variant="danger" onClick={() => setConfirming(true)}>
-              Cancel my booking
+              {t('booking.manage.cancel')}
             </Button>
-            <p className="mt-1 text-sm text-ink-soft">Cancelling frees your place for someone on the waiting list.</p>
+            <p className="mt-1 text-sm text-ink-soft">{t('booking.manage.cancelHint')}</p>
           </div>
         </Card>
       )}
 
       {b.status === 'confirmed' && (
         <Card>
-          <h2 className="text-lg">What to bring</h2>
+          <h2 className="text-lg">{t('events.detail.bringTitle')}</h2>
           <ul className="mt-2 list-disc space-y-1 pl-5 text-sm">
-            {WHAT_TO_BRING.map((w) => (
-              <li key={w}>{w}</li>
+            {[1, 2, 3, 4].map((n) => (
+              <li key={n}>{t(`events.detail.bring${n}`)}</li>
             ))}
           </ul>
         </Card>
       )}
       {event.data && <BookingDataPanel reference={b.reference} token={token} groupId={event.data.groupId} />}
       <Link to={paths.event(b.event.id)} className="inline-block font-bold text-navy underline">
-        About this session
+        {t('booking.manage.about')}
       </Link>
 
       <ConfirmDialog
         open={confirming}
-        title="Cancel this booking?"
-        message={`Booking ${b.reference} for ${formatTime(b.slot.startsAt, tz)} on ${formatDay(b.slot.startsAt, tz)} will be cancelled and the place given to someone else. This cannot be undone.`}
-        confirmLabel="Cancel the booking"
+        title={t('booking.manage.confirmTitle')}
+        message={t('booking.manage.confirm', {
+          reference: b.reference,
+          time: formatTime(b.slot.startsAt, tz, lang),
+          day: formatDay(b.slot.startsAt, tz, lang),
+        })}
+        confirmLabel={t('booking.manage.confirmButton')}
+        cancelLabel={t('booking.manage.keep')}
         busy={cancel.isPending}
         onCancel={() => setConfirming(false)}
         onConfirm={() => cancel.mutate(undefined, { onSettled: () => setConfirming(false) })}

@@ -1,6 +1,7 @@
 import { Link } from 'react-router';
 import { Alert, Card } from '../../../components/ui/feedback';
 import { paths } from '../../../config/paths';
+import { useT } from '../../../lib/i18n';
 import { FreshLinkForm } from './fresh-link-form';
 
 /**
@@ -8,26 +9,24 @@ import { FreshLinkForm } from './fresh-link-form';
  * the visitor can ask for a fresh link by e-mail.
  */
 export function LinkProblem({ error }: { error: Error }) {
+  const t = useT();
   const expired = (error as { code?: string }).code === 'link-expired';
   return (
     <div className="mx-auto max-w-2xl space-y-5">
       {expired ? (
-        <Alert tone="info" title="This link has run out">
+        <Alert tone="info" title={t('booking.link.expiredTitle')}>
           <p>{error.message}</p>
         </Alert>
       ) : (
-        <Alert tone="error" title="Booking not found">
-          <p>
-            The link may be incomplete, or the booking reference is wrong, or a fresh link has been mailed since. Open
-            the link from your latest mail about this booking again.
-          </p>
+        <Alert tone="error" title={t('booking.link.notFoundTitle')}>
+          <p>{t('booking.link.notFound')}</p>
         </Alert>
       )}
       <Card>
         <FreshLinkForm />
       </Card>
       <Link to={paths.events()} className="inline-block font-bold text-navy underline">
-        See all sessions
+        {t('events.missing.back')}
       </Link>
     </div>
   );
