@@ -10,9 +10,11 @@ import { sessionMiddleware } from './auth/session';
 import { apiNotFound, errorHandler, wellFormedText } from './http/errors';
 import { clientFiles } from './http/client-files';
 import { FEATURES } from './features';
+import { languageMiddleware, loadTranslations } from './i18n';
 
 /** Builds the Express app: middleware → routers → 404 → error handler. `listen` is the caller's business. */
 export function createApp(ctx: AppContext) {
+  loadTranslations();
   const app = express();
   app.disable('x-powered-by');
   if (ctx.env.TRUST_PROXY) {
@@ -50,6 +52,7 @@ export function createApp(ctx: AppContext) {
     res.setHeader('Cache-Control', 'no-store');
     next();
   });
+  api.use(languageMiddleware);
   api.use(express.json({ limit: '100kb' }));
   api.use(express.urlencoded({ extended: false, limit: '100kb' }));
   api.use(wellFormedText);

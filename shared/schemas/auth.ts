@@ -2,18 +2,18 @@ import { z } from 'zod';
 import { GROUP_ROLES } from '../constants';
 
 export const email = z
-  .string({ error: 'Enter your e-mail address.' })
+  .string({ error: 'validation.email.required' })
   .trim()
   .toLowerCase()
-  .min(1, 'Enter your e-mail address.')
-  .max(254, 'That e-mail address is too long.')
-  .pipe(z.email({ error: 'That does not look like an e-mail address.' }));
+  .min(1, 'validation.email.required')
+  .max(254, 'validation.email.tooLong')
+  .pipe(z.email({ error: 'validation.email.invalid' }));
 
 /** OWASP ASVS: at least 8 characters when no other rule applies; we ask for 10 and cap at 128. */
 export const newPassword = z
-  .string({ error: 'Choose a password.' })
-  .min(10, 'Use at least 10 characters.')
-  .max(128, 'Use at most 128 characters.');
+  .string({ error: 'validation.password.required' })
+  .min(10, 'validation.password.tooShort')
+  .max(128, 'validation.password.tooLong');
 
 export const loginSchema = z.object({
   email,
@@ -23,10 +23,10 @@ export type LoginInput = z.infer<typeof loginSchema>;
 
 export const signupSchema = z.object({
   name: z
-    .string({ error: 'Enter your name.' })
+    .string({ error: 'validation.name.required' })
     .trim()
-    .min(1, 'Enter your name.')
-    .max(120, 'Use at most 120 characters.'),
+    .min(1, 'validation.name.required')
+    .max(120, 'validation.name.tooLong'),
   email,
   password: newPassword,
   groupId: z.coerce.number({ error: 'Choose a group.' }).int().positive('Choose a group.'),
@@ -44,7 +44,7 @@ export const resetConfirmSchema = z
 
 export const firstAdminSchema = z
   .object({
-    name: z.string().trim().min(1, 'Enter your name.').max(120),
+    name: z.string().trim().min(1, 'validation.name.required').max(120),
     email,
     password: newPassword,
     confirm: z.string(),
@@ -98,7 +98,7 @@ export interface SessionUser {
 
 export const inviteSchema = z.object({ email, role: z.enum(GROUP_ROLES, { error: 'Choose a role.' }) });
 export const inviteSignupSchema = z.object({
-  name: z.string().trim().min(1, 'Enter your name.').max(120),
+  name: z.string().trim().min(1, 'validation.name.required').max(120),
   password: newPassword,
 });
 

@@ -4,16 +4,16 @@ import { email } from './auth';
 
 export const visitorSchema = z.object({
   name: z
-    .string({ error: 'Enter your name.' })
+    .string({ error: 'validation.name.required' })
     .trim()
-    .min(1, 'Enter your name.')
-    .max(120, 'Use at most 120 characters.'),
+    .min(1, 'validation.name.required')
+    .max(120, 'validation.name.tooLong'),
   email,
   phone: z
     .string()
     .trim()
     .max(40)
-    .regex(/^[+0-9 ()-]*$/, 'Use digits, spaces, + and brackets only.')
+    .regex(/^[+0-9 ()-]*$/, 'validation.phone.characters')
     .optional()
     .transform((v) => v || undefined),
 });
@@ -23,10 +23,7 @@ export const freshLinkSchema = z.object({ email });
 export type FreshLinkInput = z.input<typeof freshLinkSchema>;
 
 export const bookingItemSchema = z.object({
-  categoryId: z.coerce
-    .number({ error: 'Choose what kind of item it is.' })
-    .int()
-    .positive('Choose what kind of item it is.'),
+  categoryId: z.coerce.number({ error: 'validation.item.category' }).int().positive('validation.item.category'),
   brand: z
     .string()
     .trim()
@@ -41,13 +38,13 @@ export const bookingItemSchema = z.object({
     .transform((v) => v || undefined),
   ageYears: z.preprocess(
     (v) => (v === '' || v === null ? undefined : v),
-    z.coerce.number().int('Use whole years.').min(0, 'Age cannot be negative.').max(150).optional(),
+    z.coerce.number().int('validation.item.ageWholeYears').min(0, 'validation.item.ageNegative').max(150).optional(),
   ),
   fault: z
-    .string({ error: 'Describe what is wrong.' })
+    .string({ error: 'validation.item.faultRequired' })
     .trim()
-    .min(5, 'Describe what is wrong in a few words.')
-    .max(2000, 'Keep it under 2000 characters.'),
+    .min(5, 'validation.item.faultShort')
+    .max(2000, 'validation.item.faultLong'),
   mains: z.boolean().optional(),
   battery: z.boolean().optional(),
   hazards: z.array(z.enum(HAZARDS)).max(HAZARDS.length).default([]),
@@ -57,17 +54,17 @@ export type BookingItemInput = z.input<typeof bookingItemSchema>;
 export const MAX_ITEMS_PER_BOOKING = 3;
 
 export const createBookingSchema = z.object({
-  slotId: z.coerce.number({ error: 'Choose a time.' }).int().positive('Choose a time.'),
+  slotId: z.coerce.number({ error: 'validation.slot.required' }).int().positive('validation.slot.required'),
   visitor: visitorSchema,
   items: z
     .array(bookingItemSchema)
-    .min(1, 'Add the item you are bringing.')
-    .max(MAX_ITEMS_PER_BOOKING, `Book at most ${MAX_ITEMS_PER_BOOKING} items at once.`),
-  consent: z.literal(true, { error: 'Tick the box to accept the house rules.' }),
+    .min(1, 'validation.items.required')
+    .max(MAX_ITEMS_PER_BOOKING, 'validation.items.tooMany'),
+  consent: z.literal(true, { error: 'validation.consent.required' }),
 });
 export type CreateBookingInput = z.input<typeof createBookingSchema>;
 
-export const moveBookingSchema = z.object({ slotId: z.coerce.number().int().positive('Choose a time.') });
+export const moveBookingSchema = z.object({ slotId: z.coerce.number().int().positive('validation.slot.required') });
 
 export const waitlistSchema = createBookingSchema;
 

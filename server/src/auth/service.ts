@@ -45,8 +45,7 @@ export async function authenticate(ctx: AppContext, input: LoginInput): Promise<
 export async function signup(ctx: AppContext, input: SignupInput): Promise<void> {
   const { db } = ctx.database;
   const group = await q.groupById(db, input.groupId);
-  if (!group)
-    throw new HttpError(400, 'invalid', 'Some fields need attention.', { groupId: 'Choose one of the listed groups.' });
+  if (!group) throw new HttpError(400, 'invalid', 'errors.invalid', { groupId: 'Choose one of the listed groups.' });
   refuseCommonPassword(input.password);
   const passwordHash = await hashPassword(input.password);
   await db.transaction(async (tx) => {

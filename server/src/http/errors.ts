@@ -3,6 +3,7 @@ import { logReason } from '../db/log-reason';
 import { ZodError } from 'zod';
 import { lockConflict } from '../db/retry';
 import { redactUrl } from './redact';
+import { languageOf, translate } from '../i18n';
 
 /** The one error type services throw; the handler turns it into `{"error":{code,message,fields?}}`. */
 export class HttpError extends Error {
@@ -118,7 +119,7 @@ export function errorHandler(log: (msg: string, err: unknown) => void = console.
   return (err, req, res, _next) => {
     let e: HttpError;
     if (err instanceof HttpError) e = err;
-    else if (err instanceof ZodError) e = new HttpError(400, 'invalid', 'Some fields need attention.', zodFields(err));
+    else if (err instanceof ZodError) e = new HttpError(400, 'invalid', 'errors.invalid', zodFields(err));
     else if (err?.code === 'EBADCSRFTOKEN' || err?.message === 'invalid csrf token')
       e = new HttpError(403, 'csrf', 'The form expired or came from elsewhere. Reload the page and try again.');
     else if (err instanceof URIError)
@@ -139,8 +140,13 @@ export function errorHandler(log: (msg: string, err: unknown) => void = console.
       e = new HttpError(500, 'internal', 'Something went wrong on our side. It has been logged.');
     }
     if (res.headersSent) return;
+    // Messages that are catalog keys (the shared schemas' validation.* keys, errors.*) go out in the reader's language.
+    const lang = languageOf(req, res.locals);
+    const fields = e.fields
+      ? Object.fromEntries(Object.entries(e.fields).map(([k, v]) => [k, translate(lang, v)]))
+      : undefined;
     res
       .status(e.status)
-      .json({ error: { code: e.code, message: e.message, ...(e.fields ? { fields: e.fields } : {}) } });
+      .json({ error: { code: e.code, message: translate(lang, e.message), ...(fields ? { fields } : {}) } });
   };
 }

@@ -109,6 +109,8 @@ export const bookings = mysqlTable(
     walkIn: boolean('walk_in').notNull().default(false),
     /** For walk-ins: the name typed at the desk by the person accepting the house rules. */
     consentName: varchar('consent_name', { length: 120 }),
+    /** The visitor's language when booking: every mail about the booking goes out in it, whoever sends it. */
+    language: varchar('language', { length: 8 }).notNull().default('en'),
     manageTokenHash: char('manage_token_hash', { length: 64 }).notNull(),
     /** Goes up by one with each fresh manage link mailed; the token is an HMAC of the reference and this. */
     manageTokenVersion: int('manage_token_version').notNull().default(1),

@@ -15,6 +15,8 @@ export const repairGroups = mysqlTable(
     timeZone: varchar('time_zone', { length: 64 }).notNull().default('Europe/London'),
     /** ISO 4217 code used to show part costs (formatted with Intl.NumberFormat). */
     currency: char('currency', { length: 3 }).notNull().default('GBP'),
+    /** The language of the group's public pages and mails when nothing else decides (shared/i18n/languages.ts). */
+    defaultLanguage: varchar('default_language', { length: 8 }).notNull().default('en'),
     /** ISO 3166-1 alpha-3 code of the group's country, for the Open Repair Data file; empty until an organiser sets it. */
     country: char('country', { length: 3 }),
     /** Whether the group's repair notes are searchable by the other groups of the network. */

@@ -9,6 +9,8 @@ export const users = mysqlTable(
     name: varchar('name', { length: 120 }).notNull(),
     passwordHash: varchar('password_hash', { length: 255 }),
     admin: boolean('admin').notNull().default(false),
+    /** The language the person chose for the app; null until they choose (the browser's then decides). */
+    language: varchar('language', { length: 8 }),
     emailVerifiedAt: timestamp3('email_verified_at'),
     /** SHA-256 of the secret in the person's shift-calendar feed URL; null when no feed link is live (revoked). */
     calendarFeedHash: char('calendar_feed_hash', { length: 64 }),

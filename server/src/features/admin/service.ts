@@ -80,14 +80,12 @@ export async function allUsers(ctx: AppContext) {
  * the group it belongs to. A group with people or its own sessions is never merged away.
  */
 export async function mergeGroup(ctx: AppContext, from: number, into: number) {
-  if (from === into)
-    throw new HttpError(400, 'invalid', 'Some fields need attention.', { into: 'Choose another group.' });
+  if (from === into) throw new HttpError(400, 'invalid', 'errors.invalid', { into: 'Choose another group.' });
   await ctx.database.db.transaction(async (tx) => {
     const source = await q.groupForMerge(tx, from);
     const target = await q.groupForMerge(tx, into);
     if (!source) throw notFound('That group');
-    if (!target)
-      throw new HttpError(400, 'invalid', 'Some fields need attention.', { into: 'That group was not found.' });
+    if (!target) throw new HttpError(400, 'invalid', 'errors.invalid', { into: 'That group was not found.' });
     if (!source.historyOnly || (await q.groupHasOwnLife(tx, from)))
       throw new HttpError(
         409,

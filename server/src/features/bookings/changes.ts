@@ -54,7 +54,7 @@ export async function moveBooking(ctx: AppContext, bookingId: number, slotId: nu
       await assertNotArrived(tx, b.id);
       const row = await bookableSlot(tx, slotId);
       if (row.event.id !== b.eventId)
-        throw new HttpError(400, 'invalid', 'Some fields need attention.', {
+        throw new HttpError(400, 'invalid', 'errors.invalid', {
           slotId: 'Choose a time of the same event.',
         });
       const items = await itemsOf(tx, b.id);

@@ -95,7 +95,7 @@ async function joinLine(ctx: AppContext, eventId: number, input: BookingInput) {
   return ctx.database.db.transaction(async (tx) => {
     const row = await bookableSlot(tx, input.slotId, { lock: true });
     if (row.event.id !== eventId)
-      throw new HttpError(400, 'invalid', 'Some fields need attention.', { slotId: 'Choose a time of this event.' });
+      throw new HttpError(400, 'invalid', 'errors.invalid', { slotId: 'Choose a time of this event.' });
     const cats = await screenItems(tx, row.group, input.items);
     const bookability = await bookabilityOf(tx, row, skillsOf(input.items, cats));
     if (bookability.ok) throw new HttpError(409, 'places-free', 'This time still has free places: book it directly.');

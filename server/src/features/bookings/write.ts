@@ -28,7 +28,7 @@ export const full = () =>
 /** Loads the slot with its event, group and venue, and checks that it can take bookings now. */
 export async function bookableSlot(tx: DbOrTx, slotId: number, opts: { lock?: boolean } = {}) {
   const row = await slotWithContextById(tx, slotId, opts);
-  if (!row) throw new HttpError(400, 'invalid', 'Some fields need attention.', { slotId: 'That time does not exist.' });
+  if (!row) throw new HttpError(400, 'invalid', 'errors.invalid', { slotId: 'That time does not exist.' });
   if (row.event.status !== 'published')
     throw new HttpError(
       409,

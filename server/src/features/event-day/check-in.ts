@@ -30,7 +30,7 @@ async function fieldErrors(tx: Tx, wanted: Wanted[], items: BookedItem[]) {
     if (w.categoryId !== undefined && !known.includes(w.categoryId))
       fields[`items.${n}.categoryId`] = 'Choose one of the listed kinds of item.';
   });
-  if (Object.keys(fields).length) throw new HttpError(400, 'invalid', 'Some fields need attention.', fields);
+  if (Object.keys(fields).length) throw new HttpError(400, 'invalid', 'errors.invalid', fields);
 }
 
 /**
@@ -123,7 +123,7 @@ export async function checkIn(
       for (const [n, w] of wanted.entries()) {
         const status = itemOf(w).status;
         if (w.arrival === 'no-show' && status !== 'no-show' && !canMoveTo(status, 'no-show'))
-          throw new HttpError(409, 'bad-transition', 'Some fields need attention.', {
+          throw new HttpError(409, 'bad-transition', 'errors.invalid', {
             [`items.${n}.arrival`]:
               'This item has already been checked in. Mark it withdrawn if the visitor took it away.',
           });

@@ -35,7 +35,7 @@ export async function walkIn(
   const eventSlots = await slotsOfEvent(db, eventId);
   let slot = input.slotId ? eventSlots.find((s) => s.id === input.slotId) : currentSlot(eventSlots, Date.now());
   if (input.slotId && !slot)
-    throw new HttpError(400, 'invalid', 'Some fields need attention.', {
+    throw new HttpError(400, 'invalid', 'errors.invalid', {
       slotId: 'That time is not part of this event.',
     });
   slot ??= eventSlots[0];

@@ -43,12 +43,12 @@ export async function createEvent(ctx: AppContext, input: z.output<typeof create
   const { db } = ctx.database;
   const venue = await venueById(db, input.venueId);
   if (!venue || venue.groupId !== input.groupId)
-    throw new HttpError(400, 'invalid', 'Some fields need attention.', {
+    throw new HttpError(400, 'invalid', 'errors.invalid', {
       venueId: 'Choose one of the group’s venues.',
     });
   const plans = slotPlans(input.startsAt, input.endsAt, input.slotMinutes, input.slotCapacity);
   if (plans.length === 0)
-    throw new HttpError(400, 'invalid', 'Some fields need attention.', {
+    throw new HttpError(400, 'invalid', 'errors.invalid', {
       slotMinutes: 'The opening hours are shorter than one slot.',
     });
   const id = await insertEventWithSlots(
@@ -71,13 +71,13 @@ export async function updateEvent(ctx: AppContext, id: number, input: z.output<t
     if (e.status === 'cancelled') throw conflict('cancelled', 'A cancelled event cannot be changed.');
     const next = { ...e, ...input };
     if (next.endsAt <= next.startsAt)
-      throw new HttpError(400, 'invalid', 'Some fields need attention.', {
+      throw new HttpError(400, 'invalid', 'errors.invalid', {
         endsAt: 'The event must end after it starts.',
       });
     if (input.venueId !== undefined) {
       const venue = await venueById(tx, input.venueId);
       if (!venue || venue.groupId !== e.groupId)
-        throw new HttpError(400, 'invalid', 'Some fields need attention.', {
+        throw new HttpError(400, 'invalid', 'errors.invalid', {
           venueId: 'Choose one of the group’s venues.',
         });
     }
@@ -85,7 +85,7 @@ export async function updateEvent(ctx: AppContext, id: number, input: z.output<t
     if (['startsAt', 'endsAt', 'slotMinutes', 'slotCapacity'].some((k) => k in input)) {
       const plans = slotPlans(next.startsAt, next.endsAt, next.slotMinutes, next.slotCapacity);
       if (plans.length === 0)
-        throw new HttpError(400, 'invalid', 'Some fields need attention.', {
+        throw new HttpError(400, 'invalid', 'errors.invalid', {
           slotMinutes: 'The opening hours are shorter than one slot.',
         });
       await replaceSlots(tx, id, plans);

@@ -61,7 +61,7 @@ export async function saveGroupSettings(ctx: AppContext, groupId: number, input:
       input.excludedCategoryIds !== undefined &&
       !(await replaceExclusions(tx, groupId, [...new Set(input.excludedCategoryIds)]))
     )
-      throw new HttpError(400, 'invalid', 'Some fields need attention.', {
+      throw new HttpError(400, 'invalid', 'errors.invalid', {
         excludedCategoryIds: 'One of the categories does not exist.',
       });
   });

@@ -27,8 +27,7 @@ function upload(req: Request, res: Response, next: NextFunction) {
 }
 
 const theFile = (req: Request) => {
-  if (!req.file?.size)
-    throw new HttpError(400, 'invalid', 'Some fields need attention.', { file: 'Choose a CSV file.' });
+  if (!req.file?.size) throw new HttpError(400, 'invalid', 'errors.invalid', { file: 'Choose a CSV file.' });
   return req.file;
 };
 

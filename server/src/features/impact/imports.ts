@@ -75,7 +75,7 @@ export async function startImport(
     if (read.total > IMPORT_LIMITS.maxRows)
       throw new HttpError(413, 'too-many-rows', `A file can hold at most ${IMPORT_LIMITS.maxRows} records.`);
     if (input.scope === 'network' && read.kind === 'plain' && !input.mapping.group_identifier)
-      throw new HttpError(400, 'invalid', 'Some fields need attention.', {
+      throw new HttpError(400, 'invalid', 'errors.invalid', {
         mapping: 'Match a column to group_identifier: a network file names each record’s group.',
       });
     kind = read.kind;

@@ -52,7 +52,7 @@ function statsGuard(ctx: AppContext) {
       : q.data.groupId;
     if (q.data.eventId && q.data.groupId && groupId !== q.data.groupId)
       return next(
-        new HttpError(400, 'invalid', 'Some fields need attention.', {
+        new HttpError(400, 'invalid', 'errors.invalid', {
           eventId: 'That event belongs to another group.',
         }),
       );

@@ -188,7 +188,7 @@ export async function publicImpact(ctx: AppContext, groupId?: number): Promise<P
 
 export function assertDateRange(from?: string, to?: string) {
   if (from && to && from > to)
-    throw new HttpError(400, 'invalid', 'Some fields need attention.', {
+    throw new HttpError(400, 'invalid', 'errors.invalid', {
       to: 'The end date is before the start date.',
     });
 }

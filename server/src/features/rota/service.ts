@@ -24,7 +24,7 @@ export async function setMyShift(
   const startsAt = input.startsAt ?? e.startsAt;
   const endsAt = input.endsAt ?? e.endsAt;
   if (startsAt < e.startsAt || endsAt > e.endsAt)
-    throw new HttpError(400, 'invalid', 'Some fields need attention.', {
+    throw new HttpError(400, 'invalid', 'errors.invalid', {
       startsAt: 'Choose hours within the event’s opening hours.',
     });
   await q.upsertShift(db, { eventId, userId, coming: input.coming, startsAt, endsAt });
@@ -126,7 +126,7 @@ export async function seat(
 ): Promise<SeatResult> {
   const { db } = ctx.database;
   if (benchId !== null && !(await q.eventBenchRow(db, eventId, benchId)))
-    throw new HttpError(400, 'invalid', 'Some fields need attention.', {
+    throw new HttpError(400, 'invalid', 'errors.invalid', {
       benchId: 'That bench is not set out at this event.',
     });
   const s = await q.shiftRow(db, eventId, userId);

@@ -171,7 +171,7 @@ export async function listParts(
 }
 
 const notThisGroups = (field: string) =>
-  new HttpError(400, 'invalid', 'Some fields need attention.', { [field]: 'That item is not one of this group’s.' });
+  new HttpError(400, 'invalid', 'errors.invalid', { [field]: 'That item is not one of this group’s.' });
 
 export async function addPart(
   ctx: AppContext,

@@ -24,7 +24,7 @@ export async function runTriage(
   const data = await loadEvent(ctx, eventId);
   const slot = slotId ? data.slots.find((s) => s.id === slotId) : undefined;
   if (slotId && !slot)
-    throw new HttpError(400, 'invalid', 'Some fields need attention.', {
+    throw new HttpError(400, 'invalid', 'errors.invalid', {
       slotId: 'That slot is not part of this event.',
     });
   // A repair under way is as fixed as a locked placement.
@@ -178,12 +178,12 @@ export async function placeByHand(
   if (!item) throw notFound('That item');
   const fixer = data.fixers.find((f) => f.userId === to.userId);
   if (!fixer)
-    throw new HttpError(400, 'invalid', 'Some fields need attention.', {
+    throw new HttpError(400, 'invalid', 'errors.invalid', {
       userId: 'That fixer has not said they are coming.',
     });
   const bench = data.benches.find((b) => b.id === to.benchId);
   if (!bench)
-    throw new HttpError(400, 'invalid', 'Some fields need attention.', {
+    throw new HttpError(400, 'invalid', 'errors.invalid', {
       benchId: 'That bench is not set out at this event.',
     });
   const startsAt =
