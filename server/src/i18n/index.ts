@@ -61,7 +61,7 @@ export function translate(lang: Language, keyOrText: string, values?: Values): s
 
 /** The request's language: the first supported one of its Accept-Language header, else English. */
 export const requestLanguage = (req: Pick<Request, 'headers'>): Language =>
-  pickLanguage(acceptLanguageTags(req.headers['accept-language']));
+  pickLanguage(acceptLanguageTags(req.headers?.['accept-language']));
 
 /** Gives each request its language, as res.locals.language, for routes and the error handler. */
 export const languageMiddleware: RequestHandler = (req, res, next) => {
