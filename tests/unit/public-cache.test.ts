@@ -74,4 +74,43 @@ describe('public read cache', () => {
     expect(await call(cache, produce)).toBe('{"n":1}');
     expect(calls).toBe(1);
   });
+
+  it('moves the shared counter after every write, and once for all the writes that finish during a move', async () => {
+    // Each move of the `read_generation` row waits until the test lets it end.
+    const moves: { startedAfter: number; end: () => void }[] = [];
+    let writes = 0;
+    const db = {
+      insert: () => ({
+        values: () => ({
+          onDuplicateKeyUpdate: () =>
+            new Promise<void>((end) => moves.push({ startedAfter: writes, end: () => end() })),
+        }),
+      }),
+    } as unknown as Db;
+    const cache = new PublicReadCache(db, { pollMs: 0, maxAgeMs: 60_000 });
+    const write = () => {
+      writes++;
+      return cache.written();
+    };
+    const first = write();
+    await Promise.resolve();
+    await Promise.resolve();
+    expect(moves).toHaveLength(1);
+    // A burst of 20 writes while the first move is under way: none may be left without a move that starts after it.
+    const burst = Array.from({ length: 20 }, write);
+    moves[0].end();
+    await first;
+    await new Promise((r) => setTimeout(r, 0));
+    expect(moves).toHaveLength(2);
+    expect(moves[1].startedAfter).toBe(21);
+    moves[1].end();
+    await Promise.all(burst);
+    expect(moves).toHaveLength(2);
+    // A write after everything settled starts its own move.
+    const last = write();
+    await new Promise((r) => setTimeout(r, 0));
+    expect(moves).toHaveLength(3);
+    moves[2].end();
+    await last;
+  });
 });

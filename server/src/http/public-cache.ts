@@ -29,6 +29,9 @@ export class PublicReadCache {
   private shared: number | null = null;
   private timer: NodeJS.Timeout | null = null;
   private polling: Promise<void> | null = null;
+  /** The move of the shared row under way, and the one queued behind it for writes that finished meanwhile. */
+  private moving: Promise<void> | null = null;
+  private queued: Promise<void> | null = null;
 
   constructor(
     private db: Db,
@@ -49,7 +52,7 @@ export class PublicReadCache {
   async stop() {
     if (this.timer) clearInterval(this.timer);
     this.timer = null;
-    await this.polling;
+    await Promise.all([this.polling, this.queued, this.moving]);
   }
 
   /** Reads the shared generation; a move means another process wrote. */
@@ -81,9 +84,26 @@ export class PublicReadCache {
     this.entries.clear();
   }
 
-  /** After a write in this process: empty the cache now, and tell the other processes. */
-  async written() {
+  /**
+   * After a write in this process: empty the cache now, and tell the other processes. Writes that finish while a
+   * move of the shared row is under way share one more move, started once that one has ended: each write is still
+   * followed by a move that starts after it, and a burst of bookings costs two statements, not one each (all of them
+   * would wait in turn on the same row).
+   */
+  written(): Promise<void> {
     this.clear();
+    this.queued ??= (async () => {
+      await this.moving;
+      this.queued = null;
+      const move = this.moveShared();
+      this.moving = move;
+      await move;
+      if (this.moving === move) this.moving = null;
+    })();
+    return this.queued;
+  }
+
+  private async moveShared() {
     for (let attempt = 0; attempt < 3; attempt++) {
       try {
         await this.db
