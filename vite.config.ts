@@ -11,11 +11,11 @@ import { PSEUDO_LANGUAGE, pseudoText } from './shared/i18n/pseudo.js';
 /**
  * The message catalogs for the browser: `virtual:mendery-catalogs` exports one loader per language, each a chunk of
  * its own with that language's messages precompiled (so Lingui's compiler never ships). The mail namespace is the
- * server's alone. The pseudo-locale is English run through pseudoText.
+ * server's alone, and so is categories: the API answers the seeded kinds of item by name in the reader's language. The pseudo-locale is English run through pseudoText.
  */
 function catalogs(): Plugin {
   const dir = path.resolve('locales');
-  const serverOnly = new Set(['mail']);
+  const serverOnly = new Set(['mail', 'categories']);
   const list = 'virtual:mendery-catalogs';
   const one = 'virtual:mendery-catalog/';
   const read = (lang: string) => {

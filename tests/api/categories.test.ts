@@ -72,3 +72,31 @@ describe('an admin editing a kind of item', () => {
     expect((await admin.send('PATCH', '/api/categories/999999', { repairMinutes: 30 })).status).toBe(404);
   });
 });
+
+describe('the kinds of item in the reader’s language', () => {
+  type Named = { slug: string; name: string; refusal: { reason: string; suggestion: string } | null };
+  const list = async (acceptLanguage: string) =>
+    new Agent(server.url, { 'accept-language': acceptLanguage }).get('/api/categories');
+  const bySlug = (rows: Named[], slug: string) => rows.find((c) => c.slug === slug)!;
+
+  it('names the seeded kinds and their refusal reasons in German and French, and says the answer varies by language', async () => {
+    const de = await list('de-AT,de;q=0.9');
+    expect(de.status).toBe(200);
+    expect(de.headers.get('vary') ?? '').toMatch(/accept-language/i);
+    // Everyday German and French names for the appliance, from memory (no outside table needed for a word).
+    expect(bySlug(de.json, 'kettle').name).toBe('Wasserkocher');
+    expect(bySlug(de.json, 'microwave').refusal!.reason).toMatch(/Hochspannungskondensator/);
+    const fr = await list('fr');
+    expect(bySlug(fr.json, 'bicycle').name).toBe('Vélo');
+    expect(bySlug(fr.json, 'gas-appliance').refusal!.suggestion).toMatch(/gaz/);
+    const en = await list('en-GB');
+    expect(bySlug(en.json, 'kettle').name).toBe('Kettle');
+  });
+
+  it('shows an admin’s own name for a kind as typed, in every language', async () => {
+    const iron = await categoryId(db.db, 'iron');
+    expect((await admin.send('PATCH', `/api/categories/${iron}`, { name: 'Steam iron' })).status).toBe(200);
+    expect(bySlug((await list('nl')).json, 'iron').name).toBe('Steam iron');
+    expect(bySlug((await list('nl')).json, 'vacuum-cleaner').name).toBe('Stofzuiger');
+  });
+});

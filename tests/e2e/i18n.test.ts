@@ -53,11 +53,15 @@ describe('the public pages in the visitor’s language', () => {
     const page = await context.newPage();
     await page.goto(`${app.server.url}/events`);
     await page.getByRole('heading', { name: 'Repair sessions', level: 1 }).waitFor();
+    await page.locator('option', { hasText: 'Kettle' }).waitFor({ state: 'attached' });
     const picker = page.getByLabel('Language');
     await picker.focus();
     await picker.selectOption('fr');
     await page.getByRole('heading', { name: 'Ateliers de réparation', level: 1 }).waitFor();
     expect(await page.getAttribute('html', 'lang')).toBe('fr');
+    // The kinds of item in the filter are read again, in French, without a reload.
+    await page.locator('option', { hasText: 'Bouilloire' }).waitFor({ state: 'attached' });
+    expect(await page.locator('option', { hasText: 'Kettle' }).count()).toBe(0);
     await page.reload();
     await page.getByRole('heading', { name: 'Ateliers de réparation', level: 1 }).waitFor();
     expect(await page.getAttribute('html', 'lang')).toBe('fr');
@@ -103,7 +107,8 @@ describe('the public pages in the visitor’s language', () => {
     await page.locator('label', { hasText: '4 frei' }).first().click();
     await page.getByLabel('Ihr Name').fill('Wiebke Sandhage');
     await page.getByLabel('E-Mail').fill('wiebke@example.org');
-    await page.getByLabel('Was ist es?').selectOption({ label: 'Kettle' });
+    // The kinds of item come from the API in the reader's language too.
+    await page.getByLabel('Was ist es?').selectOption({ label: 'Wasserkocher' });
     await page.getByLabel('Was ist kaputt?').fill('Schaltet nach wenigen Sekunden ab.');
     await page.getByLabel(/Ich akzeptiere die Hausregeln/).check();
     await page.getByRole('button', { name: 'Zeitfenster buchen' }).click();

@@ -3,6 +3,7 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { setupI18n, type I18n } from '@lingui/core';
 import type { RequestHandler, Request } from 'express';
+import { categoryTextKey, type CategoryTextField } from '../../../shared/i18n/category-text';
 import { compileCatalog, mergeNamespaces, type RawCatalog } from '../../../shared/i18n/catalog';
 import {
   acceptLanguageTags,
@@ -74,3 +75,9 @@ export const languageOf = (req: Request, locals?: Record<string, unknown>): Lang
   const l = locals?.language;
   return typeof l === 'string' && (LANGUAGES as readonly string[]).includes(l) ? (l as Language) : requestLanguage(req);
 };
+
+/** A kind of item's name or refusal text in `lang` while it is the seeded wording; an admin's own wording as typed. */
+export function categoryText(lang: Language, slug: string, field: CategoryTextField, stored: string): string {
+  const key = categoryTextKey(slug, field, stored);
+  return key ? translate(lang, key) : stored;
+}
