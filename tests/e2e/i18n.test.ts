@@ -45,6 +45,18 @@ describe('the public pages in the visitor’s language', () => {
     await page.getByText(day, { exact: false }).first().waitFor();
     expect(await page.getByText('Repair sessions').count()).toBe(0);
     await page.screenshot({ path: shot('i18n-events-nl'), fullPage: true });
+    // The month calendar too: Dutch month names on its buttons, Dutch weekday heads (CLDR nl: "ma", "di", …),
+    // weeks from Monday (CLDR's first day for the Netherlands).
+    await page.getByRole('button', { name: 'Kalender' }).click();
+    const next = new Date();
+    next.setDate(1);
+    next.setMonth(next.getMonth() + 1);
+    const month = new Intl.DateTimeFormat('nl', { month: 'long', year: 'numeric' }).format(next);
+    await page.getByRole('button', { name: `Volgende maand, ${month}` }).waitFor();
+    const heads = (await page.locator('.fc-col-header-cell').allTextContents()).map((h) => h.trim());
+    expect(heads[0]).toMatch(/^ma\.?$/);
+    expect(heads).toHaveLength(7);
+    await page.screenshot({ path: shot('i18n-calendar-nl'), fullPage: true });
     await context.close();
   });
 

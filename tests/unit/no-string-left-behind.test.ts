@@ -27,6 +27,8 @@ const CONVERTED = [
   'client/src/routes/home.tsx',
   'client/src/routes/bookings/manage.tsx',
   'client/src/features/bookings/components/link-problem.tsx',
+  'client/src/components/ui/month-calendar.tsx',
+  'client/src/components/ui/month-calendar-grid.tsx',
 ];
 const READ_PROPS = new Set(['aria-label', 'placeholder', 'title', 'alt', 'label', 'legend', 'lead', 'hint']);
 const WORDS = /\p{L}{2,}/u;

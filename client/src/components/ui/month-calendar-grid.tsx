@@ -1,14 +1,14 @@
 import FullCalendar from '@fullcalendar/react';
 import dayGridPlugin from '@fullcalendar/daygrid';
 import { useRef, useState, type ComponentProps, type ReactNode } from 'react';
+import { useLanguage, useT } from '../../lib/i18n';
 
-const monthName = new Intl.DateTimeFormat('en-GB', { month: 'long', year: 'numeric' });
-const shortMonth = new Intl.DateTimeFormat('en-GB', { month: 'long' });
 const addMonths = (d: Date, n: number) => new Date(d.getFullYear(), d.getMonth() + n, 1);
 const sameMonth = (a: Date, b: Date) => a.getFullYear() === b.getFullYear() && a.getMonth() === b.getMonth();
 
 /**
- * A month grid in Mendery's settings: weeks from Monday, 24-hour times, our own header (the month in words, the
+ * A month grid in Mendery's settings, in the reader's language: weeks from Monday (as CLDR has it for en-GB, nl, de
+ * and fr), 24-hour times, our own header (the month in words, the
  * months either side named on the buttons), soft day cells with a ringed date for today, and events as chips with a
  * coloured edge. On a phone a day is about 45 px wide, so a chip shows its time alone and the rest is read out.
  */
@@ -20,6 +20,11 @@ export interface MonthCalendarProps {
 }
 
 export default function MonthCalendarGrid({ events, detail, onOpen, today = false }: MonthCalendarProps) {
+  const t = useT();
+  const lang = useLanguage();
+  const locale = lang === 'en' ? 'en-GB' : lang;
+  const monthName = new Intl.DateTimeFormat(locale, { month: 'long', year: 'numeric' });
+  const shortMonth = new Intl.DateTimeFormat(locale, { month: 'long' });
   const calendar = useRef<FullCalendar>(null);
   const [month, setMonth] = useState(() => addMonths(new Date(), 0));
   const api = () => calendar.current?.getApi();
@@ -33,12 +38,15 @@ export default function MonthCalendarGrid({ events, detail, onOpen, today = fals
         </p>
         <div className="flex w-full gap-2 sm:w-auto">
           <MonthButton
-            label={`Previous month, ${monthName.format(addMonths(month, -1))}`}
+            label={t('common.calendar.previous', { month: monthName.format(addMonths(month, -1)) })}
             onClick={() => api()?.prev()}
           >
             <span aria-hidden="true">←</span> {shortMonth.format(addMonths(month, -1))}
           </MonthButton>
-          <MonthButton label={`Next month, ${monthName.format(addMonths(month, 1))}`} onClick={() => api()?.next()}>
+          <MonthButton
+            label={t('common.calendar.next', { month: monthName.format(addMonths(month, 1)) })}
+            onClick={() => api()?.next()}
+          >
             {shortMonth.format(addMonths(month, 1))} <span aria-hidden="true">→</span>
           </MonthButton>
         </div>
@@ -48,7 +56,7 @@ export default function MonthCalendarGrid({ events, detail, onOpen, today = fals
             onClick={() => api()?.today()}
             className="min-h-11 px-1 text-sm font-bold text-navy underline decoration-navy/40 underline-offset-4 hover:decoration-navy"
           >
-            Back to {shortMonth.format(now)}
+            {t('common.calendar.backTo', { month: shortMonth.format(now) })}
           </button>
         )}
       </div>
@@ -56,6 +64,7 @@ export default function MonthCalendarGrid({ events, detail, onOpen, today = fals
         ref={calendar}
         plugins={[dayGridPlugin]}
         initialView="dayGridMonth"
+        locale={locale}
         height="auto"
         firstDay={1}
         headerToolbar={false}
@@ -69,7 +78,7 @@ export default function MonthCalendarGrid({ events, detail, onOpen, today = fals
           arg.isToday ? (
             <>
               <span className="mendery-today-mark">{arg.dayNumberText}</span>
-              <span className="sr-only">, today</span>
+              <span className="sr-only">{t('common.calendar.today')}</span>
             </>
           ) : (
             arg.dayNumberText
@@ -78,7 +87,7 @@ export default function MonthCalendarGrid({ events, detail, onOpen, today = fals
         eventDisplay="block"
         dayMaxEvents={3}
         moreLinkText={(n) => `+${n}`}
-        moreLinkHint={(n) => `${n} more on this day`}
+        moreLinkHint={(n) => t('common.calendar.more', { count: n })}
         events={events}
         eventTimeFormat={{ hour: '2-digit', minute: '2-digit', hour12: false }}
         eventContent={(arg) => (

@@ -1,4 +1,5 @@
 import { lazy, Suspense } from 'react';
+import { useT } from '../../lib/i18n';
 import { Spinner } from './feedback';
 import type { MonthCalendarProps } from './month-calendar-grid';
 
@@ -7,8 +8,9 @@ const MonthCalendarGrid = lazy(() => import('./month-calendar-grid'));
 
 /** The month grid (./month-calendar-grid), fetched on first use. */
 export function MonthCalendar(props: MonthCalendarProps) {
+  const t = useT();
   return (
-    <Suspense fallback={<Spinner label="Loading the calendar…" />}>
+    <Suspense fallback={<Spinner label={t('common.calendar.loading')} />}>
       <MonthCalendarGrid {...props} />
     </Suspense>
   );
