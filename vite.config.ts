@@ -6,16 +6,17 @@ import { readdirSync, readFileSync } from 'node:fs';
 import path from 'node:path';
 import { compileCatalog, mergeNamespaces, type RawCatalog } from './shared/i18n/catalog.js';
 import { LANGUAGES } from './shared/i18n/languages.js';
+import { SERVER_ONLY_NAMESPACES } from './shared/i18n/namespaces.js';
 import { PSEUDO_LANGUAGE, pseudoText } from './shared/i18n/pseudo.js';
 
 /**
  * The message catalogs for the browser: `virtual:mendery-catalogs` exports one loader per language, each a chunk of
- * its own with that language's messages precompiled (so Lingui's compiler never ships). The mail namespace is the
- * server's alone, and so is categories: the API answers the seeded kinds of item by name in the reader's language. The pseudo-locale is English run through pseudoText.
+ * its own with that language's messages precompiled (so Lingui's compiler never ships). The server's own namespaces
+ * (shared/i18n/namespaces.ts) stay out. The pseudo-locale is English run through pseudoText.
  */
 function catalogs(): Plugin {
   const dir = path.resolve('locales');
-  const serverOnly = new Set(['mail', 'categories']);
+  const serverOnly = new Set(SERVER_ONLY_NAMESPACES);
   const list = 'virtual:mendery-catalogs';
   const one = 'virtual:mendery-catalog/';
   const read = (lang: string) => {

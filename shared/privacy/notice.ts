@@ -12,44 +12,27 @@ export interface PrivacyNotice {
   sections: { heading: string; paragraphs: string[] }[];
 }
 
-const months = (n: number) => (n === 1 ? 'one month' : `${n} months`);
+/** A catalog lookup: the message of `key` in the reader's language, with its values filled in. */
+export type Translate = (key: string, values?: Record<string, unknown>) => string;
 
-export function privacyNotice(g: PrivacyNoticeInput): PrivacyNotice {
-  const ask = g.contactEmail
-    ? `Write to ${g.contactEmail}, or ask an organiser at a session.`
-    : 'Ask an organiser at one of our sessions.';
+/** The notice in the reader's language; the words are the `privacy` catalog's (locales/<language>/privacy.json). */
+export function privacyNotice(g: PrivacyNoticeInput, t: Translate): PrivacyNotice {
+  const section = (part: string, ...paragraphs: string[]) => ({ heading: t(`privacy.${part}.heading`), paragraphs });
   return {
     groupName: g.groupName,
     retentionMonths: g.retentionMonths,
     contactEmail: g.contactEmail,
     sections: [
-      {
-        heading: 'What we keep',
-        paragraphs: [
-          'Your name, your e-mail address and, if you give it, a phone number.',
-          'What you bring: its kind, brand, model and age, what is wrong with it, any photos you add, and how the repair went.',
-        ],
-      },
-      {
-        heading: 'Why',
-        paragraphs: [
-          'To hold your place at a session, send you the confirmation, a reminder and changes, and tell you if a part is needed.',
-          'Repair results without your name are counted in our figures of what was mended and kept out of the bin.',
-        ],
-      },
-      {
-        heading: 'How long',
-        paragraphs: [
-          `${months(g.retentionMonths)} after your session, your name, e-mail address, phone number and photos are erased, and names, addresses and numbers are taken out of what you wrote about the fault. The repair record stays, without anything that points to you.`,
-        ],
-      },
-      {
-        heading: 'Your choices',
-        paragraphs: [
-          'The link in your confirmation mail lets you download everything we hold about your booking, or erase your details at any time. Mail still waiting to go to you is then not sent.',
-        ],
-      },
-      { heading: 'Who to contact', paragraphs: [`${g.groupName} looks after your details. ${ask}`] },
+      section('keep', t('privacy.keep.contact'), t('privacy.keep.item')),
+      section('why', t('privacy.why.booking'), t('privacy.why.figures')),
+      section('howLong', t('privacy.howLong.text', { months: g.retentionMonths })),
+      section('choices', t('privacy.choices.text')),
+      section(
+        'contact',
+        g.contactEmail
+          ? t('privacy.contact.withEmail', { group: g.groupName, email: g.contactEmail })
+          : t('privacy.contact.noEmail', { group: g.groupName }),
+      ),
     ],
   };
 }

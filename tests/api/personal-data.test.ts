@@ -257,4 +257,27 @@ describe('the privacy page', () => {
     });
     expect(bad.status).toBe(400);
   });
+
+  it('is written in the reader’s language, with the plural of each language (CLDR plural rules: one/other)', async () => {
+    const notice = async (lang: string) => {
+      const r = await new Agent(server.url, { 'accept-language': lang }).get(
+        `/api/public/groups/${demoGroupId}/privacy`,
+      );
+      expect(r.status).toBe(200);
+      expect(r.headers.get('vary') ?? '').toMatch(/accept-language/i);
+      return r.json as { sections: { heading: string; paragraphs: string[] }[] };
+    };
+    const set = (retentionMonths: number) =>
+      as.organiser.send('PUT', `/api/groups/${demoGroupId}/settings`, { retentionMonths });
+    expect((await set(18)).status).toBe(200);
+    const nl = await notice('nl-BE');
+    expect(nl.sections[0].heading).toBe('Wat we bewaren');
+    expect(JSON.stringify(nl)).toContain('18 maanden na je reparatiemoment');
+    const de = await notice('de');
+    expect(JSON.stringify(de)).toContain('18 Monate nach Ihrem Termin');
+    expect(de.sections[4].paragraphs[0]).toContain('privacy@kestlebridge.example.org');
+    expect((await set(1)).status).toBe(200);
+    expect(JSON.stringify(await notice('fr'))).toContain('Un mois après votre atelier');
+    expect(JSON.stringify(await notice('en'))).toContain('One month after your session');
+  });
 });

@@ -14,12 +14,13 @@ let browser: Browser;
 let eventId: number;
 let startsAt: Date;
 let tz: string;
+let groupId: number;
 
 beforeAll(async () => {
   app = await startDemoApp();
   browser = await launchBrowser();
   const db = app.db.db;
-  const groupId = await makeGroup(db, `Taalgroep ${Date.now()}`);
+  groupId = await makeGroup(db, `Taalgroep ${Date.now()}`);
   [{ timeZone: tz }] = await db.select().from(repairGroups).where(eq(repairGroups.id, groupId));
   ({ eventId } = await makeEvent(db, groupId, { capacity: 4, slotCount: 4 }));
   [{ startsAt }] = await db.select().from(events).where(eq(events.id, eventId));
@@ -100,6 +101,25 @@ describe('the public pages in the visitor’s language', () => {
     await page.getByRole('button', { name: /B[öo]+k m[ýy]/ }).waitFor();
     expect(await widthOf(page)).toBeLessThanOrEqual(PHONE.width);
     await page.screenshot({ path: shot('i18n-book-pseudo'), fullPage: true });
+    await page.goto(`${app.server.url}/safety?lang=xx-pseudo`);
+    await page.getByRole('heading', { level: 2 }).first().waitFor();
+    expect(await page.getByRole('heading', { level: 2 }).count()).toBe(7);
+    expect(await widthOf(page)).toBeLessThanOrEqual(PHONE.width);
+    await context.close();
+  });
+
+  it('the safety page and a group’s privacy page in German', async () => {
+    const context = await browser.newContext({ viewport: PHONE, locale: 'de-DE' });
+    const page = await context.newPage();
+    await page.goto(`${app.server.url}/safety`);
+    await page.getByRole('heading', { name: 'Sicherheit an der Werkbank', level: 1 }).waitFor();
+    // The capacitor caution keeps its figure (about 300 V DC on a switch-mode supply's capacitors; trade practice).
+    await page.getByText(/rund 300 V Gleichspannung/).waitFor();
+    await page.screenshot({ path: shot('i18n-safety-de'), fullPage: true });
+    await page.goto(`${app.server.url}/groups/${groupId}/privacy`);
+    await page.getByRole('heading', { name: /^Ihre Daten bei /, level: 1 }).waitFor();
+    await page.getByRole('heading', { name: 'Was wir speichern', level: 2 }).waitFor();
+    expect(await widthOf(page)).toBeLessThanOrEqual(PHONE.width);
     await context.close();
   });
 

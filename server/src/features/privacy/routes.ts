@@ -1,6 +1,7 @@
 import { Router, type Request } from 'express';
 import { normaliseReference } from '../../../../shared/booking/reference';
 import { privacyNotice } from '../../../../shared/privacy/notice';
+import { languageOf, translate } from '../../i18n';
 import type { AppContext } from '../../context';
 import { requireUser } from '../../auth/guards';
 import { manageTokenOf } from '../../core/links';
@@ -50,7 +51,13 @@ export function privacyRoutes(ctx: AppContext) {
   r.get('/public/groups/:groupId/privacy', async (req, res) => {
     const g = await groupForNotice(ctx.database.db, paramId(req, 'groupId'));
     if (!g) throw notFound('That group');
-    res.json(privacyNotice({ groupName: g.name, retentionMonths: g.retentionMonths, contactEmail: g.contactEmail }));
+    const lang = languageOf(req, res.locals);
+    res.vary('Accept-Language');
+    res.json(
+      privacyNotice({ groupName: g.name, retentionMonths: g.retentionMonths, contactEmail: g.contactEmail }, (key, v) =>
+        translate(lang, key, v),
+      ),
+    );
   });
   return r;
 }
