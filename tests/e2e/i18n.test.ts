@@ -108,6 +108,33 @@ describe('the public pages in the visitor’s language', () => {
     await context.close();
   });
 
+  it('the piece for other websites in German: its sentence, German number forms, and still within 360 × 260', async () => {
+    const [{ id: demoGroup }] = await app.db.db
+      .select({ id: repairGroups.id })
+      .from(repairGroups)
+      .where(eq(repairGroups.slug, 'kestlebridge-menders'));
+    const context = await browser.newContext({ viewport: { width: 360, height: 260 }, locale: 'de-DE' });
+    const page = await context.newPage();
+    const d = await (await page.request.get(`${app.server.url}/api/public/impact?groupId=${demoGroup}`)).json();
+    await page.goto(`${app.server.url}/embed/impact?group=${demoGroup}`);
+    await page.getByTestId('widget-fixed').waitFor();
+    const sentence = await page.getByTestId('widget-fixed').locator('xpath=ancestor::p[1]').innerText();
+    expect(sentence).toMatch(/^Bisher .* repariert: So blieben .* kg aus dem Müll/);
+    // German writes a decimal comma and groups thousands with a dot (CLDR de number symbols).
+    expect(d.kgDiverted).toBeGreaterThan(0);
+    expect(await page.getByTestId('widget-kg').innerText()).toBe(
+      new Intl.NumberFormat('de', { minimumFractionDigits: 1, maximumFractionDigits: 1 }).format(d.kgDiverted),
+    );
+    expect(await page.getByTestId('widget-kg').innerText()).toMatch(/,\d$/);
+    await page.getByRole('link', { name: /Gezählt mit Mendery/ }).waitFor();
+    const fits = await page
+      .getByTestId('impact-widget')
+      .evaluate((n) => n.scrollHeight <= n.clientHeight && n.scrollWidth <= n.clientWidth);
+    expect(fits).toBe(true);
+    await page.screenshot({ path: shot('i18n-widget-de') });
+    await context.close();
+  });
+
   it('the safety page and a group’s privacy page in German', async () => {
     const context = await browser.newContext({ viewport: PHONE, locale: 'de-DE' });
     const page = await context.newPage();

@@ -33,6 +33,7 @@ const CONVERTED = [
   'client/src/routes/safety.tsx',
   'client/src/routes/not-found.tsx',
   'client/src/routes/privacy/group.tsx',
+  'client/src/routes/impact/embed.tsx',
 ];
 const READ_PROPS = new Set(['aria-label', 'placeholder', 'title', 'alt', 'label', 'legend', 'lead', 'hint']);
 const WORDS = /\p{L}{2,}/u;
@@ -82,9 +83,9 @@ function strayStrings(source: string, file = 'file.tsx'): string[] {
   return found;
 }
 
-/** The catalog keys a file names as literals in t('…') or tr('…'), and the prefixes of keys built with `${}`. */
+/** The catalog keys a file names as literals in t('…'), tr('…') or trParts('…', …), and the prefixes of keys built with `${}`. */
 function keysNamed(source: string): { keys: string[]; prefixes: string[] } {
-  const keys = [...source.matchAll(/\b(?:t|tr)\(\s*'([a-z][\w.-]*)'/g)].map((m) => m[1]);
+  const keys = [...source.matchAll(/\b(?:t|tr|trParts)\(\s*'([a-z][\w.-]*)'/g)].map((m) => m[1]);
   const prefixes = [...source.matchAll(/\b(?:t|tr)\(\s*`([a-z][\w.-]*)\$\{/g)].map((m) => m[1]);
   return { keys, prefixes };
 }

@@ -1,5 +1,5 @@
 import type { I18n } from '@lingui/core';
-import { useSyncExternalStore } from 'react';
+import { createElement, Fragment, useSyncExternalStore, type ReactNode } from 'react';
 import { catalogs } from 'virtual:mendery-catalogs';
 import { DEFAULT_LANGUAGE, isLanguage, pickLanguage, type Language } from '../../../shared/i18n/languages';
 import { PSEUDO_LANGUAGE } from '../../../shared/i18n/pseudo';
@@ -82,4 +82,17 @@ export function useT(): (key: string, values?: Values) => string {
 export function useLanguage(): Language {
   const lang = useSyncExternalStore(subscribe, locale);
   return isLanguage(lang) ? lang : DEFAULT_LANGUAGE;
+}
+
+const MARK = '\u0000';
+
+/**
+ * A message with elements in it (a figure in bold, a subscript): each name in `parts` is a placeholder of the message
+ * that is rendered as that element, in the place the language puts it. Other values fill in as text.
+ */
+export function trParts(key: string, parts: Record<string, ReactNode>, values?: Values): ReactNode[] {
+  const marks = Object.fromEntries(Object.keys(parts).map((name) => [name, `${MARK}${name}${MARK}`]));
+  return tr(key, { ...values, ...marks })
+    .split(MARK)
+    .map((piece, i) => (i % 2 ? createElement(Fragment, { key: i }, parts[piece]) : piece));
 }

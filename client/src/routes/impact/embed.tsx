@@ -3,7 +3,8 @@ import { useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { paths } from '../../config/paths';
 import { publicImpactQuery } from '../../features/impact/api/get-public-impact';
 import { queryClient } from '../../lib/query-client';
-import { oneDp, positiveInt, whole } from '../../features/impact/components/display';
+import { CO2E, positiveInt } from '../../features/impact/components/display';
+import { trParts, useLanguage, useT } from '../../lib/i18n';
 import { Quilt } from '../../features/impact/components/impact-story';
 
 /* The host page decides the frame; nothing of the app's own page background or scrolling may show inside it. */
@@ -27,8 +28,12 @@ export function ImpactWidgetPage() {
   const [params] = useSearchParams();
   const groupId = positiveInt(params.get('group'));
   const impact = useQuery(publicImpactQuery(groupId));
+  const t = useT();
+  const lang = useLanguage();
+  const whole = new Intl.NumberFormat(lang);
+  const oneDp = new Intl.NumberFormat(lang, { minimumFractionDigits: 1, maximumFractionDigits: 1 });
   const d = impact.data;
-  const name = d?.group ? d.group.name : 'All groups on Mendery';
+  const name = d?.group ? d.group.name : t('impact.widget.allGroups');
   const methodLink = (
     <a
       href={paths.publicImpact(groupId)}
@@ -36,25 +41,26 @@ export function ImpactWidgetPage() {
       rel="noopener"
       className="font-semibold text-navy underline decoration-navy/30 hover:decoration-navy"
     >
-      Counted with Mendery · method<span className="sr-only"> (opens in a new tab)</span>
+      {t('impact.widget.method')}
+      <span className="sr-only">{t('impact.widget.newTab')}</span>
     </a>
   );
 
   return (
     <div className="box-border h-dvh max-h-dvh w-full overflow-hidden p-1 font-sans text-ink antialiased">
       <style>{FRAME_CSS}</style>
-      <title>{`Repairs · ${name}`}</title>
+      <title>{t('impact.widget.title', { name })}</title>
       <article
         data-testid="impact-widget"
         className="box-border flex h-full max-h-[260px] flex-col overflow-hidden rounded-xl bg-white px-3.5 py-3 ring-1 ring-ink/10"
       >
         {impact.isPending ? (
           <p role="status" className="m-auto text-sm text-ink-soft">
-            Loading the figures…
+            {t('impact.widget.loading')}
           </p>
         ) : !d ? (
           <div className="m-auto text-center text-sm">
-            <p className="font-bold text-navy">The figures are not available just now.</p>
+            <p className="font-bold text-navy">{t('impact.widget.unavailable')}</p>
             <p className="mt-1">{methodLink}</p>
           </div>
         ) : (
@@ -64,14 +70,21 @@ export function ImpactWidgetPage() {
                 {name}
               </h1>
               <p className="truncate text-xs text-ink-soft">
-                Repairs at community sessions{d.group?.town ? ` in ${d.group.town}` : ''}
+                {d.group?.town ? t('impact.widget.leadIn', { town: d.group.town }) : t('impact.widget.lead')}
               </p>
             </header>
 
             <p className="mt-2 text-[15px] leading-snug">
-              <Figure value={whole.format(d.fixed)} testId="widget-fixed" /> things mended so far, keeping{' '}
-              <Figure value={oneDp.format(d.kgDiverted)} testId="widget-kg" /> kg out of the bin and about{' '}
-              <Figure value={oneDp.format(d.co2eKg)} testId="widget-co2e" /> kg CO<sub>2</sub>e out of the air.
+              {trParts(
+                'impact.widget.sentence',
+                {
+                  fixed: <Figure value={whole.format(d.fixed)} testId="widget-fixed" />,
+                  kg: <Figure value={oneDp.format(d.kgDiverted)} testId="widget-kg" />,
+                  co2e: <Figure value={oneDp.format(d.co2eKg)} testId="widget-co2e" />,
+                  co2eUnit: CO2E,
+                },
+                { count: d.fixed },
+              )}
             </p>
 
             <div className="mt-2 min-h-0 flex-1">
@@ -79,12 +92,11 @@ export function ImpactWidgetPage() {
                 <figure className="flex items-center gap-3">
                   <Quilt d={d} columns={5} className="h-[76px] w-auto shrink-0" />
                   <figcaption className="text-xs leading-snug text-ink-soft">
-                    {whole.format(d.items)} items brought in; each patch is a twentieth of them, stitched ones went home
-                    fixed.
+                    {t('impact.widget.quilt', { items: whole.format(d.items) })}
                   </figcaption>
                 </figure>
               ) : (
-                <p className="text-xs text-ink-soft">No repairs counted yet: come to a session!</p>
+                <p className="text-xs text-ink-soft">{t('impact.widget.empty')}</p>
               )}
             </div>
 
