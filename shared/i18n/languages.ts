@@ -17,6 +17,10 @@ export const LANGUAGE_NAMES: Record<Language, string> = {
 export const isLanguage = (v: unknown): v is Language =>
   typeof v === 'string' && (LANGUAGES as readonly string[]).includes(v);
 
+/** A stored language as one we speak (a row written before languages, or a language since dropped, reads `fallback`). */
+export const asLanguage = (v: unknown, fallback: Language = DEFAULT_LANGUAGE): Language =>
+  isLanguage(v) ? v : fallback;
+
 /** The supported language of one BCP 47 tag ('de-AT' → 'de', 'pt-BR' → undefined). */
 export function languageOfTag(tag: string | null | undefined): Language | undefined {
   const primary = tag?.trim().split(/[-_]/)[0]?.toLowerCase();

@@ -1,4 +1,6 @@
 import type { OutgoingMail } from './transport';
+import { translate } from '../i18n';
+import { DEFAULT_LANGUAGE, type Language } from '../../../shared/i18n/languages';
 
 const escape = (s: string) =>
   s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
@@ -9,11 +11,14 @@ interface Block {
   /** An inline image sent as an attachment with this content id (a booking's QR code). */
   image?: { cid: string; alt: string };
   footnote?: string;
+  /** The reader's language for the mail's own lines (the button's fallback address, the signature); English if none. */
+  language?: Language;
 }
 
 /** Every Mendery mail: plain paragraphs, at most one button, the same text part. */
 export function composeMail(to: string, subject: string, block: Block): OutgoingMail {
-  const html = `<!doctype html><html><body style="margin:0;background:#f6f1ea;font-family:Nunito,Segoe UI,Arial,sans-serif;color:#1d2a3a">
+  const lang = block.language ?? DEFAULT_LANGUAGE;
+  const html = `<!doctype html><html lang="${lang}"><body style="margin:0;background:#f6f1ea;font-family:Nunito,Segoe UI,Arial,sans-serif;color:#1d2a3a">
 <table role="presentation" width="100%" cellpadding="0" cellspacing="0"><tr><td align="center" style="padding:24px">
 <table role="presentation" width="560" cellpadding="0" cellspacing="0" style="background:#ffffff;border-radius:12px;padding:28px">
 <tr><td style="font-size:22px;font-weight:800;color:#23395d;padding-bottom:12px">Mendery</td></tr>
@@ -22,7 +27,7 @@ ${block.image ? `<tr><td style="padding:12px 0"><img src="cid:${escape(block.ima
 ${
   block.action
     ? `<tr><td style="padding:18px 0"><a href="${escape(block.action.url)}" style="background:#b8612f;color:#ffffff;text-decoration:none;font-weight:700;padding:12px 20px;border-radius:8px;display:inline-block">${escape(block.action.label)}</a></td></tr>
-<tr><td style="font-size:13px;color:#56606d">If the button does not work, open this address: ${escape(block.action.url)}</td></tr>`
+<tr><td style="font-size:13px;color:#56606d">${escape(translate(lang, 'mail.buttonFallback', { url: block.action.url }))}</td></tr>`
     : ''
 }
 ${block.footnote ? `<tr><td style="font-size:13px;color:#56606d;padding-top:16px">${escape(block.footnote)}</td></tr>` : ''}
@@ -31,7 +36,7 @@ ${block.footnote ? `<tr><td style="font-size:13px;color:#56606d;padding-top:16px
     ...block.paragraphs,
     ...(block.action ? [`${block.action.label}: ${block.action.url}`] : []),
     ...(block.footnote ? [block.footnote] : []),
-    '— Mendery',
+    translate(lang, 'mail.signature'),
   ].join('\n\n');
   return { to, subject, html, text };
 }

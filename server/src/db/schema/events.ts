@@ -227,6 +227,8 @@ export const waitlistEntries = mysqlTable(
           battery?: boolean;
           hazards: Hazard[];
         }[];
+        /** The visitor's language when joining (older entries have none: the group's default then). */
+        language?: string;
       }>()
       .notNull(),
     places: int('places').notNull(),

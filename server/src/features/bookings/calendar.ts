@@ -26,7 +26,7 @@ export async function bookingCalendar(ctx: AppContext, bookingId: number) {
       slotEndsAt: row.slot.endsAt,
       venue: row.venue,
       manageUrl: manageUrl(ctx, b.reference, manageTokenFor(ctx, b.reference, b.manageTokenVersion)),
-      itemNames: labelsOf(await itemsOf(db, bookingId)),
+      itemNames: labelsOf(await itemsOf(db, bookingId), b.language),
     },
     ctx.env.publicUrl,
     new Date(),

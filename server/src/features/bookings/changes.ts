@@ -37,7 +37,7 @@ export async function cancelBooking(ctx: AppContext, bookingId: number) {
       if (b.visitorEmail)
         await enqueueMail(
           tx,
-          cancelledMail(facts(ctx, row, { ...b, visitorEmail: b.visitorEmail }, labelsOf(items), null)),
+          cancelledMail(facts(ctx, row, { ...b, visitorEmail: b.visitorEmail }, labelsOf(items, b.language), null)),
         );
     }),
   );
@@ -67,7 +67,7 @@ export async function moveBooking(ctx: AppContext, bookingId: number, slotId: nu
       if (b.visitorEmail)
         await enqueueMail(
           tx,
-          movedMail(facts(ctx, row, { ...b, visitorEmail: b.visitorEmail }, labelsOf(items), manageToken)),
+          movedMail(facts(ctx, row, { ...b, visitorEmail: b.visitorEmail }, labelsOf(items, b.language), manageToken)),
         );
     }),
   );

@@ -34,7 +34,7 @@ export async function mailFreshLinks(ctx: AppContext, email: string): Promise<nu
         const token = manageTokenFor(ctx, b.reference, version);
         await setManageToken(tx, b.id, version, sha256(token));
         const row = await slotWithContextById(tx, b.slotId);
-        const items = labelsOf(await itemsOf(tx, b.id));
+        const items = labelsOf(await itemsOf(tx, b.id), b.language);
         await enqueueMail(tx, freshLinkMail(facts(ctx, row, { ...b, visitorEmail: b.visitorEmail! }, items, token)));
       }),
     );

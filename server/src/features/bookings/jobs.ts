@@ -1,13 +1,14 @@
 import type { AppContext } from '../../context';
 import { enqueueMail } from '../../mail/outbox';
+import { asLanguage } from '../../../../shared/i18n/languages';
 import type { Job } from '../../core/feature';
 import { manageTokenFor, manageUrl } from '../../core/links';
 import { offerFreedPlaces } from './waitlist';
 import { reminderMail } from './mails';
+import { labelsOf } from './write';
 import { dropIdempotencyKeysBefore, dueReminders, expiredOffers, expireOffer, markReminded } from './queries/jobs';
 import { IDEMPOTENCY_HOURS } from './service';
 import { itemsOf } from './queries/bookings';
-import { itemLabel } from '../../../../shared/item-label';
 
 /** Offers not taken in time release their places and pass them to the next in line. */
 export async function expireOffers(ctx: AppContext): Promise<number> {
@@ -32,6 +33,7 @@ export async function sendReminders(ctx: AppContext): Promise<number> {
       await enqueueMail(
         tx,
         reminderMail({
+          language: asLanguage(r.booking.language, asLanguage(r.group.defaultLanguage)),
           reference: r.booking.reference,
           visitorName: r.booking.visitorName,
           visitorEmail: r.booking.visitorEmail!,
@@ -41,7 +43,7 @@ export async function sendReminders(ctx: AppContext): Promise<number> {
           slotStartsAt: r.slot.startsAt,
           slotEndsAt: r.slot.endsAt,
           venue: r.venue,
-          items: items.map((i) => itemLabel({ categoryName: i.name, brand: i.brand, model: i.model })),
+          items: labelsOf(items, r.booking.language),
           manageUrl: manageUrl(
             ctx,
             r.booking.reference,

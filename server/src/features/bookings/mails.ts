@@ -1,5 +1,7 @@
 import QRCode from 'qrcode';
-import { DISCLAIMER, formatDay, formatTimeRange, WHAT_TO_BRING } from '../../../../shared/format';
+import { formatDay, formatTime, formatTimeRange } from '../../../../shared/format';
+import type { Language } from '../../../../shared/i18n/languages';
+import { translate } from '../../i18n';
 import { composeMail } from '../../mail/templates';
 
 export interface BookingMailFacts {
@@ -14,6 +16,8 @@ export interface BookingMailFacts {
   venue: { name: string; address: string; town: string };
   items: string[];
   manageUrl: string;
+  /** The booking's language: every mail about it is in this language, whoever sends it. */
+  language: Language;
 }
 
 /** What the QR code on a booking holds: the reception desk reads the reference from it. */
@@ -21,89 +25,107 @@ export const bookingQrText = (publicUrl: string, reference: string) => `${public
 
 export const qrDataUrl = (text: string) => QRCode.toDataURL(text, { errorCorrectionLevel: 'M', margin: 2, width: 240 });
 
-const when = (f: BookingMailFacts) =>
-  `${formatDay(f.slotStartsAt, f.timeZone)}, ${formatTimeRange(f.slotStartsAt, f.slotEndsAt, f.timeZone)}`;
-const where = (f: BookingMailFacts) => `${f.venue.name}, ${f.venue.address}, ${f.venue.town}`;
+type Facts = Omit<BookingMailFacts, 'reference' | 'manageUrl'>;
+/** A line of the mail catalog (locales/<language>/mail.json) in the booking's language. */
+const m = (f: Pick<Facts, 'language'>, key: string, values?: Record<string, unknown>) =>
+  translate(f.language, `mail.${key}`, values);
+const when = (f: Facts) =>
+  `${formatDay(f.slotStartsAt, f.timeZone, f.language)}, ${formatTimeRange(f.slotStartsAt, f.slotEndsAt, f.timeZone, f.language)}`;
+const where = (f: Facts) => `${f.venue.name}, ${f.venue.address}, ${f.venue.town}`;
+const hello = (f: Facts) => m(f, 'hello', { name: f.visitorName });
 
 export function confirmationMail(f: BookingMailFacts, qrText: string) {
-  const mail = composeMail(f.visitorEmail, `Booked: ${f.eventTitle} — ${f.reference}`, {
+  const v = { event: f.eventTitle, group: f.groupName, reference: f.reference };
+  const mail = composeMail(f.visitorEmail, m(f, 'confirmation.subject', v), {
     paragraphs: [
-      `Hello ${f.visitorName},`,
-      `your place at ${f.eventTitle} (${f.groupName}) is booked. Your booking reference is ${f.reference}. At the reception desk, show the reference or your QR code.`,
-      'Your QR code is always on your booking page (the link below). It is in this mail as a picture too, if your mail program shows pictures.',
-      `When: ${when(f)}.`,
-      `Where: ${where(f)}.`,
-      `You are bringing: ${f.items.join('; ')}.`,
-      `Please bring: ${WHAT_TO_BRING.map((w, i) => (i ? w[0].toLowerCase() + w.slice(1) : w).replace(/\.$/, '')).join('; ')}.`,
-      ...DISCLAIMER,
+      hello(f),
+      m(f, 'confirmation.booked', v),
+      m(f, 'confirmation.qr'),
+      m(f, 'when', { when: when(f) }),
+      m(f, 'where', { where: where(f) }),
+      m(f, 'bringing', { items: f.items.join('; ') }),
+      m(f, 'pleaseBring'),
+      m(f, 'disclaimer.guarantee'),
+      m(f, 'disclaimer.owner'),
+      m(f, 'disclaimer.safety'),
     ],
-    image: { cid: 'booking-qr', alt: `Booking ${f.reference}` },
-    action: { label: 'My booking page: QR code, move or cancel', url: f.manageUrl },
-    footnote: 'Keep this mail: the link is the only way to change the booking without calling the group.',
+    image: { cid: 'booking-qr', alt: m(f, 'confirmation.qrAlt', v) },
+    action: { label: m(f, 'bookingPage'), url: f.manageUrl },
+    footnote: m(f, 'confirmation.footnote'),
+    language: f.language,
   });
   mail.attachments = [{ filename: `booking-${f.reference}.png`, cid: 'booking-qr', contentType: 'image/png', qrText }];
   return mail;
 }
 
 export const reminderMail = (f: BookingMailFacts) =>
-  composeMail(f.visitorEmail, `Tomorrow: ${f.eventTitle} — ${f.reference}`, {
+  composeMail(f.visitorEmail, m(f, 'reminder.subject', { event: f.eventTitle, reference: f.reference }), {
     paragraphs: [
-      `Hello ${f.visitorName},`,
-      `a reminder of your repair slot: ${when(f)} at ${where(f)}.`,
-      `You are bringing: ${f.items.join('; ')}.`,
-      'If you cannot come, please cancel so someone on the waiting list can have the place.',
+      hello(f),
+      m(f, 'reminder.text', { when: when(f), where: where(f) }),
+      m(f, 'bringing', { items: f.items.join('; ') }),
+      m(f, 'reminder.cancelPlease'),
     ],
-    action: { label: 'View or cancel my booking', url: f.manageUrl },
+    action: { label: m(f, 'reminder.action'), url: f.manageUrl },
+    language: f.language,
   });
 
 export const cancelledMail = (f: BookingMailFacts) =>
-  composeMail(f.visitorEmail, `Cancelled: your booking ${f.reference}`, {
-    paragraphs: [
-      `Hello ${f.visitorName},`,
-      `your booking ${f.reference} for ${f.eventTitle} (${when(f)}) is cancelled. Thank you for letting us know; the place goes to someone else.`,
-    ],
+  composeMail(f.visitorEmail, m(f, 'cancelled.subject', { reference: f.reference }), {
+    paragraphs: [hello(f), m(f, 'cancelled.text', { reference: f.reference, event: f.eventTitle, when: when(f) })],
+    language: f.language,
   });
 
 export const movedMail = (f: BookingMailFacts) =>
   composeMail(
     f.visitorEmail,
-    `New time for ${f.reference}: ${formatTimeRange(f.slotStartsAt, f.slotEndsAt, f.timeZone)}`,
+    m(f, 'moved.subject', {
+      reference: f.reference,
+      time: formatTimeRange(f.slotStartsAt, f.slotEndsAt, f.timeZone, f.language),
+    }),
     {
-      paragraphs: [
-        `Hello ${f.visitorName},`,
-        `your booking ${f.reference} now has a new time: ${when(f)} at ${where(f)}.`,
-      ],
-      action: { label: 'View my booking', url: f.manageUrl },
+      paragraphs: [hello(f), m(f, 'moved.text', { reference: f.reference, when: when(f), where: where(f) })],
+      action: { label: m(f, 'moved.action'), url: f.manageUrl },
+      language: f.language,
     },
   );
 
 /** A fresh manage link asked for on the site; the links mailed before for this booking no longer work. */
 export const freshLinkMail = (f: BookingMailFacts) =>
-  composeMail(f.visitorEmail, `Your booking link: ${f.eventTitle} — ${f.reference}`, {
+  composeMail(f.visitorEmail, m(f, 'freshLink.subject', { event: f.eventTitle, reference: f.reference }), {
     paragraphs: [
-      `Hello ${f.visitorName},`,
-      `someone asked on the Mendery site for a fresh link to your booking ${f.reference}: ${f.eventTitle} (${f.groupName}), ${when(f)} at ${where(f)}.`,
-      'The links we mailed you before for this booking no longer work; use the one below.',
+      hello(f),
+      m(f, 'freshLink.text', {
+        reference: f.reference,
+        event: f.eventTitle,
+        group: f.groupName,
+        when: when(f),
+        where: where(f),
+      }),
+      m(f, 'freshLink.old'),
     ],
-    action: { label: 'My booking page: QR code, move or cancel', url: f.manageUrl },
-    footnote: 'If you did not ask for this, you need do nothing: only this mailbox has the new link.',
+    action: { label: m(f, 'bookingPage'), url: f.manageUrl },
+    footnote: m(f, 'freshLink.footnote'),
+    language: f.language,
   });
 
-export const waitlistJoinedMail = (f: Omit<BookingMailFacts, 'reference' | 'manageUrl'>, position: number) =>
-  composeMail(f.visitorEmail, `Waiting list: ${f.eventTitle}`, {
-    paragraphs: [
-      `Hello ${f.visitorName},`,
-      `the time you chose (${when({ ...f, reference: '', manageUrl: '' })}) is full, so you are number ${position} on its waiting list.`,
-      'If a place frees up we mail you a link to take it. The offer lasts a limited time, so keep an eye on your mail.',
-    ],
+export const waitlistJoinedMail = (f: Facts, position: number) =>
+  composeMail(f.visitorEmail, m(f, 'waitlist.subject', { event: f.eventTitle }), {
+    paragraphs: [hello(f), m(f, 'waitlist.text', { when: when(f), position }), m(f, 'waitlist.offerLater')],
+    language: f.language,
   });
 
-export const offerMail = (f: Omit<BookingMailFacts, 'reference' | 'manageUrl'>, claimUrl: string, expiresAt: Date) =>
-  composeMail(f.visitorEmail, `A place is free: ${f.eventTitle}`, {
+export const offerMail = (f: Facts, claimUrl: string, expiresAt: Date) =>
+  composeMail(f.visitorEmail, m(f, 'offer.subject', { event: f.eventTitle }), {
     paragraphs: [
-      `Hello ${f.visitorName},`,
-      `a place has come free at ${f.eventTitle}: ${when({ ...f, reference: '', manageUrl: '' })}. It is kept for you until ${formatDay(expiresAt, f.timeZone)} ${formatTimeRange(expiresAt, expiresAt, f.timeZone).split('–')[0]}.`,
+      hello(f),
+      m(f, 'offer.text', {
+        event: f.eventTitle,
+        when: when(f),
+        until: `${formatDay(expiresAt, f.timeZone, f.language)} ${formatTime(expiresAt, f.timeZone, f.language)}`,
+      }),
     ],
-    action: { label: 'Take the place', url: claimUrl },
-    footnote: 'If you no longer need it, do nothing: the place goes to the next person when the offer runs out.',
+    action: { label: m(f, 'offer.action'), url: claimUrl },
+    footnote: m(f, 'offer.footnote'),
+    language: f.language,
   });

@@ -1,5 +1,6 @@
 import type { AppContext } from '../../context';
 import { HttpError, notFound } from '../../http/errors';
+import { asLanguage } from '../../../../shared/i18n/languages';
 import { runHooks } from '../../core/hooks';
 import { itemOfRebookToken } from '../../core/links';
 import { createReturnBooking } from './service';
@@ -94,6 +95,8 @@ export async function rebook(ctx: AppContext, token: string, slotId: number) {
       consent: true,
     },
     r.item.id,
+    // The return visit is mailed in the language of the visit it continues.
+    asLanguage(r.booking.language),
     async (tx, b) => runHooks(ctx.hooks.returnBooked, tx, { earlierItemId: r.item.id, returnItemId: b.itemIds[0] }),
   );
   return { reference: result.reference, manageToken: result.manageToken, eventId: result.eventId };

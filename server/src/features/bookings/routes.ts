@@ -1,5 +1,6 @@
 import { Router, type NextFunction, type Request, type Response } from 'express';
 import { z } from 'zod';
+import { languageOf } from '../../i18n';
 import { normaliseReference } from '../../../../shared/booking/reference';
 import {
   createBookingSchema,
@@ -72,7 +73,7 @@ export function bookingRoutes(ctx: AppContext) {
         'Idempotency-Key': key.error.issues[0].message,
       });
     const input = body(req, createBookingSchema);
-    const result = await booking.createBooking(ctx, input, key?.data);
+    const result = await booking.createBooking(ctx, input, key?.data, languageOf(req, res.locals));
     if (result.replayed) res.setHeader('Idempotent-Replayed', 'true');
     res.status(result.status).json(result.body);
   });
@@ -165,7 +166,7 @@ export function bookingRoutes(ctx: AppContext) {
   r.post('/events/:id/waitlist', ...limits, async (req, res) => {
     const input = body(req, waitlistSchema);
     const { id } = params(req, z.object({ id: z.coerce.number().int().positive() }));
-    res.status(201).json(await booking.joinWaitlist(ctx, id, input));
+    res.status(201).json(await booking.joinWaitlist(ctx, id, input, languageOf(req, res.locals)));
   });
 
   r.get('/waiting-list/:token', async (req, res) => {

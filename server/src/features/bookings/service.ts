@@ -1,5 +1,6 @@
 import type { AppContext } from '../../context';
 import type { BookingCodeStatus } from '../../../../shared/api/bookings';
+import { DEFAULT_LANGUAGE, type Language } from '../../../../shared/i18n/languages';
 import type { Tx } from '../../db/client';
 import { isDuplicate, withDeadlockRetry } from '../../db/retry';
 import { sha256 } from '../../auth/tokens';
@@ -39,13 +40,14 @@ export async function createReturnBooking(
   ctx: AppContext,
   input: BookingInput,
   returnOfItemId: number,
+  language: Language,
   inTx: (tx: Tx, result: BookingResult) => Promise<void>,
 ) {
   const row = await bookableSlot(ctx.database.db, input.slotId);
   const cats = await screenItems(ctx.database.db, row.group, input.items);
   refuse(await bookabilityOf(ctx.database.db, row, skillsOf(input.items, cats), 1));
   for (let attempt = 0; ; attempt++) {
-    const prepared = prepareBooking(ctx);
+    const prepared = prepareBooking(ctx, language);
     try {
       const result = await withDeadlockRetry(() =>
         ctx.database.db.transaction(async (tx) => {
@@ -75,6 +77,7 @@ export async function createBooking(
   ctx: AppContext,
   input: BookingInput,
   idempotencyKey?: string,
+  language: Language = DEFAULT_LANGUAGE,
 ): Promise<{ status: number; body: unknown; replayed: boolean }> {
   const key = idempotencyKey ? `booking:${idempotencyKey}` : null;
   const bodyHash = sha256(JSON.stringify(input));
@@ -85,7 +88,7 @@ export async function createBooking(
   await allowance.takeOrRefuse(input.visitor.email);
   let mailed = false;
   try {
-    const result = await bookOnce(ctx, input, key, bodyHash, row, cats);
+    const result = await bookOnce(ctx, input, key, bodyHash, row, cats, language);
     mailed = !result.replayed;
     return result;
   } finally {
@@ -100,9 +103,10 @@ async function bookOnce(
   bodyHash: string,
   row: Awaited<ReturnType<typeof bookableSlot>>,
   cats: Awaited<ReturnType<typeof screenItems>>,
+  language: Language,
 ): Promise<{ status: number; body: unknown; replayed: boolean }> {
   for (let attempt = 0; ; attempt++) {
-    const prepared = prepareBooking(ctx);
+    const prepared = prepareBooking(ctx, language);
     try {
       const body = await withDeadlockRetry(() =>
         ctx.database.db.transaction(async (tx) => {

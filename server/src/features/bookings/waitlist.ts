@@ -1,5 +1,6 @@
 import type { AppContext } from '../../context';
 import type { Tx } from '../../db/client';
+import { asLanguage, DEFAULT_LANGUAGE, type Language } from '../../../../shared/i18n/languages';
 import { withDeadlockRetry } from '../../db/retry';
 import { newToken } from '../../auth/tokens';
 import { HttpError, notFound } from '../../http/errors';
@@ -58,6 +59,7 @@ export async function offerFreedPlaces(ctx: AppContext, tx: Tx, slotId: number) 
       tx,
       offerMail(
         {
+          language: asLanguage(w.request.language, asLanguage(ctxRow.group.defaultLanguage)),
           visitorName: w.visitorName,
           visitorEmail: w.visitorEmail,
           eventTitle: ctxRow.event.title,
@@ -80,10 +82,15 @@ export async function offerFreedPlaces(ctx: AppContext, tx: Tx, slotId: number) 
  * a time with room is booked directly, and a kind whose limit is reached refuses the whole request (waiting would
  * not make room for it), so no item of a booking waits while another is refused.
  */
-export async function joinWaitlist(ctx: AppContext, eventId: number, input: BookingInput) {
+export async function joinWaitlist(
+  ctx: AppContext,
+  eventId: number,
+  input: BookingInput,
+  language: Language = DEFAULT_LANGUAGE,
+) {
   const allowance = mailAllowance(ctx);
   await allowance.takeOrRefuse(input.visitor.email);
-  const position = await joinLine(ctx, eventId, input).catch(async (err: unknown) => {
+  const position = await joinLine(ctx, eventId, input, language).catch(async (err: unknown) => {
     await allowance.giveBack(input.visitor.email);
     throw err;
   });
@@ -91,7 +98,7 @@ export async function joinWaitlist(ctx: AppContext, eventId: number, input: Book
   return { position };
 }
 
-async function joinLine(ctx: AppContext, eventId: number, input: BookingInput) {
+async function joinLine(ctx: AppContext, eventId: number, input: BookingInput, language: Language) {
   return ctx.database.db.transaction(async (tx) => {
     const row = await bookableSlot(tx, input.slotId, { lock: true });
     if (row.event.id !== eventId)
@@ -112,7 +119,7 @@ async function joinLine(ctx: AppContext, eventId: number, input: BookingInput) {
       slotId: row.slot.id,
       visitorName: input.visitor.name,
       visitorEmail: input.visitor.email,
-      request: { visitor: input.visitor, items: input.items },
+      request: { visitor: input.visitor, items: input.items, language },
       places: input.items.length,
     });
     const n = await lineLength(tx, row.slot.id);
@@ -120,6 +127,7 @@ async function joinLine(ctx: AppContext, eventId: number, input: BookingInput) {
       tx,
       waitlistJoinedMail(
         {
+          language,
           visitorName: input.visitor.name,
           visitorEmail: input.visitor.email,
           eventTitle: row.event.title,
@@ -158,7 +166,6 @@ export async function offerView(ctx: AppContext, token: string) {
 
 /** Turns an offered waiting-list place into a booking, using the places held for it. */
 export async function claimOffer(ctx: AppContext, token: string) {
-  const prepared = prepareBooking(ctx);
   const result = await withDeadlockRetry(() =>
     ctx.database.db.transaction(async (tx) => {
       const w = await offerByToken(tx, token, true);
@@ -173,6 +180,8 @@ export async function claimOffer(ctx: AppContext, token: string) {
         throw new HttpError(410, 'offer-expired', 'This offer has run out and the place has gone to the next person.');
       const row = await bookableSlot(tx, w.slotId);
       const cats = await screenItems(tx, row.group, (w.request as BookingInput).items);
+      // The booking keeps the language the visitor joined the line in.
+      const prepared = prepareBooking(ctx, asLanguage(w.request.language, asLanguage(row.group.defaultLanguage)));
       const booking = await insertBooking(ctx, tx, row, w.request as BookingInput, true, prepared, cats);
       await markClaimed(tx, w.id, booking.id);
       return booking;

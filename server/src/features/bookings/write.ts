@@ -1,5 +1,7 @@
 import { randomBytes } from 'node:crypto';
 import type { z } from 'zod';
+import { categoryText } from '../../i18n';
+import { asLanguage, DEFAULT_LANGUAGE, type Language } from '../../../../shared/i18n/languages';
 import { countSkills, skillFullMessage, slotBookability, slotHasPassed } from '../../../../shared/booking/bookability';
 import { formatReference } from '../../../../shared/booking/reference';
 import type { Skill } from '../../../../shared/constants';
@@ -67,11 +69,12 @@ export const skillsOf = (items: { categoryId: number }[], cats: Screened) =>
 export function facts(
   ctx: AppContext,
   row: SlotRow,
-  b: { reference: string; visitorName: string; visitorEmail: string },
+  b: { reference: string; visitorName: string; visitorEmail: string; language: string },
   items: string[],
   manageToken: string | null,
 ): BookingMailFacts {
   return {
+    language: asLanguage(b.language, asLanguage(row.group.defaultLanguage)),
     reference: b.reference,
     visitorName: b.visitorName,
     visitorEmail: b.visitorEmail,
@@ -86,19 +89,31 @@ export function facts(
   };
 }
 
-const labelOf = (cat: { name: string } | undefined, i: Item) =>
-  itemLabel({ categoryName: cat?.name ?? 'Item', brand: i.brand, model: i.model });
-export const labelsOf = (items: { name: string; brand: string | null; model: string | null }[]) =>
-  items.map((i) => itemLabel({ categoryName: i.name, brand: i.brand, model: i.model }));
+const labelOf = (cat: { slug: string; name: string } | undefined, i: Item, lang: Language) =>
+  itemLabel({
+    categoryName: cat ? categoryText(lang, cat.slug, 'name', cat.name) : 'Item',
+    brand: i.brand,
+    model: i.model,
+  });
+/** Each item as a mail names it: the kind in the reader's language (an admin's own name as typed), brand, model. */
+export const labelsOf = (
+  items: { slug: string; name: string; brand: string | null; model: string | null }[],
+  lang: string = DEFAULT_LANGUAGE,
+) =>
+  items.map((i) =>
+    itemLabel({ categoryName: categoryText(asLanguage(lang), i.slug, 'name', i.name), brand: i.brand, model: i.model }),
+  );
 
 export interface Prepared {
   reference: string;
   token: string;
+  /** The visitor's language: the booking keeps it for every mail about it. */
+  language: Language;
 }
 
-export function prepareBooking(ctx: AppContext): Prepared {
+export function prepareBooking(ctx: AppContext, language: Language = DEFAULT_LANGUAGE): Prepared {
   const reference = formatReference(randomBytes(6));
-  return { reference, token: manageTokenFor(ctx, reference, 1) };
+  return { reference, token: manageTokenFor(ctx, reference, 1), language };
 }
 
 /** Takes the places and the per-skill places of these items in the slot, or throws what the visitor must hear. */
@@ -141,8 +156,8 @@ export async function insertBooking(
   const f = facts(
     ctx,
     row,
-    { reference, visitorName: input.visitor.name, visitorEmail: input.visitor.email },
-    input.items.map((i) => labelOf(cats.get(i.categoryId), i)),
+    { reference, visitorName: input.visitor.name, visitorEmail: input.visitor.email, language: prepared.language },
+    input.items.map((i) => labelOf(cats.get(i.categoryId), i, prepared.language)),
     token,
   );
   const mail = confirmationMail(f, bookingQrText(ctx.env.publicUrl, reference));
@@ -165,6 +180,7 @@ export async function insertBooking(
       visitorEmail: input.visitor.email,
       visitorPhone: input.visitor.phone ?? null,
       manageTokenHash,
+      language: prepared.language,
       consentAt: new Date(),
     },
     input.items.map((i, position) => ({

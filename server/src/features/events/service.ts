@@ -1,5 +1,7 @@
 import { generateSlots, freePlaces } from '../../../../shared/booking/slots';
 import type { EventStatus } from '../../../../shared/constants';
+import { asLanguage } from '../../../../shared/i18n/languages';
+import { translate } from '../../i18n';
 import { formatDay, formatTimeRange } from '../../../../shared/format';
 import type { z } from 'zod';
 import type { createEventSchema, eventListQuery, updateEventSchema } from '../../../../shared/schemas/events';
@@ -148,16 +150,27 @@ export async function changeStatus(ctx: AppContext, id: number, action: keyof ty
       const booked = await confirmedBookingsOf(tx, id);
       for (const b of booked) {
         if (!b.visitorEmail) continue;
+        // In the booking's language, not the organiser's: the visitor reads it.
+        const lang = asLanguage(b.language, asLanguage(g.defaultLanguage));
+        const m = (key: string, values?: Record<string, unknown>) => translate(lang, `mail.${key}`, values);
+        const day = formatDay(e.startsAt, g.timeZone, lang);
         await enqueueMail(
           tx,
-          composeMail(b.visitorEmail, `Cancelled: ${e.title} on ${formatDay(e.startsAt, g.timeZone)}`, {
+          composeMail(b.visitorEmail, m('sessionCancelled.subject', { event: e.title, day }), {
             paragraphs: [
-              `Hello ${b.visitorName},`,
-              `we are sorry: ${g.name} has had to cancel ${e.title} on ${formatDay(e.startsAt, g.timeZone)} (${formatTimeRange(e.startsAt, e.endsAt, g.timeZone)}). Your booking ${b.reference} is cancelled, so please do not come to the venue.`,
-              ...(reason ? [`The organisers say: ${reason}`] : []),
-              'Look out for the group’s next date; you are welcome to book again.',
+              m('hello', { name: b.visitorName }),
+              m('sessionCancelled.text', {
+                group: g.name,
+                event: e.title,
+                day,
+                time: formatTimeRange(e.startsAt, e.endsAt, g.timeZone, lang),
+                reference: b.reference,
+              }),
+              ...(reason ? [m('sessionCancelled.reason', { reason })] : []),
+              m('sessionCancelled.next'),
             ],
-            action: { label: 'See upcoming events', url: `${ctx.env.publicUrl}/events` },
+            action: { label: m('sessionCancelled.action'), url: `${ctx.env.publicUrl}/events` },
+            language: lang,
           }),
         );
       }

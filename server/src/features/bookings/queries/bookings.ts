@@ -42,7 +42,13 @@ export const itemStatuses = (tx: DbOrTx, bookingId: number) =>
 /** Each item's skill and label parts. */
 export const itemsOf = (tx: DbOrTx, bookingId: number) =>
   tx
-    .select({ skill: categories.skill, name: categories.name, brand: bookingItems.brand, model: bookingItems.model })
+    .select({
+      skill: categories.skill,
+      slug: categories.slug,
+      name: categories.name,
+      brand: bookingItems.brand,
+      model: bookingItems.model,
+    })
     .from(bookingItems)
     .innerJoin(categories, eq(categories.id, bookingItems.categoryId))
     .where(eq(bookingItems.bookingId, bookingId));
