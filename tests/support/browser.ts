@@ -65,8 +65,9 @@ export async function signedIn(
   baseUrl: string,
   who: string,
   viewport: { width: number; height: number },
+  locale?: string,
 ) {
-  const context = await browser.newContext({ viewport });
+  const context = await browser.newContext({ viewport, ...(locale ? { locale } : {}) });
   const page = await context.newPage();
   await page.goto(`${baseUrl}/sign-in`);
   await page.getByLabel('E-mail').fill(`${who}@example.org`);

@@ -34,6 +34,9 @@ const CONVERTED = [
   'client/src/routes/not-found.tsx',
   'client/src/routes/privacy/group.tsx',
   'client/src/routes/impact/embed.tsx',
+  'client/src/features/event-day/components/item-body.tsx',
+  'client/src/features/event-day/components/status-chip.tsx',
+  'client/src/features/event-day/components/safety-section.tsx',
 ];
 const READ_PROPS = new Set(['aria-label', 'placeholder', 'title', 'alt', 'label', 'legend', 'lead', 'hint']);
 const WORDS = /\p{L}{2,}/u;

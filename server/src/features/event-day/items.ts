@@ -1,4 +1,6 @@
 import { randomBytes } from 'node:crypto';
+import { categoryText } from '../../i18n';
+import { DEFAULT_LANGUAGE, type Language } from '../../../../shared/i18n/languages';
 import {
   BARRIER_LABELS,
   canMoveTo,
@@ -61,7 +63,12 @@ export async function newTagCodes(tx: Tx, n: number): Promise<string[]> {
 export const isHeating = (slug: string) => (HEATING_CATEGORY_SLUGS as readonly string[]).includes(slug);
 
 /** The item page: fixers see the visitor's first name and initial only; reception and organisers see the name and phone. */
-export async function itemView(ctx: AppContext, itemId: number, user: SessionUser): Promise<ItemView> {
+export async function itemView(
+  ctx: AppContext,
+  itemId: number,
+  user: SessionUser,
+  lang: Language = DEFAULT_LANGUAGE,
+): Promise<ItemView> {
   const { db } = ctx.database;
   const row = await loadItem(db, itemId);
   const [placement, outcome, checks, history, photos] = await Promise.all([
@@ -86,7 +93,7 @@ export async function itemView(ctx: AppContext, itemId: number, user: SessionUse
     tagCode: item.tagCode,
     queueNumber: item.queueNumber,
     categoryId: category.id,
-    categoryName: category.name,
+    categoryName: categoryText(lang, category.slug, 'name', category.name),
     skill: category.skill,
     mains,
     battery: Boolean(item.battery),

@@ -1,5 +1,6 @@
 import { Router, type NextFunction, type Request, type Response } from 'express';
 import { z } from 'zod';
+import { languageOf } from '../../i18n';
 import { normaliseReference } from '../../../../shared/booking/reference';
 import { normaliseTagCode } from '../../../../shared/event-day/tag-code';
 import { checkInSchema, outcomeSchema, safetyCheckSchema, walkInSchema } from '../../../../shared/schemas/event-day';
@@ -78,12 +79,12 @@ export function eventDayRoutes(ctx: AppContext) {
 
   r.get('/items/:id', itemStaff, async (req, res) => {
     res.setHeader('Cache-Control', 'no-store');
-    res.json(await itemView(ctx, params(req, idParam).id, req.user!));
+    res.json(await itemView(ctx, params(req, idParam).id, req.user!, languageOf(req, res.locals)));
   });
   r.post('/items/:id/start', itemStaff, async (req, res) => {
     const { id } = params(req, idParam);
     await startRepair(ctx, id, req.user!);
-    res.json(await itemView(ctx, id, req.user!));
+    res.json(await itemView(ctx, id, req.user!, languageOf(req, res.locals)));
   });
   r.post('/items/:id/safety-checks', itemStaff, async (req, res) => {
     res
@@ -106,7 +107,7 @@ export function eventDayRoutes(ctx: AppContext) {
   r.post('/items/:id/outcome', itemStaff, async (req, res) => {
     const { id } = params(req, idParam);
     await recordOutcome(ctx, id, body(req, outcomeSchema), req.user!);
-    res.json(await itemView(ctx, id, req.user!));
+    res.json(await itemView(ctx, id, req.user!, languageOf(req, res.locals)));
   });
   return r;
 }

@@ -8,6 +8,7 @@ import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
 import { Alert, Card } from '../../../components/ui/feedback';
 import { paths } from '../../../config/paths';
 import { useUser } from '../../../lib/auth';
+import { useLanguage, useT } from '../../../lib/i18n';
 import { photoUrl } from '../api/photo-url';
 import { useStartRepair } from '../api/start-repair';
 import type { ItemView } from '../api/types';
@@ -29,6 +30,15 @@ export interface ItemToolkit {
  */
 export function ItemBody({ item, toolkit, whatNext }: { item: ItemView; toolkit: ItemToolkit; whatNext?: ReactNode }) {
   const start = useStartRepair(item.id);
+  const t = useT();
+  const lang = useLanguage();
+  /** A caution's words in the reader's language, by its id; the server's English if the catalogs lack it. */
+  const caution = (id: string, part: 'title' | 'text', english: string) => {
+    const key = `fixer.caution.${id}.${part}`;
+    const text = t(key);
+    return text === key ? english : text;
+  };
+  const fixerName = item.placement?.fixerName ?? t('fixer.anotherFixer');
   const { data: me } = useUser();
   const [confirmTake, setConfirmTake] = useState(false);
   const othersItem = item.placement && me && item.placement.userId !== me.id;
@@ -46,28 +56,37 @@ export function ItemBody({ item, toolkit, whatNext }: { item: ItemView; toolkit:
     !started && !item.outcome ? null : item.outcome && !editing ? (
       <>
         <Card className={item.outcome.outcome === 'fixed' ? 'ring-2 ring-sage' : ''}>
-          <h2 className="text-lg">Outcome: {item.outcome.outcomeLabel}</h2>
-          {item.outcome.barrierLabel && <p>Why: {item.outcome.barrierLabel}</p>}
+          <h2 className="text-lg">
+            {t('fixer.outcome.title', { label: t(`fixer.outcomeValue.${item.outcome.outcome}`) })}
+          </h2>
+          {item.outcome.barrier && (
+            <p>{t('fixer.outcome.why', { label: t(`fixer.barrier.${item.outcome.barrier}`) })}</p>
+          )}
           {item.outcome.partDescription && (
             <p>
-              Part needed: {item.outcome.partDescription}
-              {item.outcome.partCost !== null && ` (about ${formatMoney(item.outcome.partCost, item.event.currency)})`}
+              {t('fixer.outcome.part', { part: item.outcome.partDescription })}
+              {item.outcome.partCost !== null &&
+                t('fixer.outcome.partCost', { cost: formatMoney(item.outcome.partCost, item.event.currency) })}
               {isWebLink(item.outcome.partLink) && (
                 <>
                   {' '}
                   ·{' '}
                   <a className="underline" href={item.outcome.partLink} target="_blank" rel="noreferrer">
-                    link
+                    {t('fixer.outcome.link')}
                   </a>
                 </>
               )}
             </p>
           )}
-          {item.outcome.minutes !== null && <p>{item.outcome.minutes} minutes</p>}
+          {item.outcome.minutes !== null && <p>{t('fixer.outcome.minutes', { minutes: item.outcome.minutes })}</p>}
           {item.outcome.notes && <p className="whitespace-pre-line text-ink-soft">{item.outcome.notes}</p>}
           <p className="text-sm text-ink-soft">
-            Recorded {formatTime(item.outcome.recordedAt, tz)}
-            {item.outcome.recordedByName && ` by ${item.outcome.recordedByName}`}
+            {item.outcome.recordedByName
+              ? t('fixer.outcome.recordedBy', {
+                  time: formatTime(item.outcome.recordedAt, tz, lang),
+                  name: item.outcome.recordedByName,
+                })
+              : t('fixer.outcome.recorded', { time: formatTime(item.outcome.recordedAt, tz, lang) })}
           </p>
           {item.can.record && (
             <Button
@@ -75,7 +94,7 @@ export function ItemBody({ item, toolkit, whatNext }: { item: ItemView; toolkit:
               className="mt-2"
               onClick={() => setCorrecting(item.outcome?.recordedAt ?? null)}
             >
-              Correct the outcome
+              {t('fixer.outcome.correct')}
             </Button>
           )}
         </Card>
@@ -84,7 +103,7 @@ export function ItemBody({ item, toolkit, whatNext }: { item: ItemView; toolkit:
     ) : item.can.record ? (
       <OutcomeForm item={item} latestCheck={latest} onCancel={item.outcome ? () => setCorrecting(null) : undefined} />
     ) : (
-      <Alert>This item is with {item.placement?.fixerName ?? 'another fixer'}. An organiser can move it to you.</Alert>
+      <Alert>{t('fixer.withOther', { name: fixerName })}</Alert>
     );
 
   return (
@@ -92,7 +111,7 @@ export function ItemBody({ item, toolkit, whatNext }: { item: ItemView; toolkit:
       <header className="space-y-1">
         <p className="text-sm text-ink-soft">
           <Link className="underline" to={paths.bench()}>
-            My bench
+            {t('fixer.myBench')}
           </Link>{' '}
           · {item.event.title}
         </p>
@@ -104,7 +123,7 @@ export function ItemBody({ item, toolkit, whatNext }: { item: ItemView; toolkit:
           )}
           {item.queueNumber !== null && (
             <span className="rounded-lg bg-navy px-2 py-1 text-lg font-extrabold text-white">
-              No. {item.queueNumber}
+              {t('fixer.queueNo', { n: item.queueNumber })}
             </span>
           )}
           <StatusChip status={item.status} />
@@ -117,8 +136,8 @@ export function ItemBody({ item, toolkit, whatNext }: { item: ItemView; toolkit:
         </h1>
         <p className="text-ink-soft">
           {item.booking.visitorName}
-          {item.booking.walkIn ? ' (walk-in)' : ''} · about {item.estimatedMinutes} min
-          {item.ageYears !== null && ` · ${item.ageYears} years old`}
+          {item.booking.walkIn ? t('fixer.walkIn') : ''} · {t('fixer.about', { minutes: item.estimatedMinutes })}
+          {item.ageYears !== null && ` · ${t('fixer.age', { years: item.ageYears })}`}
           {item.placement && (
             <>
               {' '}
@@ -130,29 +149,26 @@ export function ItemBody({ item, toolkit, whatNext }: { item: ItemView; toolkit:
 
       {item.can.start && !started && (
         <div className="space-y-2">
-          {othersItem && (
-            <Alert>The plan gives this item to {item.placement!.fixerName}. Starting it makes it yours.</Alert>
-          )}
+          {othersItem && <Alert>{t('fixer.plannedFor', { name: item.placement!.fixerName })}</Alert>}
           <Button
             className="w-full text-lg"
             onClick={() => (othersItem ? setConfirmTake(true) : start.mutate())}
             busy={start.isPending}
           >
-            Start repair
+            {t('fixer.start')}
           </Button>
           <p className="text-center text-sm text-ink-soft">
-            {item.cautions.length > 0 ? 'Read the cautions below before you open it. ' : ''}The safety check and the
-            outcome open once the repair has started.
+            {item.cautions.length > 0 ? t('fixer.startHintCautions') : t('fixer.startHint')}
           </p>
         </div>
       )}
       <ConfirmDialog
         open={confirmTake}
         tone="primary"
-        title="Take over this item?"
-        message={`It is planned for ${item.placement?.fixerName ?? 'another fixer'}. Tell them you have it, so nobody waits for it.`}
-        confirmLabel="Take it"
-        cancelLabel="Leave it"
+        title={t('fixer.take.title')}
+        message={t('fixer.take.message', { name: fixerName })}
+        confirmLabel={t('fixer.take.confirm')}
+        cancelLabel={t('fixer.take.cancel')}
         onCancel={() => setConfirmTake(false)}
         onConfirm={() => {
           setConfirmTake(false);
@@ -164,25 +180,25 @@ export function ItemBody({ item, toolkit, whatNext }: { item: ItemView; toolkit:
       {finished && outcomeSection}
 
       {item.cautions.length > 0 && (
-        <Alert tone="caution" title="Before you open it">
+        <Alert tone="caution" title={t('fixer.cautions.title')}>
           <ul className="mt-1 list-disc space-y-1 pl-5">
             {item.cautions.map((c) => (
               <li key={c.id}>
-                <b>{c.title}.</b> {c.text}
+                <b>{caution(c.id, 'title', c.title)}.</b> {caution(c.id, 'text', c.text)}
               </li>
             ))}
           </ul>
           <p className="mt-2 text-xs">
-            {item.safetyNote}{' '}
+            {t('fixer.cautions.note')}{' '}
             <Link to={paths.safety()} className="underline">
-              Safety at the bench
+              {t('fixer.cautions.link')}
             </Link>
           </p>
         </Alert>
       )}
 
       <Card>
-        <h2 className="mb-1 text-lg">What the visitor says</h2>
+        <h2 className="mb-1 text-lg">{t('fixer.visitorSays')}</h2>
         <p className="whitespace-pre-line">{item.fault}</p>
         {item.photos.some((p) => p.kind === 'intake') && (
           <div className="mt-3 flex flex-wrap gap-2">
@@ -192,7 +208,7 @@ export function ItemBody({ item, toolkit, whatNext }: { item: ItemView; toolkit:
                 <a key={p.id} href={photoUrl(p.id)} target="_blank" rel="noreferrer">
                   <img
                     src={photoUrl(p.id)}
-                    alt={`Photo of the ${item.categoryName.toLowerCase()}`}
+                    alt={t('fixer.photoAlt', { kind: item.categoryName })}
                     className="size-24 rounded-lg object-cover"
                   />
                 </a>
@@ -214,11 +230,11 @@ export function ItemBody({ item, toolkit, whatNext }: { item: ItemView; toolkit:
       {toolkit.calculators}
 
       <details className="rounded-xl bg-white p-4 ring-1 ring-ink/5">
-        <summary className="cursor-pointer font-bold">History ({item.history.length})</summary>
+        <summary className="cursor-pointer font-bold">{t('fixer.history', { count: item.history.length })}</summary>
         <ol className="mt-2 space-y-1 text-sm">
           {item.history.map((h, n) => (
             <li key={n}>
-              <span className="font-mono">{formatTime(h.at, tz)}</span> {h.toLabel}
+              <span className="font-mono">{formatTime(h.at, tz, lang)}</span> {t(`fixer.status.${h.to}`)}
               {h.byName && ` — ${h.byName}`}
               {h.note && <span className="text-ink-soft"> ({h.note})</span>}
             </li>

@@ -1,4 +1,5 @@
-import { ITEM_STATUS_LABELS, type ItemStatus } from '../../../../../shared/event-day/constants';
+import type { ItemStatus } from '../../../../../shared/event-day/constants';
+import { useT } from '../../../lib/i18n';
 
 const STATUS_TONE: Record<ItemStatus, string> = {
   booked: 'bg-ink/5 text-ink-soft',
@@ -11,9 +12,10 @@ const STATUS_TONE: Record<ItemStatus, string> = {
 };
 
 export function StatusChip({ status }: { status: ItemStatus }) {
+  const t = useT();
   return (
     <span className={`inline-block rounded-full px-2 py-0.5 text-xs font-bold ${STATUS_TONE[status]}`}>
-      {ITEM_STATUS_LABELS[status]}
+      {t(`fixer.status.${status}`)}
     </span>
   );
 }
