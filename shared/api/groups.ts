@@ -1,3 +1,4 @@
+import type { Language } from '../i18n/languages';
 import type { GroupRole, MembershipStatus } from '../constants';
 
 /* The groups API's answers as the client reads them (dates as ISO strings). */
@@ -45,6 +46,8 @@ export interface GroupSettings {
   timeZone: string;
   /** ISO 4217 code in which the group's part costs are shown. */
   currency: string;
+  /** The language of the group's mails when a visitor's own is not known (walk-ins at the desk). */
+  defaultLanguage: Language;
   /** ISO 3166-1 alpha-3 code, or '' until an organiser chooses one. */
   country: string;
   houseRules: string;

@@ -1,3 +1,4 @@
+import { LANGUAGES } from '../i18n/languages';
 import { RETENTION_MONTHS } from '../privacy/scrub';
 import { z } from 'zod';
 import { SKILLS } from '../constants';
@@ -88,6 +89,8 @@ export const groupSettingsSchema = z.object({
   excludedCategoryIds: z.array(z.number().int().positive()).max(200).optional(),
   currency: currencyCode.optional(),
   country: countryCode.optional(),
+  /** The language of the group's mails and public pages when the visitor's own is not known. */
+  defaultLanguage: z.enum(LANGUAGES, { error: 'validation.language.unknown' }).optional(),
   /** Months after a session that visitors' details are kept; then the daily job anonymises them. */
   retentionMonths: z.coerce
     .number({ message: 'Enter a number of months.' })

@@ -3,6 +3,7 @@ import { useSuspenseQuery } from '@tanstack/react-query';
 import { useParams, type LoaderFunctionArgs } from 'react-router';
 import { SKILL_LABELS } from '../../../../shared/constants';
 import { COMMON_CURRENCIES, currencyName, formatMoney } from '../../../../shared/format';
+import { LANGUAGE_NAMES, LANGUAGES, type Language } from '../../../../shared/i18n/languages';
 import { countryChoices } from '../../../../shared/places/countries';
 import { venueSchema } from '../../../../shared/schemas/events';
 import { GroupTabs } from '../../components/layouts/group-tabs';
@@ -167,6 +168,7 @@ export function GroupSettingsPage() {
           </form>
         </Card>
         <CurrencyCard groupId={groupId} current={settings.data.currency} country={settings.data.country} />
+        <LanguageCard groupId={groupId} current={settings.data.defaultLanguage} />
         <SharingCard groupId={groupId} />
       </div>
     </div>
@@ -248,6 +250,47 @@ function CurrencyCard({
         onClick={() => save.mutate(country ? { currency, country } : { currency })}
       >
         Save country and currency
+      </Button>
+    </Card>
+  );
+}
+
+/** The language of the group's mails when the visitor's own is not known: walk-ins registered at the desk. */
+function LanguageCard({ groupId, current }: { groupId: number; current: Language }) {
+  const save = useSaveGroupSettings(groupId);
+  const [language, setLanguage] = useState(current);
+  useEffect(() => setLanguage(current), [current]);
+  return (
+    <Card className="space-y-3">
+      <h2 className="text-lg">Language</h2>
+      <div className="space-y-1">
+        <label htmlFor="group-language" className="block font-semibold">
+          Language of the group’s mails
+        </label>
+        <select
+          id="group-language"
+          value={language}
+          onChange={(e) => {
+            setLanguage(e.target.value as Language);
+            save.reset();
+          }}
+          className="block min-h-11 w-full rounded-lg border border-ink/20 bg-white px-3"
+        >
+          {LANGUAGES.map((l) => (
+            <option key={l} value={l} lang={l}>
+              {LANGUAGE_NAMES[l]}
+            </option>
+          ))}
+        </select>
+        <p className="text-sm text-ink-soft">
+          A visitor who books online gets every mail in the language they booked in. Visitors registered at the desk get
+          this one.
+        </p>
+      </div>
+      {save.error && <Alert tone="error">{save.error.message}</Alert>}
+      {save.isSuccess && <Alert tone="success">Saved.</Alert>}
+      <Button variant="secondary" busy={save.isPending} onClick={() => save.mutate({ defaultLanguage: language })}>
+        Save the language
       </Button>
     </Card>
   );

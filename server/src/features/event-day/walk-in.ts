@@ -57,6 +57,8 @@ export async function walkIn(
             visitorEmail: input.visitor.email ?? null,
             visitorPhone: input.visitor.phone ?? null,
             walkIn: true,
+            // Nobody at the desk picked a language for the visitor: the group's own is the best guess for its mails.
+            language: e.group.defaultLanguage,
             consentName: input.consentName,
             manageTokenHash: sha256(manageTokenFor(ctx, reference, 1)),
             consentAt: new Date(),

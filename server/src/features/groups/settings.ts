@@ -5,12 +5,14 @@ import type { SessionUser } from '../../../../shared/schemas/auth';
 import { hasGroupRole } from '../../auth/guards';
 import { forbidden, HttpError, notFound } from '../../http/errors';
 import { excludedCategoryIds } from '../../core/screening';
+import { asLanguage } from '../../../../shared/i18n/languages';
 import { groupById } from './queries/members';
 import {
   insertVenue,
   lockGroup,
   replaceExclusions,
   setCurrency,
+  setDefaultLanguage,
   setCountry,
   setHouseRules,
   setPrivacy,
@@ -41,6 +43,7 @@ export async function groupSettings(ctx: AppContext, groupId: number) {
     town: g.town,
     timeZone: g.timeZone,
     currency: g.currency,
+    defaultLanguage: asLanguage(g.defaultLanguage),
     country: g.country ?? '',
     houseRules: g.houseRules ?? '',
     contactEmail: g.contactEmail ?? '',
@@ -54,6 +57,7 @@ export async function saveGroupSettings(ctx: AppContext, groupId: number, input:
     if (!(await lockGroup(tx, groupId))) throw notFound('That group');
     if (input.houseRules !== undefined) await setHouseRules(tx, groupId, input.houseRules);
     if (input.currency !== undefined) await setCurrency(tx, groupId, input.currency);
+    if (input.defaultLanguage !== undefined) await setDefaultLanguage(tx, groupId, input.defaultLanguage);
     if (input.country !== undefined) await setCountry(tx, groupId, input.country);
     if (input.retentionMonths !== undefined || input.contactEmail !== undefined)
       await setPrivacy(tx, groupId, { retentionMonths: input.retentionMonths, contactEmail: input.contactEmail });

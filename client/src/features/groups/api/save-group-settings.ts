@@ -1,5 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api';
+import type { Language } from '../../../../../shared/i18n/languages';
 import { groupKeys } from './keys';
 
 /** Only the parts sent are saved. */
@@ -8,6 +9,7 @@ type SettingsInput = {
   excludedCategoryIds?: number[];
   currency?: string;
   country?: string;
+  defaultLanguage?: Language;
   retentionMonths?: number;
   contactEmail?: string;
 };

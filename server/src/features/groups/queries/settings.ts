@@ -22,6 +22,10 @@ export async function setHouseRules(tx: Tx, groupId: number, houseRules: string)
   await tx.update(repairGroups).set({ houseRules }).where(eq(repairGroups.id, groupId));
 }
 
+export async function setDefaultLanguage(tx: Tx, groupId: number, defaultLanguage: string) {
+  await tx.update(repairGroups).set({ defaultLanguage }).where(eq(repairGroups.id, groupId));
+}
+
 export async function setCurrency(tx: Tx, groupId: number, currency: string) {
   await tx.update(repairGroups).set({ currency }).where(eq(repairGroups.id, groupId));
 }
