@@ -310,6 +310,8 @@ describe('mails after the event', () => {
       .update(events)
       .set({ endsAt: new Date(Date.now() - 3 * 3600_000) })
       .where(eq(events.id, todayId));
+    // Cass booked in Dutch: her thank-you is Dutch, whoever's job sends it.
+    await db.db.update(bookings).set({ language: 'nl' }).where(eq(bookings.reference, 'T6P-2XC'));
     const sent = await sendThankYous(server.ctx);
     expect(sent).toBeGreaterThanOrEqual(1);
     expect(await sendThankYous(server.ctx)).toBe(0);
@@ -319,6 +321,13 @@ describe('mails after the event', () => {
     // The weighed 1.1 kg kettle at 5.64795 kg CO2e per kg and d = 0.5: 3.1 kg CO2e.
     expect(thanks.text).toContain('about 1.1 kg out of the bin');
     expect(thanks.text).toContain('about 3.1 kg CO2e');
+    const cass = (await db.db.select().from(outbox).where(eq(outbox.toAddress, 'cass@example.org'))).find((m) =>
+      m.subject.startsWith('Bedankt voor je komst'),
+    )!;
+    expect(cass.text).toContain('Hallo Cass,');
+    expect(cass.text).toContain(
+      'Tafellamp of staande lamp: Onderdeel nodig (E27 lampholder with cord grip; we hebben je een link gestuurd om terug te komen).',
+    );
     const wren = await db.db.select().from(outbox).where(eq(outbox.toAddress, 'wren.ashcombe@example.org'));
     expect(wren.some((m) => m.subject.includes('what we did together'))).toBe(true);
     // Someone who did not come gets no thank-you.

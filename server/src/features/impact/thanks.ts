@@ -1,4 +1,5 @@
-import { OUTCOME_LABELS } from '../../../../shared/event-day/constants';
+import { asLanguage } from '../../../../shared/i18n/languages';
+import { categoryText, translate } from '../../i18n';
 import { impact } from '../../../../shared/impact/statistics';
 import type { AppContext } from '../../context';
 import { enqueueMail } from '../../mail/outbox';
@@ -35,24 +36,28 @@ export async function sendThankYous(ctx: AppContext): Promise<number> {
           cats,
           d,
         );
+        // In the language the visitor booked in.
+        const lang = asLanguage(mine[0].language, asLanguage(group.defaultLanguage));
+        const m = (key: string, values?: Record<string, unknown>) => translate(lang, `mail.thanks.${key}`, values);
+        const num = (x: number) => new Intl.NumberFormat(lang, { maximumFractionDigits: 1 }).format(x);
         await enqueueMail(
           tx,
-          composeMail(mine[0].email!, `Thank you for coming to ${group.name}`, {
+          composeMail(mine[0].email!, m('subject', { group: group.name }), {
             paragraphs: [
-              `Hello ${mine[0].name.split(' ')[0]},`,
-              `thank you for bringing your ${mine.length === 1 ? 'item' : 'items'} to ${event.title}.`,
-              ...mine.map(
-                (i) =>
-                  `${i.categoryName}: ${i.outcome ? OUTCOME_LABELS[i.outcome] : 'no outcome was recorded'}${i.outcome === 'parts-needed' && i.part ? ` (${i.part}; we have sent you a link to come back)` : ''}.`,
-              ),
-              ...(t.fixed
-                ? [
-                    `Keeping ${t.fixed === 1 ? 'it' : 'them'} in use kept about ${kg(t.kgDiverted)} out of the bin and avoided about ${kg(t.co2eKg)} CO2e of making a new one.`,
-                  ]
-                : []),
+              translate(lang, 'mail.hello', { name: mine[0].name.split(' ')[0] }),
+              m('text', { count: mine.length, event: event.title }),
+              ...mine.map((i) => {
+                const values = {
+                  kind: categoryText(lang, i.categorySlug, 'name', i.categoryName),
+                  outcome: i.outcome ? translate(lang, `fixer.outcomeValue.${i.outcome}`) : m('noOutcome'),
+                  part: i.part,
+                };
+                return m(i.outcome === 'parts-needed' && i.part ? 'itemPart' : 'item', values);
+              }),
+              ...(t.fixed ? [m('saved', { count: t.fixed, kg: num(t.kgDiverted), co2e: num(t.co2eKg) })] : []),
             ],
-            footnote:
-              'Figures are estimates from average weights and published emission factors; the method is on the group’s impact page.',
+            footnote: m('footnote'),
+            language: lang,
           }),
         );
       }

@@ -42,6 +42,8 @@ export const visitorItems = (tx: DbOrTx, eventId: number) =>
       name: bookings.visitorName,
       categoryId: bookingItems.categoryId,
       categoryName: categories.name,
+      categorySlug: categories.slug,
+      language: bookings.language,
       weighedKg: bookingItems.weighedKg,
       outcome: itemOutcomes.outcome,
       part: itemOutcomes.partDescription,
