@@ -1,3 +1,4 @@
+import { LANGUAGES, type Language } from '../i18n/languages';
 import { z } from 'zod';
 import { GROUP_ROLES } from '../constants';
 
@@ -94,7 +95,14 @@ export interface SessionUser {
   name: string;
   admin: boolean;
   roles: { groupId: number; role: (typeof GROUP_ROLES)[number]; groupName: string }[];
+  /** The language the person chose for the app; null until they choose one (the browser's decides meanwhile). */
+  language: Language | null;
 }
+
+/** A signed-in person's choice of language, kept on their account. */
+export const accountLanguageSchema = z.object({
+  language: z.enum(LANGUAGES, { error: 'validation.language.unknown' }),
+});
 
 export const inviteSchema = z.object({ email, role: z.enum(GROUP_ROLES, { error: 'Choose a role.' }) });
 export const inviteSignupSchema = z.object({

@@ -1,7 +1,7 @@
 import { and, eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
-import { bookingItems, bookings } from '../../server/src/db/schema/index';
+import { bookingItems, bookings, users } from '../../server/src/db/schema/index';
 import { launchBrowser, PHONE, shot, signedIn } from '../support/browser';
 import { startDemoApp, type DemoApp } from '../support/demo-app';
 
@@ -80,6 +80,20 @@ describe('the fixer’s item page in four languages', () => {
       .waitFor();
     expect(await widthOf(page)).toBeLessThanOrEqual(PHONE.width);
     await page.screenshot({ path: shot('i18n-item-pseudo'), fullPage: true });
+    await context.close();
+  });
+
+  it('opens in the account’s language after sign-in, and keeps a new choice on the account', async () => {
+    await app.db.db.update(users).set({ language: 'nl' }).where(eq(users.email, 'host@example.org'));
+    const { context, page } = await signedIn(browser, app.server.url, 'host', PHONE, 'en-GB');
+    await page.goto(`${app.server.url}/events`);
+    await page.getByRole('heading', { name: 'Reparatiemomenten', level: 1 }).waitFor();
+    expect(await page.getAttribute('html', 'lang')).toBe('nl');
+    await page.getByLabel('Taal').selectOption('de');
+    await page.getByRole('heading', { name: 'Reparaturtermine', level: 1 }).waitFor();
+    await expect
+      .poll(async () => (await app.db.db.select().from(users).where(eq(users.email, 'host@example.org')))[0].language)
+      .toBe('de');
     await context.close();
   });
 });

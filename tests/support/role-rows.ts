@@ -36,6 +36,7 @@ export const moreRows: Row[] = [
   ['POST', () => '/api/auth/two-factor/setup', adminOnly],
   ['POST', () => '/api/auth/two-factor/enable', { ...adminOnly, admin: 400 }, {}],
   ['POST', () => '/api/auth/two-factor/disable', signedIn(400), {}],
+  ['PUT', () => '/api/auth/me/language', signedIn(400), {}],
   // Invitations: the token is the key, whoever holds it.
   ['GET', () => '/api/invites/nope', everyone(404)],
   ['POST', () => '/api/invites/nope/accept', signedIn(404)],

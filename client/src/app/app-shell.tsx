@@ -31,6 +31,19 @@ export function AppShell() {
     document.addEventListener('keydown', closeOnEscape);
     return () => document.removeEventListener('keydown', closeOnEscape);
   }, [open]);
+  // A signed-in person's language follows their account; visitors never load this.
+  useEffect(() => {
+    if (!user) return;
+    let stop: (() => void) | undefined;
+    let left = false;
+    void import('../lib/account-language').then((m) => {
+      if (!left) stop = m.followAccount(user);
+    });
+    return () => {
+      left = true;
+      stop?.();
+    };
+  }, [user]);
   const loading = useNavigation().state === 'loading';
 
   const links: { to: string; label: string; end?: boolean }[] = [

@@ -1,3 +1,4 @@
+import { isLanguage } from '../../../shared/i18n/languages';
 import { and, count, eq, gt, isNull, ne, sql } from 'drizzle-orm';
 import type { SessionUser } from '../../../shared/schemas/auth';
 import type { DbOrTx, Tx } from '../db/client';
@@ -147,7 +148,7 @@ export async function insertSetting(tx: Tx, key: string, value: unknown) {
 /** The user as the API shows it: who they are and their active roles per group. */
 export async function loadSessionUser(db: DbOrTx, userId: number): Promise<SessionUser | null> {
   const [user] = await db
-    .select({ id: users.id, email: users.email, name: users.name, admin: users.admin })
+    .select({ id: users.id, email: users.email, name: users.name, admin: users.admin, language: users.language })
     .from(users)
     .where(eq(users.id, userId));
   if (!user) return null;
@@ -157,7 +158,12 @@ export async function loadSessionUser(db: DbOrTx, userId: number): Promise<Sessi
     .innerJoin(repairGroups, eq(repairGroups.id, memberships.groupId))
     .where(and(eq(memberships.userId, userId), eq(memberships.status, 'active')))
     .orderBy(repairGroups.name, memberships.role);
-  return { ...user, admin: Boolean(user.admin), roles };
+  return { ...user, admin: Boolean(user.admin), roles, language: isLanguage(user.language) ? user.language : null };
+}
+
+/** Keeps a person's choice of language on their account. */
+export async function setAccountLanguage(db: DbOrTx, userId: number, language: string) {
+  await db.update(users).set({ language }).where(eq(users.id, userId));
 }
 
 /** The two-factor columns of one person. */

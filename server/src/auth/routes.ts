@@ -1,6 +1,7 @@
 import { Router, type Request } from 'express';
 import { rateLimit, ipKeyGenerator } from 'express-rate-limit';
 import {
+  accountLanguageSchema,
   changePasswordSchema,
   firstAdminSchema,
   loginSchema,
@@ -17,7 +18,7 @@ import { publicReadLimiter } from '../http/rate-limit';
 import { MariadbRateLimitStore } from '../http/rate-limit-store';
 import { body } from '../http/validate';
 import * as auth from './service';
-import { loadSessionUser } from './queries';
+import { loadSessionUser, setAccountLanguage } from './queries';
 import { requireAdmin, requireUser } from './guards';
 import * as twoFactor from './two-factor';
 import { sessionCookie } from './session';
@@ -159,6 +160,13 @@ export function authRoutes(ctx: AppContext, csrfToken: (req: Request) => string)
   // Signed out is an answer, not an error: a 401 here would log in every anonymous visitor's console.
   r.get('/me', (req, res) => {
     res.json({ user: req.user ?? null });
+  });
+
+  // The language picker of a signed-in person: the account keeps the choice for their next device.
+  r.put('/me/language', requireUser, async (req, res) => {
+    const { language } = body(req, accountLanguageSchema);
+    await setAccountLanguage(ctx.database.db, req.user!.id, language);
+    res.json({ language });
   });
 
   r.post('/logout', (req, res, next) => {
