@@ -9,6 +9,7 @@ import { seedToday } from './demo-today';
 import { seedHistory } from './demo-history';
 import { seedEvents } from './demo-sessions';
 import { seedVolunteers } from './demo-volunteers';
+import { DUTCH_ORGANISER, seedDutchGroup } from './demo-dutch';
 
 /**
  * The demo scenario: the invented town of Kestlebridge and its neighbour Orrin Vale, two repair groups,
@@ -121,6 +122,11 @@ export async function seedDemo(
         await tx.insert(memberships).values({ userId: id, groupId: groupIds[slug], role, status: 'active' });
     }
     await seedEvents(tx as unknown as Db, groupIds, opts.now ?? new Date(), opts.linkSecret ?? 'demo');
+    const [{ id: dutchOrganiser }] = await tx
+      .insert(users)
+      .values({ ...DUTCH_ORGANISER, language: 'nl', passwordHash, emailVerifiedAt: now })
+      .$returningId();
+    await seedDutchGroup(tx as unknown as Db, dutchOrganiser, opts.now ?? new Date(), opts.linkSecret ?? 'demo');
     await seedVolunteers(tx as unknown as Db);
     await seedToday(tx as unknown as Db, opts.now ?? new Date(), opts.linkSecret ?? 'demo');
     await seedHistory(tx as unknown as Db, opts.now ?? new Date());
