@@ -64,7 +64,10 @@ describe('the booking page at phone width', () => {
     await page.getByRole('heading', { name: 'Your details' }).waitFor();
     const img = page.locator('img[src^="/api/photos/"]').first();
     await img.waitFor();
-    expect(await img.evaluate((el: HTMLImageElement) => el.complete && el.naturalWidth)).toBe(320);
+    // The element is in the page before its bytes have arrived: wait for the decoded image, not just the tag.
+    await expect
+      .poll(() => img.evaluate((el: HTMLImageElement) => el.complete && el.naturalWidth), { timeout: 10_000 })
+      .toBe(320);
     const withToken = () =>
       [...requests.filter((r) => r.url() !== pageUrl).map((r) => r.url()), ...downloads].filter(
         (u) => u.includes('token=') || u.includes(booking.manageToken),
