@@ -6,26 +6,30 @@ import { readdirSync, readFileSync } from 'node:fs';
 import path from 'node:path';
 import { compileCatalog, mergeNamespaces, type RawCatalog } from './shared/i18n/catalog.js';
 import { LANGUAGES } from './shared/i18n/languages.js';
-import { SERVER_ONLY_NAMESPACES } from './shared/i18n/namespaces.js';
+import { ON_DEMAND_NAMESPACES, SERVER_ONLY_NAMESPACES } from './shared/i18n/namespaces.js';
 import { PSEUDO_LANGUAGE, pseudoText } from './shared/i18n/pseudo.js';
 
 /**
- * The message catalogs for the browser: `virtual:mendery-catalogs` exports one loader per language, each a chunk of
- * its own with that language's messages precompiled (so Lingui's compiler never ships). The server's own namespaces
+ * The message catalogs for the browser: `virtual:mendery-catalogs` exports one loader per language (`catalogs`), each
+ * a chunk of its own with that language's messages precompiled (so Lingui's compiler never ships), and one loader per
+ * language and on-demand namespace (`onDemand`), fetched with the pages that need it. The server's own namespaces
  * (shared/i18n/namespaces.ts) stay out. The pseudo-locale is English run through pseudoText.
  */
 function catalogs(): Plugin {
   const dir = path.resolve('locales');
-  const serverOnly = new Set(SERVER_ONLY_NAMESPACES);
+  const onDemand = new Set<string>(ON_DEMAND_NAMESPACES);
+  const leftOut = new Set([...SERVER_ONLY_NAMESPACES, ...ON_DEMAND_NAMESPACES]);
   const list = 'virtual:mendery-catalogs';
   const one = 'virtual:mendery-catalog/';
-  const read = (lang: string) => {
+  /** The language's first chunk (no namespace) or one on-demand namespace. */
+  const read = (lang: string, only?: string) => {
     const files: Record<string, RawCatalog> = {};
     for (const f of readdirSync(path.join(dir, lang))
       .filter((f) => f.endsWith('.json'))
       .sort()) {
       const namespace = f.slice(0, -'.json'.length);
-      if (!serverOnly.has(namespace)) files[namespace] = JSON.parse(readFileSync(path.join(dir, lang, f), 'utf8'));
+      if (only ? namespace === only : !leftOut.has(namespace))
+        files[namespace] = JSON.parse(readFileSync(path.join(dir, lang, f), 'utf8'));
     }
     return mergeNamespaces(files);
   };
@@ -33,14 +37,23 @@ function catalogs(): Plugin {
     name: 'mendery:catalogs',
     resolveId: (id) => (id === list || id.startsWith(one) ? `\0${id}` : undefined),
     load(id) {
+      const languages = [...LANGUAGES, PSEUDO_LANGUAGE];
       if (id === `\0${list}`) {
-        const loaders = [...LANGUAGES, PSEUDO_LANGUAGE].map((l) => `${JSON.stringify(l)}: () => import('${one}${l}')`);
-        return `export const catalogs = {${loaders.join(',')}};`;
+        const loaders = languages.map((l) => `${JSON.stringify(l)}: () => import('${one}${l}')`);
+        const byNamespace = languages.map(
+          (l) =>
+            `${JSON.stringify(l)}: {${ON_DEMAND_NAMESPACES.map((ns) => `${ns}: () => import('${one}${l}/${ns}')`).join(',')}}`,
+        );
+        return `export const catalogs = {${loaders.join(',')}};\nexport const onDemand = {${byNamespace.join(',')}};`;
       }
       if (!id.startsWith(`\0${one}`)) return undefined;
-      const lang = id.slice(one.length + 1);
+      const [lang, namespace] = id.slice(one.length + 1).split('/');
+      if (namespace && !onDemand.has(namespace)) throw new Error(`${namespace} is not an on-demand namespace`);
       for (const l of LANGUAGES) this.addWatchFile(path.join(dir, l));
-      const messages = lang === PSEUDO_LANGUAGE ? compileCatalog(read('en'), pseudoText) : compileCatalog(read(lang));
+      const messages =
+        lang === PSEUDO_LANGUAGE
+          ? compileCatalog(read('en', namespace), pseudoText)
+          : compileCatalog(read(lang, namespace));
       return `export const messages = ${JSON.stringify(messages)};`;
     },
   };

@@ -5,39 +5,133 @@ import { describe, expect, it } from 'vitest';
 import { SERVER_ONLY_NAMESPACES } from '../../shared/i18n/namespaces';
 
 /**
- * No string left behind: the client files below are in the catalogs, so a word a person reads written straight into
- * them fails here: JSX text with letters, and a literal with letters in a prop a person reads or hears (aria-label,
- * placeholder, title, alt, and the label/legend/lead/hint props of our own components). Every key they name exists
- * in English. The list grows as screens are translated.
+ * No string left behind: every client file is in the catalogs but those still PENDING below, so a word a person reads
+ * written straight into one fails here: JSX text with letters, and a literal with letters in a prop a person reads or
+ * hears (aria-label, placeholder, title, alt, and the label/legend/lead/hint props of our own components). Every key a
+ * file names exists in English. PENDING only shrinks: a file on it that has no stray words left fails too, so it comes
+ * off the list the day it is translated.
  */
-const CONVERTED = [
-  'client/src/app/app-shell.tsx',
-  'client/src/components/layouts/language-picker.tsx',
-  'client/src/components/ui/field.tsx',
-  'client/src/components/ui/feedback.tsx',
-  'client/src/routes/events/list.tsx',
-  'client/src/routes/events/detail.tsx',
-  'client/src/routes/events/book.tsx',
-  'client/src/features/events/components/places-bar.tsx',
-  'client/src/features/events/components/session-missing.tsx',
-  'client/src/features/bookings/components/booking-form.tsx',
-  'client/src/features/bookings/components/house-rules.tsx',
-  'client/src/features/bookings/components/time-tiles.tsx',
-  'client/src/features/bookings/components/waitlist-joined.tsx',
-  'client/src/features/bookings/components/slot-words.ts',
-  'client/src/routes/home.tsx',
-  'client/src/routes/bookings/manage.tsx',
-  'client/src/features/bookings/components/link-problem.tsx',
-  'client/src/components/ui/month-calendar.tsx',
-  'client/src/components/ui/month-calendar-grid.tsx',
-  'client/src/routes/safety.tsx',
-  'client/src/routes/not-found.tsx',
-  'client/src/routes/privacy/group.tsx',
-  'client/src/routes/impact/embed.tsx',
-  'client/src/features/event-day/components/item-body.tsx',
-  'client/src/features/event-day/components/status-chip.tsx',
-  'client/src/features/event-day/components/safety-section.tsx',
-];
+const PENDING = new Set([
+  'client/src/app/route-error.tsx',
+  'client/src/components/layouts/event-tabs.tsx',
+  'client/src/components/layouts/group-tabs.tsx',
+  'client/src/components/layouts/logo.tsx',
+  'client/src/features/admin/components/merge-group.tsx',
+  'client/src/features/auth/components/change-password-form.tsx',
+  'client/src/features/auth/components/sign-in-card.tsx',
+  'client/src/features/auth/components/sign-in-code-form.tsx',
+  'client/src/features/auth/components/two-factor-panel.tsx',
+  'client/src/features/benches/components/bench-layout-editor.tsx',
+  'client/src/features/bookings/components/fresh-link-form.tsx',
+  'client/src/features/categories/components/category-edit-row.tsx',
+  'client/src/features/categories/components/category-table.tsx',
+  'client/src/features/event-day/components/check-in-panel.tsx',
+  'client/src/features/event-day/components/desk-board.tsx',
+  'client/src/features/event-day/components/desk-home.tsx',
+  'client/src/features/event-day/components/desk-screening.tsx',
+  'client/src/features/event-day/components/desk-slots.tsx',
+  'client/src/features/event-day/components/hall-display.tsx',
+  'client/src/features/event-day/components/issued-tags.tsx',
+  'client/src/features/event-day/components/live-bench-card.tsx',
+  'client/src/features/event-day/components/live-view.tsx',
+  'client/src/features/event-day/components/outcome-form.tsx',
+  'client/src/features/event-day/components/qr-scan.tsx',
+  'client/src/features/event-day/components/repair-photos.tsx',
+  'client/src/features/event-day/components/safety-form.tsx',
+  'client/src/features/event-day/components/status-tallies.tsx',
+  'client/src/features/event-day/components/tag-sheet.tsx',
+  'client/src/features/event-day/components/walk-in-form.tsx',
+  'client/src/features/events/components/cancel-session.tsx',
+  'client/src/features/events/components/session-rows.tsx',
+  'client/src/features/groups/components/privacy-settings.tsx',
+  'client/src/features/impact/components/displacement-card.tsx',
+  'client/src/features/impact/components/display.tsx',
+  'client/src/features/impact/components/embed-panel.tsx',
+  'client/src/features/impact/components/figure-parts.tsx',
+  'client/src/features/impact/components/figures.tsx',
+  'client/src/features/impact/components/impact-body.tsx',
+  'client/src/features/impact/components/impact-story.tsx',
+  'client/src/features/impact/components/import-progress.tsx',
+  'client/src/features/impact/components/method-notes.tsx',
+  'client/src/features/impact/components/method-section.tsx',
+  'client/src/features/impact/components/report-body.tsx',
+  'client/src/features/privacy/components/account-data-panel.tsx',
+  'client/src/features/privacy/components/booking-data-panel.tsx',
+  'client/src/features/privacy/components/erase-booking-button.tsx',
+  'client/src/features/rota/components/my-sessions.tsx',
+  'client/src/features/rota/components/rota-gaps.tsx',
+  'client/src/features/rota/components/shift-calendar-link.tsx',
+  'client/src/features/rota/components/shift-table.tsx',
+  'client/src/features/rota/components/skill-cover-chart.tsx',
+  'client/src/features/toolkit/components/add-part-form.tsx',
+  'client/src/features/toolkit/components/calculators-page.tsx',
+  'client/src/features/toolkit/components/calculators/calculator-body.tsx',
+  'client/src/features/toolkit/components/calculators/diode-test.tsx',
+  'client/src/features/toolkit/components/calculators/discharge.tsx',
+  'client/src/features/toolkit/components/calculators/e-series.tsx',
+  'client/src/features/toolkit/components/calculators/earth-limit.tsx',
+  'client/src/features/toolkit/components/calculators/mains-peak.tsx',
+  'client/src/features/toolkit/components/calculators/measure.tsx',
+  'client/src/features/toolkit/components/calculators/resistor-bands.tsx',
+  'client/src/features/toolkit/components/calculators/resistor-code.tsx',
+  'client/src/features/toolkit/components/calculators/transistor.tsx',
+  'client/src/features/toolkit/components/calculators/ui.tsx',
+  'client/src/features/toolkit/components/item-toolkit.tsx',
+  'client/src/features/toolkit/components/knowledge-card.tsx',
+  'client/src/features/toolkit/components/ratings.tsx',
+  'client/src/features/triage/components/bench-columns.tsx',
+  'client/src/features/triage/components/board-item-card.tsx',
+  'client/src/features/triage/components/triage-run-bar.tsx',
+  'client/src/features/triage/components/triage-run-history.tsx',
+  'client/src/features/triage/components/triage-run-summary.tsx',
+  'client/src/features/workbench/components/next-in-queue.tsx',
+  'client/src/features/workbench/components/queue-list.tsx',
+  'client/src/routes/admin/categories.tsx',
+  'client/src/routes/admin/mailbox.tsx',
+  'client/src/routes/admin/overview.tsx',
+  'client/src/routes/auth/email-links.tsx',
+  'client/src/routes/auth/join.tsx',
+  'client/src/routes/auth/setup.tsx',
+  'client/src/routes/auth/sign-in.tsx',
+  'client/src/routes/auth/volunteer.tsx',
+  'client/src/routes/bookings/claim.tsx',
+  'client/src/routes/bookings/new-link.tsx',
+  'client/src/routes/event-day/tag.tsx',
+  'client/src/routes/events/manage.tsx',
+  'client/src/routes/groups/events.tsx',
+  'client/src/routes/groups/new-event.tsx',
+  'client/src/routes/groups/people.tsx',
+  'client/src/routes/groups/settings.tsx',
+  'client/src/routes/impact/dashboard.tsx',
+  'client/src/routes/impact/follow-ups.tsx',
+  'client/src/routes/impact/import.tsx',
+  'client/src/routes/impact/public.tsx',
+  'client/src/routes/impact/rebook.tsx',
+  'client/src/routes/impact/records.tsx',
+  'client/src/routes/impact/report.tsx',
+  'client/src/routes/privacy/account.tsx',
+  'client/src/routes/rota/rota.tsx',
+  'client/src/routes/skills/my-skills.tsx',
+  'client/src/routes/skills/skills-matrix.tsx',
+  'client/src/routes/toolkit/knowledge.tsx',
+  'client/src/routes/toolkit/salvage.tsx',
+  'client/src/routes/triage/board.tsx',
+  'client/src/routes/triage/run.tsx',
+  'client/src/routes/workbench/bench.tsx',
+]);
+
+function clientFiles(dir = 'client/src'): string[] {
+  return readdirSync(path.resolve(dir), { withFileTypes: true }).flatMap((d) =>
+    d.isDirectory()
+      ? clientFiles(`${dir}/${d.name}`)
+      : /\.tsx?$/.test(d.name) && !d.name.endsWith('.d.ts')
+        ? [`${dir}/${d.name}`]
+        : [],
+  );
+}
+const CONVERTED = clientFiles()
+  .filter((f) => !PENDING.has(f))
+  .sort();
 const READ_PROPS = new Set(['aria-label', 'placeholder', 'title', 'alt', 'label', 'legend', 'lead', 'hint']);
 const WORDS = /\p{L}{2,}/u;
 
@@ -115,6 +209,17 @@ describe('no string left behind in the translated screens', () => {
         Object.keys(english).some((k) => k.startsWith(prefix)),
         `${file}: ${prefix}…`,
       ).toBe(true);
+  });
+
+  it.each([...PENDING])('%s (pending) still has words to move into the catalogs', (file) => {
+    expect(
+      strayStrings(readFileSync(path.resolve(file), 'utf8'), file),
+      `translated: take ${file} off PENDING`,
+    ).not.toEqual([]);
+  });
+
+  it('covers most of the client', () => {
+    expect(CONVERTED.length).toBeGreaterThan(PENDING.size);
   });
 
   it('finds a planted English string (the check can fail)', () => {

@@ -1,7 +1,9 @@
 import { lazy, Suspense, type ComponentType } from 'react';
 import { createBrowserRouter, redirect, type LoaderFunction, type LoaderFunctionArgs } from 'react-router';
 import { Spinner } from '../components/ui/feedback';
+import type { OnDemandNamespace } from '../../../shared/i18n/namespaces';
 import { allow, meQuery, type Allow } from '../lib/auth';
+import { loadNamespaces } from '../lib/i18n';
 import { requireRole } from '../lib/guards';
 import { queryClient } from '../lib/query-client';
 import { landingPath } from '../lib/roles';
@@ -23,10 +25,18 @@ const withGuard = (check: Allow | undefined, loader: LoaderFunction | undefined)
       }
     : loader;
 
-/** Every page loads on demand: the first load on a phone carries the shell and the page asked for, nothing else. */
-const page = (load: () => Promise<RouteModule>, name: string, check?: Allow) => ({
+/**
+ * Every page loads on demand: the first load on a phone carries the shell and the page asked for, nothing else. A page
+ * names the on-demand catalog namespaces its words are in (shared/i18n/namespaces.ts); they come beside its module.
+ */
+const page = (
+  load: () => Promise<RouteModule>,
+  name: string,
+  check?: Allow,
+  namespaces: readonly OnDemandNamespace[] = [],
+) => ({
   lazy: async () => {
-    const m = await load();
+    const [m] = await Promise.all([load(), loadNamespaces(namespaces)]);
     return { Component: m[name] as ComponentType, loader: withGuard(check, m.loader), ErrorBoundary: m.ErrorBoundary };
   },
 });

@@ -1,5 +1,10 @@
-/** Made by the catalogs plugin in vite.config.ts: one lazily loaded chunk of precompiled messages per language. */
+/**
+ * Made by the catalogs plugin in vite.config.ts: one lazily loaded chunk of precompiled messages per language, and one
+ * per language and on-demand namespace.
+ */
 declare module 'virtual:mendery-catalogs' {
   import type { Messages } from '@lingui/core';
-  export const catalogs: Record<string, () => Promise<{ messages: Messages }>>;
+  type Loader = () => Promise<{ messages: Messages }>;
+  export const catalogs: Record<string, Loader>;
+  export const onDemand: Record<string, Record<import('../../../shared/i18n/namespaces').OnDemandNamespace, Loader>>;
 }

@@ -1,7 +1,8 @@
 import type { I18n } from '@lingui/core';
 import { createElement, Fragment, useSyncExternalStore, type ReactNode } from 'react';
-import { catalogs } from 'virtual:mendery-catalogs';
+import { catalogs, onDemand } from 'virtual:mendery-catalogs';
 import { DEFAULT_LANGUAGE, isLanguage, pickLanguage, type Language } from '../../../shared/i18n/languages';
+import type { OnDemandNamespace } from '../../../shared/i18n/namespaces';
 import { PSEUDO_LANGUAGE } from '../../../shared/i18n/pseudo';
 
 /**
@@ -34,14 +35,54 @@ export function initialLanguage(): UiLanguage {
   return pickLanguage([asked, storedLanguage(), ...(navigator.languages ?? [navigator.language])]);
 }
 
-/** Loads the language's messages (and Lingui with the first one), switches to it and sets `<html lang>`. */
-export async function activate(lang: UiLanguage): Promise<void> {
-  const [{ setupI18n }, { messages }] = await Promise.all([import('@lingui/core'), catalogs[lang]()]);
-  instance ??= setupI18n();
-  formats = isLanguage(lang) ? lang : DEFAULT_LANGUAGE;
-  instance.load(lang, messages);
-  instance.activate(lang, [formats]);
-  document.documentElement.lang = isLanguage(lang) ? lang : 'en-XA';
+/** The on-demand namespaces some page has asked for; a switch of language fetches them again in the new one. */
+const wanted = new Map<OnDemandNamespace, Promise<void>>();
+let target: UiLanguage | undefined;
+let activation: Promise<void> = Promise.resolve();
+
+/**
+ * Loads the language's messages (and Lingui with the first one) with the on-demand namespaces asked for so far,
+ * switches to it and sets `<html lang>`.
+ */
+export function activate(lang: UiLanguage): Promise<void> {
+  target = lang;
+  activation = (async () => {
+    const [{ setupI18n }, { messages }, ...more] = await Promise.all([
+      import('@lingui/core'),
+      catalogs[lang](),
+      ...[...wanted.keys()].map((ns) => onDemand[lang][ns]()),
+    ]);
+    instance ??= setupI18n();
+    formats = isLanguage(lang) ? lang : DEFAULT_LANGUAGE;
+    instance.load(lang, Object.assign({}, messages, ...more.map((m) => m.messages)));
+    instance.activate(lang, [formats]);
+    document.documentElement.lang = isLanguage(lang) ? lang : 'en-XA';
+  })();
+  return activation;
+}
+
+/**
+ * Fetches the words of on-demand namespaces (a page's own, see the router) in the current language and adds them to
+ * it; resolves once they can be read. Asking again for one already here costs nothing.
+ */
+export function loadNamespaces(names: readonly OnDemandNamespace[]): Promise<void> {
+  return Promise.all(
+    names.map((ns) => {
+      let loading = wanted.get(ns);
+      if (!loading) {
+        const lang = target ?? initialLanguage();
+        loading = onDemand[lang][ns]().then(async ({ messages }) => {
+          await activation;
+          // Had the language changed meanwhile, its activation fetched this namespace too.
+          if (instance?.locale === lang) instance.load(lang, messages);
+        });
+        // A failed fetch may be tried again by the next page that asks.
+        loading.catch(() => wanted.delete(ns));
+        wanted.set(ns, loading);
+      }
+      return loading;
+    }),
+  ).then(() => activation);
 }
 
 /**
