@@ -11,8 +11,8 @@ import { PSEUDO_LANGUAGE, pseudoText } from './shared/i18n/pseudo.js';
 
 /**
  * The message catalogs for the browser: `virtual:mendery-catalogs` exports one loader per language (`catalogs`), each
- * a chunk of its own with that language's messages precompiled (so Lingui's compiler never ships), and one loader per
- * language and on-demand namespace (`onDemand`), fetched with the pages that need it. The server's own namespaces
+ * a chunk of its own with that language's messages precompiled (so Lingui's compiler never ships);
+ * `virtual:mendery-catalogs-on-demand` exports one loader per language and on-demand namespace (`onDemand`). The server's own namespaces
  * (shared/i18n/namespaces.ts) stay out. The pseudo-locale is English run through pseudoText.
  */
 function catalogs(): Plugin {
@@ -20,6 +20,8 @@ function catalogs(): Plugin {
   const onDemand = new Set<string>(ON_DEMAND_NAMESPACES);
   const leftOut = new Set([...SERVER_ONLY_NAMESPACES, ...ON_DEMAND_NAMESPACES]);
   const list = 'virtual:mendery-catalogs';
+  // The on-demand loaders are a module of their own, fetched with the first page that needs one: not in the entry.
+  const byNamespaceList = 'virtual:mendery-catalogs-on-demand';
   const one = 'virtual:mendery-catalog/';
   /** The language's first chunk (no namespace) or one on-demand namespace. */
   const read = (lang: string, only?: string) => {
@@ -35,16 +37,19 @@ function catalogs(): Plugin {
   };
   return {
     name: 'mendery:catalogs',
-    resolveId: (id) => (id === list || id.startsWith(one) ? `\0${id}` : undefined),
+    resolveId: (id) => (id === list || id === byNamespaceList || id.startsWith(one) ? `\0${id}` : undefined),
     load(id) {
       const languages = [...LANGUAGES, PSEUDO_LANGUAGE];
       if (id === `\0${list}`) {
         const loaders = languages.map((l) => `${JSON.stringify(l)}: () => import('${one}${l}')`);
+        return `export const catalogs = {${loaders.join(',')}};`;
+      }
+      if (id === `\0${byNamespaceList}`) {
         const byNamespace = languages.map(
           (l) =>
             `${JSON.stringify(l)}: {${ON_DEMAND_NAMESPACES.map((ns) => `${ns}: () => import('${one}${l}/${ns}')`).join(',')}}`,
         );
-        return `export const catalogs = {${loaders.join(',')}};\nexport const onDemand = {${byNamespace.join(',')}};`;
+        return `export const onDemand = {${byNamespace.join(',')}};`;
       }
       if (!id.startsWith(`\0${one}`)) return undefined;
       const [lang, namespace] = id.slice(one.length + 1).split('/');

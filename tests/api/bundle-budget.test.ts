@@ -5,6 +5,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { RunningServer } from '../../server/src/server';
 import { createTestDatabase, type TestDatabase } from '../support/db';
 import { startTestServer } from '../support/server';
+import { ON_DEMAND_NAMESPACES } from '../../shared/i18n/namespaces';
 
 /** Vite's build manifest (build.manifest in vite.config.ts): each chunk with its static and dynamic imports. */
 type Manifest = Record<string, { file: string; isEntry?: boolean; imports?: string[]; dynamicImports?: string[] }>;
@@ -128,8 +129,16 @@ describe('What a phone downloads before the public pages work', () => {
   });
 
   it('fetches one language beside the page: its precompiled messages and Lingui at run time, never the compiler', async () => {
-    const languages = Object.keys(manifest).filter((k) => k.includes('virtual:mendery-catalog/'));
+    const catalogChunks = Object.keys(manifest).filter((k) => k.includes('virtual:mendery-catalog/'));
+    const loaders = Object.keys(manifest).find((k) => k.endsWith('virtual:mendery-catalogs-on-demand'))!;
+    expect(staticClosure([entry])).not.toContain(loaders);
+    const languages = catalogChunks.filter((k) => /virtual:mendery-catalog\/[^/]+$/.test(k));
     expect(languages.map((k) => k.split('/').pop()).sort()).toEqual(['de', 'en', 'fr', 'nl', 'xx-pseudo']);
+    // Each language's on-demand namespaces are chunks of their own, fetched with the pages that name them.
+    const onDemandChunks = catalogChunks.filter((k) => !languages.includes(k));
+    expect(onDemandChunks).toHaveLength(5 * ON_DEMAND_NAMESPACES.length);
+    expect(onDemandChunks).toContain(catalogChunks.find((k) => k.endsWith('virtual:mendery-catalog/nl/desk')));
+    for (const k of onDemandChunks) expect(staticClosure([entry]), k).not.toContain(k);
     const runtime = Object.keys(manifest).find((k) => k.includes('@lingui/core'))!;
     expect(manifest[entry].dynamicImports).toEqual(expect.arrayContaining([runtime, ...languages]));
     expect(staticClosure([entry])).not.toContain(runtime);

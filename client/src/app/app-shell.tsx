@@ -1,10 +1,12 @@
 import { lazy, Suspense, useEffect, useRef, useState } from 'react';
-import { Link, NavLink, Outlet, useNavigate, useNavigation } from 'react-router';
+import { Link, NavLink, Outlet, useNavigation } from 'react-router';
 import { paths } from '../config/paths';
-import { groupsWithRole, useUser } from '../lib/auth';
-import { useSignOut } from '../features/auth/api/sign-out';
+import { useUser } from '../lib/auth';
 import { Logo } from '../components/layouts/logo';
 import { useT } from '../lib/i18n';
+
+// A signed-in person's entries in the menu come in a chunk of their own: a visitor never loads them.
+const StaffNav = lazy(() => import('./staff-nav').then((m) => ({ default: m.StaffNav })));
 
 // The picker sits in the footer, below what the visitor came for: it loads after the page.
 const LanguagePicker = lazy(() =>
@@ -17,8 +19,6 @@ const linkClass = ({ isActive }: { isActive: boolean }) =>
 export function AppShell() {
   const t = useT();
   const { data: user } = useUser();
-  const signOut = useSignOut();
-  const navigate = useNavigate();
   const [open, setOpen] = useState(false);
   const menuButton = useRef<HTMLButtonElement>(null);
   useEffect(() => {
@@ -45,33 +45,6 @@ export function AppShell() {
     };
   }, [user]);
   const loading = useNavigation().state === 'loading';
-
-  const links: { to: string; label: string; end?: boolean }[] = [
-    { to: paths.events(), label: t('common.nav.sessions'), end: true },
-  ];
-  if (user) {
-    for (const g of groupsWithRole(user, 'organiser'))
-      links.push({ to: paths.groupEvents(g.groupId), label: `${g.groupName}` });
-    if (groupsWithRole(user, 'host').length) links.push({ to: paths.desk(), label: t('common.nav.reception') });
-    if (groupsWithRole(user, 'fixer').length)
-      links.push(
-        { to: paths.bench(), label: t('common.nav.bench') },
-        { to: paths.mySkills(), label: t('common.nav.skills') },
-      );
-    if (user.roles.length)
-      links.push(
-        { to: paths.knowledge(), label: t('common.nav.notes') },
-        { to: paths.calculators(), label: t('common.nav.calculators') },
-      );
-    links.push({ to: paths.myData(), label: t('common.nav.account') });
-    if (user.admin)
-      links.push(
-        { to: paths.admin(), label: t('common.nav.admin'), end: true },
-        { to: paths.networkImpact(), label: t('common.nav.impact') },
-        { to: paths.adminCategories(), label: t('common.nav.categories') },
-        { to: paths.adminMailbox(), label: t('common.nav.mailbox') },
-      );
-  }
 
   return (
     <div className="flex min-h-dvh flex-col">
@@ -113,22 +86,15 @@ export function AppShell() {
             className={`${open ? 'absolute inset-x-0 top-16 z-20 border-b border-ink/10 bg-white p-4 shadow-lg' : 'hidden'} lg:static lg:block lg:border-0 lg:p-0 lg:shadow-none`}
           >
             <ul className="flex flex-col gap-1 lg:flex-row lg:items-center" onClick={() => setOpen(false)}>
-              {links.map((l) => (
-                <li key={l.to}>
-                  <NavLink to={l.to} end={l.end} className={linkClass}>
-                    {l.label}
-                  </NavLink>
-                </li>
-              ))}
+              <li>
+                <NavLink to={paths.events()} end className={linkClass}>
+                  {t('common.nav.sessions')}
+                </NavLink>
+              </li>
               {user ? (
-                <li className="lg:ml-3">
-                  <button
-                    className="w-full whitespace-nowrap rounded-lg px-3 py-2 text-left font-semibold text-ink-soft hover:bg-navy/5"
-                    onClick={() => void signOut().then(() => navigate(paths.home()))}
-                  >
-                    {t('common.nav.signOut')} <span className="text-xs font-normal">({user.name})</span>
-                  </button>
-                </li>
+                <Suspense>
+                  <StaffNav user={user} linkClass={linkClass} />
+                </Suspense>
               ) : (
                 <>
                   <li>

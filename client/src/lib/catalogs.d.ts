@@ -6,5 +6,9 @@ declare module 'virtual:mendery-catalogs' {
   import type { Messages } from '@lingui/core';
   type Loader = () => Promise<{ messages: Messages }>;
   export const catalogs: Record<string, Loader>;
+}
+declare module 'virtual:mendery-catalogs-on-demand' {
+  import type { Messages } from '@lingui/core';
+  type Loader = () => Promise<{ messages: Messages }>;
   export const onDemand: Record<string, Record<import('../../../shared/i18n/namespaces').OnDemandNamespace, Loader>>;
 }

@@ -1,6 +1,6 @@
 import type { I18n } from '@lingui/core';
 import { createElement, Fragment, useSyncExternalStore, type ReactNode } from 'react';
-import { catalogs, onDemand } from 'virtual:mendery-catalogs';
+import { catalogs } from 'virtual:mendery-catalogs';
 import { DEFAULT_LANGUAGE, isLanguage, pickLanguage, type Language } from '../../../shared/i18n/languages';
 import type { OnDemandNamespace } from '../../../shared/i18n/namespaces';
 import { PSEUDO_LANGUAGE } from '../../../shared/i18n/pseudo';
@@ -35,6 +35,9 @@ export function initialLanguage(): UiLanguage {
   return pickLanguage([asked, storedLanguage(), ...(navigator.languages ?? [navigator.language])]);
 }
 
+const fetchNamespace = (lang: UiLanguage, ns: OnDemandNamespace) =>
+  import('virtual:mendery-catalogs-on-demand').then(({ onDemand }) => onDemand[lang][ns]());
+
 /** The on-demand namespaces some page has asked for; a switch of language fetches them again in the new one. */
 const wanted = new Map<OnDemandNamespace, Promise<void>>();
 let target: UiLanguage | undefined;
@@ -47,10 +50,10 @@ let activation: Promise<void> = Promise.resolve();
 export function activate(lang: UiLanguage): Promise<void> {
   target = lang;
   activation = (async () => {
-    const [{ setupI18n }, { messages }, ...more] = await Promise.all([
+    const [{ setupI18n }, { messages }, more] = await Promise.all([
       import('@lingui/core'),
       catalogs[lang](),
-      ...[...wanted.keys()].map((ns) => onDemand[lang][ns]()),
+      Promise.all([...wanted.keys()].map((ns) => fetchNamespace(lang, ns))),
     ]);
     instance ??= setupI18n();
     formats = isLanguage(lang) ? lang : DEFAULT_LANGUAGE;
@@ -71,7 +74,7 @@ export function loadNamespaces(names: readonly OnDemandNamespace[]): Promise<voi
       let loading = wanted.get(ns);
       if (!loading) {
         const lang = target ?? initialLanguage();
-        loading = onDemand[lang][ns]().then(async ({ messages }) => {
+        loading = fetchNamespace(lang, ns).then(async ({ messages }) => {
           await activation;
           // Had the language changed meanwhile, its activation fetched this namespace too.
           if (instance?.locale === lang) instance.load(lang, messages);
