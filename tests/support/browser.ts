@@ -69,7 +69,8 @@ export async function signedIn(
 ) {
   const context = await browser.newContext({ viewport, ...(locale ? { locale } : {}) });
   const page = await context.newPage();
-  await page.goto(`${baseUrl}/sign-in`);
+  // The sign-in page speaks the browser's language; the labels below are English, so a foreign browser asks for it.
+  await page.goto(`${baseUrl}/sign-in${locale && !locale.startsWith('en') ? '?lang=en' : ''}`);
   await page.getByLabel('E-mail').fill(`${who}@example.org`);
   await page.getByLabel('Password').fill(DEMO_PASSWORD);
   await page.getByRole('button', { name: 'Sign in', exact: true }).click();

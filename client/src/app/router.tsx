@@ -97,13 +97,25 @@ export const router = createBrowserRouter([
         children: [
           { index: true, ...page(() => import('../routes/home'), 'HomePage') },
           { path: 'safety', ...page(() => import('../routes/safety'), 'SafetyPage') },
-          { path: 'sign-in', ...page(() => import('../routes/auth/sign-in'), 'SignInPage') },
-          { path: 'volunteer', ...page(() => import('../routes/auth/volunteer'), 'VolunteerPage') },
-          { path: 'verify-email', ...page(() => import('../routes/auth/email-links'), 'VerifyEmailPage') },
-          { path: 'forgot-password', ...page(() => import('../routes/auth/email-links'), 'ForgotPasswordPage') },
-          { path: 'reset-password', ...page(() => import('../routes/auth/email-links'), 'ResetPasswordPage') },
-          { path: 'setup', ...page(() => import('../routes/auth/setup'), 'SetupPage') },
-          { path: 'join/:token', ...page(() => import('../routes/auth/join'), 'JoinPage') },
+          { path: 'sign-in', ...page(() => import('../routes/auth/sign-in'), 'SignInPage', undefined, ['account']) },
+          {
+            path: 'volunteer',
+            ...page(() => import('../routes/auth/volunteer'), 'VolunteerPage', undefined, ['account']),
+          },
+          {
+            path: 'verify-email',
+            ...page(() => import('../routes/auth/email-links'), 'VerifyEmailPage', undefined, ['account']),
+          },
+          {
+            path: 'forgot-password',
+            ...page(() => import('../routes/auth/email-links'), 'ForgotPasswordPage', undefined, ['account']),
+          },
+          {
+            path: 'reset-password',
+            ...page(() => import('../routes/auth/email-links'), 'ResetPasswordPage', undefined, ['account']),
+          },
+          { path: 'setup', ...page(() => import('../routes/auth/setup'), 'SetupPage', undefined, ['account']) },
+          { path: 'join/:token', ...page(() => import('../routes/auth/join'), 'JoinPage', undefined, ['account']) },
           { path: 'start', loader: start },
           {
             path: 'bench',
@@ -168,7 +180,10 @@ export const router = createBrowserRouter([
             path: 'groups/:groupId/salvage',
             ...page(() => import('../routes/toolkit/salvage'), 'SalvagePage', allow.volunteer),
           },
-          { path: 'rebook/:token', ...page(() => import('../routes/impact/rebook'), 'RebookPage') },
+          {
+            path: 'rebook/:token',
+            ...page(() => import('../routes/impact/rebook'), 'RebookPage', undefined, ['account']),
+          },
           {
             path: 'events/:eventId/live',
             ...page(() => import('../routes/event-day/live'), 'LiveViewPage', allow.organiser),
@@ -197,7 +212,10 @@ export const router = createBrowserRouter([
             ...page(() => import('../routes/groups/new-event'), 'NewEventPage', allow.organiser),
           },
           { path: 'groups/:groupId/privacy', ...page(() => import('../routes/privacy/group'), 'GroupPrivacyPage') },
-          { path: 'me/data', ...page(() => import('../routes/privacy/account'), 'MyDataPage', allow.signedIn) },
+          {
+            path: 'me/data',
+            ...page(() => import('../routes/privacy/account'), 'MyDataPage', allow.signedIn, ['account']),
+          },
           {
             path: 'groups/:groupId/settings',
             ...page(() => import('../routes/groups/settings'), 'GroupSettingsPage', allow.organiser),

@@ -23,6 +23,7 @@ import { requireAdmin, requireUser } from './guards';
 import * as twoFactor from './two-factor';
 import { sessionCookie } from './session';
 import { createFirstAdmin } from './setup';
+import { languageOf, translate } from '../i18n';
 
 const regenerate = (req: Request) =>
   new Promise<void>((res, rej) => req.session.regenerate((e) => (e ? rej(e) : res())));
@@ -149,12 +150,12 @@ export function authRoutes(ctx: AppContext, csrfToken: (req: Request) => string)
 
   r.post('/two-factor/enable', requireAdmin, loginPerSource, async (req, res) => {
     await twoFactor.confirmSetup(ctx, req.user!.id, body(req, totpCodeSchema).code);
-    res.json({ enabled: true, message: 'Two-step sign-in is on. Keep your app: you need it each time you sign in.' });
+    res.json({ enabled: true, message: translate(languageOf(req, res.locals), 'account.server.twoStepOn') });
   });
 
   r.post('/two-factor/disable', requireUser, loginPerSource, async (req, res) => {
     await twoFactor.turnOff(ctx, req.user!.id, body(req, turnOffTwoFactorSchema));
-    res.json({ enabled: false, message: 'Two-step sign-in is off.' });
+    res.json({ enabled: false, message: translate(languageOf(req, res.locals), 'account.server.twoStepOff') });
   });
 
   // Signed out is an answer, not an error: a 401 here would log in every anonymous visitor's console.
@@ -180,30 +181,30 @@ export function authRoutes(ctx: AppContext, csrfToken: (req: Request) => string)
 
   r.post('/signup', mailLinks, async (req, res) => {
     await auth.signup(ctx, body(req, signupSchema));
-    res.status(202).json({ message: 'Check your mail: we sent a link to confirm your address.' });
+    res.status(202).json({ message: translate(languageOf(req, res.locals), 'account.server.signup') });
   });
 
   r.post('/verify-email', async (req, res) => {
     await auth.verifyEmail(ctx, body(req, tokenSchema).token);
-    res.json({ message: 'Your e-mail address is confirmed. You can sign in now.' });
+    res.json({ message: translate(languageOf(req, res.locals), 'account.server.verified') });
   });
 
   r.post('/password-reset', mailLinks, async (req, res) => {
     await auth.requestPasswordReset(ctx, body(req, resetRequestSchema).email);
-    res.status(202).json({ message: 'If that address has an account, a link to choose a new password is on its way.' });
+    res.status(202).json({ message: translate(languageOf(req, res.locals), 'account.server.resetSent') });
   });
 
   r.post('/password-reset/confirm', async (req, res) => {
     const input = body(req, resetConfirmSchema);
     await auth.confirmPasswordReset(ctx, input.token, input.password);
-    res.json({ message: 'Your password is changed. Sign in with the new one.' });
+    res.json({ message: translate(languageOf(req, res.locals), 'account.server.resetDone') });
   });
 
   // A wrong current password counts as a failed sign-in from that source.
   r.post('/password', requireUser, loginPerSource, async (req, res) => {
     const input = body(req, changePasswordSchema);
     await auth.changePassword(ctx, req.user!.id, req.sessionID, input);
-    res.json({ message: 'Your password is changed. Other devices signed in to your account are signed out.' });
+    res.json({ message: translate(languageOf(req, res.locals), 'account.server.passwordChanged') });
   });
 
   r.post('/first-admin', async (req, res) => {

@@ -10,8 +10,10 @@ import { useRequestReset } from '../../features/auth/api/request-reset';
 import { useVerifyEmail } from '../../features/auth/api/verify-email';
 import { ApiError } from '../../lib/api';
 import { applyServerErrors, useZodForm } from '../../lib/form';
+import { tr, useT } from '../../lib/i18n';
 
 export function VerifyEmailPage() {
+  const t = useT();
   const [params] = useSearchParams();
   const verify = useVerifyEmail();
   const token = params.get('token') ?? '';
@@ -21,32 +23,32 @@ export function VerifyEmailPage() {
   }, [token, mutate]);
   return (
     <Card className="mx-auto max-w-lg">
-      <h1 className="text-2xl">Confirm your e-mail address</h1>
+      <h1 className="text-2xl">{t('account.verify.title')}</h1>
       <div className="mt-4">
-        {!token && <Alert tone="error">This link has no token. Open the link from the mail again.</Alert>}
-        {verify.isPending && <Spinner label="Confirming…" />}
+        {!token && <Alert tone="error">{t('account.verify.noToken')}</Alert>}
+        {verify.isPending && <Spinner label={t('account.verify.confirming')} />}
         {verify.error && (
           <Alert tone="error">
             {verify.error instanceof ApiError && verify.error.fields?.token
-              ? `${verify.error.fields.token} Open the link from the mail again, or copy the whole address into the browser.`
+              ? t('account.verify.badToken', { problem: verify.error.fields.token })
               : verify.error.message}
           </Alert>
         )}
         {verify.isSuccess && (
-          <Alert tone="success" title="Thank you">
-            {verify.data.message} An organiser of the group will confirm your place and you will get a mail when they
-            have.
+          <Alert tone="success" title={t('account.verify.thanks')}>
+            {verify.data.message} {t('account.verify.next')}
           </Alert>
         )}
       </div>
       <Link to={paths.signIn()} className="mt-4 inline-block font-bold text-navy underline">
-        Go to sign-in
+        {t('account.goToSignIn')}
       </Link>
     </Card>
   );
 }
 
 export function ForgotPasswordPage() {
+  const t = useT();
   const request = useRequestReset();
   const form = useZodForm(resetRequestSchema, { email: '' });
   const [formError, setFormError] = useState<string | null>(null);
@@ -60,24 +62,24 @@ export function ForgotPasswordPage() {
   });
   return (
     <Card className="mx-auto max-w-lg">
-      <h1 className="text-2xl">Forgot your password?</h1>
+      <h1 className="text-2xl">{t('account.forgot.title')}</h1>
       {request.isSuccess ? (
-        <Alert tone="success">{request.data.message} The link works once, for one hour.</Alert>
+        <Alert tone="success">
+          {request.data.message} {t('account.forgot.once')}
+        </Alert>
       ) : (
         <form onSubmit={onSubmit} noValidate className="mt-4 space-y-4">
-          <p className="text-ink-soft">
-            Enter the address you signed up with. We will mail you a link to choose a new password.
-          </p>
+          <p className="text-ink-soft">{t('account.forgot.lead')}</p>
           {formError && <Alert tone="error">{formError}</Alert>}
           <TextField
-            label="E-mail"
+            label={t('account.email')}
             type="email"
             autoComplete="email"
             error={form.formState.errors.email?.message}
             {...form.register('email')}
           />
           <Button type="submit" busy={form.formState.isSubmitting} className="w-full">
-            Send the link
+            {t('account.forgot.submit')}
           </Button>
         </form>
       )}
@@ -86,6 +88,7 @@ export function ForgotPasswordPage() {
 }
 
 export function ResetPasswordPage() {
+  const t = useT();
   const [params] = useSearchParams();
   const navigate = useNavigate();
   const confirm = useConfirmReset();
@@ -103,16 +106,17 @@ export function ResetPasswordPage() {
   });
   return (
     <Card className="mx-auto max-w-lg">
-      <h1 className="text-2xl">Choose a new password</h1>
+      <h1 className="text-2xl">{t('account.reset.title')}</h1>
       {!token.success ? (
         // A cut link is told apart before anyone types a new password twice for nothing.
         <div className="mt-4 space-y-3">
           <Alert tone="error">
-            {token.error.issues[0]?.message ?? 'The link is incomplete.'} Open the link from the mail again, or ask for
-            a new one.
+            {t('account.reset.openAgain', {
+              problem: tr(token.error.issues[0]?.message ?? 'account.reset.incomplete'),
+            })}
           </Alert>
           <Link to={paths.forgotPassword()} className="inline-block font-bold text-navy underline">
-            Ask for a new link
+            {t('account.reset.askNew')}
           </Link>
         </div>
       ) : (
@@ -121,22 +125,22 @@ export function ResetPasswordPage() {
             <Alert tone="error">{formError ?? form.formState.errors.token?.message}</Alert>
           )}
           <TextField
-            label="New password"
+            label={t('account.newPassword')}
             type="password"
             autoComplete="new-password"
-            hint="At least 10 characters."
+            hint={t('account.atLeast10')}
             error={form.formState.errors.password?.message}
             {...form.register('password')}
           />
           <TextField
-            label="The same again"
+            label={t('account.sameAgain')}
             type="password"
             autoComplete="new-password"
             error={form.formState.errors.confirm?.message}
             {...form.register('confirm')}
           />
           <Button type="submit" busy={form.formState.isSubmitting} className="w-full">
-            Save the new password
+            {t('account.saveNewPassword')}
           </Button>
         </form>
       )}

@@ -1,6 +1,5 @@
 import { useState } from 'react';
 import { Link, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router';
-import { ROLE_LABELS } from '../../../../shared/constants';
 import { inviteSignupSchema } from '../../../../shared/schemas/auth';
 import { Button } from '../../components/ui/button';
 import { Alert, Card, Spinner } from '../../components/ui/feedback';
@@ -13,6 +12,7 @@ import { useSignUpFromInvite } from '../../features/groups/api/sign-up-from-invi
 import { applyServerErrors, useZodForm } from '../../lib/form';
 import { landingPath } from '../../lib/roles';
 import { queryClient } from '../../lib/query-client';
+import { trParts, useT } from '../../lib/i18n';
 
 /** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
 export const loader = ({ params }: LoaderFunctionArgs) =>
@@ -20,6 +20,7 @@ export const loader = ({ params }: LoaderFunctionArgs) =>
 
 /** The link in an invitation mail: accept as the signed-in person, or make the account it was meant for. */
 export function JoinPage() {
+  const t = useT();
   const token = useParams().token ?? '';
   const invitation = useInvitation(token);
   const { data: user } = useUser();
@@ -31,29 +32,33 @@ export function JoinPage() {
   if (invitation.isPending) return <Spinner />;
   if (invitation.error)
     return (
-      <Alert tone="error" title="Invitation not valid">
+      <Alert tone="error" title={t('account.join.invalid')}>
         {invitation.error.message}
       </Alert>
     );
   const i = invitation.data;
   return (
     <Card className="mx-auto max-w-lg space-y-4">
-      <h1 className="text-2xl">Join {i.groupName}</h1>
+      <h1 className="text-2xl">{t('account.join.title', { group: i.groupName })}</h1>
       <p>
-        You are invited as <strong>{ROLE_LABELS[i.role].toLowerCase()}</strong>, at {i.email}.
+        {trParts(
+          'account.join.invitedAs',
+          { role: <strong>{t(`account.role.${i.role}`)}</strong> },
+          { email: i.email },
+        )}
       </p>
       {accept.isSuccess ? (
-        <Alert tone="success" title="Welcome">
-          You are now {ROLE_LABELS[i.role].toLowerCase()} with {i.groupName}.{' '}
+        <Alert tone="success" title={t('account.join.welcome')}>
+          {t('account.join.nowRole', { role: t(`account.role.${i.role}`), group: i.groupName })}{' '}
           <Link className="font-bold underline" to={paths.start()}>
-            Go to your page
+            {t('account.join.yourPage')}
           </Link>
         </Alert>
       ) : user ? (
         <>
           {accept.error && <Alert tone="error">{accept.error.message}</Alert>}
           <Button busy={accept.isPending} onClick={() => accept.mutate()}>
-            Accept as {user.name}
+            {t('account.join.acceptAs', { name: user.name })}
           </Button>
         </>
       ) : i.hasAccount ? (
@@ -61,7 +66,7 @@ export function JoinPage() {
           to={paths.signIn(`/join/${token}`)}
           className="inline-flex min-h-11 items-center rounded-lg bg-copper px-5 font-bold text-white"
         >
-          Sign in to accept
+          {t('account.join.signInToAccept')}
         </Link>
       ) : (
         <form
@@ -79,21 +84,21 @@ export function JoinPage() {
         >
           {formError && <Alert tone="error">{formError}</Alert>}
           <TextField
-            label="Your name"
+            label={t('account.yourName')}
             autoComplete="name"
             error={form.formState.errors.name?.message}
             {...form.register('name')}
           />
           <TextField
-            label="Choose a password"
+            label={t('account.join.choosePassword')}
             type="password"
             autoComplete="new-password"
-            hint="At least 10 characters."
+            hint={t('account.atLeast10')}
             error={form.formState.errors.password?.message}
             {...form.register('password')}
           />
           <Button type="submit" busy={form.formState.isSubmitting} className="w-full">
-            Create my account and join
+            {t('account.join.submit')}
           </Button>
         </form>
       )}

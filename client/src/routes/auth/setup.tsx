@@ -9,12 +9,14 @@ import { useConfig, configQuery } from '../../features/auth/api/get-config';
 import { useCreateFirstAdmin } from '../../features/auth/api/create-first-admin';
 import { applyServerErrors, useZodForm } from '../../lib/form';
 import { queryClient } from '../../lib/query-client';
+import { useT } from '../../lib/i18n';
 
 /** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
 export const loader = () => queryClient.ensureQueryData(configQuery).catch(() => null);
 
 /** Shown once, on an empty installation: the first person becomes the platform admin. */
 export function SetupPage() {
+  const t = useT();
   const config = useConfig();
   const create = useCreateFirstAdmin();
   const navigate = useNavigate();
@@ -34,46 +36,48 @@ export function SetupPage() {
   });
   return (
     <div className="mx-auto max-w-lg">
-      <PageTitle
-        title="Set up Mendery"
-        lead="This installation is empty. Create the first admin account: it runs the network, adds repair groups and reads the local mailbox."
-      />
+      <PageTitle title={t('account.setup.title')} lead={t('account.setup.lead')} />
       <Card>
         <form onSubmit={onSubmit} noValidate className="space-y-4">
           {formError && <Alert tone="error">{formError}</Alert>}
           <TextField
-            label="Setup code"
+            label={t('account.setup.code')}
             autoComplete="off"
             spellCheck={false}
-            hint="Mendery printed it in the server’s console when it started, on the line that begins “Setup code”."
+            hint={t('account.setup.codeHint')}
             error={errors.setupCode?.message}
             {...form.register('setupCode')}
           />
-          <TextField label="Your name" autoComplete="name" error={errors.name?.message} {...form.register('name')} />
           <TextField
-            label="E-mail"
+            label={t('account.yourName')}
+            autoComplete="name"
+            error={errors.name?.message}
+            {...form.register('name')}
+          />
+          <TextField
+            label={t('account.email')}
             type="email"
             autoComplete="email"
             error={errors.email?.message}
             {...form.register('email')}
           />
           <TextField
-            label="Password"
+            label={t('account.password')}
             type="password"
             autoComplete="new-password"
-            hint="At least 10 characters."
+            hint={t('account.atLeast10')}
             error={errors.password?.message}
             {...form.register('password')}
           />
           <TextField
-            label="The same again"
+            label={t('account.sameAgain')}
             type="password"
             autoComplete="new-password"
             error={errors.confirm?.message}
             {...form.register('confirm')}
           />
           <Button type="submit" busy={form.formState.isSubmitting} className="w-full">
-            Create the admin account
+            {t('account.setup.submit')}
           </Button>
         </form>
       </Card>

@@ -13,18 +13,21 @@ import { useUser } from '../../lib/auth';
 import { applyServerErrors, useZodForm } from '../../lib/form';
 import { landingPath } from '../../lib/roles';
 import { queryClient } from '../../lib/query-client';
+import { trParts, useT } from '../../lib/i18n';
 
 const DEMO_ACCOUNTS = [
-  ['organiser@example.org', 'Organiser of Kestlebridge Menders (and a fixer at Orrin Vale)'],
-  ['fixer@example.org', 'Fixer'],
-  ['host@example.org', 'Reception desk'],
-  ['admin@example.org', 'Network admin'],
+  ['organiser@example.org', 'account.signIn.demo.organiser'],
+  ['organisator@example.org', 'account.signIn.demo.organiserNl'],
+  ['fixer@example.org', 'account.signIn.demo.fixer'],
+  ['host@example.org', 'account.signIn.demo.host'],
+  ['admin@example.org', 'account.signIn.demo.admin'],
 ];
 
 /** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
 export const loader = () => queryClient.ensureQueryData(configQuery).catch(() => null);
 
 export function SignInPage() {
+  const t = useT();
   const [params] = useSearchParams();
   const navigate = useNavigate();
   const { data: user } = useUser();
@@ -58,7 +61,7 @@ export function SignInPage() {
   return (
     <div className="mx-auto grid max-w-4xl gap-6 md:grid-cols-2">
       <Card>
-        <h1 className="mb-4 text-2xl">Sign in</h1>
+        <h1 className="mb-4 text-2xl">{t('account.signIn.title')}</h1>
         {codeStep ? (
           <SignInCodeForm
             onSignedIn={(u) => navigate(safeNext ?? landingPath(u), { replace: true })}
@@ -72,40 +75,41 @@ export function SignInPage() {
           <form onSubmit={onSubmit} noValidate className="space-y-4">
             {formError && <Alert tone="error">{formError}</Alert>}
             <TextField
-              label="E-mail"
+              label={t('account.email')}
               type="email"
               autoComplete="username"
               error={form.formState.errors.email?.message}
               {...form.register('email')}
             />
             <TextField
-              label="Password"
+              label={t('account.password')}
               type="password"
               autoComplete="current-password"
               error={form.formState.errors.password?.message}
               {...form.register('password')}
             />
             <Button type="submit" busy={form.formState.isSubmitting} className="w-full">
-              Sign in
+              {t('account.signIn.submit')}
             </Button>
           </form>
         )}
         <div className="mt-4 flex flex-wrap justify-between gap-2 text-sm">
           <Link to={paths.forgotPassword()} className="font-semibold text-navy underline">
-            Forgot your password?
+            {t('account.signIn.forgot')}
           </Link>
           <Link to={paths.volunteer()} className="font-semibold text-navy underline">
-            New volunteer? Sign up
+            {t('account.signIn.volunteer')}
           </Link>
         </div>
-        <p className="mt-4 text-sm text-ink-soft">Visitors do not need an account to book a repair slot.</p>
+        <p className="mt-4 text-sm text-ink-soft">{t('account.signIn.visitorsNoAccount')}</p>
       </Card>
       {config.data?.demo && (
         <Card className="bg-copper-light/40">
-          <h2 className="text-lg">Demo accounts</h2>
+          <h2 className="text-lg">{t('account.signIn.demoTitle')}</h2>
           <p className="mt-1 text-sm text-ink-soft">
-            This installation holds invented demo data. Every demo account uses the password{' '}
-            <code className="rounded bg-white px-1 font-bold whitespace-nowrap">{DEMO_PASSWORD}</code>.
+            {trParts('account.signIn.demoLead', {
+              password: <code className="rounded bg-white px-1 font-bold whitespace-nowrap">{DEMO_PASSWORD}</code>,
+            })}
           </p>
           <ul className="mt-3 space-y-2">
             {DEMO_ACCOUNTS.map(([email, label]) => (
@@ -116,7 +120,7 @@ export function SignInPage() {
                   className="w-full rounded-lg bg-white px-3 py-2 text-left ring-1 ring-ink/10 hover:ring-copper"
                 >
                   <span className="block font-bold text-navy">{email}</span>
-                  <span className="text-sm text-ink-soft">{label}</span>
+                  <span className="text-sm text-ink-soft">{t(label)}</span>
                 </button>
               </li>
             ))}

@@ -9,11 +9,13 @@ import { useSignUp } from '../../features/auth/api/sign-up';
 import { usePublicGroups, publicGroupsQuery } from '../../features/groups/api/get-public-groups';
 import { applyServerErrors, useZodForm } from '../../lib/form';
 import { queryClient } from '../../lib/query-client';
+import { useT } from '../../lib/i18n';
 
 /** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
 export const loader = () => queryClient.ensureQueryData(publicGroupsQuery()).catch(() => null);
 
 export function VolunteerPage() {
+  const t = useT();
   const groups = usePublicGroups();
   const signUp = useSignUp();
   const form = useZodForm(signupSchema, { name: '', email: '', password: '', role: 'fixer' });
@@ -32,12 +34,12 @@ export function VolunteerPage() {
   if (signUp.isSuccess) {
     return (
       <Card className="mx-auto max-w-lg">
-        <h1 className="text-2xl">Check your mail</h1>
+        <h1 className="text-2xl">{t('account.volunteer.checkMail')}</h1>
         <p className="mt-2">
-          {signUp.data.message} Once you have confirmed it, an organiser of the group confirms your place.
+          {signUp.data.message} {t('account.volunteer.afterConfirm')}
         </p>
         <Link to={paths.signIn()} className="mt-4 inline-block font-bold text-navy underline">
-          Go to sign-in
+          {t('account.goToSignIn')}
         </Link>
       </Card>
     );
@@ -45,37 +47,44 @@ export function VolunteerPage() {
 
   return (
     <div className="mx-auto max-w-lg">
-      <PageTitle
-        title="Volunteer with a repair group"
-        lead="Fixers diagnose and mend alongside visitors; reception welcomes people and keeps the queue moving. No experience with every kind of item is needed."
-      />
+      <PageTitle title={t('account.volunteer.title')} lead={t('account.volunteer.lead')} />
       <Card>
         {groups.isPending ? (
-          <Spinner label="Loading groups…" />
+          <Spinner label={t('account.volunteer.loadingGroups')} />
         ) : groups.data?.length === 0 ? (
-          <Alert>No repair group has joined Mendery yet, so there is nobody to volunteer with.</Alert>
+          <Alert>{t('account.volunteer.noGroups')}</Alert>
         ) : (
           <form onSubmit={onSubmit} noValidate className="space-y-4">
             {formError && <Alert tone="error">{formError}</Alert>}
-            <TextField label="Your name" autoComplete="name" error={errors.name?.message} {...form.register('name')} />
             <TextField
-              label="E-mail"
+              label={t('account.yourName')}
+              autoComplete="name"
+              error={errors.name?.message}
+              {...form.register('name')}
+            />
+            <TextField
+              label={t('account.email')}
               type="email"
               autoComplete="email"
               error={errors.email?.message}
               {...form.register('email')}
             />
             <TextField
-              label="Password"
+              label={t('account.password')}
               type="password"
               autoComplete="new-password"
-              hint="At least 10 characters."
+              hint={t('account.atLeast10')}
               error={errors.password?.message}
               {...form.register('password')}
             />
-            <SelectField label="Group" error={errors.groupId?.message} defaultValue="" {...form.register('groupId')}>
+            <SelectField
+              label={t('account.volunteer.group')}
+              error={errors.groupId?.message}
+              defaultValue=""
+              {...form.register('groupId')}
+            >
               <option value="" disabled>
-                Choose a group…
+                {t('account.volunteer.chooseGroup')}
               </option>
               {groups.data?.map((g) => (
                 <option key={g.id} value={g.id}>
@@ -84,10 +93,10 @@ export function VolunteerPage() {
               ))}
             </SelectField>
             <fieldset className="space-y-2">
-              <legend className="font-semibold">How would you like to help?</legend>
+              <legend className="font-semibold">{t('account.volunteer.how')}</legend>
               {[
-                ['fixer', 'As a fixer', 'Repair items with visitors at a bench.'],
-                ['host', 'At reception', 'Welcome visitors, check them in and tag their items.'],
+                ['fixer', t('account.volunteer.asFixer'), t('account.volunteer.asFixerText')],
+                ['host', t('account.volunteer.asHost'), t('account.volunteer.asHostText')],
               ].map(([value, label, text]) => (
                 <label
                   key={value}
@@ -103,7 +112,7 @@ export function VolunteerPage() {
               {errors.role && <p className="text-sm font-semibold text-alert">{errors.role.message}</p>}
             </fieldset>
             <Button type="submit" busy={form.formState.isSubmitting} className="w-full">
-              Sign up
+              {t('account.volunteer.submit')}
             </Button>
           </form>
         )}

@@ -10,6 +10,7 @@ import { useBookReturn } from '../../features/impact/api/book-return';
 import { rebookQuery, useRebook } from '../../features/impact/api/get-rebook';
 import { queryClient } from '../../lib/query-client';
 import { ApiError } from '../../lib/api';
+import { trParts, useLanguage, useT } from '../../lib/i18n';
 
 type Session = RebookView['events'][number];
 type Chosen = { event: Session; slot: Session['slots'][number] };
@@ -22,24 +23,24 @@ export const loader = ({ params }: LoaderFunctionArgs) => queryClient.ensureQuer
 
 /** A link that does not work, in the visitor's words; anything else can be tried again. */
 export function ErrorBoundary() {
+  const t = useT();
   const err = useRouteError();
   const revalidator = useRevalidator();
   const notValid = err instanceof ApiError && (err.status === 404 || err.status === 400);
   return (
     <div className="mx-auto max-w-xl space-y-4">
-      <PageTitle title={notValid ? 'This link does not work' : 'Something went wrong'} />
+      <PageTitle title={notValid ? t('account.rebook.linkBroken') : t('account.rebook.wrong')} />
       {notValid ? (
-        <Alert tone="info" title="We could not find this re-booking link">
-          It may be incomplete: open it again from the mail we sent you, or copy the whole address. If it still does not
-          work, reply to that mail and the group will book you in.
+        <Alert tone="info" title={t('account.rebook.notFoundTitle')}>
+          {t('account.rebook.notFound')}
         </Alert>
       ) : (
         <>
-          <Alert tone="error" title="The page could not be loaded">
-            {err instanceof Error ? err.message : 'Try again in a moment.'}
+          <Alert tone="error" title={t('account.rebook.loadFailed')}>
+            {err instanceof Error ? err.message : t('account.rebook.tryLater')}
           </Alert>
           <Button variant="secondary" busy={revalidator.state === 'loading'} onClick={() => revalidator.revalidate()}>
-            Try again
+            {t('account.rebook.tryAgain')}
           </Button>
         </>
       )}
@@ -49,6 +50,8 @@ export function ErrorBoundary() {
 
 /** The visitor's priority link after a visit that ended needing a part: pick a time to come back with it. */
 export function RebookPage() {
+  const t = useT();
+  const lang = useLanguage();
   const token = useParams().token ?? '';
   const { data: v } = useRebook(token);
   const book = useBookReturn(token);
@@ -58,30 +61,33 @@ export function RebookPage() {
 
   const tz = v.group.timeZone;
   const item = itemName(v.item);
+  // A kind of item inside a sentence: lower case, but for German, whose nouns keep their capital.
+  const kind = lang === 'de' ? v.item.categoryName : v.item.categoryName.toLowerCase();
+  const whenOf = (c: Chosen) =>
+    t('account.rebook.when', {
+      session: c.event.title,
+      day: formatDay(c.slot.startsAt, tz, lang),
+      time: formatTime(c.slot.startsAt, tz, lang),
+    });
 
   if (done) {
     return (
       <div className="mx-auto max-w-xl space-y-4" data-testid="rebook-done">
         <div className="rounded-xl bg-sage p-5 text-white">
-          <p className="text-2xl font-extrabold">You are booked, {v.visitorName}</p>
-          <p className="mt-1">
-            {when}. Bring your {v.item.categoryName.toLowerCase()} and the part.
-          </p>
+          <p className="text-2xl font-extrabold">{t('account.rebook.booked', { name: v.visitorName })}</p>
+          <p className="mt-1">{t('account.rebook.bring', { when, kind })}</p>
         </div>
         <Card>
-          <p className="text-sm text-ink-soft">Your booking reference</p>
+          <p className="text-sm text-ink-soft">{t('account.rebook.reference')}</p>
           <p className="font-mono text-3xl font-extrabold tracking-wider text-navy" data-testid="rebook-reference">
             {done.reference}
           </p>
-          <p className="mt-2 text-sm">
-            We have sent you a confirmation by e-mail. Its link, and the one below, let you see, move or cancel the
-            visit.
-          </p>
+          <p className="mt-2 text-sm">{t('account.rebook.confirmationSent')}</p>
           <Link
             to={paths.booking(done.reference, done.manageToken)}
             className="mt-4 inline-flex min-h-11 items-center rounded-lg bg-copper px-4 font-bold text-white hover:bg-copper-dark"
           >
-            See or change my booking
+            {t('account.rebook.seeBooking')}
           </Link>
         </Card>
       </div>
@@ -92,49 +98,56 @@ export function RebookPage() {
 
   const confirm = () => {
     if (!chosen) return;
-    setWhen(`${chosen.event.title}, ${formatDay(chosen.slot.startsAt, tz)} at ${formatTime(chosen.slot.startsAt, tz)}`);
+    setWhen(whenOf(chosen));
     book.mutate(chosen.slot.id, { onSettled: () => setChosen(null) });
   };
 
   return (
     <div className="mx-auto max-w-2xl space-y-5">
-      <PageTitle title={`Hello ${v.visitorName}`} lead={`Book a return visit to ${v.group.name}.`} />
+      <PageTitle
+        title={t('account.rebook.hello', { name: v.visitorName })}
+        lead={t('account.rebook.lead', { group: v.group.name })}
+      />
 
       <Card>
         <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1">
-          <dt className="font-semibold text-ink-soft">Your item</dt>
+          <dt className="font-semibold text-ink-soft">{t('account.rebook.yourItem')}</dt>
           <dd className="font-bold text-navy">{item}</dd>
-          <dt className="font-semibold text-ink-soft">The part</dt>
-          <dd>{v.item.part ?? 'The part the fixer told you about'}</dd>
+          <dt className="font-semibold text-ink-soft">{t('account.rebook.part')}</dt>
+          <dd>{v.item.part ?? t('account.rebook.partUnnamed')}</dd>
         </dl>
       </Card>
 
       {/* The booking refreshes this view before the mutation settles; until then the times stay as they were. */}
       {v.booked && !book.isPending ? (
-        <Alert tone="success" title="Your return visit is booked already">
-          Use the link in its confirmation mail to see, move or cancel it. We look forward to seeing you and your{' '}
-          {v.item.categoryName.toLowerCase()} again.
+        <Alert tone="success" title={t('account.rebook.alreadyTitle')}>
+          {t('account.rebook.already', { kind })}
         </Alert>
       ) : closed ? (
-        <Alert tone="info" title="This repair is closed">
-          {v.group.name} has closed this repair. If you still want to come back with the part, reply to their mail or
-          book a normal slot on the{' '}
-          <Link to={paths.events()} className="font-bold underline">
-            sessions page
-          </Link>
-          .
+        <Alert tone="info" title={t('account.rebook.closedTitle')}>
+          {trParts(
+            'account.rebook.closed',
+            {
+              link: (
+                <Link to={paths.events()} className="font-bold underline">
+                  {t('account.rebook.sessionsPage')}
+                </Link>
+              ),
+            },
+            { group: v.group.name },
+          )}
         </Alert>
       ) : (
         <>
-          <p>Choose a time when you have the part. This link keeps a place for you even when a session is full.</p>
+          <p>{t('account.rebook.choose')}</p>
           {book.isError && (
-            <Alert tone="error" title="That did not work">
+            <Alert tone="error" title={t('account.rebook.failed')}>
               {book.error.message}
             </Alert>
           )}
           {v.events.length === 0 ? (
-            <EmptyState title="No sessions open for booking yet" icon="▦">
-              Keep this link: it works for the next sessions too, as soon as {v.group.name} publishes them.
+            <EmptyState title={t('account.rebook.noSessionsTitle')} icon="▦">
+              {t('account.rebook.noSessions', { group: v.group.name })}
             </EmptyState>
           ) : (
             v.events.map((e) => (
@@ -144,10 +157,10 @@ export function RebookPage() {
                     {e.title}
                   </h2>
                   <p className="text-sm font-bold text-copper-dark">
-                    {formatDay(e.startsAt, tz)} · {formatTimeRange(e.startsAt, e.endsAt, tz)}
+                    {formatDay(e.startsAt, tz, lang)} · {formatTimeRange(e.startsAt, e.endsAt, tz, lang)}
                   </p>
                   {e.slots.length === 0 ? (
-                    <p className="mt-2 text-sm text-ink-soft">No times left at this session.</p>
+                    <p className="mt-2 text-sm text-ink-soft">{t('account.rebook.noTimes')}</p>
                   ) : (
                     <ul className="mt-3 grid grid-cols-3 gap-2 sm:grid-cols-4">
                       {e.slots.map((s) => (
@@ -158,15 +171,19 @@ export function RebookPage() {
                             onClick={() => setChosen({ event: e, slot: s })}
                             className="w-full rounded-lg p-2 text-center ring-1 ring-ink/20 transition hover:bg-navy hover:text-white hover:ring-navy disabled:cursor-not-allowed disabled:bg-ink/5 disabled:text-ink-soft disabled:ring-ink/10 disabled:hover:bg-ink/5 disabled:hover:text-ink-soft"
                           >
-                            <span className="block text-lg font-extrabold">{formatTime(s.startsAt, tz)}</span>
+                            <span className="block text-lg font-extrabold">{formatTime(s.startsAt, tz, lang)}</span>
                             <span className="block text-xs font-semibold">
-                              {s.free === 0 ? (
-                                'full'
-                              ) : (
-                                <>
-                                  {s.free} <span className="sr-only">{s.free === 1 ? 'place' : 'places'}</span> free
-                                </>
-                              )}
+                              {s.free === 0
+                                ? t('account.rebook.full')
+                                : trParts(
+                                    'account.rebook.free',
+                                    {
+                                      unit: (
+                                        <span className="sr-only">{t('account.rebook.places', { n: s.free })}</span>
+                                      ),
+                                    },
+                                    { n: s.free },
+                                  )}
                             </span>
                           </button>
                         </li>
@@ -183,14 +200,10 @@ export function RebookPage() {
       <ConfirmDialog
         open={chosen !== null}
         tone="primary"
-        title="Book this time?"
-        message={
-          chosen
-            ? `${chosen.event.title}, ${formatDay(chosen.slot.startsAt, tz)} at ${formatTime(chosen.slot.startsAt, tz)}, with your ${v.item.categoryName.toLowerCase()} and the part.`
-            : ''
-        }
-        confirmLabel="Book it"
-        cancelLabel="Choose another time"
+        title={t('account.rebook.confirmTitle')}
+        message={chosen ? t('account.rebook.confirm', { when: whenOf(chosen), kind }) : ''}
+        confirmLabel={t('account.rebook.bookIt')}
+        cancelLabel={t('account.rebook.another')}
         busy={book.isPending}
         onCancel={() => setChosen(null)}
         onConfirm={confirm}

@@ -6,9 +6,11 @@ import { AccountDataPanel } from '../../features/privacy/components/account-data
 import { forgetCsrfToken } from '../../lib/api';
 import { userKeys } from '../../lib/auth';
 import { queryClient } from '../../lib/query-client';
+import { useT } from '../../lib/i18n';
 
 /** The signed-in person's own account: password and sign-in, a copy of the account, and closing it. */
 export function MyDataPage() {
+  const t = useT();
   const navigate = useNavigate();
   const closed = () => {
     forgetCsrfToken();
@@ -18,7 +20,7 @@ export function MyDataPage() {
   };
   return (
     <div className="mx-auto max-w-2xl space-y-4">
-      <PageTitle title="Account" lead="How you sign in, what Mendery holds about you, and how to leave." />
+      <PageTitle title={t('account.page.title')} lead={t('account.page.lead')} />
       <SignInSettingsCard />
       <AccountDataPanel onClosed={closed} />
     </div>

@@ -1,6 +1,7 @@
 import type { AppContext } from '../../context';
 import { HttpError, notFound } from '../../http/errors';
-import { asLanguage } from '../../../../shared/i18n/languages';
+import { asLanguage, DEFAULT_LANGUAGE, type Language } from '../../../../shared/i18n/languages';
+import { categoryText } from '../../i18n';
 import { runHooks } from '../../core/hooks';
 import { itemOfRebookToken } from '../../core/links';
 import { createReturnBooking } from './service';
@@ -13,8 +14,8 @@ async function rebookContext(ctx: AppContext, token: string) {
   return r;
 }
 
-/** What the re-booking page shows: the item, the part, and the group's next sessions with their times. */
-export async function rebookView(ctx: AppContext, token: string) {
+/** What the re-booking page shows (the kind of item in the reader's language): the item, the part, and the group's next sessions with their times. */
+export async function rebookView(ctx: AppContext, token: string, lang: Language = DEFAULT_LANGUAGE) {
   const r = await rebookContext(ctx, token);
   const upcoming = await nextSessions(ctx.database.db, r.group.id, 3);
   const slotRows = await slotsStillAhead(
@@ -22,7 +23,12 @@ export async function rebookView(ctx: AppContext, token: string) {
     upcoming.map((e) => e.id),
   );
   return {
-    item: { categoryName: r.category.name, brand: r.item.brand, model: r.item.model, part: r.part },
+    item: {
+      categoryName: categoryText(lang, r.category.slug, 'name', r.category.name),
+      brand: r.item.brand,
+      model: r.item.model,
+      part: r.part,
+    },
     visitorName: r.booking.visitorName.split(' ')[0],
     group: { name: r.group.name, timeZone: r.group.timeZone },
     status: r.f.status,

@@ -185,7 +185,8 @@ export function bookingRoutes(ctx: AppContext) {
   );
   r.get('/rebook/:token', async (req, res) => {
     res.setHeader('Cache-Control', 'no-store');
-    res.json(await rebookView(ctx, String(req.params.token)));
+    res.vary('Accept-Language');
+    res.json(await rebookView(ctx, String(req.params.token), languageOf(req, res.locals)));
   });
   r.post('/rebook/:token', async (req, res) =>
     res.status(201).json(await rebook(ctx, String(req.params.token), body(req, rebookSchema).slotId)),

@@ -7,6 +7,7 @@ import { TextField } from '../../../components/ui/field';
 import { ApiError } from '../../../lib/api';
 import { applyServerErrors, useZodForm } from '../../../lib/form';
 import { useSignInCode } from '../api/two-factor';
+import { useT } from '../../../lib/i18n';
 
 /** The second step of signing in: the 6 digits from the person's authenticator app. */
 export function SignInCodeForm({
@@ -16,6 +17,7 @@ export function SignInCodeForm({
   onSignedIn: (u: SessionUser) => void;
   onRestart: (why?: string) => void;
 }) {
+  const t = useT();
   const send = useSignInCode();
   const form = useZodForm(totpCodeSchema, { code: '' });
   const [formError, setFormError] = useState<string | null>(null);
@@ -31,12 +33,12 @@ export function SignInCodeForm({
   return (
     <form onSubmit={onSubmit} noValidate className="space-y-4" aria-labelledby="code-step-title">
       <h2 id="code-step-title" className="text-lg">
-        One more step
+        {t('account.code.title')}
       </h2>
-      <p className="text-sm text-ink-soft">Your password is right. Open your authenticator app and enter its code.</p>
+      <p className="text-sm text-ink-soft">{t('account.code.lead')}</p>
       {formError && <Alert tone="error">{formError}</Alert>}
       <TextField
-        label="Code from your app"
+        label={t('account.code')}
         inputMode="numeric"
         autoComplete="one-time-code"
         autoFocus
@@ -44,10 +46,10 @@ export function SignInCodeForm({
         {...form.register('code')}
       />
       <Button type="submit" busy={form.formState.isSubmitting} className="w-full">
-        Sign in
+        {t('account.signIn.submit')}
       </Button>
       <Button type="button" variant="quiet" onClick={() => onRestart()} className="w-full">
-        Start again
+        {t('account.code.restart')}
       </Button>
     </form>
   );
