@@ -15,6 +15,8 @@ export interface EventSummary {
   slotCapacity: number;
   skillLimits: Partial<Record<Skill, number>>;
   timeZone: string;
+  /** The group's own language ('en', 'nl', 'de', 'fr'): a visitor whose browser speaks none of ours reads it. */
+  groupLanguage: string;
   venue: { id: number; name: string; address: string; town: string; accessNotes: string };
   totalPlaces: number;
   freePlaces: number;

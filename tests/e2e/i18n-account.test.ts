@@ -125,4 +125,38 @@ describe('the account pages in four languages', () => {
       await page.close();
     },
   );
+  it(
+    "shows a group's own page in the group's language to a browser that speaks none of ours, until the picker says otherwise",
+    { timeout: 60_000 },
+    async () => {
+      const list = await (await fetch(`${app.server.url}/api/events`)).json();
+      const dutch = list.find((e: { groupName: string }) => e.groupName === 'Herstelkring Kernebroek');
+      const english = list.find((e: { groupName: string }) => e.groupName === 'Kestlebridge Menders');
+      const context = await browser.newContext({ viewport: PHONE, locale: 'pt-BR' });
+      const page = await context.newPage();
+      await page.goto(`${app.server.url}/events/${dutch.id}`);
+      await page.getByRole('link', { name: 'Boek een tijdvak' }).first().waitFor();
+      expect(await page.evaluate(() => document.documentElement.lang)).toBe('nl');
+      await page.screenshot({ path: shot('i18n-group-language-nl'), fullPage: true });
+      // An English-speaking group's page stays English for the same visitor.
+      const other = await context.newPage();
+      await other.goto(`${app.server.url}/events/${english.id}`);
+      await other.getByRole('link', { name: 'Book a slot' }).first().waitFor();
+      expect(await other.evaluate(() => document.documentElement.lang)).toBe('en');
+      // The picker's choice wins over the group's language from then on.
+      await page.getByLabel('Taal').selectOption('en');
+      await page.getByRole('link', { name: 'Book a slot' }).first().waitFor();
+      await page.reload();
+      await page.getByRole('link', { name: 'Book a slot' }).first().waitFor();
+      expect(await page.evaluate(() => document.documentElement.lang)).toBe('en');
+      await context.close();
+      // A browser that reads German keeps German on the Dutch group's page.
+      const german = await browser.newContext({ viewport: PHONE, locale: 'de-DE' });
+      const dePage = await german.newPage();
+      await dePage.goto(`${app.server.url}/events/${dutch.id}`);
+      await dePage.getByRole('heading', { name: 'Repareren in De Spoel' }).waitFor();
+      expect(await dePage.evaluate(() => document.documentElement.lang)).toBe('de');
+      await german.close();
+    },
+  );
 });

@@ -1,7 +1,13 @@
 import type { I18n } from '@lingui/core';
 import { createElement, Fragment, useSyncExternalStore, type ReactNode } from 'react';
 import { catalogs } from 'virtual:mendery-catalogs';
-import { DEFAULT_LANGUAGE, isLanguage, pickLanguage, type Language } from '../../../shared/i18n/languages';
+import {
+  DEFAULT_LANGUAGE,
+  isLanguage,
+  languageOfTag,
+  pickLanguage,
+  type Language,
+} from '../../../shared/i18n/languages';
 import type { OnDemandNamespace } from '../../../shared/i18n/namespaces';
 import { PSEUDO_LANGUAGE } from '../../../shared/i18n/pseudo';
 
@@ -28,11 +34,26 @@ function storedLanguage(): string | null {
   }
 }
 
+/** True while the language is English only because nothing told us better (see followGroupLanguage). */
+let guessed = false;
+
 /** ?lang= in the address, else the visitor's stored choice, else the browser's languages, else English. */
 export function initialLanguage(): UiLanguage {
   const asked = new URLSearchParams(location.search).get('lang');
   if (asked === PSEUDO_LANGUAGE) return PSEUDO_LANGUAGE;
-  return pickLanguage([asked, storedLanguage(), ...(navigator.languages ?? [navigator.language])]);
+  const tags = [asked, storedLanguage(), ...(navigator.languages ?? [navigator.language])];
+  guessed = !tags.some(languageOfTag);
+  return pickLanguage(tags);
+}
+
+/**
+ * A group's own page, for a visitor whose browser speaks none of our languages and who has chosen none: the group's
+ * language rather than English. Nothing is remembered; the picker still decides. `then` runs once the words are in.
+ */
+export function followGroupLanguage(lang: string | null | undefined, then: () => void): void {
+  if (!guessed || !isLanguage(lang) || lang === formats) return;
+  guessed = false;
+  void activate(lang).then(then);
 }
 
 const fetchNamespace = (lang: UiLanguage, ns: OnDemandNamespace) =>
@@ -93,6 +114,7 @@ export function loadNamespaces(names: readonly OnDemandNamespace[]): Promise<voi
  * account keeps it too: see onLanguageChosen).
  */
 export async function chooseLanguage(lang: Language): Promise<void> {
+  guessed = false;
   try {
     localStorage.setItem(STORAGE_KEY, lang);
   } catch {

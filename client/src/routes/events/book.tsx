@@ -1,4 +1,4 @@
-import { lazy, Suspense } from 'react';
+import { lazy, Suspense, useEffect } from 'react';
 import { Link, useParams, type LoaderFunctionArgs } from 'react-router';
 import { formatDay } from '../../../../shared/format';
 import { Alert, PageTitle, Spinner } from '../../components/ui/feedback';
@@ -7,7 +7,7 @@ import { eventKeys } from '../../features/events/api/keys';
 import { useCategoriesQuery, categoriesQuery } from '../../features/categories/api/get-categories';
 import { useEvent, eventQuery } from '../../features/events/api/get-event';
 import { SessionMissing } from '../../features/events/components/session-missing';
-import { useLanguage, useT } from '../../lib/i18n';
+import { followGroupLanguage, useLanguage, useT } from '../../lib/i18n';
 import { queryClient } from '../../lib/query-client';
 
 // The form and its validation load beside the page, not before it: the session shows first.
@@ -29,6 +29,9 @@ export function BookingPage() {
   const lang = useLanguage();
   const id = Number(useParams().eventId);
   const event = useEvent(id);
+  const groupLanguage = event.data?.groupLanguage;
+  // The group's language for a visitor whose browser speaks none of ours; the page's data follows it.
+  useEffect(() => followGroupLanguage(groupLanguage, () => void queryClient.invalidateQueries()), [groupLanguage]);
   const categories = useCategoriesQuery();
   if (event.isPending || categories.isPending) return <Spinner label={t('booking.loading')} />;
   if (event.error) return <SessionMissing error={event.error} />;

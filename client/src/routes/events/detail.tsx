@@ -1,4 +1,4 @@
-import { lazy, Suspense } from 'react';
+import { lazy, Suspense, useEffect } from 'react';
 import { Link, useParams, type LoaderFunctionArgs } from 'react-router';
 import { slotHasPassed } from '../../../../shared/booking/bookability';
 import { SKILLS, type Skill } from '../../../../shared/constants';
@@ -9,7 +9,7 @@ import { useUser } from '../../lib/auth';
 import { useCategoriesQuery, categoriesQuery } from '../../features/categories/api/get-categories';
 import { useEvent, eventQuery } from '../../features/events/api/get-event';
 import { PlacesBar, StatusBadge } from '../../features/events/components/places-bar';
-import { useLanguage, useT } from '../../lib/i18n';
+import { followGroupLanguage, useLanguage, useT } from '../../lib/i18n';
 import { queryClient } from '../../lib/query-client';
 
 // Said only when the session cannot be shown: it comes on demand, not with every visit to the page.
@@ -29,6 +29,9 @@ export function EventPage() {
   const lang = useLanguage();
   const id = Number(useParams().eventId);
   const event = useEvent(id);
+  const groupLanguage = event.data?.groupLanguage;
+  // The group's language for a visitor whose browser speaks none of ours; the page's data follows it.
+  useEffect(() => followGroupLanguage(groupLanguage, () => void queryClient.invalidateQueries()), [groupLanguage]);
   const categories = useCategoriesQuery();
   const { data: user } = useUser();
   if (event.isPending) return <Spinner label={t('events.detail.loading')} />;

@@ -26,6 +26,7 @@ const eventColumns = {
   skillLimits: events.skillLimits,
   groupName: repairGroups.name,
   timeZone: repairGroups.timeZone,
+  groupLanguage: repairGroups.defaultLanguage,
   houseRules: repairGroups.houseRules,
   venue: {
     id: venues.id,
