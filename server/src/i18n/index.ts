@@ -49,15 +49,67 @@ export function loadTranslations(): Record<Language, I18n> {
 /** True when `key` is a message of the catalogs (English has every key; see tests/unit/catalogs.test.ts). */
 export const isMessageKey = (key: string): boolean => key in loadTranslations()[DEFAULT_LANGUAGE].messages;
 
+type Refusal = { key: string; pattern: RegExp };
+let refusals: { exact: Map<string, string>; patterns: Refusal[] } | undefined;
+
 /**
- * A message in `lang`. A text that is no catalog key comes back as it is, so a message not yet moved into the
- * catalogs still reads (in English).
+ * The API's refusals (HttpError messages) are written in English where they are thrown; the server-only `problems`
+ * namespace holds each one's English wording as its English message. An English text is found again by its exact
+ * words, or, for a message with `{placeholders}`, by a pattern whose holes give the values back ("Wait 15 minutes"
+ * → minutes = 15), so the thrower needs no key and its English stays readable in the code and the tests.
+ */
+function refusalsFromEnglish() {
+  if (refusals) return refusals;
+  const raw = JSON.parse(
+    readFileSync(path.join(localesFolder, DEFAULT_LANGUAGE, 'problems.json'), 'utf8'),
+  ) as RawCatalog;
+  const exact = new Map<string, string>();
+  const patterns: Refusal[] = [];
+  for (const [key, text] of Object.entries(raw)) {
+    if (!/\{\w+\}/.test(text)) {
+      exact.set(text, key);
+      continue;
+    }
+    const source = text
+      .split(/(\{\w+\})/)
+      .map((part) =>
+        /^\{\w+\}$/.test(part) ? `(?<${part.slice(1, -1)}>.+?)` : part.replace(/[.*+?^${}()|[\]\\]/g, '\\$&'),
+      )
+      .join('');
+    patterns.push({ key, pattern: new RegExp(`^${source}$`, 's') });
+  }
+  refusals = { exact, patterns };
+  return refusals;
+}
+
+/** The `problems` key and values of an English refusal, when the catalogs have it. */
+function refusalOf(text: string): { key: string; values?: Values } | undefined {
+  const { exact, patterns } = refusalsFromEnglish();
+  const key = exact.get(text);
+  if (key) return { key };
+  for (const p of patterns) {
+    const m = p.pattern.exec(text);
+    if (!m?.groups) continue;
+    // A number comes back as a number, so a language's plural rules apply to it.
+    const values = Object.fromEntries(
+      Object.entries(m.groups).map(([k, v]) => [k, /^\d+(\.\d+)?$/.test(v) ? Number(v) : v]),
+    );
+    return { key: p.key, values };
+  }
+  return undefined;
+}
+
+/**
+ * A message in `lang`: a catalog key, or one of the API's English refusals (see refusalsFromEnglish). Any other text
+ * comes back as it is, so a message not yet in the catalogs still reads (in English).
  */
 export function translate(lang: Language, keyOrText: string, values?: Values): string {
   const all = loadTranslations();
   const i18n = all[lang] ?? all[DEFAULT_LANGUAGE];
   if (keyOrText in i18n.messages) return i18n._(keyOrText, values);
-  return keyOrText;
+  if (lang === DEFAULT_LANGUAGE) return keyOrText;
+  const refusal = refusalOf(keyOrText);
+  return refusal ? i18n._(refusal.key, { ...refusal.values, ...values }) : keyOrText;
 }
 
 /** The request's language: the first supported one of its Accept-Language header, else English. */
