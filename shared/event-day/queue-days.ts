@@ -1,3 +1,6 @@
+import { intlLocale } from '../format';
+import { DEFAULT_LANGUAGE, type Language } from '../i18n/languages';
+
 /**
  * The fixer's queue by day: one group per calendar day in the item's group time zone, today first, then the days
  * to come in order, then past days apart (most recent first). Pure: `now` comes from the caller.
@@ -8,7 +11,7 @@ export interface QueueDay<T> {
   /** The day in the group's time zone, as YYYY-MM-DD. */
   date: string;
   kind: QueueDayKind;
-  /** "Saturday 12 December"; the year too when it is not this year's. */
+  /** "Saturday 12 December" in the reader's language; the year too when it is not this year's. */
   label: string;
   items: T[];
 }
@@ -16,16 +19,25 @@ export interface QueueDay<T> {
 const dateKey = (d: Date, timeZone: string) =>
   new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' }).format(d);
 
-function dayLabel(d: Date, timeZone: string, now: Date) {
-  const parts = (x: Date) =>
-    Object.fromEntries(
-      new Intl.DateTimeFormat('en-GB', { timeZone, weekday: 'long', day: 'numeric', month: 'long', year: 'numeric' })
-        .formatToParts(x)
-        .map((p) => [p.type, p.value]),
-    );
-  const p = parts(d);
+function dayLabel(d: Date, timeZone: string, now: Date, lang: Language) {
+  const year = (x: Date) => new Intl.DateTimeFormat('en-GB', { timeZone, year: 'numeric' }).format(x);
+  const withYear = year(d) !== year(now);
+  if (lang !== 'en')
+    // The language's own order and marks ("Samstag, 12. Dezember", "samedi 12 décembre").
+    return new Intl.DateTimeFormat(intlLocale(lang), {
+      timeZone,
+      weekday: 'long',
+      day: 'numeric',
+      month: 'long',
+      ...(withYear ? { year: 'numeric' } : {}),
+    }).format(d);
+  const p = Object.fromEntries(
+    new Intl.DateTimeFormat('en-GB', { timeZone, weekday: 'long', day: 'numeric', month: 'long', year: 'numeric' })
+      .formatToParts(d)
+      .map((x) => [x.type, x.value]),
+  );
   // Built from parts: Intl puts a comma after the weekday once the year is in, and we want none.
-  return [p.weekday, p.day, p.month, ...(p.year === parts(now).year ? [] : [p.year])].join(' ');
+  return [p.weekday, p.day, p.month, ...(withYear ? [p.year] : [])].join(' ');
 }
 
 const kindRank: Record<QueueDayKind, number> = { today: 0, upcoming: 1, past: 2 };
@@ -34,6 +46,7 @@ const kindRank: Record<QueueDayKind, number> = { today: 0, upcoming: 1, past: 2 
 export function queueDays<T extends { slotStartsAt: Date | string; timeZone: string }>(
   items: readonly T[],
   now: Date,
+  lang: Language = DEFAULT_LANGUAGE,
 ): QueueDay<T>[] {
   const days = new Map<string, QueueDay<T>>();
   for (const item of items) {
@@ -43,7 +56,7 @@ export function queueDays<T extends { slotStartsAt: Date | string; timeZone: str
     let day = days.get(date);
     if (!day) {
       const kind: QueueDayKind = date === today ? 'today' : date > today ? 'upcoming' : 'past';
-      day = { date, kind, label: dayLabel(at, item.timeZone, now), items: [] };
+      day = { date, kind, label: dayLabel(at, item.timeZone, now, lang), items: [] };
       days.set(date, day);
     }
     day.items.push(item);

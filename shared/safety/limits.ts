@@ -61,6 +61,8 @@ export interface SafetyFault {
   /** The form field at fault ('visual' for the inspection). */
   field: 'visual' | 'protectiveConductorOhm' | 'insulationMOhm' | 'protectiveCurrentMA' | 'touchCurrentMA';
   message: string;
+  /** The figures in the message (reading, limit, cord, class), for a translation to put in its own place. */
+  values: Record<string, number | string>;
 }
 
 /** Every reading given that is outside its limit, and the visual inspection if it found a fault. */
@@ -71,6 +73,7 @@ export function safetyFaults(r: SafetyReadings): SafetyFault[] {
       code: SAFETY_FAULTS.visual,
       field: 'visual',
       message: 'The visual inspection found a fault (cord, plug, strain relief, casing or signs of heat).',
+      values: {},
     });
   if (r.applianceClass === 'I' && r.protectiveConductorOhm !== undefined && r.cordLengthM !== undefined) {
     const limit = protectiveConductorLimitOhm(r.cordLengthM);
@@ -79,6 +82,7 @@ export function safetyFaults(r: SafetyReadings): SafetyFault[] {
         code: SAFETY_FAULTS.protectiveConductor,
         field: 'protectiveConductorOhm',
         message: `Protective conductor ${r.protectiveConductorOhm} Ω is above the ${limit} Ω limit for ${r.cordLengthM} m of cord.`,
+        values: { reading: r.protectiveConductorOhm, limit, cord: r.cordLengthM },
       });
   }
   if (r.insulationMOhm !== undefined) {
@@ -88,6 +92,7 @@ export function safetyFaults(r: SafetyReadings): SafetyFault[] {
         code: SAFETY_FAULTS.insulation,
         field: 'insulationMOhm',
         message: `Insulation ${r.insulationMOhm} MΩ is below the ${limit} MΩ minimum for class ${r.applianceClass}${r.heating ? ' with heating elements' : ''}.`,
+        values: { reading: r.insulationMOhm, limit, cls: r.applianceClass },
       });
   }
   if (r.protectiveCurrentMA !== undefined) {
@@ -97,6 +102,7 @@ export function safetyFaults(r: SafetyReadings): SafetyFault[] {
         code: SAFETY_FAULTS.protectiveCurrent,
         field: 'protectiveCurrentMA',
         message: `Protective conductor current ${r.protectiveCurrentMA} mA is above ${limit} mA.`,
+        values: { reading: r.protectiveCurrentMA, limit },
       });
   }
   if (r.touchCurrentMA !== undefined && r.touchCurrentMA > TOUCH_CURRENT_LIMIT_MA)
@@ -104,6 +110,7 @@ export function safetyFaults(r: SafetyReadings): SafetyFault[] {
       code: SAFETY_FAULTS.touchCurrent,
       field: 'touchCurrentMA',
       message: `Touch current ${r.touchCurrentMA} mA is above ${TOUCH_CURRENT_LIMIT_MA} mA.`,
+      values: { reading: r.touchCurrentMA, limit: TOUCH_CURRENT_LIMIT_MA },
     });
   return faults;
 }

@@ -21,10 +21,11 @@ export const READING_NAMES: Record<RequiredReading, string> = {
   insulationMOhm: 'insulation resistance',
 };
 
+/** Catalog keys (locales/<language>/bench.json), answered in the reader's language. */
 const MISSING_MESSAGES: Record<RequiredReading, string> = {
-  cordLengthM: 'Class I needs the cord length for its limit.',
-  protectiveConductorOhm: 'Class I needs the protective conductor reading.',
-  insulationMOhm: 'Enter the insulation resistance at 500 V DC.',
+  cordLengthM: 'bench.v.missing.cordLengthM',
+  protectiveConductorOhm: 'bench.v.missing.protectiveConductorOhm',
+  insulationMOhm: 'bench.v.missing.insulationMOhm',
 };
 
 /** Stable codes the client matches on (never on wording); a zod issue carries one in `params.code`. */

@@ -65,12 +65,14 @@ export const walkInSchema = z.object({
 });
 export type WalkInInput = z.input<typeof walkInSchema>;
 
-const reading = (what: string, max: number) =>
+// Messages of the safety check and the outcome are catalog keys (locales/<language>/bench.json): the server answers them in
+// the request's language, the fixer's page shows them in the fixer's.
+const reading = (max: number) =>
   optionalNumber(
     z.coerce
-      .number({ error: `Enter the ${what} as a number.` })
-      .min(0, `The ${what} cannot be negative.`)
-      .max(max, `That ${what} is out of range.`),
+      .number({ error: 'bench.v.readingNotNumber' })
+      .min(0, 'bench.v.readingNegative')
+      .max(max, 'bench.v.readingRange'),
   );
 
 export const safetyCheckSchema = z
@@ -82,14 +84,14 @@ export const safetyCheckSchema = z
       casing: z.boolean(),
       noHeatDamage: z.boolean(),
     }),
-    applianceClass: z.enum(APPLIANCE_CLASSES, { error: 'Choose the appliance class.' }),
+    applianceClass: z.enum(APPLIANCE_CLASSES, { error: 'bench.v.chooseClass' }),
     heating: z.boolean().default(false),
-    heatingKw: reading('heating power', 30),
-    cordLengthM: reading('cord length', 100),
-    protectiveConductorOhm: reading('protective conductor resistance', 1000),
-    insulationMOhm: reading('insulation resistance', 10000),
-    protectiveCurrentMA: reading('protective conductor current', 1000),
-    touchCurrentMA: reading('touch current', 1000),
+    heatingKw: reading(30),
+    cordLengthM: reading(100),
+    protectiveConductorOhm: reading(1000),
+    insulationMOhm: reading(10000),
+    protectiveCurrentMA: reading(1000),
+    touchCurrentMA: reading(1000),
     instrument: z
       .string()
       .trim()
@@ -113,33 +115,29 @@ export const OUTCOME_ISSUES = {
 
 export const outcomeSchema = z
   .object({
-    outcome: z.enum(OUTCOMES, { error: 'Choose what happened.' }),
-    barrier: z.enum(BARRIERS, { error: 'Choose one of the reasons listed.' }).optional(),
+    outcome: z.enum(OUTCOMES, { error: 'bench.v.chooseOutcome' }),
+    barrier: z.enum(BARRIERS, { error: 'bench.v.chooseReason' }).optional(),
     part: z
       .object({
-        description: z
-          .string({ error: 'Say which part is needed.' })
-          .trim()
-          .min(2, 'Say which part is needed.')
-          .max(200),
+        description: z.string({ error: 'bench.v.whichPart' }).trim().min(2, 'bench.v.whichPart').max(200),
         link: z
           .string()
           .trim()
           .max(300)
           .optional()
-          .refine((v) => !v || isWebLink(v), 'Give a web address starting with https:// or http://, or leave it empty.')
+          .refine((v) => !v || isWebLink(v), 'bench.v.webLink')
           .transform((v) => v || undefined),
         cost: optionalNumber(
-          z.coerce.number({ error: 'Enter the cost as a number.' }).min(0, 'A cost cannot be negative.').max(100000),
+          z.coerce.number({ error: 'bench.v.costNumber' }).min(0, 'bench.v.costNegative').max(100000),
         ),
       })
       .optional(),
     minutes: optionalNumber(
       z.coerce
-        .number({ error: 'Enter whole minutes.' })
-        .int('Enter whole minutes.')
+        .number({ error: 'bench.v.wholeMinutes' })
+        .int('bench.v.wholeMinutes')
         .min(0)
-        .max(600, 'At most 600 minutes.'),
+        .max(600, 'bench.v.maxMinutes'),
     ),
     notes: z
       .string()
@@ -154,21 +152,21 @@ export const outcomeSchema = z
       ctx.addIssue({
         code: 'custom',
         path: ['barrier'],
-        message: 'Choose why it can’t be mended.',
+        message: 'bench.v.whyNotMended',
         params: { code: OUTCOME_ISSUES.barrierRequired },
       });
     if (v.outcome !== 'end-of-life' && v.barrier)
       ctx.addIssue({
         code: 'custom',
         path: ['barrier'],
-        message: 'A reason is recorded only for an item beyond mending.',
+        message: 'bench.v.reasonOnlyEnd',
         params: { code: OUTCOME_ISSUES.barrierNotAllowed },
       });
     if (v.outcome === 'parts-needed' && !v.part)
       ctx.addIssue({
         code: 'custom',
         path: ['part', 'description'],
-        message: 'Say which part is needed.',
+        message: 'bench.v.whichPart',
         params: { code: OUTCOME_ISSUES.partRequired },
       });
   });

@@ -29,10 +29,7 @@ const PENDING = new Set([
   'client/src/features/event-day/components/issued-tags.tsx',
   'client/src/features/event-day/components/live-bench-card.tsx',
   'client/src/features/event-day/components/live-view.tsx',
-  'client/src/features/event-day/components/outcome-form.tsx',
   'client/src/features/event-day/components/qr-scan.tsx',
-  'client/src/features/event-day/components/repair-photos.tsx',
-  'client/src/features/event-day/components/safety-form.tsx',
   'client/src/features/event-day/components/status-tallies.tsx',
   'client/src/features/event-day/components/tag-sheet.tsx',
   'client/src/features/event-day/components/walk-in-form.tsx',
@@ -77,8 +74,6 @@ const PENDING = new Set([
   'client/src/features/triage/components/triage-run-bar.tsx',
   'client/src/features/triage/components/triage-run-history.tsx',
   'client/src/features/triage/components/triage-run-summary.tsx',
-  'client/src/features/workbench/components/next-in-queue.tsx',
-  'client/src/features/workbench/components/queue-list.tsx',
   'client/src/routes/admin/categories.tsx',
   'client/src/routes/admin/mailbox.tsx',
   'client/src/routes/admin/overview.tsx',
@@ -101,7 +96,6 @@ const PENDING = new Set([
   'client/src/routes/toolkit/salvage.tsx',
   'client/src/routes/triage/board.tsx',
   'client/src/routes/triage/run.tsx',
-  'client/src/routes/workbench/bench.tsx',
 ]);
 
 function clientFiles(dir = 'client/src'): string[] {

@@ -57,4 +57,17 @@ describe('the fixer’s queue by day', () => {
     expect(nextQueued([items[0]], now)).toBeUndefined();
     expect(queueDays([], now)).toEqual([]);
   });
+
+  it("names the day in the reader's language, with the language's own order and marks", () => {
+    // CLDR (as in Node's ICU): German writes "Samstag, 12. Dezember", French and Dutch the weekday in lower case.
+    const at = [item(1, '2026-12-12T10:00:00Z', 'Europe/Berlin')];
+    expect(queueDays(at, now, 'de')[0].label).toBe('Samstag, 12. Dezember');
+    expect(queueDays(at, now, 'fr')[0].label).toBe('samedi 12 décembre');
+    expect(queueDays(at, now, 'nl')[0].label).toBe('zaterdag 12 december');
+    expect(queueDays(at, now, 'en')[0].label).toBe('Saturday 12 December');
+    // Next year's day carries its year.
+    expect(queueDays([item(1, '2027-01-09T10:00:00Z', 'Europe/Berlin')], now, 'de')[0].label).toBe(
+      'Samstag, 9. Januar 2027',
+    );
+  });
 });

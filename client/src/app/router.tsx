@@ -119,7 +119,7 @@ export const router = createBrowserRouter([
           { path: 'start', loader: start },
           {
             path: 'bench',
-            ...page(() => import('../routes/workbench/bench'), 'BenchPage', allow.fixerOrHost),
+            ...page(() => import('../routes/workbench/bench'), 'BenchPage', allow.fixerOrHost, ['bench']),
           },
           {
             path: 'me/skills',
@@ -146,7 +146,7 @@ export const router = createBrowserRouter([
           { path: 'desk/:eventId', ...page(() => import('../routes/event-day/desk'), 'DeskPage', allow.staff) },
           {
             path: 'items/:itemId',
-            ...page(() => import('../routes/event-day/item'), 'ItemPage', allow.itemReader),
+            ...page(() => import('../routes/event-day/item'), 'ItemPage', allow.itemReader, ['bench']),
           },
           { path: 't/:code', ...page(() => import('../routes/event-day/tag'), 'TagPage') },
           {

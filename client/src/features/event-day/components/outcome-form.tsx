@@ -1,12 +1,5 @@
 import { useState } from 'react';
-import {
-  BARRIER_CHOICES,
-  BARRIER_HINTS,
-  BARRIER_LABELS,
-  OUTCOMES,
-  OUTCOME_LABELS,
-  type Outcome,
-} from '../../../../../shared/event-day/constants';
+import { BARRIER_CHOICES, OUTCOMES, type Outcome } from '../../../../../shared/event-day/constants';
 import { outcomeSchema, type OutcomeInput } from '../../../../../shared/schemas/event-day';
 import { Button } from '../../../components/ui/button';
 import { Alert, Card } from '../../../components/ui/feedback';
@@ -14,8 +7,9 @@ import { TextAreaField, TextField } from '../../../components/ui/field';
 import { ApiError } from '../../../lib/api';
 import { usePendingOutcomes, useRecordOutcome } from '../api/record-outcome';
 import type { ItemView, SafetyCheckRecord } from '../api/types';
-import { mayRecordFixed } from '../../../../../shared/safety/may-record-fixed';
+import { FIXED_REFUSALS, mayRecordFixed } from '../../../../../shared/safety/may-record-fixed';
 import { TILE_FOCUS } from './radio-tile';
+import { useT } from '../../../lib/i18n';
 
 /**
  * The schema's messages by field path. Its cross-field rules (barrier, part) run only once the fields parse, so
@@ -42,6 +36,7 @@ export function OutcomeForm({
   latestCheck: SafetyCheckRecord | undefined;
   onCancel?: () => void;
 }) {
+  const t = useT();
   const [outcome, setOutcome] = useState<Outcome | null>(item.outcome?.outcome ?? null);
   const [barrier, setBarrier] = useState(item.outcome?.barrier ?? '');
   const [part, setPart] = useState({
@@ -85,17 +80,18 @@ export function OutcomeForm({
 
   return (
     <Card>
-      <h2 className="mb-2 text-lg">{onCancel ? 'Correct the outcome' : 'Record the outcome'}</h2>
+      <h2 className="mb-2 text-lg">{onCancel ? t('fixer.outcome.correct') : t('bench.outcome.record')}</h2>
       {pending.some((p) => p.paused) && (
         <div className="mb-3" data-testid="pending-outcome">
-          <Alert tone="caution" title="Saved on this phone — not sent yet">
-            No connection. The outcome will be sent by itself when the network is back; keep this page or come back to
-            it later.
+          <Alert tone="caution" title={t('bench.outcome.pendingTitle')}>
+            {t('bench.outcome.pending')}
           </Alert>
         </div>
       )}
-      {pending.length > 0 && !pending.some((p) => p.paused) && <p className="mb-2 text-sm text-ink-soft">Sending…</p>}
-      <div role="radiogroup" aria-label="Outcome" className="grid grid-cols-2 gap-2">
+      {pending.length > 0 && !pending.some((p) => p.paused) && (
+        <p className="mb-2 text-sm text-ink-soft">{t('bench.outcome.sending')}</p>
+      )}
+      <div role="radiogroup" aria-label={t('bench.outcome.label')} className="grid grid-cols-2 gap-2">
         {OUTCOMES.map((o) => (
           <label
             key={o}
@@ -108,20 +104,25 @@ export function OutcomeForm({
               checked={outcome === o}
               onChange={() => setOutcome(o)}
             />
-            {OUTCOME_LABELS[o]}
+            {t(`fixer.outcomeValue.${o}`)}
           </label>
         ))}
       </div>
-      {errors.outcome && <p className="mt-1 text-sm font-semibold text-alert">{errors.outcome}</p>}
+      {errors.outcome && <p className="mt-1 text-sm font-semibold text-alert">{t(errors.outcome)}</p>}
       {blocked && (
         <div className="mt-3">
-          <Alert tone="caution">{!fixed.ok && fixed.message}</Alert>
+          <Alert tone="caution">
+            {!fixed.ok &&
+              (fixed.code === FIXED_REFUSALS.checkRequired
+                ? t('bench.outcome.needsCheck')
+                : t('bench.outcome.checkFailed', { reasons: fixed.fieldMessage }))}
+          </Alert>
         </div>
       )}
       <div className="mt-3 space-y-3">
         {outcome === 'end-of-life' && (
           <fieldset aria-describedby={errors.barrier ? 'barrier-error' : undefined}>
-            <legend className="mb-1 font-semibold">Why can’t it be mended?</legend>
+            <legend className="mb-1 font-semibold">{t('bench.outcome.why')}</legend>
             <div className="space-y-1.5">
               {BARRIER_CHOICES.map((b) => (
                 <label
@@ -139,15 +140,15 @@ export function OutcomeForm({
                     }}
                   />
                   <span>
-                    <span className="block font-semibold">{BARRIER_LABELS[b]}</span>
-                    <span className="block text-sm text-ink-soft">{BARRIER_HINTS[b]}</span>
+                    <span className="block font-semibold">{t(`fixer.barrier.${b}`)}</span>
+                    <span className="block text-sm text-ink-soft">{t(`bench.barrierHint.${b}`)}</span>
                   </span>
                 </label>
               ))}
             </div>
             {errors.barrier && (
               <p id="barrier-error" className="mt-1 text-sm font-semibold text-alert">
-                {errors.barrier}
+                {t(errors.barrier)}
               </p>
             )}
           </fieldset>
@@ -155,46 +156,44 @@ export function OutcomeForm({
         {outcome === 'parts-needed' && (
           <>
             <TextField
-              label="Which part"
+              label={t('bench.outcome.which')}
               value={part.description}
               onChange={(e) => setPart((p) => ({ ...p, description: e.target.value }))}
-              error={errors['part.description']}
-              placeholder="e.g. thermostat 13 A, part no. on the old one"
+              error={errors['part.description'] && t(errors['part.description'])}
+              placeholder={t('bench.outcome.whichPlaceholder')}
             />
             <div className="grid gap-3 sm:grid-cols-2">
               <TextField
-                label="Supplier link or part number (optional)"
+                label={t('bench.outcome.link')}
                 value={part.link}
                 onChange={(e) => setPart((p) => ({ ...p, link: e.target.value }))}
+                error={errors['part.link'] && t(errors['part.link'])}
               />
               <TextField
-                label={`Estimated cost in ${item.event.currency} (optional)`}
+                label={t('bench.outcome.cost', { currency: item.event.currency })}
                 inputMode="decimal"
                 value={part.cost}
                 onChange={(e) => setPart((p) => ({ ...p, cost: e.target.value }))}
-                error={errors['part.cost']}
+                error={errors['part.cost'] && t(errors['part.cost'])}
               />
             </div>
-            <p className="text-sm text-ink-soft">
-              The visitor orders the part and comes back to a later session. Look in the salvage stock below first: a
-              saved part may do.
-            </p>
+            <p className="text-sm text-ink-soft">{t('bench.outcome.partHint')}</p>
           </>
         )}
         <div className="grid gap-3 sm:grid-cols-2">
           <TextField
-            label="Time spent (minutes)"
+            label={t('bench.outcome.minutes')}
             inputMode="numeric"
             value={minutes}
             onChange={(e) => setMinutes(e.target.value)}
-            error={errors.minutes}
+            error={errors.minutes && t(errors.minutes)}
           />
         </div>
         <TextAreaField
-          label="Notes for the next fixer (optional)"
+          label={t('bench.outcome.notes')}
           value={notes}
           onChange={(e) => setNotes(e.target.value)}
-          hint="What you measured, the faulty part, the fix."
+          hint={t('bench.outcome.notesHint')}
         />
       </div>
       {serverError && (
@@ -208,11 +207,11 @@ export function OutcomeForm({
         busy={save.isPending && !save.isPaused}
         disabled={blocked}
       >
-        Save outcome
+        {t('bench.outcome.save')}
       </Button>
       {onCancel && (
         <Button variant="secondary" className="mt-2 w-full" onClick={onCancel}>
-          Cancel
+          {t('bench.outcome.cancel')}
         </Button>
       )}
     </Card>

@@ -8,6 +8,7 @@ import {
   protectiveCurrentLimitMA,
   TOUCH_CURRENT_LIMIT_MA,
   type ApplianceClass,
+  type SafetyFault,
 } from '../../../../../shared/safety/limits';
 import { missingReadings, requiredReadings } from '../../../../../shared/safety/readings';
 import { safetyCheckSchema, visualOk, type SafetyCheckInput } from '../../../../../shared/schemas/event-day';
@@ -17,15 +18,10 @@ import { CheckField, TextField } from '../../../components/ui/field';
 import { useRecordSafetyCheck } from '../api/record-safety-check';
 import type { ItemView } from '../api/types';
 import { TILE_FOCUS } from './radio-tile';
+import { tr, useLanguage, useT } from '../../../lib/i18n';
 
 type Reading = 'cordLengthM' | 'protectiveConductorOhm' | 'insulationMOhm' | 'protectiveCurrentMA' | 'touchCurrentMA';
-const VISUAL = [
-  ['cord', 'Cord: no cuts, kinks or bare wire'],
-  ['plug', 'Plug: pins, fuse and terminals sound'],
-  ['strainRelief', 'Strain relief holds the cord at both ends'],
-  ['casing', 'Casing: no cracks, screws all in'],
-  ['noHeatDamage', 'No scorch marks, melting or smell of heat'],
-] as const;
+const VISUAL = ['cord', 'plug', 'strainRelief', 'casing', 'noHeatDamage'] as const;
 
 /** A typed reading: undefined when empty, NaN when it is not a number (shown as an error, never judged). */
 const num = (s: string) => (s.trim() === '' ? undefined : Number(s.trim().replace(',', '.')));
@@ -43,32 +39,44 @@ interface Limits {
   heating: boolean;
   cord: number | undefined;
 }
+type Num = (n: number) => string;
 /** Each reading's field: its label (marked optional where the class does not require it) and its limit. */
-const READING_FIELDS: Record<Reading, { label: (required: boolean) => string; hint: (l: Limits) => string }> = {
-  cordLengthM: { label: () => 'Cord length (m)', hint: () => 'Sets the protective conductor limit.' },
+const READING_FIELDS: Record<Reading, { label: (required: boolean) => string; hint: (l: Limits, n: Num) => string }> = {
+  cordLengthM: { label: () => tr('bench.safety.reading.cordLengthM'), hint: () => tr('bench.safety.hint.cord') },
   protectiveConductorOhm: {
-    label: () => 'Protective conductor resistance (Ω)',
-    hint: ({ cord }) =>
+    label: () => tr('bench.safety.reading.protectiveConductorOhm'),
+    hint: ({ cord }, n) =>
       cord !== undefined && cord >= 0
-        ? `Limit ${protectiveConductorLimitOhm(cord)} Ω for ${cord} m.`
-        : 'Limit 0.3 Ω up to 5 m of cord.',
+        ? tr('bench.safety.hint.conductorFor', { limit: n(protectiveConductorLimitOhm(cord)), cord: n(cord) })
+        : tr('bench.safety.hint.conductor'),
   },
   insulationMOhm: {
-    label: (required) => (required ? 'Insulation resistance at 500 V DC (MΩ)' : 'Insulation resistance (MΩ, optional)'),
-    hint: ({ cls, heating }) => `At least ${insulationLimitMOhm(cls, heating)} MΩ.`,
+    label: (required) =>
+      tr(required ? 'bench.safety.reading.insulationMOhm' : 'bench.safety.reading.insulationOptional'),
+    hint: ({ cls, heating }, n) => tr('bench.safety.hint.atLeastMOhm', { limit: n(insulationLimitMOhm(cls, heating)) }),
   },
   protectiveCurrentMA: {
-    label: () => 'Protective conductor current (mA, optional)',
-    hint: () => `At most ${protectiveCurrentLimitMA()} mA.`,
+    label: () => tr('bench.safety.reading.protectiveCurrentMA'),
+    hint: (_, n) => tr('bench.safety.hint.atMostMA', { limit: n(protectiveCurrentLimitMA()) }),
   },
   touchCurrentMA: {
-    label: () => 'Touch current (mA, optional)',
-    hint: () => `At most ${TOUCH_CURRENT_LIMIT_MA} mA.`,
+    label: () => tr('bench.safety.reading.touchCurrentMA'),
+    hint: (_, n) => tr('bench.safety.hint.atMostMA', { limit: n(TOUCH_CURRENT_LIMIT_MA) }),
   },
 };
 
+/** A fault of shared/safety in the reader's words, its figures in the language's number form. */
+function faultText(f: SafetyFault, heating: boolean, n: Num): string {
+  const values = Object.fromEntries(Object.entries(f.values).map(([k, v]) => [k, typeof v === 'number' ? n(v) : v]));
+  const key = f.field === 'insulationMOhm' && heating ? 'insulationMOhmHeating' : f.field;
+  return tr(`bench.safety.fault.${key}`, values);
+}
+
 /** The check's form: visual inspection, class, readings; the verdict is worked out as you type. */
 export function SafetyForm({ item }: { item: ItemView }) {
+  const t = useT();
+  const lang = useLanguage();
+  const n: Num = (x) => x.toLocaleString(lang, { maximumFractionDigits: 3 });
   const record = useRecordSafetyCheck(item.id);
   const [visual, setVisual] = useState({
     cord: false,
@@ -109,13 +117,15 @@ export function SafetyForm({ item }: { item: ItemView }) {
       inputMode="decimal"
       value={r[key]}
       onChange={(e) => setR((x) => ({ ...x, [key]: e.target.value }))}
-      error={errors[key] ?? (Number.isNaN(num(r[key]) as number) ? 'Enter a number, e.g. 0.12.' : undefined)}
+      error={
+        errors[key] ? t(errors[key]) : Number.isNaN(num(r[key]) as number) ? t('bench.safety.notNumber') : undefined
+      }
       hint={hint}
     />
   );
   const submit = () => {
     if (notNumbers.length) {
-      setErrors(Object.fromEntries(notNumbers.map((k) => [k, 'Enter a number, e.g. 0.12.'])));
+      setErrors(Object.fromEntries(notNumbers.map((k) => [k, 'bench.safety.notNumber'])));
       return;
     }
     const body: SafetyCheckInput = {
@@ -135,42 +145,37 @@ export function SafetyForm({ item }: { item: ItemView }) {
   };
   return (
     <Card>
-      <h2 className="text-lg">Electrical safety check</h2>
-      <p className="mb-3 text-sm text-ink-soft">Before a mains item goes home. Limits: {item.safetySource}.</p>
+      <h2 className="text-lg">{t('bench.safety.title')}</h2>
+      <p className="mb-3 text-sm text-ink-soft">{t('bench.safety.lead', { source: item.safetySource })}</p>
       {latest && (
         <div className="mb-3" data-testid="latest-check">
           <Alert
             tone={latest.pass ? 'success' : 'error'}
             title={
               latest.pass
-                ? `Passed at ${formatTime(latest.createdAt, item.event.timeZone)}`
-                : `Failed at ${formatTime(latest.createdAt, item.event.timeZone)}`
+                ? t('bench.safety.passedAt', { time: formatTime(latest.createdAt, item.event.timeZone, lang) })
+                : t('bench.safety.failedAt', { time: formatTime(latest.createdAt, item.event.timeZone, lang) })
             }
           >
-            {latest.pass ? (
-              'It may be recorded as fixed.'
-            ) : (
-              <>
-                {latest.failures.join(' ')} It cannot go home as fixed: record it as needing a part, or as beyond
-                mending — or repair it and check again.
-              </>
-            )}
+            {latest.pass
+              ? t('bench.safety.mayBeFixed')
+              : `${latest.failures.join(' ')} ${t('bench.safety.cannotGoHome')}`}
           </Alert>
         </div>
       )}
       <fieldset className="space-y-1">
-        <legend className="font-bold">Visual inspection</legend>
-        {VISUAL.map(([k, label]) => (
+        <legend className="font-bold">{t('bench.safety.visual')}</legend>
+        {VISUAL.map((k) => (
           <CheckField
             key={k}
-            label={label}
+            label={t(`bench.safety.visual.${k}`)}
             checked={visual[k]}
             onChange={(e) => setVisual((v) => ({ ...v, [k]: e.target.checked }))}
           />
         ))}
       </fieldset>
       <fieldset className="mt-3">
-        <legend className="font-bold">Appliance class</legend>
+        <legend className="font-bold">{t('bench.safety.class')}</legend>
         <div role="radiogroup" className="mt-1 flex gap-2">
           {(['I', 'II', 'III'] as const).map((c) => (
             <label
@@ -178,50 +183,53 @@ export function SafetyForm({ item }: { item: ItemView }) {
               className={`flex min-h-11 flex-1 cursor-pointer items-center justify-center rounded-lg ring-1 ${TILE_FOCUS} ${cls === c ? 'bg-navy text-white ring-navy' : 'bg-white ring-ink/20'}`}
             >
               <input type="radio" name="class" className="sr-only" checked={cls === c} onChange={() => setCls(c)} />
-              Class {c}
+              {t('bench.safety.classN', { cls: c })}
             </label>
           ))}
         </div>
-        <p className="mt-1 text-xs text-ink-soft">
-          I: earthed metal parts (three-core cord). II: double insulated (the square-in-square mark). III: runs on
-          safety extra-low voltage.
-        </p>
+        <p className="mt-1 text-xs text-ink-soft">{t('bench.safety.classHint')}</p>
       </fieldset>
       <div className="mt-3">
-        <CheckField label="Has heating elements" checked={heating} onChange={(e) => setHeating(e.target.checked)} />
+        <CheckField
+          label={t('bench.safety.heating')}
+          checked={heating}
+          onChange={(e) => setHeating(e.target.checked)}
+        />
       </div>
       <div className="mt-3 grid gap-3 sm:grid-cols-2">
-        {shown.map((k) => input(k, READING_FIELDS[k].label(required.has(k)), READING_FIELDS[k].hint(limits)))}
+        {shown.map((k) => input(k, READING_FIELDS[k].label(required.has(k)), READING_FIELDS[k].hint(limits, n)))}
         <TextField
-          label="Instrument used"
+          label={t('bench.safety.instrument')}
           value={instrument}
           onChange={(e) => setInstrument(e.target.value)}
-          placeholder="e.g. the group’s appliance tester"
+          placeholder={t('bench.safety.instrumentPlaceholder')}
         />
       </div>
       <div className="mt-3" aria-live="polite" data-testid="verdict">
         {!touched ? (
-          <p className="rounded-lg bg-ink/5 px-3 py-2 text-ink-soft">
-            Tick the visual checks and enter the readings; the verdict appears here as you type.
-          </p>
+          <p className="rounded-lg bg-ink/5 px-3 py-2 text-ink-soft">{t('bench.safety.verdict.start')}</p>
         ) : notNumbers.length ? (
-          <p className="rounded-lg bg-ink/5 px-3 py-2 text-ink-soft">
-            A reading is not a number; correct it to see the verdict.
-          </p>
+          <p className="rounded-lg bg-ink/5 px-3 py-2 text-ink-soft">{t('bench.safety.verdict.notNumber')}</p>
         ) : pass ? (
-          <p className="rounded-lg bg-sage-light px-3 py-2 font-bold">These readings pass.</p>
+          <p className="rounded-lg bg-sage-light px-3 py-2 font-bold">{t('bench.safety.verdict.pass')}</p>
         ) : readingFaults.length ? (
           <p className="rounded-lg bg-alert-light px-3 py-2 font-bold text-alert">
-            Fails: {readingFaults.map((f) => f.message).join(' ')}
+            {t('bench.safety.verdict.fails', {
+              faults: readingFaults.map((f) => faultText(f, heating, n)).join(' '),
+            })}
           </p>
         ) : !allVisual && missing.length === 0 ? (
           <p className="rounded-lg bg-copper-light px-3 py-2 font-semibold text-copper-dark">
-            The readings are within limits, but not every visual point is ticked: an unticked point is recorded as a
-            fault.
+            {t('bench.safety.verdict.visualUnticked')}
           </p>
         ) : (
           <p className="rounded-lg bg-ink/5 px-3 py-2 text-ink-soft">
-            Still needed: {[...(allVisual ? [] : ['the visual points']), ...missing.map((m) => m.name)].join(', ')}.
+            {t('bench.safety.verdict.needed', {
+              list: [
+                ...(allVisual ? [] : [t('bench.safety.verdict.visualPoints')]),
+                ...missing.map((m) => t(`bench.safety.name.${m.field}`)),
+              ].join(', '),
+            })}
           </p>
         )}
       </div>
@@ -231,7 +239,7 @@ export function SafetyForm({ item }: { item: ItemView }) {
         </div>
       )}
       <Button className="mt-3 w-full" variant="secondary" onClick={submit} busy={record.isPending}>
-        Record this check
+        {t('bench.safety.record')}
       </Button>
     </Card>
   );

@@ -3,6 +3,7 @@ import { Link } from 'react-router';
 import { nextQueued } from '../../../../../shared/event-day/queue-days';
 import { paths } from '../../../config/paths';
 import { queueQuery } from '../api/get-queue';
+import { useT } from '../../../lib/i18n';
 
 const linkClass =
   'flex min-h-11 items-center justify-center rounded-lg px-4 py-2 text-center font-bold ring-1 ring-navy/20';
@@ -12,21 +13,22 @@ const linkClass =
  * the queue. The queue is read again, as the item just finished has left it.
  */
 export function NextInQueue({ doneItemId }: { doneItemId: number }) {
+  const t = useT();
   const { data: queue } = useQuery({ ...queueQuery(), refetchOnMount: 'always' });
   const next = nextQueued(
     (queue ?? []).filter((q) => q.itemId !== doneItemId && q.status !== 'done'),
     new Date(),
   );
   return (
-    <nav aria-label="What next" className="grid gap-2 sm:grid-cols-2">
+    <nav aria-label={t('bench.next.nav')} className="grid gap-2 sm:grid-cols-2">
       {next && (
         <Link to={paths.item(next.itemId)} className={`${linkClass} bg-navy text-white`}>
-          Next item: {next.categoryName}
+          {t('bench.next.item', { kind: next.categoryName })}
           {next.tagCode && ` · ${next.tagCode}`}
         </Link>
       )}
       <Link to={paths.bench()} className={`${linkClass} bg-white text-navy`}>
-        My queue
+        {t('bench.next.queue')}
       </Link>
     </nav>
   );

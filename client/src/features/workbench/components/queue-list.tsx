@@ -8,21 +8,24 @@ import { paths } from '../../../config/paths';
 import { useQueue } from '../api/get-queue';
 import { photoUrl } from '../api/photo-url';
 import type { QueueItem } from '../api/types';
+import { useLanguage, useT } from '../../../lib/i18n';
 
 /**
  * The items coming to the fixer, by day in the group's time zone: today first, then the days to come, then items
  * left open from past days, apart. `statusChip` shows an item's status once it has arrived.
  */
 export function QueueList({ statusChip }: { statusChip: (status: ItemStatus) => ReactNode }) {
+  const t = useT();
+  const lang = useLanguage();
   const { data: queue } = useQueue();
   const now = new Date();
-  const days = queueDays(queue, now);
+  const days = queueDays(queue, now, lang);
   const coming = days.filter((d) => d.kind !== 'past');
   const past = days.filter((d) => d.kind === 'past');
   const day = (d: (typeof days)[number]) => (
     <section key={d.date} aria-labelledby={`queue-${d.date}`} className="space-y-3" data-testid="queue-day">
       <h3 id={`queue-${d.date}`} className="text-lg text-copper-dark">
-        {d.kind === 'today' ? `Today · ${d.label}` : d.label}
+        {d.kind === 'today' ? t('bench.queue.today', { day: d.label }) : d.label}
       </h3>
       <ol className="space-y-3">
         {d.items.map((q) => (
@@ -39,20 +42,20 @@ export function QueueList({ statusChip }: { statusChip: (status: ItemStatus) => 
   return (
     <section aria-labelledby="queue" className="space-y-4">
       <h2 id="queue" className="text-xl">
-        My queue
+        {t('bench.queue.title')}
       </h2>
       {coming.length === 0 && (
-        <EmptyState title="No items are waiting for you" icon="⚒">
-          When the organiser runs triage, the items matched to you appear here in order.
+        <EmptyState title={t('bench.queue.emptyTitle')} icon="⚒">
+          {t('bench.queue.empty')}
         </EmptyState>
       )}
       {coming.map(day)}
       {past.length > 0 && (
         <section aria-labelledby="queue-past" className="space-y-3 border-t border-ink/10 pt-4">
           <h3 id="queue-past" className="text-lg">
-            Past sessions: items never closed
+            {t('bench.queue.pastTitle')}
           </h3>
-          <p className="text-sm text-ink-soft">These sessions are over, but these items were never marked done.</p>
+          <p className="text-sm text-ink-soft">{t('bench.queue.past')}</p>
           {past.map(day)}
         </section>
       )}
@@ -69,6 +72,9 @@ function QueueCard({
   late: boolean;
   statusChip: (status: ItemStatus) => ReactNode;
 }) {
+  const t = useT();
+  const lang = useLanguage();
+  const time = formatTime(q.slotStartsAt, q.timeZone, lang);
   return (
     <li className="rounded-xl bg-white p-4 shadow-sm ring-1 ring-ink/5">
       <div className="flex items-baseline justify-between gap-2">
@@ -82,24 +88,24 @@ function QueueCard({
         </p>
         <p className="text-sm font-bold text-copper-dark">
           {/* A time already gone says so: "planned 07:52" an hour later reads as a mistake. */}
-          {late ? 'due since' : 'planned'} {formatTime(q.slotStartsAt, q.timeZone)}
+          {late ? t('bench.queue.dueSince', { time }) : t('bench.queue.planned', { time })}
         </p>
       </div>
       {q.status !== 'booked' && (
         <p className="mt-1 flex items-center gap-2">
           {statusChip(q.status)}
-          {q.queueNumber !== null && <b>No. {q.queueNumber}</b>}
+          {q.queueNumber !== null && <b>{t('bench.queue.no', { n: q.queueNumber })}</b>}
           {q.tagCode && <span className="font-mono text-sm">{q.tagCode}</span>}
         </p>
       )}
       <p className="mt-1">{q.fault}</p>
       <p className="mt-1 text-sm text-ink-soft">
-        {[q.brand, q.model].filter(Boolean).join(' ') || 'Brand not given'} · {q.visitorName} · {q.benchName} · about{' '}
-        {q.minutes} min · {q.reference}
+        {[q.brand, q.model].filter(Boolean).join(' ') || t('bench.queue.noBrand')} · {q.visitorName} · {q.benchName} ·{' '}
+        {t('bench.queue.about', { minutes: q.minutes })} · {q.reference}
       </p>
       {q.mains && (
         <p className="mt-2 rounded bg-copper-light px-2 py-1 text-sm font-semibold text-copper-dark">
-          ⚠ Mains item: unplug and prove dead before opening; safety-check before it goes home.
+          {t('bench.queue.mains')}
         </p>
       )}
       {q.photoIds.length > 0 && (
@@ -108,7 +114,7 @@ function QueueCard({
             <a key={p} href={photoUrl(p)} target="_blank" rel="noreferrer">
               <img
                 src={photoUrl(p)}
-                alt={`Photo of the ${q.categoryName.toLowerCase()}`}
+                alt={t('bench.queue.photoOf', { kind: lang === 'de' ? q.categoryName : q.categoryName.toLowerCase() })}
                 className="size-24 rounded-lg object-cover"
               />
             </a>
