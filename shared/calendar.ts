@@ -47,20 +47,39 @@ export interface BookingFacts {
   itemNames: string[];
 }
 
+/** The words of a booking's calendar entry; the server passes the booking's language (locales/<language>/mail.json). */
+export type CalendarWords = (
+  key: 'summary' | 'reference' | 'bringing' | 'show' | 'page',
+  values: Record<string, string>,
+) => string;
+const ENGLISH: CalendarWords = (key, v) =>
+  ({
+    summary: `Repair slot: ${v.session}`,
+    reference: `Booking reference: ${v.reference}`,
+    bringing: `You are bringing: ${v.items}.`,
+    show: 'Show the reference or the QR code on your booking page at the reception desk.',
+    page: `Your booking page (move or cancel): ${v.url}`,
+  })[key];
+
 /** A visitor's booked slot as a calendar entry: the slot's times, the venue, the reference and the booking page. */
-export function bookingEntry(b: BookingFacts, publicUrl: string, now: Date): CalendarEntry {
+export function bookingEntry(
+  b: BookingFacts,
+  publicUrl: string,
+  now: Date,
+  words: CalendarWords = ENGLISH,
+): CalendarEntry {
   return {
     uid: `booking-${b.reference}@${uidHost(publicUrl)}`,
     start: b.slotStartsAt,
     end: b.slotEndsAt,
-    summary: `Repair slot: ${b.eventTitle}`,
+    summary: words('summary', { session: b.eventTitle }),
     location: venueLine(b.venue),
     description: [
-      `Booking reference: ${b.reference}`,
+      words('reference', { reference: b.reference }),
       `${b.groupName}.`,
-      b.itemNames.length ? `You are bringing: ${b.itemNames.join('; ')}.` : '',
-      `Show the reference or the QR code on your booking page at the reception desk.`,
-      `Your booking page (move or cancel): ${b.manageUrl}`,
+      b.itemNames.length ? words('bringing', { items: b.itemNames.join('; ') }) : '',
+      words('show', {}),
+      words('page', { url: b.manageUrl }),
     ]
       .filter(Boolean)
       .join('\n'),

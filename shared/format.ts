@@ -84,6 +84,6 @@ export const isKnownCurrency = (code: string) => Intl.supportedValuesOf('currenc
 /** A currency's name in words, e.g. "Euro" for EUR. */
 export const currencyName = (code: string) => new Intl.DisplayNames(['en-GB'], { type: 'currency' }).of(code) ?? code;
 
-/** An amount of money in the group's currency as people in Britain write it, e.g. €12.50 or CHF 7.50. */
-export const formatMoney = (amount: number, currency: string) =>
-  new Intl.NumberFormat('en-GB', { style: 'currency', currency }).format(amount);
+/** An amount of money in the group's currency as the reader writes it: €12.50 in Britain, 12,50 € in Germany. */
+export const formatMoney = (amount: number, currency: string, lang: Language = DEFAULT_LANGUAGE) =>
+  new Intl.NumberFormat(intlLocale(lang), { style: 'currency', currency }).format(amount);

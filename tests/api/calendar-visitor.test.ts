@@ -42,6 +42,17 @@ const venueRow = async (id: number) => (await db.db.select().from(venues).where(
 const nextYear = new Date().getUTCFullYear() + 1;
 
 describe("the visitor's calendar file", () => {
+  it('is written in the language the visitor booked in', async () => {
+    const { slotIds } = await makeEvent(db.db, groupId);
+    const { reference, manageToken } = await book(new Agent(server.url, { 'accept-language': 'de-DE' }), slotIds[2]);
+    // Fetched from an English browser, the file still speaks the booking's German.
+    const [e] = readCalendar((await new Agent(server.url).get(calendarPath(reference, manageToken))).text).events;
+    expect(e.summary).toMatch(/^Reparaturtermin: /);
+    expect(e.description).toContain(`Buchungsnummer: ${reference}`);
+    expect(e.description).toContain('Sie bringen mit: Wasserkocher');
+    expect(e.description).toContain('Ihre Buchungsseite (verschieben oder stornieren): ');
+  });
+
   it('holds the booked slot, the venue, the reference and the booking page, as ical.js reads it', async () => {
     const { eventId, venueId, slotIds } = await makeEvent(db.db, groupId);
     const a = new Agent(server.url);

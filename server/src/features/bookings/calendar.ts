@@ -3,6 +3,8 @@ import type { AppContext } from '../../context';
 import { calendarText } from '../../core/calendar';
 import { manageTokenFor, manageUrl } from '../../core/links';
 import { HttpError } from '../../http/errors';
+import { translate } from '../../i18n';
+import { asLanguage } from '../../../../shared/i18n/languages';
 import { itemsOf } from './queries/bookings';
 import { bookingWithContextById } from './queries/context';
 import { labelsOf } from './write';
@@ -30,6 +32,8 @@ export async function bookingCalendar(ctx: AppContext, bookingId: number) {
     },
     ctx.env.publicUrl,
     new Date(),
+    // In the language the visitor booked in, like the mails.
+    (key, values) => translate(asLanguage(b.language), `mail.ics.${key}`, values),
   );
   return { text: calendarText(row.event.title, [entry]), filename: `mendery-${b.reference}.ics` };
 }

@@ -13,6 +13,8 @@ import type { AppContext } from '../../context';
 import type { DbOrTx, Tx } from '../../db/client';
 import { HttpError, notFound } from '../../http/errors';
 import { enqueueMail } from '../../mail/outbox';
+import { categoryText, translate } from '../../i18n';
+import { asLanguage } from '../../../../shared/i18n/languages';
 import { composeMail } from '../../mail/templates';
 import type { ItemRow } from '../../core/items';
 import { rebookUrl } from '../../core/links';
@@ -34,38 +36,44 @@ import {
   updateFollowUpStatus,
 } from './queries/follow-ups';
 
+/** The part mail in the visitor's language (the booking's): its words from the 'mail' namespace. */
 function partMail(
   ctx: AppContext,
   to: string,
   f: {
     visitorName: string;
     groupName: string;
-    itemLabel: string;
+    categorySlug: string;
+    categoryName: string;
     part: string;
     link: string | null;
     cost: number | null;
     currency: string;
     itemId: number;
+    language: string | null;
   },
   reminder: boolean,
 ) {
-  return composeMail(
-    to,
-    reminder ? `Still waiting for the part? ${f.itemLabel}` : `The part your ${f.itemLabel.toLowerCase()} needs`,
-    {
-      paragraphs: [
-        `Hello ${f.visitorName.split(' ')[0]},`,
-        reminder
-          ? `six weeks ago a fixer at ${f.groupName} found that your ${f.itemLabel.toLowerCase()} needs a part. If you have it now, bring it to a session: the link below books you a place ahead of the queue.`
-          : `thank you for coming to ${f.groupName}. Your ${f.itemLabel.toLowerCase()} can be repaired once it has a new part.`,
-        `The part: ${f.part}.${isWebLink(f.link) ? ` Where to find it: ${f.link}.` : ''}${f.cost !== null ? ` Expect to pay about ${formatMoney(f.cost, f.currency)}.` : ''}`,
-        'When you have it, book a return visit with this link: it keeps a place for you even when a session is full, and the fixers will know what to expect.',
-      ],
-      action: { label: 'Book a return visit', url: rebookUrl(ctx, f.itemId) },
-      footnote:
-        'Check the part’s numbers against the old one before buying. If you decide not to go ahead, let the group know by replying.',
-    },
-  );
+  const lang = asLanguage(f.language);
+  const name = categoryText(lang, f.categorySlug, 'name', f.categoryName);
+  // Inside a sentence a kind of item is lower case, but in German, whose nouns keep their capital.
+  const kind = lang === 'de' ? name : name.toLowerCase();
+  const t = (key: string, values?: Record<string, unknown>) => translate(lang, `mail.part.${key}`, values);
+  return composeMail(to, reminder ? t('subjectReminder', { kind: name }) : t('subject', { kind }), {
+    language: lang,
+    paragraphs: [
+      translate(lang, 'mail.hello', { name: f.visitorName.split(' ')[0] }),
+      reminder ? t('reminder', { group: f.groupName, kind }) : t('thanks', { group: f.groupName, kind }),
+      [
+        t('part', { part: f.part }),
+        ...(isWebLink(f.link) ? [t('where', { link: f.link })] : []),
+        ...(f.cost !== null ? [t('cost', { cost: formatMoney(f.cost, f.currency, lang) })] : []),
+      ].join(' '),
+      t('book'),
+    ],
+    action: { label: t('action'), url: rebookUrl(ctx, f.itemId) },
+    footnote: t('footnote'),
+  });
 }
 
 /**
@@ -88,7 +96,9 @@ export async function afterOutcome(ctx: AppContext, tx: Tx, row: ItemRow, outcom
             {
               visitorName: row.booking.visitorName,
               groupName: row.group.name,
-              itemLabel: row.category.name,
+              categorySlug: row.category.slug,
+              categoryName: row.category.name,
+              language: row.booking.language,
               part: o.partDescription,
               link: o.partLink,
               cost: o.partCostCents === null ? null : o.partCostCents / 100,
@@ -179,7 +189,9 @@ export async function sendFollowUpReminders(ctx: AppContext): Promise<number> {
             {
               visitorName: d.booking.visitorName,
               groupName: d.groupName,
-              itemLabel: d.categoryName,
+              categorySlug: d.categorySlug,
+              categoryName: d.categoryName,
+              language: d.booking.language,
               part: d.o.partDescription,
               link: d.o.partLink,
               cost: d.o.partCostCents === null ? null : d.o.partCostCents / 100,

@@ -131,6 +131,7 @@ export const remindersDue = (tx: DbOrTx, cutoff: Date) =>
       f: followUps,
       booking: bookings,
       categoryName: categories.name,
+      categorySlug: categories.slug,
       groupName: repairGroups.name,
       currency: repairGroups.currency,
       o: itemOutcomes,
