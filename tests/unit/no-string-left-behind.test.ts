@@ -13,8 +13,6 @@ import { SERVER_ONLY_NAMESPACES } from '../../shared/i18n/namespaces';
  */
 const PENDING = new Set([
   'client/src/app/route-error.tsx',
-  'client/src/components/layouts/event-tabs.tsx',
-  'client/src/components/layouts/group-tabs.tsx',
   'client/src/components/layouts/logo.tsx',
   'client/src/features/admin/components/merge-group.tsx',
   'client/src/features/benches/components/bench-layout-editor.tsx',
@@ -33,8 +31,6 @@ const PENDING = new Set([
   'client/src/features/event-day/components/status-tallies.tsx',
   'client/src/features/event-day/components/tag-sheet.tsx',
   'client/src/features/event-day/components/walk-in-form.tsx',
-  'client/src/features/events/components/cancel-session.tsx',
-  'client/src/features/events/components/session-rows.tsx',
   'client/src/features/groups/components/privacy-settings.tsx',
   'client/src/features/impact/components/displacement-card.tsx',
   'client/src/features/impact/components/display.tsx',
@@ -78,9 +74,6 @@ const PENDING = new Set([
   'client/src/routes/admin/mailbox.tsx',
   'client/src/routes/admin/overview.tsx',
   'client/src/routes/event-day/tag.tsx',
-  'client/src/routes/events/manage.tsx',
-  'client/src/routes/groups/events.tsx',
-  'client/src/routes/groups/new-event.tsx',
   'client/src/routes/groups/people.tsx',
   'client/src/routes/groups/settings.tsx',
   'client/src/routes/impact/dashboard.tsx',

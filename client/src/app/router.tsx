@@ -119,7 +119,7 @@ export const router = createBrowserRouter([
           { path: 'start', loader: start },
           {
             path: 'bench',
-            ...page(() => import('../routes/workbench/bench'), 'BenchPage', allow.fixerOrHost, ['bench']),
+            ...page(() => import('../routes/workbench/bench'), 'BenchPage', allow.fixerOrHost, ['bench', 'organise']),
           },
           {
             path: 'me/skills',
@@ -127,20 +127,23 @@ export const router = createBrowserRouter([
           },
           {
             path: 'groups/:groupId/skills',
-            ...page(() => import('../routes/skills/skills-matrix'), 'SkillsMatrixPage', allow.organiser),
+            ...page(() => import('../routes/skills/skills-matrix'), 'SkillsMatrixPage', allow.organiser, ['organise']),
           },
           {
             path: 'events/:eventId/board',
-            ...page(() => import('../routes/triage/board'), 'TriageBoardPage', allow.organiser),
+            ...page(() => import('../routes/triage/board'), 'TriageBoardPage', allow.organiser, ['organise']),
           },
           {
             path: 'events/:eventId/board/runs/:runId',
-            ...page(() => import('../routes/triage/run'), 'TriageRunPage', allow.organiser),
+            ...page(() => import('../routes/triage/run'), 'TriageRunPage', allow.organiser, ['organise']),
           },
-          { path: 'events/:eventId/rota', ...page(() => import('../routes/rota/rota'), 'RotaPage', allow.organiser) },
+          {
+            path: 'events/:eventId/rota',
+            ...page(() => import('../routes/rota/rota'), 'RotaPage', allow.organiser, ['organise']),
+          },
           {
             path: 'events/:eventId/benches',
-            ...page(() => import('../routes/benches/benches'), 'BenchesPage', allow.organiser),
+            ...page(() => import('../routes/benches/benches'), 'BenchesPage', allow.organiser, ['organise']),
           },
           { path: 'desk', ...page(() => import('../routes/event-day/desk'), 'DeskHomePage', allow.staff) },
           { path: 'desk/:eventId', ...page(() => import('../routes/event-day/desk'), 'DeskPage', allow.staff) },
@@ -151,7 +154,7 @@ export const router = createBrowserRouter([
           { path: 't/:code', ...page(() => import('../routes/event-day/tag'), 'TagPage') },
           {
             path: 'groups/:groupId/impact',
-            ...page(() => import('../routes/impact/dashboard'), 'GroupImpactPage', allow.organiser),
+            ...page(() => import('../routes/impact/dashboard'), 'GroupImpactPage', allow.organiser, ['organise']),
           },
           {
             path: 'admin/impact',
@@ -163,11 +166,11 @@ export const router = createBrowserRouter([
           },
           {
             path: 'groups/:groupId/import',
-            ...page(() => import('../routes/impact/import'), 'GroupImportPage', allow.organiser),
+            ...page(() => import('../routes/impact/import'), 'GroupImportPage', allow.organiser, ['organise']),
           },
           {
             path: 'groups/:groupId/follow-ups',
-            ...page(() => import('../routes/impact/follow-ups'), 'FollowUpsPage', allow.organiser),
+            ...page(() => import('../routes/impact/follow-ups'), 'FollowUpsPage', allow.organiser, ['organise']),
           },
           { path: 'impact', ...page(() => import('../routes/impact/public'), 'PublicImpactPage') },
           { path: 'impact/groups/:groupId', ...page(() => import('../routes/impact/public'), 'PublicImpactPage') },
@@ -178,7 +181,7 @@ export const router = createBrowserRouter([
           { path: 'toolkit/calculators', ...page(() => import('../routes/toolkit/calculators'), 'CalculatorsPage') },
           {
             path: 'groups/:groupId/salvage',
-            ...page(() => import('../routes/toolkit/salvage'), 'SalvagePage', allow.volunteer),
+            ...page(() => import('../routes/toolkit/salvage'), 'SalvagePage', allow.volunteer, ['organise']),
           },
           {
             path: 'rebook/:token',
@@ -186,14 +189,14 @@ export const router = createBrowserRouter([
           },
           {
             path: 'events/:eventId/live',
-            ...page(() => import('../routes/event-day/live'), 'LiveViewPage', allow.organiser),
+            ...page(() => import('../routes/event-day/live'), 'LiveViewPage', allow.organiser, ['organise']),
           },
           { path: 'events', ...page(() => import('../routes/events/list'), 'EventsPage') },
           { path: 'events/:eventId', ...page(() => import('../routes/events/detail'), 'EventPage') },
           { path: 'events/:eventId/book', ...page(() => import('../routes/events/book'), 'BookingPage') },
           {
             path: 'events/:eventId/manage',
-            ...page(() => import('../routes/events/manage'), 'ManageEventPage', allow.organiser),
+            ...page(() => import('../routes/events/manage'), 'ManageEventPage', allow.organiser, ['organise']),
           },
           { path: 'bookings/new-link', ...page(() => import('../routes/bookings/new-link'), 'FreshLinkPage') },
           { path: 'bookings/:reference', ...page(() => import('../routes/bookings/manage'), 'ManageBookingPage') },
@@ -201,15 +204,15 @@ export const router = createBrowserRouter([
           { path: 'b/:reference', ...page(() => import('../routes/bookings/claim'), 'BookingCodePage') },
           {
             path: 'groups/:groupId/people',
-            ...page(() => import('../routes/groups/people'), 'GroupPeoplePage', allow.organiser),
+            ...page(() => import('../routes/groups/people'), 'GroupPeoplePage', allow.organiser, ['organise']),
           },
           {
             path: 'groups/:groupId/events',
-            ...page(() => import('../routes/groups/events'), 'GroupEventsPage', allow.organiser),
+            ...page(() => import('../routes/groups/events'), 'GroupEventsPage', allow.organiser, ['organise']),
           },
           {
             path: 'groups/:groupId/events/new',
-            ...page(() => import('../routes/groups/new-event'), 'NewEventPage', allow.organiser),
+            ...page(() => import('../routes/groups/new-event'), 'NewEventPage', allow.organiser, ['organise']),
           },
           { path: 'groups/:groupId/privacy', ...page(() => import('../routes/privacy/group'), 'GroupPrivacyPage') },
           {
@@ -218,7 +221,7 @@ export const router = createBrowserRouter([
           },
           {
             path: 'groups/:groupId/settings',
-            ...page(() => import('../routes/groups/settings'), 'GroupSettingsPage', allow.organiser),
+            ...page(() => import('../routes/groups/settings'), 'GroupSettingsPage', allow.organiser, ['organise']),
           },
           {
             path: 'admin/categories',

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { useSuspenseQuery } from '@tanstack/react-query';
 import { Link, useParams, type LoaderFunctionArgs } from 'react-router';
-import { SKILL_LABELS, type Skill } from '../../../../shared/constants';
+import { SKILLS, type Skill } from '../../../../shared/constants';
 import { formatDay, formatTime, formatTimeRange } from '../../../../shared/format';
 import { EventTabs } from '../../components/layouts/event-tabs';
 import { Button } from '../../components/ui/button';
@@ -16,6 +16,7 @@ import { EraseBookingButton } from '../../features/privacy/components/erase-book
 import { organises, useUser } from '../../lib/auth';
 import { ERASED_NAME } from '../../../../shared/privacy/scrub';
 import { PlacesBar, StatusBadge } from '../../features/events/components/places-bar';
+import { useLanguage, useT } from '../../lib/i18n';
 import { queryClient } from '../../lib/query-client';
 
 /** The event must load (else the error page says why); what is coming may fail on its own, in its card. */
@@ -29,6 +30,8 @@ export const loader = ({ params }: LoaderFunctionArgs) => {
 
 /** The organiser's view of one session: its state, its slots, and what is coming. */
 export function ManageEventPage() {
+  const t = useT();
+  const lang = useLanguage();
   const id = Number(useParams().eventId);
   const { data: e } = useSuspenseQuery(eventQuery(id));
   const coming = useEventBookings(id);
@@ -40,14 +43,14 @@ export function ManageEventPage() {
   const draft = e.status === 'draft';
   const questions = {
     publish: {
-      title: 'Publish this session?',
-      message: 'It appears on the public calendar and people can book. Hours and slots are then fixed.',
-      label: 'Publish',
+      title: t('organise.manage.publishQuestion'),
+      message: t('organise.manage.publishMessage'),
+      label: t('organise.manage.publish'),
     },
     close: {
-      title: 'Close booking?',
-      message: 'No new bookings or waiting-list entries are taken. Existing bookings stay.',
-      label: 'Close booking',
+      title: t('organise.manage.closeQuestion'),
+      message: t('organise.manage.closeMessage'),
+      label: t('organise.manage.close'),
     },
   };
   const maxSkill = Math.max(1, ...(coming.data?.summary.bySkill.map((s) => s.count) ?? [1]));
@@ -56,24 +59,24 @@ export function ManageEventPage() {
     <div className="space-y-6">
       <div>
         <Link to={paths.groupEvents(e.groupId)} className="text-sm font-bold text-navy underline">
-          ← {e.groupName}: all sessions
+          {t('organise.manage.back', { group: e.groupName })}
         </Link>
         <div className="mt-2 flex flex-wrap items-center gap-3">
           <h1 className="text-2xl sm:text-3xl">{e.title}</h1>
           <StatusBadge status={e.status} />
         </div>
         <p className="font-bold text-copper-dark">
-          {formatDay(e.startsAt, tz)} · {formatTimeRange(e.startsAt, e.endsAt, tz)} · {e.venue.name}
+          {formatDay(e.startsAt, tz, lang)} · {formatTimeRange(e.startsAt, e.endsAt, tz, lang)} · {e.venue.name}
         </p>
       </div>
       <EventTabs eventId={e.id} />
 
       {action.error && <Alert tone="error">{action.error.message}</Alert>}
       <div className="flex flex-wrap gap-2">
-        {draft && <Button onClick={() => setAsk('publish')}>Publish</Button>}
+        {draft && <Button onClick={() => setAsk('publish')}>{t('organise.manage.publish')}</Button>}
         {e.status === 'published' && (
           <Button variant="secondary" onClick={() => setAsk('close')}>
-            Close booking
+            {t('organise.manage.close')}
           </Button>
         )}
         {e.status !== 'draft' && (
@@ -81,20 +84,20 @@ export function ManageEventPage() {
             to={paths.event(e.id)}
             className="inline-flex min-h-11 items-center rounded-lg px-4 font-bold text-navy ring-1 ring-navy/25"
           >
-            Public page
+            {t('organise.manage.publicPage')}
           </Link>
         )}
       </div>
 
       <div className="grid gap-4 lg:grid-cols-[1fr_20rem]">
         <Card flush className="overflow-hidden">
-          <h2 className="px-5 pt-4 text-lg">Slots</h2>
+          <h2 className="px-5 pt-4 text-lg">{t('organise.manage.slots')}</h2>
           {draft && (
             <p className="px-5 text-sm text-ink-soft">
-              Adjust the places of each slot (Enter or leaving the field saves), or remove a slot, before publishing.
+              {t('organise.manage.adjustHint')}
               {action.isSuccess && (
                 <span role="status" className="ml-2 font-bold text-sage">
-                  Saved.
+                  {t('organise.manage.saved')}
                 </span>
               )}
             </p>
@@ -102,24 +105,24 @@ export function ManageEventPage() {
           <table className="mt-2 w-full text-left text-sm">
             <thead className="bg-navy/5 text-navy">
               <tr>
-                <th className="px-5 py-2">Time</th>
-                <th className="px-2 py-2">Places</th>
-                <th className="px-2 py-2">Booked</th>
+                <th className="px-5 py-2">{t('organise.manage.time')}</th>
+                <th className="px-2 py-2">{t('organise.manage.places')}</th>
+                <th className="px-2 py-2">{t('organise.manage.booked')}</th>
                 <th className="px-5 py-2">
-                  <span className="sr-only">Actions</span>
+                  <span className="sr-only">{t('organise.manage.actions')}</span>
                 </th>
               </tr>
             </thead>
             <tbody>
               {e.slots.map((s) => (
                 <tr key={s.id} className="border-t border-ink/5">
-                  <td className="px-5 py-2 font-bold">{formatTimeRange(s.startsAt, s.endsAt, tz)}</td>
+                  <td className="px-5 py-2 font-bold">{formatTimeRange(s.startsAt, s.endsAt, tz, lang)}</td>
                   <td className="px-2 py-2">
                     {draft ? (
                       <input
                         type="number"
                         min={0}
-                        aria-label={`Places at ${formatTime(s.startsAt, tz)}`}
+                        aria-label={t('organise.manage.placesAt', { time: formatTime(s.startsAt, tz, lang) })}
                         defaultValue={s.capacity}
                         className="w-20 rounded border border-ink/20 px-2 py-1"
                         onKeyDown={(ev) => ev.key === 'Enter' && ev.currentTarget.blur()}
@@ -137,7 +140,9 @@ export function ManageEventPage() {
                       <PlacesBar free={s.free} total={s.capacity} label={false} />
                     </div>
                     <span className="text-xs">
-                      {s.booked} booked{s.held ? `, ${s.held} held` : ''}
+                      {s.held
+                        ? t('organise.manage.bookedHeld', { booked: s.booked, held: s.held })
+                        : t('organise.manage.bookedCount', { booked: s.booked })}
                     </span>
                   </td>
                   <td className="px-5 py-2 text-right">
@@ -146,7 +151,7 @@ export function ManageEventPage() {
                         className="rounded px-2 py-1 font-semibold text-alert hover:bg-alert-light"
                         onClick={() => action.mutate({ kind: 'remove-slot', slotId: s.id })}
                       >
-                        Remove
+                        {t('organise.manage.remove')}
                       </button>
                     )}
                   </td>
@@ -157,7 +162,7 @@ export function ManageEventPage() {
         </Card>
 
         <Card>
-          <h2 className="text-lg">What is coming</h2>
+          <h2 className="text-lg">{t('organise.manage.coming')}</h2>
           {coming.isPending ? (
             <Spinner />
           ) : coming.error ? (
@@ -165,23 +170,30 @@ export function ManageEventPage() {
           ) : (
             <>
               <p className="mt-1">
-                <span className="text-3xl font-extrabold text-navy">{coming.data.summary.items}</span> items in{' '}
-                {coming.data.summary.bookings} bookings, {coming.data.summary.mains} on mains
+                <span className="text-3xl font-extrabold text-navy">{coming.data.summary.items}</span>{' '}
+                {t('organise.manage.comingSummary', {
+                  items: coming.data.summary.items,
+                  bookings: coming.data.summary.bookings,
+                  mains: coming.data.summary.mains,
+                })}
               </p>
-              <h3 className="mt-4 text-sm font-bold">Fixers needed, by skill</h3>
-              {coming.data.summary.bySkill.length === 0 && <p className="text-sm text-ink-soft">Nothing booked yet.</p>}
-              <ul className="mt-1 space-y-1.5" aria-label="Items by skill">
+              <h3 className="mt-4 text-sm font-bold">{t('organise.manage.bySkill')}</h3>
+              {coming.data.summary.bySkill.length === 0 && (
+                <p className="text-sm text-ink-soft">{t('organise.manage.nothingBooked')}</p>
+              )}
+              <ul className="mt-1 space-y-1.5" aria-label={t('organise.manage.itemsBySkill')}>
                 {coming.data.summary.bySkill.map((s) => (
                   <li key={s.name} className="grid grid-cols-[6.5rem_1fr_2rem] items-center gap-2 text-sm">
-                    <span>{SKILL_LABELS[s.name as Skill] ?? s.name}</span>
+                    <span>{SKILLS.includes(s.name as Skill) ? t(`common.skill.${s.name}`) : s.name}</span>
                     <span className="h-3 rounded bg-copper" style={{ width: `${(s.count / maxSkill) * 100}%` }} />
                     <span className="text-right font-bold">{s.count}</span>
                   </li>
                 ))}
               </ul>
-              <h3 className="mt-4 text-sm font-bold">By kind of item</h3>
+              <h3 className="mt-4 text-sm font-bold">{t('organise.manage.byKind')}</h3>
               <p className="text-sm text-ink-soft">
-                {coming.data.summary.byCategory.map((c) => `${c.name} ${c.count}`).join(' · ') || 'Nothing booked yet.'}
+                {coming.data.summary.byCategory.map((c) => `${c.name} ${c.count}`).join(' · ') ||
+                  t('organise.manage.nothingBooked')}
               </p>
             </>
           )}
@@ -190,11 +202,11 @@ export function ManageEventPage() {
 
       <section aria-labelledby="bookings">
         <h2 id="bookings" className="mb-3 text-xl">
-          Bookings
+          {t('organise.manage.bookings')}
         </h2>
         {coming.data?.bookings.length === 0 && (
-          <EmptyState title="No bookings yet" icon="☰">
-            {draft ? 'Publish the session to take bookings.' : 'Bookings appear here as people make them.'}
+          <EmptyState title={t('organise.manage.noBookingsTitle')} icon="☰">
+            {draft ? t('organise.manage.noBookingsDraft') : t('organise.manage.noBookings')}
           </EmptyState>
         )}
         <ul className="space-y-2">
@@ -213,7 +225,8 @@ export function ManageEventPage() {
                   </span>
                 </p>
                 <p className="text-sm font-bold text-copper-dark">
-                  {formatTime(b.slotStartsAt, tz)} {b.status === 'cancelled' && <StatusBadge status="cancelled" />}
+                  {formatTime(b.slotStartsAt, tz, lang)}{' '}
+                  {b.status === 'cancelled' && <StatusBadge status="cancelled" />}
                   {canErase && b.visitorName !== ERASED_NAME && (
                     <EraseBookingButton
                       reference={b.reference}
@@ -232,14 +245,16 @@ export function ManageEventPage() {
                       {i.model ? ` ${i.model}` : ''}
                     </span>
                     {i.mains && (
-                      <span className="rounded bg-copper-light px-1.5 text-xs font-bold text-copper-dark">mains</span>
+                      <span className="rounded bg-copper-light px-1.5 text-xs font-bold text-copper-dark">
+                        {t('organise.manage.mains')}
+                      </span>
                     )}
                     <span className="text-ink-soft">{i.fault}</span>
                     {i.photoIds.map((p) => (
                       <a key={p} href={`/api/photos/${p}`} target="_blank" rel="noreferrer">
                         <img
                           src={`/api/photos/${p}`}
-                          alt="Photo of the item"
+                          alt={t('organise.manage.photo')}
                           className="size-10 rounded object-cover"
                         />
                       </a>
@@ -252,13 +267,13 @@ export function ManageEventPage() {
         </ul>
         {(coming.data?.waiting.length ?? 0) > 0 && (
           <Card className="mt-4">
-            <h3 className="text-lg">Waiting list</h3>
+            <h3 className="text-lg">{t('organise.manage.waitingList')}</h3>
             <ul className="mt-2 text-sm">
               {coming.data!.waiting.map((w) => (
                 <li key={w.id}>
-                  {w.visitorName} · {w.places} item{w.places > 1 ? 's' : ''} ·{' '}
-                  {formatTime(e.slots.find((s) => s.id === w.slotId)?.startsAt ?? e.startsAt, tz)} ·{' '}
-                  {w.status === 'offered' ? 'offered a place' : 'waiting'}
+                  {w.visitorName} · {t('organise.manage.waitingItems', { n: w.places })} ·{' '}
+                  {formatTime(e.slots.find((s) => s.id === w.slotId)?.startsAt ?? e.startsAt, tz, lang)} ·{' '}
+                  {w.status === 'offered' ? t('organise.manage.offered') : t('organise.manage.waiting')}
                 </li>
               ))}
             </ul>
@@ -293,7 +308,7 @@ export function ManageEventPage() {
         message={ask ? questions[ask].message : ''}
         confirmLabel={ask ? questions[ask].label : ''}
         tone="primary"
-        cancelLabel="Not yet"
+        cancelLabel={t('organise.manage.notYet')}
         busy={action.isPending}
         onCancel={() => setAsk(null)}
         onConfirm={() =>

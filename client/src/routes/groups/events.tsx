@@ -9,6 +9,7 @@ import { ComingRow, PastRow } from '../../features/events/components/session-row
 import { useGroupSettings, groupSettingsQuery } from '../../features/groups/api/get-group-settings';
 import { useSessionFigures } from '../../features/impact/api/get-session-figures';
 import { organises, useUser } from '../../lib/auth';
+import { useT } from '../../lib/i18n';
 import { queryClient } from '../../lib/query-client';
 
 /** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
@@ -23,6 +24,7 @@ const PAST_PAGE = 6;
 
 /** A group's sessions: today's and the coming ones first, soonest first; past ones apart, with what came of them. */
 export function GroupEventsPage() {
+  const t = useT();
   const groupId = Number(useParams().groupId);
   const events = useGroupEvents(groupId);
   const group = useGroupSettings(groupId);
@@ -35,12 +37,12 @@ export function GroupEventsPage() {
   return (
     <div>
       <div className="mb-2 flex flex-wrap items-center justify-between gap-3">
-        <h1 className="text-2xl sm:text-3xl">{group.data?.name ?? 'Sessions'}</h1>
+        <h1 className="text-2xl sm:text-3xl">{group.data?.name ?? t('organise.sessions.title')}</h1>
         <Link
           to={paths.newEvent(groupId)}
           className="inline-flex min-h-11 items-center rounded-lg bg-copper px-4 font-bold text-white hover:bg-copper-dark"
         >
-          + New session
+          {t('organise.sessions.new')}
         </Link>
       </div>
       <GroupTabs groupId={groupId} />
@@ -50,11 +52,11 @@ export function GroupEventsPage() {
         <div className="space-y-8">
           <section aria-labelledby="coming-sessions">
             <h2 id="coming-sessions" className="mb-3 text-xl">
-              Today and coming up
+              {t('organise.sessions.coming')}
             </h2>
             {coming.length === 0 ? (
-              <EmptyState title="Nothing planned yet" icon="▦">
-                Plan the next one: pick a date, the venue and the opening hours, and Mendery cuts the slots.
+              <EmptyState title={t('organise.sessions.noneComingTitle')} icon="▦">
+                {t('organise.sessions.noneComing')}
               </EmptyState>
             ) : (
               <ul className="space-y-3">
@@ -68,12 +70,15 @@ export function GroupEventsPage() {
           </section>
           <section aria-labelledby="past-sessions">
             <h2 id="past-sessions" className="mb-3 text-xl">
-              Past sessions {past.length > 0 && <span className="text-base text-ink-soft">({past.length})</span>}
+              {t('organise.sessions.past')}{' '}
+              {past.length > 0 && <span className="text-base text-ink-soft">({past.length})</span>}
             </h2>
-            {figures.error && <Alert tone="error">The figures could not be read: {figures.error.message}</Alert>}
+            {figures.error && (
+              <Alert tone="error">{t('organise.sessions.figuresError', { message: figures.error.message })}</Alert>
+            )}
             {past.length === 0 ? (
-              <EmptyState title="No past sessions yet" icon="◷">
-                Once a session is over, it moves here with what came of it: items seen, fixed and kilograms kept.
+              <EmptyState title={t('organise.sessions.nonePastTitle')} icon="◷">
+                {t('organise.sessions.nonePast')}
               </EmptyState>
             ) : (
               <>
@@ -90,7 +95,7 @@ export function GroupEventsPage() {
                     onClick={() => setPastShown((n) => n + PAST_PAGE)}
                     className="mt-3 inline-flex min-h-11 items-center rounded-lg px-4 font-bold text-navy ring-1 ring-navy/25 hover:bg-navy/5"
                   >
-                    Show {Math.min(PAST_PAGE, past.length - pastShown)} earlier sessions
+                    {t('organise.sessions.showEarlier', { n: Math.min(PAST_PAGE, past.length - pastShown) })}
                   </button>
                 )}
               </>

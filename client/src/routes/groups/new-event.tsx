@@ -3,7 +3,7 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { useSuspenseQuery } from '@tanstack/react-query';
 import { useNavigate, useParams, type LoaderFunctionArgs } from 'react-router';
-import { SKILL_LABELS, SKILLS } from '../../../../shared/constants';
+import { SKILLS } from '../../../../shared/constants';
 import { generateSlots } from '../../../../shared/booking/slots';
 import { GroupTabs } from '../../components/layouts/group-tabs';
 import { Button } from '../../components/ui/button';
@@ -15,6 +15,7 @@ import { groupSettingsQuery } from '../../features/groups/api/get-group-settings
 import { venuesQuery } from '../../features/groups/api/get-venues';
 import { queryClient } from '../../lib/query-client';
 import { ApiError } from '../../lib/api';
+import { useT } from '../../lib/i18n';
 
 interface Values {
   title: string;
@@ -44,6 +45,7 @@ export const loader = ({ params }: LoaderFunctionArgs) => {
 };
 
 export function NewEventPage() {
+  const t = useT();
   const groupId = Number(useParams().groupId);
   const group = useSuspenseQuery(groupSettingsQuery(groupId));
   const venues = useSuspenseQuery(venuesQuery(groupId));
@@ -52,7 +54,7 @@ export function NewEventPage() {
   const [formError, setFormError] = useState<string | null>(null);
   const form = useForm<Values>({
     defaultValues: {
-      title: 'Repair session',
+      title: t('organise.newSession.defaultTitle'),
       venueId: '',
       date: '',
       from: '10:00',
@@ -75,7 +77,9 @@ export function NewEventPage() {
       const cut = generateSlots(from, to, Number(v.slotMinutes), Number(v.slotCapacity));
       const n = cut.length;
       const rest = n ? Math.round((to.getTime() - cut[n - 1].endsAt.getTime()) / 60_000) : 0;
-      preview = `${n} slots of ${v.slotMinutes} minutes, ${n * Number(v.slotCapacity)} places in all.${rest > 0 ? ` The last ${rest} minutes before closing get no slot.` : ''}`;
+      preview =
+        t('organise.newSession.preview', { n, minutes: v.slotMinutes, places: n * Number(v.slotCapacity) }) +
+        (rest > 0 ? ` ${t('organise.newSession.previewRest', { rest })}` : '');
     }
   } catch (err) {
     preview = (err as Error).message;
@@ -85,11 +89,11 @@ export function NewEventPage() {
     setFormError(null);
     let missing = false;
     if (!values.venueId) {
-      form.setError('venueId', { message: 'Choose a venue.' });
+      form.setError('venueId', { message: t('organise.newSession.chooseVenue') });
       missing = true;
     }
     if (!values.date) {
-      form.setError('date', { message: 'Choose the date.' });
+      form.setError('date', { message: t('organise.newSession.chooseDate') });
       missing = true;
     }
     if (missing) return;
@@ -117,23 +121,31 @@ export function NewEventPage() {
         for (const [k, m] of Object.entries(err.fields ?? {}))
           form.setError((map[k] ?? k) as keyof Values, { message: m });
         setFormError(err.message);
-      } else setFormError('Something went wrong.');
+      } else setFormError(t('organise.newSession.failed'));
     }
   });
 
   return (
     <div>
-      <h1 className="mb-2 text-2xl sm:text-3xl">New session</h1>
+      <h1 className="mb-2 text-2xl sm:text-3xl">{t('organise.newSession.title')}</h1>
       <GroupTabs groupId={groupId} />
       <form onSubmit={onSubmit} noValidate className="max-w-2xl space-y-5">
         {formError && <Alert tone="error">{formError}</Alert>}
         <Card className="space-y-4">
-          <TextField label="Title" error={errors.title?.message} {...form.register('title')} />
+          <TextField
+            label={t('organise.newSession.titleLabel')}
+            error={errors.title?.message}
+            {...form.register('title')}
+          />
           {venues.data.length === 0 ? (
-            <Alert tone="caution">Add a venue first, under “Rules and venues”.</Alert>
+            <Alert tone="caution">{t('organise.newSession.noVenue')}</Alert>
           ) : (
-            <SelectField label="Venue" error={errors.venueId?.message} {...form.register('venueId')}>
-              <option value="">Choose…</option>
+            <SelectField
+              label={t('organise.newSession.venue')}
+              error={errors.venueId?.message}
+              {...form.register('venueId')}
+            >
+              <option value="">{t('organise.newSession.choose')}</option>
               {venues.data.map((x) => (
                 <option key={x.id} value={x.id}>
                   {x.name}, {x.town}
@@ -142,16 +154,31 @@ export function NewEventPage() {
             </SelectField>
           )}
           <div className="grid gap-4 sm:grid-cols-3">
-            <TextField label="Date" type="date" error={errors.date?.message} {...form.register('date')} />
-            <TextField label="Opens" type="time" error={errors.from?.message} {...form.register('from')} />
-            <TextField label="Closes" type="time" error={errors.to?.message} {...form.register('to')} />
+            <TextField
+              label={t('organise.newSession.date')}
+              type="date"
+              error={errors.date?.message}
+              {...form.register('date')}
+            />
+            <TextField
+              label={t('organise.newSession.opens')}
+              type="time"
+              error={errors.from?.message}
+              {...form.register('from')}
+            />
+            <TextField
+              label={t('organise.newSession.closes')}
+              type="time"
+              error={errors.to?.message}
+              {...form.register('to')}
+            />
           </div>
-          <p className="text-sm text-ink-soft">Times are in {zone}.</p>
+          <p className="text-sm text-ink-soft">{t('organise.newSession.zone', { zone })}</p>
         </Card>
         <Card className="space-y-4">
           <div className="grid gap-4 sm:grid-cols-2">
             <TextField
-              label="Slot length (minutes)"
+              label={t('organise.newSession.slotMinutes')}
               type="number"
               min={5}
               step={5}
@@ -159,7 +186,7 @@ export function NewEventPage() {
               {...form.register('slotMinutes')}
             />
             <TextField
-              label="Items that can start per slot"
+              label={t('organise.newSession.slotCapacity')}
               type="number"
               min={0}
               error={errors.slotCapacity?.message}
@@ -172,19 +199,23 @@ export function NewEventPage() {
             </p>
           )}
           <details>
-            <summary className="cursor-pointer font-semibold text-navy">Limits per skill (optional)</summary>
-            <p className="mt-2 text-sm text-ink-soft">
-              E.g. at most 2 textile items per slot when only one sewing machine comes. Leave empty for no limit.
-            </p>
+            <summary className="cursor-pointer font-semibold text-navy">{t('organise.newSession.limits')}</summary>
+            <p className="mt-2 text-sm text-ink-soft">{t('organise.newSession.limitsHint')}</p>
             <div className="mt-2 grid grid-cols-2 gap-3 sm:grid-cols-3">
               {SKILLS.map((s) => (
-                <TextField key={s} label={SKILL_LABELS[s]} type="number" min={0} {...form.register(`limits.${s}`)} />
+                <TextField
+                  key={s}
+                  label={t(`common.skill.${s}`)}
+                  type="number"
+                  min={0}
+                  {...form.register(`limits.${s}`)}
+                />
               ))}
             </div>
           </details>
           <div className="space-y-1">
             <label htmlFor="desc" className="block font-semibold">
-              Note for visitors (optional)
+              {t('organise.newSession.note')}
             </label>
             <textarea
               id="desc"
@@ -195,11 +226,9 @@ export function NewEventPage() {
           </div>
         </Card>
         <Button type="submit" busy={form.formState.isSubmitting}>
-          Create the draft
+          {t('organise.newSession.create')}
         </Button>
-        <p className="text-sm text-ink-soft">
-          The session stays a draft, seen only by organisers, until you publish it. You can adjust each slot first.
-        </p>
+        <p className="text-sm text-ink-soft">{t('organise.newSession.draftHint')}</p>
       </form>
     </div>
   );

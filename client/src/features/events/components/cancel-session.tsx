@@ -2,8 +2,7 @@ import { useState } from 'react';
 import { formatDay, formatTimeRange } from '../../../../../shared/format';
 import { Button } from '../../../components/ui/button';
 import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
-
-const bookingsWord = (n: number) => `${n} booking${n === 1 ? '' : 's'}`;
+import { useLanguage, useT } from '../../../lib/i18n';
 
 /**
  * Calling a session off, kept apart from the everyday buttons (its own boxed section at the foot of the page) and
@@ -21,15 +20,17 @@ export function CancelSession({
   busy: boolean;
   onConfirm: (reason: string | undefined, done: () => void) => void;
 }) {
+  const t = useT();
+  const lang = useLanguage();
   const [open, setOpen] = useState(false);
   const [reason, setReason] = useState('');
-  const when = `${formatDay(event.startsAt, event.timeZone)}, ${formatTimeRange(event.startsAt, event.endsAt, event.timeZone)}`;
+  const when = `${formatDay(event.startsAt, event.timeZone, lang)}, ${formatTimeRange(event.startsAt, event.endsAt, event.timeZone, lang)}`;
   const told =
     toTell === null
-      ? 'Everyone booked will be told by e-mail.'
+      ? t('organise.cancel.toldAll')
       : toTell === 0
-        ? 'Nobody has booked yet, so no one needs telling.'
-        : `${bookingsWord(toTell)} will be told by e-mail that it is off.`;
+        ? t('organise.cancel.toldNone')
+        : t('organise.cancel.toldSome', { n: toTell });
   const close = () => {
     setOpen(false);
     setReason('');
@@ -37,27 +38,24 @@ export function CancelSession({
   return (
     <section aria-labelledby="call-off" className="rounded-xl border-2 border-alert/40 bg-alert-light/40 p-5">
       <h2 id="call-off" className="text-lg text-alert">
-        Calling the session off
+        {t('organise.cancel.title')}
       </h2>
-      <p className="mt-1 max-w-prose text-sm text-ink-soft">
-        Only if it cannot go ahead. Every booking is cancelled and mailed, the waiting list is cleared, and the session
-        counts nothing in the figures. This cannot be undone.
-      </p>
+      <p className="mt-1 max-w-prose text-sm text-ink-soft">{t('organise.cancel.lead')}</p>
       <Button variant="danger" className="mt-3" onClick={() => setOpen(true)}>
-        Cancel session
+        {t('organise.cancel.button')}
       </Button>
       <ConfirmDialog
         open={open}
-        title={`Cancel “${event.title}”?`}
-        message={`${when} at ${event.venue.name}. ${told} This cannot be undone.`}
-        confirmLabel="Yes, cancel the session"
-        cancelLabel="Keep the session"
+        title={t('organise.cancel.question', { title: event.title })}
+        message={t('organise.cancel.message', { when, venue: event.venue.name, told })}
+        confirmLabel={t('organise.cancel.confirm')}
+        cancelLabel={t('organise.cancel.keep')}
         busy={busy}
         onCancel={close}
         onConfirm={() => onConfirm(reason.trim() || undefined, close)}
       >
         <label className="block text-sm font-semibold">
-          Reason, for the mail (optional)
+          {t('organise.cancel.reason')}
           <textarea
             rows={2}
             value={reason}

@@ -1,15 +1,19 @@
 import { Link } from 'react-router';
 import type { EventSummary } from '../../../../../shared/api/events';
 import type { SessionFigures } from '../../../../../shared/api/impact';
-import { formatDay, formatTimeRange } from '../../../../../shared/format';
+import { formatDay, formatTimeRange, intlLocale } from '../../../../../shared/format';
+import type { Language } from '../../../../../shared/i18n/languages';
 import { paths } from '../../../config/paths';
+import { useLanguage, useT } from '../../../lib/i18n';
 import { PlacesBar, StatusBadge } from './places-bar';
 
-const when = (e: EventSummary) =>
-  `${formatDay(e.startsAt, e.timeZone)} · ${formatTimeRange(e.startsAt, e.endsAt, e.timeZone)}`;
+const when = (e: EventSummary, lang: Language) =>
+  `${formatDay(e.startsAt, e.timeZone, lang)} · ${formatTimeRange(e.startsAt, e.endsAt, e.timeZone, lang)}`;
 
 /** A session still to come (or running today): its state, date and free places. */
 export function ComingRow({ e, today }: { e: EventSummary; today: boolean }) {
+  const t = useT();
+  const lang = useLanguage();
   return (
     <Link
       to={paths.manageEvent(e.id)}
@@ -18,16 +22,18 @@ export function ComingRow({ e, today }: { e: EventSummary; today: boolean }) {
       <div>
         <div className="flex flex-wrap items-center gap-2">
           {today && (
-            <span className="rounded-full bg-copper px-2.5 py-0.5 text-xs font-extrabold text-white">Today</span>
+            <span className="rounded-full bg-copper px-2.5 py-0.5 text-xs font-extrabold text-white">
+              {t('organise.row.today')}
+            </span>
           )}
           <StatusBadge status={e.status} />
-          <span className="text-sm font-bold text-copper-dark">{when(e)}</span>
+          <span className="text-sm font-bold text-copper-dark">{when(e, lang)}</span>
         </div>
         <p className="mt-1 text-lg font-extrabold text-navy">{e.title}</p>
         <p className="text-sm text-ink-soft">{e.venue.name}</p>
       </div>
       {e.status === 'cancelled' ? (
-        <p className="text-sm font-semibold text-ink-soft">Called off; everyone booked was told.</p>
+        <p className="text-sm font-semibold text-ink-soft">{t('organise.row.calledOffTold')}</p>
       ) : (
         <PlacesBar free={e.freePlaces} total={e.totalPlaces} />
       )}
@@ -35,43 +41,46 @@ export function ComingRow({ e, today }: { e: EventSummary; today: boolean }) {
   );
 }
 
-const kg = new Intl.NumberFormat('en-GB', { maximumFractionDigits: 1 });
-
 /** What a past session came to, in words; nothing to say while the figures load or for roles that do not see them. */
 function Outcomes({ e, figures }: { e: EventSummary; figures: SessionFigures | null | undefined }) {
-  if (e.status === 'cancelled') return <p className="text-sm text-ink-soft">Called off: no figures.</p>;
+  const t = useT();
+  const lang = useLanguage();
+  if (e.status === 'cancelled') return <p className="text-sm text-ink-soft">{t('organise.row.calledOffNoFigures')}</p>;
   if (figures === undefined) return null;
   if (figures === null || figures.items === 0)
-    return <p className="text-sm text-ink-soft">No items were recorded at this session.</p>;
+    return <p className="text-sm text-ink-soft">{t('organise.row.noItems')}</p>;
   const parts = [
     [figures.fixed, 'fixed'],
-    [figures.partsNeeded, 'need a part'],
-    [figures.advice, 'got advice'],
-    [figures.endOfLife, 'could not be fixed'],
-    [figures.unknown, 'no outcome written'],
+    [figures.partsNeeded, 'partsNeeded'],
+    [figures.advice, 'advice'],
+    [figures.endOfLife, 'endOfLife'],
+    [figures.unknown, 'unknown'],
   ] as const;
   return (
-    <dl className="flex flex-wrap gap-x-4 gap-y-1 text-sm" aria-label="What came of it">
+    <dl className="flex flex-wrap gap-x-4 gap-y-1 text-sm" aria-label={t('organise.row.outcomes')}>
       <div className="flex gap-1">
-        <dt className="sr-only">Items seen</dt>
-        <dd className="font-extrabold text-navy">
-          {figures.items} item{figures.items === 1 ? '' : 's'} seen
-        </dd>
+        <dt className="sr-only">{t('organise.row.itemsSeenLabel')}</dt>
+        <dd className="font-extrabold text-navy">{t('organise.row.itemsSeen', { n: figures.items })}</dd>
       </div>
       {parts
         .filter(([n]) => n > 0)
-        .map(([n, label]) => (
-          <div key={label} className="flex gap-1">
-            <dt className="sr-only">{label}</dt>
+        .map(([n, key]) => (
+          <div key={key} className="flex gap-1">
+            <dt className="sr-only">{t(`organise.row.outcome.${key}`)}</dt>
             <dd>
-              <span className="font-bold">{n}</span> {label}
+              <span className="font-bold">{n}</span> {t(`organise.row.outcome.${key}`)}
             </dd>
           </div>
         ))}
       <div className="flex gap-1">
-        <dt className="sr-only">Kept out of the bin</dt>
+        <dt className="sr-only">{t('organise.row.keptLabel')}</dt>
         <dd>
-          <span className="font-bold">{kg.format(figures.kgDiverted)} kg</span> kept out of the bin
+          <span className="font-bold">
+            {t('organise.row.kg', {
+              kg: new Intl.NumberFormat(intlLocale(lang), { maximumFractionDigits: 1 }).format(figures.kgDiverted),
+            })}
+          </span>{' '}
+          {t('organise.row.kept')}
         </dd>
       </div>
     </dl>
@@ -80,11 +89,13 @@ function Outcomes({ e, figures }: { e: EventSummary; figures: SessionFigures | n
 
 /** A session that is over: its date and what came of it, with the way to its report. */
 export function PastRow({ e, figures }: { e: EventSummary; figures: SessionFigures | null | undefined }) {
+  const t = useT();
+  const lang = useLanguage();
   return (
     <div className="grid gap-2 rounded-xl bg-white/70 p-4 ring-1 ring-ink/5 sm:grid-cols-[1fr_auto] sm:items-center">
       <div>
         <p className="text-sm font-bold text-ink-soft">
-          {when(e)} · {e.venue.name}
+          {when(e, lang)} · {e.venue.name}
           {e.status === 'cancelled' && (
             <>
               {' '}
@@ -104,7 +115,11 @@ export function PastRow({ e, figures }: { e: EventSummary; figures: SessionFigur
           to={paths.report(e.id)}
           className="inline-flex min-h-11 items-center rounded-lg px-3 text-sm font-bold text-navy ring-1 ring-navy/25 hover:bg-navy/5"
         >
-          Report<span className="sr-only"> for {formatDay(e.startsAt, e.timeZone)}</span>
+          {t('organise.row.report')}
+          <span className="sr-only">
+            {' '}
+            {t('organise.row.reportFor', { day: formatDay(e.startsAt, e.timeZone, lang) })}
+          </span>
         </Link>
       )}
     </div>
