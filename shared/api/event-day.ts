@@ -183,7 +183,16 @@ export interface ItemView {
 
 /** The hall's TV: queue numbers only. */
 export interface HallQueue {
-  event: { id: number; title: string; groupName: string; timeZone: string; startsAt: Date; endsAt: Date };
+  event: {
+    id: number;
+    title: string;
+    groupName: string;
+    /** The group's language, which the hall's screen speaks unless the browser has chosen one. */
+    groupLanguage: string;
+    timeZone: string;
+    startsAt: Date;
+    endsAt: Date;
+  };
   serving: { queueNumber: number | null; benchName: string | null }[];
   waiting: { queueNumber: number | null; waitMinutes: number | null }[];
   done: number;

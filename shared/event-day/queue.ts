@@ -62,7 +62,9 @@ export interface LiveWarning {
   kind: 'long-wait' | 'idle-fixer';
   itemId?: number;
   userId?: number;
+  /** In English, for logs; the screen words it from `kind` and `values` in the reader's language. */
   message: string;
+  values: { label?: string; minutes?: number; name?: string; waiting?: number };
 }
 
 /** Warnings for the organiser: an item waiting over 45 minutes, a fixer on shift with nothing in hand while items wait. */
@@ -79,6 +81,7 @@ export function liveWarnings(
         kind: 'long-wait',
         itemId: q.id,
         message: `${q.label} has waited ${minutes} minutes since check-in.`,
+        values: { label: q.label, minutes },
       });
   }
   if (queued.length > 0) {
@@ -88,6 +91,7 @@ export function liveWarnings(
           kind: 'idle-fixer',
           userId: f.userId,
           message: `${f.name} has nothing at the bench while ${queued.length} item${queued.length === 1 ? '' : 's'} wait${queued.length === 1 ? 's' : ''}.`,
+          values: { name: f.name, waiting: queued.length },
         });
   }
   return out;

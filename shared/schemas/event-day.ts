@@ -14,17 +14,15 @@ const optionalNumber = (schema: z.ZodType<number, unknown>) =>
     schema.optional(),
   );
 
+// The desk's messages are catalog keys (locales/<language>/desk.json), answered and shown in the reader's language.
 /** Weight on the desk's scale, in kilograms; it overrides the category's average in the statistics. */
 export const weightKg = optionalNumber(
-  z.coerce
-    .number({ error: 'Enter the weight in kilograms.' })
-    .positive('Enter a weight above 0 kg.')
-    .max(500, 'Weigh items up to 500 kg.'),
+  z.coerce.number({ error: 'desk.v.weight' }).positive('desk.v.weightPositive').max(500, 'desk.v.weightMax'),
 );
 
 export const checkInItemSchema = z.object({
   id: z.coerce.number().int().positive(),
-  arrival: z.enum(ARRIVALS, { error: 'Choose arrived, did not come or withdrawn.' }),
+  arrival: z.enum(ARRIVALS, { error: 'desk.v.arrival' }),
   categoryId: z.coerce.number().int().positive().optional(),
   weightKg,
   /** The screening questions, asked again at the desk when the kind is corrected (as when booking). */
@@ -38,30 +36,22 @@ export type CheckInInput = z.input<typeof checkInSchema>;
 export const walkInSchema = z.object({
   slotId: z.coerce.number().int().positive().optional(),
   visitor: z.object({
-    name: z
-      .string({ error: 'Enter the visitor’s name.' })
-      .trim()
-      .min(1, 'Enter the visitor’s name.')
-      .max(120, 'Use at most 120 characters.'),
+    name: z.string({ error: 'desk.v.name' }).trim().min(1, 'desk.v.name').max(120, 'validation.name.tooLong'),
     email: z.union([z.literal('').transform(() => undefined), email]).optional(),
     phone: z
       .string()
       .trim()
       .max(40)
-      .regex(/^[+0-9 ()-]*$/, 'Use digits, spaces, + and brackets only.')
+      .regex(/^[+0-9 ()-]*$/, 'validation.phone.characters')
       .optional()
       .transform((v) => v || undefined),
   }),
   items: z
     .array(bookingItemSchema.extend({ weightKg }))
-    .min(1, 'Add the item they brought.')
-    .max(MAX_ITEMS_PER_BOOKING, `At most ${MAX_ITEMS_PER_BOOKING} items at once.`),
-  consent: z.literal(true, { error: 'The visitor must accept the house rules.' }),
-  consentName: z
-    .string({ error: 'Type the name of the person accepting.' })
-    .trim()
-    .min(2, 'Type the name of the person accepting.')
-    .max(120),
+    .min(1, 'desk.v.items')
+    .max(MAX_ITEMS_PER_BOOKING, 'validation.items.tooMany'),
+  consent: z.literal(true, { error: 'desk.v.consent' }),
+  consentName: z.string({ error: 'desk.v.consentName' }).trim().min(2, 'desk.v.consentName').max(120),
 });
 export type WalkInInput = z.input<typeof walkInSchema>;
 

@@ -60,7 +60,7 @@ export const router = createBrowserRouter([
     path: 'events/:eventId/hall',
     errorElement: routeError,
     hydrateFallbackElement: <Spinner />,
-    ...page(() => import('../routes/event-day/hall-display'), 'HallDisplayPage'),
+    ...page(() => import('../routes/event-day/hall-display'), 'HallDisplayPage', undefined, ['desk']),
   },
   {
     path: 'events/:eventId/report',
@@ -84,7 +84,7 @@ export const router = createBrowserRouter([
     path: 'events/:eventId/tags',
     errorElement: routeError,
     hydrateFallbackElement: <Spinner />,
-    ...page(() => import('../routes/event-day/tags'), 'TagSheetPage', allow.staff),
+    ...page(() => import('../routes/event-day/tags'), 'TagSheetPage', allow.staff, ['desk']),
   },
   {
     element: <AppShell />,
@@ -145,13 +145,16 @@ export const router = createBrowserRouter([
             path: 'events/:eventId/benches',
             ...page(() => import('../routes/benches/benches'), 'BenchesPage', allow.organiser, ['organise']),
           },
-          { path: 'desk', ...page(() => import('../routes/event-day/desk'), 'DeskHomePage', allow.staff) },
-          { path: 'desk/:eventId', ...page(() => import('../routes/event-day/desk'), 'DeskPage', allow.staff) },
+          { path: 'desk', ...page(() => import('../routes/event-day/desk'), 'DeskHomePage', allow.staff, ['desk']) },
+          {
+            path: 'desk/:eventId',
+            ...page(() => import('../routes/event-day/desk'), 'DeskPage', allow.staff, ['desk']),
+          },
           {
             path: 'items/:itemId',
             ...page(() => import('../routes/event-day/item'), 'ItemPage', allow.itemReader, ['bench']),
           },
-          { path: 't/:code', ...page(() => import('../routes/event-day/tag'), 'TagPage') },
+          { path: 't/:code', ...page(() => import('../routes/event-day/tag'), 'TagPage', undefined, ['desk']) },
           {
             path: 'groups/:groupId/impact',
             ...page(() => import('../routes/impact/dashboard'), 'GroupImpactPage', allow.organiser, ['organise']),
@@ -189,7 +192,7 @@ export const router = createBrowserRouter([
           },
           {
             path: 'events/:eventId/live',
-            ...page(() => import('../routes/event-day/live'), 'LiveViewPage', allow.organiser, ['organise']),
+            ...page(() => import('../routes/event-day/live'), 'LiveViewPage', allow.organiser, ['organise', 'desk']),
           },
           { path: 'events', ...page(() => import('../routes/events/list'), 'EventsPage') },
           { path: 'events/:eventId', ...page(() => import('../routes/events/detail'), 'EventPage') },

@@ -4,6 +4,8 @@ import type { AppContext } from '../../context';
 import { HttpError, notFound } from '../../http/errors';
 import * as q from './queries/desk';
 import { eventWithGroup, slotsOfEvent } from '../../core/events';
+import { categoryText } from '../../i18n';
+import { DEFAULT_LANGUAGE, type Language } from '../../../../shared/i18n/languages';
 
 /** The desk opens 12 hours before the event starts and closes 12 hours after it ends. */
 const DESK_OPENS_H = 12;
@@ -27,7 +29,7 @@ export function currentSlot<T extends { startsAt: Date; endsAt: Date }>(list: T[
 }
 
 /** Today's desk: every booking of the event by slot, with its items' status, tag and queue number. */
-export async function deskView(ctx: AppContext, eventId: number): Promise<DeskView> {
+export async function deskView(ctx: AppContext, eventId: number, lang: Language = DEFAULT_LANGUAGE): Promise<DeskView> {
   const { db } = ctx.database;
   const e = await eventWithGroup(db, eventId);
   if (!e) throw notFound('That event');
@@ -47,7 +49,7 @@ export async function deskView(ctx: AppContext, eventId: number): Promise<DeskVi
     b.items.push({
       id: r.item.id,
       categoryId: r.item.categoryId,
-      categoryName: r.categoryName,
+      categoryName: categoryText(lang, r.categorySlug, 'name', r.categoryName),
       brand: r.item.brand,
       model: r.item.model,
       fault: r.item.fault,

@@ -1,5 +1,5 @@
 import QRCode from 'qrcode';
-import { isQueued, ITEM_STATUS_LABELS, OUTCOME_LABELS } from '../../../../shared/event-day/constants';
+import { isQueued, type Outcome } from '../../../../shared/event-day/constants';
 import { tallyStatuses } from '../../../../shared/event-day/tallies';
 import { estimateWaits, liveWarnings, queueOrder } from '../../../../shared/event-day/queue';
 import { shortName, tagUrl } from '../../../../shared/event-day/tag-code';
@@ -10,8 +10,16 @@ import { notFound } from '../../http/errors';
 import { eventBenchesAsTheyStand, eventLayout } from '../../core/benches';
 import * as q from './queries/hall';
 import { eventWithGroup } from '../../core/events';
+import { categoryText, translate } from '../../i18n';
+import type { Language } from '../../../../shared/i18n/languages';
 
 type HallItem = q.HallItem;
+
+/** The kind of item in the reader's language (a group's own kinds keep their stored name). */
+const kindOf = (lang: Language, r: { categorySlug: string; categoryName: string }) =>
+  categoryText(lang, r.categorySlug, 'name', r.categoryName);
+const outcomeLabel = (lang: Language, outcome: Outcome | null) =>
+  outcome ? translate(lang, `fixer.outcomeValue.${outcome}`) : null;
 const hallItems = (ctx: AppContext, eventId: number) => q.hallItems(ctx.database.db, eventId);
 const fixersNow = (ctx: AppContext, eventId: number, now: Date) => q.fixersNow(ctx.database.db, eventId, now);
 
@@ -64,6 +72,7 @@ export async function hallQueue(ctx: AppContext, eventId: number): Promise<HallQ
       id: e.event.id,
       title: e.event.title,
       groupName: e.group.name,
+      groupLanguage: e.group.defaultLanguage,
       timeZone: e.group.timeZone,
       startsAt: e.event.startsAt,
       endsAt: e.event.endsAt,
@@ -80,7 +89,7 @@ export async function hallQueue(ctx: AppContext, eventId: number): Promise<HallQ
 }
 
 /** The organiser's live view: waiting, at bench and done by bench, the fixers on shift, and warnings. */
-export async function liveView(ctx: AppContext, eventId: number): Promise<LiveView> {
+export async function liveView(ctx: AppContext, eventId: number, lang: Language): Promise<LiveView> {
   const e = await eventHeader(ctx, eventId, false);
   const now = new Date();
   const [items, fixers, benches] = await Promise.all([
@@ -99,14 +108,14 @@ export async function liveView(ctx: AppContext, eventId: number): Promise<LiveVi
     id: i.id,
     queueNumber: i.queueNumber,
     tagCode: i.tagCode,
-    label: itemLabel(i),
+    label: itemLabel({ ...i, categoryName: kindOf(lang, i) }),
     visitor: shortName(i.visitorName),
     status: i.status,
     fixerName: i.fixerId ? (names.get(i.fixerId) ?? null) : null,
     checkedInAt: i.checkedInAt,
     startedAt: i.startedAt,
     doneAt: i.doneAt,
-    outcomeLabel: i.outcome ? OUTCOME_LABELS[i.outcome] : null,
+    outcomeLabel: outcomeLabel(lang, i.outcome),
     waitedMinutes: i.checkedInAt ? Math.floor((now.getTime() - i.checkedInAt.getTime()) / 60_000) : null,
     estimatedWaitMinutes: waits.get(i.id) ?? null,
   });
@@ -138,7 +147,7 @@ export async function liveView(ctx: AppContext, eventId: number): Promise<LiveVi
       queued.map((i) => ({
         id: i.id,
         checkedInAt: i.checkedInAt!.getTime(),
-        label: `No. ${i.queueNumber} (${i.categoryName})`,
+        label: translate(lang, 'desk.live.itemLabel', { number: i.queueNumber ?? '—', kind: kindOf(lang, i) }),
       })),
       fixers.map((f) => ({ userId: f.userId, name: f.name, busy: busyFixers.has(f.userId) })),
     ),
@@ -147,7 +156,7 @@ export async function liveView(ctx: AppContext, eventId: number): Promise<LiveVi
 }
 
 /** What anyone scanning a tag sees: the item's kind, status and queue number — no names, no fault text. */
-export async function publicTag(ctx: AppContext, code: string): Promise<PublicTag> {
+export async function publicTag(ctx: AppContext, code: string, lang: Language): Promise<PublicTag> {
   const r = await q.tagRow(ctx.database.db, code);
   if (!r) throw notFound('That tag');
   let waitMinutes: number | null = null;
@@ -163,11 +172,11 @@ export async function publicTag(ctx: AppContext, code: string): Promise<PublicTa
     groupName: r.groupName,
     eventId: r.eventId,
     eventTitle: r.eventTitle,
-    categoryName: r.categoryName,
+    categoryName: kindOf(lang, r),
     status: r.status,
-    statusLabel: ITEM_STATUS_LABELS[r.status],
+    statusLabel: translate(lang, `fixer.status.${r.status}`),
     queueNumber: r.queueNumber,
-    outcomeLabel: r.outcome ? OUTCOME_LABELS[r.outcome] : null,
+    outcomeLabel: outcomeLabel(lang, r.outcome),
     waitMinutes,
   };
 }
@@ -177,6 +186,7 @@ export async function tags(
   ctx: AppContext,
   eventId: number,
   filter: { slotId?: number; itemIds?: number[] },
+  lang: Language,
 ): Promise<TagSheet> {
   const e = await eventHeader(ctx, eventId, false);
   const rows = await q.tagSheetRows(ctx.database.db, eventId, filter);
@@ -191,7 +201,7 @@ export async function tags(
           url,
           qrSvg: await QRCode.toString(url, { type: 'svg', margin: 0, errorCorrectionLevel: 'M' }),
           queueNumber: r.queueNumber,
-          categoryName: r.categoryName,
+          categoryName: kindOf(lang, r),
           mains: Boolean(r.mains),
           visitor: shortName(r.visitorName),
           slotStartsAt: r.slotStartsAt,

@@ -41,7 +41,7 @@ export function eventDayPublicRoutes(ctx: AppContext) {
     const code = normaliseTagCode(String(req.params.code));
     if (!code) throw notFound('That tag');
     res.setHeader('Cache-Control', 'no-store');
-    res.json(await publicTag(ctx, code));
+    res.json(await publicTag(ctx, code, languageOf(req, res.locals)));
   });
   return r;
 }
@@ -60,7 +60,9 @@ export function eventDayRoutes(ctx: AppContext) {
   };
 
   r.get('/desk/events', requireUser, async (req, res) => res.json(await deskEvents(ctx, req.user!)));
-  r.get('/events/:id/desk', eventStaff, async (req, res) => res.json(await deskView(ctx, params(req, idParam).id)));
+  r.get('/events/:id/desk', eventStaff, async (req, res) =>
+    res.json(await deskView(ctx, params(req, idParam).id, languageOf(req, res.locals))),
+  );
   r.post('/bookings/:reference/check-in', requireGroupRole(['organiser', 'host'], bookingGroup), async (req, res) => {
     const ref = normaliseReference(String(req.params.reference))!;
     res.json(await checkIn(ctx, ref, body(req, checkInSchema), req.user!));
@@ -70,11 +72,13 @@ export function eventDayRoutes(ctx: AppContext) {
   });
   r.get('/events/:id/tags', eventStaff, async (req, res) => {
     const q = query(req, tagsQuery);
-    res.json(await tags(ctx, params(req, idParam).id, { slotId: q.slotId, itemIds: q.items }));
+    res.json(
+      await tags(ctx, params(req, idParam).id, { slotId: q.slotId, itemIds: q.items }, languageOf(req, res.locals)),
+    );
   });
   r.get('/events/:id/live', eventStaff, async (req, res) => {
     res.setHeader('Cache-Control', 'no-store');
-    res.json(await liveView(ctx, params(req, idParam).id));
+    res.json(await liveView(ctx, params(req, idParam).id, languageOf(req, res.locals)));
   });
 
   r.get('/items/:id', itemStaff, async (req, res) => {

@@ -17,6 +17,7 @@ import type { DeskBooking, DeskView, IssuedItem } from '../api/types';
 import { StatusChip } from './status-chip';
 import { CategoryOptions, Refusal, screenAtDesk, type DeskScreening } from './desk-screening';
 import { IssuedTags } from './issued-tags';
+import { tr, useLanguage, useT } from '../../../lib/i18n';
 
 interface Row {
   arrival: Arrival;
@@ -36,6 +37,8 @@ export function CheckInPanel({
   screening: DeskScreening;
   onClose: () => void;
 }) {
+  const t = useT();
+  const lang = useLanguage();
   const checkIn = useCheckIn(desk.event.id);
   const [rows, setRows] = useState<Record<number, Row>>(() =>
     Object.fromEntries(
@@ -58,6 +61,7 @@ export function CheckInPanel({
       ? screenAtDesk(screening, rows[i.id].categoryId, [])
       : ({ ok: true } as const);
   const refused = booking.items.some((i) => !screened(i).ok);
+  const fieldError = (path: string) => (error?.fields?.[path] ? tr(error.fields[path]) : undefined);
 
   const heading = useRef<HTMLHeadingElement>(null);
   useEffect(() => heading.current?.focus(), []);
@@ -87,23 +91,28 @@ export function CheckInPanel({
           );
         }}
         className="space-y-4"
-        aria-label={`Check in ${booking.reference}`}
+        aria-label={t('desk.checkIn.form', { reference: booking.reference })}
       >
         <div className="flex flex-wrap items-baseline justify-between gap-2">
           <h2 ref={heading} tabIndex={-1} className="text-xl outline-none">
             <span className="font-mono">{booking.reference}</span> · {booking.visitorName}
           </h2>
           <p className="text-ink-soft">
-            {slot && formatTimeRange(slot.startsAt, slot.endsAt, desk.event.timeZone)}
+            {slot && formatTimeRange(slot.startsAt, slot.endsAt, desk.event.timeZone, lang)}
             {booking.visitorPhone && ` · ${booking.visitorPhone}`}
           </p>
         </div>
         {error && (
           <Alert tone="error">
-            {error.message}
+            {tr(error.message)}
             {error.fields &&
               Object.keys(error.fields).some((k) => !/^items\.\d+\.(weightKg|categoryId|arrival)$/.test(k)) && (
-                <> {Object.values(error.fields).join(' ')}</>
+                <>
+                  {' '}
+                  {Object.values(error.fields)
+                    .map((m) => tr(m))
+                    .join(' ')}
+                </>
               )}
           </Alert>
         )}
@@ -115,16 +124,22 @@ export function CheckInPanel({
           return (
             <fieldset key={i.id} className="space-y-3 rounded-lg border border-ink/10 p-3">
               <legend className="px-1 font-bold">
-                Item {n + 1}: {i.categoryName}
+                {t('desk.itemN', { n: n + 1 })}: {i.categoryName}
                 {i.brand && ` — ${[i.brand, i.model].filter(Boolean).join(' ')}`} <StatusChip status={i.status} />
                 {i.tagCode && <span className="ml-2 font-mono text-navy">{i.tagCode}</span>}
               </legend>
               <p className="text-sm text-ink-soft">“{i.fault}”</p>
               {locked ? (
-                <p className="text-sm">This item is already {i.status === 'done' ? 'done' : 'at a bench'}.</p>
+                <p className="text-sm">
+                  {i.status === 'done' ? t('desk.checkIn.alreadyDone') : t('desk.checkIn.alreadyAtBench')}
+                </p>
               ) : (
                 <>
-                  <div role="radiogroup" aria-label={`Item ${n + 1} arrival`} className="flex flex-wrap gap-2">
+                  <div
+                    role="radiogroup"
+                    aria-label={t('desk.checkIn.arrival', { n: n + 1 })}
+                    className="flex flex-wrap gap-2"
+                  >
                     {ARRIVALS.filter(
                       (a) => a !== 'no-show' || i.status === 'no-show' || canMoveTo(i.status, 'no-show'),
                     ).map((a) => (
@@ -142,36 +157,34 @@ export function CheckInPanel({
                         />
                         {a === 'arrived'
                           ? i.tagCode
-                            ? 'Here'
-                            : 'Arrived'
-                          : a === 'no-show'
-                            ? 'Did not come'
-                            : 'Withdrawn'}
+                            ? t('desk.checkIn.here')
+                            : t('desk.checkIn.arrived')
+                          : t(`fixer.status.${a}`)}
                       </label>
                     ))}
                   </div>
                   {error?.fields?.[`items.${n}.arrival`] && (
-                    <p className="text-sm font-semibold text-alert">{error.fields[`items.${n}.arrival`]}</p>
+                    <p className="text-sm font-semibold text-alert">{tr(error.fields[`items.${n}.arrival`])}</p>
                   )}
                   {row.arrival === 'arrived' && (
                     <div className="grid gap-3 sm:grid-cols-2">
                       <SelectField
-                        label="Kind of item"
+                        label={t('desk.kind')}
                         value={row.categoryId}
                         onChange={(e) => set({ categoryId: Number(e.target.value) })}
-                        error={error?.fields?.[`items.${n}.categoryId`]}
-                        hint="Correct it if the visitor chose the wrong kind."
+                        error={fieldError(`items.${n}.categoryId`)}
+                        hint={t('desk.checkIn.kindHint')}
                       >
                         <CategoryOptions screening={screening} />
                       </SelectField>
                       <TextField
-                        label="Weight in kg (if weighed)"
+                        label={t('desk.weight')}
                         inputMode="decimal"
                         value={row.weight}
                         onChange={(e) => set({ weight: e.target.value })}
-                        placeholder="e.g. 1.2"
-                        error={error?.fields?.[`items.${n}.weightKg`]}
-                        hint="Overrides the kind’s average weight in the statistics."
+                        placeholder={t('desk.checkIn.weightPlaceholder')}
+                        error={fieldError(`items.${n}.weightKg`)}
+                        hint={t('desk.checkIn.weightHint')}
                       />
                     </div>
                   )}
@@ -183,10 +196,10 @@ export function CheckInPanel({
         })}
         <div className="flex flex-wrap gap-2">
           <Button type="submit" busy={checkIn.isPending} disabled={refused}>
-            {booking.items.some((i) => i.tagCode) ? 'Save changes' : 'Check in'}
+            {booking.items.some((i) => i.tagCode) ? t('desk.checkIn.save') : t('desk.checkIn.submit')}
           </Button>
           <Button type="button" variant="secondary" onClick={onClose}>
-            Cancel
+            {t('desk.cancel')}
           </Button>
         </div>
       </form>

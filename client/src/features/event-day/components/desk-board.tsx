@@ -14,6 +14,7 @@ import { CheckInPanel } from './check-in-panel';
 import type { DeskScreening } from './desk-screening';
 import { DeskSlots } from './desk-slots';
 import { WalkInForm } from './walk-in-form';
+import { useLanguage, useT } from '../../../lib/i18n';
 
 /** Today's bookings by slot, search, scan, check-in item by item, walk-ins. */
 /** The desk's links to the tag sheet and the hall display: 44 px targets for a finger on the tablet. */
@@ -21,6 +22,8 @@ const deskLink =
   'inline-flex min-h-11 items-center rounded-lg px-3 font-semibold text-navy underline ring-1 ring-navy/20 hover:bg-navy/5';
 
 export function DeskBoard({ desk, screening }: { desk: DeskView; screening: DeskScreening }) {
+  const t = useT();
+  const lang = useLanguage();
   const eventId = desk.event.id;
   const navigate = useNavigate();
   const [search, setSearch] = useState('');
@@ -45,9 +48,7 @@ export function DeskBoard({ desk, screening }: { desk: DeskView; screening: Desk
         setNotice(null);
         return;
       }
-      setNotice(
-        `No booking ${scan.reference} for this session. Check the date on the visitor’s mail, or take them as a walk-in.`,
-      );
+      setNotice(t('desk.board.noSuchBooking', { reference: scan.reference }));
       return;
     }
     const q = text.trim().toLowerCase();
@@ -57,11 +58,7 @@ export function DeskBoard({ desk, screening }: { desk: DeskView; screening: Desk
       setNotice(null);
       return;
     }
-    setNotice(
-      q && named.length === 0
-        ? `No booking matches “${text.trim()}”. Take them as a walk-in if they have no booking.`
-        : null,
-    );
+    setNotice(q && named.length === 0 ? t('desk.board.noMatch', { text: text.trim() }) : null);
   };
 
   const q = search.trim().toLowerCase();
@@ -76,26 +73,26 @@ export function DeskBoard({ desk, screening }: { desk: DeskView; screening: Desk
   return (
     <div className="space-y-5">
       <PageTitle
-        title="Reception desk"
+        title={t('desk.title')}
         lead={
           <>
-            {event.title} · {formatDay(event.startsAt, event.timeZone)},{' '}
-            {formatTimeRange(event.startsAt, event.endsAt, event.timeZone)}
+            {event.title} · {formatDay(event.startsAt, event.timeZone, lang)},{' '}
+            {formatTimeRange(event.startsAt, event.endsAt, event.timeZone, lang)}
           </>
         }
       />
       {!desk.open && (
-        <Alert tone="caution" title="Check-in is not open">
-          Check-in opens on the day of the session.
+        <Alert tone="caution" title={t('desk.board.notOpen')}>
+          {t('desk.board.notOpenBody')}
         </Alert>
       )}
       <div className="flex flex-wrap items-center gap-x-4 gap-y-2 text-sm">
         <StatusTallies counts={counts} compact />
         <Link className={`ml-auto ${deskLink}`} to={paths.tags(eventId)} target="_blank">
-          Print all tags
+          {t('desk.printAll')}
         </Link>
         <Link className={deskLink} to={paths.hall(eventId)} target="_blank">
-          Hall display
+          {t('desk.board.hall')}
         </Link>
       </div>
 
@@ -110,21 +107,21 @@ export function DeskBoard({ desk, screening }: { desk: DeskView; screening: Desk
           <div className="w-full min-w-60 flex-1 sm:w-auto">
             <TextField
               ref={searchRef}
-              label="Reference or name"
+              label={t('desk.board.search')}
               value={search}
               onChange={(e) => setSearch(e.target.value)}
-              placeholder="K7M-2QD or Orla"
+              placeholder={t('desk.board.searchPlaceholder')}
               autoComplete="off"
               autoFocus
-              hint="Type the reference from the visitor’s mail and press Enter, or part of their name to filter the list."
+              hint={t('desk.board.searchHint')}
             />
           </div>
           <div className="flex w-full flex-wrap gap-2 sm:w-auto sm:pb-7">
             <Button type="submit" variant="secondary">
-              Find
+              {t('desk.board.find')}
             </Button>
             <Button type="button" variant="secondary" onClick={() => setScanning((s) => !s)}>
-              {scanning ? 'Close camera' : 'Scan QR code'}
+              {scanning ? t('desk.scan.close') : t('desk.board.scan')}
             </Button>
             <Button
               type="button"
@@ -133,7 +130,7 @@ export function DeskBoard({ desk, screening }: { desk: DeskView; screening: Desk
                 setSelected(null);
               }}
             >
-              New walk-in
+              {t('desk.walkIn.title')}
             </Button>
           </div>
         </form>

@@ -1,6 +1,7 @@
 import type { Category } from '../../../../../shared/api/categories';
 import { screenItem, type ScreenResult } from '../../../../../shared/booking/screening';
 import type { Hazard } from '../../../../../shared/constants';
+import { tr, useT } from '../../../lib/i18n';
 
 /** What the desk needs to screen an item as a booking does: the kinds of item and the group's excluded ones. */
 export interface DeskScreening {
@@ -17,19 +18,31 @@ export function screenAtDesk(
 ): ScreenResult {
   const category = s.categories.find((c) => c.id === Number(categoryId));
   if (!category && hazards.length === 0) return { ok: true };
-  return screenItem(category ?? { id: 0, name: '' }, hazards, {
+  const result = screenItem(category ?? { id: 0, name: '' }, hazards, {
     name: s.groupName,
     excludedCategoryIds: s.excludedCategoryIds,
   });
+  if (result.ok) return result;
+  // The same refusal in the reader's words: a hazard's from the booking catalog, a kind's own (already in the
+  // reader's language from the API), or the group's exclusion.
+  const hazard = hazards[0];
+  if (hazard)
+    return {
+      ok: false,
+      reason: tr(`booking.hazard.${hazard}.reason`),
+      suggestion: tr(`booking.hazard.${hazard}.suggestion`),
+    };
+  if (category?.refusal) return result;
+  return { ok: false, reason: tr('booking.refusedGeneric', { group: s.groupName }), suggestion: '' };
 }
 
 /** The kinds of item as options; the ones the group does not take say so. */
 export function CategoryOptions({ screening }: { screening: DeskScreening }) {
+  const t = useT();
   const excluded = new Set(screening.excludedCategoryIds);
   return screening.categories.map((c) => (
     <option key={c.id} value={c.id}>
-      {c.name}
-      {excluded.has(c.id) ? ' (not taken)' : ''}
+      {excluded.has(c.id) ? t('booking.categoryNotTaken', { name: c.name }) : c.name}
     </option>
   ));
 }

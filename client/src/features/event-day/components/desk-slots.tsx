@@ -3,6 +3,7 @@ import { formatTimeRange } from '../../../../../shared/format';
 import { paths } from '../../../config/paths';
 import type { DeskBooking, DeskView } from '../api/types';
 import { StatusChip } from './status-chip';
+import { useLanguage, useT } from '../../../lib/i18n';
 
 /** The day's bookings under their slot, the current slot marked; choosing one opens its check-in. */
 export function DeskSlots({
@@ -18,17 +19,22 @@ export function DeskSlots({
   selected: string | null;
   onSelect: (reference: string) => void;
 }) {
+  const t = useT();
+  const lang = useLanguage();
   return (
     <>
       {desk.slots.map((s) => {
         const list = s.bookings.filter(shown);
         if (filtered && list.length === 0) return null;
+        const time = formatTimeRange(s.startsAt, s.endsAt, desk.event.timeZone, lang);
         return (
-          <section key={s.id} aria-label={`Slot ${formatTimeRange(s.startsAt, s.endsAt, desk.event.timeZone)}`}>
+          <section key={s.id} aria-label={t('desk.slots.slot', { time })}>
             <div className="mb-2 flex flex-wrap items-center gap-3">
-              <h2 className="text-lg">{formatTimeRange(s.startsAt, s.endsAt, desk.event.timeZone)}</h2>
+              <h2 className="text-lg">{time}</h2>
               {s.id === desk.currentSlotId && (
-                <span className="rounded-full bg-copper px-2 py-0.5 text-xs font-bold text-white">now</span>
+                <span className="rounded-full bg-copper px-2 py-0.5 text-xs font-bold text-white">
+                  {t('desk.slots.now')}
+                </span>
               )}
               {s.bookings.some((b) => b.items.some((i) => i.tagCode)) && (
                 <Link
@@ -36,13 +42,13 @@ export function DeskSlots({
                   to={paths.tags(desk.event.id, { slotId: s.id })}
                   target="_blank"
                 >
-                  Print this slot’s tags
+                  {t('desk.slots.printSlot')}
                 </Link>
               )}
             </div>
             {list.length === 0 ? (
               <p className="rounded-lg border border-dashed border-ink/15 px-4 py-3 text-sm text-ink-soft">
-                No bookings for this time.
+                {t('desk.slots.none')}
               </p>
             ) : (
               <ul className="divide-y divide-ink/10 overflow-hidden rounded-xl bg-white ring-1 ring-ink/5">
@@ -56,7 +62,9 @@ export function DeskSlots({
                       <span className="font-mono font-bold text-navy">{b.reference}</span>
                       <span className="font-semibold">{b.visitorName}</span>
                       {b.walkIn && (
-                        <span className="rounded-full bg-navy/10 px-2 py-0.5 text-xs font-bold text-navy">walk-in</span>
+                        <span className="rounded-full bg-navy/10 px-2 py-0.5 text-xs font-bold text-navy">
+                          {t('desk.walkInChip')}
+                        </span>
                       )}
                       <span className="ml-auto flex flex-wrap gap-2">
                         {b.items.map((i) => (

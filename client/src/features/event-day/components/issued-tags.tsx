@@ -5,6 +5,7 @@ import { Button } from '../../../components/ui/button';
 import { Alert } from '../../../components/ui/feedback';
 import { paths } from '../../../config/paths';
 import type { IssuedItem } from '../api/types';
+import { trParts, useT } from '../../../lib/i18n';
 
 /** What the desk just issued: the tags to write on the items and print, then on to the next visitor. */
 export function IssuedTags({
@@ -16,23 +17,26 @@ export function IssuedTags({
   issued: IssuedItem[];
   onClose: () => void;
 }) {
+  const t = useT();
   const tagged = issued.filter((i) => i.tagCode && !isAbsent(i.status));
   const away = issued.filter((i) => isAbsent(i.status));
   const title =
     [
-      tagged.length ? `Checked in: ${tagged.length} tag${tagged.length === 1 ? '' : 's'}` : '',
+      tagged.length ? t('desk.issued.tagged', { n: tagged.length }) : '',
       away.length
-        ? `${away.length} item${away.length === 1 ? '' : 's'} marked ${away.every((i) => i.status === 'no-show') ? 'did not come' : 'did not come or withdrawn'}`
+        ? away.every((i) => i.status === 'no-show')
+          ? t('desk.issued.noShow', { n: away.length })
+          : t('desk.issued.away', { n: away.length })
         : '',
     ]
       .filter(Boolean)
-      .join(' · ') || 'Saved';
+      .join(' · ') || t('desk.issued.saved');
   const ref = useRef<HTMLDivElement>(null);
   useEffect(() => ref.current?.focus(), []);
   return (
     <div ref={ref} tabIndex={-1} className="outline-none">
       <Alert tone="success" title={title}>
-        <ul className="my-2 flex flex-wrap gap-3" aria-label="Tags issued">
+        <ul className="my-2 flex flex-wrap gap-3" aria-label={t('desk.issued.list')}>
           {tagged.map((i) => (
             <li key={i.id} className="rounded-lg bg-white px-3 py-2 ring-1 ring-ink/10">
               <span
@@ -42,9 +46,9 @@ export function IssuedTags({
                 {i.tagCode}
               </span>
               <span className="text-sm">
-                Queue no. <b>{i.queueNumber}</b> ·{' '}
+                {trParts('desk.issued.queueNo', { number: <b>{i.queueNumber}</b> })} ·{' '}
                 <Link className="underline" to={paths.tags(eventId, { items: [i.id] })} target="_blank">
-                  print this tag
+                  {t('desk.issued.printOne')}
                 </Link>
               </span>
             </li>
@@ -57,11 +61,11 @@ export function IssuedTags({
               target="_blank"
               className="inline-flex min-h-11 items-center rounded-lg bg-copper px-4 font-bold text-white hover:bg-copper-dark"
             >
-              Print {tagged.length === 1 ? 'the tag' : 'these tags'}
+              {t('desk.issued.print', { n: tagged.length })}
             </Link>
           )}
           <Button variant="secondary" onClick={onClose}>
-            Next visitor
+            {t('desk.issued.next')}
           </Button>
         </div>
       </Alert>

@@ -1,40 +1,42 @@
 import type { ReactNode } from 'react';
 import { Link } from 'react-router';
-import { ITEM_STATUS_LABELS as LABEL } from '../../../../../shared/event-day/constants';
 import { formatTime } from '../../../../../shared/format';
 import { Card } from '../../../components/ui/feedback';
 import { paths } from '../../../config/paths';
 import type { LiveCard, LiveView } from '../api/types';
-
-const estimate = (m: number | null) => (m === null ? '—' : m <= 0 ? 'next' : `about ${m} min`);
-const queueNo = (n: number | null) => (n === null ? 'No. —' : `No. ${n}`);
+import { useLanguage, useT } from '../../../lib/i18n';
 
 /** One bench on the live view: the item at it, the ones waiting for it and the ones done. */
 export function BenchCard({ bench, tz }: { bench: LiveView['benches'][number]; tz: string }) {
+  const t = useT();
+  const lang = useLanguage();
   return (
     <Card className="p-4 sm:p-5">
       <section aria-label={bench.name}>
         <header className="mb-3 flex flex-wrap items-baseline justify-between gap-x-3">
           <h2 className="text-lg">{bench.name}</h2>
           <p className="text-sm text-ink-soft">
-            {bench.atBench.length} {LABEL['at-bench'].toLowerCase()} · {bench.waiting.length}{' '}
-            {LABEL.waiting.toLowerCase()} · {bench.done.length} {LABEL.done.toLowerCase()}
+            {t('desk.live.benchCounts', {
+              atBench: bench.atBench.length,
+              waiting: bench.waiting.length,
+              done: bench.done.length,
+            })}
           </p>
         </header>
         <div className="grid gap-4 md:grid-cols-3">
-          <Column title={LABEL['at-bench']} count={bench.atBench.length} empty="Nothing in hand.">
+          <Column title={t('fixer.status.at-bench')} count={bench.atBench.length} empty={t('desk.live.nothingInHand')}>
             {bench.atBench.map((c) => (
               <li key={c.id}>
                 <ItemLink card={c} tone="active">
                   <p className="text-xs text-ink-soft">
-                    {c.fixerName ?? 'No fixer named'}
-                    {c.startedAt ? ` · started ${formatTime(c.startedAt, tz)}` : ''}
+                    {c.fixerName ?? t('desk.live.noFixer')}
+                    {c.startedAt ? ` · ${t('desk.live.started', { time: formatTime(c.startedAt, tz, lang) })}` : ''}
                   </p>
                 </ItemLink>
               </li>
             ))}
           </Column>
-          <Column title={LABEL.waiting} count={bench.waiting.length} empty="No one waiting.">
+          <Column title={t('fixer.status.waiting')} count={bench.waiting.length} empty={t('desk.live.noneWaiting')}>
             {bench.waiting.map((c) => (
               <li key={c.id}>
                 <ItemLink card={c}>
@@ -43,13 +45,15 @@ export function BenchCard({ bench, tz }: { bench: LiveView['benches'][number]; t
               </li>
             ))}
           </Column>
-          <Column title={LABEL.done} count={bench.done.length} empty="None yet.">
+          <Column title={t('fixer.status.done')} count={bench.done.length} empty={t('desk.live.noneYet')}>
             {bench.done.map((c) => (
               <li key={c.id}>
                 <ItemLink card={c} tone="done">
                   <p className="text-xs font-semibold text-sage">
-                    {c.outcomeLabel ?? 'Done'}
-                    {c.doneAt ? <span className="font-normal text-ink-soft"> · {formatTime(c.doneAt, tz)}</span> : null}
+                    {c.outcomeLabel ?? t('fixer.status.done')}
+                    {c.doneAt ? (
+                      <span className="font-normal text-ink-soft"> · {formatTime(c.doneAt, tz, lang)}</span>
+                    ) : null}
                   </p>
                 </ItemLink>
               </li>
@@ -84,15 +88,25 @@ function Column({
 }
 
 export function WaitLine({ card }: { card: LiveCard }) {
+  const t = useT();
+  const m = card.estimatedWaitMinutes;
   return (
     <p className="text-xs text-ink-soft">
-      {card.waitedMinutes !== null ? `waited ${card.waitedMinutes} min` : 'not checked in'} · est.{' '}
-      {estimate(card.estimatedWaitMinutes)}
+      {card.waitedMinutes !== null
+        ? t('desk.live.waited', { minutes: card.waitedMinutes })
+        : t('desk.live.notCheckedIn')}{' '}
+      ·{' '}
+      {m === null
+        ? t('desk.live.estimateUnknown')
+        : m <= 0
+          ? t('desk.live.estimateNext')
+          : t('desk.live.estimate', { minutes: m })}
     </p>
   );
 }
 
 export function ItemLink({ card, tone, children }: { card: LiveCard; tone?: 'active' | 'done'; children: ReactNode }) {
+  const t = useT();
   const ring =
     tone === 'active'
       ? 'ring-copper/60 bg-copper-light/30'
@@ -105,7 +119,9 @@ export function ItemLink({ card, tone, children }: { card: LiveCard; tone?: 'act
       className={`block rounded-lg p-2.5 text-sm ring-1 transition hover:ring-navy ${ring}`}
     >
       <p className="flex items-baseline gap-2">
-        <span className="shrink-0 font-extrabold text-navy tabular-nums">{queueNo(card.queueNumber)}</span>
+        <span className="shrink-0 font-extrabold text-navy tabular-nums">
+          {t('desk.queueNo', { number: card.queueNumber ?? '—' })}
+        </span>
         <span className="min-w-0 truncate font-semibold">{card.label}</span>
       </p>
       <p className="truncate text-xs text-ink-soft">

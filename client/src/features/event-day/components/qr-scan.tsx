@@ -1,13 +1,15 @@
 import { useEffect, useRef, useState } from 'react';
 import { Button } from '../../../components/ui/button';
+import { useT } from '../../../lib/i18n';
 
 /**
  * The device camera reading a QR code (the qr-scanner package, loaded only when the desk opens the camera).
  * Browsers allow the camera on https or localhost only; the desk can always type the reference instead.
  */
 export function QrScan({ onResult, onClose }: { onResult: (text: string) => void; onClose: () => void }) {
+  const t = useT();
   const video = useRef<HTMLVideoElement>(null);
-  const [error, setError] = useState<string | null>(null);
+  const [error, setError] = useState<'no-camera' | 'failed' | null>(null);
   const done = useRef(onResult);
   done.current = onResult;
 
@@ -31,11 +33,7 @@ export function QrScan({ onResult, onClose }: { onResult: (text: string) => void
         await s.start();
       } catch (e) {
         const msg = String((e as Error)?.message ?? e);
-        setError(
-          msg === 'no-camera'
-            ? 'This device has no camera Mendery can use.'
-            : 'The camera could not start (permission refused, or the page is not on https).',
-        );
+        setError(msg === 'no-camera' ? 'no-camera' : 'failed');
       }
     })();
     return () => {
@@ -47,14 +45,14 @@ export function QrScan({ onResult, onClose }: { onResult: (text: string) => void
   return (
     <div className="space-y-3 rounded-xl bg-ink p-3 text-white">
       <div className="flex items-center justify-between">
-        <p className="font-bold">Hold the QR code from the booking mail up to the camera</p>
+        <p className="font-bold">{t('desk.scan.hold')}</p>
         <Button variant="secondary" onClick={onClose}>
-          Close camera
+          {t('desk.scan.close')}
         </Button>
       </div>
       {error ? (
         <p role="alert" className="rounded-lg bg-white/10 p-3">
-          {error} Type the reference instead.
+          {t(error === 'no-camera' ? 'desk.scan.noCamera' : 'desk.scan.failed')} {t('desk.scan.typeInstead')}
         </p>
       ) : (
         <video ref={video} className="aspect-video w-full rounded-lg bg-black object-cover" muted playsInline />

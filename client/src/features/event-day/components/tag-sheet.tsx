@@ -1,14 +1,21 @@
 import { useMemo, type CSSProperties } from 'react';
 import { Link, useSearchParams } from 'react-router';
 import { LABEL_LAYOUTS, layoutById, paginate, type LabelLayout } from '../../../../../shared/event-day/label-sheets';
-import { formatTime } from '../../../../../shared/format';
+import { formatTime, intlLocale } from '../../../../../shared/format';
+import type { Language } from '../../../../../shared/i18n/languages';
 import { Button } from '../../../components/ui/button';
 import { Alert, EmptyState, Spinner } from '../../../components/ui/feedback';
 import { paths } from '../../../config/paths';
 import { useTagSheet, type TagSheetFilter } from '../api/get-tag-sheet';
 import type { Tag } from '../api/types';
+import { tr, trParts, useLanguage, useT } from '../../../lib/i18n';
 
 const DEFAULT_LAYOUT = 'a4-24';
+
+/** The printed page's size is the label stock's; nothing but the sheets prints. */
+const pageCss = (layout: LabelLayout) =>
+  `@page { size: ${mm(layout.page.width)} ${mm(layout.page.height)}; margin: 0 }
+@media print { html, body { margin: 0; padding: 0; background: #fff !important; } }`;
 
 /** Millimetres for CSS, without floating-point noise. */
 const mm = (n: number) => `${Math.round(n * 1000) / 1000}mm`;
@@ -30,6 +37,15 @@ function labelMetrics(l: LabelLayout) {
   return { pad, gap, qr, code };
 }
 
+/** A label stock's name in the reader's language, its sizes written as the language writes numbers. */
+function layoutName(l: LabelLayout, t: ReturnType<typeof useT>, lang: Language): string {
+  const num = (n: number) => new Intl.NumberFormat(intlLocale(lang), { maximumFractionDigits: 1 }).format(n);
+  const size = { width: num(l.label.width), height: num(l.label.height) };
+  return l.columns * l.rows === 1
+    ? t('desk.sheet.layoutRoll', size)
+    : t('desk.sheet.layoutSheet', { ...size, count: l.columns * l.rows, columns: l.columns, rows: l.rows });
+}
+
 export /** The sheet's items from the address: a slot's (?slot=), some items (?items=1,2), or every tag of the event. */
 function sheetFilterOf(slot: string | null, items: string | null): TagSheetFilter {
   const slotId = positiveInt(slot);
@@ -47,6 +63,8 @@ function sheetFilterOf(slot: string | null, items: string | null): TagSheetFilte
  * preview of each sheet at actual size; in print only the sheets, sized to the label stock in millimetres.
  */
 export function TagSheet({ eventId }: { eventId: number }) {
+  const t = useT();
+  const lang = useLanguage();
   const [params, setParams] = useSearchParams();
   const slot = params.get('slot');
   const itemsParam = params.get('items');
@@ -73,26 +91,30 @@ export function TagSheet({ eventId }: { eventId: number }) {
 
   return (
     <div className="min-h-dvh bg-neutral-300 text-ink print:min-h-0 print:bg-white">
-      <title>{sheet.data ? `Tags · ${sheet.data.event.title}` : 'Tags · Mendery'}</title>
-      <style>{`@page { size: ${mm(layout.page.width)} ${mm(layout.page.height)}; margin: 0 }
-@media print { html, body { margin: 0; padding: 0; background: #fff !important; } }`}</style>
+      <title>{t('desk.sheet.pageTitle', { title: sheet.data?.event.title ?? 'Mendery' })}</title>
+      <style>{pageCss(layout)}</style>
 
       <div className="sticky top-0 z-10 border-b border-ink/10 bg-white shadow-sm print:hidden">
         <div className="mx-auto flex max-w-5xl flex-wrap items-end gap-x-4 gap-y-3 px-4 py-3">
           <div className="w-full lg:w-auto lg:flex-1">
             <Link to={paths.deskEvent(eventId)} className="text-sm font-bold text-navy underline">
-              ← Back to the desk
+              ← {t('desk.sheet.back')}
             </Link>
-            <h1 className="mt-1 text-xl">Intake tags{sheet.data ? ` · ${sheet.data.event.title}` : ''}</h1>
+            <h1 className="mt-1 text-xl">
+              {t('desk.sheet.title')}
+              {sheet.data ? ` · ${sheet.data.event.title}` : ''}
+            </h1>
             {tags.length > 0 && (
               <p className="text-sm text-ink-soft">
-                {tags.length} tag{tags.length === 1 ? '' : 's'} on {pages.length} {perSheet === 1 ? 'label' : 'sheet'}
-                {pages.length === 1 ? '' : 's'}
+                {t(perSheet === 1 ? 'desk.sheet.countLabels' : 'desk.sheet.countSheets', {
+                  tags: tags.length,
+                  pages: pages.length,
+                })}
               </p>
             )}
           </div>
           <label className="text-sm font-semibold">
-            Label stock
+            {t('desk.sheet.stock')}
             <select
               value={layout.id}
               onChange={(e) => setParam('layout', e.target.value, DEFAULT_LAYOUT)}
@@ -100,13 +122,13 @@ export function TagSheet({ eventId }: { eventId: number }) {
             >
               {LABEL_LAYOUTS.map((l) => (
                 <option key={l.id} value={l.id}>
-                  {l.name}
+                  {layoutName(l, t, lang)}
                 </option>
               ))}
             </select>
           </label>
           <label className="text-sm font-semibold">
-            Labels already used
+            {t('desk.sheet.used')}
             <input
               type="number"
               min={0}
@@ -126,13 +148,11 @@ export function TagSheet({ eventId }: { eventId: number }) {
             />
           </label>
           <Button onClick={() => window.print()} disabled={tags.length === 0}>
-            Print
+            {t('desk.sheet.print')}
           </Button>
           <p id="skip-help" className="w-full text-sm text-ink-soft">
-            <span className="font-bold text-copper-dark">Print at 100 % (actual size), no scaling, margins none.</span>{' '}
-            {perSheet > 1
-              ? 'On a part-used sheet, give the number of labels already gone from the top left; printing starts after them.'
-              : 'One tag per label on the roll.'}
+            <span className="font-bold text-copper-dark">{t('desk.sheet.actualSize')}</span>{' '}
+            {perSheet > 1 ? t('desk.sheet.usedHint') : t('desk.sheet.rollHint')}
           </p>
         </div>
       </div>
@@ -140,28 +160,30 @@ export function TagSheet({ eventId }: { eventId: number }) {
       {/* Sheets wider than a phone scroll sideways; the region takes the focus so arrow keys can scroll it. */}
       <div
         role="region"
-        aria-label="Tags to print"
+        aria-label={t('desk.sheet.region')}
         tabIndex={0}
         className="overflow-x-auto px-4 py-6 print:overflow-visible print:p-0"
       >
         {sheet.isPending ? (
           <div className="mx-auto max-w-md rounded-xl bg-white px-6">
-            <Spinner label="Preparing the tags…" />
+            <Spinner label={t('desk.sheet.preparing')} />
           </div>
         ) : sheet.isError ? (
           <div className="mx-auto max-w-xl">
-            <Alert tone="error" title="The tags could not be loaded">
-              {sheet.error.message}
+            <Alert tone="error" title={t('desk.sheet.loadFailed')}>
+              {tr(sheet.error.message)}
             </Alert>
           </div>
         ) : tags.length === 0 ? (
           <div className="mx-auto max-w-xl rounded-xl bg-white">
-            <EmptyState title="No checked-in items to print yet" icon="▢">
-              A tag is made when an item is checked in at the{' '}
-              <Link to={paths.deskEvent(eventId)} className="font-bold text-navy underline">
-                desk
-              </Link>
-              .
+            <EmptyState title={t('desk.sheet.empty')} icon="▢">
+              {trParts('desk.sheet.emptyBody', {
+                desk: (
+                  <Link to={paths.deskEvent(eventId)} className="font-bold text-navy underline">
+                    {t('desk.sheet.emptyDesk')}
+                  </Link>
+                ),
+              })}
             </EmptyState>
           </div>
         ) : (
@@ -169,11 +191,14 @@ export function TagSheet({ eventId }: { eventId: number }) {
             {pages.map((cells, p) => (
               <div key={p}>
                 <p className="mb-1 text-xs font-semibold text-ink print:hidden">
-                  {perSheet === 1 ? 'Label' : 'Sheet'} {p + 1} of {pages.length}
+                  {t(perSheet === 1 ? 'desk.sheet.labelOf' : 'desk.sheet.sheetOf', { n: p + 1, of: pages.length })}
                 </p>
                 <div
                   data-testid="tag-page"
-                  aria-label={`${perSheet === 1 ? 'Label' : 'Sheet'} ${p + 1} of ${pages.length}`}
+                  aria-label={t(perSheet === 1 ? 'desk.sheet.labelOf' : 'desk.sheet.sheetOf', {
+                    n: p + 1,
+                    of: pages.length,
+                  })}
                   className="bg-white shadow-lg print:shadow-none"
                   style={{
                     width: mm(layout.page.width),
@@ -203,6 +228,7 @@ export function TagSheet({ eventId }: { eventId: number }) {
                         style={style}
                         metrics={metrics}
                         timeZone={sheet.data.event.timeZone}
+                        lang={lang}
                       />
                     );
                   })}
@@ -221,12 +247,15 @@ function TagLabel({
   style,
   metrics,
   timeZone,
+  lang,
 }: {
   tag: Tag;
   style: CSSProperties;
   metrics: ReturnType<typeof labelMetrics>;
   timeZone: string;
+  lang: Language;
 }) {
+  const t = useT();
   const line = 'overflow-hidden text-ellipsis whitespace-nowrap';
   return (
     <div
@@ -237,7 +266,7 @@ function TagLabel({
       <div className="flex min-h-0 flex-1 items-center" style={{ gap: mm(metrics.gap) }}>
         <div
           role="img"
-          aria-label={`QR code for tag ${tag.tagCode}`}
+          aria-label={t('desk.sheet.qr', { code: tag.tagCode })}
           className="shrink-0 [&_svg]:block [&_svg]:h-full [&_svg]:w-full"
           style={{ width: mm(metrics.qr), height: mm(metrics.qr) }}
           dangerouslySetInnerHTML={{ __html: tag.qrSvg }}
@@ -250,13 +279,13 @@ function TagLabel({
             {tag.tagCode}
           </p>
           <p className={`${line} font-extrabold`} style={{ fontSize: '11pt', lineHeight: 1.15, marginTop: '0.8mm' }}>
-            {tag.queueNumber !== null ? `No. ${tag.queueNumber}` : 'No. —'}
+            {t('desk.queueNo', { number: tag.queueNumber ?? '—' })}
           </p>
           <p className={`${line} font-semibold`} style={{ fontSize: '8pt', lineHeight: 1.2 }}>
             {tag.categoryName}
           </p>
           <p className={line} style={{ fontSize: '8pt', lineHeight: 1.2 }}>
-            {tag.visitor} · {formatTime(tag.slotStartsAt, timeZone)}
+            {tag.visitor} · {formatTime(tag.slotStartsAt, timeZone, lang)}
           </p>
           {tag.benchName && (
             <p className={`${line} font-bold`} style={{ fontSize: '8pt', lineHeight: 1.2 }}>
@@ -267,7 +296,7 @@ function TagLabel({
       </div>
       {tag.mains && (
         <p className={`${line} font-bold`} style={{ fontSize: '6.5pt', lineHeight: 1.2, marginTop: '0.6mm' }}>
-          ⚡ mains — safety check before it goes home
+          ⚡ {t('desk.sheet.mains')}
         </p>
       )}
     </div>

@@ -1,6 +1,5 @@
 import { useState } from 'react';
 import { useFieldArray } from 'react-hook-form';
-import { HAZARD_REFUSALS } from '../../../../../shared/booking/screening';
 import { HAZARDS, type Hazard } from '../../../../../shared/constants';
 import { formatTime } from '../../../../../shared/format';
 import { walkInSchema } from '../../../../../shared/schemas/event-day';
@@ -13,8 +12,7 @@ import type { DeskView, IssuedItem } from '../api/types';
 import { CategoryOptions, Refusal, screenAtDesk, type DeskScreening } from './desk-screening';
 import { IssuedTags } from './issued-tags';
 import { CheckGroup } from '../../../components/ui/check-group';
-
-const HAZARD_QUESTIONS = HAZARDS.map((h) => ({ value: h, label: HAZARD_REFUSALS[h].question }));
+import { useLanguage, useT } from '../../../lib/i18n';
 
 /** A walk-in: the same item questions as booking, fast, with the house rules accepted by a tick and a typed name. */
 export function WalkInForm({
@@ -26,6 +24,9 @@ export function WalkInForm({
   screening: DeskScreening;
   onDone: () => void;
 }) {
+  const t = useT();
+  const lang = useLanguage();
+  const hazardQuestions = HAZARDS.map((h) => ({ value: h, label: t(`booking.hazard.${h}.question`) }));
   const walkIn = useAddWalkIn(desk.event.id);
   const [issued, setIssued] = useState<IssuedItem[] | null>(null);
   const [formError, setFormError] = useState<string | null>(null);
@@ -51,58 +52,55 @@ export function WalkInForm({
     <Card className="ring-2 ring-copper">
       <form
         noValidate
-        aria-label="Walk-in"
+        aria-label={t('desk.walkIn.form')}
         className="space-y-4"
         onSubmit={form.handleSubmit((values) => {
           setFormError(null);
-          if (refused) return setFormError('The group cannot take an item on this form: see why below it.');
+          if (refused) return setFormError(t('desk.walkIn.refused'));
           walkIn.mutate(values, {
             onSuccess: (r) => setIssued(r.items),
             onError: (e) => setFormError(applyServerErrors(form, e)),
           });
         })}
       >
-        <h2 className="text-xl">New walk-in</h2>
+        <h2 className="text-xl">{t('desk.walkIn.title')}</h2>
         {formError && <Alert tone="error">{formError}</Alert>}
         <div className="grid gap-3 sm:grid-cols-3">
           <TextField
-            label="Visitor’s name"
+            label={t('desk.walkIn.name')}
             {...form.register('visitor.name')}
             error={errs.visitor?.name?.message}
             autoFocus
           />
           <TextField
-            label="Phone (optional)"
+            label={t('desk.walkIn.phone')}
             type="tel"
             {...form.register('visitor.phone')}
             error={errs.visitor?.phone?.message}
           />
           <TextField
-            label="E-mail (optional)"
+            label={t('desk.walkIn.email')}
             type="email"
             {...form.register('visitor.email')}
             error={errs.visitor?.email?.message}
-            hint="For news of a part or a follow-up."
+            hint={t('desk.walkIn.emailHint')}
           />
         </div>
-        <SelectField
-          label="Queue in the slot"
-          {...form.register('slotId')}
-          hint="Walk-ins wait after the booked visitors of their slot."
-        >
+        <SelectField label={t('desk.walkIn.slot')} {...form.register('slotId')} hint={t('desk.walkIn.slotHint')}>
           {desk.slots.map((s) => (
             <option key={s.id} value={s.id}>
-              {formatTime(s.startsAt, desk.event.timeZone)}
-              {s.id === desk.currentSlotId ? ' (now)' : ''}
+              {s.id === desk.currentSlotId
+                ? t('desk.walkIn.slotNow', { time: formatTime(s.startsAt, desk.event.timeZone, lang) })
+                : formatTime(s.startsAt, desk.event.timeZone, lang)}
             </option>
           ))}
         </SelectField>
         {items.fields.map((f, n) => (
           <fieldset key={f.id} className="space-y-3 rounded-lg border border-ink/10 p-3">
-            <legend className="px-1 font-bold">Item {n + 1}</legend>
+            <legend className="px-1 font-bold">{t('desk.itemN', { n: n + 1 })}</legend>
             <div className="grid gap-3 sm:grid-cols-3">
               <SelectField
-                label="Kind of item"
+                label={t('desk.kind')}
                 {...form.register(`items.${n}.categoryId`, {
                   onChange: (e) => {
                     const kind = screening.categories.find((c) => c.id === Number(e.target.value));
@@ -111,19 +109,19 @@ export function WalkInForm({
                 })}
                 error={errs.items?.[n]?.categoryId?.message}
               >
-                <option value="">Choose…</option>
+                <option value="">{t('desk.walkIn.choose')}</option>
                 <CategoryOptions screening={screening} />
               </SelectField>
-              <TextField label="Brand (optional)" {...form.register(`items.${n}.brand`)} />
+              <TextField label={t('desk.walkIn.brand')} {...form.register(`items.${n}.brand`)} />
               <TextField
-                label="Weight in kg (if weighed)"
+                label={t('desk.weight')}
                 inputMode="decimal"
                 {...form.register(`items.${n}.weightKg`)}
                 error={errs.items?.[n]?.weightKg?.message}
               />
             </div>
             <TextAreaField
-              label="What is wrong?"
+              label={t('desk.walkIn.fault')}
               rows={2}
               {...form.register(`items.${n}.fault`)}
               error={
@@ -132,14 +130,14 @@ export function WalkInForm({
               }
             />
             <CheckGroup
-              legend="Safety questions: tick any that apply"
-              options={HAZARD_QUESTIONS}
+              legend={t('booking.hazardsLegend')}
+              options={hazardQuestions}
               field={form.register(`items.${n}.hazards`)}
             />
             {screened[n] && <Refusal result={screened[n]} />}
             {items.fields.length > 1 && (
               <Button type="button" variant="quiet" onClick={() => items.remove(n)}>
-                Remove this item
+                {t('desk.walkIn.remove')}
               </Button>
             )}
           </fieldset>
@@ -150,27 +148,23 @@ export function WalkInForm({
             variant="secondary"
             onClick={() => items.append({ categoryId: undefined as never, fault: '', hazards: [] })}
           >
-            Add another item
+            {t('desk.walkIn.add')}
           </Button>
         )}
         <div className="space-y-2 rounded-lg bg-navy/5 p-3">
-          <CheckField
-            label="The visitor has read and accepts the house rules"
-            {...form.register('consent')}
-            error={errs.consent?.message}
-          />
+          <CheckField label={t('desk.walkIn.consent')} {...form.register('consent')} error={errs.consent?.message} />
           <TextField
-            label="Name typed by the person accepting"
+            label={t('desk.walkIn.consentName')}
             {...form.register('consentName')}
             error={errs.consentName?.message}
           />
         </div>
         <div className="flex flex-wrap gap-2">
           <Button type="submit" busy={walkIn.isPending} disabled={refused}>
-            Check in walk-in
+            {t('desk.walkIn.submit')}
           </Button>
           <Button type="button" variant="secondary" onClick={onDone}>
-            Cancel
+            {t('desk.cancel')}
           </Button>
         </div>
       </form>

@@ -101,7 +101,7 @@ export const queuedWithPlacement = (tx: Tx, eventId: number) =>
 /** Every standing booking of the event with its items, walk-ins last, in booking order. */
 export const deskRows = (db: DbOrTx, eventId: number) =>
   db
-    .select({ booking: bookings, item: bookingItems, categoryName: categories.name })
+    .select({ booking: bookings, item: bookingItems, categoryName: categories.name, categorySlug: categories.slug })
     .from(bookings)
     .innerJoin(bookingItems, eq(bookingItems.bookingId, bookings.id))
     .innerJoin(categories, eq(categories.id, bookingItems.categoryId))
