@@ -81,8 +81,9 @@ export const COMMON_CURRENCIES = [
 /** Whether a code is an ISO 4217 currency the runtime can format (ECMA-402 Intl.supportedValuesOf). */
 export const isKnownCurrency = (code: string) => Intl.supportedValuesOf('currency').includes(code);
 
-/** A currency's name in words, e.g. "Euro" for EUR. */
-export const currencyName = (code: string) => new Intl.DisplayNames(['en-GB'], { type: 'currency' }).of(code) ?? code;
+/** A currency's name in words in the reader's language, e.g. "Euro" for EUR. */
+export const currencyName = (code: string, lang: Language = DEFAULT_LANGUAGE) =>
+  new Intl.DisplayNames([intlLocale(lang)], { type: 'currency' }).of(code) ?? code;
 
 /** An amount of money in the group's currency as the reader writes it: €12.50 in Britain, 12,50 € in Germany. */
 export const formatMoney = (amount: number, currency: string, lang: Language = DEFAULT_LANGUAGE) =>

@@ -163,4 +163,21 @@ describe('the day’s screens in four languages', () => {
     expect(await pageWidth(page)).toBeLessThanOrEqual(TABLET.width);
     await context.close();
   });
+  it('keeps an organiser’s top menu within 1280 px in German and the pseudo-locale', async () => {
+    const desktop = { width: 1280, height: 860 };
+    const { context, page } = await signedIn(browser, app.server.url, 'organiser', desktop);
+    for (const lang of ['de', 'xx-pseudo']) {
+      await page.goto(`${app.server.url}/events/${eventId}/live?lang=${lang}`);
+      await page.getByRole('heading', { level: 1 }).waitFor();
+      await page.waitForLoadState('networkidle');
+      const nav = page.getByRole('navigation').first();
+      const right = await nav.evaluate((n) =>
+        Math.max(...[...n.querySelectorAll('li')].map((li) => li.getBoundingClientRect().right)),
+      );
+      expect(right, lang).toBeLessThanOrEqual(desktop.width);
+      expect(await pageWidth(page), lang).toBeLessThanOrEqual(desktop.width);
+      await page.screenshot({ path: shot(`i18n-desk-menu-${lang}`) });
+    }
+    await context.close();
+  });
 });

@@ -83,9 +83,13 @@ export function AppShell() {
           <nav
             id="main-nav"
             aria-label={t('common.shell.mainNav')}
-            className={`${open ? 'absolute inset-x-0 top-16 z-20 border-b border-ink/10 bg-white p-4 shadow-lg' : 'hidden'} lg:static lg:block lg:border-0 lg:p-0 lg:shadow-none`}
+            className={`${open ? 'absolute inset-x-0 top-16 z-20 border-b border-ink/10 bg-white p-4 shadow-lg' : 'hidden'} lg:static lg:block lg:min-w-0 lg:flex-1 lg:border-0 lg:p-0 lg:shadow-none`}
           >
-            <ul className="flex flex-col gap-1 lg:flex-row lg:items-center" onClick={() => setOpen(false)}>
+            {/* On a wide screen the entries wrap onto a second line rather than run off it (longer words in German). */}
+            <ul
+              className="flex flex-col gap-1 lg:flex-row lg:flex-wrap lg:items-center lg:justify-end"
+              onClick={() => setOpen(false)}
+            >
               <li>
                 <NavLink to={paths.events()} end className={linkClass}>
                   {t('common.nav.sessions')}

@@ -1,41 +1,43 @@
 import { Link, isRouteErrorResponse, useRouteError } from 'react-router';
 import { paths } from '../config/paths';
 import { ApiError } from '../lib/api';
+import { tr, useT } from '../lib/i18n';
 
 /** What a person sees when a page's data cannot be loaded: what happened in plain words, and a way on. */
 export function RouteError() {
+  const t = useT();
   const err = useRouteError();
   const status = isRouteErrorResponse(err) ? err.status : err instanceof ApiError ? err.status : 0;
   const title =
     status === 404
-      ? 'We could not find that'
+      ? t('errors.route.notFound')
       : status === 403
-        ? 'Not for your role'
+        ? t('errors.route.forbidden')
         : status === 0 && err instanceof ApiError
-          ? 'No connection'
-          : 'This page failed to load';
+          ? t('errors.route.offline')
+          : t('errors.route.failed');
   const message =
     status === 404
       ? err instanceof ApiError
-        ? err.message
-        : 'That address does not lead to anything in Mendery. It may have been removed, or the link may be cut short.'
+        ? tr(err.message)
+        : t('errors.route.notFoundBody')
       : status === 403
-        ? 'This page is for other roles. Ask an organiser of your group if you need access.'
+        ? t('errors.route.forbiddenBody')
         : err instanceof Error
-          ? err.message
+          ? tr(err.message)
           : isRouteErrorResponse(err)
             ? `${err.status} ${err.statusText}`
-            : 'Something went wrong. Try again in a moment.';
+            : t('errors.route.failedBody');
   return (
     <div className="mx-auto max-w-xl py-10" role="alert">
       <h1 className="text-2xl">{title}</h1>
       <p className="mt-2 text-ink-soft">{message}</p>
       <div className="mt-6 flex flex-wrap gap-4">
         <Link to={paths.events()} className="font-bold text-copper-dark underline">
-          See all sessions
+          {t('errors.route.allSessions')}
         </Link>
         <Link to={paths.home()} className="font-bold text-navy underline">
-          Back to the start
+          {t('common.notFound.back')}
         </Link>
       </div>
     </div>

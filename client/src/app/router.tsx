@@ -123,7 +123,7 @@ export const router = createBrowserRouter([
           },
           {
             path: 'me/skills',
-            ...page(() => import('../routes/skills/my-skills'), 'MySkillsPage', allow.fixer),
+            ...page(() => import('../routes/skills/my-skills'), 'MySkillsPage', allow.fixer, ['bench', 'organise']),
           },
           {
             path: 'groups/:groupId/skills',
@@ -228,12 +228,18 @@ export const router = createBrowserRouter([
           },
           {
             path: 'admin/categories',
-            ...page(() => import('../routes/admin/categories'), 'AdminCategoriesPage', allow.admin),
+            ...page(() => import('../routes/admin/categories'), 'AdminCategoriesPage', allow.admin, [
+              'admin',
+              'organise',
+            ]),
           },
-          { path: 'admin', ...page(() => import('../routes/admin/overview'), 'AdminOverviewPage', allow.admin) },
+          {
+            path: 'admin',
+            ...page(() => import('../routes/admin/overview'), 'AdminOverviewPage', allow.admin, ['admin']),
+          },
           {
             path: 'admin/mailbox/:mailId?',
-            ...page(() => import('../routes/admin/mailbox'), 'MailboxPage', allow.admin),
+            ...page(() => import('../routes/admin/mailbox'), 'MailboxPage', allow.admin, ['admin']),
           },
           { path: '*', ...page(() => import('../routes/not-found'), 'NotFoundPage') },
         ],

@@ -102,14 +102,19 @@ export async function markEmailVerified(tx: Tx, userId: number, signup?: { passw
 /** The groups this person asked to join and is not yet confirmed in. */
 export const pendingMemberships = (tx: Tx, userId: number) =>
   tx
-    .select({ groupId: memberships.groupId, role: memberships.role, groupName: repairGroups.name })
+    .select({
+      groupId: memberships.groupId,
+      role: memberships.role,
+      groupName: repairGroups.name,
+      groupLanguage: repairGroups.defaultLanguage,
+    })
     .from(memberships)
     .innerJoin(repairGroups, eq(repairGroups.id, memberships.groupId))
     .where(and(eq(memberships.userId, userId), eq(memberships.status, 'pending')));
 
 export const activeOrganisers = (tx: Tx, groupId: number) =>
   tx
-    .select({ email: users.email, name: users.name })
+    .select({ email: users.email, name: users.name, language: users.language })
     .from(memberships)
     .innerJoin(users, eq(users.id, memberships.userId))
     .where(and(eq(memberships.groupId, groupId), eq(memberships.role, 'organiser'), eq(memberships.status, 'active')));
@@ -153,7 +158,12 @@ export async function loadSessionUser(db: DbOrTx, userId: number): Promise<Sessi
     .where(eq(users.id, userId));
   if (!user) return null;
   const roles = await db
-    .select({ groupId: memberships.groupId, role: memberships.role, groupName: repairGroups.name })
+    .select({
+      groupId: memberships.groupId,
+      role: memberships.role,
+      groupName: repairGroups.name,
+      groupLanguage: repairGroups.defaultLanguage,
+    })
     .from(memberships)
     .innerJoin(repairGroups, eq(repairGroups.id, memberships.groupId))
     .where(and(eq(memberships.userId, userId), eq(memberships.status, 'active')))

@@ -149,12 +149,12 @@ export function authRoutes(ctx: AppContext, csrfToken: (req: Request) => string)
   });
 
   r.post('/two-factor/enable', requireAdmin, loginPerSource, async (req, res) => {
-    await twoFactor.confirmSetup(ctx, req.user!.id, body(req, totpCodeSchema).code);
+    await twoFactor.confirmSetup(ctx, req.user!.id, body(req, totpCodeSchema).code, languageOf(req, res.locals));
     res.json({ enabled: true, message: translate(languageOf(req, res.locals), 'account.server.twoStepOn') });
   });
 
   r.post('/two-factor/disable', requireUser, loginPerSource, async (req, res) => {
-    await twoFactor.turnOff(ctx, req.user!.id, body(req, turnOffTwoFactorSchema));
+    await twoFactor.turnOff(ctx, req.user!.id, body(req, turnOffTwoFactorSchema), languageOf(req, res.locals));
     res.json({ enabled: false, message: translate(languageOf(req, res.locals), 'account.server.twoStepOff') });
   });
 
@@ -180,7 +180,7 @@ export function authRoutes(ctx: AppContext, csrfToken: (req: Request) => string)
   });
 
   r.post('/signup', mailLinks, async (req, res) => {
-    await auth.signup(ctx, body(req, signupSchema));
+    await auth.signup(ctx, body(req, signupSchema), languageOf(req, res.locals));
     res.status(202).json({ message: translate(languageOf(req, res.locals), 'account.server.signup') });
   });
 
@@ -190,7 +190,7 @@ export function authRoutes(ctx: AppContext, csrfToken: (req: Request) => string)
   });
 
   r.post('/password-reset', mailLinks, async (req, res) => {
-    await auth.requestPasswordReset(ctx, body(req, resetRequestSchema).email);
+    await auth.requestPasswordReset(ctx, body(req, resetRequestSchema).email, languageOf(req, res.locals));
     res.status(202).json({ message: translate(languageOf(req, res.locals), 'account.server.resetSent') });
   });
 
@@ -203,7 +203,7 @@ export function authRoutes(ctx: AppContext, csrfToken: (req: Request) => string)
   // A wrong current password counts as a failed sign-in from that source.
   r.post('/password', requireUser, loginPerSource, async (req, res) => {
     const input = body(req, changePasswordSchema);
-    await auth.changePassword(ctx, req.user!.id, req.sessionID, input);
+    await auth.changePassword(ctx, req.user!.id, req.sessionID, input, languageOf(req, res.locals));
     res.json({ message: translate(languageOf(req, res.locals), 'account.server.passwordChanged') });
   });
 

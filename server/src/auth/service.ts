@@ -8,6 +8,8 @@ import { refuseCommonPassword } from './common-passwords';
 import { dummyHash, hashPassword, verifyPassword } from './passwords';
 import * as q from './queries';
 import { newToken, sha256 } from './tokens';
+import { asLanguage, DEFAULT_LANGUAGE, type Language } from '../../../shared/i18n/languages';
+import { translate } from '../i18n';
 
 const HOUR = 3600_000;
 export const RESET_LINK_MS = HOUR;
@@ -42,7 +44,8 @@ export async function authenticate(ctx: AppContext, input: LoginInput): Promise<
  * whose account is not yet confirmed mails a link of its own that carries this sign-up's password and name:
  * whichever link the owner of the mailbox follows decides the password, and the other links die with it.
  */
-export async function signup(ctx: AppContext, input: SignupInput): Promise<void> {
+export async function signup(ctx: AppContext, input: SignupInput, lang: Language = DEFAULT_LANGUAGE): Promise<void> {
+  const t = (key: string, values?: Record<string, unknown>) => translate(lang, `mail.account.${key}`, values);
   const { db } = ctx.database;
   const group = await q.groupById(db, input.groupId);
   if (!group) throw new HttpError(400, 'invalid', 'errors.invalid', { groupId: 'Choose one of the listed groups.' });
@@ -53,13 +56,11 @@ export async function signup(ctx: AppContext, input: SignupInput): Promise<void>
     if (existing?.emailVerifiedAt) {
       await enqueueMail(
         tx,
-        composeMail(input.email, 'You already have a Mendery account', {
-          paragraphs: [
-            `Someone (probably you) tried to sign up with this address to help ${group.name}.`,
-            'This address already has an account. Sign in, or reset your password if you have forgotten it.',
-          ],
-          action: { label: 'Reset my password', url: `${ctx.env.publicUrl}/forgot-password` },
-          footnote: 'If this was not you, you can ignore this mail; nothing has changed.',
+        composeMail(input.email, t('exists.subject'), {
+          paragraphs: [t('exists.text', { group: group.name }), t('exists.signIn')],
+          action: { label: t('exists.action'), url: `${ctx.env.publicUrl}/forgot-password` },
+          footnote: t('exists.footnote'),
+          language: lang,
         }),
       );
       return;
@@ -76,13 +77,11 @@ export async function signup(ctx: AppContext, input: SignupInput): Promise<void>
     });
     await enqueueMail(
       tx,
-      composeMail(input.email, 'Confirm your e-mail address for Mendery', {
-        paragraphs: [
-          `Hello ${input.name},`,
-          `thank you for offering to help ${group.name}. Confirm your address to finish signing up; an organiser of the group then confirms your place.`,
-        ],
-        action: { label: 'Confirm my e-mail address', url: `${ctx.env.publicUrl}/verify-email?token=${token}` },
-        footnote: 'The link works for 48 hours. If you did not sign up, ignore this mail.',
+      composeMail(input.email, t('confirm.subject'), {
+        paragraphs: [translate(lang, 'mail.hello', { name: input.name }), t('confirm.text', { group: group.name })],
+        action: { label: t('confirm.action'), url: `${ctx.env.publicUrl}/verify-email?token=${token}` },
+        footnote: t('confirm.footnote', { hours: VERIFY_LINK_MS / HOUR }),
+        language: lang,
       }),
     );
   });
@@ -111,15 +110,25 @@ export async function verifyEmail(ctx: AppContext, token: string): Promise<void>
     for (const p of await q.pendingMemberships(tx, userId)) {
       const organisers = await q.activeOrganisers(tx, p.groupId);
       for (const o of organisers) {
+        // In the organiser's own language, else the group's.
+        const lang = asLanguage(o.language, asLanguage(p.groupLanguage));
+        const t = (key: string, values?: Record<string, unknown>) =>
+          translate(lang, `mail.account.newVolunteer.${key}`, values);
         await enqueueMail(
           tx,
-          composeMail(o.email, `${user.name} would like to volunteer with ${p.groupName}`, {
+          composeMail(o.email, t('subject', { name: user.name, group: p.groupName }), {
             paragraphs: [
-              `Hello ${o.name},`,
-              `${user.name} (${user.email}) has signed up to help ${p.groupName} as ${p.role === 'host' ? 'reception' : 'a fixer'}.`,
-              'Confirm or decline on the group page.',
+              translate(lang, 'mail.hello', { name: o.name }),
+              t('text', {
+                name: user.name,
+                email: user.email,
+                group: p.groupName,
+                role: translate(lang, `mail.roleAs.${p.role}`),
+              }),
+              t('decide'),
             ],
-            action: { label: 'Open the group page', url: `${ctx.env.publicUrl}/groups/${p.groupId}/people` },
+            action: { label: t('action'), url: `${ctx.env.publicUrl}/groups/${p.groupId}/people` },
+            language: lang,
           }),
         );
       }
@@ -129,10 +138,16 @@ export async function verifyEmail(ctx: AppContext, token: string): Promise<void>
 }
 
 /** Always answers the same; mails a single-use link valid for an hour when the account exists. */
-export async function requestPasswordReset(ctx: AppContext, email: string): Promise<void> {
+export async function requestPasswordReset(
+  ctx: AppContext,
+  email: string,
+  requestLanguage: Language = DEFAULT_LANGUAGE,
+): Promise<void> {
   await ctx.database.db.transaction(async (tx) => {
     const user = await q.userByEmail(tx, email);
     if (!user) return;
+    // The account's own language, else the one the request was made in.
+    const lang = asLanguage(user.language, requestLanguage);
     await q.spendOpenTokens(tx, user.id, 'reset-password');
     const { token, hash } = newToken();
     await q.insertToken(tx, {
@@ -143,14 +158,14 @@ export async function requestPasswordReset(ctx: AppContext, email: string): Prom
     });
     await enqueueMail(
       tx,
-      composeMail(user.email, 'Reset your Mendery password', {
-        paragraphs: [
-          `Hello ${user.name},`,
-          'someone asked to reset the password of your Mendery account. Choose a new one with the button below.',
-        ],
-        action: { label: 'Choose a new password', url: `${ctx.env.publicUrl}/reset-password?token=${token}` },
-        footnote:
-          'The link works once, for one hour. If you did not ask for it, ignore this mail; your password stays as it is.',
+      composeMail(user.email, translate(lang, 'mail.account.reset.subject'), {
+        paragraphs: [translate(lang, 'mail.hello', { name: user.name }), translate(lang, 'mail.account.reset.text')],
+        action: {
+          label: translate(lang, 'mail.account.newPassword'),
+          url: `${ctx.env.publicUrl}/reset-password?token=${token}`,
+        },
+        footnote: translate(lang, 'mail.account.reset.footnote'),
+        language: lang,
       }),
     );
   });
@@ -179,6 +194,7 @@ export async function changePassword(
   userId: number,
   sessionId: string,
   input: ChangePasswordInput,
+  lang: Language = DEFAULT_LANGUAGE,
 ): Promise<void> {
   const { db } = ctx.database;
   refuseCommonPassword(input.password);
@@ -196,13 +212,14 @@ export async function changePassword(
     await q.changePassword(tx, userId, passwordHash, sessionId);
     await enqueueMail(
       tx,
-      composeMail(user.email, 'Your Mendery password was changed', {
+      composeMail(user.email, translate(lang, 'mail.account.changed.subject'), {
         paragraphs: [
-          `Hello ${user.name},`,
-          'the password of your Mendery account was just changed, and every other device signed in to it was signed out.',
-          'If you did this, there is nothing more to do. If you did not, choose a new password at once with the button below and tell your group’s organiser.',
+          translate(lang, 'mail.hello', { name: user.name }),
+          translate(lang, 'mail.account.changed.text'),
+          translate(lang, 'mail.account.changed.ifNot'),
         ],
-        action: { label: 'Choose a new password', url: `${ctx.env.publicUrl}/forgot-password` },
+        action: { label: translate(lang, 'mail.account.newPassword'), url: `${ctx.env.publicUrl}/forgot-password` },
+        language: lang,
       }),
     );
   });

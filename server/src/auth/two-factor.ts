@@ -6,6 +6,8 @@ import { composeMail } from '../mail/templates';
 import { verifyPassword } from './passwords';
 import * as q from './queries';
 import { checkTotpCode, newTotpSecret, openTotpSecret, sealTotpSecret, totpUri } from './totp';
+import { DEFAULT_LANGUAGE, type Language } from '../../../shared/i18n/languages';
+import { translate } from '../i18n';
 
 /** Two-factor sign-in with an authenticator app: set-up, the second step at sign-in, and turning it off. */
 
@@ -31,7 +33,7 @@ export async function startSetup(ctx: AppContext, userId: number) {
   return { secret, uri, qr };
 }
 
-export async function confirmSetup(ctx: AppContext, userId: number, code: string) {
+export async function confirmSetup(ctx: AppContext, userId: number, code: string, lang: Language = DEFAULT_LANGUAGE) {
   const row = (await q.twoFactorOf(ctx.database.db, userId))!;
   const secret = row.totpPending ? openTotpSecret(row.totpPending, ctx.env.SESSION_SECRET) : null;
   if (row.totpSecret) throw new HttpError(409, 'two-factor-on', 'Two-step sign-in is on already.');
@@ -42,12 +44,13 @@ export async function confirmSetup(ctx: AppContext, userId: number, code: string
     await q.enableTotp(tx, userId, row.totpPending!, step);
     await enqueueMail(
       tx,
-      composeMail(row.email, 'Two-step sign-in is on for your Mendery account', {
+      composeMail(row.email, translate(lang, 'mail.account.twoStepOn.subject'), {
         paragraphs: [
-          `Hello ${row.name},`,
-          'from now on, signing in to Mendery asks for a code from your authenticator app after your password.',
-          'If you did not turn this on, reset your password at once and tell another admin.',
+          translate(lang, 'mail.hello', { name: row.name }),
+          translate(lang, 'mail.account.twoStepOn.text'),
+          translate(lang, 'mail.account.twoStepOn.ifNot'),
         ],
+        language: lang,
       }),
     );
   });
@@ -69,7 +72,12 @@ export async function takeCode(ctx: AppContext, userId: number, code: string, st
 }
 
 /** Turning it off needs both the password and a code, so a session left open is not enough. */
-export async function turnOff(ctx: AppContext, userId: number, input: { password: string; code: string }) {
+export async function turnOff(
+  ctx: AppContext,
+  userId: number,
+  input: { password: string; code: string },
+  lang: Language = DEFAULT_LANGUAGE,
+) {
   const row = (await q.twoFactorOf(ctx.database.db, userId))!;
   if (!row.totpSecret) throw new HttpError(409, 'two-factor-off', 'Two-step sign-in is off already.');
   if (!row.passwordHash || !(await verifyPassword(row.passwordHash, input.password))) {
@@ -81,12 +89,13 @@ export async function turnOff(ctx: AppContext, userId: number, input: { password
     await q.disableTotp(tx, userId);
     await enqueueMail(
       tx,
-      composeMail(row.email, 'Two-step sign-in is off for your Mendery account', {
+      composeMail(row.email, translate(lang, 'mail.account.twoStepOff.subject'), {
         paragraphs: [
-          `Hello ${row.name},`,
-          'signing in to Mendery now asks only for your password.',
-          'If you did not turn this off, reset your password at once and tell another admin.',
+          translate(lang, 'mail.hello', { name: row.name }),
+          translate(lang, 'mail.account.twoStepOff.text'),
+          translate(lang, 'mail.account.twoStepOff.ifNot'),
         ],
+        language: lang,
       }),
     );
   });

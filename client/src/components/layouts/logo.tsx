@@ -1,3 +1,6 @@
+/** The product's name, the same in every language. */
+const NAME = 'Mendery';
+
 export function Logo({ className = '' }: { className?: string }) {
   return (
     <span className={`inline-flex items-center gap-2 ${className}`}>
@@ -13,7 +16,7 @@ export function Logo({ className = '' }: { className?: string }) {
         />
         <circle cx="16" cy="12" r="2.6" fill="#f6f1ea" />
       </svg>
-      <span className="text-xl font-extrabold tracking-tight text-navy">Mendery</span>
+      <span className="text-xl font-extrabold tracking-tight text-navy">{NAME}</span>
     </span>
   );
 }

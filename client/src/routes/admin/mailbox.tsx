@@ -1,4 +1,3 @@
-import { format } from 'date-fns';
 import { useState } from 'react';
 import { Link, useParams, type LoaderFunctionArgs } from 'react-router';
 import { Button } from '../../components/ui/button';
@@ -9,6 +8,13 @@ import { useClearMailbox } from '../../features/admin/api/clear-mailbox';
 import { useMail, mailQuery } from '../../features/admin/api/get-mail';
 import { useMailbox, mailboxQuery } from '../../features/admin/api/get-mailbox';
 import { queryClient } from '../../lib/query-client';
+import { tr, useLanguage, useT } from '../../lib/i18n';
+import { intlLocale } from '../../../../shared/format';
+import type { Language } from '../../../../shared/i18n/languages';
+
+/** When a mail arrived, to the second, as the reader's language writes it. */
+const received = (at: string | Date, lang: Language) =>
+  new Intl.DateTimeFormat(intlLocale(lang), { dateStyle: 'medium', timeStyle: 'medium' }).format(new Date(at));
 
 /** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
 export const loader = ({ params }: LoaderFunctionArgs) =>
@@ -19,24 +25,21 @@ export const loader = ({ params }: LoaderFunctionArgs) =>
 
 /** The local mailbox: every mail Mendery sent while it runs with its own SMTP catcher. */
 export function MailboxPage() {
+  const t = useT();
+  const lang = useLanguage();
   const selected = Number(useParams().mailId) || null;
   const list = useMailbox();
   const clear = useClearMailbox();
   const [confirming, setConfirming] = useState(false);
   return (
     <div>
-      <PageTitle
-        title="Local mailbox"
-        lead="Mail sent by this installation, caught by the local SMTP mailbox instead of going out."
-      />
+      <PageTitle title={t('admin.mailbox.title')} lead={t('admin.mailbox.lead')} />
       <div className="grid gap-4 lg:grid-cols-[22rem_1fr]">
         <Card flush className="overflow-hidden">
           <div className="flex items-center justify-between border-b border-ink/5 px-4 py-3">
-            <h2 className="text-base">
-              {list.data?.length ?? 0} message{list.data?.length === 1 ? '' : 's'}
-            </h2>
+            <h2 className="text-base">{t('admin.mailbox.count', { n: list.data?.length ?? 0 })}</h2>
             <Button variant="quiet" disabled={!list.data?.length} onClick={() => setConfirming(true)}>
-              Delete all mail
+              {t('admin.mailbox.deleteAll')}
             </Button>
           </div>
           {list.isPending && (
@@ -46,13 +49,13 @@ export function MailboxPage() {
           )}
           {list.error && (
             <div className="p-4">
-              <Alert tone="error">{list.error.message}</Alert>
+              <Alert tone="error">{tr(list.error.message)}</Alert>
             </div>
           )}
           {list.data?.length === 0 && (
             <div className="p-4">
-              <EmptyState title="No mail yet" icon="✉">
-                Sign-ups, password resets and bookings send mail that lands here.
+              <EmptyState title={t('admin.mailbox.empty')} icon="✉">
+                {t('admin.mailbox.emptyBody')}
               </EmptyState>
             </div>
           )}
@@ -64,22 +67,20 @@ export function MailboxPage() {
                   className={`block border-b border-ink/5 px-4 py-3 hover:bg-navy/5 ${selected === m.id ? 'bg-copper-light/50' : ''}`}
                 >
                   <span className="block truncate font-bold">{m.subject}</span>
-                  <span className="block truncate text-sm text-ink-soft">to {m.to}</span>
-                  <span className="text-xs text-ink-soft">
-                    {format(new Date(m.receivedAt), 'd MMM yyyy, HH:mm:ss')}
-                  </span>
+                  <span className="block truncate text-sm text-ink-soft">{t('admin.mailbox.to', { to: m.to })}</span>
+                  <span className="text-xs text-ink-soft">{received(m.receivedAt, lang)}</span>
                 </Link>
               </li>
             ))}
           </ul>
         </Card>
-        {selected ? <MailView id={selected} /> : <EmptyState title="Choose a message" icon="✉" />}
+        {selected ? <MailView id={selected} /> : <EmptyState title={t('admin.mailbox.choose')} icon="✉" />}
       </div>
       <ConfirmDialog
         open={confirming}
-        title="Empty the mailbox?"
-        message="Every caught message is deleted. Mail still waiting in the outbox is not affected."
-        confirmLabel="Empty the mailbox"
+        title={t('admin.mailbox.emptyQuestion')}
+        message={t('admin.mailbox.emptyMessage')}
+        confirmLabel={t('admin.mailbox.emptyConfirm')}
         busy={clear.isPending}
         onCancel={() => setConfirming(false)}
         onConfirm={() => clear.mutate(undefined, { onSettled: () => setConfirming(false) })}
@@ -89,6 +90,8 @@ export function MailboxPage() {
 }
 
 function MailView({ id }: { id: number }) {
+  const t = useT();
+  const lang = useLanguage();
   const mail = useMail(id);
   const [tab, setTab] = useState<'html' | 'text'>('html');
   if (mail.isPending)
@@ -97,7 +100,7 @@ function MailView({ id }: { id: number }) {
         <Spinner />
       </Card>
     );
-  if (mail.error) return <Alert tone="error">{mail.error.message}</Alert>;
+  if (mail.error) return <Alert tone="error">{tr(mail.error.message)}</Alert>;
   const m = mail.data;
   const view = m.hasHtml ? tab : 'text';
   return (
@@ -105,7 +108,7 @@ function MailView({ id }: { id: number }) {
       <div>
         <h2 className="text-xl">{m.subject}</h2>
         <p className="text-sm text-ink-soft">
-          From {m.from} to {m.to} · {format(new Date(m.receivedAt), 'd MMM yyyy, HH:mm:ss')}
+          {t('admin.mailbox.fromTo', { from: m.from, to: m.to })} · {received(m.receivedAt, lang)}
         </p>
       </div>
       <div role="tablist" className="flex gap-1">
@@ -116,7 +119,7 @@ function MailView({ id }: { id: number }) {
             onClick={() => setTab('html')}
             className={`rounded-lg px-3 py-1 font-semibold ${view === 'html' ? 'bg-navy text-white' : 'text-navy'}`}
           >
-            Rendered
+            {t('admin.mailbox.rendered')}
           </button>
         )}
         <button
@@ -125,12 +128,12 @@ function MailView({ id }: { id: number }) {
           onClick={() => setTab('text')}
           className={`rounded-lg px-3 py-1 font-semibold ${view === 'text' ? 'bg-navy text-white' : 'text-navy'}`}
         >
-          Plain text
+          {t('admin.mailbox.plain')}
         </button>
       </div>
       {view === 'html' ? (
         <iframe
-          title="Rendered mail"
+          title={t('admin.mailbox.frame')}
           sandbox="allow-popups allow-popups-to-escape-sandbox"
           src={`/api/admin/mailbox/${m.id}/html`}
           className="h-[60vh] w-full rounded-lg border border-ink/10 bg-white"

@@ -1,7 +1,6 @@
 import { useState } from 'react';
 import { useSuspenseQuery } from '@tanstack/react-query';
 import { useParams, type LoaderFunctionArgs } from 'react-router';
-import { ROLE_LABELS } from '../../../../shared/constants';
 import { Button } from '../../components/ui/button';
 import { ConfirmDialog } from '../../components/ui/confirm-dialog';
 import { GroupTabs } from '../../components/layouts/group-tabs';
@@ -15,11 +14,13 @@ import type { Member } from '../../../../shared/api/groups';
 import { inviteSchema } from '../../../../shared/schemas/auth';
 import { SelectField, TextField } from '../../components/ui/field';
 import { applyServerErrors, useZodForm } from '../../lib/form';
+import { tr, useT } from '../../lib/i18n';
 
 export const loader = ({ params }: LoaderFunctionArgs) =>
   queryClient.ensureQueryData(membersQuery(Number(params.groupId)));
 
 export function GroupPeoplePage() {
+  const t = useT();
   const groupId = Number(useParams().groupId);
   const members = useSuspenseQuery(membersQuery(groupId));
   const approve = useApproveMember(groupId);
@@ -40,10 +41,7 @@ export function GroupPeoplePage() {
         {(['organiser', 'fixer', 'host'] as const).map((r) => (
           <Card key={r} className="text-center">
             <p className="text-3xl font-extrabold text-navy">{byRole(r)}</p>
-            <p className="text-sm text-ink-soft">
-              {ROLE_LABELS[r]}
-              {byRole(r) === 1 ? '' : 's'}
-            </p>
+            <p className="text-sm text-ink-soft">{t(`organise.people.count.${r}`, { n: byRole(r) })}</p>
           </Card>
         ))}
       </div>
@@ -52,12 +50,12 @@ export function GroupPeoplePage() {
 
       <section aria-labelledby="waiting">
         <h2 id="waiting" className="mb-3 text-xl">
-          Waiting for your confirmation
+          {t('organise.people.waiting')}
         </h2>
-        {approve.error && <Alert tone="error">{approve.error.message}</Alert>}
+        {approve.error && <Alert tone="error">{tr(approve.error.message)}</Alert>}
         {pending.length === 0 ? (
-          <EmptyState title="Nobody is waiting" icon="✓">
-            New volunteers who sign up for this group appear here.
+          <EmptyState title={t('organise.people.nobodyWaiting')} icon="✓">
+            {t('organise.people.nobodyWaitingBody')}
           </EmptyState>
         ) : (
           <ul className="space-y-2">
@@ -68,22 +66,22 @@ export function GroupPeoplePage() {
               >
                 <div>
                   <p className="font-bold">
-                    {m.name} <span className="font-normal text-ink-soft">· {ROLE_LABELS[m.role]}</span>
+                    {m.name} <span className="font-normal text-ink-soft">· {t(`organise.role.${m.role}`)}</span>
                   </p>
                   <p className="text-sm text-ink-soft">
                     {m.email}
-                    {m.verified ? '' : ' · e-mail not confirmed yet'}
+                    {m.verified ? '' : ` · ${t('organise.people.unverified')}`}
                   </p>
                 </div>
                 <div className="flex gap-2">
                   <Button variant="secondary" onClick={() => setToRemove(m)}>
-                    Decline
+                    {t('organise.people.decline')}
                   </Button>
                   <Button
                     onClick={() => approve.mutate(m.membershipId)}
                     busy={approve.isPending && approve.variables === m.membershipId}
                   >
-                    Confirm
+                    {t('organise.people.confirm')}
                   </Button>
                 </div>
               </li>
@@ -94,17 +92,17 @@ export function GroupPeoplePage() {
 
       <section aria-labelledby="team">
         <h2 id="team" className="mb-3 text-xl">
-          Team
+          {t('organise.people.team')}
         </h2>
         <div className="overflow-x-auto rounded-xl bg-white ring-1 ring-ink/5">
           <table className="w-full text-left text-sm">
             <thead className="bg-navy/5 text-navy">
               <tr>
-                <th className="px-4 py-2">Name</th>
-                <th className="px-4 py-2">Role</th>
-                <th className="hidden px-4 py-2 sm:table-cell">E-mail</th>
+                <th className="px-4 py-2">{t('organise.people.name')}</th>
+                <th className="px-4 py-2">{t('organise.people.role')}</th>
+                <th className="hidden px-4 py-2 sm:table-cell">{t('organise.people.email')}</th>
                 <th className="px-4 py-2">
-                  <span className="sr-only">Actions</span>
+                  <span className="sr-only">{t('organise.manage.actions')}</span>
                 </th>
               </tr>
             </thead>
@@ -112,14 +110,14 @@ export function GroupPeoplePage() {
               {active.map((m) => (
                 <tr key={m.membershipId} className="border-t border-ink/5">
                   <td className="px-4 py-2 font-semibold">{m.name}</td>
-                  <td className="px-4 py-2">{ROLE_LABELS[m.role]}</td>
+                  <td className="px-4 py-2">{t(`organise.role.${m.role}`)}</td>
                   <td className="hidden px-4 py-2 text-ink-soft sm:table-cell">{m.email}</td>
                   <td className="px-4 py-2 text-right">
                     <button
                       className="rounded px-2 py-1 font-semibold text-alert hover:bg-alert-light"
                       onClick={() => setToRemove(m)}
                     >
-                      Remove
+                      {t('organise.people.remove')}
                     </button>
                   </td>
                 </tr>
@@ -131,13 +129,18 @@ export function GroupPeoplePage() {
 
       <ConfirmDialog
         open={toRemove !== null}
-        title={toRemove?.status === 'pending' ? 'Decline this volunteer?' : 'Remove this role?'}
+        title={
+          toRemove?.status === 'pending' ? t('organise.people.declineQuestion') : t('organise.people.removeQuestion')
+        }
         message={
           toRemove
-            ? `${toRemove.name} will no longer be ${ROLE_LABELS[toRemove.role].toLowerCase()} with ${members.data.group.name}. Their account stays.`
+            ? t(`organise.people.removeMessage.${toRemove.role}`, {
+                name: toRemove.name,
+                group: members.data.group.name,
+              })
             : ''
         }
-        confirmLabel={toRemove?.status === 'pending' ? 'Decline' : 'Remove'}
+        confirmLabel={toRemove?.status === 'pending' ? t('organise.people.decline') : t('organise.people.remove')}
         busy={remove.isPending}
         onCancel={() => setToRemove(null)}
         onConfirm={() => toRemove && remove.mutate(toRemove.membershipId, { onSettled: () => setToRemove(null) })}
@@ -147,12 +150,13 @@ export function GroupPeoplePage() {
 }
 
 function InviteForm({ groupId }: { groupId: number }) {
+  const t = useT();
   const invite = useInviteMember(groupId);
   const form = useZodForm(inviteSchema, { email: '', role: 'fixer' });
   const [error, setError] = useState<string | null>(null);
   return (
     <Card>
-      <h2 className="text-lg">Invite a volunteer</h2>
+      <h2 className="text-lg">{t('organise.people.invite')}</h2>
       <form
         noValidate
         className="mt-2 grid gap-3 sm:grid-cols-[1fr_12rem_auto] sm:items-end"
@@ -167,28 +171,28 @@ function InviteForm({ groupId }: { groupId: number }) {
         })}
       >
         <TextField
-          label="Their e-mail"
+          label={t('organise.people.theirEmail')}
           type="email"
           error={form.formState.errors.email?.message}
           {...form.register('email', { onChange: () => invite.reset() })}
         />
-        <SelectField label="Role" {...form.register('role')}>
-          <option value="fixer">Fixer</option>
-          <option value="host">Reception</option>
-          <option value="organiser">Organiser</option>
+        <SelectField label={t('organise.people.role')} {...form.register('role')}>
+          <option value="fixer">{t('organise.role.fixer')}</option>
+          <option value="host">{t('organise.role.host')}</option>
+          <option value="organiser">{t('organise.role.organiser')}</option>
         </SelectField>
         <Button type="submit" busy={form.formState.isSubmitting}>
-          Send invitation
+          {t('organise.people.send')}
         </Button>
       </form>
       {invite.isSuccess && (
         <p role="status" className="mt-2 text-sm font-bold text-sage">
-          Invitation sent. It works for 14 days.
+          {t('organise.people.sent', { days: 14 })}
         </p>
       )}
       {error && (
         <div className="mt-2">
-          <Alert tone="error">{error}</Alert>
+          <Alert tone="error">{tr(error)}</Alert>
         </div>
       )}
     </Card>

@@ -1,8 +1,8 @@
 import { useEffect, useMemo, useState } from 'react';
 import { useSuspenseQuery } from '@tanstack/react-query';
 import { useParams, type LoaderFunctionArgs } from 'react-router';
-import { SKILL_LABELS } from '../../../../shared/constants';
-import { COMMON_CURRENCIES, currencyName, formatMoney } from '../../../../shared/format';
+import { SKILLS } from '../../../../shared/constants';
+import { COMMON_CURRENCIES, currencyName, formatMoney, intlLocale } from '../../../../shared/format';
 import { LANGUAGE_NAMES, LANGUAGES, type Language } from '../../../../shared/i18n/languages';
 import { countryChoices } from '../../../../shared/places/countries';
 import { venueSchema } from '../../../../shared/schemas/events';
@@ -22,6 +22,7 @@ import { venuesQuery } from '../../features/groups/api/get-venues';
 import { eventKeys } from '../../features/events/api/keys';
 import { queryClient } from '../../lib/query-client';
 import { applyServerErrors, useZodForm } from '../../lib/form';
+import { tr, useLanguage, useT } from '../../lib/i18n';
 
 export const loader = ({ params }: LoaderFunctionArgs) => {
   const groupId = Number(params.groupId);
@@ -33,6 +34,7 @@ export const loader = ({ params }: LoaderFunctionArgs) => {
 };
 
 export function GroupSettingsPage() {
+  const t = useT();
   const groupId = Number(useParams().groupId);
   const settings = useSuspenseQuery(groupSettingsQuery(groupId));
   const categories = useCategories();
@@ -64,10 +66,10 @@ export function GroupSettingsPage() {
       <GroupTabs groupId={groupId} />
       <div className="grid gap-6 lg:grid-cols-2">
         <Card className="space-y-4">
-          <h2 className="text-lg">House rules and what you take</h2>
+          <h2 className="text-lg">{t('organise.settings.rulesTitle')}</h2>
           <div className="space-y-1">
             <label htmlFor="rules" className="block font-semibold">
-              House rules (one per line)
+              {t('organise.settings.rules')}
             </label>
             <textarea
               id="rules"
@@ -79,17 +81,17 @@ export function GroupSettingsPage() {
               }}
               className="block w-full rounded-lg border border-ink/20 bg-white px-3 py-2.5"
             />
-            <p className="text-sm text-ink-soft">Visitors accept these when they book.</p>
+            <p className="text-sm text-ink-soft">{t('organise.settings.rulesHint')}</p>
           </div>
           <fieldset>
-            <legend className="font-semibold">Categories you do not take</legend>
+            <legend className="font-semibold">{t('organise.settings.notTaken')}</legend>
             <div className="mt-2 space-y-3">
-              {Object.entries(SKILL_LABELS).map(([skill, label]) => {
+              {SKILLS.map((skill) => {
                 const list = categories.data.filter((c) => c.skill === skill);
                 if (!list.length) return null;
                 return (
                   <div key={skill}>
-                    <p className="text-sm font-bold text-ink-soft">{label}</p>
+                    <p className="text-sm font-bold text-ink-soft">{t(`common.skill.${skill}`)}</p>
                     {list.map((c) => (
                       <label key={c.id} className="flex items-start gap-2 py-0.5 text-sm">
                         <input
@@ -100,7 +102,12 @@ export function GroupSettingsPage() {
                         />
                         <span>
                           {c.name}
-                          {c.refusal && <span className="text-ink-soft"> — usually refused: {c.refusal.reason}</span>}
+                          {c.refusal && (
+                            <span className="text-ink-soft">
+                              {' '}
+                              — {t('organise.settings.usuallyRefused', { reason: c.refusal.reason })}
+                            </span>
+                          )}
                         </span>
                       </label>
                     ))}
@@ -109,21 +116,21 @@ export function GroupSettingsPage() {
               })}
             </div>
           </fieldset>
-          {save.error && <Alert tone="error">{save.error.message}</Alert>}
-          {save.isSuccess && <Alert tone="success">Saved.</Alert>}
+          {save.error && <Alert tone="error">{tr(save.error.message)}</Alert>}
+          {save.isSuccess && <Alert tone="success">{t('organise.manage.saved')}</Alert>}
           <Button
             busy={save.isPending}
             onClick={() => save.mutate({ houseRules: rules, excludedCategoryIds: [...excluded] })}
           >
-            Save rules
+            {t('organise.settings.saveRules')}
           </Button>
         </Card>
 
         <PrivacySettings settings={settings.data} privacyPath={paths.groupPrivacy(groupId)} />
 
         <Card className="space-y-4">
-          <h2 className="text-lg">Venues</h2>
-          {venues.data.length === 0 && <p className="text-sm text-ink-soft">No venue yet: add the hall you meet in.</p>}
+          <h2 className="text-lg">{t('organise.settings.venues')}</h2>
+          {venues.data.length === 0 && <p className="text-sm text-ink-soft">{t('organise.settings.noVenue')}</p>}
           <ul className="space-y-2">
             {venues.data.map((v) => (
               <li key={v.id} className="rounded-lg bg-paper p-3">
@@ -148,22 +155,30 @@ export function GroupSettingsPage() {
               }
             })}
           >
-            <h3 className="font-bold">Add a venue</h3>
-            {venueError && <Alert tone="error">{venueError}</Alert>}
-            <TextField label="Name" error={venueForm.formState.errors.name?.message} {...venueForm.register('name')} />
+            <h3 className="font-bold">{t('organise.settings.addVenueTitle')}</h3>
+            {venueError && <Alert tone="error">{tr(venueError)}</Alert>}
             <TextField
-              label="Street address"
+              label={t('organise.settings.venueName')}
+              error={venueForm.formState.errors.name?.message}
+              {...venueForm.register('name')}
+            />
+            <TextField
+              label={t('organise.settings.address')}
               error={venueForm.formState.errors.address?.message}
               {...venueForm.register('address')}
             />
-            <TextField label="Town" error={venueForm.formState.errors.town?.message} {...venueForm.register('town')} />
             <TextField
-              label="Access notes (optional)"
-              hint="Steps, lifts, parking, where the sockets are."
+              label={t('organise.settings.town')}
+              error={venueForm.formState.errors.town?.message}
+              {...venueForm.register('town')}
+            />
+            <TextField
+              label={t('organise.settings.access')}
+              hint={t('organise.settings.accessHint')}
               {...venueForm.register('accessNotes')}
             />
             <Button type="submit" variant="secondary" busy={venueForm.formState.isSubmitting}>
-              Add venue
+              {t('organise.settings.addVenue')}
             </Button>
           </form>
         </Card>
@@ -185,19 +200,21 @@ function CurrencyCard({
   current: string;
   country: string;
 }) {
+  const t = useT();
+  const lang = useLanguage();
   const save = useSaveGroupSettings(groupId);
   const [currency, setCurrency] = useState(current);
   const [country, setCountry] = useState(savedCountry);
   useEffect(() => setCurrency(current), [current]);
   useEffect(() => setCountry(savedCountry), [savedCountry]);
-  const countries = useMemo(() => countryChoices(), []);
+  const countries = useMemo(() => countryChoices(intlLocale(lang)), [lang]);
   const codes = COMMON_CURRENCIES.includes(current as never) ? COMMON_CURRENCIES : [current, ...COMMON_CURRENCIES];
   return (
     <Card className="space-y-3">
-      <h2 className="text-lg">Country and money</h2>
+      <h2 className="text-lg">{t('organise.settings.moneyTitle')}</h2>
       <div className="space-y-1">
         <label htmlFor="country" className="block font-semibold">
-          Country
+          {t('organise.settings.country')}
         </label>
         <select
           id="country"
@@ -209,7 +226,7 @@ function CurrencyCard({
           className="block min-h-11 w-full rounded-lg border border-ink/20 bg-white px-3"
         >
           <option value="" disabled>
-            Choose the country your sessions are in
+            {t('organise.settings.chooseCountry')}
           </option>
           {countries.map((c) => (
             <option key={c.code} value={c.code}>
@@ -217,11 +234,11 @@ function CurrencyCard({
             </option>
           ))}
         </select>
-        <p className="text-sm text-ink-soft">Written in the open repair data file that networks and funders read.</p>
+        <p className="text-sm text-ink-soft">{t('organise.settings.countryHint')}</p>
       </div>
       <div className="space-y-1">
         <label htmlFor="currency" className="block font-semibold">
-          Currency of part costs
+          {t('organise.settings.currency')}
         </label>
         <select
           id="currency"
@@ -234,22 +251,22 @@ function CurrencyCard({
         >
           {codes.map((c) => (
             <option key={c} value={c}>
-              {c} — {currencyName(c)}
+              {c} — {currencyName(c, lang)}
             </option>
           ))}
         </select>
         <p className="text-sm text-ink-soft">
-          Fixers note what a part should cost in it, and follow-up mails quote it: {formatMoney(12.5, currency)}.
+          {t('organise.settings.currencyHint', { example: formatMoney(12.5, currency, lang) })}
         </p>
       </div>
-      {save.error && <Alert tone="error">{save.error.message}</Alert>}
-      {save.isSuccess && <Alert tone="success">Saved.</Alert>}
+      {save.error && <Alert tone="error">{tr(save.error.message)}</Alert>}
+      {save.isSuccess && <Alert tone="success">{t('organise.manage.saved')}</Alert>}
       <Button
         variant="secondary"
         busy={save.isPending}
         onClick={() => save.mutate(country ? { currency, country } : { currency })}
       >
-        Save country and currency
+        {t('organise.settings.saveMoney')}
       </Button>
     </Card>
   );
@@ -257,15 +274,16 @@ function CurrencyCard({
 
 /** The language of the group's mails when the visitor's own is not known: walk-ins registered at the desk. */
 function LanguageCard({ groupId, current }: { groupId: number; current: Language }) {
+  const t = useT();
   const save = useSaveGroupSettings(groupId);
   const [language, setLanguage] = useState(current);
   useEffect(() => setLanguage(current), [current]);
   return (
     <Card className="space-y-3">
-      <h2 className="text-lg">Language</h2>
+      <h2 className="text-lg">{t('organise.settings.languageTitle')}</h2>
       <div className="space-y-1">
         <label htmlFor="group-language" className="block font-semibold">
-          Language of the group’s mails
+          {t('organise.settings.language')}
         </label>
         <select
           id="group-language"
@@ -282,15 +300,12 @@ function LanguageCard({ groupId, current }: { groupId: number; current: Language
             </option>
           ))}
         </select>
-        <p className="text-sm text-ink-soft">
-          A visitor who books online gets every mail in the language they booked in. Visitors registered at the desk get
-          this one.
-        </p>
+        <p className="text-sm text-ink-soft">{t('organise.settings.languageHint')}</p>
       </div>
-      {save.error && <Alert tone="error">{save.error.message}</Alert>}
-      {save.isSuccess && <Alert tone="success">Saved.</Alert>}
+      {save.error && <Alert tone="error">{tr(save.error.message)}</Alert>}
+      {save.isSuccess && <Alert tone="success">{t('organise.manage.saved')}</Alert>}
       <Button variant="secondary" busy={save.isPending} onClick={() => save.mutate({ defaultLanguage: language })}>
-        Save the language
+        {t('organise.settings.saveLanguage')}
       </Button>
     </Card>
   );
@@ -298,28 +313,26 @@ function LanguageCard({ groupId, current }: { groupId: number; current: Language
 
 /** Whether other groups may search this group's repair notes (its own fixers always can). */
 function SharingCard({ groupId }: { groupId: number }) {
+  const t = useT();
   const sharing = useSharing(groupId);
   const set = useSetSharing(groupId);
   return (
     <Card className="space-y-3">
-      <h2 className="text-lg">Repair notes</h2>
-      <p className="text-sm text-ink-soft">
-        Your fixers’ repair notes, and the fixes they add, are always searchable by your own volunteers. Sharing lets
-        the other groups on Mendery search them too; no visitor’s name is ever in them.
-      </p>
+      <h2 className="text-lg">{t('organise.settings.notesTitle')}</h2>
+      <p className="text-sm text-ink-soft">{t('organise.settings.notesLead')}</p>
       {sharing.isPending ? (
         <Spinner />
       ) : sharing.error ? (
-        <Alert tone="error">{sharing.error.message}</Alert>
+        <Alert tone="error">{tr(sharing.error.message)}</Alert>
       ) : (
         <CheckField
-          label="Share our repair notes with the other groups"
+          label={t('organise.settings.share')}
           checked={sharing.data.share}
           disabled={set.isPending}
           onChange={(e) => set.mutate(e.target.checked)}
         />
       )}
-      {set.error && <Alert tone="error">{set.error.message}</Alert>}
+      {set.error && <Alert tone="error">{tr(set.error.message)}</Alert>}
     </Card>
   );
 }

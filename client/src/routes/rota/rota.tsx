@@ -12,6 +12,7 @@ import { ShiftTable } from '../../features/rota/components/shift-table';
 import { SkillCoverChart } from '../../features/rota/components/skill-cover-chart';
 import { useRefreshBoard } from '../../features/triage/api/get-board';
 import { queryClient } from '../../lib/query-client';
+import { useLanguage, useT } from '../../lib/i18n';
 
 /** The page reads what the loader fetched; a failure to fetch it is the route's error, shown in the page frame. */
 export const loader = ({ params }: LoaderFunctionArgs) => {
@@ -25,6 +26,8 @@ export const loader = ({ params }: LoaderFunctionArgs) => {
 
 /** Who comes when, as a chart of skills × slots: green where covered, red where items wait for a skill nobody has. */
 export function RotaPage() {
+  const t = useT();
+  const lang = useLanguage();
   const id = Number(useParams().eventId);
   const { data: event } = useSuspenseQuery(eventQuery(id));
   const { data: rota } = useRota(id);
@@ -34,16 +37,19 @@ export function RotaPage() {
   return (
     <div>
       <SessionHeading
-        back={{ to: paths.groupEvents(event.groupId), label: `${event.groupName}: all sessions` }}
+        back={{ to: paths.groupEvents(event.groupId), label: t('organise.allSessions', { group: event.groupName }) }}
         title={event.title}
-        when={`Rota · ${formatDay(event.startsAt, tz)} · ${formatTimeRange(event.startsAt, event.endsAt, tz)}`}
+        when={t('organise.rota.when', {
+          day: formatDay(event.startsAt, tz, lang),
+          time: formatTimeRange(event.startsAt, event.endsAt, tz, lang),
+        })}
       />
       <EventTabs eventId={id} />
       <div className="grid grid-cols-[minmax(0,1fr)] gap-4 lg:grid-cols-[minmax(0,1fr)_20rem]">
         <SkillCoverChart rota={rota} timeZone={tz} />
         <RotaGaps eventId={id} gaps={rota.gaps} timeZone={tz} />
       </div>
-      <h2 className="mb-2 mt-6 text-xl">Who is coming</h2>
+      <h2 className="mb-2 mt-6 text-xl">{t('organise.rota.whoIsComing')}</h2>
       <ShiftTable eventId={id} shifts={rota.shifts} benches={benches} timeZone={tz} onSeated={refreshBoard} />
     </div>
   );

@@ -1,23 +1,21 @@
 import { useState } from 'react';
-import { EQUIPMENT, EQUIPMENT_LABELS, SKILL_LABELS, SKILLS } from '../../../../shared/constants';
+import { EQUIPMENT, SKILLS } from '../../../../shared/constants';
 import { Button } from '../../components/ui/button';
 import { Alert, Card, PageTitle } from '../../components/ui/feedback';
 import { profileQuery, useProfile } from '../../features/skills/api/get-profile';
 import { useSaveProfile } from '../../features/skills/api/save-profile';
 import { queryClient } from '../../lib/query-client';
+import { tr, useT } from '../../lib/i18n';
 
-const LEVELS = [
-  ['0', 'Not for me'],
-  ['1', '1 · learning'],
-  ['2', '2 · capable'],
-  ['3', '3 · expert'],
-] as const;
+/** Skill levels 0–3, worded in the catalog (bench.skills.level.N). */
+const LEVELS = [0, 1, 2, 3] as const;
 
 /** The form starts from the saved profile; a failure to read it is the route's error. */
 export const loader = () => queryClient.ensureQueryData(profileQuery());
 
 /** The fixer's own skill levels, the kit they bring and a note for the organisers. */
 export function MySkillsPage() {
+  const t = useT();
   const { data: profile } = useProfile();
   const save = useSaveProfile();
   const [skills, setSkills] = useState<Record<string, number>>(profile.skills);
@@ -25,14 +23,11 @@ export function MySkillsPage() {
   const [notes, setNotes] = useState(profile.notes);
   return (
     <div className="mx-auto max-w-2xl space-y-4">
-      <PageTitle
-        title="My skills"
-        lead="Organisers match items to fixers by these. Be honest: learning is welcome — you will be paired with simpler repairs."
-      />
+      <PageTitle title={t('common.nav.skills')} lead={t('bench.skills.lead')} />
       <Card className="space-y-3">
         {SKILLS.map((s) => (
           <label key={s} className="grid grid-cols-[1fr_10rem] items-center gap-3">
-            <span className="font-semibold">{SKILL_LABELS[s]}</span>
+            <span className="font-semibold">{t(`common.skill.${s}`)}</span>
             <select
               value={String(skills[s] ?? 0)}
               onChange={(e) => {
@@ -41,9 +36,9 @@ export function MySkillsPage() {
               }}
               className="rounded-lg border border-ink/20 px-2 py-2"
             >
-              {LEVELS.map(([v, l]) => (
-                <option key={v} value={v}>
-                  {l}
+              {LEVELS.map((v) => (
+                <option key={v} value={String(v)}>
+                  {t(`bench.skills.level.${v}`)}
                 </option>
               ))}
             </select>
@@ -52,7 +47,7 @@ export function MySkillsPage() {
       </Card>
       <Card>
         <fieldset>
-          <legend className="font-semibold">Kit I bring</legend>
+          <legend className="font-semibold">{t('bench.skills.kit')}</legend>
           <div className="mt-2 grid grid-cols-2 gap-2">
             {EQUIPMENT.map((e) => (
               <label key={e} className="flex items-center gap-2 text-sm">
@@ -65,13 +60,13 @@ export function MySkillsPage() {
                     setKit(ev.target.checked ? [...kit, e] : kit.filter((x) => x !== e));
                   }}
                 />
-                {EQUIPMENT_LABELS[e]}
+                {t(`organise.equipment.${e}`)}
               </label>
             ))}
           </div>
         </fieldset>
         <label className="mt-4 block font-semibold">
-          Notes for the organisers
+          {t('bench.skills.notes')}
           <textarea
             value={notes}
             onChange={(e) => {
@@ -83,7 +78,7 @@ export function MySkillsPage() {
           />
         </label>
       </Card>
-      {save.error && <Alert tone="error">{save.error.message}</Alert>}
+      {save.error && <Alert tone="error">{tr(save.error.message)}</Alert>}
       <div className="flex items-center gap-3">
         <Button
           busy={save.isPending}
@@ -95,11 +90,11 @@ export function MySkillsPage() {
             })
           }
         >
-          Save my skills
+          {t('bench.skills.save')}
         </Button>
         {save.isSuccess && (
           <span role="status" className="font-bold text-sage">
-            Saved.
+            {t('bench.skills.saved')}
           </span>
         )}
       </div>

@@ -1,12 +1,11 @@
 import { useMemo, useState } from 'react';
 import { useParams, type LoaderFunctionArgs } from 'react-router';
-import { SKILL_LABELS, type Skill } from '../../../../shared/constants';
 import { GroupTabs } from '../../components/layouts/group-tabs';
 import { skillsMatrixQuery, useSkillsMatrix } from '../../features/skills/api/get-skills-matrix';
 import { useGroupSettings } from '../../features/groups/api/get-group-settings';
 import { queryClient } from '../../lib/query-client';
+import { useT } from '../../lib/i18n';
 
-const LEVEL = ['', 'learning', 'capable', 'expert'];
 const TONE = ['', 'bg-sage-light text-sage', 'bg-sage/60 text-ink', 'bg-sage text-white'];
 
 /** The page reads the matrix with suspense; a failure to read it is the route's error. */
@@ -15,6 +14,7 @@ export const loader = ({ params }: LoaderFunctionArgs) =>
 
 /** Volunteers × skills: sort by a skill to find the experts, filter by name or by a skill someone must have. */
 export function SkillsMatrixPage() {
+  const t = useT();
   const groupId = Number(useParams().groupId);
   const group = useGroupSettings(groupId);
   const matrix = useSkillsMatrix(groupId);
@@ -43,29 +43,29 @@ export function SkillsMatrixPage() {
   const skills = matrix.data.skills;
   return (
     <div>
-      <h1 className="mb-2 text-2xl sm:text-3xl">{group.data?.name ?? 'Skills'}</h1>
+      <h1 className="mb-2 text-2xl sm:text-3xl">{group.data?.name ?? t('organise.groupTabs.skills')}</h1>
       <GroupTabs groupId={groupId} />
       <div className="mb-3 flex flex-wrap gap-3">
         <label className="text-sm font-semibold">
-          Name
+          {t('organise.rota.name')}
           <input
             value={filter}
             onChange={(e) => setFilter(e.target.value)}
-            placeholder="Filter…"
+            placeholder={t('organise.skills.filter')}
             className="mt-1 block rounded-lg border border-ink/20 px-3 py-2"
           />
         </label>
         <label className="text-sm font-semibold">
-          Has the skill
+          {t('organise.skills.has')}
           <select
             value={needs}
             onChange={(e) => setNeeds(e.target.value)}
             className="mt-1 block rounded-lg border border-ink/20 px-3 py-2"
           >
-            <option value="">Any</option>
+            <option value="">{t('organise.skills.any')}</option>
             {skills.map((s) => (
               <option key={s} value={s}>
-                {SKILL_LABELS[s as Skill]}
+                {t(`common.skill.${s}`)}
               </option>
             ))}
           </select>
@@ -77,7 +77,8 @@ export function SkillsMatrixPage() {
             <tr>
               <th className="sticky left-0 bg-[#eef0f3] px-3 py-2 text-left">
                 <button onClick={() => sortOn('name')} className="font-bold underline-offset-2 hover:underline">
-                  Volunteer{sortBy === 'name' ? (ascending ? ' ↑' : ' ↓') : ''}
+                  {t('organise.skills.volunteer')}
+                  {sortBy === 'name' ? (ascending ? ' ↑' : ' ↓') : ''}
                 </button>
               </th>
               {skills.map((s) => (
@@ -90,7 +91,7 @@ export function SkillsMatrixPage() {
                     onClick={() => sortOn(s)}
                     className={`font-bold hover:underline ${sortBy === s ? 'text-copper-dark' : ''}`}
                   >
-                    {SKILL_LABELS[s as Skill]}
+                    {t(`common.skill.${s}`)}
                     {sortBy === s ? (ascending ? ' ↑' : ' ↓') : ''}
                   </button>
                 </th>
@@ -102,7 +103,9 @@ export function SkillsMatrixPage() {
               <tr key={v.userId} className="border-t border-ink/5">
                 <th className="sticky left-0 bg-white px-3 py-2 text-left font-semibold">
                   {v.name}
-                  <span className="block text-xs font-normal text-ink-soft">{v.roles.join(', ')}</span>
+                  <span className="block text-xs font-normal text-ink-soft">
+                    {v.roles.map((r) => t(`organise.role.${r}`)).join(', ')}
+                  </span>
                 </th>
                 {skills.map((s) => {
                   const l = v.skills[s] ?? 0;
@@ -111,9 +114,9 @@ export function SkillsMatrixPage() {
                       {l ? (
                         <span
                           className={`inline-block min-w-16 rounded px-1.5 py-0.5 text-xs font-bold ${TONE[l]}`}
-                          title={LEVEL[l]}
+                          title={t(`organise.triage.level.${l}`)}
                         >
-                          {l} {LEVEL[l]}
+                          {l} {t(`organise.triage.level.${l}`)}
                         </span>
                       ) : (
                         <span className="text-ink-soft">·</span>
@@ -125,11 +128,9 @@ export function SkillsMatrixPage() {
             ))}
           </tbody>
         </table>
-        {rows.length === 0 && <p className="p-4 text-sm text-ink-soft">Nobody matches.</p>}
+        {rows.length === 0 && <p className="p-4 text-sm text-ink-soft">{t('organise.skills.nobody')}</p>}
       </div>
-      <p className="mt-2 text-sm text-ink-soft">
-        Levels: 1 learning, 2 capable, 3 expert. Volunteers set their own skills on their page.
-      </p>
+      <p className="mt-2 text-sm text-ink-soft">{t('organise.skills.levels')}</p>
     </div>
   );
 }

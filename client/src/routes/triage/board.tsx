@@ -7,6 +7,7 @@ import { boardQuery, useBoard } from '../../features/triage/api/get-board';
 import { BenchColumns } from '../../features/triage/components/bench-columns';
 import { TriageRunBar } from '../../features/triage/components/triage-run-bar';
 import { TriageRunHistory } from '../../features/triage/components/triage-run-history';
+import { useLanguage, useT } from '../../lib/i18n';
 import { queryClient } from '../../lib/query-client';
 
 /** The page reads what the loader fetched; a failure to fetch it is the route's error, shown in the page frame. */
@@ -15,25 +16,27 @@ export const loader = ({ params }: LoaderFunctionArgs) =>
 
 /** Columns per bench, each with its fixers' item cards; one column of items still waiting, with the reason. */
 export function TriageBoardPage() {
+  const t = useT();
+  const lang = useLanguage();
   const id = Number(useParams().eventId);
   const { data: b } = useBoard(id);
   return (
     <div>
       <Link to={paths.groupEvents(b.event.groupId)} className="text-sm font-bold text-navy underline">
-        ← {b.event.groupName}: all sessions
+        ← {t('organise.triage.board.back', { group: b.event.groupName })}
       </Link>
       <h1 className="mt-2 text-2xl sm:text-3xl">{b.event.title}</h1>
-      <p className="mb-3 font-bold text-copper-dark">{formatDay(b.event.startsAt, b.event.timeZone)}</p>
+      <p className="mb-3 font-bold text-copper-dark">{formatDay(b.event.startsAt, b.event.timeZone, lang)}</p>
       <EventTabs eventId={id} />
       <TriageRunBar board={b} />
       {b.benches.length === 0 && (
-        <Alert tone="caution" title="No benches set out">
-          Add benches for this session under “Benches” before running triage.
+        <Alert tone="caution" title={t('organise.triage.board.noBenchesTitle')}>
+          {t('organise.triage.board.noBenches')}
         </Alert>
       )}
       {b.fixers.length === 0 && (
-        <Alert tone="caution" title="No fixer has said they are coming">
-          Fixers say so on their own page; see the rota.
+        <Alert tone="caution" title={t('organise.triage.board.noFixersTitle')}>
+          {t('organise.triage.board.noFixers')}
         </Alert>
       )}
       <BenchColumns board={b} />

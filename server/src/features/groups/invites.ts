@@ -16,6 +16,8 @@ import {
   userByEmail,
   userById,
 } from './queries/invites';
+import { asLanguage } from '../../../../shared/i18n/languages';
+import { translate } from '../../i18n';
 
 const INVITE_DAYS = 14;
 
@@ -47,16 +49,21 @@ export async function invite(
       expiresAt: new Date(Date.now() + INVITE_DAYS * 86400_000),
       invitedBy,
     });
+    // Nothing is known of the invitee yet: the group's own language.
+    const lang = asLanguage(group.defaultLanguage);
+    const t = (key: string, values?: Record<string, unknown>) => translate(lang, `mail.invite.${key}`, values);
+    const who = inviter?.name ?? t('anOrganiser');
     await enqueueMail(
       tx,
-      composeMail(input.email, `${inviter?.name ?? 'An organiser'} invites you to ${group.name}`, {
+      composeMail(input.email, t('subject', { who, group: group.name }), {
         paragraphs: [
-          'Hello,',
-          `${inviter?.name ?? 'An organiser'} invites you to join ${group.name} on Mendery as ${ROLE_LABELS[input.role].toLowerCase()}.`,
-          'Follow the link to accept; if you have no account yet you can make one there.',
+          t('hello'),
+          t('text', { who, group: group.name, role: translate(lang, `mail.roleAs.${input.role}`) }),
+          t('follow'),
         ],
-        action: { label: 'Accept the invitation', url: `${ctx.env.publicUrl}/join/${token}` },
-        footnote: `The link works for ${INVITE_DAYS} days.`,
+        action: { label: t('action'), url: `${ctx.env.publicUrl}/join/${token}` },
+        footnote: t('footnote', { days: INVITE_DAYS }),
+        language: lang,
       }),
     );
   });

@@ -11,6 +11,8 @@ import {
   membershipInGroup,
   publicGroups,
 } from './queries/members';
+import { asLanguage } from '../../../../shared/i18n/languages';
+import { translate } from '../../i18n';
 
 /** The public list of groups. */
 export const listPublicGroups = (ctx: AppContext) => publicGroups(ctx.database.db);
@@ -36,14 +38,18 @@ export async function approveMember(ctx: AppContext, groupId: number, membership
   await ctx.database.db.transaction(async (tx) => {
     await activateMembership(tx, m.id);
     if (m.status === 'pending') {
+      // In the volunteer's own language, else the group's.
+      const lang = asLanguage(m.language, asLanguage(m.groupLanguage));
+      const t = (key: string, values?: Record<string, unknown>) => translate(lang, `mail.welcome.${key}`, values);
       await enqueueMail(
         tx,
-        composeMail(m.email, `Welcome to ${m.groupName}`, {
+        composeMail(m.email, t('subject', { group: m.groupName }), {
           paragraphs: [
-            `Hello ${m.name},`,
-            `an organiser of ${m.groupName} has confirmed you as ${m.role === 'host' ? 'reception' : 'a fixer'}. Sign in to see the group's events.`,
+            translate(lang, 'mail.hello', { name: m.name }),
+            t('text', { group: m.groupName, role: translate(lang, `mail.roleAs.${m.role}`) }),
           ],
-          action: { label: 'Sign in to Mendery', url: `${ctx.env.publicUrl}/sign-in` },
+          action: { label: t('action'), url: `${ctx.env.publicUrl}/sign-in` },
+          language: lang,
         }),
       );
     }

@@ -1,4 +1,5 @@
-import { asLanguage } from '../../../../shared/i18n/languages';
+import { asLanguage, type Language } from '../../../../shared/i18n/languages';
+import { intlLocale } from '../../../../shared/format';
 import { categoryText, translate } from '../../i18n';
 import { impact } from '../../../../shared/impact/statistics';
 import type { AppContext } from '../../context';
@@ -8,7 +9,8 @@ import { displacement, impactCategories } from './queries/stats';
 import { eventsDueThanks, markThanked, visitorItems, volunteersWhoCame } from './queries/thanks';
 import { stats } from './service';
 
-const kg = (x: number) => `${x.toLocaleString('en-GB', { maximumFractionDigits: 1 })} kg`;
+const kg = (x: number, lang: Language) =>
+  `${new Intl.NumberFormat(intlLocale(lang), { maximumFractionDigits: 1 }).format(x)} kg`;
 
 /**
  * Two hours after an event ends (and within a week of it), once: each visitor hears what happened to their items
@@ -64,15 +66,26 @@ export async function sendThankYous(ctx: AppContext): Promise<number> {
       const s = await stats(ctx, { eventId: event.id });
       const team = await volunteersWhoCame(tx, event.id);
       for (const v of team) {
+        // In the volunteer's own language, else the group's.
+        const lang = asLanguage(v.language, asLanguage(group.defaultLanguage));
+        const m = (key: string, values?: Record<string, unknown>) => translate(lang, `mail.team.${key}`, values);
         await enqueueMail(
           tx,
-          composeMail(v.email, `${event.title}: what we did together`, {
+          composeMail(v.email, m('subject', { event: event.title }), {
             paragraphs: [
-              `Hello ${v.name.split(' ')[0]},`,
-              `thank you for your time at ${event.title}. Together we saw ${s.items} items: ${s.fixed} fixed, ${s.partsNeeded} waiting for a part, ${s.advice} with advice and ${s.endOfLife} beyond mending.`,
-              `That kept about ${kg(s.kgDiverted)} out of landfill and avoided about ${kg(s.co2eKg)} CO2e.`,
+              translate(lang, 'mail.hello', { name: v.name.split(' ')[0] }),
+              m('text', {
+                event: event.title,
+                items: s.items,
+                fixed: s.fixed,
+                parts: s.partsNeeded,
+                advice: s.advice,
+                endOfLife: s.endOfLife,
+              }),
+              m('saved', { kg: kg(s.kgDiverted, lang), co2e: kg(s.co2eKg, lang) }),
             ],
-            action: { label: 'See the session’s report', url: `${ctx.env.publicUrl}/events/${event.id}/report` },
+            action: { label: m('action'), url: `${ctx.env.publicUrl}/events/${event.id}/report` },
+            language: lang,
           }),
         );
       }

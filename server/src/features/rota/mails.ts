@@ -1,20 +1,38 @@
 import { formatDay, formatTimeRange } from '../../../../shared/format';
+import { asLanguage } from '../../../../shared/i18n/languages';
+import { translate } from '../../i18n';
 import { composeMail } from '../../mail/templates';
 
-/** Asks one fixer to come to a session where visitors need a skill of theirs that nobody coming has. */
+/**
+ * Asks one fixer to come to a session where visitors need a skill of theirs that nobody coming has: in the fixer's
+ * own language, else the group's.
+ */
 export function askForSkillMail(
-  to: { email: string; name: string },
+  to: { email: string; name: string; language: string | null },
   event: { title: string; startsAt: Date; endsAt: Date },
-  group: { name: string; timeZone: string },
+  group: { name: string; timeZone: string; defaultLanguage: string },
   skills: string[],
   publicUrl: string,
 ) {
-  return composeMail(to.email, `Can you help at ${event.title}?`, {
+  const lang = asLanguage(to.language, asLanguage(group.defaultLanguage));
+  const m = (key: string, values?: Record<string, unknown>) => translate(lang, `mail.askSkill.${key}`, values);
+  const names = skills.map((s) => translate(lang, `common.skill.${s}`));
+  const list = new Intl.ListFormat(lang, { type: 'conjunction' }).format(
+    lang === 'de' ? names : names.map((n) => n.toLowerCase()),
+  );
+  return composeMail(to.email, m('subject', { event: event.title }), {
     paragraphs: [
-      `Hello ${to.name},`,
-      `${group.name} has visitors booked for ${event.title} on ${formatDay(event.startsAt, group.timeZone)} (${formatTimeRange(event.startsAt, event.endsAt, group.timeZone)}) who need ${skills.join(' and ')} — and nobody with that skill has said they are coming yet.`,
-      'If you can come, even for part of the day, say so on your Mendery page.',
+      translate(lang, 'mail.hello', { name: to.name }),
+      m('text', {
+        group: group.name,
+        event: event.title,
+        day: formatDay(event.startsAt, group.timeZone, lang),
+        time: formatTimeRange(event.startsAt, event.endsAt, group.timeZone, lang),
+        skills: list,
+      }),
+      m('come'),
     ],
-    action: { label: 'Say when I can come', url: `${publicUrl}/bench` },
+    action: { label: m('action'), url: `${publicUrl}/bench` },
+    language: lang,
   });
 }

@@ -86,7 +86,7 @@ export const demandRows = (db: DbOrTx, eventId: number) =>
 
 export const activeFixers = (db: DbOrTx, groupId: number) =>
   db
-    .select({ userId: users.id, name: users.name, email: users.email })
+    .select({ userId: users.id, name: users.name, email: users.email, language: users.language })
     .from(memberships)
     .innerJoin(users, eq(users.id, memberships.userId))
     .where(and(eq(memberships.groupId, groupId), eq(memberships.role, 'fixer'), eq(memberships.status, 'active')));

@@ -1,11 +1,12 @@
 import { useState } from 'react';
 import type { Bench } from '../../../../../shared/api/benches';
-import { EQUIPMENT, EQUIPMENT_LABELS } from '../../../../../shared/constants';
+import { EQUIPMENT } from '../../../../../shared/constants';
 import { Button } from '../../../components/ui/button';
 import { Alert, Card } from '../../../components/ui/feedback';
 import { ApiError } from '../../../lib/api';
 import { useSaveEventBenches } from '../api/save-event-benches';
 import { useSaveVenueBenches } from '../api/save-venue-benches';
+import { tr, useT } from '../../../lib/i18n';
 
 /**
  * Edits one session's benches from the saved ones; `onChanged` runs after a save (benches removed free their
@@ -22,6 +23,7 @@ export function BenchLayoutEditor({
   venue: { id: number; name: string } | undefined;
   onChanged?: () => void;
 }) {
+  const t = useT();
   const save = useSaveEventBenches(eventId, onChanged);
   const saveVenue = useSaveVenueBenches(venue?.id);
   const [rows, setRows] = useState<Bench[]>(() => copyOf(saved));
@@ -43,7 +45,7 @@ export function BenchLayoutEditor({
         {rows.map((b, i) => (
           <Card key={b.id ?? `new-${i}`} className="grid gap-3 sm:grid-cols-[14rem_6rem_1fr_auto] sm:items-start">
             <label className="text-sm font-semibold">
-              Name
+              {t('organise.benches.name')}
               <input
                 value={b.name}
                 onChange={(e) => set(i, { name: e.target.value })}
@@ -51,7 +53,7 @@ export function BenchLayoutEditor({
               />
             </label>
             <label className="text-sm font-semibold">
-              Seats
+              {t('organise.benches.seats')}
               <input
                 type="number"
                 min={1}
@@ -61,7 +63,7 @@ export function BenchLayoutEditor({
               />
             </label>
             <fieldset>
-              <legend className="text-sm font-semibold">Kit</legend>
+              <legend className="text-sm font-semibold">{t('organise.benches.kit')}</legend>
               <div className="mt-1 flex flex-wrap gap-x-4 gap-y-1">
                 {EQUIPMENT.map((e) => (
                   <label key={e} className="flex items-center gap-1.5 text-sm">
@@ -75,7 +77,7 @@ export function BenchLayoutEditor({
                         })
                       }
                     />
-                    {EQUIPMENT_LABELS[e]}
+                    {t(`organise.equipment.${e}`)}
                   </label>
                 ))}
               </div>
@@ -87,54 +89,62 @@ export function BenchLayoutEditor({
                 setRows((r) => r.filter((_, k) => k !== i));
               }}
             >
-              Remove
+              {t('organise.benches.remove')}
             </Button>
           </Card>
         ))}
-        {rows.length === 0 && (
-          <Alert tone="info">No benches yet. Add the tables you will set out, with the kit on each.</Alert>
-        )}
+        {rows.length === 0 && <Alert tone="info">{t('organise.benches.none')}</Alert>}
       </div>
       {removed.length > 0 && (
         <div className="mt-3">
           <Alert tone="caution">
-            Saving removes {removed.map((b) => b.name).join(', ')}; fixers seated there become free to move, and items
-            placed there go back to waiting.
+            {t('organise.benches.removing', { names: removed.map((b) => b.name).join(', ') })}
           </Alert>
         </div>
       )}
       <div className="mt-4 flex flex-wrap items-center gap-3">
         <Button
           variant="secondary"
-          onClick={() => setRows((r) => [...r, { name: `Bench ${r.length + 1}`, seats: 2, equipment: [] }])}
+          onClick={() =>
+            setRows((r) => [
+              ...r,
+              { name: t('organise.benches.newName', { n: r.length + 1 }), seats: 2, equipment: [] },
+            ])
+          }
         >
-          + Add a bench
+          + {t('organise.benches.add')}
         </Button>
         <Button busy={save.isPending} onClick={() => save.mutate(rows)}>
-          Save benches
+          {t('organise.benches.save')}
         </Button>
         <Button variant="secondary" busy={saveVenue.isPending} disabled={!venue} onClick={() => saveVenue.mutate(rows)}>
-          Make this the venue’s usual layout
+          {t('organise.benches.makeUsual')}
         </Button>
         {save.isSuccess && (
           <span role="status" className="font-bold text-sage">
-            Saved.
+            {t('organise.manage.saved')}
           </span>
         )}
         {saveVenue.isSuccess && (
           <span role="status" className="font-bold text-sage">
-            Later sessions at {venue?.name} start with these benches.
+            {t('organise.benches.usualSaved', { venue: venue?.name ?? '' })}
           </span>
         )}
       </div>
       {save.error && (
         <div className="mt-3">
-          <Alert tone="error">{fields ? Object.values(fields).join(' ') : save.error.message}</Alert>
+          <Alert tone="error">
+            {fields
+              ? Object.values(fields)
+                  .map((m) => tr(m))
+                  .join(' ')
+              : tr(save.error.message)}
+          </Alert>
         </div>
       )}
       {saveVenue.error && (
         <div className="mt-3">
-          <Alert tone="error">{saveVenue.error.message}</Alert>
+          <Alert tone="error">{tr(saveVenue.error.message)}</Alert>
         </div>
       )}
     </>

@@ -1,15 +1,17 @@
 import { useState } from 'react';
 import type { Category } from '../../../../../shared/api/categories';
-import { SKILL_LABELS, SKILLS } from '../../../../../shared/constants';
+import { SKILLS } from '../../../../../shared/constants';
 import { categoryPatchSchema } from '../../../../../shared/schemas/categories';
 import { Button } from '../../../components/ui/button';
 import { applyServerErrors, useZodForm } from '../../../lib/form';
 import { useUpdateCategory } from '../api/update-category';
+import { tr, useT } from '../../../lib/i18n';
 
 const input = 'w-full rounded border border-ink/20 px-2 py-1';
 
 /** One kind's form, checked by the same schema the server applies. */
 export function CategoryEditRow({ category: c, done }: { category: Category; done: () => void }) {
+  const t = useT();
   const save = useUpdateCategory(c.id);
   const [formError, setFormError] = useState<string | null>(null);
   const form = useZodForm(categoryPatchSchema, {
@@ -28,7 +30,7 @@ export function CategoryEditRow({ category: c, done }: { category: Category; don
   const err = (k: keyof typeof errors) =>
     errors[k]?.message && (
       <p id={`cat-${c.id}-${k}`} className="mt-1 text-xs font-semibold text-alert">
-        {String(errors[k]?.message)}
+        {tr(String(errors[k]?.message))}
       </p>
     );
   const described = (k: keyof typeof errors) => ({
@@ -40,17 +42,17 @@ export function CategoryEditRow({ category: c, done }: { category: Category; don
       <td className="px-3 py-2" colSpan={2}>
         <p className="font-bold">{c.name}</p>
         <input
-          aria-label="Weight source"
+          aria-label={t('admin.categories.weightSource')}
           className={input}
           {...form.register('weightSource')}
           {...described('weightSource')}
         />
         {err('weightSource')}
-        {formError && <p className="mt-1 text-xs font-semibold text-alert">{formError}</p>}
+        {formError && <p className="mt-1 text-xs font-semibold text-alert">{tr(formError)}</p>}
       </td>
       <td className="px-3 py-2">
         <input
-          aria-label="Average weight in kg"
+          aria-label={t('admin.categories.avgWeight')}
           inputMode="decimal"
           className={input}
           {...form.register('avgWeightKg')}
@@ -60,17 +62,17 @@ export function CategoryEditRow({ category: c, done }: { category: Category; don
       </td>
       <td className="px-3 py-2">
         <input
-          aria-label="Emission factor, kg CO2e per kg"
+          aria-label={t('admin.categories.factorLabel')}
           inputMode="decimal"
-          placeholder="none"
+          placeholder={t('admin.categories.none')}
           className={input}
           {...form.register('co2ePerKg')}
           {...described('co2ePerKg')}
         />
         {err('co2ePerKg')}
         <input
-          aria-label="Source of the emission factor"
-          placeholder="source"
+          aria-label={t('admin.categories.factorSource')}
+          placeholder={t('admin.categories.source')}
           className={`${input} mt-1`}
           {...form.register('co2eSource')}
           {...described('co2eSource')}
@@ -78,18 +80,18 @@ export function CategoryEditRow({ category: c, done }: { category: Category; don
         {err('co2eSource')}
       </td>
       <td className="px-3 py-2">
-        <select aria-label="Skill" className={input} {...form.register('skill')}>
+        <select aria-label={t('admin.categories.skill')} className={input} {...form.register('skill')}>
           {SKILLS.map((s) => (
             <option key={s} value={s}>
-              {SKILL_LABELS[s]}
+              {t(`common.skill.${s}`)}
             </option>
           ))}
         </select>
       </td>
-      <td className="px-3 py-2 text-ink-soft">{c.equipment.length} items</td>
+      <td className="px-3 py-2 text-ink-soft">{t('admin.categories.kitCount', { n: c.equipment.length })}</td>
       <td className="px-3 py-2">
         <input
-          aria-label="Repair minutes"
+          aria-label={t('admin.categories.repairMinutes')}
           inputMode="numeric"
           className={input}
           {...form.register('repairMinutes')}
@@ -98,15 +100,15 @@ export function CategoryEditRow({ category: c, done }: { category: Category; don
         {err('repairMinutes')}
       </td>
       <td className="px-3 py-2">
-        <input aria-label="Mains" type="checkbox" {...form.register('mains')} />
+        <input aria-label={t('admin.categories.mains')} type="checkbox" {...form.register('mains')} />
       </td>
       <td className="px-3 py-2">
         <div className="flex gap-1">
           <Button busy={form.formState.isSubmitting} onClick={() => void submit()}>
-            Save
+            {t('admin.categories.save')}
           </Button>
           <Button variant="quiet" onClick={done}>
-            Cancel
+            {t('admin.categories.cancel')}
           </Button>
         </div>
       </td>

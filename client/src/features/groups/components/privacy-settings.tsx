@@ -7,9 +7,12 @@ import { Alert, Card } from '../../../components/ui/feedback';
 import { TextField } from '../../../components/ui/field';
 import { ApiError } from '../../../lib/api';
 import { useSaveGroupSettings } from '../api/save-group-settings';
+import { tr, useLanguage, useT } from '../../../lib/i18n';
 
 /** How long visitors' details are kept, where they write about them, and when the daily clean-up last ran. */
 export function PrivacySettings({ settings, privacyPath }: { settings: GroupSettings; privacyPath: string }) {
+  const t = useT();
+  const lang = useLanguage();
   const save = useSaveGroupSettings(settings.id);
   const [months, setMonths] = useState(String(settings.retention.months));
   const [contact, setContact] = useState(settings.contactEmail);
@@ -21,27 +24,27 @@ export function PrivacySettings({ settings, privacyPath }: { settings: GroupSett
   const ran = settings.retention.lastRunAt;
   return (
     <Card className="space-y-4">
-      <h2 className="text-lg">Visitors&apos; details</h2>
+      <h2 className="text-lg">{t('organise.privacy.title')}</h2>
       <TextField
-        label="Keep visitors' details for (months after their session)"
+        label={t('organise.privacy.months')}
         type="number"
         inputMode="numeric"
         min={RETENTION_MONTHS.min}
         max={RETENTION_MONTHS.max}
         value={months}
         error={fields.retentionMonths}
-        hint="Then names, e-mail addresses, phone numbers and photos are erased; the repair records stay for your figures."
+        hint={t('organise.privacy.monthsHint')}
         onChange={(e) => {
           setMonths(e.target.value);
           save.reset();
         }}
       />
       <TextField
-        label="Contact for questions about their details"
+        label={t('organise.privacy.contact')}
         type="email"
         value={contact}
         error={fields.contactEmail}
-        hint="Shown on your privacy page. Leave empty to send people to an organiser at a session."
+        hint={t('organise.privacy.contactHint')}
         onChange={(e) => {
           setContact(e.target.value);
           save.reset();
@@ -49,20 +52,24 @@ export function PrivacySettings({ settings, privacyPath }: { settings: GroupSett
       />
       <p className="text-sm" data-testid="retention-last-run">
         {ran
-          ? `The clean-up last ran ${formatDay(ran, settings.timeZone)} at ${formatTime(ran, settings.timeZone)} and erased the details of ${settings.retention.lastRunAnonymised} ${settings.retention.lastRunAnonymised === 1 ? 'booking' : 'bookings'}.`
-          : 'The clean-up has not run yet; it runs once a day.'}
+          ? t('organise.privacy.lastRun', {
+              day: formatDay(ran, settings.timeZone, lang),
+              time: formatTime(ran, settings.timeZone, lang),
+              n: settings.retention.lastRunAnonymised,
+            })
+          : t('organise.privacy.notRun')}
       </p>
-      {save.error && !Object.keys(fields).length && <Alert tone="error">{save.error.message}</Alert>}
-      {save.isSuccess && <Alert tone="success">Saved.</Alert>}
+      {save.error && !Object.keys(fields).length && <Alert tone="error">{tr(save.error.message)}</Alert>}
+      {save.isSuccess && <Alert tone="success">{t('organise.manage.saved')}</Alert>}
       <div className="flex flex-wrap items-center gap-3">
         <Button
           busy={save.isPending}
           onClick={() => save.mutate({ retentionMonths: Number(months), contactEmail: contact })}
         >
-          Save
+          {t('organise.privacy.save')}
         </Button>
         <a href={privacyPath} className="font-bold text-navy underline">
-          See your privacy page
+          {t('organise.privacy.see')}
         </a>
       </div>
     </Card>

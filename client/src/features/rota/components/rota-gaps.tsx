@@ -1,13 +1,19 @@
 import { useState } from 'react';
 import type { Rota } from '../api/types';
-import { SKILL_LABELS, type Skill } from '../../../../../shared/constants';
+import type { Skill } from '../../../../../shared/constants';
 import { formatTimeRange } from '../../../../../shared/format';
 import { Button } from '../../../components/ui/button';
 import { Alert, Card } from '../../../components/ui/feedback';
 import { useAskForSkills } from '../api/ask-for-skills';
+import { tr, useLanguage, useT } from '../../../lib/i18n';
+
+/** A skill's name inside a sentence: lower case, but German keeps its nouns' capitals. */
+const skillInText = (name: string, lang: string) => (lang === 'de' ? name : name.toLowerCase());
 
 /** Times when booked items wait for a skill nobody coming has, and a mail to the group's fixers who have it. */
 export function RotaGaps({ eventId, gaps, timeZone }: { eventId: number; gaps: Rota['gaps']; timeZone: string }) {
+  const t = useT();
+  const lang = useLanguage();
   const ask = useAskForSkills(eventId);
   const [picked, setPicked] = useState<Set<Skill>>(new Set());
   const gapSkills = [...new Set(gaps.map((g) => g.skill as Skill))];
@@ -20,22 +26,24 @@ export function RotaGaps({ eventId, gaps, timeZone }: { eventId: number; gaps: R
     });
   return (
     <Card className="space-y-3">
-      <h2 className="text-lg">Gaps</h2>
+      <h2 className="text-lg">{t('organise.rota.gaps')}</h2>
       {gaps.length === 0 ? (
-        <p className="text-sm text-ink-soft">Every booked item has a fixer with its skill in its slot.</p>
+        <p className="text-sm text-ink-soft">{t('organise.rota.noGaps')}</p>
       ) : (
         <ul className="space-y-1 text-sm">
           {gaps.map((g) => (
             <li key={`${g.skill}${g.from}`}>
-              <span className="font-bold">No {SKILL_LABELS[g.skill as Skill]?.toLowerCase() ?? g.skill} fixer</span>{' '}
-              {formatTimeRange(g.from, g.to, timeZone)} ({g.items} item{g.items === 1 ? '' : 's'})
+              <span className="font-bold">
+                {t('organise.rota.noFixerFor', { skill: skillInText(t(`common.skill.${g.skill}`), lang) })}
+              </span>{' '}
+              {t('organise.rota.gapWhen', { time: formatTimeRange(g.from, g.to, timeZone, lang), n: g.items })}
             </li>
           ))}
         </ul>
       )}
       {gapSkills.length > 0 && (
         <fieldset className="space-y-1">
-          <legend className="text-sm font-bold">Ask the group’s fixers with…</legend>
+          <legend className="text-sm font-bold">{t('organise.rota.askWith')}</legend>
           {gapSkills.map((s) => (
             <label key={s} className="flex items-center gap-2 text-sm">
               <input
@@ -44,20 +52,18 @@ export function RotaGaps({ eventId, gaps, timeZone }: { eventId: number; gaps: R
                 onChange={() => toggle(s)}
                 className="size-4 accent-copper"
               />
-              {SKILL_LABELS[s] ?? s}
+              {t(`common.skill.${s}`)}
             </label>
           ))}
           <Button className="mt-2" disabled={!picked.size} busy={ask.isPending} onClick={() => ask.mutate([...picked])}>
-            Mail them
+            {t('organise.rota.mailThem')}
           </Button>
           {ask.isSuccess && (
             <p role="status" className={`text-sm font-bold ${ask.data.sent ? 'text-sage' : 'text-ink-soft'}`}>
-              {ask.data.sent
-                ? `Asked ${ask.data.sent} fixer${ask.data.sent === 1 ? '' : 's'}.`
-                : 'Nobody else in the group has that skill.'}
+              {ask.data.sent ? t('organise.rota.asked', { n: ask.data.sent }) : t('organise.rota.nobodyElse')}
             </p>
           )}
-          {ask.error && <Alert tone="error">{ask.error.message}</Alert>}
+          {ask.error && <Alert tone="error">{tr(ask.error.message)}</Alert>}
         </fieldset>
       )}
     </Card>

@@ -1,8 +1,8 @@
 import type { Rota } from '../api/types';
-import { SKILL_LABELS, type Skill } from '../../../../../shared/constants';
 import { formatTimeRange } from '../../../../../shared/format';
 import { Alert, EmptyState } from '../../../components/ui/feedback';
 import { useSeatFixer } from '../api/seat-fixer';
+import { tr, useLanguage, useT } from '../../../lib/i18n';
 
 const phoneLabel = 'font-bold text-ink-soft sm:hidden';
 
@@ -23,26 +23,28 @@ export function ShiftTable({
   timeZone: string;
   onSeated?: () => void;
 }) {
+  const t = useT();
+  const lang = useLanguage();
   const seat = useSeatFixer(eventId, onSeated);
   if (shifts.length === 0)
     return (
-      <EmptyState title="Nobody has answered yet" icon="☰">
-        Fixers and reception say whether they come on their own page.
+      <EmptyState title={t('organise.rota.noAnswers')} icon="☰">
+        {t('organise.rota.noAnswersBody')}
       </EmptyState>
     );
   return (
     <>
-      {seat.error && <Alert tone="error">{seat.error.message}</Alert>}
+      {seat.error && <Alert tone="error">{tr(seat.error.message)}</Alert>}
       {/* On a phone each person is a card, with the column's name beside each value; from 640 px it is a table. */}
       <div className="rounded-xl bg-white ring-1 ring-ink/5">
         <table className="block w-full text-left text-sm sm:table">
           <thead className="hidden bg-navy/5 text-navy sm:table-header-group">
             <tr>
-              <th className="px-4 py-2">Name</th>
-              <th className="px-4 py-2">Answer</th>
-              <th className="px-4 py-2">Hours</th>
-              <th className="px-4 py-2">Skills</th>
-              <th className="px-4 py-2">Seat</th>
+              <th className="px-4 py-2">{t('organise.rota.name')}</th>
+              <th className="px-4 py-2">{t('organise.rota.answer')}</th>
+              <th className="px-4 py-2">{t('organise.rota.hours')}</th>
+              <th className="px-4 py-2">{t('organise.rota.skills')}</th>
+              <th className="px-4 py-2">{t('organise.rota.seat')}</th>
             </tr>
           </thead>
           <tbody className="block sm:table-row-group">
@@ -50,32 +52,32 @@ export function ShiftTable({
               <tr key={s.userId} className="block border-t border-ink/5 py-2 first:border-t-0 sm:table-row sm:py-0">
                 <td className="block px-4 py-1 font-semibold sm:table-cell sm:py-2">{s.name}</td>
                 <td className="block px-4 py-1 sm:table-cell sm:py-2">
-                  <span className={phoneLabel}>Answer: </span>
-                  {s.coming ? 'Coming' : 'Not coming'}
+                  <span className={phoneLabel}>{t('organise.rota.answer')}: </span>
+                  {s.coming ? t('organise.rota.coming') : t('organise.rota.notComing')}
                 </td>
                 <td className="block px-4 py-1 sm:table-cell sm:py-2">
-                  <span className={phoneLabel}>Hours: </span>
-                  {s.coming ? formatTimeRange(s.startsAt, s.endsAt, timeZone) : '—'}
+                  <span className={phoneLabel}>{t('organise.rota.hours')}: </span>
+                  {s.coming ? formatTimeRange(s.startsAt, s.endsAt, timeZone, lang) : '—'}
                 </td>
                 <td className="block px-4 py-1 text-ink-soft sm:table-cell sm:py-2">
-                  <span className={phoneLabel}>Skills: </span>
+                  <span className={phoneLabel}>{t('organise.rota.skills')}: </span>
                   {Object.entries(s.skills)
-                    .map(([k, l]) => `${SKILL_LABELS[k as Skill] ?? k} ${l}`)
+                    .map(([k, l]) => `${t(`common.skill.${k}`)} ${l}`)
                     .join(', ') || '—'}
                 </td>
                 <td className="block px-4 py-1 sm:table-cell sm:py-2">
                   {s.coming && (
                     <label className="flex flex-col gap-1 sm:block">
-                      <span className={phoneLabel}>Seat</span>
+                      <span className={phoneLabel}>{t('organise.rota.seat')}</span>
                       <select
-                        aria-label={`Seat for ${s.name}`}
+                        aria-label={t('organise.rota.seatFor', { name: s.name })}
                         value={s.benchId ?? ''}
                         onChange={(e) =>
                           seat.mutate({ userId: s.userId, benchId: e.target.value ? Number(e.target.value) : null })
                         }
                         className="min-h-11 w-full rounded border border-ink/20 px-2 py-1 sm:w-auto"
                       >
-                        <option value="">Free to move</option>
+                        <option value="">{t('organise.rota.freeToMove')}</option>
                         {benches.map((b) => (
                           <option key={b.id} value={b.id}>
                             {b.name}

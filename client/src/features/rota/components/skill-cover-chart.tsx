@@ -1,27 +1,28 @@
 import type { Rota } from '../api/types';
-import { SKILL_LABELS, SKILLS } from '../../../../../shared/constants';
+import { SKILLS } from '../../../../../shared/constants';
 import { formatTime } from '../../../../../shared/format';
 import { Card } from '../../../components/ui/feedback';
+import { useLanguage, useT } from '../../../lib/i18n';
 
 /** Skills × slots: fixers present for the whole slot against items booked that need the skill. */
 export function SkillCoverChart({ rota, timeZone }: { rota: Rota; timeZone: string }) {
+  const t = useT();
+  const lang = useLanguage();
   const shown = SKILLS.filter(
     (s) => rota.coverage.some((c) => c.bySkill[s] > 0) || rota.slots.some((sl) => sl.demand[s] > 0),
   );
   return (
     <Card>
-      <h2 className="text-lg">Skills covered, slot by slot</h2>
-      <p className="text-sm text-ink-soft">
-        Each cell: fixers with the skill present for the whole slot / items booked that need it.
-      </p>
+      <h2 className="text-lg">{t('organise.rota.coverTitle')}</h2>
+      <p className="text-sm text-ink-soft">{t('organise.rota.coverLead')}</p>
       <div className="mt-3 overflow-x-auto">
-        <table className="text-center text-xs" aria-label="Skill cover by slot">
+        <table className="text-center text-xs" aria-label={t('organise.rota.coverTable')}>
           <thead>
             <tr>
-              <th className="sticky left-0 bg-white py-1 pl-0 pr-1 text-left sm:px-2">Skill</th>
+              <th className="sticky left-0 bg-white py-1 pl-0 pr-1 text-left sm:px-2">{t('organise.rota.skill')}</th>
               {rota.slots.map((s) => (
                 <th key={s.id} className="px-1 py-1 font-bold">
-                  {formatTime(s.startsAt, timeZone)}
+                  {formatTime(s.startsAt, timeZone, lang)}
                 </th>
               ))}
             </tr>
@@ -30,7 +31,7 @@ export function SkillCoverChart({ rota, timeZone }: { rota: Rota; timeZone: stri
             {shown.map((skill) => (
               <tr key={skill}>
                 <th className="sticky left-0 bg-white py-1 pl-0 pr-1 text-left sm:px-2 font-semibold">
-                  {SKILL_LABELS[skill]}
+                  {t(`common.skill.${skill}`)}
                 </th>
                 {rota.slots.map((s, i) => {
                   const have = rota.coverage[i].bySkill[skill];
@@ -39,7 +40,7 @@ export function SkillCoverChart({ rota, timeZone }: { rota: Rota; timeZone: stri
                     <td
                       key={s.id}
                       className={`h-9 min-w-10 border border-white px-0.5 font-bold sm:min-w-12 sm:px-1 ${coverTone(have, need)}`}
-                      title={`${have} fixer(s), ${need} item(s)`}
+                      title={t('organise.rota.cell', { have, need })}
                     >
                       {have}/{need}
                     </td>
@@ -48,7 +49,9 @@ export function SkillCoverChart({ rota, timeZone }: { rota: Rota; timeZone: stri
               </tr>
             ))}
             <tr>
-              <th className="sticky left-0 bg-white py-1 pl-0 pr-1 text-left sm:px-2">All fixers</th>
+              <th className="sticky left-0 bg-white py-1 pl-0 pr-1 text-left sm:px-2">
+                {t('organise.rota.allFixers')}
+              </th>
               {rota.coverage.map((c, i) => (
                 <td key={i} className="font-bold">
                   {c.fixers}
@@ -60,13 +63,13 @@ export function SkillCoverChart({ rota, timeZone }: { rota: Rota; timeZone: stri
       </div>
       <p className="mt-2 flex flex-wrap gap-3 text-xs text-ink-soft">
         <span>
-          <span className="inline-block size-3 rounded bg-sage-light align-middle" /> covered
+          <span className="inline-block size-3 rounded bg-sage-light align-middle" /> {t('organise.rota.keyCovered')}
         </span>
         <span>
-          <span className="inline-block size-3 rounded bg-copper-light align-middle" /> more items than fixers
+          <span className="inline-block size-3 rounded bg-copper-light align-middle" /> {t('organise.rota.keyShort')}
         </span>
         <span>
-          <span className="inline-block size-3 rounded bg-alert align-middle" /> items wait, nobody has the skill
+          <span className="inline-block size-3 rounded bg-alert align-middle" /> {t('organise.rota.keyNobody')}
         </span>
       </p>
     </Card>

@@ -1,10 +1,8 @@
 import { useEffect, useRef, useState } from 'react';
 import type { Board } from '../api/types';
-import { EQUIPMENT_LABELS, type Equipment } from '../../../../../shared/constants';
 import { BoardColumn } from './board-column';
 import { BoardItemCard } from './board-item-card';
-
-const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
+import { useT } from '../../../lib/i18n';
 
 /** Whether the element is wider than its box, kept up to date as the window or the board changes size. */
 function useOverflows() {
@@ -28,6 +26,7 @@ function useOverflows() {
  * screen the board scrolls inside its own box, says so above it, and takes the focus so arrow keys scroll it.
  */
 export function BenchColumns({ board }: { board: Board }) {
+  const t = useT();
   const eventId = board.event.id;
   const waiting = board.items.filter((i) => !i.placement);
   const { ref, overflows } = useOverflows();
@@ -37,33 +36,37 @@ export function BenchColumns({ board }: { board: Board }) {
       {overflows && (
         <p id="board-scroll-hint" className="mb-2 text-sm font-semibold text-navy">
           <span aria-hidden>⇆ </span>
-          {columns} columns are wider than this screen: scroll the board sideways to see every bench. From the keyboard,
-          tab to the board and use the arrow keys.
+          {t('organise.triage.columns.scrollHint', { columns })}
         </p>
       )}
       <div
         ref={ref}
         role="region"
-        aria-label="Triage board: waiting items and benches"
+        aria-label={t('organise.triage.columns.region')}
         aria-describedby={overflows ? 'board-scroll-hint' : undefined}
         tabIndex={overflows ? 0 : undefined}
         className="flex gap-4 overflow-x-auto rounded-xl pb-4"
       >
-        <BoardColumn title="Waiting" subtitle={plural(waiting.length, 'item')} tone="wait">
+        <BoardColumn
+          title={t('organise.triage.columns.waiting')}
+          subtitle={t('organise.triage.columns.items', { n: waiting.length })}
+          tone="wait"
+        >
           {waiting.length === 0 ? (
-            <p className="text-sm text-ink-soft">Every item has a place.</p>
+            <p className="text-sm text-ink-soft">{t('organise.triage.columns.allPlaced')}</p>
           ) : (
             waiting.map((i) => <BoardItemCard key={i.id} item={i} board={board} eventId={eventId} />)
           )}
         </BoardColumn>
         {board.benches.map((bench) => {
           const here = board.items.filter((i) => i.placement?.benchId === bench.id);
-          const kit = bench.equipment.map((e) => EQUIPMENT_LABELS[e as Equipment]).join(', ') || 'no kit';
+          const kit =
+            bench.equipment.map((e) => t(`organise.equipment.${e}`)).join(', ') || t('organise.triage.columns.noKit');
           return (
             <BoardColumn
               key={bench.id}
               title={bench.name}
-              subtitle={`${plural(bench.seats, 'seat')} · ${plural(here.length, 'item')} over the day · ${kit}`}
+              subtitle={t('organise.triage.columns.benchSubtitle', { seats: bench.seats, n: here.length, kit })}
             >
               {board.fixers
                 .filter((f) => here.some((i) => i.placement!.userId === f.userId))
@@ -71,7 +74,7 @@ export function BenchColumns({ board }: { board: Board }) {
                   <div key={f.userId} className="space-y-2">
                     <p className="text-sm font-extrabold text-navy">
                       {f.name}
-                      {f.benchId === bench.id ? ' · seated here' : ''}
+                      {f.benchId === bench.id ? ` · ${t('organise.triage.columns.seatedHere')}` : ''}
                     </p>
                     {here
                       .filter((i) => i.placement!.userId === f.userId)
@@ -80,7 +83,7 @@ export function BenchColumns({ board }: { board: Board }) {
                       ))}
                   </div>
                 ))}
-              {here.length === 0 && <p className="text-sm text-ink-soft">Free.</p>}
+              {here.length === 0 && <p className="text-sm text-ink-soft">{t('organise.triage.columns.free')}</p>}
             </BoardColumn>
           );
         })}

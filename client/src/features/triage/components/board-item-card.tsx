@@ -1,10 +1,8 @@
 import { useState } from 'react';
 import type { Board, BoardItem } from '../api/types';
-import { EQUIPMENT_LABELS, SKILL_LABELS, type Equipment, type Skill } from '../../../../../shared/constants';
 import { formatTime } from '../../../../../shared/format';
-import { WAITING_REASON_LABELS } from '../../../../../shared/triage/run-summary';
-import { fixerSkillPhrase, skillNeedPhrase } from '../../../../../shared/triage/skill-words';
 import { Button } from '../../../components/ui/button';
+import { useLanguage, useT } from '../../../lib/i18n';
 import { useLockItem } from '../api/lock-item';
 import { usePlaceItem } from '../api/place-item';
 import { useUnplaceItem } from '../api/unplace-item';
@@ -15,6 +13,8 @@ export function BoardItemCard({ item, board, eventId }: { item: BoardItem; board
   const lock = useLockItem(eventId, item.id);
   const unplace = useUnplaceItem(eventId, item.id);
   const error = place.error ?? lock.error ?? unplace.error;
+  const t = useT();
+  const lang = useLanguage();
   const [moving, setMoving] = useState(false);
   const [to, setTo] = useState({
     userId: item.placement?.userId ?? board.fixers[0]?.userId ?? 0,
@@ -22,9 +22,16 @@ export function BoardItemCard({ item, board, eventId }: { item: BoardItem; board
   });
   const tz = board.event.timeZone;
   const slot = board.slots.find((s) => s.id === item.slotId);
-  const skill = SKILL_LABELS[item.needs.skill as Skill] ?? item.needs.skill;
-  const standing = (f: Board['fixers'][number]) =>
-    `${f.name} — ${fixerSkillPhrase(skill, f.skills[item.needs.skill] ?? 0, item.needs.minLevel)}`;
+  const skill = t(`common.skill.${item.needs.skill}`);
+  const level = (n: number) => t(`organise.triage.level.${Math.max(0, Math.min(3, Math.round(n)))}`);
+  const need = item.needs.minLevel;
+  const fixerStanding = (has: number) =>
+    has <= 0
+      ? t('organise.triage.card.noSkillYet', { skill })
+      : has < need
+        ? t('organise.triage.card.belowNeed', { skill, level: level(has), need: level(need) })
+        : t('organise.triage.card.hasSkill', { skill, level: level(has) });
+  const standing = (f: Board['fixers'][number]) => `${f.name} — ${fixerStanding(f.skills[item.needs.skill] ?? 0)}`;
   const chosen = board.fixers.find((f) => f.userId === to.userId);
   return (
     <article
@@ -36,27 +43,35 @@ export function BoardItemCard({ item, board, eventId }: { item: BoardItem; board
           {item.brand || item.model ? ` — ${[item.brand, item.model].filter(Boolean).join(' ')}` : ''}
         </p>
         {item.placement?.locked && (
-          <span className="rounded bg-navy px-1.5 text-xs font-bold text-white" title="Locked: a re-run keeps it here">
-            locked
+          <span
+            className="rounded bg-navy px-1.5 text-xs font-bold text-white"
+            title={t('organise.triage.card.lockedHint')}
+          >
+            {t('organise.triage.card.locked')}
           </span>
         )}
       </div>
       <p className="text-ink-soft">{item.fault}</p>
       <p className="mt-1 text-xs">
-        {item.reference} · booked for {slot ? formatTime(slot.startsAt, tz) : '—'} · about {item.minutes} min
-        {item.placement && item.estimatedStart && <> · starts ≈ {formatTime(item.estimatedStart, tz)}</>}
+        {item.reference} ·{' '}
+        {t('organise.triage.card.bookedFor', { time: slot ? formatTime(slot.startsAt, tz, lang) : '—' })} ·{' '}
+        {t('organise.triage.card.about', { minutes: item.minutes })}
+        {item.placement && item.estimatedStart && (
+          <> · {t('organise.triage.card.starts', { time: formatTime(item.estimatedStart, tz, lang) })}</>
+        )}
       </p>
       <p className="text-xs text-ink-soft">
-        Needs {skillNeedPhrase(skill, item.needs.minLevel)}
+        {need >= 3
+          ? t('organise.triage.card.needsExpert', { skill })
+          : t('organise.triage.card.needs', { skill, level: level(need) })}
         {item.needs.equipment.length
-          ? `, ${item.needs.equipment.map((e) => EQUIPMENT_LABELS[e as Equipment]).join(', ')}`
+          ? `, ${item.needs.equipment.map((e) => t(`organise.equipment.${e}`)).join(', ')}`
           : ''}
-        {item.mains ? ' · mains' : ''}
+        {item.mains ? ` · ${t('organise.triage.card.mains')}` : ''}
       </p>
       {item.reason && (
         <p className="mt-1 rounded bg-copper-light px-2 py-1 text-xs">
-          <span className="font-bold">{WAITING_REASON_LABELS[item.reason.reason] ?? item.reason.reason}:</span>{' '}
-          {item.reason.detail}
+          <span className="font-bold">{t(`organise.triage.reason.${item.reason.reason}`)}:</span> {item.reason.detail}
         </p>
       )}
       {item.warnings.map((w) => (
@@ -68,7 +83,7 @@ export function BoardItemCard({ item, board, eventId }: { item: BoardItem; board
         <div className="mt-2 space-y-2" onKeyDown={(e) => e.key === 'Escape' && setMoving(false)}>
           <select
             autoFocus
-            aria-label="Fixer"
+            aria-label={t('organise.triage.card.fixer')}
             aria-describedby={`fixer-standing-${item.id}`}
             value={to.userId}
             onChange={(e) => setTo({ ...to, userId: Number(e.target.value) })}
@@ -85,7 +100,7 @@ export function BoardItemCard({ item, board, eventId }: { item: BoardItem; board
             {chosen ? standing(chosen) : ''}
           </p>
           <select
-            aria-label="Bench"
+            aria-label={t('organise.triage.card.bench')}
             value={to.benchId}
             onChange={(e) => setTo({ ...to, benchId: Number(e.target.value) })}
             className="block w-full rounded border border-ink/20 px-2 py-1"
@@ -102,10 +117,10 @@ export function BoardItemCard({ item, board, eventId }: { item: BoardItem; board
               busy={place.isPending}
               onClick={() => place.mutate({ ...to, locked: true }, { onSuccess: () => setMoving(false) })}
             >
-              Place and lock
+              {t('organise.triage.card.placeAndLock')}
             </Button>
             <Button variant="quiet" className="min-h-9 px-3 py-1" onClick={() => setMoving(false)}>
-              Cancel
+              {t('organise.triage.card.cancel')}
             </Button>
           </div>
         </div>
@@ -117,7 +132,7 @@ export function BoardItemCard({ item, board, eventId }: { item: BoardItem; board
             disabled={!board.fixers.length || !board.benches.length}
             onClick={() => setMoving(true)}
           >
-            Move…
+            {t('organise.triage.card.move')}
           </Button>
           {item.placement && (
             <Button
@@ -126,12 +141,12 @@ export function BoardItemCard({ item, board, eventId }: { item: BoardItem; board
               busy={lock.isPending}
               onClick={() => lock.mutate(!item.placement!.locked)}
             >
-              {item.placement.locked ? 'Unlock' : 'Lock'}
+              {item.placement.locked ? t('organise.triage.card.unlock') : t('organise.triage.card.lock')}
             </Button>
           )}
           {item.placement && (
             <Button variant="quiet" className="min-h-9 px-3 py-1 text-sm" onClick={() => unplace.mutate()}>
-              Take off
+              {t('organise.triage.card.takeOff')}
             </Button>
           )}
         </div>

@@ -1,10 +1,10 @@
 import type { ReactNode } from 'react';
 import { formatTime, formatTimeRange } from '../../../../../shared/format';
+import { useLanguage, useT } from '../../../lib/i18n';
 import { Card } from '../../../components/ui/feedback';
 import type { TriageRunDetail } from '../api/types';
 
 type Summary = NonNullable<TriageRunDetail['summary']>;
-const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
 
 /** A captioned table with a header row; cells are given row by row. */
 function Table({ caption, head, rows }: { caption: string; head: string[]; rows: ReactNode[][] }) {
@@ -45,34 +45,36 @@ function Table({ caption, head, rows }: { caption: string; head: string[]; rows:
 
 /** What went into a run (items, fixers, benches, the rules it kept) and what came out, in sentences and tables. */
 export function TriageRunSummary({ summary: s, timeZone: tz }: { summary: Summary; timeZone: string }) {
+  const t = useT();
+  const lang = useLanguage();
   const day = s.scope === 'day';
   return (
     <div className="space-y-6">
       <section aria-labelledby="run-result" className="space-y-3">
         <h2 id="run-result" className="text-xl">
-          What came out
+          {t('organise.triage.summary.out')}
         </h2>
         <p>
-          {s.placed.length === 0
-            ? 'No item was placed.'
-            : `${plural(s.placed.length, 'item')} placed with a fixer at a bench.`}{' '}
-          {s.waiting.length === 0
-            ? 'None was left waiting.'
-            : `${plural(s.waiting.length, 'item')} left waiting; the reason is given for each.`}
+          {t('organise.triage.summary.placed', { n: s.placed.length })}{' '}
+          {t('organise.triage.summary.waiting', { n: s.waiting.length })}
         </p>
         {s.placed.length > 0 && (
           <Table
-            caption="Who takes which item, and where"
-            head={['Item', 'Fixer', 'Bench']}
+            caption={t('organise.triage.summary.placedCaption')}
+            head={[
+              t('organise.triage.summary.item'),
+              t('organise.triage.summary.fixer'),
+              t('organise.triage.summary.bench'),
+            ]}
             rows={s.placed.map((p) => [p.item, p.fixer, p.bench])}
           />
         )}
         {s.waiting.length > 0 && (
           <>
-            <h3 className="text-base">Left waiting</h3>
+            <h3 className="text-base">{t('organise.triage.summary.leftWaiting')}</h3>
             <Table
-              caption="Items left waiting, and why"
-              head={['Item', 'Why it waits']}
+              caption={t('organise.triage.summary.waitingCaption')}
+              head={[t('organise.triage.summary.item'), t('organise.triage.summary.why')]}
               rows={s.waiting.map((w) => [
                 w.item,
                 <>
@@ -86,47 +88,64 @@ export function TriageRunSummary({ summary: s, timeZone: tz }: { summary: Summar
 
       <section aria-labelledby="run-input" className="space-y-3">
         <h2 id="run-input" className="text-xl">
-          What went in
+          {t('organise.triage.summary.in')}
         </h2>
         <p>
-          {plural(s.items.length, 'item')}, {plural(s.fixers.length, 'fixer')} and{' '}
-          {plural(s.benches.length, 'bench', 'benches')}.
+          {t('organise.triage.summary.counts', {
+            items: s.items.length,
+            fixers: s.fixers.length,
+            benches: s.benches.length,
+          })}
         </p>
         <Card className="p-4">
-          <h3 className="text-base">Rules the run kept</h3>
+          <h3 className="text-base">{t('organise.triage.summary.rules')}</h3>
           <ul className="mt-1 list-disc space-y-1 pl-5 text-sm">
             {s.rules.map((r) => (
               <li key={r}>{r}</li>
             ))}
           </ul>
         </Card>
-        <h3 className="text-base">Items</h3>
+        <h3 className="text-base">{t('organise.triage.summary.items')}</h3>
         <Table
-          caption="Items the run had to place"
-          head={day ? ['Item', 'Booked for', 'Needs', 'Bench kit'] : ['Item', 'Needs', 'Bench kit']}
+          caption={t('organise.triage.summary.itemsCaption')}
+          head={[
+            t('organise.triage.summary.item'),
+            ...(day ? [t('organise.triage.summary.bookedFor')] : []),
+            t('organise.triage.summary.needs'),
+            t('organise.triage.summary.benchKit'),
+          ]}
           rows={s.items.map((i) => [
             i.label,
-            ...(day ? [i.slotStartsAt ? formatTime(i.slotStartsAt, tz) : '—'] : []),
+            ...(day ? [i.slotStartsAt ? formatTime(i.slotStartsAt, tz, lang) : '—'] : []),
             i.needs,
-            i.kit || 'none',
+            i.kit || t('organise.triage.summary.none'),
           ])}
         />
-        <h3 className="text-base">Fixers</h3>
+        <h3 className="text-base">{t('organise.triage.summary.fixers')}</h3>
         <Table
-          caption="Fixers the run could use"
-          head={day ? ['Fixer', 'Skills', 'Hours', 'Seat'] : ['Fixer', 'Skills', 'Seat']}
+          caption={t('organise.triage.summary.fixersCaption')}
+          head={[
+            t('organise.triage.summary.fixer'),
+            t('organise.triage.summary.skills'),
+            ...(day ? [t('organise.triage.summary.hours')] : []),
+            t('organise.triage.summary.seat'),
+          ]}
           rows={s.fixers.map((f) => [
             f.name,
             f.skills,
-            ...(day ? [f.from && f.to ? formatTimeRange(f.from, f.to, tz) : '—'] : []),
-            f.seat ?? 'any bench',
+            ...(day ? [f.from && f.to ? formatTimeRange(f.from, f.to, tz, lang) : '—'] : []),
+            f.seat ?? t('organise.triage.summary.anyBench'),
           ])}
         />
-        <h3 className="text-base">Benches</h3>
+        <h3 className="text-base">{t('organise.triage.summary.benches')}</h3>
         <Table
-          caption="Benches the run could use"
-          head={['Bench', 'Seats', 'Kit']}
-          rows={s.benches.map((b) => [b.name, b.seats, b.kit || 'none'])}
+          caption={t('organise.triage.summary.benchesCaption')}
+          head={[
+            t('organise.triage.summary.bench'),
+            t('organise.triage.summary.seats'),
+            t('organise.triage.summary.kit'),
+          ]}
+          rows={s.benches.map((b) => [b.name, b.seats, b.kit || t('organise.triage.summary.none')])}
         />
       </section>
     </div>

@@ -46,7 +46,9 @@ export const membershipInGroup = async (db: DbOrTx, groupId: number, membershipI
         role: memberships.role,
         email: users.email,
         name: users.name,
+        language: users.language,
         groupName: repairGroups.name,
+        groupLanguage: repairGroups.defaultLanguage,
       })
       .from(memberships)
       .innerJoin(users, eq(users.id, memberships.userId))

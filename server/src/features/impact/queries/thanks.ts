@@ -57,7 +57,7 @@ export const visitorItems = (tx: DbOrTx, eventId: number) =>
 /** The volunteers who said they were coming. */
 export const volunteersWhoCame = (tx: DbOrTx, eventId: number) =>
   tx
-    .select({ email: users.email, name: users.name })
+    .select({ email: users.email, name: users.name, language: users.language })
     .from(shifts)
     .innerJoin(users, eq(users.id, shifts.userId))
     .where(and(eq(shifts.eventId, eventId), eq(shifts.coming, true)));
