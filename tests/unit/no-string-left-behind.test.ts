@@ -69,8 +69,6 @@ const PENDING = new Set([
   'client/src/routes/rota/rota.tsx',
   'client/src/routes/skills/my-skills.tsx',
   'client/src/routes/skills/skills-matrix.tsx',
-  'client/src/routes/toolkit/knowledge.tsx',
-  'client/src/routes/toolkit/salvage.tsx',
   'client/src/routes/triage/board.tsx',
   'client/src/routes/triage/run.tsx',
 ]);
