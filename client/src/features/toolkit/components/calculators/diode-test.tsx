@@ -8,7 +8,8 @@ import {
 } from '../../../../../../shared/calculators/transistors';
 import { TextField } from '../../../../components/ui/field';
 import { attempt, Big, ExampleButton, Examples, OlButton, Prompt, Result } from './ui';
-import { useT } from '../../../../lib/i18n';
+import { useLanguage, useT } from '../../../../lib/i18n';
+import { computedText } from '../computed';
 
 // ——— diode test ———
 
@@ -18,6 +19,7 @@ const SHORT_BC: Record<ProbePair, string> = { BE: '0.66', EB: 'OL', BC: '0.002',
 
 export function DiodeTest() {
   const t = useT();
+  const lang = useLanguage();
   const [r, setR] = useState(EMPTY_READINGS);
   const lead = (l: string) => t(`bench.calc.diode.${l}`);
   const parsed = PROBE_PAIRS.map((p) => [p, parseReading(r[p])] as const);
@@ -59,7 +61,7 @@ export function DiodeTest() {
         {!result ? (
           <Prompt>{t('bench.calc.diode.prompt')}</Prompt>
         ) : !result.ok ? (
-          <p className="font-semibold">{result.error}</p>
+          <p className="font-semibold">{computedText(result.error, lang)}</p>
         ) : (
           <>
             <Big>
@@ -68,7 +70,7 @@ export function DiodeTest() {
             </Big>
             <ul className="mt-1 list-disc space-y-1 pl-5 text-sm">
               {result.value.reasons.map((x) => (
-                <li key={x}>{x}</li>
+                <li key={x}>{computedText(x, lang)}</li>
               ))}
             </ul>
           </>

@@ -18,6 +18,7 @@ import {
   useFormats,
 } from './ui';
 import { useT } from '../../../../lib/i18n';
+import { computedText } from '../computed';
 
 // ——— measured resistance ———
 
@@ -26,7 +27,7 @@ const verdictKey = (v: MeasureVerdict) => `bench.calc.measure.${v}`;
 
 export function Measure() {
   const t = useT();
-  const { fmt, ohms: formatOhms } = useFormats();
+  const { lang, fmt, ohms: formatOhms } = useFormats();
   const [f, setF] = useState({ reading: '', leads: '', nominal: '', tolerance: '5', uncertainty: '' });
   const reading = parseReading(f.reading);
   const leads = num(f.leads);
@@ -112,7 +113,7 @@ export function Measure() {
         {!result ? (
           <Prompt>{t(invalid ? 'bench.calc.fieldNotNumber' : 'bench.calc.measure.prompt')}</Prompt>
         ) : !result.ok ? (
-          <p className="font-semibold">{result.error}</p>
+          <p className="font-semibold">{computedText(result.error, lang)}</p>
         ) : (
           <>
             <Big>{t(verdictKey(result.value.verdict))}</Big>
@@ -126,7 +127,7 @@ export function Measure() {
                 })}
               </p>
             )}
-            <p className="mt-1 text-sm">{result.value.message}</p>
+            <p className="mt-1 text-sm">{computedText(result.value.message, lang)}</p>
           </>
         )}
       </Result>

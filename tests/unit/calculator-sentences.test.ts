@@ -1,0 +1,53 @@
+/** Every sentence the diode test and the measured-resistance check can write is found by computedText (else it would stay English). */
+import { describe, expect, it, vi } from 'vitest';
+vi.mock('../../client/src/lib/i18n', () => ({ tr: (k: string, v?: object) => `${k} ${JSON.stringify(v ?? {})}` }));
+import { computedText } from '../../client/src/features/toolkit/components/computed';
+import { interpretDiodeTest, type DiodeReadings } from '../../shared/calculators/transistors';
+import { judgeResistance } from '../../shared/calculators/measure';
+
+const cases: DiodeReadings[] = [
+  { BE: 0.65, EB: 'OL', BC: 0.62, CB: 'OL', CE: 'OL', EC: 'OL' },
+  { BE: 0.66, EB: 'OL', BC: 0.002, CB: 0.003, CE: 0.66, EC: 'OL' },
+  { BE: 0.001, EB: 0.001, BC: 0.62, CB: 'OL', CE: 'OL', EC: 'OL' },
+  { BE: 0.5, EB: 0.5, BC: 0.62, CB: 'OL', CE: 'OL', EC: 'OL' },
+  { BE: 'OL', EB: 'OL', BC: 0.62, CB: 'OL', CE: 'OL', EC: 'OL' },
+  { BE: 0.65, EB: 'OL', BC: 'OL', CB: 0.62, CE: 'OL', EC: 'OL' },
+  { BE: 0.65, EB: 'OL', BC: 0.62, CB: 'OL', CE: 'OL', EC: 0.5 },
+  { BE: 0.65, EB: 'OL', BC: 0.62, CB: 'OL', CE: 0.5, EC: 'OL' },
+  { BE: 0.2, EB: 'OL', BC: 1.3, CB: 'OL', CE: 'OL', EC: 'OL' },
+  { BE: 0.6, EB: 'OL', BC: 0.68, CB: 'OL', CE: 'OL', EC: 'OL' },
+];
+describe("the shared calculators' sentences in other languages", () => {
+  it('every diode sentence has a key', () => {
+    for (const c of cases)
+      for (const r of interpretDiodeTest(c).reasons) {
+        const out = computedText(r, 'de');
+        expect(out).not.toBe(r);
+      }
+    for (const bad of [
+      { ...cases[0], BE: -1 },
+      { ...cases[0], BE: 650 },
+    ]) {
+      try {
+        interpretDiodeTest(bad as DiodeReadings);
+      } catch (e) {
+        const out = computedText((e as Error).message, 'de');
+        expect(out).not.toBe((e as Error).message);
+      }
+    }
+  });
+  it('every measure sentence has a key', () => {
+    for (const input of [
+      { reading: 'OL' as const, nominalOhm: 1, tolerancePct: 5 },
+      { reading: 1.2, leadsOhm: 0.1, nominalOhm: 1, tolerancePct: 5, uncertaintyOhm: 0.1 },
+      { reading: 1.05, nominalOhm: 1, tolerancePct: 5 },
+      { reading: 1.01, nominalOhm: 1, tolerancePct: 5 },
+      { reading: 2, nominalOhm: 1, tolerancePct: 5 },
+      { reading: 0.1, leadsOhm: 0.1, nominalOhm: 1, tolerancePct: 5 },
+    ]) {
+      const m = judgeResistance(input).message;
+      const out = computedText(m, 'fr');
+      expect(out).not.toBe(m);
+    }
+  });
+});
