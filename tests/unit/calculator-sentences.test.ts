@@ -2,7 +2,12 @@
 import { describe, expect, it, vi } from 'vitest';
 vi.mock('../../client/src/lib/i18n', () => ({ tr: (k: string, v?: object) => `${k} ${JSON.stringify(v ?? {})}` }));
 import { computedText } from '../../client/src/features/toolkit/components/computed';
-import { interpretDiodeTest, type DiodeReadings } from '../../shared/calculators/transistors';
+import {
+  checkSubstitution,
+  interpretDiodeTest,
+  type DiodeReadings,
+  type TransistorSpec,
+} from '../../shared/calculators/transistors';
 import { judgeResistance } from '../../shared/calculators/measure';
 
 const cases: DiodeReadings[] = [
@@ -48,6 +53,62 @@ describe("the shared calculators' sentences in other languages", () => {
       const m = judgeResistance(input).message;
       const out = computedText(m, 'fr');
       expect(out).not.toBe(m);
+    }
+  });
+  it('every sentence of the substitute check has a key', () => {
+    const base: TransistorSpec = { type: 'NPN', vMaxV: 400, iMaxA: 4, ptotW: 75, package: 'TO-220', pinout: 'BCE' };
+    const pairs: [TransistorSpec, TransistorSpec][] = [
+      [base, { ...base, vMaxV: 450 }],
+      [base, { ...base, type: 'PNP' }],
+      [base, { ...base, type: 'N-MOSFET', pinout: 'GDS' }],
+      [base, { ...base, vMaxV: 300, iMaxA: 2, ptotW: 40 }],
+      [base, { ...base, package: 'TO-247', pinout: 'ECB' }],
+      [base, { ...base, package: 'TO-126', pinout: undefined }],
+      [base, { ...base, package: 'TO-220F' }],
+      [{ ...base, package: 'TO-220F' }, base],
+      [base, { ...base, package: 'SOT-223' }],
+      [base, { ...base, package: 'XYZ-9' }],
+      [
+        { ...base, hfeMin: 20, ftMHz: 10, fallTimeNs: 100 },
+        { ...base, hfeMin: 10, ftMHz: 4, fallTimeNs: 300 },
+      ],
+      [
+        { ...base, hfeMin: 10, ftMHz: 4, fallTimeNs: 300 },
+        { ...base, hfeMin: 20, ftMHz: 10, fallTimeNs: 100 },
+      ],
+      [
+        { ...base, type: 'N-MOSFET', pinout: 'GDS', vgsThMaxV: 2 },
+        { ...base, type: 'N-MOSFET', pinout: 'GDS', vgsThMaxV: 4 },
+      ],
+      [
+        { ...base, type: 'N-MOSFET', pinout: 'GDS', vgsThMaxV: 4 },
+        { ...base, type: 'N-MOSFET', pinout: 'GDS', vgsThMaxV: 2 },
+      ],
+    ];
+    let checked = 0;
+    for (const [o, c] of pairs) {
+      const r = checkSubstitution(o, c);
+      for (const line of [...r.refusals, ...r.warnings, ...r.passed])
+        if (!/^(Vceo|Ic|Ptot|Vds|Id|fT) [\d.]+ \w+ ≥/.test(line)) {
+          checked++;
+          expect(computedText(line, 'nl')).not.toBe(line);
+        }
+    }
+    expect(checked).toBeGreaterThan(20);
+    for (const bad of [
+      { ...base, vMaxV: 0 },
+      { ...base, hfeMin: -1 },
+      { ...base, package: ' ' },
+      { ...base, pinout: 'XY' },
+    ]) {
+      let message = '';
+      try {
+        checkSubstitution(bad, base);
+      } catch (e) {
+        message = (e as Error).message;
+      }
+      expect(message).not.toBe('');
+      expect(computedText(message, 'fr')).not.toBe(message);
     }
   });
 });

@@ -3,10 +3,10 @@ import { tr } from '../../../lib/i18n';
 import { decimalsIn } from './numbers';
 
 /**
- * The English sentences the shared calculators write (shared/calculators/measure.ts and the diode test in
- * transistors.ts), each with its catalog key: a sentence is found by its words, its {placeholders} give the figures
+ * The English sentences the shared calculators write (shared/calculators/measure.ts, and the diode test and the
+ * substitute check in transistors.ts), each with its catalog key: a sentence is found by its words, its {placeholders} give the figures
  * back, and the reader's language puts them in its own place with its own decimal sign. A sentence not listed stays
- * in English. Placeholders named in JUNCTIONS are junction names, said in the reader's language too.
+ * in English. Junction names and the words in TERMS are said in the reader's language too.
  */
 const RULES: [string, string][] = [
   // diode test
@@ -84,6 +84,65 @@ const RULES: [string, string][] = [
   ],
   ['The tolerance is a percentage above 0 and below 100.', 'bench.calc.m.e.tolerance'],
   ['The meter uncertainty must be zero or more ohms.', 'bench.calc.m.e.uncertainty'],
+  // transistor substitute
+  ['Same type ({t}).', 'bench.calc.t.sameType'],
+  [
+    '{a1} {cand} cannot replace {a2} {orig}: a MOSFET is driven by gate voltage, a bipolar transistor by base current.',
+    'bench.calc.t.mosfetBipolar',
+  ],
+  ['Opposite polarity: {a1} {cand} cannot replace {a2} {orig}.', 'bench.calc.t.polarity'],
+  ["{name} {c} {unit} is below the original's {o} {unit2}.", 'bench.calc.t.below'],
+  ['Same package ({p}).', 'bench.calc.t.samePackage'],
+  [
+    'Packages {a} and {b} cannot be compared here: check size, mounting and pin-out against both datasheets.',
+    'bench.calc.t.unknownPackages',
+  ],
+  ['A {mc} {pc} does not fit the board made for a {mo} {po}.', 'bench.calc.t.mount'],
+  [
+    'Larger package ({pc} for {po}): check it fits the space and the heatsink, that the mounting hole lines up and the leads reach, and check the pin-out — it often differs between packages.',
+    'bench.calc.t.larger',
+  ],
+  [
+    'Smaller package ({pc} for {po}): it sheds heat through a smaller face; check it sits flat on the heatsink and the clamp or screw holds it, and check the pin-out.',
+    'bench.calc.t.smaller',
+  ],
+  [
+    'Different package of similar size ({pc} for {po}): check the mounting hole, the heatsink contact and the pin-out.',
+    'bench.calc.t.similar',
+  ],
+  [
+    "The {pc}'s tab or case is connected to the {lead}, the original's was not: if it touches a heatsink or the chassis, fit an insulating pad and bush and check the insulation.",
+    'bench.calc.t.liveTab',
+  ],
+  ['Pin-out not compared: check it on both datasheets before fitting.', 'bench.calc.t.pinoutUnknown'],
+  ['Same pin-out ({p}).', 'bench.calc.t.samePinout'],
+  [
+    'Different pin-out ({pc} for {po}): the leads must be re-formed or crossed — mark each one, keep them apart, and check against both datasheets before power goes on.',
+    'bench.calc.t.differentPinout',
+  ],
+  ['Gain hFE {c} ≥ {o}.', 'bench.calc.t.gainOk'],
+  [
+    'Lower gain (hFE {c} for {o}): it may not switch fully on with the same base drive and would then run hot.',
+    'bench.calc.t.gainLow',
+  ],
+  [
+    'Slower part (fT {c} MHz for {o} MHz): in a switching or high-frequency stage it can run hot or fail.',
+    'bench.calc.t.slower',
+  ],
+  ['Gate threshold {c} V ≤ {o} V.', 'bench.calc.t.gateOk'],
+  [
+    'Higher gate threshold ({c} V for {o} V): the same gate drive may not turn it fully on; check the drive voltage.',
+    'bench.calc.t.gateHigh',
+  ],
+  ['Fall time {c} ns ≤ {o} ns.', 'bench.calc.t.fallOk'],
+  [
+    'Slower switching (fall time {c} ns for {o} ns): in a switch-mode supply it runs hotter and may fail.',
+    'bench.calc.t.fallSlow',
+  ],
+  ['The {which} {what}, when given, must be a number above 0.', 'bench.calc.t.e.optional'],
+  ['The {which} {what} must be a number above 0.', 'bench.calc.t.e.number'],
+  ['Give the {which} package, e.g. TO-220.', 'bench.calc.t.e.package'],
+  ['The {which} pin-out uses the letters {letters}, e.g. {ex}.', 'bench.calc.t.e.pinout'],
 ];
 
 const JUNCTIONS: Record<string, string> = {
@@ -93,6 +152,30 @@ const JUNCTIONS: Record<string, string> = {
   'Base–emitter': 'be',
   'Base–collector': 'bc',
 };
+/** Words the transistor check puts into its sentences, said in the reader's language. */
+const TERMS: Record<string, string> = {
+  'surface-mount': 'smd',
+  'through-hole': 'tht',
+  collector: 'collector',
+  drain: 'drain',
+  original: 'original',
+  replacement: 'replacement',
+  'voltage rating': 'voltage',
+  'current rating': 'current',
+  'power rating': 'power',
+  gain: 'gain',
+  'transition frequency': 'ft',
+  'gate threshold': 'vgs',
+  'fall time': 'fall',
+  'B, C and E': 'bce',
+  'G, D and S': 'gds',
+};
+const valueIn = (name: string, v: string) =>
+  name === 'pair' && v in JUNCTIONS
+    ? tr(`bench.calc.junction.${JUNCTIONS[v]}`)
+    : name !== 'name' && Object.hasOwn(TERMS, v)
+      ? tr(`bench.calc.term.${TERMS[v]}`)
+      : v;
 
 const escape = (s: string) => s.replace(/[.*+?^$()|[\]\\]/g, '\\$&');
 const COMPILED = RULES.map(([en, key]) => ({
@@ -107,12 +190,7 @@ export function computedText(text: string, lang: Language): string {
   for (const { key, names, re } of COMPILED) {
     const m = re.exec(text);
     if (!m) continue;
-    const values = Object.fromEntries(
-      names.map((n, i) => [
-        n,
-        n === 'pair' && m[i + 1] in JUNCTIONS ? tr(`bench.calc.junction.${JUNCTIONS[m[i + 1]]}`) : m[i + 1],
-      ]),
-    );
+    const values = Object.fromEntries(names.map((n, i) => [n, valueIn(n, m[i + 1])]));
     return decimalsIn(tr(key, values), lang);
   }
   return text;

@@ -8,7 +8,8 @@ import {
 } from '../../../../../../shared/calculators/transistors';
 import { SelectField, TextField } from '../../../../components/ui/field';
 import { attempt, bad, Big, ExampleButton, Examples, num, Prompt, Result } from './ui';
-import { useT } from '../../../../lib/i18n';
+import { useLanguage, useT } from '../../../../lib/i18n';
+import { computedText } from '../computed';
 
 /** Package names and pin-outs are the datasheets' own, the same in every language. */
 const TO_220 = 'TO-220';
@@ -135,6 +136,7 @@ const REF_CANDIDATE: SpecDraft = { ...EMPTY_SPEC, v: '450', i: '5', p: '80', pkg
 
 export function Transistor() {
   const t = useT();
+  const lang = useLanguage();
   const [original, setOriginal] = useState<SpecDraft>(EMPTY_SPEC);
   const [candidate, setCandidate] = useState<SpecDraft>(EMPTY_SPEC);
   const packagesId = useId();
@@ -172,7 +174,7 @@ export function Transistor() {
         {!result ? (
           <Prompt>{t('bench.calc.tr.prompt')}</Prompt>
         ) : !result.ok ? (
-          <p className="font-semibold">{result.error}</p>
+          <p className="font-semibold">{computedText(result.error, lang)}</p>
         ) : (
           <>
             <Big>
@@ -185,20 +187,20 @@ export function Transistor() {
             {result.value.refusals.length > 0 && (
               <ul className="mt-1 list-disc space-y-1 pl-5 font-semibold">
                 {result.value.refusals.map((r) => (
-                  <li key={r}>{r}</li>
+                  <li key={r}>{computedText(r, lang)}</li>
                 ))}
               </ul>
             )}
             {result.value.warnings.length > 0 && (
               <ul className="mt-1 list-disc space-y-1 pl-5 text-ink">
                 {result.value.warnings.map((w) => (
-                  <li key={w}>{w}</li>
+                  <li key={w}>{computedText(w, lang)}</li>
                 ))}
               </ul>
             )}
             {result.value.passed.length > 0 && (
               <p className="mt-2 text-sm text-ink-soft">
-                {t('bench.calc.tr.passed', { list: result.value.passed.join(' ') })}
+                {t('bench.calc.tr.passed', { list: result.value.passed.map((x) => computedText(x, lang)).join(' ') })}
               </p>
             )}
             <p className="mt-1 text-sm text-ink-soft">{t('bench.calc.tr.note')}</p>
