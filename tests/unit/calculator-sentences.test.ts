@@ -9,6 +9,7 @@ import {
   type TransistorSpec,
 } from '../../shared/calculators/transistors';
 import { judgeResistance } from '../../shared/calculators/measure';
+import { judgeSubstitute, type Needed } from '../../shared/salvage/match';
 
 const cases: DiodeReadings[] = [
   { BE: 0.65, EB: 'OL', BC: 0.62, CB: 'OL', CE: 'OL', EC: 'OL' },
@@ -110,5 +111,46 @@ describe("the shared calculators' sentences in other languages", () => {
       expect(message).not.toBe('');
       expect(computedText(message, 'fr')).not.toBe(message);
     }
+  });
+  it('every sentence of the salvage match has a key', () => {
+    const part = (type: Needed['type'], ratings: Needed['ratings'], pkg?: string): Needed => ({
+      type,
+      ratings,
+      package: pkg,
+    });
+    const pairs: [Needed, Needed][] = [
+      [part('resistor', {}), part('capacitor', {})],
+      [part('bipolar-transistor', {}), part('mosfet', {})],
+      [part('resistor', { resistanceOhm: 100, powerW: 1 }), part('resistor', { resistanceOhm: 220, powerW: 0.25 })],
+      [part('resistor', { resistanceOhm: 100, powerW: 1 }), part('resistor', {})],
+      [
+        part('capacitor', { capacitanceF: 1e-4, voltageV: 400 }),
+        part('capacitor', { capacitanceF: 1e-5, voltageV: 200 }),
+      ],
+      [part('fuse', {}), part('fuse', { currentA: 3 })],
+      [part('fuse', { currentA: 3 }), part('fuse', {})],
+      [part('fuse', { currentA: 3 }), part('fuse', { currentA: 13 })],
+      [part('fuse', { currentA: 13 }), part('fuse', { currentA: 3 })],
+      [part('thermal-cutout', { temperatureC: 150 }), part('thermal-cutout', { temperatureC: 120 })],
+      [part('power-supply', { voltageV: 12 }), part('power-supply', { voltageV: 9 })],
+      [part('power-supply', { voltageV: 12 }), part('power-supply', {})],
+      [part('switch', { voltageV: 250 }, 'TO-220'), part('switch', {}, 'TO-126')],
+      [part('bipolar-transistor', {}), part('bipolar-transistor', { polarity: 'NPN', voltageV: 400, currentA: 4 })],
+      [part('bipolar-transistor', { polarity: 'NPN', voltageV: 400, currentA: 4 }), part('bipolar-transistor', {})],
+      [
+        part('bipolar-transistor', { polarity: 'NPN', voltageV: 400, currentA: 4 }, 'TO-220'),
+        part('bipolar-transistor', { polarity: 'NPN', voltageV: 450, currentA: 5 }, 'TO-220'),
+      ],
+    ];
+    let checked = 0;
+    for (const [n, c] of pairs) {
+      const v = judgeSubstitute(n, c);
+      for (const line of [...v.reasons, ...v.warnings])
+        if (!/^(Vceo|Ic|Ptot|Vds|Id|fT) [\d.]+ \w+ ≥/.test(line)) {
+          checked++;
+          expect(computedText(line, 'de'), line).not.toBe(line);
+        }
+    }
+    expect(checked).toBeGreaterThan(15);
   });
 });

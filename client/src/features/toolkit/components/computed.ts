@@ -1,10 +1,11 @@
 import type { Language } from '../../../../../shared/i18n/languages';
+import { PART_TYPES } from '../../../../../shared/salvage/constants';
 import { tr } from '../../../lib/i18n';
 import { decimalsIn } from './numbers';
 
 /**
  * The English sentences the shared calculators write (shared/calculators/measure.ts, and the diode test and the
- * substitute check in transistors.ts), each with its catalog key: a sentence is found by its words, its {placeholders} give the figures
+ * substitute check in transistors.ts; the salvage match in shared/salvage/match.ts), each with its catalog key: a sentence is found by its words, its {placeholders} give the figures
  * back, and the reader's language puts them in its own place with its own decimal sign. A sentence not listed stays
  * in English. Junction names and the words in TERMS are said in the reader's language too.
  */
@@ -143,6 +144,32 @@ const RULES: [string, string][] = [
   ['The {which} {what} must be a number above 0.', 'bench.calc.t.e.number'],
   ['Give the {which} package, e.g. TO-220.', 'bench.calc.t.e.package'],
   ['The {which} pin-out uses the letters {letters}, e.g. {ex}.', 'bench.calc.t.e.pinout'],
+  // a salvaged part judged as a substitute (shared/salvage/match.ts), on the item page
+  ['Give the polarity, voltage and current needed to check a substitute.', 'bench.tool.sub.giveNeeded'],
+  [
+    'This part’s ratings are not all recorded: look up its datasheet before fitting it.',
+    'bench.tool.sub.notAllRecorded',
+  ],
+  ['The power rating is not recorded on both: check it on the datasheet.', 'bench.tool.sub.powerUnknown'],
+  ['It is a {cand}, not a {need}.', 'bench.tool.sub.otherKind'],
+  ['Its {what} is not recorded; check it on the part.', 'bench.tool.sub.notRecorded'],
+  ['Its {what} of {c} {unit} is below the {n} {unit2} needed.', 'bench.tool.sub.below'],
+  ['Its value of {c} Ω is not within ±{tol} % of {n} Ω.', 'bench.tool.sub.valueOff'],
+  ['Its value is unknown and is not within ±{tol} % of {n} Ω.', 'bench.tool.sub.valueUnknown'],
+  ['Its capacitance is not within ±20 % of the one needed.', 'bench.tool.sub.capacitance'],
+  [
+    'Give the current rating of the fuse needed: a fuse is replaced only by one of the same rating.',
+    'bench.tool.sub.fuseGive',
+  ],
+  [
+    'Its current rating is not recorded: a fuse is replaced only by one of the same rating.',
+    'bench.tool.sub.fuseUnknown',
+  ],
+  ['A {c} A fuse would not protect what a {n} A fuse protects.', 'bench.tool.sub.fuseHigher'],
+  ['A {c} A fuse is not the {n} A needed: it would blow in normal use.', 'bench.tool.sub.fuseLower'],
+  ['A cut-out must trip at the same temperature ({t} °C); never fit a different one.', 'bench.tool.sub.cutout'],
+  ['Its output of {c} V is not the {n} V needed.', 'bench.tool.sub.output'],
+  ['It comes in {c}, not {n}: check that it fits and how it is mounted.', 'bench.tool.sub.package'],
 ];
 
 const JUNCTIONS: Record<string, string> = {
@@ -169,13 +196,18 @@ const TERMS: Record<string, string> = {
   'fall time': 'fall',
   'B, C and E': 'bce',
   'G, D and S': 'gds',
+  unknown: 'unknown',
 };
+/** The kinds of part as match.ts writes them ('bipolar transistor'), by their keys. */
+const PART_KINDS = new Set<string>(PART_TYPES);
 const valueIn = (name: string, v: string) =>
-  name === 'pair' && v in JUNCTIONS
-    ? tr(`bench.calc.junction.${JUNCTIONS[v]}`)
-    : name !== 'name' && Object.hasOwn(TERMS, v)
-      ? tr(`bench.calc.term.${TERMS[v]}`)
-      : v;
+  (name === 'cand' || name === 'need') && PART_KINDS.has(v.replace(' ', '-'))
+    ? tr(`bench.tool.part.${v.replace(' ', '-')}`)
+    : name === 'pair' && v in JUNCTIONS
+      ? tr(`bench.calc.junction.${JUNCTIONS[v]}`)
+      : name !== 'name' && Object.hasOwn(TERMS, v)
+        ? tr(`bench.calc.term.${TERMS[v]}`)
+        : v;
 
 const escape = (s: string) => s.replace(/[.*+?^$()|[\]\\]/g, '\\$&');
 const COMPILED = RULES.map(([en, key]) => ({

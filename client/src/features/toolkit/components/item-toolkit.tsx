@@ -13,6 +13,7 @@ import { useSubstitutes } from '../api/get-substitutes';
 import { useTakePart } from '../api/take-part';
 import { useLanguage, useT } from '../../../lib/i18n';
 import { AddPartForm } from './add-part-form';
+import { computedText } from './computed';
 import { KnowledgeCard } from './knowledge-card';
 import { parseRatings, RatingFields, ratingsText, type RatingsDraft } from './ratings';
 
@@ -211,7 +212,7 @@ export function SalvageForItem({ item, onChanged }: { item: ToolkitItem; onChang
                 {[...v.reasons, ...v.warnings].length > 0 && (
                   <ul className="list-disc pl-5 text-sm">
                     {[...v.reasons, ...v.warnings].map((r) => (
-                      <li key={r}>{r}</li>
+                      <li key={r}>{computedText(r, lang)}</li>
                     ))}
                   </ul>
                 )}
