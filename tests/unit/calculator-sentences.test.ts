@@ -10,6 +10,11 @@ import {
 } from '../../shared/calculators/transistors';
 import { judgeResistance } from '../../shared/calculators/measure';
 import { judgeSubstitute, type Needed } from '../../shared/salvage/match';
+import { decodeBands, decodePrintedCode } from '../../shared/calculators/resistors';
+import { nearestStandard } from '../../shared/calculators/e-series';
+import { rectifiedPeak } from '../../shared/calculators/mains';
+import { dischargeAdvice } from '../../shared/calculators/capacitors';
+import { protectiveConductorLimitOhm } from '../../shared/safety/limits';
 
 const cases: DiodeReadings[] = [
   { BE: 0.65, EB: 'OL', BC: 0.62, CB: 'OL', CE: 'OL', EC: 'OL' },
@@ -152,5 +157,29 @@ describe("the shared calculators' sentences in other languages", () => {
         }
     }
     expect(checked).toBeGreaterThan(15);
+  });
+  it('every note and refusal of the other calculators has a key', () => {
+    const thrown = (fn: () => unknown) => {
+      try {
+        fn();
+      } catch (e) {
+        return (e as Error).message;
+      }
+      throw new Error('did not throw');
+    };
+    const lines = [
+      ...['000', '103', '1002', '47K', '100K', '1001J'].flatMap((c) => decodePrintedCode(c).notes),
+      thrown(() => decodePrintedCode('12Q')),
+      thrown(() => decodePrintedCode('hello')),
+      thrown(() => decodeBands(['black', 'red', 'red', 'gold'])),
+      thrown(() => nearestStandard(0, 'E24')),
+      thrown(() => rectifiedPeak(500)),
+      thrown(() => dischargeAdvice({ voltageV: 300, capacitanceF: 0 })),
+      thrown(() => dischargeAdvice({ voltageV: -1, capacitanceF: 1e-4 })),
+      thrown(() => dischargeAdvice({ voltageV: 300, capacitanceF: 1e-4, resistanceOhm: 0 })),
+      thrown(() => protectiveConductorLimitOhm(-1)),
+    ];
+    expect(lines.length).toBeGreaterThan(12);
+    for (const line of lines) expect(computedText(line, 'fr'), line).not.toBe(line);
   });
 });

@@ -5,7 +5,8 @@ import { decimalsIn } from './numbers';
 
 /**
  * The English sentences the shared calculators write (shared/calculators/measure.ts, and the diode test and the
- * substitute check in transistors.ts; the salvage match in shared/salvage/match.ts), each with its catalog key: a sentence is found by its words, its {placeholders} give the figures
+ * substitute check in transistors.ts, resistors.ts, e-series.ts, mains.ts, capacitors.ts, shared/safety/limits.ts;
+ * the salvage match in shared/salvage/match.ts), each with its catalog key: a sentence is found by its words, its {placeholders} give the figures
  * back, and the reader's language puts them in its own place with its own decimal sign. A sentence not listed stays
  * in English. Junction names and the words in TERMS are said in the reader's language too.
  */
@@ -170,6 +171,36 @@ const RULES: [string, string][] = [
   ['A cut-out must trip at the same temperature ({t} °C); never fit a different one.', 'bench.tool.sub.cutout'],
   ['Its output of {c} V is not the {n} V needed.', 'bench.tool.sub.output'],
   ['It comes in {c}, not {n}: check that it fits and how it is mounted.', 'bench.tool.sub.package'],
+  // resistor codes and bands, E-series, mains peak, capacitor discharge, earth limit
+  [
+    'The first band is never black; read the resistor from the other end, or check the colours in daylight.',
+    'bench.calc.r.firstBlack',
+  ],
+  ['A code of zeros is a 0 Ω link (a jumper).', 'bench.calc.r.zeros'],
+  ['Three-digit codes are usually ±5 % parts (common practice, not a rule).', 'bench.calc.r.threeDigits'],
+  ['Four-digit codes are usually ±1 % parts (common practice, not a rule).', 'bench.calc.r.fourDigits'],
+  [
+    'On a 1 % SMD part, two digits and a letter may be an EIA-96 code instead; check the EIA-96 table.',
+    'bench.calc.r.eia96Note',
+  ],
+  ['Read as {a}; if "{l}" is a tolerance letter instead, it is {b} {pct}.', 'bench.calc.r.either'],
+  [
+    '"{code}" looks like an EIA-96 code (two digits and a letter), which this calculator does not decode; look it up in the EIA-96 table.',
+    'bench.calc.r.eia96',
+  ],
+  [
+    '"{code}" is not a resistor code: use 3 or 4 digits (103, 1002), R/K/M notation (4R7, R47, 4K7, 2M2), optionally with a tolerance letter (B C D F G J K M).',
+    'bench.calc.r.notCode',
+  ],
+  ['"{l}" is not a tolerance letter; they are {list}.', 'bench.calc.r.notLetter'],
+  ['Enter a resistance above 0 Ω.', 'bench.calc.es.above0'],
+  [
+    'Enter a mains voltage from {min} V to {max} V rms (230 V + 10 %); {v} V is outside the range this calculator covers.',
+    'bench.calc.mp.range',
+  ],
+  ['{what} must be a number above 0.', 'bench.calc.c.above0'],
+  ['{what} must be zero or more.', 'bench.calc.c.zeroOrMore'],
+  ['Cord length must be zero or more metres.', 'bench.calc.el.cord'],
 ];
 
 const JUNCTIONS: Record<string, string> = {
@@ -197,6 +228,9 @@ const TERMS: Record<string, string> = {
   'B, C and E': 'bce',
   'G, D and S': 'gds',
   unknown: 'unknown',
+  'The capacitance': 'theCapacitance',
+  'The discharge resistor': 'theResistor',
+  'The capacitor voltage': 'theVoltage',
 };
 /** The kinds of part as match.ts writes them ('bipolar transistor'), by their keys. */
 const PART_KINDS = new Set<string>(PART_TYPES);

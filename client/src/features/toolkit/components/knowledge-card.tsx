@@ -37,7 +37,9 @@ export function KnowledgeCard({
             <span className="font-semibold text-ink-soft"> — {[e.brand, e.model].filter(Boolean).join(' ')}</span>
           )}
         </h3>
-        <span className="rounded-full bg-navy/10 px-2 py-0.5 text-xs font-bold text-navy">{e.outcomeLabel}</span>
+        <span className="rounded-full bg-navy/10 px-2 py-0.5 text-xs font-bold text-navy">
+          {t(`fixer.outcomeValue.${e.outcome}`)}
+        </span>
         {e.writtenUp && (
           <span className="rounded-full bg-sage-light px-2 py-0.5 text-xs font-bold">
             {t('bench.tool.note.fixAdded')}

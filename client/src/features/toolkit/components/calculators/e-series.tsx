@@ -4,12 +4,13 @@ import { parseOhms } from '../../../../../../shared/calculators/resistors';
 import { TextField } from '../../../../components/ui/field';
 import { attempt, Big, ExampleButton, Examples, ohmsError, ohmsHint, Prompt, Result, Tiles, useFormats } from './ui';
 import { useT } from '../../../../lib/i18n';
+import { computedText } from '../computed';
 
 // ——— E-series ———
 
 export function ESeries() {
   const t = useT();
-  const { fmt, ohms: formatOhms } = useFormats();
+  const { lang, fmt, ohms: formatOhms } = useFormats();
   const [value, setValue] = useState('');
   const [series, setSeries] = useState<ESeriesName>('E24');
   const ohms = parseOhms(value);
@@ -51,7 +52,7 @@ export function ESeries() {
             </p>
           </>
         ) : (
-          <p className="font-semibold">{result.error}</p>
+          <p className="font-semibold">{computedText(result.error, lang)}</p>
         )}
       </Result>
       <Examples>

@@ -3,12 +3,13 @@ import { MAINS_MAX_V, MAINS_MIN_V, rectifiedPeak } from '../../../../../../share
 import { TextField } from '../../../../components/ui/field';
 import { attempt, bad, Big, ExampleButton, Examples, num, Prompt, QuickFill, Result, useFormats } from './ui';
 import { useT } from '../../../../lib/i18n';
+import { computedText } from '../computed';
 
 // ——— mains peak ———
 
 export function MainsPeak() {
   const t = useT();
-  const { fmt } = useFormats();
+  const { lang, fmt } = useFormats();
   const [vrms, setVrms] = useState('');
   const v = num(vrms);
   const result = v !== undefined && !Number.isNaN(v) ? attempt(() => rectifiedPeak(v)) : null;
@@ -39,7 +40,7 @@ export function MainsPeak() {
             <p className="mt-1 text-sm">{t('bench.calc.mains.note')}</p>
           </>
         ) : (
-          <p className="font-semibold">{result.error}</p>
+          <p className="font-semibold">{computedText(result.error, lang)}</p>
         )}
       </Result>
       <Examples>

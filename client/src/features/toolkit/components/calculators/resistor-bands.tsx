@@ -14,6 +14,7 @@ import {
 import { SelectField } from '../../../../components/ui/field';
 import { attempt, Big, ExampleButton, Examples, Result, Tiles, useFormats } from './ui';
 import { tr, useT } from '../../../../lib/i18n';
+import { computedText } from '../computed';
 import { decimalsIn } from '../numbers';
 
 // ——— resistor colour bands ———
@@ -154,7 +155,7 @@ export function ResistorBands() {
             )}
           </>
         ) : (
-          <p className="font-semibold">{result.error}</p>
+          <p className="font-semibold">{computedText(result.error, lang)}</p>
         )}
       </Result>
       <Examples>

@@ -3,6 +3,7 @@ import { decodePrintedCode } from '../../../../../../shared/calculators/resistor
 import { TextField } from '../../../../components/ui/field';
 import { attempt, Big, ExampleButton, Examples, Prompt, QuickFill, Result, useFormats } from './ui';
 import { useT } from '../../../../lib/i18n';
+import { computedText } from '../computed';
 import { decimalsIn } from '../numbers';
 
 // ——— printed codes ———
@@ -44,12 +45,12 @@ export function ResistorCode() {
             {result.value.tolerancePct === null && <p className="text-sm">{t('bench.calc.code.noTolerance')}</p>}
             {result.value.notes.map((n) => (
               <p key={n} className="text-sm text-ink-soft">
-                {n}
+                {computedText(n, lang)}
               </p>
             ))}
           </>
         ) : (
-          <p className="font-semibold">{result.error}</p>
+          <p className="font-semibold">{computedText(result.error, lang)}</p>
         )}
       </Result>
       <Examples>
