@@ -94,6 +94,9 @@ const RULES: [string, string][] = [
   ],
   ['Opposite polarity: {a1} {cand} cannot replace {a2} {orig}.', 'bench.calc.t.polarity'],
   ["{name} {c} {unit} is below the original's {o} {unit2}.", 'bench.calc.t.below'],
+  // No words, but figures: said again for the language's decimal sign.
+  ['fT {c} MHz ≥ {o} MHz.', 'bench.calc.t.ftOk'],
+  ['{name} {c} {unit} ≥ {o} {unit2}.', 'bench.calc.t.ratingOk'],
   ['Same package ({p}).', 'bench.calc.t.samePackage'],
   [
     'Packages {a} and {b} cannot be compared here: check size, mounting and pin-out against both datasheets.',
