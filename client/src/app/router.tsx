@@ -179,12 +179,15 @@ export const router = createBrowserRouter([
           { path: 'impact/groups/:groupId', ...page(() => import('../routes/impact/public'), 'PublicImpactPage') },
           {
             path: 'toolkit/knowledge',
-            ...page(() => import('../routes/toolkit/knowledge'), 'KnowledgePage', allow.volunteer),
+            ...page(() => import('../routes/toolkit/knowledge'), 'KnowledgePage', allow.volunteer, ['bench']),
           },
-          { path: 'toolkit/calculators', ...page(() => import('../routes/toolkit/calculators'), 'CalculatorsPage') },
+          {
+            path: 'toolkit/calculators',
+            ...page(() => import('../routes/toolkit/calculators'), 'CalculatorsPage', undefined, ['bench']),
+          },
           {
             path: 'groups/:groupId/salvage',
-            ...page(() => import('../routes/toolkit/salvage'), 'SalvagePage', allow.volunteer, ['organise']),
+            ...page(() => import('../routes/toolkit/salvage'), 'SalvagePage', allow.volunteer, ['organise', 'bench']),
           },
           {
             path: 'rebook/:token',

@@ -10,6 +10,7 @@ import type { KnowledgeEntry } from '../../features/toolkit/api/types';
 import { knowledgeQuery, useKnowledge } from '../../features/toolkit/api/get-knowledge';
 import { queryClient } from '../../lib/query-client';
 import { KnowledgeCard } from '../../features/toolkit/components/knowledge-card';
+import { useLanguage, useT } from '../../lib/i18n';
 
 /** The search as the address says it; nothing is searched until something is asked. */
 const searchOf = (params: URLSearchParams) => {
@@ -34,16 +35,14 @@ export const loader = ({ request }: LoaderFunctionArgs) => {
 
 /** /toolkit/knowledge: what the groups have learned, searchable by kind, brand, model and the words of the fault. */
 export function KnowledgePage() {
+  const t = useT();
   const [params, setParams] = useSearchParams();
   const { data: categories } = useCategories();
   const { applied, searched } = searchOf(params);
   const [draft, setDraft] = useState(applied);
   return (
     <div className="mx-auto max-w-3xl space-y-5">
-      <PageTitle
-        title="Repair notes"
-        lead="What fixers found and did before, in your group and in the groups that share their notes."
-      />
+      <PageTitle title={t('bench.page.notes')} lead={t('bench.tool.knowledge.lead')} />
       <form
         role="search"
         className="space-y-3 rounded-xl bg-white p-4 ring-1 ring-ink/5"
@@ -56,19 +55,19 @@ export function KnowledgePage() {
         }}
       >
         <TextField
-          label="Symptom or words"
+          label={t('bench.tool.knowledge.words')}
           value={draft.q}
           onChange={(e) => setDraft({ ...draft, q: e.target.value })}
-          placeholder="e.g. switches off, no sound, hums"
+          placeholder={t('bench.tool.knowledge.wordsPlaceholder')}
           autoFocus
         />
         <div className="grid gap-3 sm:grid-cols-3">
           <SelectField
-            label="Kind of item"
+            label={t('bench.tool.knowledge.kind')}
             value={draft.categoryId ?? ''}
             onChange={(e) => setDraft({ ...draft, categoryId: Number(e.target.value) || undefined })}
           >
-            <option value="">Any</option>
+            <option value="">{t('bench.tool.knowledge.any')}</option>
             {categories.map((c) => (
               <option key={c.id} value={c.id}>
                 {c.name}
@@ -76,12 +75,12 @@ export function KnowledgePage() {
             ))}
           </SelectField>
           <TextField
-            label="Brand"
+            label={t('bench.tool.knowledge.brand')}
             value={draft.brand}
             onChange={(e) => setDraft({ ...draft, brand: e.target.value })}
           />
           <TextField
-            label="Model"
+            label={t('bench.tool.knowledge.model')}
             value={draft.model}
             onChange={(e) => setDraft({ ...draft, model: e.target.value })}
           />
@@ -94,16 +93,16 @@ export function KnowledgePage() {
               checked={draft.scope === 'mine'}
               onChange={(e) => setDraft({ ...draft, scope: e.target.checked ? 'mine' : 'network' })}
             />
-            Only my groups
+            {t('bench.tool.knowledge.mine')}
           </label>
           <Button type="submit" className="ml-auto">
-            Search
+            {t('bench.tool.search')}
           </Button>
         </div>
       </form>
       {!searched ? (
-        <EmptyState title="Search the repair notes" icon="⌕">
-          Type a symptom, or choose the kind of item and its brand and model: exact matches come first.
+        <EmptyState title={t('bench.tool.knowledge.emptyTitle')} icon="⌕">
+          {t('bench.tool.knowledge.empty')}
         </EmptyState>
       ) : (
         <KnowledgeResults search={applied} />
@@ -114,24 +113,24 @@ export function KnowledgePage() {
 
 /** The notes the route's loader found for the search in the address, closest first. */
 function KnowledgeResults({ search }: { search: KnowledgeQuery }) {
+  const t = useT();
+  const lang = useLanguage();
   const { data: results } = useKnowledge(search);
   if (results.length === 0)
     return (
-      <EmptyState title="No notes match" icon="○">
-        Try fewer words, or the kind of item alone.
+      <EmptyState title={t('bench.tool.knowledge.noneTitle')} icon="○">
+        {t('bench.tool.knowledge.none')}
       </EmptyState>
     );
   return (
     <>
       <p className="text-sm text-ink-soft" role="status">
-        {results.length === 30
-          ? 'The 30 closest notes; narrow the search to see others.'
-          : `${results.length} ${results.length === 1 ? 'note' : 'notes'}, closest first.`}
+        {results.length === 30 ? t('bench.tool.knowledge.max') : t('bench.tool.knowledge.count', { n: results.length })}
       </p>
-      <ol className="space-y-3" aria-label="Results">
+      <ol className="space-y-3" aria-label={t('bench.tool.knowledge.results')}>
         {results.map((e: KnowledgeEntry) => (
           <li key={e.itemId}>
-            <KnowledgeCard entry={e} when={formatDay(e.eventDate, 'Europe/London')} />
+            <KnowledgeCard entry={e} when={formatDay(e.eventDate, 'Europe/London', lang)} />
           </li>
         ))}
       </ol>

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
-import { PART_TYPES, PART_TYPE_LABELS, type PartType } from '../../../../shared/salvage/constants';
+import { PART_TYPES, type PartType } from '../../../../shared/salvage/constants';
 import { GroupTabs } from '../../components/layouts/group-tabs';
 import { Button } from '../../components/ui/button';
 import { ConfirmDialog } from '../../components/ui/confirm-dialog';
@@ -15,6 +15,7 @@ import { useTakePart } from '../../features/toolkit/api/take-part';
 import { useUpdatePart } from '../../features/toolkit/api/update-part';
 import { ratingsText } from '../../features/toolkit/components/ratings';
 import { AddPartForm } from '../../features/toolkit/components/add-part-form';
+import { trParts, useLanguage, useT } from '../../lib/i18n';
 
 /** The list's filters as the address says them: kind, words, and whether used-up parts show too. */
 const filterOf = (params: URLSearchParams) => {
@@ -31,6 +32,7 @@ export const loader = ({ params, request }: LoaderFunctionArgs) =>
 
 /** /groups/:groupId/salvage: the parts the group has saved, by box, with what each is rated for. */
 export function SalvagePage() {
+  const t = useT();
   const groupId = Number(useParams().groupId);
   const { data: user } = useUser();
   const [params, setParams] = useSearchParams();
@@ -43,10 +45,7 @@ export function SalvagePage() {
   return (
     <div className="space-y-5">
       {organiser && <GroupTabs groupId={groupId} />}
-      <PageTitle
-        title="Salvage stock"
-        lead="Parts saved from items beyond mending or given to the group, and the box each is in."
-      />
+      <PageTitle title={t('bench.tool.salvage.title')} lead={t('bench.tool.stock.lead')} />
       <form
         role="search"
         className="flex flex-wrap items-end gap-3 rounded-xl bg-white p-4 ring-1 ring-ink/5"
@@ -54,7 +53,7 @@ export function SalvagePage() {
       >
         <div className="min-w-40 flex-1">
           <TextField
-            label="Search"
+            label={t('bench.tool.search')}
             value={typed}
             onChange={(e) => {
               setTyped(e.target.value);
@@ -63,11 +62,11 @@ export function SalvagePage() {
               else n.delete('q');
               setParams(n, { replace: true });
             }}
-            placeholder="value, package, box"
+            placeholder={t('bench.tool.stock.searchPlaceholder')}
           />
         </div>
         <SelectField
-          label="Kind"
+          label={t('bench.tool.add.kind')}
           value={type ?? ''}
           onChange={(e) => {
             const n = new URLSearchParams(params);
@@ -76,10 +75,10 @@ export function SalvagePage() {
             setParams(n);
           }}
         >
-          <option value="">All kinds</option>
-          {PART_TYPES.map((t) => (
-            <option key={t} value={t}>
-              {PART_TYPE_LABELS[t]}
+          <option value="">{t('bench.tool.stock.allKinds')}</option>
+          {PART_TYPES.map((pt) => (
+            <option key={pt} value={pt}>
+              {t(`bench.tool.part.${pt}`)}
             </option>
           ))}
         </SelectField>
@@ -95,10 +94,10 @@ export function SalvagePage() {
               setParams(n);
             }}
           />
-          Show used-up parts
+          {t('bench.tool.stock.showUsedUp')}
         </label>
         <Button type="button" onClick={() => setAdding(true)}>
-          Add parts
+          {t('bench.tool.add.title')}
         </Button>
       </form>
       {adding && (
@@ -109,17 +108,15 @@ export function SalvagePage() {
         />
       )}
       {parts.length === 0 && (q || type) ? (
-        <EmptyState title="No parts match" icon="○">
-          Nothing in the boxes matches {q ? `“${q}”` : 'that kind'}
-          {params.get('all') ? '' : ' (used-up parts are hidden)'}.
+        <EmptyState title={t('bench.tool.stock.noMatchTitle')} icon="○">
+          {t(`bench.tool.stock.${q ? 'noMatchWords' : 'noMatchKind'}${params.get('all') ? 'All' : ''}`, { q })}
         </EmptyState>
       ) : parts.length === 0 ? (
-        <EmptyState title="No parts here yet" icon="▣">
-          When an item reaches the end of its life, save its good parts here: fuses, switches, motors, capacitors,
-          transistors.
+        <EmptyState title={t('bench.tool.stock.emptyTitle')} icon="▣">
+          {t('bench.tool.stock.empty')}
         </EmptyState>
       ) : (
-        <ul className="grid gap-3 md:grid-cols-2" aria-label="Parts">
+        <ul className="grid gap-3 md:grid-cols-2" aria-label={t('bench.tool.stock.parts')}>
           {parts.map((p) => (
             <li key={p.id}>
               <PartCard groupId={groupId} part={p} canRemove={Boolean(organiser)} />
@@ -132,6 +129,8 @@ export function SalvagePage() {
 }
 
 function PartCard({ groupId, part: p, canRemove }: { groupId: number; part: SalvagePart; canRemove: boolean }) {
+  const t = useT();
+  const lang = useLanguage();
   const take = useTakePart(groupId);
   const update = useUpdatePart(groupId);
   const remove = useRemovePart(groupId);
@@ -144,14 +143,14 @@ function PartCard({ groupId, part: p, canRemove }: { groupId: number; part: Salv
         <span
           className={`rounded-full px-2 py-0.5 text-xs font-bold ${p.quantity ? 'bg-sage-light' : 'bg-ink/5 text-ink-soft'}`}
         >
-          {p.quantity} in {p.box}
+          {t('bench.tool.salvage.inBox', { quantity: p.quantity, box: p.box })}
         </span>
       </div>
       <p className="text-sm text-ink-soft">
-        {p.typeLabel}
+        {t(`bench.tool.part.${p.type}`)}
         {p.package && ` · ${p.package}`}
-        {p.pinout && ` · pins ${p.pinout}`}
-        {ratingsText(p.ratings) && ` · ${ratingsText(p.ratings)}`}
+        {p.pinout && ` · ${t('bench.tool.stock.pins', { pinout: p.pinout })}`}
+        {ratingsText(p.ratings, lang) && ` · ${ratingsText(p.ratings, lang)}`}
       </p>
       {p.notes && <p className="mt-1 text-sm">{p.notes}</p>}
       {(take.error || update.error) && (
@@ -169,12 +168,14 @@ function PartCard({ groupId, part: p, canRemove }: { groupId: number; part: Salv
           variant="secondary"
           disabled={p.quantity === 0}
           busy={take.isPending}
-          aria-label={`Take one ${p.value}`}
+          aria-label={t('bench.tool.stock.takeOneOf', { value: p.value })}
           onClick={() =>
-            take.mutate(p.id, { onSuccess: (after) => setTook(`Took one from ${after.box}: ${after.quantity} left.`) })
+            take.mutate(p.id, {
+              onSuccess: (after) => setTook(t('bench.tool.stock.took', { box: after.box, n: after.quantity })),
+            })
           }
         >
-          Take one
+          {t('bench.tool.stock.takeOne')}
         </Button>
         <Button
           variant="quiet"
@@ -183,25 +184,29 @@ function PartCard({ groupId, part: p, canRemove }: { groupId: number; part: Salv
           {/* The part's name is read out but not shown: each card already has it as its title. */}
           {took ? (
             <>
-              Put it back<span className="sr-only">: {p.value}</span>
+              {trParts('bench.tool.stock.putBack', {
+                name: <span className="sr-only">{t('bench.tool.stock.putBackName', { value: p.value })}</span>,
+              })}
             </>
           ) : (
-            <>
-              Add one<span className="sr-only"> {p.value}</span> to the box
-            </>
+            <>{trParts('bench.tool.stock.addOne', { name: <span className="sr-only"> {p.value}</span> })}</>
           )}
         </Button>
         {canRemove && (
-          <Button variant="quiet" aria-label={`Remove ${p.value}`} onClick={() => setConfirm(true)}>
-            Remove
+          <Button
+            variant="quiet"
+            aria-label={t('bench.tool.stock.removeOf', { value: p.value })}
+            onClick={() => setConfirm(true)}
+          >
+            {t('bench.tool.stock.remove')}
           </Button>
         )}
       </div>
       <ConfirmDialog
         open={confirm}
-        title="Remove this part from the list?"
-        message={`${p.value} (${p.quantity} in ${p.box}) goes from the stock list. The record of where earlier ones went stays with those items.`}
-        confirmLabel="Remove"
+        title={t('bench.tool.stock.removeTitle')}
+        message={t('bench.tool.stock.removeMessage', { value: p.value, quantity: p.quantity, box: p.box })}
+        confirmLabel={t('bench.tool.stock.remove')}
         onCancel={() => setConfirm(false)}
         onConfirm={() => remove.mutate(p.id, { onSuccess: () => setConfirm(false) })}
         busy={remove.isPending}

@@ -1,11 +1,25 @@
 import { useState } from 'react';
-import { PART_TYPES, PART_TYPE_LABELS, type PartType } from '../../../../../shared/salvage/constants';
+import { PART_TYPES, type PartType } from '../../../../../shared/salvage/constants';
 import { salvagePartSchema } from '../../../../../shared/schemas/toolkit';
 import { Button } from '../../../components/ui/button';
 import { Alert } from '../../../components/ui/feedback';
 import { SelectField, TextField } from '../../../components/ui/field';
 import { useAddPart } from '../api/add-part';
 import { RatingFields, parseRatings, type RatingsDraft } from './ratings';
+import { tr, useT } from '../../../lib/i18n';
+
+/** The part schema's English messages (the server answers with the same words) and their keys. */
+const SCHEMA_KEYS: Record<string, string> = {
+  'Choose the kind of part.': 'bench.tool.v.kind',
+  'Give its value or a short description.': 'bench.tool.v.value',
+  'Enter how many.': 'bench.tool.v.howMany',
+  'Enter a whole number.': 'bench.tool.v.whole',
+  'At least 1.': 'bench.tool.v.atLeastOne',
+  'Say which box it is in.': 'bench.tool.v.box',
+};
+/** A schema message in the reader's language; a rating that is not a number gets the lookup's own words. */
+const schemaMessage = (m: string) =>
+  /^Enter the \w+ as a number\.$/.test(m) ? tr('bench.tool.salvage.notNumber') : tr(SCHEMA_KEYS[m] ?? m);
 
 /** Adding parts: the ratings asked for follow the kind of part. */
 export function AddPartForm({
@@ -20,6 +34,7 @@ export function AddPartForm({
   /** Runs after the part is saved, for a page that shows the parts saved from its item. */
   onChanged?: () => void;
 }) {
+  const t = useT();
   const add = useAddPart(groupId, onChanged);
   const [v, setV] = useState({
     type: 'fuse' as PartType,
@@ -37,13 +52,13 @@ export function AddPartForm({
     const body = { ...v, ratings: parseRatings(ratings), sourceItemId };
     const parsed = salvagePartSchema.safeParse(body);
     if (!parsed.success) {
-      setErrors(Object.fromEntries(parsed.error.issues.map((i) => [i.path.join('.'), i.message])));
+      setErrors(Object.fromEntries(parsed.error.issues.map((i) => [i.path.join('.'), schemaMessage(i.message)])));
       return;
     }
     setErrors({});
     add.mutate(body, {
       onSuccess: (p) => {
-        setSaved(`${p.quantity} × ${p.value} put in ${p.box}.`);
+        setSaved(t('bench.tool.add.saved', { quantity: p.quantity, value: p.value, box: p.box }));
         setV({ ...v, value: '', package: '', pinout: '', quantity: '1', notes: '' });
         setRatings({});
       },
@@ -52,38 +67,42 @@ export function AddPartForm({
   return (
     <form
       className="space-y-3 rounded-xl bg-white p-4 ring-2 ring-copper"
-      aria-label="Add parts"
+      aria-label={t('bench.tool.add.title')}
       onSubmit={(e) => {
         e.preventDefault();
         submit();
       }}
     >
-      <h2 className="text-lg">Add parts{sourceItemId ? ' from this item' : ''}</h2>
-      {saved && <Alert tone="success">{saved} Add the next one, or close.</Alert>}
+      <h2 className="text-lg">{t(sourceItemId ? 'bench.tool.add.titleFromItem' : 'bench.tool.add.title')}</h2>
+      {saved && (
+        <Alert tone="success">
+          {saved} {t('bench.tool.add.next')}
+        </Alert>
+      )}
       <div className="grid gap-3 sm:grid-cols-3">
         <SelectField
-          label="Kind"
+          label={t('bench.tool.add.kind')}
           value={v.type}
           onChange={(e) => {
             setV({ ...v, type: e.target.value as PartType });
             setRatings({});
           }}
         >
-          {PART_TYPES.map((t) => (
-            <option key={t} value={t}>
-              {PART_TYPE_LABELS[t]}
+          {PART_TYPES.map((pt) => (
+            <option key={pt} value={pt}>
+              {t(`bench.tool.part.${pt}`)}
             </option>
           ))}
         </SelectField>
         <TextField
-          label="Value or description"
+          label={t('bench.tool.add.value')}
           value={v.value}
           onChange={(e) => setV({ ...v, value: e.target.value })}
           error={errors.value}
-          placeholder="e.g. 13 A ceramic, MJE13003"
+          placeholder={t('bench.tool.add.valuePlaceholder')}
         />
         <TextField
-          label="How many"
+          label={t('bench.tool.add.quantity')}
           inputMode="numeric"
           value={v.quantity}
           onChange={(e) => setV({ ...v, quantity: e.target.value })}
@@ -93,33 +112,37 @@ export function AddPartForm({
       <RatingFields type={v.type} value={ratings} onChange={setRatings} errors={errors} />
       <div className="grid gap-3 sm:grid-cols-3">
         <TextField
-          label="Package (optional)"
+          label={t('bench.tool.part.package')}
           value={v.package}
           onChange={(e) => setV({ ...v, package: e.target.value })}
-          placeholder="TO-220, axial…"
+          placeholder={t('bench.tool.add.packagePlaceholder')}
         />
         <TextField
-          label="Pin-out (optional)"
+          label={t('bench.tool.add.pinout')}
           value={v.pinout}
           onChange={(e) => setV({ ...v, pinout: e.target.value })}
-          placeholder="BCE, GDS…"
+          placeholder={t('bench.tool.add.pinoutPlaceholder')}
         />
         <TextField
-          label="Box"
+          label={t('bench.tool.add.box')}
           value={v.box}
           onChange={(e) => setV({ ...v, box: e.target.value })}
           error={errors.box}
-          placeholder="e.g. Box 3, fuse tin"
+          placeholder={t('bench.tool.add.boxPlaceholder')}
         />
       </div>
-      <TextField label="Notes (optional)" value={v.notes} onChange={(e) => setV({ ...v, notes: e.target.value })} />
+      <TextField
+        label={t('bench.tool.add.notes')}
+        value={v.notes}
+        onChange={(e) => setV({ ...v, notes: e.target.value })}
+      />
       {add.error && <Alert tone="error">{add.error.message}</Alert>}
       <div className="flex gap-2">
         <Button type="submit" busy={add.isPending}>
-          Add to the stock
+          {t('bench.tool.add.submit')}
         </Button>
         <Button type="button" variant="secondary" onClick={onDone}>
-          Close
+          {t('bench.tool.add.close')}
         </Button>
       </div>
     </form>

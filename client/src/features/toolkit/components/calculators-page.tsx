@@ -3,10 +3,12 @@ import { Link, useLocation, useSearchParams } from 'react-router';
 import { Card, PageTitle } from '../../../components/ui/feedback';
 import { paths } from '../../../config/paths';
 import { CalculatorBody } from './calculators/calculator-body';
-import { isCalculatorId, META, ORDER, type CalculatorId } from './calculators/meta';
+import { isCalculatorId, ORDER, type CalculatorId } from './calculators/meta';
+import { trParts, useT } from '../../../lib/i18n';
 
 /** /toolkit/calculators: every bench calculator as a card; ?open=<id> or #<id> opens one and scrolls to it. */
 export function Calculators() {
+  const t = useT();
   const [params] = useSearchParams();
   const { hash, key } = useLocation();
   const fromHash = decodeURIComponent(hash.slice(1));
@@ -37,19 +39,21 @@ export function Calculators() {
   return (
     <div className="mx-auto max-w-3xl">
       <PageTitle
-        title="Bench calculators"
+        title={t('bench.tool.calculators')}
         lead={
           <>
-            Quick sums for the bench, each with its source. They help judgement, they do not replace it:{' '}
-            <Link to={paths.safety()} className="underline">
-              safety at the bench
-            </Link>
-            .
+            {trParts('bench.calc.lead', {
+              link: (
+                <Link to={paths.safety()} className="underline">
+                  {t('bench.calc.leadLink')}
+                </Link>
+              ),
+            })}
           </>
         }
       />
       {/* On a phone the cards below are the list; a row of chips would run off the screen. */}
-      <nav aria-label="Calculators" className="mb-5 hidden sm:block">
+      <nav aria-label={t('bench.page.calculators')} className="mb-5 hidden sm:block">
         <ul className="-mx-4 flex gap-2 overflow-x-auto px-4 pb-2 sm:mx-0 sm:flex-wrap sm:overflow-visible sm:px-0">
           {ORDER.map((id) => (
             <li key={id} className="shrink-0">
@@ -57,7 +61,7 @@ export function Calculators() {
                 to={{ hash: id }}
                 className="inline-flex min-h-11 items-center rounded-lg bg-white px-3 text-sm font-semibold text-navy ring-1 ring-navy/25 hover:bg-navy/5"
               >
-                {META[id].title}
+                {t(`bench.tool.link.${id}`)}
               </Link>
             </li>
           ))}
@@ -78,8 +82,8 @@ export function Calculators() {
                     className="flex min-h-14 w-full items-center justify-between gap-3 rounded-xl px-5 py-3 text-left"
                   >
                     <span>
-                      <span className="block">{META[id].title}</span>
-                      <span className="block text-sm font-normal text-ink-soft">{META[id].summary}</span>
+                      <span className="block">{t(`bench.tool.link.${id}`)}</span>
+                      <span className="block text-sm font-normal text-ink-soft">{t(`bench.calc.${id}.summary`)}</span>
                     </span>
                     <span
                       aria-hidden

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { Link } from 'react-router';
-import { PART_TYPES, PART_TYPE_LABELS, type PartType } from '../../../../../shared/salvage/constants';
+import { PART_TYPES, type PartType } from '../../../../../shared/salvage/constants';
 import { formatDay } from '../../../../../shared/format';
 import { Button } from '../../../components/ui/button';
 import { Alert, Card, Spinner } from '../../../components/ui/feedback';
@@ -11,7 +11,9 @@ import { queryString } from '../../../lib/query-string';
 import { useSimilarRepairs } from '../api/get-similar-repairs';
 import { useSubstitutes } from '../api/get-substitutes';
 import { useTakePart } from '../api/take-part';
+import { useLanguage, useT } from '../../../lib/i18n';
 import { AddPartForm } from './add-part-form';
+import { computedText } from './computed';
 import { KnowledgeCard } from './knowledge-card';
 import { parseRatings, RatingFields, ratingsText, type RatingsDraft } from './ratings';
 
@@ -30,16 +32,18 @@ export interface ToolkitItem {
 
 /** "Similar past repairs": start where the last fixer ended. */
 export function SimilarRepairs({ item }: { item: ToolkitItem }) {
+  const t = useT();
+  const lang = useLanguage();
   const similar = useSimilarRepairs(item.id);
   return (
     <Card>
       <div className="flex items-baseline justify-between gap-2">
-        <h2 className="text-lg">Similar past repairs</h2>
+        <h2 className="text-lg">{t('bench.tool.similar.title')}</h2>
         <Link
           className="text-sm font-semibold text-navy underline"
           to={paths.knowledge(queryString({ categoryId: item.categoryId, brand: item.brand, model: item.model }))}
         >
-          Search all notes
+          {t('bench.tool.similar.searchAll')}
         </Link>
       </div>
       {similar.isPending ? (
@@ -47,14 +51,12 @@ export function SimilarRepairs({ item }: { item: ToolkitItem }) {
       ) : similar.error ? (
         <Alert tone="error">{similar.error.message}</Alert>
       ) : similar.data.length === 0 ? (
-        <p className="text-sm text-ink-soft">
-          No notes on this kind of item yet. Yours will be the first: add notes to the outcome.
-        </p>
+        <p className="text-sm text-ink-soft">{t('bench.tool.similar.none')}</p>
       ) : (
         <ol className="mt-2 space-y-2">
           {similar.data.slice(0, 3).map((e) => (
             <li key={e.itemId}>
-              <KnowledgeCard entry={e} when={formatDay(e.eventDate, item.event.timeZone)} canWrite={false} />
+              <KnowledgeCard entry={e} when={formatDay(e.eventDate, item.event.timeZone, lang)} canWrite={false} />
             </li>
           ))}
         </ol>
@@ -65,32 +67,27 @@ export function SimilarRepairs({ item }: { item: ToolkitItem }) {
 
 /** The bench calculators this item is likely to need, one tap away. */
 export function CalculatorLinks({ item }: { item: Pick<ToolkitItem, 'mains'> }) {
+  const t = useT();
   const links = [
-    ...(item.mains
-      ? [
-          ['discharge', 'Capacitor discharge'],
-          ['mains-peak', 'Rectified mains peak'],
-          ['earth-limit', 'Earth limit for the cord'],
-        ]
-      : []),
-    ['resistor-bands', 'Resistor colour bands'],
-    ['resistor-code', 'Printed resistor codes'],
-    ['measure', 'Measured resistance'],
-    ['e-series', 'Nearest standard value'],
-    ['transistor', 'Transistor substitute'],
-    ['diode-test', 'Transistor diode test'],
+    ...(item.mains ? ['discharge', 'mains-peak', 'earth-limit'] : []),
+    'resistor-bands',
+    'resistor-code',
+    'measure',
+    'e-series',
+    'transistor',
+    'diode-test',
   ];
   return (
     <Card>
-      <h2 className="mb-2 text-lg">Bench calculators</h2>
+      <h2 className="mb-2 text-lg">{t('bench.tool.calculators')}</h2>
       <ul className="flex flex-wrap gap-2">
-        {links.map(([id, label]) => (
+        {links.map((id) => (
           <li key={id}>
             <Link
               to={paths.calculators(id)}
               className="inline-flex min-h-11 items-center rounded-lg bg-white px-3 font-semibold text-navy ring-1 ring-navy/25 hover:bg-navy/5"
             >
-              {label}
+              {t(`bench.tool.link.${id}`)}
             </Link>
           </li>
         ))}
@@ -104,6 +101,8 @@ export function CalculatorLinks({ item }: { item: Pick<ToolkitItem, 'mains'> }) 
  * `onChanged` runs after a part is taken for the item or saved from it, so the page can refresh its item.
  */
 export function SalvageForItem({ item, onChanged }: { item: ToolkitItem; onChanged?: () => void }) {
+  const t = useT();
+  const lang = useLanguage();
   const groupId = item.event.groupId;
   const [type, setType] = useState<PartType>('fuse');
   const [ratings, setRatings] = useState<RatingsDraft>({});
@@ -121,13 +120,16 @@ export function SalvageForItem({ item, onChanged }: { item: ToolkitItem; onChang
   if (!canLookUp && !endOfLife && item.partsUsed.length === 0) return null;
   return (
     <Card>
-      <h2 className="text-lg">Salvage stock</h2>
+      <h2 className="text-lg">{t('bench.tool.salvage.title')}</h2>
       {item.partsUsed.length > 0 && (
-        <ul className="my-2 text-sm" aria-label="Parts used">
+        <ul className="my-2 text-sm" aria-label={t('bench.tool.salvage.partsUsed')}>
           {item.partsUsed.map((p) => (
             <li key={p.id}>
-              Used: {p.quantity} × {p.value}
-              {p.package && ` (${p.package})`} from {p.box}
+              {t('bench.tool.salvage.used', {
+                quantity: p.quantity,
+                value: p.package ? `${p.value} (${p.package})` : p.value,
+                box: p.box,
+              })}
               {p.takenBy && ` — ${p.takenBy}`}
             </li>
           ))}
@@ -136,25 +138,21 @@ export function SalvageForItem({ item, onChanged }: { item: ToolkitItem; onChang
       {canLookUp && (
         <form
           className="space-y-3"
-          aria-label="Find a substitute"
+          aria-label={t('bench.tool.salvage.find')}
           onSubmit={(e) => {
             e.preventDefault();
             const parsed = parseRatings(ratings);
             const bad = Object.entries(parsed)
               .filter(([, v]) => typeof v === 'number' && Number.isNaN(v))
               .map(([k]) => k);
-            setLookupErrors(
-              Object.fromEntries(bad.map((k) => [`ratings.${k}`, 'Enter a number (a decimal comma is fine).'])),
-            );
+            setLookupErrors(Object.fromEntries(bad.map((k) => [`ratings.${k}`, t('bench.tool.salvage.notNumber')])));
             if (!bad.length) setSearch({ type, ...parsed, ...(pkg ? { package: pkg } : {}) });
           }}
         >
-          <p className="text-sm text-ink-soft">
-            Say what the item needs; the stock is checked against the substitution rule.
-          </p>
+          <p className="text-sm text-ink-soft">{t('bench.tool.salvage.lead')}</p>
           <div className="grid gap-3 sm:grid-cols-2">
             <SelectField
-              label="Part needed"
+              label={t('bench.tool.salvage.partNeeded')}
               value={type}
               onChange={(e) => {
                 setType(e.target.value as PartType);
@@ -162,22 +160,22 @@ export function SalvageForItem({ item, onChanged }: { item: ToolkitItem; onChang
                 setSearch(null);
               }}
             >
-              {PART_TYPES.map((t) => (
-                <option key={t} value={t}>
-                  {PART_TYPE_LABELS[t]}
+              {PART_TYPES.map((pt) => (
+                <option key={pt} value={pt}>
+                  {t(`bench.tool.part.${pt}`)}
                 </option>
               ))}
             </SelectField>
             <TextField
-              label="Package (optional)"
+              label={t('bench.tool.part.package')}
               value={pkg}
               onChange={(e) => setPkg(e.target.value)}
-              placeholder="TO-126, axial…"
+              placeholder={t('bench.tool.salvage.packagePlaceholder')}
             />
           </div>
           <RatingFields type={type} value={ratings} onChange={setRatings} errors={lookupErrors} />
           <Button type="submit" variant="secondary" className="w-full">
-            Look in the stock
+            {t('bench.tool.salvage.look')}
           </Button>
         </form>
       )}
@@ -187,9 +185,9 @@ export function SalvageForItem({ item, onChanged }: { item: ToolkitItem; onChang
         ) : found.error ? (
           <Alert tone="error">{found.error.message}</Alert>
         ) : found.data.length === 0 ? (
-          <p className="mt-3 text-sm text-ink-soft">Nothing of that kind in the stock.</p>
+          <p className="mt-3 text-sm text-ink-soft">{t('bench.tool.salvage.nothing')}</p>
         ) : (
-          <ul className="mt-3 space-y-2" aria-label="Candidates">
+          <ul className="mt-3 space-y-2" aria-label={t('bench.tool.salvage.candidates')}>
             {found.data.map(({ part: p, verdict: v }) => (
               <li
                 key={p.id}
@@ -199,22 +197,22 @@ export function SalvageForItem({ item, onChanged }: { item: ToolkitItem; onChang
                 <p className="font-bold">
                   {p.value}{' '}
                   <span className="font-normal text-ink-soft">
-                    · {p.quantity} in {p.box}
+                    · {t('bench.tool.salvage.inBox', { quantity: p.quantity, box: p.box })}
                     {p.package && ` · ${p.package}`}
-                    {ratingsText(p.ratings) && ` · ${ratingsText(p.ratings)}`}
+                    {ratingsText(p.ratings, lang) && ` · ${ratingsText(p.ratings, lang)}`}
                   </span>
                 </p>
                 <p className="text-sm font-semibold">
                   {v.verdict === 'accept'
-                    ? 'Suitable'
+                    ? t('bench.tool.salvage.accept')
                     : v.verdict === 'accept-with-warnings'
-                      ? 'Suitable, with care'
-                      : 'Not suitable'}
+                      ? t('bench.tool.salvage.acceptWithWarnings')
+                      : t('bench.tool.salvage.refuse')}
                 </p>
                 {[...v.reasons, ...v.warnings].length > 0 && (
                   <ul className="list-disc pl-5 text-sm">
                     {[...v.reasons, ...v.warnings].map((r) => (
-                      <li key={r}>{r}</li>
+                      <li key={r}>{computedText(r, lang)}</li>
                     ))}
                   </ul>
                 )}
@@ -225,7 +223,7 @@ export function SalvageForItem({ item, onChanged }: { item: ToolkitItem; onChang
                     busy={take.isPending && take.variables === p.id}
                     onClick={() => take.mutate(p.id)}
                   >
-                    Take one for this item
+                    {t('bench.tool.salvage.take')}
                   </Button>
                 )}
               </li>
@@ -248,12 +246,9 @@ export function SalvageForItem({ item, onChanged }: { item: ToolkitItem; onChang
             />
           ) : (
             <>
-              <p className="text-sm">
-                This item has reached the end of its life. Save its good parts for the next repair: fuses, switches,
-                motors, capacitors, transistors.
-              </p>
+              <p className="text-sm">{t('bench.tool.salvage.endOfLife')}</p>
               <Button className="mt-2" variant="secondary" onClick={() => setAdding(true)}>
-                Save its reusable parts
+                {t('bench.tool.salvage.saveParts')}
               </Button>
             </>
           )}

@@ -4,6 +4,13 @@ import { Alert } from '../../../components/ui/feedback';
 import { TextAreaField, TextField } from '../../../components/ui/field';
 import type { KnowledgeEntry } from '../api/types';
 import { useWriteUp } from '../api/write-up';
+import { tr, useLanguage, useT } from '../../../lib/i18n';
+
+const WRITEUP_KEYS: Record<string, string> = {
+  'Describe the symptom.': 'bench.tool.v.symptom',
+  'Say what fixed it (or why it could not be fixed).': 'bench.tool.v.fix',
+};
+const fieldMessage = (m: string | undefined) => (m === undefined ? undefined : tr(WRITEUP_KEYS[m] ?? m));
 
 /**
  * One repair note: the fault and the fixer's notes, and the fix once a fixer has added it (symptom, what was measured,
@@ -18,6 +25,8 @@ export function KnowledgeCard({
   when: string;
   canWrite?: boolean;
 }) {
+  const t = useT();
+  const lang = useLanguage();
   const [writing, setWriting] = useState(false);
   return (
     <article className="rounded-xl bg-white p-4 shadow-sm ring-1 ring-ink/5" data-testid="knowledge-entry">
@@ -28,36 +37,42 @@ export function KnowledgeCard({
             <span className="font-semibold text-ink-soft"> — {[e.brand, e.model].filter(Boolean).join(' ')}</span>
           )}
         </h3>
-        <span className="rounded-full bg-navy/10 px-2 py-0.5 text-xs font-bold text-navy">{e.outcomeLabel}</span>
-        {e.writtenUp && <span className="rounded-full bg-sage-light px-2 py-0.5 text-xs font-bold">Fix added</span>}
+        <span className="rounded-full bg-navy/10 px-2 py-0.5 text-xs font-bold text-navy">
+          {t(`fixer.outcomeValue.${e.outcome}`)}
+        </span>
+        {e.writtenUp && (
+          <span className="rounded-full bg-sage-light px-2 py-0.5 text-xs font-bold">
+            {t('bench.tool.note.fixAdded')}
+          </span>
+        )}
         <span className="ml-auto text-xs text-ink-soft">
           {e.groupName} · {when}
         </span>
       </header>
       <dl className="mt-2 grid gap-1 text-sm sm:grid-cols-[8rem_1fr]">
-        <dt className="font-bold text-ink-soft">Symptom</dt>
+        <dt className="font-bold text-ink-soft">{t('bench.tool.note.symptom')}</dt>
         <dd>{e.symptom}</dd>
         {e.measured && (
           <>
-            <dt className="font-bold text-ink-soft">Measured</dt>
+            <dt className="font-bold text-ink-soft">{t('bench.tool.note.measured')}</dt>
             <dd>{e.measured}</dd>
           </>
         )}
         {e.faultyPart && (
           <>
-            <dt className="font-bold text-ink-soft">Faulty part</dt>
+            <dt className="font-bold text-ink-soft">{t('bench.tool.note.faultyPart')}</dt>
             <dd>{e.faultyPart}</dd>
           </>
         )}
         {e.fix && (
           <>
-            <dt className="font-bold text-ink-soft">Fix</dt>
+            <dt className="font-bold text-ink-soft">{t('bench.tool.note.fix')}</dt>
             <dd>{e.fix}</dd>
           </>
         )}
         {e.notes && (
           <>
-            <dt className="font-bold text-ink-soft">Notes</dt>
+            <dt className="font-bold text-ink-soft">{t('bench.tool.note.notes')}</dt>
             <dd className="whitespace-pre-line">{e.notes}</dd>
           </>
         )}
@@ -68,7 +83,9 @@ export function KnowledgeCard({
             <a key={id} href={`/api/photos/${id}`} target="_blank" rel="noreferrer">
               <img
                 src={`/api/photos/${id}`}
-                alt={`Bench photo of the ${e.categoryName.toLowerCase()}`}
+                alt={t('bench.tool.note.photo', {
+                  kind: lang === 'de' ? e.categoryName : e.categoryName.toLowerCase(),
+                })}
                 className="size-20 rounded-lg object-cover"
                 loading="lazy"
               />
@@ -78,7 +95,7 @@ export function KnowledgeCard({
       )}
       {canWrite && !writing && (
         <Button variant="quiet" className="mt-1" onClick={() => setWriting(true)}>
-          {e.writtenUp ? 'Edit the fix' : 'Add the fix for the next fixer'}
+          {t(e.writtenUp ? 'bench.tool.note.edit' : 'bench.tool.note.add')}
         </Button>
       )}
       {writing && <WriteUpForm entry={e} onDone={() => setWriting(false)} />}
@@ -87,6 +104,7 @@ export function KnowledgeCard({
 }
 
 function WriteUpForm({ entry, onDone }: { entry: KnowledgeEntry; onDone: () => void }) {
+  const t = useT();
   const save = useWriteUp(entry.itemId);
   const [v, setV] = useState({
     symptom: entry.symptom,
@@ -98,48 +116,46 @@ function WriteUpForm({ entry, onDone }: { entry: KnowledgeEntry; onDone: () => v
     save.error && 'fields' in save.error ? (save.error as { fields?: Record<string, string> }).fields : undefined;
   return (
     <form
-      aria-label="The fix for the next fixer"
+      aria-label={t('bench.tool.note.form')}
       className="mt-3 space-y-3 rounded-lg bg-navy/5 p-3"
       onSubmit={(ev) => {
         ev.preventDefault();
         save.mutate(v, { onSuccess: onDone });
       }}
     >
-      <p className="text-sm text-ink-soft">
-        What the next fixer with this kind of item needs: the symptom, what you measured, the faulty part and the fix.
-      </p>
+      <p className="text-sm text-ink-soft">{t('bench.tool.note.lead')}</p>
       <TextAreaField
-        label="Symptom"
+        label={t('bench.tool.note.symptom')}
         rows={2}
         value={v.symptom}
         onChange={(e) => setV({ ...v, symptom: e.target.value })}
-        error={fields?.symptom}
+        error={fieldMessage(fields?.symptom)}
       />
       <TextAreaField
-        label="What was measured"
+        label={t('bench.tool.note.whatMeasured')}
         rows={2}
         value={v.measured}
         onChange={(e) => setV({ ...v, measured: e.target.value })}
       />
       <TextField
-        label="The faulty part"
+        label={t('bench.tool.note.theFaultyPart')}
         value={v.faultyPart}
         onChange={(e) => setV({ ...v, faultyPart: e.target.value })}
       />
       <TextAreaField
-        label="The fix"
+        label={t('bench.tool.note.theFix')}
         rows={2}
         value={v.fix}
         onChange={(e) => setV({ ...v, fix: e.target.value })}
-        error={fields?.fix}
+        error={fieldMessage(fields?.fix)}
       />
       {save.error && !fields && <Alert tone="error">{save.error.message}</Alert>}
       <div className="flex gap-2">
         <Button type="submit" busy={save.isPending}>
-          Save the fix
+          {t('bench.tool.note.save')}
         </Button>
         <Button type="button" variant="secondary" onClick={onDone}>
-          Cancel
+          {t('bench.outcome.cancel')}
         </Button>
       </div>
     </form>

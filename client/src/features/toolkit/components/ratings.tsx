@@ -1,6 +1,9 @@
 import type { PartRatings, PartType } from '../../../../../shared/salvage/constants';
 import { SelectField, TextField } from '../../../components/ui/field';
-import { decodePrintedCode, formatOhms } from '../../../../../shared/calculators/resistors';
+import { decodePrintedCode } from '../../../../../shared/calculators/resistors';
+import type { Language } from '../../../../../shared/i18n/languages';
+import { useT } from '../../../lib/i18n';
+import { formatNumber, formatOhmsIn } from './numbers';
 
 /** Ratings as typed: strings until they are parsed; µF and kΩ are typed as the bench says them. */
 export type RatingsDraft = Partial<
@@ -31,16 +34,6 @@ const FIELDS: Record<PartType, (keyof RatingsDraft)[]> = {
   cable: ['currentA', 'voltageV'],
   other: ['voltageV', 'currentA', 'powerW'],
 };
-const LABELS: Record<keyof RatingsDraft, string> = {
-  polarity: 'Polarity',
-  voltageV: 'Voltage (V)',
-  currentA: 'Current (A)',
-  powerW: 'Power (W)',
-  resistanceOhm: 'Resistance (Ω, e.g. 4k7)',
-  capacitanceUF: 'Capacitance (µF)',
-  temperatureC: 'Trip temperature (°C)',
-  tolerancePct: 'Tolerance (%)',
-};
 const ERROR_KEY: Partial<Record<keyof RatingsDraft, string>> = { capacitanceUF: 'capacitanceF' };
 
 export function RatingFields({
@@ -54,27 +47,28 @@ export function RatingFields({
   onChange: (v: RatingsDraft) => void;
   errors?: Record<string, string>;
 }) {
+  const t = useT();
   return (
     <div className="grid gap-3 sm:grid-cols-3">
       {FIELDS[type].map((k) =>
         k === 'polarity' ? (
           <SelectField
             key={k}
-            label={LABELS[k]}
+            label={t(`bench.tool.rating.${k}`)}
             value={value.polarity ?? ''}
             onChange={(e) => onChange({ ...value, polarity: e.target.value })}
           >
-            <option value="">Not known</option>
+            <option value="">{t('bench.tool.rating.unknown')}</option>
             {(type === 'mosfet' ? ['N', 'P'] : ['NPN', 'PNP']).map((p) => (
               <option key={p} value={p}>
-                {type === 'mosfet' ? `${p}-channel` : p}
+                {type === 'mosfet' ? t('bench.tool.rating.channel', { p }) : p}
               </option>
             ))}
           </SelectField>
         ) : (
           <TextField
             key={k}
-            label={LABELS[k]}
+            label={t(`bench.tool.rating.${k}`)}
             inputMode="decimal"
             value={value[k] ?? ''}
             onChange={(e) => onChange({ ...value, [k]: e.target.value })}
@@ -113,16 +107,18 @@ export function parseRatings(d: RatingsDraft): PartRatings {
   return out;
 }
 
-export function ratingsText(r: PartRatings): string {
+/** The ratings in a line, each number as the language writes it. */
+export function ratingsText(r: PartRatings, lang: Language = 'en'): string {
+  const f = (x: number) => formatNumber(x, lang, 6);
   return [
     r.polarity,
-    r.resistanceOhm !== undefined && formatOhms(r.resistanceOhm),
-    r.capacitanceF !== undefined && `${Math.round(r.capacitanceF * 1e6 * 1000) / 1000} µF`,
-    r.voltageV !== undefined && `${r.voltageV} V`,
-    r.currentA !== undefined && `${r.currentA} A`,
-    r.powerW !== undefined && `${r.powerW} W`,
-    r.temperatureC !== undefined && `${r.temperatureC} °C`,
-    r.tolerancePct !== undefined && `±${r.tolerancePct} %`,
+    r.resistanceOhm !== undefined && formatOhmsIn(r.resistanceOhm, lang),
+    r.capacitanceF !== undefined && `${formatNumber(r.capacitanceF * 1e6, lang)} µF`,
+    r.voltageV !== undefined && `${f(r.voltageV)} V`,
+    r.currentA !== undefined && `${f(r.currentA)} A`,
+    r.powerW !== undefined && `${f(r.powerW)} W`,
+    r.temperatureC !== undefined && `${f(r.temperatureC)} °C`,
+    r.tolerancePct !== undefined && `±${f(r.tolerancePct)} %`,
   ]
     .filter(Boolean)
     .join(', ');

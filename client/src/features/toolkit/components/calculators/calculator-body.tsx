@@ -9,6 +9,7 @@ import { Transistor } from './transistor';
 import { DiodeTest } from './diode-test';
 import { EarthLimit } from './earth-limit';
 import { META, type CalculatorId } from './meta';
+import { useT } from '../../../../lib/i18n';
 
 const BODIES: Record<CalculatorId, () => ReactNode> = {
   'resistor-bands': ResistorBands,
@@ -24,20 +25,21 @@ const BODIES: Record<CalculatorId, () => ReactNode> = {
 
 /** One calculator's form, its cautions and its source. */
 export function CalculatorBody({ id, compact = false }: { id: CalculatorId; compact?: boolean }) {
+  const t = useT();
   const meta = META[id];
   const Body = BODIES[id];
   return (
     <div className={compact ? 'space-y-3' : 'space-y-4'}>
       <Body />
       <div className="rounded-lg border-l-4 border-copper bg-copper-light px-3 py-2 text-sm" role="note">
-        <p className="font-bold">Cautions</p>
+        <p className="font-bold">{t('bench.calc.cautions')}</p>
         <ul className="mt-1 list-disc space-y-1 pl-5">
           {meta.cautions.map((c) => (
-            <li key={c}>{c}</li>
+            <li key={c}>{t(c)}</li>
           ))}
         </ul>
       </div>
-      <p className="text-xs text-ink-soft">Source: {meta.source}.</p>
+      <p className="text-xs text-ink-soft">{t('bench.calc.source', { source: t(meta.source) })}</p>
     </div>
   );
 }

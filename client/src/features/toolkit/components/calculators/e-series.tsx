@@ -1,12 +1,16 @@
 import { useState } from 'react';
 import { nearestStandard, type ESeriesName } from '../../../../../../shared/calculators/e-series';
-import { formatOhms, parseOhms } from '../../../../../../shared/calculators/resistors';
+import { parseOhms } from '../../../../../../shared/calculators/resistors';
 import { TextField } from '../../../../components/ui/field';
-import { attempt, Big, ExampleButton, Examples, OHMS_HINT, ohmsError, Prompt, Result, show, Tiles } from './ui';
+import { attempt, Big, ExampleButton, Examples, ohmsError, ohmsHint, Prompt, Result, Tiles, useFormats } from './ui';
+import { useT } from '../../../../lib/i18n';
+import { computedText } from '../computed';
 
 // ——— E-series ———
 
 export function ESeries() {
+  const t = useT();
+  const { lang, fmt, ohms: formatOhms } = useFormats();
   const [value, setValue] = useState('');
   const [series, setSeries] = useState<ESeriesName>('E24');
   const ohms = parseOhms(value);
@@ -15,30 +19,40 @@ export function ESeries() {
     <>
       <div className="grid gap-3 sm:grid-cols-2">
         <TextField
-          label="Value wanted (Ω)"
+          label={t('bench.calc.eseries.value')}
           inputMode="decimal"
           autoComplete="off"
           value={value}
           onChange={(e) => setValue(e.target.value)}
           error={ohmsError(value)}
-          hint={OHMS_HINT}
+          hint={ohmsHint()}
         />
-        <Tiles legend="Series" options={['E6', 'E12', 'E24'] as const} value={series} onChange={setSeries} />
+        <Tiles
+          legend={t('bench.calc.eseries.series')}
+          options={['E6', 'E12', 'E24'] as const}
+          value={series}
+          onChange={setSeries}
+        />
       </div>
       <Result id="e-series" tone={result && !result.ok ? 'bad' : 'neutral'}>
         {!result ? (
-          <Prompt>Enter a value to find the nearest standard one.</Prompt>
+          <Prompt>{t('bench.calc.eseries.prompt')}</Prompt>
         ) : result.ok ? (
           <>
             <Big>{formatOhms(result.value.nearest)}</Big>
             <p>
               {result.value.exact
-                ? `${formatOhms(result.value.nearest)} is itself an ${series} value.`
-                : `Nearest ${series} value (${result.value.errorPct > 0 ? '+' : ''}${show(result.value.errorPct, 1)} %). Either side: ${formatOhms(result.value.below)} and ${formatOhms(result.value.above)}.`}
+                ? t('bench.calc.eseries.exact', { value: formatOhms(result.value.nearest), series })
+                : t('bench.calc.eseries.nearest', {
+                    series,
+                    pct: `${result.value.errorPct > 0 ? '+' : ''}${fmt(result.value.errorPct, 1)}`,
+                    below: formatOhms(result.value.below),
+                    above: formatOhms(result.value.above),
+                  })}
             </p>
           </>
         ) : (
-          <p className="font-semibold">{result.error}</p>
+          <p className="font-semibold">{computedText(result.error, lang)}</p>
         )}
       </Result>
       <Examples>
@@ -48,7 +62,7 @@ export function ESeries() {
             setSeries('E24');
           }}
         >
-          Worked example: 319 Ω in E24
+          {t('bench.calc.eseries.example')}
         </ExampleButton>
       </Examples>
     </>

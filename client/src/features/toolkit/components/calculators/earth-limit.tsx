@@ -1,11 +1,17 @@
 import { useState } from 'react';
 import { cordResistanceLimitOhm, protectiveConductorLimitOhm } from '../../../../../../shared/safety/limits';
 import { TextField } from '../../../../components/ui/field';
-import { attempt, bad, Big, ExampleButton, Examples, num, Prompt, Result } from './ui';
+import { attempt, bad, Big, ExampleButton, Examples, num, Prompt, Result, useFormats } from './ui';
+import { useT } from '../../../../lib/i18n';
+import { computedText } from '../computed';
+import { formatNumber } from '../numbers';
 
 // ——— earth limit ———
 
 export function EarthLimit() {
+  const t = useT();
+  const { lang } = useFormats();
+  const f = (x: number) => formatNumber(x, lang, 6);
   const [cord, setCord] = useState('');
   const [reading, setReading] = useState('');
   const m = num(cord);
@@ -18,28 +24,24 @@ export function EarthLimit() {
     <>
       <div className="grid gap-3 sm:grid-cols-2">
         <TextField
-          label="Cord length (m)"
+          label={t('bench.calc.earth.cord')}
           inputMode="decimal"
           autoComplete="off"
           value={cord}
           onChange={(e) => setCord(e.target.value)}
-          error={bad(cord) ? 'Enter metres, e.g. 2.' : undefined}
-          hint="0.3 Ω up to 5 m, +0.1 Ω per further 7.5 m begun, at most 1.0 Ω."
+          error={bad(cord) ? t('bench.calc.earth.cordError') : undefined}
+          hint={t('bench.calc.earth.cordHint')}
         />
         <TextField
-          label="Reading (Ω, optional)"
+          label={t('bench.calc.earth.reading')}
           inputMode="decimal"
           autoComplete="off"
           value={reading}
           onChange={(e) => setReading(e.target.value)}
           error={
-            bad(reading)
-              ? 'Enter ohms, e.g. 0.12.'
-              : negative
-                ? 'A reading below 0 Ω means the leads were not nulled or the meter is faulty: null the leads and measure again.'
-                : undefined
+            bad(reading) ? t('bench.calc.earth.readingError') : negative ? t('bench.calc.earth.negative') : undefined
           }
-          hint="Plug earth pin to the earthed metal."
+          hint={t('bench.calc.earth.readingHint')}
         />
       </div>
       <Result
@@ -47,18 +49,17 @@ export function EarthLimit() {
         tone={!limit ? 'neutral' : !limit.ok || pass === false ? 'bad' : pass ? 'good' : 'neutral'}
       >
         {!limit ? (
-          <Prompt>Enter the cord length.</Prompt>
+          <Prompt>{t('bench.calc.earth.prompt')}</Prompt>
         ) : !limit.ok ? (
-          <p className="font-semibold">{limit.error}</p>
+          <p className="font-semibold">{computedText(limit.error, lang)}</p>
         ) : (
           <>
-            <Big>At most {limit.value} Ω</Big>
-            <p className="text-sm">
-              for {m} m of cord (EN 50678 / EN 50699). UK-style, 0.1 Ω plus a 1.0 mm² cord at 19.5 mΩ/m (from memory):{' '}
-              {cordResistanceLimitOhm(m!)} Ω.
-            </p>
+            <Big>{t('bench.calc.earth.atMost', { limit: f(limit.value) })}</Big>
+            <p className="text-sm">{t('bench.calc.earth.detail', { m: f(m!), uk: f(cordResistanceLimitOhm(m!)) })}</p>
             {pass !== null && (
-              <p className="mt-1 font-bold">{pass ? `${ohms} Ω passes.` : `${ohms} Ω is above the limit: fails.`}</p>
+              <p className="mt-1 font-bold">
+                {t(pass ? 'bench.calc.earth.passes' : 'bench.calc.earth.fails', { ohms: f(ohms!) })}
+              </p>
             )}
           </>
         )}
@@ -70,7 +71,7 @@ export function EarthLimit() {
             setReading('0.25');
           }}
         >
-          Worked example: 12.5 m of cord
+          {t('bench.calc.earth.example')}
         </ExampleButton>
       </Examples>
     </>

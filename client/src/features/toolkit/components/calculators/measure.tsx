@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { judgeResistance, parseReading, type MeasureVerdict } from '../../../../../../shared/calculators/measure';
-import { formatOhms, parseOhms, TOLERANCE_BY_COLOUR } from '../../../../../../shared/calculators/resistors';
+import { parseOhms, TOLERANCE_BY_COLOUR } from '../../../../../../shared/calculators/resistors';
 import { SelectField, TextField } from '../../../../components/ui/field';
 import {
   attempt,
@@ -9,32 +9,31 @@ import {
   ExampleButton,
   Examples,
   num,
-  OHMS_HINT,
   ohmsError,
+  ohmsHint,
   OlButton,
   Prompt,
   Result,
   type Tone,
+  useFormats,
 } from './ui';
+import { useT } from '../../../../lib/i18n';
+import { computedText } from '../computed';
 
 // ——— measured resistance ———
 
 const TOLERANCES = [...new Set(Object.values(TOLERANCE_BY_COLOUR))].sort((a, b) => a - b);
-const VERDICT_TEXT: Record<MeasureVerdict, string> = {
-  within: 'Within tolerance',
-  'within-uncertainty': 'In the right range',
-  outside: 'Outside tolerance',
-  open: 'Open circuit',
-};
+const verdictKey = (v: MeasureVerdict) => `bench.calc.measure.${v}`;
 
 export function Measure() {
+  const t = useT();
+  const { lang, fmt, ohms: formatOhms } = useFormats();
   const [f, setF] = useState({ reading: '', leads: '', nominal: '', tolerance: '5', uncertainty: '' });
   const reading = parseReading(f.reading);
   const leads = num(f.leads);
   const nominal = parseOhms(f.nominal);
   const uncertainty = num(f.uncertainty);
-  const readingError =
-    f.reading.trim() !== '' && reading === null ? 'Enter ohms, or OL when the meter shows OL.' : undefined;
+  const readingError = f.reading.trim() !== '' && reading === null ? t('bench.calc.measure.readingError') : undefined;
   const invalid = Boolean(readingError) || [leads, nominal, uncertainty].some((x) => Number.isNaN(x as number));
   const result =
     reading !== null && nominal !== undefined && !invalid
@@ -65,7 +64,7 @@ export function Measure() {
         <div className="flex items-start gap-2">
           <div className="flex-1">
             <TextField
-              label="Meter reads (Ω or OL)"
+              label={t('bench.calc.measure.reading')}
               inputMode="decimal"
               autoComplete="off"
               value={f.reading}
@@ -73,63 +72,62 @@ export function Measure() {
               error={readingError}
             />
           </div>
-          <OlButton label="Meter reads OL" onClick={() => setF((x) => ({ ...x, reading: 'OL' }))} />
+          <OlButton label={t('bench.calc.measure.readsOl')} onClick={() => setF((x) => ({ ...x, reading: 'OL' }))} />
         </div>
         <TextField
-          label="Leads shorted read (Ω)"
+          label={t('bench.calc.measure.leads')}
           inputMode="decimal"
           autoComplete="off"
           value={f.leads}
           onChange={set('leads')}
-          error={bad(f.leads) ? 'Enter a number, e.g. 0.1.' : undefined}
-          hint="Touch the probes together first; often about 0.1 Ω."
+          error={bad(f.leads) ? t('bench.calc.measure.numberError') : undefined}
+          hint={t('bench.calc.measure.leadsHint')}
         />
         <TextField
-          label="Nominal value (Ω)"
+          label={t('bench.calc.measure.nominal')}
           inputMode="decimal"
           autoComplete="off"
           value={f.nominal}
           onChange={set('nominal')}
           error={ohmsError(f.nominal)}
-          hint={OHMS_HINT}
+          hint={ohmsHint()}
         />
-        <SelectField label="Part tolerance" value={f.tolerance} onChange={set('tolerance')}>
-          {TOLERANCES.map((t) => (
-            <option key={t} value={t}>
-              ±{t} %
+        <SelectField label={t('bench.calc.measure.tolerance')} value={f.tolerance} onChange={set('tolerance')}>
+          {TOLERANCES.map((tol) => (
+            <option key={tol} value={tol}>
+              ±{fmt(tol)} %
             </option>
           ))}
         </SelectField>
         <TextField
-          label="Meter uncertainty (Ω, optional)"
+          label={t('bench.calc.measure.uncertainty')}
           inputMode="decimal"
           autoComplete="off"
           value={f.uncertainty}
           onChange={set('uncertainty')}
-          error={bad(f.uncertainty) ? 'Enter a number, e.g. 0.1.' : undefined}
-          hint="At least the last digit on this range; twice that once the leads are subtracted."
+          error={bad(f.uncertainty) ? t('bench.calc.measure.numberError') : undefined}
+          hint={t('bench.calc.measure.uncertaintyHint')}
         />
       </div>
       <Result id="measure" tone={tone}>
         {!result ? (
-          <Prompt>
-            {invalid
-              ? 'A field is not a number; correct it to see the result.'
-              : 'Enter the reading and the nominal value.'}
-          </Prompt>
+          <Prompt>{t(invalid ? 'bench.calc.fieldNotNumber' : 'bench.calc.measure.prompt')}</Prompt>
         ) : !result.ok ? (
-          <p className="font-semibold">{result.error}</p>
+          <p className="font-semibold">{computedText(result.error, lang)}</p>
         ) : (
           <>
-            <Big>{VERDICT_TEXT[result.value.verdict]}</Big>
+            <Big>{t(verdictKey(result.value.verdict))}</Big>
             {result.value.netOhm !== null && (
               <p>
-                Net {formatOhms(result.value.netOhm)} ({result.value.deviationPct! > 0 ? '+' : ''}
-                {result.value.deviationPct} %); tolerance band {formatOhms(result.value.minOhm)}–
-                {formatOhms(result.value.maxOhm)}.
+                {t('bench.calc.measure.net', {
+                  net: formatOhms(result.value.netOhm),
+                  dev: `${result.value.deviationPct! > 0 ? '+' : ''}${fmt(result.value.deviationPct!, 6)}`,
+                  min: formatOhms(result.value.minOhm),
+                  max: formatOhms(result.value.maxOhm),
+                })}
               </p>
             )}
-            <p className="mt-1 text-sm">{result.value.message}</p>
+            <p className="mt-1 text-sm">{computedText(result.value.message, lang)}</p>
           </>
         )}
       </Result>
@@ -137,7 +135,7 @@ export function Measure() {
         <ExampleButton
           onClick={() => setF({ reading: '1.2', leads: '0.1', nominal: '1', tolerance: '5', uncertainty: '0.1' })}
         >
-          Worked example: 1 Ω reading 1.2 Ω
+          {t('bench.calc.measure.example')}
         </ExampleButton>
       </Examples>
     </>

@@ -2,7 +2,6 @@ import { useState } from 'react';
 import {
   decodeBands,
   DIGIT_COLOURS,
-  formatOhms,
   MULTIPLIER_COLOURS,
   MULTIPLIER_EXPONENT,
   TOLERANCE_BY_COLOUR,
@@ -13,7 +12,10 @@ import {
   type ToleranceColour,
 } from '../../../../../../shared/calculators/resistors';
 import { SelectField } from '../../../../components/ui/field';
-import { attempt, Big, ExampleButton, Examples, Result, Tiles } from './ui';
+import { attempt, Big, ExampleButton, Examples, Result, Tiles, useFormats } from './ui';
+import { tr, useT } from '../../../../lib/i18n';
+import { computedText } from '../computed';
+import { decimalsIn } from '../numbers';
 
 // ——— resistor colour bands ———
 
@@ -32,7 +34,8 @@ const SWATCH: Record<BandColour, string> = {
   silver: '#b8b8b8',
   none: 'transparent',
 };
-const cap = (s: string) => s[0].toUpperCase() + s.slice(1);
+/** A colour's name in the reader's language (capitalised, as it starts an option). */
+const cap = (c: string) => tr(`bench.calc.colour.${c}`);
 const multiplierLabel = (c: MultiplierColour) => {
   const e = MULTIPLIER_EXPONENT[c];
   return e < 0 ? `×${10 ** e}` : `×${10 ** (e % 3)}${['', 'k', 'M', 'G'][Math.floor(e / 3)]}`;
@@ -81,6 +84,8 @@ const FOUR_EXAMPLE: BandColour[] = ['yellow', 'violet', 'red', 'gold'];
 const FIVE_EXAMPLE: BandColour[] = ['brown', 'black', 'black', 'gold', 'brown'];
 
 export function ResistorBands() {
+  const t = useT();
+  const { lang, fmt, ohms: formatOhms } = useFormats();
   const [bands, setBands] = useState<BandColour[]>(['brown', 'black', 'red', 'gold']);
   const count = bands.length as 4 | 5;
   const setCount = (n: 4 | 5) => {
@@ -96,22 +101,21 @@ export function ResistorBands() {
   const digits = count - 2;
   const result = attempt(() => decodeBands(bands));
   const digitLabel = (c: BandColour) => `${cap(c)} — ${DIGIT_COLOURS.indexOf(c as DigitColour)}`;
-  const ordinal = ['First', 'Second', 'Third'];
   return (
     <>
       <Tiles
-        legend="Number of bands"
+        legend={t('bench.calc.bands.count')}
         options={['4', '5'] as const}
         value={String(count) as '4' | '5'}
         onChange={(v) => setCount(Number(v) as 4 | 5)}
-        label={(o) => `${o} bands`}
+        label={(o) => t('bench.calc.bands.n', { n: o })}
       />
       <ResistorPicture bands={bands} />
       <div className="grid gap-3 sm:grid-cols-2">
         {Array.from({ length: digits }, (_, i) => (
           <BandSelect
             key={i}
-            label={`Band ${i + 1}: ${ordinal[i].toLowerCase()} digit`}
+            label={t(`bench.calc.bands.digit${i + 1}`, { n: i + 1 })}
             value={bands[i]}
             options={i === 0 ? DIGIT_COLOURS.filter((c) => c !== 'black') : DIGIT_COLOURS}
             optionLabel={digitLabel}
@@ -119,18 +123,20 @@ export function ResistorBands() {
           />
         ))}
         <BandSelect
-          label={`Band ${digits + 1}: multiplier`}
+          label={t('bench.calc.bands.multiplier', { n: digits + 1 })}
           value={bands[digits]}
           options={MULTIPLIER_COLOURS}
-          optionLabel={(c) => `${cap(c)} — ${multiplierLabel(c as MultiplierColour)}`}
+          optionLabel={(c) => `${cap(c)} — ${decimalsIn(multiplierLabel(c as MultiplierColour), lang)}`}
           onChange={(c) => set(digits, c)}
         />
         <BandSelect
-          label={`Band ${digits + 2}: tolerance`}
+          label={t('bench.calc.bands.tolerance', { n: digits + 2 })}
           value={bands[digits + 1]}
           options={count === 5 ? TOLERANCE_COLOURS.filter((c) => c !== 'none') : TOLERANCE_COLOURS}
           optionLabel={(c) =>
-            c === 'none' ? 'No band — ±20 %' : `${cap(c)} — ±${TOLERANCE_BY_COLOUR[c as ToleranceColour]} %`
+            c === 'none'
+              ? t('bench.calc.bands.none')
+              : `${cap(c)} — ±${fmt(TOLERANCE_BY_COLOUR[c as ToleranceColour])} %`
           }
           onChange={(c) => set(digits + 1, c)}
         />
@@ -138,20 +144,23 @@ export function ResistorBands() {
       <Result id="resistor-bands" tone={result.ok ? 'neutral' : 'bad'}>
         {result.ok ? (
           <>
-            <Big>{result.value.text}</Big>
+            <Big>{decimalsIn(result.value.text, lang)}</Big>
             {result.value.minOhms !== null && result.value.maxOhms !== null && (
               <p className="text-sm">
-                Between {formatOhms(result.value.minOhms)} and {formatOhms(result.value.maxOhms)}.
+                {t('bench.calc.between', {
+                  min: formatOhms(result.value.minOhms),
+                  max: formatOhms(result.value.maxOhms),
+                })}
               </p>
             )}
           </>
         ) : (
-          <p className="font-semibold">{result.error}</p>
+          <p className="font-semibold">{computedText(result.error, lang)}</p>
         )}
       </Result>
       <Examples>
-        <ExampleButton onClick={() => setBands(FOUR_EXAMPLE)}>Worked example: yellow-violet-red-gold</ExampleButton>
-        <ExampleButton onClick={() => setBands(FIVE_EXAMPLE)}>5 bands: brown-black-black-gold-brown</ExampleButton>
+        <ExampleButton onClick={() => setBands(FOUR_EXAMPLE)}>{t('bench.calc.bands.example4')}</ExampleButton>
+        <ExampleButton onClick={() => setBands(FIVE_EXAMPLE)}>{t('bench.calc.bands.example5')}</ExampleButton>
       </Examples>
     </>
   );

@@ -8,6 +8,13 @@ import {
 } from '../../../../../../shared/calculators/transistors';
 import { SelectField, TextField } from '../../../../components/ui/field';
 import { attempt, bad, Big, ExampleButton, Examples, num, Prompt, Result } from './ui';
+import { useLanguage, useT } from '../../../../lib/i18n';
+import { computedText } from '../computed';
+
+/** Package names and pin-outs are the datasheets' own, the same in every language. */
+const TO_220 = 'TO-220';
+const PINOUT_EXAMPLE = { bipolar: 'BCE', mosfet: 'GDS' } as const;
+const TO_126_TO_220 = 'TO-126 → TO-220';
 
 // ——— transistor substitute ———
 
@@ -60,6 +67,7 @@ function SpecFields({
   onChange: (d: SpecDraft) => void;
   packagesId: string;
 }) {
+  const t = useT();
   const bipolar = isBipolar(draft.type);
   const text = (key: Exclude<keyof SpecDraft, 'type'>, label: string, hint?: string, decimal = true) => (
     <TextField
@@ -68,7 +76,7 @@ function SpecFields({
       autoComplete="off"
       value={draft[key]}
       onChange={(e) => onChange({ ...draft, [key]: e.target.value })}
-      error={decimal && bad(draft[key]) ? 'Enter a number.' : undefined}
+      error={decimal && bad(draft[key]) ? t('bench.calc.enterNumber') : undefined}
       hint={hint}
     />
   );
@@ -76,13 +84,13 @@ function SpecFields({
     <fieldset className="space-y-3 rounded-lg p-3 ring-1 ring-ink/10">
       <legend className="px-1 font-bold">{legend}</legend>
       <SelectField
-        label="Type"
+        label={t('bench.calc.tr.type')}
         value={draft.type}
         onChange={(e) => onChange({ ...draft, type: e.target.value as TransistorType })}
       >
-        {TRANSISTOR_TYPES.map((t) => (
-          <option key={t} value={t}>
-            {t}
+        {TRANSISTOR_TYPES.map((type) => (
+          <option key={type} value={type}>
+            {type}
           </option>
         ))}
       </SelectField>
@@ -93,30 +101,30 @@ function SpecFields({
       </div>
       <div className="grid grid-cols-2 gap-2">
         <TextField
-          label="Package"
+          label={t('bench.calc.tr.package')}
           list={packagesId}
           autoComplete="off"
           value={draft.pkg}
           onChange={(e) => onChange({ ...draft, pkg: e.target.value })}
-          placeholder="TO-220"
+          placeholder={TO_220}
         />
         <TextField
-          label="Pin-out"
+          label={t('bench.calc.tr.pinout')}
           autoCapitalize="characters"
           autoComplete="off"
           value={draft.pinout}
           onChange={(e) => onChange({ ...draft, pinout: e.target.value })}
-          placeholder={bipolar ? 'BCE' : 'GDS'}
+          placeholder={bipolar ? PINOUT_EXAMPLE.bipolar : PINOUT_EXAMPLE.mosfet}
         />
       </div>
       <div className="grid grid-cols-2 gap-2">
         {bipolar ? (
           <>
-            {text('hfe', 'Gain hFE (optional)')}
-            {text('ft', 'fT, MHz (optional)')}
+            {text('hfe', t('bench.calc.tr.hfe'))}
+            {text('ft', t('bench.calc.tr.ft'))}
           </>
         ) : (
-          text('vgs', 'Vgs(th) max, V (optional)')
+          text('vgs', t('bench.calc.tr.vgs'))
         )}
       </div>
     </fieldset>
@@ -127,6 +135,8 @@ const REF_ORIGINAL: SpecDraft = { ...EMPTY_SPEC, v: '400', i: '4', p: '75', pkg:
 const REF_CANDIDATE: SpecDraft = { ...EMPTY_SPEC, v: '450', i: '5', p: '80', pkg: 'TO-220', pinout: 'BCE' };
 
 export function Transistor() {
+  const t = useT();
+  const lang = useLanguage();
   const [original, setOriginal] = useState<SpecDraft>(EMPTY_SPEC);
   const [candidate, setCandidate] = useState<SpecDraft>(EMPTY_SPEC);
   const packagesId = useId();
@@ -142,8 +152,18 @@ export function Transistor() {
         ))}
       </datalist>
       <div className="grid gap-3 sm:grid-cols-2">
-        <SpecFields legend="Original" draft={original} onChange={setOriginal} packagesId={packagesId} />
-        <SpecFields legend="Replacement" draft={candidate} onChange={setCandidate} packagesId={packagesId} />
+        <SpecFields
+          legend={t('bench.calc.tr.original')}
+          draft={original}
+          onChange={setOriginal}
+          packagesId={packagesId}
+        />
+        <SpecFields
+          legend={t('bench.calc.tr.replacement')}
+          draft={candidate}
+          onChange={setCandidate}
+          packagesId={packagesId}
+        />
       </div>
       <Result
         id="transistor"
@@ -152,39 +172,38 @@ export function Transistor() {
         }
       >
         {!result ? (
-          <Prompt>Fill in type, the three ratings and the package of both parts.</Prompt>
+          <Prompt>{t('bench.calc.tr.prompt')}</Prompt>
         ) : !result.ok ? (
-          <p className="font-semibold">{result.error}</p>
+          <p className="font-semibold">{computedText(result.error, lang)}</p>
         ) : (
           <>
             <Big>
               {verdict === 'accept'
-                ? 'Suitable substitute'
+                ? t('bench.calc.tr.accept')
                 : verdict === 'accept-with-warnings'
-                  ? 'Suitable, with care'
-                  : 'Not a substitute'}
+                  ? t('bench.tool.salvage.acceptWithWarnings')
+                  : t('bench.calc.tr.refuse')}
             </Big>
             {result.value.refusals.length > 0 && (
               <ul className="mt-1 list-disc space-y-1 pl-5 font-semibold">
                 {result.value.refusals.map((r) => (
-                  <li key={r}>{r}</li>
+                  <li key={r}>{computedText(r, lang)}</li>
                 ))}
               </ul>
             )}
             {result.value.warnings.length > 0 && (
               <ul className="mt-1 list-disc space-y-1 pl-5 text-ink">
                 {result.value.warnings.map((w) => (
-                  <li key={w}>{w}</li>
+                  <li key={w}>{computedText(w, lang)}</li>
                 ))}
               </ul>
             )}
             {result.value.passed.length > 0 && (
-              <p className="mt-2 text-sm text-ink-soft">Passed: {result.value.passed.join(' ')}</p>
+              <p className="mt-2 text-sm text-ink-soft">
+                {t('bench.calc.tr.passed', { list: result.value.passed.map((x) => computedText(x, lang)).join(' ') })}
+              </p>
             )}
-            <p className="mt-1 text-sm text-ink-soft">
-              Gain, speed and gate threshold are compared only when given for both parts. Check the datasheets before
-              fitting.
-            </p>
+            <p className="mt-1 text-sm text-ink-soft">{t('bench.calc.tr.note')}</p>
           </>
         )}
       </Result>
@@ -195,7 +214,7 @@ export function Transistor() {
             setCandidate(REF_CANDIDATE);
           }}
         >
-          Worked example: 400 V / 4 A TO-220
+          {t('bench.calc.example', { what: '400 V / 4 A TO-220' })}
         </ExampleButton>
         <ExampleButton
           onClick={() => {
@@ -203,7 +222,7 @@ export function Transistor() {
             setCandidate({ ...EMPTY_SPEC, v: '400', i: '4', p: '75', pkg: 'TO-220' });
           }}
         >
-          TO-126 → TO-220
+          {TO_126_TO_220}
         </ExampleButton>
       </Examples>
     </>

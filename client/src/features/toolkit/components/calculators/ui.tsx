@@ -2,6 +2,8 @@ import { useId, type ReactNode } from 'react';
 import { parseOhms } from '../../../../../../shared/calculators/resistors';
 import { Button } from '../../../../components/ui/button';
 import { type CalculatorId } from './meta';
+import { tr, useLanguage } from '../../../../lib/i18n';
+import { formatNumber, formatOhmsIn } from '../numbers';
 
 // ——— small pieces shared by the calculators ———
 
@@ -20,9 +22,21 @@ export const num = (s: string) => (s.trim() === '' ? undefined : Number(s.trim()
 export const bad = (s: string) => Number.isNaN(num(s) as number);
 export const show = (x: number, dp = 3) => String(Number(x.toFixed(dp)));
 
-export const OHMS_HINT = 'e.g. 330, 4.7k, 4k7, 2M2';
-export const ohmsError = (s: string) =>
-  Number.isNaN(parseOhms(s) as number) ? 'Enter ohms, e.g. 330, 4.7k or 4k7 (M for megohms).' : undefined;
+/** A figure as `show` rounds it, and a resistance, both written the way the active language writes numbers. */
+export function useFormats() {
+  const lang = useLanguage();
+  return {
+    lang,
+    fmt: (x: number, dp = 3) => formatNumber(Number(x.toFixed(dp)), lang, dp),
+    ohms: (x: number) => formatOhmsIn(x, lang),
+  };
+}
+
+export const ohmsHint = () => tr('bench.calc.ohmsHint');
+export const ohmsError = (s: string) => (Number.isNaN(parseOhms(s) as number) ? tr('bench.calc.ohmsError') : undefined);
+
+/** What a meter shows for an open circuit: the same in every language. */
+const OL = 'OL';
 
 export type Tone = 'neutral' | 'good' | 'bad' | 'caution';
 export const TONES: Record<Tone, string> = {
@@ -95,7 +109,7 @@ export function Tiles<T extends string>({
 export function OlButton({ label, onClick }: { label: string; onClick: () => void }) {
   return (
     <Button type="button" variant="secondary" className="mt-7" onClick={onClick} aria-label={label}>
-      OL
+      {OL}
     </Button>
   );
 }
