@@ -172,8 +172,14 @@ export const router = createBrowserRouter([
             path: 'groups/:groupId/follow-ups',
             ...page(() => import('../routes/impact/follow-ups'), 'FollowUpsPage', allow.organiser, ['organise']),
           },
-          { path: 'impact', ...page(() => import('../routes/impact/public'), 'PublicImpactPage') },
-          { path: 'impact/groups/:groupId', ...page(() => import('../routes/impact/public'), 'PublicImpactPage') },
+          {
+            path: 'impact',
+            ...page(() => import('../routes/impact/public'), 'PublicImpactPage', undefined, ['figures']),
+          },
+          {
+            path: 'impact/groups/:groupId',
+            ...page(() => import('../routes/impact/public'), 'PublicImpactPage', undefined, ['figures']),
+          },
           {
             path: 'toolkit/knowledge',
             ...page(() => import('../routes/toolkit/knowledge'), 'KnowledgePage', allow.volunteer),
