@@ -154,11 +154,14 @@ export const router = createBrowserRouter([
           { path: 't/:code', ...page(() => import('../routes/event-day/tag'), 'TagPage') },
           {
             path: 'groups/:groupId/impact',
-            ...page(() => import('../routes/impact/dashboard'), 'GroupImpactPage', allow.organiser, ['organise']),
+            ...page(() => import('../routes/impact/dashboard'), 'GroupImpactPage', allow.organiser, [
+              'organise',
+              'figures',
+            ]),
           },
           {
             path: 'admin/impact',
-            ...page(() => import('../routes/impact/dashboard'), 'NetworkImpactPage', allow.admin),
+            ...page(() => import('../routes/impact/dashboard'), 'NetworkImpactPage', allow.admin, ['figures']),
           },
           {
             path: 'impact/records',
