@@ -66,13 +66,13 @@ export const router = createBrowserRouter([
     path: 'events/:eventId/report',
     errorElement: routeError,
     hydrateFallbackElement: <Spinner />,
-    ...page(() => import('../routes/impact/report'), 'EventReportPage', allow.organiser),
+    ...page(() => import('../routes/impact/report'), 'EventReportPage', allow.organiser, ['figures']),
   },
   {
     path: 'groups/:groupId/report',
     errorElement: routeError,
     hydrateFallbackElement: <Spinner />,
-    ...page(() => import('../routes/impact/report'), 'GroupReportPage', allow.organiser),
+    ...page(() => import('../routes/impact/report'), 'GroupReportPage', allow.organiser, ['figures']),
   },
   {
     path: 'embed/impact',
