@@ -68,7 +68,6 @@ const PENDING = new Set([
   'client/src/routes/groups/settings.tsx',
   'client/src/routes/impact/follow-ups.tsx',
   'client/src/routes/impact/import.tsx',
-  'client/src/routes/impact/records.tsx',
   'client/src/routes/rota/rota.tsx',
   'client/src/routes/skills/my-skills.tsx',
   'client/src/routes/skills/skills-matrix.tsx',

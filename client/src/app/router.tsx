@@ -165,7 +165,7 @@ export const router = createBrowserRouter([
           },
           {
             path: 'impact/records',
-            ...page(() => import('../routes/impact/records'), 'ImpactRecordsPage', allow.organiser),
+            ...page(() => import('../routes/impact/records'), 'ImpactRecordsPage', allow.organiser, ['figures']),
           },
           {
             path: 'groups/:groupId/import',
