@@ -66,7 +66,6 @@ const PENDING = new Set([
   'client/src/routes/event-day/tag.tsx',
   'client/src/routes/groups/people.tsx',
   'client/src/routes/groups/settings.tsx',
-  'client/src/routes/impact/follow-ups.tsx',
   'client/src/routes/impact/import.tsx',
   'client/src/routes/rota/rota.tsx',
   'client/src/routes/skills/my-skills.tsx',

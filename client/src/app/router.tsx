@@ -173,7 +173,10 @@ export const router = createBrowserRouter([
           },
           {
             path: 'groups/:groupId/follow-ups',
-            ...page(() => import('../routes/impact/follow-ups'), 'FollowUpsPage', allow.organiser, ['organise']),
+            ...page(() => import('../routes/impact/follow-ups'), 'FollowUpsPage', allow.organiser, [
+              'organise',
+              'figures',
+            ]),
           },
           {
             path: 'impact',
