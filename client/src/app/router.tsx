@@ -169,7 +169,10 @@ export const router = createBrowserRouter([
           },
           {
             path: 'groups/:groupId/import',
-            ...page(() => import('../routes/impact/import'), 'GroupImportPage', allow.organiser, ['organise']),
+            ...page(() => import('../routes/impact/import'), 'GroupImportPage', allow.organiser, [
+              'organise',
+              'figures',
+            ]),
           },
           {
             path: 'groups/:groupId/follow-ups',
