@@ -66,13 +66,13 @@ export const router = createBrowserRouter([
     path: 'events/:eventId/report',
     errorElement: routeError,
     hydrateFallbackElement: <Spinner />,
-    ...page(() => import('../routes/impact/report'), 'EventReportPage', allow.organiser),
+    ...page(() => import('../routes/impact/report'), 'EventReportPage', allow.organiser, ['figures']),
   },
   {
     path: 'groups/:groupId/report',
     errorElement: routeError,
     hydrateFallbackElement: <Spinner />,
-    ...page(() => import('../routes/impact/report'), 'GroupReportPage', allow.organiser),
+    ...page(() => import('../routes/impact/report'), 'GroupReportPage', allow.organiser, ['figures']),
   },
   {
     path: 'embed/impact',
@@ -157,26 +157,41 @@ export const router = createBrowserRouter([
           { path: 't/:code', ...page(() => import('../routes/event-day/tag'), 'TagPage', undefined, ['desk']) },
           {
             path: 'groups/:groupId/impact',
-            ...page(() => import('../routes/impact/dashboard'), 'GroupImpactPage', allow.organiser, ['organise']),
+            ...page(() => import('../routes/impact/dashboard'), 'GroupImpactPage', allow.organiser, [
+              'organise',
+              'figures',
+            ]),
           },
           {
             path: 'admin/impact',
-            ...page(() => import('../routes/impact/dashboard'), 'NetworkImpactPage', allow.admin),
+            ...page(() => import('../routes/impact/dashboard'), 'NetworkImpactPage', allow.admin, ['figures']),
           },
           {
             path: 'impact/records',
-            ...page(() => import('../routes/impact/records'), 'ImpactRecordsPage', allow.organiser),
+            ...page(() => import('../routes/impact/records'), 'ImpactRecordsPage', allow.organiser, ['figures']),
           },
           {
             path: 'groups/:groupId/import',
-            ...page(() => import('../routes/impact/import'), 'GroupImportPage', allow.organiser, ['organise']),
+            ...page(() => import('../routes/impact/import'), 'GroupImportPage', allow.organiser, [
+              'organise',
+              'figures',
+            ]),
           },
           {
             path: 'groups/:groupId/follow-ups',
-            ...page(() => import('../routes/impact/follow-ups'), 'FollowUpsPage', allow.organiser, ['organise']),
+            ...page(() => import('../routes/impact/follow-ups'), 'FollowUpsPage', allow.organiser, [
+              'organise',
+              'figures',
+            ]),
           },
-          { path: 'impact', ...page(() => import('../routes/impact/public'), 'PublicImpactPage') },
-          { path: 'impact/groups/:groupId', ...page(() => import('../routes/impact/public'), 'PublicImpactPage') },
+          {
+            path: 'impact',
+            ...page(() => import('../routes/impact/public'), 'PublicImpactPage', undefined, ['figures']),
+          },
+          {
+            path: 'impact/groups/:groupId',
+            ...page(() => import('../routes/impact/public'), 'PublicImpactPage', undefined, ['figures']),
+          },
           {
             path: 'toolkit/knowledge',
             ...page(() => import('../routes/toolkit/knowledge'), 'KnowledgePage', allow.volunteer, ['bench']),

@@ -8,6 +8,7 @@ import { impactSettingsQuery } from '../../features/impact/api/get-impact-settin
 import { methodQuery } from '../../features/impact/api/get-method';
 import { statsQuery } from '../../features/impact/api/get-stats';
 import { datesInOrder, ImpactBody, statsFilterOf } from '../../features/impact/components/impact-body';
+import { useT } from '../../lib/i18n';
 import { queryClient } from '../../lib/query-client';
 import { DisplacementCard } from '../../features/impact/components/displacement-card';
 
@@ -30,6 +31,7 @@ export const loader = ({ params, request }: LoaderFunctionArgs) => {
 
 /** A group's figures for its organisers. */
 export function GroupImpactPage() {
+  const t = useT();
   const groupId = Number(useParams().groupId);
   const { data: group } = useSuspenseQuery(groupSettingsQuery(groupId));
   const sessions = useGroupEvents(groupId);
@@ -37,9 +39,7 @@ export function GroupImpactPage() {
     <div>
       <div className="mb-2">
         <h1 className="text-2xl sm:text-3xl">{group.name}</h1>
-        <p className="mt-1 text-ink-soft">
-          What the sessions repaired, what it kept out of the bin, and how it was counted.
-        </p>
+        <p className="mt-1 text-ink-soft">{t('figures.dashboard.groupLead')}</p>
       </div>
       <GroupTabs groupId={groupId} />
       <ImpactBody groupId={groupId} groupName={group.name} sessions={sessions} />
@@ -49,12 +49,10 @@ export function GroupImpactPage() {
 
 /** The whole network's figures for platform admins, and the one setting the estimate depends on. */
 export function NetworkImpactPage() {
+  const t = useT();
   return (
     <div>
-      <PageTitle
-        title="Network impact"
-        lead="Every group on Mendery together. Pick dates to narrow it down; every figure opens the records it counts."
-      />
+      <PageTitle title={t('figures.dashboard.networkTitle')} lead={t('figures.dashboard.networkLead')} />
       <div className="mb-6">
         <DisplacementCard />
       </div>

@@ -1,9 +1,9 @@
 import { useSuspenseQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
-import { OUTCOME_LABELS } from '../../../../shared/event-day/constants';
-import { formatDay, formatMoney } from '../../../../shared/format';
-import { FOLLOW_UP_LABELS, MANUAL_FOLLOW_UP_STATUSES, type FollowUpStatus } from '../../../../shared/impact/follow-ups';
+import { formatDay, formatMoney, intlLocale } from '../../../../shared/format';
+import type { Language } from '../../../../shared/i18n/languages';
+import { MANUAL_FOLLOW_UP_STATUSES, type FollowUpStatus } from '../../../../shared/impact/follow-ups';
 import { GroupTabs } from '../../components/layouts/group-tabs';
 import { Button } from '../../components/ui/button';
 import { ConfirmDialog } from '../../components/ui/confirm-dialog';
@@ -13,6 +13,7 @@ import { groupSettingsQuery } from '../../features/groups/api/get-group-settings
 import { isWebLink } from '../../../../shared/files/web-links';
 import type { FollowUp } from '../../features/impact/api/types';
 import { followUpsQuery, useFollowUps } from '../../features/impact/api/get-follow-ups';
+import { useLanguage, useT } from '../../lib/i18n';
 import { queryClient } from '../../lib/query-client';
 import { useSetFollowUp } from '../../features/impact/api/set-follow-up';
 
@@ -32,9 +33,19 @@ const CHIP: Record<FollowUpStatus, string> = {
   'gave-up': 'bg-ink/10 text-ink-soft',
 };
 
-const shortDay = (d: string, timeZone: string) =>
-  new Intl.DateTimeFormat('en-GB', { timeZone, day: 'numeric', month: 'short', year: 'numeric' }).format(new Date(d));
-const age = (days: number) => (days <= 0 ? 'today' : days === 1 ? '1 day ago' : `${days} days ago`);
+const shortDay = (d: string, timeZone: string, lang: Language) =>
+  new Intl.DateTimeFormat(intlLocale(lang), { timeZone, day: 'numeric', month: 'short', year: 'numeric' }).format(
+    new Date(d),
+  );
+/** The catalog key of each status's name. */
+const STATUS_KEY: Record<FollowUpStatus, string> = {
+  open: 'figures.followUps.status.open',
+  'part-ordered': 'figures.followUps.status.partOrdered',
+  rebooked: 'figures.followUps.status.rebooked',
+  'came-back': 'figures.followUps.status.cameBack',
+  'fixed-at-return': 'figures.followUps.status.fixedAtReturn',
+  'gave-up': 'figures.followUps.status.gaveUp',
+};
 
 /** The page reads what the loader fetched; a failure to fetch it is the route's error, shown in the page frame. */
 export const loader = ({ params }: LoaderFunctionArgs) => {
@@ -47,6 +58,8 @@ export const loader = ({ params }: LoaderFunctionArgs) => {
 
 /** Items that need a part, oldest first: who to chase, what they need, and the link that books them back in. */
 export function FollowUpsPage() {
+  const t = useT();
+  const lang = useLanguage();
   const groupId = Number(useParams().groupId);
   const [params, setParams] = useSearchParams();
   const showAll = params.get('show') === 'all';
@@ -96,16 +109,13 @@ export function FollowUpsPage() {
     <div>
       <div className="mb-2">
         <h1 className="text-2xl sm:text-3xl">{group.name}</h1>
-        <p className="mt-1 text-ink-soft">
-          Items that went home needing a part. Visitors get a mail with the part and a link that books them back in
-          ahead of the queue; after six weeks a reminder.
-        </p>
+        <p className="mt-1 text-ink-soft">{t('figures.followUps.lead')}</p>
       </div>
       <GroupTabs groupId={groupId} />
 
       <div
         role="group"
-        aria-label="Which follow-ups"
+        aria-label={t('figures.followUps.which')}
         className="mb-4 inline-flex rounded-lg bg-white p-1 ring-1 ring-ink/10"
       >
         {([false, true] as const).map((wantAll) => (
@@ -116,7 +126,7 @@ export function FollowUpsPage() {
             onClick={() => show(wantAll)}
             className={`min-h-11 rounded-md px-4 font-bold ${showAll === wantAll ? 'bg-navy text-white' : 'text-navy hover:bg-navy/5'}`}
           >
-            {wantAll ? 'All' : 'Open only'}
+            {wantAll ? t('figures.followUps.all') : t('figures.followUps.openOnly')}
             <span className="font-semibold"> ({wantAll ? all.length : open.length})</span>
           </button>
         ))}
@@ -124,22 +134,21 @@ export function FollowUpsPage() {
 
       {setStatus.isError && (
         <div className="mb-4">
-          <Alert tone="error" title="The status was not changed">
+          <Alert tone="error" title={t('figures.followUps.notChanged')}>
             {setStatus.error.message}
           </Alert>
         </div>
       )}
 
       {all.length === 0 ? (
-        <EmptyState title="No items waiting for a part" icon="⚙">
-          When a fixer records “{OUTCOME_LABELS['parts-needed']}” for an item, it shows here with the visitor’s details,
-          so nobody is forgotten.
+        <EmptyState title={t('figures.followUps.emptyTitle')} icon="⚙">
+          {t('figures.followUps.empty', { outcome: t('figures.outcome.partsNeeded') })}
         </EmptyState>
       ) : list.length === 0 ? (
-        <EmptyState title="Nothing open" icon="✓">
-          Every item that needed a part came back or was closed.{' '}
+        <EmptyState title={t('figures.followUps.nothingOpen')} icon="✓">
+          {t('figures.followUps.allClosed')}{' '}
           <button type="button" onClick={() => show(true)} className="font-bold text-navy underline">
-            Show all {all.length}
+            {t('figures.followUps.showAll', { n: all.length })}
           </button>
         </EmptyState>
       ) : (
@@ -156,39 +165,45 @@ export function FollowUpsPage() {
                     className={`rounded-full px-2.5 py-0.5 text-xs font-bold ${CHIP[f.status]}`}
                     data-testid="follow-up-status"
                   >
-                    {f.statusLabel}
+                    {t(STATUS_KEY[f.status])}
                   </span>
                   {f.reminderDue && (
                     <span
                       className="rounded-full bg-copper px-2.5 py-0.5 text-xs font-bold text-white"
                       data-testid="reminder-due"
                     >
-                      Reminder due
+                      {t('figures.followUps.reminderDue')}
                     </span>
                   )}
-                  <span className="text-sm text-ink-soft">asked for {age(f.ageDays)}</span>
+                  <span className="text-sm text-ink-soft">
+                    {t('figures.followUps.age', { days: Math.max(0, f.ageDays) })}
+                  </span>
                 </div>
                 <p className="text-lg font-extrabold text-navy">{f.item}</p>
                 <p className="text-sm">
-                  <span className="font-semibold">Part:</span>{' '}
-                  {f.part ?? <span className="text-ink-soft">not described</span>}
-                  {f.partCost !== null && <> · about {formatMoney(f.partCost, f.currency)}</>}
+                  <span className="font-semibold">{t('figures.followUps.part')}</span>{' '}
+                  {f.part ?? <span className="text-ink-soft">{t('figures.followUps.notDescribed')}</span>}
+                  {f.partCost !== null && (
+                    <> · {t('figures.followUps.about', { cost: formatMoney(f.partCost, f.currency, lang) })}</>
+                  )}
                   {isWebLink(f.partLink) && (
                     <>
                       {' '}
                       ·{' '}
                       <a href={f.partLink} target="_blank" rel="noreferrer" className="font-bold text-navy underline">
-                        where to find it<span className="sr-only"> (opens in a new tab)</span>
+                        {t('figures.followUps.whereToFind')}
+                        <span className="sr-only">{t('impact.widget.newTab')}</span>
                       </a>
                     </>
                   )}
                 </p>
                 <dl className="grid grid-cols-[auto_1fr] gap-x-3 gap-y-0.5 text-sm">
-                  <dt className="text-ink-soft">Visitor</dt>
+                  <dt className="text-ink-soft">{t('figures.records.col.visitor')}</dt>
                   <dd className="min-w-0">
-                    {f.visitor.name} · ref. <span className="font-mono">{f.visitor.reference}</span>
+                    {f.visitor.name} · {t('figures.followUps.ref')}{' '}
+                    <span className="font-mono">{f.visitor.reference}</span>
                   </dd>
-                  <dt className="text-ink-soft">Contact</dt>
+                  <dt className="text-ink-soft">{t('figures.followUps.contact')}</dt>
                   <dd className="min-w-0 break-words">
                     {f.visitor.email && (
                       <a href={`mailto:${f.visitor.email}`} className="text-navy underline">
@@ -201,29 +216,35 @@ export function FollowUpsPage() {
                         {f.visitor.phone}
                       </a>
                     )}
-                    {!f.visitor.email && !f.visitor.phone && <span className="text-ink-soft">none given</span>}
+                    {!f.visitor.email && !f.visitor.phone && (
+                      <span className="text-ink-soft">{t('figures.followUps.noneGiven')}</span>
+                    )}
                   </dd>
-                  <dt className="text-ink-soft">Session</dt>
+                  <dt className="text-ink-soft">{t('figures.records.col.session')}</dt>
                   <dd className="min-w-0">
-                    {f.event.title}, {formatDay(f.event.startsAt, tz)}
+                    {f.event.title}, {formatDay(f.event.startsAt, tz, lang)}
                   </dd>
-                  <dt className="text-ink-soft">Mails</dt>
+                  <dt className="text-ink-soft">{t('figures.followUps.mails')}</dt>
                   <dd className="min-w-0">
-                    {f.mailedAt ? `Mailed ${shortDay(f.mailedAt, tz)}` : 'Not mailed'}
-                    {f.remindedAt ? ` · reminded ${shortDay(f.remindedAt, tz)}` : ''}
+                    {f.mailedAt
+                      ? t('figures.followUps.mailed', { date: shortDay(f.mailedAt, tz, lang) })
+                      : t('figures.followUps.notMailed')}
+                    {f.remindedAt
+                      ? ` · ${t('figures.followUps.reminded', { date: shortDay(f.remindedAt, tz, lang) })}`
+                      : ''}
                   </dd>
                   {f.returnVisit && (
                     <>
-                      <dt className="text-ink-soft">Return visit</dt>
+                      <dt className="text-ink-soft">{t('figures.followUps.returnVisit')}</dt>
                       <dd className="min-w-0">
                         <span className="font-mono">{f.returnVisit.reference}</span> · {f.returnVisit.eventTitle},{' '}
-                        {formatDay(f.returnVisit.startsAt, tz)}
+                        {formatDay(f.returnVisit.startsAt, tz, lang)}
                       </dd>
                     </>
                   )}
                   {f.note && (
                     <>
-                      <dt className="text-ink-soft">Note</dt>
+                      <dt className="text-ink-soft">{t('figures.followUps.note')}</dt>
                       <dd className="min-w-0">{f.note}</dd>
                     </>
                   )}
@@ -232,7 +253,7 @@ export function FollowUpsPage() {
 
               <div className="space-y-2">
                 <label className="block text-sm font-semibold">
-                  Status
+                  {t('figures.followUps.status')}
                   <select
                     value={isManual(f.status) ? f.status : ''}
                     onChange={(e) => choose(f, e.target.value as ManualStatus)}
@@ -241,33 +262,33 @@ export function FollowUpsPage() {
                   >
                     {!isManual(f.status) && (
                       <option value="" disabled>
-                        {f.statusLabel}
+                        {t(STATUS_KEY[f.status])}
                       </option>
                     )}
                     {MANUAL_FOLLOW_UP_STATUSES.map((s) => (
                       <option key={s} value={s}>
-                        {FOLLOW_UP_LABELS[s]}
+                        {t(STATUS_KEY[s])}
                       </option>
                     ))}
                   </select>
                 </label>
                 {setStatus.isPending && setStatus.variables?.itemId === f.itemId && (
                   <p role="status" className="text-sm text-ink-soft">
-                    Saving…
+                    {t('figures.followUps.saving')}
                   </p>
                 )}
                 {f.rebookUrl && (
                   <Button variant="secondary" className="w-full" onClick={() => copy(f)}>
-                    Copy re-booking link
+                    {t('figures.followUps.copyLink')}
                   </Button>
                 )}
                 {copied?.itemId === f.itemId && (
                   <p role="status" className="text-sm font-semibold">
                     {copied.ok ? (
-                      <span className="text-sage">Link copied.</span>
+                      <span className="text-sage">{t('figures.followUps.copied')}</span>
                     ) : (
                       <span className="text-alert">
-                        Copying did not work here. The link:{' '}
+                        {t('figures.followUps.copyFailed')}{' '}
                         <span className="break-all font-mono font-normal text-ink">{f.rebookUrl}</span>
                       </span>
                     )}
@@ -281,13 +302,9 @@ export function FollowUpsPage() {
 
       <ConfirmDialog
         open={confirm !== null}
-        title="Mark as given up?"
-        message={
-          confirm
-            ? `${confirm.item} for ${confirm.visitor.name} leaves the open list, and the re-booking link stops working.`
-            : ''
-        }
-        confirmLabel="Mark as given up"
+        title={t('figures.followUps.giveUpTitle')}
+        message={confirm ? t('figures.followUps.giveUpText', { item: confirm.item, name: confirm.visitor.name }) : ''}
+        confirmLabel={t('figures.followUps.giveUp')}
         busy={setStatus.isPending}
         onCancel={() => setConfirm(null)}
         onConfirm={() => {
@@ -300,11 +317,11 @@ export function FollowUpsPage() {
         }}
       >
         <TextAreaField
-          label="Note (optional)"
+          label={t('figures.followUps.noteLabel')}
           value={note}
           maxLength={300}
           onChange={(e) => setNote(e.target.value)}
-          hint="For example: the part is no longer made."
+          hint={t('figures.followUps.noteHint')}
         />
       </ConfirmDialog>
     </div>

@@ -15,7 +15,9 @@ import { impactKeys } from '../../features/impact/api/keys';
 import { usePreviewImport } from '../../features/impact/api/preview-import';
 import { useStartImport } from '../../features/impact/api/start-import';
 import { ImportProgress } from '../../features/impact/components/import-progress';
-import { IMPORT_FIELD_WORDS, KIND_WORDS } from '../../features/impact/components/import-words';
+import { fieldWord, kindWord } from '../../features/impact/components/import-words';
+import { intlLocale } from '../../../../shared/format';
+import { useLanguage, useT } from '../../lib/i18n';
 import { queryClient } from '../../lib/query-client';
 
 export const loader = ({ params }: LoaderFunctionArgs) =>
@@ -30,6 +32,9 @@ const matchByName = (header: string[]) =>
  * holds what, with its first rows beside), start, and watch it go; refused rows are listed with their reasons.
  */
 export function GroupImportPage() {
+  const t = useT();
+  const lang = useLanguage();
+  const mb = IMPORT_LIMITS.maxBytes / 1024 / 1024;
   const groupId = Number(useParams().groupId);
   const { data: group } = useSuspenseQuery(groupSettingsQuery(groupId));
   const [file, setFile] = useState<File | null>(null);
@@ -74,23 +79,17 @@ export function GroupImportPage() {
     <div>
       <div className="mb-2">
         <h1 className="text-2xl sm:text-3xl">{group.name}</h1>
-        <p className="mt-1 text-ink-soft">
-          Bring in repairs recorded before Mendery, so the figures tell the whole story. Each record becomes an item in
-          a past session of its date.
-        </p>
+        <p className="mt-1 text-ink-soft">{t('figures.import.lead')}</p>
       </div>
       <GroupTabs groupId={groupId} />
 
       <div className="grid gap-6 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
         <div className="min-w-0 space-y-6">
           <Card>
-            <h2 className="text-lg">1. Choose a file</h2>
-            <p className="mt-1 text-sm text-ink-soft">
-              An Open Repair Data file (version 0.3 or 0.2), or a spreadsheet saved as CSV, up to{' '}
-              {IMPORT_LIMITS.maxBytes / 1024 / 1024} MB. A record already brought in is not added twice.
-            </p>
+            <h2 className="text-lg">{t('figures.import.step1')}</h2>
+            <p className="mt-1 text-sm text-ink-soft">{t('figures.import.fileHint', { mb })}</p>
             <label className="mt-3 block font-semibold" htmlFor="import-file">
-              CSV file
+              {t('figures.import.file')}
             </label>
             <input
               id="import-file"
@@ -100,33 +99,30 @@ export function GroupImportPage() {
               className="mt-1 block w-full min-h-11 rounded-lg border border-ink/20 bg-white px-3 py-2 text-base file:mr-3 file:rounded-md file:border-0 file:bg-navy/10 file:px-3 file:py-1.5 file:font-semibold file:text-navy focus:outline-none focus-visible:ring-2 focus-visible:ring-copper"
             />
             <div className="mt-3 space-y-2">
-              {tooBig && (
-                <Alert tone="error">
-                  This file is over {IMPORT_LIMITS.maxBytes / 1024 / 1024} MB. Split it into smaller files by year.
-                </Alert>
-              )}
-              {preview.isPending && <Spinner label="Reading the file…" />}
+              {tooBig && <Alert tone="error">{t('figures.import.tooBig', { mb })}</Alert>}
+              {preview.isPending && <Spinner label={t('figures.import.reading')} />}
               {preview.error && <Alert tone="error">{preview.error.message}</Alert>}
-              {look && <Alert tone="info">{KIND_WORDS[look.kind]}</Alert>}
+              {look && <Alert tone="info">{kindWord(t, look.kind)}</Alert>}
             </div>
           </Card>
 
           {look?.kind === 'plain' && (
             <Card>
-              <h2 className="text-lg">2. Say which column holds what</h2>
-              <p className="mt-1 text-sm text-ink-soft">
-                Record number, outcome and session date are needed. Outcomes are read as Fixed, Repairable, End of life
-                or Unknown; dates as YYYY-MM-DD.
-              </p>
+              <h2 className="text-lg">{t('figures.import.step2')}</h2>
+              <p className="mt-1 text-sm text-ink-soft">{t('figures.import.columnsHint')}</p>
               <div className="mt-3 grid gap-3 sm:grid-cols-2">
                 {IMPORT_FIELDS.filter((f) => f !== 'group_identifier').map((f: ImportField) => (
                   <SelectField
                     key={f}
-                    label={`${IMPORT_FIELD_WORDS[f]}${REQUIRED_FIELDS.includes(f) ? ' (needed)' : ''}`}
+                    label={
+                      REQUIRED_FIELDS.includes(f)
+                        ? t('figures.import.needed', { field: fieldWord(t, f) })
+                        : fieldWord(t, f)
+                    }
                     value={mapping[f] ?? ''}
                     onChange={(e) => setMapping((m) => ({ ...m, [f]: e.target.value }))}
                   >
-                    <option value="">Not in this sheet</option>
+                    <option value="">{t('figures.import.notInSheet')}</option>
                     {look.header.map((h) => (
                       <option key={h} value={h}>
                         {h}
@@ -135,11 +131,11 @@ export function GroupImportPage() {
                   </SelectField>
                 ))}
               </div>
-              <h3 className="mt-5 font-bold">The first rows</h3>
+              <h3 className="mt-5 font-bold">{t('figures.import.firstRows')}</h3>
               <div
                 className="mt-2 overflow-x-auto rounded-lg ring-1 ring-ink/10"
                 tabIndex={0}
-                aria-label="The first rows"
+                aria-label={t('figures.import.firstRows')}
               >
                 <table className="min-w-full text-left text-sm">
                   <thead className="bg-paper">
@@ -169,10 +165,14 @@ export function GroupImportPage() {
 
           {look && (
             <Card>
-              <h2 className="text-lg">{look.kind === 'plain' ? '3.' : '2.'} Bring the records in</h2>
+              <h2 className="text-lg">{t('figures.import.stepGo', { n: look.kind === 'plain' ? 3 : 2 })}</h2>
               {missing.length > 0 && (
                 <p className="mt-1 text-sm font-semibold text-alert">
-                  Choose a column for: {missing.map((f) => IMPORT_FIELD_WORDS[f]).join(', ')}.
+                  {t('figures.import.chooseFor', {
+                    fields: new Intl.ListFormat(intlLocale(lang), { type: 'conjunction' }).format(
+                      missing.map((f) => fieldWord(t, f)),
+                    ),
+                  })}
                 </p>
               )}
               {start.error && (
@@ -181,14 +181,14 @@ export function GroupImportPage() {
                 </div>
               )}
               <Button className="mt-3" onClick={begin} busy={start.isPending} disabled={missing.length > 0 || !!jobId}>
-                Bring the records in
+                {t('figures.import.go')}
               </Button>
             </Card>
           )}
 
           {jobId !== null && (
             <Card>
-              <h2 className="sr-only">Progress</h2>
+              <h2 className="sr-only">{t('figures.import.progress')}</h2>
               {job.isPending && <Spinner />}
               {job.error && <Alert tone="error">{job.error.message}</Alert>}
               {job.data && <ImportProgress job={job.data} />}
@@ -197,13 +197,11 @@ export function GroupImportPage() {
         </div>
 
         <Card className="min-w-0 self-start">
-          <h2 className="text-lg">Earlier imports</h2>
+          <h2 className="text-lg">{t('figures.import.earlier')}</h2>
           {earlier.isPending && <Spinner />}
           {earlier.error && <Alert tone="error">{earlier.error.message}</Alert>}
           {earlier.data?.length === 0 && (
-            <EmptyState title="Nothing brought in yet">
-              Files you bring in are listed here with what came of them.
-            </EmptyState>
+            <EmptyState title={t('figures.import.nothingYet')}>{t('figures.import.nothingYetText')}</EmptyState>
           )}
           <ul className="mt-2 divide-y divide-ink/5">
             {earlier.data?.map((j) => (
@@ -215,10 +213,11 @@ export function GroupImportPage() {
                 >
                   <span className="font-semibold text-navy">{j.fileName}</span>
                   <span className="text-sm text-ink-soft">
-                    {new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeZone: group.timeZone }).format(
-                      new Date(j.createdAt),
-                    )}{' '}
-                    · {j.imported} brought in · {j.skipped} here already · {j.refused} refused
+                    {new Intl.DateTimeFormat(intlLocale(lang), {
+                      dateStyle: 'medium',
+                      timeZone: group.timeZone,
+                    }).format(new Date(j.createdAt))}{' '}
+                    · {t('figures.import.counts', { imported: j.imported, skipped: j.skipped, refused: j.refused })}
                   </span>
                 </button>
               </li>

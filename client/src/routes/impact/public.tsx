@@ -7,15 +7,9 @@ import type { Method, PublicImpact } from '../../features/impact/api/types';
 import { publicImpactQuery, usePublicImpact } from '../../features/impact/api/get-public-impact';
 import { queryClient } from '../../lib/query-client';
 import { ApiError } from '../../lib/api';
-import {
-  ChartCard,
-  FactorTable,
-  linkButton,
-  longMonth,
-  monthLabel,
-  oneDp,
-  whole,
-} from '../../features/impact/components/display';
+import { ChartCard, FactorTable, linkButton, useFormats } from '../../features/impact/components/display';
+import { trParts, useLanguage, useT } from '../../lib/i18n';
+import { intlLocale } from '../../../../shared/format';
 import { WhenVisible } from '../../components/ui/when-visible';
 import { MethodNotes } from '../../features/impact/components/method-notes';
 import { ImpactStory } from '../../features/impact/components/impact-story';
@@ -35,11 +29,12 @@ export const loader = ({ params }: LoaderFunctionArgs) => {
 
 /** A group that does not exist is a page of its own; anything else failing says so and suggests trying again. */
 export function ErrorBoundary() {
+  const t = useT();
   const err = useRouteError();
   if (err instanceof ApiError && err.status === 404) return <NotFound />;
   return (
-    <Alert tone="error" title="The figures could not be loaded">
-      {err instanceof Error ? err.message : ''} Try again in a moment.
+    <Alert tone="error" title={t('figures.public.loadFailed')}>
+      {err instanceof Error ? err.message : ''} {t('figures.public.tryAgain')}
     </Alert>
   );
 }
@@ -51,30 +46,24 @@ export function PublicImpactPage() {
 }
 
 function PublicFigures({ groupId }: { groupId?: number }) {
+  const t = useT();
   const { data: d } = usePublicImpact(groupId);
-  const title = d.group ? `${d.group.name}${d.group.town ? `, ${d.group.town}` : ''}` : 'All groups on Mendery';
+  const title = d.group ? `${d.group.name}${d.group.town ? `, ${d.group.town}` : ''}` : t('figures.public.allGroups');
 
   return (
     <div className="space-y-6">
-      <title>{`Impact · ${title}`}</title>
+      <title>{t('figures.public.docTitle', { title })}</title>
       {groupId !== undefined && (
         <Link to={paths.publicImpact()} className="text-sm font-bold text-navy underline">
-          ← All groups on Mendery
+          ← {t('figures.public.allGroups')}
         </Link>
       )}
-      <PageTitle
-        title={title}
-        lead={
-          d.group
-            ? 'What volunteers and visitors have repaired together at this group’s sessions.'
-            : 'What volunteers and visitors have repaired together at the community repair sessions on Mendery.'
-        }
-      />
+      <PageTitle title={title} lead={d.group ? t('figures.public.leadGroup') : t('figures.public.leadAll')} />
       {groupId === undefined && <GroupLinks />}
 
       {d.items === 0 ? (
-        <EmptyState title="No repairs counted yet" icon="▤">
-          Figures appear here after the first session, once the fixers have recorded what happened to each item.
+        <EmptyState title={t('figures.public.emptyTitle')} icon="▤">
+          {t('figures.public.empty')}
         </EmptyState>
       ) : (
         <>
@@ -85,7 +74,7 @@ function PublicFigures({ groupId }: { groupId?: number }) {
 
       <div className="flex flex-wrap gap-2">
         <Link to={paths.events()} className={`${linkButton} bg-copper text-white hover:bg-copper-dark`}>
-          Find a repair session
+          {t('figures.public.findSession')}
         </Link>
       </div>
 
@@ -95,15 +84,18 @@ function PublicFigures({ groupId }: { groupId?: number }) {
 }
 
 function NotFound() {
+  const t = useT();
   return (
     <div className="space-y-4">
-      <PageTitle title="Group not found" />
-      <Alert tone="info" title="We could not find that group">
-        The link may be out of date.{' '}
-        <Link to={paths.publicImpact()} className="font-bold underline">
-          See the figures of all groups
-        </Link>
-        .
+      <PageTitle title={t('figures.public.notFound')} />
+      <Alert tone="info" title={t('figures.public.notFoundTitle')}>
+        {trParts('figures.public.notFoundText', {
+          link: (
+            <Link to={paths.publicImpact()} className="font-bold underline">
+              {t('figures.public.notFoundLink')}
+            </Link>
+          ),
+        })}
       </Alert>
     </div>
   );
@@ -115,6 +107,9 @@ const KgByMonthGraphic = lazy(() => graphics().then((m) => ({ default: m.KgByMon
 const TopCategoriesGraphic = lazy(() => graphics().then((m) => ({ default: m.TopCategoriesGraphic })));
 
 function Charts({ d }: { d: PublicImpact }) {
+  const t = useT();
+  const { whole, oneDp, monthLabel, longMonth } = useFormats();
+  const list = new Intl.ListFormat(intlLocale(useLanguage()), { type: 'conjunction' });
   const months = d.byMonth.map((m) => ({
     month: m.month,
     label: monthLabel(m.month),
@@ -130,15 +125,20 @@ function Charts({ d }: { d: PublicImpact }) {
     <div className="grid gap-4 lg:grid-cols-2">
       <ChartCard
         level="h2"
-        title="Kilograms kept out of the bin, by month"
+        title={t('figures.public.kgTitle')}
         summary={
           heaviest
-            ? `${oneDp.format(d.kgDiverted)} kg over ${months.length} ${months.length === 1 ? 'month' : 'months'}; the most in ${longMonth(heaviest.month)} (${oneDp.format(heaviest.kg)} kg).`
-            : 'No months to show yet.'
+            ? t('figures.public.kgSummary', {
+                kg: oneDp.format(d.kgDiverted),
+                n: months.length,
+                month: longMonth(heaviest.month),
+                most: oneDp.format(heaviest.kg),
+              })
+            : t('figures.public.noMonths')
         }
         table={
           <SimpleTable
-            head={['Month', 'kg']}
+            head={[t('figures.col.month'), t('figures.col.kg')]}
             rows={months.map((m) => ({ key: m.month, cells: [longMonth(m.month), oneDp.format(m.kg)] }))}
           />
         }
@@ -150,18 +150,17 @@ function Charts({ d }: { d: PublicImpact }) {
 
       <ChartCard
         level="h2"
-        title="The items most often brought in"
+        title={t('figures.public.topTitle')}
         summary={
           top.length
-            ? `Most often: ${top
-                .slice(0, 3)
-                .map((c) => `${c.name.toLowerCase()} (${c.items})`)
-                .join(', ')}.`
-            : 'No categories yet.'
+            ? t('figures.public.topSummary', {
+                list: list.format(top.slice(0, 3).map((c) => `${c.name} (${whole.format(c.items)})`)),
+              })
+            : t('figures.public.noCategories')
         }
         table={
           <SimpleTable
-            head={['Category', 'Items', 'Fixed']}
+            head={[t('figures.col.category'), t('figures.col.items'), t('figures.col.fixed')]}
             rows={d.byCategory.map((c) => ({
               key: String(c.categoryId),
               cells: [c.name, whole.format(c.items), whole.format(c.fixed)],
@@ -211,20 +210,19 @@ function SimpleTable({ head, rows }: { head: string[]; rows: { key: string; cell
 }
 
 function MethodCard({ method }: { method: Method }) {
+  const t = useT();
   return (
     <Card className="p-4 sm:p-5">
       <section aria-labelledby="method-heading" className="space-y-3 text-sm leading-relaxed">
         <h2 id="method-heading" className="text-lg">
-          How we count
+          {t('figures.public.howWeCount')}
         </h2>
         <MethodNotes method={method} />
-        <p className="text-ink-soft">
-          These figures are estimates. They count items, not people: nobody who brought an item is named here.
-        </p>
+        <p className="text-ink-soft">{t('figures.public.estimates')}</p>
         {method.categories.length > 0 && (
           <details>
             <summary className="min-h-11 cursor-pointer py-2 font-bold text-navy">
-              Weights and factors, with their sources
+              {t('figures.public.factors')}
             </summary>
             <div className="overflow-x-auto">
               <FactorTable
@@ -240,10 +238,11 @@ function MethodCard({ method }: { method: Method }) {
 
 /** On the network page: each group's own figures, one tap away. */
 function GroupLinks() {
+  const t = useT();
   const groups = usePublicGroups();
   if (!groups.data?.length) return null;
   return (
-    <nav aria-label="Groups" className="flex flex-wrap gap-2">
+    <nav aria-label={t('figures.public.groups')} className="flex flex-wrap gap-2">
       {groups.data.map((g) => (
         <Link
           key={g.id}

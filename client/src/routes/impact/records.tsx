@@ -1,33 +1,26 @@
 import { useMemo } from 'react';
 import { Link, redirect, useSearchParams, type LoaderFunctionArgs } from 'react-router';
-import {
-  BARRIER_LABELS,
-  BARRIERS,
-  OUTCOME_LABELS,
-  OUTCOMES,
-  type Barrier,
-  type Outcome,
-} from '../../../../shared/event-day/constants';
+import { BARRIERS, OUTCOMES, type Barrier, type Outcome } from '../../../../shared/event-day/constants';
+import { intlLocale } from '../../../../shared/format';
 import { EmptyState, PageTitle } from '../../components/ui/feedback';
 import { paths } from '../../config/paths';
 import { categoriesQuery, useCategories } from '../../features/categories/api/get-categories';
 import type { RecordsFilter } from '../../../../shared/api/impact';
 import type { RecordRow } from '../../features/impact/api/types';
+import type { Language } from '../../../../shared/i18n/languages';
 import { recordsQuery, useRecords } from '../../features/impact/api/get-records';
 import { groupsWithRole, meQuery } from '../../lib/auth';
 import { queryClient } from '../../lib/query-client';
 import { queryString as qs } from '../../lib/query-string';
-import { isoDate, oneDp, positiveInt, whole } from '../../features/impact/components/display';
+import { formatsFor, isoDate, positiveInt } from '../../features/impact/components/display';
+import { OUTCOME_KEYS } from '../../features/impact/components/impact-story';
+import { useLanguage, useT } from '../../lib/i18n';
 
 const PAGE_SIZE = 50;
-const dayFormat = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric' });
-const isoDayFormat = new Intl.DateTimeFormat('en-GB', {
-  day: 'numeric',
-  month: 'short',
-  year: 'numeric',
-  timeZone: 'UTC',
-});
-const monthFormat = new Intl.DateTimeFormat('en-GB', { month: 'long', year: 'numeric', timeZone: 'UTC' });
+const DAY = { day: 'numeric', month: 'short', year: 'numeric' } as const;
+const dayFormat = (lang: Language) => new Intl.DateTimeFormat(intlLocale(lang), DAY);
+const isoDay = (lang: Language, d: string) =>
+  new Intl.DateTimeFormat(intlLocale(lang), { ...DAY, timeZone: 'UTC' }).format(new Date(`${d}T00:00:00Z`));
 
 const isOutcome = (raw: string | null): raw is Outcome | 'none' =>
   raw === 'none' || (OUTCOMES as readonly string[]).includes(raw ?? '');
@@ -75,11 +68,16 @@ export const loader = async ({ request }: LoaderFunctionArgs) => {
   ]);
 };
 
-const outcomeText = (o: Outcome | 'none') => (o === 'none' ? 'No outcome recorded' : OUTCOME_LABELS[o]);
+type T = ReturnType<typeof useT>;
+const outcomeText = (t: T, o: Outcome | 'none' | null) =>
+  t(o && o !== 'none' ? OUTCOME_KEYS[o] : 'figures.records.none');
 const itemLabel = (r: RecordRow) => [r.brand, r.model].filter(Boolean).join(' ');
 
 /** The records behind a figure of the impact dashboard, 50 a page. */
 export function ImpactRecordsPage() {
+  const t = useT();
+  const lang = useLanguage();
+  const { whole, longMonth } = formatsFor(lang);
   const filter = useRecordsFilter();
   const { data: records } = useRecords(filter);
   const { data: categories } = useCategories();
@@ -88,41 +86,47 @@ export function ImpactRecordsPage() {
 
   const categoryName = filter.categoryId
     ? (categories.find((c) => c.id === filter.categoryId)?.name ??
-      (first?.categoryName || `category ${filter.categoryId}`))
+      (first?.categoryName || t('figures.records.categoryNo', { id: filter.categoryId })))
     : undefined;
   const chips: { key: keyof RecordsFilter; label: string }[] = [];
-  if (filter.eventId) chips.push({ key: 'eventId', label: `Session: ${first?.eventTitle ?? `no. ${filter.eventId}`}` });
-  if (filter.outcome) chips.push({ key: 'outcome', label: `Outcome: ${outcomeText(filter.outcome)}` });
-  if (filter.categoryId) chips.push({ key: 'categoryId', label: `Category: ${categoryName}` });
-  if (filter.barrier) chips.push({ key: 'barrier', label: `Why: ${BARRIER_LABELS[filter.barrier]}` });
-  if (filter.month)
-    chips.push({ key: 'month', label: `Month: ${monthFormat.format(new Date(`${filter.month}-01T00:00:00Z`))}` });
-  if (filter.from)
-    chips.push({ key: 'from', label: `From ${isoDayFormat.format(new Date(`${filter.from}T00:00:00Z`))}` });
-  if (filter.to) chips.push({ key: 'to', label: `To ${isoDayFormat.format(new Date(`${filter.to}T00:00:00Z`))}` });
+  const chip = (key: keyof RecordsFilter, value: string) =>
+    chips.push({ key, label: t(`figures.records.chip.${key}`, { value }) });
+  if (filter.eventId) chip('eventId', first?.eventTitle ?? t('figures.records.sessionNo', { id: filter.eventId }));
+  if (filter.outcome) chip('outcome', outcomeText(t, filter.outcome));
+  if (filter.categoryId) chip('categoryId', categoryName ?? '');
+  if (filter.barrier) chip('barrier', t(`fixer.barrier.${filter.barrier}`));
+  if (filter.month) chip('month', longMonth(filter.month));
+  if (filter.from) chip('from', isoDay(lang, filter.from));
+  if (filter.to) chip('to', isoDay(lang, filter.to));
 
   const without = (key: keyof RecordsFilter) =>
     paths.impactRecords(qs({ ...filter, [key]: undefined, page: undefined }));
   const atPage = (n: number) => paths.impactRecords(qs({ ...filter, page: n > 1 ? n : undefined }));
   const back = filter.groupId ? paths.impact(filter.groupId) : paths.networkImpact();
   const backQuery = qs({ eventId: filter.groupId ? filter.eventId : undefined, from: filter.from, to: filter.to });
-  const scope = filter.groupId ? (first?.groupName ?? 'this group') : 'all groups';
+  const scope = filter.groupId ? first?.groupName : undefined;
 
   return (
     <div>
       <Link to={`${back}${backQuery}`} className="text-sm font-bold text-navy underline">
-        ← Back to the impact figures
+        ← {t('figures.records.back')}
       </Link>
       <div className="mt-2">
-        <PageTitle title="Repair records" lead={`The items behind the figures, for ${scope}. Newest first.`} />
+        <PageTitle
+          title={t('figures.records.title')}
+          lead={t('figures.records.lead', {
+            scope: scope ?? '',
+            which: filter.groupId ? (scope ? 'named' : 'this') : 'all',
+          })}
+        />
       </div>
 
-      <section aria-label="Filter" className="mb-4 rounded-xl bg-white p-4 ring-1 ring-ink/5">
+      <section aria-label={t('figures.records.filter')} className="mb-4 rounded-xl bg-white p-4 ring-1 ring-ink/5">
         <p className="text-sm" data-testid="records-filter">
           <span className="font-bold">
-            {whole.format(records.total)} {records.total === 1 ? 'item' : 'items'}
+            {t('figures.records.count', { n: records.total, count: whole.format(records.total) })}
           </span>
-          {chips.length === 0 ? ' — every item checked in, all dates.' : ' matching:'}
+          {chips.length === 0 ? ` — ${t('figures.records.everything')}` : ` ${t('figures.records.matching')}`}
         </p>
         {chips.length > 0 && (
           <ul className="mt-2 flex flex-wrap gap-2">
@@ -135,7 +139,7 @@ export function ImpactRecordsPage() {
                 <Link
                   to={without(c.key)}
                   className="inline-flex size-7 items-center justify-center rounded-full hover:bg-navy/10"
-                  aria-label={`Remove the filter ${c.label}`}
+                  aria-label={t('figures.records.remove', { label: c.label })}
                 >
                   <span aria-hidden>✕</span>
                 </Link>
@@ -146,13 +150,13 @@ export function ImpactRecordsPage() {
       </section>
 
       {records.records.length === 0 ? (
-        <EmptyState title={page > 1 ? 'No records on this page' : 'No records match'} icon="▤">
+        <EmptyState title={page > 1 ? t('figures.records.emptyPage') : t('figures.records.empty')} icon="▤">
           {page > 1 ? (
             <Link to={atPage(1)} className="font-bold text-navy underline">
-              Go to the first page
+              {t('figures.records.firstPage')}
             </Link>
           ) : (
-            'Remove a filter above to see more.'
+            t('figures.records.removeFilter')
           )}
         </EmptyState>
       ) : (
@@ -166,13 +170,15 @@ export function ImpactRecordsPage() {
 }
 
 function Kg({ row }: { row: RecordRow }) {
+  const t = useT();
+  const { oneDp } = formatsFor(useLanguage());
   return (
     <span className="tabular-nums">
       {oneDp.format(row.kg)}
       {row.weighedKg === null && (
-        <span className="text-ink-soft" title="Average weight of its kind: not weighed at the desk">
+        <span className="text-ink-soft" title={t('figures.records.avgTitle')}>
           {' '}
-          (avg.)
+          {t('figures.records.avg')}
         </span>
       )}
     </span>
@@ -180,6 +186,7 @@ function Kg({ row }: { row: RecordRow }) {
 }
 
 function OutcomeBadge({ row }: { row: RecordRow }) {
+  const t = useT();
   const tone =
     row.outcome === 'fixed'
       ? 'bg-sage-light text-sage'
@@ -190,10 +197,17 @@ function OutcomeBadge({ row }: { row: RecordRow }) {
           : row.outcome === 'end-of-life'
             ? 'bg-ink/10 text-ink'
             : 'bg-white text-ink-soft ring-1 ring-ink/15';
-  return <span className={`inline-block rounded-full px-2 py-0.5 text-xs font-bold ${tone}`}>{row.outcomeLabel}</span>;
+  return (
+    <span className={`inline-block rounded-full px-2 py-0.5 text-xs font-bold ${tone}`}>
+      {outcomeText(t, row.outcome)}
+    </span>
+  );
 }
 
 function RecordsTable({ rows, showGroup }: { rows: RecordRow[]; showGroup: boolean }) {
+  const t = useT();
+  const day = dayFormat(useLanguage());
+  const why = (r: RecordRow) => (r.barrier ? t(`fixer.barrier.${r.barrier}`) : null);
   return (
     <>
       <div className="hidden overflow-x-auto rounded-xl bg-white ring-1 ring-ink/5 md:block">
@@ -201,34 +215,32 @@ function RecordsTable({ rows, showGroup }: { rows: RecordRow[]; showGroup: boole
           <thead>
             <tr className="border-b border-ink/10 text-left text-ink-soft">
               <th scope="col" className="px-3 py-2 font-semibold">
-                Date
+                {t('figures.records.col.date')}
               </th>
               <th scope="col" className="px-3 py-2 font-semibold">
-                Session
+                {t('figures.records.col.session')}
               </th>
               <th scope="col" className="px-3 py-2 font-semibold">
-                Item
+                {t('figures.records.col.item')}
               </th>
               <th scope="col" className="px-3 py-2 font-semibold">
-                Visitor
+                {t('figures.records.col.visitor')}
               </th>
               <th scope="col" className="px-3 py-2 font-semibold">
-                Outcome
+                {t('figures.records.col.outcome')}
               </th>
               <th scope="col" className="px-3 py-2 font-semibold">
-                Why not mended
+                {t('figures.records.col.why')}
               </th>
               <th scope="col" className="px-3 py-2 text-right font-semibold">
-                kg
+                {t('figures.col.kg')}
               </th>
             </tr>
           </thead>
           <tbody className="divide-y divide-ink/5 align-top">
             {rows.map((r) => (
               <tr key={r.itemId} data-testid="record-row">
-                <td className="whitespace-nowrap px-3 py-2 tabular-nums">
-                  {dayFormat.format(new Date(r.eventStartsAt))}
-                </td>
+                <td className="whitespace-nowrap px-3 py-2 tabular-nums">{day.format(new Date(r.eventStartsAt))}</td>
                 <td className="px-3 py-2">
                   {r.eventTitle}
                   {showGroup && <span className="block text-xs text-ink-soft">{r.groupName}</span>}
@@ -243,7 +255,7 @@ function RecordsTable({ rows, showGroup }: { rows: RecordRow[]; showGroup: boole
                 <td className="px-3 py-2">
                   <OutcomeBadge row={r} />
                 </td>
-                <td className="px-3 py-2">{r.barrierLabel ?? <span className="text-ink-soft">—</span>}</td>
+                <td className="px-3 py-2">{why(r) ?? <span className="text-ink-soft">—</span>}</td>
                 <td className="whitespace-nowrap px-3 py-2 text-right">
                   <Kg row={r} />
                 </td>
@@ -266,22 +278,22 @@ function RecordsTable({ rows, showGroup }: { rows: RecordRow[]; showGroup: boole
               <OutcomeBadge row={r} />
             </div>
             <dl className="mt-2 grid grid-cols-[auto_1fr] gap-x-3 gap-y-0.5 text-sm">
-              <dt className="text-ink-soft">Date</dt>
-              <dd>{dayFormat.format(new Date(r.eventStartsAt))}</dd>
-              <dt className="text-ink-soft">Session</dt>
+              <dt className="text-ink-soft">{t('figures.records.col.date')}</dt>
+              <dd>{day.format(new Date(r.eventStartsAt))}</dd>
+              <dt className="text-ink-soft">{t('figures.records.col.session')}</dt>
               <dd className="min-w-0">
                 {r.eventTitle}
                 {showGroup ? ` · ${r.groupName}` : ''}
               </dd>
-              <dt className="text-ink-soft">Visitor</dt>
+              <dt className="text-ink-soft">{t('figures.records.col.visitor')}</dt>
               <dd>{r.visitor}</dd>
-              {r.barrierLabel && (
+              {r.barrier && (
                 <>
-                  <dt className="text-ink-soft">Why not mended</dt>
-                  <dd>{r.barrierLabel}</dd>
+                  <dt className="text-ink-soft">{t('figures.records.col.why')}</dt>
+                  <dd>{why(r)}</dd>
                 </>
               )}
-              <dt className="text-ink-soft">kg</dt>
+              <dt className="text-ink-soft">{t('figures.col.kg')}</dt>
               <dd>
                 <Kg row={r} />
               </dd>
@@ -294,6 +306,8 @@ function RecordsTable({ rows, showGroup }: { rows: RecordRow[]; showGroup: boole
 }
 
 function Pagination({ total, page, atPage }: { total: number; page: number; atPage: (n: number) => string }) {
+  const t = useT();
+  const { whole } = formatsFor(useLanguage());
   const pages = Math.max(1, Math.ceil(total / PAGE_SIZE));
   const start = (page - 1) * PAGE_SIZE + 1;
   const end = Math.min(total, page * PAGE_SIZE);
@@ -303,28 +317,34 @@ function Pagination({ total, page, atPage }: { total: number; page: number; atPa
   const endPill =
     'inline-flex min-h-11 items-center rounded-lg bg-white px-4 font-bold text-ink-soft ring-1 ring-ink/15';
   return (
-    <nav aria-label="Pages" className="mt-4 flex flex-wrap items-center justify-between gap-3">
+    <nav aria-label={t('figures.records.pages')} className="mt-4 flex flex-wrap items-center justify-between gap-3">
       <p className="text-sm text-ink-soft">
-        {whole.format(start)}–{whole.format(end)} of {whole.format(total)} · page {page} of {pages}
+        {t('figures.records.range', {
+          start: whole.format(start),
+          end: whole.format(end),
+          total: whole.format(total),
+          page,
+          pages,
+        })}
       </p>
       {pages > 1 && (
         <div className="flex gap-2">
           {page > 1 ? (
             <Link to={atPage(page - 1)} className={pill} rel="prev">
-              ← Previous
+              ← {t('figures.records.previous')}
             </Link>
           ) : (
             <span className={endPill} aria-hidden>
-              ← Previous
+              ← {t('figures.records.previous')}
             </span>
           )}
           {page < pages ? (
             <Link to={atPage(page + 1)} className={pill} rel="next">
-              Next →
+              {t('figures.records.next')} →
             </Link>
           ) : (
             <span className={endPill} aria-hidden>
-              Next →
+              {t('figures.records.next')} →
             </span>
           )}
         </div>

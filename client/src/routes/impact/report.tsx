@@ -4,6 +4,7 @@ import type { EventReport } from '../../features/impact/api/types';
 import { paths } from '../../config/paths';
 import { eventReportQuery, useEventReport } from '../../features/impact/api/get-event-report';
 import { groupReportQuery, useGroupReport } from '../../features/impact/api/get-group-report';
+import { useT } from '../../lib/i18n';
 import { queryClient } from '../../lib/query-client';
 import { ReportBody } from '../../features/impact/components/report-body';
 
@@ -26,31 +27,34 @@ export const loader = ({ params, request }: LoaderFunctionArgs) => {
  * it was counted. Printed from the browser; the toolbar stays on screen only.
  */
 export function EventReportPage() {
+  const t = useT();
   const eventId = Number(useParams().eventId);
   return (
     <ReportShell
       report={useEventReport(eventId).data}
-      back={{ to: paths.manageEvent(eventId), label: '← Back to the session' }}
+      back={{ to: paths.manageEvent(eventId), label: `← ${t('figures.report.backSession')}` }}
     />
   );
 }
 
 /** The same report for a group's sessions between two dates (?from=&to=). */
 export function GroupReportPage() {
+  const t = useT();
   const groupId = Number(useParams().groupId);
   const [params] = useSearchParams();
   return (
     <ReportShell
       report={useGroupReport(groupId, params.get('from') || undefined, params.get('to') || undefined).data}
-      back={{ to: paths.impact(groupId), label: '← Back to the impact page' }}
+      back={{ to: paths.impact(groupId), label: `← ${t('figures.report.backImpact')}` }}
     />
   );
 }
 
 function ReportShell({ report, back }: { report: EventReport; back: { to: string; label: string } }) {
+  const t = useT();
   return (
     <div className="min-h-dvh bg-neutral-200 text-ink print:min-h-0 print:bg-white">
-      <title>{`Report · ${report.event.title}`}</title>
+      <title>{t('figures.report.docTitle', { title: report.event.title })}</title>
       <style>{PRINT_CSS}</style>
 
       <div className="sticky top-0 z-10 border-b border-ink/10 bg-white shadow-sm print:hidden">
@@ -58,7 +62,7 @@ function ReportShell({ report, back }: { report: EventReport; back: { to: string
           <Link to={back.to} className="text-sm font-bold text-navy underline">
             {back.label}
           </Link>
-          <Button onClick={() => window.print()}>Print or save as PDF</Button>
+          <Button onClick={() => window.print()}>{t('figures.report.print')}</Button>
         </div>
       </div>
 

@@ -5,28 +5,28 @@ import { TextField } from '../../../components/ui/field';
 import { useImpactSettings } from '../api/get-impact-settings';
 import { useSetImpactSettings } from '../api/set-impact-settings';
 import { ApiError } from '../../../lib/api';
+import { useT } from '../../../lib/i18n';
+import { useFormats } from './display';
 
 export function DisplacementCard() {
+  const t = useT();
   const { data: settings } = useImpactSettings();
   return (
     <Card className="p-4 sm:p-5">
       <section aria-labelledby="displacement-heading">
         <h2 id="displacement-heading" className="text-lg">
-          Displacement factor
+          {t('figures.displacementCard.heading')}
         </h2>
-        <p className="mb-3 text-sm text-ink-soft">
-          The share of repairs that really spare a purchase, between 0 and 1. It scales every emissions figure on
-          Mendery, for every group.
-        </p>
+        <p className="mb-3 text-sm text-ink-soft">{t('figures.displacementCard.lead')}</p>
         <DisplacementForm current={settings.displacement} />
       </section>
     </Card>
   );
 }
 
-const DISPLACEMENT_MESSAGE = 'Enter a number between 0 and 1, for example 0.5.';
-
 function DisplacementForm({ current }: { current: number }) {
+  const t = useT();
+  const { whole } = useFormats();
   const save = useSetImpactSettings();
   const [value, setValue] = useState(() => String(current));
   const [error, setError] = useState<string | undefined>();
@@ -39,7 +39,7 @@ function DisplacementForm({ current }: { current: number }) {
     const text = value.trim().replace(',', '.');
     const n = Number(text);
     if (text === '' || !Number.isFinite(n) || n < 0 || n > 1) {
-      setError(DISPLACEMENT_MESSAGE);
+      setError(t('figures.displacementCard.invalid', { example: whole.format(0.5) }));
       return;
     }
     setError(undefined);
@@ -50,7 +50,7 @@ function DisplacementForm({ current }: { current: number }) {
     <form onSubmit={submit} noValidate className="flex flex-wrap items-start gap-3">
       <div className="w-full sm:w-48">
         <TextField
-          label="Factor (0–1)"
+          label={t('figures.displacementCard.label')}
           inputMode="decimal"
           autoComplete="off"
           value={value}
@@ -60,18 +60,20 @@ function DisplacementForm({ current }: { current: number }) {
             setSaved(null);
           }}
           error={error ?? serverField}
-          hint={`Now ${current}.`}
+          hint={t('figures.displacementCard.now', { factor: whole.format(current) })}
         />
       </div>
       <div className="sm:pt-8">
         <Button type="submit" busy={save.isPending}>
-          Save
+          {t('figures.displacementCard.save')}
         </Button>
       </div>
       <div className="w-full" aria-live="polite">
-        {saved !== null && <Alert tone="success">Saved. Emissions are now counted with a factor of {saved}.</Alert>}
+        {saved !== null && (
+          <Alert tone="success">{t('figures.displacementCard.saved', { factor: whole.format(saved) })}</Alert>
+        )}
         {save.isError && !serverField && (
-          <Alert tone="error" title="Not saved">
+          <Alert tone="error" title={t('figures.displacementCard.notSaved')}>
             {save.error.message}
           </Alert>
         )}

@@ -1,5 +1,8 @@
 import { useId, type ReactNode } from 'react';
+import { intlLocale } from '../../../../../shared/format';
+import type { Language } from '../../../../../shared/i18n/languages';
 import { Card } from '../../../components/ui/feedback';
+import { useLanguage, useT } from '../../../lib/i18n';
 import type { Method } from '../api/types';
 
 /** Number and month formats, colours and the chart frame shared by the impact pages. */
@@ -10,6 +13,37 @@ const monthFormat = new Intl.DateTimeFormat('en-GB', { month: 'short', year: 'nu
 const longMonthFormat = new Intl.DateTimeFormat('en-GB', { month: 'long', year: 'numeric', timeZone: 'UTC' });
 export const monthLabel = (m: string) => monthFormat.format(new Date(`${m}-01T00:00:00Z`));
 export const longMonth = (m: string) => longMonthFormat.format(new Date(`${m}-01T00:00:00Z`));
+
+/** The same formats in a reader's language, made once per language. */
+export interface Formats {
+  whole: Intl.NumberFormat;
+  oneDp: Intl.NumberFormat;
+  percent: (rate: number | null) => string;
+  monthLabel: (m: string) => string;
+  longMonth: (m: string) => string;
+}
+const formatsByLanguage = new Map<Language, Formats>();
+export function formatsFor(lang: Language): Formats {
+  let f = formatsByLanguage.get(lang);
+  if (!f) {
+    const locale = intlLocale(lang);
+    const pct = new Intl.NumberFormat(locale, { style: 'percent', maximumFractionDigits: 0 });
+    const short = new Intl.DateTimeFormat(locale, { month: 'short', year: 'numeric', timeZone: 'UTC' });
+    const long = new Intl.DateTimeFormat(locale, { month: 'long', year: 'numeric', timeZone: 'UTC' });
+    f = {
+      whole: new Intl.NumberFormat(locale),
+      oneDp: new Intl.NumberFormat(locale, { minimumFractionDigits: 1, maximumFractionDigits: 1 }),
+      percent: (rate) => (rate === null ? '—' : pct.format(rate)),
+      monthLabel: (m) => short.format(new Date(`${m}-01T00:00:00Z`)),
+      longMonth: (m) => long.format(new Date(`${m}-01T00:00:00Z`)),
+    };
+    formatsByLanguage.set(lang, f);
+  }
+  return f;
+}
+/** The impact formats in the active language, kept current. */
+export const useFormats = (): Formats => formatsFor(useLanguage());
+
 export const COLOURS = {
   fixed: '#5d7f6a',
   partsNeeded: '#b8612f',
@@ -17,9 +51,12 @@ export const COLOURS = {
   endOfLife: '#8d949c',
   grid: '#e7e2da',
 };
+/** A chemical formula, the same in every language. */
+const CO = 'CO';
 export const CO2E = (
   <>
-    CO<sub>2</sub>e
+    {CO}
+    <sub>2</sub>e
   </>
 );
 export const linkButton =
@@ -50,6 +87,7 @@ export function ChartCard({
   level?: 'h2' | 'h3';
 }) {
   const headingId = useId();
+  const t = useT();
   const Heading = level;
   return (
     <Card className="min-w-0 p-4 sm:p-5">
@@ -66,7 +104,7 @@ export function ChartCard({
         )}
         {table && (
           <details className="mt-2 text-sm">
-            <summary className="min-h-11 cursor-pointer py-2 font-bold text-navy">Figures as a table</summary>
+            <summary className="min-h-11 cursor-pointer py-2 font-bold text-navy">{t('figures.asTable')}</summary>
             <div className="overflow-x-auto">{table}</div>
           </details>
         )}
@@ -77,24 +115,26 @@ export function ChartCard({
 
 /** The weight and emission factor of each kind of item, with their sources. */
 export function FactorTable({ categories }: { categories: Method['categories'] }) {
+  const t = useT();
+  const { oneDp } = useFormats();
   return (
     <table className="w-full min-w-[40rem] text-sm">
       <thead>
         <tr className="border-b border-ink/10 text-left text-ink-soft">
           <th scope="col" className="py-1 pr-3 font-semibold">
-            Kind of item
+            {t('figures.factors.kind')}
           </th>
           <th scope="col" className="py-1 pr-3 text-right font-semibold">
-            Average weight (kg)
+            {t('figures.factors.weight')}
           </th>
           <th scope="col" className="py-1 pr-3 font-semibold">
-            Weight source
+            {t('figures.factors.weightSource')}
           </th>
           <th scope="col" className="py-1 pr-3 text-right font-semibold">
-            kg CO2e per kg
+            {t('figures.factors.co2ePerKg')}
           </th>
           <th scope="col" className="py-1 pr-3 font-semibold">
-            Factor source
+            {t('figures.factors.factorSource')}
           </th>
         </tr>
       </thead>
@@ -109,7 +149,7 @@ export function FactorTable({ categories }: { categories: Method['categories'] }
             <td className="py-1 pr-3 text-right tabular-nums">
               {c.co2ePerKg === null ? '—' : oneDp.format(c.co2ePerKg)}
             </td>
-            <td className="py-1 pr-3">{c.co2eSource ?? 'No sourced factor: counted as 0'}</td>
+            <td className="py-1 pr-3">{c.co2eSource ?? t('figures.factors.none')}</td>
           </tr>
         ))}
       </tbody>

@@ -2,13 +2,15 @@ import { useState } from 'react';
 import { Button } from '../../../components/ui/button';
 import { Card } from '../../../components/ui/feedback';
 import { paths } from '../../../config/paths';
+import { useT } from '../../../lib/i18n';
 
 const attr = (s: string) =>
   s.replace(/&/g, '&amp;').replace(/"/g, '&quot;').replace(/</g, '&lt;').replace(/>/g, '&gt;');
 
 export function EmbedPanel({ id, groupId, groupName }: { id: string; groupId: number; groupName?: string }) {
+  const t = useT();
   const [copied, setCopied] = useState<'ok' | 'failed' | null>(null);
-  const title = groupName ? `Repairs counted by ${groupName}` : 'Repairs counted with Mendery';
+  const title = groupName ? t('figures.embed.titleGroup', { name: groupName }) : t('figures.embed.title');
   const snippet = `<iframe src="${window.location.origin}${paths.embed(groupId)}" width="360" height="260" style="border:0" title="${attr(title)}"></iframe>`;
   const copy = async () => {
     try {
@@ -22,13 +24,10 @@ export function EmbedPanel({ id, groupId, groupName }: { id: string; groupId: nu
     <Card className="p-4 sm:p-5">
       <div id={id} className="grid gap-4 lg:grid-cols-[1fr_auto]">
         <div className="min-w-0 space-y-2">
-          <h2 className="text-lg">Your figures on your own website</h2>
-          <p className="text-sm text-ink-soft">
-            Paste this code into a page of your group’s website. The sentence and the quilt update by themselves after
-            each session and name nobody.
-          </p>
+          <h2 className="text-lg">{t('figures.embed.heading')}</h2>
+          <p className="text-sm text-ink-soft">{t('figures.embed.lead')}</p>
           <label htmlFor={`${id}-code`} className="sr-only">
-            Code to paste
+            {t('figures.embed.code')}
           </label>
           <textarea
             id={`${id}-code`}
@@ -39,24 +38,22 @@ export function EmbedPanel({ id, groupId, groupName }: { id: string; groupId: nu
             className="block w-full rounded-lg border border-ink/20 bg-paper px-3 py-2 font-mono text-xs text-ink"
           />
           <div className="flex flex-wrap items-center gap-3">
-            <Button onClick={copy}>Copy the code</Button>
+            <Button onClick={copy}>{t('figures.embed.copy')}</Button>
             <p role="status" className="text-sm font-semibold">
-              {copied === 'ok' && <span className="text-sage">Copied.</span>}
-              {copied === 'failed' && (
-                <span className="text-alert">Copying did not work here: select the code and copy it by hand.</span>
-              )}
+              {copied === 'ok' && <span className="text-sage">{t('figures.embed.copied')}</span>}
+              {copied === 'failed' && <span className="text-alert">{t('figures.embed.copyFailed')}</span>}
             </p>
           </div>
         </div>
         <div className="min-w-0">
-          <p className="mb-1 text-sm font-semibold text-ink-soft">How it will look</p>
+          <p className="mb-1 text-sm font-semibold text-ink-soft">{t('figures.embed.preview')}</p>
           <div className="max-w-full overflow-x-auto">
             <iframe
               src={paths.embed(groupId)}
               width={360}
               height={260}
               style={{ border: 0, maxWidth: '100%' }}
-              title={`How it will look: ${title}`}
+              title={t('figures.embed.previewTitle', { title })}
               className="rounded-xl bg-white"
             />
           </div>

@@ -1,68 +1,60 @@
 import { type ReactNode } from 'react';
 import { Link } from 'react-router';
-import { OUTCOME_LABELS, type Outcome } from '../../../../../shared/event-day/constants';
+import type { Outcome } from '../../../../../shared/event-day/constants';
 import type { Counts } from '../../../../../shared/impact/statistics';
 import type { RecordsFilter, StatsFilter } from '../../../../../shared/api/impact';
-import { CO2E, COLOURS, oneDp, percent, whole } from './display';
+import { trParts } from '../../../lib/i18n';
+import { CO2E, COLOURS, useFormats, type Formats } from './display';
+import { OUTCOME_KEYS } from './impact-story';
 
-export const plural = (n: number, one: string, many = `${one}s`) => `${whole.format(n)} ${n === 1 ? one : many}`;
+type T = (key: string, values?: Record<string, unknown>) => string;
 
 export type SeriesKey = 'fixed' | 'partsNeeded' | 'advice' | 'endOfLife';
-export const SERIES: { key: SeriesKey; outcome: Outcome; label: string; colour: string }[] = [
-  { key: 'fixed', outcome: 'fixed', label: OUTCOME_LABELS.fixed, colour: COLOURS.fixed },
-  { key: 'partsNeeded', outcome: 'parts-needed', label: OUTCOME_LABELS['parts-needed'], colour: COLOURS.partsNeeded },
-  { key: 'advice', outcome: 'advice', label: OUTCOME_LABELS.advice, colour: COLOURS.advice },
-  { key: 'endOfLife', outcome: 'end-of-life', label: OUTCOME_LABELS['end-of-life'], colour: COLOURS.endOfLife },
+/** The four outcomes as the charts draw them; `labelKey` is the catalog key of the name. */
+export const SERIES: { key: SeriesKey; outcome: Outcome; labelKey: string; colour: string }[] = [
+  { key: 'fixed', outcome: 'fixed', labelKey: OUTCOME_KEYS.fixed, colour: COLOURS.fixed },
+  { key: 'partsNeeded', outcome: 'parts-needed', labelKey: OUTCOME_KEYS['parts-needed'], colour: COLOURS.partsNeeded },
+  { key: 'advice', outcome: 'advice', labelKey: OUTCOME_KEYS.advice, colour: COLOURS.advice },
+  { key: 'endOfLife', outcome: 'end-of-life', labelKey: OUTCOME_KEYS['end-of-life'], colour: COLOURS.endOfLife },
 ];
 
 export type TileKey = 'items' | SeriesKey | 'fixRate' | 'kgDiverted' | 'co2eKg';
-export const TILES: {
+export interface Tile {
   key: TileKey;
   label: ReactNode;
   outcome?: Outcome;
   accent: string;
   value: (c: Counts) => string;
-}[] = [
-  { key: 'items', label: 'Items seen', accent: 'border-navy', value: (c) => whole.format(c.items) },
+}
+/** The dashboard's totals, named in the reader's language. */
+export const tiles = (t: T, { whole, oneDp, percent }: Formats): Tile[] => [
+  { key: 'items', label: t('figures.tile.items'), accent: 'border-navy', value: (c) => whole.format(c.items) },
+  ...SERIES.map((s): Tile => ({
+    key: s.key,
+    label: t(s.labelKey),
+    outcome: s.outcome,
+    accent: { fixed: 'border-sage', partsNeeded: 'border-copper', advice: 'border-navy', endOfLife: 'border-ink/30' }[
+      s.key
+    ],
+    value: (c) => whole.format(c[s.key]),
+  })),
   {
-    key: 'fixed',
-    label: OUTCOME_LABELS.fixed,
+    key: 'fixRate',
+    label: t('figures.tile.fixRate'),
     outcome: 'fixed',
     accent: 'border-sage',
-    value: (c) => whole.format(c.fixed),
+    value: (c) => percent(c.fixRate),
   },
-  {
-    key: 'partsNeeded',
-    label: OUTCOME_LABELS['parts-needed'],
-    outcome: 'parts-needed',
-    accent: 'border-copper',
-    value: (c) => whole.format(c.partsNeeded),
-  },
-  {
-    key: 'advice',
-    label: OUTCOME_LABELS.advice,
-    outcome: 'advice',
-    accent: 'border-navy',
-    value: (c) => whole.format(c.advice),
-  },
-  {
-    key: 'endOfLife',
-    label: OUTCOME_LABELS['end-of-life'],
-    outcome: 'end-of-life',
-    accent: 'border-ink/30',
-    value: (c) => whole.format(c.endOfLife),
-  },
-  { key: 'fixRate', label: 'Fix rate', outcome: 'fixed', accent: 'border-sage', value: (c) => percent(c.fixRate) },
   {
     key: 'kgDiverted',
-    label: 'kg diverted from landfill',
+    label: t('figures.tile.kgDiverted'),
     outcome: 'fixed',
     accent: 'border-sage',
     value: (c) => oneDp.format(c.kgDiverted),
   },
   {
     key: 'co2eKg',
-    label: <>kg {CO2E} avoided</>,
+    label: trParts('figures.tile.co2e', { co2e: CO2E }),
     outcome: 'fixed',
     accent: 'border-sage',
     value: (c) => oneDp.format(c.co2eKg),
@@ -89,6 +81,7 @@ export function FigureTable({ head, children }: { head: string[]; children: Reac
 }
 
 export function NumberCell({ value, to }: { value: number; to: string }) {
+  const { whole } = useFormats();
   return (
     <td className="py-1 pr-3 text-right tabular-nums">
       {value > 0 ? (

@@ -1,16 +1,23 @@
 import { Link, useNavigate } from 'react-router';
 import { Bar, BarChart, CartesianGrid, Legend, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
-import { BARRIER_LABELS } from '../../../../../shared/event-day/constants';
 import { paths } from '../../../config/paths';
 import type { StatsFilter } from '../../../../../shared/api/impact';
 import type { Stats } from '../api/types';
 import { queryString as qs } from '../../../lib/query-string';
-import { COLOURS, ChartCard, longMonth, monthLabel, oneDp, percent } from './display';
+import { intlLocale } from '../../../../../shared/format';
+import { trParts, useLanguage, useT } from '../../../lib/i18n';
+import { COLOURS, ChartCard, formatsFor } from './display';
 import { HorizontalBars } from './horizontal-bars';
-import { FigureTable, NumberCell, plural, SERIES, TILES, type RecordsExtra } from './figure-parts';
+import { FigureTable, NumberCell, SERIES, tiles, type RecordsExtra } from './figure-parts';
 
 export function Figures({ stats, filter }: { stats: Stats; filter: StatsFilter }) {
   const navigate = useNavigate();
+  const t = useT();
+  const lang = useLanguage();
+  const formats = formatsFor(lang);
+  const { whole, oneDp, percent, monthLabel, longMonth } = formats;
+  const list = (names: string[]) => new Intl.ListFormat(intlLocale(lang), { type: 'conjunction' }).format(names);
+  const series = SERIES.map((s) => ({ ...s, label: t(s.labelKey) }));
   const link = (extra: RecordsExtra = {}) => paths.impactRecords(qs({ ...filter, ...extra }));
   const go = (extra: RecordsExtra) => navigate(link(extra));
 
@@ -41,7 +48,7 @@ export function Figures({ stats, filter }: { stats: Stats; filter: StatsFilter }
     .sort((a, b) => b.rate - a.rate || b.items - a.items);
   const barriers = [...stats.barriers]
     .sort((a, b) => b.count - a.count)
-    .map((b) => ({ ...b, label: BARRIER_LABELS[b.barrier] }));
+    .map((b) => ({ ...b, label: t(`fixer.barrier.${b.barrier}`) }));
   const barrierTotal = barriers.reduce((n, b) => n + b.count, 0);
 
   const busiest = months.reduce<(typeof months)[number] | null>(
@@ -57,20 +64,20 @@ export function Figures({ stats, filter }: { stats: Stats; filter: StatsFilter }
     <div className="space-y-6">
       <section aria-labelledby="totals-heading">
         <h2 id="totals-heading" className="sr-only">
-          Totals
+          {t('figures.totals')}
         </h2>
         <ul className="grid grid-cols-2 gap-2 sm:grid-cols-4">
-          {TILES.map((t) => (
-            <li key={t.key}>
+          {tiles(t, formats).map((tile) => (
+            <li key={tile.key}>
               <Link
-                to={link(t.outcome ? { outcome: t.outcome } : {})}
-                className={`block h-full rounded-lg border-t-4 bg-white px-3 py-2.5 shadow-sm ring-1 ring-ink/5 transition hover:ring-copper ${t.accent}`}
+                to={link(tile.outcome ? { outcome: tile.outcome } : {})}
+                className={`block h-full rounded-lg border-t-4 bg-white px-3 py-2.5 shadow-sm ring-1 ring-ink/5 transition hover:ring-copper ${tile.accent}`}
               >
-                <span className="block text-2xl font-extrabold text-navy tabular-nums" data-testid={`stat-${t.key}`}>
-                  {t.value(stats)}
+                <span className="block text-2xl font-extrabold text-navy tabular-nums" data-testid={`stat-${tile.key}`}>
+                  {tile.value(stats)}
                 </span>
-                <span className="block text-sm font-semibold text-ink-soft">{t.label}</span>
-                <span className="sr-only"> — show the records</span>
+                <span className="block text-sm font-semibold text-ink-soft">{tile.label}</span>
+                <span className="sr-only"> — {t('figures.showRecords')}</span>
               </Link>
             </li>
           ))}
@@ -78,26 +85,39 @@ export function Figures({ stats, filter }: { stats: Stats; filter: StatsFilter }
         <p className="mt-2 text-sm text-ink-soft">
           {stats.unknown > 0 && (
             <>
-              <Link to={link({ outcome: 'none' })} className="font-bold text-navy underline">
-                {plural(stats.unknown, 'item has', 'items have')} no outcome recorded
-              </Link>{' '}
-              yet and {stats.unknown === 1 ? 'is' : 'are'} left out of the fix rate.{' '}
+              {trParts(
+                'figures.unknown',
+                {
+                  link: (
+                    <Link to={link({ outcome: 'none' })} className="font-bold text-navy underline">
+                      {t('figures.unknownLink', { n: stats.unknown, count: whole.format(stats.unknown) })}
+                    </Link>
+                  ),
+                },
+                { n: stats.unknown },
+              )}{' '}
             </>
           )}
-          Emissions use a displacement factor of {stats.displacement}; see the method below.
+          {t('figures.displacement', { factor: whole.format(stats.displacement) })}
         </p>
       </section>
 
       <div className="grid gap-4 lg:grid-cols-2">
         <ChartCard
-          title="Outcomes over time"
+          title={t('figures.outcomesTitle')}
           summary={
             busiest
-              ? `${plural(stats.items, 'item')} over ${plural(months.length, 'month')}; the busiest was ${longMonth(busiest.month)} with ${busiest.items}.`
-              : 'No months to show.'
+              ? t('figures.outcomesSummary', {
+                  n: stats.items,
+                  items: whole.format(stats.items),
+                  months: months.length,
+                  month: longMonth(busiest.month),
+                  busiest: whole.format(busiest.items),
+                })
+              : t('figures.noMonths')
           }
           table={
-            <FigureTable head={['Month', 'Items', ...SERIES.map((s) => s.label)]}>
+            <FigureTable head={[t('figures.col.month'), t('figures.col.items'), ...series.map((s) => s.label)]}>
               {months.map((m) => (
                 <tr key={m.month}>
                   <th scope="row" className="py-1 pr-3 text-left font-semibold">
@@ -125,7 +145,7 @@ export function Figures({ stats, filter }: { stats: Stats; filter: StatsFilter }
                 itemSorter={null}
                 formatter={(value) => <span className="text-ink">{value}</span>}
               />
-              {SERIES.map((s) => (
+              {series.map((s) => (
                 <Bar
                   isAnimationActive={false}
                   key={s.key}
@@ -142,14 +162,18 @@ export function Figures({ stats, filter }: { stats: Stats; filter: StatsFilter }
         </ChartCard>
 
         <ChartCard
-          title="Mass diverted by month"
+          title={t('figures.massTitle')}
           summary={
             heaviest
-              ? `${oneDp.format(stats.kgDiverted)} kg of fixed items kept out of the bin; most in ${longMonth(heaviest.month)} (${oneDp.format(heaviest.kg)} kg).`
-              : 'No months to show.'
+              ? t('figures.massSummary', {
+                  kg: oneDp.format(stats.kgDiverted),
+                  month: longMonth(heaviest.month),
+                  most: oneDp.format(heaviest.kg),
+                })
+              : t('figures.noMonths')
           }
           table={
-            <FigureTable head={['Month', 'kg diverted', 'Items fixed']}>
+            <FigureTable head={[t('figures.col.month'), t('figures.col.kgDiverted'), t('figures.col.itemsFixed')]}>
               {months.map((m) => (
                 <tr key={m.month}>
                   <th scope="row" className="py-1 pr-3 text-left font-semibold">
@@ -171,12 +195,12 @@ export function Figures({ stats, filter }: { stats: Stats; filter: StatsFilter }
               <YAxis tick={{ fontSize: 12 }} width={44} />
               <Tooltip
                 cursor={{ fill: 'rgba(35,57,93,0.06)' }}
-                formatter={(v) => [`${oneDp.format(Number(v))} kg`, 'Diverted']}
+                formatter={(v) => [`${oneDp.format(Number(v))} kg`, t('figures.diverted')]}
               />
               <Bar
                 isAnimationActive={false}
                 dataKey="kg"
-                name="kg diverted"
+                name={t('figures.col.kgDiverted')}
                 fill={COLOURS.partsNeeded}
                 radius={[3, 3, 0, 0]}
                 cursor="pointer"
@@ -187,13 +211,20 @@ export function Figures({ stats, filter }: { stats: Stats; filter: StatsFilter }
         </ChartCard>
 
         <ChartCard
-          title="Top categories"
-          summary={`Most items seen: ${topCategories
-            .slice(0, 3)
-            .map((c) => `${c.name} (${c.items})`)
-            .join(', ')}.`}
+          title={t('figures.topTitle')}
+          summary={t('figures.topSummary', {
+            list: list(topCategories.slice(0, 3).map((c) => `${c.name} (${whole.format(c.items)})`)),
+          })}
           table={
-            <FigureTable head={['Category', 'Items', 'Fixed', 'Fix rate', 'kg diverted']}>
+            <FigureTable
+              head={[
+                t('figures.col.category'),
+                t('figures.col.items'),
+                t('figures.col.fixed'),
+                t('figures.col.fixRate'),
+                t('figures.col.kgDiverted'),
+              ]}
+            >
               {stats.byCategory.map((c) => (
                 <tr key={c.categoryId}>
                   <th scope="row" className="py-1 pr-3 text-left font-semibold">
@@ -213,21 +244,33 @@ export function Figures({ stats, filter }: { stats: Stats; filter: StatsFilter }
           <HorizontalBars
             data={topCategories}
             labelKey="name"
-            bars={[{ dataKey: 'items', name: 'Items', fill: COLOURS.advice }]}
+            bars={[{ dataKey: 'items', name: t('figures.col.items'), fill: COLOURS.advice }]}
             onPick={(c) => go({ categoryId: c.categoryId })}
           />
         </ChartCard>
 
         <ChartCard
-          title="Fix rate by category"
+          title={t('figures.rateTitle')}
           summary={
             ratedShown.length === 0
-              ? 'No category has three or more items with an outcome yet.'
-              : `Categories with at least 3 items${rated.length > ratedShown.length ? ' (the 8 most common)' : ''}. Highest: ${ratedShown[0].name} (${ratedShown[0].rate}%); lowest: ${ratedShown[ratedShown.length - 1].name} (${ratedShown[ratedShown.length - 1].rate}%).`
+              ? t('figures.rateNone')
+              : t(rated.length > ratedShown.length ? 'figures.rateSummaryTop' : 'figures.rateSummary', {
+                  highest: ratedShown[0].name,
+                  highRate: percent(ratedShown[0].rate / 100),
+                  lowest: ratedShown[ratedShown.length - 1].name,
+                  lowRate: percent(ratedShown[ratedShown.length - 1].rate / 100),
+                })
           }
           table={
             rated.length > 0 && (
-              <FigureTable head={['Category', 'Fix rate', 'Fixed', 'Items']}>
+              <FigureTable
+                head={[
+                  t('figures.col.category'),
+                  t('figures.col.fixRate'),
+                  t('figures.col.fixed'),
+                  t('figures.col.items'),
+                ]}
+              >
                 {rated.map((c) => (
                   <tr key={c.categoryId}>
                     <th scope="row" className="py-1 pr-3 text-left font-semibold">
@@ -235,7 +278,7 @@ export function Figures({ stats, filter }: { stats: Stats; filter: StatsFilter }
                         {c.name}
                       </Link>
                     </th>
-                    <td className="py-1 pr-3 text-right tabular-nums">{c.rate}%</td>
+                    <td className="py-1 pr-3 text-right tabular-nums">{percent(c.rate / 100)}</td>
                     <NumberCell value={c.fixed} to={link({ categoryId: c.categoryId, outcome: 'fixed' })} />
                     <NumberCell value={c.items} to={link({ categoryId: c.categoryId })} />
                   </tr>
@@ -249,22 +292,27 @@ export function Figures({ stats, filter }: { stats: Stats; filter: StatsFilter }
               data={ratedShown}
               labelKey="name"
               percentAxis
-              bars={[{ dataKey: 'rate', name: 'Fix rate', fill: COLOURS.fixed }]}
+              bars={[{ dataKey: 'rate', name: t('figures.col.fixRate'), fill: COLOURS.fixed }]}
               onPick={(c) => go({ categoryId: c.categoryId })}
             />
           )}
         </ChartCard>
 
         <ChartCard
-          title="Why items were beyond mending"
+          title={t('figures.barrierTitle')}
           summary={
             barriers.length === 0
-              ? 'No item beyond mending has a reason recorded.'
-              : `${plural(barrierTotal, 'item')} beyond mending with a reason recorded; most often: ${barriers[0].label.toLowerCase()} (${barriers[0].count}).`
+              ? t('figures.barrierNone')
+              : t('figures.barrierSummary', {
+                  n: barrierTotal,
+                  count: whole.format(barrierTotal),
+                  reason: barriers[0].label,
+                  times: whole.format(barriers[0].count),
+                })
           }
           table={
             barriers.length > 0 && (
-              <FigureTable head={['Reason', 'Items']}>
+              <FigureTable head={[t('figures.col.reason'), t('figures.col.items')]}>
                 {barriers.map((b) => (
                   <tr key={b.barrier}>
                     <th scope="row" className="py-1 pr-3 text-left font-semibold">
@@ -284,7 +332,7 @@ export function Figures({ stats, filter }: { stats: Stats; filter: StatsFilter }
               data={barriers}
               labelKey="label"
               labelWidth={140}
-              bars={[{ dataKey: 'count', name: 'Items', fill: COLOURS.endOfLife }]}
+              bars={[{ dataKey: 'count', name: t('figures.col.items'), fill: COLOURS.endOfLife }]}
               onPick={(b) => go({ barrier: b.barrier })}
             />
           )}

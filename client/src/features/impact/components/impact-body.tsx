@@ -6,6 +6,7 @@ import { Alert, EmptyState } from '../../../components/ui/feedback';
 import { SelectField, TextField } from '../../../components/ui/field';
 import { paths } from '../../../config/paths';
 import type { StatsFilter } from '../../../../../shared/api/impact';
+import { useLanguage, useT } from '../../../lib/i18n';
 import { queryString as qs } from '../../../lib/query-string';
 import { exportUrl } from '../api/export-url';
 import { useStats } from '../api/get-stats';
@@ -63,24 +64,25 @@ export function ImpactBody({
   groupName?: string;
   sessions?: SessionChoices;
 }) {
+  const t = useT();
   const { filter, set, clear } = useUrlFilter(groupId);
-  const rangeError = datesInOrder(filter) ? undefined : 'The end date is before the start date.';
+  const rangeError = datesInOrder(filter) ? undefined : t('figures.filter.rangeError');
   const filtered = Boolean(filter.eventId || filter.from || filter.to);
 
   return (
     <div className="space-y-6">
-      <section aria-label="Filters" className="rounded-xl bg-white p-4 ring-1 ring-ink/5">
+      <section aria-label={t('figures.filter.label')} className="rounded-xl bg-white p-4 ring-1 ring-ink/5">
         <div className="grid grid-cols-2 items-end gap-3 sm:grid-cols-4">
           {sessions && <EventSelect events={sessions} value={filter.eventId} onChange={(v) => set('eventId', v)} />}
           <TextField
-            label="From"
+            label={t('figures.filter.from')}
             type="date"
             value={filter.from ?? ''}
             max={filter.to}
             onChange={(e) => set('from', e.target.value)}
           />
           <TextField
-            label="To"
+            label={t('figures.filter.to')}
             type="date"
             value={filter.to ?? ''}
             min={filter.from}
@@ -90,7 +92,7 @@ export function ImpactBody({
           {filtered && (
             <div className="col-span-2 sm:col-span-1">
               <Button variant="quiet" onClick={clear} className="w-full sm:w-auto">
-                Clear filters
+                {t('figures.filter.clear')}
               </Button>
             </div>
           )}
@@ -100,8 +102,8 @@ export function ImpactBody({
       <Actions filter={filter} groupId={groupId} groupName={groupName} />
 
       {rangeError ? (
-        <Alert tone="error" title="Check the dates">
-          {rangeError} Change one of them to see the figures.
+        <Alert tone="error" title={t('figures.filter.checkDates')}>
+          {rangeError} {t('figures.filter.changeOne')}
         </Alert>
       ) : (
         <FiguresFor filter={filter} filtered={filtered} />
@@ -114,12 +116,11 @@ export function ImpactBody({
 
 /** The figures the route's loader fetched for this filter, or what to do when there are none. */
 function FiguresFor({ filter, filtered }: { filter: StatsFilter; filtered: boolean }) {
+  const t = useT();
   const { data: stats } = useStats(filter);
   return stats.items === 0 ? (
-    <EmptyState title={filtered ? 'No items in this selection' : 'No items counted yet'} icon="▤">
-      {filtered
-        ? 'Nothing was checked in for these dates or this session. Widen the dates or clear the filters.'
-        : 'Figures appear here once items are checked in at a session and their outcomes recorded.'}
+    <EmptyState title={filtered ? t('figures.empty.filteredTitle') : t('figures.empty.title')} icon="▤">
+      {filtered ? t('figures.empty.filtered') : t('figures.empty.text')}
     </EmptyState>
   ) : (
     <Figures stats={stats} filter={filter} />
@@ -135,21 +136,27 @@ function EventSelect({
   value?: number;
   onChange: (v: string) => void;
 }) {
+  const t = useT();
+  const lang = useLanguage();
   const list = [...(events.data ?? [])].sort((a, b) => b.startsAt.localeCompare(a.startsAt));
   return (
     <div className="col-span-2">
       <SelectField
-        label="Session"
+        label={t('figures.filter.session')}
         value={value ?? ''}
         onChange={(e) => onChange(e.target.value)}
         disabled={events.isPending}
-        hint={events.isError ? 'The sessions could not be loaded; the figures cover all of them.' : undefined}
+        hint={events.isError ? t('figures.filter.sessionsFailed') : undefined}
       >
-        <option value="">{events.isPending ? 'Loading sessions…' : 'All sessions'}</option>
-        {value !== undefined && !list.some((e) => e.id === value) && <option value={value}>Session {value}</option>}
+        <option value="">
+          {events.isPending ? t('figures.filter.loadingSessions') : t('figures.filter.allSessions')}
+        </option>
+        {value !== undefined && !list.some((e) => e.id === value) && (
+          <option value={value}>{t('figures.filter.sessionNumber', { id: value })}</option>
+        )}
         {list.map((e) => (
           <option key={e.id} value={e.id}>
-            {formatDay(e.startsAt, e.timeZone)} · {e.title}
+            {formatDay(e.startsAt, e.timeZone, lang)} · {e.title}
           </option>
         ))}
       </SelectField>
@@ -158,28 +165,29 @@ function EventSelect({
 }
 
 function Actions({ filter, groupId, groupName }: { filter: StatsFilter; groupId?: number; groupName?: string }) {
+  const t = useT();
   const [embedOpen, setEmbedOpen] = useState(false);
   const panelId = useId();
   return (
     <div className="space-y-3">
       <div className="flex flex-wrap gap-2">
         {filter.from && filter.to && filter.from > filter.to ? (
-          <p className="text-sm text-ink-soft">Correct the dates to download the records.</p>
+          <p className="text-sm text-ink-soft">{t('figures.actions.correctDates')}</p>
         ) : (
           <>
             <a href={exportUrl('records', filter)} download className={secondaryLink}>
-              Download records (CSV)
+              {t('figures.actions.records')}
             </a>
             <a href={exportUrl('open-repair-data', filter)} download className={secondaryLink}>
-              Open Repair Data export (CSV)
+              {t('figures.actions.ords')}
             </a>
             <a
               href={exportUrl('open-repair-data-unpowered', filter)}
               download
               className={secondaryLink}
-              title="The open standard lists powered items only: clothes, bikes, furniture and other items without power come in this file of their own."
+              title={t('figures.actions.unpoweredTitle')}
             >
-              Open Repair Data, items without power (CSV)
+              {t('figures.actions.unpowered')}
             </a>
           </>
         )}
@@ -193,13 +201,13 @@ function Actions({ filter, groupId, groupName }: { filter: StatsFilter; groupId?
               }
               className={secondaryLink}
             >
-              Printable report
+              {t('figures.actions.report')}
             </Link>
             <Link to={paths.publicImpact(groupId)} className={secondaryLink}>
-              Public page
+              {t('figures.actions.public')}
             </Link>
             <Link to={paths.groupImport(groupId)} className={secondaryLink}>
-              Bring in earlier records
+              {t('figures.actions.import')}
             </Link>
             <Button
               variant="secondary"
@@ -207,7 +215,7 @@ function Actions({ filter, groupId, groupName }: { filter: StatsFilter; groupId?
               aria-controls={panelId}
               onClick={() => setEmbedOpen((v) => !v)}
             >
-              Show the figures on your own website
+              {t('figures.actions.embed')}
             </Button>
           </>
         )}

@@ -1,9 +1,18 @@
-import { OUTCOME_LABELS, type Outcome } from '../../../../../shared/event-day/constants';
+import type { Outcome } from '../../../../../shared/event-day/constants';
 import { patchesOf } from '../../../../../shared/impact/patches';
 import type { PublicImpact } from '../api/types';
-import { CO2E, COLOURS, oneDp, whole } from './display';
+import { trParts, useT } from '../../../lib/i18n';
+import { CO2E, COLOURS, useFormats } from './display';
 
 const PATCHES = 20;
+
+/** The catalog key of each outcome's name on the impact pages. */
+export const OUTCOME_KEYS: Record<Outcome, string> = {
+  fixed: 'figures.outcome.fixed',
+  'parts-needed': 'figures.outcome.partsNeeded',
+  advice: 'figures.outcome.advice',
+  'end-of-life': 'figures.outcome.endOfLife',
+};
 
 /** The four outcomes of the items, in the quilt's order: mended patches first. */
 export function outcomeShares(d: Pick<PublicImpact, 'fixed' | 'partsNeeded' | 'advice' | 'endOfLife'>) {
@@ -18,7 +27,7 @@ export function outcomeShares(d: Pick<PublicImpact, 'fixed' | 'partsNeeded' | 'a
     PATCHES,
   );
   const known = parts.reduce((n, p) => n + p.count, 0);
-  return { known, parts: parts.map((p, i) => ({ ...p, patches: patches[i], label: OUTCOME_LABELS[p.outcome] })) };
+  return { known, parts: parts.map((p, i) => ({ ...p, patches: patches[i], labelKey: OUTCOME_KEYS[p.outcome] })) };
 }
 
 /**
@@ -97,8 +106,10 @@ function Picture({ kind }: { kind: 'bag' | 'bin' | 'leaf' }) {
  * with its key in words.
  */
 export function ImpactStory({ d }: { d: PublicImpact }) {
+  const t = useT();
+  const { whole, oneDp, percent } = useFormats();
   const { known, parts } = outcomeShares(d);
-  const share = (n: number) => `${Math.round((n / known) * 100)}%`;
+  const share = (n: number) => percent(n / known);
   const fig = (testId: string, value: string) => (
     <strong className="font-extrabold text-navy tabular-nums" data-testid={testId}>
       {value}
@@ -111,35 +122,36 @@ export function ImpactStory({ d }: { d: PublicImpact }) {
     >
       <div className="space-y-4">
         <h2 id="story-heading" className="text-sm font-bold tracking-wide text-copper-dark uppercase">
-          The story so far
+          {t('figures.story.heading')}
         </h2>
         <p className="flex gap-3 text-xl leading-relaxed sm:text-2xl">
           <Picture kind="bag" />
           <span>
-            Over {fig('stat-events', whole.format(d.events))} {d.events === 1 ? 'session' : 'sessions'}, people brought{' '}
-            {fig('stat-items', whole.format(d.items))} things in need of mending, and{' '}
-            {fig('stat-fixed', whole.format(d.fixed))} went home working again.
+            {trParts(
+              'figures.story.brought',
+              {
+                events: fig('stat-events', whole.format(d.events)),
+                items: fig('stat-items', whole.format(d.items)),
+                fixed: fig('stat-fixed', whole.format(d.fixed)),
+              },
+              { n: d.events, nItems: d.items, nFixed: d.fixed },
+            )}
           </span>
         </p>
         <p className="flex gap-3 text-lg leading-relaxed">
           <Picture kind="bin" />
-          <span>
-            That is {fig('stat-kgDiverted', oneDp.format(d.kgDiverted))} kg of things that stayed in use instead of
-            going in the bin.
-          </span>
+          <span>{trParts('figures.story.kg', { kg: fig('stat-kgDiverted', oneDp.format(d.kgDiverted)) })}</span>
         </p>
         <p className="flex gap-3 text-lg leading-relaxed">
           <Picture kind="leaf" />
-          <span>
-            Not making them new again saves about {fig('stat-co2eKg', oneDp.format(d.co2eKg))} kg {CO2E}.
-          </span>
+          <span>{trParts('figures.story.co2e', { kg: fig('stat-co2eKg', oneDp.format(d.co2eKg)), co2e: CO2E })}</span>
         </p>
       </div>
       {known > 0 && (
         <figure className="space-y-3" aria-labelledby="quilt-caption">
           <Quilt d={d} className="w-full max-w-sm" />
           <figcaption id="quilt-caption" className="text-sm text-ink-soft">
-            What happened to the {whole.format(known)} items with a recorded outcome, one patch for every twentieth.
+            {t('figures.story.quilt', { n: known, count: whole.format(known) })}
           </figcaption>
           <ul className="grid gap-1 text-sm sm:grid-cols-2">
             {parts
@@ -148,7 +160,11 @@ export function ImpactStory({ d }: { d: PublicImpact }) {
                 <li key={p.outcome} className="flex items-center gap-2" data-testid={`story-${p.outcome}`}>
                   <span aria-hidden="true" className="size-3 shrink-0 rounded-sm" style={{ background: p.colour }} />
                   <span>
-                    {p.label}: <b className="tabular-nums">{whole.format(p.count)}</b> ({share(p.count)})
+                    {trParts(
+                      'figures.story.share',
+                      { count: <b className="tabular-nums">{whole.format(p.count)}</b> },
+                      { outcome: t(p.labelKey), share: share(p.count) },
+                    )}
                   </span>
                 </li>
               ))}

@@ -1,16 +1,13 @@
 import type { ImportJobView } from '../../../../../shared/api/imports';
 import { Alert } from '../../../components/ui/feedback';
-import { IMPORT_FIELD_WORDS } from './import-words';
-
-const STATUS_WORDS: Record<ImportJobView['status'], string> = {
-  queued: 'Waiting to start',
-  running: 'Bringing records in',
-  done: 'Finished',
-  failed: 'Stopped',
-};
+import { useLanguage, useT } from '../../../lib/i18n';
+import { formatsFor } from './display';
+import { fieldWord } from './import-words';
 
 /** One import: a progress bar while it works, then its counts and every row it refused, with the reason. */
 export function ImportProgress({ job }: { job: ImportJobView }) {
+  const t = useT();
+  const { whole, percent: pct } = formatsFor(useLanguage());
   const readable = Math.max(0, job.total - job.refused);
   const share = job.status === 'done' ? 1 : readable ? Math.min(1, job.done / readable) : 0;
   const percent = Math.round(share * 100);
@@ -19,13 +16,13 @@ export function ImportProgress({ job }: { job: ImportJobView }) {
       <div>
         <div className="flex flex-wrap items-baseline justify-between gap-2">
           <p className="font-bold text-navy">
-            {STATUS_WORDS[job.status]} · {job.fileName}
+            {t(`figures.import.status.${job.status}`)} · {job.fileName}
           </p>
-          <p className="text-sm text-ink-soft">{percent}%</p>
+          <p className="text-sm text-ink-soft">{pct(share)}</p>
         </div>
         <div
           role="progressbar"
-          aria-label={`Progress of ${job.fileName}`}
+          aria-label={t('figures.import.progressOf', { file: job.fileName })}
           aria-valuemin={0}
           aria-valuemax={100}
           aria-valuenow={percent}
@@ -39,44 +36,41 @@ export function ImportProgress({ job }: { job: ImportJobView }) {
       </div>
       <dl className="grid grid-cols-2 gap-3 text-center sm:grid-cols-4">
         {[
-          ['Rows in the file', job.total],
-          ['Brought in', job.imported],
-          ['Here already', job.skipped],
-          ['Refused', job.refused],
+          [t('figures.import.rows'), job.total],
+          [t('figures.import.broughtIn'), job.imported],
+          [t('figures.import.hereAlready'), job.skipped],
+          [t('figures.import.refused'), job.refused],
         ].map(([label, n]) => (
           <div key={label} className="rounded-lg bg-paper px-2 py-3">
             <dt className="text-xs font-semibold text-ink-soft">{label}</dt>
-            <dd className="text-xl font-bold text-navy">{n}</dd>
+            <dd className="text-xl font-bold text-navy">{whole.format(Number(n))}</dd>
           </div>
         ))}
       </dl>
-      {job.status === 'failed' && <Alert tone="error">{job.message ?? 'The import stopped.'}</Alert>}
-      {job.skipped > 0 && (
-        <p className="text-sm text-ink-soft">
-          Records already brought in by an earlier import (the same source and record number) are not added twice.
-        </p>
-      )}
+      {job.status === 'failed' && <Alert tone="error">{job.message ?? t('figures.import.stopped')}</Alert>}
+      {job.skipped > 0 && <p className="text-sm text-ink-soft">{t('figures.import.skippedNote')}</p>}
       {job.errors.length > 0 && (
         <div>
-          <h3 className="font-bold">Rows left out</h3>
+          <h3 className="font-bold">{t('figures.import.leftOut')}</h3>
           <p className="text-sm text-ink-soft">
-            Correct these rows in the file and bring it in again: the rows already in are not added twice.
-            {job.refused > job.errors.length && ` The first ${job.errors.length} of ${job.refused} are shown.`}
+            {t('figures.import.correct')}
+            {job.refused > job.errors.length &&
+              ` ${t('figures.import.firstShown', { shown: job.errors.length, total: job.refused })}`}
           </p>
           <div className="mt-2 max-h-96 overflow-auto rounded-lg ring-1 ring-ink/10">
             <table className="w-full text-left text-sm">
               <thead className="sticky top-0 bg-white">
                 <tr>
-                  <th className="px-3 py-2">Row</th>
-                  <th className="px-3 py-2">Column</th>
-                  <th className="px-3 py-2">Reason</th>
+                  <th className="px-3 py-2">{t('figures.import.row')}</th>
+                  <th className="px-3 py-2">{t('figures.import.column')}</th>
+                  <th className="px-3 py-2">{t('figures.col.reason')}</th>
                 </tr>
               </thead>
               <tbody>
                 {job.errors.map((e) => (
                   <tr key={`${e.row}-${e.field}`} className="border-t border-ink/5">
                     <td className="px-3 py-2 tabular-nums">{e.row}</td>
-                    <td className="px-3 py-2">{IMPORT_FIELD_WORDS[e.field] ?? e.field}</td>
+                    <td className="px-3 py-2">{fieldWord(t, e.field)}</td>
                     <td className="px-3 py-2">{e.message}</td>
                   </tr>
                 ))}

@@ -1,15 +1,17 @@
 import { Card } from '../../../components/ui/feedback';
+import { useT } from '../../../lib/i18n';
 import { useMethod } from '../api/get-method';
 import { FactorTable } from './display';
 import { MethodNotes } from './method-notes';
 
 export function MethodSection() {
+  const t = useT();
   const { data: method } = useMethod();
   return (
     <Card className="p-4 sm:p-5">
       <section aria-labelledby="method-heading">
         <h2 id="method-heading" className="text-lg">
-          Method and sources
+          {t('figures.method.heading')}
         </h2>
         <div className="mt-2 space-y-3 text-sm leading-relaxed">
           <MethodNotes method={method} />
@@ -17,7 +19,7 @@ export function MethodSection() {
           {method.categories.length > 0 && (
             <details>
               <summary className="min-h-11 cursor-pointer py-2 font-bold text-navy">
-                Weights and factors of the {method.categories.length} categories
+                {t('figures.method.factorsOf', { n: method.categories.length })}
               </summary>
               <div className="overflow-x-auto">
                 <FactorTable categories={method.categories} />

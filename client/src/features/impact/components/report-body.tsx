@@ -1,22 +1,25 @@
 import type { ReactNode } from 'react';
 import { Bar, BarChart, CartesianGrid, Legend, ResponsiveContainer, XAxis, YAxis } from 'recharts';
 import type { EventReport } from '../api/types';
-import { BARRIER_LABELS, OUTCOME_LABELS } from '../../../../../shared/event-day/constants';
-import { formatDay, formatTimeRange } from '../../../../../shared/format';
+import { formatDay, formatTimeRange, intlLocale } from '../../../../../shared/format';
 import { EmptyState } from '../../../components/ui/feedback';
-import { CO2E, oneDp, percent, whole } from './display';
+import { trParts, useLanguage, useT } from '../../../lib/i18n';
+import { CO2E, formatsFor } from './display';
 import { MethodNotes } from './method-notes';
 import { sourceForReaders } from '../../../../../shared/impact/for-readers';
-
-const hoursFormat = new Intl.NumberFormat('en-GB', { maximumFractionDigits: 2 });
 
 /** A4 is 210 mm less two 14 mm margins: about 690 CSS px, so a 640 px chart fits without being scaled. */
 const CHART_WIDTH = 640;
 const MAX_CHART_ROWS = 12;
 
 export function ReportBody({ r }: { r: EventReport }) {
+  const t = useT();
+  const lang = useLanguage();
+  const { whole, oneDp, percent } = formatsFor(lang);
+  const hoursFormat = new Intl.NumberFormat(intlLocale(lang), { maximumFractionDigits: 2 });
   const { event, stats, method } = r;
   const tz = event.timeZone;
+  const day = (d: string | Date) => formatDay(d, tz, lang);
   const usedCategories = new Set(stats.byCategory.map((c) => c.categoryId));
   const methodCategories = method.categories.filter((c) => usedCategories.has(c.id));
 
@@ -27,38 +30,40 @@ export function ReportBody({ r }: { r: EventReport }) {
     >
       <header className="border-b-4 border-copper pb-4">
         <p className="text-sm font-bold uppercase tracking-wide text-copper-dark">
-          {event.groupName} · {r.range ? 'report for a period' : 'session report'}
+          {event.groupName} · {r.range ? t('figures.report.kindPeriod') : t('figures.report.kindSession')}
         </p>
         <h1 className="mt-1 text-2xl sm:text-3xl">{event.title}</h1>
         <p className="mt-1 font-semibold text-ink-soft">
           {r.range
-            ? `${r.range.from ? formatDay(`${r.range.from}T12:00:00Z`, tz) : formatDay(event.startsAt, tz)} to ${r.range.to ? formatDay(`${r.range.to}T12:00:00Z`, tz) : formatDay(event.endsAt, tz)}`
-            : `${formatDay(event.startsAt, tz)} · ${formatTimeRange(event.startsAt, event.endsAt, tz)}`}
+            ? t('figures.report.period', {
+                from: r.range.from ? day(`${r.range.from}T12:00:00Z`) : day(event.startsAt),
+                to: r.range.to ? day(`${r.range.to}T12:00:00Z`) : day(event.endsAt),
+              })
+            : `${day(event.startsAt)} · ${formatTimeRange(event.startsAt, event.endsAt, tz, lang)}`}
         </p>
       </header>
 
-      <section aria-label="Totals" className="break-inside-avoid">
+      <section aria-label={t('figures.totals')} className="break-inside-avoid">
         <ul className="grid grid-cols-2 gap-2 sm:grid-cols-4 print:grid-cols-4">
-          <Tile label="Items seen" value={whole.format(stats.items)} />
-          <Tile label="Fixed" value={whole.format(stats.fixed)} />
-          <Tile label="Need a part" value={whole.format(stats.partsNeeded)} />
-          <Tile label="Advice given" value={whole.format(stats.advice)} />
-          <Tile label={OUTCOME_LABELS['end-of-life']} value={whole.format(stats.endOfLife)} />
-          <Tile label="Fix rate" value={percent(stats.fixRate)} />
-          <Tile label="kg diverted from landfill" value={oneDp.format(stats.kgDiverted)} />
-          <Tile label={<>kg {CO2E} avoided</>} value={oneDp.format(stats.co2eKg)} />
+          <Tile label={t('figures.tile.items')} value={whole.format(stats.items)} />
+          <Tile label={t('figures.outcome.fixed')} value={whole.format(stats.fixed)} />
+          <Tile label={t('figures.report.needPart')} value={whole.format(stats.partsNeeded)} />
+          <Tile label={t('figures.outcome.advice')} value={whole.format(stats.advice)} />
+          <Tile label={t('figures.outcome.endOfLife')} value={whole.format(stats.endOfLife)} />
+          <Tile label={t('figures.tile.fixRate')} value={percent(stats.fixRate)} />
+          <Tile label={t('figures.tile.kgDiverted')} value={oneDp.format(stats.kgDiverted)} />
+          <Tile label={trParts('figures.tile.co2e', { co2e: CO2E })} value={oneDp.format(stats.co2eKg)} />
         </ul>
         {stats.unknown > 0 && (
           <p className="mt-2 text-sm text-ink-soft">
-            {stats.unknown} {stats.unknown === 1 ? 'item has' : 'items have'} no outcome recorded and{' '}
-            {stats.unknown === 1 ? 'is' : 'are'} left out of the fix rate.
+            {t('figures.report.unknown', { n: stats.unknown, count: whole.format(stats.unknown) })}
           </p>
         )}
       </section>
 
       {stats.items === 0 ? (
-        <EmptyState title="No items were checked in" icon="▤">
-          The figures fill in once items are checked in at the desk and their outcomes recorded.
+        <EmptyState title={t('figures.report.emptyTitle')} icon="▤">
+          {t('figures.report.empty')}
         </EmptyState>
       ) : (
         <>
@@ -68,35 +73,35 @@ export function ReportBody({ r }: { r: EventReport }) {
       )}
 
       <div className="grid gap-6 sm:grid-cols-2 print:grid-cols-2">
-        <Block title="Why items were beyond mending">
+        <Block title={t('figures.barrierTitle')}>
           {stats.barriers.length === 0 ? (
-            <p className="text-sm text-ink-soft">No item beyond mending had a reason recorded.</p>
+            <p className="text-sm text-ink-soft">{t('figures.report.barrierNone')}</p>
           ) : (
             <ul className="space-y-1 text-sm">
               {[...stats.barriers]
                 .sort((a, b) => b.count - a.count)
                 .map((b) => (
                   <li key={b.barrier} className="flex justify-between gap-3 border-b border-ink/5 py-1">
-                    <span>{BARRIER_LABELS[b.barrier]}</span>
-                    <span className="font-bold tabular-nums">{b.count}</span>
+                    <span>{t(`fixer.barrier.${b.barrier}`)}</span>
+                    <span className="font-bold tabular-nums">{whole.format(b.count)}</span>
                   </li>
                 ))}
             </ul>
           )}
         </Block>
 
-        <Block title="Volunteers">
+        <Block title={t('figures.report.volunteers')}>
           {r.volunteers.length === 0 ? (
-            <p className="text-sm text-ink-soft">No volunteer shifts were recorded for this session.</p>
+            <p className="text-sm text-ink-soft">{t('figures.report.noVolunteers')}</p>
           ) : (
             <table className="w-full text-sm">
               <thead>
                 <tr className="border-b border-ink/10 text-left text-ink-soft">
                   <th scope="col" className="py-1 pr-3 font-semibold">
-                    Name
+                    {t('figures.report.name')}
                   </th>
                   <th scope="col" className="py-1 text-right font-semibold">
-                    Hours
+                    {t('figures.report.hours')}
                   </th>
                 </tr>
               </thead>
@@ -111,10 +116,10 @@ export function ReportBody({ r }: { r: EventReport }) {
               <tfoot>
                 <tr className="border-t-2 border-ink/20 font-bold">
                   <th scope="row" className="py-1 pr-3 text-left">
-                    {r.volunteers.length} {r.volunteers.length === 1 ? 'volunteer' : 'volunteers'}
+                    {t('figures.report.volunteerCount', { n: r.volunteers.length })}
                   </th>
                   <td className="py-1 text-right tabular-nums" data-testid="report-hours">
-                    {hoursFormat.format(r.volunteerHours)} h
+                    {t('figures.report.hoursTotal', { hours: hoursFormat.format(r.volunteerHours) })}
                   </td>
                 </tr>
               </tfoot>
@@ -123,7 +128,7 @@ export function ReportBody({ r }: { r: EventReport }) {
         </Block>
       </div>
 
-      <Block title="Method and sources" long>
+      <Block title={t('figures.method.heading')} long>
         <div className="space-y-2 text-sm leading-relaxed">
           <MethodNotes method={method} />
           {methodCategories.length > 0 && (
@@ -131,19 +136,19 @@ export function ReportBody({ r }: { r: EventReport }) {
               <thead>
                 <tr className="border-b border-ink/10 text-left text-ink-soft">
                   <th scope="col" className="py-1 pr-2 font-semibold">
-                    Category
+                    {t('figures.col.category')}
                   </th>
                   <th scope="col" className="py-1 pr-2 text-right font-semibold">
-                    Avg. kg
+                    {t('figures.report.avgKg')}
                   </th>
                   <th scope="col" className="py-1 pr-2 font-semibold">
-                    Weight source
+                    {t('figures.factors.weightSource')}
                   </th>
                   <th scope="col" className="py-1 pr-2 text-right font-semibold">
-                    kg CO2e/kg
+                    {t('figures.report.co2ePerKg')}
                   </th>
                   <th scope="col" className="py-1 font-semibold">
-                    Factor source
+                    {t('figures.factors.factorSource')}
                   </th>
                 </tr>
               </thead>
@@ -158,7 +163,7 @@ export function ReportBody({ r }: { r: EventReport }) {
                     <td className="py-1 pr-2 text-right tabular-nums">
                       {c.co2ePerKg === null ? '—' : oneDp.format(c.co2ePerKg)}
                     </td>
-                    <td className="py-1">{c.co2eSource ?? 'No sourced factor: counted as 0'}</td>
+                    <td className="py-1">{c.co2eSource ?? t('figures.factors.none')}</td>
                   </tr>
                 ))}
               </tbody>
@@ -168,9 +173,7 @@ export function ReportBody({ r }: { r: EventReport }) {
       </Block>
 
       <footer className="break-inside-avoid border-t border-ink/15 pt-3 text-xs text-ink-soft">
-        Figures are estimates: masses are weighed at the desk where possible and otherwise the average of the kind of
-        item; emissions avoided use published production factors and a displacement factor of {method.displacement}.
-        Counted with Mendery on {formatDay(new Date(), tz)}.
+        {t('figures.report.footer', { factor: whole.format(method.displacement), date: day(new Date()) })}
       </footer>
     </main>
   );
@@ -196,6 +199,8 @@ function Block({ title, children, long = false }: { title: string; children: Rea
 }
 
 function CategoryChart({ r }: { r: EventReport }) {
+  const t = useT();
+  const { whole } = formatsFor(useLanguage());
   const rows = r.stats.byCategory
     .slice(0, MAX_CHART_ROWS)
     .map((c) => ({ name: c.name, fixed: c.fixed, notFixed: c.items - c.fixed }));
@@ -204,20 +209,23 @@ function CategoryChart({ r }: { r: EventReport }) {
   return (
     <section className="break-inside-avoid" aria-labelledby="chart-heading">
       <h2 id="chart-heading" className="mb-1 text-lg">
-        Outcomes by category
+        {t('figures.report.chartTitle')}
       </h2>
       <p className="mb-2 text-sm text-ink-soft">
-        Fixed and not fixed, by kind of item
-        {r.stats.byCategory.length > MAX_CHART_ROWS ? ` (the ${MAX_CHART_ROWS} most common)` : ''}.
-        {best && best.fixed > 0 ? ` Most fixed: ${best.name.toLowerCase()} (${best.fixed} of ${best.items}).` : ''} The
-        table below gives every figure.
+        {r.stats.byCategory.length > MAX_CHART_ROWS
+          ? t('figures.report.chartLeadTop', { n: MAX_CHART_ROWS })
+          : t('figures.report.chartLead')}
+        {best && best.fixed > 0
+          ? ` ${t('figures.report.mostFixed', { name: best.name, fixed: whole.format(best.fixed), items: whole.format(best.items) })}`
+          : ''}{' '}
+        {t('figures.report.tableBelow')}
       </p>
       {/* A fixed-width box: the chart has the same size on screen and on paper, and scrolls on a phone. */}
       <div
         className="max-w-full overflow-x-auto print:overflow-visible"
         tabIndex={0}
         role="region"
-        aria-label="Chart of outcomes by category (scrolls sideways on a narrow screen)"
+        aria-label={t('figures.report.chartLabel')}
       >
         <div aria-hidden style={{ width: CHART_WIDTH, height }}>
           <ResponsiveContainer width="100%" height="100%">
@@ -235,10 +243,16 @@ function CategoryChart({ r }: { r: EventReport }) {
                 itemSorter={null}
                 formatter={(value) => <span className="text-ink">{value}</span>}
               />
-              <Bar dataKey="fixed" name="Fixed" stackId="o" fill="#5d7f6a" isAnimationActive={false} />
+              <Bar
+                dataKey="fixed"
+                name={t('figures.outcome.fixed')}
+                stackId="o"
+                fill="#5d7f6a"
+                isAnimationActive={false}
+              />
               <Bar
                 dataKey="notFixed"
-                name="Not fixed or not recorded"
+                name={t('figures.report.notFixed')}
                 stackId="o"
                 fill="#b8612f"
                 isAnimationActive={false}
@@ -252,30 +266,32 @@ function CategoryChart({ r }: { r: EventReport }) {
 }
 
 function CategoryTable({ r }: { r: EventReport }) {
+  const t = useT();
+  const { whole, oneDp } = formatsFor(useLanguage());
   const s = r.stats;
   return (
     <section aria-labelledby="categories-heading">
       <h2 id="categories-heading" className="mb-2 text-lg">
-        By category
+        {t('figures.report.byCategory')}
       </h2>
       <div className="overflow-x-auto print:overflow-visible">
         <table className="w-full text-sm">
           <thead>
             <tr className="border-b border-ink/10 text-ink-soft">
               <th scope="col" className="py-1 pr-3 text-left font-semibold">
-                Category
+                {t('figures.col.category')}
               </th>
               <th scope="col" className="py-1 pr-3 text-right font-semibold">
-                Items
+                {t('figures.col.items')}
               </th>
               <th scope="col" className="py-1 pr-3 text-right font-semibold">
-                Fixed
+                {t('figures.col.fixed')}
               </th>
               <th scope="col" className="py-1 pr-3 text-right font-semibold">
-                kg diverted
+                {t('figures.col.kgDiverted')}
               </th>
               <th scope="col" className="py-1 text-right font-semibold">
-                kg CO2e
+                {t('figures.report.kgCo2e')}
               </th>
             </tr>
           </thead>
@@ -295,7 +311,7 @@ function CategoryTable({ r }: { r: EventReport }) {
           <tfoot>
             <tr className="border-t-2 border-ink/20 font-bold">
               <th scope="row" className="py-1 pr-3 text-left">
-                Total
+                {t('figures.report.total')}
               </th>
               <td className="py-1 pr-3 text-right tabular-nums">{whole.format(s.items)}</td>
               <td className="py-1 pr-3 text-right tabular-nums">{whole.format(s.fixed)}</td>
