@@ -55,6 +55,41 @@ describe('the fixer’s forms and queue in four languages', () => {
     await app.db.db.update(bookingItems).set({ status: 'done' }).where(eq(bookingItems.id, kettleItem));
   });
 
+  it(
+    'reads a failed check recorded in English in French, its figures worked out again from the readings',
+    {
+      timeout: 60_000,
+    },
+    async () => {
+      await app.db.db.update(bookingItems).set({ status: 'at-bench' }).where(eq(bookingItems.id, kettleItem));
+      const { context, page } = await signedIn(browser, app.server.url, 'fixer', PHONE);
+      await page.goto(`${app.server.url}/items/${kettleItem}?lang=en`);
+      await page.getByRole('button', { name: 'Record another check' }).click();
+      for (const box of ['Cord: no cuts', 'Plug: pins', 'Strain relief', 'Casing', 'No scorch'])
+        await page.getByLabel(new RegExp(box)).check();
+      await page.getByText('Class I', { exact: true }).click();
+      await page.getByLabel('Heating elements', { exact: false }).first().check();
+      await page.getByLabel('Cord length (m)').fill('2');
+      await page.getByLabel('Protective conductor resistance (Ω)').fill('0.18');
+      await page.getByLabel('Insulation resistance at 500 V DC (MΩ)').fill('0.2');
+      await page.getByRole('button', { name: 'Record this check' }).click();
+      await page
+        .getByTestId('latest-check')
+        .getByText(/Failed at/)
+        .waitFor();
+      await page.goto(`${app.server.url}/items/${kettleItem}?lang=fr`);
+      const latest = page.getByTestId('latest-check');
+      await latest.getByText(/Échoué à/).waitFor();
+      // locales/fr/bench.json, with the French decimal comma (CLDR fr).
+      expect(await latest.innerText()).toContain(
+        'Isolement 0,2 MΩ en dessous du minimum de 0,3 MΩ pour la classe I avec éléments chauffants.',
+      );
+      expect(await latest.innerText()).not.toContain('Insulation');
+      await context.close();
+      await app.db.db.update(bookingItems).set({ status: 'done' }).where(eq(bookingItems.id, kettleItem));
+    },
+  );
+
   it('asks why an item cannot be mended in Dutch, with the reason’s hint', { timeout: 60_000 }, async () => {
     const { context, page } = await signedIn(browser, app.server.url, 'fixer', PHONE, 'nl-NL');
     await page.goto(`${app.server.url}/items/${kettleItem}`);

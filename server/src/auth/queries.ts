@@ -158,12 +158,7 @@ export async function loadSessionUser(db: DbOrTx, userId: number): Promise<Sessi
     .where(eq(users.id, userId));
   if (!user) return null;
   const roles = await db
-    .select({
-      groupId: memberships.groupId,
-      role: memberships.role,
-      groupName: repairGroups.name,
-      groupLanguage: repairGroups.defaultLanguage,
-    })
+    .select({ groupId: memberships.groupId, role: memberships.role, groupName: repairGroups.name })
     .from(memberships)
     .innerJoin(repairGroups, eq(repairGroups.id, memberships.groupId))
     .where(and(eq(memberships.userId, userId), eq(memberships.status, 'active')))

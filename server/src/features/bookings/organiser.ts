@@ -1,9 +1,17 @@
 import type { AppContext } from '../../context';
 import { eventBookingRows } from './queries/organiser';
+import { categoryText } from '../../i18n';
+import { DEFAULT_LANGUAGE, type Language } from '../../../../shared/i18n/languages';
 
 /** What is coming to an event: every booking with its items, and counts by category and skill. */
-export async function eventBookings(ctx: AppContext, eventId: number) {
-  const { rows, items, photos, waiting } = await eventBookingRows(ctx.database.db, eventId);
+export async function eventBookings(ctx: AppContext, eventId: number, lang: Language = DEFAULT_LANGUAGE) {
+  const found = await eventBookingRows(ctx.database.db, eventId);
+  const { rows, photos, waiting } = found;
+  // The kinds of item in the reader's language (a group's own kinds keep their stored name).
+  const items = found.items.map(({ categorySlug, ...i }) => ({
+    ...i,
+    categoryName: categoryText(lang, categorySlug, 'name', i.categoryName),
+  }));
   const confirmedIds = new Set(rows.filter((r) => r.status === 'confirmed').map((r) => r.id));
   const counted = items.filter((i) => confirmedIds.has(i.bookingId));
   const tally = (key: (i: (typeof counted)[number]) => string) => {

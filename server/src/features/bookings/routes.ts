@@ -180,7 +180,7 @@ export function bookingRoutes(ctx: AppContext) {
     '/events/:id/bookings',
     requireGroupRole(['organiser', 'host'], (req) => eventGroupId(db, paramId(req, 'id'))),
     async (req, res) => {
-      res.json(await eventBookings(ctx, paramId(req, 'id')));
+      res.json(await eventBookings(ctx, paramId(req, 'id'), languageOf(req, res.locals)));
     },
   );
   r.get('/rebook/:token', async (req, res) => {

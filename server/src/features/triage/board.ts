@@ -4,9 +4,11 @@ import type { TriageResult } from '../../../../shared/triage/engine';
 import type { AppContext } from '../../context';
 import { loadEvent, warningsFor, windowOf } from './event-data';
 import { recentRuns } from './queries';
+import { categoryText } from '../../i18n';
+import { DEFAULT_LANGUAGE, type Language } from '../../../../shared/i18n/languages';
 
 /** The triage board: benches and fixers with their items, the unplaced items with reasons, the day plan. */
-export async function board(ctx: AppContext, eventId: number): Promise<Board> {
+export async function board(ctx: AppContext, eventId: number, lang: Language = DEFAULT_LANGUAGE): Promise<Board> {
   const data = await loadEvent(ctx, eventId);
   const runs = await recentRuns(ctx.database.db, eventId);
   const latest = runs[0]?.result as TriageResult | undefined;
@@ -49,7 +51,7 @@ export async function board(ctx: AppContext, eventId: number): Promise<Board> {
       visitorName: i.visitorName,
       bookedAt: i.bookedAt,
       slotId: i.slotId,
-      categoryName: i.categoryName,
+      categoryName: categoryText(lang, i.categorySlug, 'name', i.categoryName),
       brand: i.brand,
       model: i.model,
       fault: i.fault,

@@ -24,6 +24,7 @@ export const openItemRows = (db: DbOrTx, eventId: number) =>
       bookedAt: bookings.createdAt,
       slotId: bookings.slotId,
       categoryName: categories.name,
+      categorySlug: categories.slug,
       skill: categories.skill,
       equipment: categories.equipment,
       catMains: categories.mains,
@@ -146,6 +147,7 @@ export const itemNameRows = (db: DbOrTx, eventId: number) =>
       id: bookingItems.id,
       reference: bookings.reference,
       categoryName: categories.name,
+      categorySlug: categories.slug,
       brand: bookingItems.brand,
       model: bookingItems.model,
     })

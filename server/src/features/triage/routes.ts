@@ -7,6 +7,7 @@ import { body, params, paramId } from '../../http/validate';
 import { eventGroupId } from '../../core/events';
 import { board } from './board';
 import * as t from './service';
+import { languageOf } from '../../i18n';
 
 const itemParams = z.object({ id: z.coerce.number().int().positive(), itemId: z.coerce.number().int().positive() });
 const runParams = z.object({ id: z.coerce.number().int().positive(), runId: z.coerce.number().int().positive() });
@@ -23,10 +24,12 @@ export function triageRoutes(ctx: AppContext) {
     const { slotId } = body(req, runSchema);
     res.status(201).json(await t.runTriage(ctx, id(req), slotId, req.user!.id));
   });
-  r.get('/events/:id/board', organiser, async (req, res) => res.json(await board(ctx, id(req))));
+  r.get('/events/:id/board', organiser, async (req, res) =>
+    res.json(await board(ctx, id(req), languageOf(req, res.locals))),
+  );
   r.get('/events/:id/triage-runs/:runId', organiser, async (req, res) => {
     const p = params(req, runParams);
-    res.json(await t.runDetail(ctx, p.id, p.runId));
+    res.json(await t.runDetail(ctx, p.id, p.runId, languageOf(req, res.locals)));
   });
   r.put('/events/:id/items/:itemId/placement', organiser, async (req, res) => {
     const p = params(req, itemParams);

@@ -8,6 +8,8 @@ import type { AppContext } from '../../context';
 import { HttpError, notFound } from '../../http/errors';
 import { busyDuring, loadEvent, priorityOf, warningsFor, windowOf, type Loaded } from './event-data';
 import * as q from './queries';
+import { categoryText } from '../../i18n';
+import { DEFAULT_LANGUAGE, type Language } from '../../../../shared/i18n/languages';
 
 /**
  * Runs the engine. For the whole session it plans the day round by round (one round per slot, repairs keeping
@@ -215,13 +217,23 @@ export async function unplace(ctx: AppContext, eventId: number, itemId: number):
 }
 
 /** A stored run read back for the organiser: the summary in words, and the exact input and result it kept. */
-export async function runDetail(ctx: AppContext, eventId: number, runId: number): Promise<TriageRunDetail> {
+export async function runDetail(
+  ctx: AppContext,
+  eventId: number,
+  runId: number,
+  lang: Language = DEFAULT_LANGUAGE,
+): Promise<TriageRunDetail> {
   const { db } = ctx.database;
   const e = await eventWithGroup(db, eventId);
   const r = e && (await q.runRow(db, eventId, runId));
   if (!e || !r) throw notFound('That run');
   const [names, slots] = await Promise.all([q.itemNameRows(db, eventId), slotsOfEvent(db, eventId)]);
-  const labels = new Map(names.map((n) => [String(n.id), `${itemLabel(n)} · ${n.reference}`]));
+  const labels = new Map(
+    names.map((n) => [
+      String(n.id),
+      `${itemLabel({ ...n, categoryName: categoryText(lang, n.categorySlug, 'name', n.categoryName) })} · ${n.reference}`,
+    ]),
+  );
   return {
     run: {
       id: r.id,

@@ -29,6 +29,7 @@ export const queueRows = (db: DbOrTx, userId: number) =>
       reference: bookings.reference,
       visitorName: bookings.visitorName,
       categoryName: categories.name,
+      categorySlug: categories.slug,
       minutes: categories.repairMinutes,
       brand: bookingItems.brand,
       model: bookingItems.model,

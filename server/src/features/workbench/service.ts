@@ -2,9 +2,15 @@ import type { AppContext } from '../../context';
 import type { QueueItem } from '../../../../shared/api/workbench';
 import { eventLayout } from '../../core/benches';
 import { photoIdsOf, queueRows } from './queries';
+import { categoryText } from '../../i18n';
+import { DEFAULT_LANGUAGE, type Language } from '../../../../shared/i18n/languages';
 
 /** A fixer's own queue across upcoming events ("My bench"), in the order the items come. */
-export async function myQueue(ctx: AppContext, userId: number): Promise<QueueItem[]> {
+export async function myQueue(
+  ctx: AppContext,
+  userId: number,
+  lang: Language = DEFAULT_LANGUAGE,
+): Promise<QueueItem[]> {
   const { db } = ctx.database;
   const rows = await queueRows(db, userId);
   const photos = await photoIdsOf(
@@ -16,8 +22,9 @@ export async function myQueue(ctx: AppContext, userId: number): Promise<QueueIte
       .flat()
       .map((b) => [b.id, b.name]),
   );
-  return rows.map((r) => ({
+  return rows.map(({ categorySlug, ...r }) => ({
     ...r,
+    categoryName: categoryText(lang, categorySlug, 'name', r.categoryName),
     mains: Boolean(r.mains),
     locked: Boolean(r.locked),
     visitorName: r.visitorName.split(' ')[0],

@@ -11,7 +11,12 @@ import {
   type SafetyFault,
 } from '../../../../../shared/safety/limits';
 import { missingReadings, requiredReadings } from '../../../../../shared/safety/readings';
-import { safetyCheckSchema, visualOk, type SafetyCheckInput } from '../../../../../shared/schemas/event-day';
+import {
+  safetyCheckSchema,
+  visualOk,
+  type SafetyCheckInput,
+  type SafetyCheckValues,
+} from '../../../../../shared/schemas/event-day';
 import { Button } from '../../../components/ui/button';
 import { Alert, Card } from '../../../components/ui/feedback';
 import { CheckField, TextField } from '../../../components/ui/field';
@@ -66,10 +71,25 @@ const READING_FIELDS: Record<Reading, { label: (required: boolean) => string; hi
 };
 
 /** A fault of shared/safety in the reader's words, its figures in the language's number form. */
-function faultText(f: SafetyFault, heating: boolean, n: Num): string {
+export function faultText(f: SafetyFault, heating: boolean, n: Num): string {
   const values = Object.fromEntries(Object.entries(f.values).map(([k, v]) => [k, typeof v === 'number' ? n(v) : v]));
   const key = f.field === 'insulationMOhm' && heating ? 'insulationMOhmHeating' : f.field;
   return tr(`bench.safety.fault.${key}`, values);
+}
+
+/**
+ * A stored check's faults in the reader's words: worked out again by shared/safety from the readings it kept, so a
+ * check recorded in one language reads in another (the stored English sentences are for the record and the export).
+ */
+function storedFaults(r: SafetyCheckValues, lang: string): string[] {
+  const n = (x: number) => x.toLocaleString(lang, { maximumFractionDigits: 3 });
+  const { visual, instrument: _instrument, ...readings } = r;
+  return safetyFaults({ ...readings, visualOk: visualOk(visual) }).map((f) => faultText(f, r.heating, n));
+}
+
+/** A failed stored check's faults as one text; the stored sentences if the readings no longer show them. */
+export function storedFaultsText(check: { readings: SafetyCheckValues; failures: string[] }, lang: string): string {
+  return storedFaults(check.readings, lang).join(' ') || check.failures.join(' ');
 }
 
 /** The check's form: visual inspection, class, readings; the verdict is worked out as you type. */
@@ -159,7 +179,7 @@ export function SafetyForm({ item }: { item: ItemView }) {
           >
             {latest.pass
               ? t('bench.safety.mayBeFixed')
-              : `${latest.failures.join(' ')} ${t('bench.safety.cannotGoHome')}`}
+              : `${storedFaultsText(latest, lang)} ${t('bench.safety.cannotGoHome')}`}
           </Alert>
         </div>
       )}

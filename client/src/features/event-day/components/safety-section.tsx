@@ -3,7 +3,8 @@ import { formatTime } from '../../../../../shared/format';
 import { Button } from '../../../components/ui/button';
 import { Alert, Card } from '../../../components/ui/feedback';
 import type { ItemView } from '../api/types';
-import { SafetyForm } from './safety-form';
+import { SafetyForm, storedFaultsText } from './safety-form';
+
 import { useLanguage, useT } from '../../../lib/i18n';
 
 /** The electrical safety check: visual inspection, class, readings; the verdict is worked out as you type. */
@@ -31,7 +32,7 @@ export function SafetySection({ item }: { item: ItemView }) {
             {t('fixer.check.class', { cls: latest.applianceClass })}
             {latest.instrument && `, ${latest.instrument}`}
             {latest.checkedByName && t('fixer.check.by', { name: latest.checkedByName })}.{' '}
-            {!latest.pass && latest.failures.join(' ')}{' '}
+            {!latest.pass && storedFaultsText(latest, lang)}{' '}
             {item.safetyChecks.length > 1 && t('fixer.check.earlier', { count: item.safetyChecks.length - 1 })}
           </Alert>
         </div>

@@ -28,6 +28,7 @@ export async function eventBookingRows(db: DbOrTx, eventId: number) {
           bookingId: bookingItems.bookingId,
           categoryId: bookingItems.categoryId,
           categoryName: categories.name,
+          categorySlug: categories.slug,
           skill: categories.skill,
           brand: bookingItems.brand,
           model: bookingItems.model,
