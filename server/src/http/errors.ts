@@ -3,7 +3,7 @@ import { logReason } from '../db/log-reason';
 import { ZodError } from 'zod';
 import { lockConflict } from '../db/retry';
 import { redactUrl } from './redact';
-import { languageOf, translate } from '../i18n';
+import { isMessageKey, languageOf, translate } from '../i18n';
 
 /** The one error type services throw; the handler turns it into `{"error":{code,message,fields?}}`. */
 export class HttpError extends Error {
@@ -12,6 +12,8 @@ export class HttpError extends Error {
     public code: string,
     message: string,
     public fields?: Record<string, string>,
+    /** Values of a catalog message; a value that is itself a catalog key (a status's name) is put in the reader's language. */
+    public values?: Record<string, string | number>,
   ) {
     super(message);
   }
@@ -30,7 +32,12 @@ export function zodFields(error: ZodError): Record<string, string> {
 }
 
 export const apiNotFound: RequestHandler = (req, _res, next) => {
-  next(new HttpError(404, 'not-found', `No API route ${req.method} ${req.path}.`));
+  next(
+    new HttpError(404, 'not-found', 'problems.noRoute', undefined, {
+      method: req.method,
+      path: req.path,
+    }),
+  );
 };
 
 /** The driver's error code, also when the ORM wraps the driver error and keeps it as the cause. */
@@ -145,8 +152,16 @@ export function errorHandler(log: (msg: string, err: unknown) => void = console.
     const fields = e.fields
       ? Object.fromEntries(Object.entries(e.fields).map(([k, v]) => [k, translate(lang, v)]))
       : undefined;
+    const values = e.values
+      ? Object.fromEntries(
+          Object.entries(e.values).map(([k, v]) => [
+            k,
+            typeof v === 'string' && isMessageKey(v) ? translate(lang, v) : v,
+          ]),
+        )
+      : undefined;
     res
       .status(e.status)
-      .json({ error: { code: e.code, message: translate(lang, e.message), ...(fields ? { fields } : {}) } });
+      .json({ error: { code: e.code, message: translate(lang, e.message, values), ...(fields ? { fields } : {}) } });
   };
 }

@@ -30,11 +30,10 @@ export async function setStatus(
 ) {
   for (const c of changes) {
     if (c.from !== null && !canMoveTo(c.from, c.to))
-      throw new HttpError(
-        409,
-        'bad-transition',
-        `An item that is ${ITEM_STATUS_LABELS[c.from].toLowerCase()} cannot become ${ITEM_STATUS_LABELS[c.to].toLowerCase()}.`,
-      );
+      throw new HttpError(409, 'bad-transition', 'problems.itemCannotMove', undefined, {
+        from: `fixer.status.${c.from}`,
+        to: `fixer.status.${c.to}`,
+      });
     await q.updateItemStatus(tx, c.itemId, c.to, c.extra);
   }
   if (changes.length)

@@ -41,9 +41,9 @@ export async function startRepair(ctx: AppContext, itemId: number, user: Session
         throw new HttpError(
           409,
           'bad-transition',
-          row.item.status === 'booked'
-            ? 'Check the item in at reception first.'
-            : `This item is ${row.item.status}; it cannot go to a bench now.`,
+          row.item.status === 'booked' ? 'Check the item in at reception first.' : 'problems.itemNotForBench',
+          undefined,
+          { status: `fixer.status.${row.item.status}` },
         );
       const a = await q.assignmentOf(tx, itemId);
       const fixerId =
@@ -159,9 +159,9 @@ export async function recordOutcome(
         throw new HttpError(
           409,
           'bad-transition',
-          row.item.status === 'booked'
-            ? 'Check the item in at reception first.'
-            : `This item is marked ${row.item.status}.`,
+          row.item.status === 'booked' ? 'Check the item in at reception first.' : 'problems.itemNoOutcome',
+          undefined,
+          { status: `fixer.status.${row.item.status}` },
         );
       const latest = await q.latestCheckOf(tx, itemId);
       if (input.outcome === 'fixed') {

@@ -133,7 +133,11 @@ export async function changeStatus(ctx: AppContext, id: number, action: keyof ty
   await ctx.database.db.transaction(async (tx) => {
     const e = await lockEvent(tx, id);
     if (!e) throw notFound('That session');
-    if (!t.from.includes(e.status)) throw conflict('bad-transition', `A ${e.status} event cannot be ${t.to}.`);
+    if (!t.from.includes(e.status))
+      throw new HttpError(409, 'bad-transition', 'problems.sessionCannotMove', undefined, {
+        from: `events.status.${e.status}`,
+        to: `events.status.${t.to}`,
+      });
     if (action === 'publish') {
       const s = await slotsOfEvent(tx, id);
       if (!s.some((x) => x.capacity > 0))

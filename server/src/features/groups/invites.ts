@@ -1,4 +1,4 @@
-import { ROLE_LABELS, type GroupRole } from '../../../../shared/constants';
+import type { GroupRole } from '../../../../shared/constants';
 import type { AppContext } from '../../context';
 import { refuseCommonPassword } from '../../auth/common-passwords';
 import { hashPassword } from '../../auth/passwords';
@@ -36,8 +36,9 @@ export async function invite(
     throw new HttpError(
       409,
       'already-member',
-      `${input.email} is already ${ROLE_LABELS[input.role].toLowerCase()} with ${group.name}.`,
+      'problems.alreadyMember',
       { email: 'Already in the team in this role.' },
+      { email: input.email, group: group.name, role: `organise.role.${input.role}` },
     );
   const { token, hash } = newToken();
   await db.transaction(async (tx) => {
