@@ -92,13 +92,23 @@ export function bookingEntry(
 export const shiftRole = (roles: GroupRole[]): GroupRole =>
   roles.includes('fixer') ? 'fixer' : roles.includes('host') ? 'host' : 'organiser';
 
+/** The words of a volunteer's shift entries; the server passes the person's language (locales/<language>/mail.json). */
+export type ShiftWords = (
+  key: 'fixing' | 'reception' | 'organising' | 'bench' | 'page',
+  values: Record<string, string>,
+) => string;
+const SHIFT_ENGLISH: ShiftWords = (key, v) =>
+  ({
+    fixing: `Fixing at ${v.session}`,
+    reception: `Reception at ${v.session}`,
+    organising: `Organising ${v.session}`,
+    bench: `Your bench: ${v.bench}.`,
+    page: `The session in Mendery: ${v.url}`,
+  })[key];
+
 /** What a volunteer does at a session, in the words of the volunteer's page. */
-export const shiftSummary = (role: GroupRole, eventTitle: string) =>
-  role === 'fixer'
-    ? `Fixing at ${eventTitle}`
-    : role === 'host'
-      ? `Reception at ${eventTitle}`
-      : `Organising ${eventTitle}`;
+export const shiftSummary = (role: GroupRole, eventTitle: string, words: ShiftWords = SHIFT_ENGLISH) =>
+  words(role === 'fixer' ? 'fixing' : role === 'host' ? 'reception' : 'organising', { session: eventTitle });
 
 export interface ShiftFacts {
   shiftId: number;
@@ -113,15 +123,20 @@ export interface ShiftFacts {
 }
 
 /** A volunteer's shift as a calendar entry: the shift's hours (not the whole session's), the venue, the session's page. */
-export function shiftEntry(s: ShiftFacts, publicUrl: string, now: Date): CalendarEntry {
+export function shiftEntry(
+  s: ShiftFacts,
+  publicUrl: string,
+  now: Date,
+  words: ShiftWords = SHIFT_ENGLISH,
+): CalendarEntry {
   const url = `${publicUrl}/events/${s.eventId}`;
   return {
     uid: `shift-${s.shiftId}@${uidHost(publicUrl)}`,
     start: s.startsAt,
     end: s.endsAt,
-    summary: shiftSummary(s.role, s.eventTitle),
+    summary: shiftSummary(s.role, s.eventTitle, words),
     location: venueLine(s.venue),
-    description: [`${s.groupName}.`, s.bench ? `Your bench: ${s.bench}.` : '', `The session in Mendery: ${url}`]
+    description: [`${s.groupName}.`, s.bench ? words('bench', { bench: s.bench }) : '', words('page', { url })]
       .filter(Boolean)
       .join('\n'),
     url,

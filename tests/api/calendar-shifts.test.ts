@@ -221,6 +221,24 @@ describe('the secret link', () => {
     expect(e.end.toISOString()).toBe(shift.endsAt.toISOString());
   });
 
+  it('words the feed in the language the person chose, whoever asks for it', async () => {
+    const v = await volunteer([[groupA, 'host']]);
+    await db.db.update(users).set({ language: 'de' }).where(eq(users.id, v.id));
+    const ev = await makeEvent(db.db, groupA);
+    await say(v.agent, ev.eventId, { coming: true });
+    const path = pathOf(await makeLink(v.agent));
+    // A calendar app asks in English; the person reads German.
+    const text = (await new Agent(server.url, { 'accept-language': 'en-GB' }).get(path)).text;
+    const [e] = readCalendar(text).events;
+    expect(e.summary).toMatch(/^Empfang beim Termin /);
+    expect(e.description).toMatch(/Der Termin in Mendery: /);
+    expect(text).toMatch(/X-WR-CALNAME:Meine Einsätze bei Mendery/);
+    // Someone who chose nothing gets the request's language.
+    await db.db.update(users).set({ language: null }).where(eq(users.id, v.id));
+    const fr = readCalendar((await new Agent(server.url, { 'accept-language': 'fr' }).get(path)).text).events[0];
+    expect(fr.summary).toMatch(/^Accueil à l’atelier /);
+  });
+
   it('drops the shifts of a group the person has left', async () => {
     const v = await volunteer([[groupB, 'fixer']]);
     const ev = await makeEvent(db.db, groupB);

@@ -7,6 +7,9 @@ import { sha256 } from '../../auth/tokens';
 import { calendarText } from '../../core/calendar';
 import { notFound } from '../../http/errors';
 import * as q from './queries';
+import type { Language } from '../../../../shared/i18n/languages';
+import { asLanguage } from '../../../../shared/i18n/languages';
+import { translate } from '../../i18n';
 
 /** 32 random bytes (256 bits) in base64url: the only form a feed secret takes. */
 const SECRET = /^[A-Za-z0-9_-]{43}$/;
@@ -39,12 +42,14 @@ export async function feedOwner(ctx: AppContext, secret: string) {
  * The shifts a person said they will come to, in every group they are active in: the last FEED_PAST_DAYS days and
  * everything ahead, of sessions that are published or closed (a cancelled session drops out of the feed).
  */
-export async function shiftsCalendar(ctx: AppContext, userId: number) {
+export async function shiftsCalendar(ctx: AppContext, userId: number, fallback: Language) {
   const { db } = ctx.database;
   const now = new Date();
   const roles = new Map<number, GroupRole[]>();
   for (const m of await q.activeRolesOf(db, userId)) roles.set(m.groupId, [...(roles.get(m.groupId) ?? []), m.role]);
   const since = new Date(now.getTime() - FEED_PAST_DAYS * 86_400_000);
+  // A calendar app asks for the feed with no person's language: the one the person chose, else the request's.
+  const lang = asLanguage((await q.languageOfUser(db, userId)) ?? fallback);
   const rows = (await q.comingShiftsOf(db, userId, since)).filter((r) => roles.has(r.groupId));
   const entries = rows.map((r) =>
     shiftEntry(
@@ -61,7 +66,8 @@ export async function shiftsCalendar(ctx: AppContext, userId: number) {
       },
       ctx.env.publicUrl,
       now,
+      (key, values) => translate(lang, `mail.ics.shift.${key}`, values),
     ),
   );
-  return calendarText('My Mendery shifts', entries, 6);
+  return calendarText(translate(lang, 'mail.ics.shift.name'), entries, 6);
 }

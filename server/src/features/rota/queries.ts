@@ -167,3 +167,9 @@ export const comingShiftsOf = (db: DbOrTx, userId: number, since: Date) =>
       ),
     )
     .orderBy(asc(shifts.startsAt));
+
+/** The language a person chose for the app, or null. */
+export async function languageOfUser(db: DbOrTx, userId: number) {
+  const [row] = await db.select({ language: users.language }).from(users).where(eq(users.id, userId));
+  return row?.language ?? null;
+}

@@ -9,6 +9,7 @@ import * as rota from './service';
 import { calendarLinkStatus, feedOwner, makeCalendarLink, shiftsCalendar, stopCalendarLink } from './calendar';
 import { sendCalendar } from '../../core/calendar';
 import { publicReadLimiter } from '../../http/rate-limit';
+import { languageOf } from '../../i18n';
 
 const idParams = z.object({ id: z.coerce.number().int().positive() });
 
@@ -21,7 +22,12 @@ export function rotaRoutes(ctx: AppContext) {
 
   r.get('/me/events', requireUser, async (req, res) => res.json(await rota.myEvents(ctx, req.user!.id)));
   r.get('/me/shifts/calendar', requireUser, async (req, res) => {
-    sendCalendar(res, await shiftsCalendar(ctx, req.user!.id), 'mendery-shifts.ics', 'attachment');
+    sendCalendar(
+      res,
+      await shiftsCalendar(ctx, req.user!.id, languageOf(req, res.locals)),
+      'mendery-shifts.ics',
+      'attachment',
+    );
   });
   r.get('/me/calendar-link', requireUser, async (req, res) => {
     res.setHeader('Cache-Control', 'no-store');
@@ -58,7 +64,7 @@ export function rotaPublicRoutes(ctx: AppContext) {
   r.get('/public/shift-calendars/:file', limit, async (req, res) => {
     const secret = String(req.params.file).replace(/\.ics$/, '');
     const userId = await feedOwner(ctx, secret);
-    sendCalendar(res, await shiftsCalendar(ctx, userId), 'mendery-shifts.ics', 'inline');
+    sendCalendar(res, await shiftsCalendar(ctx, userId, languageOf(req, res.locals)), 'mendery-shifts.ics', 'inline');
   });
   return r;
 }
