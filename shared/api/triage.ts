@@ -1,5 +1,7 @@
 import type { EventStatus } from '../constants';
 import type { RunSummary } from '../triage/run-summary';
+import type { PlacementWarning } from '../triage/needs';
+import type { WaitingWhy } from '../triage/waiting';
 
 /* The triage board's answers as the server returns them; the client reads them as `Json<T>` (dates as ISO strings). */
 
@@ -25,13 +27,11 @@ export interface BoardItem {
     startsAt: Date | null;
   } | null;
   warnings: PlacementWarning[];
-  reason: { reason: string; detail: string } | null;
+  /** Why it waits, as a code and values; `detail` is the run's English record of it. */
+  reason: (WaitingWhy & { detail: string }) | null;
   estimatedStart: Date | null;
 }
-export interface PlacementWarning {
-  code: string;
-  message: string;
-}
+export type { PlacementWarning };
 export interface Board {
   event: {
     id: number;

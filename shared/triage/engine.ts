@@ -1,5 +1,6 @@
 import { MinCostFlow } from './min-cost-flow';
 import { EXACT_SEARCH_SIZE, searchMixed } from './mixed-search';
+import { waitingDetail, type WaitingWhy } from './waiting';
 
 export type Level = 1 | 2 | 3;
 export interface TriageItem {
@@ -31,10 +32,11 @@ export interface TriageInput {
   volunteers: TriageVolunteer[];
   benches: TriageBench[];
 }
-export type UnassignedReason = 'no-skill' | 'no-equipment' | 'no-pair' | 'capacity';
+/** An item left waiting: why, as a code with its values, and the same in English for the stored record. */
+export type Unassigned = { itemId: string; detail: string } & WaitingWhy;
 export interface TriageResult {
   assignments: { itemId: string; volunteerId: string; benchId: string }[];
-  unassigned: { itemId: string; reason: UnassignedReason; detail: string }[];
+  unassigned: Unassigned[];
 }
 
 const byId = <T extends { id: string }>(a: T, b: T) => (a.id < b.id ? -1 : a.id > b.id ? 1 : 0);
@@ -112,7 +114,7 @@ export function triage(input: TriageInput): TriageResult {
     const key = `${item.skill}\u0000${item.minLevel}\u0000${item.equipment.join('\u0000')}`;
     let why = reasons.get(key);
     if (!why) reasons.set(key, (why = explain(item, present, allBenches)));
-    unassigned.push({ itemId: item.id, ...why });
+    unassigned.push({ itemId: item.id, ...why, detail: waitingDetail(why) });
   }
   return { assignments, unassigned };
 }
@@ -287,45 +289,46 @@ function mixedPlan(
   return { pairs, cost: r.cost };
 }
 
-const list = (words: string[]) =>
-  words.length <= 1 ? words.join('') : `${words.slice(0, -1).join(', ')} and ${words.at(-1)}`;
-const kit = (e: string) => e.replace(/-/g, ' ');
-const levelWord = (n: number) => (n >= 3 ? 'expert' : n === 2 ? 'capable' : 'learning');
+/** A round as a stored run keeps it, read loosely: enough to say again why an item waited. */
+export interface ExplainInput {
+  items: { id: string; skill: string; minLevel: number; equipment: string[] }[];
+  volunteers: { id: string; name?: string; skills: Record<string, number>; benchId?: string }[];
+  benches: { id: string; equipment: string[] }[];
+}
 
-/** Why an item was left out, in words an organiser can act on. */
+/**
+ * Why the item waited, worked out again from a stored round (runs stored before reasons kept their values); null
+ * when the item is not in it.
+ */
+export function explainAgain(input: ExplainInput, itemId: string): WaitingWhy | null {
+  const item = input.items.find((i) => i.id === itemId);
+  if (!item) return null;
+  const benchIds = new Set(input.benches.map((b) => b.id));
+  const present = input.volunteers.filter((v) => v.benchId === undefined || benchIds.has(v.benchId));
+  return explain(item, present, input.benches);
+}
+
+/** Why an item was left out, as a code and the values an organiser needs to act on it. */
 function explain(
-  item: TriageItem,
-  volunteers: TriageVolunteer[],
-  benches: TriageBench[],
-): { reason: UnassignedReason; detail: string } {
-  const skilled = volunteers.filter((v) => levelOf(v, item.skill) >= item.minLevel);
-  const equipped = benches.filter((b) => hasAll(b, item.equipment));
-  if (!skilled.length) {
-    return {
-      reason: 'no-skill',
-      detail: `Nobody here has ${item.skill} at level ${item.minLevel} (${levelWord(item.minLevel)}) or above.`,
-    };
-  }
+  item: ExplainInput['items'][number],
+  volunteers: ExplainInput['volunteers'],
+  benches: ExplainInput['benches'],
+): WaitingWhy {
+  const skilled = volunteers.filter((v) => (v.skills[item.skill] ?? 0) >= item.minLevel);
+  const equipped = benches.filter((b) => item.equipment.every((e) => b.equipment.includes(e)));
+  if (!skilled.length) return { reason: 'no-skill', skill: item.skill, level: item.minLevel };
   if (!equipped.length) {
     const missing = item.equipment.filter((e) => !benches.some((b) => b.equipment.includes(e)));
-    return {
-      reason: 'no-equipment',
-      detail: missing.length
-        ? `No bench has a ${list(missing.map(kit))}.`
-        : `No single bench has all of: ${list(item.equipment.map(kit))}.`,
-    };
+    return { reason: 'no-equipment', missing, kit: [...item.equipment] };
   }
   const equippedIds = new Set(equipped.map((b) => b.id));
   const canPair = skilled.some((v) => v.benchId === undefined || equippedIds.has(v.benchId));
-  if (!canPair) {
-    const who = skilled.map((v) => v.name ?? v.id);
+  if (!canPair)
     return {
       reason: 'no-pair',
-      detail: `${list(who)} ${who.length > 1 ? 'have' : 'has'} the ${item.skill} skill but ${who.length > 1 ? 'are' : 'is'} seated at a bench without ${list(item.equipment.map(kit))}; move a fixer or the kit.`,
+      skill: item.skill,
+      fixers: skilled.map((v) => v.name ?? v.id),
+      kit: [...item.equipment],
     };
-  }
-  return {
-    reason: 'capacity',
-    detail: `A fixer and a bench for it exist, but they are busy with other items (served first, or locked there); it waits for the next round.`,
-  };
+  return { reason: 'capacity' };
 }

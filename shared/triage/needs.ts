@@ -11,10 +11,16 @@ export function itemNeeds(
   return { skill: category.skill, minLevel: item.mains || category.mains ? 2 : 1, equipment: [...category.equipment] };
 }
 
-export interface PlacementWarning {
-  code: 'missing-skill' | 'low-level' | 'missing-equipment' | 'seated-elsewhere' | 'over-capacity' | 'bench-full';
-  message: string;
-}
+/** A rule a placement breaks, as a code and the values the screen words it with (names as the board shows them). */
+export type PlacementWarning =
+  | { code: 'missing-skill'; fixer: string; skill: string }
+  | { code: 'low-level'; fixer: string; skill: string; level: number; need: number }
+  | { code: 'missing-equipment'; bench: string; missing: string[] }
+  | { code: 'seated-elsewhere'; fixer: string }
+  | { code: 'over-capacity'; fixer: string; n: number }
+  | { code: 'bench-full'; bench: string; seats: number }
+  /** The placement's fixer is no longer coming, or its bench was removed. */
+  | { code: 'gone' };
 
 /** The rules a hand-made move may break; the organiser is warned, not stopped. */
 export function checkPlacement(
@@ -29,27 +35,15 @@ export function checkPlacement(
   bench: { id: number; name: string; equipment: readonly string[]; seats: number; assigned: number },
 ): PlacementWarning[] {
   const w: PlacementWarning[] = [];
-  const level = volunteer.skills[needs.skill] ?? 0;
-  if (level === 0) w.push({ code: 'missing-skill', message: `${volunteer.name} has no ${needs.skill} skill.` });
-  else if (level < needs.minLevel)
-    w.push({
-      code: 'low-level',
-      message: `${volunteer.name} is at ${needs.skill} level ${level}; this item needs level ${needs.minLevel}.`,
-    });
+  const fixer = volunteer.name;
+  const skill = needs.skill;
+  const level = volunteer.skills[skill] ?? 0;
+  if (level === 0) w.push({ code: 'missing-skill', fixer, skill });
+  else if (level < needs.minLevel) w.push({ code: 'low-level', fixer, skill, level, need: needs.minLevel });
   const missing = needs.equipment.filter((e) => !bench.equipment.includes(e));
-  if (missing.length)
-    w.push({
-      code: 'missing-equipment',
-      message: `${bench.name} has no ${missing.map((m) => m.replace(/-/g, ' ')).join(', ')}.`,
-    });
-  if (volunteer.benchId != null && volunteer.benchId !== bench.id)
-    w.push({ code: 'seated-elsewhere', message: `${volunteer.name} is seated at another bench.` });
-  if (volunteer.assigned >= volunteer.capacity)
-    w.push({
-      code: 'over-capacity',
-      message: `${volunteer.name} already has ${volunteer.assigned} item${volunteer.assigned === 1 ? '' : 's'}.`,
-    });
-  if (bench.assigned >= bench.seats)
-    w.push({ code: 'bench-full', message: `${bench.name} has all ${bench.seats} seats taken.` });
+  if (missing.length) w.push({ code: 'missing-equipment', bench: bench.name, missing });
+  if (volunteer.benchId != null && volunteer.benchId !== bench.id) w.push({ code: 'seated-elsewhere', fixer });
+  if (volunteer.assigned >= volunteer.capacity) w.push({ code: 'over-capacity', fixer, n: volunteer.assigned });
+  if (bench.assigned >= bench.seats) w.push({ code: 'bench-full', bench: bench.name, seats: bench.seats });
   return w;
 }

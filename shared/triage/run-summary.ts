@@ -1,6 +1,8 @@
 import { z } from 'zod';
 import { EQUIPMENT_LABELS, SKILL_LABELS, type Equipment, type Skill } from '../constants';
 import { SKILL_LEVEL_WORDS, skillNeedPhrase } from './skill-words';
+import { explainAgain } from './engine';
+import { storedWhy, type WaitingWhy } from './waiting';
 
 /** Why the engine left an item waiting, in the organiser's words (the detail line says who or what was missing). */
 export const WAITING_REASON_LABELS: Record<string, string> = {
@@ -39,8 +41,27 @@ const storedInput = z.object({
 });
 const storedResult = z.object({
   assignments: z.array(z.object({ itemId: id, volunteerId: id, benchId: id })),
-  unassigned: z.array(z.object({ itemId: id, reason: z.string(), detail: z.string().catch('') })),
+  unassigned: z.array(z.object({ itemId: id, reason: z.string(), detail: z.string().catch('') }).passthrough()),
 });
+
+/**
+ * Why each item of a stored run waits, as a code and values: as the run stored them, or, for a run stored before
+ * reasons kept their values, worked out again from the run's input. Null when neither can be read.
+ */
+export function storedReasons(input: unknown): (entry: unknown) => WaitingWhy | null {
+  let parsed: z.infer<typeof storedInput> | null | undefined;
+  return (entry) => {
+    const why = storedWhy(entry);
+    if (why) return why;
+    const itemId = (entry as { itemId?: unknown } | null)?.itemId;
+    if (typeof itemId !== 'string' && typeof itemId !== 'number') return null;
+    if (parsed === undefined) {
+      const i = storedInput.safeParse(input);
+      parsed = i.success ? i.data : null;
+    }
+    return parsed && explainAgain(parsed, String(itemId));
+  };
+}
 
 export interface RunSummary {
   /** The whole session planned slot by slot, or one slot's round. */
@@ -51,7 +72,8 @@ export interface RunSummary {
   /** The rules the run kept, in sentences. */
   rules: string[];
   placed: { itemId: string; item: string; fixer: string; bench: string }[];
-  waiting: { itemId: string; item: string; reason: string; detail: string }[];
+  /** `reason` and `detail` are in English, as the run stored them; `why` is the same as a code and values. */
+  waiting: { itemId: string; item: string; reason: string; detail: string; why: WaitingWhy | null }[];
 }
 
 const skillLabel = (s: string) => SKILL_LABELS[s as Skill] ?? s;
@@ -73,6 +95,7 @@ export function summariseRun(
   if (!i.success || !r.success) return null;
   const { items, volunteers, benches, slots } = i.data;
   const scope = slots ? 'day' : 'slot';
+  const whyOf = storedReasons(input);
   const itemName = (x: string) => labels.get(x) ?? `Item ${x}`;
   const fixerName = new Map(volunteers.map((v) => [v.id, v.name ?? `Fixer ${v.id}`]));
   const benchName = new Map(benches.map((b) => [b.id, b.name ?? `Bench ${b.id}`]));
@@ -124,6 +147,7 @@ export function summariseRun(
       item: itemName(u.itemId),
       reason: WAITING_REASON_LABELS[u.reason] ?? u.reason,
       detail: u.detail,
+      why: whyOf(u),
     })),
   };
 }

@@ -38,6 +38,7 @@ const board = {
     round: 'Round',
     link: 'what went in and came out',
     out: 'What came out',
+    toy: 'Nobody here has toys at level 1 (learning) or above.',
   },
   nl: {
     run: 'Verdeling maken',
@@ -45,6 +46,7 @@ const board = {
     round: 'Ronde',
     link: 'wat erin ging en eruit kwam',
     out: 'Wat eruit kwam',
+    toy: 'Niemand hier heeft de vaardigheid ‘speelgoed’ op niveau 1 (lerend) of hoger.',
   },
   de: {
     run: 'Verteilung starten',
@@ -52,6 +54,7 @@ const board = {
     round: 'Runde',
     link: 'was hineinging und herauskam',
     out: 'Was herauskam',
+    toy: 'Niemand hier hat die Fähigkeit „Spielzeug“ auf Stufe 1 (lernend) oder höher.',
   },
   fr: {
     run: 'Lancer la répartition',
@@ -59,6 +62,7 @@ const board = {
     round: 'Tour',
     link: 'ce qui est entré et sorti',
     out: 'Ce qui en est sorti',
+    toy: 'Personne ici n’a la compétence « jouets » au niveau 1 (en apprentissage) ou au-dessus.',
   },
 };
 
@@ -79,11 +83,15 @@ describe('the triage board and its runs in four languages', () => {
       await page.getByRole('button', { name: words.run }).click();
       await page.getByRole('status').waitFor();
       if (lang !== 'en') expect(await page.getByRole('status').textContent()).not.toMatch(/Placed|wait/);
+      // No fixer coming has the toys skill: the toy's card says why in the reader's language.
+      await page.locator('article').filter({ hasText: words.toy }).first().waitFor();
+      if (lang !== 'en') expect(await page.getByText(/Nobody here|busy with other items/).count()).toBe(0);
       await page.screenshot({ path: shot(`i18n-triage-board-${lang}`), fullPage: true });
       await page.locator('summary').first().click();
       await page.getByRole('link', { name: words.link }).first().click();
       await page.getByRole('heading', { name: words.out }).waitFor();
       if (lang !== 'en') expect(await page.getByText('What went in').count()).toBe(0);
+      await page.getByRole('cell').filter({ hasText: words.toy }).first().waitFor();
       await page.screenshot({ path: shot(`i18n-triage-run-${lang}`), fullPage: true });
       await context.close();
     }

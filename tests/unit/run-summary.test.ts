@@ -20,9 +20,16 @@ describe('a triage run in words', () => {
     const s = summariseRun(input, result, new Map([['2', 'Clothing · B9N-3HF']]), 0)!;
     expect(s.scope).toBe('slot');
     expect(s.placed).toEqual([{ itemId: '2', item: 'Clothing · B9N-3HF', fixer: 'Ada', bench: 'Sewing table' }]);
-    // An item with no label left (since deleted) keeps its number.
+    // An item with no label left (since deleted) keeps its number. A run stored before reasons kept their values
+    // has them worked out again from its input, for the screen to word.
     expect(s.waiting).toEqual([
-      { itemId: '1', item: 'Item 1', reason: 'No fixer with the skill', detail: 'Nobody here has toys.' },
+      {
+        itemId: '1',
+        item: 'Item 1',
+        reason: 'No fixer with the skill',
+        detail: 'Nobody here has toys.',
+        why: { reason: 'no-skill', skill: 'toys', level: 1 },
+      },
     ]);
     expect(s.fixers[0]).toMatchObject({ name: 'Ada', skills: 'Textiles (expert)', seat: 'Sewing table' });
     expect(s.items[0]).toMatchObject({ needs: 'Toys, learning or better', kit: 'Soldering station' });

@@ -75,7 +75,11 @@ export function measureTriage() {
       { numRuns: 300, seed: 99 },
     )
     .map((o) => largeRound(o));
-  const objective = (input: TriageInput, out: ReturnType<typeof triage>, ref: ReturnType<typeof referenceOptimum>) =>
+  const objective = (
+    input: TriageInput,
+    out: Pick<ReturnType<typeof triage>, 'assignments'>,
+    ref: ReturnType<typeof referenceOptimum>,
+  ) =>
     out.assignments.reduce((sum, a) => {
       const i = input.items.find((x) => x.id === a.itemId)!;
       const v = input.volunteers.find((x) => x.id === a.volunteerId)!;

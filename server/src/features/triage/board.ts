@@ -3,7 +3,9 @@ import type { Board } from '../../../../shared/api/triage';
 import type { TriageResult } from '../../../../shared/triage/engine';
 import type { AppContext } from '../../context';
 import { loadEvent, warningsFor, windowOf } from './event-data';
-import { recentRuns } from './queries';
+import { recentRuns, runRow } from './queries';
+import { storedReasons } from '../../../../shared/triage/run-summary';
+import { storedWhy } from '../../../../shared/triage/waiting';
 import { categoryText } from '../../i18n';
 import { DEFAULT_LANGUAGE, type Language } from '../../../../shared/i18n/languages';
 
@@ -12,7 +14,15 @@ export async function board(ctx: AppContext, eventId: number, lang: Language = D
   const data = await loadEvent(ctx, eventId);
   const runs = await recentRuns(ctx.database.db, eventId);
   const latest = runs[0]?.result as TriageResult | undefined;
-  const reasons = new Map((latest?.unassigned ?? []).map((u) => [Number(u.itemId), u]));
+  // A run stored before reasons kept their values has them worked out again from its input.
+  const old = latest?.unassigned.some((u) => !storedWhy(u));
+  const whyOf = storedReasons(old ? (await runRow(ctx.database.db, eventId, runs[0].id))?.input : undefined);
+  const reasons = new Map(
+    (latest?.unassigned ?? []).flatMap((u) => {
+      const why = whyOf(u);
+      return why ? [[Number(u.itemId), { ...why, detail: u.detail }] as const] : [];
+    }),
+  );
   const placedBy = new Map(data.placed.map((p) => [p.itemId, p]));
   const plan = dayPlan({
     slots: data.slots.map((s) => ({ id: String(s.id), startsAt: s.startsAt, endsAt: s.endsAt })),
@@ -40,11 +50,7 @@ export async function board(ctx: AppContext, eventId: number, lang: Language = D
     const bench = p && data.benches.find((b) => b.id === p.benchId);
     const w = p ? windowOf(data, i.id, p.startsAt) : null;
     const warnings =
-      p && fixer && bench && w
-        ? warningsFor(data, i, fixer, bench, w)
-        : p
-          ? [{ code: 'missing-skill' as const, message: 'The fixer is no longer coming or the bench was removed.' }]
-          : [];
+      p && fixer && bench && w ? warningsFor(data, i, fixer, bench, w) : p ? [{ code: 'gone' as const }] : [];
     return {
       id: i.id,
       reference: i.reference,

@@ -2,6 +2,7 @@ import { triage, type TriageInput, type TriageResult } from '../../../../shared/
 import type { PlacementResult, TriageRunDetail, TriageRunResult } from '../../../../shared/api/triage';
 import { itemLabel } from '../../../../shared/item-label';
 import { summariseRun } from '../../../../shared/triage/run-summary';
+import { waitingDetail } from '../../../../shared/triage/waiting';
 import { eventWithGroup, slotsOfEvent } from '../../core/events';
 import { dayPlan } from '../../../../shared/triage/day-plan';
 import type { AppContext } from '../../context';
@@ -119,14 +120,15 @@ export async function runTriage(
       benches: plan.benches,
     });
     const reasons = new Map(why.unassigned.map((u) => [u.itemId, u]));
+    const allDay = { reason: 'capacity', allDay: true } as const;
     result = {
       assignments: placedIds.map((i) => ({ itemId: String(i.id), ...day.placement[String(i.id)]! })),
       unassigned: waiting.map(
         (i) =>
           reasons.get(String(i.id)) ?? {
             itemId: String(i.id),
-            reason: 'capacity' as const,
-            detail: 'Every fixer and bench that could take it is busy in each slot from its booking to closing time.',
+            ...allDay,
+            detail: waitingDetail(allDay),
           },
       ),
     };

@@ -6,6 +6,7 @@ import { useLanguage, useT } from '../../../lib/i18n';
 import { useLockItem } from '../api/lock-item';
 import { usePlaceItem } from '../api/place-item';
 import { useUnplaceItem } from '../api/unplace-item';
+import { waitingText, warningText } from '../wording';
 
 /** An item on the board: what it needs, why it waits or what its placement breaks, and moving it by hand. */
 export function BoardItemCard({ item, board, eventId }: { item: BoardItem; board: Board; eventId: number }) {
@@ -71,12 +72,13 @@ export function BoardItemCard({ item, board, eventId }: { item: BoardItem; board
       </p>
       {item.reason && (
         <p className="mt-1 rounded bg-copper-light px-2 py-1 text-xs">
-          <span className="font-bold">{t(`organise.triage.reason.${item.reason.reason}`)}:</span> {item.reason.detail}
+          <span className="font-bold">{t(`organise.triage.reason.${item.reason.reason}`)}:</span>{' '}
+          {waitingText(item.reason, t, lang)}
         </p>
       )}
       {item.warnings.map((w) => (
         <p key={w.code} className="mt-1 text-xs font-semibold text-alert">
-          ⚠ {w.message}
+          ⚠ {warningText(w, t, lang)}
         </p>
       ))}
       {moving ? (

@@ -3,6 +3,7 @@ import { formatTime, formatTimeRange } from '../../../../../shared/format';
 import { useLanguage, useT } from '../../../lib/i18n';
 import { Card } from '../../../components/ui/feedback';
 import type { TriageRunDetail } from '../api/types';
+import { waitingText } from '../wording';
 
 type Summary = NonNullable<TriageRunDetail['summary']>;
 
@@ -78,7 +79,8 @@ export function TriageRunSummary({ summary: s, timeZone: tz }: { summary: Summar
               rows={s.waiting.map((w) => [
                 w.item,
                 <>
-                  <span className="font-bold">{w.reason}.</span> {w.detail}
+                  <span className="font-bold">{w.why ? t(`organise.triage.reason.${w.why.reason}`) : w.reason}.</span>{' '}
+                  {w.why ? waitingText(w.why, t, lang) : w.detail}
                 </>,
               ])}
             />
