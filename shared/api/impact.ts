@@ -19,6 +19,7 @@ export type SessionFigures = { eventId: number } & Pick<
   ImpactTotals,
   'items' | 'fixed' | 'partsNeeded' | 'advice' | 'endOfLife' | 'unknown' | 'kgDiverted'
 >;
+/** The method in the reader's language (the request's Accept-Language); a source an admin typed as typed. */
 export interface Method {
   displacement: number;
   displacementNote: string;
@@ -30,6 +31,8 @@ export interface Method {
     name: string;
     avgWeightKg: number;
     weightSource: string;
+    /** The weight source as people outside the group read it: a figure from memory is called an estimate. */
+    weightSourceForReaders: string;
     co2ePerKg: number | null;
     co2eSource: string | null;
   }[];

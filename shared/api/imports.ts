@@ -1,3 +1,5 @@
+import type { RowProblem } from '../impact/import-problems';
+
 /** One file of earlier records being brought in, as the import page shows it. */
 export interface ImportJobView {
   id: number;
@@ -16,7 +18,12 @@ export interface ImportJobView {
   refused: number;
   /** Readable records worked through so far. */
   done: number;
-  errors: { row: number; field: string; message: string }[];
+  /**
+   * The first refused rows: the code of the problem and the file's value, worded by the screen
+   * (figures.import.problem.<code>); `message` is the English, and all an import made before codes has.
+   */
+  errors: { row: number; field: string; code?: RowProblem; value?: string; message: string }[];
+  /** Why a stopped job stopped, in the reader's language. */
   message: string | null;
   createdAt: string;
   finishedAt: string | null;

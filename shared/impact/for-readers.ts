@@ -6,10 +6,11 @@ const MEMORY_MARKS = [/\s*\(from memory[^)]*\)/gi, /,?\s*from memory(?=[;,.]|$)/
 
 export const ESTIMATE = 'Estimate: a typical weight, not a published figure';
 
-export function sourceForReaders(source: string): string {
+/** `estimate` is ESTIMATE in the reader's language (figures.source.estimate); the rest is the source as typed. */
+export function sourceForReaders(source: string, estimate: string = ESTIMATE): string {
   if (!/from memory/i.test(source)) return source;
   const rest = MEMORY_MARKS.reduce((s, mark) => s.replace(mark, ''), source)
     .replace(/\s+([;,.])/g, '$1')
     .replace(/^[\s;,.]+|\s+$/g, '');
-  return rest ? `${ESTIMATE}; ${rest.charAt(0).toLowerCase()}${rest.slice(1)}` : ESTIMATE;
+  return rest ? `${estimate}; ${rest.charAt(0).toLowerCase()}${rest.slice(1)}` : estimate;
 }

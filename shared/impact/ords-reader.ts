@@ -3,6 +3,7 @@ import type { Barrier } from '../event-day/constants';
 import { IMPORT_FIELDS, ORDS_BARRIER, ORDS_REPAIR_STATUS, REQUIRED_FIELDS, type ImportField } from './open-repair-data';
 import { ORDS_PRODUCT_CATEGORIES, ordsCategoryId, type OrdsProductCategory } from './ords-categories';
 import type { RepairStatus } from './visits';
+import { ROW_PROBLEMS, type RowProblem } from './import-problems';
 
 /**
  * Reads a file of repair records: Open Repair Data v0.3 or v0.2, or a plain spreadsheet whose columns an organiser
@@ -33,10 +34,22 @@ export interface ImportedRecord {
   eventDate: string;
   problem: string;
 }
+export { ROW_PROBLEMS, type RowProblem } from './import-problems';
+
 export interface Refusal {
   row: number;
   field: string;
+  code: RowProblem;
+  /** The file's text the problem is about, cut short; absent when the problem has none. */
+  value?: string;
+  /** The problem in English, for API readers and refusals stored before codes. */
   message: string;
+}
+
+/** A row's refusal: its code, the file's value, and the English message made from them. */
+export function rowRefusal(row: number, field: string, code: RowProblem, value?: string): Refusal {
+  const message = ROW_PROBLEMS[code].replace('{value}', () => value ?? '');
+  return { row, field, code, ...(value === undefined ? {} : { value }), message };
 }
 export interface ReadResult {
   kind: FileKind;
@@ -47,15 +60,27 @@ export interface ReadResult {
   total: number;
 }
 
-/** A file-level refusal: nothing in the file can be read. */
-export class UnreadableFile extends Error {}
+/**
+ * A file-level refusal: nothing in the file can be read. `code` names it in the server-only `problems` catalog
+ * (problems.<code>, whose English is `message`), with `values` for its placeholders.
+ */
+export class UnreadableFile extends Error {
+  constructor(
+    readonly code: string,
+    message: string,
+    readonly values: Record<string, string | number> = {},
+  ) {
+    super(message);
+  }
+}
 
 /**
  * UTF-8 (with or without a byte-order mark) when the bytes are valid UTF-8; otherwise Windows-1252, the encoding
  * spreadsheet programs on Windows write, so accented names arrive intact. A file with NUL bytes is no CSV.
  */
 export function decodeCsv(bytes: Uint8Array): { text: string; encoding: 'utf-8' | 'windows-1252' } {
-  if (bytes.includes(0)) throw new UnreadableFile('This file is not a CSV file. Save the sheet as CSV and try again.');
+  if (bytes.includes(0))
+    throw new UnreadableFile('notCsv', 'This file is not a CSV file. Save the sheet as CSV and try again.');
   try {
     return { text: new TextDecoder('utf-8', { fatal: true, ignoreBOM: false }).decode(bytes), encoding: 'utf-8' };
   } catch {
@@ -91,7 +116,7 @@ export function fileKind(header: string[]): FileKind {
 export function preview(text: string, rows = 5): { delimiter: ',' | ';'; header: string[]; rows: string[][] } {
   const delimiter = delimiterOf(text);
   const all = parseRows(text, delimiter, rows + 1);
-  if (!all.length) throw new UnreadableFile('This file is empty.');
+  if (!all.length) throw new UnreadableFile('fileEmpty', 'This file is empty.');
   return { delimiter, header: all[0], rows: all.slice(1) };
 }
 
@@ -112,9 +137,13 @@ function parseRows(text: string, delimiter: string, toLine?: number): string[][]
     }) as string[][];
   } catch (e) {
     const line = (e as { lines?: number }).lines;
-    throw new UnreadableFile(
-      `This file could not be read as CSV${line ? ` (near line ${line})` : ''}. Save the sheet as CSV and try again.`,
-    );
+    throw line
+      ? new UnreadableFile(
+          'csvUnreadableNear',
+          `This file could not be read as CSV (near line ${line}). Save the sheet as CSV and try again.`,
+          { line },
+        )
+      : new UnreadableFile('csvUnreadable', 'This file could not be read as CSV. Save the sheet as CSV and try again.');
   }
 }
 
@@ -134,19 +163,19 @@ export function readRecords(
 ): Omit<ReadResult, 'encoding'> {
   const delimiter = delimiterOf(text);
   const rows = parseRows(text, delimiter);
-  if (rows.length < 2) throw new UnreadableFile('This file has a header but no records.');
+  if (rows.length < 2) throw new UnreadableFile('noRecords', 'This file has a header but no records.');
   const header = rows[0].map((h) => h.trim());
   const kind = fileKind(header);
   // A column named like one of ours is matched to it unless the organiser matched another.
   const byName = Object.fromEntries(IMPORT_FIELDS.filter((f) => header.includes(f)).map((f) => [f, f]));
   const mapping: Partial<Record<ImportField, string>> = kind === 'plain' ? { ...byName, ...opts.mapping } : byName;
   const missing = REQUIRED_FIELDS.filter((f) => !mapping[f] || !header.includes(mapping[f]!));
-  if (missing.length)
-    throw new UnreadableFile(
-      kind === 'plain'
-        ? `Match a column to each of: ${missing.join(', ')}.`
-        : `The file has no ${missing.join(', ')} column.`,
-    );
+  if (missing.length) {
+    const fields = missing.join(', ');
+    throw kind === 'plain'
+      ? new UnreadableFile('matchColumns', `Match a column to each of: ${fields}.`, { fields })
+      : new UnreadableFile('missingColumns', `The file has no ${fields} column.`, { fields });
+  }
   const col = Object.fromEntries(
     IMPORT_FIELDS.map((f) => [f, mapping[f] ? header.indexOf(mapping[f]!) : -1]),
   ) as Record<ImportField, number>;
@@ -157,39 +186,38 @@ export function readRecords(
   rows.slice(1).forEach((cells, i) => {
     const row = i + 2;
     const get = (f: ImportField) => (col[f] >= 0 ? (cells[col[f]] ?? '').trim() : '');
-    const refuse = (field: ImportField, message: string) => void refused.push({ row, field, message });
+    const refuse = (field: ImportField, code: RowProblem, value?: string) =>
+      void refused.push(rowRefusal(row, field, code, value));
     const provider = get('data_provider') || opts.defaultProvider || '';
     const recordId = get('id');
-    if (!recordId) return refuse('id', 'The record has no id.');
-    if (recordId.length > 80) return refuse('id', 'The id is longer than 80 characters.');
-    if (provider.length > 80) return refuse('data_provider', 'The data provider is longer than 80 characters.');
+    if (!recordId) return refuse('id', 'noId');
+    if (recordId.length > 80) return refuse('id', 'idTooLong');
+    if (provider.length > 80) return refuse('data_provider', 'providerTooLong');
     const key = `${provider}\u0000${recordId}`;
-    if (seen.has(key)) return refuse('id', `The id ${recordId} appears twice in this file.`);
+    if (seen.has(key)) return refuse('id', 'idTwice', recordId);
     const eventDate = get('event_date');
-    if (!isRealDate(eventDate))
-      return refuse('event_date', `"${eventDate.slice(0, 40)}" is not a date written as YYYY-MM-DD.`);
-    if (eventDate > opts.today) return refuse('event_date', `${eventDate} is in the future.`);
+    if (!isRealDate(eventDate)) return refuse('event_date', 'notDate', eventDate.slice(0, 40));
+    if (eventDate > opts.today) return refuse('event_date', 'futureDate', eventDate);
     const status = STATUS_BY_TEXT.get(get('repair_status').toLowerCase());
-    if (!status)
-      return refuse('repair_status', `"${get('repair_status').slice(0, 40)}" is not a repair status we know.`);
+    if (!status) return refuse('repair_status', 'unknownStatus', get('repair_status').slice(0, 40));
     const barrierText = get('repair_barrier_if_end_of_life');
     const barrier = barrierText ? BARRIER_BY_TEXT.get(barrierText.toLowerCase()) : null;
     if (barrier === undefined)
-      return refuse('repair_barrier_if_end_of_life', `"${barrierText.slice(0, 40)}" is not a reason we know.`);
+      return refuse('repair_barrier_if_end_of_life', 'unknownBarrier', barrierText.slice(0, 40));
     const categoryText = get('product_category');
     const unpowered = /^unpowered\b/i.test(categoryText);
     const category = CATEGORY_BY_TEXT.get(categoryText.toLowerCase()) as OrdsProductCategory | undefined;
     if (categoryText && !category && !unpowered && kind !== 'plain')
-      return refuse('product_category', `"${categoryText.slice(0, 40)}" is not a product category of the standard.`);
+      return refuse('product_category', 'unknownCategory', categoryText.slice(0, 40));
     const age = numberOrNull(get('product_age'));
     if (age === undefined || (age !== null && (age < 0 || age > 150)))
-      return refuse('product_age', `"${get('product_age').slice(0, 20)}" is not an age in years.`);
+      return refuse('product_age', 'notAge', get('product_age').slice(0, 20));
     const year = numberOrNull(get('year_of_manufacture'));
     if (
       year === undefined ||
       (year !== null && (!Number.isInteger(year) || year < 1800 || year > Number(opts.today.slice(0, 4))))
     )
-      return refuse('year_of_manufacture', `"${get('year_of_manufacture').slice(0, 20)}" is not a year.`);
+      return refuse('year_of_manufacture', 'notYear', get('year_of_manufacture').slice(0, 20));
     seen.add(key);
     records.push({
       row,

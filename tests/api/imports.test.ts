@@ -72,8 +72,20 @@ describe('bringing in earlier records', () => {
     const done = await finished(as.organiser, r.json.id);
     expect(done).toMatchObject({ status: 'done', kind: 'ords-0.3', total: 5, imported: 3, skipped: 0, refused: 2 });
     expect(done.errors).toEqual([
-      { row: 4, field: 'repair_status', message: '"Mended" is not a repair status we know.' },
-      { row: 6, field: 'event_date', message: '"tomorrow" is not a date written as YYYY-MM-DD.' },
+      {
+        row: 4,
+        field: 'repair_status',
+        code: 'unknownStatus',
+        value: 'Mended',
+        message: '"Mended" is not a repair status we know.',
+      },
+      {
+        row: 6,
+        field: 'event_date',
+        code: 'notDate',
+        value: 'tomorrow',
+        message: '"tomorrow" is not a date written as YYYY-MM-DD.',
+      },
     ]);
     // One past session per date, closed, its thank-you marked sent (no job mails anyone about it).
     const made = await db.db.select().from(events).where(eq(events.groupId, groupId));
@@ -146,7 +158,9 @@ describe('bringing in earlier records', () => {
     expect(r.status).toBe(202);
     const done = await finished(as.admin, r.json.id);
     expect(done).toMatchObject({ status: 'done', kind: 'ords-0.2', imported: 2, refused: 1 });
-    expect(done.errors).toEqual([{ row: 4, field: 'group_identifier', message: 'The record names no group.' }]);
+    expect(done.errors).toEqual([
+      { row: 4, field: 'group_identifier', code: 'noGroup', message: 'The record names no group.' },
+    ]);
     const [made] = await db.db.select().from(repairGroups).where(eq(repairGroups.slug, 'repair-hub-zandvoort'));
     expect(made).toMatchObject({ name: 'Repair Hub Zandvoort', historyOnly: true, country: 'NLD' });
     expect((await as.admin.get(`/api/stats?groupId=${otherGroup}`)).json.items).toBe(1);

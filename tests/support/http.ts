@@ -77,7 +77,7 @@ export class Agent {
     const token = this.csrf ?? (await this.token());
     const res = await fetch(this.base + path, {
       method: 'POST',
-      headers: { cookie: this.cookieHeader(), 'x-csrf-token': token, accept: 'application/json' },
+      headers: { ...this.headers, cookie: this.cookieHeader(), 'x-csrf-token': token, accept: 'application/json' },
       body: form,
     });
     return { status: res.status, json: await res.json() };

@@ -100,14 +100,18 @@ async function measure(appUrl: string, ownerUrl: string) {
       .values({ email: 'bench@example.org', name: 'Bench', passwordHash: 'x', admin: true })
       .$returningId();
     const t0 = performance.now();
-    const id = await startImport(server.ctx, {
-      bytes,
-      fileName: 'bench.csv',
-      scope: 'group',
-      groupId,
-      mapping: {},
-      userId,
-    });
+    const id = await startImport(
+      server.ctx,
+      {
+        bytes,
+        fileName: 'bench.csv',
+        scope: 'group',
+        groupId,
+        mapping: {},
+        userId,
+      },
+      'en',
+    );
     await runImports(server.ctx);
     const took = (performance.now() - t0) / 1000;
     const [job] = (await server.ctx.database.pool.query('SELECT status, imported FROM import_jobs WHERE id = ?', [

@@ -13,7 +13,6 @@ import { intlLocale } from '../../../../shared/format';
 import { WhenVisible } from '../../components/ui/when-visible';
 import { MethodNotes } from '../../features/impact/components/method-notes';
 import { ImpactStory } from '../../features/impact/components/impact-story';
-import { sourceForReaders } from '../../../../shared/impact/for-readers';
 
 /** The group of the address, when there is one; `valid` is false for an address no group can have. */
 const groupOf = (raw: string | undefined) => {
@@ -226,7 +225,7 @@ function MethodCard({ method }: { method: Method }) {
             </summary>
             <div className="overflow-x-auto">
               <FactorTable
-                categories={method.categories.map((c) => ({ ...c, weightSource: sourceForReaders(c.weightSource) }))}
+                categories={method.categories.map((c) => ({ ...c, weightSource: c.weightSourceForReaders }))}
               />
             </div>
           </details>

@@ -1,4 +1,5 @@
 import { index, int, json, longtext, mysqlEnum, mysqlTable, text, uniqueIndex, varchar } from 'drizzle-orm/mysql-core';
+import type { ImportJobView } from '../../../../shared/api/imports';
 import { createdAt, id, ref, timestamp3 } from './columns';
 import { bookingItems } from './events';
 import { repairGroups } from './groups';
@@ -29,7 +30,7 @@ export const importJobs = mysqlTable(
     skipped: int('skipped').notNull().default(0),
     position: int('position').notNull().default(0),
     refusedCount: int('refused_count').notNull().default(0),
-    refusals: json('refusals').$type<{ row: number; field: string; message: string }[]>().notNull(),
+    refusals: json('refusals').$type<ImportJobView['errors']>().notNull(),
     message: text('message'),
     /** The process working on it holds it until then, and renews it after each batch. */
     leaseUntil: timestamp3('lease_until'),

@@ -5,6 +5,7 @@ import { importForm, importListQuery } from '../../../../shared/schemas/imports'
 import type { AppContext } from '../../context';
 import { hasGroupRole, requireUser } from '../../auth/guards';
 import { HttpError, notFound } from '../../http/errors';
+import { languageOf } from '../../i18n';
 import { paramId, query } from '../../http/validate';
 import { getImport, listImports, previewFile, startImport, toView } from './imports';
 
@@ -47,28 +48,32 @@ const mayImport = (req: Request, scope: 'group' | 'network', groupId: number | n
 export function importRoutes(ctx: AppContext) {
   const r = Router();
   r.post('/imports/preview', requireUser, upload, (req, res) => {
-    res.json(previewFile(theFile(req).buffer));
+    res.json(previewFile(theFile(req).buffer, languageOf(req, res.locals)));
   });
 
   r.post('/imports', requireUser, upload, async (req, res) => {
     const form = importForm.parse(req.body ?? {});
     mayImport(req, form.scope, form.groupId);
     const file = theFile(req);
-    const id = await startImport(ctx, {
-      bytes: file.buffer,
-      fileName: file.originalname || 'records.csv',
-      scope: form.scope,
-      groupId: form.scope === 'network' ? null : form.groupId!,
-      mapping: form.mapping,
-      userId: req.user!.id,
-    });
+    const id = await startImport(
+      ctx,
+      {
+        bytes: file.buffer,
+        fileName: file.originalname || 'records.csv',
+        scope: form.scope,
+        groupId: form.scope === 'network' ? null : form.groupId!,
+        mapping: form.mapping,
+        userId: req.user!.id,
+      },
+      languageOf(req, res.locals),
+    );
     res.status(202).location(`/api/imports/${id}`).json({ id });
   });
 
   r.get('/imports', requireUser, async (req, res) => {
     const { groupId } = query(req, importListQuery);
     mayImport(req, groupId ? 'group' : 'network', groupId);
-    res.json(await listImports(ctx, groupId ?? null));
+    res.json(await listImports(ctx, groupId ?? null, languageOf(req, res.locals)));
   });
 
   r.get('/imports/:id', requireUser, async (req, res) => {
@@ -78,7 +83,7 @@ export function importRoutes(ctx: AppContext) {
     const own = job.createdBy === user.id;
     if (!own && !(job.groupId ? hasGroupRole(user, job.groupId, ['organiser']) : user.admin))
       throw notFound('That import');
-    res.json(toView(job));
+    res.json(toView(job, languageOf(req, res.locals)));
   });
   return r;
 }

@@ -10,6 +10,7 @@ import {
   fileKind,
   preview,
   readRecords,
+  rowRefusal,
   UnreadableFile,
   type ImportField,
   type ImportedRecord,
@@ -18,6 +19,8 @@ import { scrubPersonalData } from '../../../../shared/privacy/scrub';
 import type { AppContext } from '../../context';
 import { isDuplicate, withDeadlockRetry } from '../../db/retry';
 import { HttpError } from '../../http/errors';
+import { translate } from '../../i18n';
+import type { Language } from '../../../../shared/i18n/languages';
 import { refreshEventCells } from './queries/cells';
 import {
   claimJob,
@@ -38,17 +41,21 @@ const BATCH = 2000;
 const LEASE_MS = 60_000;
 const today = () => new Date().toISOString().slice(0, 10);
 
-const unreadable = (err: unknown) =>
-  err instanceof UnreadableFile ? new HttpError(400, 'unreadable-file', err.message, { file: err.message }) : err;
+/** A file nothing can be read from, refused in the request's language (problems.<code>). */
+function unreadable(err: unknown, lang: Language) {
+  if (!(err instanceof UnreadableFile)) return err;
+  const message = translate(lang, `problems.${err.code}`, err.values);
+  return new HttpError(400, 'unreadable-file', message, { file: message });
+}
 
 /** The header and first rows of a file, and the matching our fields get by name, for the screen. */
-export function previewFile(bytes: Buffer) {
+export function previewFile(bytes: Buffer, lang: Language) {
   try {
     const { text, encoding } = decodeCsv(bytes);
     const p = preview(text);
     return { ...p, encoding, kind: fileKind(p.header) };
   } catch (err) {
-    throw unreadable(err);
+    throw unreadable(err, lang);
   }
 }
 
@@ -66,6 +73,7 @@ export async function startImport(
     mapping: Partial<Record<ImportField, string>>;
     userId: number;
   },
+  lang: Language,
 ): Promise<number> {
   let text: string;
   let kind: string;
@@ -80,7 +88,7 @@ export async function startImport(
       });
     kind = read.kind;
   } catch (err) {
-    throw unreadable(err);
+    throw unreadable(err, lang);
   }
   const id = await insertJob(ctx.database.db, {
     groupId: input.groupId,
@@ -96,7 +104,11 @@ export async function startImport(
   return id;
 }
 
-export const toView = (j: NonNullable<Awaited<ReturnType<typeof jobById>>>): ImportJobView => ({
+/**
+ * A job as the import page shows it. Each refused row carries its code and value, worded by the screen; a stopped
+ * job's message is one of the server's own refusals (`problems`), given in the reader's language.
+ */
+export const toView = (j: NonNullable<Awaited<ReturnType<typeof jobById>>>, lang: Language): ImportJobView => ({
   id: j.id,
   groupId: j.groupId,
   scope: j.scope,
@@ -109,7 +121,7 @@ export const toView = (j: NonNullable<Awaited<ReturnType<typeof jobById>>>): Imp
   refused: j.refusedCount,
   done: j.position,
   errors: j.refusals,
-  message: j.message,
+  message: j.message && translate(lang, j.message),
   createdAt: j.createdAt.toISOString(),
   finishedAt: j.finishedAt?.toISOString() ?? null,
 });
@@ -117,8 +129,8 @@ export const toView = (j: NonNullable<Awaited<ReturnType<typeof jobById>>>): Imp
 export async function getImport(ctx: AppContext, id: number) {
   return jobById(ctx.database.db, id);
 }
-export const listImports = async (ctx: AppContext, groupId: number | null) =>
-  (await recentJobs(ctx.database.db, groupId)).map(toView);
+export const listImports = async (ctx: AppContext, groupId: number | null, lang: Language) =>
+  (await recentJobs(ctx.database.db, groupId)).map((j) => toView(j, lang));
 
 /** Per app (tests run several in one process): the run under way, so a kick while it works joins it. */
 const running = new WeakMap<AppContext, Promise<number>>();
@@ -150,9 +162,7 @@ async function runJob(ctx: AppContext, job: ImportJob) {
     const records = job.scope === 'network' ? read.records.filter((r) => r.group) : read.records;
     const refused = [
       ...read.refused,
-      ...read.records
-        .filter((r) => !records.includes(r))
-        .map((r) => ({ row: r.row, field: 'group_identifier', message: 'The record names no group.' })),
+      ...read.records.filter((r) => !records.includes(r)).map((r) => rowRefusal(r.row, 'group_identifier', 'noGroup')),
     ].sort((a, b) => a.row - b.row);
     if (job.position === 0)
       await setJob(db, job.id, {

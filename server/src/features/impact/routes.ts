@@ -4,6 +4,7 @@ import { followUpUpdate, impactSettingsSchema, recordsQuery, statsQuery } from '
 import type { AppContext } from '../../context';
 import { hasGroupRole, requireAdmin, requireGroupRole, unauthenticated } from '../../auth/guards';
 import { HttpError } from '../../http/errors';
+import { languageOf } from '../../i18n';
 import { body, params, query, paramId } from '../../http/validate';
 import { eventGroupId } from '../../core/events';
 import { openRepairDataCsv, recordsCsv } from './exports';
@@ -33,7 +34,8 @@ export function impactPublicRoutes(ctx: AppContext) {
       }),
     );
     res.setHeader('Cache-Control', 'public, max-age=300');
-    res.json(await publicImpact(ctx, groupId));
+    res.vary('Accept-Language');
+    res.json(await publicImpact(ctx, languageOf(req, res.locals), groupId));
   });
   return r;
 }
@@ -78,13 +80,16 @@ export function impactRoutes(ctx: AppContext) {
     return q;
   };
 
-  r.get('/stats', guard, async (req, res) => res.json(await stats(ctx, filter(req))));
+  r.get('/stats', guard, async (req, res) => res.json(await stats(ctx, filter(req), languageOf(req, res.locals))));
   r.get('/stats/records', guard, async (req, res) => {
     const q = query(req, recordsQuery);
     assertDateRange(q.from, q.to);
     res.json(await records(ctx, q));
   });
-  r.get('/stats/method', async (_req, res) => res.json(await method(ctx)));
+  r.get('/stats/method', async (req, res) => {
+    res.vary('Accept-Language');
+    res.json(await method(ctx, languageOf(req, res.locals)));
+  });
   const csv =
     (name: string, make: (f: ReturnType<typeof filter>) => Promise<string>) => async (req: Request, res: Response) => {
       const f = filter(req);
@@ -116,7 +121,8 @@ export function impactRoutes(ctx: AppContext) {
     '/events/:id/report',
     requireGroupRole(['organiser'], (req) => eventGroupId(ctx.database.db, paramId(req, 'id'))),
     async (req, res) => {
-      res.json(await eventReport(ctx, params(req, z.object({ id: z.coerce.number().int().positive() })).id));
+      const { id } = params(req, z.object({ id: z.coerce.number().int().positive() }));
+      res.json(await eventReport(ctx, id, languageOf(req, res.locals)));
     },
   );
 
@@ -125,7 +131,7 @@ export function impactRoutes(ctx: AppContext) {
     requireGroupRole(['organiser'], (req) => paramId(req, 'groupId')),
     async (req, res) => {
       const f = filter(req);
-      res.json(await rangeReport(ctx, paramId(req, 'groupId'), f.from, f.to));
+      res.json(await rangeReport(ctx, languageOf(req, res.locals), paramId(req, 'groupId'), f.from, f.to));
     },
   );
   r.get(

@@ -7,11 +7,16 @@ import type {
   SessionFigures,
   Stats,
 } from '../../../../shared/api/impact';
-import { DISPLACEMENT_NOTE, DISPLACEMENT_SOURCE, FACTOR_SOURCE } from '../../../../shared/impact/factors';
+import { DEFAULT_DISPLACEMENT } from '../../../../shared/impact/factors';
+import { sourceForReaders } from '../../../../shared/impact/for-readers';
+import { factorSourceWords, methodLines, weightSourceWords, type Words } from '../../../../shared/impact/method-words';
+import type { Language } from '../../../../shared/i18n/languages';
+import { intlLocale } from '../../../../shared/format';
 import { totalsFromCells } from '../../../../shared/impact/statistics';
 import { shortName } from '../../../../shared/event-day/tag-code';
 import type { AppContext } from '../../context';
 import { HttpError, notFound } from '../../http/errors';
+import { categoryText, translate } from '../../i18n';
 import {
   countEventsWithFigures,
   displacement,
@@ -41,10 +46,18 @@ const hoursOf = (shift: { startsAt: Date; endsAt: Date }) =>
   (shift.endsAt.getTime() - shift.startsAt.getTime()) / 3600_000;
 const round2 = (x: number) => Math.round(x * 100) / 100;
 
+/** The kinds of item with their names in the reader's language (an admin's own name as typed). */
+async function kindsIn(ctx: AppContext, lang: Language) {
+  return (await impactCategories(ctx.database.db)).map((c) => ({
+    ...c,
+    name: categoryText(lang, c.slug, 'name', c.name),
+  }));
+}
+
 /** Statistics for a group, an event, a date range or the whole network. */
-export async function stats(ctx: AppContext, f: StatsFilter): Promise<Stats> {
+export async function stats(ctx: AppContext, f: StatsFilter, lang: Language): Promise<Stats> {
   const { db } = ctx.database;
-  const [c, cats, d] = await Promise.all([readCells(db, f), impactCategories(db), displacement(db)]);
+  const [c, cats, d] = await Promise.all([readCells(db, f), kindsIn(ctx, lang), displacement(db)]);
   return { ...totalsFromCells(c, cats, d), displacement: d, filter: f };
 }
 
@@ -69,31 +82,40 @@ export async function sessionFigures(ctx: AppContext, groupId: number): Promise<
   });
 }
 
-/** The method and its sources, shown beside every figure. */
-export async function method(ctx: AppContext): Promise<Method> {
-  const { db } = ctx.database;
-  const [cats, d] = await Promise.all([impactCategories(db), displacement(db)]);
+const say = (lang: Language, w: Words) => translate(lang, w.key, w.values);
+const figure = (lang: Language, n: number) =>
+  new Intl.NumberFormat(intlLocale(lang), { maximumFractionDigits: 6 }).format(n);
+
+/**
+ * The method and its sources, shown beside every figure, in the reader's language: our sentences by their catalog
+ * keys (`figures.method.*`, `figures.source.*`), a publication's title inside them as published. A source an admin
+ * typed is shown as typed.
+ */
+export async function method(ctx: AppContext, lang: Language): Promise<Method> {
+  const [cats, d] = await Promise.all([kindsIn(ctx, lang), displacement(ctx.database.db)]);
+  const estimate = translate(lang, 'figures.source.estimate');
   return {
     displacement: d,
-    displacementNote: DISPLACEMENT_NOTE,
-    displacementSource: DISPLACEMENT_SOURCE,
-    factorSource: FACTOR_SOURCE,
-    text: [
-      'Items: every item that reached the reception desk. An item that came back with its part counts once, with the outcome of its last visit.',
-      'Kilograms diverted from landfill: the mass of the items fixed — weighed at the desk where it was, otherwise the average weight of its kind.',
-      `Emissions avoided (kg CO2e): mass fixed × the production emission factor of its kind × the displacement factor (${d}).`,
-      'Fix rate: items fixed ÷ items with a recorded outcome.',
-      'Items with no outcome recorded (and records brought in from a file with the status "Unknown") count as items, and in no outcome: not in the fix rate, and not in the kilograms or emissions.',
-      'Records brought in from a file count like any other: "Repairable" as a part needed, "End of life" with its reason, and their kind of item as the nearest Mendery kind, whose average weight is used.',
-    ],
-    categories: cats.map((c) => ({
-      id: c.id,
-      name: c.name,
-      avgWeightKg: c.avgWeightKg,
-      weightSource: c.weightSource,
-      co2ePerKg: c.co2ePerKg,
-      co2eSource: c.co2eSource,
-    })),
+    displacementNote: translate(lang, 'figures.method.displacementNote', {
+      shipped: figure(lang, DEFAULT_DISPLACEMENT),
+    }),
+    displacementSource: translate(lang, 'figures.method.displacementSource'),
+    factorSource: translate(lang, 'figures.source.factors'),
+    text: methodLines(figure(lang, d)).map((w) => say(lang, w)),
+    categories: cats.map((c) => {
+      const weight = weightSourceWords(c.slug, c.weightSource);
+      const forReaders = weightSourceWords(c.slug, c.weightSource, true);
+      const factor = factorSourceWords(c.slug, c.co2eSource);
+      return {
+        id: c.id,
+        name: c.name,
+        avgWeightKg: c.avgWeightKg,
+        weightSource: weight ? say(lang, weight) : c.weightSource,
+        weightSourceForReaders: forReaders ? say(lang, forReaders) : sourceForReaders(c.weightSource, estimate),
+        co2ePerKg: c.co2ePerKg,
+        co2eSource: factor ? say(lang, factor) : c.co2eSource,
+      };
+    }),
   };
 }
 
@@ -115,7 +137,7 @@ export async function records(ctx: AppContext, f: RecordsFilter & { page?: numbe
 }
 
 /** A funder's one-page report of an event: totals, categories, the volunteers' hours, the method. */
-export async function eventReport(ctx: AppContext, eventId: number): Promise<EventReport> {
+export async function eventReport(ctx: AppContext, eventId: number, lang: Language): Promise<EventReport> {
   const { db } = ctx.database;
   const e = await eventWithGroup(db, eventId);
   if (!e) throw notFound('That event');
@@ -130,15 +152,21 @@ export async function eventReport(ctx: AppContext, eventId: number): Promise<Eve
       groupName: e.group.name,
       timeZone: e.group.timeZone,
     },
-    stats: await stats(ctx, { eventId }),
+    stats: await stats(ctx, { eventId }, lang),
     volunteers: hours,
     volunteerHours: Math.round(hours.reduce((n, v) => n + v.hours, 0) * 100) / 100,
-    method: await method(ctx),
+    method: await method(ctx, lang),
   };
 }
 
 /** The same report for a group over a date range: every session in it, the volunteers' hours added up. */
-export async function rangeReport(ctx: AppContext, groupId: number, from?: string, to?: string): Promise<EventReport> {
+export async function rangeReport(
+  ctx: AppContext,
+  lang: Language,
+  groupId: number,
+  from?: string,
+  to?: string,
+): Promise<EventReport> {
   const { db } = ctx.database;
   const g = await groupById(db, groupId);
   if (!g) throw notFound('That group');
@@ -157,7 +185,7 @@ export async function rangeReport(ctx: AppContext, groupId: number, from?: strin
   return {
     event: {
       id: 0,
-      title: `${g.name}: ${sessions.length} session${sessions.length === 1 ? '' : 's'}`,
+      title: translate(lang, 'figures.report.rangeTitle', { group: g.name, n: sessions.length }),
       startsAt: first,
       endsAt: last,
       groupId: g.id,
@@ -165,24 +193,24 @@ export async function rangeReport(ctx: AppContext, groupId: number, from?: strin
       timeZone: g.timeZone,
     },
     range: { from: from ?? null, to: to ?? null, sessions: sessions.length },
-    stats: await stats(ctx, { groupId, from, to }),
+    stats: await stats(ctx, { groupId, from, to }, lang),
     volunteers: hours,
     volunteerHours: Math.round(hours.reduce((n, v) => n + v.hours, 0) * 100) / 100,
-    method: await method(ctx),
+    method: await method(ctx, lang),
   };
 }
 
 /** Public figures: the same totals, with nothing about any person. */
-export async function publicImpact(ctx: AppContext, groupId?: number): Promise<PublicImpact> {
+export async function publicImpact(ctx: AppContext, lang: Language, groupId?: number): Promise<PublicImpact> {
   const { db } = ctx.database;
   const g = groupId ? await groupById(db, groupId) : undefined;
   if (groupId && !g) throw notFound('That group');
-  const { filter: _f, ...rest } = await stats(ctx, { groupId });
+  const { filter: _f, ...rest } = await stats(ctx, { groupId }, lang);
   return {
     ...rest,
     group: g ? { name: g.name, town: g.town } : null,
     events: await countEventsWithFigures(db, groupId),
-    method: await method(ctx),
+    method: await method(ctx, lang),
   };
 }
 

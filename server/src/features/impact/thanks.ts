@@ -1,4 +1,4 @@
-import { asLanguage, type Language } from '../../../../shared/i18n/languages';
+import { asLanguage, DEFAULT_LANGUAGE, type Language } from '../../../../shared/i18n/languages';
 import { intlLocale } from '../../../../shared/format';
 import { categoryText, translate } from '../../i18n';
 import { impact } from '../../../../shared/impact/statistics';
@@ -63,7 +63,7 @@ export async function sendThankYous(ctx: AppContext): Promise<number> {
           }),
         );
       }
-      const s = await stats(ctx, { eventId: event.id });
+      const s = await stats(ctx, { eventId: event.id }, DEFAULT_LANGUAGE);
       const team = await volunteersWhoCame(tx, event.id);
       for (const v of team) {
         // In the volunteer's own language, else the group's.

@@ -2,7 +2,7 @@ import type { ImportJobView } from '../../../../../shared/api/imports';
 import { Alert } from '../../../components/ui/feedback';
 import { useLanguage, useT } from '../../../lib/i18n';
 import { formatsFor } from './display';
-import { fieldWord } from './import-words';
+import { fieldWord, problemWords } from './import-words';
 
 /** One import: a progress bar while it works, then its counts and every row it refused, with the reason. */
 export function ImportProgress({ job }: { job: ImportJobView }) {
@@ -71,7 +71,7 @@ export function ImportProgress({ job }: { job: ImportJobView }) {
                   <tr key={`${e.row}-${e.field}`} className="border-t border-ink/5">
                     <td className="px-3 py-2 tabular-nums">{e.row}</td>
                     <td className="px-3 py-2">{fieldWord(t, e.field)}</td>
-                    <td className="px-3 py-2">{e.message}</td>
+                    <td className="px-3 py-2">{problemWords(t, e)}</td>
                   </tr>
                 ))}
               </tbody>

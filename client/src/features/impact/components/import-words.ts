@@ -1,4 +1,5 @@
 import { IMPORT_FIELDS } from '../../../../../shared/impact/open-repair-data';
+import { ROW_PROBLEMS } from '../../../../../shared/impact/import-problems';
 
 type T = (key: string, values?: Record<string, unknown>) => string;
 
@@ -14,3 +15,10 @@ export const kindWord = (t: T, kind: string): string =>
   t(`figures.import.kind.${kind === 'ords-0.3' || kind === 'ords-0.2' ? 'ords' : 'plain'}`, {
     version: kind.replace('ords-', ''),
   });
+
+/**
+ * Why a row was left out, in the reader's words (figures.import.problem.<code>) with the file's own value. A refusal
+ * stored before codes has only its English message, shown as it is.
+ */
+export const problemWords = (t: T, e: { code?: string; value?: string; message: string }): string =>
+  e.code && e.code in ROW_PROBLEMS ? t(`figures.import.problem.${e.code}`, { value: e.value ?? '' }) : e.message;

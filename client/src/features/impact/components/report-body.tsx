@@ -6,7 +6,6 @@ import { EmptyState } from '../../../components/ui/feedback';
 import { trParts, useLanguage, useT } from '../../../lib/i18n';
 import { CO2E, formatsFor } from './display';
 import { MethodNotes } from './method-notes';
-import { sourceForReaders } from '../../../../../shared/impact/for-readers';
 
 /** A4 is 210 mm less two 14 mm margins: about 690 CSS px, so a 640 px chart fits without being scaled. */
 const CHART_WIDTH = 640;
@@ -159,7 +158,7 @@ export function ReportBody({ r }: { r: EventReport }) {
                       {c.name}
                     </th>
                     <td className="py-1 pr-2 text-right tabular-nums">{oneDp.format(c.avgWeightKg)}</td>
-                    <td className="py-1 pr-2">{sourceForReaders(c.weightSource)}</td>
+                    <td className="py-1 pr-2">{c.weightSourceForReaders}</td>
                     <td className="py-1 pr-2 text-right tabular-nums">
                       {c.co2ePerKg === null ? '—' : oneDp.format(c.co2ePerKg)}
                     </td>

@@ -37,10 +37,11 @@ export async function setDisplacement(db: DbOrTx, value: number) {
 
 export async function impactCategories(
   db: DbOrTx,
-): Promise<(ImpactCategory & { co2eSource: string | null; weightSource: string })[]> {
+): Promise<(ImpactCategory & { slug: string; co2eSource: string | null; weightSource: string })[]> {
   return db
     .select({
       id: categories.id,
+      slug: categories.slug,
       name: categories.name,
       skill: categories.skill,
       avgWeightKg: categories.avgWeightKg,
