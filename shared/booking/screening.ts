@@ -6,7 +6,16 @@ export interface ScreenCategory {
   refusal?: { reason: string; suggestion: string } | null;
 }
 
-export type ScreenResult = { ok: true } | { ok: false; reason: string; suggestion: string };
+/**
+ * Why an item is refused, as a code and its values; the screen or the API words it in the reader's language
+ * (booking.hazard.* and booking.refusedGeneric on the client, problems.hazard.* and problems.notTaken on the
+ * server). A kind's own refusal carries its words as stored for the kind (the API's, in the reader's language).
+ */
+export type ScreenRefusal =
+  | { ok: false; code: 'hazard'; hazard: Hazard }
+  | { ok: false; code: 'category'; categoryId: number; reason: string; suggestion: string }
+  | { ok: false; code: 'not-taken'; categoryId: number; group: string; category: string };
+export type ScreenResult = { ok: true } | ScreenRefusal;
 
 /** Common practice of repair groups: conditions that rule an item out whatever the group's own list says. */
 export const HAZARD_REFUSALS: Record<Hazard, { question: string; reason: string; suggestion: string }> = {
@@ -39,16 +48,17 @@ export function screenItem(
   group: { name: string; excludedCategoryIds: readonly number[] },
 ): ScreenResult {
   const hazard = hazards[0];
-  if (hazard)
-    return { ok: false, reason: HAZARD_REFUSALS[hazard].reason, suggestion: HAZARD_REFUSALS[hazard].suggestion };
+  if (hazard) return { ok: false, code: 'hazard', hazard };
   if (group.excludedCategoryIds.includes(category.id)) {
     return category.refusal
-      ? { ok: false, reason: category.refusal.reason, suggestion: category.refusal.suggestion }
-      : {
+      ? {
           ok: false,
-          reason: `${group.name} does not take this kind of item (${category.name.toLowerCase()}).`,
-          suggestion: 'Look for another group’s event that takes it, or ask the organisers.',
-        };
+          code: 'category',
+          categoryId: category.id,
+          reason: category.refusal.reason,
+          suggestion: category.refusal.suggestion,
+        }
+      : { ok: false, code: 'not-taken', categoryId: category.id, group: group.name, category: category.name };
   }
   return { ok: true };
 }

@@ -1,8 +1,9 @@
 /**
  * Discharging a capacitor through a resistor: V(t) = V0·e^(−t/RC) (derived). SI units throughout — volts, ohms,
- * farads, seconds, joules; the page converts µF. Invalid input throws a RangeError.
+ * farads, seconds, joules; the page converts µF. Invalid input throws a CalcError (./said).
  */
 import { formatOhms } from './resistors';
+import { refuse, term, type Term } from './said';
 
 export const DISCHARGE_SOURCE = 'Derived: V(t) = V0·e^(−t/RC), E = ½CV²';
 
@@ -62,47 +63,57 @@ export const DC_THRESHOLDS = [ELV_DC, RESIDUAL_60V_5S, PLUG_PINS_60V_1S, PLUG_PI
 /** The bench default: the lowest listed threshold, because a fixer's fingers are closer than a plug's pins. */
 export const DEFAULT_TOUCH_THRESHOLD = PLUG_PINS_34V_1S;
 
-const positive = (x: number, what: string) => {
-  if (!Number.isFinite(x) || x <= 0) throw new RangeError(`${what} must be a number above 0.`);
+/** What a figure is, as the refusal names it (bench.calc.term.*). */
+const WHAT = {
+  resistance: term('calc.term.theResistance', 'The resistance'),
+  capacitance: term('calc.term.theCapacitance', 'The capacitance'),
+  startingVoltage: term('calc.term.theStartingVoltage', 'The starting voltage'),
+  time: term('calc.term.theTime', 'The time'),
+  targetVoltage: term('calc.term.theTargetVoltage', 'The target voltage (a capacitor never quite reaches 0 V)'),
+  voltage: term('calc.term.theVoltage', 'The capacitor voltage'),
+  resistor: term('calc.term.theResistor', 'The discharge resistor'),
+} satisfies Record<string, Term>;
+const positive = (x: number, what: Term) => {
+  if (!Number.isFinite(x) || x <= 0) throw refuse('calc.c.above0', { what });
 };
-const notNegative = (x: number, what: string) => {
-  if (!Number.isFinite(x) || x < 0) throw new RangeError(`${what} must be zero or more.`);
+const notNegative = (x: number, what: Term) => {
+  if (!Number.isFinite(x) || x < 0) throw refuse('calc.c.zeroOrMore', { what });
 };
 
 export const timeConstantS = (rOhm: number, cFarad: number) => {
-  positive(rOhm, 'The resistance');
-  positive(cFarad, 'The capacitance');
+  positive(rOhm, WHAT.resistance);
+  positive(cFarad, WHAT.capacitance);
   return rOhm * cFarad;
 };
 
 /** The voltage left after t seconds through R. */
 export function voltageAfter(v0: number, rOhm: number, cFarad: number, tS: number): number {
-  notNegative(v0, 'The starting voltage');
-  notNegative(tS, 'The time');
+  notNegative(v0, WHAT.startingVoltage);
+  notNegative(tS, WHAT.time);
   return v0 * Math.exp(-tS / timeConstantS(rOhm, cFarad));
 }
 
 /** Seconds until the voltage falls to vTarget through R; 0 when it is already there. Never reaches 0 V, so vTarget > 0. */
 export function timeToVoltage(v0: number, vTarget: number, rOhm: number, cFarad: number): number {
-  notNegative(v0, 'The starting voltage');
-  positive(vTarget, 'The target voltage (a capacitor never quite reaches 0 V)');
+  notNegative(v0, WHAT.startingVoltage);
+  positive(vTarget, WHAT.targetVoltage);
   const tau = timeConstantS(rOhm, cFarad);
   return v0 <= vTarget ? 0 : tau * Math.log(v0 / vTarget);
 }
 
 /** ½CV², in joules. */
 export function storedEnergyJ(cFarad: number, volts: number): number {
-  positive(cFarad, 'The capacitance');
-  if (!Number.isFinite(volts)) throw new RangeError('The voltage must be a number.');
+  positive(cFarad, WHAT.capacitance);
+  if (!Number.isFinite(volts)) throw refuse('calc.c.voltage');
   return 0.5 * cFarad * volts * volts;
 }
 
 /** The largest resistor that brings v0 down to vTarget within tS; Infinity when it is already there. */
 export function maxResistanceFor(v0: number, vTarget: number, cFarad: number, tS: number): number {
-  notNegative(v0, 'The starting voltage');
-  positive(vTarget, 'The target voltage (a capacitor never quite reaches 0 V)');
-  positive(cFarad, 'The capacitance');
-  positive(tS, 'The time');
+  notNegative(v0, WHAT.startingVoltage);
+  positive(vTarget, WHAT.targetVoltage);
+  positive(cFarad, WHAT.capacitance);
+  positive(tS, WHAT.time);
   return v0 <= vTarget ? Infinity : tS / (cFarad * Math.log(v0 / vTarget));
 }
 
@@ -141,9 +152,9 @@ export function dischargeAdvice({
   resistanceOhm,
   threshold = DEFAULT_TOUCH_THRESHOLD,
 }: DischargeInput): DischargeAdvice {
-  notNegative(voltageV, 'The capacitor voltage');
-  positive(capacitanceF, 'The capacitance');
-  if (resistanceOhm !== undefined) positive(resistanceOhm, 'The discharge resistor');
+  notNegative(voltageV, WHAT.voltage);
+  positive(capacitanceF, WHAT.capacitance);
+  if (resistanceOhm !== undefined) positive(resistanceOhm, WHAT.resistor);
   const safeToTouch = voltageV <= threshold.volts;
   const energyJ = storedEnergyJ(capacitanceF, voltageV);
   const withinS = threshold.withinS ?? 5;

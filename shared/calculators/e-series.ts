@@ -2,6 +2,8 @@
  * Preferred values, IEC 60063 as remembered (not checked). Literal tables: rounding 10^(i/n) gets 27, 30, 33, 36,
  * 39, 43, 47 and 82 wrong, because the standard fixed these values before the formula was written down.
  */
+import { refuse } from './said';
+
 export const E_SERIES_SOURCE = 'IEC 60063 (from memory, not checked against the standard)';
 
 export const E6 = [10, 15, 22, 33, 47, 68] as const;
@@ -40,8 +42,8 @@ export const decade = (series: ESeriesName, exp: number): number[] =>
  * geometric midpoint is √(300 × 330) ≈ 314.6 Ω). An exact tie goes to the higher value, which passes less current.
  */
 export function nearestStandard(ohms: number, series: ESeriesName): NearestStandard {
-  if (!Number.isFinite(ohms) || ohms <= 0) throw new RangeError('Enter a resistance above 0 Ω.');
-  if (!(series in E_SERIES)) throw new RangeError(`Unknown series "${series}"; use E6, E12 or E24.`);
+  if (!Number.isFinite(ohms) || ohms <= 0) throw refuse('calc.es.above0');
+  if (!(series in E_SERIES)) throw refuse('calc.es.series', { series });
   // log10 can land a hair off an exact power of ten, so look one decade either side as well.
   const exp = Math.floor(Math.log10(ohms));
   const candidates = [exp - 1, exp, exp + 1, exp + 2].flatMap((e) => decade(series, e));

@@ -2,6 +2,8 @@
  * The DC on the reservoir capacitor after a bridge rectifier: the mains peak, Vrms × √2 (derived). Mains voltages
  * from 100 V to 253 V (230 V + 10 %) are covered; anything else is refused rather than guessed.
  */
+import { refuse } from './said';
+
 export const MAINS_MIN_V = 100;
 export const MAINS_MAX_V = 253;
 export const MAINS_PEAK_SOURCE =
@@ -21,9 +23,10 @@ export interface MainsPeak {
 
 export function rectifiedPeak(vrms: number): MainsPeak {
   if (!Number.isFinite(vrms) || vrms < MAINS_MIN_V || vrms > MAINS_MAX_V) {
-    throw new RangeError(
-      `Enter a mains voltage from ${MAINS_MIN_V} V to ${MAINS_MAX_V} V rms (230 V + 10 %); ${Number.isFinite(vrms) ? `${vrms} V` : 'that'} is outside the range this calculator covers.`,
-    );
+    const range = { min: MAINS_MIN_V, max: MAINS_MAX_V };
+    throw Number.isFinite(vrms)
+      ? refuse('calc.mp.range', { ...range, v: vrms })
+      : refuse('calc.mp.rangeNotNumber', range);
   }
   return {
     vrms,

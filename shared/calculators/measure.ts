@@ -1,11 +1,13 @@
 /**
  * Judging a resistance reading (common practice, no published source): short the meter leads and subtract what
- * they read; an open resistor reads as overload ("OL"). Invalid input throws a RangeError.
+ * they read; an open resistor reads as overload ("OL"). Invalid input throws a CalcError (./said).
  *
  * A handheld meter's last digit is not exact, and subtracting the leads adds a second reading's error. So besides
  * "within" and "outside" tolerance, the judgement has "within-uncertainty": outside the part's own tolerance,
  * but closer than the meter can tell apart — the reading is in the right range, it does not prove the tolerance.
  */
+import { english, refuse, said, type Said } from './said';
+
 export const MEASURE_SOURCE = 'Common practice, no published source: subtract the shorted-lead reading; OL means open';
 
 export type ResistanceReading = number | 'OL';
@@ -46,18 +48,19 @@ export interface MeasureResult {
   /** True for 'within' and 'within-uncertainty'. */
   inRightRange: boolean;
   message: string;
+  /** The message as a code and values, for a screen to word in the reader's language. */
+  said: Said;
 }
 
+const told = (s: Said) => ({ message: english(s), said: s });
 const clean = (x: number) => Number(x.toPrecision(12));
 const round = (x: number, dp: number) => Math.round(x * 10 ** dp) / 10 ** dp;
 
 /** The reading less the shorted-lead reading, never below 0 (a reading at or under the leads is a short). */
 export function netResistance(reading: ResistanceReading, leadsOhm = 0): number | 'open' {
-  if (!(Number.isFinite(leadsOhm) && leadsOhm >= 0))
-    throw new RangeError('The leads reading must be zero or more ohms.');
+  if (!(Number.isFinite(leadsOhm) && leadsOhm >= 0)) throw refuse('calc.m.e.leads');
   if (reading === 'OL') return 'open';
-  if (!Number.isFinite(reading) || reading < 0)
-    throw new RangeError('A resistance reading is zero or more ohms, or OL.');
+  if (!Number.isFinite(reading) || reading < 0) throw refuse('calc.m.e.reading');
   return Math.max(0, clean(reading - leadsOhm));
 }
 
@@ -68,14 +71,9 @@ export function judgeResistance({
   tolerancePct,
   uncertaintyOhm = 0,
 }: MeasureInput): MeasureResult {
-  if (!Number.isFinite(nominalOhm) || nominalOhm <= 0)
-    throw new RangeError(
-      'The nominal value must be above 0 Ω. For a 0 Ω link, check that it reads the same as the shorted leads.',
-    );
-  if (!Number.isFinite(tolerancePct) || tolerancePct <= 0 || tolerancePct >= 100)
-    throw new RangeError('The tolerance is a percentage above 0 and below 100.');
-  if (!Number.isFinite(uncertaintyOhm) || uncertaintyOhm < 0)
-    throw new RangeError('The meter uncertainty must be zero or more ohms.');
+  if (!Number.isFinite(nominalOhm) || nominalOhm <= 0) throw refuse('calc.m.e.nominal');
+  if (!Number.isFinite(tolerancePct) || tolerancePct <= 0 || tolerancePct >= 100) throw refuse('calc.m.e.tolerance');
+  if (!Number.isFinite(uncertaintyOhm) || uncertaintyOhm < 0) throw refuse('calc.m.e.uncertainty');
   const band = (nominalOhm * tolerancePct) / 100;
   const minOhm = clean(nominalOhm - band);
   const maxOhm = clean(nominalOhm + band);
@@ -88,14 +86,19 @@ export function judgeResistance({
       minOhm,
       maxOhm,
       inRightRange: false,
-      message: 'The meter reads OL: the resistor is open circuit (or the leads are not touching it).',
+      ...told(said('calc.m.open')),
     };
   }
   const deviationPct = round(((net - nominalOhm) / nominalOhm) * 100, 2);
   // Compared in rounded percent so a reading exactly at the edge (1.1 Ω for 1 Ω ±10 %) counts as within.
   const slackPct = round((uncertaintyOhm / nominalOhm) * 100, 6);
   const off = Math.abs(round(((net - nominalOhm) / nominalOhm) * 100, 6));
-  const signed = `${deviationPct > 0 ? '+' : ''}${deviationPct} %`;
+  const values = {
+    net,
+    signed: { n: deviationPct, unit: '%', sign: '+' as const },
+    nominal: nominalOhm,
+    tol: tolerancePct,
+  };
   if (off <= tolerancePct) {
     return {
       verdict: 'within',
@@ -104,7 +107,7 @@ export function judgeResistance({
       minOhm,
       maxOhm,
       inRightRange: true,
-      message: `${net} Ω is ${signed} from ${nominalOhm} Ω: within ±${tolerancePct} %${off === tolerancePct ? ', at the edge' : ''}.`,
+      ...told(said(off === tolerancePct ? 'calc.m.edge' : 'calc.m.within', values)),
     };
   }
   if (off <= tolerancePct + slackPct) {
@@ -115,10 +118,9 @@ export function judgeResistance({
       minOhm,
       maxOhm,
       inRightRange: true,
-      message: `${net} Ω is ${signed} from ${nominalOhm} Ω: outside ±${tolerancePct} %, but within the meter's ±${uncertaintyOhm} Ω — in the right range; this meter cannot prove the tolerance.`,
+      ...told(said('calc.m.uncertain', { ...values, u: uncertaintyOhm })),
     };
   }
-  const hint = net === 0 ? ' It reads no more than the shorted leads: a short.' : '';
   return {
     verdict: 'outside',
     netOhm: net,
@@ -126,6 +128,7 @@ export function judgeResistance({
     minOhm,
     maxOhm,
     inRightRange: false,
-    message: `${net} Ω is ${signed} from ${nominalOhm} Ω: outside ±${tolerancePct} %.${hint} Measure it out of circuit before replacing it: parts in parallel read low.`,
+    // A reading no more than the shorted leads is a short.
+    ...told(said(net === 0 ? 'calc.m.short' : 'calc.m.outside', values)),
   };
 }

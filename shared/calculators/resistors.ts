@@ -1,8 +1,10 @@
 /**
  * Resistor markings: colour bands and printed (SMD / RKM) codes, per IEC 60062 as remembered — the standard was
  * not checked, so the tables below are the common ones every parts catalogue repeats. Invalid input throws a
- * RangeError with a message a fixer can act on (the same convention as shared/safety/limits).
+ * CalcError (./said: a RangeError with a code and values a screen words for the fixer; English as its message).
  */
+import { english, ohmsText, refuse, said, term, type Said } from './said';
+
 export const RESISTOR_CODE_SOURCE = 'IEC 60062 (from memory, not checked against the standard)';
 
 export const DIGIT_COLOURS = [
@@ -67,6 +69,8 @@ export interface ResistorValue {
   text: string;
   /** Anything the fixer should know about reading this marking. */
   notes: string[];
+  /** The notes as codes and values, for a screen to word in the reader's language. */
+  notesSaid: Said[];
 }
 
 /** Twelve significant digits removes binary noise such as 47 × 0.01 = 0.47000000000000003. */
@@ -78,15 +82,13 @@ const isToleranceColour = (c: string): c is ToleranceColour => (TOLERANCE_COLOUR
 
 /** "4.7 kΩ", "0.47 Ω", "1 MΩ": at most four significant digits, trailing zeros dropped. */
 export function formatOhms(value: number): string {
-  if (!Number.isFinite(value)) throw new RangeError('A resistance must be a finite number of ohms.');
-  const abs = Math.abs(value);
-  const [scale, prefix] = abs >= 1e9 ? [1e9, 'G'] : abs >= 1e6 ? [1e6, 'M'] : abs >= 1e3 ? [1e3, 'k'] : [1, ''];
-  return `${Number((value / scale).toPrecision(4))} ${prefix}Ω`;
+  if (!Number.isFinite(value)) throw refuse('calc.r.notFinite');
+  return ohmsText(value);
 }
 
 const formatPct = (pct: number) => `±${pct} %`;
 
-function valueOf(ohms: number, tolerancePct: number | null, notes: string[] = []): ResistorValue {
+function valueOf(ohms: number, tolerancePct: number | null, notes: Said[] = []): ResistorValue {
   const band = tolerancePct === null ? null : (ohms * tolerancePct) / 100;
   return {
     ohms,
@@ -94,7 +96,8 @@ function valueOf(ohms: number, tolerancePct: number | null, notes: string[] = []
     minOhms: band === null ? null : clean(ohms - band),
     maxOhms: band === null ? null : clean(ohms + band),
     text: tolerancePct === null ? formatOhms(ohms) : `${formatOhms(ohms)} ${formatPct(tolerancePct)}`,
-    notes,
+    notes: notes.map(english),
+    notesSaid: notes,
   };
 }
 
@@ -104,61 +107,46 @@ function valueOf(ohms: number, tolerancePct: number | null, notes: string[] = []
  * (a 0 Ω link).
  */
 export function decodeBands(bands: readonly BandColour[]): ResistorValue {
-  if (bands.length === 1 && bands[0] === 'black') return valueOf(0, null, ['A single black band is a 0 Ω link.']);
-  if (bands.length < 3 || bands.length > 5)
-    throw new RangeError(`A resistor has 3, 4 or 5 bands; ${bands.length} were given.`);
+  if (bands.length === 1 && bands[0] === 'black') return valueOf(0, null, [said('calc.r.singleBlack')]);
+  if (bands.length < 3 || bands.length > 5) throw refuse('calc.r.bandCount', { n: bands.length });
   const toleranceBand: BandColour = bands.length === 3 ? 'none' : bands[bands.length - 1];
   const valueBands = bands.length === 3 ? bands : bands.slice(0, -1);
   const digitBands = valueBands.slice(0, -1);
   const multiplier = valueBands[valueBands.length - 1];
-  if (bands[0] === 'gold' || bands[0] === 'silver')
-    throw new RangeError(
-      'The first band is never gold or silver: that is the tolerance end — read the resistor from the other end.',
-    );
-  if (bands.length === 5 && toleranceBand === 'none')
-    throw new RangeError('A five-band resistor always has a tolerance band; check the band count.');
+  if (bands[0] === 'gold' || bands[0] === 'silver') throw refuse('calc.r.firstGold');
+  if (bands.length === 5 && toleranceBand === 'none') throw refuse('calc.r.fiveBand');
   digitBands.forEach((c, i) => {
-    if (!isDigitColour(c)) throw new RangeError(`Band ${i + 1} is a digit and cannot be ${c}.`);
+    if (!isDigitColour(c)) throw refuse('calc.r.digitBand', { i: i + 1, c: colour(c) });
   });
-  if (digitBands[0] === 'black')
-    throw new RangeError(
-      'The first band is never black; read the resistor from the other end, or check the colours in daylight.',
-    );
-  if (!isMultiplierColour(multiplier)) throw new RangeError(`The multiplier band cannot be ${multiplier}.`);
+  if (digitBands[0] === 'black') throw refuse('calc.r.firstBlack');
+  if (!isMultiplierColour(multiplier)) throw refuse('calc.r.multiplier', { c: colour(multiplier) });
   if (!isToleranceColour(toleranceBand))
-    throw new RangeError(
-      `The tolerance band cannot be ${toleranceBand}; tolerance colours are ${TOLERANCE_COLOURS.join(', ')}.`,
-    );
+    throw refuse('calc.r.toleranceBand', { c: colour(toleranceBand), list: TOLERANCE_COLOURS.join(', ') });
   const digits = Number(digitBands.map((c) => DIGIT_COLOURS.indexOf(c as DigitColour)).join(''));
   return valueOf(clean(digits * 10 ** MULTIPLIER_EXPONENT[multiplier]), TOLERANCE_BY_COLOUR[toleranceBand]);
 }
+
+/** A band's colour, said in the reader's language (bench.calc.colour.*). */
+const colour = (c: string) => term(`calc.colour.${c}`, c);
 
 const isToleranceLetter = (s: string): s is ToleranceLetter => Object.hasOwn(TOLERANCE_BY_LETTER, s);
 
 export function toleranceFromLetter(letter: string): number {
   const up = letter.toUpperCase();
   if (!isToleranceLetter(up))
-    throw new RangeError(
-      `"${letter}" is not a tolerance letter; they are ${Object.keys(TOLERANCE_BY_LETTER).join(' ')}.`,
-    );
+    throw refuse('calc.r.notLetter', { l: letter, list: Object.keys(TOLERANCE_BY_LETTER).join(' ') });
   return TOLERANCE_BY_LETTER[up];
 }
 
 const RKM_SCALE = { R: 1, K: 1e3, M: 1e6, G: 1e9 } as const;
 
 /** The value part alone, or null when it is not a value code. */
-function valueCode(code: string): { ohms: number; notes: string[] } | null {
-  if (/^0+$/.test(code) && code.length <= 4) return { ohms: 0, notes: ['A code of zeros is a 0 Ω link (a jumper).'] };
+function valueCode(code: string): { ohms: number; notes: Said[] } | null {
+  if (/^0+$/.test(code) && code.length <= 4) return { ohms: 0, notes: [said('calc.r.zeros')] };
   if (/^\d{3}$/.test(code))
-    return {
-      ohms: clean(Number(code.slice(0, 2)) * 10 ** Number(code[2])),
-      notes: ['Three-digit codes are usually ±5 % parts (common practice, not a rule).'],
-    };
+    return { ohms: clean(Number(code.slice(0, 2)) * 10 ** Number(code[2])), notes: [said('calc.r.threeDigits')] };
   if (/^\d{4}$/.test(code))
-    return {
-      ohms: clean(Number(code.slice(0, 3)) * 10 ** Number(code[3])),
-      notes: ['Four-digit codes are usually ±1 % parts (common practice, not a rule).'],
-    };
+    return { ohms: clean(Number(code.slice(0, 3)) * 10 ** Number(code[3])), notes: [said('calc.r.fourDigits')] };
   // RKM: the letter stands where the decimal point would be and gives the scale (R ohms, K kilo, M mega, G giga).
   const m = /^(\d*)([RKMG])(\d*)$/.exec(code);
   if (m && m[1].length + m[3].length >= 1 && m[1].length + m[3].length <= 4) {
@@ -176,20 +164,23 @@ function valueCode(code: string): { ohms: number; notes: string[] } | null {
  */
 export function decodePrintedCode(input: string): ResistorValue {
   const code = input.trim().toUpperCase().replace(/\s+/g, '');
-  if (code === '') throw new RangeError('Type the code printed on the resistor, e.g. 103, 4R7 or 1002.');
+  if (code === '') throw refuse('calc.r.empty');
   const whole = valueCode(code);
   const last = code.slice(-1);
   const head = code.slice(0, -1);
   const withLetter = isToleranceLetter(last) && head !== '' ? valueCode(head) : null;
   // Two digits and a letter is also the shape of an EIA-96 code on 1 % SMD parts; say so rather than guess silently.
-  const eia96 = /^\d{2}[A-Z]$/.test(code)
-    ? ['On a 1 % SMD part, two digits and a letter may be an EIA-96 code instead; check the EIA-96 table.']
-    : [];
+  const eia96 = /^\d{2}[A-Z]$/.test(code) ? [said('calc.r.eia96Note')] : [];
   if (whole) {
     const notes = [...whole.notes, ...eia96];
     if (withLetter)
       notes.push(
-        `Read as ${formatOhms(whole.ohms)}; if "${last}" is a tolerance letter instead, it is ${formatOhms(withLetter.ohms)} ${formatPct(toleranceFromLetter(last))}.`,
+        said('calc.r.either', {
+          a: { ohms: whole.ohms },
+          l: last,
+          b: { ohms: withLetter.ohms },
+          pct: { n: toleranceFromLetter(last), unit: '%', sign: '±' },
+        }),
       );
     return valueOf(whole.ohms, null, notes);
   }
@@ -197,15 +188,11 @@ export function decodePrintedCode(input: string): ResistorValue {
     return valueOf(
       withLetter.ohms,
       toleranceFromLetter(last),
-      withLetter.notes.filter((n) => !n.includes('usually')),
+      // The digits' usual tolerance is no news when the letter gives it.
+      withLetter.notes.filter((n) => n.code !== 'calc.r.threeDigits' && n.code !== 'calc.r.fourDigits'),
     );
-  if (eia96.length)
-    throw new RangeError(
-      `"${input.trim()}" looks like an EIA-96 code (two digits and a letter), which this calculator does not decode; look it up in the EIA-96 table.`,
-    );
-  throw new RangeError(
-    `"${input.trim()}" is not a resistor code: use 3 or 4 digits (103, 1002), R/K/M notation (4R7, R47, 4K7, 2M2), optionally with a tolerance letter (B C D F G J K M).`,
-  );
+  if (eia96.length) throw refuse('calc.r.eia96', { code: input.trim() });
+  throw refuse('calc.r.notCode', { code: input.trim() });
 }
 
 const SCALE = { k: 1e3, K: 1e3, M: 1e6, G: 1e9 } as const;

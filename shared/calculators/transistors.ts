@@ -1,6 +1,6 @@
 /**
  * Transistor substitution and the diode test of a bipolar transistor (common practice, no published source).
- * Invalid input throws a RangeError.
+ * Invalid input throws a CalcError (./said).
  *
  * Substitution: a wrong type or polarity, or any of Vceo/Vds, Ic/Id, Ptot below the original's, refuses; a
  * different mounting (surface-mount for through-hole) refuses, because it does not fit the board. A larger or
@@ -8,6 +8,8 @@
  * accepted with a warning: the fixer can fit it with care, and must be told what to check. A different pin-out is
  * not refused because a larger package usually means re-formed leads anyway; the warning says to mark each lead.
  */
+import { english, refuse, said, term, type Said, type SaidValue } from './said';
+
 export const TRANSISTOR_SOURCE = 'Common practice, no published source';
 
 export const TRANSISTOR_TYPES = ['NPN', 'PNP', 'N-MOSFET', 'P-MOSFET'] as const;
@@ -67,6 +69,8 @@ export interface SubstitutionResult {
   warnings: string[];
   /** The checks it passed, for the record. */
   passed: string[];
+  /** The same three lists as codes and values, for a screen to word in the reader's language. */
+  said: { refusals: Said[]; warnings: Said[]; passed: Said[] };
 }
 
 /** "an NPN", "an N-MOSFET", "a PNP", "a P-MOSFET": the article follows how the letters are said. */
@@ -85,32 +89,36 @@ const knownPackage = (p: string): KnownPackage | null => {
   return (Object.keys(PACKAGES) as KnownPackage[]).find((k) => k.toUpperCase() === n) ?? null;
 };
 
-function checkSpec(s: TransistorSpec, which: string) {
+function checkSpec(s: TransistorSpec, side: 'original' | 'replacement') {
+  const which = term(`calc.term.${side}`, side);
   if (!(TRANSISTOR_TYPES as readonly string[]).includes(s.type))
-    throw new RangeError(`The ${which} type must be one of ${TRANSISTOR_TYPES.join(', ')}.`);
-  for (const [v, what] of [
-    [s.vMaxV, 'voltage rating'],
-    [s.iMaxA, 'current rating'],
-    [s.ptotW, 'power rating'],
+    throw refuse('calc.t.e.type', { which, list: TRANSISTOR_TYPES.join(', ') });
+  for (const [v, key, en] of [
+    [s.vMaxV, 'voltage', 'voltage rating'],
+    [s.iMaxA, 'current', 'current rating'],
+    [s.ptotW, 'power', 'power rating'],
   ] as const) {
-    if (!Number.isFinite(v) || v <= 0) throw new RangeError(`The ${which} ${what} must be a number above 0.`);
+    if (!Number.isFinite(v) || v <= 0) throw refuse('calc.t.e.number', { which, what: term(`calc.term.${key}`, en) });
   }
-  for (const [v, what] of [
-    [s.hfeMin, 'gain'],
-    [s.ftMHz, 'transition frequency'],
-    [s.vgsThMaxV, 'gate threshold'],
-    [s.fallTimeNs, 'fall time'],
+  for (const [v, key, en] of [
+    [s.hfeMin, 'gain', 'gain'],
+    [s.ftMHz, 'ft', 'transition frequency'],
+    [s.vgsThMaxV, 'vgs', 'gate threshold'],
+    [s.fallTimeNs, 'fall', 'fall time'],
   ] as const) {
     if (v !== undefined && (!Number.isFinite(v) || v <= 0))
-      throw new RangeError(`The ${which} ${what}, when given, must be a number above 0.`);
+      throw refuse('calc.t.e.optional', { which, what: term(`calc.term.${key}`, en) });
   }
-  if (s.package.trim() === '') throw new RangeError(`Give the ${which} package, e.g. TO-220.`);
+  if (s.package.trim() === '') throw refuse('calc.t.e.package', { which });
   if (s.pinout !== undefined && s.pinout.trim() !== '') {
-    const letters = isBipolar(s.type) ? /^[BCE]{2,3}$/ : /^[GDS]{2,3}$/;
+    const bipolar = isBipolar(s.type);
+    const letters = bipolar ? /^[BCE]{2,3}$/ : /^[GDS]{2,3}$/;
     if (!letters.test(normalisePinout(s.pinout)))
-      throw new RangeError(
-        `The ${which} pin-out uses the letters ${isBipolar(s.type) ? 'B, C and E' : 'G, D and S'}, e.g. ${isBipolar(s.type) ? 'BCE' : 'GDS'}.`,
-      );
+      throw refuse('calc.t.e.pinout', {
+        which,
+        letters: bipolar ? term('calc.term.bce', 'B, C and E') : term('calc.term.gds', 'G, D and S'),
+        ex: bipolar ? 'BCE' : 'GDS',
+      });
   }
 }
 
@@ -120,21 +128,22 @@ const normalisePinout = (p: string) => p.toUpperCase().replace(/[^A-Z]/g, '');
 export function checkSubstitution(original: TransistorSpec, candidate: TransistorSpec): SubstitutionResult {
   checkSpec(original, 'original');
   checkSpec(candidate, 'replacement');
-  const refusals: string[] = [];
-  const warnings: string[] = [];
-  const passed: string[] = [];
+  const refusals: Said[] = [];
+  const warnings: Said[] = [];
+  const passed: Said[] = [];
   const bipolar = isBipolar(original.type);
   const [vName, iName, lead] = bipolar ? ['Vceo', 'Ic', 'collector'] : ['Vds', 'Id', 'drain'];
+  const pkgs = (pc: string, po: string): Record<string, SaidValue> => ({ pc, po });
 
-  if (original.type === candidate.type) passed.push(`Same type (${original.type}).`);
-  else if (isBipolar(original.type) !== isBipolar(candidate.type))
+  if (original.type === candidate.type) passed.push(said('calc.t.sameType', { t: original.type }));
+  else {
+    const values = { cand: candidate.type, orig: original.type };
     refusals.push(
-      `${article(candidate.type, true)} ${candidate.type} cannot replace ${article(original.type)} ${original.type}: a MOSFET is driven by gate voltage, a bipolar transistor by base current.`,
+      isBipolar(original.type) !== isBipolar(candidate.type)
+        ? said('calc.t.mosfetBipolar', { ...values, a1: article(candidate.type, true), a2: article(original.type) })
+        : said('calc.t.polarity', { ...values, a1: article(candidate.type), a2: article(original.type) }),
     );
-  else
-    refusals.push(
-      `Opposite polarity: ${article(candidate.type)} ${candidate.type} cannot replace ${article(original.type)} ${original.type}.`,
-    );
+  }
 
   const ratings = [
     [vName, original.vMaxV, candidate.vMaxV, 'V'],
@@ -142,86 +151,63 @@ export function checkSubstitution(original: TransistorSpec, candidate: Transisto
     ['Ptot', original.ptotW, candidate.ptotW, 'W'],
   ] as const;
   for (const [name, o, c, unit] of ratings) {
-    if (c >= o) passed.push(`${name} ${c} ${unit} ≥ ${o} ${unit}.`);
-    else refusals.push(`${name} ${c} ${unit} is below the original's ${o} ${unit}.`);
+    const values = { name, c, o, unit, unit2: unit };
+    if (c >= o) passed.push(said('calc.t.ratingOk', values));
+    else refusals.push(said('calc.t.below', values));
   }
 
   const po = knownPackage(original.package);
   const pc = knownPackage(candidate.package);
   const nameO = po ?? original.package.trim();
   const nameC = pc ?? candidate.package.trim();
-  if (normalisePackage(nameO) === normalisePackage(nameC)) passed.push(`Same package (${nameO}).`);
-  else if (!po || !pc)
-    warnings.push(
-      `Packages ${nameO} and ${nameC} cannot be compared here: check size, mounting and pin-out against both datasheets.`,
-    );
+  if (normalisePackage(nameO) === normalisePackage(nameC)) passed.push(said('calc.t.samePackage', { p: nameO }));
+  else if (!po || !pc) warnings.push(said('calc.t.unknownPackages', { a: nameO, b: nameC }));
   else {
     const o = PACKAGES[po];
     const c = PACKAGES[pc];
+    const mount = (m: PackageInfo['mount']) =>
+      m === 'surface' ? term('calc.term.smd', 'surface-mount') : term('calc.term.tht', 'through-hole');
     if (o.mount !== c.mount)
-      refusals.push(
-        `A ${c.mount === 'surface' ? 'surface-mount' : 'through-hole'} ${pc} does not fit the board made for a ${o.mount === 'surface' ? 'surface-mount' : 'through-hole'} ${po}.`,
-      );
-    else if (c.size > o.size)
-      warnings.push(
-        `Larger package (${pc} for ${po}): check it fits the space and the heatsink, that the mounting hole lines up and the leads reach, and check the pin-out — it often differs between packages.`,
-      );
-    else if (c.size < o.size)
-      warnings.push(
-        `Smaller package (${pc} for ${po}): it sheds heat through a smaller face; check it sits flat on the heatsink and the clamp or screw holds it, and check the pin-out.`,
-      );
-    else
-      warnings.push(
-        `Different package of similar size (${pc} for ${po}): check the mounting hole, the heatsink contact and the pin-out.`,
-      );
+      refusals.push(said('calc.t.mount', { ...pkgs(pc, po), mc: mount(c.mount), mo: mount(o.mount) }));
+    else if (c.size > o.size) warnings.push(said('calc.t.larger', pkgs(pc, po)));
+    else if (c.size < o.size) warnings.push(said('calc.t.smaller', pkgs(pc, po)));
+    else warnings.push(said('calc.t.similar', pkgs(pc, po)));
     if (o.mount === c.mount && c.liveTab && !o.liveTab)
-      warnings.push(
-        `The ${pc}'s tab or case is connected to the ${lead}, the original's was not: if it touches a heatsink or the chassis, fit an insulating pad and bush and check the insulation.`,
-      );
+      warnings.push(said('calc.t.liveTab', { ...pkgs(pc, po), lead: term(`calc.term.${lead}`, lead) }));
   }
 
   const pinO = original.pinout ? normalisePinout(original.pinout) : '';
   const pinC = candidate.pinout ? normalisePinout(candidate.pinout) : '';
-  if (!pinO || !pinC) warnings.push('Pin-out not compared: check it on both datasheets before fitting.');
-  else if (pinO === pinC) passed.push(`Same pin-out (${pinO}).`);
-  else
-    warnings.push(
-      `Different pin-out (${pinC} for ${pinO}): the leads must be re-formed or crossed — mark each one, keep them apart, and check against both datasheets before power goes on.`,
-    );
+  if (!pinO || !pinC) warnings.push(said('calc.t.pinoutUnknown'));
+  else if (pinO === pinC) passed.push(said('calc.t.samePinout', { p: pinO }));
+  else warnings.push(said('calc.t.differentPinout', pkgs(pinC, pinO)));
 
-  if (bipolar && original.hfeMin !== undefined && candidate.hfeMin !== undefined) {
-    if (candidate.hfeMin >= original.hfeMin) passed.push(`Gain hFE ${candidate.hfeMin} ≥ ${original.hfeMin}.`);
-    else
-      warnings.push(
-        `Lower gain (hFE ${candidate.hfeMin} for ${original.hfeMin}): it may not switch fully on with the same base drive and would then run hot.`,
-      );
-  }
-  if (bipolar && original.ftMHz !== undefined && candidate.ftMHz !== undefined) {
-    if (candidate.ftMHz >= original.ftMHz) passed.push(`fT ${candidate.ftMHz} MHz ≥ ${original.ftMHz} MHz.`);
-    else
-      warnings.push(
-        `Slower part (fT ${candidate.ftMHz} MHz for ${original.ftMHz} MHz): in a switching or high-frequency stage it can run hot or fail.`,
-      );
-  }
-  if (!bipolar && original.vgsThMaxV !== undefined && candidate.vgsThMaxV !== undefined) {
-    if (candidate.vgsThMaxV <= original.vgsThMaxV)
-      passed.push(`Gate threshold ${candidate.vgsThMaxV} V ≤ ${original.vgsThMaxV} V.`);
-    else
-      warnings.push(
-        `Higher gate threshold (${candidate.vgsThMaxV} V for ${original.vgsThMaxV} V): the same gate drive may not turn it fully on; check the drive voltage.`,
-      );
-  }
-  if (original.fallTimeNs !== undefined && candidate.fallTimeNs !== undefined) {
-    if (candidate.fallTimeNs <= original.fallTimeNs)
-      passed.push(`Fall time ${candidate.fallTimeNs} ns ≤ ${original.fallTimeNs} ns.`);
-    else
-      warnings.push(
-        `Slower switching (fall time ${candidate.fallTimeNs} ns for ${original.fallTimeNs} ns): in a switch-mode supply it runs hotter and may fail.`,
-      );
-  }
+  /** A figure the candidate must reach (at least, or at most for `lower`), passed or warned about. */
+  const compare = (
+    c: number | undefined,
+    o: number | undefined,
+    ok: Said['code'],
+    warn: Said['code'],
+    lower = false,
+  ) => {
+    if (c === undefined || o === undefined) return;
+    if (lower ? c <= o : c >= o) passed.push(said(ok, { c, o }));
+    else warnings.push(said(warn, { c, o }));
+  };
+  if (bipolar) {
+    compare(candidate.hfeMin, original.hfeMin, 'calc.t.gainOk', 'calc.t.gainLow');
+    compare(candidate.ftMHz, original.ftMHz, 'calc.t.ftOk', 'calc.t.slower');
+  } else compare(candidate.vgsThMaxV, original.vgsThMaxV, 'calc.t.gateOk', 'calc.t.gateHigh', true);
+  compare(candidate.fallTimeNs, original.fallTimeNs, 'calc.t.fallOk', 'calc.t.fallSlow', true);
 
   const verdict: SubstitutionVerdict = refusals.length ? 'refuse' : warnings.length ? 'accept-with-warnings' : 'accept';
-  return { verdict, refusals, warnings, passed };
+  return {
+    verdict,
+    refusals: refusals.map(english),
+    warnings: warnings.map(english),
+    passed: passed.map(english),
+    said: { refusals, warnings, passed },
+  };
 }
 
 /** Diode-test probe placements: the first letter has the red (+) probe, the second the black (−). */
@@ -242,9 +228,23 @@ export interface DiodeTestResult {
   verdict: DiodeTestVerdict;
   polarity: 'NPN' | 'PNP' | null;
   reasons: string[];
+  /** The reasons as codes and values, for a screen to word in the reader's language. */
+  said: Said[];
 }
 
-const show = (r: DiodeReading) => (r === 'OL' ? 'OL' : `${r} V`);
+const show = (r: DiodeReading): SaidValue => (r === 'OL' ? 'OL' : { n: r, unit: 'V' });
+const JUNCTION = { BE: 'be', BC: 'bc', CE: 'ce' } as const;
+const junction = (to: 'BE' | 'BC' | 'CE', en: string) => term(`calc.junction.${JUNCTION[to]}`, en);
+const result = (
+  verdict: DiodeTestVerdict,
+  polarity: DiodeTestResult['polarity'],
+  reasons: Said[],
+): DiodeTestResult => ({
+  verdict,
+  polarity,
+  reasons: reasons.map(english),
+  said: reasons,
+});
 const conducts = (r: DiodeReading) => r !== 'OL';
 const isShort = (r: DiodeReading) => r !== 'OL' && r <= SHORT_MAX_V;
 
@@ -256,51 +256,36 @@ const isShort = (r: DiodeReading) => r !== 'OL' && r <= SHORT_MAX_V;
 export function interpretDiodeTest(readings: DiodeReadings): DiodeTestResult {
   for (const p of PROBE_PAIRS) {
     const r = readings[p];
-    if (r !== 'OL' && (!Number.isFinite(r) || r < 0))
-      throw new RangeError(
-        `The reading with red on ${p[0]} and black on ${p[1]} must be a voltage of 0 or more, or OL.`,
-      );
+    if (r !== 'OL' && (!Number.isFinite(r) || r < 0)) throw refuse('calc.dt.negative', { red: p[0], black: p[1] });
     // A meter's diode test shows at most about 2–3 V before it reads OL; 650 is millivolts typed as volts.
-    if (r !== 'OL' && r > 5)
-      throw new RangeError(
-        `The reading with red on ${p[0]} and black on ${p[1]} is ${r} V: enter volts (0.65, not 650), or OL.`,
-      );
+    if (r !== 'OL' && r > 5) throw refuse('calc.dt.millivolts', { red: p[0], black: p[1], r });
   }
   const pairs = [
     ['BE', 'EB', 'base–emitter'],
     ['BC', 'CB', 'base–collector'],
     ['CE', 'EC', 'collector–emitter'],
   ] as const;
-  const failed: string[] = [];
+  const failed: Said[] = [];
   for (const [to, from, name] of pairs) {
     const there = readings[to];
     const back = readings[from];
-    const junction = to[0] === 'B';
-    const resistorNote = to === 'BE' ? ' (unless its datasheet shows a built-in base–emitter resistor)' : '';
+    const isJunction = to[0] === 'B';
+    // Unless its datasheet shows a built-in base–emitter resistor.
+    const resistor = to === 'BE';
+    const values = { pair: junction(to, name), a: show(there), b: show(back) };
     if (isShort(there) && isShort(back))
-      failed.push(
-        `The ${name} pair reads short both ways (${show(there)}, ${show(back)}): the transistor has failed${resistorNote}.`,
-      );
+      failed.push(said(resistor ? 'calc.dt.shortResistor' : 'calc.dt.short', values));
     else if (conducts(there) && conducts(back))
-      failed.push(
-        `The ${name} pair conducts both ways (${show(there)}, ${show(back)}): leaky or shorted, the transistor has failed${resistorNote}.`,
-      );
-    else if (junction && !conducts(there) && !conducts(back))
-      failed.push(`The ${name} junction is open both ways: the transistor has failed.`);
+      failed.push(said(resistor ? 'calc.dt.leakyResistor' : 'calc.dt.leaky', values));
+    else if (isJunction && !conducts(there) && !conducts(back))
+      failed.push(said('calc.dt.open', { pair: junction(to, name) }));
   }
-  if (failed.length) return { verdict: 'failed', polarity: null, reasons: failed };
+  if (failed.length) return result('failed', null, failed);
 
   // Each junction now conducts exactly one way; the base is positive in both for an NPN, negative for a PNP.
   const be = conducts(readings.BE) ? 'NPN' : 'PNP';
   const bc = conducts(readings.BC) ? 'NPN' : 'PNP';
-  if (be !== bc)
-    return {
-      verdict: 'unclear',
-      polarity: null,
-      reasons: [
-        'The base–emitter and base–collector junctions point opposite ways: check which lead is the base and measure again.',
-      ],
-    };
+  if (be !== bc) return result('unclear', null, [said('calc.dt.opposite')]);
   const polarity = be;
   const vBE = (polarity === 'NPN' ? readings.BE : readings.EB) as number;
   const vBC = (polarity === 'NPN' ? readings.BC : readings.CB) as number;
@@ -311,43 +296,21 @@ export function interpretDiodeTest(readings: DiodeReadings): DiodeTestResult {
     // A damper diode across C–E conducts from emitter to collector in an NPN (red on E), the reverse in a PNP.
     const damperWay = polarity === 'NPN' ? conducts(ceBack) : conducts(ceThere);
     const value = show(conducts(ceThere) ? ceThere : ceBack);
-    if (damperWay)
-      return {
-        verdict: 'unclear',
-        polarity,
-        reasons: [
-          `Collector–emitter conducts one way (${value}): a built-in damper diode (common in line-output and some switching transistors) reads like this — check the datasheet; without one, the transistor has failed.`,
-        ],
-      };
-    return {
-      verdict: 'failed',
-      polarity,
-      reasons: [`Collector–emitter conducts (${value}) where it should be open both ways: the transistor has failed.`],
-    };
+    if (damperWay) return result('unclear', polarity, [said('calc.dt.damper', { v: value })]);
+    return result('failed', polarity, [said('calc.dt.ceConducts', { v: value })]);
   }
 
-  const odd: string[] = [];
-  for (const [v, name] of [
-    [vBE, 'Base–emitter'],
-    [vBC, 'Base–collector'],
+  const odd: Said[] = [];
+  for (const [v, to, name] of [
+    [vBE, 'BE', 'Base–emitter'],
+    [vBC, 'BC', 'Base–collector'],
   ] as const) {
-    if (v < JUNCTION_MIN_V)
-      odd.push(
-        `${name} reads ${v} V, low for a silicon junction: a germanium part, a leaky junction, or other parts in circuit.`,
-      );
-    else if (v > JUNCTION_MAX_V)
-      odd.push(
-        `${name} reads ${v} V, high for a single junction: a Darlington reads about twice a junction base–emitter; otherwise suspect it.`,
-      );
+    if (v < JUNCTION_MIN_V) odd.push(said('calc.dt.low', { pair: junction(to, name), v }));
+    else if (v > JUNCTION_MAX_V) odd.push(said('calc.dt.high', { pair: junction(to, name), v }));
   }
-  if (odd.length) return { verdict: 'unclear', polarity, reasons: odd };
+  if (odd.length) return result('unclear', polarity, odd);
 
-  const reasons = [
-    `${polarity}: base–emitter ${vBE} V and base–collector ${vBC} V one way only, collector–emitter open both ways. The junctions test good; this does not prove gain or breakdown voltage.`,
-  ];
-  if (vBC > vBE)
-    reasons.push(
-      'Base–collector reads higher than base–emitter, usually the other way round: check collector and emitter are not swapped.',
-    );
-  return { verdict: 'good', polarity, reasons };
+  const reasons = [said('calc.dt.good', { polarity, be: vBE, bc: vBC })];
+  if (vBC > vBE) reasons.push(said('calc.dt.swapped'));
+  return result('good', polarity, reasons);
 }

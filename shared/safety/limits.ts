@@ -1,3 +1,4 @@
+import { refuse } from '../calculators/said';
 import { missingReadings, type ApplianceClass } from './readings';
 
 /**
@@ -11,7 +12,7 @@ export const SAFETY_SOURCE = 'EN 50678 / EN 50699 limits as given in test-instru
 
 /** Protective conductor resistance, Class I: 0.3 Ω up to 5 m of cord, +0.1 Ω for each further 7.5 m begun, at most 1.0 Ω. */
 export function protectiveConductorLimitOhm(cordLengthM: number): number {
-  if (!(cordLengthM >= 0)) throw new RangeError('Cord length must be zero or more metres.');
+  if (!(cordLengthM >= 0)) throw refuse('calc.el.cord');
   const extra = Math.max(0, Math.ceil((cordLengthM - 5) / 7.5 - 1e-9));
   return Math.min(1.0, Math.round((0.3 + 0.1 * extra) * 1000) / 1000);
 }

@@ -1,4 +1,5 @@
 import { checkSubstitution, type TransistorSpec } from '../calculators/transistors';
+import { english, said, term, CalcError, type Said, type SaidValue } from '../calculators/said';
 import type { PartRatings, PartType } from './constants';
 
 /**
@@ -19,7 +20,27 @@ export interface SubstituteVerdict {
   verdict: 'accept' | 'accept-with-warnings' | 'refuse';
   reasons: string[];
   warnings: string[];
+  /** The reasons and warnings as codes and values, for a screen to word in the reader's language. */
+  said: { reasons: Said[]; warnings: Said[] };
 }
+
+/** A verdict with its reasons and warnings in English and as codes. */
+const verdictOf = (verdict: SubstituteVerdict['verdict'], reasons: Said[], warnings: Said[]): SubstituteVerdict => ({
+  verdict,
+  reasons: reasons.map(english),
+  warnings: warnings.map(english),
+  said: { reasons, warnings },
+});
+/** A package not recorded, compared by the rule as this name and said as the word "unknown" in the reader's language. */
+const UNKNOWN_PACKAGE = 'unknown';
+const unknownSaid = (s: Said): Said => ({
+  ...s,
+  values: Object.fromEntries(
+    Object.entries(s.values).map(([k, v]) => [k, v === UNKNOWN_PACKAGE ? term('calc.term.unknown', 'unknown') : v]),
+  ),
+});
+const kind = (t: PartType) => term(`tool.part.${t}`, t.replace('-', ' '));
+const RATING = { voltageV: 'voltage', currentA: 'current', powerW: 'power' } as const;
 
 const near = (a: number, b: number, pct: number) => Math.abs(a - b) <= (Math.abs(b) * pct) / 100 + 1e-12;
 
@@ -35,24 +56,14 @@ function transistorVerdict(needed: Needed, cand: Candidate): SubstituteVerdict {
       vMaxV: r.voltageV,
       iMaxA: r.currentA,
       ptotW: r.powerW ?? Number.MIN_VALUE,
-      package: p.package || 'unknown',
+      package: p.package || UNKNOWN_PACKAGE,
       ...(p.pinout ? { pinout: p.pinout } : {}),
     };
   };
   const n = spec(needed);
   const c = spec(cand);
-  if (!n)
-    return {
-      verdict: 'accept-with-warnings',
-      reasons: [],
-      warnings: ['Give the polarity, voltage and current needed to check a substitute.'],
-    };
-  if (!c)
-    return {
-      verdict: 'accept-with-warnings',
-      reasons: [],
-      warnings: ['This part’s ratings are not all recorded: look up its datasheet before fitting it.'],
-    };
+  if (!n) return verdictOf('accept-with-warnings', [], [said('tool.sub.giveNeeded')]);
+  if (!c) return verdictOf('accept-with-warnings', [], [said('tool.sub.notAllRecorded')]);
   // Power unknown on either side is not checked by the rule: say so.
   const unknownPower = needed.ratings.powerW === undefined || cand.ratings.powerW === undefined;
   if (unknownPower) {
@@ -61,16 +72,13 @@ function transistorVerdict(needed: Needed, cand: Candidate): SubstituteVerdict {
   }
   try {
     const r = checkSubstitution(n, c);
-    return {
-      verdict: r.verdict,
-      reasons: r.refusals,
-      warnings: [
-        ...r.warnings,
-        ...(unknownPower ? ['The power rating is not recorded on both: check it on the datasheet.'] : []),
-      ],
-    };
+    return verdictOf(r.verdict, r.said.refusals.map(unknownSaid), [
+      ...r.said.warnings.map(unknownSaid),
+      ...(unknownPower ? [said('tool.sub.powerUnknown')] : []),
+    ]);
   } catch (e) {
-    return { verdict: 'accept-with-warnings', reasons: [], warnings: [(e as Error).message] };
+    if (e instanceof CalcError) return verdictOf('accept-with-warnings', [], [e.said]);
+    throw e;
   }
 }
 
@@ -79,21 +87,19 @@ export function judgeSubstitute(
   cand: Candidate,
   transistor: (n: Needed, c: Candidate) => SubstituteVerdict = transistorVerdict,
 ): SubstituteVerdict {
-  const reasons: string[] = [];
-  const warnings: string[] = [];
+  const reasons: Said[] = [];
+  const warnings: Said[] = [];
   const n = needed.ratings;
   const c = cand.ratings;
   if (needed.type !== cand.type)
-    return {
-      verdict: 'refuse',
-      reasons: [`It is a ${cand.type.replace('-', ' ')}, not a ${needed.type.replace('-', ' ')}.`],
-      warnings,
-    };
+    return verdictOf('refuse', [said('tool.sub.otherKind', { cand: kind(cand.type), need: kind(needed.type) })], []);
   if (needed.type === 'bipolar-transistor' || needed.type === 'mosfet') return transistor(needed, cand);
   const atLeast = (key: 'voltageV' | 'currentA' | 'powerW', what: string, unit: string) => {
     if (n[key] === undefined) return;
-    if (c[key] === undefined) warnings.push(`Its ${what} is not recorded; check it on the part.`);
-    else if (c[key]! < n[key]!) reasons.push(`Its ${what} of ${c[key]} ${unit} is below the ${n[key]} ${unit} needed.`);
+    const rating = term(`calc.term.${RATING[key]}`, what);
+    if (c[key] === undefined) warnings.push(said('tool.sub.notRecorded', { what: rating }));
+    else if (c[key]! < n[key]!)
+      reasons.push(said('tool.sub.below', { what: rating, c: c[key]!, n: n[key]!, unit, unit2: unit }));
   };
   switch (needed.type) {
     case 'resistor': {
@@ -103,38 +109,44 @@ export function judgeSubstitute(
         (c.resistanceOhm === undefined || !near(c.resistanceOhm, n.resistanceOhm, tol))
       )
         reasons.push(
-          `Its value${c.resistanceOhm !== undefined ? ` of ${c.resistanceOhm} Ω` : ' is unknown and'} is not within ±${tol} % of ${n.resistanceOhm} Ω.`,
+          c.resistanceOhm !== undefined
+            ? said('tool.sub.valueOff', { c: c.resistanceOhm, tol, n: n.resistanceOhm })
+            : said('tool.sub.valueUnknown', { tol, n: n.resistanceOhm }),
         );
       atLeast('powerW', 'power rating', 'W');
       break;
     }
     case 'capacitor':
       if (n.capacitanceF !== undefined && (c.capacitanceF === undefined || !near(c.capacitanceF, n.capacitanceF, 20)))
-        reasons.push('Its capacitance is not within ±20 % of the one needed.');
+        reasons.push(said('tool.sub.capacitance'));
       atLeast('voltageV', 'voltage rating', 'V');
       break;
     case 'fuse':
-      if (n.currentA === undefined)
-        warnings.push('Give the current rating of the fuse needed: a fuse is replaced only by one of the same rating.');
-      else if (c.currentA === undefined)
-        reasons.push('Its current rating is not recorded: a fuse is replaced only by one of the same rating.');
+      if (n.currentA === undefined) warnings.push(said('tool.sub.fuseGive'));
+      else if (c.currentA === undefined) reasons.push(said('tool.sub.fuseUnknown'));
       else if (c.currentA !== n.currentA)
         reasons.push(
-          c.currentA > n.currentA
-            ? `A ${c.currentA} A fuse would not protect what a ${n.currentA} A fuse protects.`
-            : `A ${c.currentA} A fuse is not the ${n.currentA} A needed: it would blow in normal use.`,
+          said(c.currentA > n.currentA ? 'tool.sub.fuseHigher' : 'tool.sub.fuseLower', {
+            c: c.currentA,
+            n: n.currentA,
+          }),
         );
       atLeast('voltageV', 'voltage rating', 'V');
       break;
     case 'thermal-cutout':
       if (n.temperatureC !== undefined && c.temperatureC !== n.temperatureC)
-        reasons.push(`A cut-out must trip at the same temperature (${n.temperatureC} °C); never fit a different one.`);
+        reasons.push(said('tool.sub.cutout', { t: n.temperatureC }));
       atLeast('currentA', 'current rating', 'A');
       atLeast('voltageV', 'voltage rating', 'V');
       break;
     case 'power-supply':
       if (n.voltageV !== undefined && c.voltageV !== n.voltageV)
-        reasons.push(`Its output of ${c.voltageV ?? 'unknown'} V is not the ${n.voltageV} V needed.`);
+        reasons.push(
+          said('tool.sub.output', {
+            c: c.voltageV ?? (term('calc.term.unknown', 'unknown') as SaidValue),
+            n: n.voltageV,
+          }),
+        );
       atLeast('currentA', 'current rating', 'A');
       break;
     default:
@@ -143,10 +155,6 @@ export function judgeSubstitute(
       atLeast('powerW', 'power rating', 'W');
   }
   if (needed.package && cand.package && needed.package.toUpperCase() !== cand.package.toUpperCase())
-    warnings.push(`It comes in ${cand.package}, not ${needed.package}: check that it fits and how it is mounted.`);
-  return {
-    verdict: reasons.length ? 'refuse' : warnings.length ? 'accept-with-warnings' : 'accept',
-    reasons,
-    warnings,
-  };
+    warnings.push(said('tool.sub.package', { c: cand.package, n: needed.package }));
+  return verdictOf(reasons.length ? 'refuse' : warnings.length ? 'accept-with-warnings' : 'accept', reasons, warnings);
 }

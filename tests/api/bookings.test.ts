@@ -2,7 +2,14 @@ import { randomUUID } from 'node:crypto';
 import { and, eq, sql } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { REFERENCE_PATTERN } from '../../shared/booking/reference';
-import { bookingItems, bookings, outbox, slots, waitlistEntries } from '../../server/src/db/schema/index';
+import {
+  bookingItems,
+  bookings,
+  groupExclusions,
+  outbox,
+  slots,
+  waitlistEntries,
+} from '../../server/src/db/schema/index';
 import { expireOffers, sendReminders } from '../../server/src/features/bookings/jobs';
 import type { RunningServer } from '../../server/src/server';
 import { createTestDatabase, type TestDatabase } from '../support/db';
@@ -138,6 +145,35 @@ describe('booking a slot', () => {
     );
     expect(res.status).toBe(422);
     expect(res.json.error.fields['items.0.hazards']).toMatch(/swollen lithium battery/);
+  });
+
+  it('says why an item is refused in the request’s language (problems.hazard.*, problems.notTaken, categories)', async () => {
+    const other = await makeGroup(db.db, 'Flickwerk Nord');
+    const { applyDefaultExclusions } = await import('../../server/src/core/screening');
+    await applyDefaultExclusions(db.db, other);
+    await db.db.insert(groupExclusions).values({ groupId: other, categoryId: await categoryId(db.db, 'phone') });
+    const { slotIds } = await makeEvent(db.db, other, { slotCount: 1 });
+    const refused = async (lang: string, slug: string, hazards: string[] = []) =>
+      (
+        await new Agent(server.url, { 'accept-language': lang }).post(
+          '/api/bookings',
+          bookingBody(slotIds[0], [{ ...item(await categoryId(db.db, slug)), hazards }]),
+        )
+      ).json.error.fields;
+    // locales/de/problems.json: the hazard's reason and suggestion.
+    expect((await refused('de-DE', 'kettle', ['gas']))['items.0.hazards']).toBe(
+      'Gasgeräte dürfen nur von einem zugelassenen Fachbetrieb gewartet werden. Wenden Sie sich an einen zugelassenen Fachbetrieb in Ihrer Nähe.',
+    );
+    // locales/fr/categories.json: the kind's own refusal.
+    expect((await refused('fr', 'microwave'))['items.0.categoryId']).toMatch(/^Un four à micro-ondes contient/);
+    // locales/nl/problems.json: the group's exclusion, the kind named in Dutch.
+    expect((await refused('nl', 'phone'))['items.0.categoryId']).toMatch(
+      /^Flickwerk Nord neemt dit soort voorwerpen niet aan \(\S/,
+    );
+    expect((await refused('en', 'phone'))['items.0.categoryId']).toMatch(
+      /^Flickwerk Nord does not take this kind of item \(.+\)\. Look for another group’s event that takes it/,
+    );
+    expect((await slotRow(slotIds[0])).booked).toBe(0);
   });
 
   it('answers invalid input with 400 and a message per field, and writes nothing', async () => {

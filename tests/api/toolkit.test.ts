@@ -313,6 +313,11 @@ describe('the salvage stock', () => {
     expect(by(pnp.json.id).verdict).toBe('refuse');
     expect(by(low.json.id).verdict).toBe('refuse');
     expect(by(low.json.id).reasons.join(' ')).toMatch(/300/);
+    // The same reasons as codes and values, for the item page to word in the fixer's language.
+    expect(by(low.json.id).said.reasons).toContainEqual({
+      code: 'calc.t.below',
+      values: { name: 'Vceo', c: 300, o: 400, unit: 'V', unit2: 'V' },
+    });
   });
 });
 

@@ -98,6 +98,8 @@ describe('what a group takes', () => {
   it('refuses an excluded category with its own reason and suggestion', () => {
     expect(screenItem(microwave, [], { name: 'G', excludedCategoryIds: [1] })).toEqual({
       ok: false,
+      code: 'category',
+      categoryId: 1,
       reason: 'High-voltage capacitor.',
       suggestion: 'Ask a trained repairer.',
     });
@@ -107,7 +109,16 @@ describe('what a group takes', () => {
   });
   it('refuses a damaged mains cable in any category', () => {
     const r = screenItem(lamp, ['damaged-cable'], { name: 'G', excludedCategoryIds: [] });
-    expect(r.ok).toBe(false);
+    expect(r).toEqual({ ok: false, code: 'hazard', hazard: 'damaged-cable' });
+  });
+  it('names the group and the kind when the kind has no refusal of its own', () => {
+    expect(screenItem(lamp, [], { name: 'G', excludedCategoryIds: [2] })).toEqual({
+      ok: false,
+      code: 'not-taken',
+      categoryId: 2,
+      group: 'G',
+      category: 'Lamp',
+    });
   });
 });
 

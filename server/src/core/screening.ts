@@ -1,9 +1,11 @@
 import { eq, inArray } from 'drizzle-orm';
-import { screenItem } from '../../../shared/booking/screening';
+import { screenItem, type ScreenRefusal } from '../../../shared/booking/screening';
 import type { Hazard } from '../../../shared/constants';
+import type { Language } from '../../../shared/i18n/languages';
 import type { DbOrTx } from '../db/client';
 import { categories, groupExclusions } from '../db/schema/index';
-import { HttpError } from '../http/errors';
+import { HttpError, type FieldMessage } from '../http/errors';
+import { categoryText, translate } from '../i18n';
 
 export async function excludedCategoryIds(db: DbOrTx, groupId: number): Promise<number[]> {
   const rows = await db
@@ -19,6 +21,21 @@ export async function applyDefaultExclusions(db: DbOrTx, groupId: number) {
   if (refused.length) await db.insert(groupExclusions).values(refused.map((c) => ({ groupId, categoryId: c.id })));
 }
 
+/** A refusal of the screening in the request's language (problems.hazard.*, problems.notTaken, the kind's own words). */
+export const refusalIn =
+  (r: ScreenRefusal, slug: string) =>
+  (lang: Language): string => {
+    if (r.code === 'hazard') return translate(lang, `problems.hazard.${r.hazard}`);
+    if (r.code === 'category')
+      return `${categoryText(lang, slug, 'reason', r.reason)} ${categoryText(lang, slug, 'suggestion', r.suggestion)}`;
+    const name = categoryText(lang, slug, 'name', r.category);
+    // German writes its nouns with a capital; the others name the kind in lower case inside a sentence.
+    return translate(lang, 'problems.notTaken', {
+      group: r.group,
+      category: lang === 'de' ? name : name.toLowerCase(),
+    });
+  };
+
 /**
  * The one screening of items coming in, whether booked, walked in or corrected at the desk: refuses the whole lot
  * when any item is one the group does not take, saying why next to each. Answers the categories by id.
@@ -32,7 +49,7 @@ export async function screenItems(
   const cats = ids.length ? await tx.select().from(categories).where(inArray(categories.id, ids)) : [];
   const byId = new Map(cats.map((c) => [c.id, c]));
   const excluded = await excludedCategoryIds(tx, group.id);
-  const fields: Record<string, string> = {};
+  const fields: Record<string, FieldMessage> = {};
   items.forEach((item, i) => {
     const c = byId.get(item.categoryId);
     if (!c) {
@@ -40,7 +57,7 @@ export async function screenItems(
       return;
     }
     const r = screenItem(c, item.hazards ?? [], { name: group.name, excludedCategoryIds: excluded });
-    if (!r.ok) fields[`items.${i}.${item.hazards?.length ? 'hazards' : 'categoryId'}`] = `${r.reason} ${r.suggestion}`;
+    if (!r.ok) fields[`items.${i}.${item.hazards?.length ? 'hazards' : 'categoryId'}`] = refusalIn(r, c.slug);
   });
   if (Object.keys(fields).length)
     throw new HttpError(

@@ -4,6 +4,10 @@ import { ZodError } from 'zod';
 import { lockConflict } from '../db/retry';
 import { redactUrl } from './redact';
 import { isMessageKey, languageOf, translate } from '../i18n';
+import type { Language } from '../../../shared/i18n/languages';
+
+/** A field's message: a catalog key or an English refusal (see translate), or a wording in the request's language. */
+export type FieldMessage = string | ((lang: Language) => string);
 
 /** The one error type services throw; the handler turns it into `{"error":{code,message,fields?}}`. */
 export class HttpError extends Error {
@@ -11,7 +15,7 @@ export class HttpError extends Error {
     public status: number,
     public code: string,
     message: string,
-    public fields?: Record<string, string>,
+    public fields?: Record<string, FieldMessage>,
     /** Values of a catalog message; a value that is itself a catalog key (a status's name) is put in the reader's language. */
     public values?: Record<string, string | number>,
   ) {
@@ -150,7 +154,9 @@ export function errorHandler(log: (msg: string, err: unknown) => void = console.
     // Messages that are catalog keys (the shared schemas' validation.* keys, errors.*) go out in the reader's language.
     const lang = languageOf(req, res.locals);
     const fields = e.fields
-      ? Object.fromEntries(Object.entries(e.fields).map(([k, v]) => [k, translate(lang, v)]))
+      ? Object.fromEntries(
+          Object.entries(e.fields).map(([k, v]) => [k, typeof v === 'function' ? v(lang) : translate(lang, v)]),
+        )
       : undefined;
     const values = e.values
       ? Object.fromEntries(

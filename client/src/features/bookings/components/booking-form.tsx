@@ -4,6 +4,7 @@ import { useNavigate, useSearchParams } from 'react-router';
 import { HAZARDS, SKILLS } from '../../../../../shared/constants';
 import { formatDay } from '../../../../../shared/format';
 import { slotBookability } from '../../../../../shared/booking/bookability';
+import { screenItem } from '../../../../../shared/booking/screening';
 import { createBookingSchema, MAX_ITEMS_PER_BOOKING, PHOTO_LIMITS } from '../../../../../shared/schemas/bookings';
 import type { Category } from '../../../../../shared/api/categories';
 import type { EventDetail } from '../../../../../shared/api/events';
@@ -21,6 +22,7 @@ import { HouseRules } from './house-rules';
 import { TimeTiles } from './time-tiles';
 import { useCreateBooking } from '../api/create-booking';
 import { useJoinWaitlist } from '../api/join-waitlist';
+import { refusalWords } from '../../../lib/refusal-words';
 import { uploadPhotos } from '../api/upload-photos';
 
 const emptyItem = { categoryId: '' as unknown as number, brand: '', model: '', fault: '', hazards: [] as never[] };
@@ -204,7 +206,10 @@ export function BookingForm({
 
         {items.fields.map((field, i) => {
           const cat = byId.get(Number(watchedItems[i]?.categoryId));
-          const refused = cat && excluded.has(cat.id);
+          // The booking's screening of the kind alone: the hazards below have their own notice.
+          const screened = cat
+            ? screenItem(cat, [], { name: event.groupName, excludedCategoryIds: event.excludedCategoryIds })
+            : null;
           const hazards = watchedItems[i]?.hazards ?? [];
           const itemErrors = errors.items?.[i];
           return (
@@ -246,11 +251,9 @@ export function BookingForm({
                     ) : null;
                   })}
                 </SelectField>
-                {refused && !itemErrors?.categoryId && (
+                {screened && !screened.ok && !itemErrors?.categoryId && (
                   <Alert tone="error" title={t('booking.refusedTitle')}>
-                    {cat.refusal
-                      ? `${cat.refusal.reason} ${cat.refusal.suggestion}`
-                      : t('booking.refusedGeneric', { group: event.groupName })}
+                    {refusalWords(screened)}
                   </Alert>
                 )}
                 <div className="grid gap-4 sm:grid-cols-3">
@@ -307,7 +310,7 @@ export function BookingForm({
                 {(hazards as string[]).length > 0 && (
                   <Alert tone="error" title={t('booking.hazardTitle')}>
                     {(hazards as (typeof HAZARDS)[number][])
-                      .map((h) => `${t(`booking.hazard.${h}.reason`)} ${t(`booking.hazard.${h}.suggestion`)}`)
+                      .map((hazard) => refusalWords({ ok: false, code: 'hazard', hazard }))
                       .join(' ')}
                   </Alert>
                 )}

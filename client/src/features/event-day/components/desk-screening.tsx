@@ -1,7 +1,8 @@
 import type { Category } from '../../../../../shared/api/categories';
 import { screenItem, type ScreenResult } from '../../../../../shared/booking/screening';
 import type { Hazard } from '../../../../../shared/constants';
-import { tr, useT } from '../../../lib/i18n';
+import { useT } from '../../../lib/i18n';
+import { refusalWords } from '../../../lib/refusal-words';
 
 /** What the desk needs to screen an item as a booking does: the kinds of item and the group's excluded ones. */
 export interface DeskScreening {
@@ -18,22 +19,10 @@ export function screenAtDesk(
 ): ScreenResult {
   const category = s.categories.find((c) => c.id === Number(categoryId));
   if (!category && hazards.length === 0) return { ok: true };
-  const result = screenItem(category ?? { id: 0, name: '' }, hazards, {
+  return screenItem(category ?? { id: 0, name: '' }, hazards, {
     name: s.groupName,
     excludedCategoryIds: s.excludedCategoryIds,
   });
-  if (result.ok) return result;
-  // The same refusal in the reader's words: a hazard's from the booking catalog, a kind's own (already in the
-  // reader's language from the API), or the group's exclusion.
-  const hazard = hazards[0];
-  if (hazard)
-    return {
-      ok: false,
-      reason: tr(`booking.hazard.${hazard}.reason`),
-      suggestion: tr(`booking.hazard.${hazard}.suggestion`),
-    };
-  if (category?.refusal) return result;
-  return { ok: false, reason: tr('booking.refusedGeneric', { group: s.groupName }), suggestion: '' };
 }
 
 /** The kinds of item as options; the ones the group does not take say so. */
@@ -52,7 +41,7 @@ export function Refusal({ result }: { result: ScreenResult }) {
   if (result.ok) return null;
   return (
     <p role="alert" className="rounded-lg bg-alert-light px-3 py-2 text-sm font-semibold text-alert">
-      {result.reason} {result.suggestion}
+      {refusalWords(result)}
     </p>
   );
 }

@@ -13,7 +13,7 @@ import { useSubstitutes } from '../api/get-substitutes';
 import { useTakePart } from '../api/take-part';
 import { useLanguage, useT } from '../../../lib/i18n';
 import { AddPartForm } from './add-part-form';
-import { computedText } from './computed';
+import { saidIn } from './said';
 import { KnowledgeCard } from './knowledge-card';
 import { parseRatings, RatingFields, ratingsText, type RatingsDraft } from './ratings';
 
@@ -209,10 +209,10 @@ export function SalvageForItem({ item, onChanged }: { item: ToolkitItem; onChang
                       ? t('bench.tool.salvage.acceptWithWarnings')
                       : t('bench.tool.salvage.refuse')}
                 </p>
-                {[...v.reasons, ...v.warnings].length > 0 && (
+                {[...v.said.reasons, ...v.said.warnings].length > 0 && (
                   <ul className="list-disc pl-5 text-sm">
-                    {[...v.reasons, ...v.warnings].map((r) => (
-                      <li key={r}>{computedText(r, lang)}</li>
+                    {[...v.said.reasons, ...v.said.warnings].map((r, i) => (
+                      <li key={`${r.code}-${i}`}>{saidIn(r, lang)}</li>
                     ))}
                   </ul>
                 )}

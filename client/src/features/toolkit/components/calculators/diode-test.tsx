@@ -9,7 +9,7 @@ import {
 import { TextField } from '../../../../components/ui/field';
 import { attempt, Big, ExampleButton, Examples, OlButton, Prompt, Result } from './ui';
 import { useLanguage, useT } from '../../../../lib/i18n';
-import { computedText } from '../computed';
+import { saidIn } from '../said';
 
 // ——— diode test ———
 
@@ -61,7 +61,7 @@ export function DiodeTest() {
         {!result ? (
           <Prompt>{t('bench.calc.diode.prompt')}</Prompt>
         ) : !result.ok ? (
-          <p className="font-semibold">{computedText(result.error, lang)}</p>
+          <p className="font-semibold">{saidIn(result.error, lang)}</p>
         ) : (
           <>
             <Big>
@@ -69,8 +69,8 @@ export function DiodeTest() {
               {verdict !== 'failed' && result.value.polarity && ` (${result.value.polarity})`}
             </Big>
             <ul className="mt-1 list-disc space-y-1 pl-5 text-sm">
-              {result.value.reasons.map((x) => (
-                <li key={x}>{computedText(x, lang)}</li>
+              {result.value.said.map((x, i) => (
+                <li key={`${x.code}-${i}`}>{saidIn(x, lang)}</li>
               ))}
             </ul>
           </>

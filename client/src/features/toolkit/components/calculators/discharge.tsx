@@ -13,7 +13,7 @@ import { parseOhms } from '../../../../../../shared/calculators/resistors';
 import { SelectField, TextField } from '../../../../components/ui/field';
 import { attempt, bad, ExampleButton, Examples, num, ohmsError, ohmsHint, Prompt, Result, useFormats } from './ui';
 import { tr, useT } from '../../../../lib/i18n';
-import { computedText } from '../computed';
+import { saidIn } from '../said';
 
 /** A threshold's source in the reader's language; its first part (the standard) the same in every language. */
 const sourceOf = (t: SafeVoltageThreshold) =>
@@ -79,7 +79,7 @@ export function Discharge() {
         {!advice ? (
           <Prompt>{t(invalid ? 'bench.calc.fieldNotNumber' : 'bench.calc.discharge.prompt')}</Prompt>
         ) : !advice.ok ? (
-          <p className="font-semibold">{computedText(advice.error, lang)}</p>
+          <p className="font-semibold">{saidIn(advice.error, lang)}</p>
         ) : (
           <div className="space-y-2 text-ink">
             <p className={`text-xl font-extrabold ${advice.value.safeToTouch ? 'text-navy' : 'text-alert'}`}>

@@ -4,7 +4,7 @@ import { parseOhms } from '../../../../../../shared/calculators/resistors';
 import { TextField } from '../../../../components/ui/field';
 import { attempt, Big, ExampleButton, Examples, ohmsError, ohmsHint, Prompt, Result, Tiles, useFormats } from './ui';
 import { useT } from '../../../../lib/i18n';
-import { computedText } from '../computed';
+import { saidIn } from '../said';
 
 // ——— E-series ———
 
@@ -52,7 +52,7 @@ export function ESeries() {
             </p>
           </>
         ) : (
-          <p className="font-semibold">{computedText(result.error, lang)}</p>
+          <p className="font-semibold">{saidIn(result.error, lang)}</p>
         )}
       </Result>
       <Examples>

@@ -3,7 +3,7 @@ import { cordResistanceLimitOhm, protectiveConductorLimitOhm } from '../../../..
 import { TextField } from '../../../../components/ui/field';
 import { attempt, bad, Big, ExampleButton, Examples, num, Prompt, Result, useFormats } from './ui';
 import { useT } from '../../../../lib/i18n';
-import { computedText } from '../computed';
+import { saidIn } from '../said';
 import { formatNumber } from '../numbers';
 
 // ——— earth limit ———
@@ -51,7 +51,7 @@ export function EarthLimit() {
         {!limit ? (
           <Prompt>{t('bench.calc.earth.prompt')}</Prompt>
         ) : !limit.ok ? (
-          <p className="font-semibold">{computedText(limit.error, lang)}</p>
+          <p className="font-semibold">{saidIn(limit.error, lang)}</p>
         ) : (
           <>
             <Big>{t('bench.calc.earth.atMost', { limit: f(limit.value) })}</Big>

@@ -3,7 +3,7 @@ import { MAINS_MAX_V, MAINS_MIN_V, rectifiedPeak } from '../../../../../../share
 import { TextField } from '../../../../components/ui/field';
 import { attempt, bad, Big, ExampleButton, Examples, num, Prompt, QuickFill, Result, useFormats } from './ui';
 import { useT } from '../../../../lib/i18n';
-import { computedText } from '../computed';
+import { saidIn } from '../said';
 
 // ——— mains peak ———
 
@@ -40,7 +40,7 @@ export function MainsPeak() {
             <p className="mt-1 text-sm">{t('bench.calc.mains.note')}</p>
           </>
         ) : (
-          <p className="font-semibold">{computedText(result.error, lang)}</p>
+          <p className="font-semibold">{saidIn(result.error, lang)}</p>
         )}
       </Result>
       <Examples>

@@ -18,7 +18,7 @@ import {
   useFormats,
 } from './ui';
 import { useT } from '../../../../lib/i18n';
-import { computedText } from '../computed';
+import { saidIn } from '../said';
 
 // ——— measured resistance ———
 
@@ -113,7 +113,7 @@ export function Measure() {
         {!result ? (
           <Prompt>{t(invalid ? 'bench.calc.fieldNotNumber' : 'bench.calc.measure.prompt')}</Prompt>
         ) : !result.ok ? (
-          <p className="font-semibold">{computedText(result.error, lang)}</p>
+          <p className="font-semibold">{saidIn(result.error, lang)}</p>
         ) : (
           <>
             <Big>{t(verdictKey(result.value.verdict))}</Big>
@@ -127,7 +127,7 @@ export function Measure() {
                 })}
               </p>
             )}
-            <p className="mt-1 text-sm">{computedText(result.value.message, lang)}</p>
+            <p className="mt-1 text-sm">{saidIn(result.value.said, lang)}</p>
           </>
         )}
       </Result>

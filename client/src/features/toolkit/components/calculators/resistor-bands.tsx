@@ -14,7 +14,7 @@ import {
 import { SelectField } from '../../../../components/ui/field';
 import { attempt, Big, ExampleButton, Examples, Result, Tiles, useFormats } from './ui';
 import { tr, useT } from '../../../../lib/i18n';
-import { computedText } from '../computed';
+import { saidIn } from '../said';
 import { decimalsIn } from '../numbers';
 
 // ——— resistor colour bands ———
@@ -155,7 +155,7 @@ export function ResistorBands() {
             )}
           </>
         ) : (
-          <p className="font-semibold">{computedText(result.error, lang)}</p>
+          <p className="font-semibold">{saidIn(result.error, lang)}</p>
         )}
       </Result>
       <Examples>

@@ -3,7 +3,7 @@ import { decodePrintedCode } from '../../../../../../shared/calculators/resistor
 import { TextField } from '../../../../components/ui/field';
 import { attempt, Big, ExampleButton, Examples, Prompt, QuickFill, Result, useFormats } from './ui';
 import { useT } from '../../../../lib/i18n';
-import { computedText } from '../computed';
+import { saidIn } from '../said';
 import { decimalsIn } from '../numbers';
 
 // ——— printed codes ———
@@ -43,14 +43,14 @@ export function ResistorCode() {
               </p>
             )}
             {result.value.tolerancePct === null && <p className="text-sm">{t('bench.calc.code.noTolerance')}</p>}
-            {result.value.notes.map((n) => (
-              <p key={n} className="text-sm text-ink-soft">
-                {computedText(n, lang)}
+            {result.value.notesSaid.map((n) => (
+              <p key={n.code} className="text-sm text-ink-soft">
+                {saidIn(n, lang)}
               </p>
             ))}
           </>
         ) : (
-          <p className="font-semibold">{computedText(result.error, lang)}</p>
+          <p className="font-semibold">{saidIn(result.error, lang)}</p>
         )}
       </Result>
       <Examples>

@@ -9,7 +9,7 @@ import {
 import { SelectField, TextField } from '../../../../components/ui/field';
 import { attempt, bad, Big, ExampleButton, Examples, num, Prompt, Result } from './ui';
 import { useLanguage, useT } from '../../../../lib/i18n';
-import { computedText } from '../computed';
+import { saidIn } from '../said';
 
 /** Package names and pin-outs are the datasheets' own, the same in every language. */
 const TO_220 = 'TO-220';
@@ -174,7 +174,7 @@ export function Transistor() {
         {!result ? (
           <Prompt>{t('bench.calc.tr.prompt')}</Prompt>
         ) : !result.ok ? (
-          <p className="font-semibold">{computedText(result.error, lang)}</p>
+          <p className="font-semibold">{saidIn(result.error, lang)}</p>
         ) : (
           <>
             <Big>
@@ -186,21 +186,21 @@ export function Transistor() {
             </Big>
             {result.value.refusals.length > 0 && (
               <ul className="mt-1 list-disc space-y-1 pl-5 font-semibold">
-                {result.value.refusals.map((r) => (
-                  <li key={r}>{computedText(r, lang)}</li>
+                {result.value.said.refusals.map((r, i) => (
+                  <li key={`${r.code}-${i}`}>{saidIn(r, lang)}</li>
                 ))}
               </ul>
             )}
             {result.value.warnings.length > 0 && (
               <ul className="mt-1 list-disc space-y-1 pl-5 text-ink">
-                {result.value.warnings.map((w) => (
-                  <li key={w}>{computedText(w, lang)}</li>
+                {result.value.said.warnings.map((w, i) => (
+                  <li key={`${w.code}-${i}`}>{saidIn(w, lang)}</li>
                 ))}
               </ul>
             )}
             {result.value.passed.length > 0 && (
               <p className="mt-2 text-sm text-ink-soft">
-                {t('bench.calc.tr.passed', { list: result.value.passed.map((x) => computedText(x, lang)).join(' ') })}
+                {t('bench.calc.tr.passed', { list: result.value.said.passed.map((x) => saidIn(x, lang)).join(' ') })}
               </p>
             )}
             <p className="mt-1 text-sm text-ink-soft">{t('bench.calc.tr.note')}</p>

@@ -1,5 +1,6 @@
 import { useId, type ReactNode } from 'react';
 import { parseOhms } from '../../../../../../shared/calculators/resistors';
+import { CalcError, type Said } from '../../../../../../shared/calculators/said';
 import { Button } from '../../../../components/ui/button';
 import { type CalculatorId } from './meta';
 import { tr, useLanguage } from '../../../../lib/i18n';
@@ -7,13 +8,16 @@ import { formatNumber, formatOhmsIn } from '../numbers';
 
 // ——— small pieces shared by the calculators ———
 
-export type Attempt<T> = { ok: true; value: T } | { ok: false; error: string };
-/** The shared calculators throw RangeError with a message meant for the fixer; show it rather than crash. */
+export type Attempt<T> = { ok: true; value: T } | { ok: false; error: Said | string };
+/**
+ * The shared calculators refuse their input with a CalcError, a code and values meant for the fixer (worded by
+ * saidIn); show it rather than crash.
+ */
 export function attempt<T>(fn: () => T): Attempt<T> {
   try {
     return { ok: true, value: fn() };
   } catch (e) {
-    return { ok: false, error: e instanceof Error ? e.message : String(e) };
+    return { ok: false, error: e instanceof CalcError ? e.said : e instanceof Error ? e.message : String(e) };
   }
 }
 
