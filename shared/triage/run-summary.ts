@@ -41,7 +41,7 @@ const storedInput = z.object({
 });
 const storedResult = z.object({
   assignments: z.array(z.object({ itemId: id, volunteerId: id, benchId: id })),
-  unassigned: z.array(z.object({ itemId: id, reason: z.string(), detail: z.string().catch('') }).passthrough()),
+  unassigned: z.array(z.looseObject({ itemId: id, reason: z.string(), detail: z.string().catch('') })),
 });
 
 /**

@@ -1,7 +1,7 @@
-import { eq } from 'drizzle-orm';
+import { desc, eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_PASSWORD } from '../../shared/constants';
-import { events, outbox } from '../../server/src/db/schema/index';
+import { events, outbox, triageRuns } from '../../server/src/db/schema/index';
 import { seedDemo } from '../../server/src/seed/demo';
 import type { RunningServer } from '../../server/src/server';
 import { createTestDatabase, type TestDatabase } from '../support/db';
@@ -54,6 +54,8 @@ describe('the triage board', () => {
     const toy = board.items.find((i: { categoryName: string }) => i.categoryName === 'Electric or battery toy');
     expect(toy.reason).toMatchObject({ reason: 'no-skill' });
     expect(toy.reason.detail).toContain('toys');
+    // The code comes with the values the screen words it with, in the reader's language.
+    expect(toy.reason).toMatchObject({ skill: 'toys', level: 1 });
     for (const i of placed) expect(i.warnings).toEqual([]);
     // Every item that waits gets an estimated start or none, from the day plan.
     expect(
@@ -71,6 +73,27 @@ describe('the triage board', () => {
     expect(stored.summary.waiting.map((w: { reason: string }) => w.reason)).toContain('No fixer with the skill');
     expect((await as.organiser.get(`/api/events/${eventId}/triage-runs/nope`)).status).toBe(400);
     expect((await as.organiser.get(`/api/events/${eventId}/triage-runs/99999`)).status).toBe(404);
+  });
+
+  it('reads a run stored before reasons kept their values: the values are worked out again from its input', async () => {
+    const [latest] = await db.db.select().from(triageRuns).orderBy(desc(triageRuns.id)).limit(1);
+    const result = latest.result as { unassigned: { itemId: string; reason: string; detail: string }[] };
+    const old = {
+      ...result,
+      unassigned: result.unassigned.map(({ itemId, reason, detail }) => ({ itemId, reason, detail })),
+    };
+    await db.db.update(triageRuns).set({ result: old }).where(eq(triageRuns.id, latest.id));
+    const board = (await as.organiser.get(`/api/events/${eventId}/board`)).json;
+    const toy = board.items.find((i: { categoryName: string }) => i.categoryName === 'Electric or battery toy');
+    expect(toy.reason).toMatchObject({
+      reason: 'no-skill',
+      skill: 'toys',
+      level: 1,
+      detail: expect.stringContaining('toys'),
+    });
+    const stored = (await as.organiser.get(`/api/events/${eventId}/triage-runs/${latest.id}`)).json;
+    const waiting = stored.summary.waiting.find((w: { itemId: string }) => w.itemId === String(toy.id));
+    expect(waiting.why).toEqual({ reason: 'no-skill', skill: 'toys', level: 1 });
   });
 
   it('keeps a locked hand-made move when the engine runs again', async () => {

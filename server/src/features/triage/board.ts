@@ -15,7 +15,7 @@ export async function board(ctx: AppContext, eventId: number, lang: Language = D
   const runs = await recentRuns(ctx.database.db, eventId);
   const latest = runs[0]?.result as TriageResult | undefined;
   // A run stored before reasons kept their values has them worked out again from its input.
-  const old = latest?.unassigned.some((u) => !storedWhy(u));
+  const old = (latest?.unassigned ?? []).some((u) => !storedWhy(u));
   const whyOf = storedReasons(old ? (await runRow(ctx.database.db, eventId, runs[0].id))?.input : undefined);
   const reasons = new Map(
     (latest?.unassigned ?? []).flatMap((u) => {
