@@ -205,22 +205,27 @@ describe('triage against an exact integer program (javascript-lp-solver), 1,300 
     });
   }
 
-  it('with seated and free fixers mixed, equals the integer optimum (count, then priorities, then excess) in 1,000 rounds', () => {
-    let rounds = 0;
-    fc.assert(
-      fc.property(instance('mixed'), (input) => {
-        const out = triage(input);
-        checkRules(input, out);
-        const ref = reference(input);
-        // The optimum comes from javascript-lp-solver's branch and bound on the 0/1 program, not from the engine.
-        expect(out.assignments.length).toBe(ref.count);
-        expect(objective(input, out, ref.K1, ref.K2, ref.priorities)).toBe(ref.value());
-        rounds++;
-      }),
-      { numRuns: 1000, seed: 424242 },
-    );
-    expect(rounds).toBe(1000);
-  });
+  // 1,000 rounds, each also solved by the reference solver: about 2 s alone, 7 s on a loaded machine.
+  it(
+    'with seated and free fixers mixed, equals the integer optimum (count, then priorities, then excess) in 1,000 rounds',
+    { timeout: 60_000 },
+    () => {
+      let rounds = 0;
+      fc.assert(
+        fc.property(instance('mixed'), (input) => {
+          const out = triage(input);
+          checkRules(input, out);
+          const ref = reference(input);
+          // The optimum comes from javascript-lp-solver's branch and bound on the 0/1 program, not from the engine.
+          expect(out.assignments.length).toBe(ref.count);
+          expect(objective(input, out, ref.K1, ref.K2, ref.priorities)).toBe(ref.value());
+          rounds++;
+        }),
+        { numRuns: 1000, seed: 424242 },
+      );
+      expect(rounds).toBe(1000);
+    },
+  );
 
   it('is deterministic and ignores the order of its input', () => {
     fc.assert(
