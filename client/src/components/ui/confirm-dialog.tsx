@@ -1,7 +1,8 @@
 import { useEffect, useId, useRef, type ReactNode } from 'react';
 import { Button } from './button';
+import { useT } from '../../lib/i18n';
 
-/** A modal question before anything destructive; Escape or "Keep" cancels. */
+/** A modal question before anything destructive; Escape or the cancel button ("Keep" unless told) cancels. */
 export function ConfirmDialog({
   open,
   title,
@@ -12,7 +13,7 @@ export function ConfirmDialog({
   busy,
   children,
   tone = 'danger',
-  cancelLabel = 'Keep',
+  cancelLabel,
 }: {
   open: boolean;
   title: string;
@@ -25,6 +26,7 @@ export function ConfirmDialog({
   tone?: 'danger' | 'primary';
   cancelLabel?: string;
 }) {
+  const t = useT();
   const ref = useRef<HTMLDialogElement>(null);
   const id = useId();
   useEffect(() => {
@@ -58,7 +60,7 @@ export function ConfirmDialog({
         {children}
         <div className="flex justify-end gap-2 pt-2">
           <Button data-keep variant="secondary" onClick={onCancel}>
-            {cancelLabel}
+            {cancelLabel ?? t('common.keep')}
           </Button>
           <Button variant={tone} onClick={onConfirm} busy={busy}>
             {confirmLabel}

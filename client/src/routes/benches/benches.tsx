@@ -9,6 +9,7 @@ import { BenchLayoutEditor } from '../../features/benches/components/bench-layou
 import { eventQuery } from '../../features/events/api/get-event';
 import { useRefreshBoard } from '../../features/triage/api/get-board';
 import { queryClient } from '../../lib/query-client';
+import { useLanguage, useT } from '../../lib/i18n';
 
 /** The page reads what the loader fetched; a failure to fetch it is the route's error, shown in the page frame. */
 export const loader = ({ params }: LoaderFunctionArgs) => {
@@ -21,6 +22,8 @@ export const loader = ({ params }: LoaderFunctionArgs) => {
 
 /** This session's benches, copied from the venue's usual layout the first time; changes stay with the session. */
 export function BenchesPage() {
+  const t = useT();
+  const lang = useLanguage();
   const id = Number(useParams().eventId);
   const { data: event } = useSuspenseQuery(eventQuery(id));
   const { data: benches } = useEventBenches(id);
@@ -28,9 +31,12 @@ export function BenchesPage() {
   return (
     <div>
       <SessionHeading
-        back={{ to: paths.groupEvents(event.groupId), label: `${event.groupName}: all sessions` }}
+        back={{ to: paths.groupEvents(event.groupId), label: t('organise.allSessions', { group: event.groupName }) }}
         title={event.title}
-        when={`Benches · ${formatDay(event.startsAt, event.timeZone)} · ${formatTimeRange(event.startsAt, event.endsAt, event.timeZone)}`}
+        when={t('organise.benches.when', {
+          day: formatDay(event.startsAt, event.timeZone, lang),
+          time: formatTimeRange(event.startsAt, event.endsAt, event.timeZone, lang),
+        })}
       />
       <EventTabs eventId={id} />
       <BenchLayoutEditor eventId={id} saved={benches} venue={event.venue} onChanged={refreshBoard} />

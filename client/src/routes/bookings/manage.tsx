@@ -1,6 +1,5 @@
 import { useState } from 'react';
 import { slotBookability } from '../../../../shared/booking/bookability';
-import { OUTCOME_LABELS } from '../../../../shared/event-day/constants';
 import { StatusChip } from '../../features/event-day/components/status-chip';
 import { Link, useLocation, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { formatDay, formatTime, formatTimeRange } from '../../../../shared/format';
@@ -165,7 +164,7 @@ export function ManageBookingPage() {
                 <p className="my-1 flex items-center gap-2 text-sm">
                   <StatusChip status={i.status} />
                   {i.queueNumber !== null && <span>{t('booking.manage.queueNumber', { number: i.queueNumber })}</span>}
-                  {i.outcome && <b>{OUTCOME_LABELS[i.outcome]}</b>}
+                  {i.outcome && <b>{t(`booking.outcome.${i.outcome}`)}</b>}
                 </p>
               )}
               <p className="text-ink-soft">{i.fault}</p>
