@@ -19,6 +19,11 @@ export const FACTOR_SOURCE =
 
 /** The displacement factor shipped until an admin sets another: an assumption, not a sourced figure. */
 export const DEFAULT_DISPLACEMENT = 0.5;
+/**
+ * The English of the method's displacement note and its source; the API says them in the reader's language from
+ * figures.method.displacementNote and figures.method.displacementSource (tests/unit/method-words.test.ts keeps them
+ * the same).
+ */
 export const DISPLACEMENT_NOTE =
   'The share of repairs that really save a new purchase. Mendery ships 0.5 as its assumption (half of the repaired items would otherwise have been replaced), and the network’s admins set the value in use. It is an estimate: nobody can count the purchases that did not happen.';
 /** Where the idea comes from; shown in the dashboard's method section only, with its mark. */

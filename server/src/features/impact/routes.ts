@@ -84,7 +84,7 @@ export function impactRoutes(ctx: AppContext) {
   r.get('/stats/records', guard, async (req, res) => {
     const q = query(req, recordsQuery);
     assertDateRange(q.from, q.to);
-    res.json(await records(ctx, q));
+    res.json(await records(ctx, q, languageOf(req, res.locals)));
   });
   r.get('/stats/method', async (req, res) => {
     res.vary('Accept-Language');

@@ -1,4 +1,3 @@
-import { BARRIER_LABELS, OUTCOME_LABELS } from '../../../../shared/event-day/constants';
 import type {
   EventReport,
   Method,
@@ -120,18 +119,23 @@ export async function method(ctx: AppContext, lang: Language): Promise<Method> {
 }
 
 /** The records behind a figure, newest first, 50 a page. */
-export async function records(ctx: AppContext, f: RecordsFilter & { page?: number }): Promise<RecordsPage> {
+export async function records(
+  ctx: AppContext,
+  f: RecordsFilter & { page?: number },
+  lang: Language,
+): Promise<RecordsPage> {
   const page = Math.max(1, f.page ?? 1);
   const rows = await recordRows(ctx.database.db, f, page);
   return {
     total: Number(rows[0]?.total ?? 0),
     page,
-    records: rows.map(({ total: _t, visitorName, avgWeightKg, ...r }) => ({
+    records: rows.map(({ total: _t, visitorName, avgWeightKg, categorySlug, ...r }) => ({
       ...r,
+      categoryName: categoryText(lang, categorySlug, 'name', r.categoryName),
       visitor: shortName(visitorName),
       kg: r.weighedKg ?? avgWeightKg,
-      outcomeLabel: r.outcome ? OUTCOME_LABELS[r.outcome] : 'Not recorded',
-      barrierLabel: r.barrier ? BARRIER_LABELS[r.barrier] : null,
+      outcomeLabel: translate(lang, r.outcome ? `fixer.outcomeValue.${r.outcome}` : 'figures.records.notRecorded'),
+      barrierLabel: r.barrier ? translate(lang, `fixer.barrier.${r.barrier}`) : null,
     })),
   };
 }

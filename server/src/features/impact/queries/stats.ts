@@ -159,6 +159,7 @@ export async function recordRows(db: DbOrTx, f: RecordsFilter, page: number) {
       eventTitle: events.title,
       eventStartsAt: events.startsAt,
       groupName: repairGroups.name,
+      categorySlug: categories.slug,
       categoryName: categories.name,
       avgWeightKg: categories.avgWeightKg,
       brand: bookingItems.brand,
