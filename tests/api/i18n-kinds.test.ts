@@ -69,4 +69,26 @@ describe('kinds of item in the reader’s language', () => {
     }
     expect(differing).toBeGreaterThan(0);
   });
+
+  it('names the follow-ups and the similar past repairs in German, as the German catalog names each kind', async () => {
+    const de = JSON.parse(readFileSync('locales/de/categories.json', 'utf8')) as Record<string, string>;
+    const german = new Set(Object.values(de));
+    const [t] = await app.db.db.select().from(events).where(eq(events.id, today));
+    const follow = await as.organiser.raw('GET', `/api/groups/${t.groupId}/follow-ups`, {
+      headers: { 'accept-language': 'de' },
+    });
+    expect(follow.status).toBe(200);
+    expect(follow.json.length).toBeGreaterThan(0);
+    // An item reads "<kind> — <brand model>" or just the kind; each kind is a German catalog name.
+    for (const f of follow.json as { item: string }[]) expect(german).toContain(f.item.split(' — ')[0]);
+    const queue = (await as.fixer.raw('GET', '/api/me/queue', { headers: { 'accept-language': 'de' } })).json as {
+      itemId: number;
+    }[];
+    expect(queue.length).toBeGreaterThan(0);
+    const similar = await as.fixer.raw('GET', `/api/items/${queue[0].itemId}/similar`, {
+      headers: { 'accept-language': 'de' },
+    });
+    expect(similar.status).toBe(200);
+    for (const e of similar.json as { categoryName: string }[]) expect(german).toContain(e.categoryName);
+  });
 });

@@ -91,7 +91,7 @@ export function bookingRoutes(ctx: AppContext) {
   r.get('/bookings/:reference', async (req, res) => {
     const b = await byToken(req);
     res.setHeader('Cache-Control', 'no-store');
-    res.json(await booking.bookingView(ctx, b.id));
+    res.json(await booking.bookingView(ctx, b.id, languageOf(req, res.locals)));
   });
 
   /** The booked slot for the visitor's calendar: a signed address from the booking page, or the manage token. */
@@ -115,7 +115,7 @@ export function bookingRoutes(ctx: AppContext) {
   r.post('/bookings/:reference/move', async (req, res) => {
     const b = await byToken(req);
     await booking.moveBooking(ctx, b.id, body(req, moveBookingSchema).slotId, manageToken(req)!);
-    res.json(await booking.bookingView(ctx, b.id));
+    res.json(await booking.bookingView(ctx, b.id, languageOf(req, res.locals)));
   });
 
   r.post(

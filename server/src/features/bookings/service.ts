@@ -29,6 +29,7 @@ import {
   type BookingInput,
   type BookingResult,
 } from './write';
+import { categoryText } from '../../i18n';
 
 export type { BookingInput, BookingResult } from './write';
 
@@ -178,15 +179,17 @@ export async function bookingCodeStatus(ctx: AppContext, reference: string): Pro
   return { reference: b.reference, status: b.status };
 }
 
-export async function bookingView(ctx: AppContext, bookingId: number) {
+export async function bookingView(ctx: AppContext, bookingId: number, lang: Language = DEFAULT_LANGUAGE) {
   const { db } = ctx.database;
   const row = await bookingWithContextById(db, bookingId);
   const b = row.booking;
   // The page loads photos and the calendar file as plain links: short-lived signed addresses, never the token.
   const key = signingKey(ctx.env.SESSION_SECRET);
   const now = Date.now();
-  const items = (await bookingItemsWithPhotos(db, bookingId)).map((i) => ({
+  const items = (await bookingItemsWithPhotos(db, bookingId)).map(({ categorySlug, ...i }) => ({
     ...i,
+    // A seeded kind of item in the reader's language; a group's own wording as typed.
+    categoryName: categoryText(lang, categorySlug, 'name', i.categoryName),
     photos: i.photos.map((p) => ({ ...p, url: signPath(key, `/api/photos/${p.id}`, now) })),
   }));
   return {

@@ -14,7 +14,7 @@ import type { DbOrTx, Tx } from '../../db/client';
 import { HttpError, notFound } from '../../http/errors';
 import { enqueueMail } from '../../mail/outbox';
 import { categoryText, translate } from '../../i18n';
-import { asLanguage } from '../../../../shared/i18n/languages';
+import { asLanguage, type Language } from '../../../../shared/i18n/languages';
 import { composeMail } from '../../mail/templates';
 import type { ItemRow } from '../../core/items';
 import { rebookUrl } from '../../core/links';
@@ -126,7 +126,7 @@ export async function markCameBack(tx: DbOrTx, itemIds: number[]) {
 }
 
 /** The organisers' list: every item of the group waiting for a part, oldest first, with what happened since. */
-export async function listFollowUps(ctx: AppContext, groupId: number): Promise<FollowUp[]> {
+export async function listFollowUps(ctx: AppContext, groupId: number, lang: Language = 'en'): Promise<FollowUp[]> {
   const [rows, group] = await Promise.all([
     followUpRows(ctx.database.db, groupId),
     groupById(ctx.database.db, groupId),
@@ -143,7 +143,7 @@ export async function listFollowUps(ctx: AppContext, groupId: number): Promise<F
     note: r.f.note,
     ageDays: Math.floor((now.getTime() - r.f.createdAt.getTime()) / 86400_000),
     reminderDue: reminderDue({ status: r.f.status, createdAt: r.f.createdAt, remindedAt: r.f.remindedAt }, now),
-    item: itemLabel(r),
+    item: itemLabel({ ...r, categoryName: categoryText(lang, r.categorySlug, 'name', r.categoryName) }),
     part: r.part,
     partLink: r.partLink,
     partCost: r.partCostCents === null ? null : r.partCostCents / 100,

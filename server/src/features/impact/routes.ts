@@ -145,7 +145,7 @@ export function impactRoutes(ctx: AppContext) {
   r.get(
     '/groups/:groupId/follow-ups',
     requireGroupRole(['organiser'], (req) => paramId(req, 'groupId')),
-    async (req, res) => res.json(await listFollowUps(ctx, paramId(req, 'groupId'))),
+    async (req, res) => res.json(await listFollowUps(ctx, paramId(req, 'groupId'), languageOf(req, res.locals))),
   );
   r.patch(
     '/follow-ups/:itemId',

@@ -1,3 +1,4 @@
+import { languageOf } from '../../i18n';
 import { Router, type NextFunction, type Request, type Response } from 'express';
 import { z } from 'zod';
 import { PART_TYPES } from '../../../../shared/salvage/constants';
@@ -49,15 +50,18 @@ export function toolkitRoutes(ctx: AppContext) {
   const partOf = (req: Request) => partGroup(ctx, paramId(req, 'id'));
 
   r.get('/knowledge', volunteer, async (req, res) =>
-    res.json(await searchKnowledge(ctx, req.user!, query(req, knowledgeQuery))),
+    res.json(await searchKnowledge(ctx, req.user!, query(req, knowledgeQuery), languageOf(req, res.locals))),
   );
   r.put('/knowledge/:id/writeup', volunteer, async (req, res) =>
-    res.json(await writeUp(ctx, params(req, idParam).id, body(req, writeupSchema), req.user!)),
+    res.json(
+      await writeUp(ctx, params(req, idParam).id, body(req, writeupSchema), req.user!, languageOf(req, res.locals)),
+    ),
   );
   r.get(
     '/items/:id/similar',
     requireGroupRole(['fixer', 'host', 'organiser'], (req) => itemGroupId(db, paramId(req, 'id'))),
-    async (req, res) => res.json(await similarRepairs(ctx, params(req, idParam).id, req.user!)),
+    async (req, res) =>
+      res.json(await similarRepairs(ctx, params(req, idParam).id, req.user!, languageOf(req, res.locals))),
   );
   r.get('/groups/:groupId/knowledge-sharing', requireGroupRole(['organiser'], groupOf), async (req, res) =>
     res.json(await getSharing(ctx, groupOf(req))),

@@ -44,6 +44,8 @@ import {
   updatePartRow,
   type PartRow,
 } from './queries/salvage';
+import { categoryText } from '../../i18n';
+import { DEFAULT_LANGUAGE, type Language } from '../../../../shared/i18n/languages';
 
 /* Repair notes: kept in step with outcomes, searched, written up; and the group's salvage stock. */
 
@@ -74,17 +76,17 @@ const readerOf = (user: SessionUser): Reader => ({ admin: user.admin, groupIds: 
 
 /** Readers outside the note's group get it without the visitor's name, address or number (finding 8). */
 const entryFor =
-  (user: SessionUser) =>
+  (user: SessionUser, lang: Language) =>
   (r: EntryRow): Omit<KnowledgeEntry, 'photoIds'> => {
-    const dto = entryDto(r);
+    const dto = entryDto(r, lang);
     return user.roles.some((g) => g.groupId === r.e.groupId) ? dto : scrubSharedNote(dto, r.visitorName);
   };
 
-const entryDto = (r: EntryRow): Omit<KnowledgeEntry, 'photoIds'> => ({
+const entryDto = (r: EntryRow, lang: Language): Omit<KnowledgeEntry, 'photoIds'> => ({
   itemId: r.e.itemId,
   groupName: r.groupName,
   categoryId: r.e.categoryId,
-  categoryName: r.categoryName,
+  categoryName: categoryText(lang, r.categorySlug, 'name', r.categoryName),
   brand: r.e.brand,
   model: r.e.model,
   outcome: r.e.outcome,
@@ -116,18 +118,24 @@ export async function searchKnowledge(
   ctx: AppContext,
   user: SessionUser,
   q: z.output<typeof knowledgeQuery>,
+  lang: Language = DEFAULT_LANGUAGE,
 ): Promise<KnowledgeEntry[]> {
   const { db } = ctx.database;
   const rows = await searchEntries(db, readerOf(user), q);
-  return withPhotos(db, rows.map(entryFor(user)));
+  return withPhotos(db, rows.map(entryFor(user, lang)));
 }
 
 /** Similar past repairs for an item: same kind first, then the same brand and model, then the fault's words. */
-export async function similarRepairs(ctx: AppContext, itemId: number, user: SessionUser): Promise<KnowledgeEntry[]> {
+export async function similarRepairs(
+  ctx: AppContext,
+  itemId: number,
+  user: SessionUser,
+  lang: Language = DEFAULT_LANGUAGE,
+): Promise<KnowledgeEntry[]> {
   const { db } = ctx.database;
   const { item } = await loadItem(db, itemId);
   const rows = await similarEntries(db, readerOf(user), item);
-  return withPhotos(db, rows.map(entryFor(user)));
+  return withPhotos(db, rows.map(entryFor(user, lang)));
 }
 
 /** A fixer's short write-up of a repair: symptom, what was measured, the faulty part, the fix. */
@@ -136,6 +144,7 @@ export async function writeUp(
   itemId: number,
   w: z.output<typeof writeupSchema>,
   user: SessionUser,
+  lang: Language = DEFAULT_LANGUAGE,
 ): Promise<KnowledgeEntry> {
   const { db } = ctx.database;
   const e = await findEntry(db, itemId);
@@ -145,7 +154,7 @@ export async function writeUp(
   await updateEntry(db, itemId, { ...w, writtenUp: true, authorId: user.id, updatedAt: new Date() });
   const row = await entryRow(db, itemId);
   if (!row) throw notFound('That repair record');
-  return (await withPhotos(db, [entryDto(row)]))[0];
+  return (await withPhotos(db, [entryDto(row, lang)]))[0];
 }
 
 export async function getSharing(ctx: AppContext, groupId: number): Promise<KnowledgeSharing> {

@@ -60,6 +60,7 @@ export async function bookingItemsWithPhotos(db: DbOrTx, bookingId: number) {
       id: bookingItems.id,
       categoryId: bookingItems.categoryId,
       categoryName: categories.name,
+      categorySlug: categories.slug,
       skill: categories.skill,
       brand: bookingItems.brand,
       model: bookingItems.model,

@@ -72,6 +72,7 @@ export function followUpRows(db: DbOrTx, groupId: number) {
     .select({
       f: followUps,
       categoryName: categories.name,
+      categorySlug: categories.slug,
       brand: bookingItems.brand,
       model: bookingItems.model,
       visitorName: bookings.visitorName,

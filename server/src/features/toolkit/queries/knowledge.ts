@@ -49,6 +49,7 @@ function select(db: DbOrTx, score: SQL<number>) {
     .select({
       e: knowledgeEntries,
       categoryName: categories.name,
+      categorySlug: categories.slug,
       groupName: repairGroups.name,
       // Only to take the visitor's name out of the note for readers outside the group; never sent.
       visitorName: bookings.visitorName,
