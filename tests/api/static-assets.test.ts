@@ -121,6 +121,21 @@ describe('Static files for a phone on mobile data', () => {
     expect(preloads(list).some((u) => u.includes('/index-'))).toBe(false);
     expect(await head('/admin')).toBe(readFileSync(path.join(dist, 'index.html'), 'utf8'));
     expect(fetches(await head('/events/abc'))).toEqual([]);
+
+    // A visitor who chose German on a browser that asks for English: the page is German, and the reads that hold
+    // words are not started early (they would come back in English and be used as they are).
+    const chosen = async (url: string, headers: Record<string, string>) =>
+      (await get(url, { 'accept-encoding': 'identity', 'accept-language': 'en-GB', ...headers })).body.toString('utf8');
+    const german = await chosen('/events/12/book', { cookie: 'other=1; mendery.language=de' });
+    expect(german).toMatch(/<html lang="de">/);
+    expect(fetches(german)).toEqual(['/api/auth/me']);
+    expect(preloads(german)).toContain(`/${manifest['src/routes/events/book.tsx'].file}`);
+    expect(fetches(await chosen('/events/12/book', { cookie: 'mendery.language=en' }))).toHaveLength(3);
+    const asked = await chosen('/impact', { cookie: 'mendery.language=en' });
+    expect(fetches(asked)).toContain('/api/public/impact');
+    const french = await chosen('/impact?lang=fr', {});
+    expect(french).toMatch(/<html lang="fr">/);
+    expect(fetches(french)).toEqual(['/api/auth/me']);
   });
 
   it('lets browsers keep hashed files for a year and makes them revalidate every page', async () => {

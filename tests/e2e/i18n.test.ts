@@ -79,6 +79,9 @@ describe('the public pages in the visitor’s language', () => {
     await page.getByRole('heading', { name: 'Ateliers de réparation', level: 1 }).waitFor();
     expect(await page.getAttribute('html', 'lang')).toBe('fr');
     expect(await page.getByLabel('Langue').inputValue()).toBe('fr');
+    // After the reload too: the page's early reads (asked for in the browser's English) are not used for French.
+    await page.locator('option', { hasText: 'Bouilloire' }).waitFor({ state: 'attached' });
+    expect(await page.locator('option', { hasText: 'Kettle' }).count()).toBe(0);
     await context.close();
   });
 

@@ -28,10 +28,20 @@ export const currentLanguage = (): Language => formats;
 
 function storedLanguage(): string | null {
   try {
-    return localStorage.getItem(STORAGE_KEY);
+    const stored = localStorage.getItem(STORAGE_KEY);
+    if (stored) tellServer(stored);
+    return stored;
   } catch {
     return null;
   }
+}
+
+/**
+ * The choice as a cookie too, read only by the server's page for a public landing: it then knows the page's language
+ * before any script runs, and leaves out early API reads that would come back in the browser's language instead.
+ */
+function tellServer(lang: string) {
+  document.cookie = `${STORAGE_KEY}=${encodeURIComponent(lang)}; path=/; max-age=31536000; samesite=lax`;
 }
 
 /** True while the language is English only because nothing told us better (see followGroupLanguage). */
@@ -117,6 +127,7 @@ export async function chooseLanguage(lang: Language): Promise<void> {
   guessed = false;
   try {
     localStorage.setItem(STORAGE_KEY, lang);
+    tellServer(lang);
   } catch {
     // A browser that keeps nothing still switches for this visit.
   }

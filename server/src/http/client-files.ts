@@ -4,7 +4,7 @@ import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { brotliCompressSync, constants, gzipSync } from 'node:zlib';
 import { notFound } from './errors';
-import { hintTags, pageHints, type Manifest } from './page-hints';
+import { chosenLanguageCookie, hintTags, pageHints, wordless, type Manifest } from './page-hints';
 import { acceptLanguageTags, pickLanguage } from '../../../shared/i18n/languages';
 
 /** The build holds each text file also as .br and .gz; brotli goes out when the browser takes it, else gzip. */
@@ -59,21 +59,25 @@ export function clientFiles(dist: string): express.Router {
       return unhashed(req, res, next);
     }
     // A public landing page: index.html that also names its screen's chunks and API reads, compressed on the way.
-    // The page starts in the language it will most likely show (the browser's own choice, kept on the device, may
-    // still change it): ?lang= first, then Accept-Language.
+    // The page starts in the language it will show: ?lang= first, then the choice kept on the device (its cookie),
+    // then Accept-Language.
     const query = new URLSearchParams(req.url.split('?')[1] ?? '').get('lang');
-    const lang = pickLanguage([query, ...acceptLanguageTags(req.get('accept-language'))]);
+    const browser = acceptLanguageTags(req.get('accept-language'));
+    const lang = pickLanguage([query, chosenLanguageCookie(req.get('cookie')), ...browser]);
+    // An early read goes out with the browser's Accept-Language and the app takes its answer as it is: when the page
+    // will show another language, only the reads that hold no words are worth starting early.
+    const early = lang === pickLanguage(browser) ? hints : { ...hints, fetches: hints.fetches.filter(wordless) };
     const html = Buffer.from(
       build.html
         .replace('<html lang="en">', `<html lang="${lang}">`)
-        .replace('</head>', `  ${hintTags(build.manifest, hints)}\n  </head>`),
+        .replace('</head>', `  ${hintTags(build.manifest, early)}\n  </head>`),
     );
     // Brotli first when the browser takes both (as the static files do).
     const encoding = req.acceptsEncodings('br') ? 'br' : req.acceptsEncodings('gzip');
     res.set({
       'Content-Type': 'text/html; charset=utf-8',
       'Cache-Control': 'no-cache',
-      Vary: 'Accept-Encoding, Accept-Language',
+      Vary: 'Accept-Encoding, Accept-Language, Cookie',
     });
     if (encoding === 'br') {
       res.set('Content-Encoding', 'br');

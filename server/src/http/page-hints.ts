@@ -40,6 +40,20 @@ export function pageHints(pathname: string, search: URLSearchParams, now: number
   return null;
 }
 
+/** API reads whose answer is the same in every language (who is signed in), so worth starting whatever the page's. */
+export const wordless = (url: string) => url === '/api/auth/me';
+
+/** The language a visitor chose on this device, from the cookie the client keeps beside its own storage. */
+export function chosenLanguageCookie(header: string | undefined): string | null {
+  const m = /(?:^|;\s*)mendery\.language=([^;]*)/.exec(header ?? '');
+  if (!m) return null;
+  try {
+    return decodeURIComponent(m[1]);
+  } catch {
+    return null;
+  }
+}
+
 /** The chunks a browser must fetch before `keys` run: the keys and everything they import statically. */
 export function staticClosure(manifest: Manifest, keys: string[]): string[] {
   const seen = new Set<string>();
