@@ -73,13 +73,13 @@ describe('validation answers in the request’s language', () => {
     expect(e.fields['items.0.fault']).toBe('Décrivez en quelques mots ce qui ne va pas.');
   });
 
-  it('answers in English for a language it does not speak, and keeps messages not in the catalogs as they are', async () => {
+  it('answers in English for a language it does not speak, and names an unknown route in the language asked for', async () => {
     const e = await refusedIn('pt-BR');
     expect(e.fields['visitor.name']).toBe('Enter your name.');
     const agent = new Agent(server.url, { 'accept-language': 'de' });
     const missing = await agent.get('/api/no-such-route');
     expect(missing.status).toBe(404);
-    expect(missing.json.error.message).toMatch(/No API route/);
+    expect(missing.json.error.message).toBe('Keine API-Route GET /no-such-route.');
   });
 
   it('an e-mail address the shared rule refuses reads in the language (fresh-link form)', async () => {
