@@ -18,7 +18,7 @@ export const newPassword = z
 
 export const loginSchema = z.object({
   email,
-  password: z.string({ error: 'Enter your password.' }).min(1, 'Enter your password.').max(128),
+  password: z.string({ error: 'validation.password.enter' }).min(1, 'validation.password.enter').max(128),
 });
 export type LoginInput = z.infer<typeof loginSchema>;
 
@@ -30,18 +30,22 @@ export const signupSchema = z.object({
     .max(120, 'validation.name.tooLong'),
   email,
   password: newPassword,
-  groupId: z.coerce.number({ error: 'Choose a group.' }).int().positive('Choose a group.'),
-  role: z.enum(['fixer', 'host'], { error: 'Choose how you would like to help.' }),
+  groupId: z.coerce.number({ error: 'validation.group.required' }).int().positive('validation.group.required'),
+  role: z.enum(['fixer', 'host'], { error: 'validation.role.help' }),
 });
 export type SignupInput = z.infer<typeof signupSchema>;
 
-export const tokenSchema = z.object({ token: z.string().min(20, 'The link is incomplete.').max(200) });
+export const tokenSchema = z.object({ token: z.string().min(20, 'validation.link.incomplete').max(200) });
 
 export const resetRequestSchema = z.object({ email });
 
 export const resetConfirmSchema = z
-  .object({ token: z.string().min(20, 'The link is incomplete.').max(200), password: newPassword, confirm: z.string() })
-  .refine((v) => v.password === v.confirm, { path: ['confirm'], message: 'The two passwords differ.' });
+  .object({
+    token: z.string().min(20, 'validation.link.incomplete').max(200),
+    password: newPassword,
+    confirm: z.string(),
+  })
+  .refine((v) => v.password === v.confirm, { path: ['confirm'], message: 'validation.password.differ' });
 
 export const firstAdminSchema = z
   .object({
@@ -50,42 +54,39 @@ export const firstAdminSchema = z
     password: newPassword,
     confirm: z.string(),
     setupCode: z
-      .string({ error: 'Enter the setup code from the server’s console.' })
+      .string({ error: 'validation.setupCode.required' })
       .trim()
-      .min(1, 'Enter the setup code from the server’s console.')
+      .min(1, 'validation.setupCode.required')
       .max(200),
   })
-  .refine((v) => v.password === v.confirm, { path: ['confirm'], message: 'The two passwords differ.' });
+  .refine((v) => v.password === v.confirm, { path: ['confirm'], message: 'validation.password.differ' });
 export type FirstAdminInput = z.infer<typeof firstAdminSchema>;
 
 /** A signed-in person changes their own password: the current one proves it is them. */
 export const changePasswordSchema = z
   .object({
-    currentPassword: z
-      .string({ error: 'Enter your current password.' })
-      .min(1, 'Enter your current password.')
-      .max(128),
+    currentPassword: z.string({ error: 'validation.password.current' }).min(1, 'validation.password.current').max(128),
     password: newPassword,
-    confirm: z.string({ error: 'Type the new password again.' }).max(128),
+    confirm: z.string({ error: 'validation.password.again' }).max(128),
   })
-  .refine((v) => v.password === v.confirm, { path: ['confirm'], message: 'The two passwords differ.' });
+  .refine((v) => v.password === v.confirm, { path: ['confirm'], message: 'validation.password.differ' });
 export type ChangePasswordInput = z.infer<typeof changePasswordSchema>;
 
 /** A code from an authenticator app: 6 digits; spaces (as some apps show them) are dropped. */
 export const totpCode = z
-  .string({ error: 'Enter the 6 digits your app shows.' })
-  .max(20, 'Enter the 6 digits your app shows.')
+  .string({ error: 'validation.totp.digits' })
+  .max(20, 'validation.totp.digits')
   .transform((v) => v.replace(/\s+/g, ''))
-  .pipe(z.string().regex(/^\d{6}$/, 'Enter the 6 digits your app shows.'));
+  .pipe(z.string().regex(/^\d{6}$/, 'validation.totp.digits'));
 export const totpCodeSchema = z.object({ code: totpCode });
 export const turnOffTwoFactorSchema = z.object({
-  password: z.string({ error: 'Enter your password.' }).min(1, 'Enter your password.').max(128),
+  password: z.string({ error: 'validation.password.enter' }).min(1, 'validation.password.enter').max(128),
   code: totpCode,
 });
 
 export const groupSchema = z.object({
-  name: z.string().trim().min(2, 'Give the group a name.').max(120),
-  town: z.string().trim().min(1, 'Enter the town.').max(120),
+  name: z.string().trim().min(2, 'validation.group.name').max(120),
+  town: z.string().trim().min(1, 'validation.town.required').max(120),
   description: z.string().trim().max(2000).default(''),
 });
 
@@ -104,7 +105,7 @@ export const accountLanguageSchema = z.object({
   language: z.enum(LANGUAGES, { error: 'validation.language.unknown' }),
 });
 
-export const inviteSchema = z.object({ email, role: z.enum(GROUP_ROLES, { error: 'Choose a role.' }) });
+export const inviteSchema = z.object({ email, role: z.enum(GROUP_ROLES, { error: 'validation.role.required' }) });
 export const inviteSignupSchema = z.object({
   name: z.string().trim().min(1, 'validation.name.required').max(120),
   password: newPassword,
@@ -112,5 +113,5 @@ export const inviteSignupSchema = z.object({
 
 /** An admin merges a group made by a network import into the group its records belong to. */
 export const mergeGroupSchema = z.object({
-  into: z.coerce.number({ error: 'Choose a group.' }).int().positive('Choose a group.'),
+  into: z.coerce.number({ error: 'validation.group.required' }).int().positive('validation.group.required'),
 });

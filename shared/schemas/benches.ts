@@ -6,11 +6,11 @@ export const benchesSchema = z
   .array(
     z.object({
       id: z.number().int().positive().optional(),
-      name: z.string().trim().min(1, 'Name the bench.').max(80),
-      seats: z.number().int('Use a whole number.').min(1, 'A bench has at least one seat.').max(20),
+      name: z.string().trim().min(1, 'validation.bench.name').max(80),
+      seats: z.number().int('validation.number.whole').min(1, 'validation.bench.seats').max(20),
       equipment: z.array(z.enum(EQUIPMENT)).max(EQUIPMENT.length),
     }),
   )
-  .max(60, 'At most 60 benches.');
+  .max(60, 'validation.bench.tooMany');
 export const layoutSchema = z.object({ benches: benchesSchema });
 export type BenchesInput = z.input<typeof benchesSchema>;

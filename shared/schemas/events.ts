@@ -5,31 +5,26 @@ import { SKILLS } from '../constants';
 import { isKnownCurrency } from '../format';
 import { isKnownCountry } from '../places/countries';
 
-const isoInstant = (label: string) =>
-  z.iso.datetime({ offset: true, error: `${label} must be a date and time (ISO 8601).` }).transform((s) => new Date(s));
+const isoInstant = (error: string) => z.iso.datetime({ offset: true, error }).transform((s) => new Date(s));
 
 export const skillLimitsSchema = z
-  .partialRecord(z.enum(SKILLS), z.number().int().min(0, 'A limit cannot be negative.').max(500))
+  .partialRecord(z.enum(SKILLS), z.number().int().min(0, 'validation.skillLimit.negative').max(500))
   .default({});
 
 const eventFields = {
-  title: z
-    .string({ error: 'Give the event a title.' })
-    .trim()
-    .min(3, 'Give the event a title of at least 3 characters.')
-    .max(160),
-  venueId: z.coerce.number({ error: 'Choose a venue.' }).int().positive('Choose a venue.'),
-  startsAt: isoInstant('The start'),
-  endsAt: isoInstant('The end'),
+  title: z.string({ error: 'validation.event.title' }).trim().min(3, 'validation.event.titleShort').max(160),
+  venueId: z.coerce.number({ error: 'validation.venue.required' }).int().positive('validation.venue.required'),
+  startsAt: isoInstant('validation.event.startFormat'),
+  endsAt: isoInstant('validation.event.endFormat'),
   slotMinutes: z.coerce
-    .number({ error: 'Enter the slot length in minutes.' })
-    .int('Use whole minutes.')
-    .min(5, 'Slots must be at least 5 minutes long.')
-    .max(240, 'Slots can be at most 4 hours long.'),
+    .number({ error: 'validation.slot.minutes' })
+    .int('validation.slot.wholeMinutes')
+    .min(5, 'validation.slot.tooShort')
+    .max(240, 'validation.slot.tooLong'),
   slotCapacity: z.coerce
-    .number({ error: 'Enter how many items can start per slot.' })
-    .int('Use a whole number.')
-    .min(0, 'Capacity cannot be negative.')
+    .number({ error: 'validation.slot.capacity' })
+    .int('validation.number.whole')
+    .min(0, 'validation.capacity.negative')
     .max(200),
   skillLimits: skillLimitsSchema,
   description: z.string().trim().max(4000).default(''),
@@ -43,19 +38,19 @@ const sameDayish = (v: { startsAt?: unknown; endsAt?: unknown }) =>
   !isDate(v.startsAt) || !isDate(v.endsAt) || v.endsAt.getTime() - v.startsAt.getTime() <= 16 * 3600_000;
 
 export const createEventSchema = z
-  .object({ groupId: z.coerce.number({ error: 'Choose a group.' }).int().positive(), ...eventFields })
-  .refine(endAfterStart, { path: ['endsAt'], message: 'The event must end after it starts.' })
-  .refine(sameDayish, { path: ['endsAt'], message: 'An event lasts at most 16 hours.' });
+  .object({ groupId: z.coerce.number({ error: 'validation.group.required' }).int().positive(), ...eventFields })
+  .refine(endAfterStart, { path: ['endsAt'], message: 'validation.event.endAfterStart' })
+  .refine(sameDayish, { path: ['endsAt'], message: 'validation.event.tooLong' });
 export type CreateEventInput = z.input<typeof createEventSchema>;
 
 export const updateEventSchema = z
   .object(eventFields)
   .partial()
-  .refine(endAfterStart, { path: ['endsAt'], message: 'The event must end after it starts.' })
-  .refine(sameDayish, { path: ['endsAt'], message: 'An event lasts at most 16 hours.' });
+  .refine(endAfterStart, { path: ['endsAt'], message: 'validation.event.endAfterStart' })
+  .refine(sameDayish, { path: ['endsAt'], message: 'validation.event.tooLong' });
 
 export const slotUpdateSchema = z.object({
-  capacity: z.coerce.number().int('Use a whole number.').min(0, 'Capacity cannot be negative.').max(200),
+  capacity: z.coerce.number().int('validation.number.whole').min(0, 'validation.capacity.negative').max(200),
 });
 
 export const eventListQuery = z.object({
@@ -67,21 +62,17 @@ export const eventListQuery = z.object({
 
 export const venueSchema = z.object({
   groupId: z.coerce.number().int().positive(),
-  name: z.string().trim().min(2, 'Give the venue a name.').max(160),
-  address: z.string().trim().min(3, 'Enter the street address.').max(255),
-  town: z.string().trim().min(1, 'Enter the town.').max(120),
+  name: z.string().trim().min(2, 'validation.venue.name').max(160),
+  address: z.string().trim().min(3, 'validation.venue.address').max(255),
+  town: z.string().trim().min(1, 'validation.town.required').max(120),
   accessNotes: z.string().trim().max(2000).default(''),
 });
 
 /** An ISO 4217 code that Intl can format; lower case is taken as meant. */
-export const currencyCode = z
-  .string()
-  .trim()
-  .toUpperCase()
-  .refine(isKnownCurrency, 'Choose a currency by its three-letter code, e.g. EUR or GBP.');
+export const currencyCode = z.string().trim().toUpperCase().refine(isKnownCurrency, 'validation.currency.unknown');
 
 /** A country by its ISO 3166-1 alpha-3 code (the form the Open Repair Data file writes). */
-export const countryCode = z.string().trim().toUpperCase().refine(isKnownCountry, 'Choose a country from the list.');
+export const countryCode = z.string().trim().toUpperCase().refine(isKnownCountry, 'validation.country.unknown');
 
 /** The group's settings; each part is saved only when it is sent. */
 export const groupSettingsSchema = z.object({
@@ -93,16 +84,16 @@ export const groupSettingsSchema = z.object({
   defaultLanguage: z.enum(LANGUAGES, { error: 'validation.language.unknown' }).optional(),
   /** Months after a session that visitors' details are kept; then the daily job anonymises them. */
   retentionMonths: z.coerce
-    .number({ message: 'Enter a number of months.' })
-    .int('Enter a whole number of months.')
-    .min(RETENTION_MONTHS.min, `Keep details for ${RETENTION_MONTHS.min} to ${RETENTION_MONTHS.max} months.`)
-    .max(RETENTION_MONTHS.max, `Keep details for ${RETENTION_MONTHS.min} to ${RETENTION_MONTHS.max} months.`)
+    .number({ message: 'validation.retention.number' })
+    .int('validation.retention.whole')
+    .min(RETENTION_MONTHS.min, 'validation.retention.range')
+    .max(RETENTION_MONTHS.max, 'validation.retention.range')
     .optional(),
   /** Where visitors write about their details; '' for none. */
   contactEmail: z
     .string()
     .trim()
     .max(254)
-    .refine((s) => s === '' || z.string().email().safeParse(s).success, 'Enter an e-mail address, or leave it empty.')
+    .refine((s) => s === '' || z.string().email().safeParse(s).success, 'validation.contactEmail.invalid')
     .optional(),
 });

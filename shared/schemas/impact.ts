@@ -4,7 +4,7 @@ import { MANUAL_FOLLOW_UP_STATUSES } from '../impact/follow-ups';
 
 const isoDate = z
   .string()
-  .regex(/^\d{4}-\d{2}-\d{2}$/, 'Use a date like 2026-03-14.')
+  .regex(/^\d{4}-\d{2}-\d{2}$/, 'validation.date.format')
   .optional()
   .or(z.literal('').transform(() => undefined));
 const optionalId = z.preprocess((v) => (v === '' ? undefined : v), z.coerce.number().int().positive().optional());
@@ -17,23 +17,23 @@ export const recordsQuery = statsQuery.extend({
   barrier: z.enum(BARRIERS).optional(),
   month: z
     .string()
-    .regex(/^\d{4}-\d{2}$/, 'Use a month like 2026-03.')
+    .regex(/^\d{4}-\d{2}$/, 'validation.month.format')
     .optional(),
   page: z.coerce.number().int().min(1).max(100000).optional(),
 });
 
 export const followUpUpdate = z.object({
-  status: z.enum(MANUAL_FOLLOW_UP_STATUSES, { error: 'Choose waiting, part ordered or gave up.' }),
+  status: z.enum(MANUAL_FOLLOW_UP_STATUSES, { error: 'validation.followUp.status' }),
   note: z.string().trim().max(300).optional(),
 });
 
 export const rebookSchema = z.object({
-  slotId: z.coerce.number({ error: 'Choose a time.' }).int().positive('Choose a time.'),
+  slotId: z.coerce.number({ error: 'validation.slot.required' }).int().positive('validation.slot.required'),
 });
 
 export const impactSettingsSchema = z.object({
   displacement: z.coerce
-    .number({ error: 'Enter a number between 0 and 1.' })
-    .min(0, 'Enter a number between 0 and 1.')
-    .max(1, 'Enter a number between 0 and 1.'),
+    .number({ error: 'validation.number.zeroToOne' })
+    .min(0, 'validation.number.zeroToOne')
+    .max(1, 'validation.number.zeroToOne'),
 });

@@ -6,7 +6,7 @@ const fieldMatch = z.partialRecord(z.enum(IMPORT_FIELDS), z.string().trim().max(
 /** The form fields sent with a file to bring in. `mapping` is JSON text: our field → the sheet's column. */
 export const importForm = z
   .object({
-    scope: z.enum(['group', 'network'], { error: 'Choose one group or the whole network.' }).default('group'),
+    scope: z.enum(['group', 'network'], { error: 'validation.import.scope' }).default('group'),
     groupId: z.preprocess((v) => (v === '' ? undefined : v), z.coerce.number().int().positive().optional()),
     mapping: z
       .string()
@@ -20,13 +20,13 @@ export const importForm = z
         } catch {
           // Reported below.
         }
-        c.addIssue({ code: 'custom', message: 'The column matching could not be read. Match the columns again.' });
+        c.addIssue({ code: 'custom', message: 'validation.import.mapping' });
         return z.NEVER;
       }),
   })
   .refine((v) => v.scope === 'network' || v.groupId !== undefined, {
     path: ['groupId'],
-    message: 'Choose the group the records belong to.',
+    message: 'validation.import.group',
   });
 
 export const importListQuery = z.object({

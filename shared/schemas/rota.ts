@@ -16,12 +16,12 @@ export const myShiftSchema = z
   })
   .refine((v) => !(v.startsAt instanceof Date) || !(v.endsAt instanceof Date) || v.endsAt > v.startsAt, {
     path: ['endsAt'],
-    message: 'Your shift must end after it starts.',
+    message: 'validation.shift.endAfterStart',
   });
 
 /** Seats a coming fixer at one bench, or lets them move freely (null). */
 export const seatSchema = z.object({ benchId: z.number().int().positive().nullable() });
 
 export const askSchema = z.object({
-  skills: z.array(z.enum(SKILLS)).min(1, 'Choose at least one skill.').max(SKILLS.length),
+  skills: z.array(z.enum(SKILLS)).min(1, 'validation.skills.required').max(SKILLS.length),
 });

@@ -2,7 +2,7 @@ import { z } from 'zod';
 import { EQUIPMENT, SKILLS } from '../constants';
 
 export const levelSchema = z.union([z.literal(1), z.literal(2), z.literal(3)], {
-  error: 'Levels are 1 (learning), 2 (capable) or 3 (expert).',
+  error: 'validation.skills.level',
 });
 
 /** A volunteer's own skills, kit and notes ("My skills"). */

@@ -8,13 +8,14 @@ const text = (max: number) =>
     .max(max)
     .optional()
     .transform((v) => v ?? '');
-const optionalNumber = (label: string) =>
+/** A rating; its messages are the same for every rating (the form shows them beside the field). */
+const optionalNumber = () =>
   z.preprocess(
     (v) =>
       v === '' || v === null || v === undefined ? undefined : typeof v === 'string' ? v.trim().replace(',', '.') : v,
     z.coerce
-      .number({ error: `Enter the ${label} as a number.` })
-      .positive(`The ${label} is above 0.`)
+      .number({ error: 'bench.tool.salvage.notNumber' })
+      .positive('validation.number.aboveZero')
       .max(1e9)
       .optional(),
   );
@@ -43,39 +44,35 @@ export const knowledgeQuery = z.object({
 });
 
 export const writeupSchema = z.object({
-  symptom: z.string({ error: 'Describe the symptom.' }).trim().min(3, 'Describe the symptom.').max(2000),
+  symptom: z.string({ error: 'bench.tool.v.symptom' }).trim().min(3, 'bench.tool.v.symptom').max(2000),
   measured: text(2000),
   faultyPart: text(200),
-  fix: z
-    .string({ error: 'Say what fixed it (or why it could not be fixed).' })
-    .trim()
-    .min(3, 'Say what fixed it (or why it could not be fixed).')
-    .max(2000),
+  fix: z.string({ error: 'bench.tool.v.fix' }).trim().min(3, 'bench.tool.v.fix').max(2000),
 });
 
 export const ratingsSchema = z.object({
   polarity: z.enum(['NPN', 'PNP', 'N', 'P']).optional(),
-  voltageV: optionalNumber('voltage'),
-  currentA: optionalNumber('current'),
-  powerW: optionalNumber('power'),
-  resistanceOhm: optionalNumber('resistance'),
-  capacitanceF: optionalNumber('capacitance'),
-  temperatureC: optionalNumber('temperature'),
-  tolerancePct: optionalNumber('tolerance'),
+  voltageV: optionalNumber(),
+  currentA: optionalNumber(),
+  powerW: optionalNumber(),
+  resistanceOhm: optionalNumber(),
+  capacitanceF: optionalNumber(),
+  temperatureC: optionalNumber(),
+  tolerancePct: optionalNumber(),
 });
 
 export const salvagePartSchema = z.object({
-  type: z.enum(PART_TYPES, { error: 'Choose the kind of part.' }),
-  value: z
-    .string({ error: 'Give its value or a short description.' })
-    .trim()
-    .min(1, 'Give its value or a short description.')
-    .max(120),
+  type: z.enum(PART_TYPES, { error: 'bench.tool.v.kind' }),
+  value: z.string({ error: 'bench.tool.v.value' }).trim().min(1, 'bench.tool.v.value').max(120),
   ratings: ratingsSchema.default({}),
   package: text(40),
   pinout: text(20),
-  quantity: z.coerce.number({ error: 'Enter how many.' }).int('Enter a whole number.').min(1, 'At least 1.').max(10000),
-  box: z.string({ error: 'Say which box it is in.' }).trim().min(1, 'Say which box it is in.').max(60),
+  quantity: z.coerce
+    .number({ error: 'bench.tool.v.howMany' })
+    .int('bench.tool.v.whole')
+    .min(1, 'bench.tool.v.atLeastOne')
+    .max(10000),
+  box: z.string({ error: 'bench.tool.v.box' }).trim().min(1, 'bench.tool.v.box').max(60),
   sourceItemId: z.coerce.number().int().positive().optional(),
   notes: text(300),
 });
@@ -89,7 +86,7 @@ export const salvageUpdateSchema = z
     notes: z.string().trim().max(300).optional(),
   })
   .refine((v) => Object.values(v).some((x) => x !== undefined), {
-    message: 'Change at least one of quantity, box or notes.',
+    message: 'validation.salvage.change',
   });
 
 export const takeSchema = z.object({

@@ -88,4 +88,30 @@ describe('validation answers in the request’s language', () => {
     expect(res.status).toBe(400);
     expect(res.json.error.fields.email).toBe('Dat lijkt geen e-mailadres.');
   });
+
+  it('answers the shared schemas’ own checks in the language (a cut reset link, two passwords that differ)', async () => {
+    const words = {
+      en: ['The link is incomplete.', 'The two passwords differ.'],
+      nl: ['De link is onvolledig.', 'De twee wachtwoorden zijn niet gelijk.'],
+      de: ['Der Link ist unvollständig.', 'Die beiden Passwörter stimmen nicht überein.'],
+      fr: ['Le lien est incomplet.', 'Les deux mots de passe sont différents.'],
+    };
+    for (const [lang, [incomplete, differ]] of Object.entries(words)) {
+      const agent = new Agent(server.url, { 'accept-language': lang });
+      const cut = await agent.post('/api/auth/password-reset/confirm', {
+        token: 'short',
+        password: 'a-long-enough-password',
+        confirm: 'a-long-enough-password',
+      });
+      expect(cut.status, cut.text).toBe(400);
+      expect(cut.json.error.fields.token, lang).toBe(incomplete);
+      const twice = await agent.post('/api/auth/password-reset/confirm', {
+        token: 'x'.repeat(40),
+        password: 'a-long-enough-password',
+        confirm: 'another-password-here',
+      });
+      expect(twice.status, twice.text).toBe(400);
+      expect(twice.json.error.fields.confirm, lang).toBe(differ);
+    }
+  });
 });

@@ -122,7 +122,9 @@ export function ResetPasswordPage() {
       ) : (
         <form onSubmit={onSubmit} noValidate className="mt-4 space-y-4">
           {(formError || form.formState.errors.token) && (
-            <Alert tone="error">{formError ?? form.formState.errors.token?.message}</Alert>
+            <Alert tone="error">
+              {formError ?? tr(form.formState.errors.token?.message ?? 'validation.link.incomplete')}
+            </Alert>
           )}
           <TextField
             label={t('account.newPassword')}

@@ -9,7 +9,7 @@ import { useSignUp } from '../../features/auth/api/sign-up';
 import { usePublicGroups, publicGroupsQuery } from '../../features/groups/api/get-public-groups';
 import { applyServerErrors, useZodForm } from '../../lib/form';
 import { queryClient } from '../../lib/query-client';
-import { useT } from '../../lib/i18n';
+import { tr, useT } from '../../lib/i18n';
 
 /** Warms the cache; a failure is left for the page, which says what went wrong in its own words. */
 export const loader = () => queryClient.ensureQueryData(publicGroupsQuery()).catch(() => null);
@@ -109,7 +109,7 @@ export function VolunteerPage() {
                   </span>
                 </label>
               ))}
-              {errors.role && <p className="text-sm font-semibold text-alert">{errors.role.message}</p>}
+              {errors.role?.message && <p className="text-sm font-semibold text-alert">{tr(errors.role.message)}</p>}
             </fieldset>
             <Button type="submit" busy={form.formState.isSubmitting} className="w-full">
               {t('account.volunteer.submit')}

@@ -8,19 +8,6 @@ import { useAddPart } from '../api/add-part';
 import { RatingFields, parseRatings, type RatingsDraft } from './ratings';
 import { tr, useT } from '../../../lib/i18n';
 
-/** The part schema's English messages (the server answers with the same words) and their keys. */
-const SCHEMA_KEYS: Record<string, string> = {
-  'Choose the kind of part.': 'bench.tool.v.kind',
-  'Give its value or a short description.': 'bench.tool.v.value',
-  'Enter how many.': 'bench.tool.v.howMany',
-  'Enter a whole number.': 'bench.tool.v.whole',
-  'At least 1.': 'bench.tool.v.atLeastOne',
-  'Say which box it is in.': 'bench.tool.v.box',
-};
-/** A schema message in the reader's language; a rating that is not a number gets the lookup's own words. */
-const schemaMessage = (m: string) =>
-  /^Enter the \w+ as a number\.$/.test(m) ? tr('bench.tool.salvage.notNumber') : tr(SCHEMA_KEYS[m] ?? m);
-
 /** Adding parts: the ratings asked for follow the kind of part. */
 export function AddPartForm({
   groupId,
@@ -52,7 +39,7 @@ export function AddPartForm({
     const body = { ...v, ratings: parseRatings(ratings), sourceItemId };
     const parsed = salvagePartSchema.safeParse(body);
     if (!parsed.success) {
-      setErrors(Object.fromEntries(parsed.error.issues.map((i) => [i.path.join('.'), schemaMessage(i.message)])));
+      setErrors(Object.fromEntries(parsed.error.issues.map((i) => [i.path.join('.'), tr(i.message)])));
       return;
     }
     setErrors({});

@@ -4,13 +4,7 @@ import { Alert } from '../../../components/ui/feedback';
 import { TextAreaField, TextField } from '../../../components/ui/field';
 import type { KnowledgeEntry } from '../api/types';
 import { useWriteUp } from '../api/write-up';
-import { tr, useLanguage, useT } from '../../../lib/i18n';
-
-const WRITEUP_KEYS: Record<string, string> = {
-  'Describe the symptom.': 'bench.tool.v.symptom',
-  'Say what fixed it (or why it could not be fixed).': 'bench.tool.v.fix',
-};
-const fieldMessage = (m: string | undefined) => (m === undefined ? undefined : tr(WRITEUP_KEYS[m] ?? m));
+import { useLanguage, useT } from '../../../lib/i18n';
 
 /**
  * One repair note: the fault and the fixer's notes, and the fix once a fixer has added it (symptom, what was measured,
@@ -129,7 +123,7 @@ function WriteUpForm({ entry, onDone }: { entry: KnowledgeEntry; onDone: () => v
         rows={2}
         value={v.symptom}
         onChange={(e) => setV({ ...v, symptom: e.target.value })}
-        error={fieldMessage(fields?.symptom)}
+        error={fields?.symptom}
       />
       <TextAreaField
         label={t('bench.tool.note.whatMeasured')}
@@ -147,7 +141,7 @@ function WriteUpForm({ entry, onDone }: { entry: KnowledgeEntry; onDone: () => v
         rows={2}
         value={v.fix}
         onChange={(e) => setV({ ...v, fix: e.target.value })}
-        error={fieldMessage(fields?.fix)}
+        error={fields?.fix}
       />
       {save.error && !fields && <Alert tone="error">{save.error.message}</Alert>}
       <div className="flex gap-2">
