@@ -66,14 +66,43 @@ export function storedReasons(input: unknown): (entry: unknown) => WaitingWhy | 
 export interface RunSummary {
   /** The whole session planned slot by slot, or one slot's round. */
   scope: 'day' | 'slot';
-  items: { id: string; label: string; slotStartsAt: Date | null; needs: string; kit: string }[];
-  fixers: { id: string; name: string; skills: string; from: Date | null; to: Date | null; seat: string | null }[];
-  benches: { id: string; name: string; seats: number; kit: string }[];
-  /** The rules the run kept, in sentences. */
+  /**
+   * The English `needs`, `kit`, `skills` and `rules` come with their codes and values (`skill`, `minLevel`,
+   * `equipment`, `skillLevels`, `scope` and `lockedKept`) for the screen to word in the reader's language.
+   */
+  items: {
+    id: string;
+    label: string;
+    slotStartsAt: Date | null;
+    needs: string;
+    kit: string;
+    skill: string;
+    minLevel: number;
+    equipment: string[];
+  }[];
+  fixers: {
+    id: string;
+    name: string;
+    skills: string;
+    skillLevels: { skill: string; level: number }[];
+    from: Date | null;
+    to: Date | null;
+    seat: string | null;
+    seatId: string | null;
+  }[];
+  benches: { id: string; name: string; seats: number; kit: string; equipment: string[] }[];
+  /** The rules the run kept, in English sentences; the screen words them from `scope` and `lockedKept`. */
   rules: string[];
-  placed: { itemId: string; item: string; fixer: string; bench: string }[];
-  /** `reason` and `detail` are in English, as the run stored them; `why` is the same as a code and values. */
-  waiting: { itemId: string; item: string; reason: string; detail: string; why: WaitingWhy | null }[];
+  /** How many placements were locked or already at the bench, and so kept. */
+  lockedKept: number;
+  /** The ids of the items, fixers and benches named as the board names them; the rest are known by their number. */
+  given: { items: string[]; fixers: string[]; benches: string[] };
+  placed: { itemId: string; item: string; fixerId: string; fixer: string; benchId: string; bench: string }[];
+  /**
+   * `reason` and `detail` are in English, as the run stored them; `code` is the reason's code and `why` the same
+   * as a code and values.
+   */
+  waiting: { itemId: string; item: string; code: string; reason: string; detail: string; why: WaitingWhy | null }[];
 }
 
 const skillLabel = (s: string) => SKILL_LABELS[s as Skill] ?? s;
@@ -118,33 +147,58 @@ export function summariseRun(
       slotStartsAt: slots && x.slotIndex !== undefined ? (slots[x.slotIndex]?.startsAt ?? null) : null,
       needs: skillNeedPhrase(skillLabel(x.skill), x.minLevel),
       kit: kitOf(x.equipment),
+      skill: x.skill,
+      minLevel: x.minLevel,
+      equipment: x.equipment,
     })),
-    fixers: volunteers.map((v) => ({
-      id: v.id,
-      name: fixerName.get(v.id)!,
-      skills:
-        Object.entries(v.skills)
-          .filter(([, l]) => l > 0)
-          .sort((a, b) => b[1] - a[1] || skillLabel(a[0]).localeCompare(skillLabel(b[0])))
-          .map(([s, l]) => `${skillLabel(s)} (${SKILL_LEVEL_WORDS[Math.min(3, l)]})`)
-          .join(', ') || 'no skills given',
-      from: v.from ?? null,
-      to: v.to ?? null,
-      seat: v.benchId ? (benchName.get(v.benchId) ?? `Bench ${v.benchId}`) : null,
+    fixers: volunteers.map((v) => {
+      const skillLevels = Object.entries(v.skills)
+        .filter(([, l]) => l > 0)
+        .sort((a, b) => b[1] - a[1] || skillLabel(a[0]).localeCompare(skillLabel(b[0])))
+        .map(([skill, l]) => ({ skill, level: Math.min(3, l) }));
+      return {
+        id: v.id,
+        name: fixerName.get(v.id)!,
+        skills:
+          skillLevels.map((x) => `${skillLabel(x.skill)} (${SKILL_LEVEL_WORDS[x.level]})`).join(', ') ||
+          'no skills given',
+        skillLevels,
+        from: v.from ?? null,
+        to: v.to ?? null,
+        seat: v.benchId ? (benchName.get(v.benchId) ?? `Bench ${v.benchId}`) : null,
+        seatId: v.benchId ?? null,
+      };
+    }),
+    benches: benches.map((b) => ({
+      id: b.id,
+      name: benchName.get(b.id)!,
+      seats: b.seats,
+      kit: kitOf(b.equipment),
+      equipment: b.equipment,
     })),
-    benches: benches.map((b) => ({ id: b.id, name: benchName.get(b.id)!, seats: b.seats, kit: kitOf(b.equipment) })),
     rules,
+    lockedKept,
+    given: {
+      items: [
+        ...new Set([...items.map((x) => x.id), ...[...r.data.assignments, ...r.data.unassigned].map((x) => x.itemId)]),
+      ].filter((x) => labels.has(x)),
+      fixers: volunteers.filter((v) => v.name !== undefined).map((v) => v.id),
+      benches: benches.filter((b) => b.name !== undefined).map((b) => b.id),
+    },
     placed: r.data.assignments
       .map((a) => ({
         itemId: a.itemId,
         item: itemName(a.itemId),
+        fixerId: a.volunteerId,
         fixer: fixerName.get(a.volunteerId) ?? `Fixer ${a.volunteerId}`,
+        benchId: a.benchId,
         bench: benchName.get(a.benchId) ?? `Bench ${a.benchId}`,
       }))
       .sort((a, b) => a.fixer.localeCompare(b.fixer)),
     waiting: r.data.unassigned.map((u) => ({
       itemId: u.itemId,
       item: itemName(u.itemId),
+      code: u.reason,
       reason: WAITING_REASON_LABELS[u.reason] ?? u.reason,
       detail: u.detail,
       why: whyOf(u),

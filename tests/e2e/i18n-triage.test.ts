@@ -92,6 +92,16 @@ describe('the triage board and its runs in four languages', () => {
       await page.getByRole('heading', { name: words.out }).waitFor();
       if (lang !== 'en') expect(await page.getByText('What went in').count()).toBe(0);
       await page.getByRole('cell').filter({ hasText: words.toy }).first().waitFor();
+      if (lang === 'de') {
+        // The rules, needs, kit, skills and labels are German too (shared/triage/run-summary.ts gives their codes).
+        const body = await page.locator('main').innerText();
+        expect(body).toMatch(/Jeder Gegenstand geht an einen Reparateur/);
+        expect(body).toMatch(/mindestens (lernend|versiert)/);
+        expect(body).toMatch(/\((Experte|versiert|lernend)\)/);
+        expect(body).not.toMatch(
+          /Each item goes|slot by slot|placement was locked|placements were locked|Among the ways|or better|\((expert|capable|learning)\)|No fixer with|No bench with|Waiting for a free|\b(Item|Fixer|Bench) \d|no skills given|Soldering station|Sewing machine/,
+        );
+      }
       await page.screenshot({ path: shot(`i18n-triage-run-${lang}`), fullPage: true });
       await context.close();
     }

@@ -79,3 +79,40 @@ export function warningText(w: PlacementWarning, t: T, lang: Language): string {
       return t(key);
   }
 }
+
+/* A run's summary (shared/triage/run-summary.ts): needs, kit, skills and rules from their codes and values. */
+
+const levelOf = (t: T, level: number) => t(`organise.triage.level.${Math.max(0, Math.min(3, Math.round(level)))}`);
+const skillName = (t: T, slug: string) => named(t, `common.skill.${slug}`, SKILL_LABELS[slug as Skill], slug);
+
+/** What an item asks of its fixer: "Electrical, capable or better"; an expert is always enough. */
+export const needText = (t: T, skill: string, minLevel: number) =>
+  t(minLevel >= 3 ? 'organise.triage.summary.needTop' : 'organise.triage.summary.needAtLeast', {
+    skill: skillName(t, skill),
+    level: levelOf(t, minLevel),
+  });
+
+/** Kinds of kit, by name, as a table cell lists them ("Soldering station, Multimeter"); empty when none. */
+export const kitNames = (t: T, lang: Language, kit: string[]) =>
+  new Intl.ListFormat(intlLocale(lang), { type: 'unit', style: 'short' }).format(
+    kit.map((k) => named(t, `organise.equipment.${k}`, EQUIPMENT_LABELS[k as Equipment], k)),
+  );
+
+/** A fixer's skills, the strongest first: "Textiles (expert), Jewellery (capable)". */
+export function skillsText(t: T, lang: Language, skills: { skill: string; level: number }[]): string {
+  if (!skills.length) return t('organise.triage.summary.noSkills');
+  const words = skills
+    .map((s) => ({ level: s.level, name: skillName(t, s.skill) }))
+    .sort((a, b) => b.level - a.level || a.name.localeCompare(b.name, intlLocale(lang)))
+    .map((s) => t('organise.triage.summary.skillLevel', { skill: s.name, level: levelOf(t, s.level) }));
+  return new Intl.ListFormat(intlLocale(lang), { type: 'unit', style: 'short' }).format(words);
+}
+
+/** The rules a run kept, in sentences: the whole session slot by slot, or one slot's round. */
+export const ruleTexts = (t: T, scope: 'day' | 'slot', lockedKept: number) => [
+  t('organise.triage.rule.match'),
+  t('organise.triage.rule.seats'),
+  t(scope === 'day' ? 'organise.triage.rule.day' : 'organise.triage.rule.slot'),
+  t('organise.triage.rule.experts'),
+  t('organise.triage.rule.locked', { n: lockedKept }),
+];

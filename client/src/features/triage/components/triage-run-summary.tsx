@@ -3,7 +3,7 @@ import { formatTime, formatTimeRange } from '../../../../../shared/format';
 import { useLanguage, useT } from '../../../lib/i18n';
 import { Card } from '../../../components/ui/feedback';
 import type { TriageRunDetail } from '../api/types';
-import { waitingText } from '../wording';
+import { kitNames, needText, ruleTexts, skillsText, waitingText } from '../wording';
 
 type Summary = NonNullable<TriageRunDetail['summary']>;
 
@@ -44,11 +44,23 @@ function Table({ caption, head, rows }: { caption: string; head: string[]; rows:
   );
 }
 
+const GIVEN = { item: 'items', fixer: 'fixers', bench: 'benches' } as const;
+
 /** What went into a run (items, fixers, benches, the rules it kept) and what came out, in sentences and tables. */
 export function TriageRunSummary({ summary: s, timeZone: tz }: { summary: Summary; timeZone: string }) {
   const t = useT();
   const lang = useLanguage();
   const day = s.scope === 'day';
+  /** A name as the board gives it, else "Item 12" in the reader's language (a run stored before names were kept). */
+  const nameOf = (kind: 'item' | 'fixer' | 'bench', id: string, name: string) =>
+    s.given[GIVEN[kind]].includes(id) ? name : t(`organise.triage.summary.${kind}N`, { id });
+  const reasonOf = (code: string, english: string) => {
+    const key = `organise.triage.reason.${code}`;
+    const word = t(key);
+    return word === key ? english : word;
+  };
+  const kit = (equipment: string[]) =>
+    equipment.length ? kitNames(t, lang, equipment) : t('organise.triage.summary.none');
   return (
     <div className="space-y-6">
       <section aria-labelledby="run-result" className="space-y-3">
@@ -67,7 +79,11 @@ export function TriageRunSummary({ summary: s, timeZone: tz }: { summary: Summar
               t('organise.triage.summary.fixer'),
               t('organise.triage.summary.bench'),
             ]}
-            rows={s.placed.map((p) => [p.item, p.fixer, p.bench])}
+            rows={s.placed.map((p) => [
+              nameOf('item', p.itemId, p.item),
+              nameOf('fixer', p.fixerId, p.fixer),
+              nameOf('bench', p.benchId, p.bench),
+            ])}
           />
         )}
         {s.waiting.length > 0 && (
@@ -77,9 +93,9 @@ export function TriageRunSummary({ summary: s, timeZone: tz }: { summary: Summar
               caption={t('organise.triage.summary.waitingCaption')}
               head={[t('organise.triage.summary.item'), t('organise.triage.summary.why')]}
               rows={s.waiting.map((w) => [
-                w.item,
+                nameOf('item', w.itemId, w.item),
                 <>
-                  <span className="font-bold">{w.why ? t(`organise.triage.reason.${w.why.reason}`) : w.reason}.</span>{' '}
+                  <span className="font-bold">{reasonOf(w.why?.reason ?? w.code, w.reason)}.</span>{' '}
                   {w.why ? waitingText(w.why, t, lang) : w.detail}
                 </>,
               ])}
@@ -102,7 +118,7 @@ export function TriageRunSummary({ summary: s, timeZone: tz }: { summary: Summar
         <Card className="p-4">
           <h3 className="text-base">{t('organise.triage.summary.rules')}</h3>
           <ul className="mt-1 list-disc space-y-1 pl-5 text-sm">
-            {s.rules.map((r) => (
+            {ruleTexts(t, s.scope, s.lockedKept).map((r) => (
               <li key={r}>{r}</li>
             ))}
           </ul>
@@ -117,10 +133,10 @@ export function TriageRunSummary({ summary: s, timeZone: tz }: { summary: Summar
             t('organise.triage.summary.benchKit'),
           ]}
           rows={s.items.map((i) => [
-            i.label,
+            nameOf('item', i.id, i.label),
             ...(day ? [i.slotStartsAt ? formatTime(i.slotStartsAt, tz, lang) : '—'] : []),
-            i.needs,
-            i.kit || t('organise.triage.summary.none'),
+            needText(t, i.skill, i.minLevel),
+            kit(i.equipment),
           ])}
         />
         <h3 className="text-base">{t('organise.triage.summary.fixers')}</h3>
@@ -133,10 +149,10 @@ export function TriageRunSummary({ summary: s, timeZone: tz }: { summary: Summar
             t('organise.triage.summary.seat'),
           ]}
           rows={s.fixers.map((f) => [
-            f.name,
-            f.skills,
+            nameOf('fixer', f.id, f.name),
+            skillsText(t, lang, f.skillLevels),
             ...(day ? [f.from && f.to ? formatTimeRange(f.from, f.to, tz, lang) : '—'] : []),
-            f.seat ?? t('organise.triage.summary.anyBench'),
+            f.seat && f.seatId ? nameOf('bench', f.seatId, f.seat) : t('organise.triage.summary.anyBench'),
           ])}
         />
         <h3 className="text-base">{t('organise.triage.summary.benches')}</h3>
@@ -147,7 +163,7 @@ export function TriageRunSummary({ summary: s, timeZone: tz }: { summary: Summar
             t('organise.triage.summary.seats'),
             t('organise.triage.summary.kit'),
           ]}
-          rows={s.benches.map((b) => [b.name, b.seats, b.kit || t('organise.triage.summary.none')])}
+          rows={s.benches.map((b) => [nameOf('bench', b.id, b.name), b.seats, kit(b.equipment)])}
         />
       </section>
     </div>
