@@ -150,6 +150,13 @@ describe('finding 2: limits on anonymous bookings', () => {
     const full = await makeEvent(db.db, groupId, { capacity: 0 });
     for (let i = 0; i < 3; i++)
       expect((await new Agent(server.url, from()).post('/api/bookings', form(full.slotIds[0], who))).status).toBe(409);
+    // Refused by the address's limit (counted in the same statement as the mail): no mail counted either.
+    const busy = new Agent(server.url, from());
+    const open = await makeEvent(db.db, groupId, { capacity: 50, slotCount: 1 });
+    for (let i = 0; i < 10; i++) expect((await busy.post('/api/bookings', form(open.slotIds[0]))).status).toBe(201);
+    const limited = await busy.post('/api/bookings', form(open.slotIds[0], who));
+    expect(limited.status).toBe(429);
+    expect(limited.headers.get('ratelimit-policy')).toMatch(/q=10/);
     const { rateLimits } = await import('../../server/src/db/schema/index');
     const [row] = await db.db
       .select()

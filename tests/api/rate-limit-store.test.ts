@@ -1,7 +1,7 @@
 import { sql } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { rateLimits } from '../../server/src/db/schema/index';
-import { MariadbRateLimitStore } from '../../server/src/http/rate-limit-store';
+import { countHits, MariadbRateLimitStore } from '../../server/src/http/rate-limit-store';
 import { createTestDatabase, type TestDatabase } from '../support/db';
 
 let db: TestDatabase;
@@ -37,5 +37,26 @@ describe('the rate-limit store in MariaDB', () => {
     await store.decrement('198.51.100.7');
     await store.flush();
     expect((await store.increment('198.51.100.7')).totalHits).toBe(1);
+  });
+
+  it('counts several keys in one statement, each in its own window, and answers them in the order asked', async () => {
+    const hits = [
+      { key: 'multi-test:ip', windowMs: 15 * 60_000 },
+      { key: 'multi-test:mail', windowMs: 3_600_000 },
+    ];
+    const before = Date.now();
+    const first = await countHits(db.db, hits);
+    await countHits(db.db, [hits[1]]);
+    const third = await countHits(db.db, [...hits].reverse());
+    expect(first.map((c) => c.totalHits)).toEqual([1, 1]);
+    // Asked in the other order, answered in that order: the mail's key has 3 hits, the address's 2.
+    expect(third.map((c) => c.totalHits)).toEqual([3, 2]);
+    expect(first[0].resetTime.getTime()).toBeGreaterThanOrEqual(before + 15 * 60_000 - 5);
+    expect(first[1].resetTime.getTime()).toBeGreaterThanOrEqual(before + 3_600_000 - 5);
+    expect(third[1].resetTime.getTime()).toBe(first[0].resetTime.getTime());
+    const [rows] = (await db.db.execute(
+      sql`SELECT COUNT(*) AS n FROM ${rateLimits} WHERE ${rateLimits.key} LIKE 'multi-test:%'`,
+    )) as unknown as [{ n: number }[]];
+    expect(Number(rows[0].n)).toBe(2);
   });
 });

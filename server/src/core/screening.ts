@@ -39,16 +39,18 @@ export const refusalIn =
 /**
  * The one screening of items coming in, whether booked, walked in or corrected at the desk: refuses the whole lot
  * when any item is one the group does not take, saying why next to each. Answers the categories by id.
+ * `excluded` is the group's refused kinds when the caller has read them already.
  */
 export async function screenItems(
   tx: DbOrTx,
   group: { id: number; name: string },
   items: { categoryId: number; hazards?: Hazard[] }[],
+  excluded?: number[],
 ) {
   const ids = [...new Set(items.map((i) => i.categoryId))];
   const cats = ids.length ? await tx.select().from(categories).where(inArray(categories.id, ids)) : [];
   const byId = new Map(cats.map((c) => [c.id, c]));
-  const excluded = await excludedCategoryIds(tx, group.id);
+  const refused = excluded ?? (await excludedCategoryIds(tx, group.id));
   const fields: Record<string, FieldMessage> = {};
   items.forEach((item, i) => {
     const c = byId.get(item.categoryId);
@@ -56,7 +58,7 @@ export async function screenItems(
       fields[`items.${i}.categoryId`] = 'Choose one of the listed kinds of item.';
       return;
     }
-    const r = screenItem(c, item.hazards ?? [], { name: group.name, excludedCategoryIds: excluded });
+    const r = screenItem(c, item.hazards ?? [], { name: group.name, excludedCategoryIds: refused });
     if (!r.ok) fields[`items.${i}.${item.hazards?.length ? 'hazards' : 'categoryId'}`] = refusalIn(r, c.slug);
   });
   if (Object.keys(fields).length)

@@ -15,7 +15,7 @@ import { hasGroupRole, requireGroupRole } from '../../auth/guards';
 import { HttpError, notFound } from '../../http/errors';
 import { body, params, paramId } from '../../http/validate';
 import { signingKey, verifySignedPath } from '../../http/signed-url';
-import { visitorLimits } from '../../http/visitor-limits';
+import { countedMail, visitorLimits } from '../../http/visitor-limits';
 import { intakePhotosOf } from './queries/limits';
 import { eventGroupId } from '../../core/events';
 import { eventBookings } from './organiser';
@@ -64,8 +64,15 @@ export function bookingRoutes(ctx: AppContext) {
     perAddress: ctx.env.BOOKING_RATE_MAX,
     perEmail: ctx.env.BOOKING_EMAIL_RATE_MAX,
   });
+  // The same counts, with the confirmation mail counted in the same statement.
+  const bookingLimits = visitorLimits(
+    ctx,
+    'booking',
+    { perAddress: ctx.env.BOOKING_RATE_MAX, perEmail: ctx.env.BOOKING_EMAIL_RATE_MAX },
+    { countsMail: true },
+  );
 
-  r.post('/bookings', ...limits, async (req, res) => {
+  r.post('/bookings', ...bookingLimits, async (req, res) => {
     const header = req.get('idempotency-key');
     const key = header === undefined ? undefined : idempotencyKey.safeParse(header);
     if (key && !key.success)
@@ -73,7 +80,7 @@ export function bookingRoutes(ctx: AppContext) {
         'Idempotency-Key': key.error.issues[0].message,
       });
     const input = body(req, createBookingSchema);
-    const result = await booking.createBooking(ctx, input, key?.data, languageOf(req, res.locals));
+    const result = await booking.createBooking(ctx, input, key?.data, languageOf(req, res.locals), countedMail(res));
     if (result.replayed) res.setHeader('Idempotent-Replayed', 'true');
     res.status(result.status).json(result.body);
   });

@@ -9,7 +9,6 @@ import { checkManageToken } from '../../core/links';
 import { signPath, signingKey } from '../../http/signed-url';
 import { screenItems } from '../../core/screening';
 import { mailAllowance } from '../../mail/allowance';
-import { activeBookingsFor } from './queries/limits';
 import { bookingWithContextById } from './queries/context';
 import {
   bookingByReference,
@@ -21,7 +20,9 @@ import {
 import { bookingQrText, qrDataUrl } from './mails';
 import {
   bookabilityOf,
+  bookabilityWith,
   bookableSlot,
+  bookableSlotFor,
   insertBooking,
   prepareBooking,
   refuse,
@@ -79,21 +80,28 @@ export async function createBooking(
   input: BookingInput,
   idempotencyKey?: string,
   language: Language = DEFAULT_LANGUAGE,
+  countedMail?: { within: boolean },
 ): Promise<{ status: number; body: unknown; replayed: boolean }> {
   const key = idempotencyKey ? `booking:${idempotencyKey}` : null;
   const bodyHash = sha256(JSON.stringify(input));
-  const row = await bookableSlot(ctx.database.db, input.slotId);
-  const cats = await screenItems(ctx.database.db, row.group, input.items);
-  // The confirmation mail is counted before the booking; it is given back if no booking (so no mail) comes of it.
+  const email = input.visitor.email;
+  // The confirmation mail is counted before the booking (by the route's limits, or here); it is given back if no
+  // booking (so no mail) comes of the request, whatever refuses it.
   const allowance = mailAllowance(ctx);
-  await allowance.takeOrRefuse(input.visitor.email);
+  let counted = countedMail !== undefined;
   let mailed = false;
   try {
-    const result = await bookOnce(ctx, input, key, bodyHash, row, cats, language);
+    const checks = await bookableSlotFor(ctx.database.db, input.slotId, email);
+    const cats = await screenItems(ctx.database.db, checks.row.group, input.items, checks.excluded);
+    if (!countedMail) {
+      counted = true;
+      if (!(await allowance.take(email))) throw allowance.refusal();
+    } else if (!countedMail.within) throw allowance.refusal();
+    const result = await bookOnce(ctx, input, key, bodyHash, checks, cats, language);
     mailed = !result.replayed;
     return result;
   } finally {
-    if (!mailed) await allowance.giveBack(input.visitor.email);
+    if (counted && !mailed) await allowance.giveBack(email);
   }
 }
 
@@ -102,21 +110,25 @@ async function bookOnce(
   input: BookingInput,
   key: string | null,
   bodyHash: string,
-  row: Awaited<ReturnType<typeof bookableSlot>>,
+  checks: Awaited<ReturnType<typeof bookableSlotFor>>,
   cats: Awaited<ReturnType<typeof screenItems>>,
   language: Language,
 ): Promise<{ status: number; body: unknown; replayed: boolean }> {
+  const { row } = checks;
+  // The shared rule's answer and the address's bookings for the session, as read before the transaction (reads that
+  // lock nothing, in or out of it): the conditional UPDATE of the places is what holds the capacity.
+  const bookability = bookabilityWith(row, checks.skillTaken, skillsOf(input.items, cats));
+  const max = ctx.env.BOOKINGS_PER_SESSION_MAX;
   for (let attempt = 0; ; attempt++) {
     const prepared = prepareBooking(ctx, language);
     try {
       const body = await withDeadlockRetry(() =>
         ctx.database.db.transaction(async (tx) => {
           // The key's row is written first: a second request with the same key waits here on the row lock,
-          // then fails as a duplicate once the first has committed.
+          // then fails as a duplicate once the first has committed (and replays the first answer below).
           if (key) await claimIdempotencyKey(tx, key, bodyHash, new Date(Date.now() - IDEMPOTENCY_HOURS * 3600_000));
-          refuse(await bookabilityOf(tx, row, skillsOf(input.items, cats)));
-          const max = ctx.env.BOOKINGS_PER_SESSION_MAX;
-          if ((await activeBookingsFor(tx, row.event.id, input.visitor.email)) >= max)
+          refuse(bookability);
+          if (checks.active >= max)
             throw new HttpError(
               409,
               'booking-cap',

@@ -14,7 +14,7 @@ import { HttpError } from '../../http/errors';
 import { enqueueMail } from '../../mail/outbox';
 import { manageTokenFor, manageUrl } from '../../core/links';
 import type { screenItems } from '../../core/screening';
-import { skillTakenOf, slotWithContextById } from './queries/context';
+import { skillTakenOf, slotForBooking, slotWithContextById } from './queries/context';
 import { insertBookingRows } from './queries/bookings';
 import { takePlaces, takeSkillPlaces } from './queries/places';
 import { bookingQrText, confirmationMail, type BookingMailFacts } from './mails';
@@ -27,9 +27,10 @@ type Screened = Awaited<ReturnType<typeof screenItems>>;
 export const full = () =>
   new HttpError(409, 'slot-full', 'That time is fully booked. Choose another time, or join its waiting list.');
 
-/** Loads the slot with its event, group and venue, and checks that it can take bookings now. */
-export async function bookableSlot(tx: DbOrTx, slotId: number, opts: { lock?: boolean } = {}) {
-  const row = await slotWithContextById(tx, slotId, opts);
+type SlotContext = Awaited<ReturnType<typeof slotWithContextById>>;
+
+/** Checks that a slot exists and can take bookings now; answers it. */
+function bookableNow(row: SlotContext | undefined): SlotContext {
   if (!row) throw new HttpError(400, 'invalid', 'errors.invalid', { slotId: 'That time does not exist.' });
   if (row.event.status !== 'published')
     throw new HttpError(
@@ -41,12 +42,22 @@ export async function bookableSlot(tx: DbOrTx, slotId: number, opts: { lock?: bo
   return row;
 }
 
+/** Loads the slot with its event, group and venue, and checks that it can take bookings now. */
+export async function bookableSlot(tx: DbOrTx, slotId: number, opts: { lock?: boolean } = {}) {
+  return bookableNow(await slotWithContextById(tx, slotId, opts));
+}
+
 /**
- * What the shared rule (shared/booking/bookability.ts) says of this slot for these items, with the per-skill counts
- * as they are now: the same answer the booking page showed on the time tile.
+ * As `bookableSlot`, with what a new booking's checks need read in the same statement: the per-skill counts, the
+ * address's bookings for the session and the group's refused kinds (queries/context.ts, slotForBooking).
  */
-export async function bookabilityOf(db: DbOrTx, row: SlotRow, skills: Skill[], spare = 0) {
-  const skillTaken = await skillTakenOf(db, row.slot.id);
+export async function bookableSlotFor(db: DbOrTx, slotId: number, email: string) {
+  const found = await slotForBooking(db, slotId, email);
+  return { ...found!, row: bookableNow(found?.row) };
+}
+
+/** What the shared rule (shared/booking/bookability.ts) says of this slot for these items, given its skill counts. */
+export function bookabilityWith(row: SlotRow, skillTaken: Record<string, number>, skills: Skill[], spare = 0) {
   return slotBookability(
     { ...row.slot, skillLimits: row.event.skillLimits as Partial<Record<Skill, number>>, skillTaken },
     skills,
@@ -55,8 +66,16 @@ export async function bookabilityOf(db: DbOrTx, row: SlotRow, skills: Skill[], s
   );
 }
 
+/**
+ * What the shared rule says of this slot for these items, with the per-skill counts as they are now: the same
+ * answer the booking page showed on the time tile.
+ */
+export async function bookabilityOf(db: DbOrTx, row: SlotRow, skills: Skill[], spare = 0) {
+  return bookabilityWith(row, await skillTakenOf(db, row.slot.id), skills, spare);
+}
+
 /** Refuses a booking the shared rule refuses: a passed time, a kind's limit reached (for all the items), no room. */
-export function refuse(b: Awaited<ReturnType<typeof bookabilityOf>>): void {
+export function refuse(b: ReturnType<typeof bookabilityWith>): void {
   if (b.ok) return;
   if (b.reason === 'past') throw new HttpError(409, 'not-bookable', b.message);
   if (b.reason === 'skill-full') throw new HttpError(409, 'skill-full', b.message);
