@@ -150,6 +150,14 @@ describe('finding 2: limits on anonymous bookings', () => {
     const full = await makeEvent(db.db, groupId, { capacity: 0 });
     for (let i = 0; i < 3; i++)
       expect((await new Agent(server.url, from()).post('/api/bookings', form(full.slotIds[0], who))).status).toBe(409);
+    // A form the route refuses (no items; a malformed Idempotency-Key) sends no mail either.
+    const bad = new Agent(server.url, from());
+    expect((await bad.post('/api/bookings', { ...form(full.slotIds[0], who), items: [] })).status).toBe(400);
+    const badKey = await bad.raw('POST', '/api/bookings', {
+      body: form(full.slotIds[0], who),
+      headers: { 'x-csrf-token': await bad.token(), 'idempotency-key': 'no' },
+    });
+    expect(badKey.status).toBe(400);
     // Refused by the address's limit (counted in the same statement as the mail): no mail counted either.
     const busy = new Agent(server.url, from());
     const open = await makeEvent(db.db, groupId, { capacity: 50, slotCount: 1 });

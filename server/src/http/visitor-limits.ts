@@ -12,15 +12,20 @@ export const visitorEmailOf = (req: Request): string | undefined => {
   return typeof e === 'string' && e.trim() ? e.trim().toLowerCase() : undefined;
 };
 
-/** Whether the request's mail, counted with its limits, is within the address's hourly allowance. */
-export const countedMail = (res: Response): { within: boolean } | undefined => res.locals.countedMail;
+/** The request's mail as its limits counted it: within the address's hourly allowance or not, and how to give it
+ * back when no mail comes of the request (once, however often it is called). */
+export interface CountedMail {
+  within: boolean;
+  giveBack: () => Promise<void>;
+}
+export const countedMail = (res: Response): CountedMail | undefined => res.locals.countedMail;
 
 /**
  * Limits on an anonymous form that writes and sends mail (a booking, a waiting-list place, a fresh link): `perAddress`
  * requests per source address and `perEmail` per e-mail address in the sign-in window, counted in MariaDB so every
  * app process shares them. Routes that give the same `name` share one count. Both counts (and, with `countsMail`, the
  * address's hourly mail allowance of mail/allowance.ts) move in one statement; the handler then finds the mail's
- * verdict with `countedMail(res)` and gives the mail back if none is sent. Answers with the IETF draft's RateLimit
+ * verdict with `countedMail(res)` and gives the mail back if none is sent, a refused form included. Answers with the IETF draft's RateLimit
  * headers for the address's count, and Retry-After on a refusal.
  */
 export function visitorLimits(
@@ -59,7 +64,18 @@ export function visitorLimits(
       if (mail) await mailAllowance(ctx).giveBack(email!);
       return next(refusal);
     }
-    if (mail) res.locals.countedMail = { within: mails.totalHits <= ctx.env.VISITOR_MAIL_MAX_PER_HOUR };
+    if (mail) {
+      let given = false;
+      const counted: CountedMail = {
+        within: mails.totalHits <= ctx.env.VISITOR_MAIL_MAX_PER_HOUR,
+        giveBack: async () => {
+          if (given) return;
+          given = true;
+          await mailAllowance(ctx).giveBack(email!);
+        },
+      };
+      res.locals.countedMail = counted;
+    }
     next();
   };
   return [handler];

@@ -72,15 +72,27 @@ export function bookingRoutes(ctx: AppContext) {
     { countsMail: true },
   );
 
-  r.post('/bookings', ...bookingLimits, async (req, res) => {
+  const bookingForm = (req: Request) => {
     const header = req.get('idempotency-key');
     const key = header === undefined ? undefined : idempotencyKey.safeParse(header);
     if (key && !key.success)
       throw new HttpError(400, 'invalid', key.error.issues[0].message, {
         'Idempotency-Key': key.error.issues[0].message,
       });
-    const input = body(req, createBookingSchema);
-    const result = await booking.createBooking(ctx, input, key?.data, languageOf(req, res.locals), countedMail(res));
+    return { key: key?.data, input: body(req, createBookingSchema) };
+  };
+  r.post('/bookings', ...bookingLimits, async (req, res) => {
+    const mail = countedMail(res);
+    // A form refused before the booking starts sends no mail: its count goes back (createBooking does it after).
+    let form: ReturnType<typeof bookingForm>;
+    try {
+      form = bookingForm(req);
+    } catch (err) {
+      await mail?.giveBack();
+      throw err;
+    }
+    const { key, input } = form;
+    const result = await booking.createBooking(ctx, input, key, languageOf(req, res.locals), mail);
     if (result.replayed) res.setHeader('Idempotent-Replayed', 'true');
     res.status(result.status).json(result.body);
   });

@@ -9,6 +9,7 @@ import { checkManageToken } from '../../core/links';
 import { signPath, signingKey } from '../../http/signed-url';
 import { screenItems } from '../../core/screening';
 import { mailAllowance } from '../../mail/allowance';
+import type { CountedMail } from '../../http/visitor-limits';
 import { bookingWithContextById } from './queries/context';
 import {
   bookingByReference,
@@ -80,7 +81,7 @@ export async function createBooking(
   input: BookingInput,
   idempotencyKey?: string,
   language: Language = DEFAULT_LANGUAGE,
-  countedMail?: { within: boolean },
+  countedMail?: CountedMail,
 ): Promise<{ status: number; body: unknown; replayed: boolean }> {
   const key = idempotencyKey ? `booking:${idempotencyKey}` : null;
   const bodyHash = sha256(JSON.stringify(input));
@@ -88,20 +89,23 @@ export async function createBooking(
   // The confirmation mail is counted before the booking (by the route's limits, or here); it is given back if no
   // booking (so no mail) comes of the request, whatever refuses it.
   const allowance = mailAllowance(ctx);
-  let counted = countedMail !== undefined;
+  let countedHere = false;
   let mailed = false;
   try {
     const checks = await bookableSlotFor(ctx.database.db, input.slotId, email);
     const cats = await screenItems(ctx.database.db, checks.row.group, input.items, checks.excluded);
     if (!countedMail) {
-      counted = true;
+      countedHere = true;
       if (!(await allowance.take(email))) throw allowance.refusal();
     } else if (!countedMail.within) throw allowance.refusal();
     const result = await bookOnce(ctx, input, key, bodyHash, checks, cats, language);
     mailed = !result.replayed;
     return result;
   } finally {
-    if (counted && !mailed) await allowance.giveBack(email);
+    if (!mailed) {
+      if (countedMail) await countedMail.giveBack();
+      else if (countedHere) await allowance.giveBack(email);
+    }
   }
 }
 
