@@ -146,10 +146,32 @@ export async function measureBooking(setup: Setup) {
     })),
   });
   const appStatements = (await statementsSoFar(setup.pool)) - appBefore - 1;
+  // The booking page sends each form with an Idempotency-Key of its own (a resent form books once): the same load
+  // with a fresh key on every request.
+  const keyedBefore = await statementsSoFar(setup.pool);
+  let sent = 0;
+  const keyed = await setup.load('Mendery POST /api/bookings, Idempotency-Key', {
+    url: `${setup.appUrl}/api/bookings`,
+    requests: setup.visitors.map((v, n) => ({
+      method: 'POST' as const,
+      path: '/api/bookings',
+      headers: { ...json, cookie: v.cookie, 'x-csrf-token': v.token },
+      body: body(setup.slotId, setup.kettleId, n),
+      setupRequest: (req: autocannon.Request) => ({
+        ...req,
+        headers: { ...req.headers, 'idempotency-key': `bench-${process.pid}-${++sent}` },
+      }),
+    })),
+  });
+  const keyedStatements = (await statementsSoFar(setup.pool)) - keyedBefore - 1;
   // Every statement is a round trip and a socket write; on this machine those dominate the app's CPU.
   perRequest('  bare Express + mysql2', bareStatements, bareBookings);
   perRequest('  Mendery POST /api/bookings', appStatements, bookings);
+  perRequest('  Mendery, with an Idempotency-Key', keyedStatements, keyed);
   setup.ratio(bookings, bareBookings);
+  console.log(
+    `${'  ratio with an Idempotency-Key / bare'.padEnd(44)} ${(keyed.rps / bareBookings.rps).toFixed(2)}× requests/s\n`,
+  );
 
   console.log(`Race: ${RACE} simultaneous requests on one slot with ${RACE_CAPACITY} places`);
   const bareSlot = await raceSlot(setup.pool, [setup.slotId]);

@@ -15,6 +15,7 @@ import {
   bookingByReference,
   bookingItemsWithPhotos,
   claimIdempotencyKey,
+  clearStaleIdempotencyKey,
   storedIdempotentAnswer,
   storeIdempotentAnswer,
 } from './queries/bookings';
@@ -130,7 +131,7 @@ async function bookOnce(
         ctx.database.db.transaction(async (tx) => {
           // The key's row is written first: a second request with the same key waits here on the row lock,
           // then fails as a duplicate once the first has committed (and replays the first answer below).
-          if (key) await claimIdempotencyKey(tx, key, bodyHash, new Date(Date.now() - IDEMPOTENCY_HOURS * 3600_000));
+          if (key) await claimIdempotencyKey(tx, key, bodyHash);
           refuse(bookability);
           if (checks.active >= max)
             throw new HttpError(
@@ -155,6 +156,9 @@ async function bookOnce(
     } catch (err) {
       if (!isDuplicate(err)) throw err;
       if (key) {
+        // A key older than IDEMPOTENCY_HOURS books anew: its row goes, and the booking is tried again.
+        const expiredBefore = new Date(Date.now() - IDEMPOTENCY_HOURS * 3600_000);
+        if (attempt < 3 && (await clearStaleIdempotencyKey(ctx.database.db, key, expiredBefore))) continue;
         const stored = await storedIdempotentAnswer(ctx.database.db, key);
         if (stored && stored.bodyHash !== bodyHash)
           throw new HttpError(

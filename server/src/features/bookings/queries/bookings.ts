@@ -1,4 +1,5 @@
 import { and, asc, eq, inArray, lt } from 'drizzle-orm';
+import { affectedRows } from '../../../db/retry';
 import type { DbOrTx, Tx } from '../../../db/client';
 import {
   bookingItems,
@@ -107,16 +108,16 @@ export async function bookingItemsWithPhotos(db: DbOrTx, bookingId: number) {
  * go, and concurrent bookings whose keys share that gap then deadlock on their inserts (on one server, and more on
  * Galera, where 200 of 600 racing bookings failed that way).
  */
-export async function claimIdempotencyKey(tx: Tx, key: string, bodyHash: string, expiredBefore: Date) {
-  const [stale] = await tx
-    .select({ key: idempotencyKeys.key })
-    .from(idempotencyKeys)
-    .where(and(eq(idempotencyKeys.key, key), lt(idempotencyKeys.createdAt, expiredBefore)));
-  if (stale)
-    await tx
-      .delete(idempotencyKeys)
-      .where(and(eq(idempotencyKeys.key, key), lt(idempotencyKeys.createdAt, expiredBefore)));
+/** Writes the key's row; a key already there fails as a duplicate (the caller replays it, or clears it if stale). */
+export async function claimIdempotencyKey(tx: Tx, key: string, bodyHash: string) {
   await tx.insert(idempotencyKeys).values({ key, scope: 'booking', bodyHash });
+}
+/** Removes the key's row if it was written before `expiredBefore`; answers whether it did. */
+export async function clearStaleIdempotencyKey(db: DbOrTx, key: string, expiredBefore: Date) {
+  const res = await db
+    .delete(idempotencyKeys)
+    .where(and(eq(idempotencyKeys.key, key), lt(idempotencyKeys.createdAt, expiredBefore)));
+  return affectedRows(res) === 1;
 }
 export async function storeIdempotentAnswer(tx: Tx, key: string, statusCode: number, response: unknown) {
   await tx.update(idempotencyKeys).set({ statusCode, response }).where(eq(idempotencyKeys.key, key));
