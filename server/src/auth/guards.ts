@@ -1,6 +1,7 @@
 import { paramId } from '../http/validate';
 import type { Request, RequestHandler } from 'express';
 import type { GroupRole } from '../../../shared/constants';
+import { holdsGroupRole } from '../../../shared/permissions';
 import type { SessionUser } from '../../../shared/schemas/auth';
 import type { Db } from '../db/client';
 import { HttpError } from '../http/errors';
@@ -44,10 +45,9 @@ export const requireAdmin: RequestHandler = (req, _res, next) => {
   next(req.user.admin ? undefined : new HttpError(403, 'forbidden', 'Only platform admins can do this.'));
 };
 
+/** The same rule the screens read (shared/permissions), so a form is offered only to someone allowed to send it. */
 export function hasGroupRole(user: SessionUser | undefined, groupId: number, roles: readonly GroupRole[]): boolean {
-  if (!user) return false;
-  if (user.admin) return true;
-  return user.roles.some((r) => r.groupId === groupId && roles.includes(r.role));
+  return holdsGroupRole(user, groupId, roles);
 }
 
 /** Allows the request when the user holds one of `roles` in the group named by the request (admins always). */

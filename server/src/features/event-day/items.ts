@@ -17,6 +17,7 @@ import type { SessionUser } from '../../../../shared/schemas/auth';
 import type { AppContext } from '../../context';
 import type { Tx } from '../../db/client';
 import { hasGroupRole } from '../../auth/guards';
+import { GROUP_ROLES_FOR } from '../../../../shared/permissions';
 import { HttpError } from '../../http/errors';
 import { loadItem, partsUsed } from '../../core/items';
 import * as q from './queries/items';
@@ -159,7 +160,7 @@ export async function itemView(
     safetyNote: LOCAL_RULES_PREVAIL,
     safetySource: SAFETY_SOURCE,
     can: {
-      start: mayStartRepair(item.status) && (organiser || fixerHere),
+      start: mayStartRepair(item.status) && hasGroupRole(user, group.id, GROUP_ROLES_FOR.benchWork),
       record: organiser || (fixerHere && (!placement || mine)),
     },
   };

@@ -9,6 +9,7 @@ import type { AppContext } from '../../context';
 import type { DbOrTx, Tx } from '../../db/client';
 import { withDeadlockRetry } from '../../db/retry';
 import { hasGroupRole } from '../../auth/guards';
+import { GROUP_ROLES_FOR } from '../../../../shared/permissions';
 import { HttpError } from '../../http/errors';
 import { eventLayout } from '../../core/benches';
 import { runHooks } from '../../core/hooks';
@@ -21,9 +22,9 @@ const forbidden = (message: string) => new HttpError(403, 'forbidden', message);
 
 /** The assigned fixer or an organiser of the group; a fixer of the group may take an item nobody has. */
 export async function assertMayRecord(tx: DbOrTx, row: ItemRow, user: SessionUser) {
-  if (hasGroupRole(user, row.group.id, ['organiser'])) return;
-  if (!hasGroupRole(user, row.group.id, ['fixer']))
+  if (!hasGroupRole(user, row.group.id, GROUP_ROLES_FOR.benchWork))
     throw forbidden('Only the fixer working on this item or an organiser can record this.');
+  if (hasGroupRole(user, row.group.id, ['organiser'])) return;
   const a = await q.assignmentOf(tx, row.item.id);
   if (a && a.userId !== user.id)
     throw forbidden('This item is with another fixer. Ask an organiser to move it to you first.');
@@ -34,7 +35,7 @@ export async function startRepair(ctx: AppContext, itemId: number, user: Session
   await withDeadlockRetry(() =>
     ctx.database.db.transaction(async (tx) => {
       const row = await loadItem(tx, itemId, { lock: true });
-      if (!hasGroupRole(user, row.group.id, ['fixer', 'organiser']))
+      if (!hasGroupRole(user, row.group.id, GROUP_ROLES_FOR.benchWork))
         throw forbidden('Only the group’s fixers and organisers can start a repair.');
       if (row.item.status === 'at-bench') return;
       if (!mayStartRepair(row.item.status))

@@ -6,6 +6,7 @@ import { normaliseTagCode } from '../../../../shared/event-day/tag-code';
 import { checkInSchema, outcomeSchema, safetyCheckSchema, walkInSchema } from '../../../../shared/schemas/event-day';
 import type { AppContext } from '../../context';
 import { requireGroupRole, requireUser } from '../../auth/guards';
+import { GROUP_ROLES_FOR } from '../../../../shared/permissions';
 import { notFound } from '../../http/errors';
 import { body, params, query, paramId } from '../../http/validate';
 import { eventGroupId } from '../../core/events';
@@ -51,9 +52,7 @@ export function eventDayRoutes(ctx: AppContext) {
   const r = Router();
   const { db } = ctx.database;
   const eventStaff = requireGroupRole(['organiser', 'host'], (req: Request) => eventGroupId(db, paramId(req, 'id')));
-  const itemStaff = requireGroupRole(['organiser', 'host', 'fixer'], (req: Request) =>
-    itemGroupId(db, paramId(req, 'id')),
-  );
+  const itemStaff = requireGroupRole(GROUP_ROLES_FOR.readItem, (req: Request) => itemGroupId(db, paramId(req, 'id')));
   const bookingGroup = async (req: Request) => {
     const ref = normaliseReference(String(req.params.reference ?? ''));
     return ref ? groupOfBooking(db, ref) : 0;

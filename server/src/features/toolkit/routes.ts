@@ -2,6 +2,7 @@ import { languageOf } from '../../i18n';
 import { Router, type NextFunction, type Request, type Response } from 'express';
 import { z } from 'zod';
 import { PART_TYPES } from '../../../../shared/salvage/constants';
+import { GROUP_ROLES_FOR } from '../../../../shared/permissions';
 import {
   knowledgeQuery,
   salvagePartSchema,
@@ -59,7 +60,7 @@ export function toolkitRoutes(ctx: AppContext) {
   );
   r.get(
     '/items/:id/similar',
-    requireGroupRole(['fixer', 'host', 'organiser'], (req) => itemGroupId(db, paramId(req, 'id'))),
+    requireGroupRole(GROUP_ROLES_FOR.readItem, (req) => itemGroupId(db, paramId(req, 'id'))),
     async (req, res) =>
       res.json(await similarRepairs(ctx, params(req, idParam).id, req.user!, languageOf(req, res.locals))),
   );
@@ -70,7 +71,7 @@ export function toolkitRoutes(ctx: AppContext) {
     res.json(await setSharing(ctx, groupOf(req), body(req, sharingSchema).share)),
   );
 
-  r.get('/groups/:groupId/salvage', requireGroupRole(['fixer', 'host', 'organiser'], groupOf), async (req, res) => {
+  r.get('/groups/:groupId/salvage', requireGroupRole(GROUP_ROLES_FOR.readItem, groupOf), async (req, res) => {
     const q = query(
       req,
       z.object({
@@ -81,21 +82,25 @@ export function toolkitRoutes(ctx: AppContext) {
     );
     res.json(await listParts(ctx, groupOf(req), { type: q.type, q: q.q, inStock: q.inStock === '1' }));
   });
-  r.post('/groups/:groupId/salvage', requireGroupRole(['fixer', 'organiser'], groupOf), async (req, res) =>
+  r.post('/groups/:groupId/salvage', requireGroupRole(GROUP_ROLES_FOR.useSalvage, groupOf), async (req, res) =>
     res.status(201).json(await addPart(ctx, groupOf(req), body(req, salvagePartSchema), req.user!)),
   );
-  r.get('/groups/:groupId/salvage/substitutes', requireGroupRole(['fixer', 'organiser'], groupOf), async (req, res) => {
-    const { type, package: pkg, pinout, ...ratings } = query(req, substituteQuery);
-    res.json(await substitutes(ctx, groupOf(req), { type, package: pkg, pinout, ratings }));
-  });
-  r.patch('/salvage/:id', requireGroupRole(['fixer', 'organiser'], partOf), async (req, res) =>
+  r.get(
+    '/groups/:groupId/salvage/substitutes',
+    requireGroupRole(GROUP_ROLES_FOR.useSalvage, groupOf),
+    async (req, res) => {
+      const { type, package: pkg, pinout, ...ratings } = query(req, substituteQuery);
+      res.json(await substitutes(ctx, groupOf(req), { type, package: pkg, pinout, ratings }));
+    },
+  );
+  r.patch('/salvage/:id', requireGroupRole(GROUP_ROLES_FOR.useSalvage, partOf), async (req, res) =>
     res.json(await updatePart(ctx, params(req, idParam).id, body(req, salvageUpdateSchema))),
   );
   r.delete('/salvage/:id', requireGroupRole(['organiser'], partOf), async (req, res) => {
     await removePart(ctx, params(req, idParam).id);
     res.status(204).end();
   });
-  r.post('/salvage/:id/take', requireGroupRole(['fixer', 'organiser'], partOf), async (req, res) => {
+  r.post('/salvage/:id/take', requireGroupRole(GROUP_ROLES_FOR.useSalvage, partOf), async (req, res) => {
     const t = body(req, takeSchema);
     res.json(await takePart(ctx, params(req, idParam).id, t.itemId, t.quantity, req.user!));
   });

@@ -3,6 +3,7 @@ import { Link } from 'react-router';
 import { hasArrived, isQueued } from '../../../../../shared/event-day/constants';
 import { formatMoney, formatTime } from '../../../../../shared/format';
 import { isWebLink } from '../../../../../shared/files/web-links';
+import { mayInGroup } from '../../../../../shared/permissions';
 import { Button } from '../../../components/ui/button';
 import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
 import { Alert, Card } from '../../../components/ui/feedback';
@@ -102,8 +103,10 @@ export function ItemBody({ item, toolkit, whatNext }: { item: ItemView; toolkit:
       </>
     ) : item.can.record ? (
       <OutcomeForm item={item} latestCheck={latest} onCancel={item.outcome ? () => setCorrecting(null) : undefined} />
-    ) : (
+    ) : mayInGroup(me, item.event.groupId, 'benchWork') ? (
       <Alert>{t('fixer.withOther', { name: fixerName })}</Alert>
+    ) : (
+      <Alert>{t('fixer.forFixer')}</Alert>
     );
 
   return (

@@ -18,7 +18,15 @@ export function SafetySection({ item }: { item: ItemView }) {
   const closedBy = `${latest?.id}:${latest?.pass}:${item.status}`;
   const [reopenedFor, setReopenedFor] = useState<string | null>(null);
   const open = !closed || reopenedFor === closedBy;
-  if (!open && latest) {
+  // Only the item's fixer (or an organiser) may record a check: anyone else reads the latest one, or is told who does it.
+  if (!item.can.record && !latest)
+    return (
+      <Card>
+        <h2 className="text-lg">{t('fixer.check.title')}</h2>
+        <p className="text-sm text-ink-soft">{t('fixer.check.forFixer')}</p>
+      </Card>
+    );
+  if ((!open || !item.can.record) && latest) {
     return (
       <Card>
         <h2 className="text-lg">{t('fixer.check.title')}</h2>
@@ -36,7 +44,7 @@ export function SafetySection({ item }: { item: ItemView }) {
             {item.safetyChecks.length > 1 && t('fixer.check.earlier', { count: item.safetyChecks.length - 1 })}
           </Alert>
         </div>
-        {item.status !== 'done' && (
+        {item.status !== 'done' && item.can.record && (
           <Button variant="secondary" className="w-full" onClick={() => setReopenedFor(closedBy)}>
             {t('fixer.check.another')}
           </Button>

@@ -8,6 +8,8 @@ import { SelectField, TextField } from '../../../components/ui/field';
 import { paths } from '../../../config/paths';
 import type { ItemStatus, Outcome } from '../../../../../shared/event-day/constants';
 import { queryString } from '../../../lib/query-string';
+import { useUser } from '../../../lib/auth';
+import { mayInGroup } from '../../../../../shared/permissions';
 import { useSimilarRepairs } from '../api/get-similar-repairs';
 import { useSubstitutes } from '../api/get-substitutes';
 import { useTakePart } from '../api/take-part';
@@ -114,8 +116,11 @@ export function SalvageForItem({ item, onChanged }: { item: ToolkitItem; onChang
   const take = useTakePart(groupId, item.id, onChanged);
   const [adding, setAdding] = useState(false);
   const [lookupErrors, setLookupErrors] = useState<Record<string, string>>({});
-  const canLookUp = item.status !== 'done' || item.outcome?.outcome === 'parts-needed';
-  const endOfLife = item.outcome?.outcome === 'end-of-life';
+  const { data: me } = useUser();
+  // Reception reads which parts were taken; looking one up, taking it and saving parts is the bench's (as the server says).
+  const mayUse = mayInGroup(me, groupId, 'useSalvage');
+  const canLookUp = mayUse && (item.status !== 'done' || item.outcome?.outcome === 'parts-needed');
+  const endOfLife = mayUse && item.outcome?.outcome === 'end-of-life';
   // Once the outcome is in, a card with no part taken and nothing to save would be a heading alone.
   if (!canLookUp && !endOfLife && item.partsUsed.length === 0) return null;
   return (
@@ -135,6 +140,7 @@ export function SalvageForItem({ item, onChanged }: { item: ToolkitItem; onChang
           ))}
         </ul>
       )}
+      {!mayUse && <p className="text-sm text-ink-soft">{t('bench.tool.salvage.forFixers')}</p>}
       {canLookUp && (
         <form
           className="space-y-3"
