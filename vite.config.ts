@@ -85,6 +85,36 @@ function preloadBodyFont(): Plugin {
   };
 }
 
+/**
+ * Puts the early-language entry (client/src/early-language.ts, a second build input) before the app's entry in
+ * index.html: module scripts run in the order they are written, and that one is small, so the reader's language and
+ * Lingui are asked for beside the entry instead of after it has run.
+ */
+function earlyLanguageFirst(): Plugin {
+  let base = '/';
+  return {
+    name: 'mendery:early-language-first',
+    apply: 'build',
+    configResolved(config) {
+      base = config.base;
+    },
+    transformIndexHtml: {
+      order: 'post',
+      handler(html, ctx) {
+        const chunk = Object.values(ctx.bundle ?? {}).find(
+          (c) => c.type === 'chunk' && c.isEntry && c.facadeModuleId?.endsWith('/client/src/early-language.ts'),
+        );
+        if (!chunk)
+          throw new Error('the early-language entry (client/src/early-language.ts) is missing from the build');
+        const entry = html.indexOf('<script type="module"');
+        if (entry < 0) throw new Error('index.html has no entry script to put the early-language one before');
+        const tag = `<script type="module" crossorigin src="${base}${chunk.fileName}"></script>\n    `;
+        return html.slice(0, entry) + tag + html.slice(entry);
+      },
+    },
+  };
+}
+
 // The client lives in client/; the API server serves the build from dist/client, each text file also as .br and .gz.
 export default defineConfig({
   root: 'client',
@@ -93,6 +123,7 @@ export default defineConfig({
     react(),
     tailwindcss(),
     preloadBodyFont(),
+    earlyLanguageFirst(),
     compression({ algorithms: ['brotliCompress', 'gzip'] }),
   ],
   // No source maps in the build: they would be served to anyone.
@@ -105,7 +136,14 @@ export default defineConfig({
     // Every browser the app supports knows <link rel="modulepreload">: the entry need not carry a polyfill for it.
     modulePreload: { polyfill: false },
     // Brotli at its best quality is the slow step on purpose; the bundler's note about slow plugins is noise here.
-    rolldownOptions: { checks: { bundlerTimings: false } },
+    rolldownOptions: {
+      checks: { bundlerTimings: false },
+      // The page (index.html and its entry) and the early start of its language, run first (earlyLanguageFirst).
+      input: {
+        index: path.resolve('client/index.html'),
+        'early-language': path.resolve('client/src/early-language.ts'),
+      },
+    },
   },
   server: {
     host: '127.0.0.1',

@@ -39,9 +39,14 @@ async function builtHtml() {
 }
 
 async function mainScript() {
-  const src = /<script type="module" crossorigin src="([^"]+)"/.exec(await builtHtml())?.[1];
+  const html = await builtHtml();
+  const scripts = [...html.matchAll(/<script type="module" crossorigin src="([^"]+)"/g)].map((m) => m[1]);
+  // The early start of the reader's language runs first (module scripts run in the order written), then the entry.
+  expect(scripts).toHaveLength(2);
+  expect(scripts[0]).toMatch(/^\/assets\/early-language-[\w-]+\.js$/);
+  const src = scripts[1];
   expect(src).toMatch(/^\/assets\/index-[\w-]+\.js$/);
-  return src!;
+  return src;
 }
 
 describe('Static files for a phone on mobile data', () => {

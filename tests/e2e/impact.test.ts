@@ -66,6 +66,10 @@ describe('impact in the browser', () => {
       .getByRole('heading', { name: /Kestlebridge Menders/ })
       .first()
       .waitFor();
+    // The drawings are drawn once they are on screen (below the story on a phone): none before the visitor scrolls.
+    await page.waitForTimeout(500);
+    expect(await page.locator('.recharts-surface').count()).toBe(0);
+    await page.getByRole('heading', { name: 'Kilograms kept out of the bin, by month' }).scrollIntoViewIfNeeded();
     await page.locator('.recharts-surface').first().waitFor();
     expect(await page.content()).not.toMatch(/@example\.org|Orla Whitcombe|Sol Marchetti/);
     await page.screenshot({ path: shot('impact-public-phone'), fullPage: true });

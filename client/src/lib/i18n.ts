@@ -1,24 +1,18 @@
 import type { I18n } from '@lingui/core';
 import { createElement, Fragment, useSyncExternalStore, type ReactNode } from 'react';
 import { catalogs } from 'virtual:mendery-catalogs';
-import {
-  DEFAULT_LANGUAGE,
-  isLanguage,
-  languageOfTag,
-  pickLanguage,
-  type Language,
-} from '../../../shared/i18n/languages';
+import { DEFAULT_LANGUAGE, isLanguage, type Language } from '../../../shared/i18n/languages';
 import type { OnDemandNamespace } from '../../../shared/i18n/namespaces';
 import { PSEUDO_LANGUAGE } from '../../../shared/i18n/pseudo';
+import { pickInitialLanguage, STORAGE_KEY, type UiLanguage } from './language-choice';
 
 /**
  * The reader's language in the browser. Lingui's runtime comes in the same lazy step as the language's precompiled
  * messages, so the first page waits for one small fetch that runs beside the page's own chunks (see main.tsx).
  */
-export type UiLanguage = Language | typeof PSEUDO_LANGUAGE;
+export type { UiLanguage };
 type Values = Record<string, unknown>;
 
-const STORAGE_KEY = 'mendery.language';
 let instance: I18n | undefined;
 let formats: Language = DEFAULT_LANGUAGE;
 const chosenListeners = new Set<(lang: Language) => void>();
@@ -49,11 +43,9 @@ let guessed = false;
 
 /** ?lang= in the address, else the visitor's stored choice, else the browser's languages, else English. */
 export function initialLanguage(): UiLanguage {
-  const asked = new URLSearchParams(location.search).get('lang');
-  if (asked === PSEUDO_LANGUAGE) return PSEUDO_LANGUAGE;
-  const tags = [asked, storedLanguage(), ...(navigator.languages ?? [navigator.language])];
-  guessed = !tags.some(languageOfTag);
-  return pickLanguage(tags);
+  const choice = pickInitialLanguage(storedLanguage());
+  if (choice.lang !== PSEUDO_LANGUAGE) guessed = choice.guessed;
+  return choice.lang;
 }
 
 /**
